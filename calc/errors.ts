@@ -1,0 +1,96 @@
+/**
+ * The error family of calc/. Every bad input becomes a `CalcInputError` whose fields say which
+ * input, what it was, what was expected and in which unit; the message is built from them, so the
+ * calculators can show it beside the field it names.
+ */
+
+/** Formats a received value for a message without ever printing markup or a long float tail. */
+function describeValue(value: unknown): string {
+  if (typeof value === "number") {
+    if (Number.isNaN(value)) return "not a number";
+    if (!Number.isFinite(value)) return value > 0 ? "infinity" : "minus infinity";
+    return String(Number(value.toPrecision(6)));
+  }
+  if (typeof value === "string") {
+    const shown = value.length > 40 ? `${value.slice(0, 40)}…` : value;
+    return `"${shown}"`;
+  }
+  return String(value);
+}
+
+export interface CalcInputErrorFields {
+  /** The input's name, as the function's parameter object spells it (e.g. "radius"). */
+  param: string;
+  /** What was received. */
+  value: unknown;
+  /** The rule it broke, with its unit, e.g. "greater than 0 m". */
+  expected: string;
+  /** The unit `value` is expressed in ("" when dimensionless or not a number). */
+  unit: string;
+}
+
+/** An input outside the domain of a calculation. */
+export class CalcInputError extends RangeError implements CalcInputErrorFields {
+  readonly param: string;
+  readonly value: unknown;
+  readonly expected: string;
+  readonly unit: string;
+
+  constructor(fields: CalcInputErrorFields) {
+    const got = describeValue(fields.value);
+    const unit = fields.unit && typeof fields.value === "number" && Number.isFinite(fields.value) ? ` ${fields.unit}` : "";
+    super(`${fields.param} must be ${fields.expected} (got ${got}${unit})`);
+    this.name = "CalcInputError";
+    this.param = fields.param;
+    this.value = fields.value;
+    this.expected = fields.expected;
+    this.unit = fields.unit;
+  }
+}
+
+/** Throws unless `value` is a finite number. */
+export function requireFinite(param: string, value: number, unit: string): number {
+  if (typeof value !== "number" || !Number.isFinite(value)) {
+    throw new CalcInputError({ param, value, expected: "a finite number", unit });
+  }
+  return value;
+}
+
+/** Throws unless `value` is finite and strictly greater than zero. */
+export function requirePositive(param: string, value: number, unit: string): number {
+  requireFinite(param, value, unit);
+  if (!(value > 0)) {
+    throw new CalcInputError({ param, value, expected: `greater than 0${unit ? ` ${unit}` : ""}`, unit });
+  }
+  return value;
+}
+
+/** Throws unless `value` is finite and zero or more. */
+export function requireNonNegative(param: string, value: number, unit: string): number {
+  requireFinite(param, value, unit);
+  if (!(value >= 0)) {
+    throw new CalcInputError({ param, value, expected: `0${unit ? ` ${unit}` : ""} or more`, unit });
+  }
+  return value;
+}
+
+/**
+ * Throws unless `min <= value <= max` (or `min < value` / `value < max` where the bound is open).
+ */
+export function requireInRange(
+  param: string,
+  value: number,
+  unit: string,
+  range: { min: number; max: number; minOpen?: boolean; maxOpen?: boolean },
+): number {
+  requireFinite(param, value, unit);
+  const lowOk = range.minOpen ? value > range.min : value >= range.min;
+  const highOk = range.maxOpen ? value < range.max : value <= range.max;
+  if (!lowOk || !highOk) {
+    const u = unit ? ` ${unit}` : "";
+    const low = range.minOpen ? `greater than ${range.min}${u}` : `at least ${range.min}${u}`;
+    const high = range.maxOpen ? `less than ${range.max}${u}` : `at most ${range.max}${u}`;
+    throw new CalcInputError({ param, value, expected: `${low} and ${high}`, unit });
+  }
+  return value;
+}

@@ -1,0 +1,10 @@
+/**
+ * Whirlbook's calculation module: the public API. Pure TypeScript, SI units in and out, no DOM.
+ * Every chapter, widget, worked example and the command line call these functions.
+ */
+export * from "./errors.ts";
+export * from "./constants.ts";
+export * from "./sources.ts";
+export * from "./units.ts";
+export * from "./inputs.ts";
+export * from "./rotation.ts";

@@ -1,0 +1,120 @@
+/**
+ * The typed input layer. Every calculator declares its inputs once (quantity kind, allowed range,
+ * default, URL key); the same declaration parses what a user typed, checks the range, and builds
+ * the message shown beside the field, in the user's units.
+ */
+import { CalcInputError } from "./errors.ts";
+import {
+  displayUnit,
+  formatQuantity,
+  fromSI,
+  parseQuantity,
+  quantityToText,
+  UNITS,
+  type QuantityKind,
+  type UnitId,
+  type UnitSystem,
+} from "./units.ts";
+
+export interface InputSpec {
+  /** Label shown to users, e.g. "Top speed". */
+  label: string;
+  /** What the field holds; decides the units it accepts. */
+  kind: QuantityKind;
+  /** Smallest allowed value [SI]. */
+  min: number;
+  /** Largest allowed value [SI]. */
+  max: number;
+  /** True when `min` itself is not allowed (e.g. a radius must be greater than 0). */
+  minOpen?: boolean;
+  /** Default value [SI]. */
+  default: number;
+  /** Only whole numbers (counts). */
+  integer?: boolean;
+  /** Short key in the calculator's URL, e.g. "r". */
+  urlKey: string;
+  /** Unit a bare number is read in and the field shows, per system; defaults by kind. */
+  unit?: Partial<Record<UnitSystem, UnitId>>;
+  /** One sentence on what the input means. */
+  help?: string;
+}
+
+export type InputSpecs = Record<string, InputSpec>;
+
+/** Declares a calculator's inputs (identity at run time; keeps the literal types). */
+export function defineInputs<const T extends InputSpecs>(specs: T): T {
+  for (const [name, spec] of Object.entries(specs)) {
+    if (!(spec.min <= spec.default && spec.default <= spec.max) || (spec.minOpen && spec.default === spec.min)) {
+      throw new Error(`input "${name}": default ${spec.default} lies outside [${spec.min}, ${spec.max}]`);
+    }
+  }
+  return specs;
+}
+
+/** The unit a field shows and reads bare numbers in. */
+export function fieldUnit(spec: InputSpec, system: UnitSystem): UnitId {
+  return spec.unit?.[system] ?? displayUnit(spec.kind, system, spec.default);
+}
+
+/** Formats an SI value the way the field would show it. */
+function show(spec: InputSpec, valueSI: number, system: UnitSystem): string {
+  return formatQuantity(valueSI, spec.kind, { unit: fieldUnit(spec, system), significant: 4 }).text;
+}
+
+/** The allowed range in words, in the user's units: "between 1 mm and 2000 mm". */
+export function describeRange(spec: InputSpec, system: UnitSystem): string {
+  const low = show(spec, spec.min, system);
+  const high = show(spec, spec.max, system);
+  const kindWord = spec.integer ? "a whole number " : "";
+  return spec.minOpen ? `${kindWord}greater than ${low} and at most ${high}` : `${kindWord}between ${low} and ${high}`;
+}
+
+/**
+ * Checks an SI value against the spec. Returns the error to show (never throws), or null.
+ */
+export function checkValue(spec: InputSpec, valueSI: number, system: UnitSystem): CalcInputError | null {
+  const unit = fieldUnit(spec, system);
+  const shownValue = Number(formatQuantity(valueSI, spec.kind, { unit, significant: 4 }).number.replace("−", "-").replace(/ × 10.*/, ""));
+  const tooLow = spec.minOpen ? !(valueSI > spec.min) : !(valueSI >= spec.min);
+  const tooHigh = !(valueSI <= spec.max);
+  const notWhole = spec.integer === true && !Number.isInteger(valueSI);
+  if (!Number.isFinite(valueSI) || tooLow || tooHigh || notWhole) {
+    return new CalcInputError({
+      param: spec.label,
+      value: Number.isFinite(shownValue) ? shownValue : valueSI,
+      expected: describeRange(spec, system),
+      unit: UNITS[unit].symbol,
+    });
+  }
+  return null;
+}
+
+export type FieldReading =
+  | { ok: true; value: number; unit: UnitId }
+  | { ok: false; error: CalcInputError };
+
+/** Parses and range-checks what a user typed into the field described by `spec`. */
+export function readField(spec: InputSpec, text: string, system: UnitSystem): FieldReading {
+  const unit = fieldUnit(spec, system);
+  const parsed = parseQuantity(text, spec.kind, unit);
+  if (!parsed.ok) {
+    const error = new CalcInputError({ param: spec.label, value: text, expected: describeRange(spec, system), unit: "" });
+    // A parse failure says what was wrong with the text first, then the range.
+    Object.defineProperty(error, "message", { value: `${spec.label} ${parsed.message}; allowed: ${describeRange(spec, system)}` });
+    return { ok: false, error };
+  }
+  const error = checkValue(spec, parsed.valueSI, system);
+  return error ? { ok: false, error } : { ok: true, value: parsed.valueSI, unit: parsed.unit };
+}
+
+/** The text a field starts with: the default in the system's unit. */
+export function defaultText(spec: InputSpec, system: UnitSystem): string {
+  const unit = fieldUnit(spec, system);
+  const symbol = UNITS[unit].symbol;
+  return `${Number(fromSI(spec.default, unit).toPrecision(6))}${symbol ? ` ${symbol}` : ""}`;
+}
+
+/** Compact text for a URL: "32mm". */
+export function urlText(spec: InputSpec, valueSI: number, unit: UnitId): string {
+  return quantityToText(valueSI, unit);
+}

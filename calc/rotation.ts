@@ -1,0 +1,344 @@
+/**
+ * Rotation: acceleration at a radius, where an accelerometer can sit on a spinning robot, and the
+ * pull a spinning part puts on its mounts. SI in and out: rad/s, m, m/s², kg, N.
+ */
+import { CalcInputError, requireInRange, requireNonNegative, requirePositive } from "./errors.ts";
+import { defineInputs } from "./inputs.ts";
+import { STANDARD_GRAVITY } from "./constants.ts";
+import { rpmToRadPerSecond } from "./units.ts";
+import type { SourceKey } from "./sources.ts";
+
+/**
+ * Centripetal acceleration of a point at a radius from the spin axis (openstax-college-physics).
+ *
+ * Formula: $a = \omega^2 r$
+ *
+ * @param angularSpeed ω, spin rate [rad/s], finite, 0 or more
+ * @param radius r, distance from the spin axis [m], finite, 0 or more
+ * @returns a, acceleration toward the axis [m/s²]
+ *
+ * Assumptions: steady rotation about a fixed axis; the tangential term r·dω/dt of a spin-up is not
+ * included. Example: 2000 rpm (209.44 rad/s) at 0.089 m gives 3903.98 m/s² (398.09 g).
+ *
+ * Sources: openstax-college-physics.
+ */
+export function centripetalAcceleration({ angularSpeed, radius }: { angularSpeed: number; radius: number }): number {
+  requireNonNegative("angularSpeed", angularSpeed, "rad/s");
+  requireNonNegative("radius", radius, "m");
+  return angularSpeed * angularSpeed * radius;
+}
+
+/**
+ * Radius at which a given centripetal acceleration occurs at a given spin rate
+ * (openstax-college-physics, a = ω²r solved for r).
+ *
+ * Formula: $r = a / \omega^2$
+ *
+ * @param angularSpeed ω [rad/s], greater than 0
+ * @param acceleration a [m/s²], 0 or more
+ * @returns r [m]
+ *
+ * Example: 398.09 g at 2000 rpm lies at 0.089 m. Sources: openstax-college-physics.
+ */
+export function radiusForAcceleration({ angularSpeed, acceleration }: { angularSpeed: number; acceleration: number }): number {
+  requirePositive("angularSpeed", angularSpeed, "rad/s");
+  requireNonNegative("acceleration", acceleration, "m/s²");
+  return acceleration / (angularSpeed * angularSpeed);
+}
+
+/**
+ * Spin rate at which a point at a radius sees a given acceleration
+ * (openstax-college-physics, a = ω²r solved for ω).
+ *
+ * Formula: $\omega = \sqrt{a / r}$
+ *
+ * @param radius r [m], greater than 0
+ * @param acceleration a [m/s²], 0 or more
+ * @returns ω [rad/s]
+ *
+ * Example: 3903.98 m/s² at 0.089 m is 209.44 rad/s (2000 rpm). Sources: openstax-college-physics.
+ */
+export function angularSpeedForAcceleration({ radius, acceleration }: { radius: number; acceleration: number }): number {
+  requirePositive("radius", radius, "m");
+  requireNonNegative("acceleration", acceleration, "m/s²");
+  return Math.sqrt(acceleration / radius);
+}
+
+/**
+ * Largest radius at which an accelerometer stays below a chosen fraction of its full scale at top
+ * speed (openstax-college-physics, a = ω²r with a capped at (1 − m)·F).
+ *
+ * Formula: $r_{max} = \dfrac{(1 - m)\,F}{\omega_{top}^2}$
+ *
+ * @param fullScale F, the sensor's full-scale range on the radial axis [m/s²], greater than 0
+ * @param margin m, headroom kept below full scale [-], 0 ≤ m < 1
+ * @param topSpeed ω_top, the highest spin rate [rad/s], greater than 0
+ * @returns r_max [m]
+ *
+ * Assumptions: the sensor's radial axis points at the spin axis; only the centripetal term counts
+ * (impacts add far larger, brief spikes). Example: F = 200 g, m = 0.2, 3000 rpm → 15.9 mm.
+ *
+ * Sources: openstax-college-physics.
+ */
+export function maxSensorRadius({ fullScale, margin, topSpeed }: { fullScale: number; margin: number; topSpeed: number }): number {
+  requirePositive("fullScale", fullScale, "m/s²");
+  requireInRange("margin", margin, "", { min: 0, max: 1, maxOpen: true });
+  requirePositive("topSpeed", topSpeed, "rad/s");
+  return ((1 - margin) * fullScale) / (topSpeed * topSpeed);
+}
+
+/**
+ * Relative speed resolution at a radius: how much the speed estimate ω̂ = √(a/r) jumps when the
+ * reading changes by one step (sensor-quantisation, a = ω²r).
+ *
+ * Formula: $\dfrac{\Delta\omega}{\omega} = \sqrt{1 + \dfrac{\Delta a}{\omega^2 r}} - 1$
+ *
+ * @param step Δa, the smallest change the sensor reports: one count, or its noise if larger [m/s²], greater than 0
+ * @param angularSpeed ω [rad/s], greater than 0
+ * @param radius r [m], greater than 0
+ * @returns Δω/ω [-]
+ *
+ * Example: Δa = 1 g at 400 rpm and 20 mm (3.58 g) → 0.131 (13 %). Sources: sensor-quantisation,
+ * openstax-college-physics.
+ */
+export function speedResolution({ step, angularSpeed, radius }: { step: number; angularSpeed: number; radius: number }): number {
+  requirePositive("step", step, "m/s²");
+  requirePositive("angularSpeed", angularSpeed, "rad/s");
+  requirePositive("radius", radius, "m");
+  return Math.sqrt(1 + step / (angularSpeed * angularSpeed * radius)) - 1;
+}
+
+/**
+ * Smallest radius at which one sensor step still resolves the spin rate to a chosen fraction at
+ * the lowest speed the heading must track (sensor-quantisation; inverse of `speedResolution`).
+ *
+ * Formula: $r_{min} = \dfrac{\Delta a}{\omega_{low}^2\,\left[(1 + p)^2 - 1\right]}$
+ *
+ * @param step Δa, one count or the noise, whichever is larger [m/s²], greater than 0
+ * @param lowSpeed ω_low, the lowest spin rate that must be tracked [rad/s], greater than 0
+ * @param resolution p, the speed resolution wanted, as a fraction [-], 0 < p ≤ 1
+ * @returns r_min [m]
+ *
+ * Assumptions: exact inversion, not the small-step approximation Δω/ω ≈ Δa/(2a). Averaging several
+ * readings can resolve finer than one count; this is the single-reading bound.
+ * Example: Δa = 0.1 g, 400 rpm, p = 1 % → 27.8 mm. Sources: sensor-quantisation, openstax-college-physics.
+ */
+export function minSensorRadius({ step, lowSpeed, resolution }: { step: number; lowSpeed: number; resolution: number }): number {
+  requirePositive("step", step, "m/s²");
+  requirePositive("lowSpeed", lowSpeed, "rad/s");
+  requireInRange("resolution", resolution, "", { min: 0, max: 1, minOpen: true });
+  return step / (lowSpeed * lowSpeed * ((1 + resolution) ** 2 - 1));
+}
+
+export interface PartLoad {
+  /** Centripetal acceleration at the part's centre of mass [m/s²]. */
+  acceleration: number;
+  /** The same in standard gravities [-]. */
+  gLoad: number;
+  /** Radial pull the part puts on its mounts [N]. */
+  force: number;
+}
+
+/**
+ * The g a part sees at its radius and the radial pull on its mounts (newton-second-law).
+ *
+ * Formula: $F = m\,\omega^2 r$
+ *
+ * @param mass m, the part's mass [kg], greater than 0
+ * @param radius r, spin axis to the part's own centre of mass [m], 0 or more
+ * @param angularSpeed ω [rad/s], 0 or more
+ * @returns acceleration [m/s²], gLoad [-], force [N]
+ *
+ * Assumptions: the part is small next to its radius (for a large part use its own centre of mass).
+ * Example: 50 g at 60 mm and 2400 rpm → 3790 m/s² (386 g), 189 N. Sources: newton-second-law.
+ */
+export function partLoad({ mass, radius, angularSpeed }: { mass: number; radius: number; angularSpeed: number }): PartLoad {
+  requirePositive("mass", mass, "kg");
+  const acceleration = centripetalAcceleration({ angularSpeed, radius });
+  return { acceleration, gLoad: acceleration / STANDARD_GRAVITY, force: mass * acceleration };
+}
+
+// ---------------------------------------------------------------------------------------------
+// The accelerometer-placement calculator: its inputs and its one entry point.
+
+/** Inputs of the accelerometer-placement calculator, in SI. */
+export const accelerometerPlacementInputs = defineInputs({
+  topSpeed: {
+    label: "Top speed",
+    kind: "angularSpeed",
+    min: 0,
+    minOpen: true,
+    max: rpmToRadPerSecond(60000),
+    default: rpmToRadPerSecond(2400),
+    urlKey: "rpm",
+    help: "The fastest the robot will spin.",
+  },
+  lowSpeed: {
+    label: "Lowest tracked speed",
+    kind: "angularSpeed",
+    min: 0,
+    minOpen: true,
+    max: rpmToRadPerSecond(60000),
+    default: rpmToRadPerSecond(400),
+    urlKey: "low",
+    help: "The slowest spin at which the heading must still be tracked.",
+  },
+  radius: {
+    label: "Sensor radius",
+    kind: "length",
+    min: 0,
+    minOpen: true,
+    max: 2,
+    default: 0.032,
+    urlKey: "r",
+    help: "Distance from the spin axis (the centre of mass) to the sensing element.",
+  },
+  fullScale: {
+    label: "Sensor full scale",
+    kind: "acceleration",
+    min: 0,
+    minOpen: true,
+    max: 10000 * STANDARD_GRAVITY,
+    default: 200 * STANDARD_GRAVITY,
+    urlKey: "fs",
+    help: "The range of the radial axis, e.g. 200 g for a ±200 g part.",
+  },
+  margin: {
+    label: "Headroom kept",
+    kind: "fraction",
+    min: 0,
+    max: 0.95,
+    default: 0.2,
+    urlKey: "m",
+    help: "Fraction of full scale left free at top speed, for wobble, vibration and sensor tolerance.",
+  },
+  step: {
+    label: "Sensor step",
+    kind: "acceleration",
+    min: 0,
+    minOpen: true,
+    max: 100 * STANDARD_GRAVITY,
+    default: 0.1 * STANDARD_GRAVITY,
+    urlKey: "step",
+    help: "The size of one count on the radial axis (full-scale span ÷ 2^bits).",
+  },
+  noise: {
+    label: "Sensor noise",
+    kind: "acceleration",
+    min: 0,
+    max: 100 * STANDARD_GRAVITY,
+    default: 0,
+    urlKey: "noise",
+    help: "RMS noise at your sample rate; the larger of step and noise is what the firmware can resolve. 0 if unknown.",
+  },
+  resolution: {
+    label: "Speed resolution wanted",
+    kind: "fraction",
+    min: 0,
+    minOpen: true,
+    max: 0.5,
+    default: 0.01,
+    urlKey: "res",
+    help: "How finely one reading must resolve the spin rate at the lowest tracked speed.",
+  },
+  partMass: {
+    label: "Part mass",
+    kind: "mass",
+    min: 0,
+    minOpen: true,
+    max: 100,
+    default: 0.05,
+    urlKey: "pm",
+    help: "Any other part to check: its mass.",
+  },
+  partRadius: {
+    label: "Part radius",
+    kind: "length",
+    min: 0,
+    max: 2,
+    default: 0.06,
+    urlKey: "pr",
+    help: "Distance from the spin axis to that part's own centre of mass.",
+  },
+});
+
+export type AccelerometerPlacementInput = { [K in keyof typeof accelerometerPlacementInputs]: number };
+
+export type PlacementVerdict = "fits" | "too-far-out" | "too-close-in" | "no-window";
+
+export interface AccelerometerPlacement {
+  /** Smallest radius that resolves speed to `resolution` at `lowSpeed` [m]. */
+  minRadius: number;
+  /** Largest radius that keeps `margin` of full scale free at `topSpeed` [m]. */
+  maxRadius: number;
+  /** True when minRadius ≤ maxRadius: some radius satisfies both. */
+  windowExists: boolean;
+  /** The larger of step and noise [m/s²]. */
+  effectiveStep: number;
+  /** Acceleration at the sensor at top speed [m/s²]. */
+  accelerationAtTop: number;
+  /** That as a fraction of full scale [-]. */
+  fullScaleUsed: number;
+  /** Acceleration at the sensor at the lowest tracked speed [m/s²]. */
+  accelerationAtLow: number;
+  /** Speed resolution of one reading at the lowest tracked speed [-]. */
+  resolutionAtLow: number;
+  /** Speed at which the sensor reaches full scale at this radius [rad/s]. */
+  saturationSpeed: number;
+  /** Where the chosen radius stands. */
+  verdict: PlacementVerdict;
+  /** The other part's load at top speed. */
+  part: PartLoad;
+}
+
+/**
+ * The accelerometer-placement check: the window of radii that neither saturates at top speed nor
+ * starves at low speed, where the chosen radius stands, and the load on one other part.
+ *
+ * Formula: $r_{min} = \dfrac{\Delta a}{\omega_{low}^2[(1+p)^2-1]} \le r \le r_{max} = \dfrac{(1-m)F}{\omega_{top}^2}$
+ *
+ * @param input every field of `accelerometerPlacementInputs`, SI
+ * @returns the window, the chosen radius's figures and a verdict
+ *
+ * Assumptions: rotation about the centre of mass; the radius is measured from there. Sources:
+ * openstax-college-physics, sensor-quantisation, newton-second-law.
+ */
+export function accelerometerPlacement(input: AccelerometerPlacementInput): AccelerometerPlacement {
+  const { topSpeed, lowSpeed, radius, fullScale, margin, step, noise, resolution, partMass, partRadius } = input;
+  requirePositive("radius", radius, "m");
+  requireNonNegative("noise", noise, "m/s²");
+  requirePositive("topSpeed", topSpeed, "rad/s");
+  if (!(lowSpeed <= topSpeed)) {
+    throw new CalcInputError({ param: "lowSpeed", value: lowSpeed, expected: `at most the top speed (${topSpeed.toPrecision(4)} rad/s)`, unit: "rad/s" });
+  }
+  const effectiveStep = Math.max(step, noise);
+  const minRadius = minSensorRadius({ step: effectiveStep, lowSpeed, resolution });
+  const maxRadius = maxSensorRadius({ fullScale, margin, topSpeed });
+  const accelerationAtTop = centripetalAcceleration({ angularSpeed: topSpeed, radius });
+  const accelerationAtLow = centripetalAcceleration({ angularSpeed: lowSpeed, radius });
+  const resolutionAtLow = speedResolution({ step: effectiveStep, angularSpeed: lowSpeed, radius });
+  const windowExists = minRadius <= maxRadius;
+  const verdict: PlacementVerdict = !windowExists
+    ? "no-window"
+    : radius > maxRadius
+      ? "too-far-out"
+      : radius < minRadius
+        ? "too-close-in"
+        : "fits";
+  return {
+    minRadius,
+    maxRadius,
+    windowExists,
+    effectiveStep,
+    accelerationAtTop,
+    fullScaleUsed: accelerationAtTop / fullScale,
+    accelerationAtLow,
+    resolutionAtLow,
+    saturationSpeed: angularSpeedForAcceleration({ radius, acceleration: fullScale }),
+    verdict,
+    part: partLoad({ mass: partMass, radius: partRadius, angularSpeed: topSpeed }),
+  };
+}
+
+/** Source keys this module relies on (checked by the meta test). */
+export const ROTATION_SOURCES: readonly SourceKey[] = ["openstax-college-physics", "sensor-quantisation", "newton-second-law"];

@@ -1,0 +1,419 @@
+/**
+ * Units as data. Every unit is an exact (or derived-exact) ratio to its SI unit, pinned here with
+ * its definition and source. calc/ works in SI only; this module converts at the edge: it parses
+ * what a user types ("45 mm", "1.8 in", "350 g") for a field of a known quantity kind and formats
+ * SI results in metric or US customary units to a sensible number of significant figures.
+ */
+import { STANDARD_GRAVITY } from "./constants.ts";
+import type { SourceKey } from "./sources.ts";
+
+/** The quantity a field holds; it decides which units a typed value may carry. */
+export type QuantityKind =
+  | "length"
+  | "mass"
+  | "acceleration"
+  | "angularSpeed"
+  | "angularAcceleration"
+  | "angle"
+  | "time"
+  | "frequency"
+  | "force"
+  | "speed"
+  | "energy"
+  | "power"
+  | "torque"
+  | "inertia"
+  | "stress"
+  | "density"
+  | "unbalance"
+  | "voltage"
+  | "current"
+  | "resistance"
+  | "motorVelocityConstant"
+  | "fraction"
+  | "count";
+
+/** How a unit's factor is known. */
+export type Exactness = "exact" | "derived" | "approximate";
+
+export interface UnitDef {
+  /** Symbol shown to users. */
+  symbol: string;
+  kind: QuantityKind;
+  /** Size of one unit in the kind's SI unit (value_SI = value × factor). */
+  factor: number;
+  exactness: Exactness;
+  /** The definition, in words, e.g. "0.0254 m exactly". */
+  definition: string;
+  source: SourceKey;
+  /** Other spellings accepted when parsing (compared case-sensitively, then case-insensitively). */
+  aliases?: readonly string[];
+}
+
+const INCH = 0.0254; // nist-sp811, exact (1 yd = 0.9144 m, intl-yard-pound-1959)
+const FOOT = 0.3048; // nist-sp811, exact
+const POUND = 0.45359237; // nist-sp811, exact
+const OUNCE = POUND / 16; // avoirdupois ounce, exact
+const POUND_FORCE = POUND * STANDARD_GRAVITY; // nist-sp811, exact by definition: 4.448 221 615 260 5 N
+const RPM = (2 * Math.PI) / 60; // 1 rev = 2π rad, exact
+
+/** Every unit Whirlbook knows, keyed by id. */
+export const UNITS = {
+  // length [m]
+  m: { symbol: "m", kind: "length", factor: 1, exactness: "exact", definition: "SI base unit", source: "nist-sp811", aliases: ["metre", "meter", "meters", "metres"] },
+  cm: { symbol: "cm", kind: "length", factor: 0.01, exactness: "exact", definition: "0.01 m", source: "nist-sp811" },
+  mm: { symbol: "mm", kind: "length", factor: 0.001, exactness: "exact", definition: "0.001 m", source: "nist-sp811", aliases: ["millimetre", "millimeter", "millimeters", "millimetres"] },
+  in: { symbol: "in", kind: "length", factor: INCH, exactness: "exact", definition: "0.0254 m exactly", source: "nist-sp811", aliases: ["inch", "inches", "\"", "″"] },
+  ft: { symbol: "ft", kind: "length", factor: FOOT, exactness: "exact", definition: "0.3048 m exactly", source: "nist-sp811", aliases: ["foot", "feet", "'", "′"] },
+  // mass [kg]
+  kg: { symbol: "kg", kind: "mass", factor: 1, exactness: "exact", definition: "SI base unit", source: "nist-sp811" },
+  g: { symbol: "g", kind: "mass", factor: 0.001, exactness: "exact", definition: "0.001 kg", source: "nist-sp811", aliases: ["gram", "grams", "gr"] },
+  lb: { symbol: "lb", kind: "mass", factor: POUND, exactness: "exact", definition: "0.453 592 37 kg exactly", source: "intl-yard-pound-1959", aliases: ["lbs", "pound", "pounds", "lbm"] },
+  oz: { symbol: "oz", kind: "mass", factor: OUNCE, exactness: "exact", definition: "1/16 lb = 0.028 349 523 125 kg", source: "nist-sp811", aliases: ["ounce", "ounces"] },
+  // acceleration [m/s²]
+  "m/s2": { symbol: "m/s²", kind: "acceleration", factor: 1, exactness: "exact", definition: "SI unit", source: "nist-sp811", aliases: ["m/s²", "m/s^2", "ms-2", "m s-2"] },
+  gn: { symbol: "g", kind: "acceleration", factor: STANDARD_GRAVITY, exactness: "exact", definition: "standard gravity, 9.806 65 m/s² exactly", source: "cgpm-1901", aliases: ["g", "G", "gₙ", "g0"] },
+  "ft/s2": { symbol: "ft/s²", kind: "acceleration", factor: FOOT, exactness: "exact", definition: "0.3048 m/s²", source: "nist-sp811", aliases: ["ft/s²", "ft/s^2"] },
+  // angular speed [rad/s]
+  "rad/s": { symbol: "rad/s", kind: "angularSpeed", factor: 1, exactness: "exact", definition: "SI unit", source: "nist-sp811", aliases: ["rad s-1", "1/s"] },
+  rpm: { symbol: "rpm", kind: "angularSpeed", factor: RPM, exactness: "exact", definition: "2π/60 rad/s (1 rev = 2π rad)", source: "nist-sp811", aliases: ["rev/min", "r/min", "RPM"] },
+  rps: { symbol: "rev/s", kind: "angularSpeed", factor: 2 * Math.PI, exactness: "exact", definition: "2π rad/s", source: "nist-sp811", aliases: ["rev/s", "r/s"] },
+  "deg/s": { symbol: "°/s", kind: "angularSpeed", factor: Math.PI / 180, exactness: "exact", definition: "π/180 rad/s", source: "nist-sp811", aliases: ["°/s", "dps"] },
+  // angular acceleration [rad/s²]
+  "rad/s2": { symbol: "rad/s²", kind: "angularAcceleration", factor: 1, exactness: "exact", definition: "SI unit", source: "nist-sp811", aliases: ["rad/s²", "rad/s^2"] },
+  "rpm/s": { symbol: "rpm/s", kind: "angularAcceleration", factor: RPM, exactness: "exact", definition: "2π/60 rad/s²", source: "nist-sp811" },
+  // angle [rad]
+  rad: { symbol: "rad", kind: "angle", factor: 1, exactness: "exact", definition: "SI coherent unit", source: "nist-sp811", aliases: ["radian", "radians"] },
+  deg: { symbol: "°", kind: "angle", factor: Math.PI / 180, exactness: "exact", definition: "π/180 rad", source: "nist-sp811", aliases: ["°", "degree", "degrees"] },
+  rev: { symbol: "rev", kind: "angle", factor: 2 * Math.PI, exactness: "exact", definition: "2π rad", source: "nist-sp811", aliases: ["turn", "turns"] },
+  // time [s]
+  s: { symbol: "s", kind: "time", factor: 1, exactness: "exact", definition: "SI base unit", source: "nist-sp811", aliases: ["sec", "second", "seconds"] },
+  ms: { symbol: "ms", kind: "time", factor: 1e-3, exactness: "exact", definition: "0.001 s", source: "nist-sp811" },
+  us: { symbol: "µs", kind: "time", factor: 1e-6, exactness: "exact", definition: "0.000 001 s", source: "nist-sp811", aliases: ["µs", "μs"] },
+  // frequency [Hz]
+  Hz: { symbol: "Hz", kind: "frequency", factor: 1, exactness: "exact", definition: "SI unit, 1/s", source: "nist-sp811", aliases: ["hz"] },
+  kHz: { symbol: "kHz", kind: "frequency", factor: 1e3, exactness: "exact", definition: "1000 Hz", source: "nist-sp811", aliases: ["khz"] },
+  // force [N]
+  N: { symbol: "N", kind: "force", factor: 1, exactness: "exact", definition: "SI unit", source: "nist-sp811", aliases: ["newton", "newtons"] },
+  kN: { symbol: "kN", kind: "force", factor: 1e3, exactness: "exact", definition: "1000 N", source: "nist-sp811" },
+  lbf: { symbol: "lbf", kind: "force", factor: POUND_FORCE, exactness: "exact", definition: "lb × g_n = 4.448 221 615 260 5 N", source: "nist-sp811" },
+  ozf: { symbol: "ozf", kind: "force", factor: POUND_FORCE / 16, exactness: "exact", definition: "lbf/16", source: "nist-sp811" },
+  // speed [m/s]
+  "m/s": { symbol: "m/s", kind: "speed", factor: 1, exactness: "exact", definition: "SI unit", source: "nist-sp811" },
+  "km/h": { symbol: "km/h", kind: "speed", factor: 1000 / 3600, exactness: "exact", definition: "1/3.6 m/s", source: "nist-sp811", aliases: ["kph"] },
+  "ft/s": { symbol: "ft/s", kind: "speed", factor: FOOT, exactness: "exact", definition: "0.3048 m/s", source: "nist-sp811", aliases: ["fps"] },
+  mph: { symbol: "mph", kind: "speed", factor: (5280 * FOOT) / 3600, exactness: "exact", definition: "1609.344 m per 3600 s", source: "nist-sp811" },
+  // energy [J]
+  J: { symbol: "J", kind: "energy", factor: 1, exactness: "exact", definition: "SI unit", source: "nist-sp811", aliases: ["joule", "joules"] },
+  kJ: { symbol: "kJ", kind: "energy", factor: 1e3, exactness: "exact", definition: "1000 J", source: "nist-sp811" },
+  Wh: { symbol: "Wh", kind: "energy", factor: 3600, exactness: "exact", definition: "3600 J", source: "nist-sp811" },
+  "ft·lbf": { symbol: "ft·lbf", kind: "energy", factor: FOOT * POUND_FORCE, exactness: "exact", definition: "0.3048 m × lbf", source: "nist-sp811", aliases: ["ft*lbf", "ft-lbf", "ftlbf", "ft.lbf", "ft lbf"] },
+  // power [W]
+  W: { symbol: "W", kind: "power", factor: 1, exactness: "exact", definition: "SI unit", source: "nist-sp811" },
+  kW: { symbol: "kW", kind: "power", factor: 1e3, exactness: "exact", definition: "1000 W", source: "nist-sp811" },
+  // torque [N·m]
+  "N·m": { symbol: "N·m", kind: "torque", factor: 1, exactness: "exact", definition: "SI unit", source: "nist-sp811", aliases: ["Nm", "N*m", "N.m", "N m"] },
+  "lbf·in": { symbol: "lbf·in", kind: "torque", factor: POUND_FORCE * INCH, exactness: "exact", definition: "lbf × 0.0254 m", source: "nist-sp811", aliases: ["lbf*in", "lbf-in", "in-lbf", "in·lbf", "lbfin"] },
+  "ozf·in": { symbol: "ozf·in", kind: "torque", factor: (POUND_FORCE / 16) * INCH, exactness: "exact", definition: "ozf × 0.0254 m", source: "nist-sp811", aliases: ["ozf*in", "oz-in", "oz·in", "ozin", "ozf-in"] },
+  // moment of inertia [kg·m²]
+  "kg·m2": { symbol: "kg·m²", kind: "inertia", factor: 1, exactness: "exact", definition: "SI unit", source: "nist-sp811", aliases: ["kg·m²", "kgm2", "kg*m^2", "kg m2", "kg.m2", "kgm^2", "kg·m^2"] },
+  "g·cm2": { symbol: "g·cm²", kind: "inertia", factor: 1e-7, exactness: "exact", definition: "1e-7 kg·m²", source: "nist-sp811", aliases: ["g·cm²", "gcm2", "g*cm^2", "g cm2"] },
+  "lb·in2": { symbol: "lb·in²", kind: "inertia", factor: POUND * INCH * INCH, exactness: "exact", definition: "lb × (0.0254 m)²", source: "nist-sp811", aliases: ["lb·in²", "lbin2", "lb*in^2", "lb in2", "lb-in2", "lb-in^2"] },
+  "oz·in2": { symbol: "oz·in²", kind: "inertia", factor: OUNCE * INCH * INCH, exactness: "exact", definition: "oz × (0.0254 m)²", source: "nist-sp811", aliases: ["oz·in²", "ozin2", "oz*in^2", "oz in2", "oz-in2", "oz-in^2"] },
+  // stress [Pa]
+  Pa: { symbol: "Pa", kind: "stress", factor: 1, exactness: "exact", definition: "SI unit", source: "nist-sp811" },
+  MPa: { symbol: "MPa", kind: "stress", factor: 1e6, exactness: "exact", definition: "1e6 Pa", source: "nist-sp811", aliases: ["N/mm2", "N/mm²"] },
+  GPa: { symbol: "GPa", kind: "stress", factor: 1e9, exactness: "exact", definition: "1e9 Pa", source: "nist-sp811" },
+  psi: { symbol: "psi", kind: "stress", factor: POUND_FORCE / (INCH * INCH), exactness: "exact", definition: "lbf/in²", source: "nist-sp811", aliases: ["lbf/in2", "lbf/in²"] },
+  ksi: { symbol: "ksi", kind: "stress", factor: (1000 * POUND_FORCE) / (INCH * INCH), exactness: "exact", definition: "1000 lbf/in²", source: "nist-sp811" },
+  // density [kg/m³]
+  "kg/m3": { symbol: "kg/m³", kind: "density", factor: 1, exactness: "exact", definition: "SI unit", source: "nist-sp811", aliases: ["kg/m³", "kg/m^3"] },
+  "g/cm3": { symbol: "g/cm³", kind: "density", factor: 1000, exactness: "exact", definition: "1000 kg/m³", source: "nist-sp811", aliases: ["g/cm³", "g/cc", "g/cm^3", "g/ml"] },
+  "lb/in3": { symbol: "lb/in³", kind: "density", factor: POUND / INCH ** 3, exactness: "exact", definition: "lb/(0.0254 m)³", source: "nist-sp811", aliases: ["lb/in³", "lb/in^3"] },
+  // static unbalance (mass × eccentricity) [kg·m]
+  "kg·m": { symbol: "kg·m", kind: "unbalance", factor: 1, exactness: "exact", definition: "SI unit", source: "nist-sp811", aliases: ["kgm", "kg*m", "kg m"] },
+  "g·mm": { symbol: "g·mm", kind: "unbalance", factor: 1e-6, exactness: "exact", definition: "1e-6 kg·m", source: "nist-sp811", aliases: ["gmm", "g*mm", "g mm", "g-mm"] },
+  "oz·in": { symbol: "oz·in", kind: "unbalance", factor: OUNCE * INCH, exactness: "exact", definition: "oz × 0.0254 m", source: "nist-sp811", aliases: ["ozin", "oz*in", "oz in", "oz-in"] },
+  // electrical
+  V: { symbol: "V", kind: "voltage", factor: 1, exactness: "exact", definition: "SI unit", source: "nist-sp811", aliases: ["volt", "volts"] },
+  A: { symbol: "A", kind: "current", factor: 1, exactness: "exact", definition: "SI base unit", source: "nist-sp811", aliases: ["amp", "amps"] },
+  ohm: { symbol: "Ω", kind: "resistance", factor: 1, exactness: "exact", definition: "SI unit", source: "nist-sp811", aliases: ["Ω", "ohms", "Ohm"] },
+  mohm: { symbol: "mΩ", kind: "resistance", factor: 1e-3, exactness: "exact", definition: "0.001 Ω", source: "nist-sp811", aliases: ["mΩ", "milliohm", "milliohms", "mOhm"] },
+  // motor velocity constant Kv [rad/(s·V)]
+  "rad/(s·V)": { symbol: "rad/(s·V)", kind: "motorVelocityConstant", factor: 1, exactness: "exact", definition: "SI unit", source: "nist-sp811", aliases: ["rad/s/V", "rad/(s V)"] },
+  "rpm/V": { symbol: "rpm/V", kind: "motorVelocityConstant", factor: RPM, exactness: "exact", definition: "2π/60 rad/(s·V)", source: "nist-sp811", aliases: ["kv", "Kv", "KV", "rpm/v"] },
+  // dimensionless
+  frac: { symbol: "", kind: "fraction", factor: 1, exactness: "exact", definition: "ratio", source: "nist-sp811", aliases: ["x"] },
+  pct: { symbol: "%", kind: "fraction", factor: 0.01, exactness: "exact", definition: "1/100", source: "nist-sp811", aliases: ["%", "percent"] },
+  ppm: { symbol: "ppm", kind: "fraction", factor: 1e-6, exactness: "exact", definition: "1e-6", source: "nist-sp811" },
+  count: { symbol: "", kind: "count", factor: 1, exactness: "exact", definition: "a whole number", source: "nist-sp811" },
+} as const satisfies Record<string, UnitDef>;
+
+export type UnitId = keyof typeof UNITS;
+
+/** Unit ids of one kind, in table order. */
+export function unitsOfKind(kind: QuantityKind): UnitId[] {
+  return (Object.keys(UNITS) as UnitId[]).filter((id) => UNITS[id].kind === kind);
+}
+
+/** Converts `value` in unit `from` to SI. */
+export function toSI(value: number, from: UnitId): number {
+  return value * UNITS[from].factor;
+}
+
+/** Converts an SI `value` into unit `to`. */
+export function fromSI(value: number, to: UnitId): number {
+  return value / UNITS[to].factor;
+}
+
+/** Converts between two units of the same kind. */
+export function convert(value: number, from: UnitId, to: UnitId): number {
+  if (UNITS[from].kind !== UNITS[to].kind) {
+    throw new TypeError(`cannot convert ${UNITS[from].kind} (${from}) to ${UNITS[to].kind} (${to})`);
+  }
+  return fromSI(toSI(value, from), to);
+}
+
+/** rpm → rad/s (exact: 1 rpm = 2π/60 rad/s). */
+export function rpmToRadPerSecond(rpm: number): number {
+  return rpm * RPM;
+}
+
+/** rad/s → rpm. */
+export function radPerSecondToRpm(angularSpeed: number): number {
+  return angularSpeed / RPM;
+}
+
+// ---------------------------------------------------------------------------------------------
+// Unit systems: which unit each kind is shown in.
+
+export type UnitSystem = "metric" | "us";
+
+/**
+ * Display units per kind and system, smallest first; `formatQuantity` takes the largest whose
+ * value is at least `from` (in SI), so 0.45 kg shows as 450 g and 2.3 kg as 2.3 kg.
+ */
+const DISPLAY: Record<QuantityKind, Record<UnitSystem, readonly { unit: UnitId; from: number }[]>> = {
+  length: { metric: [{ unit: "mm", from: 0 }, { unit: "m", from: 10 }], us: [{ unit: "in", from: 0 }, { unit: "ft", from: 10 * FOOT }] },
+  mass: { metric: [{ unit: "g", from: 0 }, { unit: "kg", from: 1 }], us: [{ unit: "oz", from: 0 }, { unit: "lb", from: POUND }] },
+  acceleration: { metric: [{ unit: "gn", from: 0 }], us: [{ unit: "gn", from: 0 }] },
+  angularSpeed: { metric: [{ unit: "rpm", from: 0 }], us: [{ unit: "rpm", from: 0 }] },
+  angularAcceleration: { metric: [{ unit: "rpm/s", from: 0 }], us: [{ unit: "rpm/s", from: 0 }] },
+  angle: { metric: [{ unit: "deg", from: 0 }], us: [{ unit: "deg", from: 0 }] },
+  time: { metric: [{ unit: "us", from: 0 }, { unit: "ms", from: 1e-3 }, { unit: "s", from: 1 }], us: [{ unit: "us", from: 0 }, { unit: "ms", from: 1e-3 }, { unit: "s", from: 1 }] },
+  frequency: { metric: [{ unit: "Hz", from: 0 }, { unit: "kHz", from: 1e4 }], us: [{ unit: "Hz", from: 0 }, { unit: "kHz", from: 1e4 }] },
+  force: { metric: [{ unit: "N", from: 0 }, { unit: "kN", from: 1e4 }], us: [{ unit: "lbf", from: 0 }] },
+  speed: { metric: [{ unit: "m/s", from: 0 }], us: [{ unit: "ft/s", from: 0 }] },
+  energy: { metric: [{ unit: "J", from: 0 }, { unit: "kJ", from: 1e4 }], us: [{ unit: "ft·lbf", from: 0 }] },
+  power: { metric: [{ unit: "W", from: 0 }, { unit: "kW", from: 1e4 }], us: [{ unit: "W", from: 0 }, { unit: "kW", from: 1e4 }] },
+  torque: { metric: [{ unit: "N·m", from: 0 }], us: [{ unit: "ozf·in", from: 0 }, { unit: "lbf·in", from: POUND_FORCE * INCH }] },
+  inertia: { metric: [{ unit: "kg·m2", from: 0 }], us: [{ unit: "lb·in2", from: 0 }] },
+  stress: { metric: [{ unit: "MPa", from: 0 }], us: [{ unit: "ksi", from: 0 }] },
+  density: { metric: [{ unit: "g/cm3", from: 0 }], us: [{ unit: "lb/in3", from: 0 }] },
+  unbalance: { metric: [{ unit: "g·mm", from: 0 }], us: [{ unit: "oz·in", from: 0 }] },
+  voltage: { metric: [{ unit: "V", from: 0 }], us: [{ unit: "V", from: 0 }] },
+  current: { metric: [{ unit: "A", from: 0 }], us: [{ unit: "A", from: 0 }] },
+  resistance: { metric: [{ unit: "mohm", from: 0 }, { unit: "ohm", from: 10 }], us: [{ unit: "mohm", from: 0 }, { unit: "ohm", from: 10 }] },
+  motorVelocityConstant: { metric: [{ unit: "rpm/V", from: 0 }], us: [{ unit: "rpm/V", from: 0 }] },
+  fraction: { metric: [{ unit: "pct", from: 0 }], us: [{ unit: "pct", from: 0 }] },
+  count: { metric: [{ unit: "count", from: 0 }], us: [{ unit: "count", from: 0 }] },
+};
+
+/** The unit a value of `kind` is shown in for `system`, chosen by magnitude. */
+export function displayUnit(kind: QuantityKind, system: UnitSystem, valueSI = 0): UnitId {
+  const steps = DISPLAY[kind][system];
+  let chosen = steps[0]!.unit;
+  for (const step of steps) if (Math.abs(valueSI) >= step.from) chosen = step.unit;
+  return chosen;
+}
+
+const SUPERSCRIPT: Record<string, string> = { "-": "⁻", "0": "⁰", "1": "¹", "2": "²", "3": "³", "4": "⁴", "5": "⁵", "6": "⁶", "7": "⁷", "8": "⁸", "9": "⁹" };
+
+/**
+ * Formats a plain number to `significant` figures: no exponent between 1e-3 and 1e6, trailing
+ * zeros kept as the precision implies ("32.0"), and "× 10ⁿ" outside that range. Never prints NaN:
+ * a non-finite value is the caller's bug and yields "—".
+ */
+export function formatNumber(value: number, significant = 3): string {
+  if (!Number.isFinite(value)) return "—";
+  if (value === 0) return "0";
+  const abs = Math.abs(value);
+  if (abs >= 1e6 || abs < 1e-3) {
+    const [mantissa, exponent] = value.toExponential(significant - 1).split("e");
+    const power = String(Number(exponent)).replace(/./g, (c) => SUPERSCRIPT[c] ?? c);
+    return `${mantissa!.replace("-", "−")} × 10${power}`;
+  }
+  const digitsBeforePoint = Math.floor(Math.log10(abs)) + 1;
+  const decimals = Math.max(0, significant - digitsBeforePoint);
+  const rounded = Number(value.toPrecision(significant));
+  return rounded.toFixed(decimals).replace("-", "−");
+}
+
+export interface FormattedQuantity {
+  /** Number and unit, e.g. "32.0 mm". */
+  text: string;
+  /** The number alone, formatted. */
+  number: string;
+  /** The unit's symbol. */
+  symbol: string;
+  unit: UnitId;
+}
+
+/** Formats an SI value of `kind` in `system` (or in an explicit `unit`). */
+export function formatQuantity(
+  valueSI: number,
+  kind: QuantityKind,
+  options: { system?: UnitSystem; unit?: UnitId; significant?: number } = {},
+): FormattedQuantity {
+  const unit = options.unit ?? displayUnit(kind, options.system ?? "metric", valueSI);
+  const number = formatNumber(fromSI(valueSI, unit), options.significant ?? 3);
+  const symbol = UNITS[unit].symbol;
+  const joiner = symbol === "" ? "" : symbol === "%" || symbol === "°" ? "" : " ";
+  return { text: `${number}${joiner}${symbol}`, number, symbol, unit };
+}
+
+/**
+ * Writes an SI value as compact text that `parseQuantity` reads back exactly enough for a URL:
+ * up to 6 significant figures, no spaces ("32mm", "2400rpm").
+ */
+export function quantityToText(valueSI: number, unit: UnitId): string {
+  const n = Number(fromSI(valueSI, unit).toPrecision(6));
+  const symbol = UNITS[unit].symbol;
+  return `${n}${symbol === "" ? "" : UNIT_URL_SPELLING[unit] ?? symbol}`;
+}
+
+/** ASCII spellings for units whose symbol has characters a URL would percent-encode. */
+const UNIT_URL_SPELLING: Partial<Record<UnitId, string>> = {
+  gn: "g",
+  "m/s2": "m/s2",
+  "ft/s2": "ft/s2",
+  "deg/s": "deg/s",
+  "rad/s2": "rad/s2",
+  deg: "deg",
+  us: "us",
+  "ft·lbf": "ft-lbf",
+  "N·m": "Nm",
+  "lbf·in": "lbf-in",
+  "ozf·in": "ozf-in",
+  "kg·m2": "kgm2",
+  "g·cm2": "gcm2",
+  "lb·in2": "lb-in2",
+  "oz·in2": "oz-in2",
+  "kg/m3": "kg/m3",
+  "g/cm3": "g/cm3",
+  "lb/in3": "lb/in3",
+  "kg·m": "kgm",
+  "g·mm": "gmm",
+  "oz·in": "oz-in",
+  ohm: "ohm",
+  mohm: "mohm",
+  "rad/(s·V)": "rad/s/V",
+  pct: "%",
+};
+
+// ---------------------------------------------------------------------------------------------
+// Parsing what a user typed.
+
+export type ParseResult =
+  | { ok: true; valueSI: number; unit: UnitId; number: number }
+  | { ok: false; reason: "empty" | "not-a-number" | "unknown-unit"; message: string };
+
+const NUMBER_AND_UNIT = /^([+\-−]?(?:\d+(?:[.,]\d*)?|[.,]\d+)(?:[eE][+\-−]?\d+)?)\s*(.*)$/;
+
+function normaliseUnitText(text: string): string {
+  return text
+    .trim()
+    .replace(/\s+/g, " ")
+    .replace(/[μu](?=s$)/, "µ")
+    .replace(/\^?²/g, "2")
+    .replace(/\^?³/g, "3")
+    .replace(/\^2/g, "2")
+    .replace(/\^3/g, "3");
+}
+
+/** Looks up a unit of `kind` by symbol, id or alias: exact spelling first, then ignoring case. */
+export function findUnit(text: string, kind: QuantityKind): UnitId | undefined {
+  const wanted = normaliseUnitText(text);
+  const candidates = unitsOfKind(kind);
+  const spellings = (id: UnitId): string[] => {
+    const def: UnitDef = UNITS[id];
+    return [id, def.symbol, UNIT_URL_SPELLING[id] ?? "", ...(def.aliases ?? [])].filter((s) => s !== "").map(normaliseUnitText);
+  };
+  for (const id of candidates) if (spellings(id).includes(wanted)) return id;
+  const lower = wanted.toLowerCase();
+  const matches = candidates.filter((id) => spellings(id).some((s) => s.toLowerCase() === lower));
+  return matches.length === 1 ? matches[0] : undefined;
+}
+
+/** Human names of each kind, for messages. */
+export const KIND_NAMES: Record<QuantityKind, string> = {
+  length: "length",
+  mass: "mass",
+  acceleration: "acceleration",
+  angularSpeed: "rotational speed",
+  angularAcceleration: "angular acceleration",
+  angle: "angle",
+  time: "time",
+  frequency: "frequency",
+  force: "force",
+  speed: "speed",
+  energy: "energy",
+  power: "power",
+  torque: "torque",
+  inertia: "moment of inertia",
+  stress: "stress",
+  density: "density",
+  unbalance: "unbalance",
+  voltage: "voltage",
+  current: "current",
+  resistance: "resistance",
+  motorVelocityConstant: "motor velocity constant",
+  fraction: "ratio",
+  count: "count",
+};
+
+/**
+ * Reads what a user typed for a field of `kind`. A bare number takes `defaultUnit`; a decimal
+ * comma is accepted ("1,8 in"). "350 g" is a mass in a mass field and 350 standard gravities in
+ * an acceleration field: the field's kind decides.
+ */
+export function parseQuantity(text: string, kind: QuantityKind, defaultUnit: UnitId): ParseResult {
+  const trimmed = text.trim();
+  if (trimmed === "") return { ok: false, reason: "empty", message: "is required" };
+  const match = NUMBER_AND_UNIT.exec(trimmed);
+  if (!match) {
+    return { ok: false, reason: "not-a-number", message: `must start with a number, e.g. ${example(kind, defaultUnit)}` };
+  }
+  if (/^[+\-−]?\d{1,3},\d{3}$/.test(match[1]!)) {
+    const digits = match[1]!.replace(",", "");
+    const decimal = match[1]!.replace(",", ".");
+    return { ok: false, reason: "not-a-number", message: `is ambiguous: write ${digits} or ${decimal} (a comma can be a decimal mark or a thousands separator)` };
+  }
+  const number = Number(match[1]!.replace(",", ".").replace(/−/g, "-"));
+  if (!Number.isFinite(number)) {
+    return { ok: false, reason: "not-a-number", message: `must be a finite number, e.g. ${example(kind, defaultUnit)}` };
+  }
+  const unitText = match[2]!;
+  let unit: UnitId | undefined = defaultUnit;
+  if (unitText !== "") {
+    unit = findUnit(unitText, kind);
+    if (!unit) {
+      const known = unitsOfKind(kind).map((id) => UNITS[id].symbol).filter((s) => s !== "");
+      const shown = unitText.length > 20 ? `${unitText.slice(0, 20)}…` : unitText;
+      return {
+        ok: false,
+        reason: "unknown-unit",
+        message: known.length
+          ? `has a unit "${shown}" that is not a ${KIND_NAMES[kind]} unit; use ${known.join(", ")}`
+          : `takes a plain number, without a unit (got "${shown}")`,
+      };
+    }
+  }
+  return { ok: true, valueSI: toSI(number, unit), unit, number };
+}
+
+function example(kind: QuantityKind, unit: UnitId): string {
+  const symbol = UNITS[unit].symbol;
+  const sample = kind === "angularSpeed" ? 2400 : kind === "fraction" ? 10 : 32;
+  return symbol ? `${sample} ${symbol}` : String(sample);
+}
