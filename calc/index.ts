@@ -8,3 +8,7 @@ export * from "./sources.ts";
 export * from "./units.ts";
 export * from "./inputs.ts";
 export * from "./rotation.ts";
+export * from "./heading.ts";
+export * from "./mass.ts";
+export * from "./loads.ts";
+export * from "./drivetrain.ts";

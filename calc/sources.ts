@@ -2,16 +2,13 @@
  * The bibliography of calc/: every formula and constant names one of these keys, and every chapter
  * lists the keys it relies on in its frontmatter (an unknown key fails the build).
  */
-export interface Source {
-  /** Authors or issuing body. */
-  author: string;
-  /** Title of the work. */
-  title: string;
-  /** Publisher, edition and year as usually cited. */
-  publication: string;
-  /** Where in the work (section, table, clause), when one place is meant. */
-  locator?: string;
-}
+import type { Source } from "./source-type.ts";
+import { HEADING_SOURCES } from "./sources/heading.ts";
+import { MASS_SOURCES } from "./sources/mass.ts";
+import { LOADS_SOURCES } from "./sources/loads.ts";
+import { DRIVETRAIN_SOURCES } from "./sources/drivetrain.ts";
+
+export type { Source };
 
 export const SOURCES = {
   "cgpm-1901": {
@@ -54,6 +51,10 @@ export const SOURCES = {
     title: "A digital sensor cannot report a change smaller than one count (its resolution) or its noise floor",
     publication: "Data-sheet convention for digital accelerometers (sensitivity in g per count, noise density)",
   },
+  ...HEADING_SOURCES,
+  ...MASS_SOURCES,
+  ...LOADS_SOURCES,
+  ...DRIVETRAIN_SOURCES,
 } as const satisfies Record<string, Source>;
 
 export type SourceKey = keyof typeof SOURCES;

@@ -1,0 +1,29 @@
+import { defineConfig } from "vitest/config";
+
+/**
+ * Three projects: `unit` (calc/ and component logic, no build needed), `build` (reads dist/),
+ * `browser` (serves dist/ and drives Debian chromium). `npm test` builds first, then runs all.
+ */
+export default defineConfig({
+  oxc: { jsx: { runtime: "automatic", importSource: "preact" } },
+  test: {
+    reporters: ["default", "./tests/support/summary-reporter.ts"],
+    projects: [
+      {
+        extends: true,
+        test: { name: "unit", include: ["tests/calc/**/*.test.ts", "tests/components/**/*.test.{ts,tsx}"] },
+      },
+      { extends: true, test: { name: "build", include: ["tests/build/**/*.test.ts"] } },
+      {
+        extends: true,
+        test: {
+          name: "browser",
+          include: ["tests/browser/**/*.test.ts"],
+          testTimeout: 60_000,
+          hookTimeout: 60_000,
+          fileParallelism: false,
+        },
+      },
+    ],
+  },
+});
