@@ -56,9 +56,11 @@ export function fieldUnit(spec: InputSpec, system: UnitSystem): UnitId {
   return spec.unit?.[system] ?? displayUnit(spec.kind, system, spec.default);
 }
 
-/** Formats an SI value the way the field would show it. */
+/** Formats a range bound in the field's unit, without trailing zeros ("50 %", "2000 mm"). */
 function show(spec: InputSpec, valueSI: number, system: UnitSystem): string {
-  return formatQuantity(valueSI, spec.kind, { unit: fieldUnit(spec, system), significant: 4 }).text;
+  const unit = fieldUnit(spec, system);
+  const symbol = UNITS[unit].symbol;
+  return `${Number(fromSI(valueSI, unit).toPrecision(4))}${symbol ? ` ${symbol}` : ""}`;
 }
 
 /** The allowed range in words, in the user's units: "between 1 mm and 2000 mm". */

@@ -189,7 +189,7 @@ export const accelerometerPlacementInputs = defineInputs({
     min: 0,
     minOpen: true,
     max: 2,
-    default: 0.032,
+    default: 0.02,
     urlKey: "r",
     help: "Distance from the spin axis (the centre of mass) to the sensing element.",
   },
@@ -237,7 +237,7 @@ export const accelerometerPlacementInputs = defineInputs({
     min: 0,
     minOpen: true,
     max: 0.5,
-    default: 0.01,
+    default: 0.02,
     urlKey: "res",
     help: "How finely one reading must resolve the spin rate at the lowest tracked speed.",
   },
@@ -309,7 +309,7 @@ export function accelerometerPlacement(input: AccelerometerPlacementInput): Acce
   requireNonNegative("noise", noise, "m/s²");
   requirePositive("topSpeed", topSpeed, "rad/s");
   if (!(lowSpeed <= topSpeed)) {
-    throw new CalcInputError({ param: "lowSpeed", value: lowSpeed, expected: `at most the top speed (${topSpeed.toPrecision(4)} rad/s)`, unit: "rad/s" });
+    throw new CalcInputError({ param: "lowSpeed", value: lowSpeed, expected: "at most the top speed", unit: "rad/s" });
   }
   const effectiveStep = Math.max(step, noise);
   const minRadius = minSensorRadius({ step: effectiveStep, lowSpeed, resolution });

@@ -268,7 +268,7 @@ export function formatQuantity(
   const unit = options.unit ?? displayUnit(kind, options.system ?? "metric", valueSI);
   const number = formatNumber(fromSI(valueSI, unit), options.significant ?? 3);
   const symbol = UNITS[unit].symbol;
-  const joiner = symbol === "" ? "" : symbol === "%" || symbol === "°" ? "" : " ";
+  const joiner = symbol === "" || symbol === "°" ? "" : " ";
   return { text: `${number}${joiner}${symbol}`, number, symbol, unit };
 }
 
@@ -308,7 +308,7 @@ const UNIT_URL_SPELLING: Partial<Record<UnitId, string>> = {
   ohm: "ohm",
   mohm: "mohm",
   "rad/(s·V)": "rad/s/V",
-  pct: "%",
+  pct: "pct",
 };
 
 // ---------------------------------------------------------------------------------------------

@@ -1,0 +1,36 @@
+// @ts-check
+import { defineConfig } from "astro/config";
+import mdx from "@astrojs/mdx";
+import preact from "@astrojs/preact";
+import { unified } from "@astrojs/markdown-remark";
+import remarkMath from "remark-math";
+import rehypeKatex from "rehype-katex";
+import { rehypeBaseLinks } from "./scripts/site/rehype-base-links.mjs";
+import { katexWoff2Only } from "./scripts/site/katex-woff2-only.mjs";
+
+/**
+ * BASE: the sub-path the site is served under ("/" by default; e.g. BASE=/handbook/ for
+ * https://example.org/handbook/). Set it at build time.
+ */
+const base = process.env.BASE || "/";
+
+export default defineConfig({
+  srcDir: ".",
+  publicDir: "./public",
+  outDir: "./dist",
+  base,
+  trailingSlash: "ignore",
+  build: { format: "directory", inlineStylesheets: "never" },
+  integrations: [preact(), mdx()],
+  markdown: {
+    processor: unified({
+      remarkPlugins: [remarkMath],
+      rehypePlugins: [[rehypeKatex, { strict: "error", throwOnError: true, output: "html" }], [rehypeBaseLinks, { base }]],
+    }),
+  },
+  devToolbar: { enabled: false },
+  vite: {
+    plugins: [katexWoff2Only()],
+    build: { assetsInlineLimit: 0 },
+  },
+});

@@ -1,0 +1,62 @@
+/**
+ * Unit-system switch and "copy link" for a calculator. The link is the page URL with the current
+ * state; copying falls back to selecting the link text where the clipboard is unavailable.
+ */
+import { useSignal } from "@preact/signals";
+import type { Signal } from "@preact/signals";
+import type { UnitSystem } from "../../calc/units.ts";
+
+export interface ToolbarProps {
+  idPrefix: string;
+  system: Signal<UnitSystem>;
+  onSystem(next: UnitSystem): void;
+  /** Builds the full link to copy. */
+  link(): string;
+}
+
+export function Toolbar({ idPrefix, system, onSystem, link }: ToolbarProps) {
+  const status = useSignal("");
+  const fallback = useSignal<string | null>(null);
+  async function copy() {
+    const url = link();
+    try {
+      await navigator.clipboard.writeText(url);
+      status.value = "Link copied.";
+      fallback.value = null;
+    } catch {
+      fallback.value = url;
+      status.value = "Copy the selected link below.";
+    }
+  }
+  return (
+    <div class="calc-actions">
+      <fieldset class="segmented">
+        <legend>Units</legend>
+        {(["metric", "us"] as const).map((option) => (
+          <label key={option}>
+            <input
+              type="radio"
+              name={`${idPrefix}-units`}
+              value={option}
+              checked={system.value === option}
+              onChange={() => onSystem(option)}
+            />
+            <span>{option === "metric" ? "Metric" : "US"}</span>
+          </label>
+        ))}
+      </fieldset>
+      <button type="button" class="button" onClick={copy}>
+        Copy link to this check
+      </button>
+      <p class="calc-status" role="status" aria-live="polite">
+        {status.value}
+      </p>
+      {fallback.value ? (
+        <label class="field">
+          <span>Link to this check</span>
+          <input type="text" readOnly value={fallback.value} ref={(el) => el?.select()} />
+        </label>
+      ) : null}
+    </div>
+  );
+}

@@ -1,0 +1,73 @@
+// Page weight of a built page: the gzip bytes of its HTML, of every stylesheet it links and of
+// every script it can run (inline scripts, module scripts, island components and renderers, and
+// everything they import), plus the font files its CSS can request. Deterministic: same build,
+// same bytes. Used by the budget tests and by `npm run bench`.
+import { readFileSync, existsSync } from "node:fs";
+import { gzipSync } from "node:zlib";
+import { dirname, join, posix } from "node:path";
+
+const gz = (/** @type {Buffer|string} */ data) => gzipSync(data, { level: 9 }).length;
+
+/**
+ * @param {string} distDir absolute path of dist/
+ * @param {string} base the base path the site was built with ("/" or "/sub/")
+ */
+export function createWeigher(distDir, base = "/") {
+  /** Maps a URL path used in the page to a file in dist/. */
+  const fileFor = (urlPath) => {
+    const path = urlPath.split(/[?#]/)[0];
+    const relative = path.startsWith(base) ? path.slice(base.length) : path.replace(/^\//, "");
+    return join(distDir, relative);
+  };
+
+  /** All JS files reachable from an entry, following static and dynamic imports. */
+  const scriptClosure = (entryUrl, seen = new Set()) => {
+    if (seen.has(entryUrl)) return seen;
+    seen.add(entryUrl);
+    const file = fileFor(entryUrl);
+    if (!existsSync(file)) throw new Error(`page references a missing script ${entryUrl}`);
+    const code = readFileSync(file, "utf8");
+    const specifiers = [...code.matchAll(/(?:import|export)\s*(?:[^"'`]*?from\s*)?["']([^"']+\.js)["']|import\(\s*["']([^"']+\.js)["']\s*\)/g)].map((m) => m[1] ?? m[2]);
+    for (const specifier of specifiers) {
+      if (/^[a-z]+:/i.test(specifier)) continue;
+      const resolved = specifier.startsWith("/") ? specifier : posix.join(posix.dirname(entryUrl), specifier);
+      scriptClosure(resolved, seen);
+    }
+    return seen;
+  };
+
+  /**
+   * @param {string} pagePath e.g. "chapters/acceleration/index.html"
+   */
+  return function weigh(pagePath) {
+    const html = readFileSync(join(distDir, pagePath), "utf8");
+    const css = [...html.matchAll(/<link[^>]+rel="stylesheet"[^>]*href="([^"]+)"/g)].map((m) => m[1]);
+    const inlineScripts = [...html.matchAll(/<script\b[^>]*>([\s\S]*?)<\/script>/g)].filter((m) => !/\bsrc=/.test(m[0]) && !/type="application\/(ld\+)?json"/.test(m[0]));
+    const entries = new Set([
+      ...[...html.matchAll(/<script\b[^>]*\bsrc="([^"]+)"/g)].map((m) => m[1]),
+      ...[...html.matchAll(/\b(?:component-url|renderer-url)="([^"]+)"/g)].map((m) => m[1]),
+    ]);
+    const scripts = new Set();
+    for (const entry of entries) scriptClosure(entry, scripts);
+    const cssBytes = css.reduce((sum, href) => sum + gz(readFileSync(fileFor(href))), 0);
+    const jsBytes = [...scripts].reduce((sum, src) => sum + gz(readFileSync(fileFor(src))), 0) + inlineScripts.reduce((sum, m) => sum + gz(m[1]), 0);
+    const fonts = new Set();
+    for (const href of css) {
+      const text = readFileSync(fileFor(href), "utf8");
+      for (const m of text.matchAll(/url\(([^)]+)\)/g)) fonts.add(m[1].replace(/["']/g, ""));
+    }
+    return {
+      page: pagePath,
+      html: gz(html),
+      css: cssBytes,
+      js: jsBytes,
+      total: gz(html) + cssBytes + jsBytes,
+      scripts: [...scripts],
+      inlineScripts: inlineScripts.length,
+      stylesheets: css,
+      fontsReferenced: [...fonts],
+    };
+  };
+}
+
+export { dirname };

@@ -1,0 +1,31 @@
+/**
+ * Shared set-up for browser tests: serves dist/ on 127.0.0.1 and launches Debian's chromium
+ * through playwright-core (no browser download).
+ */
+import { chromium, type Browser } from "playwright-core";
+import { existsSync } from "node:fs";
+import { startStaticServer } from "../../scripts/static-server.mjs";
+
+export const CHROMIUM_PATH = process.env.CHROMIUM_PATH ?? "/usr/bin/chromium";
+
+export const CHROMIUM_ARGS = [
+  "--headless",
+  "--no-sandbox",
+  "--disable-gpu",
+  "--disable-quic",
+  "--no-first-run",
+  "--disable-background-networking",
+  "--disable-component-update",
+  "--disable-sync",
+];
+
+export async function launchBrowser(): Promise<Browser> {
+  if (!existsSync(CHROMIUM_PATH)) {
+    throw new Error(`chromium not found at ${CHROMIUM_PATH}: install Debian's chromium (apt-get install -y chromium) or set CHROMIUM_PATH`);
+  }
+  return chromium.launch({ executablePath: CHROMIUM_PATH, args: CHROMIUM_ARGS });
+}
+
+export async function serveDist(base = "/") {
+  return startStaticServer({ root: new URL("../../dist/", import.meta.url), port: 0, base });
+}
