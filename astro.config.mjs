@@ -6,6 +6,7 @@ import { unified } from "@astrojs/markdown-remark";
 import remarkMath from "remark-math";
 import rehypeKatex from "rehype-katex";
 import { rehypeBaseLinks } from "./scripts/site/rehype-base-links.mjs";
+import { rehypeScrollableMath } from "./scripts/site/rehype-scrollable-math.mjs";
 import { katexWoff2Only } from "./scripts/site/katex-woff2-only.mjs";
 
 /**
@@ -25,7 +26,7 @@ export default defineConfig({
   markdown: {
     processor: unified({
       remarkPlugins: [remarkMath],
-      rehypePlugins: [[rehypeKatex, { strict: "error", throwOnError: true, output: "html" }], [rehypeBaseLinks, { base }]],
+      rehypePlugins: [[rehypeKatex, { strict: "error", throwOnError: true, output: "html" }], rehypeScrollableMath, [rehypeBaseLinks, { base }]],
     }),
   },
   devToolbar: { enabled: false },

@@ -1,0 +1,120 @@
+/**
+ * Checks on the built site in dist/ (`npm test` builds first): every page exists, nothing comes
+ * from another origin, the byte budgets hold, and KaTeX is rendered at build time with one version.
+ */
+import { describe, expect, it } from "vitest";
+import { existsSync, readdirSync, readFileSync } from "node:fs";
+import { createRequire } from "node:module";
+import { join } from "node:path";
+import { fileURLToPath } from "node:url";
+import { createWeigher } from "../../scripts/site/page-weight.mjs";
+
+const dist = fileURLToPath(new URL("../../dist/", import.meta.url));
+const contentDir = fileURLToPath(new URL("../../content/chapters/", import.meta.url));
+
+function walk(dir: string): string[] {
+  return readdirSync(dir, { withFileTypes: true }).flatMap((entry) => (entry.isDirectory() ? walk(join(dir, entry.name)) : [join(dir, entry.name)]));
+}
+
+const chapters = readdirSync(contentDir)
+  .filter((f) => f.endsWith(".mdx"))
+  .map((f) => {
+    const source = readFileSync(join(contentDir, f), "utf8");
+    return { slug: f.replace(/\.mdx$/, ""), calculator: /^calculator:\s*true\s*$/m.test(source), islands: (source.match(/client:(load|visible|idle)/g) ?? []).length };
+  });
+
+const KB = 1024;
+/** Budgets from the foundation issue, gzip bytes. */
+const BUDGET = { chapterTotal: 60 * KB, chapterJs: 25 * KB };
+
+describe("the built site", () => {
+  it("was built (run `npm run build` first)", () => {
+    expect(existsSync(join(dist, "index.html"))).toBe(true);
+  });
+
+  it.each(["index.html", "404.html", ...chapters.map((c) => `chapters/${c.slug}/index.html`)])("has %s", (page) => {
+    expect(existsSync(join(dist, page))).toBe(true);
+  });
+
+  it("references no other origin from any page, stylesheet or script", () => {
+    const offenders: string[] = [];
+    for (const file of walk(dist)) {
+      if (/\.(html)$/.test(file)) {
+        const html = readFileSync(file, "utf8");
+        for (const m of html.matchAll(/\b(?:src|href|action|srcset|poster|component-url|renderer-url)="([^"]*)"/g)) {
+          if (/^(?:[a-z]+:)?\/\//i.test(m[1]!) || /^(?:https?|ftp):/i.test(m[1]!)) offenders.push(`${file}: ${m[1]}`);
+        }
+      } else if (/\.css$/.test(file)) {
+        for (const m of readFileSync(file, "utf8").matchAll(/url\(\s*["']?([^"')]+)/g)) {
+          if (/^(?:[a-z]+:)?\/\//i.test(m[1]!) && !m[1]!.startsWith("data:")) offenders.push(`${file}: ${m[1]}`);
+        }
+        if (/@import\s+url\(\s*["']?(?:https?:)?\/\//.test(readFileSync(file, "utf8"))) offenders.push(`${file}: @import`);
+      } else if (/\.m?js$/.test(file)) {
+        for (const m of readFileSync(file, "utf8").matchAll(/(?:import\s*\(|from)\s*["'](https?:\/\/[^"']+)/g)) offenders.push(`${file}: ${m[1]}`);
+      }
+    }
+    expect(offenders).toEqual([]);
+  });
+
+  describe("byte budgets (gzip, deterministic)", () => {
+    const weigh = createWeigher(dist, "/");
+
+    it("ships no JavaScript at all on the home page", () => {
+      const home = weigh("index.html");
+      expect(home.js).toBe(0);
+      expect(home.scripts).toEqual([]);
+      expect(home.inlineScripts).toBe(0);
+    });
+
+    it.each(chapters.filter((c) => c.calculator && c.islands === 1).map((c) => c.slug))("keeps %s (one calculator) within 60 KB, JS within 25 KB", (slug) => {
+      const page = weigh(`chapters/${slug}/index.html`);
+      expect(page.js).toBeGreaterThan(0);
+      expect(page.js).toBeLessThanOrEqual(BUDGET.chapterJs);
+      expect(page.total).toBeLessThanOrEqual(BUDGET.chapterTotal);
+    });
+
+    it("ships no JavaScript on chapters without a calculator", () => {
+      for (const c of chapters.filter((c) => !c.calculator)) expect(weigh(`chapters/${c.slug}/index.html`).js, c.slug).toBe(0);
+    });
+
+    it("lets pages reference only woff2 fonts, from this site", () => {
+      for (const c of chapters) {
+        const fonts = weigh(`chapters/${c.slug}/index.html`).fontsReferenced;
+        for (const font of fonts) expect(font, c.slug).toMatch(/^\/_astro\/KaTeX_[A-Za-z0-9_-]+\.[A-Za-z0-9_-]+\.woff2$/);
+      }
+    });
+  });
+
+  describe("formulas", () => {
+    const page = readFileSync(join(dist, "chapters/acceleration/index.html"), "utf8");
+
+    it("are rendered to HTML at build time (no KaTeX JavaScript)", () => {
+      expect(page).toContain('class="katex"');
+      expect(page).not.toMatch(/<script[^>]*katex/i);
+    });
+
+    it("render an exponent with KaTeX 0.16's superscript markup, styled by the same version's CSS", () => {
+      // a = ω²r: the 2 sits in a .msupsub/.vlist structure; KaTeX 0.16 CSS sizes it via .sizing.reset-size6.size3.
+      expect(page).toMatch(/class="msupsub"/);
+      expect(page).toMatch(/class="sizing reset-size6 size3 mtight"/);
+      const css = walk(dist).filter((f) => f.endsWith(".css")).map((f) => readFileSync(f, "utf8")).join("\n");
+      expect(css).toContain(".katex .sizing.reset-size6.size3");
+      expect(css).toContain(".katex .msupsub");
+    });
+
+    it("come from a single installed KaTeX version, the one rehype-katex uses", () => {
+      const require = createRequire(import.meta.url);
+      const top = require("katex/package.json").version as string;
+      const viaRehype = createRequire(require.resolve("rehype-katex"))("katex/package.json").version as string;
+      expect(viaRehype).toBe(top);
+      expect(top).toMatch(/^0\.16\./);
+    });
+  });
+
+  it("lists each chapter's sources", () => {
+    for (const c of chapters) {
+      const html = readFileSync(join(dist, `chapters/${c.slug}/index.html`), "utf8");
+      expect(html, c.slug).toContain('id="sources-heading"');
+    }
+  });
+});
