@@ -1,0 +1,55 @@
+// Prints the handbook's figures: build time, per-page bytes (gzip), and how long each calculator
+// takes to recompute after one input changes. A benchmark prints; it never asserts.
+// Usage: npm run bench  (SKIP_BUILD=1 to weigh an existing dist/)
+import { execFileSync } from "node:child_process";
+import { readdirSync, existsSync } from "node:fs";
+import { join } from "node:path";
+import { fileURLToPath } from "node:url";
+import { performance } from "node:perf_hooks";
+import { createWeigher } from "./site/page-weight.mjs";
+
+const root = fileURLToPath(new URL("../", import.meta.url));
+const dist = join(root, "dist");
+const kb = (bytes) => `${(bytes / 1024).toFixed(1)} KB`;
+
+if (!process.env.SKIP_BUILD) {
+  const start = performance.now();
+  execFileSync(process.execPath, [join(root, "node_modules/astro/bin/astro.mjs"), "build", "--silent"], { cwd: root, stdio: "ignore" });
+  console.log(`build: ${((performance.now() - start) / 1000).toFixed(2)} s`);
+}
+
+console.log("\npage weight (gzip)                              html      css       js     total");
+const weigh = createWeigher(dist, "/");
+const pages = ["index.html", "404.html", ...readdirSync(join(dist, "chapters")).map((slug) => `chapters/${slug}/index.html`)];
+for (const page of pages.filter((p) => existsSync(join(dist, p)))) {
+  const w = weigh(page);
+  console.log(`${page.padEnd(44)}${kb(w.html).padStart(9)}${kb(w.css).padStart(9)}${kb(w.js).padStart(9)}${kb(w.total).padStart(10)}`);
+}
+
+/** Median time of `fn` over `runs` runs, in microseconds. */
+function median(fn, runs) {
+  const times = [];
+  for (let i = 0; i < runs; i += 1) {
+    const t = performance.now();
+    fn(i);
+    times.push((performance.now() - t) * 1000);
+  }
+  times.sort((a, b) => a - b);
+  return times[Math.floor(times.length / 2)];
+}
+
+console.log("\ncalculator recompute (one input changed, result and plot data read), median:");
+const { createPlacementModel } = await import("../components/placement/model.ts");
+const model = createPlacementModel();
+const placementUs = median((i) => {
+  model.fields.texts.radius.value = `${10 + (i % 50)} mm`;
+  void model.outcome.value;
+  void model.curve.value;
+}, 2000);
+console.log(`  accelerometer placement: ${placementUs.toFixed(1)} µs per update`);
+
+const extra = join(root, "scripts/bench-drivetrain.mjs");
+if (existsSync(extra)) {
+  console.log("");
+  execFileSync(process.execPath, [extra], { cwd: root, stdio: "inherit" });
+}
