@@ -179,7 +179,7 @@ export function rpmToRadPerSecond(rpm: number): number {
   return rpm * RPM;
 }
 
-/** rad/s → rpm. */
+/** rad/s → rpm (exact: 1 rad/s = 60/2π rpm). */
 export function radPerSecondToRpm(angularSpeed: number): number {
   return angularSpeed / RPM;
 }
