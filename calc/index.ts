@@ -12,3 +12,7 @@ export * from "./heading.ts";
 export * from "./mass.ts";
 export * from "./loads.ts";
 export * from "./drivetrain.ts";
+export * from "./calibration.ts";
+export * from "./csv.ts";
+export * from "./materials.ts";
+export * from "./fasteners.ts";

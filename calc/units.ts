@@ -100,6 +100,7 @@ export const UNITS = {
   ozf: { symbol: "ozf", kind: "force", factor: POUND_FORCE / 16, exactness: "exact", definition: "lbf/16", source: "nist-sp811" },
   // speed [m/s]
   "m/s": { symbol: "m/s", kind: "speed", factor: 1, exactness: "exact", definition: "SI unit", source: "nist-sp811" },
+  "mm/s": { symbol: "mm/s", kind: "speed", factor: 1e-3, exactness: "exact", definition: "0.001 m/s (balance grades are quoted in it)", source: "nist-sp811" },
   "km/h": { symbol: "km/h", kind: "speed", factor: 1000 / 3600, exactness: "exact", definition: "1/3.6 m/s", source: "nist-sp811", aliases: ["kph"] },
   "ft/s": { symbol: "ft/s", kind: "speed", factor: FOOT, exactness: "exact", definition: "0.3048 m/s", source: "nist-sp811", aliases: ["fps"] },
   mph: { symbol: "mph", kind: "speed", factor: (5280 * FOOT) / 3600, exactness: "exact", definition: "1609.344 m per 3600 s", source: "nist-sp811" },

@@ -14,6 +14,7 @@ import {
   speedResolution,
   STANDARD_GRAVITY,
   type AccelerometerPlacementInput,
+  type InputSpec,
 } from "#calc";
 
 const rel = (actual: number, expected: number) => Math.abs(actual - expected) / Math.abs(expected);
@@ -148,7 +149,7 @@ const validInput = fc.record(
   Object.fromEntries(
     Object.entries(accelerometerPlacementInputs).map(([name, spec]) => [
       name,
-      fc.double({ min: spec.minOpen ? Math.max(spec.min, 0) + 1e-9 * (spec.max - spec.min) : spec.min, max: spec.max, noNaN: true }),
+      fc.double({ min: (spec as InputSpec).minOpen ? Math.max(spec.min, 0) + 1e-9 * (spec.max - spec.min) : spec.min, max: spec.max, noNaN: true }),
     ]),
   ) as { [K in keyof AccelerometerPlacementInput]: fc.Arbitrary<number> },
 );

@@ -1,0 +1,341 @@
+/**
+ * ISO metric fasteners as data: coarse-thread sizes with their pitch and tensile stress area, and
+ * the strength of the common steel property classes. SI throughout: m, m², Pa, N.
+ *
+ * The tables hold what the standards print; the functions derive what the tables imply (stress area
+ * from the thread geometry, minimum tensile and proof loads, Eurocode design resistances) so that
+ * every tabulated number can be checked against its formula.
+ */
+import { CalcInputError, requireInRange, requirePositive } from "./errors.ts";
+import type { SourceKey } from "./sources.ts";
+
+// ---------------------------------------------------------------------------------------------
+// Choosing from a fixed list.
+
+/** One entry of a fixed list of choices: the value the code uses and the label a person reads. */
+export interface ChoiceOption<V extends string = string> {
+  readonly value: V;
+  readonly label: string;
+}
+
+/**
+ * Throws a `CalcInputError` naming `param` and listing the allowed values unless `value` is one
+ * of `options`; returns it narrowed to the option type otherwise.
+ */
+export function requireChoice<V extends string>(param: string, value: unknown, options: readonly ChoiceOption<V>[]): V {
+  const found = options.find((option) => option.value === value);
+  if (!found) {
+    throw new CalcInputError({ param, value, expected: `one of ${options.map((o) => o.value).join(", ")}`, unit: "" });
+  }
+  return found.value;
+}
+
+// ---------------------------------------------------------------------------------------------
+// Thread geometry.
+
+/** Sizes of ISO metric coarse thread this module knows, smallest first. */
+export const THREAD_SIZE_OPTIONS = [
+  { value: "M2", label: "M2 × 0.4" },
+  { value: "M2.5", label: "M2.5 × 0.45" },
+  { value: "M3", label: "M3 × 0.5" },
+  { value: "M4", label: "M4 × 0.7" },
+  { value: "M5", label: "M5 × 0.8" },
+  { value: "M6", label: "M6 × 1" },
+  { value: "M8", label: "M8 × 1.25" },
+  { value: "M10", label: "M10 × 1.5" },
+  { value: "M12", label: "M12 × 1.75" },
+] as const satisfies readonly ChoiceOption[];
+
+export type ThreadSize = (typeof THREAD_SIZE_OPTIONS)[number]["value"];
+
+export interface MetricThread {
+  /** Designation, e.g. "M4". */
+  size: ThreadSize;
+  /** d, the basic major (nominal) diameter [m]. */
+  nominalDiameter: number;
+  /** P, the coarse pitch [m] (iso-261). */
+  pitch: number;
+  /** A_s,nom, the tensile stress area as the standard tabulates it, to 3 significant figures [m²]. */
+  stressArea: number;
+  /** Where the tabulated stress area is printed. */
+  stressAreaSource: SourceKey;
+}
+
+/**
+ * ISO metric coarse threads M2–M12: pitch (iso-261) and tabulated tensile stress area A_s,nom
+ * (iso-898-1 Table 4 for M3–M12; gb-t-16823-1 for M2 and M2.5, which ISO 898-1's load tables
+ * start above). Every tabulated area agrees with `tensileStressArea` to its printed precision.
+ */
+export const METRIC_COARSE_THREADS: Readonly<Record<ThreadSize, MetricThread>> = {
+  M2: { size: "M2", nominalDiameter: 0.002, pitch: 0.0004, stressArea: 2.07e-6, stressAreaSource: "gb-t-16823-1" },
+  "M2.5": { size: "M2.5", nominalDiameter: 0.0025, pitch: 0.00045, stressArea: 3.39e-6, stressAreaSource: "gb-t-16823-1" },
+  M3: { size: "M3", nominalDiameter: 0.003, pitch: 0.0005, stressArea: 5.03e-6, stressAreaSource: "iso-898-1" },
+  M4: { size: "M4", nominalDiameter: 0.004, pitch: 0.0007, stressArea: 8.78e-6, stressAreaSource: "iso-898-1" },
+  M5: { size: "M5", nominalDiameter: 0.005, pitch: 0.0008, stressArea: 14.2e-6, stressAreaSource: "iso-898-1" },
+  M6: { size: "M6", nominalDiameter: 0.006, pitch: 0.001, stressArea: 20.1e-6, stressAreaSource: "iso-898-1" },
+  M8: { size: "M8", nominalDiameter: 0.008, pitch: 0.00125, stressArea: 36.6e-6, stressAreaSource: "iso-898-1" },
+  M10: { size: "M10", nominalDiameter: 0.01, pitch: 0.0015, stressArea: 58.0e-6, stressAreaSource: "iso-898-1" },
+  M12: { size: "M12", nominalDiameter: 0.012, pitch: 0.00175, stressArea: 84.3e-6, stressAreaSource: "iso-898-1" },
+};
+
+/** The thread of a size, after checking the size is one of `THREAD_SIZE_OPTIONS` (param "size"). */
+export function metricThread(size: string, param = "size"): MetricThread {
+  return METRIC_COARSE_THREADS[requireChoice(param, size, THREAD_SIZE_OPTIONS)];
+}
+
+export interface ThreadDiameters {
+  /** H, height of the fundamental triangle, (√3/2)·P [m]. */
+  fundamentalTriangleHeight: number;
+  /** d₂, basic pitch diameter, d − (3/4)·H = d − 0.649 519 P [m]. */
+  pitchDiameter: number;
+  /** d₁, basic minor diameter, d − (5/4)·H = d − 1.082 532 P [m]. */
+  minorDiameter: number;
+  /** d₃ = d₁ − H/6 = d − 1.226 869 P, the diameter used for the stress area [m]. */
+  stressDiameterD3: number;
+}
+
+/**
+ * Basic diameters of an ISO metric thread from its nominal diameter and pitch (iso-68-1 basic
+ * profile; iso-724 basic dimensions; d₃ as iso-898-1 defines it for the stress area).
+ *
+ * Formula: $H = \tfrac{\sqrt3}{2}P,\quad d_2 = d - \tfrac34 H,\quad d_1 = d - \tfrac54 H,\quad d_3 = d_1 - \tfrac{H}{6}$
+ *
+ * @param nominalDiameter d, basic major diameter [m], greater than 0
+ * @param pitch P [m], greater than 0 and less than d/1.3 (so that d₃ stays positive)
+ * @returns H, d₂, d₁, d₃ [m]
+ *
+ * Example: M4 × 0.7 → d₂ = 3.545 34 mm, d₁ = 3.242 23 mm, d₃ = 3.141 19 mm.
+ * Sources: iso-68-1, iso-724, iso-898-1.
+ */
+export function threadDiameters({ nominalDiameter, pitch }: { nominalDiameter: number; pitch: number }): ThreadDiameters {
+  requirePositive("nominalDiameter", nominalDiameter, "m");
+  requirePositive("pitch", pitch, "m");
+  if (!(pitch < nominalDiameter / 1.3)) {
+    const limit = Number((nominalDiameter / 1.3).toPrecision(4));
+    throw new CalcInputError({ param: "pitch", value: pitch, expected: `less than the nominal diameter ÷ 1.3, ${limit} m`, unit: "m" });
+  }
+  const fundamentalTriangleHeight = (Math.sqrt(3) / 2) * pitch; // iso-68-1
+  const pitchDiameter = nominalDiameter - 0.75 * fundamentalTriangleHeight; // iso-724
+  const minorDiameter = nominalDiameter - 1.25 * fundamentalTriangleHeight; // iso-724
+  const stressDiameterD3 = minorDiameter - fundamentalTriangleHeight / 6; // iso-898-1
+  return { fundamentalTriangleHeight, pitchDiameter, minorDiameter, stressDiameterD3 };
+}
+
+/**
+ * Tensile stress area of an ISO metric thread from its geometry (iso-898-1): the area of a circle
+ * whose diameter is the mean of the pitch diameter d₂ and d₃.
+ *
+ * Formula: $A_s = \dfrac{\pi}{4}\left(\dfrac{d_2 + d_3}{2}\right)^2 = \dfrac{\pi}{4}\,(d - 0.938\,194\,P)^2$
+ *
+ * @param nominalDiameter d [m], greater than 0
+ * @param pitch P [m], greater than 0 and less than d/1.3
+ * @returns A_s [m²]
+ *
+ * Assumptions: basic (zero-tolerance) thread profile; that is what the standard's table is built
+ * on. Example: M4 × 0.7 → 8.778 72 mm² (table: 8.78 mm²); M2 × 0.4 → 2.073 23 mm² (table: 2.07).
+ * Sources: iso-898-1, iso-724, iso-68-1.
+ */
+export function tensileStressArea({ nominalDiameter, pitch }: { nominalDiameter: number; pitch: number }): number {
+  const { pitchDiameter, stressDiameterD3 } = threadDiameters({ nominalDiameter, pitch });
+  const mean = (pitchDiameter + stressDiameterD3) / 2;
+  return (Math.PI / 4) * mean * mean; // iso-898-1
+}
+
+// ---------------------------------------------------------------------------------------------
+// Property classes.
+
+/** Steel property classes of ISO 898-1 this module knows. */
+export const PROPERTY_CLASS_OPTIONS = [
+  { value: "4.6", label: "4.6 (low-carbon steel)" },
+  { value: "8.8", label: "8.8 (quenched and tempered)" },
+  { value: "10.9", label: "10.9 (quenched and tempered)" },
+  { value: "12.9", label: "12.9 (alloy steel, quenched and tempered)" },
+] as const satisfies readonly ChoiceOption[];
+
+export type PropertyClassId = (typeof PROPERTY_CLASS_OPTIONS)[number]["value"];
+
+export interface PropertyClass {
+  id: PropertyClassId;
+  /** R_m,nom, nominal tensile strength, (first number) × 100 MPa [Pa]. */
+  tensileStrengthNominal: number;
+  /** R_m,min, minimum tensile strength [Pa]. */
+  tensileStrengthMin: number;
+  /** Nominal yield: R_eL for 4.6, R_p0.2 for the others [Pa]. */
+  yieldStrengthNominal: number;
+  /** Minimum yield: R_eL,min for 4.6, R_p0.2,min for the others [Pa]. */
+  yieldStrengthMin: number;
+  /** Which yield the standard specifies: lower yield strength, or stress at 0.2 % non-proportional elongation. */
+  yieldKind: "ReL" | "Rp0.2";
+  /** S_p, stress under proof load, tested on the whole bolt [Pa]. */
+  proofStress: number;
+  /** Scope of the row, where the standard splits a class by diameter. */
+  note: string;
+}
+
+/**
+ * ISO 898-1 Table 3 rows for 4.6, 8.8 (d ≤ 16 mm), 10.9 and 12.9 (iso-898-1). The checks in
+ * calc/loads.ts use the minimum values: a bolt of the class is only guaranteed to reach those.
+ */
+export const PROPERTY_CLASSES: Readonly<Record<PropertyClassId, PropertyClass>> = {
+  "4.6": {
+    id: "4.6",
+    tensileStrengthNominal: 400e6,
+    tensileStrengthMin: 400e6,
+    yieldStrengthNominal: 240e6,
+    yieldStrengthMin: 240e6,
+    yieldKind: "ReL",
+    proofStress: 225e6,
+    note: "all diameters",
+  },
+  "8.8": {
+    id: "8.8",
+    tensileStrengthNominal: 800e6,
+    tensileStrengthMin: 800e6,
+    yieldStrengthNominal: 640e6,
+    yieldStrengthMin: 640e6,
+    yieldKind: "Rp0.2",
+    proofStress: 580e6,
+    note: "row for d ≤ 16 mm (every size in THREAD_SIZE_OPTIONS)",
+  },
+  "10.9": {
+    id: "10.9",
+    tensileStrengthNominal: 1000e6,
+    tensileStrengthMin: 1040e6,
+    yieldStrengthNominal: 900e6,
+    yieldStrengthMin: 940e6,
+    yieldKind: "Rp0.2",
+    proofStress: 830e6,
+    note: "all diameters",
+  },
+  "12.9": {
+    id: "12.9",
+    tensileStrengthNominal: 1200e6,
+    tensileStrengthMin: 1220e6,
+    yieldStrengthNominal: 1080e6,
+    yieldStrengthMin: 1100e6,
+    yieldKind: "Rp0.2",
+    proofStress: 970e6,
+    note: "all diameters",
+  },
+};
+
+/** The class's table row, after checking it is one of `PROPERTY_CLASS_OPTIONS` (param "propertyClass"). */
+export function propertyClass(id: string, param = "propertyClass"): PropertyClass {
+  return PROPERTY_CLASSES[requireChoice(param, id, PROPERTY_CLASS_OPTIONS)];
+}
+
+/**
+ * Minimum ultimate tensile load of a bolt: the tabulated stress area times the class's minimum
+ * tensile strength (iso-898-1, Table 4 is built this way).
+ *
+ * Formula: $F_{m,min} = A_{s,nom}\,R_{m,min}$
+ *
+ * @param size a value of `THREAD_SIZE_OPTIONS`
+ * @param propertyClass a value of `PROPERTY_CLASS_OPTIONS`
+ * @returns F_m,min [N]
+ *
+ * Example: M6, 8.8 → 20.1 mm² × 800 MPa = 16 080 N (table: 16 100 N). Sources: iso-898-1.
+ */
+export function minimumUltimateTensileLoad({ size, propertyClass: classId }: { size: string; propertyClass: string }): number {
+  return metricThread(size).stressArea * propertyClass(classId).tensileStrengthMin; // iso-898-1
+}
+
+/**
+ * Proof load of a bolt: tabulated stress area times the class's proof stress, the load a whole bolt
+ * must carry without measurable permanent stretch (iso-898-1).
+ *
+ * Formula: $F_p = A_{s,nom}\,S_p$
+ *
+ * @param size a value of `THREAD_SIZE_OPTIONS`
+ * @param propertyClass a value of `PROPERTY_CLASS_OPTIONS`
+ * @returns F_p [N]
+ *
+ * Example: M4, 8.8 → 8.78 mm² × 580 MPa = 5092 N (table: 5100 N). Sources: iso-898-1.
+ */
+export function proofLoad({ size, propertyClass: classId }: { size: string; propertyClass: string }): number {
+  return metricThread(size).stressArea * propertyClass(classId).proofStress; // iso-898-1
+}
+
+// ---------------------------------------------------------------------------------------------
+// Eurocode 3 design resistances (a cross-check and a reference point for the shear ratio).
+
+/**
+ * EN 1993-1-8 Table 3.4 shear factor α_v for a shear plane through the thread. 12.9 is outside the
+ * classes Eurocode 3 covers, so it has no value here (null).
+ */
+export const EN1993_THREAD_SHEAR_FACTOR: Readonly<Record<PropertyClassId, number | null>> = {
+  "4.6": 0.6,
+  "8.8": 0.6,
+  "10.9": 0.5,
+  "12.9": null,
+};
+
+/** γ_M2, the partial factor EN 1993-1-8 recommends for bolt resistance (§2.2). */
+export const EN1993_GAMMA_M2 = 1.25;
+
+/**
+ * Design shear resistance of one bolt per shear plane (en-1993-1-8, Table 3.4).
+ *
+ * Formula: $F_{v,Rd} = \dfrac{\alpha_v\,f_{ub}\,A}{\gamma_{M2}}$
+ *
+ * @param area A: A_s when the shear plane passes through the thread, the shank area otherwise [m²], greater than 0
+ * @param ultimateStrength f_ub, the bolt's nominal ultimate strength [Pa], greater than 0
+ * @param shearFactor α_v [-], greater than 0 and at most 1 (0.6 or 0.5 in the code)
+ * @param partialFactor γ_M2 [-], at least 1 (1.25 recommended)
+ * @returns F_v,Rd [N]
+ *
+ * Assumptions: a structural design value, with the partial factor built in; the loads module's
+ * safety factors are reported against the unfactored strength instead. Example: class 4.6, M20
+ * (A_s 245 mm²): 0.6 × 400 MPa × 245 mm² / 1.25 = 47.04 kN. Sources: en-1993-1-8.
+ */
+export function eurocodeBoltShearResistance({
+  area,
+  ultimateStrength,
+  shearFactor,
+  partialFactor = EN1993_GAMMA_M2,
+}: {
+  area: number;
+  ultimateStrength: number;
+  shearFactor: number;
+  partialFactor?: number;
+}): number {
+  requirePositive("area", area, "m²");
+  requirePositive("ultimateStrength", ultimateStrength, "Pa");
+  requireInRange("shearFactor", shearFactor, "", { min: 0, max: 1, minOpen: true });
+  requireInRange("partialFactor", partialFactor, "", { min: 1, max: 10 });
+  return (shearFactor * ultimateStrength * area) / partialFactor; // en-1993-1-8 Table 3.4
+}
+
+/**
+ * Design tension resistance of one bolt (en-1993-1-8, Table 3.4).
+ *
+ * Formula: $F_{t,Rd} = \dfrac{k_2\,f_{ub}\,A_s}{\gamma_{M2}}$
+ *
+ * @param stressArea A_s [m²], greater than 0
+ * @param ultimateStrength f_ub [Pa], greater than 0
+ * @param k2 [-], 0.9 for ordinary heads, 0.63 for countersunk bolts; greater than 0 and at most 1
+ * @param partialFactor γ_M2 [-], at least 1 (1.25 recommended)
+ * @returns F_t,Rd [N]
+ *
+ * Example: class 4.6, M20: 0.9 × 400 MPa × 245 mm² / 1.25 = 70.56 kN. Sources: en-1993-1-8.
+ */
+export function eurocodeBoltTensionResistance({
+  stressArea,
+  ultimateStrength,
+  k2 = 0.9,
+  partialFactor = EN1993_GAMMA_M2,
+}: {
+  stressArea: number;
+  ultimateStrength: number;
+  k2?: number;
+  partialFactor?: number;
+}): number {
+  requirePositive("stressArea", stressArea, "m²");
+  requirePositive("ultimateStrength", ultimateStrength, "Pa");
+  requireInRange("k2", k2, "", { min: 0, max: 1, minOpen: true });
+  requireInRange("partialFactor", partialFactor, "", { min: 1, max: 10 });
+  return (k2 * ultimateStrength * stressArea) / partialFactor; // en-1993-1-8 Table 3.4
+}
+
+/** Source keys this module relies on (checked by the meta test). */
+export const FASTENERS_SOURCES: readonly SourceKey[] = ["iso-898-1", "iso-261", "iso-68-1", "iso-724", "gb-t-16823-1", "en-1993-1-8"];

@@ -1,0 +1,252 @@
+/**
+ * Materials: a small table of room-temperature properties for the metals and plastics a spinning
+ * robot is commonly built from, each row with its condition (heat treatment decides most of a
+ * steel's strength), its source and how sure we are of each value. SI units: kg/m³, Pa, [-].
+ *
+ * Where a source gives a range, the single design value is the LOW end of the range (the
+ * conservative choice for strength) and the range is kept beside it.
+ */
+import type { SourceKey } from "./sources.ts";
+
+/** The numeric properties a row carries. */
+export type MaterialProperty = "density" | "yieldStrength" | "ultimateStrength" | "youngsModulus" | "poissonRatio";
+
+/**
+ * How well a row's strength and density values are backed:
+ * - "confirmed": seen in a retrieved copy of the named source;
+ * - "confirmed-secondary": seen only in a secondary reproduction of the named table;
+ * - "partly-from-memory": some values (listed in `fromMemory`) were not confirmed in a retrieved text.
+ */
+export type MaterialStatus = "confirmed" | "confirmed-secondary" | "partly-from-memory";
+
+export interface Material {
+  /** Short stable id, also used in URLs. */
+  id: string;
+  /** Material name, e.g. "AISI 4130 steel". */
+  name: string;
+  /** Heat treatment or form the numbers belong to. */
+  condition: string;
+  /** Whether strengths are typical values or specified minimums. */
+  basis: "typical" | "minimum";
+  /** ρ, mass density [kg/m³]. */
+  density: number;
+  /** Yield strength or 0.2 % proof stress (for polymers, the tensile yield) [Pa]; low end of `yieldStrengthRange` when given. */
+  yieldStrength: number;
+  /** Ultimate tensile strength [Pa]; low end of `ultimateStrengthRange` when given. */
+  ultimateStrength: number;
+  /** The range the source gives for yield, [low, high] [Pa]. */
+  yieldStrengthRange?: readonly [number, number];
+  /** The range the source gives for ultimate strength, [low, high] [Pa]. */
+  ultimateStrengthRange?: readonly [number, number];
+  /** E, Young's modulus [Pa]. */
+  youngsModulus: number;
+  /** ν, Poisson's ratio [-]. */
+  poissonRatio: number;
+  /** Bibliography key of the density and strength values. */
+  source: SourceKey;
+  /** Where in that source (data sheet, table, row). */
+  locator: string;
+  /** Further sources used for some of the values (density, elastic constants). */
+  otherSources: readonly SourceKey[];
+  /** How the density and strength values are backed. */
+  status: MaterialStatus;
+  /** Values that are FROM MEMORY, UNCONFIRMED: believed right, not seen in a retrieved text. */
+  fromMemory: readonly MaterialProperty[];
+  /** One sentence on use or caveats. */
+  note: string;
+}
+
+const MPa = 1e6;
+const GPa = 1e9;
+const G_PER_CM3 = 1000;
+
+/**
+ * The material table (see /work/shared/references.md §9 for the quotes behind each row).
+ * Sources: substech-materials, asm-matweb-datasheets, s7-nominal-properties-table,
+ * callister-integrated-3e, matweb-polymer-overview.
+ */
+export const MATERIALS = {
+  "al-6061-t6": {
+    id: "al-6061-t6",
+    name: "Aluminium alloy 6061",
+    condition: "T6 / T651",
+    basis: "typical",
+    density: 2.7 * G_PER_CM3,
+    yieldStrength: 276 * MPa,
+    ultimateStrength: 310 * MPa,
+    youngsModulus: 68.9 * GPa,
+    poissonRatio: 0.33,
+    source: "substech-materials",
+    locator: "6061, T6/T651: yield 276 MPa, tensile 310 MPa, density 2.70 g/cm³; E = 68.9 GPa and ν = 0.33 from the ASM/MatWeb 6061-T6 data sheet",
+    otherSources: ["asm-matweb-datasheets"],
+    status: "confirmed",
+    fromMemory: [],
+    note: "Typical values; the specified minimums (about 240/290 MPa) are lower, so design on those when it matters.",
+  },
+  "steel-4130-normalized": {
+    id: "steel-4130-normalized",
+    name: "AISI 4130 steel",
+    condition: "normalized at 870 °C",
+    basis: "typical",
+    density: 7.85 * G_PER_CM3,
+    yieldStrength: 435 * MPa,
+    ultimateStrength: 670 * MPa,
+    youngsModulus: 205 * GPa,
+    poissonRatio: 0.29,
+    source: "asm-matweb-datasheets",
+    locator: "AISI 4130 steel, normalized at 870 °C (data sheet M4130R); E and ν 'typical for steel'",
+    otherSources: [],
+    status: "confirmed",
+    fromMemory: [],
+    note: "Strength depends strongly on heat treatment; quote the condition with the numbers.",
+  },
+  "steel-4130-annealed": {
+    id: "steel-4130-annealed",
+    name: "AISI 4130 steel",
+    condition: "annealed at 865 °C",
+    basis: "typical",
+    density: 7.85 * G_PER_CM3,
+    yieldStrength: 460 * MPa,
+    ultimateStrength: 560 * MPa,
+    youngsModulus: 205 * GPa,
+    poissonRatio: 0.29,
+    source: "asm-matweb-datasheets",
+    locator: "AISI 4130 steel, annealed at 865 °C (data sheet M4130A); E and ν 'typical for steel'",
+    otherSources: [],
+    status: "confirmed",
+    fromMemory: [],
+    note: "As printed, the annealed yield (460 MPa) exceeds the normalized yield (435 MPa); both are the data sheets' typical values.",
+  },
+  "steel-4340-annealed": {
+    id: "steel-4340-annealed",
+    name: "AISI 4340 steel",
+    condition: "annealed",
+    basis: "typical",
+    density: 7.85 * G_PER_CM3,
+    yieldStrength: 470 * MPa,
+    ultimateStrength: 745 * MPa,
+    youngsModulus: 205 * GPa,
+    poissonRatio: 0.29,
+    source: "asm-matweb-datasheets",
+    locator: "AISI 4340 steel, annealed (data sheet M434AA); E and ν 'typical for steel'",
+    otherSources: [],
+    status: "confirmed",
+    fromMemory: [],
+    note: "Soft condition, as bought before hardening.",
+  },
+  "steel-4340-normalized": {
+    id: "steel-4340-normalized",
+    name: "AISI 4340 steel",
+    condition: "normalized (100 mm round)",
+    basis: "typical",
+    density: 7.85 * G_PER_CM3,
+    yieldStrength: 710 * MPa,
+    ultimateStrength: 1110 * MPa,
+    youngsModulus: 205 * GPa,
+    poissonRatio: 0.29,
+    source: "asm-matweb-datasheets",
+    locator: "AISI 4340 steel, normalized, 100 mm round (data sheet M434AE); E and ν 'typical for steel'",
+    otherSources: [],
+    status: "confirmed",
+    fromMemory: [],
+    note: "Section size matters: the data sheet is for a 100 mm round.",
+  },
+  "steel-4340-qt650": {
+    id: "steel-4340-qt650",
+    name: "AISI 4340 steel",
+    condition: "oil quenched from 800 °C, tempered at 650 °C (50 mm round)",
+    basis: "typical",
+    density: 7.85 * G_PER_CM3,
+    yieldStrength: 834 * MPa,
+    ultimateStrength: 931 * MPa,
+    youngsModulus: 205 * GPa,
+    poissonRatio: 0.29,
+    source: "asm-matweb-datasheets",
+    locator: "AISI 4340 steel, oil quenched 800 °C, 650 °C temper, 50 mm round (data sheet M434AP); E and ν 'typical for steel'",
+    otherSources: [],
+    status: "confirmed",
+    fromMemory: [],
+    note: "A high temper: tough rather than hard. Lower tempering temperatures give far higher strength.",
+  },
+  "tool-steel-s7-t205": {
+    id: "tool-steel-s7-t205",
+    name: "AISI S7 shock-resisting tool steel",
+    condition: "fan-cooled from 940 °C, tempered at 205 °C (58 HRC)",
+    basis: "typical",
+    density: 7.76 * G_PER_CM3,
+    yieldStrength: 1450 * MPa,
+    ultimateStrength: 2170 * MPa,
+    youngsModulus: 205 * GPa,
+    poissonRatio: 0.29,
+    source: "s7-nominal-properties-table",
+    locator: "row 'S7 205°C (400°F) 2170 (315) 1450 (210) 7.0 20 58'; density 7.76 g/cm³",
+    otherSources: [],
+    status: "partly-from-memory",
+    fromMemory: ["youngsModulus", "poissonRatio"],
+    note: "Nominal values from a secondary copy of the table. E and ν are taken as the typical steel values (205 GPa, 0.29), not read from an S7 source.",
+  },
+  "ti-6al-4v-annealed": {
+    id: "ti-6al-4v-annealed",
+    name: "Titanium alloy Ti-6Al-4V (Grade 5)",
+    condition: "annealed bar",
+    basis: "typical",
+    density: 4.43 * G_PER_CM3,
+    yieldStrength: 830 * MPa,
+    ultimateStrength: 900 * MPa,
+    youngsModulus: 114 * GPa,
+    poissonRatio: 0.33,
+    source: "asm-matweb-datasheets",
+    locator: "Ti-6Al-4V (Grade 5), annealed (data sheet MTP644): density 4.43 g/cc, UTS 900 MPa, yield 830 MPa, E 114 GPa, ν 0.33",
+    otherSources: [],
+    status: "confirmed",
+    fromMemory: [],
+    note: "Typical values; the specified minimums (ASTM B348/B265 Grade 5) are about 828/897 MPa.",
+  },
+  "uhmw-pe": {
+    id: "uhmw-pe",
+    name: "Ultra-high-molecular-weight polyethylene (UHMW-PE)",
+    condition: "as supplied (sheet or bar)",
+    basis: "typical",
+    density: 0.94 * G_PER_CM3,
+    yieldStrength: 21.4 * MPa,
+    ultimateStrength: 38.6 * MPa,
+    yieldStrengthRange: [21.4 * MPa, 27.6 * MPa],
+    ultimateStrengthRange: [38.6 * MPa, 48.3 * MPa],
+    youngsModulus: 0.69 * GPa,
+    poissonRatio: 0.46,
+    source: "callister-integrated-3e",
+    locator: "App. B: Table B.1 density 0.94 g/cm³ and Table B.2 E = 0.69 GPa (both confirmed); Table B.4 yield 21.4–27.6 MPa and tensile 38.6–48.3 MPa; ν ≈ 0.46",
+    otherSources: [],
+    status: "partly-from-memory",
+    fromMemory: ["yieldStrength", "ultimateStrength", "poissonRatio"],
+    note: "Density and modulus are confirmed; the strengths and ν are from memory and vary with grade and temperature.",
+  },
+  polycarbonate: {
+    id: "polycarbonate",
+    name: "Polycarbonate (PC)",
+    condition: "molded / extruded sheet",
+    basis: "typical",
+    density: 1.2 * G_PER_CM3,
+    yieldStrength: 62.1 * MPa,
+    ultimateStrength: 62.8 * MPa,
+    ultimateStrengthRange: [62.8 * MPa, 72.4 * MPa],
+    youngsModulus: 2.38 * GPa,
+    poissonRatio: 0.36,
+    source: "callister-integrated-3e",
+    locator: "App. B: Table B.5 yield 62.1 MPa and Table B.2 E = 2.38 GPa (both confirmed); Table B.4 tensile 62.8–72.4 MPa; Table B.3 ν ≈ 0.36; density 1.20 g/cc from the MatWeb polycarbonate overview",
+    otherSources: ["matweb-polymer-overview"],
+    status: "partly-from-memory",
+    fromMemory: ["ultimateStrength", "poissonRatio"],
+    note: "Density, yield and modulus are confirmed; the tensile range and ν are from memory.",
+  },
+} as const satisfies Record<string, Material>;
+
+export type MaterialId = keyof typeof MATERIALS;
+
+/** The material ids in table order. */
+export const MATERIAL_IDS = Object.keys(MATERIALS) as readonly MaterialId[];
+
+/** True when `id` names a row of `MATERIALS`. */
+export function isMaterialId(id: string): id is MaterialId {
+  return Object.prototype.hasOwnProperty.call(MATERIALS, id);
+}

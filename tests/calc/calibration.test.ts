@@ -1,0 +1,426 @@
+import { describe, expect, it } from "vitest";
+import fc from "fast-check";
+import { errorFunction, linearRegression, rSquared } from "simple-statistics";
+// @ts-expect-error: the package ships no type declarations
+import { TheilSenRegression } from "ml-regression-theil-sen";
+import { CalcInputError, isSourceKey, rpmToRadPerSecond, STANDARD_GRAVITY } from "#calc";
+import {
+  calibrationCurve,
+  decodeCalibrationRows,
+  encodeCalibrationRows,
+  fitCalibration,
+  fitStraightLine,
+  logGamma,
+  normalCdf,
+  normalQuantile,
+  studentTCdf,
+  studentTQuantile,
+  type CalibrationRow,
+} from "../../calc/calibration.ts";
+import { readFileSync } from "node:fs";
+
+/** mulberry32, then Box–Muller: a seeded source of normal deviates for the Monte Carlo checks. */
+function normalSource(seed: number): () => number {
+  let s = seed;
+  const uniform = () => {
+    s = (s + 0x6d2b79f5) | 0;
+    let t = Math.imul(s ^ (s >>> 15), 1 | s);
+    t = (t + Math.imul(t ^ (t >>> 7), 61 | t)) ^ t;
+    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
+  };
+  return () => Math.sqrt(-2 * Math.log(1 - uniform())) * Math.cos(2 * Math.PI * uniform());
+}
+
+// Anscombe (1973), data sets I–IV. Values CONFIRMED in the Oxford Index entry "Anscombe's
+// regression data" (Upton & Cook, A Dictionary of Statistics) and in the scipython.com copy.
+const ANSCOMBE_X = [10, 8, 13, 9, 11, 14, 6, 4, 12, 7, 5];
+const ANSCOMBE_Y1 = [8.04, 6.95, 7.58, 8.81, 8.33, 9.96, 7.24, 4.26, 10.84, 4.82, 5.68];
+const ANSCOMBE_Y2 = [9.14, 8.14, 8.74, 8.77, 9.26, 8.1, 6.13, 3.1, 9.13, 7.26, 4.74];
+const ANSCOMBE_Y3 = [7.46, 6.77, 12.74, 7.11, 7.81, 8.84, 6.08, 5.39, 8.15, 6.42, 5.73];
+const ANSCOMBE_X4 = [8, 8, 8, 8, 8, 8, 8, 19, 8, 8, 8];
+const ANSCOMBE_Y4 = [6.58, 5.76, 7.71, 8.84, 8.47, 7.04, 5.25, 12.5, 5.56, 7.91, 6.89];
+
+describe("straight-line fit: reference cases", () => {
+  const fitI = fitStraightLine({ x: ANSCOMBE_X, y: ANSCOMBE_Y1 });
+  const fitII = fitStraightLine({ x: ANSCOMBE_X, y: ANSCOMBE_Y2 });
+  const fitIII = fitStraightLine({ x: ANSCOMBE_X, y: ANSCOMBE_Y3 });
+  const cases = [
+    { source: "anscombe-1973", locator: "data set I: slope 0.500 (3 decimals, as quoted in Wikipedia's table)", got: fitI.leastSquares.slope, expected: 0.5, rtol: 0.0005 / 0.5, note: "half a unit in the last printed digit" },
+    { source: "anscombe-1973", locator: "data set I: intercept 3.00 (2 decimals)", got: fitI.leastSquares.intercept, expected: 3.0, rtol: 0.005 / 3, note: "half a unit in the last printed digit" },
+    { source: "anscombe-1973", locator: "data set I: R² 0.67 (2 decimals)", got: fitI.leastSquares.rSquared!, expected: 0.67, rtol: 0.005 / 0.67, note: "half a unit in the last printed digit" },
+    { source: "anscombe-1973", locator: "data set I: correlation 0.816 (3 decimals)", got: Math.sqrt(fitI.leastSquares.rSquared!), expected: 0.816, rtol: 0.0005 / 0.816, note: "half a unit in the last printed digit" },
+    { source: "anscombe-1973", locator: "data set II: the same line, slope 0.500", got: fitII.leastSquares.slope, expected: 0.5, rtol: 0.0005 / 0.5, note: "half a unit in the last printed digit" },
+    { source: "anscombe-1973", locator: "data set III: the same line, intercept 3.00", got: fitIII.leastSquares.intercept, expected: 3.0, rtol: 0.005 / 3, note: "half a unit in the last printed digit" },
+    { source: "anscombe-1973 (FROM MEMORY, unconfirmed)", locator: "data set I: estimated standard error of the slope 0.118", got: fitI.leastSquares.slopeStdError, expected: 0.118, rtol: 0.0005 / 0.118, note: "from memory of the paper's table" },
+  ];
+  it.each(cases)("$source — $locator", ({ got, expected, rtol }) => {
+    expect(Math.abs(got - expected)).toBeLessThanOrEqual(rtol * Math.abs(expected));
+  });
+
+  it("anscombe-1973 data set III: flags the one point off the line (13, 12.74), which the other ten follow to 0.01", () => {
+    expect(fitIII.spikes.flagged).toEqual([2]);
+    expect(fitIII.leastSquaresWithoutSpikes!.residuals.every((r) => Math.abs(r) < 0.01)).toBe(true);
+    expect(fitI.spikes.flagged).toEqual([]);
+  });
+
+  it("anscombe-1973 data set IV: refuses it, since its x takes only two values", () => {
+    const call = () => fitStraightLine({ x: ANSCOMBE_X4, y: ANSCOMBE_Y4 });
+    expect(call).toThrow(CalcInputError);
+    expect(call).toThrow("x must be at least 3 different values (got 2)");
+  });
+});
+
+describe("Student t and normal distributions", () => {
+  const tCases = [
+    { source: "DERIVED-EXACT (ν = 1 is the Cauchy law, abramowitz-stegun-1964 §26.7)", locator: "t₀.₉₇₅,₁ = tan(0.475π)", inputs: { probability: 0.975, degreesOfFreedom: 1 }, expected: Math.tan(0.475 * Math.PI), rtol: 1e-9, note: "bisection on the incomplete beta function" },
+    { source: "DERIVED-EXACT (ν = 2: F(t) = ½ + t/(2√(2 + t²)))", locator: "t₀.₉₇₅,₂ = 0.95·√(2/0.0975)", inputs: { probability: 0.975, degreesOfFreedom: 2 }, expected: 0.95 * Math.sqrt(2 / 0.0975), rtol: 1e-9, note: "" },
+    { source: "DERIVED-EXACT (ν = 2)", locator: "t₀.₉₉₅,₂", inputs: { probability: 0.995, degreesOfFreedom: 2 }, expected: (2 * 0.995 - 1) / Math.sqrt(2 * 0.995 * 0.005), rtol: 1e-9, note: "" },
+    { source: "t table (FROM MEMORY)", locator: "t₀.₉₇₅ with 4 d.f. = 2.776", inputs: { probability: 0.975, degreesOfFreedom: 4 }, expected: 2.776, rtol: 0.0005 / 2.776, note: "printed to 3 decimals" },
+    { source: "t table (FROM MEMORY)", locator: "t₀.₉₇₅ with 9 d.f. = 2.262", inputs: { probability: 0.975, degreesOfFreedom: 9 }, expected: 2.262, rtol: 0.0005 / 2.262, note: "printed to 3 decimals" },
+    { source: "t table (FROM MEMORY)", locator: "t₀.₉₇₅ with 10 d.f. = 2.228", inputs: { probability: 0.975, degreesOfFreedom: 10 }, expected: 2.228, rtol: 0.0005 / 2.228, note: "printed to 3 decimals" },
+    { source: "t table (FROM MEMORY)", locator: "t₀.₉₇₅ with 30 d.f. = 2.042", inputs: { probability: 0.975, degreesOfFreedom: 30 }, expected: 2.042, rtol: 0.0005 / 2.042, note: "printed to 3 decimals" },
+    { source: "t table (FROM MEMORY)", locator: "t₀.₉₅ with 5 d.f. = 2.015", inputs: { probability: 0.95, degreesOfFreedom: 5 }, expected: 2.015, rtol: 0.0005 / 2.015, note: "printed to 3 decimals" },
+  ];
+  it.each(tCases)("$source — $locator", ({ inputs, expected, rtol }) => {
+    expect(Math.abs(studentTQuantile(inputs) - expected)).toBeLessThanOrEqual(rtol * expected);
+  });
+
+  it("inverts its own distribution function and is odd about p = ½", () => {
+    fc.assert(
+      fc.property(fc.double({ min: 0.001, max: 0.999, noNaN: true }), fc.double({ min: 0.5, max: 200, noNaN: true }), (p, nu) => {
+        const t = studentTQuantile({ probability: p, degreesOfFreedom: nu });
+        const back = studentTCdf({ t, degreesOfFreedom: nu });
+        const mirror = studentTQuantile({ probability: 1 - p, degreesOfFreedom: nu });
+        return Math.abs(back - p) <= 1e-10 && Math.abs(t + mirror) <= 1e-9 * Math.max(1, Math.abs(t));
+      }),
+      { numRuns: 80 },
+    );
+  });
+
+  it("tends to the normal quantile as the degrees of freedom grow", () => {
+    const z = normalQuantile({ probability: 0.975 });
+    const t = studentTQuantile({ probability: 0.975, degreesOfFreedom: 1e6 });
+    // first Cornish–Fisher term: t ≈ z + (z³ + z)/(4ν)
+    expect(t - z).toBeCloseTo((z ** 3 + z) / 4e6, 8);
+  });
+
+  it("gives z₀.₉₇₅ = 1.959964 (normal table, FROM MEMORY; 7 significant figures)", () => {
+    expect(Math.abs(normalQuantile({ probability: 0.975 }) - 1.959964)).toBeLessThanOrEqual(5e-7);
+    expect(normalCdf({ z: normalQuantile({ probability: 0.1 }) })).toBeCloseTo(0.1, 14);
+  });
+
+  it("agrees with simple-statistics' error function, within that function's stated 1.2e-7", () => {
+    for (let z = -6; z <= 6; z += 0.25) {
+      expect(Math.abs(normalCdf({ z }) - 0.5 * (1 + errorFunction(z / Math.SQRT2)))).toBeLessThanOrEqual(1.5e-7);
+    }
+  });
+
+  it("computes ln Γ exactly enough at integers and half-integers (Γ(n) = (n − 1)!, Γ(½) = √π)", () => {
+    expect(logGamma(0.5)).toBeCloseTo(0.5 * Math.log(Math.PI), 13);
+    expect(logGamma(5)).toBeCloseTo(Math.log(24), 13);
+    expect(logGamma(11)).toBeCloseTo(Math.log(3628800), 12);
+    expect(logGamma(4.5)).toBeCloseTo(Math.log((105 / 16) * Math.sqrt(Math.PI)), 13);
+    expect(logGamma(0.1)).toBeCloseTo(Math.log(9.513507698668732), 12);
+  });
+
+  it("rejects a probability of 1 by name", () => {
+    expect(() => studentTQuantile({ probability: 1, degreesOfFreedom: 3 })).toThrow("probability must be greater than 0 and less than 1 (got 1)");
+  });
+});
+
+describe("straight-line fit: second methods", () => {
+  const random = normalSource(7);
+  const xs = Array.from({ length: 25 }, (_, i) => 3 + i * 1.7);
+  const ys = xs.map((x) => 0.8 * x - 4 + 0.9 * random());
+
+  it("matches simple-statistics' least squares and R² (1e-12: both centre the sums)", () => {
+    const ours = fitStraightLine({ x: xs, y: ys });
+    const theirs = linearRegression(xs.map((x, i) => [x, ys[i]!]));
+    expect(ours.leastSquares.slope).toBeCloseTo(theirs.m, 12);
+    expect(ours.leastSquares.intercept).toBeCloseTo(theirs.b, 12);
+    const r2 = rSquared(
+      xs.map((x, i) => [x, ys[i]!]),
+      (x: number) => theirs.m * x + theirs.b,
+    );
+    expect(ours.leastSquares.rSquared!).toBeCloseTo(r2, 12);
+  });
+
+  it("matches ml-regression-theil-sen when the counts of slopes and intercepts are odd (7 points, 21 pairs)", () => {
+    const x = [1, 2.5, 3, 4.2, 6, 7.1, 9];
+    const y = [2.1, 3.9, 4.4, 30, 8.2, 9.1, 12.3];
+    const ours = fitStraightLine({ x, y }).theilSen;
+    const theirs = new TheilSenRegression(x, y) as { slope: number; intercept: number };
+    expect(ours.slope).toBeCloseTo(theirs.slope, 12);
+    expect(ours.intercept).toBeCloseTo(theirs.intercept, 12);
+  });
+
+  it("averages the two middle slopes for an even count (that library takes the lower one instead)", () => {
+    const x = [1, 2, 3, 5];
+    const y = [1, 3, 4, 11];
+    const slopes: number[] = [];
+    for (let i = 0; i < 4; i++) for (let j = i + 1; j < 4; j++) slopes.push((y[j]! - y[i]!) / (x[j]! - x[i]!));
+    slopes.sort((a, b) => a - b);
+    expect(fitStraightLine({ x, y }).theilSen.slope).toBeCloseTo((slopes[2]! + slopes[3]!) / 2, 14);
+  });
+
+  it("covers the true slope and intercept about 95 % of the time with its t intervals (Monte Carlo, 400 fits of 6 points)", () => {
+    const noise = normalSource(2024);
+    let slopeHits = 0;
+    let interceptHits = 0;
+    const runs = 400;
+    const x = [1, 2, 4, 5, 7, 10];
+    for (let k = 0; k < runs; k++) {
+      const y = x.map((xi) => 2 * xi + 5 + noise());
+      const ls = fitStraightLine({ x, y }).leastSquares;
+      if (ls.slopeInterval.low <= 2 && 2 <= ls.slopeInterval.high) slopeHits++;
+      if (ls.interceptInterval.low <= 5 && 5 <= ls.interceptInterval.high) interceptHits++;
+    }
+    // binomial standard error √(0.95·0.05/400) = 0.011; allow ±0.04
+    expect(Math.abs(slopeHits / runs - 0.95)).toBeLessThan(0.04);
+    expect(Math.abs(interceptHits / runs - 0.95)).toBeLessThan(0.04);
+  });
+
+  it("covers the true slope roughly 95 % of the time with the Theil–Sen interval (Monte Carlo, 300 fits of 15 points)", () => {
+    const noise = normalSource(99);
+    let hits = 0;
+    const runs = 300;
+    const x = Array.from({ length: 15 }, (_, i) => i + 1);
+    for (let k = 0; k < runs; k++) {
+      const y = x.map((xi) => 0.5 * xi + noise());
+      const ci = fitStraightLine({ x, y }).theilSen.slopeInterval!;
+      if (ci.low <= 0.5 && 0.5 <= ci.high) hits++;
+    }
+    // the interval rests on a normal approximation and interpolated ranks: allow 0.90 to 0.99
+    expect(hits / runs).toBeGreaterThan(0.9);
+    expect(hits / runs).toBeLessThan(0.99);
+  });
+
+  it("takes the Theil–Sen interval's ranks from Gilbert's formula, and gives none for 4 points", () => {
+    const x = Array.from({ length: 12 }, (_, i) => i);
+    const y = x.map((v) => 3 * v + Math.sin(5 * v));
+    const ts = fitStraightLine({ x, y }).theilSen;
+    const n = 12;
+    const nPairs = 66;
+    const c = normalQuantile({ probability: 0.975 }) * Math.sqrt((n * (n - 1) * (2 * n + 5)) / 18);
+    const slopes: number[] = [];
+    for (let i = 0; i < n; i++) for (let j = i + 1; j < n; j++) slopes.push((y[j]! - y[i]!) / (x[j]! - x[i]!));
+    slopes.sort((a, b) => a - b);
+    const at = (rank: number) => slopes[Math.floor(rank) - 1]! + (rank - Math.floor(rank)) * (slopes[Math.floor(rank)]! - slopes[Math.floor(rank) - 1]!);
+    expect(ts.slopeInterval!.low).toBeCloseTo(at((nPairs - c) / 2), 12);
+    expect(ts.slopeInterval!.high).toBeCloseTo(at((nPairs + c) / 2 + 1), 12);
+    const small = fitStraightLine({ x: [1, 2, 3, 4], y: [1, 2, 3.1, 4] }).theilSen;
+    expect(small.slopeInterval).toBeNull();
+    expect(small.intervalNote).toMatch(/too few points/);
+  });
+
+  it("solves Huber's estimating equations Σψ(r/s) = 0 and Σψ(r/s)·x = 0", () => {
+    const y = [...ys];
+    y[4] = y[4]! + 25;
+    const h = fitStraightLine({ x: xs, y }).huber;
+    expect(h.converged).toBe(true);
+    const psi = h.residuals.map((r) => Math.max(-h.tuning, Math.min(h.tuning, r / h.scale)));
+    expect(Math.abs(psi.reduce((a, b) => a + b, 0))).toBeLessThan(1e-8);
+    expect(Math.abs(psi.reduce((a, p, i) => a + p * xs[i]!, 0))).toBeLessThan(1e-8 * Math.max(...xs));
+    expect(h.weights[4]!).toBeLessThan(0.2);
+  });
+
+  it("becomes least squares when the Huber tuning is very wide", () => {
+    const f = fitStraightLine({ x: xs, y: ys, huberTuning: 1e6 });
+    expect(f.huber.slope).toBeCloseTo(f.leastSquares.slope, 12);
+    expect(f.huber.intercept).toBeCloseTo(f.leastSquares.intercept, 11);
+  });
+});
+
+describe("spike flags", () => {
+  it("scales by the mean absolute deviation when more than half the residuals are exactly zero", () => {
+    const x = [1, 2, 3, 4, 5, 6];
+    const y = [3, 5, 7, 9, 11, 23];
+    const f = fitStraightLine({ x, y });
+    expect(f.spikes.scaleFrom).toBe("mean-absolute-deviation");
+    expect(f.spikes.scale).toBeCloseTo(Math.sqrt(Math.PI / 2) * (10 / 6), 12);
+    expect(f.spikes.flagged).toEqual([5]);
+  });
+
+  it("never flags round-off in exact data (resolution floor)", () => {
+    const rows = [300, 700, 1100, 1500, 1900, 2300, 2700].map((rpm) => {
+      const w = rpmToRadPerSecond(rpm);
+      return { angularSpeed: w, acceleration: 0.0127 * w * w + 0.3 * STANDARD_GRAVITY };
+    });
+    const f = fitCalibration(rows);
+    expect(f.spikes.flagged).toEqual([]);
+    expect(f.method).toBe("least-squares");
+  });
+
+  it("cannot flag anything among 3 readings, where a spike is indistinguishable", () => {
+    const f = fitStraightLine({ x: [1, 2, 3], y: [1, 2, 30] });
+    expect(f.spikes.flagged).toEqual([]);
+  });
+
+  it("honours a chosen threshold", () => {
+    const x = [1, 2, 3, 4, 5, 6, 7, 8, 9];
+    const y = [1.1, 1.9, 3.05, 3.98, 5.02, 6.1, 6.95, 8.04, 9.6];
+    const strict = fitStraightLine({ x, y, spikeThreshold: 1 });
+    const loose = fitStraightLine({ x, y, spikeThreshold: 100 });
+    expect(strict.spikes.flagged.length).toBeGreaterThan(0);
+    expect(loose.spikes.flagged).toEqual([]);
+  });
+});
+
+describe("calibration fit", () => {
+  const truth = { radius: 0.0127, bias: 0.3 * STANDARD_GRAVITY };
+  const speeds = [300, 600, 900, 1200, 1500, 1800, 2100, 2400, 2700, 3000].map(rpmToRadPerSecond);
+
+  it("gives back the radius and offset the readings were made from", () => {
+    const rows = speeds.map((w) => ({ angularSpeed: w, acceleration: truth.radius * w * w + truth.bias }));
+    const f = fitCalibration(rows);
+    expect(f.radius).toBeCloseTo(truth.radius, 13);
+    expect(f.bias).toBeCloseTo(truth.bias, 9);
+    expect(f.leastSquares.rSquared).toBeCloseTo(1, 12);
+    expect(f.speedSquared[0]).toBeCloseTo(speeds[0]! ** 2, 9);
+  });
+
+  it("flags a planted 15 g spike among noisy readings and refits without it", () => {
+    const noise = normalSource(31);
+    const rows = speeds.map((w) => ({ angularSpeed: w, acceleration: truth.radius * w * w + truth.bias + 0.2 * STANDARD_GRAVITY * noise() }));
+    rows[6]!.acceleration += 15 * STANDARD_GRAVITY;
+    const f = fitCalibration(rows);
+    expect(f.spikes.flagged).toEqual([6]);
+    expect(f.method).toBe("least-squares-without-spikes");
+    expect(Math.abs(f.radius / truth.radius - 1)).toBeLessThan(0.005);
+    expect(Math.abs(f.leastSquares.slope / truth.radius - 1)).toBeGreaterThan(Math.abs(f.radius / truth.radius - 1));
+  });
+
+  it("falls back to Theil–Sen when fewer than 3 different speeds remain after removing spikes", () => {
+    // four readings each at two speeds on the line a = 2ω², then one spiked reading at each of two more speeds
+    const speedsUsed = [1, 1, 1, 1, 2, 2, 2, 2, 3, 4];
+    const rows = speedsUsed.map((w, i) => ({ angularSpeed: w, acceleration: 2 * w * w + (i >= 8 ? 50 : 0) }));
+    const f = fitCalibration(rows);
+    expect(f.spikes.flagged).toEqual([8, 9]);
+    expect(f.leastSquaresWithoutSpikes).toBeNull();
+    expect(f.method).toBe("theil-sen");
+    expect(f.radius).toBe(2);
+    expect(f.bias).toBe(0);
+  });
+
+  it("needs at least 3 readings at different speeds, and says so", () => {
+    const rows = [
+      { angularSpeed: 100, acceleration: 120 },
+      { angularSpeed: 100, acceleration: 121 },
+      { angularSpeed: 200, acceleration: 480 },
+    ];
+    const call = () => fitCalibration(rows);
+    expect(call).toThrow(CalcInputError);
+    expect(call).toThrow("rows must be at least 3 readings at different speeds (got 2)");
+  });
+
+  it("names the reading that is not a number", () => {
+    const rows = [
+      { angularSpeed: 100, acceleration: 120 },
+      { angularSpeed: 150, acceleration: Number.NaN },
+      { angularSpeed: 200, acceleration: 480 },
+    ];
+    expect(() => fitCalibration(rows)).toThrow("rows[1].acceleration must be a finite number (got not a number)");
+    expect(() => fitCalibration([{ angularSpeed: -1, acceleration: 0 }])).toThrow("rows[0].angularSpeed must be 0 rad/s or more (got -1 rad/s)");
+  });
+
+  it("never returns a non-finite number for valid readings; degenerate ones are refused by name (fast-check)", () => {
+    const row = fc.record({ angularSpeed: fc.double({ min: 0, max: 2000, noNaN: true }), acceleration: fc.double({ min: -1e4, max: 1e5, noNaN: true }) });
+    fc.assert(
+      fc.property(fc.array(row, { minLength: 3, maxLength: 25 }), (rows) => {
+        fc.pre(new Set(rows.map((r) => r.angularSpeed * r.angularSpeed)).size >= 3);
+        let f;
+        try {
+          f = fitCalibration(rows);
+        } catch (e) {
+          // too few different speeds, or speeds so small that ω² underflows: refused by name
+          return e instanceof CalcInputError && e.param === "rows";
+        }
+        const numbers = [f.radius, f.bias, f.leastSquares.slopeStdError, f.leastSquares.tQuantile, f.theilSen.slope, f.huber.slope, f.spikes.scale, ...f.spikes.modifiedZ];
+        return numbers.every(Number.isFinite);
+      }),
+      { numRuns: 100 },
+    );
+  });
+
+  it("draws the fitted curve over a speed range", () => {
+    const rows = speeds.map((w) => ({ angularSpeed: w, acceleration: truth.radius * w * w }));
+    const curve = calibrationCurve({ fit: fitCalibration(rows), lowSpeed: 0, highSpeed: rpmToRadPerSecond(2000), points: 3 });
+    expect(curve).toHaveLength(3);
+    expect(curve[2]!.recommended).toBeCloseTo(0.0127 * rpmToRadPerSecond(2000) ** 2, 8);
+  });
+});
+
+describe("rows as text for a URL", () => {
+  it("writes rpm:g pairs behind a version tag", () => {
+    const rows: CalibrationRow[] = [
+      { angularSpeed: rpmToRadPerSecond(1200), acceleration: 31.5 * STANDARD_GRAVITY },
+      { angularSpeed: rpmToRadPerSecond(1800), acceleration: 70.9 * STANDARD_GRAVITY },
+    ];
+    expect(encodeCalibrationRows(rows)).toBe("v1:1200:31.5,1800:70.9");
+  });
+
+  it("reads back what it writes to six significant figures (fast-check)", () => {
+    const row = fc.record({ angularSpeed: fc.double({ min: 0, max: 5000, noNaN: true }), acceleration: fc.double({ min: -1e4, max: 1e5, noNaN: true }) });
+    fc.assert(
+      fc.property(fc.array(row, { maxLength: 40 }), (rows) => {
+        const back = decodeCalibrationRows(encodeCalibrationRows(rows));
+        if (back.problems.length > 0 || back.rows.length !== rows.length) return false;
+        return back.rows.every((r, i) => {
+          const close = (a: number, b: number) => Math.abs(a - b) <= 5e-6 * Math.abs(b) + 1e-300;
+          return close(r.angularSpeed, rows[i]!.angularSpeed) && close(r.acceleration, rows[i]!.acceleration);
+        });
+      }),
+    );
+  });
+
+  it("reports each bad piece by position and reads the rest", () => {
+    const d = decodeCalibrationRows("v1:1200:31.5,abc,1500:x,-3:2,,1800:70.9");
+    expect(d.rows).toHaveLength(2);
+    expect(d.problems.map((p) => [p.piece, p.reason])).toEqual([
+      [2, "expected speed:acceleration (rpm:g)"],
+      [3, 'acceleration "x" is not a number'],
+      [4, "speed must be 0 or more"],
+      [5, "empty piece"],
+    ]);
+  });
+
+  it("refuses an unknown version and reads untagged text as v1, saying so", () => {
+    expect(decodeCalibrationRows("v9:1:2")).toMatchObject({ version: null, rows: [], problems: [{ piece: 0, reason: "unknown version 9; this reader knows v1" }] });
+    const untagged = decodeCalibrationRows("1200:31.5");
+    expect(untagged.rows).toHaveLength(1);
+    expect(untagged.problems[0]!.reason).toBe("no version tag; read as v1");
+    expect(decodeCalibrationRows("")).toEqual({ version: 1, rows: [], problems: [] });
+  });
+
+  it("never throws on any text (fast-check)", () => {
+    fc.assert(
+      fc.property(fc.oneof(fc.string({ unit: "binary" }), fc.stringMatching(/^(v\d:)?([-\d.e:,x ]{0,30})$/)), (text) => {
+        const d = decodeCalibrationRows(text);
+        return Array.isArray(d.rows) && d.rows.every((r) => Number.isFinite(r.angularSpeed) && Number.isFinite(r.acceleration));
+      }),
+      { numRuns: 300 },
+    );
+  });
+});
+
+describe("source keys", () => {
+  it("names only keys that exist in the bibliography, in every doc comment of calc/calibration.ts", () => {
+    const text = readFileSync(new URL("../../calc/calibration.ts", import.meta.url), "utf8");
+    const keys = [...text.matchAll(/Sources: ([^\n]+(?:\n \* [a-z0-9-]+(?:, [a-z0-9-]+)*\.?)?)/g)].flatMap((m) =>
+      m[1]!.replace(/\n \* /g, " ").replace(/\.$/, "").split(/,\s*/),
+    );
+    expect(keys.length).toBeGreaterThan(8);
+    for (const key of keys) expect(isSourceKey(key.trim().replace(/\s*\(.*\)$/, "")), key).toBe(true);
+  });
+});
+
+describe("regression pins (COMPUTED, not outside references)", () => {
+  it("pins Anscombe I to full precision", () => {
+    const f = fitStraightLine({ x: ANSCOMBE_X, y: ANSCOMBE_Y1 });
+    expect(f.leastSquares.slope).toBeCloseTo(0.5000909090909091, 13);
+    expect(f.leastSquares.intercept).toBeCloseTo(3.0000909090909103, 12);
+    expect(f.leastSquares.slopeStdError).toBeCloseTo(0.11790550059563408, 12);
+    expect(f.leastSquares.tQuantile).toBeCloseTo(2.2621571627982036, 10);
+    expect(f.theilSen.slope).toBeCloseTo(0.5016666666666668, 13);
+  });
+});
