@@ -14,11 +14,14 @@ import { katexWoff2Only } from "./scripts/site/katex-woff2-only.mjs";
  * https://example.org/handbook/). Set it at build time.
  */
 const base = process.env.BASE || "/";
+/** OUT_DIR: where the build goes (default ./dist); the tests read the same variable. */
+const outDir = process.env.OUT_DIR || "./dist";
 
 export default defineConfig({
   srcDir: ".",
   publicDir: "./public",
-  outDir: "./dist",
+  outDir,
+  cacheDir: process.env.OUT_DIR ? `${outDir}-cache` : "./node_modules/.astro",
   base,
   trailingSlash: "ignore",
   build: { format: "directory", inlineStylesheets: "never" },

@@ -5,11 +5,11 @@
 import { describe, expect, it } from "vitest";
 import { existsSync, readdirSync, readFileSync } from "node:fs";
 import { createRequire } from "node:module";
-import { join } from "node:path";
+import { join, resolve } from "node:path";
 import { fileURLToPath } from "node:url";
 import { createWeigher } from "../../scripts/site/page-weight.mjs";
 
-const dist = fileURLToPath(new URL("../../dist/", import.meta.url));
+const dist = process.env.OUT_DIR ? resolve(process.env.OUT_DIR) : fileURLToPath(new URL("../../dist/", import.meta.url));
 const contentDir = fileURLToPath(new URL("../../content/chapters/", import.meta.url));
 
 function walk(dir: string): string[] {

@@ -4,6 +4,8 @@
  */
 import { chromium, type Browser } from "playwright-core";
 import { existsSync } from "node:fs";
+import { resolve } from "node:path";
+import { fileURLToPath } from "node:url";
 import { startStaticServer } from "../../scripts/static-server.mjs";
 
 export const CHROMIUM_PATH = process.env.CHROMIUM_PATH ?? "/usr/bin/chromium";
@@ -26,6 +28,9 @@ export async function launchBrowser(): Promise<Browser> {
   return chromium.launch({ executablePath: CHROMIUM_PATH, args: CHROMIUM_ARGS });
 }
 
+/** The built site's folder: OUT_DIR when set (as for the build), else dist/. */
+export const DIST_DIR = process.env.OUT_DIR ? resolve(process.env.OUT_DIR) : fileURLToPath(new URL("../../dist/", import.meta.url));
+
 export async function serveDist(base = "/") {
-  return startStaticServer({ root: new URL("../../dist/", import.meta.url), port: 0, base });
+  return startStaticServer({ root: `${DIST_DIR}/`, port: 0, base });
 }
