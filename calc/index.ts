@@ -16,3 +16,7 @@ export * from "./calibration.ts";
 export * from "./csv.ts";
 export * from "./materials.ts";
 export * from "./fasteners.ts";
+export * from "./motor.ts";
+export * from "./design.ts";
+export * from "./checks.ts";
+export * from "./demo-design.ts";

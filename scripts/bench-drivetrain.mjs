@@ -1,0 +1,96 @@
+/**
+ * Timing of the spin-up simulation (calc/drivetrain.ts): one simulation of 10 s of spin-up, and a
+ * 50-point design sweep, each the median of many runs after a warm-up.
+ *
+ * Run from the repository root with the pinned Node:
+ *   npx node --experimental-strip-types scripts/bench-drivetrain.mjs
+ *
+ * Targets: a 10-second simulation under 5 ms; a 50-point sweep well under 100 ms. Timings on a
+ * shared machine vary; the median and the 90th percentile are printed, with the load average.
+ */
+import { loadavg } from "node:os";
+import { DEMO_SPINNER, DEMO_WEAPON, simulateSpinUp, sweepDrivetrain } from "../calc/drivetrain.ts";
+
+/** Runs `fn` `warmup` times untimed, then `runs` times timed; returns times in ms, sorted, and the last result. */
+function time(fn, runs, warmup) {
+  let last;
+  for (let i = 0; i < warmup; i++) last = fn();
+  const times = [];
+  for (let i = 0; i < runs; i++) {
+    const start = performance.now();
+    last = fn();
+    times.push(performance.now() - start);
+  }
+  times.sort((a, b) => a - b);
+  return { times, last };
+}
+
+const quantile = (sorted, q) => sorted[Math.min(sorted.length - 1, Math.floor(q * sorted.length))];
+const ms = (x) => `${x.toFixed(3)} ms`;
+
+const cases = [
+  {
+    label: "10 s simulation, demo weapon, run to the limit",
+    target: 5,
+    runs: 500,
+    warmup: 50,
+    fn: () => simulateSpinUp({ ...DEMO_WEAPON, maxTime: 10 }, { stopAtSteadyState: false }),
+    note: (r) => `${r.solver.acceptedSteps} steps, ${r.solver.evaluations} evaluations`,
+  },
+  {
+    label: "10 s simulation, demo spinner, run to the limit",
+    target: 5,
+    runs: 500,
+    warmup: 50,
+    fn: () => simulateSpinUp({ ...DEMO_SPINNER, maxTime: 10 }, { stopAtSteadyState: false }),
+    note: (r) => `${r.solver.acceptedSteps} steps, ${r.solver.evaluations} evaluations`,
+  },
+  {
+    label: "demo weapon, stopping at steady state (as the widget runs it)",
+    target: 5,
+    runs: 500,
+    warmup: 50,
+    fn: () => simulateSpinUp(DEMO_WEAPON),
+    note: (r) => `ends at ${r.endTime.toFixed(2)} s, ${r.series.length} plot points`,
+  },
+  {
+    label: "demo spinner, stopping at steady state (as the widget runs it)",
+    target: 5,
+    runs: 500,
+    warmup: 50,
+    fn: () => simulateSpinUp(DEMO_SPINNER),
+    note: (r) => `ends at ${r.endTime.toFixed(2)} s, ${r.series.length} plot points`,
+  },
+  {
+    label: "50-point sweep, demo weapon, reduction 0.5 to 4",
+    target: 100,
+    runs: 40,
+    warmup: 5,
+    fn: () => sweepDrivetrain({ base: DEMO_WEAPON, parameter: "gearRatio", from: 0.5, to: 4, points: 50 }),
+    note: (r) => `optimum ${r.points[r.optimumIndex].value.toFixed(2)} by ${r.optimumBy}`,
+  },
+  {
+    label: "50-point sweep, demo spinner, wheel radius 8 to 40 mm",
+    target: 100,
+    runs: 40,
+    warmup: 5,
+    fn: () => sweepDrivetrain({ base: DEMO_SPINNER, parameter: "wheelRadius", from: 0.008, to: 0.04, points: 50 }),
+    note: (r) => `optimum ${(r.points[r.optimumIndex].value * 1000).toFixed(1)} mm by ${r.optimumBy}`,
+  },
+];
+
+console.log(`Spin-up simulation timing — Node ${process.version}, load average ${loadavg().map((x) => x.toFixed(2)).join(" ")}`);
+console.log("");
+let missed = 0;
+for (const c of cases) {
+  const { times, last } = time(c.fn, c.runs, c.warmup);
+  const median = quantile(times, 0.5);
+  const ok = median < c.target;
+  if (!ok) missed++;
+  console.log(c.label);
+  console.log(
+    `  median ${ms(median)}   p90 ${ms(quantile(times, 0.9))}   min ${ms(times[0])}   over ${c.runs} runs   target < ${c.target} ms: ${ok ? "met" : "MISSED"}   (${c.note(last)})`,
+  );
+}
+console.log("");
+console.log(missed === 0 ? "All targets met." : `${missed} target(s) missed.`);
