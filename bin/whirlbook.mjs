@@ -1,0 +1,73 @@
+#!/usr/bin/env node
+// whirlbook check design.json [--json] [--units metric|us]
+// Runs every check of the handbook on a design file with the same calc/ code the site uses and
+// prints the build sheet. Exit code: 0 when nothing fails, 1 when a check fails, 2 for bad usage
+// or an unreadable design file.
+import { readFileSync } from "node:fs";
+
+const USAGE = `Usage: whirlbook check <design.json> [--json] [--units metric|us]
+
+Runs every Whirlbook check on a design file (exported from the build sheet) and prints the
+results. Exit code 0: nothing fails; 1: at least one check fails; 2: bad usage or unreadable file.`;
+
+const [major, minor] = process.versions.node.split(".").map(Number);
+if (major < 22 || (major === 22 && minor < 18)) {
+  console.error(`whirlbook needs Node 22.18 or newer (this is ${process.versions.node}); run it through npx or npm run inside the project.`);
+  process.exit(2);
+}
+
+const { readDesignText, describeProblems } = await import("../calc/design.ts");
+const { runChecks, buildSheetText, overallStatus } = await import("../calc/checks.ts");
+
+function fail(message) {
+  console.error(message);
+  process.exit(2);
+}
+
+const args = process.argv.slice(2);
+if (args.includes("--help") || args.includes("-h")) {
+  console.log(USAGE);
+  process.exit(0);
+}
+const [command, ...rest] = args;
+if (command !== "check") fail(`${command ? `Unknown command "${command}".` : "No command given."}\n\n${USAGE}`);
+
+let file = null;
+let json = false;
+let units = null;
+for (let i = 0; i < rest.length; i += 1) {
+  const arg = rest[i];
+  if (arg === "--json") json = true;
+  else if (arg === "--units") units = rest[++i] ?? "";
+  else if (arg.startsWith("--units=")) units = arg.slice("--units=".length);
+  else if (arg.startsWith("-")) fail(`Unknown option "${arg}".\n\n${USAGE}`);
+  else if (file === null) file = arg;
+  else fail(`Only one design file at a time (got "${file}" and "${arg}").`);
+}
+if (file === null) fail(`No design file given.\n\n${USAGE}`);
+if (units !== null && units !== "metric" && units !== "us") fail(`--units must be "metric" or "us" (got "${units}").`);
+
+let text;
+try {
+  text = readFileSync(file, "utf8");
+} catch (error) {
+  fail(`Cannot read ${file}: ${error.code === "ENOENT" ? "no such file" : error.message}`);
+}
+const reading = readDesignText(text);
+if (!reading.ok) {
+  fail(`${file} is not a design Whirlbook can read:\n${describeProblems(reading.problems).map((l) => `  ${l}`).join("\n")}`);
+}
+const system = units ?? reading.design.units;
+const results = runChecks(reading.design, system);
+const overall = overallStatus(results);
+if (json) {
+  console.log(JSON.stringify({ design: reading.design.name, units: system, overall, problems: reading.problems, migratedFrom: reading.migratedFrom, checks: results }, null, 2));
+} else {
+  if (reading.problems.length) {
+    console.log(`Read ${file} with ${reading.problems.length} problem(s); valid values were kept:`);
+    for (const line of describeProblems(reading.problems)) console.log(`  ${line}`);
+    console.log("");
+  }
+  process.stdout.write(buildSheetText(reading.design, results));
+}
+process.exit(overall === "fails" ? 1 : 0);

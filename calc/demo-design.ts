@@ -1,0 +1,119 @@
+/**
+ * The demo design that ships with the handbook: an invented 1.4 kg whole-body spinner (not a real
+ * robot), assembled from the chapters' own demo data so that every check has something to show.
+ * Its sensor radius and inertia come from its own mass layout, so the sections agree.
+ */
+import { DESIGN_FORMAT, DESIGN_VERSION, defaultSection, type Design } from "./design.ts";
+import { demoRobotParts, massBalanceInputs, massProperties } from "./mass.ts";
+import { DEMO_SPINNER, drivetrainInputs } from "./drivetrain.ts";
+import { accelerometerPlacementInputs } from "./rotation.ts";
+import { headingDriftInputs } from "./heading.ts";
+import { rimMaterial, DEFAULT_SAFETY_THRESHOLDS, DEFAULT_SHEAR_RATIO } from "./loads.ts";
+import { rpmToRadPerSecond } from "./units.ts";
+import { STANDARD_GRAVITY } from "./constants.ts";
+
+const defaults = <T extends Record<string, { default: number }>>(specs: T) =>
+  Object.fromEntries(Object.entries(specs).map(([k, s]) => [k, s.default])) as { [K in keyof T]: number };
+
+/**
+ * Builds the demo design (invented data). Pure: the same design every time, stamped with a fixed
+ * date so that links and printouts of it are stable.
+ *
+ * @returns a complete, valid Design
+ */
+export function demoDesign(): Design {
+  const speed = rpmToRadPerSecond(2400);
+  const parts = demoRobotParts();
+  const layout = massProperties(parts);
+  const sensor = parts.find((p) => p.name === "accelerometer")!;
+  const assumedRadius = Math.hypot(sensor.x, sensor.y);
+  const trueRadius = Math.hypot(sensor.x - layout.centreX, sensor.y - layout.centreY);
+  const stamp = "2026-11-30T12:00:00.000Z";
+  const thresholds = { failBelow: DEFAULT_SAFETY_THRESHOLDS.failBelow, marginalBelow: DEFAULT_SAFETY_THRESHOLDS.marginalBelow };
+  return {
+    format: DESIGN_FORMAT,
+    version: DESIGN_VERSION,
+    name: "Demo: invented 1.4 kg whole-body spinner",
+    notes: "An invented robot for trying the handbook: not a real machine. Every value here is demo data.",
+    created: stamp,
+    modified: stamp,
+    units: "metric",
+    placement: {
+      ...defaults(accelerometerPlacementInputs),
+      topSpeed: speed,
+      lowSpeed: rpmToRadPerSecond(400),
+      radius: trueRadius,
+      fullScale: 400 * STANDARD_GRAVITY,
+      step: (800 / 4096) * STANDARD_GRAVITY,
+      resolution: 0.02,
+      partMass: 0.28,
+      partRadius: Math.hypot(0.012 - layout.centreX, layout.centreY),
+    },
+    headingDrift: {
+      ...defaults(headingDriftInputs),
+      angularSpeed: speed,
+      assumedRadius,
+      trueRadius,
+    },
+    mass: {
+      scalars: { ...defaults(massBalanceInputs), spinSpeed: speed, balanceGrade: 0.25 },
+      parts,
+      candidates: [
+        { x: -0.055, y: 0 },
+        { x: -0.05, y: 0.02 },
+        { x: 0, y: -0.055 },
+      ],
+    },
+    fasteners: [
+      {
+        ...defaultSection("fasteners")[0]!,
+        name: "Counterweight washers (one M4 bolt)",
+        partMass: 0.042,
+        radius: 0.055,
+        angularSpeed: speed,
+        count: 1,
+        shearRatio: DEFAULT_SHEAR_RATIO,
+        ...thresholds,
+        size: "M4",
+        propertyClass: "8.8",
+        mode: "shear",
+        shearPlane: "thread",
+      },
+      {
+        ...defaultSection("fasteners")[0]!,
+        name: "Battery bracket (two M3 bolts)",
+        partMass: 0.3,
+        radius: 0.016,
+        angularSpeed: speed,
+        count: 2,
+        shearRatio: DEFAULT_SHEAR_RATIO,
+        ...thresholds,
+        size: "M3",
+        propertyClass: "8.8",
+        mode: "shear",
+        shearPlane: "thread",
+      },
+    ],
+    rims: [
+      {
+        ...defaultSection("rims")[0]!,
+        name: "Steel armour ring",
+        shape: "thin-ring",
+        outerRadius: 0.075,
+        innerRadius: 0.068,
+        ...rimMaterial("steel-4130-normalized"),
+        angularSpeed: speed,
+        ...thresholds,
+      },
+    ],
+    drivetrain: {
+      ...defaults(drivetrainInputs),
+      ...DEMO_SPINNER,
+      inertia: layout.inertiaAboutCentre,
+      robotMass: layout.totalMass,
+      targetSpeed: speed,
+      tipRadius: 0.075,
+      driveType: "spinner",
+    },
+  };
+}
