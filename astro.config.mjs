@@ -8,6 +8,7 @@ import rehypeKatex from "rehype-katex";
 import { rehypeBaseLinks } from "./scripts/site/rehype-base-links.mjs";
 import { rehypeScrollableMath } from "./scripts/site/rehype-scrollable-math.mjs";
 import { katexWoff2Only } from "./scripts/site/katex-woff2-only.mjs";
+import { offlineAndSearch } from "./scripts/site/offline-and-search.mjs";
 
 /**
  * BASE: the sub-path the site is served under ("/" by default; e.g. BASE=/handbook/ for
@@ -25,7 +26,7 @@ export default defineConfig({
   base,
   trailingSlash: "ignore",
   build: { format: "directory", inlineStylesheets: "never" },
-  integrations: [preact(), mdx()],
+  integrations: [preact(), mdx(), offlineAndSearch()],
   markdown: {
     processor: unified({
       remarkPlugins: [remarkMath],

@@ -11,7 +11,7 @@ export default defineConfig({
     projects: [
       {
         extends: true,
-        test: { name: "unit", include: ["tests/calc/**/*.test.ts", "tests/components/**/*.test.{ts,tsx}"] },
+        test: { name: "unit", include: ["tests/calc/**/*.test.ts", "tests/components/**/*.test.{ts,tsx}", "tests/cli/**/*.test.ts"] },
       },
       { extends: true, test: { name: "build", include: ["tests/build/**/*.test.ts"] } },
       {

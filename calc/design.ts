@@ -280,6 +280,9 @@ export function readDesign(raw: unknown): DesignReading {
   if (typeof raw !== "object" || raw === null || Array.isArray(raw)) {
     return { ok: false, problems: [{ path: "", message: "is not a design: expected a JSON object", action: "not-read" }] };
   }
+  if (!("format" in raw)) {
+    return { ok: false, problems: [{ path: "format", message: 'is missing: this is not a Whirlbook design file (it has no "format": "whirlbook-design")', action: "not-read" }] };
+  }
   const header = v.safeParse(headerSchema, raw);
   if (!header.success) {
     const issue = header.issues[0];

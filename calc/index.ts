@@ -20,3 +20,4 @@ export * from "./motor.ts";
 export * from "./design.ts";
 export * from "./checks.ts";
 export * from "./demo-design.ts";
+export * from "./unit-definitions.ts";

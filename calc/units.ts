@@ -5,7 +5,6 @@
  * SI results in metric or US customary units to a sensible number of significant figures.
  */
 import { STANDARD_GRAVITY } from "./constants.ts";
-import type { SourceKey } from "./sources.ts";
 
 /** The quantity a field holds; it decides which units a typed value may carry. */
 export type QuantityKind =
@@ -33,8 +32,7 @@ export type QuantityKind =
   | "fraction"
   | "count";
 
-/** How a unit's factor is known. */
-export type Exactness = "exact" | "derived" | "approximate";
+export type { Exactness } from "./unit-definitions.ts";
 
 export interface UnitDef {
   /** Symbol shown to users. */
@@ -42,10 +40,6 @@ export interface UnitDef {
   kind: QuantityKind;
   /** Size of one unit in the kind's SI unit (value_SI = value × factor). */
   factor: number;
-  exactness: Exactness;
-  /** The definition, in words, e.g. "0.0254 m exactly". */
-  definition: string;
-  source: SourceKey;
   /** Other spellings accepted when parsing (compared case-sensitively, then case-insensitively). */
   aliases?: readonly string[];
 }
@@ -60,94 +54,94 @@ const RPM = (2 * Math.PI) / 60; // 1 rev = 2π rad, exact
 /** Every unit Whirlbook knows, keyed by id. */
 export const UNITS = {
   // length [m]
-  m: { symbol: "m", kind: "length", factor: 1, exactness: "exact", definition: "SI base unit", source: "nist-sp811", aliases: ["metre", "meter", "meters", "metres"] },
-  cm: { symbol: "cm", kind: "length", factor: 0.01, exactness: "exact", definition: "0.01 m", source: "nist-sp811" },
-  mm: { symbol: "mm", kind: "length", factor: 0.001, exactness: "exact", definition: "0.001 m", source: "nist-sp811", aliases: ["millimetre", "millimeter", "millimeters", "millimetres"] },
-  in: { symbol: "in", kind: "length", factor: INCH, exactness: "exact", definition: "0.0254 m exactly", source: "nist-sp811", aliases: ["inch", "inches", "\"", "″"] },
-  ft: { symbol: "ft", kind: "length", factor: FOOT, exactness: "exact", definition: "0.3048 m exactly", source: "nist-sp811", aliases: ["foot", "feet", "'", "′"] },
+  m: { symbol: "m", kind: "length", factor: 1, aliases: ["metre", "meter", "meters", "metres"] },
+  cm: { symbol: "cm", kind: "length", factor: 0.01 },
+  mm: { symbol: "mm", kind: "length", factor: 0.001, aliases: ["millimetre", "millimeter", "millimeters", "millimetres"] },
+  in: { symbol: "in", kind: "length", factor: INCH, aliases: ["inch", "inches", "\"", "″"] },
+  ft: { symbol: "ft", kind: "length", factor: FOOT, aliases: ["foot", "feet", "'", "′"] },
   // mass [kg]
-  kg: { symbol: "kg", kind: "mass", factor: 1, exactness: "exact", definition: "SI base unit", source: "nist-sp811" },
-  g: { symbol: "g", kind: "mass", factor: 0.001, exactness: "exact", definition: "0.001 kg", source: "nist-sp811", aliases: ["gram", "grams", "gr"] },
-  lb: { symbol: "lb", kind: "mass", factor: POUND, exactness: "exact", definition: "0.453 592 37 kg exactly", source: "intl-yard-pound-1959", aliases: ["lbs", "pound", "pounds", "lbm"] },
-  oz: { symbol: "oz", kind: "mass", factor: OUNCE, exactness: "exact", definition: "1/16 lb = 0.028 349 523 125 kg", source: "nist-sp811", aliases: ["ounce", "ounces"] },
+  kg: { symbol: "kg", kind: "mass", factor: 1 },
+  g: { symbol: "g", kind: "mass", factor: 0.001, aliases: ["gram", "grams", "gr"] },
+  lb: { symbol: "lb", kind: "mass", factor: POUND, aliases: ["lbs", "pound", "pounds", "lbm"] },
+  oz: { symbol: "oz", kind: "mass", factor: OUNCE, aliases: ["ounce", "ounces"] },
   // acceleration [m/s²]
-  "m/s2": { symbol: "m/s²", kind: "acceleration", factor: 1, exactness: "exact", definition: "SI unit", source: "nist-sp811", aliases: ["m/s²", "m/s^2", "ms-2", "m s-2"] },
-  gn: { symbol: "g", kind: "acceleration", factor: STANDARD_GRAVITY, exactness: "exact", definition: "standard gravity, 9.806 65 m/s² exactly", source: "cgpm-1901", aliases: ["g", "G", "gₙ", "g0"] },
-  "ft/s2": { symbol: "ft/s²", kind: "acceleration", factor: FOOT, exactness: "exact", definition: "0.3048 m/s²", source: "nist-sp811", aliases: ["ft/s²", "ft/s^2"] },
+  "m/s2": { symbol: "m/s²", kind: "acceleration", factor: 1, aliases: ["m/s²", "m/s^2", "ms-2", "m s-2"] },
+  gn: { symbol: "g", kind: "acceleration", factor: STANDARD_GRAVITY, aliases: ["g", "G", "gₙ", "g0"] },
+  "ft/s2": { symbol: "ft/s²", kind: "acceleration", factor: FOOT, aliases: ["ft/s²", "ft/s^2"] },
   // angular speed [rad/s]
-  "rad/s": { symbol: "rad/s", kind: "angularSpeed", factor: 1, exactness: "exact", definition: "SI unit", source: "nist-sp811", aliases: ["rad s-1", "1/s"] },
-  rpm: { symbol: "rpm", kind: "angularSpeed", factor: RPM, exactness: "exact", definition: "2π/60 rad/s (1 rev = 2π rad)", source: "nist-sp811", aliases: ["rev/min", "r/min", "RPM"] },
-  rps: { symbol: "rev/s", kind: "angularSpeed", factor: 2 * Math.PI, exactness: "exact", definition: "2π rad/s", source: "nist-sp811", aliases: ["rev/s", "r/s"] },
-  "deg/s": { symbol: "°/s", kind: "angularSpeed", factor: Math.PI / 180, exactness: "exact", definition: "π/180 rad/s", source: "nist-sp811", aliases: ["°/s", "dps"] },
+  "rad/s": { symbol: "rad/s", kind: "angularSpeed", factor: 1, aliases: ["rad s-1", "1/s"] },
+  rpm: { symbol: "rpm", kind: "angularSpeed", factor: RPM, aliases: ["rev/min", "r/min", "RPM"] },
+  rps: { symbol: "rev/s", kind: "angularSpeed", factor: 2 * Math.PI, aliases: ["rev/s", "r/s"] },
+  "deg/s": { symbol: "°/s", kind: "angularSpeed", factor: Math.PI / 180, aliases: ["°/s", "dps"] },
   // angular acceleration [rad/s²]
-  "rad/s2": { symbol: "rad/s²", kind: "angularAcceleration", factor: 1, exactness: "exact", definition: "SI unit", source: "nist-sp811", aliases: ["rad/s²", "rad/s^2"] },
-  "rpm/s": { symbol: "rpm/s", kind: "angularAcceleration", factor: RPM, exactness: "exact", definition: "2π/60 rad/s²", source: "nist-sp811" },
+  "rad/s2": { symbol: "rad/s²", kind: "angularAcceleration", factor: 1, aliases: ["rad/s²", "rad/s^2"] },
+  "rpm/s": { symbol: "rpm/s", kind: "angularAcceleration", factor: RPM },
   // angle [rad]
-  rad: { symbol: "rad", kind: "angle", factor: 1, exactness: "exact", definition: "SI coherent unit", source: "nist-sp811", aliases: ["radian", "radians"] },
-  deg: { symbol: "°", kind: "angle", factor: Math.PI / 180, exactness: "exact", definition: "π/180 rad", source: "nist-sp811", aliases: ["°", "degree", "degrees"] },
-  rev: { symbol: "rev", kind: "angle", factor: 2 * Math.PI, exactness: "exact", definition: "2π rad", source: "nist-sp811", aliases: ["turn", "turns"] },
+  rad: { symbol: "rad", kind: "angle", factor: 1, aliases: ["radian", "radians"] },
+  deg: { symbol: "°", kind: "angle", factor: Math.PI / 180, aliases: ["°", "degree", "degrees"] },
+  rev: { symbol: "rev", kind: "angle", factor: 2 * Math.PI, aliases: ["turn", "turns"] },
   // time [s]
-  s: { symbol: "s", kind: "time", factor: 1, exactness: "exact", definition: "SI base unit", source: "nist-sp811", aliases: ["sec", "second", "seconds"] },
-  ms: { symbol: "ms", kind: "time", factor: 1e-3, exactness: "exact", definition: "0.001 s", source: "nist-sp811" },
-  us: { symbol: "µs", kind: "time", factor: 1e-6, exactness: "exact", definition: "0.000 001 s", source: "nist-sp811", aliases: ["µs", "μs"] },
+  s: { symbol: "s", kind: "time", factor: 1, aliases: ["sec", "second", "seconds"] },
+  ms: { symbol: "ms", kind: "time", factor: 1e-3 },
+  us: { symbol: "µs", kind: "time", factor: 1e-6, aliases: ["µs", "μs"] },
   // frequency [Hz]
-  Hz: { symbol: "Hz", kind: "frequency", factor: 1, exactness: "exact", definition: "SI unit, 1/s", source: "nist-sp811", aliases: ["hz"] },
-  kHz: { symbol: "kHz", kind: "frequency", factor: 1e3, exactness: "exact", definition: "1000 Hz", source: "nist-sp811", aliases: ["khz"] },
+  Hz: { symbol: "Hz", kind: "frequency", factor: 1, aliases: ["hz"] },
+  kHz: { symbol: "kHz", kind: "frequency", factor: 1e3, aliases: ["khz"] },
   // force [N]
-  N: { symbol: "N", kind: "force", factor: 1, exactness: "exact", definition: "SI unit", source: "nist-sp811", aliases: ["newton", "newtons"] },
-  kN: { symbol: "kN", kind: "force", factor: 1e3, exactness: "exact", definition: "1000 N", source: "nist-sp811" },
-  lbf: { symbol: "lbf", kind: "force", factor: POUND_FORCE, exactness: "exact", definition: "lb × g_n = 4.448 221 615 260 5 N", source: "nist-sp811" },
-  ozf: { symbol: "ozf", kind: "force", factor: POUND_FORCE / 16, exactness: "exact", definition: "lbf/16", source: "nist-sp811" },
+  N: { symbol: "N", kind: "force", factor: 1, aliases: ["newton", "newtons"] },
+  kN: { symbol: "kN", kind: "force", factor: 1e3 },
+  lbf: { symbol: "lbf", kind: "force", factor: POUND_FORCE },
+  ozf: { symbol: "ozf", kind: "force", factor: POUND_FORCE / 16 },
   // speed [m/s]
-  "m/s": { symbol: "m/s", kind: "speed", factor: 1, exactness: "exact", definition: "SI unit", source: "nist-sp811" },
-  "mm/s": { symbol: "mm/s", kind: "speed", factor: 1e-3, exactness: "exact", definition: "0.001 m/s (balance grades are quoted in it)", source: "nist-sp811" },
-  "km/h": { symbol: "km/h", kind: "speed", factor: 1000 / 3600, exactness: "exact", definition: "1/3.6 m/s", source: "nist-sp811", aliases: ["kph"] },
-  "ft/s": { symbol: "ft/s", kind: "speed", factor: FOOT, exactness: "exact", definition: "0.3048 m/s", source: "nist-sp811", aliases: ["fps"] },
-  mph: { symbol: "mph", kind: "speed", factor: (5280 * FOOT) / 3600, exactness: "exact", definition: "1609.344 m per 3600 s", source: "nist-sp811" },
+  "m/s": { symbol: "m/s", kind: "speed", factor: 1 },
+  "mm/s": { symbol: "mm/s", kind: "speed", factor: 1e-3 },
+  "km/h": { symbol: "km/h", kind: "speed", factor: 1000 / 3600, aliases: ["kph"] },
+  "ft/s": { symbol: "ft/s", kind: "speed", factor: FOOT, aliases: ["fps"] },
+  mph: { symbol: "mph", kind: "speed", factor: (5280 * FOOT) / 3600 },
   // energy [J]
-  J: { symbol: "J", kind: "energy", factor: 1, exactness: "exact", definition: "SI unit", source: "nist-sp811", aliases: ["joule", "joules"] },
-  kJ: { symbol: "kJ", kind: "energy", factor: 1e3, exactness: "exact", definition: "1000 J", source: "nist-sp811" },
-  Wh: { symbol: "Wh", kind: "energy", factor: 3600, exactness: "exact", definition: "3600 J", source: "nist-sp811" },
-  "ft·lbf": { symbol: "ft·lbf", kind: "energy", factor: FOOT * POUND_FORCE, exactness: "exact", definition: "0.3048 m × lbf", source: "nist-sp811", aliases: ["ft*lbf", "ft-lbf", "ftlbf", "ft.lbf", "ft lbf"] },
+  J: { symbol: "J", kind: "energy", factor: 1, aliases: ["joule", "joules"] },
+  kJ: { symbol: "kJ", kind: "energy", factor: 1e3 },
+  Wh: { symbol: "Wh", kind: "energy", factor: 3600 },
+  "ft·lbf": { symbol: "ft·lbf", kind: "energy", factor: FOOT * POUND_FORCE, aliases: ["ft*lbf", "ft-lbf", "ftlbf", "ft.lbf", "ft lbf"] },
   // power [W]
-  W: { symbol: "W", kind: "power", factor: 1, exactness: "exact", definition: "SI unit", source: "nist-sp811" },
-  kW: { symbol: "kW", kind: "power", factor: 1e3, exactness: "exact", definition: "1000 W", source: "nist-sp811" },
+  W: { symbol: "W", kind: "power", factor: 1 },
+  kW: { symbol: "kW", kind: "power", factor: 1e3 },
   // torque [N·m]
-  "N·m": { symbol: "N·m", kind: "torque", factor: 1, exactness: "exact", definition: "SI unit", source: "nist-sp811", aliases: ["Nm", "N*m", "N.m", "N m"] },
-  "lbf·in": { symbol: "lbf·in", kind: "torque", factor: POUND_FORCE * INCH, exactness: "exact", definition: "lbf × 0.0254 m", source: "nist-sp811", aliases: ["lbf*in", "lbf-in", "in-lbf", "in·lbf", "lbfin"] },
-  "ozf·in": { symbol: "ozf·in", kind: "torque", factor: (POUND_FORCE / 16) * INCH, exactness: "exact", definition: "ozf × 0.0254 m", source: "nist-sp811", aliases: ["ozf*in", "oz-in", "oz·in", "ozin", "ozf-in"] },
+  "N·m": { symbol: "N·m", kind: "torque", factor: 1, aliases: ["Nm", "N*m", "N.m", "N m"] },
+  "lbf·in": { symbol: "lbf·in", kind: "torque", factor: POUND_FORCE * INCH, aliases: ["lbf*in", "lbf-in", "in-lbf", "in·lbf", "lbfin"] },
+  "ozf·in": { symbol: "ozf·in", kind: "torque", factor: (POUND_FORCE / 16) * INCH, aliases: ["ozf*in", "oz-in", "oz·in", "ozin", "ozf-in"] },
   // moment of inertia [kg·m²]
-  "kg·m2": { symbol: "kg·m²", kind: "inertia", factor: 1, exactness: "exact", definition: "SI unit", source: "nist-sp811", aliases: ["kg·m²", "kgm2", "kg*m^2", "kg m2", "kg.m2", "kgm^2", "kg·m^2"] },
-  "g·cm2": { symbol: "g·cm²", kind: "inertia", factor: 1e-7, exactness: "exact", definition: "1e-7 kg·m²", source: "nist-sp811", aliases: ["g·cm²", "gcm2", "g*cm^2", "g cm2"] },
-  "lb·in2": { symbol: "lb·in²", kind: "inertia", factor: POUND * INCH * INCH, exactness: "exact", definition: "lb × (0.0254 m)²", source: "nist-sp811", aliases: ["lb·in²", "lbin2", "lb*in^2", "lb in2", "lb-in2", "lb-in^2"] },
-  "oz·in2": { symbol: "oz·in²", kind: "inertia", factor: OUNCE * INCH * INCH, exactness: "exact", definition: "oz × (0.0254 m)²", source: "nist-sp811", aliases: ["oz·in²", "ozin2", "oz*in^2", "oz in2", "oz-in2", "oz-in^2"] },
+  "kg·m2": { symbol: "kg·m²", kind: "inertia", factor: 1, aliases: ["kg·m²", "kgm2", "kg*m^2", "kg m2", "kg.m2", "kgm^2", "kg·m^2"] },
+  "g·cm2": { symbol: "g·cm²", kind: "inertia", factor: 1e-7, aliases: ["g·cm²", "gcm2", "g*cm^2", "g cm2"] },
+  "lb·in2": { symbol: "lb·in²", kind: "inertia", factor: POUND * INCH * INCH, aliases: ["lb·in²", "lbin2", "lb*in^2", "lb in2", "lb-in2", "lb-in^2"] },
+  "oz·in2": { symbol: "oz·in²", kind: "inertia", factor: OUNCE * INCH * INCH, aliases: ["oz·in²", "ozin2", "oz*in^2", "oz in2", "oz-in2", "oz-in^2"] },
   // stress [Pa]
-  Pa: { symbol: "Pa", kind: "stress", factor: 1, exactness: "exact", definition: "SI unit", source: "nist-sp811" },
-  MPa: { symbol: "MPa", kind: "stress", factor: 1e6, exactness: "exact", definition: "1e6 Pa", source: "nist-sp811", aliases: ["N/mm2", "N/mm²"] },
-  GPa: { symbol: "GPa", kind: "stress", factor: 1e9, exactness: "exact", definition: "1e9 Pa", source: "nist-sp811" },
-  psi: { symbol: "psi", kind: "stress", factor: POUND_FORCE / (INCH * INCH), exactness: "exact", definition: "lbf/in²", source: "nist-sp811", aliases: ["lbf/in2", "lbf/in²"] },
-  ksi: { symbol: "ksi", kind: "stress", factor: (1000 * POUND_FORCE) / (INCH * INCH), exactness: "exact", definition: "1000 lbf/in²", source: "nist-sp811" },
+  Pa: { symbol: "Pa", kind: "stress", factor: 1 },
+  MPa: { symbol: "MPa", kind: "stress", factor: 1e6, aliases: ["N/mm2", "N/mm²"] },
+  GPa: { symbol: "GPa", kind: "stress", factor: 1e9 },
+  psi: { symbol: "psi", kind: "stress", factor: POUND_FORCE / (INCH * INCH), aliases: ["lbf/in2", "lbf/in²"] },
+  ksi: { symbol: "ksi", kind: "stress", factor: (1000 * POUND_FORCE) / (INCH * INCH) },
   // density [kg/m³]
-  "kg/m3": { symbol: "kg/m³", kind: "density", factor: 1, exactness: "exact", definition: "SI unit", source: "nist-sp811", aliases: ["kg/m³", "kg/m^3"] },
-  "g/cm3": { symbol: "g/cm³", kind: "density", factor: 1000, exactness: "exact", definition: "1000 kg/m³", source: "nist-sp811", aliases: ["g/cm³", "g/cc", "g/cm^3", "g/ml"] },
-  "lb/in3": { symbol: "lb/in³", kind: "density", factor: POUND / INCH ** 3, exactness: "exact", definition: "lb/(0.0254 m)³", source: "nist-sp811", aliases: ["lb/in³", "lb/in^3"] },
+  "kg/m3": { symbol: "kg/m³", kind: "density", factor: 1, aliases: ["kg/m³", "kg/m^3"] },
+  "g/cm3": { symbol: "g/cm³", kind: "density", factor: 1000, aliases: ["g/cm³", "g/cc", "g/cm^3", "g/ml"] },
+  "lb/in3": { symbol: "lb/in³", kind: "density", factor: POUND / INCH ** 3, aliases: ["lb/in³", "lb/in^3"] },
   // static unbalance (mass × eccentricity) [kg·m]
-  "kg·m": { symbol: "kg·m", kind: "unbalance", factor: 1, exactness: "exact", definition: "SI unit", source: "nist-sp811", aliases: ["kgm", "kg*m", "kg m"] },
-  "g·mm": { symbol: "g·mm", kind: "unbalance", factor: 1e-6, exactness: "exact", definition: "1e-6 kg·m", source: "nist-sp811", aliases: ["gmm", "g*mm", "g mm", "g-mm"] },
-  "oz·in": { symbol: "oz·in", kind: "unbalance", factor: OUNCE * INCH, exactness: "exact", definition: "oz × 0.0254 m", source: "nist-sp811", aliases: ["ozin", "oz*in", "oz in", "oz-in"] },
+  "kg·m": { symbol: "kg·m", kind: "unbalance", factor: 1, aliases: ["kgm", "kg*m", "kg m"] },
+  "g·mm": { symbol: "g·mm", kind: "unbalance", factor: 1e-6, aliases: ["gmm", "g*mm", "g mm", "g-mm"] },
+  "oz·in": { symbol: "oz·in", kind: "unbalance", factor: OUNCE * INCH, aliases: ["ozin", "oz*in", "oz in", "oz-in"] },
   // electrical
-  V: { symbol: "V", kind: "voltage", factor: 1, exactness: "exact", definition: "SI unit", source: "nist-sp811", aliases: ["volt", "volts"] },
-  A: { symbol: "A", kind: "current", factor: 1, exactness: "exact", definition: "SI base unit", source: "nist-sp811", aliases: ["amp", "amps"] },
-  ohm: { symbol: "Ω", kind: "resistance", factor: 1, exactness: "exact", definition: "SI unit", source: "nist-sp811", aliases: ["Ω", "ohms", "Ohm"] },
-  mohm: { symbol: "mΩ", kind: "resistance", factor: 1e-3, exactness: "exact", definition: "0.001 Ω", source: "nist-sp811", aliases: ["mΩ", "milliohm", "milliohms", "mOhm"] },
+  V: { symbol: "V", kind: "voltage", factor: 1, aliases: ["volt", "volts"] },
+  A: { symbol: "A", kind: "current", factor: 1, aliases: ["amp", "amps"] },
+  ohm: { symbol: "Ω", kind: "resistance", factor: 1, aliases: ["Ω", "ohms", "Ohm"] },
+  mohm: { symbol: "mΩ", kind: "resistance", factor: 1e-3, aliases: ["mΩ", "milliohm", "milliohms", "mOhm"] },
   // motor velocity constant Kv [rad/(s·V)]
-  "rad/(s·V)": { symbol: "rad/(s·V)", kind: "motorVelocityConstant", factor: 1, exactness: "exact", definition: "SI unit", source: "nist-sp811", aliases: ["rad/s/V", "rad/(s V)"] },
-  "rpm/V": { symbol: "rpm/V", kind: "motorVelocityConstant", factor: RPM, exactness: "exact", definition: "2π/60 rad/(s·V)", source: "nist-sp811", aliases: ["kv", "Kv", "KV", "rpm/v"] },
+  "rad/(s·V)": { symbol: "rad/(s·V)", kind: "motorVelocityConstant", factor: 1, aliases: ["rad/s/V", "rad/(s V)"] },
+  "rpm/V": { symbol: "rpm/V", kind: "motorVelocityConstant", factor: RPM, aliases: ["kv", "Kv", "KV", "rpm/v"] },
   // dimensionless
-  frac: { symbol: "", kind: "fraction", factor: 1, exactness: "exact", definition: "ratio", source: "nist-sp811", aliases: ["x"] },
-  pct: { symbol: "%", kind: "fraction", factor: 0.01, exactness: "exact", definition: "1/100", source: "nist-sp811", aliases: ["%", "percent"] },
-  ppm: { symbol: "ppm", kind: "fraction", factor: 1e-6, exactness: "exact", definition: "1e-6", source: "nist-sp811" },
-  count: { symbol: "", kind: "count", factor: 1, exactness: "exact", definition: "a whole number", source: "nist-sp811" },
+  frac: { symbol: "", kind: "fraction", factor: 1, aliases: ["x"] },
+  pct: { symbol: "%", kind: "fraction", factor: 0.01, aliases: ["%", "percent"] },
+  ppm: { symbol: "ppm", kind: "fraction", factor: 1e-6 },
+  count: { symbol: "", kind: "count", factor: 1 },
 } as const satisfies Record<string, UnitDef>;
 
 export type UnitId = keyof typeof UNITS;

@@ -12,9 +12,11 @@ export interface ToolbarProps {
   onSystem(next: UnitSystem): void;
   /** Builds the full link to copy. */
   link(): string;
+  /** The design section this calculator fills; shows a "Save to design" button when given. */
+  designSection?: import("../../calc/design.ts").DesignSection;
 }
 
-export function Toolbar({ idPrefix, system, onSystem, link }: ToolbarProps) {
+export function Toolbar({ idPrefix, system, onSystem, link, designSection }: ToolbarProps) {
   const status = useSignal("");
   const fallback = useSignal<string | null>(null);
   async function copy() {
@@ -26,6 +28,15 @@ export function Toolbar({ idPrefix, system, onSystem, link }: ToolbarProps) {
     } catch {
       fallback.value = url;
       status.value = "Copy the selected link below.";
+    }
+  }
+  async function saveToDesign() {
+    if (!designSection) return;
+    try {
+      const { saveToActiveDesign } = await import("../design/save-from-page.ts");
+      status.value = saveToActiveDesign(localStorage, designSection, new URL(link()).search);
+    } catch {
+      status.value = "Not saved: this browser does not allow saving (storage disabled).";
     }
   }
   return (
@@ -48,6 +59,11 @@ export function Toolbar({ idPrefix, system, onSystem, link }: ToolbarProps) {
       <button type="button" class="button" onClick={copy}>
         Copy link to this check
       </button>
+      {designSection ? (
+        <button type="button" class="button button--quiet" onClick={saveToDesign}>
+          Save to design
+        </button>
+      ) : null}
       <p class="calc-status" role="status" aria-live="polite">
         {status.value}
       </p>

@@ -145,7 +145,7 @@ export default function PlacementCalculator({ id = "placement-calculator" }: Pla
       </form>
       <Results model={model} />
       <PlacementChart model={model} />
-      <Toolbar idPrefix={id} system={fields.system} onSystem={fields.setSystem} link={() => linkFor(fields, id)} />
+      <Toolbar idPrefix={id} system={fields.system} onSystem={fields.setSystem} link={() => linkFor(fields, id)} designSection="placement" />
     </section>
   );
 }

@@ -20,18 +20,23 @@ export function createWeigher(distDir, base = "/") {
     return join(distDir, relative);
   };
 
-  /** All JS files reachable from an entry, following static and dynamic imports. */
-  const scriptClosure = (entryUrl, seen = new Set()) => {
+  /**
+   * JS files reachable from an entry. Static imports load with the page and count towards its
+   * weight; dynamic `import()` chunks load only when used (a button, a search) and are listed
+   * apart in `lazy`, with their own static closure.
+   */
+  const scriptClosure = (entryUrl, seen = new Set(), lazy = new Set()) => {
     if (seen.has(entryUrl)) return seen;
     seen.add(entryUrl);
     const file = fileFor(entryUrl);
     if (!existsSync(file)) throw new Error(`page references a missing script ${entryUrl}`);
     const code = readFileSync(file, "utf8");
-    const specifiers = [...code.matchAll(/(?:import|export)\s*(?:[^"'`]*?from\s*)?["']([^"']+\.js)["']|import\(\s*["']([^"']+\.js)["']\s*\)/g)].map((m) => m[1] ?? m[2]);
-    for (const specifier of specifiers) {
-      if (/^[a-z]+:/i.test(specifier)) continue;
-      const resolved = specifier.startsWith("/") ? specifier : posix.join(posix.dirname(entryUrl), specifier);
-      scriptClosure(resolved, seen);
+    const resolve = (specifier) => (specifier.startsWith("/") ? specifier : posix.join(posix.dirname(entryUrl), specifier));
+    for (const m of code.matchAll(/(?:import|export)\s*(?:[^"'`()]*?from\s*)?["'`]([^"'`]+\.js)["'`]/g)) {
+      if (!/^[a-z]+:/i.test(m[1])) scriptClosure(resolve(m[1]), seen, lazy);
+    }
+    for (const m of code.matchAll(/import\(\s*["'`]([^"'`]+\.js)["'`]\s*\)/g)) {
+      if (!/^[a-z]+:/i.test(m[1])) lazy.add(resolve(m[1]));
     }
     return seen;
   };
@@ -48,7 +53,11 @@ export function createWeigher(distDir, base = "/") {
       ...[...html.matchAll(/\b(?:component-url|renderer-url)="([^"]+)"/g)].map((m) => m[1]),
     ]);
     const scripts = new Set();
-    for (const entry of entries) scriptClosure(entry, scripts);
+    const lazyEntries = new Set();
+    for (const entry of entries) scriptClosure(entry, scripts, lazyEntries);
+    const lazy = new Set();
+    for (const entry of lazyEntries) if (!scripts.has(entry)) scriptClosure(entry, lazy, new Set());
+    for (const src of scripts) lazy.delete(src);
     const cssBytes = css.reduce((sum, href) => sum + gz(readFileSync(fileFor(href))), 0);
     const jsBytes = [...scripts].reduce((sum, src) => sum + gz(readFileSync(fileFor(src))), 0) + inlineScripts.reduce((sum, m) => sum + gz(m[1]), 0);
     const fonts = new Set();
@@ -63,6 +72,9 @@ export function createWeigher(distDir, base = "/") {
       js: jsBytes,
       total: gz(html) + cssBytes + jsBytes,
       scripts: [...scripts],
+      /** Chunks loaded only on use (dynamic import), gzip bytes; not part of `js`. */
+      lazyJs: [...lazy].reduce((sum, src) => sum + gz(readFileSync(fileFor(src))), 0),
+      lazyScripts: [...lazy],
       inlineScripts: inlineScripts.length,
       stylesheets: css,
       fontsReferenced: [...fonts],

@@ -13,6 +13,8 @@ import {
   STANDARD_GRAVITY,
   toSI,
   UNITS,
+  UNIT_DEFINITIONS,
+  isSourceKey,
   unitsOfKind,
   type UnitId,
 } from "#calc";
@@ -62,12 +64,15 @@ describe("units: exact conversion factors", () => {
     expect(rpmToRadPerSecond(1)).toBeCloseTo(0.10471975511965977, 15);
   });
 
-  it("marks every unit exact, derived or approximate and names a source", () => {
+  it("marks every unit exact, derived or approximate, defines it in words and names a source", () => {
     for (const [id, def] of Object.entries(UNITS)) {
-      expect(["exact", "derived", "approximate"], id).toContain(def.exactness);
-      expect(def.source, id).toBeTruthy();
+      const provenance = UNIT_DEFINITIONS[id as UnitId];
+      expect(["exact", "derived", "approximate"], id).toContain(provenance.exactness);
+      expect(provenance.definition.length, id).toBeGreaterThan(2);
+      expect(isSourceKey(provenance.source), id).toBe(true);
       expect(def.factor, id).toBeGreaterThan(0);
     }
+    expect(Object.keys(UNIT_DEFINITIONS).sort()).toEqual(Object.keys(UNITS).sort());
   });
 
   it("round-trips every unit through SI (property)", () => {

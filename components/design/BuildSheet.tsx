@@ -1,0 +1,286 @@
+/**
+ * The build sheet: every check on one design at a glance, with the designs saved in this browser,
+ * file export and import, a link that carries the whole design, and a print layout.
+ */
+import { useEffect, useMemo, useRef } from "preact/hooks";
+import { useSignal } from "@preact/signals";
+import type { CheckResult, CheckStatus } from "../../calc/checks.ts";
+import { DESIGN_SECTIONS, SECTION_TITLES } from "../../calc/design.ts";
+import { createBuildSheetModel, type BuildSheetModel } from "./model.ts";
+import { calculatorLink, SECTION_CHAPTER } from "./links.ts";
+
+const BADGE: Record<CheckStatus, { mark: string; word: string }> = {
+  holds: { mark: "✔", word: "Holds" },
+  marginal: { mark: "▲", word: "Marginal" },
+  fails: { mark: "✖", word: "Fails" },
+  info: { mark: "i", word: "Info" },
+};
+
+const base = () => import.meta.env.BASE_URL.replace(/\/?$/, "/");
+
+function CheckCard({ result, model }: { result: CheckResult; model: BuildSheetModel }) {
+  const design = model.current.value.design;
+  const link = calculatorLink(design, result.section, result.index, design.units);
+  return (
+    <li class={`check check--${result.status}`} data-check={result.id}>
+      <p class="check-head">
+        <span class={`badge badge--${result.status}`}>
+          <span aria-hidden="true">{BADGE[result.status].mark}</span> {BADGE[result.status].word}
+        </span>
+        <strong class="check-title">{result.title}</strong>
+        {result.figure ? (
+          <span class="check-figure">
+            {result.figure.label}: <b data-out={`${result.id}-figure`}>{result.figure.text}</b>
+          </span>
+        ) : null}
+      </p>
+      <p class="check-rule">
+        <span class="check-label">Rule:</span> {result.rule}
+      </p>
+      <p class="check-margin">
+        <span class="check-label">Result:</span> {result.margin}
+      </p>
+      {result.details.length ? (
+        <ul class="check-details">
+          {result.details.map((d) => (
+            <li key={d.label}>
+              {d.label}: {d.text}
+            </li>
+          ))}
+        </ul>
+      ) : null}
+      {link ? (
+        <p class="check-link no-print">
+          <a href={`${base()}${link}`}>Open in the calculator</a>
+        </p>
+      ) : null}
+    </li>
+  );
+}
+
+function Summary({ model }: { model: BuildSheetModel }) {
+  const counts = { holds: 0, marginal: 0, fails: 0, info: 0 };
+  for (const r of model.results.value) counts[r.status] += 1;
+  const overall = model.overall.value;
+  const text = overall === "empty" ? "Nothing to check yet" : overall === "fails" ? "At least one check fails" : overall === "marginal" ? "Everything holds or is marginal" : "Every check holds";
+  return (
+    <p class={`verdict verdict--${overall === "fails" ? "bad" : overall === "marginal" ? "warn" : "ok"}`} data-out="overall">
+      <strong>{text}.</strong> {counts.holds} hold, {counts.marginal} marginal, {counts.fails} fail, {counts.info} for information.
+    </p>
+  );
+}
+
+function DesignList({ model }: { model: BuildSheetModel }) {
+  const designs = model.store.value.designs;
+  return (
+    <section class="designs no-print" aria-labelledby="designs-heading">
+      <h2 id="designs-heading">Designs saved in this browser</h2>
+      {designs.length === 0 ? <p>None yet. Save the design above to keep it here.</p> : null}
+      <ul class="design-list">
+        {designs.map((entry) => (
+          <li key={entry.id} aria-current={entry.id === model.current.value.id ? "true" : undefined}>
+            <span class="design-name">{entry.design.name}</span>
+            <span class="design-date">changed {entry.design.modified.slice(0, 16).replace("T", " ")}</span>
+            <span class="design-actions">
+              <button type="button" class="button button--quiet" onClick={() => model.open(entry.id)} aria-label={`Open ${entry.design.name}`}>
+                Open
+              </button>
+              <button type="button" class="button button--quiet" onClick={() => model.duplicate(entry.id)} aria-label={`Duplicate ${entry.design.name}`}>
+                Duplicate
+              </button>
+              <button type="button" class="button button--quiet" onClick={() => model.remove(entry.id)} aria-label={`Delete ${entry.design.name}`}>
+                Delete
+              </button>
+            </span>
+          </li>
+        ))}
+      </ul>
+      {model.undo.value ? (
+        <p class="undo" role="status">
+          Deleted “{model.undo.value.entry.design.name}”.{" "}
+          <button type="button" class="button" onClick={model.undoRemove}>
+            Undo
+          </button>
+        </p>
+      ) : null}
+    </section>
+  );
+}
+
+export default function BuildSheet() {
+  const model = useMemo(() => createBuildSheetModel(typeof localStorage === "undefined" ? null : localStorage), []);
+  const fileInput = useRef<HTMLInputElement>(null);
+  const link = useSignal<string | null>(null);
+  useEffect(() => {
+    void model.openFromLocation(window.location.hash);
+    const onHash = () => void model.openFromLocation(window.location.hash);
+    window.addEventListener("hashchange", onHash);
+    return () => window.removeEventListener("hashchange", onHash);
+  }, [model]);
+
+  const { design, origin } = model.current.value;
+  const presentSections = new Set(model.results.value.map((r) => r.section));
+  const missing = DESIGN_SECTIONS.filter((s) => !presentSections.has(s));
+  const originText: Record<typeof origin, string> = {
+    saved: "Saved in this browser; changes are saved as you make them.",
+    link: "Opened from a link; not saved in this browser yet.",
+    file: "Opened from a file; not saved in this browser yet.",
+    demo: "The demo design: an invented robot, for trying the build sheet.",
+    new: "Not saved in this browser yet.",
+  };
+
+  async function copyLink() {
+    const url = `${window.location.origin}${window.location.pathname}#${await model.fragment()}`;
+    link.value = url;
+    try {
+      await navigator.clipboard.writeText(url);
+      model.status.value = `Link copied (${url.length} characters).`;
+    } catch {
+      model.status.value = "Copy the selected link below.";
+    }
+  }
+
+  function exportFile() {
+    const blob = new Blob([model.fileText()], { type: "application/json" });
+    const a = document.createElement("a");
+    a.href = URL.createObjectURL(blob);
+    a.download = `${design.name.replace(/[^\w.-]+/g, "-").replace(/^-+|-+$/g, "") || "design"}.whirlbook.json`;
+    document.body.appendChild(a);
+    a.click();
+    a.remove();
+    setTimeout(() => URL.revokeObjectURL(a.href), 1000);
+    model.status.value = `Exported ${a.download}.`;
+  }
+
+  function importFile(event: Event) {
+    const input = event.currentTarget as HTMLInputElement;
+    const file = input.files?.[0];
+    if (!file) return;
+    const reader = new FileReader();
+    reader.onload = () => model.importText(String(reader.result ?? ""), file.name);
+    reader.onerror = () => (model.messages.value = [`${file.name} could not be read from disk.`]);
+    reader.readAsText(file);
+    input.value = "";
+  }
+
+  return (
+    <div class="build-sheet">
+      {model.messages.value.length ? (
+        <div class="calc-notices" role="alert">
+          {model.messages.value.map((m, i) => (
+            <p key={i}>{m}</p>
+          ))}
+          <button type="button" class="button button--quiet no-print" onClick={() => (model.messages.value = [])}>
+            Dismiss
+          </button>
+        </div>
+      ) : null}
+      {model.conflict.value ? (
+        <div class="calc-notices no-print" role="alertdialog" aria-labelledby="conflict-text">
+          <p id="conflict-text">A saved design is already called “{model.conflict.value.design.name}”. Replace it, or keep both?</p>
+          <p class="design-actions">
+            <button type="button" class="button" onClick={() => model.resolveConflict("replace")}>
+              Replace the saved one
+            </button>
+            <button type="button" class="button button--quiet" onClick={() => model.resolveConflict("both")}>
+              Keep both
+            </button>
+            <button type="button" class="button button--quiet" onClick={() => model.resolveConflict("cancel")}>
+              Cancel
+            </button>
+          </p>
+        </div>
+      ) : null}
+
+      <section class="sheet-head" aria-label="Design">
+        <div class="field">
+          <label for="design-name">Design name</label>
+          <input id="design-name" type="text" value={design.name} maxLength={80} onInput={(e) => model.edit({ name: (e.currentTarget as HTMLInputElement).value })} />
+        </div>
+        <p class="print-only">
+          <strong>{design.name}</strong>
+        </p>
+        <p class="sheet-meta">
+          {originText[origin]} Last changed {design.modified.slice(0, 10)}.<span class="print-only"> Printed {new Date().toISOString().slice(0, 10)}.</span>
+        </p>
+        <fieldset class="segmented no-print">
+          <legend>Units</legend>
+          {(["metric", "us"] as const).map((u) => (
+            <label key={u}>
+              <input type="radio" name="sheet-units" value={u} checked={design.units === u} onChange={() => model.edit({ units: u })} />
+              <span>{u === "metric" ? "Metric" : "US"}</span>
+            </label>
+          ))}
+        </fieldset>
+        <div class="calc-actions no-print">
+          {origin !== "saved" ? (
+            <button type="button" class="button" onClick={model.saveCurrent}>
+              Save in this browser
+            </button>
+          ) : null}
+          <button type="button" class="button button--quiet" onClick={copyLink}>
+            Copy link to this design
+          </button>
+          <button type="button" class="button button--quiet" onClick={exportFile}>
+            Export file
+          </button>
+          <button type="button" class="button button--quiet" onClick={() => fileInput.current?.click()}>
+            Import file
+          </button>
+          <input ref={fileInput} type="file" accept=".json,application/json" class="visually-hidden" tabIndex={-1} aria-label="Design file to import" onChange={importFile} />
+          <button type="button" class="button button--quiet" onClick={() => window.print()}>
+            Print
+          </button>
+          <button type="button" class="button button--quiet" onClick={() => model.startNew("empty")}>
+            New design
+          </button>
+        </div>
+        <p class="calc-status no-print" role="status" aria-live="polite">
+          {model.status.value}
+        </p>
+        {link.value ? (
+          <div class="field no-print">
+            <label for="design-link">Link to this design</label>
+            <input id="design-link" type="text" readOnly value={link.value} ref={(el) => el?.select()} />
+          </div>
+        ) : null}
+      </section>
+
+      {model.problems.value.length ? (
+        <div class="calc-notices" role="status">
+          <p>Some values could not be read and were replaced; everything else was kept:</p>
+          <ul>
+            {model.problems.value.map((p, i) => (
+              <li key={i}>{p}</li>
+            ))}
+          </ul>
+        </div>
+      ) : null}
+
+      <Summary model={model} />
+      <ol class="checks">
+        {model.results.value.map((r) => (
+          <CheckCard key={r.id} result={r} model={model} />
+        ))}
+      </ol>
+      {missing.length ? (
+        <p class="sheet-missing">
+          Not in this design:{" "}
+          {missing.map((s, i) => (
+            <span key={s}>
+              {i > 0 ? ", " : ""}
+              <a href={`${base()}chapters/${SECTION_CHAPTER[s]}/`}>{SECTION_TITLES[s]}</a>
+            </span>
+          ))}
+          . Open a calculator and use “Save to design” to add it.
+        </p>
+      ) : null}
+      <div class="field no-print">
+        <label for="design-notes">Notes</label>
+        <textarea id="design-notes" rows={3} maxLength={4000} value={design.notes} onInput={(e) => model.edit({ notes: (e.currentTarget as HTMLTextAreaElement).value })} />
+      </div>
+      {design.notes ? <p class="print-only">Notes: {design.notes}</p> : null}
+      <DesignList model={model} />
+    </div>
+  );
+}

@@ -1,0 +1,50 @@
+/**
+ * Between a design and the calculators: the chapter that edits each section, and the query string
+ * that opens that calculator prefilled with the section's values.
+ */
+import type { Design, DesignSection } from "../../calc/design.ts";
+import { accelerometerPlacementInputs } from "../../calc/rotation.ts";
+import { headingDriftInputs } from "../../calc/heading.ts";
+import type { UnitSystem } from "../../calc/units.ts";
+import { permalinkQuery } from "../calc-ui/permalink.ts";
+
+/** The chapter (slug) whose calculator edits each section. */
+export const SECTION_CHAPTER: Record<DesignSection, string> = {
+  placement: "acceleration",
+  headingDrift: "heading-drift",
+  mass: "mass-layout",
+  fasteners: "fasteners",
+  rims: "rims",
+  drivetrain: "spin-up",
+};
+
+/** Element id of each chapter's calculator (the link's anchor). */
+const ANCHOR: Record<DesignSection, string> = {
+  placement: "placement-calculator",
+  headingDrift: "drift-calculator",
+  mass: "mass-calculator",
+  fasteners: "fastener-calculator",
+  rims: "rim-calculator",
+  drivetrain: "spin-up-calculator",
+};
+
+/**
+ * Path and query (relative to the site's base) that open the calculator for a section, prefilled
+ * with the design's values; for list sections, the item at `index`. Null when the section is empty.
+ */
+export function calculatorLink(design: Design, section: DesignSection, index: number | null, system: UnitSystem): string | null {
+  const path = `chapters/${SECTION_CHAPTER[section]}/`;
+  let query: string | null = null;
+  switch (section) {
+    case "placement":
+      query = design.placement ? permalinkQuery(accelerometerPlacementInputs, design.placement, system) : null;
+      break;
+    case "headingDrift":
+      query = design.headingDrift ? permalinkQuery(headingDriftInputs, design.headingDrift, system) : null;
+      break;
+    default:
+      query = null;
+  }
+  void index;
+  return query === null ? path : `${path}?${query}#${ANCHOR[section]}`;
+}

@@ -1,0 +1,63 @@
+/**
+ * "Save to design" on a calculator page: reads the calculator's state from the page's query
+ * string and writes it into the active design saved in this browser (making one if there is none).
+ * Loaded only when the button is pressed.
+ */
+import { newDesign, type Design, type DesignSection } from "../../calc/design.ts";
+import { readField, type InputSpecs } from "../../calc/inputs.ts";
+import { accelerometerPlacementInputs } from "../../calc/rotation.ts";
+import { headingDriftInputs } from "../../calc/heading.ts";
+import type { UnitSystem } from "../../calc/units.ts";
+import { decodeState } from "../calc-ui/permalink.ts";
+import { loadStore, newId, saveStore } from "./store.ts";
+
+/** SI values of a calculator from its query string; null with the reason when a field does not read. */
+export function valuesFromQuery<S extends InputSpecs>(specs: S, query: string, scope = ""): { values: { [K in keyof S]: number } } | { error: string } {
+  const decoded = decodeState(specs, query, scope);
+  const system: UnitSystem = decoded.system ?? "metric";
+  const values = {} as { [K in keyof S]: number };
+  for (const [name, spec] of Object.entries(specs)) {
+    const text = decoded.texts[name];
+    if (text === undefined) {
+      (values as Record<string, number>)[name] = spec.default;
+      continue;
+    }
+    const reading = readField(spec, text, system);
+    if (!reading.ok) return { error: reading.error.message };
+    (values as Record<string, number>)[name] = reading.value;
+  }
+  return { values };
+}
+
+/** Writes a section into a design; returns the new design. */
+export function withSection(design: Design, section: DesignSection, query: string): Design | { error: string } {
+  const stamp = new Date().toISOString();
+  switch (section) {
+    case "placement": {
+      const read = valuesFromQuery(accelerometerPlacementInputs, query);
+      return "error" in read ? read : { ...design, placement: read.values, modified: stamp };
+    }
+    case "headingDrift": {
+      const read = valuesFromQuery(headingDriftInputs, query);
+      return "error" in read ? read : { ...design, headingDrift: read.values, modified: stamp };
+    }
+    default:
+      return { error: "This calculator cannot be saved to a design yet." };
+  }
+}
+
+/** Saves the page's calculator state into the active design; returns a message for the page. */
+export function saveToActiveDesign(storage: Storage, section: DesignSection, query: string): string {
+  const { store } = loadStore(storage);
+  let entry = store.designs.find((d) => d.id === store.activeId);
+  if (!entry) {
+    entry = { id: newId(), design: newDesign("My robot") };
+    store.designs.push(entry);
+    store.activeId = entry.id;
+  }
+  const next = withSection(entry.design, section, query);
+  if ("error" in next) return `Not saved: ${next.error}`;
+  entry.design = next;
+  saveStore(storage, store);
+  return `Saved to the design “${next.name}”. The build sheet shows it.`;
+}

@@ -1,0 +1,71 @@
+/**
+ * A whole design in a link: the design's JSON, deflated (fflate), in base64url, with its length
+ * and a checksum so that a link cut short by a messaging app, or damaged on the way, is reported
+ * as such instead of being read wrongly. Form: `#d1.<length>.<data>.<checksum>`; the link ends in
+ * hex digits, which link detectors keep.
+ */
+import { deflateSync, inflateSync, strFromU8, strToU8 } from "fflate";
+import { designToText, readDesignText, type Design, type DesignReading } from "../../calc/design.ts";
+
+const PREFIX = "d1.";
+
+/** FNV-1a, 32 bits, as 8 hex digits: enough to tell a damaged link from a good one. */
+export function checksum(text: string): string {
+  let hash = 0x811c9dc5;
+  for (let i = 0; i < text.length; i += 1) {
+    hash ^= text.charCodeAt(i);
+    hash = Math.imul(hash, 0x01000193) >>> 0;
+  }
+  return hash.toString(16).padStart(8, "0");
+}
+
+function toBase64Url(bytes: Uint8Array): string {
+  let binary = "";
+  for (let i = 0; i < bytes.length; i += 1) binary += String.fromCharCode(bytes[i]!);
+  return btoa(binary).replace(/\+/g, "-").replace(/\//g, "_").replace(/=+$/, "");
+}
+
+function fromBase64Url(text: string): Uint8Array {
+  const base64 = text.replace(/-/g, "+").replace(/_/g, "/");
+  const binary = atob(base64 + "=".repeat((4 - (base64.length % 4)) % 4));
+  const bytes = new Uint8Array(binary.length);
+  for (let i = 0; i < binary.length; i += 1) bytes[i] = binary.charCodeAt(i);
+  return bytes;
+}
+
+/** The fragment (without "#") that carries a design. */
+export function designToFragment(design: Design): string {
+  const json = JSON.stringify(design);
+  const data = toBase64Url(deflateSync(strToU8(json), { level: 9 }));
+  return `${PREFIX}${data.length}.${data}.${checksum(data)}`;
+}
+
+export type FragmentReading = { kind: "none" } | { kind: "broken"; message: string } | { kind: "design"; reading: DesignReading };
+
+/** Reads a fragment ("d1.…", with or without "#"). Never throws. */
+export function designFromFragment(fragment: string): FragmentReading {
+  const text = fragment.replace(/^#/, "").trim();
+  if (!/^d\d/.test(text)) return { kind: "none" };
+  if (!text.startsWith(PREFIX)) {
+    return { kind: "broken", message: "This link holds a design in a format this handbook does not know (perhaps from a newer version). Ask for the design file instead." };
+  }
+  const [lengthText, data = "", sum = ""] = text.slice(PREFIX.length).split(".");
+  const length = Number(lengthText);
+  if (!Number.isInteger(length) || length <= 0) return { kind: "broken", message: "This design link is damaged: its length field is missing. Ask for the link again, or for the design file." };
+  if (data.length < length || sum.length < 8) {
+    return {
+      kind: "broken",
+      message: `This design link is cut short: it should carry ${length + 9} characters of design data, but ${Math.min(data.length + (sum ? sum.length + 1 : 0), length + 9)} arrived. Some messaging apps shorten long links; ask for the design file instead.`,
+    };
+  }
+  if (data.length !== length || !/^[A-Za-z0-9_-]+$/.test(data) || checksum(data) !== sum.slice(0, 8)) {
+    return { kind: "broken", message: "This design link is damaged: its check digits do not match its contents. Ask for the link again, or for the design file." };
+  }
+  try {
+    return { kind: "design", reading: readDesignText(strFromU8(inflateSync(fromBase64Url(data)))) };
+  } catch {
+    return { kind: "broken", message: "This design link is damaged: its contents cannot be unpacked. Ask for the link again, or for the design file." };
+  }
+}
+
+export { designToText };

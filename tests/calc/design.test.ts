@@ -1,0 +1,156 @@
+import { describe, expect, it } from "vitest";
+import fc from "fast-check";
+import {
+  accelerometerPlacementInputs,
+  demoDesign,
+  designToText,
+  DESIGN_VERSION,
+  migrateDesign,
+  newDesign,
+  readDesign,
+  readDesignText,
+  runChecks,
+  overallStatus,
+  buildSheetText,
+  type Design,
+} from "#calc";
+
+const demo = demoDesign();
+
+/** Any valid placement section: every value inside its declared range. */
+const placementArb = fc.record(
+  Object.fromEntries(
+    Object.entries(accelerometerPlacementInputs).map(([name, spec]) => [
+      name,
+      fc.double({ min: (spec as { minOpen?: boolean }).minOpen ? spec.min + (spec.max - spec.min) * 1e-6 : spec.min, max: spec.max, noNaN: true }),
+    ]),
+  ) as Record<keyof typeof accelerometerPlacementInputs, fc.Arbitrary<number>>,
+);
+const designArb = fc.record({
+  name: fc.string({ maxLength: 80 }),
+  notes: fc.string({ maxLength: 200 }),
+  units: fc.constantFrom("metric", "us") as fc.Arbitrary<"metric" | "us">,
+  placement: fc.option(placementArb, { nil: undefined }),
+}).map((d): Design => {
+  const design: Design = { ...newDesign(d.name, new Date("2026-01-01T00:00:00Z")), notes: d.notes, units: d.units };
+  if (d.placement) design.placement = d.placement;
+  return design;
+});
+
+describe("design file", () => {
+  it("reads the demo design back unchanged, with no problems", () => {
+    const reading = readDesignText(designToText(demo));
+    expect(reading).toEqual({ ok: true, design: demo, problems: [], migratedFrom: null });
+  });
+
+  it("survives save → load unchanged for any valid design (property)", () => {
+    fc.assert(
+      fc.property(designArb, (design) => {
+        const reading = readDesignText(designToText(design));
+        expect(reading.ok && reading.design).toEqual(design);
+        expect(reading.ok && reading.problems).toEqual([]);
+      }),
+      { numRuns: 300 },
+    );
+  });
+
+  it("refuses text that is not JSON, with the parser's reason", () => {
+    const reading = readDesignText("{ not json");
+    expect(reading.ok).toBe(false);
+    expect(!reading.ok && reading.problems[0]!.message).toMatch(/^is not valid JSON \(/);
+  });
+
+  it("refuses a file of another kind", () => {
+    expect(readDesign({ hello: 1 })).toEqual({
+      ok: false,
+      problems: [{ path: "format", message: 'is missing: this is not a Whirlbook design file (it has no "format": "whirlbook-design")', action: "not-read" }],
+    });
+    expect(readDesign({ format: "other", version: 1 })).toEqual({
+      ok: false,
+      problems: [{ path: "format", message: 'must be "whirlbook-design": this is not a Whirlbook design file', action: "not-read" }],
+    });
+  });
+
+  it("refuses a design from a newer version and says so", () => {
+    const reading = readDesign({ ...demo, version: DESIGN_VERSION + 1 });
+    expect(reading.ok).toBe(false);
+    expect(!reading.ok && reading.problems[0]!.message).toBe(`is ${DESIGN_VERSION + 1}, newer than this handbook reads (${DESIGN_VERSION}); open it with a newer version of the handbook`);
+  });
+
+  it("keeps every valid value of a partly invalid file and explains the rest, field by field", () => {
+    const broken = JSON.parse(designToText(demo));
+    broken.placement.radius = -3;
+    broken.placement.topSpeed = "fast";
+    broken.fasteners[1].size = "M99";
+    broken.mass.parts[2] = { name: "lid", shape: { kind: "blob" } };
+    broken.colour = "red";
+    const reading = readDesign(broken);
+    expect(reading.ok).toBe(true);
+    if (!reading.ok) return;
+    expect(reading.design.placement!.radius).toBe(accelerometerPlacementInputs.radius.default);
+    expect(reading.design.placement!.fullScale).toBe(demo.placement!.fullScale);
+    expect(reading.design.fasteners![1]!.size).toBe("M4");
+    expect(reading.design.fasteners![1]!.partMass).toBe(demo.fasteners![1]!.partMass);
+    expect(reading.design.mass!.parts).toHaveLength(demo.mass!.parts.length - 1);
+    const paths = reading.problems.map((p) => `${p.path}: ${p.action}`);
+    expect(paths).toEqual([
+      "colour: section-dropped",
+      "placement.topSpeed: default-used",
+      "placement.radius: default-used",
+      expect.stringMatching(/^mass\.parts\[2\]\.shape.*: item-dropped$/),
+      "fasteners[1].size: default-used",
+    ]);
+    expect(reading.problems[2]!.message).toBe("must be greater than 0 mm and at most 2000 mm (got -3); the default was used");
+    expect(reading.problems[4]!.message).toMatch(/^must be one of M2, M2\.5, M3, M4, M5, M6, M8, M10, M12 \(got "M99"\); "M4" was used$/);
+  });
+
+  it("migrates an older version forward step by step", () => {
+    const migrations = {
+      1: (d: Record<string, unknown>) => ({ ...d, renamed: d.old }),
+      2: (d: Record<string, unknown>) => ({ ...d, units: "metric" }),
+    };
+    expect(migrateDesign({ version: 1, old: 5 }, migrations, 3)).toEqual({ version: 3, old: 5, renamed: 5, units: "metric" });
+    expect(() => migrateDesign({ version: 1 }, {}, 2)).toThrow("no migration from design version 1");
+  });
+});
+
+describe("build-sheet checks", () => {
+  const results = runChecks(demo, "metric");
+
+  it("runs every check the demo design has inputs for", () => {
+    expect(results.map((r) => r.id)).toEqual(["placement", "headingDrift", "mass", "mass.sensor", "fasteners[0]", "fasteners[1]", "rims[0]", "drivetrain", "drivetrain.energy"]);
+  });
+
+  it("gives each check a status, a rule and a margin with numbers", () => {
+    for (const r of results) {
+      expect(["holds", "marginal", "fails", "info"]).toContain(r.status);
+      expect(r.rule.length).toBeGreaterThan(10);
+      expect(r.margin).toMatch(/\d/);
+      expect(JSON.stringify(r)).not.toMatch(/NaN|Infinity/);
+    }
+  });
+
+  it("agrees with the chapters' own entry points (same calc code)", () => {
+    const placement = results.find((r) => r.id === "placement")!;
+    expect(placement.status).toBe("holds");
+    // 2400 rpm at the sensor's true radius 33.7 mm: ω²r = 251.33² × 0.0337 ≈ 2130 m/s² ≈ 217 g
+    expect(placement.figure!.text).toBe("217 g");
+    expect(results.find((r) => r.id === "headingDrift")!.status).toBe("fails");
+    expect(overallStatus(results)).toBe("fails");
+  });
+
+  it("reports a check whose inputs cannot be computed as failing, with the reason", () => {
+    const design: Design = { ...demo, placement: { ...demo.placement!, lowSpeed: demo.placement!.topSpeed * 2 } };
+    const placement = runChecks(design).find((r) => r.id === "placement")!;
+    expect(placement.status).toBe("fails");
+    expect(placement.margin).toBe("Could not compute: lowSpeed must be at most the top speed (got 502.655 rad/s)");
+  });
+
+  it("prints a text sheet with every figure and the safety notice", () => {
+    const text = buildSheetText(demo, results);
+    expect(text).toContain("Build sheet: Demo: invented 1.4 kg whole-body spinner");
+    expect(text).toContain("HOLDS     Accelerometer placement: Sensor reading at top speed 217 g");
+    expect(text).toContain("Overall: fails");
+    expect(text).toContain("Safety:");
+  });
+});

@@ -1,0 +1,80 @@
+/**
+ * The command line: `whirlbook check design.json` with the same calc/ code as the site.
+ */
+import { describe, expect, it } from "vitest";
+import { spawnSync } from "node:child_process";
+import { mkdtempSync, writeFileSync } from "node:fs";
+import { tmpdir } from "node:os";
+import { join } from "node:path";
+import { fileURLToPath } from "node:url";
+import { demoDesign, designToText, type Design } from "../../calc/index.ts";
+
+const bin = fileURLToPath(new URL("../../bin/whirlbook.mjs", import.meta.url));
+const dir = mkdtempSync(join(tmpdir(), "whirlbook-cli-"));
+
+function write(name: string, text: string): string {
+  const file = join(dir, name);
+  writeFileSync(file, text);
+  return file;
+}
+
+function run(...args: string[]) {
+  const result = spawnSync(process.execPath, [bin, ...args], { encoding: "utf8" });
+  return { code: result.status, stdout: result.stdout, stderr: result.stderr };
+}
+
+const demoFile = write("demo.json", designToText(demoDesign()));
+
+describe("whirlbook check", () => {
+  it("prints the demo design's build sheet and exits 1 because a check fails", () => {
+    const { code, stdout } = run("check", demoFile);
+    expect(code).toBe(1);
+    expect(stdout).toContain("Build sheet: Demo: invented 1.4 kg whole-body spinner");
+    expect(stdout).toContain("HOLDS     Accelerometer placement: Sensor reading at top speed 217 g");
+    expect(stdout).toContain("FAILS     Heading drift");
+    expect(stdout).toMatch(/Overall: fails\n/);
+  });
+
+  it("exits 0 when nothing fails", () => {
+    const holding: Design = { ...demoDesign() };
+    delete holding.headingDrift;
+    const { code, stdout } = run("check", write("holding.json", designToText(holding)));
+    expect(stdout).toMatch(/Overall: (holds|marginal)\n/);
+    expect(code).toBe(0);
+  });
+
+  it("prints machine-readable JSON with --json", () => {
+    const { code, stdout } = run("check", demoFile, "--json");
+    expect(code).toBe(1);
+    const report = JSON.parse(stdout);
+    expect(report.overall).toBe("fails");
+    expect(report.checks.map((c: { id: string }) => c.id)).toContain("fasteners[0]");
+    expect(report.checks[0].figure).toMatchObject({ label: "Sensor reading at top speed", unit: "m/s²", text: "217 g" });
+  });
+
+  it("prints US units with --units us", () => {
+    const { stdout } = run("check", demoFile, "--units", "us");
+    expect(stdout).toContain("Sensor at 1.33 in");
+  });
+
+  it("explains a file that is not a design and exits 2", () => {
+    const { code, stderr } = run("check", write("bad.json", '{"format": "something-else", "version": 1}'));
+    expect(code).toBe(2);
+    expect(stderr).toContain('is not a design Whirlbook can read:\n  format must be "whirlbook-design": this is not a Whirlbook design file.');
+  });
+
+  it("explains broken JSON, a missing file and bad usage, each with exit 2", () => {
+    expect(run("check", write("broken.json", "{")).stderr).toMatch(/is not valid JSON/);
+    expect(run("check", join(dir, "nope.json"))).toMatchObject({ code: 2, stderr: expect.stringContaining("no such file") });
+    expect(run("frobnicate")).toMatchObject({ code: 2, stderr: expect.stringContaining('Unknown command "frobnicate"') });
+    expect(run("check", demoFile, "--units", "imperial")).toMatchObject({ code: 2, stderr: expect.stringContaining('--units must be "metric" or "us"') });
+  });
+
+  it("keeps the valid values of a partly invalid file and lists the problems", () => {
+    const broken = JSON.parse(designToText(demoDesign()));
+    broken.placement.radius = -1;
+    const { stdout } = run("check", write("partly.json", JSON.stringify(broken)));
+    expect(stdout).toContain("Read ");
+    expect(stdout).toContain("placement.radius must be greater than 0 mm and at most 2000 mm (got -1); the default was used.");
+  });
+});

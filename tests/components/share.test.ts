@@ -1,0 +1,100 @@
+import { describe, expect, it } from "vitest";
+import fc from "fast-check";
+import { demoDesign, newDesign } from "../../calc/index.ts";
+import { checksum, designFromFragment, designToFragment } from "../../components/design/share.ts";
+import { loadStore, saveStore, STORE_KEY, uniqueName } from "../../components/design/store.ts";
+
+class MemoryStorage implements Storage {
+  private data = new Map<string, string>();
+  get length() {
+    return this.data.size;
+  }
+  clear() {
+    this.data.clear();
+  }
+  getItem(key: string) {
+    return this.data.get(key) ?? null;
+  }
+  key(index: number) {
+    return [...this.data.keys()][index] ?? null;
+  }
+  removeItem(key: string) {
+    this.data.delete(key);
+  }
+  setItem(key: string, value: string) {
+    this.data.set(key, value);
+  }
+}
+
+describe("a design in a link", () => {
+  const fragment = designToFragment(demoDesign());
+
+  it("round-trips the demo design and ends in hex digits that link detectors keep", () => {
+    expect(designFromFragment(`#${fragment}`)).toEqual({ kind: "design", reading: { ok: true, design: demoDesign(), problems: [], migratedFrom: null } });
+    expect(fragment).toMatch(/^d1\.\d+\.[A-Za-z0-9_-]+\.[0-9a-f]{8}$/);
+    expect(fragment.length).toBeLessThan(4000);
+  });
+
+  it("round-trips any design (property)", () => {
+    fc.assert(
+      fc.property(fc.string({ maxLength: 80 }), fc.string({ maxLength: 300 }), (name, notes) => {
+        const design = { ...newDesign(name, new Date("2026-01-01T00:00:00Z")), notes };
+        const back = designFromFragment(designToFragment(design));
+        expect(back.kind === "design" && back.reading.ok && back.reading.design).toEqual(design);
+      }),
+      { numRuns: 200 },
+    );
+  });
+
+  it("says a link was cut short, for any cut (property)", () => {
+    fc.assert(
+      fc.property(fc.integer({ min: 4, max: fragment.length - 1 }), (cut) => {
+        const result = designFromFragment(fragment.slice(0, cut));
+        expect(result.kind).toBe("broken");
+        expect(result.kind === "broken" && result.message).toMatch(/cut short|damaged/);
+      }),
+    );
+    const cut = designFromFragment(fragment.slice(0, 200));
+    expect(cut.kind === "broken" && cut.message).toMatch(/^This design link is cut short: it should carry \d+ characters of design data, but \d+ arrived\./);
+  });
+
+  it("says a link was damaged when one character changed", () => {
+    const parts = fragment.split(".");
+    const data = parts[2]!;
+    const changed = data.slice(0, 10) + (data[10] === "A" ? "B" : "A") + data.slice(11);
+    expect(designFromFragment([parts[0], parts[1], changed, parts[3]].join("."))).toEqual({
+      kind: "broken",
+      message: "This design link is damaged: its check digits do not match its contents. Ask for the link again, or for the design file.",
+    });
+  });
+
+  it("ignores fragments that are not designs", () => {
+    expect(designFromFragment("#demo")).toEqual({ kind: "none" });
+    expect(designFromFragment("")).toEqual({ kind: "none" });
+  });
+
+  it("uses FNV-1a for the check digits (published test vector: 'a' → e40c292c)", () => {
+    expect(checksum("a")).toBe("e40c292c");
+    expect(checksum("")).toBe("811c9dc5");
+  });
+});
+
+describe("designs saved in the browser", () => {
+  it("keeps a damaged store aside instead of throwing it away", () => {
+    const storage = new MemoryStorage();
+    storage.setItem(STORE_KEY, "{oops");
+    const { store, warning } = loadStore(storage);
+    expect(store.designs).toEqual([]);
+    expect(warning).toContain("kept aside");
+    expect([...Array(storage.length).keys()].map((i) => storage.key(i)).some((k) => k?.startsWith(`${STORE_KEY}.unreadable.`))).toBe(true);
+  });
+
+  it("saves and loads designs and picks unique names", () => {
+    const storage = new MemoryStorage();
+    const store = { designs: [{ id: "a", design: demoDesign() }], activeId: "a" };
+    saveStore(storage, store);
+    expect(loadStore(storage)).toEqual({ store, warning: null });
+    expect(uniqueName(store, demoDesign().name)).toBe(`${demoDesign().name} (2)`);
+    expect(uniqueName(store, "Other")).toBe("Other");
+  });
+});
