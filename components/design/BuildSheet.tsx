@@ -117,6 +117,11 @@ export default function BuildSheet() {
     window.addEventListener("hashchange", onHash);
     return () => window.removeEventListener("hashchange", onHash);
   }, [model]);
+  // Once a design is saved here, the address no longer points at the demo or a shared link:
+  // reloading shows the saved design.
+  useEffect(() => {
+    if (model.current.value.origin === "saved" && window.location.hash) window.history.replaceState(window.history.state, "", window.location.pathname);
+  }, [model.current.value.origin]);
 
   const { design, origin } = model.current.value;
   const presentSections = new Set(model.results.value.map((r) => r.section));

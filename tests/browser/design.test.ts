@@ -1,0 +1,208 @@
+/**
+ * Pit-ready: the build sheet, saved designs, export and import, whole-design links, offline use,
+ * search and print, in Debian chromium.
+ */
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import type { Browser, BrowserContext, Page } from "playwright-core";
+import { readFileSync, readdirSync, writeFileSync, mkdtempSync } from "node:fs";
+import { createRequire } from "node:module";
+import { tmpdir } from "node:os";
+import { join } from "node:path";
+import { DIST_DIR, launchBrowser, serveDist } from "../support/browser.ts";
+
+let browser: Browser;
+let server: Awaited<ReturnType<typeof serveDist>>;
+const origin = () => server.url.replace(/\/$/, "");
+const axeSource = readFileSync(createRequire(import.meta.url).resolve("axe-core/axe.min.js"), "utf8");
+const scratch = mkdtempSync(join(tmpdir(), "whirlbook-design-"));
+
+beforeAll(async () => {
+  server = await serveDist();
+  browser = await launchBrowser();
+});
+afterAll(async () => {
+  await browser?.close();
+  await server?.close();
+});
+
+async function openSheet(context: BrowserContext, hash = "#demo"): Promise<Page> {
+  const page = await context.newPage();
+  await page.goto(`${origin()}/build-sheet/${hash}`);
+  await page.waitForSelector("astro-island:not([ssr])");
+  return page;
+}
+
+const checkFigure = (page: Page, id: string) => page.locator(`[data-out="${id}-figure"]`).textContent();
+
+describe("build sheet", () => {
+  it("runs every check on the demo design", async () => {
+    const context = await browser.newContext();
+    const page = await openSheet(context);
+    expect(await page.locator("[data-out=overall]").textContent()).toContain("At least one check fails.");
+    // Same figures as the command line and tests/calc/design.test.ts (same calc code).
+    expect(await checkFigure(page, "placement")).toBe("217 g");
+    expect(await page.locator("li.check").count()).toBe(9);
+    const link = await page.locator('[data-check="placement"] a').getAttribute("href");
+    expect(link).toMatch(/^\/chapters\/acceleration\/\?v=1&.*r=33\.\d+mm.*#placement-calculator$/);
+    await context.close();
+  });
+
+  it("saves a design, keeps it across a reload, duplicates it and deletes with undo", async () => {
+    const context = await browser.newContext();
+    const page = await openSheet(context);
+    await page.fill("#design-name", "Test robot");
+    await page.getByRole("button", { name: "Save in this browser" }).click();
+    await expect.poll(() => page.locator(".design-list li").count()).toBe(1);
+    await page.reload();
+    await page.waitForSelector("astro-island:not([ssr])");
+    await expect.poll(() => page.inputValue("#design-name")).toBe("Test robot");
+    await page.getByRole("button", { name: "Duplicate Test robot" }).click();
+    await expect.poll(() => page.locator(".design-name").allTextContents()).toEqual(["Test robot", "Test robot (copy)"]);
+    await page.getByRole("button", { name: "Delete Test robot (copy)" }).click();
+    await expect.poll(() => page.locator(".design-list li").count()).toBe(1);
+    await page.getByRole("button", { name: "Undo" }).click();
+    await expect.poll(() => page.locator(".design-name").allTextContents()).toEqual(["Test robot", "Test robot (copy)"]);
+    await context.close();
+  });
+
+  it("exports a file and imports it back; a partly invalid file keeps its valid values and never overwrites without asking", async () => {
+    const context = await browser.newContext({ acceptDownloads: true });
+    const page = await openSheet(context);
+    await page.getByRole("button", { name: "Save in this browser" }).click();
+    const [download] = await Promise.all([page.waitForEvent("download"), page.getByRole("button", { name: "Export file" }).click()]);
+    const exported = JSON.parse(readFileSync((await download.path())!, "utf8"));
+    expect(exported.name).toBe("Demo: invented 1.4 kg whole-body spinner");
+    exported.placement.radius = -1;
+    const file = join(scratch, "edited.json");
+    writeFileSync(file, JSON.stringify(exported));
+    await page.setInputFiles('input[type="file"]', file);
+    await expect.poll(() => page.locator(".calc-notices").first().textContent()).toContain("placement.radius must be greater than 0 mm");
+    expect(await checkFigure(page, "fasteners[0]")).toBe((await checkFigure(page, "fasteners[0]"))!);
+    await page.getByRole("button", { name: "Save in this browser" }).click();
+    await expect.poll(() => page.locator('[role="alertdialog"]').textContent()).toContain("already called");
+    await page.getByRole("button", { name: "Keep both" }).click();
+    await expect.poll(() => page.locator(".design-name").allTextContents()).toEqual(["Demo: invented 1.4 kg whole-body spinner", "Demo: invented 1.4 kg whole-body spinner (2)"]);
+    await page.setInputFiles('input[type="file"]', { name: "junk.json", mimeType: "application/json", buffer: Buffer.from("{ not json") });
+    await expect.poll(() => page.locator('[role="alert"]').first().textContent()).toContain("junk.json could not be opened: The file is not valid JSON");
+    expect(await page.locator(".design-list li").count()).toBe(2);
+    await context.close();
+  });
+
+  it("opens a copied whole-design link in a fresh browser with the same results, and explains a truncated one", async () => {
+    const context = await browser.newContext();
+    await context.grantPermissions(["clipboard-read", "clipboard-write"], { origin: origin() });
+    const page = await openSheet(context);
+    await page.fill("#design-name", "Shared robot");
+    await page.getByRole("button", { name: "Copy link to this design" }).click();
+    const link = await page.inputValue("#design-link");
+    expect(link).toMatch(/#d1\.\d+\.[A-Za-z0-9_-]+\.[0-9a-f]{8}$/);
+    const figures = await page.locator("[data-out$=-figure]").allTextContents();
+    await context.close();
+
+    const fresh = await browser.newContext();
+    const other = await fresh.newPage();
+    await other.goto(link);
+    await other.waitForSelector("astro-island:not([ssr])");
+    await expect.poll(() => other.inputValue("#design-name")).toBe("Shared robot");
+    expect(await other.locator("[data-out$=-figure]").allTextContents()).toEqual(figures);
+    expect(await other.locator(".design-list li").count()).toBe(0);
+    await other.goto(link.slice(0, link.length - 300));
+    await other.reload();
+    await other.waitForSelector("astro-island:not([ssr])");
+    await expect.poll(() => other.locator('[role="alert"]').first().textContent()).toContain("This design link is cut short");
+    await fresh.close();
+  });
+
+  it("takes a calculator's state into the active design with “Save to design”", async () => {
+    const context = await browser.newContext();
+    const page = await context.newPage();
+    await page.goto(`${origin()}/chapters/acceleration/?v=1&rpm=3000rpm&r=12mm&low=500rpm&res=2pct`);
+    await page.waitForSelector("astro-island:not([ssr])");
+    await page.getByRole("button", { name: "Save to design" }).click();
+    await expect.poll(() => page.locator(".calc-status").textContent()).toContain("Saved to the design “My robot”");
+    const sheet = await openSheet(context, "");
+    await expect.poll(() => sheet.inputValue("#design-name")).toBe("My robot");
+    // 3000 rpm at 12 mm: 314.16² × 0.012 = 1184 m/s² = 121 g (as on the chapter page).
+    await expect.poll(() => checkFigure(sheet, "placement")).toBe("121 g");
+    await context.close();
+  });
+
+  it("prints on at most two A4 or Letter pages", async () => {
+    const context = await browser.newContext();
+    const page = await openSheet(context);
+    await page.emulateMedia({ media: "print", colorScheme: "light" });
+    for (const format of ["A4", "Letter"] as const) {
+      const pdf = await page.pdf({ format, printBackground: false });
+      const pages = (pdf.toString("latin1").match(/\/Type\s*\/Page[^s]/g) ?? []).length;
+      expect(pages, format).toBeGreaterThanOrEqual(1);
+      expect(pages, format).toBeLessThanOrEqual(2);
+    }
+    const text = await page.locator("main").innerText();
+    expect(text).toContain("Demo: invented 1.4 kg whole-body spinner");
+    expect(text).toContain("Safety.");
+    await context.close();
+  });
+});
+
+describe("offline", () => {
+  it("serves every page, calculator, the build sheet and search with the network off after one visit", async () => {
+    const context = await browser.newContext();
+    const page = await context.newPage();
+    await page.goto(`${origin()}/`);
+    await page.evaluate(async () => {
+      await navigator.serviceWorker.ready;
+    });
+    await page.reload();
+    await expect.poll(() => page.evaluate(() => Boolean(navigator.serviceWorker.controller))).toBe(true);
+    await context.setOffline(true);
+    const pages = ["/", "/build-sheet/", "/search/", "/404.html", ...readdirSync(join(DIST_DIR, "chapters")).map((slug) => `/chapters/${slug}/`)];
+    for (const path of pages) {
+      const response = await page.goto(`${origin()}${path}?v=1`);
+      expect(response?.ok(), path).toBe(true);
+      expect(await page.locator("h1").count(), path).toBeGreaterThan(0);
+      if ((await page.locator("astro-island").count()) > 0) await page.waitForSelector("astro-island:not([ssr])", { timeout: 10_000 });
+    }
+    await page.goto(`${origin()}/chapters/acceleration/?v=1&rpm=3000rpm&r=12mm`);
+    await page.waitForSelector("astro-island:not([ssr])");
+    expect(await page.locator('[data-out="accel-top"]').textContent()).toBe("121 g");
+    await page.goto(`${origin()}/search/?q=headroom`);
+    await expect.poll(() => page.locator("#search-results li").count(), { timeout: 10_000 }).toBeGreaterThan(0);
+    await context.close();
+  });
+});
+
+describe("search", () => {
+  it("finds a term and lands on the section that holds it", async () => {
+    const context = await browser.newContext();
+    const page = await context.newPage();
+    await page.goto(`${origin()}/search/?q=headroom`);
+    await expect.poll(() => page.locator("#search-results li").count(), { timeout: 10_000 }).toBeGreaterThan(0);
+    const href = await page.locator("#search-results li a").first().getAttribute("href");
+    expect(href).toMatch(/^\/chapters\/acceleration\/#how-far-out-the-sensor-may-go$/);
+    await page.fill("#search-input", "balance grade");
+    await expect.poll(() => page.locator("#search-results li a").first().getAttribute("href"), { timeout: 10_000 }).toMatch(/mass-layout/);
+    await context.close();
+  });
+});
+
+describe("accessibility (axe-core) of the pit pages", () => {
+  for (const path of ["/build-sheet/#demo", "/search/?q=headroom"]) {
+    for (const colorScheme of ["light", "dark"] as const) {
+      it(`finds no violations on ${path} (${colorScheme})`, async () => {
+        const context = await browser.newContext({ colorScheme, viewport: { width: 390, height: 844 } });
+        const page = await context.newPage();
+        await page.goto(`${origin()}${path}`);
+        if ((await page.locator("astro-island").count()) > 0) await page.waitForSelector("astro-island:not([ssr])");
+        await page.waitForTimeout(300);
+        await page.addScriptTag({ content: axeSource });
+        const result = await page.evaluate(async () => {
+          // @ts-expect-error axe is injected above
+          const r = await window.axe.run(document, { resultTypes: ["violations"] });
+          return r.violations.map((v: { id: string; nodes: { target: string[] }[] }) => `${v.id}: ${v.nodes.map((n) => n.target.join(" ")).join(", ")}`);
+        });
+        expect(result).toEqual([]);
+        await context.close();
+      });
+    }
+  }
+});
