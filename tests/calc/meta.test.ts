@@ -63,6 +63,12 @@ describe("calc/ documentation", () => {
     },
   );
 
+  it("lists every exported function in the README's calculation-module section (npm run docs:api)", () => {
+    const readme = readFileSync(fileURLToPath(new URL("../../README.md", import.meta.url)), "utf8");
+    const missing = functions.filter((f) => !["index.ts", "sources.ts", "source-type.ts", "constants.ts"].includes(f.module) && !readme.includes(`\`${f.name}(`));
+    expect(missing.map((f) => `${f.module}: ${f.name}`)).toEqual([]);
+  });
+
   it("has a complete entry for every bibliography key", () => {
     for (const [key, source] of Object.entries(SOURCES)) {
       expect(key).toMatch(/^[a-z0-9]+(?:[-.][a-z0-9]+)*$/);
