@@ -7,6 +7,7 @@
  * quantiles) and a compact, versioned text form of the rows for a URL. SI in and out.
  */
 import { CalcInputError, requireFinite, requireInRange, requireNonNegative, requirePositive } from "./errors.ts";
+import { defineInputs } from "./inputs.ts";
 import { fromSI, toSI } from "./units.ts";
 
 // ---------------------------------------------------------------------------------------------
@@ -306,6 +307,10 @@ export interface SpikeReport {
   scale: number;
   /** How σ̂ was found: 1.4826·MAD; 1.2533·mean absolute deviation when the MAD is 0; or the resolution floor. */
   scaleFrom: ScaleSource;
+  /** Median of the Theil–Sen residuals, the centre the modified z-scores are taken from [y-unit]. */
+  center: number;
+  /** Residuals outside [center − k·σ̂, center + k·σ̂] are flagged [y-unit]. */
+  bounds: ConfidenceInterval;
   /** (r_i − median r)/σ̂ for each point [-]. */
   modifiedZ: number[];
   /** Indices (0-based, input order) of points with |modified z| > k. */
@@ -625,7 +630,16 @@ function fitChecked(
     leastSquares,
     theilSen,
     huber,
-    spikes: { threshold: spikeThreshold, scale: robust.scale, scaleFrom: robust.from, modifiedZ, flagged },
+    spikes: {
+      threshold: spikeThreshold,
+      scale: robust.scale,
+      scaleFrom: robust.from,
+      center: robust.center,
+      // iglewicz-hoaglin-1993: |r − median r| > k·σ̂ flags a point
+      bounds: { low: robust.center - spikeThreshold * robust.scale, high: robust.center + spikeThreshold * robust.scale },
+      modifiedZ,
+      flagged,
+    },
     leastSquaresWithoutSpikes,
   };
   // Values so close together or so extreme that the sums underflow or overflow cannot be fitted.
@@ -704,6 +718,65 @@ export function fitCalibration(
         ? { line: fit.leastSquaresWithoutSpikes, method: "least-squares-without-spikes" as const }
         : { line: fit.theilSen, method: "theil-sen" as const };
   return { ...fit, radius: chosen.line.slope, bias: chosen.line.intercept, method: chosen.method, speedSquared };
+}
+
+/** Inputs of the calibration calculator besides the readings themselves, in SI. */
+export const calibrationFitInputs = /* @__PURE__ */ defineInputs({
+  spikeThreshold: {
+    label: "Spike threshold k",
+    kind: "fraction",
+    min: 0,
+    minOpen: true,
+    max: 100,
+    default: 3.5,
+    unit: { metric: "frac", us: "frac" },
+    urlKey: "k",
+    help: "A reading is flagged when its residual lies more than k robust standard deviations (1.4826 × MAD) from the median residual.",
+  },
+  confidence: {
+    label: "Confidence level",
+    kind: "fraction",
+    min: 0.5,
+    max: 0.999,
+    default: 0.95,
+    urlKey: "cl",
+    help: "How sure the intervals around the fitted radius and offset should be.",
+  },
+});
+
+/**
+ * Invented calibration readings for the chapter's demo robot (not a real machine and not
+ * measured): [reference speed (rpm), radial reading (g)]. Made from a = 12.7 mm · ω² + 0.2 g,
+ * rounded to 0.01 g, with scatter of up to ±0.24 g written in by hand and one reading at 2000 rpm
+ * made 6 g high, as a knock against the test stand would.
+ */
+export const DEMO_CALIBRATION_READINGS: readonly (readonly [number, number])[] = [
+  [600, 5.37],
+  [800, 9.18],
+  [1000, 14.54],
+  [1200, 20.6],
+  [1400, 28.26],
+  [1600, 36.39],
+  [1800, 46.3],
+  [2000, 63.01],
+  [2200, 68.7],
+  [2400, 82.13],
+  [2600, 96.12],
+  [2800, 111.73],
+];
+
+/**
+ * The demo readings in SI (unit conversion only: nist-sp811 rpm, cgpm-1901 standard gravity).
+ *
+ * Formula: ω = n·2π/60, a = a_[g]·g_n
+ *
+ * @returns the rows of `DEMO_CALIBRATION_READINGS` [rad/s, m/s²]
+ *
+ * Example: the first row, 600 rpm and 5.37 g, is 62.83 rad/s and 52.66 m/s².
+ * Sources: nist-sp811, cgpm-1901.
+ */
+export function demoCalibrationRows(): CalibrationRow[] {
+  return DEMO_CALIBRATION_READINGS.map(([rpm, g]) => ({ angularSpeed: toSI(rpm, "rpm"), acceleration: toSI(g, "gn") }));
 }
 
 /** A point of the calibration plot. */

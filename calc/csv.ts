@@ -288,3 +288,31 @@ export function parseCalibrationCsv(text: string, options: CalibrationCsvOptions
   }
   return result;
 }
+
+/**
+ * Writes calibration rows as text that `parseCalibrationCsv` reads back: a header naming the units,
+ * then one "speed,reading" line per row, six significant figures (rfc-4180 §2 layout; units by
+ * nist-sp811 and cgpm-1901 through calc/units.ts).
+ *
+ * Formula: value = SI value / unit factor, to six significant figures
+ *
+ * @param rows readings [rad/s, m/s²]; each value finite
+ * @param options speedUnit (default "rpm") and accelerationUnit (default "gn") to write in
+ * @returns the text, e.g. "speed (rpm),reading (g)\n1200,31.5\n"
+ *
+ * Example: one row of 125.664 rad/s and 308.911 m/s² → "speed (rpm),reading (g)\n1200,31.5\n".
+ * Sources: rfc-4180, nist-sp811, cgpm-1901.
+ */
+export function calibrationRowsToCsv(rows: readonly CalibrationRow[], options: CalibrationCsvOptions = {}): string {
+  const speedUnit = options.speedUnit ?? "rpm";
+  const accelerationUnit = options.accelerationUnit ?? "gn";
+  requireUnitOfKind("speedUnit", speedUnit, "angularSpeed");
+  requireUnitOfKind("accelerationUnit", accelerationUnit, "acceleration");
+  const write = (value: number, unit: UnitId, param: string): string => {
+    const n = Number((value / UNITS[unit].factor).toPrecision(6));
+    if (!Number.isFinite(n)) throw new CalcInputError({ param, value, expected: "a finite number", unit: "" });
+    return String(n);
+  };
+  const lines = rows.map((row, i) => `${write(row.angularSpeed, speedUnit, `rows[${i}].angularSpeed`)},${write(row.acceleration, accelerationUnit, `rows[${i}].acceleration`)}`);
+  return `speed (${UNITS[speedUnit].symbol}),reading (${UNITS[accelerationUnit].symbol})\n${lines.map((l) => `${l}\n`).join("")}`;
+}

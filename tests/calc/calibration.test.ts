@@ -4,8 +4,12 @@ import { errorFunction, linearRegression, rSquared } from "simple-statistics";
 // @ts-expect-error: the package ships no type declarations
 import { TheilSenRegression } from "ml-regression-theil-sen";
 import { CalcInputError, isSourceKey, rpmToRadPerSecond, STANDARD_GRAVITY } from "#calc";
+import { checkValue } from "../../calc/inputs.ts";
 import {
   calibrationCurve,
+  calibrationFitInputs,
+  DEMO_CALIBRATION_READINGS,
+  demoCalibrationRows,
   decodeCalibrationRows,
   encodeCalibrationRows,
   fitCalibration,
@@ -350,6 +354,41 @@ describe("calibration fit", () => {
   });
 });
 
+describe("the calibration calculator's inputs and demo readings", () => {
+  it("declares defaults that pass their own checks, with labels, help and short unique URL keys", () => {
+    const specs = Object.values(calibrationFitInputs);
+    expect(new Set(specs.map((s) => s.urlKey)).size).toBe(specs.length);
+    for (const spec of specs) {
+      expect(checkValue(spec, spec.default, "metric")).toBeNull();
+      expect(spec.help!.length).toBeGreaterThan(10);
+    }
+  });
+
+  it("converts the invented demo readings to SI", () => {
+    const rows = demoCalibrationRows();
+    expect(rows).toHaveLength(DEMO_CALIBRATION_READINGS.length);
+    // 600 rpm = 62.832 rad/s; 5.37 g = 52.662 m/s² (hand: 600·π/30, 5.37 × 9.80665)
+    expect(rows[0]!.angularSpeed).toBeCloseTo(62.83185307, 7);
+    expect(rows[0]!.acceleration).toBeCloseTo(52.6617105, 6);
+  });
+
+  it("flags the planted knock at 2000 rpm and, without it, recovers the 12.7 mm and 0.2 g the readings were made from", () => {
+    const f = fitCalibration(demoCalibrationRows());
+    expect(f.spikes.flagged).toEqual([7]);
+    expect(DEMO_CALIBRATION_READINGS[7]![0]).toBe(2000);
+    expect(f.method).toBe("least-squares-without-spikes");
+    // the flagged residual lies outside the bounds, every other one inside
+    const r = f.theilSen.residuals;
+    r.forEach((ri, i) => expect(ri < f.spikes.bounds.low || ri > f.spikes.bounds.high, `reading ${i}`).toBe(i === 7));
+    expect(f.spikes.bounds.high - f.spikes.center).toBeCloseTo(3.5 * f.spikes.scale, 12);
+    // within two standard errors of the truth (the hand-written scatter is up to ±0.24 g)
+    expect(Math.abs(f.radius - 0.0127)).toBeLessThan(2 * f.leastSquaresWithoutSpikes!.slopeStdError);
+    expect(Math.abs(f.bias - 0.2 * STANDARD_GRAVITY)).toBeLessThan(2 * f.leastSquaresWithoutSpikes!.interceptStdError);
+    // the spike drags the plain least-squares slope away
+    expect(Math.abs(f.leastSquares.slope - 0.0127)).toBeGreaterThan(Math.abs(f.radius - 0.0127));
+  });
+});
+
 describe("rows as text for a URL", () => {
   it("writes rpm:g pairs behind a version tag", () => {
     const rows: CalibrationRow[] = [
@@ -415,6 +454,13 @@ describe("source keys", () => {
 });
 
 describe("regression pins (COMPUTED, not outside references)", () => {
+  it("pins the demo calibration: 12.7031 mm and 0.2049 g without the spike", () => {
+    const f = fitCalibration(demoCalibrationRows());
+    expect(f.radius * 1000).toBeCloseTo(12.703056937531846, 10);
+    expect(f.bias / STANDARD_GRAVITY).toBeCloseTo(0.20488665365560768, 10);
+    expect(f.leastSquares.slope * 1000).toBeCloseTo(12.752713482618729, 10);
+  });
+
   it("pins Anscombe I to full precision", () => {
     const f = fitStraightLine({ x: ANSCOMBE_X, y: ANSCOMBE_Y1 });
     expect(f.leastSquares.slope).toBeCloseTo(0.5000909090909091, 13);

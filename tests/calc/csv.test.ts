@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
 import { CalcInputError, isSourceKey, rpmToRadPerSecond, STANDARD_GRAVITY } from "#calc";
-import { parseCalibrationCsv } from "../../calc/csv.ts";
+import { calibrationRowsToCsv, parseCalibrationCsv } from "../../calc/csv.ts";
 import { readFileSync } from "node:fs";
 
 const rpm = rpmToRadPerSecond;
@@ -158,6 +158,29 @@ describe("reading calibration text: properties", () => {
       }),
       { numRuns: 200 },
     );
+  });
+});
+
+describe("writing rows back as text", () => {
+  it("writes a header naming the units and one line per row", () => {
+    expect(calibrationRowsToCsv([{ angularSpeed: rpm(1200), acceleration: g(31.5) }])).toBe("speed (rpm),reading (g)\n1200,31.5\n");
+    expect(calibrationRowsToCsv([], { speedUnit: "rad/s", accelerationUnit: "m/s2" })).toBe("speed (rad/s),reading (m/s²)\n");
+  });
+
+  it("is read back by the parser, header and all, to six significant figures (fast-check)", () => {
+    const row = fc.record({ angularSpeed: fc.double({ min: 0, max: 5000, noNaN: true }), acceleration: fc.double({ min: -1e4, max: 1e5, noNaN: true }) });
+    const units = fc.constantFrom(["rpm", "gn"], ["rps", "m/s2"], ["rad/s", "ft/s2"]) as fc.Arbitrary<[ "rpm" | "rps" | "rad/s", "gn" | "m/s2" | "ft/s2"]>;
+    fc.assert(
+      fc.property(fc.array(row, { maxLength: 30 }), units, (rows, [speedUnit, accelerationUnit]) => {
+        const back = parseCalibrationCsv(calibrationRowsToCsv(rows, { speedUnit, accelerationUnit }));
+        const close = (a: number, b: number) => Math.abs(a - b) <= 5e-6 * Math.abs(b) + 1e-300;
+        return back.problems.length === 0 && back.rows.length === rows.length && back.rows.every((r, i) => close(r.angularSpeed, rows[i]!.angularSpeed) && close(r.acceleration, rows[i]!.acceleration));
+      }),
+    );
+  });
+
+  it("refuses a unit of the wrong kind by name", () => {
+    expect(() => calibrationRowsToCsv([], { speedUnit: "mm" })).toThrow(CalcInputError);
   });
 });
 

@@ -25,7 +25,9 @@ import {
   lowestEstimableSpeed,
   medianFilterDelay,
   onTimeForArc,
+  opposedSensorsCheck,
   opposedSensorsDrift,
+  opposedSensorsInputs,
   rpmToRadPerSecond,
   smoothingTradeoffSeries,
   speedRangeWithinBudget,
@@ -313,6 +315,8 @@ describe("heading drift: limiting cases and structure", () => {
     expect(b.radius / a.radius).toBeCloseTo(3, 12);
     expect(b.scale / a.scale).toBeCloseTo(3, 12);
     expect(b.bias / a.bias).toBeCloseTo(1 / 3, 12);
+    expect(b.speedProportional / a.speedProportional).toBeCloseTo(3, 12);
+    expect(a.speedProportional).toBeCloseTo(a.radius + a.scale + a.tilt, 15);
   });
 
   it("reports no estimate (not NaN) below the speed where the corrected reading reaches zero", () => {
@@ -428,6 +432,8 @@ describe("heading drift: the calculator entry", () => {
   it("runs on its declared defaults and finds them over budget", () => {
     const r = headingDrift(defaultsOf(headingDriftInputs));
     expect(r.verdict).toBe("over-budget");
+    // margin = budget − |drift| = 10 − 366.75 °/s
+    expect(toDeg(r.budgetMargin!)).toBeCloseTo(10 - 366.75202097162, 8);
     expect(r.series).toHaveLength(61);
     expect(r.rateNoise).toBe(0);
   });
@@ -703,8 +709,38 @@ describe("two opposed sensors", () => {
   });
 });
 
+describe("two opposed sensors: the calculator entry", () => {
+  const defaults = defaultsOf(opposedSensorsInputs);
+
+  it("compares one sensor with the pair over ±e: the worst single-sensor drift sits where the centre moves toward it", () => {
+    // r₁ = r₂ = 12 mm, e = 0.5 mm, 2000 rpm: ω(√(11.5/12) − 1) = −4.4097 rad/s (hand: 209.44 × (0.978945 − 1))
+    const r = opposedSensorsCheck(defaults);
+    expect(r.singleWorstDriftRate!).toBeCloseTo(4.409746715664806, 10);
+    expect(toDeg(r.singleWorstPerRevolution!)).toBeCloseTo(7.58, 2);
+    expect(r.pairWorstDriftRate).toBeLessThanOrEqual(1e-12);
+    expect(r.towardSensor2.sensor1.driftRate!).toBeCloseTo(4.318794787657803, 10);
+  });
+
+  it("gives no single-sensor figure (not NaN) once the uncertainty reaches the sensor's radius", () => {
+    const r = opposedSensorsCheck({ ...defaults, offset: 0.013 });
+    expect(r.singleWorstDriftRate).toBeNull();
+    expect(r.singleWorstPerRevolution).toBeNull();
+    expect(r.pairWorstDriftRate).toBeLessThanOrEqual(1e-12);
+  });
+
+  it("is exact for a perfectly centred robot", () => {
+    const r = opposedSensorsCheck({ ...defaults, offset: 0 });
+    expect(r.singleWorstDriftRate).toBe(0);
+  });
+
+  it("rejects an input outside its declaration by name", () => {
+    expect(() => opposedSensorsCheck({ ...defaults, radius2: 0 })).toThrow(CalcInputError);
+    expect(() => opposedSensorsCheck({ ...defaults, offset: -0.001 })).toThrow("offset must be at least 0 m and at most 0.1 m (got -0.001 m)");
+  });
+});
+
 describe("input declarations", () => {
-  const all = { headingDriftInputs, headingTimingInputs, headingSmoothingInputs };
+  const all = { headingDriftInputs, headingTimingInputs, headingSmoothingInputs, opposedSensorsInputs };
   it.each(Object.entries(all))("%s: every default passes its own check, with a label, help and a short unique URL key", (_, specs) => {
     const keys = Object.values(specs).map((s) => s.urlKey);
     expect(new Set(keys).size).toBe(keys.length);
@@ -718,8 +754,8 @@ describe("input declarations", () => {
 });
 
 describe("source keys", () => {
-  it("names only keys that exist in the bibliography, in every doc comment of calc/heading.ts", () => {
-    const text = readFileSync(new URL("../../calc/heading.ts", import.meta.url), "utf8");
+  it("names only keys that exist in the bibliography, in every doc comment of calc/heading-drift.ts and calc/heading-timing.ts", () => {
+    const text = ["heading-drift.ts", "heading-timing.ts"].map((f) => readFileSync(new URL(`../../calc/${f}`, import.meta.url), "utf8")).join("\n");
     const keys = [...text.matchAll(/Sources: ([^\n]+)/g)].flatMap((m) => m[1]!.replace(/\.$/, "").split(/,\s*/));
     expect(keys.length).toBeGreaterThan(10);
     for (const key of keys) expect(isSourceKey(key.trim()), key).toBe(true);

@@ -1,0 +1,175 @@
+/**
+ * The heading timing-and-smoothing calculator: what the loop period, latency and beacon on-time
+ * cost in heading at top speed and what meets the targets; then what an exponential moving average
+ * (after an optional running median) costs in lag during a spin-up and does to one spike, with a
+ * comparison of median windows and a trade-off plot over the smoothing factor α.
+ */
+import { useEffect, useMemo } from "preact/hooks";
+import type { HeadingTimingResult, headingSmoothingInputs, headingTimingInputs } from "../../calc/heading-timing.ts";
+import { formatNumber, formatQuantity, fromSI } from "../../calc/units.ts";
+import { Toolbar } from "../calc-ui/Toolbar.tsx";
+import { Notices } from "../calc-ui/Notices.tsx";
+import { syncWithUrl } from "../calc-ui/url-sync.ts";
+import { createTimingModel, type TimingModel } from "./timing-model.ts";
+import { degPerSecond, degrees, inSystem, plain } from "./format.ts";
+import { DataTable, Empty, FieldsForm, Outputs, Verdict, type FieldGroup } from "./ui.tsx";
+import { XYChart } from "./XYChart.tsx";
+import "./heading.css";
+
+export interface HeadingTimingCalculatorProps {
+  /** Element id of the calculator (the link's anchor). */
+  id?: string;
+}
+
+const TIMING_GROUPS: FieldGroup<typeof headingTimingInputs>[] = [
+  { legend: "Robot and loop", names: ["topSpeed", "loopRate", "latency", "onTime"] },
+  { legend: "Targets at top speed", names: ["targetStep", "targetArc"] },
+];
+const SMOOTHING_GROUPS: FieldGroup<typeof headingSmoothingInputs>[] = [
+  { legend: "Filter", names: ["sampleRate", "smoothingFactor", "medianLength"] },
+  { legend: "Spin-up", names: ["spinUpAcceleration", "speedChange"] },
+  { legend: "One spike", names: ["speed", "assumedRadius", "spike"] },
+];
+
+const deg = (v: number) => degrees(v, false);
+
+function timingVerdict(r: HeadingTimingResult, t: { targetStep: number; targetArc: number }, rpm: string, time: (v: number) => string) {
+  const step = `each loop update turns ${deg(r.headingStep)} (allowed ${deg(t.targetStep)})`;
+  const arc = `the beacon sweeps ${deg(r.arcWidth)} (wanted ${deg(t.targetArc)} at most)`;
+  const fixStep = `run the loop at ${formatQuantity(r.loopRateNeeded, "frequency").text} or faster`;
+  const fixArc = `light the beacon for ${time(r.onTimeNeeded)} or less`;
+  switch (r.verdict) {
+    case "ok":
+      return { tone: "ok" as const, title: "Timing holds", detail: `At ${rpm} ${step}; ${arc}.` };
+    case "step-too-large":
+      return { tone: "bad" as const, title: "Heading step too large", detail: `At ${rpm} ${step}: ${fixStep}.` };
+    case "arc-too-wide":
+      return { tone: "bad" as const, title: "Beacon arc too wide", detail: `At ${rpm} ${arc}: ${fixArc}.` };
+    case "both":
+      return { tone: "bad" as const, title: "Step too large and arc too wide", detail: `At ${rpm} ${step}: ${fixStep}; ${arc}: ${fixArc}.` };
+  }
+}
+
+function TimingResults({ model }: { model: TimingModel }) {
+  const { result, error } = model.timingOutcome.value;
+  const values = model.timing.values.value;
+  if (!result || !values) return <Empty error={error} />;
+  const system = model.timing.system.value;
+  const time = (v: number) => inSystem(v, "time", system);
+  const verdict = timingVerdict(result, values, inSystem(values.topSpeed, "angularSpeed", system, 4), time);
+  return (
+    <div class="calc-results" aria-live="polite">
+      <Verdict tone={verdict.tone} title={verdict.title}>{verdict.detail}</Verdict>
+      <Outputs
+        items={[
+          ["Loop period", "loop-period", time(result.loopPeriod)],
+          ["Heading step per update", "step", deg(result.headingStep)],
+          ["Updates per revolution", "updates-rev", formatNumber(result.updatesPerRevolution)],
+          ["Heading lag from latency (an offset, not a drift)", "lag", deg(result.latencyLag)],
+          ["Beacon arc", "arc", deg(result.arcWidth)],
+          ["Loop rate for the step wanted", "loop-needed", formatQuantity(result.loopRateNeeded, "frequency", { system }).text],
+          ["On-time for the arc wanted", "on-needed", time(result.onTimeNeeded)],
+        ]}
+      />
+      {result.onTimeBelowLoopPeriod ? <p class="calc-note" data-out="timer-note">The on-time is shorter than one loop period: switch the beacon from a timer, not from the loop.</p> : null}
+    </div>
+  );
+}
+
+function SmoothingResults({ model, id }: { model: TimingModel; id: string }) {
+  const { result, error, medians } = model.smoothingOutcome.value;
+  const values = model.smoothing.values.value;
+  if (!result || !values) return <Empty error={error} />;
+  const system = model.smoothing.system.value;
+  const time = (v: number) => inSystem(v, "time", system);
+  const speed = (v: number) => inSystem(v, "angularSpeed", system, 3);
+  const removed = result.spikesRejectedPerWindow > 0 ? " (the median removes it)" : "";
+  return (
+    <div class="calc-results" aria-live="polite">
+      <Verdict tone={result.headingErrorAfterSpinUp > 0 ? "warn" : "ok"} title={`${time(result.totalDelay)} of delay`}>
+        During the spin-up the heading falls behind at {degPerSecond(-result.driftRateDuringSpinUp, false)}; once the speed settles it is {deg(result.headingErrorAfterSpinUp)} behind, unless the firmware corrects it.
+      </Verdict>
+      <Outputs
+        items={[
+          ["Time constant τ (≈ Δt/α)", "tau", `${time(result.timeConstant)} (≈ ${time(result.timeConstantApproximation)})`],
+          ["Delay: average + median", "delay", `${time(result.emaLag)} + ${time(result.medianDelay)}`],
+          ["Drift during the spin-up", "spinup-drift", degPerSecond(result.driftRateDuringSpinUp)],
+          ["Spin-up lasts", "spinup-time", time(result.spinUpDuration)],
+          ["Heading error after the spin-up", "heading-after", deg(result.headingErrorAfterSpinUp)],
+          ["Heading error at the end of the ramp", "heading-ramp-end", deg(result.headingErrorAtRampEnd)],
+          ["Noise left after the average", "noise", formatQuantity(result.noiseFactor, "fraction").text],
+          ["One spike: speed error in that sample", "spike-rate", speed(result.spikeRateError)],
+          ["One spike: first step of the average", "spike-shift", `${speed(result.spikeFirstShift)}${removed}`],
+          ["One spike: samples until below 1 %", "spike-settle", `${result.spikeSettleSamples}${removed}`],
+          ["One spike: heading error it leaves", "spike-heading", `${deg(result.spikeHeadingError)}${removed}`],
+        ]}
+      />
+      <DataTable id={`${id}-medians`} caption={`Median window before the average (α = ${plain(values.smoothingFactor)})`} head={["Median of", "Delay", "Error after spin-up", "One spike leaves", "Spikes in a row removed"]}>
+        {medians.map(({ medianLength, result: m }) => (
+          <tr key={medianLength} data-out={`median-${medianLength}`}>
+            <th scope="row">{medianLength === 1 ? "1 (none)" : medianLength}</th>
+            <td>{time(m.totalDelay)}</td>
+            <td>{deg(m.headingErrorAfterSpinUp)}</td>
+            <td>{deg(m.spikeHeadingError)}</td>
+            <td>{m.spikesRejectedPerWindow}</td>
+          </tr>
+        ))}
+      </DataTable>
+    </div>
+  );
+}
+
+function TradeoffChart({ model }: { model: TimingModel }) {
+  const { tradeoff } = model.smoothingOutcome.value;
+  const values = model.smoothing.values.value;
+  if (!values || tradeoff.length === 0) return null;
+  const error = tradeoff.map((f) => [f.smoothingFactor, fromSI(f.headingErrorAfterSpinUp, "deg")] as const);
+  const noise = tradeoff.map((f) => [f.smoothingFactor, f.noiseFactor * 100] as const);
+  const top = Math.max(...error.map(([, y]) => y)) * 1.05 || 1;
+  return (
+    <XYChart
+      title="Smoothing trade-off"
+      summary={`A smaller α leaves less noise but a larger heading error after the spin-up: from ${deg(tradeoff[0]!.headingErrorAfterSpinUp)} at α = ${formatNumber(tradeoff[0]!.smoothingFactor)} to ${deg(tradeoff[tradeoff.length - 1]!.headingErrorAfterSpinUp)} at α = 1.`}
+      xLabel="Smoothing factor α (log scale)"
+      yLabel="Error after spin-up (°)"
+      y2Label="Noise left (%)"
+      xLog
+      xDomain={[tradeoff[0]!.smoothingFactor, 1]}
+      yDomain={[0, top]}
+      y2Domain={[0, 105]}
+      lines={[
+        { label: "Heading error after the spin-up (left axis)", points: error, className: "plot-curve" },
+        { label: "Noise left after the average (right axis)", points: noise, className: "plot-curve-2 plot-dashed", right: true },
+      ]}
+      vLines={[{ value: values.smoothingFactor, label: "Chosen α", className: "plot-marker plot-dashed" }]}
+    />
+  );
+}
+
+export default function HeadingTimingCalculator({ id = "timing-calculator" }: HeadingTimingCalculatorProps) {
+  const model = useMemo(() => createTimingModel(), []);
+  useEffect(() => {
+    const stops = [syncWithUrl(model.timing), syncWithUrl(model.smoothing)];
+    return () => stops.forEach((stop) => stop());
+  }, [model]);
+  const link = () => {
+    const { origin, pathname, search } = window.location;
+    return `${origin}${pathname}?${model.smoothing.queryFor(model.timing.queryFor(search))}#${id}`;
+  };
+  return (
+    <section class="calc" id={id} aria-label="Heading timing and smoothing calculator">
+      <Notices notices={model.timing.notices} />
+      <Notices notices={model.smoothing.notices} />
+      <h3 id={`${id}-timing-title`}>Loop, latency and beacon</h3>
+      <FieldsForm fields={model.timing} groups={TIMING_GROUPS} idPrefix={id} error={model.timingOutcome.value.error} />
+      <TimingResults model={model} />
+      <div class="calc-section" role="group" aria-labelledby={`${id}-smoothing-title`}>
+        <h3 id={`${id}-smoothing-title`}>Smoothing the spin-rate estimate</h3>
+        <FieldsForm fields={model.smoothing} groups={SMOOTHING_GROUPS} idPrefix={`${id}-s`} error={model.smoothingOutcome.value.error} />
+        <SmoothingResults model={model} id={id} />
+        <TradeoffChart model={model} />
+      </div>
+      <Toolbar idPrefix={id} system={model.timing.system} onSystem={model.setSystem} link={link} />
+    </section>
+  );
+}

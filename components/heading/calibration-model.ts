@@ -1,0 +1,132 @@
+/**
+ * The calibration calculator's model: the readings as text (pasted, typed or loaded from a file),
+ * the units bare numbers are read in, the fit settings; the rows read from the text, the fit of
+ * a = r·ω² + b and its curves, and the page link. The rows travel in the link in the versioned
+ * compact form of calc/calibration.ts; the text box is rebuilt from them when a link is opened.
+ * No DOM.
+ */
+import { computed, signal } from "@preact/signals";
+import {
+  CALIBRATION_ROWS_MAX,
+  calibrationCurve,
+  calibrationFitInputs,
+  decodeCalibrationRows,
+  demoCalibrationRows,
+  encodeCalibrationRows,
+  fitCalibration,
+} from "../../calc/calibration.ts";
+import { calibrationRowsToCsv, parseCalibrationCsv } from "../../calc/csv.ts";
+import { CalcInputError } from "../../calc/errors.ts";
+import { quantityToText, type UnitId, type UnitSystem } from "../../calc/units.ts";
+import { createFieldsModel, fieldMessage } from "../calc-ui/fields.ts";
+import { encodeState } from "../calc-ui/permalink.ts";
+
+/** Units a bare speed may be read in, by the name the link uses. */
+export const SPEED_UNITS = { rpm: "rpm", "rev/s": "rps", "rad/s": "rad/s" } as const satisfies Record<string, UnitId>;
+/** Units a bare reading may be read in, as written in the link ("g" is the unit id "gn"). */
+export const ACCELERATION_UNITS = { g: "gn", "m/s2": "m/s2" } as const satisfies Record<string, UnitId>;
+export type SpeedUnitKey = keyof typeof SPEED_UNITS;
+export type AccelerationUnitKey = keyof typeof ACCELERATION_UNITS;
+
+/** URL keys this model reads itself: the rows, and the two units for bare numbers. */
+export const DATA_KEY = "d";
+const SPEED_UNIT_KEY = "su";
+const ACCELERATION_UNIT_KEY = "au";
+
+/** The drift-budget page and the URL keys of its firmware radius and firmware offset (headingDriftInputs). */
+export const DRIFT_PAGE = "chapters/heading-drift/";
+export const DRIFT_KEYS = { assumedRadius: "ra", biasCorrection: "bh" } as const;
+const DRIFT_ANCHOR = "drift-calculator";
+
+/** The text the box starts with: the chapter's invented demo readings. */
+export const DEMO_TEXT = `# Invented demo readings, not measured: reference speed and radial reading\n${calibrationRowsToCsv(demoCalibrationRows())}`;
+
+const LABELS = Object.fromEntries(Object.entries(calibrationFitInputs).map(([k, s]) => [k, s.label]));
+
+export function createCalibrationModel(system: UnitSystem = "metric") {
+  const fields = createFieldsModel(calibrationFitInputs, system);
+  const text = signal(DEMO_TEXT);
+  const speedUnit = signal<SpeedUnitKey>("rpm");
+  const accelerationUnit = signal<AccelerationUnitKey>("g");
+  /** A problem reading a file (too large, unreadable). */
+  const fileError = signal<string | null>(null);
+
+  const parsed = computed(() => parseCalibrationCsv(text.value, { speedUnit: SPEED_UNITS[speedUnit.value], accelerationUnit: ACCELERATION_UNITS[accelerationUnit.value] }));
+
+  /**
+   * The rows as the link carries them (first 500, six significant figures), read back: the fit
+   * always uses these, so a reopened link gives exactly the same numbers.
+   */
+  const data = computed(() => {
+    const rows = parsed.value.rows.slice(0, CALIBRATION_ROWS_MAX);
+    const encoded = encodeCalibrationRows(rows);
+    return { encoded, rows: decodeCalibrationRows(encoded).rows, lines: rows.map((r) => r.line), dropped: parsed.value.rows.length - rows.length };
+  });
+
+  const outcome = computed(() => {
+    const values = fields.values.value;
+    if (!values) return { fit: null, curve: null, error: null };
+    const rows = data.value.rows;
+    try {
+      const fit = fitCalibration(rows, { spikeThreshold: values.spikeThreshold, confidence: values.confidence });
+      const top = Math.max(...rows.map((r) => r.angularSpeed));
+      return { fit, curve: calibrationCurve({ fit, lowSpeed: 0, highSpeed: top * 1.05 }), error: null };
+    } catch (error) {
+      if (error instanceof CalcInputError && error.param === "rows") {
+        return { fit: null, curve: null, error: { field: "rows", message: `The fit needs ${error.expected}; the text gives ${rows.length} usable.` } };
+      }
+      return { fit: null, curve: null, error: fieldMessage(error, LABELS) };
+    }
+  });
+
+  /** The drift-budget page with the fitted radius and offset as its firmware values, or null without a usable fit. */
+  const handoff = computed(() => {
+    const fit = outcome.value.fit;
+    if (!fit || !(fit.radius > 0)) return null;
+    const us = fields.system.value === "us";
+    const query = `v=1&u=${fields.system.value}&${DRIFT_KEYS.assumedRadius}=${quantityToText(fit.radius, us ? "in" : "mm")}&${DRIFT_KEYS.biasCorrection}=${quantityToText(fit.bias, "gn")}`;
+    return `${import.meta.env.BASE_URL.replace(/\/?$/, "/")}${DRIFT_PAGE}?${query}#${DRIFT_ANCHOR}`;
+  });
+
+  /** Applies a link: the fit settings through the fields model, the rows and units here. */
+  function applyQuery(search: string): void {
+    const params = new URLSearchParams(search);
+    const own = {} as Record<string, string[]>;
+    for (const key of [DATA_KEY, SPEED_UNIT_KEY, ACCELERATION_UNIT_KEY]) {
+      own[key] = params.getAll(key);
+      params.delete(key);
+    }
+    fields.applyQuery(params.toString());
+    const notices = [...fields.notices.value];
+    const unitFrom = <K extends string>(key: string, options: Record<K, string>, target: { value: K }, what: string) => {
+      const [value, ...more] = own[key]!;
+      if (value === undefined) return;
+      if (more.length > 0) notices.push(`The link sets "${key}" more than once; the first value was used.`);
+      if (Object.prototype.hasOwnProperty.call(options, value)) target.value = value as K;
+      else notices.push(`The link's unit for bare ${what} is not one this page reads (use ${Object.keys(options).join(", ")}); kept ${target.value}.`);
+    };
+    unitFrom(SPEED_UNIT_KEY, SPEED_UNITS, speedUnit, "speeds");
+    unitFrom(ACCELERATION_UNIT_KEY, ACCELERATION_UNITS, accelerationUnit, "readings");
+    const [rowsText, ...moreRows] = own[DATA_KEY]!;
+    if (rowsText !== undefined) {
+      if (moreRows.length > 0) notices.push(`The link sets "${DATA_KEY}" more than once; the first value was used.`);
+      const decoded = decodeCalibrationRows(rowsText);
+      for (const p of decoded.problems) {
+        notices.push(p.piece === 0 ? `The link's readings: ${p.reason}.` : `The link's reading ${p.piece} ("${p.text}"): ${p.reason}; it was skipped.`);
+      }
+      text.value = calibrationRowsToCsv(decoded.rows);
+    }
+    fields.notices.value = notices;
+  }
+
+  /** The query string for the current state, keeping other keys found in `existing`; ":" and "," left readable. */
+  function queryFor(existing: string): string {
+    const texts = Object.fromEntries(Object.entries(fields.texts).map(([k, t]) => [k, t.value]));
+    const extra = { [SPEED_UNIT_KEY]: speedUnit.value, [ACCELERATION_UNIT_KEY]: accelerationUnit.value, [DATA_KEY]: data.value.encoded };
+    return encodeState(calibrationFitInputs, texts, fields.system.value, "", existing, extra).replace(/%3A/gi, ":").replace(/%2C/gi, ",");
+  }
+
+  return { fields, text, speedUnit, accelerationUnit, fileError, parsed, data, outcome, handoff, applyQuery, queryFor };
+}
+
+export type CalibrationModel = ReturnType<typeof createCalibrationModel>;

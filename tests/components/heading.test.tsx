@@ -1,0 +1,211 @@
+/**
+ * The heading calculators' models and server render: defaults compute, links apply (both scopes of
+ * a page), errors land on the field they concern, the calibration rows survive their link, and
+ * every input renders with a label and no NaN.
+ */
+import { describe, expect, it } from "vitest";
+import { renderToString } from "preact-render-to-string";
+import { headingDriftInputs } from "../../calc/heading-drift.ts";
+import { STANDARD_GRAVITY } from "../../calc/constants.ts";
+import { createDriftModel } from "../../components/heading/drift-model.ts";
+import { createTimingModel } from "../../components/heading/timing-model.ts";
+import { createCalibrationModel, DATA_KEY, DEMO_TEXT, DRIFT_KEYS } from "../../components/heading/calibration-model.ts";
+import HeadingDriftCalculator from "../../components/heading/HeadingDriftCalculator.tsx";
+import HeadingTimingCalculator from "../../components/heading/HeadingTimingCalculator.tsx";
+import CalibrationCalculator from "../../components/heading/CalibrationCalculator.tsx";
+
+const DEG = Math.PI / 180;
+
+describe("drift-budget model", () => {
+  it("computes the defaults: the invented demo mismatch, 12.0 mm assumed, 12.7 mm true, 0.2 g left in", () => {
+    const model = createDriftModel();
+    const { result, error } = model.outcome.value;
+    expect(error).toBeNull();
+    expect(result!.verdict).toBe("over-budget");
+    // regression pin from tests/calc/heading.test.ts: 366.752 °/s at 2000 rpm
+    expect(result!.atSpeed.driftRate! / DEG).toBeCloseTo(366.75202097162, 6);
+    expect(model.curves.value!.exact).toHaveLength(61);
+    // the opposed pair: r₁ = r₂ = 12 mm, e = 0.5 mm, 2000 rpm → one sensor up to 4.4097 rad/s
+    expect(model.pairOutcome.value.result!.singleWorstDriftRate!).toBeCloseTo(4.409746715664806, 9);
+  });
+
+  it("applies a link to both sections, each from its own keys, and reports what it does not use", () => {
+    const model = createDriftModel();
+    const link = "?v=1&rpm=2800rpm&ra=12.69mm&b=0.02g&p.r1=10mm&p.e=1mm&p.rpm=1500rpm&zz=1";
+    model.fields.applyQuery(link);
+    model.pair.applyQuery(link);
+    expect(model.fields.texts.angularSpeed.value).toBe("2800 rpm");
+    expect(model.fields.texts.assumedRadius.value).toBe("12.69 mm");
+    expect(model.pair.texts.radius1.value).toBe("10 mm");
+    expect(model.pair.texts.offset.value).toBe("1 mm");
+    expect(model.fields.notices.value.join(" ")).toContain('"zz"');
+    expect(model.pair.notices.value).toEqual([]);
+    const query = new URLSearchParams(model.pair.queryFor(model.fields.queryFor("")));
+    expect(query.get("ra")).toBe("12.69mm");
+    expect(query.get("p.r1")).toBe("10mm");
+    expect(query.get("v")).toBe("1");
+  });
+
+  it("puts the plot-range rule on the 'Plot to' field, in the user's units", () => {
+    const model = createDriftModel();
+    model.fields.texts.highSpeed.value = "100 rpm";
+    expect(model.outcome.value.error).toEqual({ field: "highSpeed", message: "Plot to must be greater than Plot from (200 rpm)." });
+    expect(model.curves.value).toBeNull();
+  });
+
+  it("gives no single-sensor figure, not NaN, once the uncertainty reaches a sensor", () => {
+    const model = createDriftModel();
+    model.pair.texts.offset.value = "13 mm";
+    const r = model.pairOutcome.value.result!;
+    expect(r.singleWorstDriftRate).toBeNull();
+    expect(r.pairWorstDriftRate).toBeLessThan(1e-9);
+  });
+
+  it("switches both sections to US units together", () => {
+    const model = createDriftModel();
+    model.setSystem("us");
+    expect(model.fields.texts.assumedRadius.value).toBe("0.472441 in");
+    expect(model.pair.texts.radius1.value).toBe("0.472441 in");
+  });
+});
+
+describe("timing and smoothing model", () => {
+  it("computes the defaults: 18° steps at 3000 rpm and 1 kHz are over the 5° allowed", () => {
+    const model = createTimingModel();
+    const t = model.timingOutcome.value.result!;
+    expect(t.verdict).toBe("step-too-large");
+    expect(t.headingStep / DEG).toBeCloseTo(18, 9); // 3000 rpm = 18 000 °/s, over 1000 updates a second
+    expect(t.loopRateNeeded).toBeCloseTo(3600, 9);
+    const s = model.smoothingOutcome.value;
+    expect(s.result!.totalDelay).toBeCloseTo(0.01, 12); // 9 ms (EMA, α = 0.1) + 1 ms (median of 3)
+    expect(s.medians.map((m) => m.medianLength)).toEqual([1, 3, 5]);
+    expect(s.tradeoff).toHaveLength(60);
+  });
+
+  it("adds the chosen median window to the comparison, and names an even one as the problem", () => {
+    const model = createTimingModel();
+    model.smoothing.texts.medianLength.value = "7";
+    expect(model.smoothingOutcome.value.medians.map((m) => m.medianLength)).toEqual([1, 3, 5, 7]);
+    model.smoothing.texts.medianLength.value = "4";
+    expect(model.smoothingOutcome.value.error).toEqual({ field: "medianLength", message: "Median window must be an odd whole number." });
+  });
+
+  it("keeps the smoothing keys in their own scope", () => {
+    const model = createTimingModel();
+    model.smoothing.applyQuery("?v=1&rpm=2500rpm&s.a=0.05&s.rpm=1000rpm");
+    model.timing.applyQuery("?v=1&rpm=2500rpm&s.a=0.05&s.rpm=1000rpm");
+    expect(model.timing.texts.topSpeed.value).toBe("2500 rpm");
+    expect(model.smoothing.texts.speed.value).toBe("1000 rpm");
+    expect(model.smoothing.texts.smoothingFactor.value).toBe("0.05");
+    expect(model.timing.notices.value).toEqual([]);
+  });
+});
+
+describe("calibration model", () => {
+  it("fits the invented demo readings and flags the knock at 2000 rpm on line 10", () => {
+    const model = createCalibrationModel();
+    expect(model.text.value).toBe(DEMO_TEXT);
+    const fit = model.outcome.value.fit!;
+    expect(fit.spikes.flagged).toEqual([7]);
+    expect(model.data.value.lines[7]).toBe(10); // a comment line and a header come first
+    expect(fit.method).toBe("least-squares-without-spikes");
+    expect(fit.radius * 1000).toBeCloseTo(12.703056937531846, 9); // pinned in tests/calc/calibration.test.ts
+  });
+
+  it("lists a malformed line by number and reason, and fits the rest", () => {
+    const model = createCalibrationModel();
+    model.text.value = "rpm,g\n600,5.4\nsix hundred,7\n1200,20.6\n1800,46.1\n";
+    expect(model.parsed.value.problems.map((p) => p.line)).toEqual([3]);
+    expect(model.parsed.value.problems[0]!.reason).toContain("speed");
+    expect(model.outcome.value.fit!.count).toBe(3);
+  });
+
+  it("says how many readings the fit needs when there are too few", () => {
+    const model = createCalibrationModel();
+    model.text.value = "1200,20\n1800,46\n";
+    expect(model.outcome.value.error).toEqual({ field: "rows", message: "The fit needs at least 3 readings at different speeds; the text gives 2 usable." });
+  });
+
+  it("writes the rows into a readable, versioned link and reads back exactly the same fit", () => {
+    const model = createCalibrationModel();
+    const query = model.queryFor("");
+    expect(query).toContain("d=v1:600:5.37,800:9.18,");
+    expect(query).toMatch(/^v=1&/);
+    const again = createCalibrationModel();
+    again.text.value = "";
+    again.applyQuery(`?${query}`);
+    expect(again.fields.notices.value).toEqual([]);
+    expect(again.outcome.value.fit!.radius).toBe(model.outcome.value.fit!.radius);
+    expect(again.outcome.value.fit!.bias).toBe(model.outcome.value.fit!.bias);
+  });
+
+  it("explains a malformed or foreign link and never throws", () => {
+    const model = createCalibrationModel();
+    model.applyQuery(`?v=1&${DATA_KEY}=v9:1:2&su=furlongs`);
+    expect(model.fields.notices.value.join(" ")).toContain("unknown version 9");
+    expect(model.fields.notices.value.join(" ")).toContain("bare speeds");
+    expect(model.outcome.value.fit).toBeNull();
+    const other = createCalibrationModel();
+    other.applyQuery(`?${DATA_KEY}=${encodeURIComponent("v1:600:5.37,abc,1200:20.6,1800:46.3,<b>")}`);
+    expect(other.fields.notices.value.some((n) => n.includes('reading 2 ("abc")'))).toBe(true);
+    expect(other.outcome.value.fit!.count).toBe(3);
+  });
+
+  it("hands the fitted radius and offset to the drift page under the keys that page reads", () => {
+    expect(DRIFT_KEYS.assumedRadius).toBe(headingDriftInputs.assumedRadius.urlKey);
+    expect(DRIFT_KEYS.biasCorrection).toBe(headingDriftInputs.biasCorrection.urlKey);
+    const model = createCalibrationModel();
+    const link = new URL(model.handoff.value!, "https://example.org/");
+    expect(link.pathname).toBe("/chapters/heading-drift/");
+    expect(link.searchParams.get("ra")).toBe("12.7031mm");
+    expect(Number(link.searchParams.get("bh")!.replace("g", "")) * STANDARD_GRAVITY).toBeCloseTo(model.outcome.value.fit!.bias, 4);
+    expect(link.hash).toBe("#drift-calculator");
+  });
+
+  it("hands over in inches when the page is in US units", () => {
+    const model = createCalibrationModel();
+    model.fields.setSystem("us");
+    const link = new URL(model.handoff.value!, "https://example.org/");
+    expect(link.searchParams.get("u")).toBe("us");
+    expect(link.searchParams.get("ra")).toBe("0.50012in"); // 12.70306 mm / 25.4 = 0.5001204 in, six figures
+  });
+
+  it("reads bare numbers in the units chosen, and keeps those in the link", () => {
+    const model = createCalibrationModel();
+    model.speedUnit.value = "rad/s";
+    model.accelerationUnit.value = "m/s2";
+    model.text.value = "100,127\n200,508\n300,1143\n";
+    // 127 m/s² at 100 rad/s is 12.7 mm exactly; the link's six significant figures (rpm, g) move it by < 5e-6
+    expect(Math.abs(model.outcome.value.fit!.radius / 0.0127 - 1)).toBeLessThan(5e-6);
+    const query = new URLSearchParams(model.queryFor(""));
+    expect(query.get("su")).toBe("rad/s");
+    expect(query.get("au")).toBe("m/s2");
+  });
+});
+
+describe("server render (the path Astro islands take)", () => {
+  const pages = {
+    drift: renderToString(<HeadingDriftCalculator id="hd" />),
+    timing: renderToString(<HeadingTimingCalculator id="ht" />),
+    calibration: renderToString(<CalibrationCalculator id="hc" />),
+  };
+
+  it.each(Object.entries(pages))("%s: labels every input, select and text box", (_, html) => {
+    const ids = [...html.matchAll(/<(?:input|select|textarea)[^>]*id="([^"]+)"/g)].map((m) => m[1]);
+    expect(ids.length).toBeGreaterThan(3);
+    for (const id of ids) expect(html, id).toContain(`for="${id}"`);
+  });
+
+  it.each(Object.entries(pages))("%s: renders results and a chart without NaN or Infinity", (_, html) => {
+    expect(html).toContain("data-out=");
+    expect(html).toContain("<svg");
+    expect(html).not.toMatch(/NaN|Infinity/);
+  });
+
+  it("counts the inputs each page declares", () => {
+    const count = (html: string) => [...html.matchAll(/<(?:input|select|textarea)\b/g)].length;
+    expect(count(pages.drift)).toBe(11 + 4 + 2); // drift fields, pair fields, unit radios
+    expect(count(pages.timing)).toBe(6 + 8 + 2);
+    expect(count(pages.calibration)).toBe(1 + 1 + 2 + 2 + 2); // text, file, two selects, k and level, radios
+  });
+});
