@@ -13,10 +13,13 @@ import {
   DRIVETRAIN_SOURCE_KEYS,
   drivetrainInputs,
   drivetrainWorkedExample,
+  markSweepOptimum,
   rotorKineticEnergy,
   rotorTipSpeed,
   simulateSpinUp,
   sweepDrivetrain,
+  sweepPoint,
+  sweepValues,
   tractionLimitedAcceleration,
   validateDrivetrainInput,
   type DrivetrainInput,
@@ -440,6 +443,9 @@ describe("run outputs", () => {
     for (const r of [w.result, s.result]) {
       expect(r.energy.balanceError).toBeLessThan(0.01);
       expect(r.energy.balanceError).toBeLessThan(1e-7);
+      const e = r.energy;
+      expect(e.totalLoss).toBeCloseTo(e.batteryLoss + e.copperLoss + e.motorLoss + e.gearLoss + e.frictionLoss + e.dragLoss + e.slipLoss, 9);
+      expect(Math.abs(e.drawn - e.kinetic - e.totalLoss) / e.drawn).toBeCloseTo(e.balanceError, 12);
     }
   });
 });
@@ -488,6 +494,38 @@ describe("design comparison", () => {
     const start = performance.now();
     sweepDrivetrain({ base: DEMO_SPINNER, parameter: "wheelRadius", from: 0.01, to: 0.04, points: 50 });
     expect(performance.now() - start).toBeLessThan(1000);
+  });
+
+  it("splits into values, points and an optimum that a page can run in batches, with the same answer", () => {
+    const whole = sweepDrivetrain({ base: DEMO_WEAPON, parameter: "gearRatio", from: 1, to: 4, points: 31 });
+    const values = sweepValues({ parameter: "gearRatio", from: 1, to: 4, points: 31 });
+    expect(values).toEqual(whole.points.map((p) => p.value));
+    const points = values.map((value) => sweepPoint({ base: DEMO_WEAPON, parameter: "gearRatio", value }));
+    expect(markSweepOptimum(points)).toEqual({ optimumIndex: whole.optimumIndex, optimumBy: whole.optimumBy });
+    expect(points).toEqual(whole.points);
+  });
+
+  it("lists the values of a sweep as its doc comment says", () => {
+    expect(sweepValues({ parameter: "gearRatio", from: 1, to: 4, points: 4 })).toEqual([1, 2, 3, 4]);
+    expect(sweepValues({ parameter: "cellCount", from: 8, to: 2, points: 50 })).toEqual([8, 7, 6, 5, 4, 3, 2]);
+    expect(sweepValues({ parameter: "cellCount", from: 1, to: 24, points: 3 })).toEqual([1, 13, 24]);
+    expect(() => sweepValues({ parameter: "cellCount", from: 2.2, to: 2.8 })).toThrowError("to must be a range holding at least one whole number (from 2.2) (got 2.8)");
+  });
+
+  it("gives one point as the full simulation does, and a null time when the target is out of reach", () => {
+    const p = sweepPoint({ base: DEMO_WEAPON, parameter: "gearRatio", value: 3 });
+    const full = simulateSpinUp({ ...DEMO_WEAPON, gearRatio: 3 });
+    expect(p).toEqual({ value: 3, timeToTarget: null, timeTo90: full.timeTo90, topSpeed: full.topSpeed, verdict: "falls-short", peakBatteryCurrent: full.peakBatteryCurrent, storedEnergy: full.atTopSpeed.storedEnergy, isOptimum: false });
+    expect(() => sweepPoint({ base: DEMO_WEAPON, parameter: "colour", value: 1 })).toThrowError(CalcInputError);
+  });
+
+  it("marks the optimum by time to target, else by top speed (the doc comment's example)", () => {
+    const pt = (timeToTarget: number | null, topSpeed = 100) => ({ value: 0, timeToTarget, timeTo90: null, topSpeed, verdict: "falls-short" as const, peakBatteryCurrent: 0, storedEnergy: 0, isOptimum: true });
+    const points = [pt(null), pt(1.2), pt(1.0), pt(1.1)];
+    expect(markSweepOptimum(points)).toEqual({ optimumIndex: 2, optimumBy: "time-to-target" });
+    expect(points.map((p) => p.isOptimum)).toEqual([false, false, true, false]);
+    expect(markSweepOptimum([pt(null, 5), pt(null, 7), pt(null, 7)])).toEqual({ optimumIndex: 1, optimumBy: "top-speed" });
+    expect(() => markSweepOptimum([])).toThrowError("points must be a list of at least one sweep point (got 0)");
   });
 
   it("refuses an unknown parameter and a range outside the declared one", () => {
