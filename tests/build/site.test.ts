@@ -37,6 +37,14 @@ const BUDGET = {
   searchJs: 5 * KB,
 };
 
+/**
+ * Chapter pages whose calculators do not yet fit the 25 KB JS budget, with the ceiling each may not
+ * exceed (measured size plus 2 %). The shared runtime (Preact, signals, Astro's island loader, units
+ * and the calculator parts) is about 22 KB of every page; these calculators' own code is 7–18 KB.
+ * Each entry is an open problem, not an allowance: remove it when the page fits.
+ */
+const HEAVY_PAGES: Record<string, { js: number; total: number }> = {};
+
 describe("the built site", () => {
   it("was built (run `npm run build` first)", () => {
     expect(existsSync(join(dist, "index.html"))).toBe(true);
@@ -92,11 +100,17 @@ describe("the built site", () => {
       expect(search.scripts.some((s: string) => s.includes("pagefind"))).toBe(false);
     });
 
-    it.each(chapters.filter((c) => c.calculator && c.islands === 1).map((c) => c.slug))("keeps %s (one calculator) within 60 KB, JS within 25 KB", (slug) => {
+    it.each(chapters.filter((c) => c.calculator && c.islands === 1 && !(c.slug in HEAVY_PAGES)).map((c) => c.slug))("keeps %s (one calculator) within 60 KB, JS within 25 KB", (slug) => {
       const page = weigh(`chapters/${slug}/index.html`);
       expect(page.js).toBeGreaterThan(0);
       expect(page.js).toBeLessThanOrEqual(BUDGET.chapterJs);
       expect(page.total).toBeLessThanOrEqual(BUDGET.chapterTotal);
+    });
+
+    it.each(Object.entries(HEAVY_PAGES))("keeps %s under its recorded ceiling (over the 25 KB budget: tracked, must not grow)", (slug, ceiling) => {
+      const page = weigh(`chapters/${slug}/index.html`);
+      expect(page.js).toBeLessThanOrEqual(ceiling.js);
+      expect(page.total).toBeLessThanOrEqual(ceiling.total);
     });
 
     it("ships no JavaScript but the registration on chapters without a calculator", () => {
@@ -153,6 +167,27 @@ describe("the built site", () => {
       expect(sw()).toMatch(/const CACHE = "whirlbook-[0-9a-f]{12}";/);
       expect(sw()).toContain('key.startsWith("whirlbook-") && key !== CACHE');
     });
+  });
+
+  it("has no broken internal link on any page (every href resolves to a built file)", () => {
+    const broken: string[] = [];
+    for (const file of walk(dist).filter((f) => f.endsWith(".html"))) {
+      const html = readFileSync(file, "utf8");
+      const pageDir = file.slice(0, file.lastIndexOf("/") + 1);
+      for (const m of html.matchAll(/<a\b[^>]*\bhref="([^"]*)"/g)) {
+        const href = m[1]!.replace(/&amp;/g, "&");
+        if (/^(?:[a-z]+:|#)/i.test(href)) continue;
+        const path = href.split(/[?#]/)[0]!;
+        if (/%7B|%7D|[{}]/i.test(href)) {
+          broken.push(`${file.slice(dist.length)}: ${href}`);
+          continue;
+        }
+        const target = path === "" ? file : path.startsWith("/") ? join(dist, path) : join(pageDir, path);
+        const candidates = [target, join(target, "index.html")];
+        if (!candidates.some((c) => existsSync(c) && !c.endsWith("/"))) broken.push(`${file.slice(dist.length)}: ${href}`);
+      }
+    }
+    expect(broken).toEqual([]);
   });
 
   it("lists each chapter's sources", () => {
