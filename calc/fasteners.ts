@@ -7,28 +7,11 @@
  * every tabulated number can be checked against its formula.
  */
 import { CalcInputError, requireInRange, requirePositive } from "./errors.ts";
+import { requireChoice, type ChoiceOption } from "./loads-common.ts";
 import type { SourceKey } from "./sources.ts";
 
-// ---------------------------------------------------------------------------------------------
-// Choosing from a fixed list.
-
-/** One entry of a fixed list of choices: the value the code uses and the label a person reads. */
-export interface ChoiceOption<V extends string = string> {
-  readonly value: V;
-  readonly label: string;
-}
-
-/**
- * Throws a `CalcInputError` naming `param` and listing the allowed values unless `value` is one
- * of `options`; returns it narrowed to the option type otherwise.
- */
-export function requireChoice<V extends string>(param: string, value: unknown, options: readonly ChoiceOption<V>[]): V {
-  const found = options.find((option) => option.value === value);
-  if (!found) {
-    throw new CalcInputError({ param, value, expected: `one of ${options.map((o) => o.value).join(", ")}`, unit: "" });
-  }
-  return found.value;
-}
+// Choosing from a fixed list lives with the shared load-check helpers; re-exported here, where it started.
+export { requireChoice, type ChoiceOption };
 
 // ---------------------------------------------------------------------------------------------
 // Thread geometry.

@@ -9,6 +9,7 @@ import { rpmToRadPerSecond, radPerSecondToRpm } from "../../calc/units.ts";
 import { isSourceKey } from "../../calc/sources.ts";
 import { LOADS_SOURCES as LOADS_BIBLIOGRAPHY } from "../../calc/sources/loads.ts";
 import { MATERIALS } from "../../calc/materials.ts";
+import { demoRobotBalance } from "../../calc/mass.ts";
 import {
   EN1993_THREAD_SHEAR_FACTOR,
   eurocodeBoltShearResistance,
@@ -24,11 +25,15 @@ import {
   annularDiskStress,
   boltStress,
   DEFAULT_SHEAR_RATIO,
+  DEFAULT_RIM_MATERIAL,
+  DEFAULT_RIM_MATERIAL_VALUES,
+  DEMO_WASHER_STACK,
   demoRobotLoads,
   FASTENER_CHOICE_DEFAULTS,
   fastenerCheck,
   fastenerCheckInputs,
   fastenerStressCurve,
+  fastenerStrengths,
   LOADING_MODE_OPTIONS,
   LOADS_SOURCES,
   RIM_CHOICE_DEFAULTS,
@@ -37,6 +42,7 @@ import {
   rimCheck,
   rimCheckInputs,
   rimMaterial,
+  rimMaterialChoices,
   rimStressProfile,
   safetyFactor,
   safetyVerdict,
@@ -45,6 +51,7 @@ import {
   solidDiskStress,
   speedAtStress,
   thinRingHoopStress,
+  thinRingLimitTipSpeed,
   tipSpeed,
   type FastenerCheckInput,
   type RimCheckInput,
@@ -390,9 +397,20 @@ describe("stress grows with the square of the speed", () => {
 // ---------------------------------------------------------------------------------------------
 
 describe("the fastener check", () => {
-  it("takes the part's g and pull from the rotation module's partLoad, unchanged", () => {
+  it("gives the part exactly the g and pull of the rotation module's partLoad (same F = mω²r, written out in loads-bolts.ts)", () => {
     const check = fastenerCheck(FASTENER_DEFAULTS);
     expect(check.part).toEqual(partLoad({ mass: FASTENER_DEFAULTS.partMass, radius: FASTENER_DEFAULTS.radius, angularSpeed: FASTENER_DEFAULTS.angularSpeed }));
+    fc.assert(
+      fc.property(
+        fc.double({ min: 1e-4, max: 20, noNaN: true }),
+        fc.double({ min: 0.001, max: 2, noNaN: true }),
+        fc.double({ min: rpmToRadPerSecond(1), max: rpmToRadPerSecond(100000), noNaN: true }),
+        (partMass, radius, angularSpeed) => {
+          const { part } = fastenerCheck({ ...FASTENER_DEFAULTS, partMass, radius, angularSpeed });
+          expect(part).toEqual(partLoad({ mass: partMass, radius, angularSpeed }));
+        },
+      ),
+    );
   });
 
   it("carries, in tension, exactly the ISO 898-1 minimum ultimate tensile load at the ultimate: M6 8.8, 16 100 N (Table 4, ± 0.5 %)", () => {
@@ -682,7 +700,7 @@ describe("inputs", () => {
   });
 
   it("rejects a 'thin' threshold below the 'fails' threshold", () => {
-    expect(() => fastenerCheck({ ...FASTENER_DEFAULTS, failBelow: 3, marginalBelow: 2 })).toThrow("marginalBelow must be at least failBelow, 3 (got 2)");
+    expect(() => fastenerCheck({ ...FASTENER_DEFAULTS, failBelow: 3, marginalBelow: 2 })).toThrow("marginalBelow must be at least the fail threshold, 3 (got 2)");
     expect(() => rimCheck({ ...RIM_DEFAULTS, failBelow: 3, marginalBelow: 2 })).toThrow(CalcInputError);
   });
 
@@ -716,6 +734,57 @@ describe("inputs", () => {
 
 // ---------------------------------------------------------------------------------------------
 
+describe("helpers added for the chapters and calculators", () => {
+  it("compares bolt stress with R_p0.2,min and R_m,min in tension, R_p0.2,min/√3 and k·R_m,min in shear (ISO 898-1 Table 3, 8.8: 640 and 800 MPa)", () => {
+    expect(fastenerStrengths({ propertyClass: "8.8", mode: "tension" })).toEqual({ yieldStrength: 640e6, ultimateStrength: 800e6 });
+    const shear = fastenerStrengths({ propertyClass: "8.8", mode: "shear" });
+    // 640/√3 = 369.5 MPa (shigley-distortion-energy, 0.577 S_y); 0.5 × 800 = 400 MPa.
+    expectClose(shear.yieldStrength, 369.5e6, 5e-4);
+    expect(shear.ultimateStrength).toBe(400e6);
+    expect(fastenerStrengths({ propertyClass: "4.6", mode: "shear", shearRatio: 0.6 }).ultimateStrength).toBeCloseTo(240e6, 3);
+  });
+
+  it("gives fastenerCheck exactly the strengths of fastenerStrengths, for every class and mode", () => {
+    for (const { value: propertyClass } of PROPERTY_CLASS_OPTIONS) {
+      for (const { value: mode } of LOADING_MODE_OPTIONS) {
+        const check = fastenerCheck({ ...FASTENER_DEFAULTS, propertyClass, mode, shearRatio: 0.6 });
+        expect({ yieldStrength: check.yieldStrength, ultimateStrength: check.ultimateStrength }).toEqual(fastenerStrengths({ propertyClass, mode, shearRatio: 0.6 }));
+      }
+    }
+  });
+
+  it("refuses an unknown class or mode, and a shear ratio out of range, naming the field", () => {
+    expect(() => fastenerStrengths({ propertyClass: "9.9", mode: "shear" })).toThrow(CalcInputError);
+    expect(() => fastenerStrengths({ propertyClass: "8.8", mode: "bending" })).toThrow(/^mode must be one of shear, tension/);
+    expect(() => fastenerStrengths({ propertyClass: "8.8", mode: "shear", shearRatio: 0.2 })).toThrow(/^shearRatio must be at least 0.3/);
+  });
+
+  it("finds a thin ring's limit tip speed √(S/ρ) (carvill-data-handbook: σ = ρv²), and the rim check agrees at any size", () => {
+    // 6061-T6: √(310e6 / 2700) = 338.8 m/s.
+    expectClose(thinRingLimitTipSpeed({ density: 2700, strength: 310e6 }), 338.8, 5e-4);
+    for (const outerRadius of [0.02, 0.125, 1.5]) {
+      const rim = rimCheck({ ...RIM_DEFAULTS, shape: "thin-ring", outerRadius, innerRadius: outerRadius / 2 });
+      expectClose(rim.tipSpeedAtUltimate, thinRingLimitTipSpeed({ density: RIM_DEFAULTS.density, strength: RIM_DEFAULTS.ultimateStrength }), 1e-12);
+    }
+    expect(() => thinRingLimitTipSpeed({ density: 0, strength: 1e6 })).toThrow(/^density must be greater than 0/);
+  });
+
+  it("keeps the rim check's default material values equal to the 6061-T6 row of the materials table", () => {
+    expect(DEFAULT_RIM_MATERIAL).toBe("al-6061-t6");
+    expect(DEFAULT_RIM_MATERIAL_VALUES).toEqual(rimMaterial(DEFAULT_RIM_MATERIAL));
+    expect(rimCheckInputs.density.default).toBe(MATERIALS["al-6061-t6"].density);
+    expect(rimCheckInputs.poisson.default).toBe(MATERIALS["al-6061-t6"].poissonRatio);
+  });
+
+  it("offers every material as a choice carrying its own values", () => {
+    const choices = rimMaterialChoices();
+    expect(choices.map((c) => c.value)).toEqual(RIM_MATERIAL_OPTIONS.map((o) => o.value));
+    for (const choice of choices) {
+      expect(choice).toEqual({ ...RIM_MATERIAL_OPTIONS.find((o) => o.value === choice.value), ...rimMaterial(choice.value) });
+    }
+  });
+});
+
 describe("worked example: the invented demo robot", () => {
   const demo = demoRobotLoads();
 
@@ -723,16 +792,37 @@ describe("worked example: the invented demo robot", () => {
     expect(demo.description).toMatch(/invented/);
   });
 
-  it("holds its 40 g of washers on one M4 class 8.8 bolt in shear at 2400 rpm, with a wide margin", () => {
-    expect(demo.boltInput).toMatchObject({ partMass: 0.04, radius: 0.07, size: "M4", propertyClass: "8.8", mode: "shear", count: 1 });
+  it("checks the same washer stack as the mass-layout worked example (calc/mass.ts demoRobotBalance)", () => {
+    const balance = demoRobotBalance();
+    const at = balance.balance.counterweight.atRadius;
+    expectClose(DEMO_WASHER_STACK.mass, balance.washerMass, 1e-12);
+    expectClose(DEMO_WASHER_STACK.radius, Math.hypot(at.x, at.y), 1e-12);
+    expectClose(rpmToRadPerSecond(DEMO_WASHER_STACK.rpm), balance.spinSpeed, 1e-12);
+    expect(demo.boltInput).toMatchObject({ partMass: balance.washerMass, angularSpeed: balance.spinSpeed });
+    expectClose(demo.boltInput.radius, Math.hypot(at.x, at.y), 1e-12);
+  });
+
+  it("holds its 42 g of washers on one M4 class 8.8 bolt in shear at 2400 rpm, with a wide margin", () => {
+    expect(demo.boltInput).toMatchObject({ partMass: 0.042, radius: 0.055, size: "M4", propertyClass: "8.8", mode: "shear", count: 1 });
     expect(radPerSecondToRpm(demo.boltInput.angularSpeed)).toBeCloseTo(2400, 9);
     expect(demo.bolt.verdict).toBe("holds");
-    // Hand check to 3 significant figures: ω = 80π rad/s; a = ω²·0.07 = 4420 m/s² (451 g);
-    // F = 0.04 × 4420 = 177 N; τ = 177 N / 8.78 mm² = 20.1 MPa; τ_y = 640/√3 = 370 MPa → n = 18.3.
-    expectClose(demo.bolt.part.gLoad, 451, 5e-3);
-    expectClose(demo.bolt.part.force, 177, 5e-3);
-    expectClose(demo.bolt.stress, 20.1e6, 5e-3);
-    expectClose(demo.bolt.safetyFactor, 18.3, 5e-3);
+    // Hand check to 3 significant figures: ω = 80π rad/s; a = ω²·0.055 = 3470 m/s² (354 g);
+    // F = 0.042 × 3474 = 146 N; τ = 146 N / 8.78 mm² = 16.6 MPa; τ_y = 640/√3 = 370 MPa → n = 22.2;
+    // yield reached at 2400 rpm × √22.2 = 11 300 rpm.
+    expectClose(demo.bolt.part.gLoad, 354, 5e-3);
+    expectClose(demo.bolt.part.force, 146, 5e-3);
+    expectClose(demo.bolt.stress, 16.6e6, 5e-3);
+    expectClose(demo.bolt.safetyFactor, 22.2, 5e-3);
+    expectClose(radPerSecondToRpm(demo.bolt.speedAtYield), 11300, 5e-3);
+  });
+
+  it("takes another washer stack when asked (the chapter passes the mass-layout result through)", () => {
+    const other = demoRobotLoads({ washerMass: 0.04, washerRadius: 0.07 });
+    // 40 g at 70 mm, 2400 rpm: F = 0.04 × (80π)² × 0.07 = 177 N; τ = 20.1 MPa; n = 18.3.
+    expectClose(other.bolt.part.force, 177, 5e-3);
+    expectClose(other.bolt.safetyFactor, 18.3, 5e-3);
+    expect(other.description).toContain("40 g");
+    expect(other.description).toContain("70 mm");
   });
 
   it("keeps its 6061-T6 ring rim far from yield, with a burst estimate near 25 900 rpm", () => {
@@ -756,7 +846,7 @@ describe("sources", () => {
     return { undocumented: exported.filter((name) => !documented.has(name)), keys };
   }
 
-  it.each(["../../calc/loads.ts", "../../calc/fasteners.ts"])("documents every exported function of %s and cites only known keys", (path) => {
+  it.each(["../../calc/loads.ts", "../../calc/loads-common.ts", "../../calc/loads-bolts.ts", "../../calc/loads-rims.ts", "../../calc/fasteners.ts"])("documents every exported function of %s and cites only known keys", (path) => {
     const { undocumented, keys } = documentedSourceKeys(path);
     expect(undocumented).toEqual([]);
     expect(keys.length).toBeGreaterThan(0);
@@ -797,10 +887,10 @@ describe("regression pins (COMPUTED, not outside authorities)", () => {
 
   it("demo robot bolt and rim (values of this module, pinned)", () => {
     const demo = demoRobotLoads();
-    expectClose(demo.bolt.part.force, 176.86331086752134, 1e-12);
-    expectClose(demo.bolt.stress, 20143885.064637963, 1e-12);
-    expectClose(demo.bolt.safetyFactor, 18.343242681125844, 1e-12);
-    expectClose(demo.bolt.speedAtYield, 1076.4104754477703, 1e-12);
+    expectClose(demo.bolt.part.force, 145.91223146570508, 1e-12);
+    expectClose(demo.bolt.stress, 16618705.178326318, 1e-12);
+    expectClose(demo.bolt.safetyFactor, 22.23423355287981, 1e-12);
+    expectClose(demo.bolt.speedAtYield, 1185.0889298704328, 1e-12);
     expectClose(demo.rim.peakStress, 2664793.1882941267, 1e-12);
     expectClose(demo.rim.speedAtUltimate, 2710.7467879070055, 1e-12);
   });

@@ -1,0 +1,145 @@
+/**
+ * Centrifugal loads, the shared part: choosing from a fixed list, the safety factor, its verdict,
+ * the speed at which a stress that grows with ω² reaches a limit, and input validation against a
+ * declaration. Used by the bolt check (loads-bolts.ts) and the rim check (loads-rims.ts); the
+ * public face of the topic is calc/loads.ts. SI in and out.
+ */
+import { CalcInputError, requireFinite, requireInRange, requirePositive } from "./errors.ts";
+import type { InputSpecs } from "./inputs.ts";
+import type { QuantityKind } from "./units.ts";
+
+// ---------------------------------------------------------------------------------------------
+// Choosing from a fixed list.
+
+/** One entry of a fixed list of choices: the value the code uses and the label a person reads. */
+export interface ChoiceOption<V extends string = string> {
+  readonly value: V;
+  readonly label: string;
+}
+
+/**
+ * Throws a `CalcInputError` naming `param` and listing the allowed values unless `value` is one
+ * of `options`; returns it narrowed to the option type otherwise.
+ */
+export function requireChoice<V extends string>(param: string, value: unknown, options: readonly ChoiceOption<V>[]): V {
+  const found = options.find((option) => option.value === value);
+  if (!found) {
+    throw new CalcInputError({ param, value, expected: `one of ${options.map((o) => o.value).join(", ")}`, unit: "" });
+  }
+  return found.value;
+}
+
+// ---------------------------------------------------------------------------------------------
+// Safety factor, verdict and limit speed (shared by the bolt and the rim checks).
+
+/** How a checked part stands: below `failBelow` it fails, below `marginalBelow` the margin is thin. */
+export type LoadVerdict = "holds" | "marginal" | "fails";
+
+/** Default verdict thresholds on the safety factor [-] (safety-factor-practice). */
+export const DEFAULT_SAFETY_THRESHOLDS = { failBelow: 1, marginalBelow: 2 } as const;
+
+/**
+ * Safety factor of a stressed part: how many times the working stress fits into the strength
+ * (safety-factor-practice).
+ *
+ * Formula: $n = \dfrac{S}{\sigma}$
+ *
+ * @param strength S, the strength compared with [Pa], greater than 0
+ * @param stress σ, the working stress [Pa], greater than 0
+ * @returns n [-]
+ *
+ * Example: 400 MPa against 20.1 MPa → 19.9. Sources: safety-factor-practice.
+ */
+export function safetyFactor({ strength, stress }: { strength: number; stress: number }): number {
+  requirePositive("strength", strength, "Pa");
+  requirePositive("stress", stress, "Pa");
+  return strength / stress; // safety-factor-practice
+}
+
+/**
+ * Verdict for a safety factor against two thresholds (safety-factor-practice).
+ *
+ * Formula: fails when $n < n_{fail}$, marginal when $n_{fail} \le n < n_{thin}$, holds otherwise
+ *
+ * @param safetyFactor n [-], greater than 0
+ * @param failBelow n_fail [-], greater than 0 (default 1: the stress reaches the strength)
+ * @param marginalBelow n_thin [-], at least n_fail (default 2, a common margin when loads are rough estimates)
+ * @returns "fails", "marginal" or "holds"
+ *
+ * Example: n = 1.6 with the defaults → "marginal". Sources: safety-factor-practice.
+ */
+export function safetyVerdict({
+  safetyFactor: n,
+  failBelow = DEFAULT_SAFETY_THRESHOLDS.failBelow,
+  marginalBelow = DEFAULT_SAFETY_THRESHOLDS.marginalBelow,
+}: {
+  safetyFactor: number;
+  failBelow?: number;
+  marginalBelow?: number;
+}): LoadVerdict {
+  requirePositive("safetyFactor", n, "");
+  requirePositive("failBelow", failBelow, "");
+  requireMarginalAtLeastFail(failBelow, marginalBelow);
+  return n < failBelow ? "fails" : n < marginalBelow ? "marginal" : "holds";
+}
+
+/** Throws a `CalcInputError` naming "marginalBelow" unless it is at least `failBelow`. */
+export function requireMarginalAtLeastFail(failBelow: number, marginalBelow: number): void {
+  requirePositive("marginalBelow", marginalBelow, "");
+  if (!(marginalBelow >= failBelow)) {
+    throw new CalcInputError({ param: "marginalBelow", value: marginalBelow, expected: `at least the fail threshold, ${failBelow}`, unit: "" });
+  }
+}
+
+/**
+ * Speed at which a stress that grows with the square of the speed reaches a limit: every
+ * centrifugal stress here is proportional to ω² (newton-second-law: F = mω²r).
+ *
+ * Formula: $\omega_{lim} = \omega\,\sqrt{S / \sigma}$
+ *
+ * @param angularSpeed ω, the speed at which `stress` was found [rad/s], greater than 0
+ * @param stress σ at ω [Pa], greater than 0
+ * @param strength S, the limit [Pa], greater than 0
+ * @returns ω_lim [rad/s]
+ *
+ * Example: σ = 2.665 MPa at 2400 rpm against 310 MPa → 25 900 rpm. Sources: newton-second-law.
+ */
+export function speedAtStress({ angularSpeed, stress, strength }: { angularSpeed: number; stress: number; strength: number }): number {
+  requirePositive("angularSpeed", angularSpeed, "rad/s");
+  return angularSpeed * Math.sqrt(safetyFactor({ strength, stress })); // σ ∝ ω², newton-second-law
+}
+
+// ---------------------------------------------------------------------------------------------
+// Input validation against a declaration.
+
+const SI_UNIT: Partial<Record<QuantityKind, string>> = {
+  mass: "kg",
+  length: "m",
+  angularSpeed: "rad/s",
+  stress: "Pa",
+  density: "kg/m³",
+  fraction: "",
+  count: "",
+};
+
+/** Throws a `CalcInputError` naming `name` unless `value` lies in the declared range of `specs[name]`. */
+export function requireDeclared<T extends InputSpecs>(specs: T, name: keyof T & string, value: number): number {
+  const spec = specs[name]!;
+  const unit = SI_UNIT[spec.kind] ?? "";
+  requireFinite(name, value, unit);
+  const lowOk = spec.minOpen ? value > spec.min : value >= spec.min;
+  if (!lowOk || !(value <= spec.max) || (spec.integer === true && !Number.isInteger(value))) {
+    const shown = (bound: number) => `${Number(bound.toPrecision(6))}${unit ? ` ${unit}` : ""}`;
+    const low = `${spec.minOpen ? "greater than" : "at least"} ${shown(spec.min)}`;
+    const expected = `${spec.integer ? "a whole number " : ""}${low} and at most ${shown(spec.max)}`;
+    throw new CalcInputError({ param: name, value, expected, unit });
+  }
+  return value;
+}
+
+
+/** Throws a `CalcInputError` naming "points" unless it is a whole number from 2 to 1000. */
+export function requirePointCount(points: number): void {
+  requireInRange("points", points, "", { min: 2, max: 1000 });
+  if (!Number.isInteger(points)) throw new CalcInputError({ param: "points", value: points, expected: "a whole number", unit: "" });
+}

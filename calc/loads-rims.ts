@@ -1,0 +1,551 @@
+/**
+ * Centrifugal loads on rims and disks: the hoop and radial stresses in a spinning thin ring, solid
+ * disk or bored disk, where they peak, the safety factors against the material, the speeds at which
+ * it yields and is estimated to burst, and a verdict. Re-exported by calc/loads.ts. SI in and out.
+ */
+import { CalcInputError, requireInRange, requireNonNegative, requirePositive } from "./errors.ts";
+import { defineInputs } from "./inputs.ts";
+import { rpmToRadPerSecond } from "./units.ts";
+import type { MaterialId } from "./materials.ts";
+import {
+  DEFAULT_SAFETY_THRESHOLDS,
+  requireChoice,
+  requireDeclared,
+  requireMarginalAtLeastFail,
+  requirePointCount,
+  safetyFactor,
+  safetyVerdict,
+  speedAtStress,
+  type ChoiceOption,
+  type LoadVerdict,
+} from "./loads-common.ts";
+
+// ---------------------------------------------------------------------------------------------
+// Spinning rings and disks.
+
+/**
+ * Tip speed of a point on a spinning body (openstax-college-physics, v = rω).
+ *
+ * Formula: $v = \omega R$
+ *
+ * @param angularSpeed ω [rad/s], 0 or more
+ * @param radius R [m], 0 or more
+ * @returns v [m/s]
+ *
+ * Example: 2400 rpm at 125 mm → 31.4 m/s. Sources: openstax-college-physics.
+ */
+export function tipSpeed({ angularSpeed, radius }: { angularSpeed: number; radius: number }): number {
+  requireNonNegative("angularSpeed", angularSpeed, "rad/s");
+  requireNonNegative("radius", radius, "m");
+  return angularSpeed * radius; // openstax-college-physics
+}
+
+interface SpinningBody {
+  /** ρ [kg/m³], greater than 0. */
+  density: number;
+  /** ω [rad/s], 0 or more. */
+  angularSpeed: number;
+}
+
+function requireSpinningBody({ density, angularSpeed }: SpinningBody): void {
+  requirePositive("density", density, "kg/m³");
+  requireNonNegative("angularSpeed", angularSpeed, "rad/s");
+}
+
+function requirePoisson(poisson: number): void {
+  requireInRange("poisson", poisson, "", { min: 0, max: 0.5 });
+}
+
+/**
+ * Hoop stress of a thin spinning ring (carvill-data-handbook §1.2.7): independent of the
+ * cross-section, set by the density and the speed of the ring alone.
+ *
+ * Formula: $\sigma_\theta = \rho v^2 = \rho\,\omega^2 R^2$
+ *
+ * @param density ρ [kg/m³], greater than 0
+ * @param angularSpeed ω [rad/s], 0 or more
+ * @param radius R, the ring's radius [m], 0 or more (the mean radius is exact for a thin ring; the outer radius is conservative)
+ * @returns σ_θ [Pa]
+ *
+ * Assumptions: radial thickness small next to R; nothing inside the ring supports it (no spokes
+ * or web). Example: steel, ρ = 7850 kg/m³, v = 100 m/s → 78.5 MPa. Sources: carvill-data-handbook,
+ * timoshenko-goodier.
+ */
+export function thinRingHoopStress({ density, angularSpeed, radius }: SpinningBody & { radius: number }): number {
+  requireSpinningBody({ density, angularSpeed });
+  const v = tipSpeed({ angularSpeed, radius });
+  return density * v * v; // carvill-data-handbook §1.2.7
+}
+
+/**
+ * Tip speed at which a thin spinning ring's hoop stress reaches a strength (carvill-data-handbook
+ * §1.2.7, σ = ρv² solved for v): a property of the material alone, whatever the ring's size.
+ *
+ * Formula: $v_{lim} = \sqrt{S / \rho}$
+ *
+ * @param density ρ [kg/m³], greater than 0
+ * @param strength S, the yield or ultimate strength [Pa], greater than 0
+ * @returns v_lim [m/s]
+ *
+ * Assumptions: as `thinRingHoopStress`. Example: 6061-T6 (2700 kg/m³, ultimate 310 MPa) → 338.8 m/s.
+ * Sources: carvill-data-handbook.
+ */
+export function thinRingLimitTipSpeed({ density, strength }: { density: number; strength: number }): number {
+  requirePositive("density", density, "kg/m³");
+  requirePositive("strength", strength, "Pa");
+  return Math.sqrt(strength / density); // carvill-data-handbook §1.2.7
+}
+
+/** Radial and hoop stress at one radius of a spinning disk [Pa]. */
+export interface DiskStress {
+  /** σ_r [Pa]. */
+  radial: number;
+  /** σ_θ [Pa]. */
+  hoop: number;
+}
+
+/**
+ * Radial and hoop stress at a radius of a spinning solid disk of uniform thickness
+ * (timoshenko-goodier; roark-rotating-disks).
+ *
+ * Formula: $\sigma_r = \dfrac{3+\nu}{8}\rho\omega^2(b^2 - r^2),\quad \sigma_\theta = \dfrac{\rho\omega^2}{8}\left[(3+\nu)b^2 - (1+3\nu)r^2\right]$
+ *
+ * @param density ρ [kg/m³], greater than 0
+ * @param poisson ν [-], 0 to 0.5
+ * @param angularSpeed ω [rad/s], 0 or more
+ * @param outerRadius b [m], greater than 0
+ * @param radius r [m], 0 to b
+ * @returns σ_r, σ_θ [Pa]
+ *
+ * Assumptions: plane stress (thin disk), isotropic and linear elastic, free rim, no hub load.
+ * Example: steel (7850 kg/m³, ν = 0.3), b = 0.1 m, 10 000 rpm: centre 35.51 MPa both, rim hoop
+ * 15.06 MPa. Sources: timoshenko-goodier, roark-rotating-disks, carvill-data-handbook.
+ */
+export function solidDiskStress({
+  density,
+  poisson,
+  angularSpeed,
+  outerRadius,
+  radius,
+}: SpinningBody & { poisson: number; outerRadius: number; radius: number }): DiskStress {
+  requireSpinningBody({ density, angularSpeed });
+  requirePoisson(poisson);
+  requirePositive("outerRadius", outerRadius, "m");
+  requireInRange("radius", radius, "m", { min: 0, max: outerRadius });
+  const q = density * angularSpeed * angularSpeed;
+  return {
+    radial: ((3 + poisson) / 8) * q * (outerRadius * outerRadius - radius * radius), // timoshenko-goodier
+    hoop: (q / 8) * ((3 + poisson) * outerRadius * outerRadius - (1 + 3 * poisson) * radius * radius), // timoshenko-goodier
+  };
+}
+
+/**
+ * Peak stress of a spinning solid disk: at the centre, where radial and hoop stress are equal
+ * (carvill-data-handbook §1.2.7; timoshenko-goodier).
+ *
+ * Formula: $\sigma_{max} = \dfrac{3+\nu}{8}\,\rho\,\omega^2 b^2 = \dfrac{3+\nu}{8}\,\rho v^2$
+ *
+ * @param density ρ [kg/m³], greater than 0
+ * @param poisson ν [-], 0 to 0.5
+ * @param angularSpeed ω [rad/s], 0 or more
+ * @param outerRadius b [m], greater than 0
+ * @returns σ_max [Pa]
+ *
+ * Example: steel (7850 kg/m³, ν = 0.3), b = 0.1 m, 10 000 rpm → 35.51 MPa.
+ * Sources: carvill-data-handbook, timoshenko-goodier, roark-rotating-disks.
+ */
+export function solidDiskCentreStress({ density, poisson, angularSpeed, outerRadius }: SpinningBody & { poisson: number; outerRadius: number }): number {
+  return solidDiskStress({ density, poisson, angularSpeed, outerRadius, radius: 0 }).hoop;
+}
+
+function requireBore(innerRadius: number, outerRadius: number): void {
+  requirePositive("outerRadius", outerRadius, "m");
+  requireInRange("innerRadius", innerRadius, "m", { min: 0, max: outerRadius, minOpen: true, maxOpen: true });
+}
+
+/**
+ * Radial and hoop stress at a radius of a spinning disk with a central bore, both edges free
+ * (timoshenko-goodier; roark-rotating-disks).
+ *
+ * Formula: $\sigma_r = \dfrac{3+\nu}{8}\rho\omega^2\left(b^2 + a^2 - \dfrac{a^2b^2}{r^2} - r^2\right),\quad \sigma_\theta = \dfrac{3+\nu}{8}\rho\omega^2\left(b^2 + a^2 + \dfrac{a^2b^2}{r^2}\right) - \dfrac{1+3\nu}{8}\rho\omega^2 r^2$
+ *
+ * @param density ρ [kg/m³], greater than 0
+ * @param poisson ν [-], 0 to 0.5
+ * @param angularSpeed ω [rad/s], 0 or more
+ * @param innerRadius a, the bore radius [m], greater than 0 and less than b
+ * @param outerRadius b [m], greater than 0
+ * @param radius r [m], a to b
+ * @returns σ_r, σ_θ [Pa]
+ *
+ * Assumptions: plane stress, isotropic and linear elastic, nothing pressing on the bore (a disk
+ * shrunk or keyed onto a shaft carries extra stress not counted here). Example: steel, a = 0.01 m,
+ * b = 0.1 m, 10 000 rpm: bore hoop 71.17 MPa. Sources: timoshenko-goodier, roark-rotating-disks.
+ */
+export function annularDiskStress({
+  density,
+  poisson,
+  angularSpeed,
+  innerRadius,
+  outerRadius,
+  radius,
+}: SpinningBody & { poisson: number; innerRadius: number; outerRadius: number; radius: number }): DiskStress {
+  requireSpinningBody({ density, angularSpeed });
+  requirePoisson(poisson);
+  requireBore(innerRadius, outerRadius);
+  requireInRange("radius", radius, "m", { min: innerRadius, max: outerRadius });
+  const q = density * angularSpeed * angularSpeed;
+  const a2 = innerRadius * innerRadius;
+  const b2 = outerRadius * outerRadius;
+  const r2 = radius * radius;
+  return {
+    radial: ((3 + poisson) / 8) * q * (b2 + a2 - (a2 * b2) / r2 - r2), // timoshenko-goodier
+    hoop: ((3 + poisson) / 8) * q * (b2 + a2 + (a2 * b2) / r2) - ((1 + 3 * poisson) / 8) * q * r2, // timoshenko-goodier
+  };
+}
+
+/**
+ * Peak hoop stress of a spinning disk with a bore, which sits at the bore (timoshenko-goodier;
+ * roark-rotating-disks). As a → 0 it tends to twice the solid disk's centre stress: a small
+ * hole doubles the peak stress.
+ *
+ * Formula: $\sigma_\theta(a) = \dfrac{\rho\omega^2}{4}\left[(3+\nu)\,b^2 + (1-\nu)\,a^2\right]$
+ *
+ * @param density ρ [kg/m³], greater than 0
+ * @param poisson ν [-], 0 to 0.5
+ * @param angularSpeed ω [rad/s], 0 or more
+ * @param innerRadius a [m], greater than 0 and less than b
+ * @param outerRadius b [m], greater than 0
+ * @returns σ_θ(a) [Pa]
+ *
+ * Example: steel (7850 kg/m³, ν = 0.3), a = 0.01 m, b = 0.1 m, 10 000 rpm → 71.17 MPa.
+ * Sources: timoshenko-goodier, roark-rotating-disks.
+ */
+export function annularDiskBoreStress({
+  density,
+  poisson,
+  angularSpeed,
+  innerRadius,
+  outerRadius,
+}: SpinningBody & { poisson: number; innerRadius: number; outerRadius: number }): number {
+  requireSpinningBody({ density, angularSpeed });
+  requirePoisson(poisson);
+  requireBore(innerRadius, outerRadius);
+  const q = density * angularSpeed * angularSpeed;
+  return (q / 4) * ((3 + poisson) * outerRadius * outerRadius + (1 - poisson) * innerRadius * innerRadius); // timoshenko-goodier
+}
+
+/**
+ * Peak radial stress of a spinning disk with a bore and where it sits (timoshenko-goodier):
+ * dσ_r/dr = 0 at r = √(ab).
+ *
+ * Formula: $\sigma_{r,max} = \dfrac{3+\nu}{8}\rho\omega^2 (b - a)^2$ at $r = \sqrt{ab}$
+ *
+ * @param density ρ [kg/m³], greater than 0
+ * @param poisson ν [-], 0 to 0.5
+ * @param angularSpeed ω [rad/s], 0 or more
+ * @param innerRadius a [m], greater than 0 and less than b
+ * @param outerRadius b [m], greater than 0
+ * @returns stress σ_r,max [Pa] and radius √(ab) [m]
+ *
+ * Example: steel, a = 0.01 m, b = 0.1 m, 10 000 rpm → 28.76 MPa at 31.6 mm. Sources: timoshenko-goodier.
+ */
+export function annularDiskPeakRadialStress({
+  density,
+  poisson,
+  angularSpeed,
+  innerRadius,
+  outerRadius,
+}: SpinningBody & { poisson: number; innerRadius: number; outerRadius: number }): { stress: number; radius: number } {
+  requireSpinningBody({ density, angularSpeed });
+  requirePoisson(poisson);
+  requireBore(innerRadius, outerRadius);
+  const gap = outerRadius - innerRadius;
+  return {
+    stress: ((3 + poisson) / 8) * density * angularSpeed * angularSpeed * gap * gap, // timoshenko-goodier
+    radius: Math.sqrt(innerRadius * outerRadius),
+  };
+}
+
+/** Shapes the rim check knows. */
+export const RIM_SHAPE_OPTIONS = [
+  { value: "thin-ring", label: "Thin ring (a rim or shell with nothing inside)" },
+  { value: "solid-disk", label: "Solid disk (no hole)" },
+  { value: "annular-disk", label: "Disk with a bore" },
+] as const satisfies readonly ChoiceOption[];
+
+export type RimShape = (typeof RIM_SHAPE_OPTIONS)[number]["value"];
+
+/** The material fields of the rim check: density [kg/m³], yield and ultimate strength [Pa], Poisson's ratio [-]. */
+export interface RimMaterialValues {
+  density: number;
+  yieldStrength: number;
+  ultimateStrength: number;
+  poisson: number;
+}
+
+/** Default material of the rim check (a row of calc/materials.ts). */
+export const DEFAULT_RIM_MATERIAL: MaterialId = "al-6061-t6";
+
+/**
+ * The default material's values, as the rim check's field defaults: the 6061-T6 row of the
+ * materials table (substech-materials; ν from asm-matweb-datasheets). Written out here so that the
+ * rim calculator's page does not load the whole table; a test keeps them equal to
+ * `rimMaterial(DEFAULT_RIM_MATERIAL)`, and the table itself is offered through calc/loads.ts.
+ */
+export const DEFAULT_RIM_MATERIAL_VALUES: Readonly<RimMaterialValues> = { density: 2700, yieldStrength: 276e6, ultimateStrength: 310e6, poisson: 0.33 };
+const DEFAULT_MATERIAL = DEFAULT_RIM_MATERIAL_VALUES;
+
+/** Numeric inputs of the rim check, in SI. Choices: `RIM_SHAPE_OPTIONS` (and, in calc/loads.ts, `RIM_MATERIAL_OPTIONS` to fill the material fields via `rimMaterial`). */
+export const rimCheckInputs = defineInputs({
+  outerRadius: {
+    label: "Outer radius",
+    kind: "length",
+    min: 0.005,
+    max: 2,
+    default: 0.125,
+    urlKey: "ro",
+    help: "Radius of the outside edge: the tip of the rim or disk.",
+  },
+  innerRadius: {
+    label: "Bore radius",
+    kind: "length",
+    min: 0,
+    max: 2,
+    default: 0.115,
+    urlKey: "ri",
+    help: "Radius of the central hole; read only for a disk with a bore, and must be less than the outer radius.",
+  },
+  density: {
+    label: "Density",
+    kind: "density",
+    min: 100,
+    max: 25000,
+    default: DEFAULT_MATERIAL.density,
+    urlKey: "rho",
+    help: "Mass density of the material.",
+  },
+  yieldStrength: {
+    label: "Yield strength",
+    kind: "stress",
+    min: 1e6,
+    max: 5e9,
+    default: DEFAULT_MATERIAL.yieldStrength,
+    urlKey: "sy",
+    help: "Yield or 0.2 % proof strength of the material in its actual condition.",
+  },
+  ultimateStrength: {
+    label: "Ultimate strength",
+    kind: "stress",
+    min: 1e6,
+    max: 5e9,
+    default: DEFAULT_MATERIAL.ultimateStrength,
+    urlKey: "su",
+    help: "Ultimate tensile strength; at least the yield strength.",
+  },
+  poisson: {
+    label: "Poisson's ratio",
+    kind: "fraction",
+    min: 0,
+    max: 0.5,
+    default: DEFAULT_MATERIAL.poisson,
+    unit: { metric: "frac", us: "frac" },
+    urlKey: "nu",
+    help: "About 0.3 for metals; read for disks only (a thin ring does not depend on it).",
+  },
+  angularSpeed: {
+    label: "Speed",
+    kind: "angularSpeed",
+    min: rpmToRadPerSecond(1),
+    max: rpmToRadPerSecond(100000),
+    default: rpmToRadPerSecond(2400),
+    urlKey: "rpm",
+    help: "The top speed the part will see.",
+  },
+  failBelow: {
+    label: "Fails below",
+    kind: "fraction",
+    min: 1,
+    max: 10,
+    default: DEFAULT_SAFETY_THRESHOLDS.failBelow,
+    unit: { metric: "frac", us: "frac" },
+    urlKey: "fail",
+    help: "Safety factor under which the part is called a failure.",
+  },
+  marginalBelow: {
+    label: "Thin below",
+    kind: "fraction",
+    min: 1,
+    max: 20,
+    default: DEFAULT_SAFETY_THRESHOLDS.marginalBelow,
+    unit: { metric: "frac", us: "frac" },
+    urlKey: "thin",
+    help: "Safety factor under which the margin is flagged as thin.",
+  },
+});
+
+export type RimCheckInput = { [K in keyof typeof rimCheckInputs]: number } & {
+  /** A value of `RIM_SHAPE_OPTIONS`. */
+  shape: string;
+};
+
+/** Choice default of the rim check. */
+export const RIM_CHOICE_DEFAULTS = { shape: "thin-ring" } as const satisfies { shape: RimShape };
+
+export interface RimCheck {
+  shape: RimShape;
+  /** Speed of the outer edge, ω·b [m/s]. */
+  tipSpeed: number;
+  /** The largest hoop stress, which is also the largest principal stress [Pa]. */
+  peakStress: number;
+  /** Where it sits: b for a ring, 0 for a solid disk, a for a bored disk [m]. */
+  peakStressRadius: number;
+  /** σ_peak / (ρ v_tip²): 1 for a ring, (3+ν)/8 for a solid disk, up to (3+ν)/4 for a bored disk [-]. */
+  shapeFactor: number;
+  /** The largest radial stress [Pa] (0 for a thin ring). */
+  peakRadialStress: number;
+  /** Where it sits [m]. */
+  peakRadialStressRadius: number;
+  /** yieldStrength / peakStress [-]. */
+  safetyFactorYield: number;
+  /** ultimateStrength / peakStress [-]. */
+  safetyFactorUltimate: number;
+  /** The smaller of the two; with yield ≤ ultimate, the yield one [-]. */
+  safetyFactor: number;
+  /** Speed at which the peak stress reaches the yield strength [rad/s]. */
+  speedAtYield: number;
+  /** Speed at which the peak stress reaches the ultimate strength: the burst estimate [rad/s]. */
+  speedAtUltimate: number;
+  /** Tip speed at that burst estimate [m/s]. */
+  tipSpeedAtUltimate: number;
+  verdict: LoadVerdict;
+}
+
+/**
+ * Peak hoop and radial stress of a spinning ring or disk (carvill-data-handbook,
+ * timoshenko-goodier, roark-rotating-disks), whatever the shape. Used by `rimCheck`.
+ */
+function peakStresses(
+  shape: RimShape,
+  body: { density: number; poisson: number; angularSpeed: number; innerRadius: number; outerRadius: number },
+): { hoop: number; hoopRadius: number; radial: number; radialRadius: number } {
+  const { density, poisson, angularSpeed, innerRadius, outerRadius } = body;
+  if (shape === "thin-ring") {
+    return { hoop: thinRingHoopStress({ density, angularSpeed, radius: outerRadius }), hoopRadius: outerRadius, radial: 0, radialRadius: outerRadius };
+  }
+  if (shape === "solid-disk") {
+    const centre = solidDiskCentreStress({ density, poisson, angularSpeed, outerRadius });
+    return { hoop: centre, hoopRadius: 0, radial: centre, radialRadius: 0 };
+  }
+  const peakRadial = annularDiskPeakRadialStress({ density, poisson, angularSpeed, innerRadius, outerRadius });
+  return {
+    hoop: annularDiskBoreStress({ density, poisson, angularSpeed, innerRadius, outerRadius }),
+    hoopRadius: innerRadius,
+    radial: peakRadial.stress,
+    radialRadius: peakRadial.radius,
+  };
+}
+
+/**
+ * The rim check: peak stress of a spinning thin ring, solid disk or bored disk, its safety factors
+ * against the material's yield and ultimate strength, and the speeds at which it reaches them
+ * (carvill-data-handbook, timoshenko-goodier, roark-rotating-disks).
+ *
+ * Formula: ring $\sigma = \rho\omega^2 b^2$; solid disk $\sigma = \tfrac{3+\nu}{8}\rho\omega^2 b^2$;
+ * bored disk $\sigma = \tfrac{\rho\omega^2}{4}[(3+\nu)b^2 + (1-\nu)a^2]$; $\omega_{lim} = \omega\sqrt{S/\sigma}$
+ *
+ * @param input the fields of `rimCheckInputs` (SI) and `shape`
+ * @returns tip speed, peak stresses and where they sit, safety factors, limit speeds and a verdict
+ *
+ * Assumptions:
+ * - Uniform thickness, plane stress, isotropic linear elastic material; the thickness does not
+ *   enter. Bolt holes, slots, teeth and welds concentrate stress and are not counted.
+ * - A thin ring is taken at its outer radius (conservative: the exact thin-ring value uses the
+ *   mean radius); no spokes or web hold it.
+ * - The peak hoop stress is the largest principal stress everywhere in these shapes (σ_θ ≥ σ_r ≥ 0),
+ *   so comparing it with the tensile strength is the Tresca check too.
+ * - The speed at ultimate is a burst estimate from the elastic peak stress. A ring's stress is
+ *   uniform already, so for a ring it is direct; a ductile disk yields at its peak and spreads the
+ *   load first, so for a disk it is conservative. Impacts are not counted.
+ *
+ * Example (invented): a 6061-T6 ring rim of 125 mm radius at 2400 rpm: v = 31.4 m/s,
+ * σ = 2.665 MPa, n_y = 104; reaches yield at 24 400 rpm and the burst estimate at 25 900 rpm.
+ *
+ * Sources: carvill-data-handbook, timoshenko-goodier, roark-rotating-disks, newton-second-law,
+ * safety-factor-practice.
+ */
+export function rimCheck(input: RimCheckInput): RimCheck {
+  const shape = requireChoice("shape", input.shape, RIM_SHAPE_OPTIONS);
+  const outerRadius = requireDeclared(rimCheckInputs, "outerRadius", input.outerRadius);
+  requireDeclared(rimCheckInputs, "innerRadius", input.innerRadius);
+  const density = requireDeclared(rimCheckInputs, "density", input.density);
+  const yieldStrength = requireDeclared(rimCheckInputs, "yieldStrength", input.yieldStrength);
+  const ultimateStrength = requireDeclared(rimCheckInputs, "ultimateStrength", input.ultimateStrength);
+  const poisson = requireDeclared(rimCheckInputs, "poisson", input.poisson);
+  const angularSpeed = requireDeclared(rimCheckInputs, "angularSpeed", input.angularSpeed);
+  const failBelow = requireDeclared(rimCheckInputs, "failBelow", input.failBelow);
+  const marginalBelow = requireDeclared(rimCheckInputs, "marginalBelow", input.marginalBelow);
+  requireMarginalAtLeastFail(failBelow, marginalBelow);
+  if (!(yieldStrength <= ultimateStrength)) {
+    throw new CalcInputError({ param: "yieldStrength", value: yieldStrength, expected: "at most the ultimate strength", unit: "Pa" });
+  }
+  if (shape === "annular-disk") requireBore(input.innerRadius, outerRadius);
+  const innerRadius = shape === "annular-disk" ? input.innerRadius : 0; // not read for a ring or a solid disk
+
+  const peak = peakStresses(shape, { density, poisson, angularSpeed, innerRadius, outerRadius });
+  const v = tipSpeed({ angularSpeed, radius: outerRadius });
+  const safetyFactorYield = safetyFactor({ strength: yieldStrength, stress: peak.hoop });
+  const safetyFactorUltimate = safetyFactor({ strength: ultimateStrength, stress: peak.hoop });
+  const speedAtUltimate = speedAtStress({ angularSpeed, stress: peak.hoop, strength: ultimateStrength });
+  return {
+    shape,
+    tipSpeed: v,
+    peakStress: peak.hoop,
+    peakStressRadius: peak.hoopRadius,
+    shapeFactor: peak.hoop / (density * v * v),
+    peakRadialStress: peak.radial,
+    peakRadialStressRadius: peak.radialRadius,
+    safetyFactorYield,
+    safetyFactorUltimate,
+    safetyFactor: safetyFactorYield,
+    speedAtYield: speedAtStress({ angularSpeed, stress: peak.hoop, strength: yieldStrength }),
+    speedAtUltimate,
+    tipSpeedAtUltimate: speedAtUltimate * outerRadius,
+    verdict: safetyVerdict({ safetyFactor: safetyFactorYield, failBelow, marginalBelow }),
+  };
+}
+
+/** One point of a disk stress distribution. */
+export interface DiskStressPoint extends DiskStress {
+  /** r [m]. */
+  radius: number;
+}
+
+/**
+ * Radial and hoop stress across a spinning ring or disk, for a plot (timoshenko-goodier;
+ * roark-rotating-disks; carvill-data-handbook for the ring).
+ *
+ * Formula: as `solidDiskStress` and `annularDiskStress`; a thin ring is one point, σ_θ = ρω²b², σ_r = 0
+ *
+ * @param input the fields of `rimCheckInputs` and `shape` (strengths and thresholds are checked, not used)
+ * @param points number of points from the inside to the outer edge, a whole number from 2 to 1000 (default 41)
+ * @returns points from r = 0 (solid) or a (bored) to b, stresses in [Pa]; a single point at b for a thin ring
+ *
+ * Sources: timoshenko-goodier, roark-rotating-disks, carvill-data-handbook.
+ */
+export function rimStressProfile(input: RimCheckInput, { points = 41 }: { points?: number } = {}): DiskStressPoint[] {
+  requirePointCount(points);
+  const { shape } = rimCheck(input); // validates every field
+  const { density, poisson, angularSpeed, innerRadius, outerRadius } = input;
+  if (shape === "thin-ring") {
+    return [{ radius: outerRadius, radial: 0, hoop: thinRingHoopStress({ density, angularSpeed, radius: outerRadius }) }];
+  }
+  const start = shape === "solid-disk" ? 0 : innerRadius;
+  return Array.from({ length: points }, (_, i) => {
+    const radius = i === points - 1 ? outerRadius : start + ((outerRadius - start) * i) / (points - 1);
+    const stress =
+      shape === "solid-disk"
+        ? solidDiskStress({ density, poisson, angularSpeed, outerRadius, radius })
+        : annularDiskStress({ density, poisson, angularSpeed, innerRadius, outerRadius, radius });
+    return { radius, ...stress };
+  });
+}

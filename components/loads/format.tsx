@@ -1,0 +1,47 @@
+/**
+ * Formatting shared by the two loads calculators: quantities in the user's system, speeds in rpm,
+ * stresses for the chart axis, the verdict box and the grid of results. Formatting and conversion
+ * only; no physics.
+ */
+import type { LoadVerdict } from "../../calc/loads-common.ts";
+import { displayUnit, formatNumber, formatQuantity, fromSI, radPerSecondToRpm, UNITS, type QuantityKind, type UnitSystem } from "../../calc/units.ts";
+
+export const q = (value: number, kind: QuantityKind, system: UnitSystem) => formatQuantity(value, kind, { system }).text;
+
+export const rpm = (angularSpeed: number) => `${formatNumber(radPerSecondToRpm(angularSpeed))} rpm`;
+
+/** An area in mm² (metric) or in² (US). */
+export function area(valueSI: number, system: UnitSystem): string {
+  const inch = UNITS.in.factor;
+  return system === "us" ? `${formatNumber(valueSI / (inch * inch))} in²` : `${formatNumber(valueSI * 1e6)} mm²`;
+}
+
+/** The unit symbol and converter for an axis of `kind` in `system`. */
+export function axis(kind: QuantityKind, system: UnitSystem): { symbol: string; of: (valueSI: number) => number } {
+  const unit = displayUnit(kind, system);
+  return { symbol: UNITS[unit].symbol, of: (valueSI: number) => fromSI(valueSI, unit) };
+}
+
+export const VERDICT_TONE: Record<LoadVerdict, "ok" | "warn" | "bad"> = { holds: "ok", marginal: "warn", fails: "bad" };
+export const VERDICT_TITLE: Record<LoadVerdict, string> = { holds: "Holds", marginal: "Marginal", fails: "Fails" };
+
+/** The verdict rule in words: "fails below 1, marginal below 2, holds at 2 or more". */
+export function verdictRule(failBelow: number, marginalBelow: number): string {
+  const f = String(Number(failBelow.toPrecision(4)));
+  const m = String(Number(marginalBelow.toPrecision(4)));
+  return `fails below ${f}, marginal from ${f} to below ${m}, holds at ${m} or more`;
+}
+
+/** The results grid: one [label, data-out key, formatted value] per row. */
+export function Outputs({ rows }: { rows: readonly (readonly [string, string, string])[] }) {
+  return (
+    <dl class="results-grid">
+      {rows.map(([label, key, value]) => (
+        <div key={key}>
+          <dt>{label}</dt>
+          <dd data-out={key}>{value}</dd>
+        </div>
+      ))}
+    </dl>
+  );
+}

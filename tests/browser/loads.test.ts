@@ -1,0 +1,234 @@
+/**
+ * The bolt and rim calculators in a real browser (Debian chromium via playwright-core): open a
+ * permalink, read the outputs, edit a quantity and a category, see the URL follow, see errors
+ * beside fields, survive a hostile link, and pass axe-core in light and dark.
+ */
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import type { Browser, Page } from "playwright-core";
+import { readFileSync } from "node:fs";
+import { createRequire } from "node:module";
+import { launchBrowser, serveDist } from "../support/browser.ts";
+
+let browser: Browser;
+let server: Awaited<ReturnType<typeof serveDist>>;
+const origin = () => server.url.replace(/\/$/, "");
+const axeSource = readFileSync(createRequire(import.meta.url).resolve("axe-core/axe.min.js"), "utf8");
+
+beforeAll(async () => {
+  server = await serveDist();
+  browser = await launchBrowser();
+});
+afterAll(async () => {
+  await browser?.close();
+  await server?.close();
+});
+
+async function open(path: string, options: { colorScheme?: "light" | "dark" } = {}) {
+  const context = await browser.newContext({ colorScheme: options.colorScheme ?? "light", viewport: { width: 390, height: 844 } });
+  const page = await context.newPage();
+  const problems: string[] = [];
+  page.on("pageerror", (error) => problems.push(`pageerror: ${error.message}`));
+  page.on("console", (message) => {
+    if (message.type() === "error") problems.push(`console: ${message.text()}`);
+  });
+  page.on("dialog", (dialog) => {
+    problems.push(`dialog: ${dialog.message()}`);
+    void dialog.dismiss();
+  });
+  const requests: string[] = [];
+  page.on("request", (request) => requests.push(request.url()));
+  await page.goto(`${origin()}${path}`);
+  if ((await page.locator("astro-island").count()) > 0) await page.waitForSelector("astro-island:not([ssr])");
+  return { page, context, problems, requests };
+}
+
+const out = (page: Page, name: string) => page.locator(`[data-out="${name}"]`).textContent();
+const param = (page: Page, key: string) => new URL(page.url()).searchParams.get(key);
+
+const BOLT = "/chapters/fasteners/";
+const RIM = "/chapters/rims/";
+
+describe("the bolt calculator in the browser", () => {
+  it("answers a permalink: 42 g at 55 mm and 2400 rpm on one M2 class 4.6 screw in shear is marginal", async () => {
+    const { page, context, problems } = await open(`${BOLT}?v=1&u=metric&m=42g&r=55mm&rpm=2400rpm&n=1&size=M2&cls=4.6&mode=shear&plane=thread&sr=0.5&fail=1&thin=2`);
+    // F = 0.042 kg × (80π rad/s)² × 0.055 m = 145.9 N; τ = 145.9 N / 2.07 mm² = 70.5 MPa;
+    // τ_y = 240 MPa / √3 = 138.6 MPa → n = 1.97; yield at 2400 rpm × √1.97 = 3360 rpm (tests/components/loads.test.tsx).
+    expect(await out(page, "part-force")).toBe("146 N");
+    expect(await out(page, "stress")).toBe("70.5 MPa");
+    expect(await out(page, "yield")).toBe("139 MPa");
+    expect(await out(page, "sf-yield")).toBe("1.97");
+    expect(await out(page, "speed-yield")).toBe("3360 rpm");
+    const verdict = await out(page, "verdict");
+    expect(verdict).toContain("Marginal.");
+    expect(verdict).toContain("Rule: fails below 1, marginal from 1 to below 2, holds at 2 or more.");
+    expect(await page.inputValue("#fastener-calculator-size")).toBe("M2");
+    expect(await page.inputValue("#fastener-calculator-propertyClass")).toBe("4.6");
+    expect(await page.isChecked('input[name="fastener-calculator-mode"][value="shear"]')).toBe(true);
+    expect(await page.inputValue("#fastener-calculator-partMass")).toBe("42 g");
+    expect(problems).toEqual([]);
+    await context.close();
+  });
+
+  it("updates outputs and the URL when a quantity, the loading mode and the thread size change", async () => {
+    const { page, context } = await open(`${BOLT}?v=1&m=42g&r=55mm&rpm=2400rpm&size=M2&cls=4.6`);
+    await page.fill("#fastener-calculator-partMass", "100 g");
+    // 100 g: F = 347.4 N, τ = 167.8 MPa against 138.6 MPa → n = 0.826: fails.
+    await expect.poll(() => out(page, "verdict")).toContain("Fails.");
+    expect(await out(page, "stress")).toBe("168 MPa");
+    expect(await out(page, "sf-yield")).toBe("0.826");
+    await expect.poll(() => param(page, "m")).toBe("100g");
+
+    await page.getByRole("radio", { name: /^Tension/ }).check();
+    // In tension the same 167.8 MPa meets R_eL,min = 240 MPa: n = 1.43, marginal.
+    await expect.poll(() => out(page, "sf-yield")).toBe("1.43");
+    expect(await out(page, "verdict")).toContain("Marginal.");
+    expect(await page.locator("#fastener-calculator-shearPlane-help").textContent()).toContain("Not read in tension.");
+    await expect.poll(() => param(page, "mode")).toBe("tension");
+
+    await page.selectOption("#fastener-calculator-size", "M4");
+    // M4, A_s = 8.78 mm²: σ = 347.4 / 8.78 = 39.57 MPa; n = 240 / 39.57 = 6.07.
+    await expect.poll(() => out(page, "stress")).toBe("39.6 MPa");
+    expect(await out(page, "sf-yield")).toBe("6.07");
+    await expect.poll(() => param(page, "size")).toBe("M4");
+    expect(param(page, "cls")).toBe("4.6");
+    await context.close();
+  });
+
+  it("shows errors beside the field, including a rule across two fields, and no NaN", async () => {
+    const { page, context } = await open(BOLT);
+    for (const [id, text, message] of [
+      ["radius", "abc", "Radius of the part must start with a number"],
+      ["count", "2.5", "Number of bolts must be a whole number between 1 and 64 (got 2.5)"],
+      ["partMass", "5 mm", 'Part mass has a unit "mm" that is not a mass unit'],
+    ] as const) {
+      await page.fill(`#fastener-calculator-${id}`, text);
+      await expect.poll(() => page.locator(`#fastener-calculator-${id}-error`).textContent()).toContain(message);
+      expect(await page.getAttribute(`#fastener-calculator-${id}`, "aria-invalid")).toBe("true");
+      await page.fill(`#fastener-calculator-${id}`, id === "radius" ? "70 mm" : id === "count" ? "1" : "40 g");
+    }
+    await page.fill("#fastener-calculator-failBelow", "3");
+    await expect.poll(() => page.locator("#fastener-calculator-marginalBelow-error").textContent()).toBe("Thin below must be at least the fail threshold, 3.");
+    expect(await page.getAttribute("#fastener-calculator-marginalBelow", "aria-describedby")).toContain("fastener-calculator-marginalBelow-error");
+    expect(await page.locator(".calc-results--empty").count()).toBe(1);
+    const body = (await page.textContent("body")) ?? "";
+    expect(body).not.toMatch(/\bNaN\b|Infinity/);
+    await context.close();
+  });
+
+  it("treats a hostile link as text: unknown choices are reported, nothing runs, nothing is fetched elsewhere", async () => {
+    const hostile = `?size=${encodeURIComponent("<img src=x onerror=alert(1)>")}&cls=99.9&m=${encodeURIComponent('"><script>alert(2)</script>')}`;
+    const { page, context, problems, requests } = await open(`${BOLT}${hostile}`);
+    expect(await page.locator("main img").count()).toBe(0);
+    const notices = (await page.locator(".calc-notices").textContent()) ?? "";
+    expect(notices).toContain('thread size "<img src=x onerror=alert…" is not one this calculator offers');
+    expect(notices).toContain('property class "99.9" is not one this calculator offers');
+    expect(await page.inputValue("#fastener-calculator-size")).toBe("M4");
+    expect(await page.locator("#fastener-calculator-partMass-error").textContent()).toContain("Part mass must start with a number");
+    expect(problems).toEqual([]);
+    expect(requests.filter((url) => !url.startsWith(origin()))).toEqual([]);
+    await context.close();
+  });
+
+  it("opens the worked example's link from the chapter with the same numbers as the prose", async () => {
+    const { page, context } = await open(BOLT);
+    const href = await page.getByRole("link", { name: "Open the M4 check in the calculator" }).getAttribute("href");
+    expect(href).toContain("size=M4");
+    const example = await open(`${BOLT}${href}`);
+    // The demo: 42 g at 55 mm, 2400 rpm, one M4 class 8.8 in shear: τ = 16.6 MPa, n = 22.2 (tests/calc/loads.test.ts).
+    expect(await out(example.page, "stress")).toBe("16.6 MPa");
+    expect(await out(example.page, "sf-yield")).toBe("22.2");
+    expect(await out(example.page, "verdict")).toContain("Holds.");
+    await example.context.close();
+    await context.close();
+  });
+});
+
+describe("the rim calculator in the browser", () => {
+  it("answers a permalink: a 4130 disk with a 10 mm bore at 10 000 rpm peaks at the bore", async () => {
+    const { page, context, problems } = await open(`${RIM}?v=1&u=metric&shape=annular-disk&mat=steel-4130-normalized&ro=100mm&ri=10mm&rpm=10000rpm`);
+    // σ_θ(a) = ρω²/4 · [(3+ν)b² + (1−ν)a²] with ρ = 7850 kg/m³, ν = 0.29, ω = 1047.2 rad/s: 71.0 MPa;
+    // n_y = 435/71.0 = 6.13; burst estimate 10 000 rpm × √(670/71.0) = 30 700 rpm (tests/components/loads.test.tsx).
+    expect(await out(page, "peak-stress")).toBe("71.0 MPa");
+    expect(await out(page, "peak-at")).toBe("at the bore, r = 10.0 mm");
+    expect(await out(page, "radial-stress")).toBe("28.7 MPa");
+    expect(await out(page, "tip-speed")).toBe("105 m/s");
+    expect(await out(page, "sf-yield")).toBe("6.13");
+    expect(await out(page, "speed-ult")).toBe("30700 rpm");
+    expect(await out(page, "verdict")).toContain("Holds.");
+    expect(await page.inputValue("#rim-calculator-material")).toBe("steel-4130-normalized");
+    expect(await page.inputValue("#rim-calculator-density")).toBe("7.85 g/cm³");
+    expect(await page.inputValue("#rim-calculator-poisson")).toBe("0.29");
+    expect(problems).toEqual([]);
+    await context.close();
+  });
+
+  it("updates outputs and the URL when the speed, the shape and the material change", async () => {
+    const { page, context } = await open(`${RIM}?v=1&shape=annular-disk&mat=steel-4130-normalized&ro=100mm&ri=10mm&rpm=10000rpm`);
+    await page.fill("#rim-calculator-angularSpeed", "20000 rpm");
+    // Twice the speed, four times the stress: 284 MPa; n_y = 6.13/4 = 1.53, marginal.
+    await expect.poll(() => out(page, "peak-stress")).toBe("284 MPa");
+    expect(await out(page, "sf-yield")).toBe("1.53");
+    expect(await out(page, "verdict")).toContain("Marginal.");
+    await expect.poll(() => param(page, "rpm")).toBe("20000rpm");
+
+    await page.getByRole("radio", { name: /^Solid disk/ }).check();
+    // Solid disk: (3+ν)/8 · ρω²b² = 3.29/8 × 7850 × 2094.4² × 0.01 = 142 MPa, at the centre.
+    await expect.poll(() => out(page, "peak-stress")).toBe("142 MPa");
+    expect(await out(page, "peak-at")).toBe("at the centre");
+    await expect.poll(() => param(page, "shape")).toBe("solid-disk");
+
+    await page.selectOption("#rim-calculator-material", "ti-6al-4v-annealed");
+    await expect.poll(() => page.inputValue("#rim-calculator-density")).toBe("4.43 g/cm³");
+    await expect.poll(() => param(page, "mat")).toBe("ti-6al-4v-annealed");
+    expect(param(page, "rho")).toBe("4.43g/cm³");
+
+    await page.fill("#rim-calculator-yieldStrength", "800 MPa");
+    await expect.poll(() => page.inputValue("#rim-calculator-material")).toBe("custom");
+    await expect.poll(() => param(page, "mat")).toBe("custom");
+    await context.close();
+  });
+
+  it("shows the thin ring's single stress as one point and says so", async () => {
+    const { page, context } = await open(RIM);
+    // The default 6061-T6 ring of 125 mm at 2400 rpm: 2.66 MPa, n_y = 104 (tests/calc/loads.test.ts).
+    expect(await out(page, "peak-stress")).toBe("2.66 MPa");
+    expect(await out(page, "radial-at")).toBe("none in a thin ring");
+    expect(await page.locator(".chart-legend").textContent()).toContain("Hoop stress of the ring (one value, at its outer radius)");
+    await context.close();
+  });
+
+  it("puts a bore as large as the rim on the bore field, and a bad number on its own field", async () => {
+    const { page, context } = await open(`${RIM}?shape=annular-disk&ro=100mm&ri=10mm`);
+    await page.fill("#rim-calculator-innerRadius", "120 mm");
+    await expect.poll(() => page.locator("#rim-calculator-innerRadius-error").textContent()).toMatch(/^Bore radius must be /);
+    expect(await page.getAttribute("#rim-calculator-innerRadius", "aria-invalid")).toBe("true");
+    await page.fill("#rim-calculator-innerRadius", "10 mm");
+    await page.fill("#rim-calculator-density", "heavy");
+    await expect.poll(() => page.locator("#rim-calculator-density-error").textContent()).toContain("Density must start with a number");
+    const body = (await page.textContent("body")) ?? "";
+    expect(body).not.toMatch(/\bNaN\b|Infinity/);
+    await context.close();
+  });
+});
+
+describe("accessibility of the loads chapters (axe-core)", () => {
+  const cases = [
+    ...[BOLT, RIM].flatMap((path) => (["light", "dark"] as const).map((colorScheme) => ({ path, colorScheme }))),
+    // With errors showing beside fields and a notice above them.
+    { path: `${BOLT}?r=abc&mode=tension&cls=0.1`, colorScheme: "light" as const },
+    { path: `${RIM}?shape=annular-disk&ri=300mm&mat=x`, colorScheme: "dark" as const },
+  ];
+  for (const { path, colorScheme } of cases) {
+    it(`finds no violations on ${path} (${colorScheme})`, async () => {
+      const { page, context } = await open(path, { colorScheme });
+      await page.addScriptTag({ content: axeSource });
+      const result = await page.evaluate(async () => {
+        // @ts-expect-error axe is injected above
+        const r = await window.axe.run(document, { resultTypes: ["violations"] });
+        return r.violations.map((v: { id: string; nodes: { target: string[] }[] }) => `${v.id}: ${v.nodes.map((n) => n.target.join(" ")).join(", ")}`);
+      });
+      expect(result).toEqual([]);
+      await context.close();
+    });
+  }
+});
