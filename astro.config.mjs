@@ -36,6 +36,19 @@ export default defineConfig({
   devToolbar: { enabled: false },
   vite: {
     plugins: [katexWoff2Only()],
-    build: { assetsInlineLimit: 0 },
+    build: {
+      assetsInlineLimit: 0,
+      rolldownOptions: {
+        output: {
+          // Every calculator page needs the same runtime (Preact, signals, units, the shared
+          // calculator parts): one chunk for it compresses better than nine small ones.
+          codeSplitting: {
+            groups: [
+              { name: "runtime", test: /node_modules[\\/](preact|@preact|d3-array)[\\/]|calc[\\/](units|inputs|errors|constants)\.ts|components[\\/]calc-ui[\\/]/ },
+            ],
+          },
+        },
+      },
+    },
   },
 });

@@ -7,6 +7,10 @@ import { accelerometerPlacementInputs } from "../../calc/rotation.ts";
 import { headingDriftInputs } from "../../calc/heading.ts";
 import type { UnitSystem } from "../../calc/units.ts";
 import { permalinkQuery } from "../calc-ui/permalink.ts";
+import { drivetrainInputs, DRIVE_TYPE_URL_KEY } from "../../calc/drivetrain.ts";
+import type { FastenerCheckInput, RimCheckInput } from "../../calc/loads.ts";
+import { fastenerLink } from "../loads/fastener-model.ts";
+import { rimLink, CUSTOM_MATERIAL } from "../loads/rim-model.ts";
 
 /** The chapter (slug) whose calculator edits each section. */
 export const SECTION_CHAPTER: Record<DesignSection, string> = {
@@ -42,9 +46,21 @@ export function calculatorLink(design: Design, section: DesignSection, index: nu
     case "headingDrift":
       query = design.headingDrift ? permalinkQuery(headingDriftInputs, design.headingDrift, system) : null;
       break;
+    case "fasteners": {
+      const entry = design.fasteners?.[index ?? 0];
+      query = entry ? fastenerLink(entry as FastenerCheckInput, system) : null;
+      break;
+    }
+    case "rims": {
+      const entry = design.rims?.[index ?? 0];
+      query = entry ? rimLink(entry as RimCheckInput, CUSTOM_MATERIAL, system) : null;
+      break;
+    }
+    case "drivetrain":
+      query = design.drivetrain ? `${permalinkQuery(drivetrainInputs, design.drivetrain as unknown as Record<string, number>, system)}&${DRIVE_TYPE_URL_KEY}=${design.drivetrain.driveType}` : null;
+      break;
     default:
       query = null;
   }
-  void index;
   return query === null ? path : `${path}?${query}#${ANCHOR[section]}`;
 }

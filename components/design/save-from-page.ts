@@ -9,6 +9,12 @@ import { accelerometerPlacementInputs } from "../../calc/rotation.ts";
 import { headingDriftInputs } from "../../calc/heading.ts";
 import type { UnitSystem } from "../../calc/units.ts";
 import { decodeState } from "../calc-ui/permalink.ts";
+import { fastenerCheckInputs, rimCheckInputs } from "../../calc/loads.ts";
+import { drivetrainInputs, DRIVE_TYPE_URL_KEY, requireDriveType } from "../../calc/drivetrain.ts";
+import { readChoices } from "../loads/choices.ts";
+import { FASTENER_CHOICES } from "../loads/fastener-model.ts";
+import { rimChoices } from "../loads/rim-model.ts";
+import { defaultSection } from "../../calc/design.ts";
 import { loadStore, newId, saveStore } from "./store.ts";
 
 /** SI values of a calculator from its query string; null with the reason when a field does not read. */
@@ -40,6 +46,34 @@ export function withSection(design: Design, section: DesignSection, query: strin
     case "headingDrift": {
       const read = valuesFromQuery(headingDriftInputs, query);
       return "error" in read ? read : { ...design, headingDrift: read.values, modified: stamp };
+    }
+    case "fasteners": {
+      const read = valuesFromQuery(fastenerCheckInputs, query);
+      if ("error" in read) return read;
+      const choices = readChoices(FASTENER_CHOICES, query).values;
+      const base = defaultSection("fasteners")[0]!;
+      const list = design.fasteners ?? [];
+      const entry = { ...base, ...read.values, ...choices, name: `Fasteners ${list.length + 1}` };
+      return { ...design, fasteners: [...list, entry].slice(-24), modified: stamp };
+    }
+    case "rims": {
+      const read = valuesFromQuery(rimCheckInputs, query);
+      if ("error" in read) return read;
+      const choices = readChoices(rimChoices([]), query).values;
+      const list = design.rims ?? [];
+      const entry = { ...defaultSection("rims")[0]!, ...read.values, shape: choices.shape ?? defaultSection("rims")[0]!.shape, name: `Rim ${list.length + 1}` };
+      return { ...design, rims: [...list, entry].slice(-24), modified: stamp };
+    }
+    case "drivetrain": {
+      const read = valuesFromQuery(drivetrainInputs, query);
+      if ("error" in read) return read;
+      let driveType: string = "weapon";
+      try {
+        driveType = requireDriveType(new URLSearchParams(query).get(DRIVE_TYPE_URL_KEY) ?? "weapon");
+      } catch {
+        return { error: "the drive type in the page address is not weapon or spinner." };
+      }
+      return { ...design, drivetrain: { ...read.values, driveType }, modified: stamp };
     }
     default:
       return { error: "This calculator cannot be saved to a design yet." };

@@ -109,7 +109,7 @@ export default function SpinUpCalculator({ id = "spin-up-calculator" }: SpinUpCa
       )}
       <Compare model={model} idPrefix={id} />
       <Sweep model={model} idPrefix={id} />
-      <Toolbar idPrefix={id} system={model.fields.system} onSystem={model.setSystem} link={() => linkFor(model.link, id)} />
+      <Toolbar idPrefix={id} system={model.fields.system} onSystem={model.setSystem} link={() => linkFor(model.link, id)} designSection="drivetrain" />
     </section>
   );
 }

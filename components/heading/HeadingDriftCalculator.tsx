@@ -184,7 +184,7 @@ export default function HeadingDriftCalculator({ id = "drift-calculator" }: Head
         <FieldsForm fields={model.pair} groups={PAIR_GROUPS} idPrefix={`${id}-p`} error={model.pairOutcome.value.error} />
         <PairResults model={model} />
       </div>
-      <Toolbar idPrefix={id} system={model.fields.system} onSystem={model.setSystem} link={link} />
+      <Toolbar idPrefix={id} system={model.fields.system} onSystem={model.setSystem} link={link} designSection="headingDrift" />
     </section>
   );
 }

@@ -155,7 +155,7 @@ export default function FastenerCalculator({ id = "fastener-calculator" }: Faste
       </form>
       <Results model={model} />
       <StressChart model={model} />
-      <Toolbar idPrefix={id} system={fields.system} onSystem={fields.setSystem} link={() => linkFor(model.sync, id)} />
+      <Toolbar idPrefix={id} system={fields.system} onSystem={fields.setSystem} link={() => linkFor(model.sync, id)} designSection="fasteners" />
     </section>
   );
 }

@@ -154,7 +154,7 @@ export default function RimCalculator({ id = "rim-calculator", materials = [] }:
       </form>
       <Results model={model} />
       <ProfileChart model={model} />
-      <Toolbar idPrefix={id} system={fields.system} onSystem={fields.setSystem} link={() => linkFor(model.sync, id)} />
+      <Toolbar idPrefix={id} system={fields.system} onSystem={fields.setSystem} link={() => linkFor(model.sync, id)} designSection="rims" />
     </section>
   );
 }

@@ -30,9 +30,9 @@ const BUDGET = {
   chapterJs: 25 * KB,
   /** The only script allowed on pages that do not compute: the offline registration. */
   registration: 1 * KB,
-  /** The build sheet runs every calculator's code at once; it has its own, larger budget. */
-  buildSheetTotal: 80 * KB,
-  buildSheetJs: 60 * KB,
+  /** The build sheet runs every calculator's code at once (all of calc/ plus the design reader); it has its own, larger budget. */
+  buildSheetTotal: 85 * KB,
+  buildSheetJs: 70 * KB,
   /** The search page's own script; the index loads only when a search runs. */
   searchJs: 5 * KB,
 };
@@ -87,7 +87,7 @@ describe("the built site", () => {
       }
     });
 
-    it("keeps the build sheet within its own budget (80 KB, JS 60 KB) and loads the link codec only on use", () => {
+    it("keeps the build sheet within its own budget (85 KB, JS 70 KB) and loads the link codec only on use", () => {
       const sheet = weigh("build-sheet/index.html");
       expect(sheet.js).toBeLessThanOrEqual(BUDGET.buildSheetJs);
       expect(sheet.total).toBeLessThanOrEqual(BUDGET.buildSheetTotal);
