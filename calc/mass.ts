@@ -1189,7 +1189,11 @@ export function counterweightAtRadius(input: CentreInput & { radius: number }): 
 export interface CounterweightForMass {
   /** "too-far-out" when even the smallest workable radius exceeds the max radius. */
   status: "not-needed" | "placed" | "too-far-out";
-  /** Recommended radius: the zero-offset radius when it fits, else the nearest workable one [m]; null when impossible. */
+  /**
+   * Recommended radius: the zero-offset radius when it fits inside the max radius, else the max
+   * radius itself (the workable radius nearest the zero-offset one, which leaves the smallest
+   * offset) [m]; null when impossible.
+   */
   radius: number | null;
   /** Radius for zero offset, M e / m [m]. */
   radiusForZero: number;
@@ -1218,8 +1222,12 @@ export interface CounterweightForMass {
  * @param maxRadius the largest radius a counterweight can be mounted at [m], greater than 0
  * @returns status, radius (recommended) [m] or null, radiusForZero, minRadius, maxRadiusWithinTarget [m], angle [rad], x, y, offsetAfter
  *
+ * Assumptions: when r_0 lies beyond the max radius but the workable band reaches inside it, the
+ * max radius is recommended: it is the closest to r_0 the robot allows, so it leaves the smallest
+ * offset, rather than the band's inner edge, where the offset sits exactly on the target and any
+ * mounting tolerance pushes it out.
  * Example: 1.4 kg with e = 2 mm, e_t = 0.2 mm, m = 50 g: r_0 = 56 mm; workable 50.2–61.8 mm. With a
- * 45 mm limit: too far out.
+ * 53 mm limit: 53 mm, offset 0.103 mm. With a 45 mm limit: too far out.
  * Sources: centre-of-mass.
  */
 export function counterweightRadiusForMass(input: CentreInput & { mass: number; maxRadius: number }): CounterweightForMass {
@@ -1236,7 +1244,7 @@ export function counterweightRadiusForMass(input: CentreInput & { mass: number; 
   if (status === "too-far-out") {
     return { status, radius: null, radiusForZero, minRadius, maxRadiusWithinTarget, angle, x: null, y: null, offsetAfter: null };
   }
-  const radius = radiusForZero <= maxRadius ? radiusForZero : minRadius;
+  const radius = Math.min(radiusForZero, maxRadius);
   const x = radius * Math.cos(angle);
   const y = radius * Math.sin(angle);
   return { status, radius, radiusForZero, minRadius, maxRadiusWithinTarget, angle, x, y, offsetAfter: offsetWith(totalMass, centreX, centreY, mass, x, y) };
@@ -1621,6 +1629,99 @@ export function massBalance(input: MassBalanceInput): MassBalance {
     sensor: {
       before: trueSensorRadius({ centreX: layout.centreX, centreY: layout.centreY, sensorX, sensorY }),
       after: trueSensorRadius({ centreX: fix.after.centreX, centreY: fix.after.centreY, sensorX, sensorY }),
+    },
+  };
+}
+
+// ---------------------------------------------------------------------------------------------
+// The counterweight the calculator offers to add, with the figures after it.
+
+/**
+ * Which counterweight question to answer: the mass at a chosen radius ("radius"), the radius for a
+ * mass in hand ("mass"), or the least mass among mounting points ("points").
+ */
+export type CounterweightMode = "radius" | "mass" | "points";
+
+/** Balance figures of a layout, for a before/after comparison. */
+export interface BalanceSnapshot {
+  /** e [m] */
+  offset: number;
+  /** e·Ω [m/s] */
+  equivalentGrade: number;
+  /** Finest standard grade met, or null when coarser than G 4000. */
+  gradeMet: BalanceGrade | null;
+  /** The sensor about the new centre of mass. */
+  sensor: TrueSensorRadius;
+}
+
+export interface CounterweightPlan {
+  /**
+   * "apply": adding `counterweight` brings the offset within the target; "not-needed": it already
+   * is; "none": this mode has no answer (mass too light for the max radius, no feasible mounting
+   * point, no points given, more than 10 000 kg, or the list already holds the most parts allowed).
+   */
+  status: "apply" | "not-needed" | "none";
+  /** The point mass to add, at height z̄: mass [kg], position [m]; null unless "apply". */
+  counterweight: { mass: number; x: number; y: number; z: number } | null;
+  /** The layout with the counterweight as its last row, and its figures; null unless "apply". */
+  after: (BalanceSnapshot & { parts: LayoutPart[] }) | null;
+}
+
+/** Rounds a positive value up to `figures` significant figures; exact values stay put. */
+function roundUpSignificant(value: number, figures: number): number {
+  const step = 10 ** (Math.floor(Math.log10(value)) - figures + 1);
+  return Number((Math.ceil(value / step - 1e-9) * step).toPrecision(figures));
+}
+
+/**
+ * The counterweight one mode of the calculator proposes, ready to add to the layout, and the
+ * offset, balance grade and sensor figures with it in place (centre-of-mass; iso-21940-11 for the
+ * grade; openstax-college-physics for the sensor radius).
+ *
+ * Formula: adding m at $\mathbf p$: $\bar{\mathbf c}' = \dfrac{M\bar{\mathbf c} + m\,\mathbf p}{M + m}$,
+ * $e' = |\bar{\mathbf c}'|$, $G' = e'\,\Omega$
+ *
+ * @param input the calculator's input (parts, candidates and every scalar, SI)
+ * @param balance massBalance(input)
+ * @param mode "radius", "mass" or "points"
+ * @returns status; counterweight (mass [kg], x, y, z [m]) or null; after (parts, offset [m],
+ * equivalentGrade [m/s], gradeMet, sensor) or null
+ *
+ * Assumptions: a least mass puts the offset exactly on the target, where rounding or a mounting
+ * tolerance pushes it out; so the "radius" and "points" masses are rounded UP to 3 significant
+ * figures (what a workshop scale resolves), which moves the offset inside the target, unless that
+ * would overshoot the far edge of the workable band (then the exact mass is kept). In "mass" mode
+ * the given mass goes at the radius counterweightRadiusForMass recommends. The counterweight sits
+ * at z̄, so it adds no couple.
+ * Example: the invented demo robot (1.399 kg, e = 1.738 mm toward +x, target 0.2 mm, r = 55 mm)
+ * needs 38.99 g; the plan adds 39.0 g at (−55, 0) mm and leaves e = 0.1996 mm.
+ * Sources: centre-of-mass, iso-21940-11, openstax-college-physics.
+ */
+export function counterweightPlan({ input, balance, mode }: { input: MassBalanceInput; balance: MassBalance; mode: CounterweightMode }): CounterweightPlan {
+  const none = (status: "not-needed" | "none"): CounterweightPlan => ({ status, counterweight: null, after: null });
+  if (balance.offsetVerdict === "within-target") return none("not-needed");
+  const { atRadius, forMass, candidates } = balance.counterweight;
+  const best = candidates && candidates.best !== null ? candidates.candidates[candidates.best]! : null;
+  const pick = mode === "radius" ? atRadius : mode === "mass" ? (forMass.status === "placed" ? { mass: input.counterweightMass, x: forMass.x!, y: forMass.y! } : null) : best;
+  if (!pick || !(pick.mass! <= MAX_PART_MASS) || input.parts.length >= MAX_PARTS) return none("none");
+  const z = balance.layout.centreZ;
+  const place = (mass: number) => ({ mass, ...applyCounterweight({ parts: input.parts, mass, x: pick.x, y: pick.y, z }) });
+  let placed = place(pick.mass!);
+  if (mode !== "mass") {
+    const rounded = place(roundUpSignificant(pick.mass!, 3));
+    if (rounded.after.offset <= input.targetOffset) placed = rounded;
+  }
+  const { after } = placed;
+  const equivalentGrade = equivalentBalanceGrade({ offset: after.offset, angularSpeed: input.spinSpeed });
+  return {
+    status: "apply",
+    counterweight: { mass: placed.mass, x: pick.x, y: pick.y, z },
+    after: {
+      parts: placed.parts,
+      offset: after.offset,
+      equivalentGrade,
+      gradeMet: finestGradeMet(equivalentGrade),
+      sensor: trueSensorRadius({ centreX: after.centreX, centreY: after.centreY, sensorX: input.sensorX, sensorY: input.sensorY }),
     },
   };
 }

@@ -9,6 +9,7 @@ import {
   counterweightAtCandidates,
   counterweightAtRadius,
   counterweightRadiusForMass,
+  counterweightPlan,
   coupleUnbalance,
   demoRobotBalance,
   demoRobotParts,
@@ -424,10 +425,13 @@ describe("counterweights", () => {
     const tight = counterweightRadiusForMass({ ...base, mass: 0.05, maxRadius: 0.045 });
     expect(tight.status).toBe("too-far-out");
     expect(tight.radius).toBeNull();
+    // r_0 = 56 mm lies beyond a 53 mm limit but the band starts at 50.2 mm: the limit itself is
+    // recommended, leaving (1.4 × 2 − 0.05 × 53) g·m / 1.45 kg = 0.1034 mm (hand sum), inside 0.2 mm.
     const between = counterweightRadiusForMass({ ...base, mass: 0.05, maxRadius: 0.053 });
     expect(between.status).toBe("placed");
-    expectRel(between.radius!, 0.0502, 1e-12);
-    expectRel(between.offsetAfter!, 0.0002, 1e-9);
+    expectRel(between.radius!, 0.053, 1e-12);
+    expectRel(between.offsetAfter!, (1.4 * 0.002 - 0.05 * 0.053) / 1.45, 1e-9);
+    expect(between.offsetAfter!).toBeLessThan(0.0002);
   });
 
   it("centre-of-mass: among mounting points, only the one on the far side works, and it needs the same 45.65 g", () => {
@@ -863,6 +867,71 @@ describe("the mass-and-balance calculator", () => {
 
   it("uses only bibliography keys that exist", () => {
     for (const key of MASS_BALANCE_SOURCE_KEYS) expect(isSourceKey(key), key).toBe(true);
+  });
+});
+
+describe("the counterweight the calculator applies (counterweightPlan)", () => {
+  const demoInput = (extra: Partial<MassBalanceScalars> = {}, candidates?: { x: number; y: number }[]) => ({ ...DEFAULTS, ...extra, parts: demoRobotParts(), candidates });
+  const plan = (input: ReturnType<typeof demoInput>, mode: "radius" | "mass" | "points") => counterweightPlan({ input, balance: massBalance(input), mode });
+
+  it("centre-of-mass: rounds the demo's 38.99 g at 55 mm up to 39.0 g, which lands inside the 0.2 mm target", () => {
+    const p = plan(demoInput(), "radius");
+    expect(p.status).toBe("apply");
+    expect(p.counterweight!.mass).toBe(0.039);
+    expectRel(p.counterweight!.x, -0.055, 1e-12);
+    expect(Math.abs(p.counterweight!.y)).toBeLessThan(1e-15);
+    // Hand sum: (1.399388 kg × 1.73790 mm − 39.0 g × 55 mm) / 1.438388 kg = (2.432 − 2.145) g·m / 1.438388 kg = 0.19953 mm.
+    expectRel(p.after!.offset, (0.002432 - 0.039 * 0.055) / (1.399388144269552 + 0.039), 1e-6);
+    expect(p.after!.offset).toBeLessThan(0.0002);
+    expect(p.after!.gradeMet?.label).toBe("G 100");
+    expect(p.after!.parts).toHaveLength(10);
+    expect(p.after!.parts.at(-1)).toMatchObject({ name: "counterweight", shape: { kind: "point" }, mass: { kind: "given", mass: 0.039 } });
+    // At the height of the centre of mass: the products of inertia about it are unchanged.
+    expect(p.counterweight!.z).toBe(massProperties(demoRobotParts()).centreZ);
+  });
+
+  it("centre-of-mass: puts a 45 g weight in hand at the zero-offset radius, 54.04 mm, unrounded", () => {
+    const p = plan(demoInput(), "mass");
+    expect(p.counterweight!.mass).toBe(0.045);
+    expectRel(Math.hypot(p.counterweight!.x, p.counterweight!.y), 0.002432 / 0.045, 1e-9);
+    expect(p.after!.offset).toBeLessThan(1e-12);
+    expect(plan(demoInput({ counterweightMass: 0.03 }), "mass").status).toBe("none");
+  });
+
+  it("picks the one bolt of four on the far side, and says none when no point works or none is given", () => {
+    const bolts = [{ x: 0.055, y: 0 }, { x: 0, y: 0.055 }, { x: -0.055, y: 0 }, { x: 0, y: -0.055 }];
+    const p = plan(demoInput({}, bolts), "points");
+    expect(p.counterweight).toMatchObject({ mass: 0.039, x: -0.055, y: 0 });
+    expect(plan(demoInput({}, [bolts[0]!]), "points").status).toBe("none");
+    expect(plan(demoInput(), "points").status).toBe("none");
+  });
+
+  it("needs nothing when the layout is already within the target", () => {
+    const input = { ...DEFAULTS, parts: [point(1, 0.0001, 0)] };
+    expect(counterweightPlan({ input, balance: massBalance(input), mode: "radius" })).toEqual({ status: "not-needed", counterweight: null, after: null });
+  });
+
+  it("keeps the exact least mass when rounding up would overshoot a narrow workable band", () => {
+    // e = 9.9075 mm, e_t = 1 µm, r = 50 mm: the band is 198.126 g to 198.174 g, so 199 g would overshoot.
+    const input = { ...DEFAULTS, targetOffset: 1e-6, correctionRadius: 0.05, parts: [point(1, 0.0099075, 0)] };
+    const balance = massBalance(input);
+    const p = counterweightPlan({ input, balance, mode: "radius" });
+    expect(p.counterweight!.mass).toBe(balance.counterweight.atRadius.mass);
+    expect(p.after!.offset).toBeLessThanOrEqual(1e-6 * (1 + 1e-9));
+  });
+
+  it("brings any layout within the target in every mode that answers (property)", () => {
+    fc.assert(
+      fc.property(layoutArb, fc.double({ min: 1e-4, max: 0.01, noNaN: true }), len(0.02, 0.3), fc.constantFrom("radius" as const, "mass" as const, "points" as const), (parts, et, r, mode) => {
+        const input = { ...DEFAULTS, parts, targetOffset: et, correctionRadius: r, maxRadius: 0.3, candidates: [{ x: r, y: 0 }, { x: -r, y: 0 }, { x: 0, y: r }, { x: 0, y: -r }] };
+        const balance = massBalance(input);
+        const p = counterweightPlan({ input, balance, mode });
+        expectAllFinite(p);
+        if (p.status === "apply") expect(p.after!.offset).toBeLessThanOrEqual(et * (1 + 1e-9));
+        else expect(p.status).toBe(balance.offsetVerdict === "within-target" ? "not-needed" : "none");
+      }),
+      { numRuns: 150 },
+    );
   });
 });
 

@@ -1,0 +1,163 @@
+/**
+ * One row of the mass-layout parts list as editable fields: its name, shape and mass source as
+ * signals, and every dimension as a unit-aware text field (a fields model per part). Converts
+ * between the fields and calc/'s `LayoutPart`. No DOM.
+ */
+import { signal, type Signal } from "@preact/signals";
+import { defineInputs, fieldUnit, type InputSpec } from "../../calc/inputs.ts";
+import type { MaterialId } from "../../calc/materials.ts";
+import type { LayoutPart, PartShape, PartShapeKind } from "../../calc/mass.ts";
+import { fromSI, UNITS, type UnitSystem } from "../../calc/units.ts";
+import { createFieldsModel, type FieldsModel } from "../calc-ui/fields.ts";
+
+const LEN = { metric: "mm", us: "in" } as const;
+const length = (label: string, help: string, def: number, min = 0): InputSpec => ({ label, kind: "length", min, minOpen: min === 0, max: 2, default: def, urlKey: "", unit: LEN, help });
+const inertia = (label: string, help: string, min: number): InputSpec => ({ label, kind: "inertia", min, max: 1000, default: 0, urlKey: "", unit: { metric: "g·cm2", us: "oz·in2" }, help });
+
+/** The numeric fields a part can have, in SI (lengths in m, angles in rad, inertia in kg·m²). */
+export const PART_INPUTS = defineInputs({
+  mass: { label: "Mass", kind: "mass", min: 0, minOpen: true, max: 100, default: 0.05, urlKey: "", unit: { metric: "g", us: "oz" }, help: "As weighed." },
+  thickness: length("Thickness", "Along the spin axis.", 0.003),
+  section: length("Section diameter", "Of the round bar it is made of.", 0.003),
+  radius: length("Radius", "Outer radius.", 0.02),
+  innerRadius: { ...length("Inner radius", "Radius of the hole.", 0.01), minOpen: false },
+  outerRadius: length("Outer radius", "Radius of the outside.", 0.02),
+  length: length("Length", "Along its direction.", 0.05),
+  width: length("Width", "Across its direction.", 0.03),
+  height: length("Height", "Along the spin axis.", 0.02),
+  angle: { label: "Direction", kind: "angle", min: -2 * Math.PI, max: 2 * Math.PI, default: 0, urlKey: "", unit: { metric: "deg", us: "deg" }, help: "Of its length, counter-clockwise from +x." },
+  inertiaZ: { ...inertia("Own inertia about z", "About its own centre, parallel to the spin axis.", 0), default: 1e-5 },
+  productXZ: inertia("Own product I′xz", "About its own centre; 0 if symmetric.", -1000),
+  productYZ: inertia("Own product I′yz", "About its own centre; 0 if symmetric.", -1000),
+  x: length("x", "From the geometric centre.", 0, -2),
+  y: length("y", "From the geometric centre.", 0, -2),
+  z: length("Height z", "Of its own centre of mass above the base.", 0, -2),
+});
+
+export type PartField = keyof typeof PART_INPUTS;
+
+/** The dimensions each shape needs. */
+const SHAPE_FIELDS: Record<PartShapeKind, PartField[]> = {
+  point: [],
+  disk: ["radius"],
+  ring: ["radius"],
+  annulus: ["innerRadius", "outerRadius"],
+  plate: ["length", "width", "angle"],
+  rod: ["length", "angle"],
+  cylinder: ["radius", "height"],
+  custom: ["inertiaZ", "productXZ", "productYZ"],
+};
+
+/** Where a part's mass comes from: weighed ("given") or a material of the table. */
+export type MassSource = "given" | MaterialId;
+
+export interface PartModel {
+  /** Stable key for lists and element ids. */
+  key: number;
+  name: Signal<string>;
+  shape: Signal<PartShapeKind>;
+  source: Signal<MassSource>;
+  fields: FieldsModel<typeof PART_INPUTS>;
+  /** Whether its card is open. */
+  open: Signal<boolean>;
+}
+
+/** Point and custom parts have no volume: their mass must be given. */
+export const needsGivenMass = (shape: PartShapeKind) => shape === "point" || shape === "custom";
+
+/** The fields a part shows, in order, for its shape and mass source. */
+export function partFields(shape: PartShapeKind, source: MassSource): PartField[] {
+  const massField: PartField[] =
+    source === "given" || needsGivenMass(shape) ? ["mass"] : shape === "cylinder" ? [] : shape === "ring" || shape === "rod" ? ["section"] : ["thickness"];
+  return [...massField, ...SHAPE_FIELDS[shape], "x", "y", "z"];
+}
+
+let nextKey = 1;
+
+/** Field text for an SI value in the field's unit: 6 significant figures, float dust below 1e-9 shown as 0. */
+function textOf(spec: InputSpec, valueSI: number, system: UnitSystem): string {
+  const unit = fieldUnit(spec, system);
+  const n = Number(fromSI(valueSI, unit).toPrecision(6));
+  const symbol = UNITS[unit].symbol;
+  return `${Math.abs(n) < 1e-9 ? 0 : n}${symbol === "°" ? "" : " "}${symbol}`;
+}
+
+/** The values of a part, by field, in SI. */
+function valuesOf(part: LayoutPart): Partial<Record<PartField, number>> {
+  const { shape: s, mass: m } = part;
+  const thick = m.kind === "material" ? m.thickness : undefined;
+  return {
+    ...(s as Partial<Record<PartField, number>>),
+    x: part.x,
+    y: part.y,
+    z: part.z,
+    mass: m.kind === "given" ? m.mass : undefined,
+    thickness: thick,
+    section: thick,
+  };
+}
+
+/** A new part model, from a calc/ part or with the defaults. */
+export function createPart(system: UnitSystem, part?: LayoutPart, open = false): PartModel {
+  const fields = createFieldsModel(PART_INPUTS, system);
+  const model: PartModel = {
+    key: nextKey++,
+    name: signal(part?.name ?? "part"),
+    shape: signal(part?.shape.kind ?? "point"),
+    source: signal(part?.mass.kind === "material" ? part.mass.material : "given"),
+    fields,
+    open: signal(open),
+  };
+  if (part) setValues(model, part);
+  return model;
+}
+
+/** Writes a calc/ part's values into the model's fields (in the current unit system). */
+export function setValues(model: PartModel, part: LayoutPart): void {
+  const values = valuesOf(part);
+  const system = model.fields.system.value;
+  for (const [name, value] of Object.entries(values) as [PartField, number | undefined][]) {
+    if (value !== undefined && name in PART_INPUTS) model.fields.texts[name].value = textOf(PART_INPUTS[name], value, system);
+  }
+}
+
+/** A copy of a part model with its texts as they stand (valid or not). */
+export function copyPart(model: PartModel, name: string): PartModel {
+  const copy = createPart(model.fields.system.value, undefined, true);
+  copy.name.value = name;
+  copy.shape.value = model.shape.value;
+  copy.source.value = model.source.value;
+  for (const key of Object.keys(PART_INPUTS) as PartField[]) copy.fields.texts[key].value = model.fields.texts[key].value;
+  return copy;
+}
+
+/** The calc/ part the fields describe, or null while a field it needs does not read. */
+export function readPart(model: PartModel): LayoutPart | null {
+  const shape = model.shape.value;
+  const source = model.source.value;
+  const v: Partial<Record<PartField, number>> = {};
+  for (const name of partFields(shape, source)) {
+    const reading = model.fields.readings[name].value;
+    if (!reading.ok) return null;
+    v[name] = reading.value;
+  }
+  const d = v as Record<PartField, number>;
+  const shapes: Record<PartShapeKind, PartShape> = {
+    point: { kind: "point" },
+    disk: { kind: "disk", radius: d.radius },
+    ring: { kind: "ring", radius: d.radius },
+    annulus: { kind: "annulus", innerRadius: d.innerRadius, outerRadius: d.outerRadius },
+    plate: { kind: "plate", length: d.length, width: d.width, angle: d.angle },
+    rod: { kind: "rod", length: d.length, angle: d.angle },
+    cylinder: { kind: "cylinder", radius: d.radius, height: d.height },
+    custom: { kind: "custom", inertiaZ: d.inertiaZ, productXZ: d.productXZ, productYZ: d.productYZ },
+  };
+  return {
+    name: model.name.value,
+    shape: shapes[shape],
+    mass: source === "given" || needsGivenMass(shape) ? { kind: "given", mass: d.mass } : { kind: "material", material: source, thickness: d.section ?? d.thickness },
+    x: d.x,
+    y: d.y,
+    z: d.z,
+  };
+}

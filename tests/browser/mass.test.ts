@@ -1,0 +1,229 @@
+/**
+ * The mass-layout calculator in a real browser (Debian chromium via playwright-core): build a
+ * three-part layout from the editor, read the centre of mass, apply the counterweight, reopen the
+ * permalink and get the same numbers; errors beside fields; a malformed or hostile link; keyboard
+ * reordering; and axe-core on the page in light and dark.
+ */
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import type { Browser, Locator, Page } from "playwright-core";
+import { readFileSync } from "node:fs";
+import { createRequire } from "node:module";
+import { launchBrowser, serveDist } from "../support/browser.ts";
+
+let browser: Browser;
+let server: Awaited<ReturnType<typeof serveDist>>;
+const origin = () => server.url.replace(/\/$/, "");
+const axeSource = readFileSync(createRequire(import.meta.url).resolve("axe-core/axe.min.js"), "utf8");
+const PAGE = "/chapters/mass-layout/";
+
+beforeAll(async () => {
+  server = await serveDist();
+  browser = await launchBrowser();
+});
+afterAll(async () => {
+  await browser?.close();
+  await server?.close();
+});
+
+async function open(path: string, options: { colorScheme?: "light" | "dark" } = {}) {
+  const context = await browser.newContext({ colorScheme: options.colorScheme ?? "light", viewport: { width: 390, height: 844 } });
+  const page = await context.newPage();
+  const problems: string[] = [];
+  page.on("pageerror", (error) => problems.push(`pageerror: ${error.message}`));
+  page.on("console", (message) => {
+    if (message.type() === "error") problems.push(`console: ${message.text()}`);
+  });
+  page.on("dialog", (dialog) => {
+    problems.push(`dialog: ${dialog.message()}`);
+    void dialog.dismiss();
+  });
+  const requests: string[] = [];
+  page.on("request", (request) => requests.push(request.url()));
+  await page.goto(`${origin()}${path}`);
+  await page.waitForSelector("astro-island:not([ssr])");
+  return { page, context, problems, requests };
+}
+
+const out = (page: Page, name: string) => page.locator(`[data-out="${name}"]`).first().textContent();
+const card = (page: Page, index: number) => page.locator(".mass-parts details").nth(index);
+const input = (c: Locator, name: string) => c.locator(`[id$="-${name}"]`);
+const OUTPUTS = ["total-mass", "com-x", "com-y", "com-z", "offset", "inertia-com", "unbalance", "grade", "grade-met", "sensor-true", "sensor-drift"];
+
+describe("mass layout in the browser", () => {
+  it("builds a three-part layout from the editor, applies the counterweight, and reopens the link to the same numbers", async () => {
+    const { page, context, problems } = await open(`${PAGE}?v=1&l=v1`);
+    expect(await page.locator(".mass-parts details").count()).toBe(0);
+    expect(await page.locator(".mass-calc").textContent()).toContain("Add a part to see results.");
+    const add = page.getByRole("button", { name: "Add a part" });
+
+    await add.click();
+    let c = card(page, 0);
+    await expect.poll(() => page.evaluate(() => document.activeElement?.id ?? "")).toMatch(/-name$/);
+    await input(c, "name").fill("base");
+    await input(c, "shape").selectOption("disk");
+    await input(c, "src").selectOption("al-6061-t6");
+    await input(c, "thickness").fill("5 mm");
+    await input(c, "radius").fill("70 mm");
+    await input(c, "z").fill("2.5");
+
+    await add.click();
+    c = card(page, 1);
+    await input(c, "name").fill("battery");
+    await input(c, "shape").selectOption("plate");
+    await input(c, "mass").fill("280 g");
+    await input(c, "length").fill("70");
+    await input(c, "width").fill("35");
+    await input(c, "angle").fill("90");
+    await input(c, "x").fill("12 mm");
+    await input(c, "z").fill("13.5 mm");
+
+    await add.click();
+    c = card(page, 2);
+    await input(c, "name").fill("sensor");
+    await input(c, "mass").fill("4");
+    await input(c, "x").fill("-32");
+    await input(c, "z").fill("8");
+
+    // Hand sums: base 2700 kg/m³ × π × (70 mm)² × 5 mm = 207.8 g; M = 207.8 + 280 + 4 = 491.8 g;
+    // x̄ = (280 × 12 − 4 × 32) g·mm / 491.8 g = 6.57 mm; U = 3232 g·mm; sensor at 32 + 6.57 = 38.6 mm.
+    await expect.poll(() => out(page, "total-mass")).toBe("492 g");
+    expect(await out(page, "com-x")).toBe("6.57 mm");
+    expect(await out(page, "unbalance")).toBe("3230 g·mm");
+    expect(await out(page, "sensor-true")).toBe("38.6 mm");
+    expect(await page.locator('[data-out="offset-verdict"]').textContent()).toContain("Outside target.");
+    expect(new URL(page.url()).searchParams.get("l")).toBe("v1~disk_base_0_0_2.5_70_al-6061-t6_5~plate_battery_12_0_13.5_70_35_90_280~pt_sensor_-32_0_8_4");
+
+    // m = M(e − e_t)/(r + e_t) = 491.8 g × 6.37 mm / 55.2 mm = 56.77 g, rounded up to 56.8 g at 180°.
+    expect(await out(page, "cw-mass")).toBe("56.8 g");
+    await page.getByRole("button", { name: "Apply: add it to the parts list" }).click();
+    await expect.poll(() => page.locator(".mass-parts details").count()).toBe(4);
+    // (3232 − 56.8 × 55) g·mm / 548.6 g = 0.197 mm.
+    expect(await out(page, "offset")).toBe("0.197 mm");
+    expect(await out(page, "total-mass")).toBe("549 g");
+    expect(await page.locator('[data-out="offset-verdict"]').textContent()).toContain("Within target.");
+    expect(await out(page, "applied")).toContain("offset 6.57 mm → 0.197 mm");
+
+    const before = Object.fromEntries(await Promise.all(OUTPUTS.map(async (name) => [name, await out(page, name)] as const)));
+    await expect.poll(() => new URL(page.url()).searchParams.get("l")).toContain("~pt_counterweight_-55_");
+    const reopened = await open(page.url().replace(origin(), ""));
+    expect(await reopened.page.locator(".mass-parts details").count()).toBe(4);
+    for (const name of OUTPUTS) expect(await out(reopened.page, name), name).toBe(before[name]);
+    expect(reopened.problems).toEqual([]);
+    await reopened.context.close();
+
+    await page.getByRole("button", { name: "Undo" }).click();
+    await expect.poll(() => out(page, "offset")).toBe("6.57 mm");
+    expect(await page.locator(".mass-parts details").count()).toBe(3);
+    expect(problems).toEqual([]);
+    await context.close();
+  });
+
+  it("shows an error beside a bad part field and a bad scalar field, and no NaN anywhere", async () => {
+    const { page, context } = await open(PAGE);
+    await card(page, 3).locator("summary").click();
+    const x = input(card(page, 3), "x");
+    for (const [text, message] of [
+      ["abc", "x must start with a number"],
+      ["5 kg", 'x has a unit "kg" that is not a length unit'],
+      ["3 m", "x must be between -2000 mm and 2000 mm (got 3000 mm)"],
+    ] as const) {
+      await x.fill(text);
+      const id = await x.getAttribute("id");
+      await expect.poll(() => page.locator(`#${id}-error`).textContent()).toContain(message);
+      expect(await x.getAttribute("aria-invalid")).toBe("true");
+      expect(await x.getAttribute("aria-describedby")).toContain(`${id}-error`);
+    }
+    expect(await card(page, 3).locator("summary").textContent()).toContain("check the fields");
+    expect(await page.locator(".mass-calc").textContent()).toContain("Results appear when every field holds a valid value.");
+    await x.fill("12 mm");
+    await expect.poll(() => out(page, "offset")).toBe("1.74 mm");
+
+    await page.fill("#mass-calculator-spinSpeed", "0");
+    await expect.poll(() => page.locator("#mass-calculator-spinSpeed-error").textContent()).toContain("Spin speed must be greater than 0 rpm");
+    await page.fill("#mass-calculator-spinSpeed", "2400");
+    await page.fill("#mass-calculator-planeZ2", "4 mm");
+    await expect.poll(() => page.locator("#mass-calculator-planeZ2-error").textContent()).toContain("Upper correction plane must be a height different from the other plane");
+    expect((await page.textContent("body")) ?? "").not.toMatch(/\bNaN\b|Infinity/);
+    await context.close();
+  });
+
+  it("explains a malformed parts list part by part, keeps the good parts, and treats hostile text as text", async () => {
+    const name = encodeURIComponent('<img src=x onerror=alert(1)>');
+    const { page, context, problems, requests } = await open(`${PAGE}?v=1&l=${encodeURIComponent(`v1~pt_${name}_10_0_0_100~blob_b_0_0_0_1~disk_c_0_0_0_20`)}&cw=zz`);
+    expect(await page.locator(".mass-parts details").count()).toBe(1);
+    expect(await card(page, 0).locator("summary").textContent()).toContain("<img src=x onerror=alert(1)>");
+    expect(await page.locator("main img").count()).toBe(0);
+    const notices = (await page.locator(".calc-notices").textContent()) ?? "";
+    expect(notices).toContain(`Part 2 of the link's parts list was left out: unknown shape "blob"`);
+    expect(notices).toContain("Part 3 of the link's parts list was left out: a disk part needs 7 fields, got 6");
+    expect(notices).toContain("Unknown counterweight mode in the link");
+    // One 100 g part at 10 mm: the centre of mass is at 10 mm.
+    expect(await out(page, "com-x")).toBe("10.0 mm");
+    expect(problems).toEqual([]);
+    expect(requests.filter((url) => !url.startsWith(origin()))).toEqual([]);
+    await context.close();
+  });
+
+  it("opens the worked example from the chapter's link: the invented demo robot with its four bolts", async () => {
+    const first = await open(PAGE);
+    const href = await first.page.getByRole("link", { name: "Open this example in the calculator" }).getAttribute("href");
+    await first.context.close();
+    expect(href).toMatch(/^\?v=1&.*#mass-calculator$/);
+    const { page, context, problems } = await open(`${PAGE}${href}`);
+    expect(new URL(page.url()).searchParams.get("cw")).toBe("p");
+    expect(await page.locator(".calc-notices").count()).toBe(0);
+    // Chapter figures (tests/calc/mass.test.ts): 1.399 kg, e = 1.74 mm; only the bolt at (−55, 0) works, 38.99 g → 39.0 g.
+    expect(await out(page, "offset")).toBe("1.74 mm");
+    expect(await page.locator('[data-out="cw-points"] li').nth(2).textContent()).toBe("(−55.0 mm, 0 mm): 39.0 g ← least");
+    expect(await out(page, "cw-mass")).toBe("39.0 g");
+    expect(problems).toEqual([]);
+    await context.close();
+  });
+
+  it("reorders, duplicates and mirrors parts from the keyboard, and links the sensor to the drift budget", async () => {
+    const { page, context } = await open(`${PAGE}?v=1&l=v1~pt_a_10_0_0_100~pt_b_0_20_0_50&cw=p&pts=-40,0;0,-40`);
+    await card(page, 0).locator("summary").focus();
+    await page.keyboard.press("Enter");
+    const down = card(page, 0).getByRole("button", { name: "Move down: a" });
+    await down.focus();
+    await page.keyboard.press("Enter");
+    await expect.poll(() => card(page, 0).locator("summary").textContent()).toContain("1. b");
+    // The moved part is now last: focus stays on its "Move up" button.
+    await expect.poll(() => page.evaluate(() => document.activeElement?.getAttribute("aria-label"))).toBe("Move up: a");
+    await card(page, 1).locator('[id$="-axis"]').selectOption("origin");
+    await card(page, 1).getByRole("button", { name: "Add mirrored copy: a" }).click();
+    await expect.poll(() => card(page, 2).locator("summary").textContent()).toContain("3. a (mirror)");
+    expect(await input(card(page, 2), "x").inputValue()).toBe("-10 mm");
+    // Mounting points mode: of (−40, 0) and (0, −40) mm, the second lies opposite the offset of b.
+    expect(await page.locator('[data-out="cw-points"] li').count()).toBe(2);
+    const href = await page.locator('[data-out="drift-link"]').getAttribute("href");
+    expect(href).toMatch(/^\/chapters\/heading-drift\/\?v=1&ra=32mm&rt=[\d.]+mm&rpm=2400rpm$/);
+    await context.close();
+  });
+});
+
+describe("accessibility of the mass-layout page (axe-core)", () => {
+  const scan = (page: Page, selector: string) =>
+    page.evaluate(async (context) => {
+      // @ts-expect-error axe is injected by the caller
+      const r = await window.axe.run(context, { resultTypes: ["violations"] });
+      return r.violations.map((v: { id: string; nodes: { target: string[] }[] }) => `${v.id}: ${v.nodes.map((n) => n.target.join(" ")).join(", ")}`);
+    }, selector);
+
+  for (const colorScheme of ["light", "dark"] as const) {
+    it(`finds no violations on the page, then in the calculator with a part open, an error and an applied counterweight (${colorScheme})`, async () => {
+      const { page, context } = await open(PAGE, { colorScheme });
+      await page.addScriptTag({ content: axeSource });
+      expect(await scan(page, "html")).toEqual([]);
+      await page.getByRole("button", { name: "Apply: add it to the parts list" }).click();
+      await card(page, 3).locator("summary").click();
+      await page.getByRole("radio", { name: "Best mounting point" }).check();
+      await page.fill("#mass-calculator-points", "55, 0; 12");
+      await expect.poll(() => page.locator("#mass-calculator-points-error").count()).toBe(1);
+      expect(await scan(page, "#mass-calculator")).toEqual([]);
+      await input(card(page, 3), "x").fill("abc");
+      expect(await scan(page, "#mass-calculator")).toEqual([]);
+      await context.close();
+    });
+  }
+});

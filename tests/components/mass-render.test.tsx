@@ -1,0 +1,39 @@
+import { describe, expect, it } from "vitest";
+import { renderToString } from "preact-render-to-string";
+import MassLayoutCalculator from "../../components/mass/MassLayoutCalculator.tsx";
+import { demoRobotParts, encodeLayout } from "../../calc/mass.ts";
+
+describe("mass-layout calculator, server render (the path Astro islands take)", () => {
+  const html = renderToString(<MassLayoutCalculator id="mc" layout={encodeLayout(demoRobotParts())} />);
+
+  it("renders every input and select with a label tied to it", () => {
+    const ids = [...html.matchAll(/<(?:input|select)[^>]*id="([^"]+)"/g)].map((m) => m[1]);
+    // Speed, grade select and field, mode (3 radios, labelled by wrapping), target, radius, z1, z2, sensor x and y.
+    expect(ids.length).toBeGreaterThanOrEqual(9);
+    for (const id of ids) expect(html).toContain(`for="${id}"`);
+    for (const radio of html.match(/<input[^>]*type="radio"[^>]*>/g) ?? []) expect(radio).not.toContain("id=");
+  });
+
+  it("renders the demo's results, the top view and the sensor link, with no NaN or Infinity", () => {
+    // 1.399 kg, offset 1.74 mm (tests/calc/mass.test.ts pins), U = 2432 g·mm.
+    expect(html).toMatch(/data-out="total-mass">1\.40 kg</);
+    expect(html).toMatch(/data-out="offset">1\.74 mm</);
+    expect(html).toMatch(/data-out="unbalance">2430 g·mm</);
+    expect(html).toMatch(/data-out="grade-met">G 630</);
+    expect(html).toMatch(/data-out="cw-mass">39\.0 g</);
+    expect(html).toContain("<svg");
+    expect(html).toContain('href="/chapters/heading-drift/?v=1&amp;ra=32mm&amp;rt=33.7379mm&amp;rpm=2400rpm"');
+    expect(html).not.toMatch(/NaN|Infinity/);
+    // Drawing coordinates are rounded to 0.1 unit: no float dust in the paths.
+    for (const [, d] of html.matchAll(/ d="([^"]+)"/g)) expect(d).not.toMatch(/\.\d{2}/);
+  });
+
+  it("shows closed part cards as summaries only, and asks for a part when the list is empty", () => {
+    expect(html.match(/<details/g)).toHaveLength(9);
+    expect(html).toContain("4. battery");
+    expect(html).not.toMatch(/id="mc-p\d/);
+    const empty = renderToString(<MassLayoutCalculator id="mc" layout="v1" />);
+    expect(empty).toContain("Add a part to see results.");
+    expect(empty).not.toMatch(/NaN|Infinity/);
+  });
+});
