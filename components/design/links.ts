@@ -11,6 +11,8 @@ import { drivetrainInputs, DRIVE_TYPE_URL_KEY } from "../../calc/drivetrain.ts";
 import type { FastenerCheckInput, RimCheckInput } from "../../calc/loads.ts";
 import { fastenerLink } from "../loads/fastener-model.ts";
 import { rimLink, CUSTOM_MATERIAL } from "../loads/rim-model.ts";
+import { encodeLayout, massBalanceInputs } from "../../calc/mass.ts";
+import { formatNumber, fromSI } from "../../calc/units.ts";
 
 /** The chapter (slug) whose calculator edits each section. */
 export const SECTION_CHAPTER: Record<DesignSection, string> = {
@@ -59,6 +61,20 @@ export function calculatorLink(design: Design, section: DesignSection, index: nu
     case "drivetrain":
       query = design.drivetrain ? `${permalinkQuery(drivetrainInputs, design.drivetrain as unknown as Record<string, number>, system)}&${DRIVE_TYPE_URL_KEY}=${design.drivetrain.driveType}` : null;
       break;
+    case "mass": {
+      const mass = design.mass;
+      if (!mass) break;
+      const unit = system === "us" ? "in" : "mm";
+      const points = mass.candidates.map((p) => `${formatNumber(fromSI(p.x, unit), 6).replace("−", "-")},${formatNumber(fromSI(p.y, unit), 6).replace("−", "-")}`).join(";");
+      const params = new URLSearchParams(permalinkQuery(massBalanceInputs, mass.scalars, system));
+      params.set("l", encodeLayout(mass.parts));
+      if (points) {
+        params.set("pts", points);
+        params.set("cw", "p");
+      }
+      query = params.toString().replace(/%2F/g, "/").replace(/%3A/gi, ":").replace(/%7E/gi, "~").replace(/%2C/gi, ",").replace(/%3B/gi, ";");
+      break;
+    }
     default:
       query = null;
   }

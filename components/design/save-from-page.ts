@@ -15,6 +15,8 @@ import { readChoices } from "../loads/choices.ts";
 import { FASTENER_CHOICES } from "../loads/fastener-model.ts";
 import { rimChoices } from "../loads/rim-model.ts";
 import { defaultSection } from "../../calc/design.ts";
+import { massBalanceInputs, parseLayout } from "../../calc/mass.ts";
+import { readPoints } from "../mass/model.ts";
 import { loadStore, newId, saveStore } from "./store.ts";
 
 /** SI values of a calculator from its query string; null with the reason when a field does not read. */
@@ -74,6 +76,16 @@ export function withSection(design: Design, section: DesignSection, query: strin
         return { error: "the drive type in the page address is not weapon or spinner." };
       }
       return { ...design, drivetrain: { ...read.values, driveType }, modified: stamp };
+    }
+    case "mass": {
+      const read = valuesFromQuery(massBalanceInputs, query);
+      if ("error" in read) return read;
+      const params = new URLSearchParams(query);
+      const layout = parseLayout(params.get("l") ?? "");
+      if (!layout.ok && layout.parts.length === 0) return { error: "the parts list in the page address could not be read." };
+      const system: UnitSystem = params.get("u") === "us" ? "us" : "metric";
+      const points = params.get("pts") ? readPoints(params.get("pts")!, system).points ?? [] : [];
+      return { ...design, mass: { scalars: read.values, parts: layout.parts, candidates: points }, modified: stamp };
     }
     default:
       return { error: "This calculator cannot be saved to a design yet." };

@@ -471,6 +471,7 @@ export default function MassLayoutCalculator({ id = "mass-calculator", layout = 
         system={fields.system}
         onSystem={model.setSystem}
         link={() => `${location.origin}${location.pathname}?${model.queryFor(location.search)}#${id}`}
+        designSection="mass"
       />
     </section>
   );
