@@ -5,15 +5,13 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import type { Browser, BrowserContext, Page } from "playwright-core";
 import { readFileSync, readdirSync, writeFileSync, mkdtempSync } from "node:fs";
-import { createRequire } from "node:module";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
-import { DIST_DIR, launchBrowser, serveDist } from "../support/browser.ts";
+import { DIST_DIR, launchBrowser, serveDist, axeViolations } from "../support/browser.ts";
 
 let browser: Browser;
 let server: Awaited<ReturnType<typeof serveDist>>;
 const origin = () => server.url.replace(/\/$/, "");
-const axeSource = readFileSync(createRequire(import.meta.url).resolve("axe-core/axe.min.js"), "utf8");
 const scratch = mkdtempSync(join(tmpdir(), "whirlbook-design-"));
 
 beforeAll(async () => {
@@ -194,12 +192,7 @@ describe("accessibility (axe-core) of the pit pages", () => {
         await page.goto(`${origin()}${path}`);
         if ((await page.locator("astro-island").count()) > 0) await page.waitForSelector("astro-island:not([ssr])");
         await page.waitForTimeout(300);
-        await page.addScriptTag({ content: axeSource });
-        const result = await page.evaluate(async () => {
-          // @ts-expect-error axe is injected above
-          const r = await window.axe.run(document, { resultTypes: ["violations"] });
-          return r.violations.map((v: { id: string; nodes: { target: string[] }[] }) => `${v.id}: ${v.nodes.map((n) => n.target.join(" ")).join(", ")}`);
-        });
+        const result = await axeViolations(page);
         expect(result).toEqual([]);
         await context.close();
       });

@@ -7,9 +7,7 @@
  */
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import type { Browser, Page } from "playwright-core";
-import { readFileSync } from "node:fs";
-import { createRequire } from "node:module";
-import { launchBrowser, serveDist } from "../support/browser.ts";
+import { launchBrowser, serveDist, axeViolations } from "../support/browser.ts";
 import { decodeCalibrationRows, encodeCalibrationRows, fitCalibration } from "../../calc/calibration.ts";
 import { parseCalibrationCsv } from "../../calc/csv.ts";
 import { formatQuantity } from "../../calc/units.ts";
@@ -17,7 +15,6 @@ import { formatQuantity } from "../../calc/units.ts";
 let browser: Browser;
 let server: Awaited<ReturnType<typeof serveDist>>;
 const origin = () => server.url.replace(/\/$/, "");
-const axeSource = readFileSync(createRequire(import.meta.url).resolve("axe-core/axe.min.js"), "utf8");
 
 beforeAll(async () => {
   server = await serveDist();
@@ -248,15 +245,10 @@ describe("accessibility of the heading chapters (axe-core)", () => {
   for (const path of paths) {
     it(`finds no violations on ${path}, light and dark`, async () => {
       const { page, context } = await open(path);
-      await page.addScriptTag({ content: axeSource });
       const found: Record<string, string[]> = {};
       for (const colorScheme of ["light", "dark"] as const) {
         await page.emulateMedia({ colorScheme });
-        found[colorScheme] = await page.evaluate(async () => {
-          // @ts-expect-error axe is injected above
-          const r = await window.axe.run(document, { resultTypes: ["violations"] });
-          return r.violations.map((v: { id: string; nodes: { target: string[] }[] }) => `${v.id}: ${v.nodes.map((n) => n.target.join(" ")).join(", ")}`);
-        });
+        found[colorScheme] = await axeViolations(page);
       }
       expect(found).toEqual({ light: [], dark: [] });
       await context.close();

@@ -5,14 +5,11 @@
  */
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import type { Browser, Page } from "playwright-core";
-import { readFileSync } from "node:fs";
-import { createRequire } from "node:module";
-import { launchBrowser, serveDist } from "../support/browser.ts";
+import { launchBrowser, serveDist, axeViolations } from "../support/browser.ts";
 
 let browser: Browser;
 let server: Awaited<ReturnType<typeof serveDist>>;
 const origin = () => server.url.replace(/\/$/, "");
-const axeSource = readFileSync(createRequire(import.meta.url).resolve("axe-core/axe.min.js"), "utf8");
 
 beforeAll(async () => {
   server = await serveDist();
@@ -221,12 +218,7 @@ describe("accessibility of the loads chapters (axe-core)", () => {
   for (const { path, colorScheme } of cases) {
     it(`finds no violations on ${path} (${colorScheme})`, async () => {
       const { page, context } = await open(path, { colorScheme });
-      await page.addScriptTag({ content: axeSource });
-      const result = await page.evaluate(async () => {
-        // @ts-expect-error axe is injected above
-        const r = await window.axe.run(document, { resultTypes: ["violations"] });
-        return r.violations.map((v: { id: string; nodes: { target: string[] }[] }) => `${v.id}: ${v.nodes.map((n) => n.target.join(" ")).join(", ")}`);
-      });
+      const result = await axeViolations(page);
       expect(result).toEqual([]);
       await context.close();
     });

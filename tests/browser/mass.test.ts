@@ -6,14 +6,11 @@
  */
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import type { Browser, Locator, Page } from "playwright-core";
-import { readFileSync } from "node:fs";
-import { createRequire } from "node:module";
-import { launchBrowser, serveDist } from "../support/browser.ts";
+import { launchBrowser, serveDist, axeViolations } from "../support/browser.ts";
 
 let browser: Browser;
 let server: Awaited<ReturnType<typeof serveDist>>;
 const origin = () => server.url.replace(/\/$/, "");
-const axeSource = readFileSync(createRequire(import.meta.url).resolve("axe-core/axe.min.js"), "utf8");
 const PAGE = "/chapters/mass-layout/";
 
 beforeAll(async () => {
@@ -203,17 +200,11 @@ describe("mass layout in the browser", () => {
 });
 
 describe("accessibility of the mass-layout page (axe-core)", () => {
-  const scan = (page: Page, selector: string) =>
-    page.evaluate(async (context) => {
-      // @ts-expect-error axe is injected by the caller
-      const r = await window.axe.run(context, { resultTypes: ["violations"] });
-      return r.violations.map((v: { id: string; nodes: { target: string[] }[] }) => `${v.id}: ${v.nodes.map((n) => n.target.join(" ")).join(", ")}`);
-    }, selector);
+  const scan = (page: Page, selector: string) => axeViolations(page, selector);
 
   for (const colorScheme of ["light", "dark"] as const) {
     it(`finds no violations on the page, then in the calculator with a part open, an error and an applied counterweight (${colorScheme})`, async () => {
       const { page, context } = await open(PAGE, { colorScheme });
-      await page.addScriptTag({ content: axeSource });
       expect(await scan(page, "html")).toEqual([]);
       await page.getByRole("button", { name: "Apply: add it to the parts list" }).click();
       await card(page, 3).locator("summary").click();

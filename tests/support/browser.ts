@@ -2,8 +2,9 @@
  * Shared set-up for browser tests: serves dist/ on 127.0.0.1 and launches Debian's chromium
  * through playwright-core (no browser download).
  */
-import { chromium, type Browser } from "playwright-core";
-import { existsSync } from "node:fs";
+import { chromium, type Browser, type Page } from "playwright-core";
+import { existsSync, readFileSync } from "node:fs";
+import { createRequire } from "node:module";
 import { resolve } from "node:path";
 import { fileURLToPath } from "node:url";
 import { startStaticServer } from "../../scripts/static-server.mjs";
@@ -33,4 +34,19 @@ export const DIST_DIR = process.env.OUT_DIR ? resolve(process.env.OUT_DIR) : fil
 
 export async function serveDist(base = "/") {
   return startStaticServer({ root: `${DIST_DIR}/`, port: 0, base });
+}
+
+const axeSource = readFileSync(createRequire(import.meta.url).resolve("axe-core/axe.min.js"), "utf8");
+
+/**
+ * Runs axe-core on the page (or inside `selector`) and returns its violations as
+ * "rule: targets" lines; an empty list means none.
+ */
+export async function axeViolations(page: Page, selector = "html"): Promise<string[]> {
+  if (!(await page.evaluate(() => "axe" in window))) await page.addScriptTag({ content: axeSource });
+  return page.evaluate(async (within) => {
+    // @ts-expect-error axe is injected above
+    const r = await window.axe.run(document.querySelector(within), { resultTypes: ["violations"] });
+    return r.violations.map((v: { id: string; nodes: { target: string[] }[] }) => `${v.id}: ${v.nodes.map((n) => n.target.join(" ")).join(", ")}`);
+  }, selector);
 }
