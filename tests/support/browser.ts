@@ -3,6 +3,7 @@
  * through playwright-core (no browser download).
  */
 import { chromium, type Browser, type Page } from "playwright-core";
+import { afterAll, beforeAll } from "vitest";
 import { existsSync, readFileSync } from "node:fs";
 import { createRequire } from "node:module";
 import { resolve } from "node:path";
@@ -49,4 +50,42 @@ export async function axeViolations(page: Page, selector = "html"): Promise<stri
     const r = await window.axe.run(document.querySelector(within), { resultTypes: ["violations"] });
     return r.violations.map((v: { id: string; nodes: { target: string[] }[] }) => `${v.id}: ${v.nodes.map((n) => n.target.join(" ")).join(", ")}`);
   }, selector);
+}
+
+/**
+ * One served site and one browser for a test file: registers beforeAll/afterAll and returns
+ * `open(path)`, which opens a page on a phone-sized viewport, waits for its islands, and records
+ * page errors, console errors, dialogs and every request.
+ */
+export function useSite() {
+  let browser: Browser;
+  let server: Awaited<ReturnType<typeof serveDist>>;
+  beforeAll(async () => {
+    server = await serveDist();
+    browser = await launchBrowser();
+  });
+  afterAll(async () => {
+    await browser?.close();
+    await server?.close();
+  });
+  const origin = () => server.url.replace(/\/$/, "");
+  async function open(path: string, options: { colorScheme?: "light" | "dark" } = {}) {
+    const context = await browser.newContext({ colorScheme: options.colorScheme ?? "light", viewport: { width: 390, height: 844 } });
+    const page = await context.newPage();
+    const problems: string[] = [];
+    page.on("pageerror", (error) => problems.push(`pageerror: ${error.message}`));
+    page.on("console", (message) => {
+      if (message.type() === "error") problems.push(`console: ${message.text()}`);
+    });
+    page.on("dialog", (dialog) => {
+      problems.push(`dialog: ${dialog.message()}`);
+      void dialog.dismiss();
+    });
+    const requests: string[] = [];
+    page.on("request", (request) => requests.push(request.url()));
+    await page.goto(`${origin()}${path}`);
+    if ((await page.locator("astro-island").count()) > 0) await page.waitForSelector("astro-island:not([ssr])");
+    return { page, context, problems, requests };
+  }
+  return { browser: () => browser, origin, open };
 }
