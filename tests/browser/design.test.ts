@@ -4,9 +4,10 @@
  */
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import type { Browser, BrowserContext, Page } from "playwright-core";
-import { readFileSync, readdirSync, writeFileSync, mkdtempSync } from "node:fs";
+import { cpSync, readFileSync, readdirSync, writeFileSync, mkdtempSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
+import { startStaticServer } from "../../scripts/static-server.mjs";
 import { DIST_DIR, launchBrowser, serveDist, axeViolations } from "../support/browser.ts";
 
 let browser: Browser;
@@ -166,6 +167,37 @@ describe("offline", () => {
     await page.goto(`${origin()}/search/?q=headroom`);
     await expect.poll(() => page.locator("#search-results li").count(), { timeout: 10_000 }).toBeGreaterThan(0);
     await context.close();
+  });
+});
+
+describe("a new deploy", () => {
+  it("installs beside the old one, says an update is ready, and replaces the old cache on reload", async () => {
+    // Serve a copy of the site, visit it, then deploy a "new version" (a service worker whose cache
+    // version differs) into the same folder, as a static host would.
+    const root = mkdtempSync(join(tmpdir(), "whirlbook-deploy-"));
+    cpSync(DIST_DIR, root, { recursive: true });
+    const copy = await startStaticServer({ root: `${root}/`, port: 0 });
+    const context = await browser.newContext();
+    const page = await context.newPage();
+    await page.goto(copy.url);
+    await page.evaluate(async () => {
+      await navigator.serviceWorker.ready;
+    });
+    await page.reload();
+    await expect.poll(() => page.evaluate(() => Boolean(navigator.serviceWorker.controller))).toBe(true);
+    const before = await page.evaluate(() => caches.keys());
+    expect(before).toHaveLength(1);
+    const sw = readFileSync(join(root, "sw.js"), "utf8");
+    writeFileSync(join(root, "sw.js"), sw.replace(/whirlbook-[0-9a-f]{12}/, "whirlbook-0000000000ff"));
+    await page.evaluate(async () => {
+      await (await navigator.serviceWorker.getRegistration())!.update();
+    });
+    const banner = page.locator("#sw-update");
+    await expect.poll(() => banner.textContent(), { timeout: 15_000 }).toContain("A new version of the handbook is ready.");
+    await Promise.all([page.waitForEvent("load"), banner.getByRole("button", { name: "Reload to update" }).click()]);
+    await expect.poll(() => page.evaluate(() => caches.keys()), { timeout: 15_000 }).toEqual(["whirlbook-0000000000ff"]);
+    await context.close();
+    await copy.close();
   });
 });
 
