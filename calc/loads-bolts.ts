@@ -11,6 +11,7 @@ import { rpmToRadPerSecond } from "./units.ts";
 import { metricThread, PROPERTY_CLASS_OPTIONS, propertyClass as propertyClassRow, THREAD_SIZE_OPTIONS, type PropertyClassId, type ThreadSize } from "./fasteners.ts";
 import {
   DEFAULT_SAFETY_THRESHOLDS,
+  safetyThresholdInputs,
   requireChoice,
   requireDeclared,
   requireMarginalAtLeastFail,
@@ -107,26 +108,7 @@ export const fastenerCheckInputs = defineInputs({
     urlKey: "sr",
     help: "Ultimate shear strength as a fraction of R_m. 0.5 is conservative; 0.6 is the common rule and Eurocode 3's value for 4.6 and 8.8.",
   },
-  failBelow: {
-    label: "Fails below",
-    kind: "fraction",
-    min: 1,
-    max: 10,
-    default: DEFAULT_SAFETY_THRESHOLDS.failBelow,
-    unit: { metric: "frac", us: "frac" },
-    urlKey: "fail",
-    help: "Safety factor under which the bolt is called a failure.",
-  },
-  marginalBelow: {
-    label: "Thin below",
-    kind: "fraction",
-    min: 1,
-    max: 20,
-    default: DEFAULT_SAFETY_THRESHOLDS.marginalBelow,
-    unit: { metric: "frac", us: "frac" },
-    urlKey: "thin",
-    help: "Safety factor under which the margin is flagged as thin.",
-  },
+  ...safetyThresholdInputs("bolt"),
 });
 
 export type FastenerCheckInput = { [K in keyof typeof fastenerCheckInputs]: number } & {

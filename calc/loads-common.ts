@@ -39,6 +39,35 @@ export type LoadVerdict = "holds" | "marginal" | "fails";
 export const DEFAULT_SAFETY_THRESHOLDS = { failBelow: 1, marginalBelow: 2 } as const;
 
 /**
+ * The two verdict thresholds every load check declares, worded for what it checks ("bolt",
+ * "part"): fails below `failBelow`, marginal below `marginalBelow` (safety-factor-practice).
+ */
+export function safetyThresholdInputs(subject: string) {
+  return {
+    failBelow: {
+      label: "Fails below",
+      kind: "fraction",
+      min: 1,
+      max: 10,
+      default: DEFAULT_SAFETY_THRESHOLDS.failBelow,
+      unit: { metric: "frac", us: "frac" },
+      urlKey: "fail",
+      help: `Safety factor under which the ${subject} is called a failure.`,
+    },
+    marginalBelow: {
+      label: "Thin below",
+      kind: "fraction",
+      min: 1,
+      max: 20,
+      default: DEFAULT_SAFETY_THRESHOLDS.marginalBelow,
+      unit: { metric: "frac", us: "frac" },
+      urlKey: "thin",
+      help: "Safety factor under which the margin is flagged as thin.",
+    },
+  } as const;
+}
+
+/**
  * Safety factor of a stressed part: how many times the working stress fits into the strength
  * (safety-factor-practice).
  *

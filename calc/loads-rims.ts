@@ -9,6 +9,7 @@ import { rpmToRadPerSecond } from "./units.ts";
 import type { MaterialId } from "./materials.ts";
 import {
   DEFAULT_SAFETY_THRESHOLDS,
+  safetyThresholdInputs,
   requireChoice,
   requireDeclared,
   requireMarginalAtLeastFail,
@@ -361,26 +362,7 @@ export const rimCheckInputs = defineInputs({
     urlKey: "rpm",
     help: "The top speed the part will see.",
   },
-  failBelow: {
-    label: "Fails below",
-    kind: "fraction",
-    min: 1,
-    max: 10,
-    default: DEFAULT_SAFETY_THRESHOLDS.failBelow,
-    unit: { metric: "frac", us: "frac" },
-    urlKey: "fail",
-    help: "Safety factor under which the part is called a failure.",
-  },
-  marginalBelow: {
-    label: "Thin below",
-    kind: "fraction",
-    min: 1,
-    max: 20,
-    default: DEFAULT_SAFETY_THRESHOLDS.marginalBelow,
-    unit: { metric: "frac", us: "frac" },
-    urlKey: "thin",
-    help: "Safety factor under which the margin is flagged as thin.",
-  },
+  ...safetyThresholdInputs("part"),
 });
 
 export type RimCheckInput = { [K in keyof typeof rimCheckInputs]: number } & {
