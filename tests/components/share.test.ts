@@ -54,8 +54,8 @@ function numbers<S extends InputSpecs>(specs: S): fc.Arbitrary<{ [K in keyof S]:
           ? fc.integer({ min: Math.ceil(spec.min), max: Math.floor(spec.max) })
           : fc.double({ min: spec.minOpen ? spec.min + (spec.max - spec.min) * 1e-9 : spec.min, max: spec.max, noNaN: true, noDefaultInfinity: true }),
       ]),
-    ) as { [K in keyof S]: fc.Arbitrary<number> },
-  );
+    ) as Record<string, fc.Arbitrary<number>>,
+  ) as unknown as fc.Arbitrary<{ [K in keyof S]: number }>;
 }
 const pick = (options: readonly { value: string }[]) => fc.constantFrom(...options.map((o) => o.value));
 
