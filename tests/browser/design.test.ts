@@ -2,27 +2,17 @@
  * Pit-ready: the build sheet, saved designs, export and import, whole-design links, offline use,
  * search and print, in Debian chromium.
  */
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import type { Browser, BrowserContext, Page } from "playwright-core";
+import { describe, expect, it } from "vitest";
+import type { BrowserContext, Page } from "playwright-core";
 import { cpSync, readFileSync, readdirSync, writeFileSync, mkdtempSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { startStaticServer } from "../../scripts/static-server.mjs";
-import { DIST_DIR, launchBrowser, serveDist, axeViolations } from "../support/browser.ts";
+import { DIST_DIR, axeViolations, useSite } from "../support/browser.ts";
 
-let browser: Browser;
-let server: Awaited<ReturnType<typeof serveDist>>;
-const origin = () => server.url.replace(/\/$/, "");
+const site = useSite();
+const { origin } = site;
 const scratch = mkdtempSync(join(tmpdir(), "whirlbook-design-"));
-
-beforeAll(async () => {
-  server = await serveDist();
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-  await server?.close();
-});
 
 async function openSheet(context: BrowserContext, hash = "#demo"): Promise<Page> {
   const page = await context.newPage();
@@ -35,7 +25,7 @@ const checkFigure = (page: Page, id: string) => page.locator(`[data-out="${id}-f
 
 describe("build sheet", () => {
   it("runs every check on the demo design", async () => {
-    const context = await browser.newContext();
+    const context = await site.browser().newContext();
     const page = await openSheet(context);
     expect(await page.locator("[data-out=overall]").textContent()).toContain("At least one check fails.");
     // Same figures as the command line and tests/calc/design.test.ts (same calc code).
@@ -47,7 +37,7 @@ describe("build sheet", () => {
   });
 
   it("saves a design, keeps it across a reload, duplicates it and deletes with undo", async () => {
-    const context = await browser.newContext();
+    const context = await site.browser().newContext();
     const page = await openSheet(context);
     await page.fill("#design-name", "Test robot");
     await page.getByRole("button", { name: "Save in this browser" }).click();
@@ -65,7 +55,7 @@ describe("build sheet", () => {
   });
 
   it("exports a file and imports it back; a partly invalid file keeps its valid values and never overwrites without asking", async () => {
-    const context = await browser.newContext({ acceptDownloads: true });
+    const context = await site.browser().newContext({ acceptDownloads: true });
     const page = await openSheet(context);
     await page.getByRole("button", { name: "Save in this browser" }).click();
     const [download] = await Promise.all([page.waitForEvent("download"), page.getByRole("button", { name: "Export file" }).click()]);
@@ -88,7 +78,7 @@ describe("build sheet", () => {
   });
 
   it("opens a copied whole-design link in a fresh browser with the same results, and explains a truncated one", async () => {
-    const context = await browser.newContext();
+    const context = await site.browser().newContext();
     await context.grantPermissions(["clipboard-read", "clipboard-write"], { origin: origin() });
     const page = await openSheet(context);
     await page.fill("#design-name", "Shared robot");
@@ -98,7 +88,7 @@ describe("build sheet", () => {
     const figures = await page.locator("[data-out$=-figure]").allTextContents();
     await context.close();
 
-    const fresh = await browser.newContext();
+    const fresh = await site.browser().newContext();
     const other = await fresh.newPage();
     await other.goto(link);
     await other.waitForSelector("astro-island:not([ssr])");
@@ -113,7 +103,7 @@ describe("build sheet", () => {
   });
 
   it("takes a calculator's state into the active design with “Save to design”", async () => {
-    const context = await browser.newContext();
+    const context = await site.browser().newContext();
     const page = await context.newPage();
     await page.goto(`${origin()}/chapters/acceleration/?v=1&rpm=3000rpm&r=12mm&low=500rpm&res=2pct`);
     await page.waitForSelector("astro-island:not([ssr])");
@@ -127,7 +117,7 @@ describe("build sheet", () => {
   });
 
   it("prints on at most two A4 or Letter pages", async () => {
-    const context = await browser.newContext();
+    const context = await site.browser().newContext();
     const page = await openSheet(context);
     await page.emulateMedia({ media: "print", colorScheme: "light" });
     for (const format of ["A4", "Letter"] as const) {
@@ -145,7 +135,7 @@ describe("build sheet", () => {
 
 describe("offline", () => {
   it("serves every page, calculator, the build sheet and search with the network off after one visit", async () => {
-    const context = await browser.newContext();
+    const context = await site.browser().newContext();
     const page = await context.newPage();
     await page.goto(`${origin()}/`);
     await page.evaluate(async () => {
@@ -177,7 +167,7 @@ describe("a new deploy", () => {
     const root = mkdtempSync(join(tmpdir(), "whirlbook-deploy-"));
     cpSync(DIST_DIR, root, { recursive: true });
     const copy = await startStaticServer({ root: `${root}/`, port: 0 });
-    const context = await browser.newContext();
+    const context = await site.browser().newContext();
     const page = await context.newPage();
     await page.goto(copy.url);
     await page.evaluate(async () => {
@@ -203,7 +193,7 @@ describe("a new deploy", () => {
 
 describe("search", () => {
   it("finds a term and lands on the section that holds it", async () => {
-    const context = await browser.newContext();
+    const context = await site.browser().newContext();
     const page = await context.newPage();
     await page.goto(`${origin()}/search/?q=headroom`);
     await expect.poll(() => page.locator("#search-results li").count(), { timeout: 10_000 }).toBeGreaterThan(0);
@@ -219,7 +209,7 @@ describe("accessibility (axe-core) of the pit pages", () => {
   for (const path of ["/build-sheet/#demo", "/search/?q=headroom"]) {
     for (const colorScheme of ["light", "dark"] as const) {
       it(`finds no violations on ${path} (${colorScheme})`, async () => {
-        const context = await browser.newContext({ colorScheme, viewport: { width: 390, height: 844 } });
+        const context = await site.browser().newContext({ colorScheme, viewport: { width: 390, height: 844 } });
         const page = await context.newPage();
         await page.goto(`${origin()}${path}`);
         if ((await page.locator("astro-island").count()) > 0) await page.waitForSelector("astro-island:not([ssr])");

@@ -4,45 +4,16 @@
  * variants, run a sweep, see errors beside fields, survive a hostile link, pass axe-core in light
  * and dark, and print how long the simulation and a sweep take in chromium (printed, not asserted).
  */
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import type { Browser, Page } from "playwright-core";
+import { describe, expect, it } from "vitest";
+import type { Page } from "playwright-core";
 import { fileURLToPath } from "node:url";
 import { build } from "esbuild";
-import { launchBrowser, serveDist, axeViolations } from "../support/browser.ts";
+import { axeViolations, useSite } from "../support/browser.ts";
 
-let browser: Browser;
-let server: Awaited<ReturnType<typeof serveDist>>;
-const origin = () => server.url.replace(/\/$/, "");
+const site = useSite();
+const { origin, open } = site;
 const PAGE = "/chapters/spin-up/";
 const ID = "#spin-up-calculator";
-
-beforeAll(async () => {
-  server = await serveDist();
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-  await server?.close();
-});
-
-async function open(path: string, options: { colorScheme?: "light" | "dark"; width?: number } = {}) {
-  const context = await browser.newContext({ colorScheme: options.colorScheme ?? "light", viewport: { width: options.width ?? 390, height: 844 } });
-  const page = await context.newPage();
-  const problems: string[] = [];
-  page.on("pageerror", (error) => problems.push(`pageerror: ${error.message}`));
-  page.on("console", (message) => {
-    if (message.type() === "error") problems.push(`console: ${message.text()}`);
-  });
-  page.on("dialog", (dialog) => {
-    problems.push(`dialog: ${dialog.message()}`);
-    void dialog.dismiss();
-  });
-  const requests: string[] = [];
-  page.on("request", (request) => requests.push(request.url()));
-  await page.goto(`${origin()}${path}`);
-  if ((await page.locator("astro-island").count()) > 0) await page.waitForSelector("astro-island:not([ssr])");
-  return { page, context, problems, requests };
-}
 
 const out = (page: Page, name: string) => page.locator(`[data-out="${name}"]`).first().textContent();
 const param = (page: Page, key: string) => new URL(page.url()).searchParams.get(key);
@@ -235,7 +206,7 @@ describe("spin-up timing in chromium (printed for the record; never asserted)", 
       };
     });
     const f = (t: { median: number; p90: number }) => `median ${t.median.toFixed(3)} ms, p90 ${t.p90.toFixed(3)} ms`;
-    console.log(`[perf] chromium ${browser.version()}: 10 s simulation, demo weapon: ${f(timing.weapon10s)} (target < 5 ms)`);
+    console.log(`[perf] chromium ${site.browser().version()}: 10 s simulation, demo weapon: ${f(timing.weapon10s)} (target < 5 ms)`);
     console.log(`[perf] chromium: 10 s simulation, demo spinner: ${f(timing.spinner10s)} (target < 5 ms)`);
     console.log(`[perf] chromium: 50-point sweep, demo weapon, reduction 0.5 to 4: ${f(timing.weaponSweep50)} (target < 100 ms)`);
     console.log(`[perf] chromium: 50-point sweep, demo spinner, wheel radius 8 to 40 mm: ${f(timing.spinnerSweep50)} (target < 100 ms)`);

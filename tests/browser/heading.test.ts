@@ -5,48 +5,16 @@
  * radius into the drift budget and reopen the permalink; load a file; survive malformed and hostile
  * links; and axe-core finds no violations in light or dark.
  */
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import type { Browser, Page } from "playwright-core";
-import { launchBrowser, serveDist, axeViolations } from "../support/browser.ts";
+import { describe, expect, it } from "vitest";
+import type { Page } from "playwright-core";
+import { axeViolations, useSite, waitForIslands } from "../support/browser.ts";
 import { decodeCalibrationRows, encodeCalibrationRows, fitCalibration } from "../../calc/calibration.ts";
 import { parseCalibrationCsv } from "../../calc/csv.ts";
 import { formatQuantity } from "../../calc/units.ts";
 
-let browser: Browser;
-let server: Awaited<ReturnType<typeof serveDist>>;
-const origin = () => server.url.replace(/\/$/, "");
+const site = useSite();
+const { origin, open } = site;
 
-beforeAll(async () => {
-  server = await serveDist();
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-  await server?.close();
-});
-
-async function open(path: string, options: { colorScheme?: "light" | "dark" } = {}) {
-  const context = await browser.newContext({ colorScheme: options.colorScheme ?? "light", viewport: { width: 390, height: 844 } });
-  const page = await context.newPage();
-  const problems: string[] = [];
-  page.on("pageerror", (error) => problems.push(`pageerror: ${error.message}`));
-  page.on("console", (message) => {
-    if (message.type() === "error") problems.push(`console: ${message.text()}`);
-  });
-  page.on("dialog", (dialog) => {
-    problems.push(`dialog: ${dialog.message()}`);
-    void dialog.dismiss();
-  });
-  const requests: string[] = [];
-  page.on("request", (request) => requests.push(request.url()));
-  await page.goto(`${origin()}${path}`);
-  await waitForIsland(page);
-  return { page, context, problems, requests };
-}
-
-async function waitForIsland(page: Page) {
-  if ((await page.locator("astro-island").count()) > 0) await page.waitForSelector("astro-island:not([ssr])");
-}
 
 const out = (page: Page, name: string) => page.locator(`[data-out="${name}"]`).first().textContent();
 const param = (page: Page, key: string) => new URL(page.url()).searchParams.get(key);
@@ -188,7 +156,7 @@ describe("calibration from logged readings", () => {
     // one click into the drift budget
     await page.locator('#calibration-calculator [data-out="handoff"]').click();
     await page.waitForURL(/\/chapters\/heading-drift\//);
-    await waitForIsland(page);
+    await waitForIslands(page);
     // the link carries six significant figures: 14.9964 mm and 0.513845 g
     expect(await page.inputValue("#drift-calculator-assumedRadius")).toBe(`${Number((fit.radius * 1000).toPrecision(6))} mm`);
     expect(await page.inputValue("#drift-calculator-assumedRadius")).toBe("14.9964 mm");

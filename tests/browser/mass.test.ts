@@ -4,42 +4,13 @@
  * permalink and get the same numbers; errors beside fields; a malformed or hostile link; keyboard
  * reordering; and axe-core on the page in light and dark.
  */
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import type { Browser, Locator, Page } from "playwright-core";
-import { launchBrowser, serveDist, axeViolations } from "../support/browser.ts";
+import { describe, expect, it } from "vitest";
+import type { Locator, Page } from "playwright-core";
+import { axeViolations, useSite } from "../support/browser.ts";
 
-let browser: Browser;
-let server: Awaited<ReturnType<typeof serveDist>>;
-const origin = () => server.url.replace(/\/$/, "");
+const site = useSite();
+const { origin, open } = site;
 const PAGE = "/chapters/mass-layout/";
-
-beforeAll(async () => {
-  server = await serveDist();
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-  await server?.close();
-});
-
-async function open(path: string, options: { colorScheme?: "light" | "dark" } = {}) {
-  const context = await browser.newContext({ colorScheme: options.colorScheme ?? "light", viewport: { width: 390, height: 844 } });
-  const page = await context.newPage();
-  const problems: string[] = [];
-  page.on("pageerror", (error) => problems.push(`pageerror: ${error.message}`));
-  page.on("console", (message) => {
-    if (message.type() === "error") problems.push(`console: ${message.text()}`);
-  });
-  page.on("dialog", (dialog) => {
-    problems.push(`dialog: ${dialog.message()}`);
-    void dialog.dismiss();
-  });
-  const requests: string[] = [];
-  page.on("request", (request) => requests.push(request.url()));
-  await page.goto(`${origin()}${path}`);
-  await page.waitForSelector("astro-island:not([ssr])");
-  return { page, context, problems, requests };
-}
 
 const out = (page: Page, name: string) => page.locator(`[data-out="${name}"]`).first().textContent();
 const card = (page: Page, index: number) => page.locator(".mass-parts details").nth(index);

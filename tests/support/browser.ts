@@ -69,8 +69,8 @@ export function useSite() {
     await server?.close();
   });
   const origin = () => server.url.replace(/\/$/, "");
-  async function open(path: string, options: { colorScheme?: "light" | "dark" } = {}) {
-    const context = await browser.newContext({ colorScheme: options.colorScheme ?? "light", viewport: { width: 390, height: 844 } });
+  async function open(path: string, options: { colorScheme?: "light" | "dark"; width?: number } = {}) {
+    const context = await browser.newContext({ colorScheme: options.colorScheme ?? "light", viewport: { width: options.width ?? 390, height: 844 } });
     const page = await context.newPage();
     const problems: string[] = [];
     page.on("pageerror", (error) => problems.push(`pageerror: ${error.message}`));
@@ -84,8 +84,13 @@ export function useSite() {
     const requests: string[] = [];
     page.on("request", (request) => requests.push(request.url()));
     await page.goto(`${origin()}${path}`);
-    if ((await page.locator("astro-island").count()) > 0) await page.waitForSelector("astro-island:not([ssr])");
+    await waitForIslands(page);
     return { page, context, problems, requests };
   }
   return { browser: () => browser, origin, open };
+}
+
+/** Waits until every island on the page has hydrated (returns at once on pages without one). */
+export async function waitForIslands(page: Page): Promise<void> {
+  if ((await page.locator("astro-island").count()) > 0) await page.waitForSelector("astro-island:not([ssr])");
 }
