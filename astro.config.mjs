@@ -38,13 +38,14 @@ export default defineConfig({
     plugins: [katexWoff2Only()],
     build: {
       assetsInlineLimit: 0,
+      sourcemap: process.env.SOURCEMAP === "1",
       rolldownOptions: {
         output: {
-          // Every calculator page needs the same runtime (Preact, signals, units, the shared
+          // Every calculator page needs the same runtime (Preact, reactive state, units, the shared
           // calculator parts): one chunk for it compresses better than nine small ones.
           codeSplitting: {
             groups: [
-              { name: "runtime", test: /node_modules[\\/](preact|@preact|d3-array)[\\/]|calc[\\/](units|inputs|errors|constants)\.ts|components[\\/]calc-ui[\\/]/ },
+              { name: "runtime", test: /node_modules[\\/](preact|d3-array)[\\/]|calc[\\/](units|inputs|errors|constants)\.ts|components[\\/]calc-ui[\\/]/ },
             ],
           },
         },

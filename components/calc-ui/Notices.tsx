@@ -1,5 +1,5 @@
 /** Plain-text notices about a link that was read (ignored parameters and the like). */
-import type { Signal } from "@preact/signals";
+import type { Signal } from "./reactive.ts";
 
 export function Notices({ notices }: { notices: Signal<string[]> }) {
   if (notices.value.length === 0) return null;

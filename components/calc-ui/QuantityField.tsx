@@ -2,7 +2,7 @@
  * A labelled text field for a quantity with a unit. Shows the unit a bare number is read in, the
  * help text, and the field's error right beside it. Typing a unit ("1.5 in") is always allowed.
  */
-import type { Signal, ReadonlySignal } from "@preact/signals";
+import type { Signal, ReadonlySignal } from "./reactive.ts";
 import type { FieldReading, InputSpec } from "../../calc/inputs.ts";
 import { fieldUnit } from "../../calc/inputs.ts";
 import { UNITS, type UnitSystem } from "../../calc/units.ts";

@@ -2,8 +2,8 @@
  * Unit-system switch and "copy link" for a calculator. The link is the page URL with the current
  * state; copying falls back to selecting the link text where the clipboard is unavailable.
  */
-import { useSignal } from "@preact/signals";
-import type { Signal } from "@preact/signals";
+import { useSignal } from "./reactive.ts";
+import type { Signal } from "./reactive.ts";
 import type { UnitSystem } from "../../calc/units.ts";
 
 export interface ToolbarProps {

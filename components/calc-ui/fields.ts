@@ -3,7 +3,7 @@
  * parsed reading of each, the unit system, and conversion of field texts when the system changes.
  * No DOM; safe on the server.
  */
-import { batch, computed, signal, type ReadonlySignal, type Signal } from "@preact/signals";
+import { batch, computed, signal, type ReadonlySignal, type Signal } from "./reactive.ts";
 import { CalcInputError } from "../../calc/errors.ts";
 import { defaultText, fieldUnit, readField, type FieldReading, type InputSpecs } from "../../calc/inputs.ts";
 import { parseQuantity, UNITS, type UnitSystem } from "../../calc/units.ts";

@@ -2,7 +2,7 @@
  * Keeps one calculator's state in the page URL: reads the link once on start, then rewrites the
  * calculator's own keys (and only those) after each change. Browser-only; call from an effect.
  */
-import { effect } from "@preact/signals";
+import { effect } from "./reactive.ts";
 import type { FieldsModel } from "./fields.ts";
 import type { InputSpecs } from "../../calc/inputs.ts";
 

@@ -3,7 +3,7 @@
  * file export and import, a link that carries the whole design, and a print layout.
  */
 import { useEffect, useMemo, useRef } from "preact/hooks";
-import { useSignal } from "@preact/signals";
+import { useSignal } from "../calc-ui/reactive.ts";
 import type { CheckResult, CheckStatus } from "../../calc/checks.ts";
 import { DESIGN_SECTIONS, SECTION_TITLES } from "../../calc/design.ts";
 import { createBuildSheetModel, type BuildSheetModel } from "./model.ts";

@@ -3,7 +3,7 @@
  * from a link, imported from a file, or the demo), its checks, and every action on them. Nothing
  * overwrites a saved design without asking; a deletion can be undone.
  */
-import { batch, computed, signal } from "@preact/signals";
+import { batch, computed, signal } from "../calc-ui/reactive.ts";
 import { describeProblems, newDesign, readDesignText, designToText, type Design } from "../../calc/design.ts";
 import { runChecks, overallStatus } from "../../calc/checks.ts";
 import { demoDesign } from "../../calc/demo-design.ts";

@@ -2,7 +2,7 @@
  * Design comparison: up to three variants of the design, each a copy with a few inputs changed,
  * on one speed-against-time chart and in one table.
  */
-import { useSignal } from "@preact/signals";
+import { useSignal } from "../calc-ui/reactive.ts";
 import { QuantityField } from "../calc-ui/QuantityField.tsx";
 import { Chart } from "../calc-ui/Chart.tsx";
 import { formatNumber, radPerSecondToRpm } from "../../calc/units.ts";

@@ -20,7 +20,7 @@
  * for a variant beyond `variants` still open that variant. Anything unknown, repeated, too long or
  * out of place is reported as a plain-text notice and ignored.
  */
-import { batch, computed, effect, signal, type ReadonlySignal, type Signal } from "@preact/signals";
+import { batch, computed, effect, signal, type ReadonlySignal, type Signal } from "../calc-ui/reactive.ts";
 import {
   compareDrivetrains,
   DEMO_SPINNER,

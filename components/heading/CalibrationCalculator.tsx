@@ -5,7 +5,7 @@
  * link that carries the fitted radius and offset into the drift budget.
  */
 import { useEffect, useMemo } from "preact/hooks";
-import { effect } from "@preact/signals";
+import { effect } from "../calc-ui/reactive.ts";
 import type { CalibrationCurvePoint, ConfidenceInterval } from "../../calc/calibration.ts";
 import { formatNumber, fromSI, radPerSecondToRpm, type UnitSystem } from "../../calc/units.ts";
 import { Toolbar } from "../calc-ui/Toolbar.tsx";

@@ -5,7 +5,7 @@
  * compact form of calc/calibration.ts; the text box is rebuilt from them when a link is opened.
  * No DOM.
  */
-import { computed, signal } from "@preact/signals";
+import { computed, signal } from "../calc-ui/reactive.ts";
 import {
   CALIBRATION_ROWS_MAX,
   calibrationCurve,

@@ -3,7 +3,7 @@
  * inputs (keys scoped "p."), each with the calc/ result or the error it raised, mapped to its
  * field. No DOM.
  */
-import { computed } from "@preact/signals";
+import { computed } from "../calc-ui/reactive.ts";
 import { headingDrift, headingDriftInputs, opposedSensorsCheck, opposedSensorsInputs } from "../../calc/heading-drift.ts";
 import { formatQuantity, fromSI, radPerSecondToRpm, type UnitSystem } from "../../calc/units.ts";
 import { createFieldsModel, fieldMessage } from "../calc-ui/fields.ts";

@@ -3,7 +3,7 @@
  * smoothing inputs (keys scoped "s."), each with the calc/ result or the error it raised, mapped to
  * its field; the median-window comparison and the trade-off series over α. No DOM.
  */
-import { computed } from "@preact/signals";
+import { computed } from "../calc-ui/reactive.ts";
 import { headingSmoothing, headingSmoothingInputs, headingTiming, headingTimingInputs, smoothingTradeoffSeries } from "../../calc/heading-timing.ts";
 import type { UnitSystem } from "../../calc/units.ts";
 import { createFieldsModel, fieldMessage } from "../calc-ui/fields.ts";

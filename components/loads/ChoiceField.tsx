@@ -2,7 +2,7 @@
  * A category input: a labelled <select>, or a radio group with a legend, with help text and an
  * error beside it. Large touch targets; keyboard use is the browser's own.
  */
-import type { ReadonlySignal, Signal } from "@preact/signals";
+import type { ReadonlySignal, Signal } from "../calc-ui/reactive.ts";
 import type { ChoiceSpec } from "./choices.ts";
 
 export interface ChoiceFieldProps {

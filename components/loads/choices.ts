@@ -3,7 +3,7 @@
  * fields: one signal each, validated against the calc module's fixed list, read from and written
  * to the page URL next to the quantity fields (`encodeState`'s `extra` keys). No DOM.
  */
-import { signal, type Signal } from "@preact/signals";
+import { signal, type Signal } from "../calc-ui/reactive.ts";
 import type { ChoiceOption } from "../../calc/loads-common.ts";
 import type { InputSpecs } from "../../calc/inputs.ts";
 import type { FieldsModel } from "../calc-ui/fields.ts";

@@ -3,7 +3,7 @@
  * class, loading mode, shear plane) in, the calc/ fastener check (or the error it raised, mapped to
  * its field) and the stress-against-speed curve out. No DOM.
  */
-import { computed } from "@preact/signals";
+import { computed } from "../calc-ui/reactive.ts";
 import {
   FASTENER_CHOICE_DEFAULTS,
   fastenerCheck,

@@ -3,7 +3,7 @@
  * table (which fills the density, strength and Poisson fields) or typed in as custom values; out
  * come the calc/ rim check (or its error, mapped to a field) and the stress profile. No DOM.
  */
-import { batch, computed } from "@preact/signals";
+import { batch, computed } from "../calc-ui/reactive.ts";
 import {
   DEFAULT_RIM_MATERIAL,
   RIM_CHOICE_DEFAULTS,

@@ -4,7 +4,7 @@
  * counterweight solver that can add its answer to the list (and take it back), and the sensor's
  * true radius. Explanations live in the chapter; this shows numbers.
  */
-import { useSignal } from "@preact/signals";
+import { useSignal } from "../calc-ui/reactive.ts";
 import { useEffect, useMemo } from "preact/hooks";
 import { BALANCE_GRADES, PART_SHAPE_KINDS, type MirrorAxis } from "../../calc/mass.ts";
 import { MATERIALS } from "../../calc/materials.ts";

@@ -4,7 +4,7 @@
  * counterweight plan and the top-view geometry (or the error, mapped to its part and field) out.
  * List edits, mirroring, applying and undoing a counterweight, and the permalink. No DOM.
  */
-import { batch, computed, effect, signal } from "@preact/signals";
+import { batch, computed, effect, signal } from "../calc-ui/reactive.ts";
 import { CalcInputError } from "../../calc/errors.ts";
 import { readField, type InputSpec } from "../../calc/inputs.ts";
 import {

@@ -3,7 +3,7 @@
  * signals, and every dimension as a unit-aware text field (a fields model per part). Converts
  * between the fields and calc/'s `LayoutPart`. No DOM.
  */
-import { signal, type Signal } from "@preact/signals";
+import { signal, type Signal } from "../calc-ui/reactive.ts";
 import { defineInputs, fieldUnit, type InputSpec } from "../../calc/inputs.ts";
 import type { MaterialId } from "../../calc/materials.ts";
 import type { LayoutPart, PartShape, PartShapeKind } from "../../calc/mass.ts";

@@ -2,7 +2,7 @@
  * The accelerometer-placement calculator's model: field signals in, the calc/ result (or the
  * error it raised, mapped to its field) out. No DOM.
  */
-import { computed } from "@preact/signals";
+import { computed } from "../calc-ui/reactive.ts";
 import { accelerometerPlacement, accelerometerPlacementInputs, centripetalAcceleration } from "../../calc/rotation.ts";
 import { STANDARD_GRAVITY } from "../../calc/constants.ts";
 import { radPerSecondToRpm, rpmToRadPerSecond, type UnitSystem } from "../../calc/units.ts";
