@@ -185,40 +185,45 @@ export function radPerSecondToRpm(angularSpeed: number): number {
 export type UnitSystem = "metric" | "us";
 
 /**
- * Display units per kind and system, smallest first; `formatQuantity` takes the largest whose
- * value is at least `from` (in SI), so 0.45 kg shows as 450 g and 2.3 kg as 2.3 kg.
+ * Display units per kind: metric steps, then US steps when they differ. Each step is a unit, or
+ * [unit, from] with `from` in SI; `formatQuantity` takes the last step whose `from` the value
+ * reaches (the first starts at 0), so 0.45 kg shows as 450 g and 2.3 kg as 2.3 kg.
  */
-const DISPLAY: Record<QuantityKind, Record<UnitSystem, readonly { unit: UnitId; from: number }[]>> = {
-  length: { metric: [{ unit: "mm", from: 0 }, { unit: "m", from: 10 }], us: [{ unit: "in", from: 0 }, { unit: "ft", from: 10 * FOOT }] },
-  mass: { metric: [{ unit: "g", from: 0 }, { unit: "kg", from: 1 }], us: [{ unit: "oz", from: 0 }, { unit: "lb", from: POUND }] },
-  acceleration: { metric: [{ unit: "gn", from: 0 }], us: [{ unit: "gn", from: 0 }] },
-  angularSpeed: { metric: [{ unit: "rpm", from: 0 }], us: [{ unit: "rpm", from: 0 }] },
-  angularAcceleration: { metric: [{ unit: "rpm/s", from: 0 }], us: [{ unit: "rpm/s", from: 0 }] },
-  angle: { metric: [{ unit: "deg", from: 0 }], us: [{ unit: "deg", from: 0 }] },
-  time: { metric: [{ unit: "us", from: 0 }, { unit: "ms", from: 1e-3 }, { unit: "s", from: 1 }], us: [{ unit: "us", from: 0 }, { unit: "ms", from: 1e-3 }, { unit: "s", from: 1 }] },
-  frequency: { metric: [{ unit: "Hz", from: 0 }, { unit: "kHz", from: 1e4 }], us: [{ unit: "Hz", from: 0 }, { unit: "kHz", from: 1e4 }] },
-  force: { metric: [{ unit: "N", from: 0 }, { unit: "kN", from: 1e4 }], us: [{ unit: "lbf", from: 0 }] },
-  speed: { metric: [{ unit: "m/s", from: 0 }], us: [{ unit: "ft/s", from: 0 }] },
-  energy: { metric: [{ unit: "J", from: 0 }, { unit: "kJ", from: 1e4 }], us: [{ unit: "ft·lbf", from: 0 }] },
-  power: { metric: [{ unit: "W", from: 0 }, { unit: "kW", from: 1e4 }], us: [{ unit: "W", from: 0 }, { unit: "kW", from: 1e4 }] },
-  torque: { metric: [{ unit: "N·m", from: 0 }], us: [{ unit: "ozf·in", from: 0 }, { unit: "lbf·in", from: POUND_FORCE * INCH }] },
-  inertia: { metric: [{ unit: "kg·m2", from: 0 }], us: [{ unit: "lb·in2", from: 0 }] },
-  stress: { metric: [{ unit: "MPa", from: 0 }], us: [{ unit: "ksi", from: 0 }] },
-  density: { metric: [{ unit: "g/cm3", from: 0 }], us: [{ unit: "lb/in3", from: 0 }] },
-  unbalance: { metric: [{ unit: "g·mm", from: 0 }], us: [{ unit: "oz·in", from: 0 }] },
-  voltage: { metric: [{ unit: "V", from: 0 }], us: [{ unit: "V", from: 0 }] },
-  current: { metric: [{ unit: "A", from: 0 }], us: [{ unit: "A", from: 0 }] },
-  resistance: { metric: [{ unit: "mohm", from: 0 }, { unit: "ohm", from: 10 }], us: [{ unit: "mohm", from: 0 }, { unit: "ohm", from: 10 }] },
-  motorVelocityConstant: { metric: [{ unit: "rpm/V", from: 0 }], us: [{ unit: "rpm/V", from: 0 }] },
-  fraction: { metric: [{ unit: "pct", from: 0 }], us: [{ unit: "pct", from: 0 }] },
-  count: { metric: [{ unit: "count", from: 0 }], us: [{ unit: "count", from: 0 }] },
+type DisplaySteps = readonly (UnitId | readonly [UnitId, number])[];
+const DISPLAY: Record<QuantityKind, readonly [DisplaySteps, DisplaySteps?]> = {
+  length: [["mm", ["m", 10]], ["in", ["ft", 10 * FOOT]]],
+  mass: [["g", ["kg", 1]], ["oz", ["lb", POUND]]],
+  acceleration: [["gn"]],
+  angularSpeed: [["rpm"]],
+  angularAcceleration: [["rpm/s"]],
+  angle: [["deg"]],
+  time: [["us", ["ms", 1e-3], ["s", 1]]],
+  frequency: [["Hz", ["kHz", 1e4]]],
+  force: [["N", ["kN", 1e4]], ["lbf"]],
+  speed: [["m/s"], ["ft/s"]],
+  energy: [["J", ["kJ", 1e4]], ["ft·lbf"]],
+  power: [["W", ["kW", 1e4]]],
+  torque: [["N·m"], ["ozf·in", ["lbf·in", POUND_FORCE * INCH]]],
+  inertia: [["kg·m2"], ["lb·in2"]],
+  stress: [["MPa"], ["ksi"]],
+  density: [["g/cm3"], ["lb/in3"]],
+  unbalance: [["g·mm"], ["oz·in"]],
+  voltage: [["V"]],
+  current: [["A"]],
+  resistance: [["mohm", ["ohm", 10]]],
+  motorVelocityConstant: [["rpm/V"]],
+  fraction: [["pct"]],
+  count: [["count"]],
 };
 
 /** The unit a value of `kind` is shown in for `system`, chosen by magnitude. */
 export function displayUnit(kind: QuantityKind, system: UnitSystem, valueSI = 0): UnitId {
-  const steps = DISPLAY[kind][system];
-  let chosen = steps[0]!.unit;
-  for (const step of steps) if (Math.abs(valueSI) >= step.from) chosen = step.unit;
+  const [metric, us] = DISPLAY[kind];
+  let chosen = metric[0] as UnitId;
+  for (const step of (system === "us" && us) || metric) {
+    if (typeof step === "string") chosen = step;
+    else if (Math.abs(valueSI) >= step[1]) chosen = step[0];
+  }
   return chosen;
 }
 
@@ -273,19 +278,11 @@ export function formatQuantity(
  */
 export function quantityToText(valueSI: number, unit: UnitId): string {
   const n = Number(fromSI(valueSI, unit).toPrecision(6));
-  const symbol = UNITS[unit].symbol;
-  return `${n}${symbol === "" ? "" : UNIT_URL_SPELLING[unit] ?? symbol}`;
+  return `${n}${UNITS[unit].symbol === "" ? "" : urlSpelling(unit)}`;
 }
 
-/** ASCII spellings for units whose symbol has characters a URL would percent-encode. */
-const UNIT_URL_SPELLING: Partial<Record<UnitId, string>> = {
-  gn: "g",
-  "m/s2": "m/s2",
-  "ft/s2": "ft/s2",
-  "deg/s": "deg/s",
-  "rad/s2": "rad/s2",
-  deg: "deg",
-  us: "us",
+/** ASCII spellings for units whose symbol and id both have characters a URL would percent-encode. */
+const URL_SPELLING: Partial<Record<UnitId, string>> = {
   "ft·lbf": "ft-lbf",
   "N·m": "Nm",
   "lbf·in": "lbf-in",
@@ -294,17 +291,17 @@ const UNIT_URL_SPELLING: Partial<Record<UnitId, string>> = {
   "g·cm2": "gcm2",
   "lb·in2": "lb-in2",
   "oz·in2": "oz-in2",
-  "kg/m3": "kg/m3",
-  "g/cm3": "g/cm3",
-  "lb/in3": "lb/in3",
   "kg·m": "kgm",
   "g·mm": "gmm",
   "oz·in": "oz-in",
-  ohm: "ohm",
-  mohm: "mohm",
   "rad/(s·V)": "rad/s/V",
-  pct: "pct",
 };
+
+/** How a unit is written in a URL: its symbol when that is plain ASCII, else an ASCII spelling. */
+function urlSpelling(id: UnitId): string {
+  const symbol = UNITS[id].symbol;
+  return URL_SPELLING[id] ?? (/^[\w/.]*$/.test(symbol) ? symbol : id);
+}
 
 // ---------------------------------------------------------------------------------------------
 // Parsing what a user typed.
@@ -332,7 +329,7 @@ export function findUnit(text: string, kind: QuantityKind): UnitId | undefined {
   const candidates = unitsOfKind(kind);
   const spellings = (id: UnitId): string[] => {
     const def: UnitDef = UNITS[id];
-    return [id, def.symbol, UNIT_URL_SPELLING[id] ?? "", ...(def.aliases ?? [])].filter((s) => s !== "").map(normaliseUnitText);
+    return [id, def.symbol, urlSpelling(id), ...(def.aliases ?? [])].filter((s) => s !== "").map(normaliseUnitText);
   };
   for (const id of candidates) if (spellings(id).includes(wanted)) return id;
   const lower = wanted.toLowerCase();
@@ -340,32 +337,19 @@ export function findUnit(text: string, kind: QuantityKind): UnitId | undefined {
   return matches.length === 1 ? matches[0] : undefined;
 }
 
-/** Human names of each kind, for messages. */
-export const KIND_NAMES: Record<QuantityKind, string> = {
-  length: "length",
-  mass: "mass",
-  acceleration: "acceleration",
+/** Names of the kinds whose identifier is not already the word a message uses. */
+const KIND_WORDS: Partial<Record<QuantityKind, string>> = {
   angularSpeed: "rotational speed",
   angularAcceleration: "angular acceleration",
-  angle: "angle",
-  time: "time",
-  frequency: "frequency",
-  force: "force",
-  speed: "speed",
-  energy: "energy",
-  power: "power",
-  torque: "torque",
   inertia: "moment of inertia",
-  stress: "stress",
-  density: "density",
-  unbalance: "unbalance",
-  voltage: "voltage",
-  current: "current",
-  resistance: "resistance",
   motorVelocityConstant: "motor velocity constant",
   fraction: "ratio",
-  count: "count",
 };
+
+/** The kind's name in words, for messages ("rotational speed"). */
+export function kindName(kind: QuantityKind): string {
+  return KIND_WORDS[kind] ?? kind;
+}
 
 /**
  * Reads what a user typed for a field of `kind`. A bare number takes `defaultUnit`; a decimal
@@ -399,7 +383,7 @@ export function parseQuantity(text: string, kind: QuantityKind, defaultUnit: Uni
         ok: false,
         reason: "unknown-unit",
         message: known.length
-          ? `has a unit "${shown}" that is not a ${KIND_NAMES[kind]} unit; use ${known.join(", ")}`
+          ? `has a unit "${shown}" that is not a ${kindName(kind)} unit; use ${known.join(", ")}`
           : `takes a plain number, without a unit (got "${shown}")`,
       };
     }
