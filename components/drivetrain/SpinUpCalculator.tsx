@@ -14,7 +14,6 @@ import { createSpinUpModel, SPINNER_ONLY, type Name, type SpinUpModel } from "./
 import { Empty, Results, SpinUpCharts } from "./Results.tsx";
 import { Compare } from "./Compare.tsx";
 import { Sweep } from "./Sweep.tsx";
-import "./drivetrain.css";
 
 export interface SpinUpCalculatorProps {
   /** Element id of the calculator (the link's anchor). */

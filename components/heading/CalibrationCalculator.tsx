@@ -15,7 +15,6 @@ import { ACCELERATION_UNITS, createCalibrationModel, SPEED_UNITS, type Calibrati
 import { inSystem, plain } from "./format.ts";
 import { DataTable, Empty, Outputs, Verdict } from "./ui.tsx";
 import { XYChart } from "./XYChart.tsx";
-import "./heading.css";
 
 export interface CalibrationCalculatorProps {
   /** Element id of the calculator (the link's anchor). */

@@ -14,7 +14,6 @@ import { syncWithUrl } from "../calc-ui/url-sync.ts";
 import { createDriftModel, type DriftModel } from "./drift-model.ts";
 import { degPerSecond, degrees, inSystem } from "./format.ts";
 import { DataTable, Empty, FieldsForm, Outputs, Verdict, type FieldGroup } from "./ui.tsx";
-import "./heading.css";
 
 export interface HeadingDriftCalculatorProps {
   /** Element id of the calculator (the link's anchor). */

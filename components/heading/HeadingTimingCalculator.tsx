@@ -14,7 +14,6 @@ import { createTimingModel, type TimingModel } from "./timing-model.ts";
 import { degPerSecond, degrees, inSystem, plain } from "./format.ts";
 import { DataTable, Empty, FieldsForm, Outputs, Verdict, type FieldGroup } from "./ui.tsx";
 import { XYChart } from "./XYChart.tsx";
-import "./heading.css";
 
 export interface HeadingTimingCalculatorProps {
   /** Element id of the calculator (the link's anchor). */

@@ -14,7 +14,6 @@ import { linkFor, syncWithUrl } from "../calc-ui/url-sync.ts";
 import { ChoiceField } from "./ChoiceField.tsx";
 import { createFastenerModel, FASTENER_CHOICES, type FastenerModel } from "./fastener-model.ts";
 import { area, axis, Outputs, q, rpm, VERDICT_TITLE, VERDICT_TONE, verdictRule } from "./format.tsx";
-import "./loads.css";
 
 export interface FastenerCalculatorProps {
   /** Element id of the calculator (the link's anchor). */

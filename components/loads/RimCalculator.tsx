@@ -14,7 +14,6 @@ import { linkFor, syncWithUrl } from "../calc-ui/url-sync.ts";
 import { ChoiceField } from "./ChoiceField.tsx";
 import { createRimModel, type MaterialChoice, type RimModel } from "./rim-model.ts";
 import { axis, Outputs, q, rpm, VERDICT_TITLE, VERDICT_TONE, verdictRule } from "./format.tsx";
-import "./loads.css";
 
 export interface RimCalculatorProps {
   /** Element id of the calculator (the link's anchor). */

@@ -15,7 +15,6 @@ import { Notices } from "../calc-ui/Notices.tsx";
 import { createMassModel, syncMassWithUrl, type MassError, type MassModel, type ModeKey, type Snapshot } from "./model.ts";
 import { needsGivenMass, partFields, PART_INPUTS, type PartModel } from "./parts.ts";
 import { TopView } from "./TopView.tsx";
-import "./mass.css";
 
 export interface MassLayoutCalculatorProps {
   /** Element id of the calculator (the link's anchor). */

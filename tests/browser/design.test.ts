@@ -8,7 +8,7 @@ import { cpSync, readFileSync, readdirSync, writeFileSync, mkdtempSync } from "n
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { startStaticServer } from "../../scripts/static-server.mjs";
-import { DIST_DIR, axeViolations, useSite } from "../support/browser.ts";
+import { DIST_DIR, axeViolations, useSite, waitForIslands } from "../support/browser.ts";
 
 const site = useSite();
 const { origin } = site;
@@ -17,7 +17,7 @@ const scratch = mkdtempSync(join(tmpdir(), "whirlbook-design-"));
 async function openSheet(context: BrowserContext, hash = "#demo"): Promise<Page> {
   const page = await context.newPage();
   await page.goto(`${origin()}/build-sheet/${hash}`);
-  await page.waitForSelector("astro-island:not([ssr])");
+  await waitForIslands(page);
   return page;
 }
 
@@ -43,7 +43,7 @@ describe("build sheet", () => {
     await page.getByRole("button", { name: "Save in this browser" }).click();
     await expect.poll(() => page.locator(".design-list li").count()).toBe(1);
     await page.reload();
-    await page.waitForSelector("astro-island:not([ssr])");
+    await waitForIslands(page);
     await expect.poll(() => page.inputValue("#design-name")).toBe("Test robot");
     await page.getByRole("button", { name: "Duplicate Test robot" }).click();
     await expect.poll(() => page.locator(".design-name").allTextContents()).toEqual(["Test robot", "Test robot (copy)"]);
@@ -91,13 +91,13 @@ describe("build sheet", () => {
     const fresh = await site.browser().newContext();
     const other = await fresh.newPage();
     await other.goto(link);
-    await other.waitForSelector("astro-island:not([ssr])");
+    await waitForIslands(other);
     await expect.poll(() => other.inputValue("#design-name")).toBe("Shared robot");
     expect(await other.locator("[data-out$=-figure]").allTextContents()).toEqual(figures);
     expect(await other.locator(".design-list li").count()).toBe(0);
     await other.goto(link.slice(0, link.length - 300));
     await other.reload();
-    await other.waitForSelector("astro-island:not([ssr])");
+    await waitForIslands(other);
     await expect.poll(() => other.locator('[role="alert"]').first().textContent()).toContain("This design link is cut short");
     await fresh.close();
   });
@@ -106,7 +106,7 @@ describe("build sheet", () => {
     const context = await site.browser().newContext();
     const page = await context.newPage();
     await page.goto(`${origin()}/chapters/acceleration/?v=1&rpm=3000rpm&r=12mm&low=500rpm&res=2pct`);
-    await page.waitForSelector("astro-island:not([ssr])");
+    await waitForIslands(page);
     await page.getByRole("button", { name: "Save to design" }).click();
     await expect.poll(() => page.locator(".calc-status").textContent()).toContain("Saved to the design “My robot”");
     const sheet = await openSheet(context, "");
@@ -149,10 +149,10 @@ describe("offline", () => {
       const response = await page.goto(`${origin()}${path}?v=1`);
       expect(response?.ok(), path).toBe(true);
       expect(await page.locator("h1").count(), path).toBeGreaterThan(0);
-      if ((await page.locator("astro-island").count()) > 0) await page.waitForSelector("astro-island:not([ssr])", { timeout: 10_000 });
+      await waitForIslands(page);
     }
     await page.goto(`${origin()}/chapters/acceleration/?v=1&rpm=3000rpm&r=12mm`);
-    await page.waitForSelector("astro-island:not([ssr])");
+    await waitForIslands(page);
     expect(await page.locator('[data-out="accel-top"]').textContent()).toBe("121 g");
     await page.goto(`${origin()}/search/?q=headroom`);
     await expect.poll(() => page.locator("#search-results li").count(), { timeout: 10_000 }).toBeGreaterThan(0);
@@ -212,7 +212,7 @@ describe("accessibility (axe-core) of the pit pages", () => {
         const context = await site.browser().newContext({ colorScheme, viewport: { width: 390, height: 844 } });
         const page = await context.newPage();
         await page.goto(`${origin()}${path}`);
-        if ((await page.locator("astro-island").count()) > 0) await page.waitForSelector("astro-island:not([ssr])");
+        await waitForIslands(page);
         await page.waitForTimeout(300);
         const result = await axeViolations(page);
         expect(result).toEqual([]);

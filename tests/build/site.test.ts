@@ -20,7 +20,7 @@ const chapters = readdirSync(contentDir)
   .filter((f) => f.endsWith(".mdx"))
   .map((f) => {
     const source = readFileSync(join(contentDir, f), "utf8");
-    return { slug: f.replace(/\.mdx$/, ""), calculator: /^calculator:\s*true\s*$/m.test(source), islands: (source.match(/client:(load|visible|idle)/g) ?? []).length };
+    return { slug: f.replace(/\.mdx$/, ""), calculator: /^calculator:\s*true\s*$/m.test(source), islands: (source.match(/<[A-Z]\w*Calculator\b/g) ?? []).length };
   });
 
 const KB = 1024;
@@ -40,18 +40,14 @@ const BUDGET = {
 /**
  * Chapter pages whose calculators do not yet fit the 25 KB JS budget, with the ceiling each may not
  * exceed (measured size plus about 2 %; the 60 KB total still applies where it holds). The shared
- * runtime (Preact, signals, Astro's island loader, units and the calculator parts) is about 20 KB
- * of every page; these calculators' own code is 7–18 KB.
+ * floor of every calculator page (Preact, the reactive state, units and inputs, the calculator
+ * parts, the hydration call and the offline registration) is about 16 KB.
  * Each entry is an open problem, not an allowance: remove it when the page fits.
  */
 const HEAVY_PAGES: Record<string, { js: number; total: number }> = {
-  calibration: { js: 33_500, total: 60 * KB },
-  fasteners: { js: 28_100, total: 60 * KB },
-  "heading-drift": { js: 28_400, total: 60 * KB },
-  "heading-timing": { js: 28_800, total: 60 * KB },
-  rims: { js: 27_800, total: 60 * KB },
-  "mass-layout": { js: 39_500, total: 67_200 },
-  "spin-up": { js: 39_500, total: 69_200 },
+  calibration: { js: 28_500, total: 60 * KB },
+  "mass-layout": { js: 34_500, total: 60 * KB },
+  "spin-up": { js: 34_500, total: 62_000 },
 };
 
 describe("the built site", () => {

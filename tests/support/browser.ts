@@ -92,5 +92,5 @@ export function useSite() {
 
 /** Waits until every island on the page has hydrated (returns at once on pages without one). */
 export async function waitForIslands(page: Page): Promise<void> {
-  if ((await page.locator("astro-island").count()) > 0) await page.waitForSelector("astro-island:not([ssr])");
+  await page.waitForFunction(() => document.querySelectorAll("[data-island]:not([data-hydrated])").length === 0);
 }
