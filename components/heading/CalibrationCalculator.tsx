@@ -14,7 +14,7 @@ import { QuantityField } from "../calc-ui/QuantityField.tsx";
 import { ACCELERATION_UNITS, createCalibrationModel, SPEED_UNITS, type CalibrationModel } from "./calibration-model.ts";
 import { inSystem, plain } from "./format.ts";
 import { DataTable, Empty, Outputs, Verdict } from "./ui.tsx";
-import { XYChart } from "./XYChart.tsx";
+import { Chart } from "../calc-ui/Chart.tsx";
 
 export interface CalibrationCalculatorProps {
   /** Element id of the calculator (the link's anchor). */
@@ -223,14 +223,14 @@ function Charts({ model }: { model: CalibrationModel }) {
   const pad = (high - low) * 0.08 || 1;
   return (
     <>
-      <XYChart
+      <Chart
         title="Readings and fitted lines"
         summary={`${rows.length} readings from ${formatNumber(Math.min(...ys))} g to ${formatNumber(Math.max(...ys))} g; ${spikes.length} flagged. The fitted line rises as the square of the speed.`}
         xLabel="Reference speed (rpm)"
         yLabel="Radial reading (g)"
         xDomain={[0, xMax]}
         yDomain={[Math.min(0, ...ys), Math.max(0, ...ys) * 1.08 || 1]}
-        lines={[
+        series={[
           { label: "Fit used", points: line((p) => p.recommended), className: "plot-curve" },
           { label: "Least squares, all readings", points: line((p) => p.leastSquares), className: "plot-curve-2 plot-dashed" },
           { label: "Theil–Sen", points: line((p) => p.theilSen), className: "plot-curve-thin plot-dashed" },
@@ -240,7 +240,7 @@ function Charts({ model }: { model: CalibrationModel }) {
           { label: "Flagged reading", points: spikes, className: "plot-dot-flag" },
         ]}
       />
-      <XYChart
+      <Chart
         title="Residuals from the Theil–Sen line"
         summary={`Residuals from ${formatNumber(Math.min(...rs))} g to ${formatNumber(Math.max(...rs))} g; readings outside the shaded band are flagged.`}
         xLabel="Reference speed (rpm)"

@@ -13,7 +13,7 @@ import { syncWithUrl } from "../calc-ui/url-sync.ts";
 import { createTimingModel, type TimingModel } from "./timing-model.ts";
 import { degPerSecond, degrees, inSystem, plain } from "./format.ts";
 import { DataTable, Empty, FieldsForm, Outputs, Verdict, type FieldGroup } from "./ui.tsx";
-import { XYChart } from "./XYChart.tsx";
+import { Chart } from "../calc-ui/Chart.tsx";
 
 export interface HeadingTimingCalculatorProps {
   /** Element id of the calculator (the link's anchor). */
@@ -126,7 +126,7 @@ function TradeoffChart({ model }: { model: TimingModel }) {
   const noise = tradeoff.map((f) => [f.smoothingFactor, f.noiseFactor * 100] as const);
   const top = Math.max(...error.map(([, y]) => y)) * 1.05 || 1;
   return (
-    <XYChart
+    <Chart
       title="Smoothing trade-off"
       summary={`A smaller α leaves less noise but a larger heading error after the spin-up: from ${deg(tradeoff[0]!.headingErrorAfterSpinUp)} at α = ${formatNumber(tradeoff[0]!.smoothingFactor)} to ${deg(tradeoff[tradeoff.length - 1]!.headingErrorAfterSpinUp)} at α = 1.`}
       xLabel="Smoothing factor α (log scale)"
@@ -136,7 +136,7 @@ function TradeoffChart({ model }: { model: TimingModel }) {
       xDomain={[tradeoff[0]!.smoothingFactor, 1]}
       yDomain={[0, top]}
       y2Domain={[0, 105]}
-      lines={[
+      series={[
         { label: "Heading error after the spin-up (left axis)", points: error, className: "plot-curve" },
         { label: "Noise left after the average (right axis)", points: noise, className: "plot-curve-2 plot-dashed", right: true },
       ]}
