@@ -275,10 +275,14 @@ export interface TheilSenLine {
   slope: number;
   /** Median of y_i − slope·x_i. */
   intercept: number;
-  /** Distribution-free interval for the slope, null when there are too few points at this confidence. */
+  /**
+   * Distribution-free interval for the slope: the ordered pairwise slopes at `ranks` (normal
+   * approximation to Kendall's S, approximate below about 10 points); null when `ranks.low` < 1,
+   * too few points for this confidence.
+   */
   slopeInterval: ConfidenceInterval | null;
-  /** Why the interval is missing, or how it was formed. */
-  intervalNote: string;
+  /** 1-based, possibly fractional ranks of the interval's ends among the `pairCount` ordered slopes [-]. */
+  ranks: { low: number; high: number };
   /** Number of pairs with different x [-]. */
   pairCount: number;
   residuals: number[];
@@ -445,15 +449,8 @@ function theilSenLine(x: readonly number[], y: readonly number[], confidence: nu
   const nPairs = slopes.length;
   const m1 = (nPairs - c) / 2;
   const m2 = (nPairs + c) / 2;
-  let slopeInterval: ConfidenceInterval | null = null;
-  let intervalNote: string;
-  if (m1 >= 1 && m2 + 1 <= nPairs) {
-    slopeInterval = { low: atRank(slopes, m1), high: atRank(slopes, m2 + 1) };
-    intervalNote = `ranks ${round4(m1)} and ${round4(m2 + 1)} of ${nPairs} ordered pairwise slopes (normal approximation to Kendall's S; approximate below about 10 points)`;
-  } else {
-    intervalNote = `too few points for a distribution-free interval at ${round4(confidence * 100)} % (needs rank ${round4(m1)} ≥ 1 among ${nPairs} pairwise slopes)`;
-  }
-  return { slope, intercept, slopeInterval, intervalNote, pairCount: nPairs, residuals };
+  const slopeInterval = m1 >= 1 && m2 + 1 <= nPairs ? { low: atRank(slopes, m1), high: atRank(slopes, m2 + 1) } : null;
+  return { slope, intercept, slopeInterval, ranks: { low: m1, high: m2 + 1 }, pairCount: nPairs, residuals };
 }
 
 function round4(x: number): number {

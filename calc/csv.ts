@@ -5,8 +5,8 @@
  * text and returns rows in SI plus every line it could not read, by line number and reason. It
  * never throws on any text.
  */
-import { CalcInputError } from "./errors.ts";
 import type { CalibrationRow } from "./calibration.ts";
+import { requireUnitOfKind } from "./calibration-text.ts";
 import { findUnit, parseQuantity, UNITS, type UnitId } from "./units.ts";
 
 export type CsvSeparator = "," | ";" | "\t" | "whitespace";
@@ -138,13 +138,6 @@ function chooseSeparator(lines: readonly string[]): CsvSeparator | null {
   if (tab === best) return "\t";
   if (semi === best) return ";";
   return ",";
-}
-
-function requireUnitOfKind(param: string, unit: UnitId, kind: "angularSpeed" | "acceleration"): void {
-  const def = (UNITS as Record<string, { kind: string } | undefined>)[unit];
-  if (!def || def.kind !== kind) {
-    throw new CalcInputError({ param, value: String(unit), expected: `a unit of ${kind === "angularSpeed" ? "rotational speed" : "acceleration"}`, unit: "" });
-  }
 }
 
 function separatorName(sep: CsvSeparator): string {
@@ -287,32 +280,4 @@ export function parseCalibrationCsv(text: string, options: CalibrationCsvOptions
     result.rows.push({ line, angularSpeed: w, acceleration: a });
   }
   return result;
-}
-
-/**
- * Writes calibration rows as text that `parseCalibrationCsv` reads back: a header naming the units,
- * then one "speed,reading" line per row, six significant figures (rfc-4180 §2 layout; units by
- * nist-sp811 and cgpm-1901 through calc/units.ts).
- *
- * Formula: value = SI value / unit factor, to six significant figures
- *
- * @param rows readings [rad/s, m/s²]; each value finite
- * @param options speedUnit (default "rpm") and accelerationUnit (default "gn") to write in
- * @returns the text, e.g. "speed (rpm),reading (g)\n1200,31.5\n"
- *
- * Example: one row of 125.664 rad/s and 308.911 m/s² → "speed (rpm),reading (g)\n1200,31.5\n".
- * Sources: rfc-4180, nist-sp811, cgpm-1901.
- */
-export function calibrationRowsToCsv(rows: readonly CalibrationRow[], options: CalibrationCsvOptions = {}): string {
-  const speedUnit = options.speedUnit ?? "rpm";
-  const accelerationUnit = options.accelerationUnit ?? "gn";
-  requireUnitOfKind("speedUnit", speedUnit, "angularSpeed");
-  requireUnitOfKind("accelerationUnit", accelerationUnit, "acceleration");
-  const write = (value: number, unit: UnitId, param: string): string => {
-    const n = Number((value / UNITS[unit].factor).toPrecision(6));
-    if (!Number.isFinite(n)) throw new CalcInputError({ param, value, expected: "a finite number", unit: "" });
-    return String(n);
-  };
-  const lines = rows.map((row, i) => `${write(row.angularSpeed, speedUnit, `rows[${i}].angularSpeed`)},${write(row.acceleration, accelerationUnit, `rows[${i}].acceleration`)}`);
-  return `speed (${UNITS[speedUnit].symbol}),reading (${UNITS[accelerationUnit].symbol})\n${lines.map((l) => `${l}\n`).join("")}`;
 }

@@ -2,7 +2,7 @@
  * A small SVG chart: tick values from d3-array (the same "nice numbers" tick algorithm d3's
  * scales use, at 1.3 KB instead of d3-scale's 11 KB with colour interpolation), any number of
  * line series and of dot series (readings, residuals), horizontal and vertical reference lines,
- * shaded bands, an optional logarithmic x axis and an optional second y axis on the right.
+ * shaded bands, and an optional logarithmic x axis.
  * Renders on the server too. It carries a text summary for screen readers; the numbers
  * themselves are in the results beside it.
  */
@@ -14,8 +14,6 @@ export interface ChartSeries {
   label: string;
   points: readonly Point[];
   className: string;
-  /** Plot against the right-hand axis. */
-  right?: boolean;
 }
 export interface ChartLine {
   value: number;
@@ -35,13 +33,12 @@ export interface ChartProps {
   summary: string;
   xLabel: string;
   yLabel: string;
-  /** Label of the right-hand axis; the axis is drawn only with `y2Domain`. */
-  y2Label?: string;
   xDomain: readonly [number, number];
   yDomain: readonly [number, number];
-  y2Domain?: readonly [number, number];
-  /** Logarithmic x axis (the domain must be above 0). */
+  /** Logarithmic x axis (the domain must be above 0); give its tick values in `xTicks`. */
   xLog?: boolean;
+  /** Tick values of the x axis, instead of d3's nice numbers. */
+  xTicks?: readonly number[];
   /** Series drawn as lines. */
   series?: readonly ChartSeries[];
   /** Series drawn as dots. */
@@ -62,19 +59,6 @@ function scale(domain: readonly [number, number], range: readonly [number, numbe
   return (v: number) => range[0] + ((t(v) - d0) / span) * (range[1] - range[0]);
 }
 
-/** Tick values: d3's nice numbers, or 1-2-5 steps per decade on a log axis. */
-function tickValues(domain: readonly [number, number], log: boolean, count: number): number[] {
-  if (!log) return ticks(domain[0], domain[1], count);
-  const out: number[] = [];
-  for (let e = Math.floor(Math.log10(domain[0])); e <= Math.ceil(Math.log10(domain[1])); e++) {
-    for (const m of [1, 2, 5]) {
-      const v = Number((m * 10 ** e).toPrecision(3));
-      if (v >= domain[0] * (1 - 1e-9) && v <= domain[1] * (1 + 1e-9)) out.push(v);
-    }
-  }
-  return out;
-}
-
 function tickText(value: number): string {
   const abs = Math.abs(value);
   if (abs === 0) return "0";
@@ -83,14 +67,12 @@ function tickText(value: number): string {
 }
 
 export function Chart(props: ChartProps) {
-  const { title, summary, xLabel, yLabel, y2Label, xDomain, yDomain, y2Domain, xLog = false, series = [], dots = [], hLines = [], vLines = [], hBands = [], width = 640, height = 320 } = props;
-  const m = { top: 12, right: y2Domain ? 56 : 16, bottom: 44, left: 56 };
+  const { title, summary, xLabel, yLabel, xDomain, yDomain, xLog = false, xTicks, series = [], dots = [], hLines = [], vLines = [], hBands = [], width = 640, height = 320 } = props;
+  const m = { top: 12, right: 16, bottom: 44, left: 56 };
   const x = scale(xDomain, [m.left, width - m.right], xLog);
   const y = scale(yDomain, [height - m.bottom, m.top]);
-  const y2 = y2Domain ? scale(y2Domain, [height - m.bottom, m.top]) : y;
-  const yOf = (s: ChartSeries) => (s.right ? y2 : y);
   const clipId = `clip-${title.replace(/[^a-z0-9]/gi, "").slice(0, 24)}`;
-  const path = (s: ChartSeries) => s.points.map(([px, py], i) => `${i === 0 ? "M" : "L"}${x(px).toFixed(1)},${yOf(s)(py).toFixed(1)}`).join("");
+  const path = (s: ChartSeries) => s.points.map(([px, py], i) => `${i === 0 ? "M" : "L"}${x(px).toFixed(1)},${y(py).toFixed(1)}`).join("");
   const plotW = width - m.left - m.right;
   const bottom = height - m.bottom;
   const legend = [...hBands, ...series, ...dots.map((d) => ({ ...d, className: `${d.className} swatch-dot` })), ...hLines, ...vLines];
@@ -109,18 +91,13 @@ export function Chart(props: ChartProps) {
           })}
         </g>
         <g class="chart-grid" aria-hidden="true">
-          {tickValues(yDomain, false, 6).map((t) => (
+          {ticks(yDomain[0], yDomain[1], 6).map((t) => (
             <g key={`y${t}`}>
               <line x1={m.left} x2={width - m.right} y1={y(t)} y2={y(t)} />
               <text x={m.left - 6} y={y(t)} dy="0.32em" text-anchor="end">{tickText(t)}</text>
             </g>
           ))}
-          {y2Domain
-            ? tickValues(y2Domain, false, 6).map((t) => (
-                <text key={`r${t}`} x={width - m.right + 6} y={y2(t)} dy="0.32em">{tickText(t)}</text>
-              ))
-            : null}
-          {tickValues(xDomain, xLog, 6).map((t) => (
+          {(xTicks ?? ticks(xDomain[0], xDomain[1], 6)).map((t) => (
             <g key={`x${t}`}>
               <line x1={x(t)} x2={x(t)} y1={m.top} y2={bottom} />
               <text x={x(t)} y={bottom + 16} text-anchor="middle">{tickText(t)}</text>
@@ -128,9 +105,6 @@ export function Chart(props: ChartProps) {
           ))}
           <text class="chart-axis-label" x={(m.left + width - m.right) / 2} y={height - 6} text-anchor="middle">{xLabel}</text>
           <text class="chart-axis-label" transform={`translate(14 ${(m.top + bottom) / 2}) rotate(-90)`} text-anchor="middle">{yLabel}</text>
-          {y2Domain && y2Label ? (
-            <text class="chart-axis-label" transform={`translate(${width - 8} ${(m.top + bottom) / 2}) rotate(90)`} text-anchor="middle">{y2Label}</text>
-          ) : null}
         </g>
         <g clip-path={`url(#${clipId})`} aria-hidden="true">
           {hLines.map((l) => (
@@ -145,7 +119,7 @@ export function Chart(props: ChartProps) {
           {dots.map((s) => (
             <g key={s.label} class={s.className}>
               {s.points.map(([px, py], i) => (
-                <circle key={i} cx={x(px).toFixed(1)} cy={yOf(s)(py).toFixed(1)} r="5" />
+                <circle key={i} cx={x(px).toFixed(1)} cy={y(py).toFixed(1)} r="5" />
               ))}
             </g>
           ))}

@@ -137,10 +137,6 @@ class Computed<T> extends Signal<T> implements Observer {
     return value;
   }
 
-  override set value(_: T) {
-    throw new TypeError("a computed value cannot be written");
-  }
-
   override peek(): T {
     if (this.dirty) {
       this.current = tracked(this, this.fn);

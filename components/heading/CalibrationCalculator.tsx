@@ -38,6 +38,7 @@ function DataField({ model, id }: { model: CalibrationModel; id: string }) {
     const input = event.currentTarget as HTMLInputElement;
     const file = input.files?.[0];
     if (!file) return;
+    void model.loadTextReader();
     if (file.size > MAX_FILE_BYTES) {
       model.fileError.value = `That file is ${formatNumber(file.size / 1e6)} MB; this page reads files up to 1 MB.`;
       return;
@@ -63,6 +64,7 @@ function DataField({ model, id }: { model: CalibrationModel; id: string }) {
           value={model.text.value}
           aria-invalid={message ? "true" : undefined}
           aria-describedby={`${id}-data-help${message ? ` ${id}-data-error` : ""}`}
+          onFocus={() => void model.loadTextReader()}
           onInput={(event) => (model.text.value = (event.currentTarget as HTMLTextAreaElement).value)}
         />
         <p class="field-help" id={`${id}-data-help`}>Commas, semicolons, tabs or spaces; a header line may name the units; # starts a comment.</p>

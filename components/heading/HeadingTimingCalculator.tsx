@@ -118,6 +118,18 @@ function SmoothingResults({ model, id }: { model: TimingModel; id: string }) {
   );
 }
 
+/** Ticks of a log axis: 1, 2 and 5 in each decade of the domain. */
+function decadeTicks(low: number, high: number): number[] {
+  const out: number[] = [];
+  for (let e = Math.floor(Math.log10(low)); e <= Math.ceil(Math.log10(high)); e++) {
+    for (const m of [1, 2, 5]) {
+      const v = Number((m * 10 ** e).toPrecision(3));
+      if (v >= low * (1 - 1e-9) && v <= high * (1 + 1e-9)) out.push(v);
+    }
+  }
+  return out;
+}
+
 function TradeoffChart({ model }: { model: TimingModel }) {
   const { tradeoff } = model.smoothingOutcome.value;
   const values = model.smoothing.values.value;
@@ -125,23 +137,29 @@ function TradeoffChart({ model }: { model: TimingModel }) {
   const error = tradeoff.map((f) => [f.smoothingFactor, fromSI(f.headingErrorAfterSpinUp, "deg")] as const);
   const noise = tradeoff.map((f) => [f.smoothingFactor, f.noiseFactor * 100] as const);
   const top = Math.max(...error.map(([, y]) => y)) * 1.05 || 1;
+  const axis = { xLog: true, xTicks: decadeTicks(tradeoff[0]!.smoothingFactor, 1), xDomain: [tradeoff[0]!.smoothingFactor, 1] as const, xLabel: "Smoothing factor α (log scale)", height: 240 };
+  const chosen = [{ value: values.smoothingFactor, label: "Chosen α", className: "plot-marker plot-dashed" }];
   return (
-    <Chart
-      title="Smoothing trade-off"
-      summary={`A smaller α leaves less noise but a larger heading error after the spin-up: from ${deg(tradeoff[0]!.headingErrorAfterSpinUp)} at α = ${formatNumber(tradeoff[0]!.smoothingFactor)} to ${deg(tradeoff[tradeoff.length - 1]!.headingErrorAfterSpinUp)} at α = 1.`}
-      xLabel="Smoothing factor α (log scale)"
-      yLabel="Error after spin-up (°)"
-      y2Label="Noise left (%)"
-      xLog
-      xDomain={[tradeoff[0]!.smoothingFactor, 1]}
-      yDomain={[0, top]}
-      y2Domain={[0, 105]}
-      series={[
-        { label: "Heading error after the spin-up (left axis)", points: error, className: "plot-curve" },
-        { label: "Noise left after the average (right axis)", points: noise, className: "plot-curve-2 plot-dashed", right: true },
-      ]}
-      vLines={[{ value: values.smoothingFactor, label: "Chosen α", className: "plot-marker plot-dashed" }]}
-    />
+    <>
+      <Chart
+        {...axis}
+        title="Smoothing trade-off: heading error"
+        summary={`A smaller α leaves a larger heading error after the spin-up: from ${deg(tradeoff[0]!.headingErrorAfterSpinUp)} at α = ${formatNumber(tradeoff[0]!.smoothingFactor)} to ${deg(tradeoff[tradeoff.length - 1]!.headingErrorAfterSpinUp)} at α = 1.`}
+        yLabel="Error after spin-up (°)"
+        yDomain={[0, top]}
+        series={[{ label: "Heading error after the spin-up", points: error, className: "plot-curve" }]}
+        vLines={chosen}
+      />
+      <Chart
+        {...axis}
+        title="Smoothing trade-off: noise left"
+        summary={`A smaller α leaves less of the sensor noise: ${formatNumber(noise[0]![1])} % at α = ${formatNumber(tradeoff[0]!.smoothingFactor)}, 100 % at α = 1.`}
+        yLabel="Noise left (%)"
+        yDomain={[0, 105]}
+        series={[{ label: "Noise left after the average", points: noise, className: "plot-curve-2" }]}
+        vLines={chosen}
+      />
+    </>
   );
 }
 

@@ -3,6 +3,8 @@
  * the units bare numbers are read in, the fit settings; the rows read from the text, the fit of
  * a = r·ω² + b and its curves, and the page link. The rows travel in the link in the versioned
  * compact form of calc/calibration.ts; the text box is rebuilt from them when a link is opened.
+ * Text the model wrote itself (the demo, a link's rows) comes with its reading, so the text reader
+ * (calc/csv.ts) loads only when someone edits the text or picks another unit for bare numbers.
  * No DOM.
  */
 import { computed, signal } from "../calc-ui/reactive.ts";
@@ -15,7 +17,8 @@ import {
   encodeCalibrationRows,
   fitCalibration,
 } from "../../calc/calibration.ts";
-import { calibrationRowsToCsv, parseCalibrationCsv } from "../../calc/csv.ts";
+import { calibrationRowsToCsv, readingOfWrittenRows } from "../../calc/calibration-text.ts";
+import type { CalibrationCsv, parseCalibrationCsv } from "../../calc/csv.ts";
 import { CalcInputError } from "../../calc/errors.ts";
 import { quantityToText, type UnitId, type UnitSystem } from "../../calc/units.ts";
 import { createFieldsModel, fieldMessage } from "../calc-ui/fields.ts";
@@ -41,17 +44,50 @@ const DRIFT_ANCHOR = "drift-calculator";
 /** The text the box starts with: the chapter's invented demo readings. */
 export const DEMO_TEXT = `# Invented demo readings, not measured: reference speed and radial reading\n${calibrationRowsToCsv(demoCalibrationRows())}`;
 
+/** The text reader, `parseCalibrationCsv`. */
+export type TextReader = typeof parseCalibrationCsv;
+
+/** Loads the text reader on first use. */
+const loadReader = (): Promise<TextReader> => import("../../calc/csv.ts").then((m) => m.parseCalibrationCsv);
+
 const LABELS = Object.fromEntries(Object.entries(calibrationFitInputs).map(([k, s]) => [k, s.label]));
 
-export function createCalibrationModel(system: UnitSystem = "metric") {
+/**
+ * @param system the unit system the fields start in
+ * @param reader the text reader, when the caller has it already (the server, tests); otherwise it
+ * loads the first time the text differs from what the model wrote
+ */
+export function createCalibrationModel(system: UnitSystem = "metric", reader?: TextReader) {
   const fields = createFieldsModel(calibrationFitInputs, system);
   const text = signal(DEMO_TEXT);
   const speedUnit = signal<SpeedUnitKey>("rpm");
   const accelerationUnit = signal<AccelerationUnitKey>("g");
   /** A problem reading a file (too large, unreadable). */
   const fileError = signal<string | null>(null);
+  /** Text this model wrote, with its units for bare numbers and the reading the reader would give. */
+  const written = signal({ text: DEMO_TEXT, speedUnit: speedUnit.value, accelerationUnit: accelerationUnit.value, reading: readingOfWrittenRows(demoCalibrationRows(), {}, 2) });
+  const readText = signal<TextReader | null>(reader ?? null);
+  let loading: Promise<void> | null = null;
+  /** Loads the reader (once); resolves when `parsed` reads the current text. */
+  function loadTextReader(): Promise<void> {
+    loading ??= loadReader().then((read) => {
+      readText.value = read;
+    });
+    return loading;
+  }
 
-  const parsed = computed(() => parseCalibrationCsv(text.value, { speedUnit: SPEED_UNITS[speedUnit.value], accelerationUnit: ACCELERATION_UNITS[accelerationUnit.value] }));
+  let last: CalibrationCsv | null = null;
+  const parsed = computed(() => {
+    const own = written.value;
+    if (text.value === own.text && speedUnit.value === own.speedUnit && accelerationUnit.value === own.accelerationUnit) return (last = own.reading);
+    const read = readText.value;
+    if (!read) {
+      // The reader arrives in a moment and this recomputes; until then the last reading stands.
+      void loadTextReader();
+      return last ?? own.reading;
+    }
+    return (last = read(text.value, { speedUnit: SPEED_UNITS[speedUnit.value], accelerationUnit: ACCELERATION_UNITS[accelerationUnit.value] }));
+  });
 
   /**
    * The rows as the link carries them (first 500, six significant figures), read back: the fit
@@ -114,7 +150,9 @@ export function createCalibrationModel(system: UnitSystem = "metric") {
       for (const p of decoded.problems) {
         notices.push(p.piece === 0 ? `The link's readings: ${p.reason}.` : `The link's reading ${p.piece} ("${p.text}"): ${p.reason}; it was skipped.`);
       }
-      text.value = calibrationRowsToCsv(decoded.rows);
+      const linkText = calibrationRowsToCsv(decoded.rows);
+      written.value = { text: linkText, speedUnit: speedUnit.value, accelerationUnit: accelerationUnit.value, reading: readingOfWrittenRows(decoded.rows) };
+      text.value = linkText;
     }
     fields.notices.value = notices;
   }
@@ -126,7 +164,7 @@ export function createCalibrationModel(system: UnitSystem = "metric") {
     return encodeState(calibrationFitInputs, texts, fields.system.value, "", existing, extra).replace(/%3A/gi, ":").replace(/%2C/gi, ",");
   }
 
-  return { fields, text, speedUnit, accelerationUnit, fileError, parsed, data, outcome, handoff, applyQuery, queryFor };
+  return { fields, text, speedUnit, accelerationUnit, fileError, parsed, data, outcome, handoff, applyQuery, queryFor, loadTextReader };
 }
 
 export type CalibrationModel = ReturnType<typeof createCalibrationModel>;

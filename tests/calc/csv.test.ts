@@ -1,7 +1,8 @@
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
 import { CalcInputError, isSourceKey, rpmToRadPerSecond, STANDARD_GRAVITY } from "#calc";
-import { calibrationRowsToCsv, parseCalibrationCsv } from "../../calc/csv.ts";
+import { parseCalibrationCsv } from "../../calc/csv.ts";
+import { calibrationRowsToCsv, readingOfWrittenRows } from "../../calc/calibration-text.ts";
 import { readFileSync } from "node:fs";
 
 const rpm = rpmToRadPerSecond;
@@ -181,6 +182,18 @@ describe("writing rows back as text", () => {
 
   it("refuses a unit of the wrong kind by name", () => {
     expect(() => calibrationRowsToCsv([], { speedUnit: "mm" })).toThrow(CalcInputError);
+    expect(() => readingOfWrittenRows([], { accelerationUnit: "rpm" })).toThrow(CalcInputError);
+  });
+
+  it("knows, without reading it, exactly what the reader makes of the text it wrote (fast-check)", () => {
+    const row = fc.record({ angularSpeed: fc.double({ min: 0, max: 5000, noNaN: true }), acceleration: fc.double({ min: -1e4, max: 1e5, noNaN: true }) });
+    const units = fc.constantFrom(["rpm", "gn"], ["rps", "m/s2"], ["rad/s", "ft/s2"]) as fc.Arbitrary<["rpm" | "rps" | "rad/s", "gn" | "m/s2" | "ft/s2"]>;
+    fc.assert(
+      fc.property(fc.array(row, { maxLength: 30 }), units, fc.nat({ max: 3 }), (rows, [speedUnit, accelerationUnit], comments) => {
+        const text = "# a comment\n".repeat(comments) + calibrationRowsToCsv(rows, { speedUnit, accelerationUnit });
+        expect(readingOfWrittenRows(rows, { speedUnit, accelerationUnit }, comments + 1)).toEqual(parseCalibrationCsv(text));
+      }),
+    );
   });
 });
 

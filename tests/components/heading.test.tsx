@@ -10,6 +10,7 @@ import { STANDARD_GRAVITY } from "../../calc/constants.ts";
 import { createDriftModel } from "../../components/heading/drift-model.ts";
 import { createTimingModel } from "../../components/heading/timing-model.ts";
 import { createCalibrationModel, DATA_KEY, DEMO_TEXT, DRIFT_KEYS } from "../../components/heading/calibration-model.ts";
+import { parseCalibrationCsv } from "../../calc/csv.ts";
 import HeadingDriftCalculator from "../../components/heading/HeadingDriftCalculator.tsx";
 import HeadingTimingCalculator from "../../components/heading/HeadingTimingCalculator.tsx";
 import CalibrationCalculator from "../../components/heading/CalibrationCalculator.tsx";
@@ -103,7 +104,7 @@ describe("timing and smoothing model", () => {
 
 describe("calibration model", () => {
   it("fits the invented demo readings and flags the knock at 2000 rpm on line 10", () => {
-    const model = createCalibrationModel();
+    const model = createCalibrationModel("metric", parseCalibrationCsv);
     expect(model.text.value).toBe(DEMO_TEXT);
     const fit = model.outcome.value.fit!;
     expect(fit.spikes.flagged).toEqual([7]);
@@ -112,8 +113,20 @@ describe("calibration model", () => {
     expect(fit.radius * 1000).toBeCloseTo(12.703056937531846, 9); // pinned in tests/calc/calibration.test.ts
   });
 
-  it("lists a malformed line by number and reason, and fits the rest", () => {
+  it("shows text it wrote itself without its reader, and loads the reader on the first edit", async () => {
     const model = createCalibrationModel();
+    // the demo and a link's rows come with their reading: the same the reader gives
+    expect(model.parsed.value).toEqual(parseCalibrationCsv(DEMO_TEXT));
+    const before = model.outcome.value.fit!.radius;
+    model.text.value = "rpm,g\n600,5.4\n1200,20.6\n1800,46.1\n";
+    expect(model.outcome.value.fit!.radius).toBe(before); // the last reading stands for a moment
+    await model.loadTextReader();
+    expect(model.parsed.value.rows.map((r) => r.line)).toEqual([2, 3, 4]);
+    expect(model.outcome.value.fit!.count).toBe(3);
+  });
+
+  it("lists a malformed line by number and reason, and fits the rest", () => {
+    const model = createCalibrationModel("metric", parseCalibrationCsv);
     model.text.value = "rpm,g\n600,5.4\nsix hundred,7\n1200,20.6\n1800,46.1\n";
     expect(model.parsed.value.problems.map((p) => p.line)).toEqual([3]);
     expect(model.parsed.value.problems[0]!.reason).toContain("speed");
@@ -121,17 +134,17 @@ describe("calibration model", () => {
   });
 
   it("says how many readings the fit needs when there are too few", () => {
-    const model = createCalibrationModel();
+    const model = createCalibrationModel("metric", parseCalibrationCsv);
     model.text.value = "1200,20\n1800,46\n";
     expect(model.outcome.value.error).toEqual({ field: "rows", message: "The fit needs at least 3 readings at different speeds; the text gives 2 usable." });
   });
 
   it("writes the rows into a readable, versioned link and reads back exactly the same fit", () => {
-    const model = createCalibrationModel();
+    const model = createCalibrationModel("metric", parseCalibrationCsv);
     const query = model.queryFor("");
     expect(query).toContain("d=v1:600:5.37,800:9.18,");
     expect(query).toMatch(/^v=1&/);
-    const again = createCalibrationModel();
+    const again = createCalibrationModel("metric", parseCalibrationCsv);
     again.text.value = "";
     again.applyQuery(`?${query}`);
     expect(again.fields.notices.value).toEqual([]);
@@ -140,12 +153,12 @@ describe("calibration model", () => {
   });
 
   it("explains a malformed or foreign link and never throws", () => {
-    const model = createCalibrationModel();
+    const model = createCalibrationModel("metric", parseCalibrationCsv);
     model.applyQuery(`?v=1&${DATA_KEY}=v9:1:2&su=furlongs`);
     expect(model.fields.notices.value.join(" ")).toContain("unknown version 9");
     expect(model.fields.notices.value.join(" ")).toContain("bare speeds");
     expect(model.outcome.value.fit).toBeNull();
-    const other = createCalibrationModel();
+    const other = createCalibrationModel("metric", parseCalibrationCsv);
     other.applyQuery(`?${DATA_KEY}=${encodeURIComponent("v1:600:5.37,abc,1200:20.6,1800:46.3,<b>")}`);
     expect(other.fields.notices.value.some((n) => n.includes('reading 2 ("abc")'))).toBe(true);
     expect(other.outcome.value.fit!.count).toBe(3);
@@ -154,7 +167,7 @@ describe("calibration model", () => {
   it("hands the fitted radius and offset to the drift page under the keys that page reads", () => {
     expect(DRIFT_KEYS.assumedRadius).toBe(headingDriftInputs.assumedRadius.urlKey);
     expect(DRIFT_KEYS.biasCorrection).toBe(headingDriftInputs.biasCorrection.urlKey);
-    const model = createCalibrationModel();
+    const model = createCalibrationModel("metric", parseCalibrationCsv);
     const link = new URL(model.handoff.value!, "https://example.org/");
     expect(link.pathname).toBe("/chapters/heading-drift/");
     expect(link.searchParams.get("ra")).toBe("12.7031mm");
@@ -163,7 +176,7 @@ describe("calibration model", () => {
   });
 
   it("hands over in inches when the page is in US units", () => {
-    const model = createCalibrationModel();
+    const model = createCalibrationModel("metric", parseCalibrationCsv);
     model.fields.setSystem("us");
     const link = new URL(model.handoff.value!, "https://example.org/");
     expect(link.searchParams.get("u")).toBe("us");
@@ -171,7 +184,7 @@ describe("calibration model", () => {
   });
 
   it("reads bare numbers in the units chosen, and keeps those in the link", () => {
-    const model = createCalibrationModel();
+    const model = createCalibrationModel("metric", parseCalibrationCsv);
     model.speedUnit.value = "rad/s";
     model.accelerationUnit.value = "m/s2";
     model.text.value = "100,127\n200,508\n300,1143\n";
