@@ -51,12 +51,12 @@ export interface ChartProps {
   height?: number;
 }
 
-/** A map from a domain to a pixel range, linear or in log10. */
+/** A map from a domain to a pixel range, linear or in log10, to 0.1 px (finer is invisible and only bloats the markup). */
 function scale(domain: readonly [number, number], range: readonly [number, number], log = false) {
   const t = log ? Math.log10 : (v: number) => v;
   const d0 = t(domain[0]);
   const span = t(domain[1]) - d0 || 1;
-  return (v: number) => range[0] + ((t(v) - d0) / span) * (range[1] - range[0]);
+  return (v: number) => Math.round((range[0] + ((t(v) - d0) / span) * (range[1] - range[0])) * 10) / 10;
 }
 
 function tickText(value: number): string {
