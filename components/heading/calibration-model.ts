@@ -7,7 +7,7 @@
  * (calc/csv.ts) loads only when someone edits the text or picks another unit for bare numbers.
  * No DOM.
  */
-import { computed, signal } from "../calc-ui/reactive.ts";
+import { batch, computed, signal } from "../calc-ui/reactive.ts";
 import {
   CALIBRATION_ROWS_MAX,
   calibrationCurve,
@@ -41,8 +41,9 @@ export const DRIFT_PAGE = "chapters/heading-drift/";
 export const DRIFT_KEYS = { assumedRadius: "ra", biasCorrection: "bh" } as const;
 const DRIFT_ANCHOR = "drift-calculator";
 
-/** The text the box starts with: the chapter's invented demo readings. */
-export const DEMO_TEXT = `# Invented demo readings, not measured: reference speed and radial reading\n${calibrationRowsToCsv(demoCalibrationRows())}`;
+const DEMO_ROWS = demoCalibrationRows();
+/** The text the box starts with: the chapter's invented demo readings (a comment line, then the rows). */
+export const DEMO_TEXT = `# Invented demo readings, not measured: reference speed and radial reading\n${calibrationRowsToCsv(DEMO_ROWS)}`;
 
 /** The text reader, `parseCalibrationCsv`. */
 export type TextReader = typeof parseCalibrationCsv;
@@ -65,7 +66,7 @@ export function createCalibrationModel(system: UnitSystem = "metric", reader?: T
   /** A problem reading a file (too large, unreadable). */
   const fileError = signal<string | null>(null);
   /** Text this model wrote, with its units for bare numbers and the reading the reader would give. */
-  const written = signal({ text: DEMO_TEXT, speedUnit: speedUnit.value, accelerationUnit: accelerationUnit.value, reading: readingOfWrittenRows(demoCalibrationRows(), {}, 2) });
+  const written = signal({ text: DEMO_TEXT, speedUnit: speedUnit.value, accelerationUnit: accelerationUnit.value, reading: readingOfWrittenRows(DEMO_ROWS, {}, 2) });
   const readText = signal<TextReader | null>(reader ?? null);
   let loading: Promise<void> | null = null;
   /** Loads the reader (once); resolves when `parsed` reads the current text. */
@@ -151,8 +152,10 @@ export function createCalibrationModel(system: UnitSystem = "metric", reader?: T
         notices.push(p.piece === 0 ? `The link's readings: ${p.reason}.` : `The link's reading ${p.piece} ("${p.text}"): ${p.reason}; it was skipped.`);
       }
       const linkText = calibrationRowsToCsv(decoded.rows);
-      written.value = { text: linkText, speedUnit: speedUnit.value, accelerationUnit: accelerationUnit.value, reading: readingOfWrittenRows(decoded.rows) };
-      text.value = linkText;
+      batch(() => {
+        written.value = { text: linkText, speedUnit: speedUnit.value, accelerationUnit: accelerationUnit.value, reading: readingOfWrittenRows(decoded.rows) };
+        text.value = linkText;
+      });
     }
     fields.notices.value = notices;
   }
