@@ -72,7 +72,7 @@ export function Chart(props: ChartProps) {
   const x = scale(xDomain, [m.left, width - m.right], xLog);
   const y = scale(yDomain, [height - m.bottom, m.top]);
   const clipId = `clip-${title.replace(/[^a-z0-9]/gi, "").slice(0, 24)}`;
-  const path = (s: ChartSeries) => s.points.map(([px, py], i) => `${i === 0 ? "M" : "L"}${x(px).toFixed(1)},${y(py).toFixed(1)}`).join("");
+  const path = (s: ChartSeries) => s.points.map(([px, py], i) => `${i === 0 ? "M" : "L"}${x(px)},${y(py)}`).join("");
   const plotW = width - m.left - m.right;
   const bottom = height - m.bottom;
   const legend = [...hBands, ...series, ...dots.map((d) => ({ ...d, className: `${d.className} swatch-dot` })), ...hLines, ...vLines];
@@ -119,7 +119,7 @@ export function Chart(props: ChartProps) {
           {dots.map((s) => (
             <g key={s.label} class={s.className}>
               {s.points.map(([px, py], i) => (
-                <circle key={i} cx={x(px).toFixed(1)} cy={y(py).toFixed(1)} r="5" />
+                <circle key={i} cx={x(px)} cy={y(py)} r="5" />
               ))}
             </g>
           ))}
