@@ -3,28 +3,34 @@
  * calculator's own keys (and only those) after each change. Browser-only; call from an effect.
  */
 import { effect } from "./reactive.ts";
-import type { FieldsModel } from "./fields.ts";
-import type { InputSpecs } from "../../calc/inputs.ts";
 
-/** Starts syncing; returns the function that stops it. */
-export function syncWithUrl<S extends InputSpecs>(fields: FieldsModel<S>): () => void {
-  fields.applyQuery(window.location.search);
+/** What a calculator's state needs to live in a link: read a query string, write one. */
+export interface UrlState {
+  /** Applies a query string (a permalink). */
+  applyQuery(search: string): void;
+  /** The query string for the current state, keeping the keys of `existing` that are not its own. */
+  queryFor(existing: string): string;
+}
+
+/**
+ * Starts syncing; returns the function that stops it. The effect re-runs whenever a signal that
+ * `queryFor` reads changes, so whatever the state's link carries is what triggers a rewrite.
+ */
+export function syncWithUrl(state: UrlState): () => void {
+  state.applyQuery(window.location.search);
   let first = true;
   return effect(() => {
-    // Read every text and the system so the effect re-runs on any change.
-    for (const text of Object.values(fields.texts)) void text.value;
-    void fields.system.value;
+    const query = state.queryFor(window.location.search);
     if (first) {
       first = false;
       return;
     }
-    const query = fields.queryFor(window.location.search);
     window.history.replaceState(window.history.state, "", `${window.location.pathname}?${query}${window.location.hash}`);
   });
 }
 
 /** The full link to this page with the calculator's current state. */
-export function linkFor<S extends InputSpecs>(fields: FieldsModel<S>, anchor: string): string {
+export function linkFor(state: UrlState, anchor: string): string {
   const { origin, pathname, search } = window.location;
-  return `${origin}${pathname}?${fields.queryFor(search)}#${anchor}`;
+  return `${origin}${pathname}?${state.queryFor(search)}#${anchor}`;
 }

@@ -44,6 +44,7 @@ import { fieldUnit, readField, type FieldReading, type InputSpec } from "../../c
 import { fromSI, parseQuantity, UNITS, type UnitSystem } from "../../calc/units.ts";
 import { createFieldsModel, fieldMessage, type FieldsModel } from "../calc-ui/fields.ts";
 import { decodeState, encodeState, MAX_VALUE_LENGTH } from "../calc-ui/permalink.ts";
+import type { UrlState } from "../calc-ui/url-sync.ts";
 
 export type Specs = typeof drivetrainInputs;
 export type Name = DrivetrainParameter;
@@ -519,25 +520,8 @@ export function createSpinUpModel(system: UnitSystem = "metric") {
     return `v=1&${params.toString()}`.replace(/%2F/g, "/");
   }
 
-  /** Every signal the URL depends on, for `syncWithUrl`. */
-  const urlState = computed(() => [
-    driveType.value,
-    variants.value.map((v) => v.changed.value.map((n) => v.fields.texts[n].value).join("|") + v.changed.value.join(",")).join(";"),
-    sweepOn.value,
-    sweepParameter.value,
-    sweepFrom.value,
-    sweepTo.value,
-    sweepPoints.value,
-  ]);
-
-  /** The fields model as `syncWithUrl` and `linkFor` take it, covering everything above. */
-  const link: FieldsModel<Specs> = {
-    ...fields,
-    texts: { ...fields.texts, urlState } as unknown as FieldsModel<Specs>["texts"],
-    setSystem,
-    applyQuery,
-    queryFor,
-  };
+  /** The whole calculator's state as a link, for `syncWithUrl` and `linkFor`. */
+  const link: UrlState = { applyQuery, queryFor };
 
   return {
     fields,

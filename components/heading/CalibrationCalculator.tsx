@@ -5,11 +5,11 @@
  * link that carries the fitted radius and offset into the drift budget.
  */
 import { useEffect, useMemo } from "preact/hooks";
-import { effect } from "../calc-ui/reactive.ts";
 import type { CalibrationCurvePoint, ConfidenceInterval } from "../../calc/calibration.ts";
 import { formatNumber, fromSI, radPerSecondToRpm, type UnitSystem } from "../../calc/units.ts";
 import { Toolbar } from "../calc-ui/Toolbar.tsx";
 import { Notices } from "../calc-ui/Notices.tsx";
+import { linkFor, syncWithUrl } from "../calc-ui/url-sync.ts";
 import { QuantityField } from "../calc-ui/QuantityField.tsx";
 import { ACCELERATION_UNITS, createCalibrationModel, SPEED_UNITS, type CalibrationModel } from "./calibration-model.ts";
 import { inSystem, plain } from "./format.ts";
@@ -263,19 +263,7 @@ function Charts({ model }: { model: CalibrationModel }) {
 
 export default function CalibrationCalculator({ id = "calibration-calculator" }: CalibrationCalculatorProps) {
   const model = useMemo(() => createCalibrationModel(), []);
-  useEffect(() => {
-    model.applyQuery(window.location.search);
-    let first = true;
-    return effect(() => {
-      const query = model.queryFor(window.location.search);
-      if (first) {
-        first = false;
-        return;
-      }
-      window.history.replaceState(window.history.state, "", `${window.location.pathname}?${query}${window.location.hash}`);
-    });
-  }, [model]);
-  const link = () => `${window.location.origin}${window.location.pathname}?${model.queryFor(window.location.search)}#${id}`;
+  useEffect(() => syncWithUrl(model), [model]);
   return (
     <section class="calc" id={id} aria-label="Calibration fit calculator">
       <Notices notices={model.fields.notices} />
@@ -285,7 +273,7 @@ export default function CalibrationCalculator({ id = "calibration-calculator" }:
       </form>
       <Results model={model} id={id} />
       <Charts model={model} />
-      <Toolbar idPrefix={id} system={model.fields.system} onSystem={model.fields.setSystem} link={link} />
+      <Toolbar idPrefix={id} system={model.fields.system} onSystem={model.fields.setSystem} link={() => linkFor(model, id)} />
     </section>
   );
 }

@@ -62,8 +62,8 @@ export function choiceLabel(spec: ChoiceSpec, value: string): string {
 }
 
 /**
- * The fields model extended with choices, as `syncWithUrl` and `linkFor` take it: the choices
- * join the signals that trigger a URL rewrite, and are read from and written to the link.
+ * The fields model extended with choices, as `syncWithUrl` and `linkFor` take it: the choices are
+ * read from and written to the link along with the fields.
  * `apply` runs between reading the choices and reading the fields (to fill fields from a choice).
  */
 export function withChoices<S extends InputSpecs, C extends ChoiceSpecs>(
@@ -77,7 +77,6 @@ export function withChoices<S extends InputSpecs, C extends ChoiceSpecs>(
     (() => Object.fromEntries(Object.entries(specs).map(([name, spec]) => [spec.urlKey, choices[name as keyof C].value])));
   return {
     ...fields,
-    texts: { ...fields.texts, ...choices },
     applyQuery(search: string) {
       const read = readChoices(specs, search);
       for (const [name, value] of Object.entries(read.values)) choices[name as keyof C].value = value as string;

@@ -12,7 +12,8 @@ import { formatNumber, formatQuantity, quantityToText, type QuantityKind, type U
 import { QuantityField } from "../calc-ui/QuantityField.tsx";
 import { Toolbar } from "../calc-ui/Toolbar.tsx";
 import { Notices } from "../calc-ui/Notices.tsx";
-import { createMassModel, syncMassWithUrl, type MassError, type MassModel, type ModeKey, type Snapshot } from "./model.ts";
+import { syncWithUrl } from "../calc-ui/url-sync.ts";
+import { createMassModel, type MassError, type MassModel, type ModeKey, type Snapshot } from "./model.ts";
 import { needsGivenMass, partFields, PART_INPUTS, type PartModel } from "./parts.ts";
 import { TopView } from "./TopView.tsx";
 
@@ -160,7 +161,7 @@ function PartCard({ model, part, index, id, error, q }: { model: MassModel; part
 
 export default function MassLayoutCalculator({ id = "mass-calculator", layout = "" }: MassLayoutCalculatorProps) {
   const model = useMemo(() => createMassModel("metric", layout), []);
-  useEffect(() => syncMassWithUrl(model), [model]);
+  useEffect(() => syncWithUrl(model), [model]);
   const { fields } = model;
   const system: UnitSystem = fields.system.value;
   const o = model.outcome.value;

@@ -4,7 +4,7 @@
  * counterweight plan and the top-view geometry (or the error, mapped to its part and field) out.
  * List edits, mirroring, applying and undoing a counterweight, and the permalink. No DOM.
  */
-import { batch, computed, effect, signal } from "../calc-ui/reactive.ts";
+import { batch, computed, signal } from "../calc-ui/reactive.ts";
 import { CalcInputError } from "../../calc/errors.ts";
 import { readField, type InputSpec } from "../../calc/inputs.ts";
 import {
@@ -228,17 +228,3 @@ export function createMassModel(system: UnitSystem = "metric", layoutText = "") 
 }
 
 export type MassModel = ReturnType<typeof createMassModel>;
-
-/** Reads the page URL once, then keeps the calculator's keys in it. Browser-only; call from an effect. */
-export function syncMassWithUrl(model: MassModel): () => void {
-  model.applyQuery(window.location.search);
-  let first = true;
-  return effect(() => {
-    const query = model.queryFor(window.location.search);
-    if (first) {
-      first = false;
-      return;
-    }
-    window.history.replaceState(window.history.state, "", `${window.location.pathname}?${query}${window.location.hash}`);
-  });
-}
