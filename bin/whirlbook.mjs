@@ -55,13 +55,23 @@ try {
 }
 const reading = readDesignText(text);
 if (!reading.ok) {
-  fail(`${file} is not a design Whirlbook can read:\n${describeProblems(reading.problems).map((l) => `  ${l}`).join("\n")}`);
+  fail(
+    `${file} is not a design Whirlbook can read:\n${describeProblems(reading.problems)
+      .map((l) => `  ${l}`)
+      .join("\n")}`,
+  );
 }
 const system = units ?? reading.design.units;
 const results = runChecks(reading.design, system);
 const overall = overallStatus(results);
 if (json) {
-  console.log(JSON.stringify({ design: reading.design.name, units: system, overall, problems: reading.problems, migratedFrom: reading.migratedFrom, checks: results }, null, 2));
+  console.log(
+    JSON.stringify(
+      { design: reading.design.name, units: system, overall, problems: reading.problems, migratedFrom: reading.migratedFrom, checks: results },
+      null,
+      2,
+    ),
+  );
 } else {
   if (reading.problems.length) {
     console.log(`Read ${file} with ${reading.problems.length} problem(s); valid values were kept:`);

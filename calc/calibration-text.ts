@@ -28,7 +28,9 @@ function written(rows: readonly CalibrationRow[], options: CalibrationCsvOptions
     if (!Number.isFinite(n)) throw new CalcInputError({ param, value, expected: "a finite number", unit: "" });
     return n;
   };
-  const values = rows.map((row, i) => [round(row.angularSpeed, speedUnit, `rows[${i}].angularSpeed`), round(row.acceleration, accelerationUnit, `rows[${i}].acceleration`)] as const);
+  const values = rows.map(
+    (row, i) => [round(row.angularSpeed, speedUnit, `rows[${i}].angularSpeed`), round(row.acceleration, accelerationUnit, `rows[${i}].acceleration`)] as const,
+  );
   const header = [`speed (${UNITS[speedUnit].symbol})`, `reading (${UNITS[accelerationUnit].symbol})`];
   return { speedUnit, accelerationUnit, values, header };
 }
@@ -71,7 +73,11 @@ export function calibrationRowsToCsv(rows: readonly CalibrationRow[], options: C
 export function readingOfWrittenRows(rows: readonly CalibrationRow[], options: CalibrationCsvOptions = {}, headerLine = 1): CalibrationCsv {
   const { speedUnit, accelerationUnit, values, header } = written(rows, options);
   return {
-    rows: values.map(([w, a], i) => ({ line: headerLine + 1 + i, angularSpeed: w * UNITS[speedUnit].factor, acceleration: a * UNITS[accelerationUnit].factor })),
+    rows: values.map(([w, a], i) => ({
+      line: headerLine + 1 + i,
+      angularSpeed: w * UNITS[speedUnit].factor,
+      acceleration: a * UNITS[accelerationUnit].factor,
+    })),
     problems: [],
     separator: ",",
     decimalComma: false,

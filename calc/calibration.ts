@@ -15,8 +15,8 @@ import { fromSI, toSI } from "./units.ts";
 
 /** Lanczos coefficients (g = 7, n = 9) for ln Γ; numerical-recipes-2007 §6.1 describes the method. */
 const LANCZOS = [
-  0.99999999999980993, 676.5203681218851, -1259.1392167224028, 771.32342877765313, -176.61502916214059, 12.507343278686905,
-  -0.13857109526572012, 9.9843695780195716e-6, 1.5056327351493116e-7,
+  0.99999999999980993, 676.5203681218851, -1259.1392167224028, 771.32342877765313, -176.61502916214059, 12.507343278686905, -0.13857109526572012,
+  9.9843695780195716e-6, 1.5056327351493116e-7,
 ];
 
 /**
@@ -576,10 +576,15 @@ export function fitStraightLine({
   huberTuning?: number;
 }): StraightLineFit {
   if (!Array.isArray(x) || !Array.isArray(y) || x.length !== y.length) {
-    throw new CalcInputError({ param: "y", value: Array.isArray(y) ? y.length : String(y), expected: `as many values as x (${Array.isArray(x) ? x.length : 0})`, unit: "" });
+    throw new CalcInputError({
+      param: "y",
+      value: Array.isArray(y) ? y.length : String(y),
+      expected: `as many values as x (${Array.isArray(x) ? x.length : 0})`,
+      unit: "",
+    });
   }
-  x.forEach((v, i) => requireFinite(`x[${i}]`, v, ""));
-  y.forEach((v, i) => requireFinite(`y[${i}]`, v, ""));
+  for (const [i, v] of x.entries()) requireFinite(`x[${i}]`, v, "");
+  for (const [i, v] of y.entries()) requireFinite(`y[${i}]`, v, "");
   requireFitOptions(confidence, spikeThreshold, huberTuning);
   const distinctX = countDistinct(x);
   if (x.length < 3 || distinctX < 3) {
@@ -617,7 +622,11 @@ function fitChecked(
     const keep = x.flatMap((_, i) => (flagged.includes(i) ? [] : [i]));
     const kx = keep.map((i) => x[i]!);
     if (keep.length >= 3 && countDistinct(kx) >= 3) {
-      leastSquaresWithoutSpikes = leastSquaresLine(kx, keep.map((i) => y[i]!), confidence);
+      leastSquaresWithoutSpikes = leastSquaresLine(
+        kx,
+        keep.map((i) => y[i]!),
+        confidence,
+      );
     }
   }
   const fit: StraightLineFit = {
@@ -641,7 +650,12 @@ function fitChecked(
   };
   // Values so close together or so extreme that the sums underflow or overflow cannot be fitted.
   if (!numbersOf(fit).every(Number.isFinite)) {
-    throw new CalcInputError({ param, value: "values out of reach", expected: "values spread enough, and small enough, to fit a line in double precision", unit: "" });
+    throw new CalcInputError({
+      param,
+      value: "values out of reach",
+      expected: "values spread enough, and small enough, to fit a line in double precision",
+      unit: "",
+    });
   }
   return fit;
 }
@@ -707,7 +721,14 @@ export function fitCalibration(
   if (rows.length < 3 || distinct < 3) {
     throw new CalcInputError({ param: "rows", value: distinct, expected: "at least 3 readings at different speeds", unit: "" });
   }
-  const fit = fitChecked(speedSquared, rows.map((r) => r.acceleration), confidence, spikeThreshold, huberTuning, "rows");
+  const fit = fitChecked(
+    speedSquared,
+    rows.map((r) => r.acceleration),
+    confidence,
+    spikeThreshold,
+    huberTuning,
+    "rows",
+  );
   const chosen =
     fit.spikes.flagged.length === 0
       ? { line: fit.leastSquares, method: "least-squares" as const }
@@ -913,7 +934,11 @@ export function decodeCalibrationRows(text: string): DecodedCalibrationRows {
     version = Number(tag[1]);
     body = body.slice(tag[0].length);
     if (version !== CALIBRATION_ROWS_VERSION) {
-      return { version: null, rows: [], problems: [{ piece: 0, text: clip(tag[0]), reason: `unknown version ${version}; this reader knows v${CALIBRATION_ROWS_VERSION}` }] };
+      return {
+        version: null,
+        rows: [],
+        problems: [{ piece: 0, text: clip(tag[0]), reason: `unknown version ${version}; this reader knows v${CALIBRATION_ROWS_VERSION}` }],
+      };
     }
   } else if (body !== "") {
     problems.push({ piece: 0, text: "", reason: `no version tag; read as v${CALIBRATION_ROWS_VERSION}` });

@@ -205,7 +205,10 @@ export function runChecks(design: Design, system: UnitSystem = design.units): Ch
         rule: `Safety factor at least ${formatNumber(entry.marginalBelow)} holds, below ${formatNumber(entry.failBelow)} fails (${entry.count} × ${r.size} class ${r.propertyClass} in ${r.mode}, ISO 898-1 minimum strengths)`,
         margin: `${q(r.part.force, "force")} pull at ${q(entry.angularSpeed, "angularSpeed")}: ${q(r.stress, "stress")} per bolt, safety factor ${formatNumber(r.safetyFactor)} (${r.governs})`,
         figure: ratioFigure("Safety factor", r.safetyFactor),
-        details: [figureOf("Speed at which the bolts yield", r.speedAtYield, "angularSpeed", system), figureOf("Load on each bolt", r.forcePerBolt, "force", system)],
+        details: [
+          figureOf("Speed at which the bolts yield", r.speedAtYield, "angularSpeed", system),
+          figureOf("Load on each bolt", r.forcePerBolt, "force", system),
+        ],
       });
     } catch (error) {
       results.push(failedInput("fasteners", index, title, error));
@@ -248,8 +251,14 @@ export function runChecks(design: Design, system: UnitSystem = design.units): Ch
           r.timeToTarget !== null
             ? `Reaches it in ${q(r.timeToTarget, "time")} (90 % in ${q(r.timeTo90 ?? r.timeToTarget, "time")}); peak battery current ${q(r.peakBatteryCurrent, "current")}, battery sags to ${q(r.minBatteryVoltage, "voltage")}`
             : `Tops out at ${q(r.topSpeed, "angularSpeed")}${r.verdict === "stalled" ? " (does not move)" : ""}`,
-        figure: r.timeToTarget !== null ? figureOf("Time to target speed", r.timeToTarget, "time", system) : figureOf("Top speed reached", r.topSpeed, "angularSpeed", system),
-        details: [figureOf("Peak battery current", r.peakBatteryCurrent, "current", system), figureOf("Lowest battery voltage", r.minBatteryVoltage, "voltage", system)],
+        figure:
+          r.timeToTarget !== null
+            ? figureOf("Time to target speed", r.timeToTarget, "time", system)
+            : figureOf("Top speed reached", r.topSpeed, "angularSpeed", system),
+        details: [
+          figureOf("Peak battery current", r.peakBatteryCurrent, "current", system),
+          figureOf("Lowest battery voltage", r.minBatteryVoltage, "voltage", system),
+        ],
       });
       // At the operating (target) speed when it is reached, else at the top speed the drive gets to.
       const top = r.timeToTarget !== null ? r.atTargetSpeed : r.atTopSpeed;
@@ -292,6 +301,9 @@ export function buildSheetText(design: Design, results: readonly CheckResult[]):
   }
   const overall = overallStatus(results);
   lines.push("", `Overall: ${overall === "empty" ? "nothing to check" : overall}`);
-  lines.push("", "Safety: figures come from simplified models and typical strengths; they certify nothing. Spin up only in a rated enclosure; your event's rules and local codes come first.");
+  lines.push(
+    "",
+    "Safety: figures come from simplified models and typical strengths; they certify nothing. Spin up only in a rated enclosure; your event's rules and local codes come first.",
+  );
   return `${lines.join("\n")}\n`;
 }

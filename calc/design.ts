@@ -9,7 +9,15 @@ import { describeRange, type InputSpecs } from "./inputs.ts";
 import { accelerometerPlacementInputs } from "./rotation.ts";
 import { headingDriftInputs } from "./heading.ts";
 import { checkPart, massBalanceInputs, type LayoutPart, type MountingPoint } from "./mass.ts";
-import { fastenerCheckInputs, rimCheckInputs, FASTENER_CHOICE_DEFAULTS, RIM_CHOICE_DEFAULTS, LOADING_MODE_OPTIONS, SHEAR_PLANE_OPTIONS, RIM_SHAPE_OPTIONS } from "./loads.ts";
+import {
+  fastenerCheckInputs,
+  rimCheckInputs,
+  FASTENER_CHOICE_DEFAULTS,
+  RIM_CHOICE_DEFAULTS,
+  LOADING_MODE_OPTIONS,
+  SHEAR_PLANE_OPTIONS,
+  RIM_SHAPE_OPTIONS,
+} from "./loads.ts";
 import { THREAD_SIZE_OPTIONS, PROPERTY_CLASS_OPTIONS } from "./fasteners.ts";
 import { drivetrainInputs, DRIVE_TYPE_OPTIONS } from "./drivetrain.ts";
 import { CalcInputError } from "./errors.ts";
@@ -79,9 +87,7 @@ export interface DesignProblem {
   action: "default-used" | "item-dropped" | "section-dropped" | "not-read";
 }
 
-export type DesignReading =
-  | { ok: true; design: Design; problems: DesignProblem[]; migratedFrom: number | null }
-  | { ok: false; problems: DesignProblem[] };
+export type DesignReading = { ok: true; design: Design; problems: DesignProblem[]; migratedFrom: number | null } | { ok: false; problems: DesignProblem[] };
 
 // ---------------------------------------------------------------------------------------------
 // Numbers checked against the calculators' declarations.
@@ -95,7 +101,10 @@ function inRange(spec: InputSpecs[string]) {
   return v.pipe(
     v.number("must be a number"),
     v.finite("must be a finite number"),
-    v.check((n) => (spec.minOpen ? n > spec.min : n >= spec.min) && n <= spec.max && (!spec.integer || Number.isInteger(n)), `must be ${describeRange(spec, "metric")}`),
+    v.check(
+      (n) => (spec.minOpen ? n > spec.min : n >= spec.min) && n <= spec.max && (!spec.integer || Number.isInteger(n)),
+      `must be ${describeRange(spec, "metric")}`,
+    ),
   );
 }
 
@@ -117,7 +126,12 @@ function readNumbers<S extends InputSpecs>(specs: S, raw: unknown, path: string,
     }
     const result = v.safeParse(inRange(spec), record[name]);
     if (result.success) (out as Record<string, number>)[name] = result.output;
-    else problems.push({ path: `${path}.${name}`, message: `${result.issues[0].message} (got ${preview(record[name])}); the default was used`, action: "default-used" });
+    else
+      problems.push({
+        path: `${path}.${name}`,
+        message: `${result.issues[0].message} (got ${preview(record[name])}); the default was used`,
+        action: "default-used",
+      });
   }
   return out;
 }
@@ -129,17 +143,29 @@ function preview(value: unknown): string {
   return text.length > 40 ? `${text.slice(0, 40)}…` : text;
 }
 
-function readChoice(raw: Record<string, unknown>, key: string, options: readonly { value: string }[], fallback: string, path: string, problems: DesignProblem[]): string {
+function readChoice(
+  raw: Record<string, unknown>,
+  key: string,
+  options: readonly { value: string }[],
+  fallback: string,
+  path: string,
+  problems: DesignProblem[],
+): string {
   const value = raw[key];
   if (typeof value === "string" && options.some((o) => o.value === value)) return value;
-  problems.push({ path: `${path}.${key}`, message: `must be one of ${options.map((o) => o.value).join(", ")} (got ${preview(value)}); "${fallback}" was used`, action: "default-used" });
+  problems.push({
+    path: `${path}.${key}`,
+    message: `must be one of ${options.map((o) => o.value).join(", ")} (got ${preview(value)}); "${fallback}" was used`,
+    action: "default-used",
+  });
   return fallback;
 }
 
 function readName(raw: Record<string, unknown>, path: string, fallback: string, problems: DesignProblem[]): string {
   const result = v.safeParse(v.pipe(v.string(), v.maxLength(80)), raw.name);
   if (result.success) return result.output;
-  if (raw.name !== undefined) problems.push({ path: `${path}.name`, message: "must be text of at most 80 characters; a default name was used", action: "default-used" });
+  if (raw.name !== undefined)
+    problems.push({ path: `${path}.name`, message: "must be text of at most 80 characters; a default name was used", action: "default-used" });
   return fallback;
 }
 
@@ -187,7 +213,8 @@ function readList<T>(raw: unknown, path: string, problems: DesignProblem[], read
     try {
       out.push(readItem(item, `${path}[${index}]`));
     } catch (error) {
-      if (error instanceof ItemDropped) problems.push({ path: `${path}[${index}]${error.where}`, message: `${error.message}; the item was left out`, action: "item-dropped" });
+      if (error instanceof ItemDropped)
+        problems.push({ path: `${path}[${index}]${error.where}`, message: `${error.message}; the item was left out`, action: "item-dropped" });
       else throw error;
     }
   });
@@ -212,7 +239,8 @@ function readPart(item: unknown): LayoutPart {
   try {
     checkPart(part, "");
   } catch (error) {
-    if (error instanceof CalcInputError) throw new ItemDropped(`must be ${error.expected} (got ${preview(error.value)})`, error.param.startsWith(".") ? error.param : `.${error.param}`);
+    if (error instanceof CalcInputError)
+      throw new ItemDropped(`must be ${error.expected} (got ${preview(error.value)})`, error.param.startsWith(".") ? error.param : `.${error.param}`);
     throw error;
   }
   return part;
@@ -226,7 +254,11 @@ export type Migration = (design: Record<string, unknown>) => Record<string, unkn
 export const MIGRATIONS: Readonly<Record<number, Migration>> = {};
 
 /** Brings a raw design of an older version forward to `DESIGN_VERSION`, step by step. */
-export function migrateDesign(raw: Record<string, unknown>, migrations: Readonly<Record<number, Migration>> = MIGRATIONS, target = DESIGN_VERSION): Record<string, unknown> {
+export function migrateDesign(
+  raw: Record<string, unknown>,
+  migrations: Readonly<Record<number, Migration>> = MIGRATIONS,
+  target = DESIGN_VERSION,
+): Record<string, unknown> {
   let current = raw;
   let version = Number(current.version);
   while (version < target) {
@@ -281,17 +313,29 @@ export function readDesign(raw: unknown): DesignReading {
     return { ok: false, problems: [{ path: "", message: "is not a design: expected a JSON object", action: "not-read" }] };
   }
   if (!("format" in raw)) {
-    return { ok: false, problems: [{ path: "format", message: 'is missing: this is not a Whirlbook design file (it has no "format": "whirlbook-design")', action: "not-read" }] };
+    return {
+      ok: false,
+      problems: [{ path: "format", message: 'is missing: this is not a Whirlbook design file (it has no "format": "whirlbook-design")', action: "not-read" }],
+    };
   }
   const header = v.safeParse(headerSchema, raw);
   if (!header.success) {
     const issue = header.issues[0];
-    return { ok: false, problems: [{ path: issuePath(issue).replace(/^\./, ""), message: `${issue.message}: this is not a Whirlbook design file`, action: "not-read" }] };
+    return {
+      ok: false,
+      problems: [{ path: issuePath(issue).replace(/^\./, ""), message: `${issue.message}: this is not a Whirlbook design file`, action: "not-read" }],
+    };
   }
   if (header.output.version > DESIGN_VERSION) {
     return {
       ok: false,
-      problems: [{ path: "version", message: `is ${header.output.version}, newer than this handbook reads (${DESIGN_VERSION}); open it with a newer version of the handbook`, action: "not-read" }],
+      problems: [
+        {
+          path: "version",
+          message: `is ${header.output.version}, newer than this handbook reads (${DESIGN_VERSION}); open it with a newer version of the handbook`,
+          action: "not-read",
+        },
+      ],
     };
   }
   let record = raw as Record<string, unknown>;
@@ -302,7 +346,8 @@ export function readDesign(raw: unknown): DesignReading {
   const text = (key: string, max: number, fallback: string) => {
     const result = v.safeParse(v.pipe(v.string(), v.maxLength(max)), record[key]);
     if (result.success) return result.output;
-    if (record[key] !== undefined) problems.push({ path: key, message: `must be text of at most ${max} characters; "${fallback}" was used`, action: "default-used" });
+    if (record[key] !== undefined)
+      problems.push({ path: key, message: `must be text of at most ${max} characters; "${fallback}" was used`, action: "default-used" });
     return fallback;
   };
   const design: Design = {
@@ -376,7 +421,10 @@ export function readDesign(raw: unknown): DesignReading {
   );
   section("drivetrain", (raw) => {
     const numbers = readNumbers(drivetrainInputs, raw, "drivetrain", problems);
-    return { ...numbers, driveType: readChoice(raw as Record<string, unknown>, "driveType", DRIVE_TYPE_OPTIONS, DRIVE_TYPE_OPTIONS[0]!.value, "drivetrain", problems) };
+    return {
+      ...numbers,
+      driveType: readChoice(raw as Record<string, unknown>, "driveType", DRIVE_TYPE_OPTIONS, DRIVE_TYPE_OPTIONS[0]!.value, "drivetrain", problems),
+    };
   });
   return { ok: true, design, problems, migratedFrom };
 }

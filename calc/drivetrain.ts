@@ -807,14 +807,37 @@ function buildModel(input: DrivetrainInput, spinner: boolean): Model {
 // Dormand–Prince 5(4) tableau, error weights (b − b̂) and dense-output weights
 // (dormand-prince-1980; dense output as in hairer-norsett-wanner-1 §II.6).
 const A21 = 1 / 5;
-const A31 = 3 / 40, A32 = 9 / 40;
-const A41 = 44 / 45, A42 = -56 / 15, A43 = 32 / 9;
-const A51 = 19372 / 6561, A52 = -25360 / 2187, A53 = 64448 / 6561, A54 = -212 / 729;
-const A61 = 9017 / 3168, A62 = -355 / 33, A63 = 46732 / 5247, A64 = 49 / 176, A65 = -5103 / 18656;
-const A71 = 35 / 384, A73 = 500 / 1113, A74 = 125 / 192, A75 = -2187 / 6784, A76 = 11 / 84;
-const E1 = 71 / 57600, E3 = -71 / 16695, E4 = 71 / 1920, E5 = -17253 / 339200, E6 = 22 / 525, E7 = -1 / 40;
-const D1 = -12715105075 / 11282082432, D3 = 87487479700 / 32700410799, D4 = -10690763975 / 1880347072;
-const D5 = 701980252875 / 199316789632, D6 = -1453857185 / 822651844, D7 = 69997945 / 29380423;
+const A31 = 3 / 40,
+  A32 = 9 / 40;
+const A41 = 44 / 45,
+  A42 = -56 / 15,
+  A43 = 32 / 9;
+const A51 = 19372 / 6561,
+  A52 = -25360 / 2187,
+  A53 = 64448 / 6561,
+  A54 = -212 / 729;
+const A61 = 9017 / 3168,
+  A62 = -355 / 33,
+  A63 = 46732 / 5247,
+  A64 = 49 / 176,
+  A65 = -5103 / 18656;
+const A71 = 35 / 384,
+  A73 = 500 / 1113,
+  A74 = 125 / 192,
+  A75 = -2187 / 6784,
+  A76 = 11 / 84;
+const E1 = 71 / 57600,
+  E3 = -71 / 16695,
+  E4 = 71 / 1920,
+  E5 = -17253 / 339200,
+  E6 = 22 / 525,
+  E7 = -1 / 40;
+const D1 = -12715105075 / 11282082432,
+  D3 = 87487479700 / 32700410799,
+  D4 = -10690763975 / 1880347072;
+const D5 = 701980252875 / 199316789632,
+  D6 = -1453857185 / 822651844,
+  D7 = 69997945 / 29380423;
 
 // State vector: speeds, then the running integrals of every power flow.
 const S_SPEED = 0; // Ω, rotor or robot [rad/s]
@@ -837,7 +860,6 @@ const SPEED_FRACTIONS = [0.5, 0.9, 1] as const;
 
 const LOCKED = 0;
 const SLIPPING = 1;
-
 
 interface RawRun {
   endTime: number;
@@ -1248,7 +1270,13 @@ function findEvent(sys: SpinUpSystem, st: Dopri5, gCur: number, tolForce: number
   if (gCur > 0 !== gCur1 > 0) {
     st.prepareDense();
     const wasLimited = gCur > 0;
-    found.theta = locate((th) => sys.currentMargin(st.dense(S_MOTOR, th)), gCur, gCur1, 1, (v) => (wasLimited ? v <= 0 : v > 0));
+    found.theta = locate(
+      (th) => sys.currentMargin(st.dense(S_MOTOR, th)),
+      gCur,
+      gCur1,
+      1,
+      (v) => (wasLimited ? v <= 0 : v > 0),
+    );
     event = EVENT_CURRENT;
   }
   if (sys.spinner && sys.mode === LOCKED) {
@@ -1334,12 +1362,12 @@ function integrate(m: Model, opts: Required<SpinUpOptions>): RawRun {
       const err = st.step(sys);
       if (!(err <= 1)) {
         rejected++;
-        st.h *= Number.isFinite(err) ? Math.max(0.2, 0.9 * Math.pow(err, -0.2)) : 0.2;
+        st.h *= Number.isFinite(err) ? Math.max(0.2, 0.9 * err ** -0.2) : 0.2;
         lastRejected = true;
         continue;
       }
       accepted++;
-      let factor = err === 0 ? 10 : Math.min(10, Math.max(0.2, 0.9 * Math.pow(err, -0.2)));
+      let factor = err === 0 ? 10 : Math.min(10, Math.max(0.2, 0.9 * err ** -0.2));
       if (lastRejected) factor = Math.min(1, factor);
       lastRejected = false;
 
@@ -1351,7 +1379,13 @@ function integrate(m: Model, opts: Required<SpinUpOptions>): RawRun {
       while (nextCross < SPEED_FRACTIONS.length && st.y1[S_SPEED]! >= SPEED_FRACTIONS[nextCross]! * m.target) {
         const level = SPEED_FRACTIONS[nextCross]! * m.target;
         st.prepareDense();
-        const th = locate((s) => st.dense(S_SPEED, s) - level, st.y[S_SPEED]! - level, st.y1[S_SPEED]! - level, theta, (v) => v >= 0);
+        const th = locate(
+          (s) => st.dense(S_SPEED, s) - level,
+          st.y[S_SPEED]! - level,
+          st.y1[S_SPEED]! - level,
+          theta,
+          (v) => v >= 0,
+        );
         crossTimes[nextCross] = t + th * st.h;
         if (SPEED_FRACTIONS[nextCross] === 1) {
           chargeAtTarget = st.dense(S_CHARGE, th);
@@ -1552,7 +1586,13 @@ export function simulateSpinUp(input: DrivetrainInput, options: SpinUpOptions = 
     currentLimitedAcceleration: Math.max(0, m.eta * k * m.N * m.kt * (m.ilim - m.i0) - m.tf) / run.jLocked,
     tractionLimit: spinner ? m.fs : null,
     tractionLimitedAcceleration: spinner
-      ? tractionLimitedAcceleration({ frictionCoefficient: input.kineticFriction, normalForce: normal, contactRadius: m.roff, inertia: m.j, frictionTorque: m.tf })
+      ? tractionLimitedAcceleration({
+          frictionCoefficient: input.kineticFriction,
+          normalForce: normal,
+          contactRadius: m.roff,
+          inertia: m.j,
+          frictionTorque: m.tf,
+        })
       : null,
     normalForcePerWheel: spinner ? normal / input.drivenWheels : null,
     wheelTimeConstant: spinner ? run.tauWheel : null,
@@ -1625,7 +1665,12 @@ export interface DrivetrainComparison {
  */
 export function compareDrivetrains(variants: readonly DrivetrainInput[], options: SpinUpOptions = {}): DrivetrainComparison {
   if (!Array.isArray(variants) || variants.length < 1 || variants.length > 6) {
-    throw new CalcInputError({ param: "variants", value: Array.isArray(variants) ? variants.length : variants, expected: "a list of 1 to 6 designs", unit: "" });
+    throw new CalcInputError({
+      param: "variants",
+      value: Array.isArray(variants) ? variants.length : variants,
+      expected: "a list of 1 to 6 designs",
+      unit: "",
+    });
   }
   const results = variants.map((v) => simulateSpinUp(v, options));
   let fastestIndex: number | null = null;
@@ -1665,8 +1710,8 @@ export interface DrivetrainSweep {
 
 /** Throws unless `parameter` names one of the numeric spin-up inputs. */
 function requireParameter(parameter: string): DrivetrainParameter {
-  if (!Object.prototype.hasOwnProperty.call(drivetrainInputs, parameter)) {
-    throw new CalcInputError({ param: "parameter", value: parameter, expected: "one of the spin-up inputs (e.g. \"gearRatio\")", unit: "" });
+  if (!Object.hasOwn(drivetrainInputs, parameter)) {
+    throw new CalcInputError({ param: "parameter", value: parameter, expected: 'one of the spin-up inputs (e.g. "gearRatio")', unit: "" });
   }
   return parameter as DrivetrainParameter;
 }
@@ -1686,7 +1731,17 @@ function requireParameter(parameter: string): DrivetrainParameter {
  * Example: the reduction from 1 to 4 in 4 points → 1, 2, 3, 4; cells from 2 to 8 in 50 points →
  * 2, 3, 4, 5, 6, 7, 8. Sources: as `simulateSpinUp`.
  */
-export function sweepValues({ parameter, from, to, points = 50 }: { parameter: DrivetrainParameter | string; from: number; to: number; points?: number }): number[] {
+export function sweepValues({
+  parameter,
+  from,
+  to,
+  points = 50,
+}: {
+  parameter: DrivetrainParameter | string;
+  from: number;
+  to: number;
+  points?: number;
+}): number[] {
   const name = requireParameter(parameter);
   const spec: InputSpec = drivetrainInputs[name];
   const unit = SI_SYMBOL[spec.kind] ?? "";

@@ -77,12 +77,7 @@ export function requireNonNegative(param: string, value: number, unit: string): 
 /**
  * Throws unless `min <= value <= max` (or `min < value` / `value < max` where the bound is open).
  */
-export function requireInRange(
-  param: string,
-  value: number,
-  unit: string,
-  range: { min: number; max: number; minOpen?: boolean; maxOpen?: boolean },
-): number {
+export function requireInRange(param: string, value: number, unit: string, range: { min: number; max: number; minOpen?: boolean; maxOpen?: boolean }): number {
   requireFinite(param, value, unit);
   const lowOk = range.minOpen ? value > range.min : value >= range.min;
   const highOk = range.maxOpen ? value < range.max : value <= range.max;

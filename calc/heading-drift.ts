@@ -14,7 +14,6 @@ import { STANDARD_GRAVITY, TURN } from "./constants.ts";
 import { fromSI, rpmToRadPerSecond } from "./units.ts";
 import { requireWithinSpecs } from "./spec-check.ts";
 
-
 // ---------------------------------------------------------------------------------------------
 // Helpers (not exported).
 
@@ -331,12 +330,7 @@ export function speedRangeWithinBudget(input: { budget: number } & SpinRateError
     return e !== null && Math.abs(e.drift) <= d;
   };
   const threshold = beta < 0 ? Math.sqrt(-beta / reduced.gain) : 0;
-  const cuts = [
-    ...quadraticRoots(a, -2 * d, beta - d * d),
-    ...quadraticRoots(a, 2 * d, beta - d * d),
-    d,
-    threshold,
-  ].filter((w) => w > 0 && Number.isFinite(w));
+  const cuts = [...quadraticRoots(a, -2 * d, beta - d * d), ...quadraticRoots(a, 2 * d, beta - d * d), d, threshold].filter((w) => w > 0 && Number.isFinite(w));
   const points = [0, ...new Set(cuts)].sort((x, y) => x - y);
   // Segments (points[i], points[i+1]) and the last one (points[n-1], ∞); test each at an interior point.
   let low: number | null = null;
@@ -542,7 +536,12 @@ export interface HeadingDriftResult {
 export function headingDrift(input: HeadingDriftInput): HeadingDriftResult {
   requireWithinSpecs(headingDriftInputs, input);
   if (!(input.highSpeed > input.lowSpeed)) {
-    throw new CalcInputError({ param: "highSpeed", value: input.highSpeed, expected: `greater than lowSpeed (${round6(input.lowSpeed)} rad/s)`, unit: "rad/s" });
+    throw new CalcInputError({
+      param: "highSpeed",
+      value: input.highSpeed,
+      expected: `greater than lowSpeed (${round6(input.lowSpeed)} rad/s)`,
+      unit: "rad/s",
+    });
   }
   const model: SpinRateErrorModel = {
     assumedRadius: input.assumedRadius,
@@ -553,8 +552,7 @@ export function headingDrift(input: HeadingDriftInput): HeadingDriftResult {
     tilt: input.tilt,
   };
   const atSpeed = headingDriftAt({ ...model, angularSpeed: input.angularSpeed });
-  const verdict: DriftVerdict =
-    atSpeed.driftRate === null ? "no-estimate" : Math.abs(atSpeed.driftRate) <= input.budget ? "within-budget" : "over-budget";
+  const verdict: DriftVerdict = atSpeed.driftRate === null ? "no-estimate" : Math.abs(atSpeed.driftRate) <= input.budget ? "within-budget" : "over-budget";
   // nist-ehandbook-propagation: σ_ω̂ = |∂ω̂/∂a| σ_a, ∂ω̂/∂a = 1/(2 r̂ ω̂)
   const rateNoise = atSpeed.estimate === null ? null : input.accelerationNoise / (2 * input.assumedRadius * atSpeed.estimate);
   return {

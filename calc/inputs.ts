@@ -4,17 +4,7 @@
  * the message shown beside the field, in the user's units.
  */
 import { CalcInputError } from "./errors.ts";
-import {
-  displayUnit,
-  formatQuantity,
-  fromSI,
-  parseQuantity,
-  quantityToText,
-  UNITS,
-  type QuantityKind,
-  type UnitId,
-  type UnitSystem,
-} from "./units.ts";
+import { displayUnit, formatQuantity, fromSI, parseQuantity, quantityToText, UNITS, type QuantityKind, type UnitId, type UnitSystem } from "./units.ts";
 
 export interface InputSpec {
   /** Label shown to users, e.g. "Top speed". */
@@ -76,7 +66,11 @@ export function describeRange(spec: InputSpec, system: UnitSystem): string {
  */
 export function checkValue(spec: InputSpec, valueSI: number, system: UnitSystem): CalcInputError | null {
   const unit = fieldUnit(spec, system);
-  const shownValue = Number(formatQuantity(valueSI, spec.kind, { unit, significant: 4 }).number.replace("−", "-").replace(/ × 10.*/, ""));
+  const shownValue = Number(
+    formatQuantity(valueSI, spec.kind, { unit, significant: 4 })
+      .number.replace("−", "-")
+      .replace(/ × 10.*/, ""),
+  );
   const tooLow = spec.minOpen ? !(valueSI > spec.min) : !(valueSI >= spec.min);
   const tooHigh = !(valueSI <= spec.max);
   const notWhole = spec.integer === true && !Number.isInteger(valueSI);
@@ -91,9 +85,7 @@ export function checkValue(spec: InputSpec, valueSI: number, system: UnitSystem)
   return null;
 }
 
-export type FieldReading =
-  | { ok: true; value: number; unit: UnitId }
-  | { ok: false; error: CalcInputError };
+export type FieldReading = { ok: true; value: number; unit: UnitId } | { ok: false; error: CalcInputError };
 
 /** Parses and range-checks what a user typed into the field described by `spec`. */
 export function readField(spec: InputSpec, text: string, system: UnitSystem): FieldReading {
@@ -117,6 +109,6 @@ export function defaultText(spec: InputSpec, system: UnitSystem): string {
 }
 
 /** Compact text for a URL: "32mm". */
-export function urlText(spec: InputSpec, valueSI: number, unit: UnitId): string {
+export function urlText(_spec: InputSpec, valueSI: number, unit: UnitId): string {
   return quantityToText(valueSI, unit);
 }

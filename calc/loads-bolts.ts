@@ -8,9 +8,15 @@ import { defineInputs } from "./inputs.ts";
 import type { PartLoad } from "./rotation.ts";
 import { STANDARD_GRAVITY } from "./constants.ts";
 import { rpmToRadPerSecond } from "./units.ts";
-import { metricThread, PROPERTY_CLASS_OPTIONS, propertyClass as propertyClassRow, THREAD_SIZE_OPTIONS, type PropertyClassId, type ThreadSize } from "./fasteners.ts";
 import {
-  DEFAULT_SAFETY_THRESHOLDS,
+  metricThread,
+  PROPERTY_CLASS_OPTIONS,
+  propertyClass as propertyClassRow,
+  THREAD_SIZE_OPTIONS,
+  type PropertyClassId,
+  type ThreadSize,
+} from "./fasteners.ts";
+import {
   safetyThresholdInputs,
   requireChoice,
   requireDeclared,
@@ -271,10 +277,7 @@ export function fastenerCheck(input: FastenerCheckInput): FastenerCheck {
   // Written out here so that the bolt calculator's page does not load the rotation module.
   const acceleration = angularSpeed * angularSpeed * radius;
   const part: PartLoad = { acceleration, gLoad: acceleration / STANDARD_GRAVITY, force: partMass * acceleration };
-  const area =
-    mode === "shear" && shearPlane === "shank"
-      ? (Math.PI / 4) * thread.nominalDiameter * thread.nominalDiameter
-      : thread.stressArea; // iso-898-1 Table 4
+  const area = mode === "shear" && shearPlane === "shank" ? (Math.PI / 4) * thread.nominalDiameter * thread.nominalDiameter : thread.stressArea; // iso-898-1 Table 4
   const stress = boltStress({ force: part.force, count, area });
   const safetyFactorYield = safetyFactor({ strength: yieldStrength, stress });
   const safetyFactorUltimate = safetyFactor({ strength: ultimateStrength, stress });
@@ -334,4 +337,3 @@ export function fastenerStressCurve(input: FastenerCheckInput, { maxSpeed, point
     return { angularSpeed, stress: perOmegaSquared * angularSpeed * angularSpeed };
   });
 }
-

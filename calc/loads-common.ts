@@ -166,7 +166,6 @@ export function requireDeclared<T extends InputSpecs>(specs: T, name: keyof T & 
   return value;
 }
 
-
 /** Throws a `CalcInputError` naming "points" unless it is a whole number from 2 to 1000. */
 export function requirePointCount(points: number): void {
   requireInRange("points", points, "", { min: 2, max: 1000 });

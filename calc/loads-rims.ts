@@ -8,7 +8,6 @@ import { defineInputs } from "./inputs.ts";
 import { rpmToRadPerSecond } from "./units.ts";
 import type { MaterialId } from "./materials.ts";
 import {
-  DEFAULT_SAFETY_THRESHOLDS,
   safetyThresholdInputs,
   requireChoice,
   requireDeclared,

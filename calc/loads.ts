@@ -95,7 +95,11 @@ export function demoRobotLoads({
   washerMass = DEMO_WASHER_STACK.mass,
   washerRadius = DEMO_WASHER_STACK.radius,
   topSpeed = rpmToRadPerSecond(DEMO_WASHER_STACK.rpm),
-}: { washerMass?: number; washerRadius?: number; topSpeed?: number } = {}): DemoRobotLoads {
+}: {
+  washerMass?: number;
+  washerRadius?: number;
+  topSpeed?: number;
+} = {}): DemoRobotLoads {
   const boltInput: FastenerCheckInput = {
     partMass: washerMass,
     radius: washerRadius,

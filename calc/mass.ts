@@ -146,7 +146,12 @@ export function checkPart(part: LayoutPart, prefix = "part"): void {
       requireInRange(`${p}.productYZ`, s.productYZ, "kg·m²", { min: -MAX_OWN_INERTIA, max: MAX_OWN_INERTIA });
       break;
     default:
-      throw new CalcInputError({ param: `${p}.kind`, value: String((s as { kind?: unknown } | undefined)?.kind), expected: `one of ${PART_SHAPE_KINDS.join(", ")}`, unit: "" });
+      throw new CalcInputError({
+        param: `${p}.kind`,
+        value: String((s as { kind?: unknown } | undefined)?.kind),
+        expected: `one of ${PART_SHAPE_KINDS.join(", ")}`,
+        unit: "",
+      });
   }
   const m = part.mass;
   if (m?.kind === "given") {
@@ -161,12 +166,22 @@ export function checkPart(part: LayoutPart, prefix = "part"): void {
     }
     if (s.kind !== "cylinder") {
       if (m.thickness === undefined) {
-        throw new CalcInputError({ param: `${prefix}.mass.thickness`, value: "missing", expected: "a thickness (disk, annulus, plate) or section diameter (ring, rod) greater than 0 m", unit: "" });
+        throw new CalcInputError({
+          param: `${prefix}.mass.thickness`,
+          value: "missing",
+          expected: "a thickness (disk, annulus, plate) or section diameter (ring, rod) greater than 0 m",
+          unit: "",
+        });
       }
       requireLength(`${prefix}.mass.thickness`, m.thickness);
     }
   } else {
-    throw new CalcInputError({ param: `${prefix}.mass.kind`, value: String((m as { kind?: unknown } | undefined)?.kind), expected: '"given" or "material"', unit: "" });
+    throw new CalcInputError({
+      param: `${prefix}.mass.kind`,
+      value: String((m as { kind?: unknown } | undefined)?.kind),
+      expected: '"given" or "material"',
+      unit: "",
+    });
   }
 }
 
@@ -357,9 +372,14 @@ export interface MassProperties {
  */
 export function massProperties(parts: readonly LayoutPart[]): MassProperties {
   if (!Array.isArray(parts) || parts.length === 0 || parts.length > MAX_PARTS) {
-    throw new CalcInputError({ param: "parts", value: Array.isArray(parts) ? parts.length : String(parts), expected: `a list of 1 to ${MAX_PARTS} parts`, unit: "" });
+    throw new CalcInputError({
+      param: "parts",
+      value: Array.isArray(parts) ? parts.length : String(parts),
+      expected: `a list of 1 to ${MAX_PARTS} parts`,
+      unit: "",
+    });
   }
-  parts.forEach((part, i) => checkPart(part, `parts[${i}]`));
+  for (const [i, part] of parts.entries()) checkPart(part, `parts[${i}]`);
   const masses = parts.map(massOf);
   const own = parts.map((p, i) => ownInertiaOf(p.shape, masses[i]!));
   let totalMass = 0;
@@ -592,7 +612,16 @@ export function addMirrorCopy(parts: readonly LayoutPart[], index: number, axis:
 /** Version of the text form written by `encodeLayout`. */
 export const LAYOUT_TEXT_VERSION = 1;
 
-const SHAPE_TOKENS: Record<PartShapeKind, string> = { point: "pt", disk: "disk", ring: "ring", annulus: "ann", plate: "plate", rod: "rod", cylinder: "cyl", custom: "cust" };
+const SHAPE_TOKENS: Record<PartShapeKind, string> = {
+  point: "pt",
+  disk: "disk",
+  ring: "ring",
+  annulus: "ann",
+  plate: "plate",
+  rod: "rod",
+  cylinder: "cyl",
+  custom: "cust",
+};
 const TOKEN_SHAPES: Record<string, PartShapeKind> = Object.fromEntries(Object.entries(SHAPE_TOKENS).map(([k, v]) => [v, k as PartShapeKind]));
 const DIM_COUNT: Record<PartShapeKind, number> = { point: 0, disk: 1, ring: 1, annulus: 2, plate: 3, rod: 2, cylinder: 2, custom: 3 };
 const MM = 1e-3;
@@ -642,12 +671,22 @@ function shapeDims(shape: PartShape): number[] {
  */
 export function encodeLayout(parts: readonly LayoutPart[]): string {
   if (!Array.isArray(parts) || parts.length > MAX_PARTS) {
-    throw new CalcInputError({ param: "parts", value: Array.isArray(parts) ? parts.length : String(parts), expected: `a list of at most ${MAX_PARTS} parts`, unit: "" });
+    throw new CalcInputError({
+      param: "parts",
+      value: Array.isArray(parts) ? parts.length : String(parts),
+      expected: `a list of at most ${MAX_PARTS} parts`,
+      unit: "",
+    });
   }
   const list: readonly LayoutPart[] = parts;
   const tokens = list.map((part, i) => {
     checkPart(part, `parts[${i}]`);
-    const fields = [SHAPE_TOKENS[part.shape.kind], nameText(part.name), ...[part.x, part.y, part.z].map((v) => numberText(v / MM)), ...shapeDims(part.shape).map(numberText)];
+    const fields = [
+      SHAPE_TOKENS[part.shape.kind],
+      nameText(part.name),
+      ...[part.x, part.y, part.z].map((v) => numberText(v / MM)),
+      ...shapeDims(part.shape).map(numberText),
+    ];
     if (part.mass.kind === "given") fields.push(numberText(part.mass.mass / GRAM));
     else {
       fields.push(part.mass.material);
@@ -750,13 +789,19 @@ function parsePartToken(token: string): LayoutPart | string {
  */
 export function parseLayout(text: unknown): LayoutParseResult {
   if (typeof text !== "string") return { ok: false, version: null, parts: [], problems: [{ index: null, reason: "the layout must be text" }] };
-  if (text.length > MAX_LAYOUT_TEXT) return { ok: false, version: null, parts: [], problems: [{ index: null, reason: `the layout text is longer than ${MAX_LAYOUT_TEXT} characters` }] };
+  if (text.length > MAX_LAYOUT_TEXT)
+    return { ok: false, version: null, parts: [], problems: [{ index: null, reason: `the layout text is longer than ${MAX_LAYOUT_TEXT} characters` }] };
   const [head, ...tokens] = text.trim().split("~");
   const match = /^v(\d+)$/.exec(head ?? "");
   if (!match) return { ok: false, version: null, parts: [], problems: [{ index: null, reason: 'the layout text must start with a version such as "v1"' }] };
   const version = Number(match[1]);
   if (version !== LAYOUT_TEXT_VERSION) {
-    return { ok: false, version, parts: [], problems: [{ index: null, reason: `version ${version} is not known; this reader understands v${LAYOUT_TEXT_VERSION}` }] };
+    return {
+      ok: false,
+      version,
+      parts: [],
+      problems: [{ index: null, reason: `version ${version} is not known; this reader understands v${LAYOUT_TEXT_VERSION}` }],
+    };
   }
   const problems: LayoutProblem[] = [];
   const parts: LayoutPart[] = [];
@@ -842,9 +887,15 @@ function outlineExtent(o: PartOutline): Point2[] {
       return [o.centre];
     case "circle":
     case "hoop":
-      return [[o.centre[0] - o.radius, o.centre[1] - o.radius], [o.centre[0] + o.radius, o.centre[1] + o.radius]];
+      return [
+        [o.centre[0] - o.radius, o.centre[1] - o.radius],
+        [o.centre[0] + o.radius, o.centre[1] + o.radius],
+      ];
     case "annulus":
-      return [[o.centre[0] - o.outerRadius, o.centre[1] - o.outerRadius], [o.centre[0] + o.outerRadius, o.centre[1] + o.outerRadius]];
+      return [
+        [o.centre[0] - o.outerRadius, o.centre[1] - o.outerRadius],
+        [o.centre[0] + o.outerRadius, o.centre[1] + o.outerRadius],
+      ];
     case "polygon":
       return [...o.corners];
     case "segment":
@@ -987,7 +1038,15 @@ export interface PermissibleUnbalance {
  * 15 000 rpm, G 2.5: U_per = 7.219e-4 kg·m = 721.9 g·mm = 1.003 oz·in (0.501 oz·in per plane).
  * Sources: iso-21940-11, energy-tech-balancing-example, bloch-geitner-machinery-maintenance.
  */
-export function permissibleResidualUnbalance({ totalMass, grade, angularSpeed }: { totalMass: number; grade: number; angularSpeed: number }): PermissibleUnbalance {
+export function permissibleResidualUnbalance({
+  totalMass,
+  grade,
+  angularSpeed,
+}: {
+  totalMass: number;
+  grade: number;
+  angularSpeed: number;
+}): PermissibleUnbalance {
   requirePositive("totalMass", totalMass, "kg");
   requirePositive("grade", grade, "m/s");
   requirePositive("angularSpeed", angularSpeed, "rad/s");
@@ -1300,7 +1359,12 @@ export function counterweightAtCandidates(input: CentreInput & { candidates: rea
   const e = checkCentre(input);
   const { totalMass: M, centreX: cx, centreY: cy, targetOffset: et, candidates } = input;
   if (!Array.isArray(candidates) || candidates.length === 0 || candidates.length > 100) {
-    throw new CalcInputError({ param: "candidates", value: Array.isArray(candidates) ? candidates.length : String(candidates), expected: "a list of 1 to 100 mounting points", unit: "" });
+    throw new CalcInputError({
+      param: "candidates",
+      value: Array.isArray(candidates) ? candidates.length : String(candidates),
+      expected: "a list of 1 to 100 mounting points",
+      unit: "",
+    });
   }
   const results = candidates.map((c, index): CandidateResult => {
     requireCoordinate(`candidates[${index}].x`, c.x);
@@ -1312,7 +1376,15 @@ export function counterweightAtCandidates(input: CentreInput & { candidates: rea
     const D = B * B - 4 * A * C;
     const denominator = -B + Math.sqrt(Math.max(D, 0));
     if (D < 0 || !(denominator > 0)) {
-      return { index, x: c.x, y: c.y, feasible: false, mass: null, offsetAfter: null, reason: "the line from the centre of mass toward this point never enters the target circle" };
+      return {
+        index,
+        x: c.x,
+        y: c.y,
+        feasible: false,
+        mass: null,
+        offsetAfter: null,
+        reason: "the line from the centre of mass toward this point never enters the target circle",
+      };
     }
     const mass = (2 * C) / denominator;
     return { index, x: c.x, y: c.y, feasible: true, mass, offsetAfter: offsetWith(M, cx, cy, mass, c.x, c.y), reason: null };
@@ -1345,7 +1417,21 @@ export interface AppliedCounterweight {
  * inertia about the centre of mass unchanged; any other height adds couple unbalance.
  * Sources: centre-of-mass, parallel-axis-theorem.
  */
-export function applyCounterweight({ parts, mass, x, y, z, name = "counterweight" }: { parts: readonly LayoutPart[]; mass: number; x: number; y: number; z: number; name?: string }): AppliedCounterweight {
+export function applyCounterweight({
+  parts,
+  mass,
+  x,
+  y,
+  z,
+  name = "counterweight",
+}: {
+  parts: readonly LayoutPart[];
+  mass: number;
+  x: number;
+  y: number;
+  z: number;
+  name?: string;
+}): AppliedCounterweight {
   const before = massProperties(parts);
   requireInRange("mass", mass, "kg", { min: 0, max: MAX_PART_MASS, minOpen: true });
   const counterweight: LayoutPart = { name, shape: { kind: "point" }, mass: { kind: "given", mass }, x, y, z };
@@ -1393,14 +1479,29 @@ export interface TrueSensorRadius {
  * at (2 mm, 0): r = 34 mm, ω̂/ω = 1.0308, drift +11.1° per revolution.
  * Sources: openstax-college-physics.
  */
-export function trueSensorRadius({ centreX, centreY, sensorX, sensorY }: { centreX: number; centreY: number; sensorX: number; sensorY: number }): TrueSensorRadius {
+export function trueSensorRadius({
+  centreX,
+  centreY,
+  sensorX,
+  sensorY,
+}: {
+  centreX: number;
+  centreY: number;
+  sensorX: number;
+  sensorY: number;
+}): TrueSensorRadius {
   requireCoordinate("centreX", centreX);
   requireCoordinate("centreY", centreY);
   requireCoordinate("sensorX", sensorX);
   requireCoordinate("sensorY", sensorY);
   const radiusAssumed = Math.hypot(sensorX, sensorY);
   if (!(radiusAssumed > 0)) {
-    throw new CalcInputError({ param: "sensorX", value: sensorX, expected: "a sensor position away from the geometric centre (radius greater than 0 m)", unit: "m" });
+    throw new CalcInputError({
+      param: "sensorX",
+      value: sensorX,
+      expected: "a sensor position away from the geometric centre (radius greater than 0 m)",
+      unit: "m",
+    });
   }
   const dx = sensorX - centreX;
   const dy = sensorY - centreY;
@@ -1580,7 +1681,8 @@ export interface MassBalance {
  * openstax-college-physics.
  */
 export function massBalance(input: MassBalanceInput): MassBalance {
-  const { parts, candidates, spinSpeed, targetOffset, balanceGrade, correctionRadius, maxRadius, counterweightMass, planeZ1, planeZ2, sensorX, sensorY } = input;
+  const { parts, candidates, spinSpeed, targetOffset, balanceGrade, correctionRadius, maxRadius, counterweightMass, planeZ1, planeZ2, sensorX, sensorY } =
+    input;
   requirePositive("spinSpeed", spinSpeed, "rad/s");
   const layout = massProperties(parts);
   const stat = staticUnbalance({ totalMass: layout.totalMass, offset: layout.offset, angularSpeed: spinSpeed });
@@ -1702,7 +1804,14 @@ export function counterweightPlan({ input, balance, mode }: { input: MassBalance
   if (balance.offsetVerdict === "within-target") return none("not-needed");
   const { atRadius, forMass, candidates } = balance.counterweight;
   const best = candidates && candidates.best !== null ? candidates.candidates[candidates.best]! : null;
-  const pick = mode === "radius" ? atRadius : mode === "mass" ? (forMass.status === "placed" ? { mass: input.counterweightMass, x: forMass.x!, y: forMass.y! } : null) : best;
+  const pick =
+    mode === "radius"
+      ? atRadius
+      : mode === "mass"
+        ? forMass.status === "placed"
+          ? { mass: input.counterweightMass, x: forMass.x!, y: forMass.y! }
+          : null
+        : best;
   if (!pick || !(pick.mass! <= MAX_PART_MASS) || input.parts.length >= MAX_PARTS) return none("none");
   const z = balance.layout.centreZ;
   const place = (mass: number) => ({ mass, ...applyCounterweight({ parts: input.parts, mass, x: pick.x, y: pick.y, z }) });
@@ -1744,14 +1853,42 @@ export const DEMO_WASHER_MASS = 0.006;
 export function demoRobotParts(): LayoutPart[] {
   return [
     { name: "base plate", shape: { kind: "disk", radius: 0.07 }, mass: { kind: "material", material: "al-6061-t6", thickness: 0.005 }, x: 0, y: 0, z: 0.0025 },
-    { name: "armour ring", shape: { kind: "annulus", innerRadius: 0.068, outerRadius: 0.075 }, mass: { kind: "material", material: "steel-4130-normalized", thickness: 0.025 }, x: 0, y: 0, z: 0.0175 },
+    {
+      name: "armour ring",
+      shape: { kind: "annulus", innerRadius: 0.068, outerRadius: 0.075 },
+      mass: { kind: "material", material: "steel-4130-normalized", thickness: 0.025 },
+      x: 0,
+      y: 0,
+      z: 0.0175,
+    },
     { name: "lid", shape: { kind: "disk", radius: 0.07 }, mass: { kind: "material", material: "polycarbonate", thickness: 0.003 }, x: 0, y: 0, z: 0.0315 },
-    { name: "battery", shape: { kind: "plate", length: 0.07, width: 0.035, angle: Math.PI / 2 }, mass: { kind: "given", mass: 0.28 }, x: 0.012, y: 0, z: 0.0135 },
+    {
+      name: "battery",
+      shape: { kind: "plate", length: 0.07, width: 0.035, angle: Math.PI / 2 },
+      mass: { kind: "given", mass: 0.28 },
+      x: 0.012,
+      y: 0,
+      z: 0.0135,
+    },
     { name: "left drive motor", shape: { kind: "cylinder", radius: 0.014, height: 0.025 }, mass: { kind: "given", mass: 0.075 }, x: 0, y: 0.04, z: 0.0175 },
     { name: "right drive motor", shape: { kind: "cylinder", radius: 0.014, height: 0.025 }, mass: { kind: "given", mass: 0.075 }, x: 0, y: -0.04, z: 0.0175 },
-    { name: "controller board", shape: { kind: "plate", length: 0.045, width: 0.03, angle: Math.PI / 6 }, mass: { kind: "given", mass: 0.035 }, x: -0.03, y: 0.02, z: 0.012 },
+    {
+      name: "controller board",
+      shape: { kind: "plate", length: 0.045, width: 0.03, angle: Math.PI / 6 },
+      mass: { kind: "given", mass: 0.035 },
+      x: -0.03,
+      y: 0.02,
+      z: 0.012,
+    },
     { name: "accelerometer", shape: { kind: "point" }, mass: { kind: "given", mass: 0.004 }, x: -0.032, y: 0, z: 0.008 },
-    { name: "wiring and fasteners", shape: { kind: "custom", inertiaZ: 4e-5, productXZ: 0, productYZ: 0 }, mass: { kind: "given", mass: 0.05 }, x: 0.005, y: -0.014, z: 0.012 },
+    {
+      name: "wiring and fasteners",
+      shape: { kind: "custom", inertiaZ: 4e-5, productXZ: 0, productYZ: 0 },
+      mass: { kind: "given", mass: 0.05 },
+      x: 0.005,
+      y: -0.014,
+      z: 0.012,
+    },
   ];
 }
 
@@ -1793,9 +1930,10 @@ export function demoRobotBalance(): DemoRobotBalance {
   const washers = Math.ceil(needed / DEMO_WASHER_MASS - 1e-9);
   const washerMass = washers * DEMO_WASHER_MASS;
   const at = balance.counterweight.atRadius;
-  const withWashers = washers > 0
-    ? applyCounterweight({ parts, mass: washerMass, x: at.x, y: at.y, z: balance.layout.centreZ, name: `${washers} washers` })
-    : { parts: [...parts], before: balance.layout, after: balance.layout };
+  const withWashers =
+    washers > 0
+      ? applyCounterweight({ parts, mass: washerMass, x: at.x, y: at.y, z: balance.layout.centreZ, name: `${washers} washers` })
+      : { parts: [...parts], before: balance.layout, after: balance.layout };
   return {
     parts,
     spinSpeed: defaults.spinSpeed,
@@ -1804,7 +1942,12 @@ export function demoRobotBalance(): DemoRobotBalance {
     washers,
     washerMass,
     withWashers,
-    sensorWithWashers: trueSensorRadius({ centreX: withWashers.after.centreX, centreY: withWashers.after.centreY, sensorX: defaults.sensorX, sensorY: defaults.sensorY }),
+    sensorWithWashers: trueSensorRadius({
+      centreX: withWashers.after.centreX,
+      centreY: withWashers.after.centreY,
+      sensorX: defaults.sensorX,
+      sensorY: defaults.sensorY,
+    }),
   };
 }
 

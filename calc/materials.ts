@@ -215,7 +215,8 @@ export const MATERIALS = {
     youngsModulus: 0.69 * GPa,
     poissonRatio: 0.46,
     source: "callister-integrated-3e",
-    locator: "App. B: Table B.1 density 0.94 g/cm³ and Table B.2 E = 0.69 GPa (both confirmed); Table B.4 yield 21.4–27.6 MPa and tensile 38.6–48.3 MPa; ν ≈ 0.46",
+    locator:
+      "App. B: Table B.1 density 0.94 g/cm³ and Table B.2 E = 0.69 GPa (both confirmed); Table B.4 yield 21.4–27.6 MPa and tensile 38.6–48.3 MPa; ν ≈ 0.46",
     otherSources: [],
     status: "partly-from-memory",
     fromMemory: ["yieldStrength", "ultimateStrength", "poissonRatio"],
@@ -233,7 +234,8 @@ export const MATERIALS = {
     youngsModulus: 2.38 * GPa,
     poissonRatio: 0.36,
     source: "callister-integrated-3e",
-    locator: "App. B: Table B.5 yield 62.1 MPa and Table B.2 E = 2.38 GPa (both confirmed); Table B.4 tensile 62.8–72.4 MPa; Table B.3 ν ≈ 0.36; density 1.20 g/cc from the MatWeb polycarbonate overview",
+    locator:
+      "App. B: Table B.5 yield 62.1 MPa and Table B.2 E = 2.38 GPa (both confirmed); Table B.4 tensile 62.8–72.4 MPa; Table B.3 ν ≈ 0.36; density 1.20 g/cc from the MatWeb polycarbonate overview",
     otherSources: ["matweb-polymer-overview"],
     status: "partly-from-memory",
     fromMemory: ["ultimateStrength", "poissonRatio"],
@@ -248,5 +250,5 @@ export const MATERIAL_IDS = Object.keys(MATERIALS) as readonly MaterialId[];
 
 /** True when `id` names a row of `MATERIALS`. */
 export function isMaterialId(id: string): id is MaterialId {
-  return Object.prototype.hasOwnProperty.call(MATERIALS, id);
+  return Object.hasOwn(MATERIALS, id);
 }

@@ -65,14 +65,29 @@ export interface MotorLine {
  *
  * Sources: hughes-drury-motors, motor-constants-wikipedia.
  */
-export function motorLine({ kv, resistance, voltage, noLoadCurrent = 0 }: { kv: number; resistance: number; voltage: number; noLoadCurrent?: number }): MotorLine {
+export function motorLine({
+  kv,
+  resistance,
+  voltage,
+  noLoadCurrent = 0,
+}: {
+  kv: number;
+  resistance: number;
+  voltage: number;
+  noLoadCurrent?: number;
+}): MotorLine {
   const kt = torqueConstantFromKv({ kv });
   requirePositive("resistance", resistance, "Ω");
   requirePositive("voltage", voltage, "V");
   requireNonNegative("noLoadCurrent", noLoadCurrent, "A");
   const stallCurrent = voltage / resistance; // hughes-drury-motors: I_stall = V/R
   if (!(noLoadCurrent < stallCurrent)) {
-    throw new CalcInputError({ param: "noLoadCurrent", value: noLoadCurrent, expected: `less than the stall current V/R (${stallCurrent.toPrecision(4)} A)`, unit: "A" });
+    throw new CalcInputError({
+      param: "noLoadCurrent",
+      value: noLoadCurrent,
+      expected: `less than the stall current V/R (${stallCurrent.toPrecision(4)} A)`,
+      unit: "A",
+    });
   }
   const drivingVoltage = voltage - noLoadCurrent * resistance;
   const noLoadSpeed = drivingVoltage / kt; // hughes-drury-motors: ω_nl = V/K_e (less the I_0·R drop)
@@ -185,7 +200,17 @@ export function spinUpTimeConstant({
  * Example (COMPUTED): ω_nl = 251.327 rad/s, τ = 0.109 662 s → ω(0.1 s) = 150.353 128 6 rad/s.
  * Sources: first-order-step-response.
  */
-export function voltageLimitedSpeed({ finalSpeed, timeConstant, time, initialSpeed = 0 }: { finalSpeed: number; timeConstant: number; time: number; initialSpeed?: number }): number {
+export function voltageLimitedSpeed({
+  finalSpeed,
+  timeConstant,
+  time,
+  initialSpeed = 0,
+}: {
+  finalSpeed: number;
+  timeConstant: number;
+  time: number;
+  initialSpeed?: number;
+}): number {
   requirePositive("timeConstant", timeConstant, "s");
   requireNonNegative("time", time, "s");
   if (!Number.isFinite(finalSpeed)) throw new CalcInputError({ param: "finalSpeed", value: finalSpeed, expected: "a finite number", unit: "rad/s" });

@@ -318,13 +318,7 @@ export function accelerometerPlacement(input: AccelerometerPlacementInput): Acce
   const accelerationAtLow = centripetalAcceleration({ angularSpeed: lowSpeed, radius });
   const resolutionAtLow = speedResolution({ step: effectiveStep, angularSpeed: lowSpeed, radius });
   const windowExists = minRadius <= maxRadius;
-  const verdict: PlacementVerdict = !windowExists
-    ? "no-window"
-    : radius > maxRadius
-      ? "too-far-out"
-      : radius < minRadius
-        ? "too-close-in"
-        : "fits";
+  const verdict: PlacementVerdict = !windowExists ? "no-window" : radius > maxRadius ? "too-far-out" : radius < minRadius ? "too-close-in" : "fits";
   return {
     minRadius,
     maxRadius,

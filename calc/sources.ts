@@ -61,5 +61,5 @@ export type SourceKey = keyof typeof SOURCES;
 
 /** True when `key` names an entry of the bibliography. */
 export function isSourceKey(key: string): key is SourceKey {
-  return Object.prototype.hasOwnProperty.call(SOURCES, key);
+  return Object.hasOwn(SOURCES, key);
 }

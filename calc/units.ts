@@ -57,7 +57,7 @@ export const UNITS = {
   m: { symbol: "m", kind: "length", factor: 1, aliases: ["metre", "meter", "meters", "metres"] },
   cm: { symbol: "cm", kind: "length", factor: 0.01 },
   mm: { symbol: "mm", kind: "length", factor: 0.001, aliases: ["millimetre", "millimeter", "millimeters", "millimetres"] },
-  in: { symbol: "in", kind: "length", factor: INCH, aliases: ["inch", "inches", "\"", "″"] },
+  in: { symbol: "in", kind: "length", factor: INCH, aliases: ["inch", "inches", '"', "″"] },
   ft: { symbol: "ft", kind: "length", factor: FOOT, aliases: ["foot", "feet", "'", "′"] },
   // mass [kg]
   kg: { symbol: "kg", kind: "mass", factor: 1 },
@@ -102,19 +102,19 @@ export const UNITS = {
   J: { symbol: "J", kind: "energy", factor: 1, aliases: ["joule", "joules"] },
   kJ: { symbol: "kJ", kind: "energy", factor: 1e3 },
   Wh: { symbol: "Wh", kind: "energy", factor: 3600 },
-  "ft·lbf": { symbol: "ft·lbf", kind: "energy", factor: FOOT * POUND_FORCE, aliases: ["ft*lbf", "ft-lbf", "ftlbf", "ft.lbf", "ft lbf"] },
+  ft·lbf: { symbol: "ft·lbf", kind: "energy", factor: FOOT * POUND_FORCE, aliases: ["ft*lbf", "ft-lbf", "ftlbf", "ft.lbf", "ft lbf"] },
   // power [W]
   W: { symbol: "W", kind: "power", factor: 1 },
   kW: { symbol: "kW", kind: "power", factor: 1e3 },
   // torque [N·m]
-  "N·m": { symbol: "N·m", kind: "torque", factor: 1, aliases: ["Nm", "N*m", "N.m", "N m"] },
-  "lbf·in": { symbol: "lbf·in", kind: "torque", factor: POUND_FORCE * INCH, aliases: ["lbf*in", "lbf-in", "in-lbf", "in·lbf", "lbfin"] },
-  "ozf·in": { symbol: "ozf·in", kind: "torque", factor: (POUND_FORCE / 16) * INCH, aliases: ["ozf*in", "oz-in", "oz·in", "ozin", "ozf-in"] },
+  N·m: { symbol: "N·m", kind: "torque", factor: 1, aliases: ["Nm", "N*m", "N.m", "N m"] },
+  lbf·in: { symbol: "lbf·in", kind: "torque", factor: POUND_FORCE * INCH, aliases: ["lbf*in", "lbf-in", "in-lbf", "in·lbf", "lbfin"] },
+  ozf·in: { symbol: "ozf·in", kind: "torque", factor: (POUND_FORCE / 16) * INCH, aliases: ["ozf*in", "oz-in", "oz·in", "ozin", "ozf-in"] },
   // moment of inertia [kg·m²]
-  "kg·m2": { symbol: "kg·m²", kind: "inertia", factor: 1, aliases: ["kg·m²", "kgm2", "kg*m^2", "kg m2", "kg.m2", "kgm^2", "kg·m^2"] },
-  "g·cm2": { symbol: "g·cm²", kind: "inertia", factor: 1e-7, aliases: ["g·cm²", "gcm2", "g*cm^2", "g cm2"] },
-  "lb·in2": { symbol: "lb·in²", kind: "inertia", factor: POUND * INCH * INCH, aliases: ["lb·in²", "lbin2", "lb*in^2", "lb in2", "lb-in2", "lb-in^2"] },
-  "oz·in2": { symbol: "oz·in²", kind: "inertia", factor: OUNCE * INCH * INCH, aliases: ["oz·in²", "ozin2", "oz*in^2", "oz in2", "oz-in2", "oz-in^2"] },
+  kg·m2: { symbol: "kg·m²", kind: "inertia", factor: 1, aliases: ["kg·m²", "kgm2", "kg*m^2", "kg m2", "kg.m2", "kgm^2", "kg·m^2"] },
+  g·cm2: { symbol: "g·cm²", kind: "inertia", factor: 1e-7, aliases: ["g·cm²", "gcm2", "g*cm^2", "g cm2"] },
+  lb·in2: { symbol: "lb·in²", kind: "inertia", factor: POUND * INCH * INCH, aliases: ["lb·in²", "lbin2", "lb*in^2", "lb in2", "lb-in2", "lb-in^2"] },
+  oz·in2: { symbol: "oz·in²", kind: "inertia", factor: OUNCE * INCH * INCH, aliases: ["oz·in²", "ozin2", "oz*in^2", "oz in2", "oz-in2", "oz-in^2"] },
   // stress [Pa]
   Pa: { symbol: "Pa", kind: "stress", factor: 1 },
   MPa: { symbol: "MPa", kind: "stress", factor: 1e6, aliases: ["N/mm2", "N/mm²"] },
@@ -126,9 +126,9 @@ export const UNITS = {
   "g/cm3": { symbol: "g/cm³", kind: "density", factor: 1000, aliases: ["g/cm³", "g/cc", "g/cm^3", "g/ml"] },
   "lb/in3": { symbol: "lb/in³", kind: "density", factor: POUND / INCH ** 3, aliases: ["lb/in³", "lb/in^3"] },
   // static unbalance (mass × eccentricity) [kg·m]
-  "kg·m": { symbol: "kg·m", kind: "unbalance", factor: 1, aliases: ["kgm", "kg*m", "kg m"] },
-  "g·mm": { symbol: "g·mm", kind: "unbalance", factor: 1e-6, aliases: ["gmm", "g*mm", "g mm", "g-mm"] },
-  "oz·in": { symbol: "oz·in", kind: "unbalance", factor: OUNCE * INCH, aliases: ["ozin", "oz*in", "oz in", "oz-in"] },
+  kg·m: { symbol: "kg·m", kind: "unbalance", factor: 1, aliases: ["kgm", "kg*m", "kg m"] },
+  g·mm: { symbol: "g·mm", kind: "unbalance", factor: 1e-6, aliases: ["gmm", "g*mm", "g mm", "g-mm"] },
+  oz·in: { symbol: "oz·in", kind: "unbalance", factor: OUNCE * INCH, aliases: ["ozin", "oz*in", "oz in", "oz-in"] },
   // electrical
   V: { symbol: "V", kind: "voltage", factor: 1, aliases: ["volt", "volts"] },
   A: { symbol: "A", kind: "current", factor: 1, aliases: ["amp", "amps"] },
@@ -191,8 +191,14 @@ export type UnitSystem = "metric" | "us";
  */
 type DisplaySteps = readonly (UnitId | readonly [UnitId, number])[];
 const DISPLAY: Record<QuantityKind, readonly [DisplaySteps, DisplaySteps?]> = {
-  length: [["mm", ["m", 10]], ["in", ["ft", 10 * FOOT]]],
-  mass: [["g", ["kg", 1]], ["oz", ["lb", POUND]]],
+  length: [
+    ["mm", ["m", 10]],
+    ["in", ["ft", 10 * FOOT]],
+  ],
+  mass: [
+    ["g", ["kg", 1]],
+    ["oz", ["lb", POUND]],
+  ],
   acceleration: [["gn"]],
   angularSpeed: [["rpm"]],
   angularAcceleration: [["rpm/s"]],
@@ -283,17 +289,17 @@ export function quantityToText(valueSI: number, unit: UnitId): string {
 
 /** ASCII spellings for units whose symbol and id both have characters a URL would percent-encode. */
 const URL_SPELLING: Partial<Record<UnitId, string>> = {
-  "ft·lbf": "ft-lbf",
-  "N·m": "Nm",
-  "lbf·in": "lbf-in",
-  "ozf·in": "ozf-in",
-  "kg·m2": "kgm2",
-  "g·cm2": "gcm2",
-  "lb·in2": "lb-in2",
-  "oz·in2": "oz-in2",
-  "kg·m": "kgm",
-  "g·mm": "gmm",
-  "oz·in": "oz-in",
+  ft·lbf: "ft-lbf",
+  N·m: "Nm",
+  lbf·in: "lbf-in",
+  ozf·in: "ozf-in",
+  kg·m2: "kgm2",
+  g·cm2: "gcm2",
+  lb·in2: "lb-in2",
+  oz·in2: "oz-in2",
+  kg·m: "kgm",
+  g·mm: "gmm",
+  oz·in: "oz-in",
   "rad/(s·V)": "rad/s/V",
 };
 
@@ -366,7 +372,11 @@ export function parseQuantity(text: string, kind: QuantityKind, defaultUnit: Uni
   if (/^[+\-−]?\d{1,3},\d{3}$/.test(match[1]!)) {
     const digits = match[1]!.replace(",", "");
     const decimal = match[1]!.replace(",", ".");
-    return { ok: false, reason: "not-a-number", message: `is ambiguous: write ${digits} or ${decimal} (a comma can be a decimal mark or a thousands separator)` };
+    return {
+      ok: false,
+      reason: "not-a-number",
+      message: `is ambiguous: write ${digits} or ${decimal} (a comma can be a decimal mark or a thousands separator)`,
+    };
   }
   const number = Number(match[1]!.replace(",", ".").replace(/−/g, "-"));
   if (!Number.isFinite(number)) {
@@ -377,7 +387,9 @@ export function parseQuantity(text: string, kind: QuantityKind, defaultUnit: Uni
   if (unitText !== "") {
     unit = findUnit(unitText, kind);
     if (!unit) {
-      const known = unitsOfKind(kind).map((id) => UNITS[id].symbol).filter((s) => s !== "");
+      const known = unitsOfKind(kind)
+        .map((id) => UNITS[id].symbol)
+        .filter((s) => s !== "");
       const shown = unitText.length > 20 ? `${unitText.slice(0, 20)}…` : unitText;
       return {
         ok: false,

@@ -13,11 +13,22 @@ const END = "<!-- api:end -->";
 
 /** Module order and titles; anything else in calc/ follows alphabetically. */
 const TITLES = {
-  "units.ts": "Units", "unit-definitions.ts": "Unit provenance", "inputs.ts": "Input declarations", "errors.ts": "Errors",
-  "rotation.ts": "Rotation and accelerometer placement", "heading.ts": "Heading drift, timing and smoothing",
-  "calibration.ts": "Calibration fit", "csv.ts": "Calibration data (CSV)", "mass.ts": "Mass layout and balance",
-  "materials.ts": "Materials", "fasteners.ts": "ISO metric fasteners", "loads.ts": "Centrifugal loads, bolts and rims",
-  "motor.ts": "DC motor", "drivetrain.ts": "Spin-up simulation", "design.ts": "Design file", "checks.ts": "Build-sheet checks",
+  "units.ts": "Units",
+  "unit-definitions.ts": "Unit provenance",
+  "inputs.ts": "Input declarations",
+  "errors.ts": "Errors",
+  "rotation.ts": "Rotation and accelerometer placement",
+  "heading.ts": "Heading drift, timing and smoothing",
+  "calibration.ts": "Calibration fit",
+  "csv.ts": "Calibration data (CSV)",
+  "mass.ts": "Mass layout and balance",
+  "materials.ts": "Materials",
+  "fasteners.ts": "ISO metric fasteners",
+  "loads.ts": "Centrifugal loads, bolts and rims",
+  "motor.ts": "DC motor",
+  "drivetrain.ts": "Spin-up simulation",
+  "design.ts": "Design file",
+  "checks.ts": "Build-sheet checks",
   "demo-design.ts": "Demo design",
 };
 
@@ -34,15 +45,19 @@ function describe(file) {
     let params = "";
     if (ts.isFunctionDeclaration(statement) && statement.name) {
       name = statement.name.text;
-      params = statement.parameters.map((p) => (ts.isObjectBindingPattern(p.name) ? `{ ${p.name.elements.map((e) => e.name.getText()).join(", ")} }` : p.name.getText())).join(", ");
+      params = statement.parameters
+        .map((p) => (ts.isObjectBindingPattern(p.name) ? `{ ${p.name.elements.map((e) => e.name.getText()).join(", ")} }` : p.name.getText()))
+        .join(", ");
     } else continue;
     const docs = ts.getJSDocCommentsAndTags(statement);
-    const comment = docs.map((d) => (typeof d.comment === "string" ? d.comment : ts.getTextOfJSDocComment(d.comment) ?? "")).join(" ");
+    const comment = docs.map((d) => (typeof d.comment === "string" ? d.comment : (ts.getTextOfJSDocComment(d.comment) ?? ""))).join(" ");
     const summary = clean(comment.split(/\n\s*\n|(?<=\.)\s/)[0] ?? "");
     const returns = docs.flatMap((d) =>
       (d.tags ?? [])
         .filter((t) => t.tagName.text === "returns")
-        .map((t) => clean((ts.getTextOfJSDocComment(t.comment) ?? "").split(/\n\s*\n|\s(?:Assumptions|Assumption|Examples?|Sources?|Formula|Notes?|Limits?):/)[0] ?? "")),
+        .map((t) =>
+          clean((ts.getTextOfJSDocComment(t.comment) ?? "").split(/\n\s*\n|\s(?:Assumptions|Assumption|Examples?|Sources?|Formula|Notes?|Limits?):/)[0] ?? ""),
+        ),
     );
     rows.push(`| \`${name}(${params})\` | ${summary} | ${returns[0] ?? ""} |`);
   }
@@ -51,7 +66,12 @@ function describe(file) {
 
 const files = readdirSync(calcDir).filter((f) => f.endsWith(".ts") && !["index.ts", "sources.ts", "source-type.ts", "constants.ts"].includes(f));
 files.sort((a, b) => (a in TITLES ? Object.keys(TITLES).indexOf(a) : 99) - (b in TITLES ? Object.keys(TITLES).indexOf(b) : 99) || a.localeCompare(b));
-const parts = [START, "", "Generated from the doc comments by `npm run docs:api`; each function's doc comment in calc/ has the formula, units, assumptions, an example and its sources.", ""];
+const parts = [
+  START,
+  "",
+  "Generated from the doc comments by `npm run docs:api`; each function's doc comment in calc/ has the formula, units, assumptions, an example and its sources.",
+  "",
+];
 for (const file of files) {
   const rows = describe(file);
   if (rows.length === 0) continue;
@@ -64,7 +84,10 @@ for (const [exportName, value] of Object.entries(calc)) {
   if (!/Inputs$/.test(exportName) || typeof value !== "object" || value === null) continue;
   const specs = Object.entries(value).filter(([, spec]) => spec && typeof spec === "object" && "urlKey" in spec);
   if (specs.length === 0) continue;
-  parts.push(`\`${exportName}\`: ${specs.map(([name, spec]) => `\`${spec.urlKey}\` ${name} (${spec.kind}, ${spec.minOpen ? "(" : "["}${Number(spec.min.toPrecision(6))}, ${Number(spec.max.toPrecision(6))}] SI)`).join("; ")}.`, "");
+  parts.push(
+    `\`${exportName}\`: ${specs.map(([name, spec]) => `\`${spec.urlKey}\` ${name} (${spec.kind}, ${spec.minOpen ? "(" : "["}${Number(spec.min.toPrecision(6))}, ${Number(spec.max.toPrecision(6))}] SI)`).join("; ")}.`,
+    "",
+  );
 }
 parts.push(END);
 const readmePath = join(root, "README.md");

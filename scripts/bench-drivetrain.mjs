@@ -101,7 +101,11 @@ const cases = [
   },
 ];
 
-console.log(`Spin-up simulation timing — Node ${process.version}, load average ${loadavg().map((x) => x.toFixed(2)).join(" ")}`);
+console.log(
+  `Spin-up simulation timing — Node ${process.version}, load average ${loadavg()
+    .map((x) => x.toFixed(2))
+    .join(" ")}`,
+);
 console.log("");
 let missed = 0;
 for (const c of cases) {

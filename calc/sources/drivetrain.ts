@@ -12,7 +12,8 @@ export const DRIVETRAIN_SOURCES = {
     author: "D. Tilbury, W. Messner et al., University of Michigan and Carnegie Mellon University",
     title: "Control Tutorials for MATLAB and Simulink: DC Motor Speed, System Modeling",
     publication: "Online tutorial (read in secondary copies)",
-    locator: "Physical setup and system equations (K_t = K_e in SI units); example J = 0.01 kg·m², b = 0.1 N·m·s, K = 0.01, R = 1 Ω, L = 0.5 H; 1 V step settles at 0.1 rad/s",
+    locator:
+      "Physical setup and system equations (K_t = K_e in SI units); example J = 0.01 kg·m², b = 0.1 N·m·s, K = 0.01, R = 1 Ω, L = 0.5 H; 1 V step settles at 0.1 rad/s",
   },
   "hughes-drury-motors": {
     author: "A. Hughes, B. Drury",
@@ -62,7 +63,8 @@ export const DRIVETRAIN_SOURCES = {
   },
   "gear-efficiency-model": {
     author: "Common practice",
-    title: "Power through a reduction with efficiency η: output torque = η·G·input torque when the motor drives, input torque = output torque/(η·G) when the load drives",
+    title:
+      "Power through a reduction with efficiency η: output torque = η·G·input torque when the motor drives, input torque = output torque/(η·G) when the load drives",
     publication: "Drive-train sizing convention (constant efficiency, no speed or load dependence)",
   },
   "quadratic-air-drag": {

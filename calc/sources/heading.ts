@@ -98,8 +98,7 @@ export const HEADING_SOURCES = {
     author: "R. O. Gilbert",
     title: "Statistical Methods for Environmental Pollution Monitoring",
     publication: "Van Nostrand Reinhold, 1987",
-    locator:
-      "ch. 16, Sen's nonparametric estimator of slope: C = z·√Var(S), M₁ = (N′ − C)/2, M₂ = (N′ + C)/2, limits the M₁-th and (M₂ + 1)-th ordered slopes",
+    locator: "ch. 16, Sen's nonparametric estimator of slope: C = z·√Var(S), M₁ = (N′ − C)/2, M₂ = (N′ + C)/2, limits the M₁-th and (M₂ + 1)-th ordered slopes",
   },
   "iglewicz-hoaglin-1993": {
     author: "B. Iglewicz, D. C. Hoaglin",

@@ -73,7 +73,8 @@ export const LOADS_SOURCES = {
   },
   "safety-factor-practice": {
     author: "Common practice",
-    title: "Safety factor n = strength / working stress: below 1 the part is expected to fail; below about 2 the margin is thin when the load is known only roughly",
+    title:
+      "Safety factor n = strength / working stress: below 1 the part is expected to fail; below about 2 the margin is thin when the load is known only roughly",
     publication: "General machine-design convention; the thresholds are choices, not standard values",
   },
 } as const satisfies Record<string, Source>;

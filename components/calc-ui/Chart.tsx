@@ -67,7 +67,23 @@ function tickText(value: number): string {
 }
 
 export function Chart(props: ChartProps) {
-  const { title, summary, xLabel, yLabel, xDomain, yDomain, xLog = false, xTicks, series = [], dots = [], hLines = [], vLines = [], hBands = [], width = 640, height = 320 } = props;
+  const {
+    title,
+    summary,
+    xLabel,
+    yLabel,
+    xDomain,
+    yDomain,
+    xLog = false,
+    xTicks,
+    series = [],
+    dots = [],
+    hLines = [],
+    vLines = [],
+    hBands = [],
+    width = 640,
+    height = 320,
+  } = props;
   const m = { top: 12, right: 16, bottom: 44, left: 56 };
   const x = scale(xDomain, [m.left, width - m.right], xLog);
   const y = scale(yDomain, [height - m.bottom, m.top]);
@@ -94,17 +110,25 @@ export function Chart(props: ChartProps) {
           {ticks(yDomain[0], yDomain[1], 6).map((t) => (
             <g key={`y${t}`}>
               <line x1={m.left} x2={width - m.right} y1={y(t)} y2={y(t)} />
-              <text x={m.left - 6} y={y(t)} dy="0.32em" text-anchor="end">{tickText(t)}</text>
+              <text x={m.left - 6} y={y(t)} dy="0.32em" text-anchor="end">
+                {tickText(t)}
+              </text>
             </g>
           ))}
           {(xTicks ?? ticks(xDomain[0], xDomain[1], 6)).map((t) => (
             <g key={`x${t}`}>
               <line x1={x(t)} x2={x(t)} y1={m.top} y2={bottom} />
-              <text x={x(t)} y={bottom + 16} text-anchor="middle">{tickText(t)}</text>
+              <text x={x(t)} y={bottom + 16} text-anchor="middle">
+                {tickText(t)}
+              </text>
             </g>
           ))}
-          <text class="chart-axis-label" x={(m.left + width - m.right) / 2} y={height - 6} text-anchor="middle">{xLabel}</text>
-          <text class="chart-axis-label" transform={`translate(14 ${(m.top + bottom) / 2}) rotate(-90)`} text-anchor="middle">{yLabel}</text>
+          <text class="chart-axis-label" x={(m.left + width - m.right) / 2} y={height - 6} text-anchor="middle">
+            {xLabel}
+          </text>
+          <text class="chart-axis-label" transform={`translate(14 ${(m.top + bottom) / 2}) rotate(-90)`} text-anchor="middle">
+            {yLabel}
+          </text>
         </g>
         <g clip-path={`url(#${clipId})`} aria-hidden="true">
           {hLines.map((l) => (

@@ -23,7 +23,7 @@ export function QuantityField({ idPrefix, name, spec, text, reading, system, ext
   const id = `${idPrefix}-${name}`;
   const unit = UNITS[fieldUnit(spec, system)].symbol;
   const current = reading.value;
-  const error = !current.ok ? current.error.message : extraError ?? null;
+  const error = !current.ok ? current.error.message : (extraError ?? null);
   const describedBy = [spec.help ? `${id}-help` : "", error ? `${id}-error` : ""].filter(Boolean).join(" ") || undefined;
   return (
     <div class={`field${error ? " field--error" : ""}`}>

@@ -45,13 +45,7 @@ export function Toolbar({ idPrefix, system, onSystem, link, designSection }: Too
         <legend>Units</legend>
         {(["metric", "us"] as const).map((option) => (
           <label key={option}>
-            <input
-              type="radio"
-              name={`${idPrefix}-units`}
-              value={option}
-              checked={system.value === option}
-              onChange={() => onSystem(option)}
-            />
+            <input type="radio" name={`${idPrefix}-units`} value={option} checked={system.value === option} onChange={() => onSystem(option)} />
             <span>{option === "metric" ? "Metric" : "US"}</span>
           </label>
         ))}

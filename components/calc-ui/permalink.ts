@@ -52,7 +52,9 @@ export function decodeState(specs: InputSpecs, search: string, scope = "", extra
 
   const version = params.get("v");
   if (version !== null && version !== String(PERMALINK_VERSION) && scope === "") {
-    notices.push(`This link says format version ${quote(version)}; this page reads version ${PERMALINK_VERSION}. Values were read where they made sense; check them.`);
+    notices.push(
+      `This link says format version ${quote(version)}; this page reads version ${PERMALINK_VERSION}. Values were read where they made sense; check them.`,
+    );
   }
   for (const [fullKey, value] of params) {
     if (fullKey === "v") continue;

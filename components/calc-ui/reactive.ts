@@ -234,7 +234,8 @@ hooks.__r = (vnode) => {
   stopRenderTracking();
   const component = (vnode as ComponentVNode).__c;
   if (inBrowser && component) {
-    const observer = (component.__w ??= { deps: new Set(), stale: () => component.setState({}) });
+    component.__w ??= { deps: new Set(), stale: () => component.setState({}) };
+    const observer = component.__w;
     unsubscribe(observer);
     tracking = rendering = observer;
   }

@@ -62,7 +62,14 @@ function Summary({ model }: { model: BuildSheetModel }) {
   const counts = { holds: 0, marginal: 0, fails: 0, info: 0 };
   for (const r of model.results.value) counts[r.status] += 1;
   const overall = model.overall.value;
-  const text = overall === "empty" ? "Nothing to check yet" : overall === "fails" ? "At least one check fails" : overall === "marginal" ? "Everything holds or is marginal" : "Every check holds";
+  const text =
+    overall === "empty"
+      ? "Nothing to check yet"
+      : overall === "fails"
+        ? "At least one check fails"
+        : overall === "marginal"
+          ? "Everything holds or is marginal"
+          : "Every check holds";
   return (
     <p class={`verdict verdict--${overall === "fails" ? "bad" : overall === "marginal" ? "warn" : "ok"}`} data-out="overall">
       <strong>{text}.</strong> {counts.holds} hold, {counts.marginal} marginal, {counts.fails} fail, {counts.info} for information.
@@ -200,7 +207,13 @@ export default function BuildSheet() {
       <section class="sheet-head" aria-label="Design">
         <div class="field">
           <label for="design-name">Design name</label>
-          <input id="design-name" type="text" value={design.name} maxLength={80} onInput={(e) => model.edit({ name: (e.currentTarget as HTMLInputElement).value })} />
+          <input
+            id="design-name"
+            type="text"
+            value={design.name}
+            maxLength={80}
+            onInput={(e) => model.edit({ name: (e.currentTarget as HTMLInputElement).value })}
+          />
         </div>
         <p class="print-only">
           <strong>{design.name}</strong>
@@ -232,7 +245,15 @@ export default function BuildSheet() {
           <button type="button" class="button button--quiet" onClick={() => fileInput.current?.click()}>
             Import file
           </button>
-          <input ref={fileInput} type="file" accept=".json,application/json" class="visually-hidden" tabIndex={-1} aria-label="Design file to import" onChange={importFile} />
+          <input
+            ref={fileInput}
+            type="file"
+            accept=".json,application/json"
+            class="visually-hidden"
+            tabIndex={-1}
+            aria-label="Design file to import"
+            onChange={importFile}
+          />
           <button type="button" class="button button--quiet" onClick={() => window.print()}>
             Print
           </button>
@@ -282,7 +303,13 @@ export default function BuildSheet() {
       ) : null}
       <div class="field no-print">
         <label for="design-notes">Notes</label>
-        <textarea id="design-notes" rows={3} maxLength={4000} value={design.notes} onInput={(e) => model.edit({ notes: (e.currentTarget as HTMLTextAreaElement).value })} />
+        <textarea
+          id="design-notes"
+          rows={3}
+          maxLength={4000}
+          value={design.notes}
+          onInput={(e) => model.edit({ notes: (e.currentTarget as HTMLTextAreaElement).value })}
+        />
       </div>
       {design.notes ? <p class="print-only">Notes: {design.notes}</p> : null}
       <DesignList model={model} />

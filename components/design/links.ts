@@ -59,13 +59,17 @@ export function calculatorLink(design: Design, section: DesignSection, index: nu
       break;
     }
     case "drivetrain":
-      query = design.drivetrain ? `${permalinkQuery(drivetrainInputs, design.drivetrain as unknown as Record<string, number>, system)}&${DRIVE_TYPE_URL_KEY}=${design.drivetrain.driveType}` : null;
+      query = design.drivetrain
+        ? `${permalinkQuery(drivetrainInputs, design.drivetrain as unknown as Record<string, number>, system)}&${DRIVE_TYPE_URL_KEY}=${design.drivetrain.driveType}`
+        : null;
       break;
     case "mass": {
       const mass = design.mass;
       if (!mass) break;
       const unit = system === "us" ? "in" : "mm";
-      const points = mass.candidates.map((p) => `${formatNumber(fromSI(p.x, unit), 6).replace("−", "-")},${formatNumber(fromSI(p.y, unit), 6).replace("−", "-")}`).join(";");
+      const points = mass.candidates
+        .map((p) => `${formatNumber(fromSI(p.x, unit), 6).replace("−", "-")},${formatNumber(fromSI(p.y, unit), 6).replace("−", "-")}`)
+        .join(";");
       const params = new URLSearchParams(permalinkQuery(massBalanceInputs, mass.scalars, system));
       params.set("l", encodeLayout(mass.parts));
       if (points) {

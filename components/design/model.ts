@@ -102,7 +102,10 @@ export function createBuildSheetModel(storage: Storage | null) {
     const c = conflict.value;
     conflict.value = null;
     if (!c || choice === "cancel") return;
-    if (choice === "both") return addToStore({ ...c.design, name: uniqueName(store.value, c.design.name) });
+    if (choice === "both") {
+      addToStore({ ...c.design, name: uniqueName(store.value, c.design.name) });
+      return;
+    }
     const design = { ...c.design, modified: new Date().toISOString() };
     persist({ designs: store.value.designs.map((d) => (d.id === c.existingId ? { id: d.id, design } : d)), activeId: c.existingId });
     show(design, "saved", c.existingId);
@@ -129,7 +132,10 @@ export function createBuildSheetModel(storage: Storage | null) {
     const entry = store.value.designs.find((d) => d.id === id);
     if (!entry) return;
     const stamp = new Date().toISOString();
-    const copy: SavedDesign = { id: newId(), design: { ...entry.design, name: uniqueName(store.value, `${entry.design.name} (copy)`), created: stamp, modified: stamp } };
+    const copy: SavedDesign = {
+      id: newId(),
+      design: { ...entry.design, name: uniqueName(store.value, `${entry.design.name} (copy)`), created: stamp, modified: stamp },
+    };
     persist({ ...store.value, designs: [...store.value.designs, copy] });
     status.value = `Duplicated as “${copy.design.name}”.`;
   }
@@ -139,7 +145,7 @@ export function createBuildSheetModel(storage: Storage | null) {
     if (index < 0) return;
     const entry = store.value.designs[index]!;
     const designs = store.value.designs.filter((d) => d.id !== id);
-    persist({ designs, activeId: store.value.activeId === id ? designs[0]?.id ?? null : store.value.activeId });
+    persist({ designs, activeId: store.value.activeId === id ? (designs[0]?.id ?? null) : store.value.activeId });
     if (current.value.id === id) current.value = { ...current.value, origin: "new", id: null };
     undo.value = { entry, index };
     status.value = `Deleted “${entry.design.name}”.`;
@@ -170,7 +176,8 @@ export function createBuildSheetModel(storage: Storage | null) {
       messages.value = [`${fileName} could not be opened: ${describeProblems(reading.problems).join(" ")}`];
       return;
     }
-    messages.value = reading.migratedFrom !== null ? [`${fileName} was written by an older version (${reading.migratedFrom}) and has been brought up to date.`] : [];
+    messages.value =
+      reading.migratedFrom !== null ? [`${fileName} was written by an older version (${reading.migratedFrom}) and has been brought up to date.`] : [];
     problems.value = describeProblems(reading.problems);
     show(reading.design, "file");
     status.value = `Opened ${fileName}. It is not saved in this browser until you save it.`;

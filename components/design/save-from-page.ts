@@ -84,7 +84,7 @@ export function withSection(design: Design, section: DesignSection, query: strin
       const layout = parseLayout(params.get("l") ?? "");
       if (!layout.ok && layout.parts.length === 0) return { error: "the parts list in the page address could not be read." };
       const system: UnitSystem = params.get("u") === "us" ? "us" : "metric";
-      const points = params.get("pts") ? readPoints(params.get("pts")!, system).points ?? [] : [];
+      const points = params.get("pts") ? (readPoints(params.get("pts")!, system).points ?? []) : [];
       return { ...design, mass: { scalars: read.values, parts: layout.parts, candidates: points }, modified: stamp };
     }
     default:

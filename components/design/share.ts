@@ -47,11 +47,15 @@ export function designFromFragment(fragment: string): FragmentReading {
   const text = fragment.replace(/^#/, "").trim();
   if (!/^d\d/.test(text)) return { kind: "none" };
   if (!text.startsWith(PREFIX)) {
-    return { kind: "broken", message: "This link holds a design in a format this handbook does not know (perhaps from a newer version). Ask for the design file instead." };
+    return {
+      kind: "broken",
+      message: "This link holds a design in a format this handbook does not know (perhaps from a newer version). Ask for the design file instead.",
+    };
   }
   const [lengthText, data = "", sum = ""] = text.slice(PREFIX.length).split(".");
   const length = Number(lengthText);
-  if (!Number.isInteger(length) || length <= 0) return { kind: "broken", message: "This design link is damaged: its length field is missing. Ask for the link again, or for the design file." };
+  if (!Number.isInteger(length) || length <= 0)
+    return { kind: "broken", message: "This design link is damaged: its length field is missing. Ask for the link again, or for the design file." };
   if (data.length < length || sum.length < 8) {
     return {
       kind: "broken",
@@ -59,7 +63,10 @@ export function designFromFragment(fragment: string): FragmentReading {
     };
   }
   if (data.length !== length || !/^[A-Za-z0-9_-]+$/.test(data) || checksum(data) !== sum.slice(0, 8)) {
-    return { kind: "broken", message: "This design link is damaged: its check digits do not match its contents. Ask for the link again, or for the design file." };
+    return {
+      kind: "broken",
+      message: "This design link is damaged: its check digits do not match its contents. Ask for the link again, or for the design file.",
+    };
   }
   try {
     return { kind: "design", reading: readDesignText(strFromU8(inflateSync(fromBase64Url(data)))) };

@@ -32,13 +32,19 @@ export function loadStore(storage: Storage): { store: DesignStore; warning: stri
       if (typeof e.id === "string" && reading.ok) designs.push({ id: e.id, design: reading.design });
       else dropped += 1;
     }
-    const activeId = typeof parsed.activeId === "string" && designs.some((d) => d.id === parsed.activeId) ? parsed.activeId : designs[0]?.id ?? null;
+    const activeId = typeof parsed.activeId === "string" && designs.some((d) => d.id === parsed.activeId) ? parsed.activeId : (designs[0]?.id ?? null);
     if (dropped > 0) storage.setItem(`${STORE_KEY}.unreadable.${Date.now()}`, raw);
-    return { store: { designs, activeId }, warning: dropped > 0 ? `${dropped} saved design(s) could not be read; a copy of the stored data was kept aside in this browser.` : null };
+    return {
+      store: { designs, activeId },
+      warning: dropped > 0 ? `${dropped} saved design(s) could not be read; a copy of the stored data was kept aside in this browser.` : null,
+    };
   } catch {
     storage.setItem(`${STORE_KEY}.unreadable.${Date.now()}`, raw);
     storage.removeItem(STORE_KEY);
-    return { store: { designs: [], activeId: null }, warning: "The saved designs in this browser could not be read; a copy of the stored data was kept aside." };
+    return {
+      store: { designs: [], activeId: null },
+      warning: "The saved designs in this browser could not be read; a copy of the stored data was kept aside.",
+    };
   }
 }
 

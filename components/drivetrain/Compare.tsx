@@ -41,7 +41,11 @@ function VariantEditor({ model, variant, index, idPrefix, type }: { model: SpinU
           </button>
         </div>
       ))}
-      {error && !changed.includes(error.field as Name) ? <p class="field-error" role="alert">{error.message}</p> : null}
+      {error && !changed.includes(error.field as Name) ? (
+        <p class="field-error" role="alert">
+          {error.message}
+        </p>
+      ) : null}
       <div class="dt-row">
         {chosen ? (
           <>
@@ -73,7 +77,12 @@ export function Compare({ model, idPrefix }: { model: SpinUpModel; idPrefix: str
   const type = model.driveType.value;
   const system = model.fields.system.value;
   const cmp = model.comparison.value;
-  const rows = cmp ? [{ result: cmp.base, changes: "—", error: null }, ...cmp.variants.map((v, i) => ({ result: v.result, error: v.error, changes: describe(variants[i]!, type) }))] : [];
+  const rows = cmp
+    ? [
+        { result: cmp.base, changes: "—", error: null },
+        ...cmp.variants.map((v, i) => ({ result: v.result, error: v.error, changes: describe(variants[i]!, type) })),
+      ]
+    : [];
   const shown = rows.map((row, i) => ({ ...row, i })).filter((row) => row.result);
   const end = Math.max(0, ...shown.map((row) => row.result!.endTime));
   const top = Math.max(0, ...shown.map((row) => Math.max(row.result!.topSpeed, row.result!.targetSpeed)));

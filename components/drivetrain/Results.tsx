@@ -43,7 +43,8 @@ function Verdict({ r }: { r: SpinUpResult }) {
   }
   return (
     <p class="verdict verdict--ok">
-      <strong>Reaches the target.</strong> {target} in {seconds(r.timeToTarget!)}; it tops out at {rpm(r.topSpeed)} ({settled}), {percent(r.topSpeed / r.targetSpeed - 1)} above the target.
+      <strong>Reaches the target.</strong> {target} in {seconds(r.timeToTarget!)}; it tops out at {rpm(r.topSpeed)} ({settled}),{" "}
+      {percent(r.topSpeed / r.targetSpeed - 1)} above the target.
     </p>
   );
 }
@@ -128,7 +129,9 @@ export function Results({ r, input, system }: { r: SpinUpResult; input: Drivetra
             </tr>
             {losses.map(([label, key, value]) => (
               <tr key={key}>
-                <th scope="row" class="dt-indent">Lost: {label}</th>
+                <th scope="row" class="dt-indent">
+                  Lost: {label}
+                </th>
                 <td data-out={`energy-${key}`}>{q(value, "energy")}</td>
               </tr>
             ))}
@@ -156,9 +159,20 @@ function RegimeStrip({ r }: { r: SpinUpResult }) {
   const present = [...new Set(r.regimes.map((s) => s.regime))];
   return (
     <figure class="chart dt-strip">
-      <svg viewBox={`0 0 ${WIDTH} 28`} role="img" aria-label={`Limiting regime over time: ${r.regimes.map((s) => `${REGIME_NAME[s.regime]} from ${formatNumber(s.start)} s to ${formatNumber(s.end)} s`).join("; ")}.`}>
+      <svg
+        viewBox={`0 0 ${WIDTH} 28`}
+        role="img"
+        aria-label={`Limiting regime over time: ${r.regimes.map((s) => `${REGIME_NAME[s.regime]} from ${formatNumber(s.start)} s to ${formatNumber(s.end)} s`).join("; ")}.`}
+      >
         {r.regimes.map((s) => (
-          <rect key={s.start} class={REGIME_CLASS(s.regime)} x={x(s.start).toFixed(1)} width={Math.max(1, x(s.end) - x(s.start)).toFixed(1)} y="4" height="20" />
+          <rect
+            key={s.start}
+            class={REGIME_CLASS(s.regime)}
+            x={x(s.start).toFixed(1)}
+            width={Math.max(1, x(s.end) - x(s.start)).toFixed(1)}
+            y="4"
+            height="20"
+          />
         ))}
       </svg>
       <figcaption>

@@ -52,7 +52,9 @@ function SweepResults({ state, target, system }: { state: Done; target: number; 
   return (
     <>
       <p class="verdict verdict--ok" data-out="sweep-optimum">
-        <strong>Best {spec.label.toLowerCase()}: {show(best.value)}.</strong>{" "}
+        <strong>
+          Best {spec.label.toLowerCase()}: {show(best.value)}.
+        </strong>{" "}
         {state.optimumBy === "time-to-target"
           ? `It reaches the target soonest, in ${fmt(best.timeToTarget!, "time", system)} (shortest time to target of the values swept).`
           : `No value reaches the target; this one tops out highest, at ${rpm(best.topSpeed)}.`}
@@ -76,7 +78,7 @@ function SweepResults({ state, target, system }: { state: Done; target: number; 
         yLabel="Top speed (1000 rpm)"
         xDomain={xDomain}
         yDomain={[0, Math.max(radPerSecondToRpm(target) / 1000, ...tops) * 1.08]}
-        series={[{ label: "Top speed", points: state.points.map((p, i) => [xs[i]!, tops[i]!] as const), className: "plot-curve-2" }]}
+        series={[{ label: "Top speed", points: state.points.map((_p, i) => [xs[i]!, tops[i]!] as const), className: "plot-curve-2" }]}
         hLines={[{ value: radPerSecondToRpm(target) / 1000, label: "Target speed", className: "plot-limit plot-dashed" }]}
         vLines={marker}
       />
@@ -95,7 +97,10 @@ function SweepResults({ state, target, system }: { state: Done; target: number; 
             <tbody>
               {state.points.map((p) => (
                 <tr key={p.value} class={p.isOptimum ? "dt-best" : undefined}>
-                  <th scope="row">{show(p.value)}{p.isOptimum ? " (best)" : ""}</th>
+                  <th scope="row">
+                    {show(p.value)}
+                    {p.isOptimum ? " (best)" : ""}
+                  </th>
                   <td>{p.timeToTarget === null ? "not reached" : fmt(p.timeToTarget, "time", system)}</td>
                   <td>{rpm(p.topSpeed)}</td>
                   <td>{formatNumber(p.peakBatteryCurrent)} A</td>
@@ -131,7 +136,15 @@ export function Sweep({ model, idPrefix }: { model: SpinUpModel; idPrefix: strin
           </select>
         </div>
         <QuantityField idPrefix={idPrefix} name="sweepFrom" spec={sweepSpec(parameter, "from")} text={s.from} reading={s.fromReading} system={system} />
-        <QuantityField idPrefix={idPrefix} name="sweepTo" spec={sweepSpec(parameter, "to")} text={s.to} reading={s.toReading} system={system} extraError={s.rangeError.value} />
+        <QuantityField
+          idPrefix={idPrefix}
+          name="sweepTo"
+          spec={sweepSpec(parameter, "to")}
+          text={s.to}
+          reading={s.toReading}
+          system={system}
+          extraError={s.rangeError.value}
+        />
         <QuantityField idPrefix={idPrefix} name="sweepPoints" spec={POINTS_SPEC} text={s.points} reading={s.pointsReading} system={system} />
       </div>
       <div class="dt-row">

@@ -84,11 +84,25 @@ export const SWEEPABLE: readonly Name[] = [
 ];
 
 /** The sweep's point count, declared like any other input. */
-export const POINTS_SPEC: InputSpec = { label: "Points", kind: "count", min: 2, max: 200, integer: true, default: 50, urlKey: "n", help: "How many values to simulate, 2 to 200." };
+export const POINTS_SPEC: InputSpec = {
+  label: "Points",
+  kind: "count",
+  min: 2,
+  max: 200,
+  integer: true,
+  default: 50,
+  urlKey: "n",
+  help: "How many values to simulate, 2 to 200.",
+};
 
 /** The from/to field of a sweep over `name`: the input's own kind, range and units. */
 export function sweepSpec(name: Name, end: "from" | "to"): InputSpec {
-  return { ...SPECS[name], label: end === "from" ? "From" : "To", urlKey: end, help: end === "from" ? "First value of the sweep." : "Last value of the sweep." };
+  return {
+    ...SPECS[name],
+    label: end === "from" ? "From" : "To",
+    urlKey: end,
+    help: end === "from" ? "First value of the sweep." : "Last value of the sweep.",
+  };
 }
 
 /** An SI value as field text in the field's unit for `system`, to 4 significant figures. */
@@ -473,8 +487,10 @@ export function createSpinUpModel(system: UnitSystem = "metric") {
     for (const [key, value] of entries) {
       const full = `${SWEEP_SCOPE}.${key}`;
       if (given.has(key)) extra.push(`The link sets ${quote(full)} more than once; the first value was used.`);
-      else if (!["p", "from", "to", "n"].includes(key)) extra.push(`The link has a parameter ${quote(full)} that this calculator does not use; it was ignored.`);
-      else if (value.length > MAX_VALUE_LENGTH) extra.push(`The link's value for ${quote(full)} is longer than ${MAX_VALUE_LENGTH} characters; it was ignored.`);
+      else if (!["p", "from", "to", "n"].includes(key))
+        extra.push(`The link has a parameter ${quote(full)} that this calculator does not use; it was ignored.`);
+      else if (value.length > MAX_VALUE_LENGTH)
+        extra.push(`The link's value for ${quote(full)} is longer than ${MAX_VALUE_LENGTH} characters; it was ignored.`);
       else given.set(key, value);
     }
     const key = given.get("p");
@@ -507,7 +523,8 @@ export function createSpinUpModel(system: UnitSystem = "metric") {
     for (const key of [...params.keys()]) if (mine.test(key)) params.delete(key);
     const compact = (text: string) => text.replace(/\s+/g, "");
     list.forEach((variant, i) => {
-      for (const name of variant.changed.value) if (applies(name, type)) params.set(`${VARIANT_KEYS[i]}.${SPECS[name].urlKey}`, compact(variant.fields.texts[name].value));
+      for (const name of variant.changed.value)
+        if (applies(name, type)) params.set(`${VARIANT_KEYS[i]}.${SPECS[name].urlKey}`, compact(variant.fields.texts[name].value));
     });
     if (sweepOn.value) {
       params.set(`${SWEEP_SCOPE}.p`, SPECS[sweepParameter.value].urlKey);

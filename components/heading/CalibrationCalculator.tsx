@@ -67,14 +67,26 @@ function DataField({ model, id }: { model: CalibrationModel; id: string }) {
           onFocus={() => void model.loadTextReader()}
           onInput={(event) => (model.text.value = (event.currentTarget as HTMLTextAreaElement).value)}
         />
-        <p class="field-help" id={`${id}-data-help`}>Commas, semicolons, tabs or spaces; a header line may name the units; # starts a comment.</p>
-        {message ? <p class="field-error" id={`${id}-data-error`} role="alert">{message}</p> : null}
+        <p class="field-help" id={`${id}-data-help`}>
+          Commas, semicolons, tabs or spaces; a header line may name the units; # starts a comment.
+        </p>
+        {message ? (
+          <p class="field-error" id={`${id}-data-error`} role="alert">
+            {message}
+          </p>
+        ) : null}
       </div>
       <div class={`field${fileError ? " field--error" : ""}`}>
         <label for={`${id}-file`}>Or load a .csv or .txt file</label>
         <input id={`${id}-file`} type="file" accept=".csv,.txt,.tsv,text/csv,text/plain" aria-describedby={`${id}-file-help`} onChange={readFile} />
-        <p class="field-help" id={`${id}-file-help`}>The file is read in this browser; nothing is uploaded.</p>
-        {fileError ? <p class="field-error" role="alert">{fileError}</p> : null}
+        <p class="field-help" id={`${id}-file-help`}>
+          The file is read in this browser; nothing is uploaded.
+        </p>
+        {fileError ? (
+          <p class="field-error" role="alert">
+            {fileError}
+          </p>
+        ) : null}
       </div>
     </fieldset>
   );
@@ -84,12 +96,21 @@ function UnitSelect<K extends string>({ id, label, options, value }: { id: strin
   return (
     <div class="field">
       <label for={id}>{label}</label>
-      <select id={id} aria-describedby={`${id}-help`} value={value.value} onChange={(event) => (value.value = (event.currentTarget as HTMLSelectElement).value as K)}>
+      <select
+        id={id}
+        aria-describedby={`${id}-help`}
+        value={value.value}
+        onChange={(event) => (value.value = (event.currentTarget as HTMLSelectElement).value as K)}
+      >
         {(Object.keys(options) as K[]).map((key) => (
-          <option key={key} value={key}>{key === "g" ? "g (standard gravity)" : key === "m/s2" ? "m/s²" : key}</option>
+          <option key={key} value={key}>
+            {key === "g" ? "g (standard gravity)" : key === "m/s2" ? "m/s²" : key}
+          </option>
         ))}
       </select>
-      <p class="field-help" id={`${id}-help`}>Used when the header names no unit.</p>
+      <p class="field-help" id={`${id}-help`}>
+        Used when the header names no unit.
+      </p>
     </div>
   );
 }
@@ -133,7 +154,11 @@ function Results({ model, id }: { model: CalibrationModel; id: string }) {
   const skippedList = skipped.length ? (
     <>
       <h3>Lines skipped</h3>
-      <ul class="calc-list" data-out="skipped">{skipped.map((s, i) => <li key={i}>{s}</li>)}</ul>
+      <ul class="calc-list" data-out="skipped">
+        {skipped.map((s, i) => (
+          <li key={i}>{s}</li>
+        ))}
+      </ul>
     </>
   ) : null;
   if (!fit) {
@@ -155,7 +180,10 @@ function Results({ model, id }: { model: CalibrationModel; id: string }) {
   ] as const;
   return (
     <div class="calc-results" aria-live="polite">
-      <Verdict tone={handoff ? (fit.spikes.flagged.length ? "warn" : "ok") : "bad"} title={handoff ? `Radius ${len(fit.radius)}, offset ${acc(fit.bias)}` : "No usable radius"}>
+      <Verdict
+        tone={handoff ? (fit.spikes.flagged.length ? "warn" : "ok") : "bad"}
+        title={handoff ? `Radius ${len(fit.radius)}, offset ${acc(fit.bias)}` : "No usable radius"}
+      >
         {handoff
           ? `From ${METHOD_NAMES[fit.method]}, ${rows.length - fit.spikes.flagged.length} of ${rows.length} readings; ${fit.spikes.flagged.length} flagged as spikes (residual beyond k = ${plain(fit.spikes.threshold)} robust σ, σ = 1.4826 × MAD).`
           : "The fitted radius is 0 or less: check which column is speed and which is reading, and their units."}
@@ -173,9 +201,15 @@ function Results({ model, id }: { model: CalibrationModel; id: string }) {
         ]}
       />
       {handoff ? (
-        <a class="button handoff" href={handoff} data-out="handoff">Use this calibration in the drift budget</a>
+        <a class="button handoff" href={handoff} data-out="handoff">
+          Use this calibration in the drift budget
+        </a>
       ) : null}
-      <DataTable id={`${id}-fits`} caption={`Every fit, with ${pct} intervals where the method gives one`} head={["Fit", "Radius", "Interval", "Offset", "Interval"]}>
+      <DataTable
+        id={`${id}-fits`}
+        caption={`Every fit, with ${pct} intervals where the method gives one`}
+        head={["Fit", "Radius", "Interval", "Offset", "Interval"]}
+      >
         {fits.map(([key, name, line]) =>
           line ? (
             <tr key={key} data-out={`fit-${key}`}>
@@ -194,14 +228,17 @@ function Results({ model, id }: { model: CalibrationModel; id: string }) {
           <ul class="calc-list" data-out="flagged">
             {fit.spikes.flagged.map((i) => (
               <li key={i}>
-                Line {lines[i]}: {inSystem(rows[i]!.angularSpeed, "angularSpeed", system, 4)}, {acc(rows[i]!.acceleration)}; residual {acc(fit.theilSen.residuals[i]!)}, {formatNumber(Math.abs(fit.spikes.modifiedZ[i]!))} robust σ from the median.
+                Line {lines[i]}: {inSystem(rows[i]!.angularSpeed, "angularSpeed", system, 4)}, {acc(rows[i]!.acceleration)}; residual{" "}
+                {acc(fit.theilSen.residuals[i]!)}, {formatNumber(Math.abs(fit.spikes.modifiedZ[i]!))} robust σ from the median.
               </li>
             ))}
           </ul>
         </>
       ) : null}
       {skippedList}
-      <p class="calc-note" data-out="read-notes">Read as: {parsed.notes.join("; ")}.</p>
+      <p class="calc-note" data-out="read-notes">
+        Read as: {parsed.notes.join("; ")}.
+      </p>
     </div>
   );
 }
@@ -213,7 +250,8 @@ function Charts({ model }: { model: CalibrationModel }) {
   const flagged = new Set(fit.spikes.flagged);
   const g = (v: number) => fromSI(v, "gn");
   const point = (i: number, y: number) => [radPerSecondToRpm(rows[i]!.angularSpeed), g(y)] as const;
-  const split = (ys: readonly number[]) => [ys.flatMap((y, i) => (flagged.has(i) ? [] : [point(i, y)])), ys.flatMap((y, i) => (flagged.has(i) ? [point(i, y)] : []))] as const;
+  const split = (ys: readonly number[]) =>
+    [ys.flatMap((y, i) => (flagged.has(i) ? [] : [point(i, y)])), ys.flatMap((y, i) => (flagged.has(i) ? [point(i, y)] : []))] as const;
   const [readings, spikes] = split(rows.map((r) => r.acceleration));
   const [residuals, spikeResiduals] = split(fit.theilSen.residuals);
   const xMax = radPerSecondToRpm(curve[curve.length - 1]!.angularSpeed);
@@ -250,7 +288,14 @@ function Charts({ model }: { model: CalibrationModel }) {
         xDomain={[0, xMax]}
         yDomain={[low - pad, high + pad]}
         height={220}
-        hBands={[{ from: g(fit.spikes.bounds.low), to: g(fit.spikes.bounds.high), label: `Within k = ${plain(fit.spikes.threshold)} robust σ of the median`, className: "plot-safe" }]}
+        hBands={[
+          {
+            from: g(fit.spikes.bounds.low),
+            to: g(fit.spikes.bounds.high),
+            label: `Within k = ${plain(fit.spikes.threshold)} robust σ of the median`,
+            className: "plot-safe",
+          },
+        ]}
         hLines={[{ value: 0, label: "Zero residual", className: "plot-marker" }]}
         dots={[
           { label: "Residual", points: residuals, className: "plot-dot" },

@@ -26,7 +26,9 @@ const DRIFT_GROUPS: FieldGroup<typeof headingDriftInputs>[] = [
   { legend: "Sensor", names: ["scaleError", "bias", "biasCorrection", "tilt", "accelerationNoise"] },
   { legend: "Plot range", names: ["lowSpeed", "highSpeed"] },
 ];
-const PAIR_GROUPS: FieldGroup<typeof opposedSensorsInputs>[] = [{ legend: "Two sensors, one each side", names: ["angularSpeed", "radius1", "radius2", "offset"] }];
+const PAIR_GROUPS: FieldGroup<typeof opposedSensorsInputs>[] = [
+  { legend: "Two sensors, one each side", names: ["angularSpeed", "radius1", "radius2", "offset"] },
+];
 
 /** A drift rate without its sign: "10 °/s". */
 const size = (v: number) => degPerSecond(v, false);
@@ -41,19 +43,27 @@ function bandText(band: RadiusBand, system: UnitSystem): string {
 function rangeText(range: SpeedRange, system: UnitSystem): string {
   const s = (v: number) => inSystem(v, "angularSpeed", system, 4);
   if (range.status === "empty") return "none: over budget at every speed";
-  const from = range.lowLimit === "standstill" ? "from standstill" : `from ${s(range.low!)}${range.lowLimit === "estimate-undefined" ? " (where an estimate starts)" : ""}`;
+  const from =
+    range.lowLimit === "standstill"
+      ? "from standstill"
+      : `from ${s(range.low!)}${range.lowLimit === "estimate-undefined" ? " (where an estimate starts)" : ""}`;
   return range.status === "unbounded-above" ? `${from} up, with no upper limit` : `${from} to ${s(range.high!)}`;
 }
 
 function DriftVerdict({ r, speed, budget }: { r: HeadingDriftResult; speed: string; budget: string }) {
   const drift = r.atSpeed.driftRate;
   if (drift === null || r.budgetMargin === null) {
-    return <Verdict tone="bad" title="No estimate">At {speed} the reading minus the firmware offset is 0 or less: there is no spin rate to integrate.</Verdict>;
+    return (
+      <Verdict tone="bad" title="No estimate">
+        At {speed} the reading minus the firmware offset is 0 or less: there is no spin rate to integrate.
+      </Verdict>
+    );
   }
   const within = r.verdict === "within-budget";
   return (
     <Verdict tone={within ? "ok" : "bad"} title={within ? "Within budget" : "Over budget"}>
-      At {speed} the heading {drift > 0 ? "runs ahead" : "falls behind"} at {size(drift)}; the driver can trim ±{budget}, {within ? `leaving ${size(r.budgetMargin)} to spare` : `${size(r.budgetMargin)} short`}.
+      At {speed} the heading {drift > 0 ? "runs ahead" : "falls behind"} at {size(drift)}; the driver can trim ±{budget},{" "}
+      {within ? `leaving ${size(r.budgetMargin)} to spare` : `${size(r.budgetMargin)} short`}.
     </Verdict>
   );
 }
@@ -91,7 +101,11 @@ function DriftResults({ model, id }: { model: DriftModel; id: string }) {
       />
       <DataTable id={`${id}-terms`} caption={`Where the drift at ${speed} comes from`} head={["Term", "Drift", "With speed"]}>
         {terms.map(([key, label, value, trend]) => (
-          <tr key={key}><th scope="row">{label}</th><td data-out={`term-${key}`}>{degPerSecond(value)}</td><td>{trend}</td></tr>
+          <tr key={key}>
+            <th scope="row">{label}</th>
+            <td data-out={`term-${key}`}>{degPerSecond(value)}</td>
+            <td>{trend}</td>
+          </tr>
         ))}
       </DataTable>
     </div>
@@ -152,9 +166,17 @@ function PairResults({ model }: { model: DriftModel }) {
         items={[
           [`Sensor 1 alone, centre ${e} toward it`, "pair-s1-toward", s1(result.towardSensor1)],
           [`Sensor 1 alone, centre ${e} away`, "pair-s1-away", s1(result.towardSensor2)],
-          ["Sensor 1 alone, worst per revolution", "pair-s1-rev", result.singleWorstPerRevolution === null ? "no estimate" : degrees(result.singleWorstPerRevolution, false)],
+          [
+            "Sensor 1 alone, worst per revolution",
+            "pair-s1-rev",
+            result.singleWorstPerRevolution === null ? "no estimate" : degrees(result.singleWorstPerRevolution, false),
+          ],
           ["The pair, (a₁ + a₂)/(r₁ + r₂)", "pair-drift", pair],
-          ["Offset found from a₁ − a₂", "pair-offset", result.towardSensor1.offsetEstimate === null ? "none" : inSystem(result.towardSensor1.offsetEstimate, "length", system)],
+          [
+            "Offset found from a₁ − a₂",
+            "pair-offset",
+            result.towardSensor1.offsetEstimate === null ? "none" : inSystem(result.towardSensor1.offsetEstimate, "length", system),
+          ],
         ]}
       />
     </div>
@@ -165,7 +187,9 @@ export default function HeadingDriftCalculator({ id = "drift-calculator" }: Head
   const model = useMemo(() => createDriftModel(), []);
   useEffect(() => {
     const stops = [syncWithUrl(model.fields), syncWithUrl(model.pair)];
-    return () => stops.forEach((stop) => stop());
+    return () => {
+      for (const stop of stops) stop();
+    };
   }, [model]);
   const link = () => {
     const { origin, pathname, search } = window.location;

@@ -58,7 +58,9 @@ function TimingResults({ model }: { model: TimingModel }) {
   const verdict = timingVerdict(result, values, inSystem(values.topSpeed, "angularSpeed", system, 4), time);
   return (
     <div class="calc-results" aria-live="polite">
-      <Verdict tone={verdict.tone} title={verdict.title}>{verdict.detail}</Verdict>
+      <Verdict tone={verdict.tone} title={verdict.title}>
+        {verdict.detail}
+      </Verdict>
       <Outputs
         items={[
           ["Loop period", "loop-period", time(result.loopPeriod)],
@@ -70,7 +72,11 @@ function TimingResults({ model }: { model: TimingModel }) {
           ["On-time for the arc wanted", "on-needed", time(result.onTimeNeeded)],
         ]}
       />
-      {result.onTimeBelowLoopPeriod ? <p class="calc-note" data-out="timer-note">The on-time is shorter than one loop period: switch the beacon from a timer, not from the loop.</p> : null}
+      {result.onTimeBelowLoopPeriod ? (
+        <p class="calc-note" data-out="timer-note">
+          The on-time is shorter than one loop period: switch the beacon from a timer, not from the loop.
+        </p>
+      ) : null}
     </div>
   );
 }
@@ -86,7 +92,8 @@ function SmoothingResults({ model, id }: { model: TimingModel; id: string }) {
   return (
     <div class="calc-results" aria-live="polite">
       <Verdict tone={result.headingErrorAfterSpinUp > 0 ? "warn" : "ok"} title={`${time(result.totalDelay)} of delay`}>
-        During the spin-up the heading falls behind at {degPerSecond(-result.driftRateDuringSpinUp, false)}; once the speed settles it is {deg(result.headingErrorAfterSpinUp)} behind, unless the firmware corrects it.
+        During the spin-up the heading falls behind at {degPerSecond(-result.driftRateDuringSpinUp, false)}; once the speed settles it is{" "}
+        {deg(result.headingErrorAfterSpinUp)} behind, unless the firmware corrects it.
       </Verdict>
       <Outputs
         items={[
@@ -103,7 +110,11 @@ function SmoothingResults({ model, id }: { model: TimingModel; id: string }) {
           ["One spike: heading error it leaves", "spike-heading", `${deg(result.spikeHeadingError)}${removed}`],
         ]}
       />
-      <DataTable id={`${id}-medians`} caption={`Median window before the average (α = ${plain(values.smoothingFactor)})`} head={["Median of", "Delay", "Error after spin-up", "One spike leaves", "Spikes in a row removed"]}>
+      <DataTable
+        id={`${id}-medians`}
+        caption={`Median window before the average (α = ${plain(values.smoothingFactor)})`}
+        head={["Median of", "Delay", "Error after spin-up", "One spike leaves", "Spikes in a row removed"]}
+      >
         {medians.map(({ medianLength, result: m }) => (
           <tr key={medianLength} data-out={`median-${medianLength}`}>
             <th scope="row">{medianLength === 1 ? "1 (none)" : medianLength}</th>
@@ -137,7 +148,13 @@ function TradeoffChart({ model }: { model: TimingModel }) {
   const error = tradeoff.map((f) => [f.smoothingFactor, fromSI(f.headingErrorAfterSpinUp, "deg")] as const);
   const noise = tradeoff.map((f) => [f.smoothingFactor, f.noiseFactor * 100] as const);
   const top = Math.max(...error.map(([, y]) => y)) * 1.05 || 1;
-  const axis = { xLog: true, xTicks: decadeTicks(tradeoff[0]!.smoothingFactor, 1), xDomain: [tradeoff[0]!.smoothingFactor, 1] as const, xLabel: "Smoothing factor α (log scale)", height: 240 };
+  const axis = {
+    xLog: true,
+    xTicks: decadeTicks(tradeoff[0]!.smoothingFactor, 1),
+    xDomain: [tradeoff[0]!.smoothingFactor, 1] as const,
+    xLabel: "Smoothing factor α (log scale)",
+    height: 240,
+  };
   const chosen = [{ value: values.smoothingFactor, label: "Chosen α", className: "plot-marker plot-dashed" }];
   return (
     <>
@@ -167,7 +184,9 @@ export default function HeadingTimingCalculator({ id = "timing-calculator" }: He
   const model = useMemo(() => createTimingModel(), []);
   useEffect(() => {
     const stops = [syncWithUrl(model.timing), syncWithUrl(model.smoothing)];
-    return () => stops.forEach((stop) => stop());
+    return () => {
+      for (const stop of stops) stop();
+    };
   }, [model]);
   const link = () => {
     const { origin, pathname, search } = window.location;

@@ -66,7 +66,12 @@ export function createCalibrationModel(system: UnitSystem = "metric", reader?: T
   /** A problem reading a file (too large, unreadable). */
   const fileError = signal<string | null>(null);
   /** Text this model wrote, with its units for bare numbers and the reading the reader would give. */
-  const written = signal({ text: DEMO_TEXT, speedUnit: speedUnit.value, accelerationUnit: accelerationUnit.value, reading: readingOfWrittenRows(DEMO_ROWS, {}, 2) });
+  const written = signal({
+    text: DEMO_TEXT,
+    speedUnit: speedUnit.value,
+    accelerationUnit: accelerationUnit.value,
+    reading: readingOfWrittenRows(DEMO_ROWS, {}, 2),
+  });
   const readText = signal<TextReader | null>(reader ?? null);
   let loading: Promise<void> | null = null;
   /** Loads the reader (once); resolves when `parsed` reads the current text. */
@@ -80,14 +85,18 @@ export function createCalibrationModel(system: UnitSystem = "metric", reader?: T
   let last: CalibrationCsv | null = null;
   const parsed = computed(() => {
     const own = written.value;
-    if (text.value === own.text && speedUnit.value === own.speedUnit && accelerationUnit.value === own.accelerationUnit) return (last = own.reading);
+    if (text.value === own.text && speedUnit.value === own.speedUnit && accelerationUnit.value === own.accelerationUnit) {
+      last = own.reading;
+      return last;
+    }
     const read = readText.value;
     if (!read) {
       // The reader arrives in a moment and this recomputes; until then the last reading stands.
       void loadTextReader();
       return last ?? own.reading;
     }
-    return (last = read(text.value, { speedUnit: SPEED_UNITS[speedUnit.value], accelerationUnit: ACCELERATION_UNITS[accelerationUnit.value] }));
+    last = read(text.value, { speedUnit: SPEED_UNITS[speedUnit.value], accelerationUnit: ACCELERATION_UNITS[accelerationUnit.value] });
+    return last;
   });
 
   /**
@@ -139,7 +148,7 @@ export function createCalibrationModel(system: UnitSystem = "metric", reader?: T
       const [value, ...more] = own[key]!;
       if (value === undefined) return;
       if (more.length > 0) notices.push(`The link sets "${key}" more than once; the first value was used.`);
-      if (Object.prototype.hasOwnProperty.call(options, value)) target.value = value as K;
+      if (Object.hasOwn(options, value)) target.value = value as K;
       else notices.push(`The link's unit for bare ${what} is not one this page reads (use ${Object.keys(options).join(", ")}); kept ${target.value}.`);
     };
     unitFrom(SPEED_UNIT_KEY, SPEED_UNITS, speedUnit, "speeds");

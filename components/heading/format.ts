@@ -16,7 +16,8 @@ export const degPerSecond = (valueSI: number, signed = true) => signedText(signe
 export const degrees = (valueSI: number, signed = true) => signedText(signed ? valueSI : Math.abs(valueSI), "angle", "deg", signed);
 
 /** A quantity in the user's unit system. */
-export const inSystem = (valueSI: number, kind: QuantityKind, system: UnitSystem, significant = 3) => formatQuantity(valueSI, kind, { system, significant }).text;
+export const inSystem = (valueSI: number, kind: QuantityKind, system: UnitSystem, significant = 3) =>
+  formatQuantity(valueSI, kind, { system, significant }).text;
 
 /** A plain number as typed, up to 4 significant figures, no padding zeros: "3.5", "95", "99.9". */
 export const plain = (value: number) => String(Number(value.toPrecision(4)));

@@ -39,7 +39,10 @@ export function createTimingModel(system: UnitSystem = "metric") {
     try {
       const result = headingSmoothing(values);
       const windows = MEDIAN_WINDOWS.includes(values.medianLength) ? MEDIAN_WINDOWS : [...MEDIAN_WINDOWS, values.medianLength];
-      const medians = windows.map((medianLength) => ({ medianLength, result: medianLength === values.medianLength ? result : headingSmoothing({ ...values, medianLength }) }));
+      const medians = windows.map((medianLength) => ({
+        medianLength,
+        result: medianLength === values.medianLength ? result : headingSmoothing({ ...values, medianLength }),
+      }));
       return { result, error: null, medians, tradeoff: smoothingTradeoffSeries(values, { smallestFactor: Math.min(0.005, values.smoothingFactor) }) };
     } catch (error) {
       return { result: null, error: fieldMessage(error, SMOOTHING_LABELS), medians: [], tradeoff: [] };

@@ -15,7 +15,17 @@ export interface FieldGroup<S> {
   names: (keyof S & string)[];
 }
 
-export function FieldsForm<S extends InputSpecs>({ fields, groups, idPrefix, error }: { fields: FieldsModel<S>; groups: FieldGroup<S>[]; idPrefix: string; error: FieldError }) {
+export function FieldsForm<S extends InputSpecs>({
+  fields,
+  groups,
+  idPrefix,
+  error,
+}: {
+  fields: FieldsModel<S>;
+  groups: FieldGroup<S>[];
+  idPrefix: string;
+  error: FieldError;
+}) {
   return (
     <form class="calc-form" onSubmit={(event) => event.preventDefault()} noValidate>
       {groups.map((group) => (
@@ -80,11 +90,19 @@ export function Outputs({ items }: { items: readonly Output[] }) {
 export function DataTable({ id, caption, head, children }: { id: string; caption: ComponentChildren; head: readonly string[]; children: ComponentChildren }) {
   return (
     <>
-      <p class="calc-caption" id={id}>{caption}</p>
+      <p class="calc-caption" id={id}>
+        {caption}
+      </p>
       <div class="calc-table-wrap" role="region" aria-labelledby={id} tabIndex={0}>
         <table class="calc-table" aria-labelledby={id}>
           <thead>
-            <tr>{head.map((h) => <th key={h} scope="col">{h}</th>)}</tr>
+            <tr>
+              {head.map((h) => (
+                <th key={h} scope="col">
+                  {h}
+                </th>
+              ))}
+            </tr>
           </thead>
           <tbody>{children}</tbody>
         </table>

@@ -24,14 +24,18 @@ export interface ChoiceFieldProps {
 
 export function ChoiceField({ idPrefix, name, spec, value, as = "select", onPick, note, error }: ChoiceFieldProps) {
   const id = `${idPrefix}-${name}`;
-  const pick = (next: string) => (onPick ? onPick(next) : ((value as Signal<string>).value = next));
+  const pick = (next: string) => {
+    if (onPick) onPick(next);
+    else (value as Signal<string>).value = next;
+  };
   const describedBy = [spec.help || note ? `${id}-help` : "", error ? `${id}-error` : ""].filter(Boolean).join(" ") || undefined;
-  const help = spec.help || note ? (
-    <p class="field-help" id={`${id}-help`}>
-      {spec.help}
-      {note ? <strong> {note}</strong> : null}
-    </p>
-  ) : null;
+  const help =
+    spec.help || note ? (
+      <p class="field-help" id={`${id}-help`}>
+        {spec.help}
+        {note ? <strong> {note}</strong> : null}
+      </p>
+    ) : null;
   const errorLine = error ? (
     <p class="field-error" id={`${id}-error`} role="alert">
       {error}
@@ -44,7 +48,13 @@ export function ChoiceField({ idPrefix, name, spec, value, as = "select", onPick
         <legend>{spec.label}</legend>
         {options.map((option) => (
           <label key={option.value}>
-            <input type="radio" name={`${idPrefix}-${spec.urlKey}`} value={option.value} checked={value.value === option.value} onChange={() => pick(option.value)} />
+            <input
+              type="radio"
+              name={`${idPrefix}-${spec.urlKey}`}
+              value={option.value}
+              checked={value.value === option.value}
+              onChange={() => pick(option.value)}
+            />
             <span>{option.label}</span>
           </label>
         ))}

@@ -4,8 +4,8 @@
  * break, and a plot of bolt stress against speed.
  */
 import { useEffect, useMemo } from "preact/hooks";
-import { fastenerCheckInputs, type FastenerCheck } from "../../calc/loads-bolts.ts";
-import { formatNumber, radPerSecondToRpm, type UnitSystem } from "../../calc/units.ts";
+import type { fastenerCheckInputs, FastenerCheck } from "../../calc/loads-bolts.ts";
+import { formatNumber, radPerSecondToRpm } from "../../calc/units.ts";
 import { QuantityField } from "../calc-ui/QuantityField.tsx";
 import { Toolbar } from "../calc-ui/Toolbar.tsx";
 import { Notices } from "../calc-ui/Notices.tsx";
@@ -49,13 +49,17 @@ function Results({ model }: { model: FastenerModel }) {
     );
   }
   const names = strengthNames(result);
-  const governing = result.governs === "yield" ? `${names.yield}, ${q(result.yieldStrength, "stress", system)}` : `${names.ultimate}, ${q(result.ultimateStrength, "stress", system)}`;
+  const governing =
+    result.governs === "yield"
+      ? `${names.yield}, ${q(result.yieldStrength, "stress", system)}`
+      : `${names.ultimate}, ${q(result.ultimateStrength, "stress", system)}`;
   const stressName = result.mode === "shear" ? "Shear stress τ on each bolt" : "Tensile stress σ on each bolt";
   const areaName = result.mode === "shear" && result.shearPlane === "shank" ? "shank area" : "stress area A_s";
   return (
     <div class="calc-results" aria-live="polite">
       <p class={`verdict verdict--${VERDICT_TONE[result.verdict]}`} data-out="verdict">
-        <strong>{VERDICT_TITLE[result.verdict]}.</strong> Safety factor {formatNumber(result.safetyFactor)} against {governing}. Rule: {verdictRule(values.failBelow, values.marginalBelow)}.
+        <strong>{VERDICT_TITLE[result.verdict]}.</strong> Safety factor {formatNumber(result.safetyFactor)} against {governing}. Rule:{" "}
+        {verdictRule(values.failBelow, values.marginalBelow)}.
       </p>
       <Outputs
         rows={[
@@ -101,11 +105,21 @@ function StressChart({ model }: { model: FastenerModel }) {
         yLabel={`Bolt stress (${stress.symbol})`}
         xDomain={[0, radPerSecondToRpm(curve.maxSpeed)]}
         yDomain={[0, stress.of(yMax)]}
-        series={[{ label: "Stress on each bolt", points: curve.points.map((p) => [radPerSecondToRpm(p.angularSpeed), stress.of(p.stress)] as const), className: "plot-curve" }]}
+        series={[
+          {
+            label: "Stress on each bolt",
+            points: curve.points.map((p) => [radPerSecondToRpm(p.angularSpeed), stress.of(p.stress)] as const),
+            className: "plot-curve",
+          },
+        ]}
         hLines={limits.map((line) => ({ ...line, value: stress.of(line.value) }))}
         vLines={[{ value: top, label: "Operating speed", className: "plot-marker" }]}
       />
-      {above ? <p class="loads-chart-note">{above.trim()} Yield at {rpm(result.speedAtYield)}, ultimate at {rpm(result.speedAtUltimate)}.</p> : null}
+      {above ? (
+        <p class="loads-chart-note">
+          {above.trim()} Yield at {rpm(result.speedAtYield)}, ultimate at {rpm(result.speedAtUltimate)}.
+        </p>
+      ) : null}
     </>
   );
 }

@@ -4,7 +4,7 @@
  * radial and hoop stress across the radius.
  */
 import { useEffect, useMemo } from "preact/hooks";
-import { rimCheckInputs, type RimCheck } from "../../calc/loads-rims.ts";
+import type { rimCheckInputs, RimCheck } from "../../calc/loads-rims.ts";
 import { formatNumber, type UnitSystem } from "../../calc/units.ts";
 import { QuantityField } from "../calc-ui/QuantityField.tsx";
 import { Toolbar } from "../calc-ui/Toolbar.tsx";
@@ -54,7 +54,8 @@ function Results({ model }: { model: RimModel }) {
   return (
     <div class="calc-results" aria-live="polite">
       <p class={`verdict verdict--${VERDICT_TONE[result.verdict]}`} data-out="verdict">
-        <strong>{VERDICT_TITLE[result.verdict]}.</strong> Safety factor {formatNumber(result.safetyFactor)} against yield ({q(values.yieldStrength, "stress", system)}) at the peak hoop stress, {peak}. Rule: {verdictRule(values.failBelow, values.marginalBelow)}.
+        <strong>{VERDICT_TITLE[result.verdict]}.</strong> Safety factor {formatNumber(result.safetyFactor)} against yield (
+        {q(values.yieldStrength, "stress", system)}) at the peak hoop stress, {peak}. Rule: {verdictRule(values.failBelow, values.marginalBelow)}.
       </p>
       <Outputs
         rows={[
@@ -62,7 +63,11 @@ function Results({ model }: { model: RimModel }) {
           ["Peak hoop stress", "peak-stress", q(result.peakStress, "stress", system)],
           ["Where the hoop stress peaks", "peak-at", where(result, result.peakStressRadius, system)],
           ["Peak radial stress", "radial-stress", q(result.peakRadialStress, "stress", system)],
-          ["Where the radial stress peaks", "radial-at", result.shape === "thin-ring" ? "none in a thin ring" : where(result, result.peakRadialStressRadius, system)],
+          [
+            "Where the radial stress peaks",
+            "radial-at",
+            result.shape === "thin-ring" ? "none in a thin ring" : where(result, result.peakRadialStressRadius, system),
+          ],
           ["Shape factor σ / (ρv²)", "shape-factor", formatNumber(result.shapeFactor)],
           ["Safety factor against yield", "sf-yield", formatNumber(result.safetyFactorYield)],
           ["Safety factor against ultimate", "sf-ult", formatNumber(result.safetyFactorUltimate)],
@@ -98,7 +103,10 @@ function ProfileChart({ model }: { model: RimModel }) {
         { label: "Hoop stress σ_θ", points: points("hoop"), className: "plot-curve" },
         { label: "Radial stress σ_r", points: points("radial"), className: "plot-curve-2" },
       ];
-  const note = limits.length < 2 ? `The ${limits.length === 0 ? "yield and ultimate strengths lie" : "ultimate strength lies"} above this plot (safety factor ${formatNumber(result.safetyFactorYield)} against yield).` : "";
+  const note =
+    limits.length < 2
+      ? `The ${limits.length === 0 ? "yield and ultimate strengths lie" : "ultimate strength lies"} above this plot (safety factor ${formatNumber(result.safetyFactorYield)} against yield).`
+      : "";
   return (
     <>
       <Chart
@@ -134,7 +142,15 @@ export default function RimCalculator({ id = "rim-calculator", materials = [] }:
               name === "shape" ? (
                 <ChoiceField key={name} idPrefix={id} name={name} spec={model.specs.shape} value={choices.shape} as="radio" error={errorFor(name)} />
               ) : name === "material" ? (
-                <ChoiceField key={name} idPrefix={id} name={name} spec={model.specs.material} value={model.material} onPick={model.pickMaterial} error={errorFor(name)} />
+                <ChoiceField
+                  key={name}
+                  idPrefix={id}
+                  name={name}
+                  spec={model.specs.material}
+                  value={model.material}
+                  onPick={model.pickMaterial}
+                  error={errorFor(name)}
+                />
               ) : (
                 <QuantityField
                   key={name}

@@ -72,9 +72,7 @@ export function withChoices<S extends InputSpecs, C extends ChoiceSpecs>(
   choices: ChoiceSignals<C>,
   options: { urlValues?: () => Record<string, string>; apply?: (values: Partial<Record<keyof C, string>>) => void } = {},
 ): FieldsModel<S> {
-  const urlValues =
-    options.urlValues ??
-    (() => Object.fromEntries(Object.entries(specs).map(([name, spec]) => [spec.urlKey, choices[name as keyof C].value])));
+  const urlValues = options.urlValues ?? (() => Object.fromEntries(Object.entries(specs).map(([name, spec]) => [spec.urlKey, choices[name as keyof C].value])));
   return {
     ...fields,
     applyQuery(search: string) {

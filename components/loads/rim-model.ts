@@ -57,7 +57,11 @@ const MATERIAL_FIELDS = ["density", "yieldStrength", "ultimateStrength", "poisso
 /** Field values written as text keep 6 significant figures; a reading this close still matches. */
 const MATCH_RTOL = 1e-5;
 
-const LABELS: Record<string, string> = { ...Object.fromEntries(Object.entries(rimCheckInputs).map(([k, s]) => [k, s.label])), shape: "Shape", material: "Material" };
+const LABELS: Record<string, string> = {
+  ...Object.fromEntries(Object.entries(rimCheckInputs).map(([k, s]) => [k, s.label])),
+  shape: "Shape",
+  material: "Material",
+};
 
 /** The model; `materials` are the table rows offered (none: custom values only). */
 export function createRimModel(materials: readonly MaterialChoice[] = [], system: UnitSystem = "metric") {

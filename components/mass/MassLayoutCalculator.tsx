@@ -24,9 +24,22 @@ export interface MassLayoutCalculatorProps {
   layout?: string;
 }
 
-const SHAPE_NAMES = { point: "Small part (point)", disk: "Disk", ring: "Thin ring", annulus: "Thick ring (annulus)", plate: "Plate", rod: "Rod", cylinder: "Cylinder (upright)", custom: "Custom (own inertia)" };
+const SHAPE_NAMES = {
+  point: "Small part (point)",
+  disk: "Disk",
+  ring: "Thin ring",
+  annulus: "Thick ring (annulus)",
+  plate: "Plate",
+  rod: "Rod",
+  cylinder: "Cylinder (upright)",
+  custom: "Custom (own inertia)",
+};
 const MODE_NAMES: Record<ModeKey, string> = { r: "Mass at a radius", m: "Radius for a mass", p: "Best mounting point" };
-const AXES: [MirrorAxis, string][] = [["y", "the y axis (x → −x)"], ["x", "the x axis (y → −y)"], ["origin", "the centre (half turn)"]];
+const AXES: [MirrorAxis, string][] = [
+  ["y", "the y axis (x → −x)"],
+  ["x", "the x axis (y → −y)"],
+  ["origin", "the centre (half turn)"],
+];
 
 const focusLater = (id: string) => requestAnimationFrame(() => document.getElementById(id)?.focus());
 
@@ -77,82 +90,116 @@ function PartCard({ model, part, index, id, error, q }: { model: MassModel; part
         </summary>
         {/* A closed card renders no fields: the page stays light with many parts. */}
         {open ? (
-        <div class="mass-card">
-          <div class="mass-grid">
-            <div class="field mass-wide">
-              <label for={`${pid}-name`}>Name</label>
-              <input id={`${pid}-name`} type="text" maxLength={60} value={name} onInput={(e) => (part.name.value = e.currentTarget.value)} />
-            </div>
-            <div class="field mass-wide">
-              <label for={`${pid}-shape`}>Shape</label>
-              <select id={`${pid}-shape`} value={shape} onChange={(e) => (part.shape.value = e.currentTarget.value as typeof shape)}>
-                {PART_SHAPE_KINDS.map((k) => (
-                  <option key={k} value={k}>
-                    {SHAPE_NAMES[k]}
-                  </option>
-                ))}
-              </select>
-            </div>
-            {needsGivenMass(shape) ? null : (
+          <div class="mass-card">
+            <div class="mass-grid">
               <div class="field mass-wide">
-                <label for={`${pid}-src`}>Mass from</label>
-                <select id={`${pid}-src`} value={part.source.value} onChange={(e) => (part.source.value = e.currentTarget.value as typeof part.source.value)}>
-                  <option value="given">Weighed mass</option>
-                  {Object.values(MATERIALS).map((m) => (
-                    <option key={m.id} value={m.id}>
-                      {m.name}, {m.condition}
+                <label for={`${pid}-name`}>Name</label>
+                <input id={`${pid}-name`} type="text" maxLength={60} value={name} onInput={(e) => (part.name.value = e.currentTarget.value)} />
+              </div>
+              <div class="field mass-wide">
+                <label for={`${pid}-shape`}>Shape</label>
+                <select id={`${pid}-shape`} value={shape} onChange={(e) => (part.shape.value = e.currentTarget.value as typeof shape)}>
+                  {PART_SHAPE_KINDS.map((k) => (
+                    <option key={k} value={k}>
+                      {SHAPE_NAMES[k]}
                     </option>
                   ))}
                 </select>
               </div>
-            )}
-            {names.map((n) => (
-              <QuantityField
-                key={n}
-                idPrefix={pid}
-                name={n}
-                spec={PART_INPUTS[n]}
-                text={fields.texts[n]}
-                reading={fields.readings[n]}
-                system={fields.system.value}
-                extraError={mine && mine.field === n ? mine.message : null}
-              />
-            ))}
-          </div>
-          {mine && !mine.field ? <p class="field-error">{mine.message}</p> : null}
-          <div class="mass-actions">
-            <button type="button" class="button button--quiet" id={`${pid}-up`} disabled={index === 0} aria-label={`Move up: ${name}`} onClick={() => move(-1)}>
-              Move up
-            </button>
-            <button type="button" class="button button--quiet" id={`${pid}-down`} disabled={index === count - 1} aria-label={`Move down: ${name}`} onClick={() => move(1)}>
-              Move down
-            </button>
-            <button type="button" class="button button--quiet" aria-label={`Duplicate: ${name}`} onClick={() => model.duplicate(index)}>
-              Duplicate
-            </button>
-            <button type="button" class="button button--quiet" aria-label={`Remove: ${name}`} onClick={() => { model.remove(index); focusLater(`${id}-add`); }}>
-              Remove
-            </button>
-          </div>
-          <div class="mass-actions">
-            <div class="field">
-              <label for={`${pid}-axis`}>Mirror across</label>
-              <select id={`${pid}-axis`} value={axis.value} onChange={(e) => (axis.value = e.currentTarget.value as MirrorAxis)}>
-                {AXES.map(([value, label]) => (
-                  <option key={value} value={value}>
-                    {label}
-                  </option>
-                ))}
-              </select>
+              {needsGivenMass(shape) ? null : (
+                <div class="field mass-wide">
+                  <label for={`${pid}-src`}>Mass from</label>
+                  <select id={`${pid}-src`} value={part.source.value} onChange={(e) => (part.source.value = e.currentTarget.value as typeof part.source.value)}>
+                    <option value="given">Weighed mass</option>
+                    {Object.values(MATERIALS).map((m) => (
+                      <option key={m.id} value={m.id}>
+                        {m.name}, {m.condition}
+                      </option>
+                    ))}
+                  </select>
+                </div>
+              )}
+              {names.map((n) => (
+                <QuantityField
+                  key={n}
+                  idPrefix={pid}
+                  name={n}
+                  spec={PART_INPUTS[n]}
+                  text={fields.texts[n]}
+                  reading={fields.readings[n]}
+                  system={fields.system.value}
+                  extraError={mine && mine.field === n ? mine.message : null}
+                />
+              ))}
             </div>
-            <button type="button" class="button button--quiet" disabled={!!bad} aria-label={`Mirror: ${name}`} onClick={() => model.mirror(index, axis.value, false)}>
-              Mirror
-            </button>
-            <button type="button" class="button button--quiet" disabled={!!bad} aria-label={`Add mirrored copy: ${name}`} onClick={() => model.mirror(index, axis.value, true)}>
-              Add mirrored copy
-            </button>
+            {mine && !mine.field ? <p class="field-error">{mine.message}</p> : null}
+            <div class="mass-actions">
+              <button
+                type="button"
+                class="button button--quiet"
+                id={`${pid}-up`}
+                disabled={index === 0}
+                aria-label={`Move up: ${name}`}
+                onClick={() => move(-1)}
+              >
+                Move up
+              </button>
+              <button
+                type="button"
+                class="button button--quiet"
+                id={`${pid}-down`}
+                disabled={index === count - 1}
+                aria-label={`Move down: ${name}`}
+                onClick={() => move(1)}
+              >
+                Move down
+              </button>
+              <button type="button" class="button button--quiet" aria-label={`Duplicate: ${name}`} onClick={() => model.duplicate(index)}>
+                Duplicate
+              </button>
+              <button
+                type="button"
+                class="button button--quiet"
+                aria-label={`Remove: ${name}`}
+                onClick={() => {
+                  model.remove(index);
+                  focusLater(`${id}-add`);
+                }}
+              >
+                Remove
+              </button>
+            </div>
+            <div class="mass-actions">
+              <div class="field">
+                <label for={`${pid}-axis`}>Mirror across</label>
+                <select id={`${pid}-axis`} value={axis.value} onChange={(e) => (axis.value = e.currentTarget.value as MirrorAxis)}>
+                  {AXES.map(([value, label]) => (
+                    <option key={value} value={value}>
+                      {label}
+                    </option>
+                  ))}
+                </select>
+              </div>
+              <button
+                type="button"
+                class="button button--quiet"
+                disabled={!!bad}
+                aria-label={`Mirror: ${name}`}
+                onClick={() => model.mirror(index, axis.value, false)}
+              >
+                Mirror
+              </button>
+              <button
+                type="button"
+                class="button button--quiet"
+                disabled={!!bad}
+                aria-label={`Add mirrored copy: ${name}`}
+                onClick={() => model.mirror(index, axis.value, true)}
+              >
+                Add mirrored copy
+              </button>
+            </div>
           </div>
-        </div>
         ) : null}
       </details>
     </li>
@@ -191,7 +238,11 @@ export default function MassLayoutCalculator({ id = "mass-calculator", layout = 
   const applied = model.applied.value && parts.some((p) => p.key === model.applied.value!.key) ? model.applied.value : null;
   const empty = (
     <p class="calc-results--empty">
-      {error && error.part === null && error.field === null ? error.message : parts.length ? "Results appear when every field holds a valid value." : "Add a part to see results."}
+      {error && error.part === null && error.field === null
+        ? error.message
+        : parts.length
+          ? "Results appear when every field holds a valid value."
+          : "Add a part to see results."}
     </p>
   );
   const snap = (s: Snapshot) => [q(s.offset, "length"), `${mm(s.grade)} (${s.met || "over G 4000"})`, `${q(s.drift, "angle")} per rev`];
@@ -240,7 +291,8 @@ export default function MassLayoutCalculator({ id = "mass-calculator", layout = 
     balance = (
       <>
         <p class={`verdict verdict--${ratio <= 1 ? "ok" : "bad"}`} data-out="grade-verdict">
-          <strong>{ratio <= 1 ? `Meets ${chosen}.` : `Exceeds ${chosen}.`}</strong> U = {q(b.static.unbalance, "unbalance")} is {formatNumber(ratio * 100)} % of the permissible {q(b.permissible.unbalance, "unbalance")}
+          <strong>{ratio <= 1 ? `Meets ${chosen}.` : `Exceeds ${chosen}.`}</strong> U = {q(b.static.unbalance, "unbalance")} is {formatNumber(ratio * 100)} % of
+          the permissible {q(b.permissible.unbalance, "unbalance")}
           {b.gradeMet ? `; the finest grade it meets is ${b.gradeMet.label}.` : "; it is coarser than G 4000."}
         </p>
         <Outs
@@ -260,8 +312,16 @@ export default function MassLayoutCalculator({ id = "mass-calculator", layout = 
         rows={[
           ["Couple unbalance", "couple", small(b.couple.couple)],
           ["Rocking moment at speed", "rocking", q(b.couple.moment, "torque")],
-          [`Lower plane, at ${q(input.correctionRadius, "length")}`, "plane-lower", `${q(b.twoPlane.lower.mass, "mass")} at ${q(b.twoPlane.lower.angle, "angle")}`],
-          [`Upper plane, at ${q(input.correctionRadius, "length")}`, "plane-upper", `${q(b.twoPlane.upper.mass, "mass")} at ${q(b.twoPlane.upper.angle, "angle")}`],
+          [
+            `Lower plane, at ${q(input.correctionRadius, "length")}`,
+            "plane-lower",
+            `${q(b.twoPlane.lower.mass, "mass")} at ${q(b.twoPlane.lower.angle, "angle")}`,
+          ],
+          [
+            `Upper plane, at ${q(input.correctionRadius, "length")}`,
+            "plane-upper",
+            `${q(b.twoPlane.upper.mass, "mass")} at ${q(b.twoPlane.upper.angle, "angle")}`,
+          ],
         ]}
       />
     );
@@ -269,7 +329,8 @@ export default function MassLayoutCalculator({ id = "mass-calculator", layout = 
     counter = (
       <>
         <p class={`verdict verdict--${within ? "ok" : "bad"}`} data-out="offset-verdict">
-          <strong>{within ? "Within target." : "Outside target."}</strong> e = {q(L.offset, "length")}, {formatNumber((L.offset / input.targetOffset) * 100)} % of the {q(input.targetOffset, "length")} target.
+          <strong>{within ? "Within target." : "Outside target."}</strong> e = {q(L.offset, "length")}, {formatNumber((L.offset / input.targetOffset) * 100)} %
+          of the {q(input.targetOffset, "length")} target.
         </p>
         {within ? null : mode === "r" ? (
           <Outs
@@ -315,7 +376,12 @@ export default function MassLayoutCalculator({ id = "mass-calculator", layout = 
               <tbody>
                 {(() => {
                   const now = snap({ offset: L.offset, grade: b.equivalentGrade, met: b.gradeMet?.label ?? "", drift: s.driftPerRevolution });
-                  const next = snap({ offset: plan.after.offset, grade: plan.after.equivalentGrade, met: plan.after.gradeMet?.label ?? "", drift: plan.after.sensor.driftPerRevolution });
+                  const next = snap({
+                    offset: plan.after.offset,
+                    grade: plan.after.equivalentGrade,
+                    met: plan.after.gradeMet?.label ?? "",
+                    drift: plan.after.sensor.driftPerRevolution,
+                  });
                   return ["Offset e", "Grade", "Sensor drift"].map((label, i) => (
                     <tr key={label}>
                       <th scope="row">{label}</th>
@@ -416,7 +482,11 @@ export default function MassLayoutCalculator({ id = "mass-calculator", layout = 
         </fieldset>
         <div class="mass-grid">
           {field("targetOffset")}
-          {mode === "r" ? field("correctionRadius") : mode === "m" ? [field("counterweightMass"), field("maxRadius")] : (
+          {mode === "r" ? (
+            field("correctionRadius")
+          ) : mode === "m" ? (
+            [field("counterweightMass"), field("maxRadius")]
+          ) : (
             <div class={`field${pointsError ? " field--error" : ""}`}>
               <label for={`${id}-points`}>
                 Mounting points <span class="field-unit">({system === "us" ? "in" : "mm"}: x, y; x, y …)</span>
@@ -443,8 +513,8 @@ export default function MassLayoutCalculator({ id = "mass-calculator", layout = 
         {counter}
         {applied ? (
           <p class="verdict verdict--ok" role="status" data-out="applied">
-            Counterweight added: offset {snap(applied.before)[0]} → {snap(applied.after)[0]}; grade {snap(applied.before)[1]} → {snap(applied.after)[1]}; sensor drift {snap(applied.before)[2]} →{" "}
-            {snap(applied.after)[2]}.{" "}
+            Counterweight added: offset {snap(applied.before)[0]} → {snap(applied.after)[0]}; grade {snap(applied.before)[1]} → {snap(applied.after)[1]}; sensor
+            drift {snap(applied.before)[2]} → {snap(applied.after)[2]}.{" "}
             <button type="button" class="button button--quiet" onClick={model.undo}>
               Undo
             </button>

@@ -42,7 +42,9 @@ export function TopView({ drawing, sensor, counterweight, summary, system }: Top
   const third = span / 3 / unitSI;
   const p = 10 ** Math.floor(Math.log10(third));
   const bar = (third / p >= 5 ? 5 : third / p >= 2 ? 2 : 1) * p * unitSI;
-  const mark = (point: Point2, cls: string, d: (x: number, y: number) => string) => <path class={cls} d={d(X(point[0]), Y(point[1])).replace(/\d+\.\d{2,}/g, (n) => String(r(Number(n))))} />;
+  const mark = (point: Point2, cls: string, d: (x: number, y: number) => string) => (
+    <path class={cls} d={d(X(point[0]), Y(point[1])).replace(/\d+\.\d{2,}/g, (n) => String(r(Number(n))))} />
+  );
   return (
     <figure class="mass-top">
       <svg viewBox={`0 0 ${SIZE} ${SIZE + 28}`} role="img" aria-label={`Top view of the layout, to scale. ${summary}`}>
@@ -53,7 +55,14 @@ export function TopView({ drawing, sensor, counterweight, summary, system }: Top
             case "hoop":
               return <path key={index} class={`mv-part${o.kind === "hoop" ? " mv-hoop" : ""}`} d={circle(cx, cy, o.radius)} />;
             case "annulus":
-              return <path key={index} class="mv-part mv-fill" fill-rule="evenodd" d={circle(cx, cy, o.outerRadius) + (o.innerRadius > 0 ? circle(cx, cy, o.innerRadius) : "")} />;
+              return (
+                <path
+                  key={index}
+                  class="mv-part mv-fill"
+                  fill-rule="evenodd"
+                  d={circle(cx, cy, o.outerRadius) + (o.innerRadius > 0 ? circle(cx, cy, o.innerRadius) : "")}
+                />
+              );
             case "polygon":
               return <path key={index} class="mv-part mv-fill" d={`M${o.corners.map(([x, y]) => `${X(x)},${Y(y)}`).join("L")}Z`} />;
             case "segment":
@@ -73,10 +82,30 @@ export function TopView({ drawing, sensor, counterweight, summary, system }: Top
       </svg>
       <figcaption>
         <ul class="mass-key">
-          <li><span class="mv-key-geo" aria-hidden="true">+</span> geometric centre</li>
-          <li><span class="mv-key-com" aria-hidden="true">●</span> centre of mass</li>
-          <li><span class="mv-key-sensor" aria-hidden="true">◆</span> sensor</li>
-          <li><span class="mv-key-cw" aria-hidden="true">◌</span> counterweight</li>
+          <li>
+            <span class="mv-key-geo" aria-hidden="true">
+              +
+            </span>{" "}
+            geometric centre
+          </li>
+          <li>
+            <span class="mv-key-com" aria-hidden="true">
+              ●
+            </span>{" "}
+            centre of mass
+          </li>
+          <li>
+            <span class="mv-key-sensor" aria-hidden="true">
+              ◆
+            </span>{" "}
+            sensor
+          </li>
+          <li>
+            <span class="mv-key-cw" aria-hidden="true">
+              ◌
+            </span>{" "}
+            counterweight
+          </li>
         </ul>
         {summary}
       </figcaption>

@@ -43,14 +43,18 @@ export interface MassError {
 /** Reads "55, 0; 0, 55" (x, y pairs in the length unit, or with units) into mounting points. */
 export function readPoints(text: string, system: UnitSystem): { points: MountingPoint[] | null; error: string | null } {
   const items = text.split(";").filter((item) => item.trim() !== "");
-  if (items.length === 0 || items.length > MAX_POINTS) return { points: null, error: `Enter 1 to ${MAX_POINTS} points, as x, y pairs separated by semicolons.` };
+  if (items.length === 0 || items.length > MAX_POINTS)
+    return { points: null, error: `Enter 1 to ${MAX_POINTS} points, as x, y pairs separated by semicolons.` };
   const points: MountingPoint[] = [];
   for (const [i, item] of items.entries()) {
     const xy = item.split(",");
     const read = xy.map((t) => readField(POINT, t, system));
     const bad = read.find((r) => !r.ok);
     if (xy.length !== 2 || bad) {
-      return { points: null, error: `Point ${i + 1} must be two coordinates, x and y, separated by a comma${bad && !bad.ok ? ` (${bad.error.message})` : ""}.` };
+      return {
+        points: null,
+        error: `Point ${i + 1} must be two coordinates, x and y, separated by a comma${bad && !bad.ok ? ` (${bad.error.message})` : ""}.`,
+      };
     }
     points.push({ x: (read[0] as { value: number }).value, y: (read[1] as { value: number }).value });
   }
@@ -140,14 +144,19 @@ export function createMassModel(system: UnitSystem = "metric", layoutText = "") 
   }
   function apply(): void {
     const o = outcome.value;
-    if (!o?.plan || !o.plan.after) return;
+    if (!o?.plan?.after) return;
     const { balance, plan } = o;
     const after = plan.after!;
     const part = createPart(fields.system.value, after.parts.at(-1));
     batch(() => {
       applied.value = {
         key: part.key,
-        before: { offset: balance.layout.offset, grade: balance.equivalentGrade, met: balance.gradeMet?.label ?? "", drift: balance.sensor.before.driftPerRevolution },
+        before: {
+          offset: balance.layout.offset,
+          grade: balance.equivalentGrade,
+          met: balance.gradeMet?.label ?? "",
+          drift: balance.sensor.before.driftPerRevolution,
+        },
         after: { offset: after.offset, grade: after.equivalentGrade, met: after.gradeMet?.label ?? "", drift: after.sensor.driftPerRevolution },
       };
       parts.value = [...parts.value, part];
@@ -197,7 +206,11 @@ export function createMassModel(system: UnitSystem = "metric", layoutText = "") 
           lastLayoutText = mine.l;
         }
         for (const p of read.problems) {
-          notes.push(p.index === null ? `The parts list in the link could not be read (${p.reason}); ${whole && !read.parts.length ? "the example layout is shown" : "the readable parts were kept"}.` : `Part ${p.index + 1} of the link's parts list was left out: ${p.reason}.`);
+          notes.push(
+            p.index === null
+              ? `The parts list in the link could not be read (${p.reason}); ${whole && !read.parts.length ? "the example layout is shown" : "the readable parts were kept"}.`
+              : `Part ${p.index + 1} of the link's parts list was left out: ${p.reason}.`,
+          );
         }
       }
       if (mine.cw !== undefined) {
@@ -218,13 +231,37 @@ export function createMassModel(system: UnitSystem = "metric", layoutText = "") 
     } catch {
       // A part that reads but breaks a rule across fields (inner radius ≥ outer): keep the last good list.
     }
-    return encodeState(massBalanceInputs, texts, fields.system.value, "", existing, { l: lastLayoutText, cw: mode.value, pts: points.value.replace(/\s+/g, "") })
+    return encodeState(massBalanceInputs, texts, fields.system.value, "", existing, {
+      l: lastLayoutText,
+      cw: mode.value,
+      pts: points.value.replace(/\s+/g, ""),
+    })
       .replace(/%7E/g, "~")
       .replace(/%2C/g, ",")
       .replace(/%3B/g, ";");
   }
 
-  return { fields, parts, mode, points, notices, applied, layout, mounting, outcome, add, duplicate, remove, move, mirror, apply, undo, setSystem, applyQuery, queryFor };
+  return {
+    fields,
+    parts,
+    mode,
+    points,
+    notices,
+    applied,
+    layout,
+    mounting,
+    outcome,
+    add,
+    duplicate,
+    remove,
+    move,
+    mirror,
+    apply,
+    undo,
+    setSystem,
+    applyQuery,
+    queryFor,
+  };
 }
 
 export type MassModel = ReturnType<typeof createMassModel>;

@@ -11,8 +11,27 @@ import { fromSI, UNITS, type UnitSystem } from "../../calc/units.ts";
 import { createFieldsModel, type FieldsModel } from "../calc-ui/fields.ts";
 
 const LEN = { metric: "mm", us: "in" } as const;
-const length = (label: string, help: string, def: number, min = 0): InputSpec => ({ label, kind: "length", min, minOpen: min === 0, max: 2, default: def, urlKey: "", unit: LEN, help });
-const inertia = (label: string, help: string, min: number): InputSpec => ({ label, kind: "inertia", min, max: 1000, default: 0, urlKey: "", unit: { metric: "g·cm2", us: "oz·in2" }, help });
+const length = (label: string, help: string, def: number, min = 0): InputSpec => ({
+  label,
+  kind: "length",
+  min,
+  minOpen: min === 0,
+  max: 2,
+  default: def,
+  urlKey: "",
+  unit: LEN,
+  help,
+});
+const inertia = (label: string, help: string, min: number): InputSpec => ({
+  label,
+  kind: "inertia",
+  min,
+  max: 1000,
+  default: 0,
+  urlKey: "",
+  unit: { metric: "g·cm2", us: "oz·in2" },
+  help,
+});
 
 /** The numeric fields a part can have, in SI (lengths in m, angles in rad, inertia in kg·m²). */
 export const PART_INPUTS = defineInputs({
@@ -25,7 +44,16 @@ export const PART_INPUTS = defineInputs({
   length: length("Length", "Along its direction.", 0.05),
   width: length("Width", "Across its direction.", 0.03),
   height: length("Height", "Along the spin axis.", 0.02),
-  angle: { label: "Direction", kind: "angle", min: -2 * Math.PI, max: 2 * Math.PI, default: 0, urlKey: "", unit: { metric: "deg", us: "deg" }, help: "Of its length, counter-clockwise from +x." },
+  angle: {
+    label: "Direction",
+    kind: "angle",
+    min: -2 * Math.PI,
+    max: 2 * Math.PI,
+    default: 0,
+    urlKey: "",
+    unit: { metric: "deg", us: "deg" },
+    help: "Of its length, counter-clockwise from +x.",
+  },
   inertiaZ: { ...inertia("Own inertia about z", "About its own centre, parallel to the spin axis.", 0), default: 1e-5 },
   productXZ: inertia("Own product I′xz", "About its own centre; 0 if symmetric.", -1000),
   productYZ: inertia("Own product I′yz", "About its own centre; 0 if symmetric.", -1000),
@@ -155,7 +183,10 @@ export function readPart(model: PartModel): LayoutPart | null {
   return {
     name: model.name.value,
     shape: shapes[shape],
-    mass: source === "given" || needsGivenMass(shape) ? { kind: "given", mass: d.mass } : { kind: "material", material: source, thickness: d.section ?? d.thickness },
+    mass:
+      source === "given" || needsGivenMass(shape)
+        ? { kind: "given", mass: d.mass }
+        : { kind: "material", material: source, thickness: d.section ?? d.thickness },
     x: d.x,
     y: d.y,
     z: d.z,

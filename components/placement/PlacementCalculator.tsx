@@ -3,7 +3,7 @@
  * one other part see at top speed, with a plot of acceleration against speed.
  */
 import { useEffect, useMemo } from "preact/hooks";
-import { accelerometerPlacementInputs, type AccelerometerPlacement } from "../../calc/rotation.ts";
+import type { accelerometerPlacementInputs, AccelerometerPlacement } from "../../calc/rotation.ts";
 import { STANDARD_GRAVITY } from "../../calc/constants.ts";
 import { formatNumber, formatQuantity, radPerSecondToRpm, type UnitSystem } from "../../calc/units.ts";
 import { QuantityField } from "../calc-ui/QuantityField.tsx";
@@ -70,15 +70,42 @@ function Results({ model }: { model: PlacementModel }) {
         <strong>{verdict.title}.</strong> {verdict.detail}
       </p>
       <dl class="results-grid">
-        <div><dt>Smallest usable radius</dt><dd data-out="min-radius">{q(result.minRadius, "length")}</dd></div>
-        <div><dt>Largest usable radius</dt><dd data-out="max-radius">{q(result.maxRadius, "length")}</dd></div>
-        <div><dt>Sensor reading at top speed</dt><dd data-out="accel-top">{g(result.accelerationAtTop)}</dd></div>
-        <div><dt>Share of full scale used</dt><dd data-out="fs-used">{formatNumber(result.fullScaleUsed * 100)} %</dd></div>
-        <div><dt>Speed at which the sensor saturates</dt><dd data-out="sat-speed">{formatNumber(radPerSecondToRpm(result.saturationSpeed))} rpm</dd></div>
-        <div><dt>Sensor reading at lowest tracked speed</dt><dd data-out="accel-low">{g(result.accelerationAtLow)}</dd></div>
-        <div><dt>Speed resolution of one reading there</dt><dd data-out="res-low">{formatNumber(result.resolutionAtLow * 100)} %</dd></div>
-        <div><dt>Other part: load at top speed</dt><dd data-out="part-g">{g(result.part.acceleration)}</dd></div>
-        <div><dt>Other part: pull on its mounts</dt><dd data-out="part-force">{q(result.part.force, "force")}</dd></div>
+        <div>
+          <dt>Smallest usable radius</dt>
+          <dd data-out="min-radius">{q(result.minRadius, "length")}</dd>
+        </div>
+        <div>
+          <dt>Largest usable radius</dt>
+          <dd data-out="max-radius">{q(result.maxRadius, "length")}</dd>
+        </div>
+        <div>
+          <dt>Sensor reading at top speed</dt>
+          <dd data-out="accel-top">{g(result.accelerationAtTop)}</dd>
+        </div>
+        <div>
+          <dt>Share of full scale used</dt>
+          <dd data-out="fs-used">{formatNumber(result.fullScaleUsed * 100)} %</dd>
+        </div>
+        <div>
+          <dt>Speed at which the sensor saturates</dt>
+          <dd data-out="sat-speed">{formatNumber(radPerSecondToRpm(result.saturationSpeed))} rpm</dd>
+        </div>
+        <div>
+          <dt>Sensor reading at lowest tracked speed</dt>
+          <dd data-out="accel-low">{g(result.accelerationAtLow)}</dd>
+        </div>
+        <div>
+          <dt>Speed resolution of one reading there</dt>
+          <dd data-out="res-low">{formatNumber(result.resolutionAtLow * 100)} %</dd>
+        </div>
+        <div>
+          <dt>Other part: load at top speed</dt>
+          <dd data-out="part-g">{g(result.part.acceleration)}</dd>
+        </div>
+        <div>
+          <dt>Other part: pull on its mounts</dt>
+          <dd data-out="part-force">{q(result.part.force, "force")}</dd>
+        </div>
       </dl>
     </div>
   );

@@ -64,7 +64,10 @@ export function offlineAndSearch() {
       },
       "astro:build:done": async ({ dir, logger }) => {
         const root = fileURLToPath(dir);
-        const { index, errors } = await pagefind.createIndex({ rootSelector: "main", excludeSelectors: [".calc", ".site-nav", ".chapter-nav", ".chart", ".katex", ".no-search"] });
+        const { index, errors } = await pagefind.createIndex({
+          rootSelector: "main",
+          excludeSelectors: [".calc", ".site-nav", ".chapter-nav", ".chart", ".katex", ".no-search"],
+        });
         if (!index) throw new Error(`search index failed: ${errors.join("; ")}`);
         await index.addDirectory({ path: root });
         const written = await index.writeFiles({ outputPath: join(root, "pagefind") });

@@ -48,7 +48,9 @@ export function createWeigher(distDir, base = "/") {
   return function weigh(pagePath) {
     const html = readFileSync(join(distDir, pagePath), "utf8");
     const css = [...html.matchAll(/<link[^>]+rel="stylesheet"[^>]*href="([^"]+)"/g)].map((m) => m[1]);
-    const inlineScripts = [...html.matchAll(/<script\b[^>]*>([\s\S]*?)<\/script>/g)].filter((m) => !/\bsrc=/.test(m[0]) && !/type="application\/(ld\+)?json"/.test(m[0]));
+    const inlineScripts = [...html.matchAll(/<script\b[^>]*>([\s\S]*?)<\/script>/g)].filter(
+      (m) => !/\bsrc=/.test(m[0]) && !/type="application\/(ld\+)?json"/.test(m[0]),
+    );
     const entries = new Set([
       ...[...html.matchAll(/<script\b[^>]*\bsrc="([^"]+)"/g)].map((m) => m[1]),
       ...[...html.matchAll(/\b(?:component-url|renderer-url)="([^"]+)"/g)].map((m) => m[1]),

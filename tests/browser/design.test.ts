@@ -70,7 +70,9 @@ describe("build sheet", () => {
     await page.getByRole("button", { name: "Save in this browser" }).click();
     await expect.poll(() => page.locator('[role="alertdialog"]').textContent()).toContain("already called");
     await page.getByRole("button", { name: "Keep both" }).click();
-    await expect.poll(() => page.locator(".design-name").allTextContents()).toEqual(["Demo: invented 1.4 kg whole-body spinner", "Demo: invented 1.4 kg whole-body spinner (2)"]);
+    await expect
+      .poll(() => page.locator(".design-name").allTextContents())
+      .toEqual(["Demo: invented 1.4 kg whole-body spinner", "Demo: invented 1.4 kg whole-body spinner (2)"]);
     await page.setInputFiles('input[type="file"]', { name: "junk.json", mimeType: "application/json", buffer: Buffer.from("{ not json") });
     await expect.poll(() => page.locator('[role="alert"]').first().textContent()).toContain("junk.json could not be opened: The file is not valid JSON");
     expect(await page.locator(".design-list li").count()).toBe(2);
@@ -126,7 +128,7 @@ describe("build sheet", () => {
       expect(pages, format).toBeGreaterThanOrEqual(1);
       expect(pages, format).toBeLessThanOrEqual(2);
     }
-    const text = await page.locator("main").innerText();
+    const text = await page.locator("main").textContent();
     expect(text).toContain("Demo: invented 1.4 kg whole-body spinner");
     expect(text).toContain("Safety.");
     await context.close();

@@ -15,7 +15,6 @@ import { formatQuantity } from "../../calc/units.ts";
 const site = useSite();
 const { origin, open } = site;
 
-
 const out = (page: Page, name: string) => page.locator(`[data-out="${name}"]`).first().textContent();
 const param = (page: Page, key: string) => new URL(page.url()).searchParams.get(key);
 
@@ -75,7 +74,9 @@ describe("heading drift budget", () => {
     await page.fill("#drift-calculator-highSpeed", "100 rpm");
     await expect.poll(() => page.locator("#drift-calculator-highSpeed-error").textContent()).toBe("Plot to must be greater than Plot from (200 rpm).");
     await page.fill("#drift-calculator-p-radius2", "-3 mm");
-    await expect.poll(() => page.locator("#drift-calculator-p-radius2-error").textContent()).toContain("Sensor 2 radius must be between 0.1 mm and 1000 mm (got -3 mm)");
+    await expect
+      .poll(() => page.locator("#drift-calculator-p-radius2-error").textContent())
+      .toContain("Sensor 2 radius must be between 0.1 mm and 1000 mm (got -3 mm)");
     const body = (await page.textContent("body")) ?? "";
     expect(body).not.toMatch(/\bNaN\b|Infinity/);
     await context.close();
@@ -198,7 +199,9 @@ describe("calibration from logged readings", () => {
   });
 
   it("explains a malformed link instead of crashing", async () => {
-    const { page, context, problems } = await open(`/chapters/calibration/?v=1&d=${encodeURIComponent("v1:600:5.4,zz,1200:20.6,1800:46.3,<i>x</i>")}&su=furlongs`);
+    const { page, context, problems } = await open(
+      `/chapters/calibration/?v=1&d=${encodeURIComponent("v1:600:5.4,zz,1200:20.6,1800:46.3,<i>x</i>")}&su=furlongs`,
+    );
     const notices = (await page.locator(".calc-notices").textContent()) ?? "";
     expect(notices).toContain('reading 2 ("zz")');
     expect(notices).toContain("bare speeds");

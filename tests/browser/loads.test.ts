@@ -18,7 +18,9 @@ const RIM = "/chapters/rims/";
 
 describe("the bolt calculator in the browser", () => {
   it("answers a permalink: 42 g at 55 mm and 2400 rpm on one M2 class 4.6 screw in shear is marginal", async () => {
-    const { page, context, problems } = await open(`${BOLT}?v=1&u=metric&m=42g&r=55mm&rpm=2400rpm&n=1&size=M2&cls=4.6&mode=shear&plane=thread&sr=0.5&fail=1&thin=2`);
+    const { page, context, problems } = await open(
+      `${BOLT}?v=1&u=metric&m=42g&r=55mm&rpm=2400rpm&n=1&size=M2&cls=4.6&mode=shear&plane=thread&sr=0.5&fail=1&thin=2`,
+    );
     // F = 0.042 kg × (80π rad/s)² × 0.055 m = 145.9 N; τ = 145.9 N / 2.07 mm² = 70.5 MPa;
     // τ_y = 240 MPa / √3 = 138.6 MPa → n = 1.97; yield at 2400 rpm × √1.97 = 3360 rpm (tests/components/loads.test.tsx).
     expect(await out(page, "part-force")).toBe("146 N");

@@ -110,14 +110,18 @@ describe("mass layout in the browser", () => {
     await expect.poll(() => page.locator("#mass-calculator-spinSpeed-error").textContent()).toContain("Spin speed must be greater than 0 rpm");
     await page.fill("#mass-calculator-spinSpeed", "2400");
     await page.fill("#mass-calculator-planeZ2", "4 mm");
-    await expect.poll(() => page.locator("#mass-calculator-planeZ2-error").textContent()).toContain("Upper correction plane must be a height different from the other plane");
+    await expect
+      .poll(() => page.locator("#mass-calculator-planeZ2-error").textContent())
+      .toContain("Upper correction plane must be a height different from the other plane");
     expect((await page.textContent("body")) ?? "").not.toMatch(/\bNaN\b|Infinity/);
     await context.close();
   });
 
   it("explains a malformed parts list part by part, keeps the good parts, and treats hostile text as text", async () => {
-    const name = encodeURIComponent('<img src=x onerror=alert(1)>');
-    const { page, context, problems, requests } = await open(`${PAGE}?v=1&l=${encodeURIComponent(`v1~pt_${name}_10_0_0_100~blob_b_0_0_0_1~disk_c_0_0_0_20`)}&cw=zz`);
+    const name = encodeURIComponent("<img src=x onerror=alert(1)>");
+    const { page, context, problems, requests } = await open(
+      `${PAGE}?v=1&l=${encodeURIComponent(`v1~pt_${name}_10_0_0_100~blob_b_0_0_0_1~disk_c_0_0_0_20`)}&cw=zz`,
+    );
     expect(await page.locator(".mass-parts details").count()).toBe(1);
     expect(await card(page, 0).locator("summary").textContent()).toContain("<img src=x onerror=alert(1)>");
     expect(await page.locator("main img").count()).toBe(0);

@@ -14,7 +14,9 @@ const out = (page: Page, name: string) => page.locator(`[data-out="${name}"]`).t
 
 describe("accelerometer placement in the browser", () => {
   it("answers a permalink with the right numbers", async () => {
-    const { page, context, problems } = await open("/chapters/acceleration/?v=1&u=metric&rpm=3000rpm&low=500rpm&r=12mm&fs=200g&m=20pct&step=0.09765625g&res=2pct&pm=45g&pr=60mm");
+    const { page, context, problems } = await open(
+      "/chapters/acceleration/?v=1&u=metric&rpm=3000rpm&low=500rpm&r=12mm&fs=200g&m=20pct&step=0.09765625g&res=2pct&pm=45g&pr=60mm",
+    );
     // r_max = 0.8 × 200 g / ω² at 3000 rpm = 15.9 mm; r_min at 500 rpm, 2 % = 8.65 mm (see tests/calc/rotation.test.ts).
     expect(await out(page, "max-radius")).toBe("15.9 mm");
     expect(await out(page, "min-radius")).toBe("8.65 mm");

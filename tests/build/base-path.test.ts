@@ -33,7 +33,10 @@ describe("a build under a sub-path (BASE=/handbook/)", () => {
       }
     }
     expect(wrong).toEqual([]);
-    const css = walk(out).filter((f) => f.endsWith(".css")).map((f) => readFileSync(f, "utf8")).join("\n");
+    const css = walk(out)
+      .filter((f) => f.endsWith(".css"))
+      .map((f) => readFileSync(f, "utf8"))
+      .join("\n");
     for (const m of css.matchAll(/url\((\/[^)]*)\)/g)) expect(m[1]).toMatch(/^\/handbook\/_astro\//);
     expect(readFileSync(join(out, "sw.js"), "utf8")).toContain('const BASE = "/handbook/";');
   });

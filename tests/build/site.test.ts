@@ -20,7 +20,11 @@ const chapters = readdirSync(contentDir)
   .filter((f) => f.endsWith(".mdx"))
   .map((f) => {
     const source = readFileSync(join(contentDir, f), "utf8");
-    return { slug: f.replace(/\.mdx$/, ""), calculator: /^calculator:\s*true\s*$/m.test(source), islands: (source.match(/<[A-Z]\w*Calculator\b/g) ?? []).length };
+    return {
+      slug: f.replace(/\.mdx$/, ""),
+      calculator: /^calculator:\s*true\s*$/m.test(source),
+      islands: (source.match(/<[A-Z]\w*Calculator\b/g) ?? []).length,
+    };
   });
 
 const KB = 1024;
@@ -54,7 +58,15 @@ describe("the built site", () => {
     expect(existsSync(join(dist, "index.html"))).toBe(true);
   });
 
-  it.each(["index.html", "404.html", "build-sheet/index.html", "search/index.html", "sw.js", "pagefind/pagefind.js", ...chapters.map((c) => `chapters/${c.slug}/index.html`)])("has %s", (page) => {
+  it.each([
+    "index.html",
+    "404.html",
+    "build-sheet/index.html",
+    "search/index.html",
+    "sw.js",
+    "pagefind/pagefind.js",
+    ...chapters.map((c) => `chapters/${c.slug}/index.html`),
+  ])("has %s", (page) => {
     expect(existsSync(join(dist, page))).toBe(true);
   });
 
@@ -87,7 +99,7 @@ describe("the built site", () => {
         expect(weight.scripts, page).toEqual([]);
         expect(weight.inlineScripts, page).toBe(1);
         expect(weight.js, page).toBeLessThanOrEqual(BUDGET.registration);
-        expect(readFileSync(join(dist, page), "utf8"), page).toContain('serviceWorker.register');
+        expect(readFileSync(join(dist, page), "utf8"), page).toContain("serviceWorker.register");
       }
     });
 
@@ -104,12 +116,15 @@ describe("the built site", () => {
       expect(search.scripts.some((s: string) => s.includes("pagefind"))).toBe(false);
     });
 
-    it.each(chapters.filter((c) => c.calculator && c.islands === 1 && !(c.slug in HEAVY_PAGES)).map((c) => c.slug))("keeps %s (one calculator) within 60 KB, JS within 25 KB", (slug) => {
-      const page = weigh(`chapters/${slug}/index.html`);
-      expect(page.js).toBeGreaterThan(0);
-      expect(page.js).toBeLessThanOrEqual(BUDGET.chapterJs);
-      expect(page.total).toBeLessThanOrEqual(BUDGET.chapterTotal);
-    });
+    it.each(chapters.filter((c) => c.calculator && c.islands === 1 && !(c.slug in HEAVY_PAGES)).map((c) => c.slug))(
+      "keeps %s (one calculator) within 60 KB, JS within 25 KB",
+      (slug) => {
+        const page = weigh(`chapters/${slug}/index.html`);
+        expect(page.js).toBeGreaterThan(0);
+        expect(page.js).toBeLessThanOrEqual(BUDGET.chapterJs);
+        expect(page.total).toBeLessThanOrEqual(BUDGET.chapterTotal);
+      },
+    );
 
     it.each(Object.entries(HEAVY_PAGES))("keeps %s under its recorded ceiling (over the 25 KB budget: tracked, must not grow)", (slug, ceiling) => {
       const page = weigh(`chapters/${slug}/index.html`);
@@ -141,7 +156,10 @@ describe("the built site", () => {
       // a = ω²r: the 2 sits in a .msupsub/.vlist structure; KaTeX 0.16 CSS sizes it via .sizing.reset-size6.size3.
       expect(page).toMatch(/class="msupsub"/);
       expect(page).toMatch(/class="sizing reset-size6 size3 mtight"/);
-      const css = walk(dist).filter((f) => f.endsWith(".css")).map((f) => readFileSync(f, "utf8")).join("\n");
+      const css = walk(dist)
+        .filter((f) => f.endsWith(".css"))
+        .map((f) => readFileSync(f, "utf8"))
+        .join("\n");
       expect(css).toContain(".katex .sizing.reset-size6.size3");
       expect(css).toContain(".katex .msupsub");
     });

@@ -49,13 +49,62 @@ describe("straight-line fit: reference cases", () => {
   const fitII = fitStraightLine({ x: ANSCOMBE_X, y: ANSCOMBE_Y2 });
   const fitIII = fitStraightLine({ x: ANSCOMBE_X, y: ANSCOMBE_Y3 });
   const cases = [
-    { source: "anscombe-1973", locator: "data set I: slope 0.500 (3 decimals, as quoted in Wikipedia's table)", got: fitI.leastSquares.slope, expected: 0.5, rtol: 0.0005 / 0.5, note: "half a unit in the last printed digit" },
-    { source: "anscombe-1973", locator: "data set I: intercept 3.00 (2 decimals)", got: fitI.leastSquares.intercept, expected: 3.0, rtol: 0.005 / 3, note: "half a unit in the last printed digit" },
-    { source: "anscombe-1973", locator: "data set I: R² 0.67 (2 decimals)", got: fitI.leastSquares.rSquared!, expected: 0.67, rtol: 0.005 / 0.67, note: "half a unit in the last printed digit" },
-    { source: "anscombe-1973", locator: "data set I: correlation 0.816 (3 decimals)", got: Math.sqrt(fitI.leastSquares.rSquared!), expected: 0.816, rtol: 0.0005 / 0.816, note: "half a unit in the last printed digit" },
-    { source: "anscombe-1973", locator: "data set II: the same line, slope 0.500", got: fitII.leastSquares.slope, expected: 0.5, rtol: 0.0005 / 0.5, note: "half a unit in the last printed digit" },
-    { source: "anscombe-1973", locator: "data set III: the same line, intercept 3.00", got: fitIII.leastSquares.intercept, expected: 3.0, rtol: 0.005 / 3, note: "half a unit in the last printed digit" },
-    { source: "anscombe-1973 (FROM MEMORY, unconfirmed)", locator: "data set I: estimated standard error of the slope 0.118", got: fitI.leastSquares.slopeStdError, expected: 0.118, rtol: 0.0005 / 0.118, note: "from memory of the paper's table" },
+    {
+      source: "anscombe-1973",
+      locator: "data set I: slope 0.500 (3 decimals, as quoted in Wikipedia's table)",
+      got: fitI.leastSquares.slope,
+      expected: 0.5,
+      rtol: 0.0005 / 0.5,
+      note: "half a unit in the last printed digit",
+    },
+    {
+      source: "anscombe-1973",
+      locator: "data set I: intercept 3.00 (2 decimals)",
+      got: fitI.leastSquares.intercept,
+      expected: 3.0,
+      rtol: 0.005 / 3,
+      note: "half a unit in the last printed digit",
+    },
+    {
+      source: "anscombe-1973",
+      locator: "data set I: R² 0.67 (2 decimals)",
+      got: fitI.leastSquares.rSquared!,
+      expected: 0.67,
+      rtol: 0.005 / 0.67,
+      note: "half a unit in the last printed digit",
+    },
+    {
+      source: "anscombe-1973",
+      locator: "data set I: correlation 0.816 (3 decimals)",
+      got: Math.sqrt(fitI.leastSquares.rSquared!),
+      expected: 0.816,
+      rtol: 0.0005 / 0.816,
+      note: "half a unit in the last printed digit",
+    },
+    {
+      source: "anscombe-1973",
+      locator: "data set II: the same line, slope 0.500",
+      got: fitII.leastSquares.slope,
+      expected: 0.5,
+      rtol: 0.0005 / 0.5,
+      note: "half a unit in the last printed digit",
+    },
+    {
+      source: "anscombe-1973",
+      locator: "data set III: the same line, intercept 3.00",
+      got: fitIII.leastSquares.intercept,
+      expected: 3.0,
+      rtol: 0.005 / 3,
+      note: "half a unit in the last printed digit",
+    },
+    {
+      source: "anscombe-1973 (FROM MEMORY, unconfirmed)",
+      locator: "data set I: estimated standard error of the slope 0.118",
+      got: fitI.leastSquares.slopeStdError,
+      expected: 0.118,
+      rtol: 0.0005 / 0.118,
+      note: "from memory of the paper's table",
+    },
   ];
   it.each(cases)("$source — $locator", ({ got, expected, rtol }) => {
     expect(Math.abs(got - expected)).toBeLessThanOrEqual(rtol * Math.abs(expected));
@@ -76,14 +125,70 @@ describe("straight-line fit: reference cases", () => {
 
 describe("Student t and normal distributions", () => {
   const tCases = [
-    { source: "DERIVED-EXACT (ν = 1 is the Cauchy law, abramowitz-stegun-1964 §26.7)", locator: "t₀.₉₇₅,₁ = tan(0.475π)", inputs: { probability: 0.975, degreesOfFreedom: 1 }, expected: Math.tan(0.475 * Math.PI), rtol: 1e-9, note: "bisection on the incomplete beta function" },
-    { source: "DERIVED-EXACT (ν = 2: F(t) = ½ + t/(2√(2 + t²)))", locator: "t₀.₉₇₅,₂ = 0.95·√(2/0.0975)", inputs: { probability: 0.975, degreesOfFreedom: 2 }, expected: 0.95 * Math.sqrt(2 / 0.0975), rtol: 1e-9, note: "" },
-    { source: "DERIVED-EXACT (ν = 2)", locator: "t₀.₉₉₅,₂", inputs: { probability: 0.995, degreesOfFreedom: 2 }, expected: (2 * 0.995 - 1) / Math.sqrt(2 * 0.995 * 0.005), rtol: 1e-9, note: "" },
-    { source: "t table (FROM MEMORY)", locator: "t₀.₉₇₅ with 4 d.f. = 2.776", inputs: { probability: 0.975, degreesOfFreedom: 4 }, expected: 2.776, rtol: 0.0005 / 2.776, note: "printed to 3 decimals" },
-    { source: "t table (FROM MEMORY)", locator: "t₀.₉₇₅ with 9 d.f. = 2.262", inputs: { probability: 0.975, degreesOfFreedom: 9 }, expected: 2.262, rtol: 0.0005 / 2.262, note: "printed to 3 decimals" },
-    { source: "t table (FROM MEMORY)", locator: "t₀.₉₇₅ with 10 d.f. = 2.228", inputs: { probability: 0.975, degreesOfFreedom: 10 }, expected: 2.228, rtol: 0.0005 / 2.228, note: "printed to 3 decimals" },
-    { source: "t table (FROM MEMORY)", locator: "t₀.₉₇₅ with 30 d.f. = 2.042", inputs: { probability: 0.975, degreesOfFreedom: 30 }, expected: 2.042, rtol: 0.0005 / 2.042, note: "printed to 3 decimals" },
-    { source: "t table (FROM MEMORY)", locator: "t₀.₉₅ with 5 d.f. = 2.015", inputs: { probability: 0.95, degreesOfFreedom: 5 }, expected: 2.015, rtol: 0.0005 / 2.015, note: "printed to 3 decimals" },
+    {
+      source: "DERIVED-EXACT (ν = 1 is the Cauchy law, abramowitz-stegun-1964 §26.7)",
+      locator: "t₀.₉₇₅,₁ = tan(0.475π)",
+      inputs: { probability: 0.975, degreesOfFreedom: 1 },
+      expected: Math.tan(0.475 * Math.PI),
+      rtol: 1e-9,
+      note: "bisection on the incomplete beta function",
+    },
+    {
+      source: "DERIVED-EXACT (ν = 2: F(t) = ½ + t/(2√(2 + t²)))",
+      locator: "t₀.₉₇₅,₂ = 0.95·√(2/0.0975)",
+      inputs: { probability: 0.975, degreesOfFreedom: 2 },
+      expected: 0.95 * Math.sqrt(2 / 0.0975),
+      rtol: 1e-9,
+      note: "",
+    },
+    {
+      source: "DERIVED-EXACT (ν = 2)",
+      locator: "t₀.₉₉₅,₂",
+      inputs: { probability: 0.995, degreesOfFreedom: 2 },
+      expected: (2 * 0.995 - 1) / Math.sqrt(2 * 0.995 * 0.005),
+      rtol: 1e-9,
+      note: "",
+    },
+    {
+      source: "t table (FROM MEMORY)",
+      locator: "t₀.₉₇₅ with 4 d.f. = 2.776",
+      inputs: { probability: 0.975, degreesOfFreedom: 4 },
+      expected: 2.776,
+      rtol: 0.0005 / 2.776,
+      note: "printed to 3 decimals",
+    },
+    {
+      source: "t table (FROM MEMORY)",
+      locator: "t₀.₉₇₅ with 9 d.f. = 2.262",
+      inputs: { probability: 0.975, degreesOfFreedom: 9 },
+      expected: 2.262,
+      rtol: 0.0005 / 2.262,
+      note: "printed to 3 decimals",
+    },
+    {
+      source: "t table (FROM MEMORY)",
+      locator: "t₀.₉₇₅ with 10 d.f. = 2.228",
+      inputs: { probability: 0.975, degreesOfFreedom: 10 },
+      expected: 2.228,
+      rtol: 0.0005 / 2.228,
+      note: "printed to 3 decimals",
+    },
+    {
+      source: "t table (FROM MEMORY)",
+      locator: "t₀.₉₇₅ with 30 d.f. = 2.042",
+      inputs: { probability: 0.975, degreesOfFreedom: 30 },
+      expected: 2.042,
+      rtol: 0.0005 / 2.042,
+      note: "printed to 3 decimals",
+    },
+    {
+      source: "t table (FROM MEMORY)",
+      locator: "t₀.₉₅ with 5 d.f. = 2.015",
+      inputs: { probability: 0.95, degreesOfFreedom: 5 },
+      expected: 2.015,
+      rtol: 0.0005 / 2.015,
+      note: "printed to 3 decimals",
+    },
   ];
   it.each(tCases)("$source — $locator", ({ inputs, expected, rtol }) => {
     expect(Math.abs(studentTQuantile(inputs) - expected)).toBeLessThanOrEqual(rtol * expected);
@@ -333,14 +438,23 @@ describe("calibration fit", () => {
     fc.assert(
       fc.property(fc.array(row, { minLength: 3, maxLength: 25 }), (rows) => {
         fc.pre(new Set(rows.map((r) => r.angularSpeed * r.angularSpeed)).size >= 3);
-        let f;
+        let f: ReturnType<typeof fitCalibration>;
         try {
           f = fitCalibration(rows);
         } catch (e) {
           // too few different speeds, or speeds so small that ω² underflows: refused by name
           return e instanceof CalcInputError && e.param === "rows";
         }
-        const numbers = [f.radius, f.bias, f.leastSquares.slopeStdError, f.leastSquares.tQuantile, f.theilSen.slope, f.huber.slope, f.spikes.scale, ...f.spikes.modifiedZ];
+        const numbers = [
+          f.radius,
+          f.bias,
+          f.leastSquares.slopeStdError,
+          f.leastSquares.tQuantile,
+          f.theilSen.slope,
+          f.huber.slope,
+          f.spikes.scale,
+          ...f.spikes.modifiedZ,
+        ];
         return numbers.every(Number.isFinite);
       }),
       { numRuns: 100 },
@@ -380,7 +494,7 @@ describe("the calibration calculator's inputs and demo readings", () => {
     expect(f.method).toBe("least-squares-without-spikes");
     // the flagged residual lies outside the bounds, every other one inside
     const r = f.theilSen.residuals;
-    r.forEach((ri, i) => expect(ri < f.spikes.bounds.low || ri > f.spikes.bounds.high, `reading ${i}`).toBe(i === 7));
+    for (const [i, ri] of r.entries()) expect(ri < f.spikes.bounds.low || ri > f.spikes.bounds.high, `reading ${i}`).toBe(i === 7);
     expect(f.spikes.bounds.high - f.spikes.center).toBeCloseTo(3.5 * f.spikes.scale, 12);
     // within two standard errors of the truth (the hand-written scatter is up to ±0.24 g)
     expect(Math.abs(f.radius - 0.0127)).toBeLessThan(2 * f.leastSquaresWithoutSpikes!.slopeStdError);
@@ -425,7 +539,11 @@ describe("rows as text for a URL", () => {
   });
 
   it("refuses an unknown version and reads untagged text as v1, saying so", () => {
-    expect(decodeCalibrationRows("v9:1:2")).toMatchObject({ version: null, rows: [], problems: [{ piece: 0, reason: "unknown version 9; this reader knows v1" }] });
+    expect(decodeCalibrationRows("v9:1:2")).toMatchObject({
+      version: null,
+      rows: [],
+      problems: [{ piece: 0, reason: "unknown version 9; this reader knows v1" }],
+    });
     const untagged = decodeCalibrationRows("1200:31.5");
     expect(untagged.rows).toHaveLength(1);
     expect(untagged.problems[0]!.reason).toBe("no version tag; read as v1");
@@ -447,7 +565,10 @@ describe("source keys", () => {
   it("names only keys that exist in the bibliography, in every doc comment of calc/calibration.ts", () => {
     const text = readFileSync(new URL("../../calc/calibration.ts", import.meta.url), "utf8");
     const keys = [...text.matchAll(/Sources: ([^\n]+(?:\n \* [a-z0-9-]+(?:, [a-z0-9-]+)*\.?)?)/g)].flatMap((m) =>
-      m[1]!.replace(/\n \* /g, " ").replace(/\.$/, "").split(/,\s*/),
+      m[1]!
+        .replace(/\n \* /g, " ")
+        .replace(/\.$/, "")
+        .split(/,\s*/),
     );
     expect(keys.length).toBeGreaterThan(8);
     for (const key of keys) expect(isSourceKey(key.trim().replace(/\s*\(.*\)$/, "")), key).toBe(true);

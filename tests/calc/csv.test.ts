@@ -154,7 +154,9 @@ describe("reading calibration text: properties", () => {
         const r = parseCalibrationCsv(lines.join(crlf ? "\r\n" : "\n"));
         if (r.problems.length > 0 || r.rows.length !== data.length) return false;
         return r.rows.every(
-          (row, i) => Math.abs(row.angularSpeed - rpm(data[i]![0])) <= 1e-12 * rpm(data[i]![0]) && Math.abs(row.acceleration - g(data[i]![1])) <= 1e-12 * Math.abs(g(data[i]![1])),
+          (row, i) =>
+            Math.abs(row.angularSpeed - rpm(data[i]![0])) <= 1e-12 * rpm(data[i]![0]) &&
+            Math.abs(row.acceleration - g(data[i]![1])) <= 1e-12 * Math.abs(g(data[i]![1])),
         );
       }),
       { numRuns: 200 },
@@ -170,12 +172,16 @@ describe("writing rows back as text", () => {
 
   it("is read back by the parser, header and all, to six significant figures (fast-check)", () => {
     const row = fc.record({ angularSpeed: fc.double({ min: 0, max: 5000, noNaN: true }), acceleration: fc.double({ min: -1e4, max: 1e5, noNaN: true }) });
-    const units = fc.constantFrom(["rpm", "gn"], ["rps", "m/s2"], ["rad/s", "ft/s2"]) as fc.Arbitrary<[ "rpm" | "rps" | "rad/s", "gn" | "m/s2" | "ft/s2"]>;
+    const units = fc.constantFrom(["rpm", "gn"], ["rps", "m/s2"], ["rad/s", "ft/s2"]) as fc.Arbitrary<["rpm" | "rps" | "rad/s", "gn" | "m/s2" | "ft/s2"]>;
     fc.assert(
       fc.property(fc.array(row, { maxLength: 30 }), units, (rows, [speedUnit, accelerationUnit]) => {
         const back = parseCalibrationCsv(calibrationRowsToCsv(rows, { speedUnit, accelerationUnit }));
         const close = (a: number, b: number) => Math.abs(a - b) <= 5e-6 * Math.abs(b) + 1e-300;
-        return back.problems.length === 0 && back.rows.length === rows.length && back.rows.every((r, i) => close(r.angularSpeed, rows[i]!.angularSpeed) && close(r.acceleration, rows[i]!.acceleration));
+        return (
+          back.problems.length === 0 &&
+          back.rows.length === rows.length &&
+          back.rows.every((r, i) => close(r.angularSpeed, rows[i]!.angularSpeed) && close(r.acceleration, rows[i]!.acceleration))
+        );
       }),
     );
   });

@@ -26,16 +26,18 @@ const placementArb = fc.record(
     ]),
   ) as Record<keyof typeof accelerometerPlacementInputs, fc.Arbitrary<number>>,
 );
-const designArb = fc.record({
-  name: fc.string({ maxLength: 80 }),
-  notes: fc.string({ maxLength: 200 }),
-  units: fc.constantFrom("metric", "us") as fc.Arbitrary<"metric" | "us">,
-  placement: fc.option(placementArb, { nil: undefined }),
-}).map((d): Design => {
-  const design: Design = { ...newDesign(d.name, new Date("2026-01-01T00:00:00Z")), notes: d.notes, units: d.units };
-  if (d.placement) design.placement = d.placement;
-  return design;
-});
+const designArb = fc
+  .record({
+    name: fc.string({ maxLength: 80 }),
+    notes: fc.string({ maxLength: 200 }),
+    units: fc.constantFrom("metric", "us") as fc.Arbitrary<"metric" | "us">,
+    placement: fc.option(placementArb, { nil: undefined }),
+  })
+  .map((d): Design => {
+    const design: Design = { ...newDesign(d.name, new Date("2026-01-01T00:00:00Z")), notes: d.notes, units: d.units };
+    if (d.placement) design.placement = d.placement;
+    return design;
+  });
 
 describe("design file", () => {
   it("reads the demo design back unchanged, with no problems", () => {
@@ -74,7 +76,9 @@ describe("design file", () => {
   it("refuses a design from a newer version and says so", () => {
     const reading = readDesign({ ...demo, version: DESIGN_VERSION + 1 });
     expect(reading.ok).toBe(false);
-    expect(!reading.ok && reading.problems[0]!.message).toBe(`is ${DESIGN_VERSION + 1}, newer than this handbook reads (${DESIGN_VERSION}); open it with a newer version of the handbook`);
+    expect(!reading.ok && reading.problems[0]!.message).toBe(
+      `is ${DESIGN_VERSION + 1}, newer than this handbook reads (${DESIGN_VERSION}); open it with a newer version of the handbook`,
+    );
   });
 
   it("keeps every valid value of a partly invalid file and explains the rest, field by field", () => {
@@ -118,7 +122,17 @@ describe("build-sheet checks", () => {
   const results = runChecks(demo, "metric");
 
   it("runs every check the demo design has inputs for", () => {
-    expect(results.map((r) => r.id)).toEqual(["placement", "headingDrift", "mass", "mass.sensor", "fasteners[0]", "fasteners[1]", "rims[0]", "drivetrain", "drivetrain.energy"]);
+    expect(results.map((r) => r.id)).toEqual([
+      "placement",
+      "headingDrift",
+      "mass",
+      "mass.sensor",
+      "fasteners[0]",
+      "fasteners[1]",
+      "rims[0]",
+      "drivetrain",
+      "drivetrain.energy",
+    ]);
   });
 
   it("gives each check a status, a rule and a margin with numbers", () => {

@@ -109,20 +109,18 @@ describe("tensile stress areas of ISO metric coarse threads", () => {
 
   it("never gives a non-finite or non-positive area for any allowed diameter and pitch", () => {
     fc.assert(
-      fc.property(
-        fc.double({ min: 1e-4, max: 0.2, noNaN: true }),
-        fc.double({ min: 1e-3, max: 0.999, noNaN: true }),
-        (d, fraction) => {
-          const area = tensileStressArea({ nominalDiameter: d, pitch: (fraction * d) / 1.3 });
-          expect(Number.isFinite(area) && area > 0).toBe(true);
-        },
-      ),
+      fc.property(fc.double({ min: 1e-4, max: 0.2, noNaN: true }), fc.double({ min: 1e-3, max: 0.999, noNaN: true }), (d, fraction) => {
+        const area = tensileStressArea({ nominalDiameter: d, pitch: (fraction * d) / 1.3 });
+        expect(Number.isFinite(area) && area > 0).toBe(true);
+      }),
     );
   });
 
   it("names the pitch when it is too coarse for the diameter", () => {
     expect(() => tensileStressArea({ nominalDiameter: 0.004, pitch: 0.004 })).toThrow(CalcInputError);
-    expect(() => tensileStressArea({ nominalDiameter: 0.004, pitch: 0.004 })).toThrow("pitch must be less than the nominal diameter ÷ 1.3, 0.003077 m (got 0.004 m)");
+    expect(() => tensileStressArea({ nominalDiameter: 0.004, pitch: 0.004 })).toThrow(
+      "pitch must be less than the nominal diameter ÷ 1.3, 0.003077 m (got 0.004 m)",
+    );
   });
 });
 
@@ -130,10 +128,38 @@ describe("ISO 898-1 property classes (Table 3)", () => {
   const MPa = 1e6;
   // Copies: usefastener.com/knowledge/403, bbshalmstad.se, scribd "Mechanical Properties Per ISO 898-1" (all CONFIRMED).
   const ROWS = [
-    { source: "iso-898-1", locator: "Table 3, class 4.6", inputs: { id: "4.6" }, expected: { rmNom: 400, rmMin: 400, yNom: 240, yMin: 240, kind: "ReL", sp: 225 }, rtol: 0, note: "R_eL" },
-    { source: "iso-898-1", locator: "Table 3, class 8.8 (d ≤ 16 mm)", inputs: { id: "8.8" }, expected: { rmNom: 800, rmMin: 800, yNom: 640, yMin: 640, kind: "Rp0.2", sp: 580 }, rtol: 0, note: "d > 16 mm row not used" },
-    { source: "iso-898-1", locator: "Table 3, class 10.9", inputs: { id: "10.9" }, expected: { rmNom: 1000, rmMin: 1040, yNom: 900, yMin: 940, kind: "Rp0.2", sp: 830 }, rtol: 0, note: "" },
-    { source: "iso-898-1", locator: "Table 3, class 12.9", inputs: { id: "12.9" }, expected: { rmNom: 1200, rmMin: 1220, yNom: 1080, yMin: 1100, kind: "Rp0.2", sp: 970 }, rtol: 0, note: "" },
+    {
+      source: "iso-898-1",
+      locator: "Table 3, class 4.6",
+      inputs: { id: "4.6" },
+      expected: { rmNom: 400, rmMin: 400, yNom: 240, yMin: 240, kind: "ReL", sp: 225 },
+      rtol: 0,
+      note: "R_eL",
+    },
+    {
+      source: "iso-898-1",
+      locator: "Table 3, class 8.8 (d ≤ 16 mm)",
+      inputs: { id: "8.8" },
+      expected: { rmNom: 800, rmMin: 800, yNom: 640, yMin: 640, kind: "Rp0.2", sp: 580 },
+      rtol: 0,
+      note: "d > 16 mm row not used",
+    },
+    {
+      source: "iso-898-1",
+      locator: "Table 3, class 10.9",
+      inputs: { id: "10.9" },
+      expected: { rmNom: 1000, rmMin: 1040, yNom: 900, yMin: 940, kind: "Rp0.2", sp: 830 },
+      rtol: 0,
+      note: "",
+    },
+    {
+      source: "iso-898-1",
+      locator: "Table 3, class 12.9",
+      inputs: { id: "12.9" },
+      expected: { rmNom: 1200, rmMin: 1220, yNom: 1080, yMin: 1100, kind: "Rp0.2", sp: 970 },
+      rtol: 0,
+      note: "",
+    },
   ] as const;
 
   it.each(ROWS)("$source, $locator: holds the printed strengths exactly", ({ inputs, expected }) => {
@@ -167,7 +193,14 @@ describe("ISO 898-1 minimum ultimate tensile and proof loads", () => {
   const LOAD_TABLE = "Table 4 (A_s,nom × R_m,min), copy at usefastener.com/knowledge/404 (CONFIRMED)";
   const ULTIMATE = [
     { source: "iso-898-1", locator: LOAD_TABLE, inputs: { size: "M3", propertyClass: "12.9" }, expected: 6140, rtol: 5e-3, note: "5.03 × 1220 = 6136.6" },
-    { source: "iso-898-1", locator: LOAD_TABLE, inputs: { size: "M4", propertyClass: "10.9" }, expected: 9130, rtol: 5e-3, note: "the copy prints 91130, a typo; slsbearings.com prints 9,130" },
+    {
+      source: "iso-898-1",
+      locator: LOAD_TABLE,
+      inputs: { size: "M4", propertyClass: "10.9" },
+      expected: 9130,
+      rtol: 5e-3,
+      note: "the copy prints 91130, a typo; slsbearings.com prints 9,130",
+    },
     { source: "iso-898-1", locator: LOAD_TABLE, inputs: { size: "M5", propertyClass: "10.9" }, expected: 14800, rtol: 5e-3, note: "14.2 × 1040 = 14 768" },
     { source: "iso-898-1", locator: LOAD_TABLE, inputs: { size: "M5", propertyClass: "12.9" }, expected: 17300, rtol: 5e-3, note: "" },
     { source: "iso-898-1", locator: LOAD_TABLE, inputs: { size: "M6", propertyClass: "8.8" }, expected: 16100, rtol: 5e-3, note: "20.1 × 800 = 16 080" },
@@ -200,13 +233,62 @@ describe("EN 1993-1-8 design resistances (cross-check of the shear factor)", () 
   // (CONFIRMED). Printed to 0.1 kN (± 0.05 kN) or to whole kN (± 0.5 kN). A_s is the table's own.
   const kN = 1000;
   const CASES = [
-    { source: "en-1993-1-8", locator: "Table 3.4; design table, class 4.6 M20", inputs: { propertyClass: "4.6", area: 245e-6, kind: "shear" }, expected: 47.0 * kN, rtol: 0.05 / 47.0, note: "α_v = 0.6" },
-    { source: "en-1993-1-8", locator: "Table 3.4; design table, class 4.6 M20", inputs: { propertyClass: "4.6", area: 245e-6, kind: "tension" }, expected: 70.6 * kN, rtol: 0.05 / 70.6, note: "k₂ = 0.9" },
-    { source: "en-1993-1-8", locator: "Table 3.4; design table, class 4.6 M12", inputs: { propertyClass: "4.6", area: 84.3e-6, kind: "shear" }, expected: 16.2 * kN, rtol: 0.05 / 16.2, note: "" },
-    { source: "en-1993-1-8", locator: "Table 3.4; design table, class 4.6 M12", inputs: { propertyClass: "4.6", area: 84.3e-6, kind: "tension" }, expected: 24.3 * kN, rtol: 0.05 / 24.3, note: "" },
-    { source: "en-1993-1-8", locator: "Table 3.4; design table, class 8.8 M20", inputs: { propertyClass: "8.8", area: 245e-6, kind: "shear" }, expected: 94.1 * kN, rtol: 0.05 / 94.1, note: "α_v = 0.6" },
-    { source: "en-1993-1-8", locator: "Table 3.4; design table, class 10.9 countersunk M20", inputs: { propertyClass: "10.9", area: 245e-6, kind: "shear" }, expected: 98 * kN, rtol: 0.5 / 98, note: "α_v = 0.5" },
-    { source: "en-1993-1-8", locator: "Table 3.4; design table, class 10.9 countersunk M20", inputs: { propertyClass: "10.9", area: 245e-6, kind: "tension-countersunk" }, expected: 123 * kN, rtol: 0.5 / 123, note: "k₂ = 0.63" },
+    {
+      source: "en-1993-1-8",
+      locator: "Table 3.4; design table, class 4.6 M20",
+      inputs: { propertyClass: "4.6", area: 245e-6, kind: "shear" },
+      expected: 47.0 * kN,
+      rtol: 0.05 / 47.0,
+      note: "α_v = 0.6",
+    },
+    {
+      source: "en-1993-1-8",
+      locator: "Table 3.4; design table, class 4.6 M20",
+      inputs: { propertyClass: "4.6", area: 245e-6, kind: "tension" },
+      expected: 70.6 * kN,
+      rtol: 0.05 / 70.6,
+      note: "k₂ = 0.9",
+    },
+    {
+      source: "en-1993-1-8",
+      locator: "Table 3.4; design table, class 4.6 M12",
+      inputs: { propertyClass: "4.6", area: 84.3e-6, kind: "shear" },
+      expected: 16.2 * kN,
+      rtol: 0.05 / 16.2,
+      note: "",
+    },
+    {
+      source: "en-1993-1-8",
+      locator: "Table 3.4; design table, class 4.6 M12",
+      inputs: { propertyClass: "4.6", area: 84.3e-6, kind: "tension" },
+      expected: 24.3 * kN,
+      rtol: 0.05 / 24.3,
+      note: "",
+    },
+    {
+      source: "en-1993-1-8",
+      locator: "Table 3.4; design table, class 8.8 M20",
+      inputs: { propertyClass: "8.8", area: 245e-6, kind: "shear" },
+      expected: 94.1 * kN,
+      rtol: 0.05 / 94.1,
+      note: "α_v = 0.6",
+    },
+    {
+      source: "en-1993-1-8",
+      locator: "Table 3.4; design table, class 10.9 countersunk M20",
+      inputs: { propertyClass: "10.9", area: 245e-6, kind: "shear" },
+      expected: 98 * kN,
+      rtol: 0.5 / 98,
+      note: "α_v = 0.5",
+    },
+    {
+      source: "en-1993-1-8",
+      locator: "Table 3.4; design table, class 10.9 countersunk M20",
+      inputs: { propertyClass: "10.9", area: 245e-6, kind: "tension-countersunk" },
+      expected: 123 * kN,
+      rtol: 0.5 / 123,
+      note: "k₂ = 0.63",
+    },
   ] as const;
 
   it.each(CASES)("$source, $locator: $inputs.kind resistance $expected N", ({ inputs, expected, rtol }) => {

@@ -53,7 +53,7 @@ function defaultsOf<T extends InputSpecs>(specs: T): { [K in keyof T]: number } 
 function expectAllFinite(value: unknown, path = "result"): void {
   if (typeof value === "number") {
     if (!Number.isFinite(value)) throw new Error(`${path} is ${value}`);
-  } else if (Array.isArray(value)) value.forEach((v, i) => expectAllFinite(v, `${path}[${i}]`));
+  } else if (Array.isArray(value)) for (const [i, v] of value.entries()) expectAllFinite(v, `${path}[${i}]`);
   else if (value !== null && typeof value === "object") for (const [k, v] of Object.entries(value)) expectAllFinite(v, `${path}.${k}`);
 }
 
@@ -80,7 +80,12 @@ const dot = (a: Vec, b: Vec) => a[0] * b[0] + a[1] * b[1] + a[2] * b[2];
 function simulatedDriftPerRevolution(
   model: SpinRateErrorModel,
   angularSpeed: number,
-  { tiltPlane = "in-plane", gravity = false, revolutions = 5, stepsPerRevolution = 200 }: { tiltPlane?: "in-plane" | "out-of-plane"; gravity?: boolean; revolutions?: number; stepsPerRevolution?: number } = {},
+  {
+    tiltPlane = "in-plane",
+    gravity = false,
+    revolutions = 5,
+    stepsPerRevolution = 200,
+  }: { tiltPlane?: "in-plane" | "out-of-plane"; gravity?: boolean; revolutions?: number; stepsPerRevolution?: number } = {},
 ): number {
   const p: Vec = [model.trueRadius, 0, 0];
   const c = Math.cos(model.tilt);
@@ -217,7 +222,11 @@ describe("heading drift: reference cases", () => {
 describe("heading drift: closed form against a kinematic simulation", () => {
   const models: { name: string; model: SpinRateErrorModel; rpm: number }[] = [
     { name: "radius mismatch (the demo robot)", model: { ...EXACT, assumedRadius: 0.012, trueRadius: 0.0127 }, rpm: 2800 },
-    { name: "every error at once", model: { assumedRadius: 0.02, trueRadius: 0.0207, scaleError: -0.03, bias: 0.8, biasCorrection: 0.2, tilt: 7 * DEG }, rpm: 900 },
+    {
+      name: "every error at once",
+      model: { assumedRadius: 0.02, trueRadius: 0.0207, scaleError: -0.03, bias: 0.8, biasCorrection: 0.2, tilt: 7 * DEG },
+      rpm: 900,
+    },
     { name: "over-corrected offset at low speed", model: { ...EXACT, bias: 0.1, biasCorrection: 2.5 }, rpm: 300 },
   ];
   // Tolerance: the second difference of positions carries a relative error of about 1e-8 in the
@@ -305,7 +314,10 @@ describe("heading drift: limiting cases and structure", () => {
     expect(p.alone.radius).toBeCloseTo(headingDriftAt({ ...EXACT, assumedRadius: 0.01, trueRadius: 0.011, angularSpeed: w }).driftRate!, 12);
     expect(p.alone.scale).toBeCloseTo(headingDriftAt({ ...EXACT, scaleError: 0.05, angularSpeed: w }).driftRate!, 12);
     expect(p.alone.tilt).toBeCloseTo(headingDriftAt({ ...EXACT, tilt: 10 * DEG, angularSpeed: w }).driftRate!, 12);
-    expect(p.alone.bias!).toBeCloseTo(headingDriftAt({ ...EXACT, assumedRadius: 0.01, trueRadius: 0.01, bias: 3, biasCorrection: 1, angularSpeed: w }).driftRate!, 12);
+    expect(p.alone.bias!).toBeCloseTo(
+      headingDriftAt({ ...EXACT, assumedRadius: 0.01, trueRadius: 0.01, bias: 3, biasCorrection: 1, angularSpeed: w }).driftRate!,
+      12,
+    );
   });
 
   it("grows the radius and scale terms in proportion to speed and shrinks the offset term as 1/ω", () => {
@@ -381,7 +393,8 @@ describe("heading drift: the radius band and the speed range", () => {
           for (const w of grid) {
             const p = headingDriftAt({ ...m, angularSpeed: w });
             const inside = p.driftRate !== null && Math.abs(p.driftRate) <= budget;
-            const inRange = range.low !== null && w >= range.low && (range.high === null || w <= range.high) && !(w === range.low && range.lowLimit === "estimate-undefined");
+            const inRange =
+              range.low !== null && w >= range.low && (range.high === null || w <= range.high) && !(w === range.low && range.lowLimit === "estimate-undefined");
             if (inside !== inRange) {
               const nearEdge = [range.low, range.high].some((e) => e !== null && Math.abs(w - e) <= 1e-7 * Math.max(w, 1));
               if (!nearEdge) return false;
@@ -513,11 +526,16 @@ describe("timing", () => {
   });
 
   it("never returns a non-finite number for any valid input (fast-check)", () => {
-    fc.assert(fc.property(specsArbitrary(headingTimingInputs), (input: HeadingTimingInput) => expectAllFinite(headingTiming(input))), { numRuns: 200 });
+    fc.assert(
+      fc.property(specsArbitrary(headingTimingInputs), (input: HeadingTimingInput) => expectAllFinite(headingTiming(input))),
+      { numRuns: 200 },
+    );
   });
 
   it("throws a CalcInputError for a zero loop rate", () => {
-    expect(() => headingTiming({ ...defaultsOf(headingTimingInputs), loopRate: 0 })).toThrow("loopRate must be at least 1 Hz and at most 1000000 Hz (got 0 Hz)");
+    expect(() => headingTiming({ ...defaultsOf(headingTimingInputs), loopRate: 0 })).toThrow(
+      "loopRate must be at least 1 Hz and at most 1000000 Hz (got 0 Hz)",
+    );
     expect(() => headingStepPerLoop({ angularSpeed: 1, loopRate: -5 })).toThrow(CalcInputError);
   });
 });
@@ -550,7 +568,10 @@ describe("smoothing", () => {
     const a = emaTimeConstant({ smoothingFactor: 1e-4, samplePeriod: 1 });
     expect(a.exact / a.smallFactorApproximation).toBeCloseTo(1, 3); // 1 − α/2 + …
     expect(emaTimeConstant({ smoothingFactor: 1, samplePeriod: 1 }).exact).toBe(0);
-    expect(emaFactorForTimeConstant({ timeConstant: emaTimeConstant({ smoothingFactor: 0.3, samplePeriod: 0.01 }).exact, samplePeriod: 0.01 })).toBeCloseTo(0.3, 14);
+    expect(emaFactorForTimeConstant({ timeConstant: emaTimeConstant({ smoothingFactor: 0.3, samplePeriod: 0.01 }).exact, samplePeriod: 0.01 })).toBeCloseTo(
+      0.3,
+      14,
+    );
   });
 
   it("lags a ramp by Δt(1 − α)/α exactly once settled (simulation)", () => {
@@ -575,7 +596,14 @@ describe("smoothing", () => {
       const x = Array.from({ length: 4000 }, (_, n) => Math.min(accel * n * dt, dw));
       const y = filter(x, alpha, med);
       const error = x.reduce((acc, xi, i) => acc + (xi - y[i]!) * dt, 0);
-      const input: HeadingSmoothingInput = { ...defaultsOf(headingSmoothingInputs), sampleRate: 1 / dt, smoothingFactor: alpha, spinUpAcceleration: accel, speedChange: dw, medianLength: med };
+      const input: HeadingSmoothingInput = {
+        ...defaultsOf(headingSmoothingInputs),
+        sampleRate: 1 / dt,
+        smoothingFactor: alpha,
+        spinUpAcceleration: accel,
+        speedChange: dw,
+        medianLength: med,
+      };
       expect(error).toBeCloseTo(headingSmoothing(input).headingErrorAfterSpinUp, 9);
       if (med === 1) {
         const atEnd = x.slice(0, 501).reduce((acc, xi, i) => acc + (xi - y[i]!) * dt, 0);
@@ -705,7 +733,9 @@ describe("two opposed sensors", () => {
   });
 
   it("rejects a negative radius by name", () => {
-    expect(() => opposedSensorsDrift({ angularSpeed: 100, radius1: -0.01, radius2: 0.01, offset: 0 })).toThrow("radius1 must be greater than 0 m (got -0.01 m)");
+    expect(() => opposedSensorsDrift({ angularSpeed: 100, radius1: -0.01, radius2: 0.01, offset: 0 })).toThrow(
+      "radius1 must be greater than 0 m (got -0.01 m)",
+    );
   });
 });
 

@@ -40,7 +40,9 @@ describe("input declarations: reading a field", () => {
 
   it("reports an absurd unit and lists the right ones", () => {
     const reading = readField(radius, "3 parsecs", "metric");
-    expect(!reading.ok && reading.error.message).toBe('Sensor radius has a unit "parsecs" that is not a length unit; use m, cm, mm, in, ft; allowed: greater than 0 mm and at most 2000 mm');
+    expect(!reading.ok && reading.error.message).toBe(
+      'Sensor radius has a unit "parsecs" that is not a length unit; use m, cm, mm, in, ft; allowed: greater than 0 mm and at most 2000 mm',
+    );
   });
 
   it("shows a value typed in another unit converted to the field's unit", () => {
@@ -65,7 +67,9 @@ describe("input declarations: reading a field", () => {
   });
 
   it("refuses a declaration whose default lies outside its range", () => {
-    expect(() => defineInputs({ x: { label: "X", kind: "length", min: 0, max: 1, default: 2, urlKey: "x" } })).toThrow('input "x": default 2 lies outside [0, 1]');
+    expect(() => defineInputs({ x: { label: "X", kind: "length", min: 0, max: 1, default: 2, urlKey: "x" } })).toThrow(
+      'input "x": default 2 lies outside [0, 1]',
+    );
   });
 
   it("never throws and never accepts a non-finite value, whatever is typed (property)", () => {

@@ -692,15 +692,23 @@ describe("inputs", () => {
 
   it("throws a CalcInputError naming the field for any string that is not a loading mode or shape", () => {
     fc.assert(
-      fc.property(fc.string().filter((s) => s !== "shear" && s !== "tension"), (mode) => expectParamError(() => fastenerCheck({ ...FASTENER_DEFAULTS, mode }), "mode")),
+      fc.property(
+        fc.string().filter((s) => s !== "shear" && s !== "tension"),
+        (mode) => expectParamError(() => fastenerCheck({ ...FASTENER_DEFAULTS, mode }), "mode"),
+      ),
     );
     fc.assert(
-      fc.property(fc.string().filter((s) => !RIM_SHAPE_OPTIONS.some((o) => o.value === s)), (shape) => expectParamError(() => rimCheck({ ...RIM_DEFAULTS, shape }), "shape")),
+      fc.property(
+        fc.string().filter((s) => !RIM_SHAPE_OPTIONS.some((o) => o.value === s)),
+        (shape) => expectParamError(() => rimCheck({ ...RIM_DEFAULTS, shape }), "shape"),
+      ),
     );
   });
 
   it("rejects a 'thin' threshold below the 'fails' threshold", () => {
-    expect(() => fastenerCheck({ ...FASTENER_DEFAULTS, failBelow: 3, marginalBelow: 2 })).toThrow("marginalBelow must be at least the fail threshold, 3 (got 2)");
+    expect(() => fastenerCheck({ ...FASTENER_DEFAULTS, failBelow: 3, marginalBelow: 2 })).toThrow(
+      "marginalBelow must be at least the fail threshold, 3 (got 2)",
+    );
     expect(() => rimCheck({ ...RIM_DEFAULTS, failBelow: 3, marginalBelow: 2 })).toThrow(CalcInputError);
   });
 
@@ -718,17 +726,23 @@ describe("inputs", () => {
   });
 
   it("states the allowed range in readable numbers", () => {
-    expect(() => fastenerCheck({ ...FASTENER_DEFAULTS, angularSpeed: 0 })).toThrow("angularSpeed must be at least 0.10472 rad/s and at most 10472 rad/s (got 0 rad/s)");
+    expect(() => fastenerCheck({ ...FASTENER_DEFAULTS, angularSpeed: 0 })).toThrow(
+      "angularSpeed must be at least 0.10472 rad/s and at most 10472 rad/s (got 0 rad/s)",
+    );
     expect(() => fastenerCheck({ ...FASTENER_DEFAULTS, count: 1.5 })).toThrow("count must be a whole number at least 1 and at most 64 (got 1.5)");
     expect(() => fastenerCheck({ ...FASTENER_DEFAULTS, partMass: Number.NaN })).toThrow("partMass must be a finite number (got not a number)");
   });
 
   it("ignores the bore of a solid disk or a ring, but still checks it is a length in range", () => {
-    expect(rimCheck({ ...RIM_DEFAULTS, shape: "solid-disk", innerRadius: 0.2 }).peakStress).toBe(rimCheck({ ...RIM_DEFAULTS, shape: "solid-disk", innerRadius: 0 }).peakStress);
+    expect(rimCheck({ ...RIM_DEFAULTS, shape: "solid-disk", innerRadius: 0.2 }).peakStress).toBe(
+      rimCheck({ ...RIM_DEFAULTS, shape: "solid-disk", innerRadius: 0 }).peakStress,
+    );
   });
 
   it("refuses a solid-disk radius beyond the rim, naming it", () => {
-    expect(() => solidDiskStress({ ...STEEL, angularSpeed: 100, outerRadius: 0.1, radius: 0.2 })).toThrow("radius must be at least 0 m and at most 0.1 m (got 0.2 m)");
+    expect(() => solidDiskStress({ ...STEEL, angularSpeed: 100, outerRadius: 0.1, radius: 0.2 })).toThrow(
+      "radius must be at least 0 m and at most 0.1 m (got 0.2 m)",
+    );
   });
 });
 
@@ -748,7 +762,9 @@ describe("helpers added for the chapters and calculators", () => {
     for (const { value: propertyClass } of PROPERTY_CLASS_OPTIONS) {
       for (const { value: mode } of LOADING_MODE_OPTIONS) {
         const check = fastenerCheck({ ...FASTENER_DEFAULTS, propertyClass, mode, shearRatio: 0.6 });
-        expect({ yieldStrength: check.yieldStrength, ultimateStrength: check.ultimateStrength }).toEqual(fastenerStrengths({ propertyClass, mode, shearRatio: 0.6 }));
+        expect({ yieldStrength: check.yieldStrength, ultimateStrength: check.ultimateStrength }).toEqual(
+          fastenerStrengths({ propertyClass, mode, shearRatio: 0.6 }),
+        );
       }
     }
   });
@@ -846,12 +862,15 @@ describe("sources", () => {
     return { undocumented: exported.filter((name) => !documented.has(name)), keys };
   }
 
-  it.each(["../../calc/loads.ts", "../../calc/loads-common.ts", "../../calc/loads-bolts.ts", "../../calc/loads-rims.ts", "../../calc/fasteners.ts"])("documents every exported function of %s and cites only known keys", (path) => {
-    const { undocumented, keys } = documentedSourceKeys(path);
-    expect(undocumented).toEqual([]);
-    expect(keys.length).toBeGreaterThan(0);
-    expect(keys.filter((k) => !isSourceKey(k))).toEqual([]);
-  });
+  it.each(["../../calc/loads.ts", "../../calc/loads-common.ts", "../../calc/loads-bolts.ts", "../../calc/loads-rims.ts", "../../calc/fasteners.ts"])(
+    "documents every exported function of %s and cites only known keys",
+    (path) => {
+      const { undocumented, keys } = documentedSourceKeys(path);
+      expect(undocumented).toEqual([]);
+      expect(keys.length).toBeGreaterThan(0);
+      expect(keys.filter((k) => !isSourceKey(k))).toEqual([]);
+    },
+  );
 
   it("lists only known source keys, and uses every bibliography entry it adds", () => {
     expect([...LOADS_SOURCES, ...FASTENERS_SOURCES].filter((k) => !isSourceKey(k))).toEqual([]);
@@ -868,14 +887,26 @@ describe("regression pins (COMPUTED, not outside authorities)", () => {
   it.each([
     { name: "steel ring at v = 100 m/s", actual: () => thinRingHoopStress({ density: 7850, angularSpeed: 1000, radius: 0.1 }), expected: 78.5 * MPa },
     { name: "aluminium ring at v = 150 m/s", actual: () => thinRingHoopStress({ density: 2700, angularSpeed: 1500, radius: 0.1 }), expected: 60.75 * MPa },
-    { name: "steel ring, R = 0.1 m, 10 000 rpm", actual: () => thinRingHoopStress({ density: 7850, angularSpeed: RPM_10000, radius: 0.1 }), expected: 86.08488283 * MPa },
-    { name: "steel solid disk centre, b = 0.1 m, 10 000 rpm", actual: () => solidDiskCentreStress({ ...STEEL, angularSpeed: RPM_10000, outerRadius: 0.1 }), expected: 35.51001417 * MPa },
+    {
+      name: "steel ring, R = 0.1 m, 10 000 rpm",
+      actual: () => thinRingHoopStress({ density: 7850, angularSpeed: RPM_10000, radius: 0.1 }),
+      expected: 86.08488283 * MPa,
+    },
+    {
+      name: "steel solid disk centre, b = 0.1 m, 10 000 rpm",
+      actual: () => solidDiskCentreStress({ ...STEEL, angularSpeed: RPM_10000, outerRadius: 0.1 }),
+      expected: 35.51001417 * MPa,
+    },
     {
       name: "steel solid disk rim hoop",
       actual: () => solidDiskStress({ ...STEEL, angularSpeed: RPM_10000, outerRadius: 0.1, radius: 0.1 }).hoop,
       expected: 15.0648545 * MPa,
     },
-    { name: "steel bored disk, a = 0.01 m, bore hoop", actual: () => annularDiskBoreStress({ ...STEEL, angularSpeed: RPM_10000, innerRadius: 0.01, outerRadius: 0.1 }), expected: 71.17067688 * MPa },
+    {
+      name: "steel bored disk, a = 0.01 m, bore hoop",
+      actual: () => annularDiskBoreStress({ ...STEEL, angularSpeed: RPM_10000, innerRadius: 0.01, outerRadius: 0.1 }),
+      expected: 71.17067688 * MPa,
+    },
     {
       name: "steel bored disk, a = 0.01 m, largest radial",
       actual: () => annularDiskPeakRadialStress({ ...STEEL, angularSpeed: RPM_10000, innerRadius: 0.01, outerRadius: 0.1 }).stress,

@@ -47,7 +47,14 @@ import { fromSI, rpmToRadPerSecond, toSI } from "../../calc/units.ts";
 // ---------------------------------------------------------------------------------------------
 // Helpers.
 
-const point = (mass: number, x: number, y: number, z = 0, name = "p"): LayoutPart => ({ name, shape: { kind: "point" }, mass: { kind: "given", mass }, x, y, z });
+const point = (mass: number, x: number, y: number, z = 0, name = "p"): LayoutPart => ({
+  name,
+  shape: { kind: "point" },
+  mass: { kind: "given", mass },
+  x,
+  y,
+  z,
+});
 const given = (shape: PartShape, mass: number, x = 0, y = 0, z = 0, name = "part"): LayoutPart => ({ name, shape, mass: { kind: "given", mass }, x, y, z });
 
 function expectRel(actual: number, expected: number, rtol: number): void {
@@ -60,7 +67,7 @@ function expectAllFinite(value: unknown, path = "result"): void {
   if (typeof value === "number") {
     expect(Number.isFinite(value), `${path} = ${value}`).toBe(true);
   } else if (Array.isArray(value)) {
-    value.forEach((v, i) => expectAllFinite(v, `${path}[${i}]`));
+    for (const [i, v] of value.entries()) expectAllFinite(v, `${path}[${i}]`);
   } else if (value !== null && typeof value === "object") {
     for (const [k, v] of Object.entries(value)) expectAllFinite(v, `${path}.${k}`);
   }
@@ -93,16 +100,33 @@ const shapeArb: fc.Arbitrary<PartShape> = fc.oneof(
   fc.tuple(len(), len(), angleArb).map(([length, width, angle]) => ({ kind: "plate" as const, length, width, angle })),
   fc.tuple(len(), angleArb).map(([length, angle]) => ({ kind: "rod" as const, length, angle })),
   fc.tuple(len(), len()).map(([radius, height]) => ({ kind: "cylinder" as const, radius, height })),
-  fc.tuple(fc.double({ min: 0, max: 0.01, noNaN: true }), fc.double({ min: -0.001, max: 0.001, noNaN: true }), fc.double({ min: -0.001, max: 0.001, noNaN: true })).map(
-    ([inertiaZ, productXZ, productYZ]) => ({ kind: "custom" as const, inertiaZ, productXZ, productYZ }),
-  ),
+  fc
+    .tuple(
+      fc.double({ min: 0, max: 0.01, noNaN: true }),
+      fc.double({ min: -0.001, max: 0.001, noNaN: true }),
+      fc.double({ min: -0.001, max: 0.001, noNaN: true }),
+    )
+    .map(([inertiaZ, productXZ, productYZ]) => ({ kind: "custom" as const, inertiaZ, productXZ, productYZ })),
 );
 const partArb: fc.Arbitrary<LayoutPart> = fc
-  .record({ shape: shapeArb, m: massArb, x: coord, y: coord, z: coord, material: fc.constantFrom(...MATERIAL_IDS), useMaterial: fc.boolean(), t: len(0.001, 0.02), name: fc.constantFrom("body", "battery", "motor_1", "a~b", "wheel, left", "ünï") })
+  .record({
+    shape: shapeArb,
+    m: massArb,
+    x: coord,
+    y: coord,
+    z: coord,
+    material: fc.constantFrom(...MATERIAL_IDS),
+    useMaterial: fc.boolean(),
+    t: len(0.001, 0.02),
+    name: fc.constantFrom("body", "battery", "motor_1", "a~b", "wheel, left", "ünï"),
+  })
   .map(({ shape, m, x, y, z, material, useMaterial, t, name }) => ({
     name,
     shape,
-    mass: useMaterial && shape.kind !== "point" && shape.kind !== "custom" ? { kind: "material" as const, material, thickness: t } : { kind: "given" as const, mass: m },
+    mass:
+      useMaterial && shape.kind !== "point" && shape.kind !== "custom"
+        ? { kind: "material" as const, material, thickness: t }
+        : { kind: "given" as const, mass: m },
     x,
     y,
     z,
@@ -115,14 +139,70 @@ describe("moments of inertia of each shape against the handbook table", () => {
   // Formulas: /work/shared/references.md §5 (CONFIRMED quotes); values: the COMPUTED test vectors
   // printed there to 10 significant figures or exactly, so rtol 1e-12 (floating point only).
   const CASES = [
-    { source: "oxford-concise-mathematics", locator: "App. 3, disc about axis ½Mr²", inputs: given({ kind: "disk", radius: 0.1 }, 2), expected: 0.01, rtol: 1e-12, note: "solid disk 2 kg, R 0.1 m" },
-    { source: "oxford-concise-mathematics", locator: "App. 3, hoop about axis Mr²", inputs: given({ kind: "ring", radius: 0.1 }, 2), expected: 0.02, rtol: 1e-12, note: "thin ring 2 kg, R 0.1 m" },
-    { source: "mathmos-moments-of-inertia", locator: "annulus ½M(a²+b²)", inputs: given({ kind: "annulus", innerRadius: 0.05, outerRadius: 0.1 }, 2), expected: 0.0125, rtol: 1e-12, note: "annulus 2 kg, 0.05/0.1 m" },
-    { source: "web-formulas-moment-of-inertia", locator: "rectangular plate M(L²+W²)/12", inputs: given({ kind: "plate", length: 0.3, width: 0.1, angle: 0 }, 1), expected: 0.008333333333, rtol: 1e-10, note: "plate 1 kg, 0.3 × 0.1 m (printed to 10 s.f.)" },
-    { source: "web-formulas-moment-of-inertia", locator: "rectangular plate, turned in its plane", inputs: given({ kind: "plate", length: 0.3, width: 0.1, angle: 1.1 }, 1), expected: 0.008333333333, rtol: 1e-10, note: "the normal-axis inertia does not depend on the in-plane angle" },
-    { source: "web-formulas-moment-of-inertia", locator: "bar about centre ML²/12", inputs: given({ kind: "rod", length: 0.3, angle: 0.4 }, 1), expected: 0.0075, rtol: 1e-12, note: "rod 1 kg, L 0.3 m" },
-    { source: "oxford-concise-mathematics", locator: "App. 3, solid cylinder about axis ½Mr²", inputs: given({ kind: "cylinder", radius: 0.05, height: 0.2 }, 2), expected: 0.0025, rtol: 1e-12, note: "cylinder 2 kg, R 0.05 m, about its own (z) axis" },
-    { source: "web-formulas-moment-of-inertia", locator: "particle Md², at its own centre", inputs: point(0.1, 0, 0), expected: 0, rtol: 0, note: "a point has no own inertia" },
+    {
+      source: "oxford-concise-mathematics",
+      locator: "App. 3, disc about axis ½Mr²",
+      inputs: given({ kind: "disk", radius: 0.1 }, 2),
+      expected: 0.01,
+      rtol: 1e-12,
+      note: "solid disk 2 kg, R 0.1 m",
+    },
+    {
+      source: "oxford-concise-mathematics",
+      locator: "App. 3, hoop about axis Mr²",
+      inputs: given({ kind: "ring", radius: 0.1 }, 2),
+      expected: 0.02,
+      rtol: 1e-12,
+      note: "thin ring 2 kg, R 0.1 m",
+    },
+    {
+      source: "mathmos-moments-of-inertia",
+      locator: "annulus ½M(a²+b²)",
+      inputs: given({ kind: "annulus", innerRadius: 0.05, outerRadius: 0.1 }, 2),
+      expected: 0.0125,
+      rtol: 1e-12,
+      note: "annulus 2 kg, 0.05/0.1 m",
+    },
+    {
+      source: "web-formulas-moment-of-inertia",
+      locator: "rectangular plate M(L²+W²)/12",
+      inputs: given({ kind: "plate", length: 0.3, width: 0.1, angle: 0 }, 1),
+      expected: 0.008333333333,
+      rtol: 1e-10,
+      note: "plate 1 kg, 0.3 × 0.1 m (printed to 10 s.f.)",
+    },
+    {
+      source: "web-formulas-moment-of-inertia",
+      locator: "rectangular plate, turned in its plane",
+      inputs: given({ kind: "plate", length: 0.3, width: 0.1, angle: 1.1 }, 1),
+      expected: 0.008333333333,
+      rtol: 1e-10,
+      note: "the normal-axis inertia does not depend on the in-plane angle",
+    },
+    {
+      source: "web-formulas-moment-of-inertia",
+      locator: "bar about centre ML²/12",
+      inputs: given({ kind: "rod", length: 0.3, angle: 0.4 }, 1),
+      expected: 0.0075,
+      rtol: 1e-12,
+      note: "rod 1 kg, L 0.3 m",
+    },
+    {
+      source: "oxford-concise-mathematics",
+      locator: "App. 3, solid cylinder about axis ½Mr²",
+      inputs: given({ kind: "cylinder", radius: 0.05, height: 0.2 }, 2),
+      expected: 0.0025,
+      rtol: 1e-12,
+      note: "cylinder 2 kg, R 0.05 m, about its own (z) axis",
+    },
+    {
+      source: "web-formulas-moment-of-inertia",
+      locator: "particle Md², at its own centre",
+      inputs: point(0.1, 0, 0),
+      expected: 0,
+      rtol: 0,
+      note: "a point has no own inertia",
+    },
   ];
   it.each(CASES)("$source, $locator: $note", ({ inputs, expected, rtol }) => {
     const own = partOwnInertia(inputs);
@@ -144,7 +224,14 @@ describe("moments of inertia of each shape against the handbook table", () => {
   });
 
   it("oxford-concise-mathematics, annulus from dimensions: steel ρ 7850, 20–100 mm, 10 mm thick (references §5 COMPUTED m = 2.367504224 kg, I = 0.01231102196 kg·m²)", () => {
-    const ring: LayoutPart = { name: "flywheel", shape: { kind: "annulus", innerRadius: 0.02, outerRadius: 0.1 }, mass: { kind: "material", material: "steel-4130-normalized", thickness: 0.01 }, x: 0, y: 0, z: 0 };
+    const ring: LayoutPart = {
+      name: "flywheel",
+      shape: { kind: "annulus", innerRadius: 0.02, outerRadius: 0.1 },
+      mass: { kind: "material", material: "steel-4130-normalized", thickness: 0.01 },
+      x: 0,
+      y: 0,
+      z: 0,
+    };
     expect(MATERIALS["steel-4130-normalized"].density).toBe(7850);
     expectRel(partMass(ring), 2.367504224, 1e-9);
     expectRel(partOwnInertia(ring).inertiaZ, 0.01231102196, 1e-9);
@@ -153,7 +240,14 @@ describe("moments of inertia of each shape against the handbook table", () => {
   });
 
   it("keeps the thin ring and slender rod idealisations exactly as the handbook states them (section diameter ignored)", () => {
-    const wire: LayoutPart = { name: "hoop", shape: { kind: "ring", radius: 0.1 }, mass: { kind: "material", material: "al-6061-t6", thickness: 0.004 }, x: 0, y: 0, z: 0 };
+    const wire: LayoutPart = {
+      name: "hoop",
+      shape: { kind: "ring", radius: 0.1 },
+      mass: { kind: "material", material: "al-6061-t6", thickness: 0.004 },
+      x: 0,
+      y: 0,
+      z: 0,
+    };
     const m = partMass(wire);
     expectRel(m, 2700 * 2 * Math.PI * 0.1 * ((Math.PI * 0.004 ** 2) / 4), 1e-12);
     expectRel(partOwnInertia(wire).inertiaZ, m * 0.01, 1e-12);
@@ -161,7 +255,14 @@ describe("moments of inertia of each shape against the handbook table", () => {
 
   it("computes volume × density for every material shape", () => {
     const t = 0.005;
-    const mk = (shape: PartShape, thickness?: number): LayoutPart => ({ name: "", shape, mass: { kind: "material", material: "al-6061-t6", ...(thickness === undefined ? {} : { thickness }) }, x: 0, y: 0, z: 0 });
+    const mk = (shape: PartShape, thickness?: number): LayoutPart => ({
+      name: "",
+      shape,
+      mass: { kind: "material", material: "al-6061-t6", ...(thickness === undefined ? {} : { thickness }) },
+      x: 0,
+      y: 0,
+      z: 0,
+    });
     expectRel(partVolume(mk({ kind: "disk", radius: 0.07 }, t)), Math.PI * 0.07 ** 2 * t, 1e-12);
     expectRel(partVolume(mk({ kind: "annulus", innerRadius: 0.05, outerRadius: 0.07 }, t)), Math.PI * (0.07 ** 2 - 0.05 ** 2) * t, 1e-12);
     expectRel(partVolume(mk({ kind: "plate", length: 0.1, width: 0.05, angle: 0 }, t)), 0.1 * 0.05 * t, 1e-12);
@@ -189,9 +290,24 @@ describe("composite bodies against hand sums (centre-of-mass, parallel-axis-theo
   const yb = (0.1 * 0.03 + 0.2 * -0.04 + 0.05 * -0.02 + 0.3 * 0.05) / M;
   const zb = (0.5 * 0.01 + 0.1 * 0.02 + 0.2 * 0.005 + 0.05 * 0.015 + 0.3 * 0.03) / M;
   const own = 0.5 * 2 * 0.1 ** 2 + 0.5 * 0.08 ** 2 + (0.2 * (0.06 ** 2 + 0.04 ** 2)) / 12 + (0.05 * 0.1 ** 2) / 12 + 1e-4;
-  const IO = own + 0.5 * 0.02 ** 2 + 0.1 * (0.05 ** 2 + 0.03 ** 2) + 0.2 * (0.03 ** 2 + 0.04 ** 2) + 0.05 * (0.02 ** 2 + 0.02 ** 2) + 0.3 * (0.01 ** 2 + 0.05 ** 2);
-  const Pxz = 2e-6 + 2 * (0 - xb) * (0 - zb) + 0.5 * (0.02 - xb) * (0.01 - zb) + 0.1 * (-0.05 - xb) * (0.02 - zb) + 0.2 * (0.03 - xb) * (0.005 - zb) + 0.05 * (-0.02 - xb) * (0.015 - zb) + 0.3 * (0.01 - xb) * (0.03 - zb);
-  const Pyz = -1e-6 + 2 * (0 - yb) * (0 - zb) + 0.5 * (0 - yb) * (0.01 - zb) + 0.1 * (0.03 - yb) * (0.02 - zb) + 0.2 * (-0.04 - yb) * (0.005 - zb) + 0.05 * (-0.02 - yb) * (0.015 - zb) + 0.3 * (0.05 - yb) * (0.03 - zb);
+  const IO =
+    own + 0.5 * 0.02 ** 2 + 0.1 * (0.05 ** 2 + 0.03 ** 2) + 0.2 * (0.03 ** 2 + 0.04 ** 2) + 0.05 * (0.02 ** 2 + 0.02 ** 2) + 0.3 * (0.01 ** 2 + 0.05 ** 2);
+  const Pxz =
+    2e-6 +
+    2 * (0 - xb) * (0 - zb) +
+    0.5 * (0.02 - xb) * (0.01 - zb) +
+    0.1 * (-0.05 - xb) * (0.02 - zb) +
+    0.2 * (0.03 - xb) * (0.005 - zb) +
+    0.05 * (-0.02 - xb) * (0.015 - zb) +
+    0.3 * (0.01 - xb) * (0.03 - zb);
+  const Pyz =
+    -1e-6 +
+    2 * (0 - yb) * (0 - zb) +
+    0.5 * (0 - yb) * (0.01 - zb) +
+    0.1 * (0.03 - yb) * (0.02 - zb) +
+    0.2 * (-0.04 - yb) * (0.005 - zb) +
+    0.05 * (-0.02 - yb) * (0.015 - zb) +
+    0.3 * (0.05 - yb) * (0.03 - zb);
 
   it("sums the mass and the centre of mass", () => {
     expectRel(props.totalMass, M, 1e-14);
@@ -217,13 +333,17 @@ describe("composite bodies against hand sums (centre-of-mass, parallel-axis-theo
 
   it("matches the doc example: 2 kg disk plus 0.1 kg at 0.1 m", () => {
     const p = massProperties([given({ kind: "disk", radius: 0.1 }, 2), point(0.1, 0.1, 0)]);
-    expectRel(p.centreX, 0.1 * 0.1 / 2.1, 1e-14);
+    expectRel(p.centreX, (0.1 * 0.1) / 2.1, 1e-14);
     expectRel(p.inertiaAboutOrigin, 0.011, 1e-12);
     expectRel(p.inertiaAboutCentre, 0.0109524, 0.00000005 / 0.0109524); // printed to 6 s.f.
   });
 
   it("gives zero products for flat parts all at one height, whatever their plan positions", () => {
-    const flat = [given({ kind: "plate", length: 0.1, width: 0.02, angle: 0.3 }, 0.4, 0.05, 0.01, 0.01), given({ kind: "disk", radius: 0.03 }, 0.2, -0.04, 0.02, 0.01), point(0.05, 0.01, -0.06, 0.01)];
+    const flat = [
+      given({ kind: "plate", length: 0.1, width: 0.02, angle: 0.3 }, 0.4, 0.05, 0.01, 0.01),
+      given({ kind: "disk", radius: 0.03 }, 0.2, -0.04, 0.02, 0.01),
+      point(0.05, 0.01, -0.06, 0.01),
+    ];
     const p = massProperties(flat);
     expect(Math.abs(p.productXZ)).toBeLessThan(1e-18);
     expect(Math.abs(p.productYZ)).toBeLessThan(1e-18);
@@ -231,7 +351,11 @@ describe("composite bodies against hand sums (centre-of-mass, parallel-axis-theo
 
   it("lists each part's mass and share", () => {
     expect(props.parts.map((r) => r.mass)).toEqual([2, 0.5, 0.1, 0.2, 0.05, 0.3]);
-    expectRel(props.parts.reduce((s, r) => s + r.massFraction, 0), 1, 1e-14);
+    expectRel(
+      props.parts.reduce((s, r) => s + r.massFraction, 0),
+      1,
+      1e-14,
+    );
   });
 });
 
@@ -368,7 +492,15 @@ describe("static and couple unbalance", () => {
 describe("two-plane correction", () => {
   it("rigid-rotor-unbalance: 10 g at (50 mm, 0, 10 mm) with planes at 0 and 20 mm and r = 50 mm takes 5 g at 180° in each plane", () => {
     const p = massProperties([point(0.01, 0.05, 0, 0.01)]);
-    const c = twoPlaneCorrection({ firstMomentX: p.firstMomentX, firstMomentY: p.firstMomentY, productXZ: p.productXZAboutOrigin, productYZ: p.productYZAboutOrigin, planeZ1: 0, planeZ2: 0.02, radius: 0.05 });
+    const c = twoPlaneCorrection({
+      firstMomentX: p.firstMomentX,
+      firstMomentY: p.firstMomentY,
+      productXZ: p.productXZAboutOrigin,
+      productYZ: p.productYZAboutOrigin,
+      planeZ1: 0,
+      planeZ2: 0.02,
+      radius: 0.05,
+    });
     expectRel(c.lower.mass, 0.005, 1e-12);
     expectRel(c.upper.mass, 0.005, 1e-12);
     expect(c.lower.angle).toBe(Math.PI);
@@ -381,12 +513,20 @@ describe("two-plane correction", () => {
         fc.pre(Math.abs(dz) > 1e-3);
         const z2 = z1 + dz;
         const p = massProperties(parts);
-        const c = twoPlaneCorrection({ firstMomentX: p.firstMomentX, firstMomentY: p.firstMomentY, productXZ: p.productXZAboutOrigin, productYZ: p.productYZAboutOrigin, planeZ1: z1, planeZ2: z2, radius });
+        const c = twoPlaneCorrection({
+          firstMomentX: p.firstMomentX,
+          firstMomentY: p.firstMomentY,
+          productXZ: p.productXZAboutOrigin,
+          productYZ: p.productYZAboutOrigin,
+          planeZ1: z1,
+          planeZ2: z2,
+          radius,
+        });
         const fixed = [...parts];
         for (const m of [c.lower, c.upper]) if (m.mass > 0) fixed.push(point(m.mass, m.x, m.y, m.z));
         const q = massProperties(fixed);
         // Scale of the quantities cancelled: the first moments and products involved.
-        const uScale = Math.max(...parts.map((part, i) => p.parts[i]!.mass * 0.3), c.lower.unbalance, c.upper.unbalance);
+        const uScale = Math.max(...parts.map((_part, i) => p.parts[i]!.mass * 0.3), c.lower.unbalance, c.upper.unbalance);
         expect(Math.abs(q.firstMomentX)).toBeLessThan(1e-12 * uScale + 1e-18);
         expect(Math.abs(q.firstMomentY)).toBeLessThan(1e-12 * uScale + 1e-18);
         const cScale = uScale * (0.5 + Math.abs(z1) + Math.abs(z2)) + 0.002;
@@ -398,7 +538,11 @@ describe("two-plane correction", () => {
   });
 
   it("refuses two planes at the same height", () => {
-    expectInputError(() => twoPlaneCorrection({ firstMomentX: 1, firstMomentY: 0, productXZ: 0, productYZ: 0, planeZ1: 0.01, planeZ2: 0.01, radius: 0.05 }), "planeZ2", /different from the other plane/);
+    expectInputError(
+      () => twoPlaneCorrection({ firstMomentX: 1, firstMomentY: 0, productXZ: 0, productYZ: 0, planeZ1: 0.01, planeZ2: 0.01, radius: 0.05 }),
+      "planeZ2",
+      /different from the other plane/,
+    );
   });
 });
 
@@ -435,7 +579,14 @@ describe("counterweights", () => {
   });
 
   it("centre-of-mass: among mounting points, only the one on the far side works, and it needs the same 45.65 g", () => {
-    const c = counterweightAtCandidates({ ...base, candidates: [{ x: 0.055, y: 0 }, { x: 0, y: 0.055 }, { x: -0.055, y: 0 }] });
+    const c = counterweightAtCandidates({
+      ...base,
+      candidates: [
+        { x: 0.055, y: 0 },
+        { x: 0, y: 0.055 },
+        { x: -0.055, y: 0 },
+      ],
+    });
     expect(c.best).toBe(2);
     expect(c.candidates[0]!.feasible).toBe(false);
     expect(c.candidates[0]!.reason).toMatch(/never enters the target circle/);
@@ -621,8 +772,11 @@ describe("editing the parts list", () => {
     const mo = mirrorPart(c, "origin");
     expect([mo.x, mo.y]).toEqual([-0.03, -0.04]);
     // Plate corners of the mirror image are the mirror images of the corners.
-    const corners = (p: LayoutPart) => (partOutline(p) as { corners: readonly (readonly [number, number])[] }).corners.map(([x, y]) => `${x.toFixed(12)},${y.toFixed(12)}`).sort();
-    expect(corners(mx)).toEqual((partOutline(c) as { corners: readonly (readonly [number, number])[] }).corners.map(([x, y]) => `${x.toFixed(12)},${(-y + 0).toFixed(12)}`).sort());
+    const corners = (p: LayoutPart) =>
+      (partOutline(p) as { corners: readonly (readonly [number, number])[] }).corners.map(([x, y]) => `${x.toFixed(12)},${y.toFixed(12)}`).sort();
+    expect(corners(mx)).toEqual(
+      (partOutline(c) as { corners: readonly (readonly [number, number])[] }).corners.map(([x, y]) => `${x.toFixed(12)},${(-y + 0).toFixed(12)}`).sort(),
+    );
     expect(mirrorPartInList(list, 2, "x")[2]).toEqual(mx);
     expect(addMirrorCopy(list, 0, "y").map((p) => p.name)).toEqual(["a", "a (mirror)", "b", "c"]);
   });
@@ -711,7 +865,8 @@ describe("URL text of the parts list", () => {
   });
 
   it("reports each bad part by its index and reason, and keeps the good ones", () => {
-    const text = "v1~pt_ok_0_0_0_10~blob_x_0_0_0_1~disk_d_0_0_0_abc_5~ann_a_0_0_0_50_40_30~disk_m_0_0_0_50_mithril_3~disk_t_0_0_0_50_al-6061-t6~pt_extra_0_0_0_10_11~pt_bad%ZZ_0_0_0_1";
+    const text =
+      "v1~pt_ok_0_0_0_10~blob_x_0_0_0_1~disk_d_0_0_0_abc_5~ann_a_0_0_0_50_40_30~disk_m_0_0_0_50_mithril_3~disk_t_0_0_0_50_al-6061-t6~pt_extra_0_0_0_10_11~pt_bad%ZZ_0_0_0_1";
     const r = parseLayout(text);
     expect(r.ok).toBe(false);
     expect(r.parts.map((p) => p.name)).toEqual(["ok"]);
@@ -735,11 +890,17 @@ describe("URL text of the parts list", () => {
   it("never throws, whatever the text", () => {
     const pieces = fc.constantFrom("v1", "~", "_", "pt", "disk", "cust", "0", "-1", "1e400", "NaN", "%", "%41", "al-6061-t6", "", "x", ".5", "1e-3");
     fc.assert(
-      fc.property(fc.oneof(fc.string(), fc.array(pieces, { maxLength: 30 }).map((p) => p.join(""))), (text) => {
-        const r = parseLayout(text);
-        expect(r.ok).toBe(r.problems.length === 0);
-        for (const p of r.parts) expect(() => checkPart(p)).not.toThrow();
-      }),
+      fc.property(
+        fc.oneof(
+          fc.string(),
+          fc.array(pieces, { maxLength: 30 }).map((p) => p.join("")),
+        ),
+        (text) => {
+          const r = parseLayout(text);
+          expect(r.ok).toBe(r.problems.length === 0);
+          for (const p of r.parts) expect(() => checkPart(p)).not.toThrow();
+        },
+      ),
       { numRuns: 500 },
     );
   });
@@ -750,12 +911,21 @@ describe("top-view drawing data", () => {
     expect(partOutline(given({ kind: "disk", radius: 0.05 }, 1, 0.01, 0.02))).toEqual({ kind: "circle", centre: [0.01, 0.02], radius: 0.05 });
     expect(partOutline(given({ kind: "cylinder", radius: 0.01, height: 0.02 }, 1))).toMatchObject({ kind: "circle", radius: 0.01 });
     expect(partOutline(given({ kind: "ring", radius: 0.05 }, 1))).toMatchObject({ kind: "hoop", radius: 0.05 });
-    expect(partOutline(given({ kind: "annulus", innerRadius: 0.03, outerRadius: 0.05 }, 1))).toMatchObject({ kind: "annulus", innerRadius: 0.03, outerRadius: 0.05 });
+    expect(partOutline(given({ kind: "annulus", innerRadius: 0.03, outerRadius: 0.05 }, 1))).toMatchObject({
+      kind: "annulus",
+      innerRadius: 0.03,
+      outerRadius: 0.05,
+    });
     expect(partOutline(point(1, 0.1, 0.2))).toEqual({ kind: "point", centre: [0.1, 0.2] });
     const plate = partOutline(given({ kind: "plate", length: 0.04, width: 0.02, angle: Math.PI / 2 }, 1, 0.1, 0));
     expect(plate.kind).toBe("polygon");
     const corners = (plate as { corners: readonly (readonly [number, number])[] }).corners;
-    const expected = [[0.11, -0.02], [0.11, 0.02], [0.09, 0.02], [0.09, -0.02]];
+    const expected = [
+      [0.11, -0.02],
+      [0.11, 0.02],
+      [0.09, 0.02],
+      [0.09, -0.02],
+    ];
     corners.forEach(([x, y], i) => {
       expect(x).toBeCloseTo(expected[i]![0]!, 14);
       expect(y).toBeCloseTo(expected[i]![1]!, 14);
@@ -778,11 +948,26 @@ describe("top-view drawing data", () => {
 
 describe("input checks", () => {
   it("names the field of a bad part in the parts list", () => {
-    expectInputError(() => massProperties([point(1, 0, 0), given({ kind: "annulus", innerRadius: 0.06, outerRadius: 0.05 }, 1)]), "parts[1].shape.innerRadius", /^parts\[1\]\.shape\.innerRadius must be less than the outer radius \(0\.05 m\) \(got 0\.06 m\)$/);
+    expectInputError(
+      () => massProperties([point(1, 0, 0), given({ kind: "annulus", innerRadius: 0.06, outerRadius: 0.05 }, 1)]),
+      "parts[1].shape.innerRadius",
+      /^parts\[1\]\.shape\.innerRadius must be less than the outer radius \(0\.05 m\) \(got 0\.06 m\)$/,
+    );
     expectInputError(() => massProperties([point(-1, 0, 0)]), "parts[0].mass.mass", /greater than 0 kg \(got -1 kg\)/);
-    expectInputError(() => massProperties([{ ...point(1, 0, 0), mass: { kind: "material", material: "al-6061-t6", thickness: 0.01 } }]), "parts[0].mass.kind", /"given" for a point part/);
-    expectInputError(() => massProperties([{ ...given({ kind: "disk", radius: 0.05 }, 1), mass: { kind: "material", material: "al-6061-t6" } }]), "parts[0].mass.thickness");
-    expectInputError(() => massProperties([{ ...given({ kind: "disk", radius: 0.05 }, 1), mass: { kind: "material", material: "adamant" as never, thickness: 0.01 } }]), "parts[0].mass.material", /materials table/);
+    expectInputError(
+      () => massProperties([{ ...point(1, 0, 0), mass: { kind: "material", material: "al-6061-t6", thickness: 0.01 } }]),
+      "parts[0].mass.kind",
+      /"given" for a point part/,
+    );
+    expectInputError(
+      () => massProperties([{ ...given({ kind: "disk", radius: 0.05 }, 1), mass: { kind: "material", material: "al-6061-t6" } }]),
+      "parts[0].mass.thickness",
+    );
+    expectInputError(
+      () => massProperties([{ ...given({ kind: "disk", radius: 0.05 }, 1), mass: { kind: "material", material: "adamant" as never, thickness: 0.01 } }]),
+      "parts[0].mass.material",
+      /materials table/,
+    );
     expectInputError(() => massProperties([point(1, Number.NaN, 0)]), "parts[0].x", /finite number \(got not a number\)/);
     expectInputError(() => massProperties([]), "parts", /1 to 200 parts/);
   });
@@ -803,10 +988,17 @@ describe("input checks", () => {
       }),
       { numRuns: 100 },
     );
-    expectInputError(() => staticUnbalance({ totalMass: 0, offset: 0.001, angularSpeed: 10 }), "totalMass", /^totalMass must be greater than 0 kg \(got 0 kg\)$/);
+    expectInputError(
+      () => staticUnbalance({ totalMass: 0, offset: 0.001, angularSpeed: 10 }),
+      "totalMass",
+      /^totalMass must be greater than 0 kg \(got 0 kg\)$/,
+    );
     expectInputError(() => counterweightAtRadius({ totalMass: 1, centreX: 0, centreY: 0, targetOffset: 0, radius: 0.05 }), "targetOffset");
     expectInputError(() => counterweightAtCandidates({ totalMass: 1, centreX: 0, centreY: 0, targetOffset: 1e-4, candidates: [] }), "candidates");
-    expectInputError(() => counterweightAtCandidates({ totalMass: 1, centreX: 0, centreY: 0, targetOffset: 1e-4, candidates: [{ x: 0, y: Number.NaN }] }), "candidates[0].y");
+    expectInputError(
+      () => counterweightAtCandidates({ totalMass: 1, centreX: 0, centreY: 0, targetOffset: 1e-4, candidates: [{ x: 0, y: Number.NaN }] }),
+      "candidates[0].y",
+    );
     expectInputError(() => massBalance({ ...DEFAULTS, parts: demoRobotParts(), balanceGrade: 5 }), "balanceGrade", /at most 4 m\/s/);
   });
 });
@@ -871,7 +1063,12 @@ describe("the mass-and-balance calculator", () => {
 });
 
 describe("the counterweight the calculator applies (counterweightPlan)", () => {
-  const demoInput = (extra: Partial<MassBalanceScalars> = {}, candidates?: { x: number; y: number }[]) => ({ ...DEFAULTS, ...extra, parts: demoRobotParts(), candidates });
+  const demoInput = (extra: Partial<MassBalanceScalars> = {}, candidates?: { x: number; y: number }[]) => ({
+    ...DEFAULTS,
+    ...extra,
+    parts: demoRobotParts(),
+    candidates,
+  });
   const plan = (input: ReturnType<typeof demoInput>, mode: "radius" | "mass" | "points") => counterweightPlan({ input, balance: massBalance(input), mode });
 
   it("centre-of-mass: rounds the demo's 38.99 g at 55 mm up to 39.0 g, which lands inside the 0.2 mm target", () => {
@@ -899,7 +1096,12 @@ describe("the counterweight the calculator applies (counterweightPlan)", () => {
   });
 
   it("picks the one bolt of four on the far side, and says none when no point works or none is given", () => {
-    const bolts = [{ x: 0.055, y: 0 }, { x: 0, y: 0.055 }, { x: -0.055, y: 0 }, { x: 0, y: -0.055 }];
+    const bolts = [
+      { x: 0.055, y: 0 },
+      { x: 0, y: 0.055 },
+      { x: -0.055, y: 0 },
+      { x: 0, y: -0.055 },
+    ];
     const p = plan(demoInput({}, bolts), "points");
     expect(p.counterweight).toMatchObject({ mass: 0.039, x: -0.055, y: 0 });
     expect(plan(demoInput({}, [bolts[0]!]), "points").status).toBe("none");
@@ -922,14 +1124,32 @@ describe("the counterweight the calculator applies (counterweightPlan)", () => {
 
   it("brings any layout within the target in every mode that answers (property)", () => {
     fc.assert(
-      fc.property(layoutArb, fc.double({ min: 1e-4, max: 0.01, noNaN: true }), len(0.02, 0.3), fc.constantFrom("radius" as const, "mass" as const, "points" as const), (parts, et, r, mode) => {
-        const input = { ...DEFAULTS, parts, targetOffset: et, correctionRadius: r, maxRadius: 0.3, candidates: [{ x: r, y: 0 }, { x: -r, y: 0 }, { x: 0, y: r }, { x: 0, y: -r }] };
-        const balance = massBalance(input);
-        const p = counterweightPlan({ input, balance, mode });
-        expectAllFinite(p);
-        if (p.status === "apply") expect(p.after!.offset).toBeLessThanOrEqual(et * (1 + 1e-9));
-        else expect(p.status).toBe(balance.offsetVerdict === "within-target" ? "not-needed" : "none");
-      }),
+      fc.property(
+        layoutArb,
+        fc.double({ min: 1e-4, max: 0.01, noNaN: true }),
+        len(0.02, 0.3),
+        fc.constantFrom("radius" as const, "mass" as const, "points" as const),
+        (parts, et, r, mode) => {
+          const input = {
+            ...DEFAULTS,
+            parts,
+            targetOffset: et,
+            correctionRadius: r,
+            maxRadius: 0.3,
+            candidates: [
+              { x: r, y: 0 },
+              { x: -r, y: 0 },
+              { x: 0, y: r },
+              { x: 0, y: -r },
+            ],
+          };
+          const balance = massBalance(input);
+          const p = counterweightPlan({ input, balance, mode });
+          expectAllFinite(p);
+          if (p.status === "apply") expect(p.after!.offset).toBeLessThanOrEqual(et * (1 + 1e-9));
+          else expect(p.status).toBe(balance.offsetVerdict === "within-target" ? "not-needed" : "none");
+        },
+      ),
       { numRuns: 150 },
     );
   });
@@ -956,8 +1176,16 @@ describe("regression pins (COMPUTED by this module, not outside references)", ()
     { what: "demo sensor drift before [rad/rev]", value: b.sensor.before.driftPerRevolution, pin: 0.16836247134415255 },
     { what: "demo offset with 7 washers [m]", value: d.withWashers.after.offset, pin: 8.464062957991494e-5 },
     { what: "demo sensor drift with washers [rad/rev]", value: d.sensorWithWashers.driftPerRevolution, pin: 0.008304086885545583 },
-    { what: "G 6.3 at 3000 rpm, e_per [m] (references §2.3 c)", value: permissibleResidualUnbalance({ totalMass: 1, grade: 0.0063, angularSpeed: rpmToRadPerSecond(3000) }).specificUnbalance, pin: 20.05352283e-6 },
-    { what: "1000 lb, 15 000 rpm, G 2.5 in g·mm (references §2.3 a)", value: fromSI(permissibleResidualUnbalance({ totalMass: toSI(1000, "lb"), grade: 0.0025, angularSpeed: rpmToRadPerSecond(15000) }).unbalance, "g·mm"), pin: 721.914678 },
+    {
+      what: "G 6.3 at 3000 rpm, e_per [m] (references §2.3 c)",
+      value: permissibleResidualUnbalance({ totalMass: 1, grade: 0.0063, angularSpeed: rpmToRadPerSecond(3000) }).specificUnbalance,
+      pin: 20.05352283e-6,
+    },
+    {
+      what: "1000 lb, 15 000 rpm, G 2.5 in g·mm (references §2.3 a)",
+      value: fromSI(permissibleResidualUnbalance({ totalMass: toSI(1000, "lb"), grade: 0.0025, angularSpeed: rpmToRadPerSecond(15000) }).unbalance, "g·mm"),
+      pin: 721.914678,
+    },
   ])("$what", ({ value, pin }) => {
     expectRel(value, pin, 1e-9);
   });

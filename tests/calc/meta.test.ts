@@ -24,7 +24,11 @@ function exportedFunctions(file: string): Exported[] {
   const text = readFileSync(join(calcDir, file), "utf8");
   const source = ts.createSourceFile(file, text, ts.ScriptTarget.Latest, true);
   const found: Exported[] = [];
-  const docOf = (node: ts.Node) => ts.getJSDocCommentsAndTags(node).map((d) => d.getFullText()).join("\n");
+  const docOf = (node: ts.Node) =>
+    ts
+      .getJSDocCommentsAndTags(node)
+      .map((d) => d.getFullText())
+      .join("\n");
   for (const statement of source.statements) {
     const exported = ts.canHaveModifiers(statement) && ts.getModifiers(statement)?.some((m) => m.kind === ts.SyntaxKind.ExportKeyword);
     if (!exported) continue;
@@ -58,14 +62,19 @@ describe("calc/ documentation", () => {
   it.each(functions.filter((f) => !PLUMBING.has(f.module) && /Formula|\$[^$]+\$/.test(f.doc)).map((f) => [`${f.module} ${f.name}`, f] as const))(
     "%s (a formula) names an existing source key and documents what it returns",
     (_, f) => {
-      expect(keys.some((key) => f.doc.includes(key)), `${f.module}: ${f.name} cites no key of calc/sources.ts`).toBe(true);
+      expect(
+        keys.some((key) => f.doc.includes(key)),
+        `${f.module}: ${f.name} cites no key of calc/sources.ts`,
+      ).toBe(true);
       expect(/@returns|\breturns?\b/i.test(f.doc), `${f.module}: ${f.name} has no @returns`).toBe(true);
     },
   );
 
   it("lists every exported function in the README's calculation-module section (npm run docs:api)", () => {
     const readme = readFileSync(fileURLToPath(new URL("../../README.md", import.meta.url)), "utf8");
-    const missing = functions.filter((f) => !["index.ts", "sources.ts", "source-type.ts", "constants.ts"].includes(f.module) && !readme.includes(`\`${f.name}(`));
+    const missing = functions.filter(
+      (f) => !["index.ts", "sources.ts", "source-type.ts", "constants.ts"].includes(f.module) && !readme.includes(`\`${f.name}(`),
+    );
     expect(missing.map((f) => `${f.module}: ${f.name}`)).toEqual([]);
   });
 

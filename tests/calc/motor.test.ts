@@ -149,7 +149,11 @@ describe("first-order spin-up of an inertia (first-order-step-response)", () => 
 
   it("scales τ by 1/(N·G²·η) for N motors through a reduction", () => {
     const single = spinUpTimeConstant({ inertia: 0.01, resistance: 0.1, torqueConstant: 0.05 });
-    close(spinUpTimeConstant({ inertia: 0.01, resistance: 0.1, torqueConstant: 0.05, motorCount: 2, ratio: 3, efficiency: 0.9 }), single / (2 * 9 * 0.9), 1e-14);
+    close(
+      spinUpTimeConstant({ inertia: 0.01, resistance: 0.1, torqueConstant: 0.05, motorCount: 2, ratio: 3, efficiency: 0.9 }),
+      single / (2 * 9 * 0.9),
+      1e-14,
+    );
   });
 });
 
@@ -184,10 +188,30 @@ describe("regression pins (COMPUTED in references §6.2–6.3, not outside autho
     { quantity: "stall current", actual: () => motorLine(EX).stallCurrent, expected: 240, rtol: 1e-12 },
     { quantity: "stall torque", actual: () => motorLine(EX).stallTorque, expected: 22.91831181, rtol: 1e-9 },
     { quantity: "peak power", actual: () => motorLine(EX).maxPower, expected: 1440, rtol: 1e-12 },
-    { quantity: "τ", actual: () => spinUpTimeConstant({ inertia: EX.inertia, resistance: EX.resistance, torqueConstant: torqueConstantFromKv(EX) }), expected: 0.1096622711, rtol: 1e-9 },
-    { quantity: "ω(τ)", actual: () => voltageLimitedSpeed({ finalSpeed: 251.3274123, timeConstant: 0.1096622711, time: 0.1096622711 }), expected: 158.8692243, rtol: 1e-9 },
-    { quantity: "ω(0.1 s)", actual: () => voltageLimitedSpeed({ finalSpeed: 251.3274123, timeConstant: 0.1096622711, time: 0.1 }), expected: 150.3531286, rtol: 1e-9 },
-    { quantity: "ω(0.5 s)", actual: () => voltageLimitedSpeed({ finalSpeed: 251.3274123, timeConstant: 0.1096622711, time: 0.5 }), expected: 248.6965721, rtol: 1e-9 },
+    {
+      quantity: "τ",
+      actual: () => spinUpTimeConstant({ inertia: EX.inertia, resistance: EX.resistance, torqueConstant: torqueConstantFromKv(EX) }),
+      expected: 0.1096622711,
+      rtol: 1e-9,
+    },
+    {
+      quantity: "ω(τ)",
+      actual: () => voltageLimitedSpeed({ finalSpeed: 251.3274123, timeConstant: 0.1096622711, time: 0.1096622711 }),
+      expected: 158.8692243,
+      rtol: 1e-9,
+    },
+    {
+      quantity: "ω(0.1 s)",
+      actual: () => voltageLimitedSpeed({ finalSpeed: 251.3274123, timeConstant: 0.1096622711, time: 0.1 }),
+      expected: 150.3531286,
+      rtol: 1e-9,
+    },
+    {
+      quantity: "ω(0.5 s)",
+      actual: () => voltageLimitedSpeed({ finalSpeed: 251.3274123, timeConstant: 0.1096622711, time: 0.5 }),
+      expected: 248.6965721,
+      rtol: 1e-9,
+    },
     { quantity: "t90", actual: () => timeToSpeedFraction({ timeConstant: 0.1096622711, fraction: 0.9 }), expected: 0.2525067108, rtol: 1e-9 },
     { quantity: "t95", actual: () => timeToSpeedFraction({ timeConstant: 0.1096622711, fraction: 0.95 }), expected: 0.328518805, rtol: 1e-9 },
     {

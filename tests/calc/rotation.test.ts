@@ -171,7 +171,13 @@ describe("accelerometer placement", () => {
   });
 
   it("says when no radius satisfies both limits", () => {
-    const r = accelerometerPlacement({ ...defaults(), topSpeed: rpmToRadPerSecond(3000), lowSpeed: rpmToRadPerSecond(500), step: (400 / 4096) * STANDARD_GRAVITY, resolution: 0.01 });
+    const r = accelerometerPlacement({
+      ...defaults(),
+      topSpeed: rpmToRadPerSecond(3000),
+      lowSpeed: rpmToRadPerSecond(500),
+      step: (400 / 4096) * STANDARD_GRAVITY,
+      resolution: 0.01,
+    });
     expect(r.minRadius).toBeGreaterThan(r.maxRadius);
     expect(r.windowExists).toBe(false);
     expect(r.verdict).toBe("no-window");
@@ -208,11 +214,15 @@ describe("accelerometer placement", () => {
   it("throws a named CalcInputError for any invalid value of any input (property)", () => {
     const names = Object.keys(accelerometerPlacementInputs) as (keyof AccelerometerPlacementInput)[];
     fc.assert(
-      fc.property(fc.constantFrom(...names.filter((n) => n !== "partRadius" && n !== "noise")), fc.constantFrom(-1, 0, Number.NaN, Number.POSITIVE_INFINITY), (name, bad) => {
-        fc.pre(!(name === "margin" && bad === 0));
-        const input = { ...defaults(), [name]: bad };
-        expect(() => accelerometerPlacement(input)).toThrow(CalcInputError);
-      }),
+      fc.property(
+        fc.constantFrom(...names.filter((n) => n !== "partRadius" && n !== "noise")),
+        fc.constantFrom(-1, 0, Number.NaN, Number.POSITIVE_INFINITY),
+        (name, bad) => {
+          fc.pre(!(name === "margin" && bad === 0));
+          const input = { ...defaults(), [name]: bad };
+          expect(() => accelerometerPlacement(input)).toThrow(CalcInputError);
+        },
+      ),
     );
   });
 });

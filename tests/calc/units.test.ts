@@ -37,11 +37,43 @@ const exactFactors: ReferenceCase[] = [
   { source: "NIST SP 811", locator: "App. B.8, foot", value: 1, from: "ft", expected: 0.3048, rtol: 1e-12, note: "exact" },
   { source: "NPL FAQ / 1959 agreement", locator: "1 lb = 0.453 592 37 kg", value: 10, from: "lb", expected: 4.5359237, rtol: 1e-12, note: "exact" },
   { source: "NIST SP 811", locator: "App. B.8, ounce (avoirdupois)", value: 1, from: "oz", expected: 0.028349523125, rtol: 1e-12, note: "lb/16, exact" },
-  { source: "NIST SP 811 (13 digits via a reference copy)", locator: "pound-force = lb × g_n", value: 100, from: "lbf", expected: 444.82216152605, rtol: 1e-12, note: "exact by definition" },
+  {
+    source: "NIST SP 811 (13 digits via a reference copy)",
+    locator: "pound-force = lb × g_n",
+    value: 100,
+    from: "lbf",
+    expected: 444.82216152605,
+    rtol: 1e-12,
+    note: "exact by definition",
+  },
   { source: "NIST SP 811", locator: "rev/min → rad/s", value: 3000, from: "rpm", expected: 314.159265358979, rtol: 1e-12, note: "1 rev = 2π rad" },
-  { source: "NIST SP 811", locator: "App. B.8, lbf·in (rounded 1.129 848 E-01)", value: 1, from: "lbf·in", expected: 0.112984829027617, rtol: 1e-12, note: "derived exact" },
-  { source: "NIST SP 811 (from memory) / derived exact", locator: "ozf·in", value: 1, from: "ozf·in", expected: 7.06155181422604e-3, rtol: 1e-12, note: "derived exact" },
-  { source: "NIST SP 811 (from memory) / derived exact", locator: "lb·in²", value: 1, from: "lb·in2", expected: 2.926396534292e-4, rtol: 1e-12, note: "derived exact" },
+  {
+    source: "NIST SP 811",
+    locator: "App. B.8, lbf·in (rounded 1.129 848 E-01)",
+    value: 1,
+    from: "lbf·in",
+    expected: 0.112984829027617,
+    rtol: 1e-12,
+    note: "derived exact",
+  },
+  {
+    source: "NIST SP 811 (from memory) / derived exact",
+    locator: "ozf·in",
+    value: 1,
+    from: "ozf·in",
+    expected: 7.06155181422604e-3,
+    rtol: 1e-12,
+    note: "derived exact",
+  },
+  {
+    source: "NIST SP 811 (from memory) / derived exact",
+    locator: "lb·in²",
+    value: 1,
+    from: "lb·in2",
+    expected: 2.926396534292e-4,
+    rtol: 1e-12,
+    note: "derived exact",
+  },
   { source: "NIST SP 811 / derived exact", locator: "ft·lbf", value: 1, from: "ft·lbf", expected: 1.3558179483314, rtol: 1e-12, note: "derived exact" },
 ];
 
@@ -56,7 +88,7 @@ describe("units: exact conversion factors", () => {
 
   it("gives g_n as 32.174 05 ft/s² and 386.0886 in/s² (ASA glossary, derived exact)", () => {
     expect(convert(1, "gn", "ft/s2")).toBeCloseTo(32.17405, 5);
-    expect(fromSI(STANDARD_GRAVITY, "in") ).toBeCloseTo(386.0886, 4);
+    expect(fromSI(STANDARD_GRAVITY, "in")).toBeCloseTo(386.0886, 4);
   });
 
   it("turns 1 rad/s into 9.549 296 585 513 72 rpm (exact, 60/2π)", () => {
@@ -111,7 +143,7 @@ describe("units: reading what a user typed", () => {
     { text: "250 us", kind: "time", unit: "ms", si: 250e-6 },
     { text: "1e3 rpm", kind: "angularSpeed", unit: "rpm", si: 104.71975511965977 },
     { text: "−5 mm", kind: "length", unit: "mm", si: -0.005 },
-  ] as const)("reads \"$text\" in a $kind field as $si SI", ({ text, kind, unit, si }) => {
+  ] as const)('reads "$text" in a $kind field as $si SI', ({ text, kind, unit, si }) => {
     const result = parseQuantity(text, kind, unit);
     expect(result.ok).toBe(true);
     if (result.ok) expect(result.valueSI).toBeCloseTo(si, 12);
@@ -159,7 +191,13 @@ describe("units: reading what a user typed", () => {
   });
 
   it("writes URL text that reads back to the same value (6 significant figures)", () => {
-    for (const [value, unit] of [[0.032, "mm"], [251.327, "rpm"], [1961.33, "gn"], [0.2, "pct"], [0.05, "g"]] as const) {
+    for (const [value, unit] of [
+      [0.032, "mm"],
+      [251.327, "rpm"],
+      [1961.33, "gn"],
+      [0.2, "pct"],
+      [0.05, "g"],
+    ] as const) {
       const text = quantityToText(value, unit);
       expect(text).not.toMatch(/\s/);
       const back = parseQuantity(text, UNITS[unit].kind, unit);

@@ -159,7 +159,10 @@ describe("the spin-up model", () => {
     model.addVariant();
     model.changeInVariant(0, "staticFriction");
     model.variants.value[0]!.fields.texts.staticFriction.value = "0.5";
-    expect(model.variantInputs.value[0]!.error).toEqual({ field: "kineticFriction", message: "Sliding coefficient must be at most the grip coefficient (0.5)." });
+    expect(model.variantInputs.value[0]!.error).toEqual({
+      field: "kineticFriction",
+      message: "Sliding coefficient must be at most the grip coefficient (0.5).",
+    });
     model.variants.value[0]!.fields.texts.staticFriction.value = "-1";
     expect(model.variantInputs.value[0]).toEqual({ input: null, result: null, error: null });
     expect(model.variants.value[0]!.fields.readings.staticFriction.value.ok).toBe(false);

@@ -113,7 +113,11 @@ describe("mass-layout model", () => {
   it("maps scalar rules to their fields and waits for fields that do not read", () => {
     const model = createMassModel("metric", DEMO);
     model.fields.texts.planeZ2.value = "4 mm";
-    expect(model.outcome.value?.error).toEqual({ part: null, field: "planeZ2", message: "Upper correction plane must be a height different from the other plane (0.004 m)." });
+    expect(model.outcome.value?.error).toEqual({
+      part: null,
+      field: "planeZ2",
+      message: "Upper correction plane must be a height different from the other plane (0.004 m).",
+    });
     model.fields.texts.planeZ2.value = "24 mm";
     model.fields.texts.sensorX.value = "0";
     expect(model.outcome.value?.error?.field).toBe("sensorX");
@@ -162,7 +166,13 @@ describe("mass-layout model", () => {
     model.apply();
     expect(model.parts.value).toHaveLength(10);
     const cw = model.parts.value[9]!;
-    expect([cw.name.value, cw.shape.value, cw.fields.texts.mass.value, cw.fields.texts.x.value, cw.fields.texts.y.value]).toEqual(["counterweight", "point", "39 g", "-55 mm", "0 mm"]);
+    expect([cw.name.value, cw.shape.value, cw.fields.texts.mass.value, cw.fields.texts.x.value, cw.fields.texts.y.value]).toEqual([
+      "counterweight",
+      "point",
+      "39 g",
+      "-55 mm",
+      "0 mm",
+    ]);
     const after = resultOf(model);
     expect(after.balance.offsetVerdict).toBe("within-target");
     expect(after.plan.status).toBe("not-needed");
@@ -190,10 +200,18 @@ describe("mass-layout model", () => {
   });
 
   it("reads mounting points and says which one is wrong", () => {
-    expect(readPoints("55, 0; 0 in, -2 in", "metric")).toEqual({ points: [{ x: 0.055, y: 0 }, { x: 0, y: -0.0508 }], error: null });
+    expect(readPoints("55, 0; 0 in, -2 in", "metric")).toEqual({
+      points: [
+        { x: 0.055, y: 0 },
+        { x: 0, y: -0.0508 },
+      ],
+      error: null,
+    });
     expect(readPoints(" ", "metric").error).toBe("Enter 1 to 20 points, as x, y pairs separated by semicolons.");
     expect(readPoints("55, 0; 12", "metric").error).toBe("Point 2 must be two coordinates, x and y, separated by a comma.");
-    expect(readPoints("55, zz", "metric").error).toMatch(/^Point 1 must be two coordinates, x and y, separated by a comma \(Coordinate must start with a number/);
+    expect(readPoints("55, zz", "metric").error).toMatch(
+      /^Point 1 must be two coordinates, x and y, separated by a comma \(Coordinate must start with a number/,
+    );
   });
 
   it("round-trips the demo layout text through the fields exactly enough", () => {

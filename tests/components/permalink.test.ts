@@ -15,7 +15,7 @@ describe("permalinks", () => {
   });
 
   it("keeps hostile values as plain text for the field to reject, never as markup", () => {
-    const decoded = decodeState(specs, `?r=${encodeURIComponent('<img src=x onerror=alert(1)>')}`);
+    const decoded = decodeState(specs, `?r=${encodeURIComponent("<img src=x onerror=alert(1)>")}`);
     expect(decoded.texts.radius).toBe("<img src=x onerror=alert(1)>");
   });
 
@@ -48,13 +48,17 @@ describe("permalinks", () => {
 
   it("writes a link that reads back to the same values (round trip, property)", () => {
     fc.assert(
-      fc.property(fc.record({ radius: fc.string({ maxLength: 20 }), topSpeed: fc.string({ maxLength: 20 }) }), fc.constantFrom("metric", "us") as fc.Arbitrary<"metric" | "us">, (texts, system) => {
-        const decoded = decodeState(specs, `?${encodeState(specs, texts, system)}`);
-        expect(decoded.system).toBe(system);
-        expect(decoded.texts.radius).toBe(texts.radius.replace(/\s+/g, ""));
-        expect(decoded.texts.topSpeed).toBe(texts.topSpeed.replace(/\s+/g, ""));
-        expect(decoded.notices).toEqual([]);
-      }),
+      fc.property(
+        fc.record({ radius: fc.string({ maxLength: 20 }), topSpeed: fc.string({ maxLength: 20 }) }),
+        fc.constantFrom("metric", "us") as fc.Arbitrary<"metric" | "us">,
+        (texts, system) => {
+          const decoded = decodeState(specs, `?${encodeState(specs, texts, system)}`);
+          expect(decoded.system).toBe(system);
+          expect(decoded.texts.radius).toBe(texts.radius.replace(/\s+/g, ""));
+          expect(decoded.texts.topSpeed).toBe(texts.topSpeed.replace(/\s+/g, ""));
+          expect(decoded.notices).toEqual([]);
+        },
+      ),
     );
   });
 

@@ -69,12 +69,22 @@ const anyDesign: fc.Arbitrary<Design> = fc
     headingDrift: fc.option(numbers(headingDriftInputs), { nil: undefined }),
     fasteners: fc.option(
       fc.array(
-        fc.record({ name: fc.string({ maxLength: 80 }), numbers: numbers(fastenerCheckInputs), size: pick(THREAD_SIZE_OPTIONS), propertyClass: pick(PROPERTY_CLASS_OPTIONS), mode: pick(LOADING_MODE_OPTIONS), shearPlane: pick(SHEAR_PLANE_OPTIONS) }),
+        fc.record({
+          name: fc.string({ maxLength: 80 }),
+          numbers: numbers(fastenerCheckInputs),
+          size: pick(THREAD_SIZE_OPTIONS),
+          propertyClass: pick(PROPERTY_CLASS_OPTIONS),
+          mode: pick(LOADING_MODE_OPTIONS),
+          shearPlane: pick(SHEAR_PLANE_OPTIONS),
+        }),
         { maxLength: 4 },
       ),
       { nil: undefined },
     ),
-    rims: fc.option(fc.array(fc.record({ name: fc.string({ maxLength: 80 }), numbers: numbers(rimCheckInputs), shape: pick(RIM_SHAPE_OPTIONS) }), { maxLength: 3 }), { nil: undefined }),
+    rims: fc.option(
+      fc.array(fc.record({ name: fc.string({ maxLength: 80 }), numbers: numbers(rimCheckInputs), shape: pick(RIM_SHAPE_OPTIONS) }), { maxLength: 3 }),
+      { nil: undefined },
+    ),
     drivetrain: fc.option(fc.record({ numbers: numbers(drivetrainInputs), driveType: pick(DRIVE_TYPE_OPTIONS) }), { nil: undefined }),
   })
   .map((r) => {
