@@ -1,7 +1,7 @@
 import { defineCollection } from "astro:content";
 import { glob } from "astro/loaders";
 import { z } from "astro/zod";
-import { isSourceKey } from "./calc/sources.ts";
+import { isSourceKey } from "./calc/sources/index.ts";
 
 /** One chapter of the handbook: an MDX file in content/chapters/. */
 const chapters = defineCollection({

@@ -16,8 +16,8 @@ if (major < 22 || (major === 22 && minor < 18)) {
   process.exit(2);
 }
 
-const { readDesignText, describeProblems } = await import("../calc/design.ts");
-const { runChecks, buildSheetText, overallStatus } = await import("../calc/checks.ts");
+const { readDesignText, describeProblems } = await import("../calc/design/design.ts");
+const { runChecks, buildSheetText, overallStatus } = await import("../calc/design/checks.ts");
 
 function fail(message) {
   console.error(message);

@@ -64,7 +64,7 @@ function describe(file) {
   return rows;
 }
 
-const files = readdirSync(calcDir).filter((f) => f.endsWith(".ts") && !["index.ts", "sources.ts", "source-type.ts", "constants.ts"].includes(f));
+const files = readdirSync(calcDir, { recursive: true }).filter((f) => f.endsWith(".ts") && !["index.ts", "sources/index.ts", "sources/types.ts", "core/constants.ts"].includes(f));
 files.sort((a, b) => (a in TITLES ? Object.keys(TITLES).indexOf(a) : 99) - (b in TITLES ? Object.keys(TITLES).indexOf(b) : 99) || a.localeCompare(b));
 const parts = [
   START,

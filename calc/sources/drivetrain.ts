@@ -1,4 +1,4 @@
-import type { Source } from "../source-type.ts";
+import type { Source } from "./types.ts";
 
 /** Bibliography entries used by calc/motor.ts and calc/drivetrain.ts. */
 export const DRIVETRAIN_SOURCES = {

@@ -1,4 +1,4 @@
-import type { Source } from "../source-type.ts";
+import type { Source } from "./types.ts";
 
 /** Bibliography entries used by calc/heading.ts, calc/calibration.ts and calc/csv.ts. */
 export const HEADING_SOURCES = {

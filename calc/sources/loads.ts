@@ -1,4 +1,4 @@
-import type { Source } from "../source-type.ts";
+import type { Source } from "./types.ts";
 
 /** Bibliography entries used by calc/loads.ts and calc/fasteners.ts. */
 export const LOADS_SOURCES = {

@@ -1,4 +1,4 @@
-import type { Source } from "../source-type.ts";
+import type { Source } from "./types.ts";
 
 /** Bibliography entries used by calc/mass.ts and calc/materials.ts. */
 export const MASS_SOURCES = {

@@ -3,9 +3,9 @@
  * help text, and the field's error right beside it. Typing a unit ("1.5 in") is always allowed.
  */
 import type { Signal, ReadonlySignal } from "./reactive.ts";
-import type { FieldReading, InputSpec } from "../../calc/inputs.ts";
-import { fieldUnit } from "../../calc/inputs.ts";
-import { UNITS, type UnitSystem } from "../../calc/units.ts";
+import type { FieldReading, InputSpec } from "../../calc/core/inputs.ts";
+import { fieldUnit } from "../../calc/core/inputs.ts";
+import { UNITS, type UnitSystem } from "../../calc/core/units.ts";
 
 export interface QuantityFieldProps {
   /** Unique id prefix for this calculator instance. */

@@ -4,7 +4,7 @@
  */
 import { useSignal } from "./reactive.ts";
 import type { Signal } from "./reactive.ts";
-import type { UnitSystem } from "../../calc/units.ts";
+import type { UnitSystem } from "../../calc/core/units.ts";
 
 export interface ToolbarProps {
   idPrefix: string;
@@ -13,7 +13,7 @@ export interface ToolbarProps {
   /** Builds the full link to copy. */
   link(): string;
   /** The design section this calculator fills; shows a "Save to design" button when given. */
-  designSection?: import("../../calc/design.ts").DesignSection;
+  designSection?: import("../../calc/design/design.ts").DesignSection;
 }
 
 export function Toolbar({ idPrefix, system, onSystem, link, designSection }: ToolbarProps) {

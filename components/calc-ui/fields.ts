@@ -4,9 +4,9 @@
  * No DOM; safe on the server.
  */
 import { batch, computed, signal, type ReadonlySignal, type Signal } from "./reactive.ts";
-import { CalcInputError } from "../../calc/errors.ts";
-import { defaultText, fieldUnit, readField, type FieldReading, type InputSpecs } from "../../calc/inputs.ts";
-import { parseQuantity, UNITS, type UnitSystem } from "../../calc/units.ts";
+import { CalcInputError } from "../../calc/core/errors.ts";
+import { defaultText, fieldUnit, readField, type FieldReading, type InputSpecs } from "../../calc/core/inputs.ts";
+import { parseQuantity, UNITS, type UnitSystem } from "../../calc/core/units.ts";
 import { decodeState, encodeState } from "./permalink.ts";
 
 export interface FieldsModel<S extends InputSpecs> {

@@ -4,9 +4,9 @@
  * system, and the format version. Reading never executes or renders anything: values only ever
  * become field text, and every problem becomes a plain-text notice.
  */
-import { fieldUnit, type InputSpecs } from "../../calc/inputs.ts";
-import { quantityToText } from "../../calc/units.ts";
-import type { UnitSystem } from "../../calc/units.ts";
+import { fieldUnit, type InputSpecs } from "../../calc/core/inputs.ts";
+import { quantityToText } from "../../calc/core/units.ts";
+import type { UnitSystem } from "../../calc/core/units.ts";
 
 /** The permalink format this code writes. */
 export const PERMALINK_VERSION = 1;

@@ -4,8 +4,8 @@
  */
 import { useEffect, useMemo, useRef } from "preact/hooks";
 import { useSignal } from "../calc-ui/reactive.ts";
-import type { CheckResult, CheckStatus } from "../../calc/checks.ts";
-import { DESIGN_SECTIONS, SECTION_TITLES } from "../../calc/design.ts";
+import type { CheckResult, CheckStatus } from "../../calc/design/checks.ts";
+import { DESIGN_SECTIONS, SECTION_TITLES } from "../../calc/design/design.ts";
 import { createBuildSheetModel, type BuildSheetModel } from "./model.ts";
 import { calculatorLink, SECTION_CHAPTER } from "./links.ts";
 

@@ -2,17 +2,17 @@
  * Between a design and the calculators: the chapter that edits each section, and the query string
  * that opens that calculator prefilled with the section's values.
  */
-import type { Design, DesignSection } from "../../calc/design.ts";
-import { accelerometerPlacementInputs } from "../../calc/rotation.ts";
-import { headingDriftInputs } from "../../calc/heading.ts";
-import type { UnitSystem } from "../../calc/units.ts";
+import type { Design, DesignSection } from "../../calc/design/design.ts";
+import { accelerometerPlacementInputs } from "../../calc/rotation/rotation.ts";
+import { headingDriftInputs } from "../../calc/heading/index.ts";
+import type { UnitSystem } from "../../calc/core/units.ts";
 import { permalinkQuery } from "../calc-ui/permalink.ts";
-import { drivetrainInputs, DRIVE_TYPE_URL_KEY } from "../../calc/drivetrain.ts";
-import type { FastenerCheckInput, RimCheckInput } from "../../calc/loads.ts";
+import { drivetrainInputs, DRIVE_TYPE_URL_KEY } from "../../calc/drivetrain/drivetrain.ts";
+import type { FastenerCheckInput, RimCheckInput } from "../../calc/loads/index.ts";
 import { fastenerLink } from "../loads/fastener-model.ts";
 import { rimLink, CUSTOM_MATERIAL } from "../loads/rim-model.ts";
-import { encodeLayout, massBalanceInputs } from "../../calc/mass.ts";
-import { formatNumber, fromSI } from "../../calc/units.ts";
+import { encodeLayout, massBalanceInputs } from "../../calc/mass/mass.ts";
+import { formatNumber, fromSI } from "../../calc/core/units.ts";
 
 /** The chapter (slug) whose calculator edits each section. */
 export const SECTION_CHAPTER: Record<DesignSection, string> = {

@@ -4,9 +4,9 @@
  * overwrites a saved design without asking; a deletion can be undone.
  */
 import { batch, computed, signal } from "../calc-ui/reactive.ts";
-import { describeProblems, newDesign, readDesignText, designToText, type Design } from "../../calc/design.ts";
-import { runChecks, overallStatus } from "../../calc/checks.ts";
-import { demoDesign } from "../../calc/demo-design.ts";
+import { describeProblems, newDesign, readDesignText, designToText, type Design } from "../../calc/design/design.ts";
+import { runChecks, overallStatus } from "../../calc/design/checks.ts";
+import { demoDesign } from "../../calc/design/demo.ts";
 import type { FragmentReading } from "./share.ts";
 import { loadStore, newId, saveStore, uniqueName, type DesignStore, type SavedDesign } from "./store.ts";
 

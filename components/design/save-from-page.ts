@@ -3,19 +3,19 @@
  * string and writes it into the active design saved in this browser (making one if there is none).
  * Loaded only when the button is pressed.
  */
-import { newDesign, type Design, type DesignSection } from "../../calc/design.ts";
-import { readField, type InputSpecs } from "../../calc/inputs.ts";
-import { accelerometerPlacementInputs } from "../../calc/rotation.ts";
-import { headingDriftInputs } from "../../calc/heading.ts";
-import type { UnitSystem } from "../../calc/units.ts";
+import { newDesign, type Design, type DesignSection } from "../../calc/design/design.ts";
+import { readField, type InputSpecs } from "../../calc/core/inputs.ts";
+import { accelerometerPlacementInputs } from "../../calc/rotation/rotation.ts";
+import { headingDriftInputs } from "../../calc/heading/index.ts";
+import type { UnitSystem } from "../../calc/core/units.ts";
 import { decodeState } from "../calc-ui/permalink.ts";
-import { fastenerCheckInputs, rimCheckInputs } from "../../calc/loads.ts";
-import { drivetrainInputs, DRIVE_TYPE_URL_KEY, requireDriveType } from "../../calc/drivetrain.ts";
+import { fastenerCheckInputs, rimCheckInputs } from "../../calc/loads/index.ts";
+import { drivetrainInputs, DRIVE_TYPE_URL_KEY, requireDriveType } from "../../calc/drivetrain/drivetrain.ts";
 import { readChoices } from "../loads/choices.ts";
 import { FASTENER_CHOICES } from "../loads/fastener-model.ts";
 import { rimChoices } from "../loads/rim-model.ts";
-import { defaultSection } from "../../calc/design.ts";
-import { massBalanceInputs, parseLayout } from "../../calc/mass.ts";
+import { defaultSection } from "../../calc/design/design.ts";
+import { massBalanceInputs, parseLayout } from "../../calc/mass/mass.ts";
 import { readPoints } from "../mass/model.ts";
 import { loadStore, newId, saveStore } from "./store.ts";
 

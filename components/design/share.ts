@@ -5,7 +5,7 @@
  * hex digits, which link detectors keep.
  */
 import { deflateSync, inflateSync, strFromU8, strToU8 } from "fflate";
-import { designToText, readDesignText, type Design, type DesignReading } from "../../calc/design.ts";
+import { designToText, readDesignText, type Design, type DesignReading } from "../../calc/design/design.ts";
 
 const PREFIX = "d1.";
 

@@ -2,7 +2,7 @@
  * Saved designs in this browser (localStorage). A storage entry that cannot be read is kept aside,
  * never silently thrown away. All functions take the Storage, so tests pass their own.
  */
-import { readDesign, type Design } from "../../calc/design.ts";
+import { readDesign, type Design } from "../../calc/design/design.ts";
 
 export const STORE_KEY = "whirlbook.designs.v1";
 

@@ -3,9 +3,9 @@
  * over time, the energy balance, the simulation's warnings, and the speed and current plots with
  * the regime strip between them.
  */
-import type { DrivetrainInput, SpinUpRegime, SpinUpResult } from "../../calc/drivetrain.ts";
-import type { UnitSystem } from "../../calc/units.ts";
-import { formatNumber, radPerSecondToRpm } from "../../calc/units.ts";
+import type { DrivetrainInput, SpinUpRegime, SpinUpResult } from "../../calc/drivetrain/drivetrain.ts";
+import type { UnitSystem } from "../../calc/core/units.ts";
+import { formatNumber, radPerSecondToRpm } from "../../calc/core/units.ts";
 import { Chart } from "../calc-ui/Chart.tsx";
 import { amps, fmt, mAh, percent, REGIME_NAME, REGIME_TEXT, rpm, seconds } from "./format.ts";
 import type { FieldError } from "./model.ts";

@@ -4,8 +4,8 @@
  */
 import { QuantityField } from "../calc-ui/QuantityField.tsx";
 import { Chart } from "../calc-ui/Chart.tsx";
-import { fieldUnit, type InputSpec } from "../../calc/inputs.ts";
-import { formatNumber, fromSI, radPerSecondToRpm, UNITS, type UnitSystem } from "../../calc/units.ts";
+import { fieldUnit, type InputSpec } from "../../calc/core/inputs.ts";
+import { formatNumber, fromSI, radPerSecondToRpm, UNITS, type UnitSystem } from "../../calc/core/units.ts";
 import { fmt, rpm } from "./format.ts";
 import { applies, POINTS_SPEC, SPECS, SWEEPABLE, sweepSpec, type Name, type SpinUpModel, type SweepState } from "./model.ts";
 

@@ -2,8 +2,8 @@
  * Formatting for the spin-up calculator: quantities in the user's unit system, speeds in rpm to
  * four figures, the regimes in words. No DOM.
  */
-import type { SpinUpRegime } from "../../calc/drivetrain.ts";
-import { formatNumber, formatQuantity, type QuantityKind, type UnitSystem } from "../../calc/units.ts";
+import type { SpinUpRegime } from "../../calc/drivetrain/drivetrain.ts";
+import { formatNumber, formatQuantity, type QuantityKind, type UnitSystem } from "../../calc/core/units.ts";
 
 /** A quantity in the user's system: "1.01 s", "345 J", "62.8 m/s". */
 export const fmt = (valueSI: number, kind: QuantityKind, system: UnitSystem, significant = 3): string =>

@@ -39,9 +39,9 @@ import {
   type DrivetrainSweep,
   type SpinUpResult,
   type SweepPoint,
-} from "../../calc/drivetrain.ts";
-import { fieldUnit, readField, type FieldReading, type InputSpec } from "../../calc/inputs.ts";
-import { fromSI, parseQuantity, UNITS, type UnitSystem } from "../../calc/units.ts";
+} from "../../calc/drivetrain/drivetrain.ts";
+import { fieldUnit, readField, type FieldReading, type InputSpec } from "../../calc/core/inputs.ts";
+import { fromSI, parseQuantity, UNITS, type UnitSystem } from "../../calc/core/units.ts";
 import { createFieldsModel, fieldMessage, type FieldsModel } from "../calc-ui/fields.ts";
 import { decodeState, encodeState, MAX_VALUE_LENGTH } from "../calc-ui/permalink.ts";
 import type { UrlState } from "../calc-ui/url-sync.ts";

@@ -5,8 +5,8 @@
  * link that carries the fitted radius and offset into the drift budget.
  */
 import { useEffect, useMemo } from "preact/hooks";
-import type { CalibrationCurvePoint, ConfidenceInterval } from "../../calc/calibration.ts";
-import { formatNumber, fromSI, radPerSecondToRpm, type UnitSystem } from "../../calc/units.ts";
+import type { CalibrationCurvePoint, ConfidenceInterval } from "../../calc/heading/calibration.ts";
+import { formatNumber, fromSI, radPerSecondToRpm, type UnitSystem } from "../../calc/core/units.ts";
 import { Toolbar } from "../calc-ui/Toolbar.tsx";
 import { Notices } from "../calc-ui/Notices.tsx";
 import { linkFor, syncWithUrl } from "../calc-ui/url-sync.ts";

@@ -16,11 +16,11 @@ import {
   demoCalibrationRows,
   encodeCalibrationRows,
   fitCalibration,
-} from "../../calc/calibration.ts";
-import { calibrationRowsToCsv, readingOfWrittenRows } from "../../calc/calibration-text.ts";
-import type { CalibrationCsv, parseCalibrationCsv } from "../../calc/csv.ts";
-import { CalcInputError } from "../../calc/errors.ts";
-import { quantityToText, type UnitId, type UnitSystem } from "../../calc/units.ts";
+} from "../../calc/heading/calibration.ts";
+import { calibrationRowsToCsv, readingOfWrittenRows } from "../../calc/heading/calibration-text.ts";
+import type { CalibrationCsv, parseCalibrationCsv } from "../../calc/heading/csv.ts";
+import { CalcInputError } from "../../calc/core/errors.ts";
+import { quantityToText, type UnitId, type UnitSystem } from "../../calc/core/units.ts";
 import { createFieldsModel, fieldMessage } from "../calc-ui/fields.ts";
 import { encodeState } from "../calc-ui/permalink.ts";
 
@@ -49,7 +49,7 @@ export const DEMO_TEXT = `# Invented demo readings, not measured: reference spee
 export type TextReader = typeof parseCalibrationCsv;
 
 /** Loads the text reader on first use. */
-const loadReader = (): Promise<TextReader> => import("../../calc/csv.ts").then((m) => m.parseCalibrationCsv);
+const loadReader = (): Promise<TextReader> => import("../../calc/heading/csv.ts").then((m) => m.parseCalibrationCsv);
 
 const LABELS = Object.fromEntries(Object.entries(calibrationFitInputs).map(([k, s]) => [k, s.label]));
 

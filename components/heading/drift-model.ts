@@ -4,8 +4,8 @@
  * field. No DOM.
  */
 import { computed } from "../calc-ui/reactive.ts";
-import { headingDrift, headingDriftInputs, opposedSensorsCheck, opposedSensorsInputs } from "../../calc/heading-drift.ts";
-import { formatQuantity, fromSI, radPerSecondToRpm, type UnitSystem } from "../../calc/units.ts";
+import { headingDrift, headingDriftInputs, opposedSensorsCheck, opposedSensorsInputs } from "../../calc/heading/drift.ts";
+import { formatQuantity, fromSI, radPerSecondToRpm, type UnitSystem } from "../../calc/core/units.ts";
 import { createFieldsModel, fieldMessage } from "../calc-ui/fields.ts";
 
 /** URL scope of the opposed-sensors section. */

@@ -2,7 +2,7 @@
  * Formatting shared by the heading calculators: drift rates in °/s and angles in degrees (the
  * units builders trim and steer in, whatever the unit system), signed where the sign matters.
  */
-import { formatQuantity, type QuantityKind, type UnitId, type UnitSystem } from "../../calc/units.ts";
+import { formatQuantity, type QuantityKind, type UnitId, type UnitSystem } from "../../calc/core/units.ts";
 
 function signedText(valueSI: number, kind: QuantityKind, unit: UnitId, signed: boolean): string {
   const text = formatQuantity(valueSI, kind, { unit }).text;

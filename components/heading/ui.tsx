@@ -3,7 +3,7 @@
  * placeholder shown while a field is invalid, a verdict line, and a grid of labelled outputs.
  */
 import type { ComponentChildren } from "preact";
-import type { InputSpecs } from "../../calc/inputs.ts";
+import type { InputSpecs } from "../../calc/core/inputs.ts";
 import type { FieldsModel } from "../calc-ui/fields.ts";
 import { QuantityField } from "../calc-ui/QuantityField.tsx";
 

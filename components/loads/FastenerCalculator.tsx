@@ -4,8 +4,8 @@
  * break, and a plot of bolt stress against speed.
  */
 import { useEffect, useMemo } from "preact/hooks";
-import type { fastenerCheckInputs, FastenerCheck } from "../../calc/loads-bolts.ts";
-import { formatNumber, radPerSecondToRpm } from "../../calc/units.ts";
+import type { fastenerCheckInputs, FastenerCheck } from "../../calc/loads/bolts.ts";
+import { formatNumber, radPerSecondToRpm } from "../../calc/core/units.ts";
 import { QuantityField } from "../calc-ui/QuantityField.tsx";
 import { Toolbar } from "../calc-ui/Toolbar.tsx";
 import { Notices } from "../calc-ui/Notices.tsx";

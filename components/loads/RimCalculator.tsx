@@ -4,8 +4,8 @@
  * radial and hoop stress across the radius.
  */
 import { useEffect, useMemo } from "preact/hooks";
-import type { rimCheckInputs, RimCheck } from "../../calc/loads-rims.ts";
-import { formatNumber, type UnitSystem } from "../../calc/units.ts";
+import type { rimCheckInputs, RimCheck } from "../../calc/loads/rims.ts";
+import { formatNumber, type UnitSystem } from "../../calc/core/units.ts";
 import { QuantityField } from "../calc-ui/QuantityField.tsx";
 import { Toolbar } from "../calc-ui/Toolbar.tsx";
 import { Notices } from "../calc-ui/Notices.tsx";

@@ -4,8 +4,8 @@
  * to the page URL next to the quantity fields (`encodeState`'s `extra` keys). No DOM.
  */
 import { signal, type Signal } from "../calc-ui/reactive.ts";
-import type { ChoiceOption } from "../../calc/loads-common.ts";
-import type { InputSpecs } from "../../calc/inputs.ts";
+import type { ChoiceOption } from "../../calc/loads/common.ts";
+import type { InputSpecs } from "../../calc/core/inputs.ts";
 import type { FieldsModel } from "../calc-ui/fields.ts";
 import { encodeState } from "../calc-ui/permalink.ts";
 

@@ -12,10 +12,10 @@ import {
   LOADING_MODE_OPTIONS,
   SHEAR_PLANE_OPTIONS,
   type FastenerCheckInput,
-} from "../../calc/loads-bolts.ts";
-import { PROPERTY_CLASS_OPTIONS, THREAD_SIZE_OPTIONS } from "../../calc/fasteners.ts";
-import { fieldUnit } from "../../calc/inputs.ts";
-import { quantityToText, type UnitSystem } from "../../calc/units.ts";
+} from "../../calc/loads/bolts.ts";
+import { PROPERTY_CLASS_OPTIONS, THREAD_SIZE_OPTIONS } from "../../calc/loads/fasteners.ts";
+import { fieldUnit } from "../../calc/core/inputs.ts";
+import { quantityToText, type UnitSystem } from "../../calc/core/units.ts";
 import { createFieldsModel, fieldMessage } from "../calc-ui/fields.ts";
 import { encodeState } from "../calc-ui/permalink.ts";
 import { createChoices, withChoices, type ChoiceSpecs } from "./choices.ts";

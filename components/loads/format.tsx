@@ -3,8 +3,8 @@
  * stresses for the chart axis, the verdict box and the grid of results. Formatting and conversion
  * only; no physics.
  */
-import type { LoadVerdict } from "../../calc/loads-common.ts";
-import { displayUnit, formatNumber, formatQuantity, fromSI, radPerSecondToRpm, UNITS, type QuantityKind, type UnitSystem } from "../../calc/units.ts";
+import type { LoadVerdict } from "../../calc/loads/common.ts";
+import { displayUnit, formatNumber, formatQuantity, fromSI, radPerSecondToRpm, UNITS, type QuantityKind, type UnitSystem } from "../../calc/core/units.ts";
 
 export const q = (value: number, kind: QuantityKind, system: UnitSystem) => formatQuantity(value, kind, { system }).text;
 

@@ -13,9 +13,9 @@ import {
   rimStressProfile,
   type RimCheckInput,
   type RimMaterialValues,
-} from "../../calc/loads-rims.ts";
-import { defaultText, fieldUnit } from "../../calc/inputs.ts";
-import { quantityToText, type UnitSystem } from "../../calc/units.ts";
+} from "../../calc/loads/rims.ts";
+import { defaultText, fieldUnit } from "../../calc/core/inputs.ts";
+import { quantityToText, type UnitSystem } from "../../calc/core/units.ts";
 import { createFieldsModel, fieldMessage } from "../calc-ui/fields.ts";
 import { encodeState } from "../calc-ui/permalink.ts";
 import { createChoices, withChoices, type ChoiceSpecs } from "./choices.ts";

@@ -6,9 +6,9 @@
  */
 import { useSignal } from "../calc-ui/reactive.ts";
 import { useEffect, useMemo } from "preact/hooks";
-import { BALANCE_GRADES, PART_SHAPE_KINDS, type MirrorAxis } from "../../calc/mass.ts";
-import { MATERIALS } from "../../calc/materials.ts";
-import { formatNumber, formatQuantity, quantityToText, type QuantityKind, type UnitId, type UnitSystem } from "../../calc/units.ts";
+import { BALANCE_GRADES, PART_SHAPE_KINDS, type MirrorAxis } from "../../calc/mass/mass.ts";
+import { MATERIALS } from "../../calc/materials/materials.ts";
+import { formatNumber, formatQuantity, quantityToText, type QuantityKind, type UnitId, type UnitSystem } from "../../calc/core/units.ts";
 import { QuantityField } from "../calc-ui/QuantityField.tsx";
 import { Toolbar } from "../calc-ui/Toolbar.tsx";
 import { Notices } from "../calc-ui/Notices.tsx";

@@ -3,8 +3,8 @@
  * mass, the sensor and the proposed counterweight, with a scale bar and a text summary. Geometry
  * comes from calc/ (layoutDrawing); this only maps metres to the picture.
  */
-import type { LayoutDrawing, Point2 } from "../../calc/mass.ts";
-import { formatQuantity, type UnitSystem } from "../../calc/units.ts";
+import type { LayoutDrawing, Point2 } from "../../calc/mass/mass.ts";
+import { formatQuantity, type UnitSystem } from "../../calc/core/units.ts";
 
 export interface TopViewProps {
   drawing: LayoutDrawing;

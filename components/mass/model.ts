@@ -5,8 +5,8 @@
  * List edits, mirroring, applying and undoing a counterweight, and the permalink. No DOM.
  */
 import { batch, computed, signal } from "../calc-ui/reactive.ts";
-import { CalcInputError } from "../../calc/errors.ts";
-import { readField, type InputSpec } from "../../calc/inputs.ts";
+import { CalcInputError } from "../../calc/core/errors.ts";
+import { readField, type InputSpec } from "../../calc/core/inputs.ts";
 import {
   counterweightPlan,
   encodeLayout,
@@ -18,8 +18,8 @@ import {
   type LayoutPart,
   type MirrorAxis,
   type MountingPoint,
-} from "../../calc/mass.ts";
-import { fromSI, type UnitSystem } from "../../calc/units.ts";
+} from "../../calc/mass/mass.ts";
+import { fromSI, type UnitSystem } from "../../calc/core/units.ts";
 import { createFieldsModel, fieldMessage } from "../calc-ui/fields.ts";
 import { encodeState } from "../calc-ui/permalink.ts";
 import { copyPart, createPart, PART_INPUTS, readPart, setValues, type PartField, type PartModel } from "./parts.ts";

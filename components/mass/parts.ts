@@ -4,10 +4,10 @@
  * between the fields and calc/'s `LayoutPart`. No DOM.
  */
 import { signal, type Signal } from "../calc-ui/reactive.ts";
-import { defineInputs, fieldUnit, type InputSpec } from "../../calc/inputs.ts";
-import type { MaterialId } from "../../calc/materials.ts";
-import type { LayoutPart, PartShape, PartShapeKind } from "../../calc/mass.ts";
-import { fromSI, UNITS, type UnitSystem } from "../../calc/units.ts";
+import { defineInputs, fieldUnit, type InputSpec } from "../../calc/core/inputs.ts";
+import type { MaterialId } from "../../calc/materials/materials.ts";
+import type { LayoutPart, PartShape, PartShapeKind } from "../../calc/mass/mass.ts";
+import { fromSI, UNITS, type UnitSystem } from "../../calc/core/units.ts";
 import { createFieldsModel, type FieldsModel } from "../calc-ui/fields.ts";
 
 const LEN = { metric: "mm", us: "in" } as const;

@@ -3,9 +3,9 @@
  * one other part see at top speed, with a plot of acceleration against speed.
  */
 import { useEffect, useMemo } from "preact/hooks";
-import type { accelerometerPlacementInputs, AccelerometerPlacement } from "../../calc/rotation.ts";
-import { STANDARD_GRAVITY } from "../../calc/constants.ts";
-import { formatNumber, formatQuantity, radPerSecondToRpm, type UnitSystem } from "../../calc/units.ts";
+import type { accelerometerPlacementInputs, AccelerometerPlacement } from "../../calc/rotation/rotation.ts";
+import { STANDARD_GRAVITY } from "../../calc/core/constants.ts";
+import { formatNumber, formatQuantity, radPerSecondToRpm, type UnitSystem } from "../../calc/core/units.ts";
 import { QuantityField } from "../calc-ui/QuantityField.tsx";
 import { Toolbar } from "../calc-ui/Toolbar.tsx";
 import { Notices } from "../calc-ui/Notices.tsx";

@@ -3,9 +3,9 @@
  * error it raised, mapped to its field) out. No DOM.
  */
 import { computed } from "../calc-ui/reactive.ts";
-import { accelerometerPlacement, accelerometerPlacementInputs, centripetalAcceleration } from "../../calc/rotation.ts";
-import { STANDARD_GRAVITY } from "../../calc/constants.ts";
-import { radPerSecondToRpm, rpmToRadPerSecond, type UnitSystem } from "../../calc/units.ts";
+import { accelerometerPlacement, accelerometerPlacementInputs, centripetalAcceleration } from "../../calc/rotation/rotation.ts";
+import { STANDARD_GRAVITY } from "../../calc/core/constants.ts";
+import { radPerSecondToRpm, rpmToRadPerSecond, type UnitSystem } from "../../calc/core/units.ts";
 import { createFieldsModel, fieldMessage } from "../calc-ui/fields.ts";
 
 const LABELS = Object.fromEntries(Object.entries(accelerometerPlacementInputs).map(([k, s]) => [k, s.label]));

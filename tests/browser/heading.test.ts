@@ -8,9 +8,9 @@
 import { describe, expect, it } from "vitest";
 import type { Page } from "playwright-core";
 import { axeViolations, useSite, waitForIslands } from "../support/browser.ts";
-import { decodeCalibrationRows, encodeCalibrationRows, fitCalibration } from "../../calc/calibration.ts";
-import { parseCalibrationCsv } from "../../calc/csv.ts";
-import { formatQuantity } from "../../calc/units.ts";
+import { decodeCalibrationRows, encodeCalibrationRows, fitCalibration } from "../../calc/heading/calibration.ts";
+import { parseCalibrationCsv } from "../../calc/heading/csv.ts";
+import { formatQuantity } from "../../calc/core/units.ts";
 
 const site = useSite();
 const { origin, open } = site;

@@ -4,7 +4,7 @@ import { errorFunction, linearRegression, rSquared } from "simple-statistics";
 // @ts-expect-error: the package ships no type declarations
 import { TheilSenRegression } from "ml-regression-theil-sen";
 import { CalcInputError, isSourceKey, rpmToRadPerSecond, STANDARD_GRAVITY } from "#calc";
-import { checkValue } from "../../calc/inputs.ts";
+import { checkValue } from "../../calc/core/inputs.ts";
 import {
   calibrationCurve,
   calibrationFitInputs,
@@ -20,7 +20,7 @@ import {
   studentTCdf,
   studentTQuantile,
   type CalibrationRow,
-} from "../../calc/calibration.ts";
+} from "../../calc/heading/calibration.ts";
 import { readFileSync } from "node:fs";
 
 /** mulberry32, then Box–Muller: a seeded source of normal deviates for the Monte Carlo checks. */
@@ -562,8 +562,8 @@ describe("rows as text for a URL", () => {
 });
 
 describe("source keys", () => {
-  it("names only keys that exist in the bibliography, in every doc comment of calc/calibration.ts", () => {
-    const text = readFileSync(new URL("../../calc/calibration.ts", import.meta.url), "utf8");
+  it("names only keys that exist in the bibliography, in every doc comment of calc/heading/calibration.ts", () => {
+    const text = readFileSync(new URL("../../calc/heading/calibration.ts", import.meta.url), "utf8");
     const keys = [...text.matchAll(/Sources: ([^\n]+(?:\n \* [a-z0-9-]+(?:, [a-z0-9-]+)*\.?)?)/g)].flatMap((m) =>
       m[1]!
         .replace(/\n \* /g, " ")

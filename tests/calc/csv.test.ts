@@ -1,8 +1,8 @@
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
 import { CalcInputError, isSourceKey, rpmToRadPerSecond, STANDARD_GRAVITY } from "#calc";
-import { parseCalibrationCsv } from "../../calc/csv.ts";
-import { calibrationRowsToCsv, readingOfWrittenRows } from "../../calc/calibration-text.ts";
+import { parseCalibrationCsv } from "../../calc/heading/csv.ts";
+import { calibrationRowsToCsv, readingOfWrittenRows } from "../../calc/heading/calibration-text.ts";
 import { readFileSync } from "node:fs";
 
 const rpm = rpmToRadPerSecond;
@@ -204,8 +204,8 @@ describe("writing rows back as text", () => {
 });
 
 describe("source keys", () => {
-  it("names only keys that exist in the bibliography, in every doc comment of calc/csv.ts", () => {
-    const text = readFileSync(new URL("../../calc/csv.ts", import.meta.url), "utf8");
+  it("names only keys that exist in the bibliography, in every doc comment of calc/heading/csv.ts", () => {
+    const text = readFileSync(new URL("../../calc/heading/csv.ts", import.meta.url), "utf8");
     const keys = [...text.matchAll(/Sources: ([^\n]+)/g)].flatMap((m) => m[1]!.replace(/\.$/, "").split(/,\s*/));
     expect(keys.length).toBeGreaterThan(0);
     for (const key of keys) expect(isSourceKey(key.trim()), key).toBe(true);

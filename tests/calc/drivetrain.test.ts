@@ -25,11 +25,11 @@ import {
   type DrivetrainInput,
   type DrivetrainParameter,
   type SpinUpResult,
-} from "../../calc/drivetrain.ts";
-import { CalcInputError } from "../../calc/errors.ts";
-import { isSourceKey } from "../../calc/sources.ts";
-import { rpmToRadPerSecond } from "../../calc/units.ts";
-import { STANDARD_GRAVITY } from "../../calc/constants.ts";
+} from "../../calc/drivetrain/drivetrain.ts";
+import { CalcInputError } from "../../calc/core/errors.ts";
+import { isSourceKey } from "../../calc/sources/index.ts";
+import { rpmToRadPerSecond } from "../../calc/core/units.ts";
+import { STANDARD_GRAVITY } from "../../calc/core/constants.ts";
 
 // odex ships TypeScript source without declarations; loading it through require keeps tsc out of it.
 interface OdexSolver {
@@ -781,7 +781,7 @@ describe("regression pins (COMPUTED, not outside authorities)", () => {
 });
 
 describe("documentation and bibliography", () => {
-  const text = readFileSync(new URL("../../calc/drivetrain.ts", import.meta.url), "utf8");
+  const text = readFileSync(new URL("../../calc/drivetrain/drivetrain.ts", import.meta.url), "utf8");
 
   it("names only source keys that exist", () => {
     for (const key of DRIVETRAIN_SOURCE_KEYS) expect(isSourceKey(key), key).toBe(true);

@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
-import { CalcInputError } from "../../calc/errors.ts";
+import { CalcInputError } from "../../calc/core/errors.ts";
 import {
   EN1993_GAMMA_M2,
   EN1993_THREAD_SHEAR_FACTOR,
@@ -18,8 +18,8 @@ import {
   THREAD_SIZE_OPTIONS,
   threadDiameters,
   type ThreadSize,
-} from "../../calc/fasteners.ts";
-import { isSourceKey } from "../../calc/sources.ts";
+} from "../../calc/loads/fasteners.ts";
+import { isSourceKey } from "../../calc/sources/index.ts";
 
 /** Relative tolerance of ± half a unit in the last printed digit: "2.07" → 0.005 / 2.07. */
 function halfUnitRtol(printed: string): number {

@@ -784,8 +784,8 @@ describe("input declarations", () => {
 });
 
 describe("source keys", () => {
-  it("names only keys that exist in the bibliography, in every doc comment of calc/heading-drift.ts and calc/heading-timing.ts", () => {
-    const text = ["heading-drift.ts", "heading-timing.ts"].map((f) => readFileSync(new URL(`../../calc/${f}`, import.meta.url), "utf8")).join("\n");
+  it("names only keys that exist in the bibliography, in every doc comment of calc/heading/drift.ts and calc/heading/timing.ts", () => {
+    const text = ["heading/drift.ts", "heading/timing.ts"].map((f) => readFileSync(new URL(`../../calc/${f}`, import.meta.url), "utf8")).join("\n");
     const keys = [...text.matchAll(/Sources: ([^\n]+)/g)].flatMap((m) => m[1]!.replace(/\.$/, "").split(/,\s*/));
     expect(keys.length).toBeGreaterThan(10);
     for (const key of keys) expect(isSourceKey(key.trim()), key).toBe(true);

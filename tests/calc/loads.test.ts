@@ -2,14 +2,14 @@ import { describe, expect, it } from "vitest";
 import fc from "fast-check";
 import { readFileSync } from "node:fs";
 import { createRequire } from "node:module";
-import { CalcInputError } from "../../calc/errors.ts";
-import type { InputSpec, InputSpecs } from "../../calc/inputs.ts";
-import { partLoad } from "../../calc/rotation.ts";
-import { rpmToRadPerSecond, radPerSecondToRpm } from "../../calc/units.ts";
-import { isSourceKey } from "../../calc/sources.ts";
+import { CalcInputError } from "../../calc/core/errors.ts";
+import type { InputSpec, InputSpecs } from "../../calc/core/inputs.ts";
+import { partLoad } from "../../calc/rotation/rotation.ts";
+import { rpmToRadPerSecond, radPerSecondToRpm } from "../../calc/core/units.ts";
+import { isSourceKey } from "../../calc/sources/index.ts";
 import { LOADS_SOURCES as LOADS_BIBLIOGRAPHY } from "../../calc/sources/loads.ts";
-import { MATERIALS } from "../../calc/materials.ts";
-import { demoRobotBalance } from "../../calc/mass.ts";
+import { MATERIALS } from "../../calc/materials/materials.ts";
+import { demoRobotBalance } from "../../calc/mass/mass.ts";
 import {
   EN1993_THREAD_SHEAR_FACTOR,
   eurocodeBoltShearResistance,
@@ -18,7 +18,7 @@ import {
   PROPERTY_CLASS_OPTIONS,
   PROPERTY_CLASSES,
   THREAD_SIZE_OPTIONS,
-} from "../../calc/fasteners.ts";
+} from "../../calc/loads/fasteners.ts";
 import {
   annularDiskBoreStress,
   annularDiskPeakRadialStress,
@@ -55,7 +55,7 @@ import {
   tipSpeed,
   type FastenerCheckInput,
   type RimCheckInput,
-} from "../../calc/loads.ts";
+} from "../../calc/loads/index.ts";
 
 function expectClose(actual: number, expected: number, rtol: number): void {
   expect(Math.abs(actual - expected)).toBeLessThanOrEqual(rtol * Math.abs(expected));
@@ -862,7 +862,7 @@ describe("sources", () => {
     return { undocumented: exported.filter((name) => !documented.has(name)), keys };
   }
 
-  it.each(["../../calc/loads.ts", "../../calc/loads-common.ts", "../../calc/loads-bolts.ts", "../../calc/loads-rims.ts", "../../calc/fasteners.ts"])(
+  it.each(["../../calc/loads/index.ts", "../../calc/loads/common.ts", "../../calc/loads/bolts.ts", "../../calc/loads/rims.ts", "../../calc/loads/fasteners.ts"])(
     "documents every exported function of %s and cites only known keys",
     (path) => {
       const { undocumented, keys } = documentedSourceKeys(path);

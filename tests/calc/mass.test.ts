@@ -38,11 +38,11 @@ import {
   type LayoutPart,
   type MassBalanceScalars,
   type PartShape,
-} from "../../calc/mass.ts";
-import { CalcInputError } from "../../calc/errors.ts";
-import { MATERIAL_IDS, MATERIALS } from "../../calc/materials.ts";
-import { isSourceKey } from "../../calc/sources.ts";
-import { fromSI, rpmToRadPerSecond, toSI } from "../../calc/units.ts";
+} from "../../calc/mass/mass.ts";
+import { CalcInputError } from "../../calc/core/errors.ts";
+import { MATERIAL_IDS, MATERIALS } from "../../calc/materials/materials.ts";
+import { isSourceKey } from "../../calc/sources/index.ts";
+import { fromSI, rpmToRadPerSecond, toSI } from "../../calc/core/units.ts";
 
 // ---------------------------------------------------------------------------------------------
 // Helpers.

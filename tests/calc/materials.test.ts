@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
-import { isMaterialId, MATERIAL_IDS, MATERIALS, type MaterialId, type MaterialProperty } from "../../calc/materials.ts";
-import { isSourceKey } from "../../calc/sources.ts";
+import { isMaterialId, MATERIAL_IDS, MATERIALS, type MaterialId, type MaterialProperty } from "../../calc/materials/materials.ts";
+import { isSourceKey } from "../../calc/sources/index.ts";
 
 const MPA = 1e6;
 const GPA = 1e9;

@@ -11,7 +11,7 @@ import { SOURCES } from "#calc";
 
 const calcDir = fileURLToPath(new URL("../../calc/", import.meta.url));
 /** Modules of plumbing rather than physics: a doc comment is required, a formula and source key are not. */
-const PLUMBING = new Set(["index.ts", "errors.ts", "inputs.ts", "units.ts", "sources.ts", "source-type.ts", "constants.ts", "csv.ts"]);
+const PLUMBING = new Set(["index.ts", "core/errors.ts", "core/inputs.ts", "core/units.ts", "sources/index.ts", "sources/types.ts", "core/constants.ts", "heading/csv.ts"]);
 const keys = Object.keys(SOURCES);
 
 interface Exported {
@@ -46,7 +46,7 @@ function exportedFunctions(file: string): Exported[] {
   return found;
 }
 
-const modules = readdirSync(calcDir).filter((f) => f.endsWith(".ts"));
+const modules = (readdirSync(calcDir, { recursive: true }) as string[]).filter((f) => f.endsWith(".ts")).sort();
 const functions = modules.flatMap(exportedFunctions);
 
 describe("calc/ documentation", () => {
@@ -73,7 +73,7 @@ describe("calc/ documentation", () => {
   it("lists every exported function in the README's calculation-module section (npm run docs:api)", () => {
     const readme = readFileSync(fileURLToPath(new URL("../../README.md", import.meta.url)), "utf8");
     const missing = functions.filter(
-      (f) => !["index.ts", "sources.ts", "source-type.ts", "constants.ts"].includes(f.module) && !readme.includes(`\`${f.name}(`),
+      (f) => !["index.ts", "sources/index.ts", "sources/types.ts", "core/constants.ts"].includes(f.module) && !readme.includes(`\`${f.name}(`),
     );
     expect(missing.map((f) => `${f.module}: ${f.name}`)).toEqual([]);
   });

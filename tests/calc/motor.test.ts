@@ -1,7 +1,7 @@
 import { createRequire } from "node:module";
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
-import { CalcInputError } from "../../calc/errors.ts";
+import { CalcInputError } from "../../calc/core/errors.ts";
 import {
   dcMotorSteadySpeed,
   motorLine,
@@ -11,9 +11,9 @@ import {
   torqueConstantFromKv,
   torqueSpeedLine,
   voltageLimitedSpeed,
-} from "../../calc/motor.ts";
-import { isSourceKey } from "../../calc/sources.ts";
-import { rpmToRadPerSecond } from "../../calc/units.ts";
+} from "../../calc/drivetrain/motor.ts";
+import { isSourceKey } from "../../calc/sources/index.ts";
+import { rpmToRadPerSecond } from "../../calc/core/units.ts";
 
 // odex ships TypeScript source without declarations; loading it through require keeps tsc out of it.
 interface OdexSolver {

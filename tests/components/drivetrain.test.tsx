@@ -5,8 +5,8 @@
  */
 import { describe, expect, it } from "vitest";
 import { renderToString } from "preact-render-to-string";
-import { DEMO_SPINNER, DEMO_WEAPON, simulateSpinUp, sweepDrivetrain } from "../../calc/drivetrain.ts";
-import { rpmToRadPerSecond } from "../../calc/units.ts";
+import { DEMO_SPINNER, DEMO_WEAPON, simulateSpinUp, sweepDrivetrain } from "../../calc/drivetrain/drivetrain.ts";
+import { rpmToRadPerSecond } from "../../calc/core/units.ts";
 import { applies, createSpinUpModel, defaultSweepRange, NAMES, SPECS, SPINNER_ONLY, type SpinUpModel } from "../../components/drivetrain/model.ts";
 import SpinUpCalculator from "../../components/drivetrain/SpinUpCalculator.tsx";
 import { Results, SpinUpCharts } from "../../components/drivetrain/Results.tsx";

@@ -5,12 +5,12 @@
  */
 import { describe, expect, it } from "vitest";
 import { renderToString } from "preact-render-to-string";
-import { headingDriftInputs } from "../../calc/heading-drift.ts";
-import { STANDARD_GRAVITY } from "../../calc/constants.ts";
+import { headingDriftInputs } from "../../calc/heading/drift.ts";
+import { STANDARD_GRAVITY } from "../../calc/core/constants.ts";
 import { createDriftModel } from "../../components/heading/drift-model.ts";
 import { createTimingModel } from "../../components/heading/timing-model.ts";
 import { createCalibrationModel, DATA_KEY, DEMO_TEXT, DRIFT_KEYS } from "../../components/heading/calibration-model.ts";
-import { parseCalibrationCsv } from "../../calc/csv.ts";
+import { parseCalibrationCsv } from "../../calc/heading/csv.ts";
 import HeadingDriftCalculator from "../../components/heading/HeadingDriftCalculator.tsx";
 import HeadingTimingCalculator from "../../components/heading/HeadingTimingCalculator.tsx";
 import CalibrationCalculator from "../../components/heading/CalibrationCalculator.tsx";

@@ -4,7 +4,7 @@
  */
 import { describe, expect, it } from "vitest";
 import { renderToString } from "preact-render-to-string";
-import { demoRobotLoads, rimMaterialChoices } from "../../calc/loads.ts";
+import { demoRobotLoads, rimMaterialChoices } from "../../calc/loads/index.ts";
 import { readChoices } from "../../components/loads/choices.ts";
 import { createFastenerModel, FASTENER_CHOICES, fastenerLink } from "../../components/loads/fastener-model.ts";
 import { createRimModel, CUSTOM_MATERIAL, rimLink } from "../../components/loads/rim-model.ts";

@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { renderToString } from "preact-render-to-string";
 import MassLayoutCalculator from "../../components/mass/MassLayoutCalculator.tsx";
-import { demoRobotParts, encodeLayout } from "../../calc/mass.ts";
+import { demoRobotParts, encodeLayout } from "../../calc/mass/mass.ts";
 
 describe("mass-layout calculator, server render (the path Astro islands take)", () => {
   const html = renderToString(<MassLayoutCalculator id="mc" layout={encodeLayout(demoRobotParts())} />);

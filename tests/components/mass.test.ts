@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { demoRobotBalance, demoRobotParts, encodeLayout, parseLayout } from "../../calc/mass.ts";
+import { demoRobotBalance, demoRobotParts, encodeLayout, parseLayout } from "../../calc/mass/mass.ts";
 import { createMassModel, readPoints } from "../../components/mass/model.ts";
 import { createPart, partFields, readPart } from "../../components/mass/parts.ts";
 

@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
-import { accelerometerPlacementInputs as specs } from "../../calc/rotation.ts";
+import { accelerometerPlacementInputs as specs } from "../../calc/rotation/rotation.ts";
 import { decodeState, encodeState, MAX_VALUE_LENGTH, permalinkQuery } from "../../components/calc-ui/permalink.ts";
 
 describe("permalinks", () => {

@@ -4,10 +4,10 @@
  * that text. A page opened from a link shows rows it wrote itself, so it needs the reader only
  * once someone edits the text; the reader then loads on that first edit.
  */
-import { CalcInputError } from "./errors.ts";
+import { CalcInputError } from "../core/errors.ts";
 import type { CalibrationRow } from "./calibration.ts";
 import type { CalibrationCsv, CalibrationCsvOptions } from "./csv.ts";
-import { UNITS, type UnitId } from "./units.ts";
+import { UNITS, type UnitId } from "../core/units.ts";
 
 /** Throws unless `unit` is a unit of `kind`. */
 export function requireUnitOfKind(param: string, unit: UnitId, kind: "angularSpeed" | "acceleration"): void {

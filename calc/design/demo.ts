@@ -4,13 +4,13 @@
  * Its sensor radius and inertia come from its own mass layout, so the sections agree.
  */
 import { DESIGN_FORMAT, DESIGN_VERSION, defaultSection, type Design } from "./design.ts";
-import { demoRobotParts, massBalanceInputs, massProperties } from "./mass.ts";
-import { DEMO_SPINNER, drivetrainInputs } from "./drivetrain.ts";
-import { accelerometerPlacementInputs } from "./rotation.ts";
-import { headingDriftInputs } from "./heading.ts";
-import { rimMaterial, DEFAULT_SAFETY_THRESHOLDS, DEFAULT_SHEAR_RATIO } from "./loads.ts";
-import { rpmToRadPerSecond } from "./units.ts";
-import { STANDARD_GRAVITY } from "./constants.ts";
+import { demoRobotParts, massBalanceInputs, massProperties } from "../mass/mass.ts";
+import { DEMO_SPINNER, drivetrainInputs } from "../drivetrain/drivetrain.ts";
+import { accelerometerPlacementInputs } from "../rotation/rotation.ts";
+import { headingDriftInputs } from "../heading/index.ts";
+import { rimMaterial, DEFAULT_SAFETY_THRESHOLDS, DEFAULT_SHEAR_RATIO } from "../loads/index.ts";
+import { rpmToRadPerSecond } from "../core/units.ts";
+import { STANDARD_GRAVITY } from "../core/constants.ts";
 
 const defaults = <T extends Record<string, { default: number }>>(specs: T) =>
   Object.fromEntries(Object.entries(specs).map(([k, s]) => [k, s.default])) as { [K in keyof T]: number };

@@ -6,8 +6,8 @@
  * A brushless motor driven by a hobby speed controller is treated as a brushed DC motor with the
  * same Kv and winding resistance (the averaged, commutation-free model).
  */
-import { CalcInputError, requireInRange, requireNonNegative, requirePositive } from "./errors.ts";
-import type { SourceKey } from "./sources.ts";
+import { CalcInputError, requireInRange, requireNonNegative, requirePositive } from "../core/errors.ts";
+import type { SourceKey } from "../sources/index.ts";
 
 /**
  * Torque constant from the velocity constant (motor-constants-wikipedia); in SI the torque and

@@ -6,7 +6,7 @@
  * Where a source gives a range, the single design value is the LOW end of the range (the
  * conservative choice for strength) and the range is kept beside it.
  */
-import type { SourceKey } from "./sources.ts";
+import type { SourceKey } from "../sources/index.ts";
 
 /** The numeric properties a row carries. */
 export type MaterialProperty = "density" | "yieldStrength" | "ultimateStrength" | "youngsModulus" | "poissonRatio";

@@ -14,11 +14,11 @@
  * $I_{xz} = \sum \left[ I'_{xz} + m\,(x - \bar x)(z - \bar z) \right]$, where $I'_{xz}$ is a part's
  * own product about its own centre. The inertia-tensor element is the negative of this.
  */
-import { CalcInputError, requireFinite, requireInRange, requireNonNegative, requirePositive } from "./errors.ts";
-import { defineInputs } from "./inputs.ts";
-import { isMaterialId, MATERIALS, type MaterialId } from "./materials.ts";
-import { rpmToRadPerSecond } from "./units.ts";
-import type { SourceKey } from "./sources.ts";
+import { CalcInputError, requireFinite, requireInRange, requireNonNegative, requirePositive } from "../core/errors.ts";
+import { defineInputs } from "../core/inputs.ts";
+import { isMaterialId, MATERIALS, type MaterialId } from "../materials/materials.ts";
+import { rpmToRadPerSecond } from "../core/units.ts";
+import type { SourceKey } from "../sources/index.ts";
 
 // ---------------------------------------------------------------------------------------------
 // Parts.

@@ -2,11 +2,11 @@
  * The bibliography of calc/: every formula and constant names one of these keys, and every chapter
  * lists the keys it relies on in its frontmatter (an unknown key fails the build).
  */
-import type { Source } from "./source-type.ts";
-import { HEADING_SOURCES } from "./sources/heading.ts";
-import { MASS_SOURCES } from "./sources/mass.ts";
-import { LOADS_SOURCES } from "./sources/loads.ts";
-import { DRIVETRAIN_SOURCES } from "./sources/drivetrain.ts";
+import type { Source } from "./types.ts";
+import { HEADING_SOURCES } from "./heading.ts";
+import { MASS_SOURCES } from "./mass.ts";
+import { LOADS_SOURCES } from "./loads.ts";
+import { DRIVETRAIN_SOURCES } from "./drivetrain.ts";
 
 export type { Source };
 

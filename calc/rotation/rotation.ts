@@ -2,11 +2,11 @@
  * Rotation: acceleration at a radius, where an accelerometer can sit on a spinning robot, and the
  * pull a spinning part puts on its mounts. SI in and out: rad/s, m, m/s², kg, N.
  */
-import { CalcInputError, requireInRange, requireNonNegative, requirePositive } from "./errors.ts";
-import { defineInputs } from "./inputs.ts";
-import { STANDARD_GRAVITY } from "./constants.ts";
-import { rpmToRadPerSecond } from "./units.ts";
-import type { SourceKey } from "./sources.ts";
+import { CalcInputError, requireInRange, requireNonNegative, requirePositive } from "../core/errors.ts";
+import { defineInputs } from "../core/inputs.ts";
+import { STANDARD_GRAVITY } from "../core/constants.ts";
+import { rpmToRadPerSecond } from "../core/units.ts";
+import type { SourceKey } from "../sources/index.ts";
 
 /**
  * Centripetal acceleration of a point at a radius from the spin axis (openstax-college-physics).

@@ -3,7 +3,7 @@
  * approximate, and the source. Kept apart from calc/units.ts so that calculators in the browser
  * do not carry this text; tests check that every unit has an entry here.
  */
-import type { SourceKey } from "./sources.ts";
+import type { SourceKey } from "../sources/index.ts";
 import type { UnitId } from "./units.ts";
 
 /** How a unit's factor is known. */

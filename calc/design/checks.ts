@@ -3,13 +3,13 @@
  * marginal, fails, or info), the rule and margin that decided it, and its key figure. The same
  * code feeds the build-sheet page and the command line.
  */
-import { accelerometerPlacement } from "./rotation.ts";
-import { headingDrift } from "./heading.ts";
-import { massBalance } from "./mass.ts";
-import { fastenerCheck, rimCheck } from "./loads.ts";
-import { simulateSpinUp, type DrivetrainInput } from "./drivetrain.ts";
-import { CalcInputError } from "./errors.ts";
-import { formatNumber, formatQuantity, type QuantityKind, type UnitId, type UnitSystem } from "./units.ts";
+import { accelerometerPlacement } from "../rotation/rotation.ts";
+import { headingDrift } from "../heading/index.ts";
+import { massBalance } from "../mass/mass.ts";
+import { fastenerCheck, rimCheck } from "../loads/index.ts";
+import { simulateSpinUp, type DrivetrainInput } from "../drivetrain/drivetrain.ts";
+import { CalcInputError } from "../core/errors.ts";
+import { formatNumber, formatQuantity, type QuantityKind, type UnitId, type UnitSystem } from "../core/units.ts";
 import type { Design, DesignSection } from "./design.ts";
 
 export type CheckStatus = "holds" | "marginal" | "fails" | "info";

@@ -6,9 +6,9 @@
  * from the thread geometry, minimum tensile and proof loads, Eurocode design resistances) so that
  * every tabulated number can be checked against its formula.
  */
-import { CalcInputError, requireInRange, requirePositive } from "./errors.ts";
-import { requireChoice, type ChoiceOption } from "./loads-common.ts";
-import type { SourceKey } from "./sources.ts";
+import { CalcInputError, requireInRange, requirePositive } from "../core/errors.ts";
+import { requireChoice, type ChoiceOption } from "./common.ts";
+import type { SourceKey } from "../sources/index.ts";
 
 // Choosing from a fixed list lives with the shared load-check helpers; re-exported here, where it started.
 export { requireChoice, type ChoiceOption };

@@ -3,11 +3,11 @@
  * on each bolt against its ISO 898-1 property class, the safety factors, the speeds at which the
  * bolts yield and break, and a verdict. Re-exported by calc/loads.ts. SI in and out.
  */
-import { CalcInputError, requireInRange, requireNonNegative, requirePositive } from "./errors.ts";
-import { defineInputs } from "./inputs.ts";
-import type { PartLoad } from "./rotation.ts";
-import { STANDARD_GRAVITY } from "./constants.ts";
-import { rpmToRadPerSecond } from "./units.ts";
+import { CalcInputError, requireInRange, requireNonNegative, requirePositive } from "../core/errors.ts";
+import { defineInputs } from "../core/inputs.ts";
+import type { PartLoad } from "../rotation/rotation.ts";
+import { STANDARD_GRAVITY } from "../core/constants.ts";
+import { rpmToRadPerSecond } from "../core/units.ts";
 import {
   metricThread,
   PROPERTY_CLASS_OPTIONS,
@@ -27,7 +27,7 @@ import {
   speedAtStress,
   type ChoiceOption,
   type LoadVerdict,
-} from "./loads-common.ts";
+} from "./common.ts";
 
 // ---------------------------------------------------------------------------------------------
 // Bolts holding a spinning part.

@@ -6,9 +6,9 @@
  * robust residuals. Also the small statistical functions these need (Student t and normal
  * quantiles) and a compact, versioned text form of the rows for a URL. SI in and out.
  */
-import { CalcInputError, requireFinite, requireInRange, requireNonNegative, requirePositive } from "./errors.ts";
-import { defineInputs } from "./inputs.ts";
-import { fromSI, toSI } from "./units.ts";
+import { CalcInputError, requireFinite, requireInRange, requireNonNegative, requirePositive } from "../core/errors.ts";
+import { defineInputs } from "../core/inputs.ts";
+import { fromSI, toSI } from "../core/units.ts";
 
 // ---------------------------------------------------------------------------------------------
 // Special functions.

@@ -5,11 +5,11 @@
  * costs in lag during a spin-up and does to one spike. Re-exported by calc/heading.ts. SI in and
  * out: rad/s, rad, m/s², s, Hz.
  */
-import { CalcInputError, requireInRange, requireNonNegative, requirePositive } from "./errors.ts";
-import { defineInputs } from "./inputs.ts";
-import { STANDARD_GRAVITY, TURN } from "./constants.ts";
-import { rpmToRadPerSecond } from "./units.ts";
-import { requireWithinSpecs } from "./spec-check.ts";
+import { CalcInputError, requireInRange, requireNonNegative, requirePositive } from "../core/errors.ts";
+import { defineInputs } from "../core/inputs.ts";
+import { STANDARD_GRAVITY, TURN } from "../core/constants.ts";
+import { rpmToRadPerSecond } from "../core/units.ts";
+import { requireWithinSpecs } from "../core/spec-check.ts";
 
 // ---------------------------------------------------------------------------------------------
 // 1. Timing.

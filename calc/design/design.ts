@@ -5,10 +5,10 @@
  * malformed or partly invalid file keeps what is valid and explains the rest, field by field.
  */
 import * as v from "valibot";
-import { describeRange, type InputSpecs } from "./inputs.ts";
-import { accelerometerPlacementInputs } from "./rotation.ts";
-import { headingDriftInputs } from "./heading.ts";
-import { checkPart, massBalanceInputs, type LayoutPart, type MountingPoint } from "./mass.ts";
+import { describeRange, type InputSpecs } from "../core/inputs.ts";
+import { accelerometerPlacementInputs } from "../rotation/rotation.ts";
+import { headingDriftInputs } from "../heading/index.ts";
+import { checkPart, massBalanceInputs, type LayoutPart, type MountingPoint } from "../mass/mass.ts";
 import {
   fastenerCheckInputs,
   rimCheckInputs,
@@ -17,10 +17,10 @@ import {
   LOADING_MODE_OPTIONS,
   SHEAR_PLANE_OPTIONS,
   RIM_SHAPE_OPTIONS,
-} from "./loads.ts";
-import { THREAD_SIZE_OPTIONS, PROPERTY_CLASS_OPTIONS } from "./fasteners.ts";
-import { drivetrainInputs, DRIVE_TYPE_OPTIONS } from "./drivetrain.ts";
-import { CalcInputError } from "./errors.ts";
+} from "../loads/index.ts";
+import { THREAD_SIZE_OPTIONS, PROPERTY_CLASS_OPTIONS } from "../loads/fasteners.ts";
+import { drivetrainInputs, DRIVE_TYPE_OPTIONS } from "../drivetrain/drivetrain.ts";
+import { CalcInputError } from "../core/errors.ts";
 
 /** The format tag every design file carries. */
 export const DESIGN_FORMAT = "whirlbook-design";

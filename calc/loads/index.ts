@@ -8,17 +8,17 @@
  * calculator loads only its own half: loads-common.ts (safety factor, verdict, limit speed,
  * validation), loads-bolts.ts (the fastener check) and loads-rims.ts (the rim check).
  */
-import { rpmToRadPerSecond } from "./units.ts";
-import { DEFAULT_SAFETY_THRESHOLDS } from "./loads-common.ts";
-import { DEFAULT_SHEAR_RATIO, fastenerCheck, type FastenerCheck, type FastenerCheckInput } from "./loads-bolts.ts";
-import { rimCheck, type RimCheck, type RimCheckInput, type RimMaterialValues } from "./loads-rims.ts";
-import { requireChoice, type ChoiceOption } from "./loads-common.ts";
-import { MATERIAL_IDS, MATERIALS, type MaterialId } from "./materials.ts";
-import type { SourceKey } from "./sources.ts";
+import { rpmToRadPerSecond } from "../core/units.ts";
+import { DEFAULT_SAFETY_THRESHOLDS } from "./common.ts";
+import { DEFAULT_SHEAR_RATIO, fastenerCheck, type FastenerCheck, type FastenerCheckInput } from "./bolts.ts";
+import { rimCheck, type RimCheck, type RimCheckInput, type RimMaterialValues } from "./rims.ts";
+import { requireChoice, type ChoiceOption } from "./common.ts";
+import { MATERIAL_IDS, MATERIALS, type MaterialId } from "../materials/materials.ts";
+import type { SourceKey } from "../sources/index.ts";
 
-export * from "./loads-common.ts";
-export * from "./loads-bolts.ts";
-export * from "./loads-rims.ts";
+export * from "./common.ts";
+export * from "./bolts.ts";
+export * from "./rims.ts";
 
 // ---------------------------------------------------------------------------------------------
 // Materials for the rim check.

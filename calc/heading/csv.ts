@@ -7,7 +7,7 @@
  */
 import type { CalibrationRow } from "./calibration.ts";
 import { requireUnitOfKind } from "./calibration-text.ts";
-import { findUnit, parseQuantity, UNITS, type UnitId } from "./units.ts";
+import { findUnit, parseQuantity, UNITS, type UnitId } from "../core/units.ts";
 
 export type CsvSeparator = "," | ";" | "\t" | "whitespace";
 

@@ -50,12 +50,12 @@
  * stops at the step cap and says so in `warnings` rather than take seconds. Realistic pairings of
  * motor and wheel give wheel-side time constants of milliseconds and finish in well under 1 ms.
  */
-import { CalcInputError, requireFinite, requireInRange, requireNonNegative, requirePositive } from "./errors.ts";
-import { defineInputs, type InputSpec } from "./inputs.ts";
-import { STANDARD_GRAVITY } from "./constants.ts";
-import { rpmToRadPerSecond, type QuantityKind } from "./units.ts";
+import { CalcInputError, requireFinite, requireInRange, requireNonNegative, requirePositive } from "../core/errors.ts";
+import { defineInputs, type InputSpec } from "../core/inputs.ts";
+import { STANDARD_GRAVITY } from "../core/constants.ts";
+import { rpmToRadPerSecond, type QuantityKind } from "../core/units.ts";
 import { torqueConstantFromKv } from "./motor.ts";
-import type { SourceKey } from "./sources.ts";
+import type { SourceKey } from "../sources/index.ts";
 
 // ---------------------------------------------------------------------------------------------
 // Closed-form figures at a speed.

@@ -4,9 +4,9 @@
  * declaration. Used by the bolt check (loads-bolts.ts) and the rim check (loads-rims.ts); the
  * public face of the topic is calc/loads.ts. SI in and out.
  */
-import { CalcInputError, requireFinite, requireInRange, requirePositive } from "./errors.ts";
-import type { InputSpecs } from "./inputs.ts";
-import type { QuantityKind } from "./units.ts";
+import { CalcInputError, requireFinite, requireInRange, requirePositive } from "../core/errors.ts";
+import type { InputSpecs } from "../core/inputs.ts";
+import type { QuantityKind } from "../core/units.ts";
 
 // ---------------------------------------------------------------------------------------------
 // Choosing from a fixed list.

@@ -13,5 +13,5 @@
  * Sign convention throughout: drift = ω̂ − ω. Positive drift means the estimated heading runs ahead
  * of the true heading (the robot "thinks" it has turned further than it has).
  */
-export * from "./heading-drift.ts";
-export * from "./heading-timing.ts";
+export * from "./drift.ts";
+export * from "./timing.ts";

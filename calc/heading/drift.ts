@@ -8,11 +8,11 @@
  * Sign convention throughout: drift = ω̂ − ω. Positive drift means the estimated heading runs ahead
  * of the true heading (the robot "thinks" it has turned further than it has).
  */
-import { CalcInputError, requireFinite, requireInRange, requirePositive } from "./errors.ts";
-import { defineInputs } from "./inputs.ts";
-import { STANDARD_GRAVITY, TURN } from "./constants.ts";
-import { fromSI, rpmToRadPerSecond } from "./units.ts";
-import { requireWithinSpecs } from "./spec-check.ts";
+import { CalcInputError, requireFinite, requireInRange, requirePositive } from "../core/errors.ts";
+import { defineInputs } from "../core/inputs.ts";
+import { STANDARD_GRAVITY, TURN } from "../core/constants.ts";
+import { fromSI, rpmToRadPerSecond } from "../core/units.ts";
+import { requireWithinSpecs } from "../core/spec-check.ts";
 
 // ---------------------------------------------------------------------------------------------
 // Helpers (not exported).

@@ -3,10 +3,10 @@
  * disk or bored disk, where they peak, the safety factors against the material, the speeds at which
  * it yields and is estimated to burst, and a verdict. Re-exported by calc/loads.ts. SI in and out.
  */
-import { CalcInputError, requireInRange, requireNonNegative, requirePositive } from "./errors.ts";
-import { defineInputs } from "./inputs.ts";
-import { rpmToRadPerSecond } from "./units.ts";
-import type { MaterialId } from "./materials.ts";
+import { CalcInputError, requireInRange, requireNonNegative, requirePositive } from "../core/errors.ts";
+import { defineInputs } from "../core/inputs.ts";
+import { rpmToRadPerSecond } from "../core/units.ts";
+import type { MaterialId } from "../materials/materials.ts";
 import {
   safetyThresholdInputs,
   requireChoice,
@@ -18,7 +18,7 @@ import {
   speedAtStress,
   type ChoiceOption,
   type LoadVerdict,
-} from "./loads-common.ts";
+} from "./common.ts";
 
 // ---------------------------------------------------------------------------------------------
 // Spinning rings and disks.
