@@ -50,6 +50,7 @@ function describe(file) {
         .join(", ");
     } else continue;
     const docs = ts.getJSDocCommentsAndTags(statement);
+    if (docs.some((d) => d.getFullText().includes("@internal"))) continue;
     const comment = docs.map((d) => (typeof d.comment === "string" ? d.comment : (ts.getTextOfJSDocComment(d.comment) ?? ""))).join(" ");
     const summary = clean(comment.split(/\n\s*\n|(?<=\.)\s/)[0] ?? "");
     const returns = docs.flatMap((d) =>
@@ -64,7 +65,9 @@ function describe(file) {
   return rows;
 }
 
-const files = readdirSync(calcDir, { recursive: true }).filter((f) => f.endsWith(".ts") && !["index.ts", "sources/index.ts", "sources/types.ts", "core/constants.ts"].includes(f));
+const files = readdirSync(calcDir, { recursive: true }).filter(
+  (f) => f.endsWith(".ts") && !["index.ts", "sources/index.ts", "sources/types.ts", "core/constants.ts"].includes(f),
+);
 files.sort((a, b) => (a in TITLES ? Object.keys(TITLES).indexOf(a) : 99) - (b in TITLES ? Object.keys(TITLES).indexOf(b) : 99) || a.localeCompare(b));
 const parts = [
   START,

@@ -5,7 +5,7 @@
  */
 import { accelerometerPlacement } from "../rotation/rotation.ts";
 import { headingDrift } from "../heading/index.ts";
-import { massBalance } from "../mass/mass.ts";
+import { massBalance } from "../mass/mass-balance.ts";
 import { fastenerCheck, rimCheck } from "../loads/index.ts";
 import { simulateSpinUp, type DrivetrainInput } from "../drivetrain/drivetrain.ts";
 import { CalcInputError } from "../core/errors.ts";

@@ -4,7 +4,9 @@
  * Its sensor radius and inertia come from its own mass layout, so the sections agree.
  */
 import { DESIGN_FORMAT, DESIGN_VERSION, defaultSection, type Design } from "./design.ts";
-import { demoRobotParts, massBalanceInputs, massProperties } from "../mass/mass.ts";
+import { demoRobotParts } from "../mass/demo.ts";
+import { massBalanceInputs } from "../mass/mass-balance.ts";
+import { massProperties } from "../mass/properties.ts";
 import { DEMO_SPINNER, drivetrainInputs } from "../drivetrain/drivetrain.ts";
 import { accelerometerPlacementInputs } from "../rotation/rotation.ts";
 import { headingDriftInputs } from "../heading/index.ts";

@@ -11,7 +11,8 @@ import { drivetrainInputs, DRIVE_TYPE_URL_KEY } from "../../calc/drivetrain/driv
 import type { FastenerCheckInput, RimCheckInput } from "../../calc/loads/index.ts";
 import { fastenerLink } from "../loads/fastener-model.ts";
 import { rimLink, CUSTOM_MATERIAL } from "../loads/rim-model.ts";
-import { encodeLayout, massBalanceInputs } from "../../calc/mass/mass.ts";
+import { encodeLayout } from "../../calc/mass/layout-text.ts";
+import { massBalanceInputs } from "../../calc/mass/mass-balance.ts";
 import { formatNumber, fromSI } from "../../calc/core/units.ts";
 
 /** The chapter (slug) whose calculator edits each section. */

@@ -15,7 +15,8 @@ import { readChoices } from "../loads/choices.ts";
 import { FASTENER_CHOICES } from "../loads/fastener-model.ts";
 import { rimChoices } from "../loads/rim-model.ts";
 import { defaultSection } from "../../calc/design/design.ts";
-import { massBalanceInputs, parseLayout } from "../../calc/mass/mass.ts";
+import { massBalanceInputs } from "../../calc/mass/mass-balance.ts";
+import { parseLayout } from "../../calc/mass/layout-text.ts";
 import { readPoints } from "../mass/model.ts";
 import { loadStore, newId, saveStore } from "./store.ts";
 

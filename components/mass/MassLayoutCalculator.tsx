@@ -6,7 +6,9 @@
  */
 import { useSignal } from "../calc-ui/reactive.ts";
 import { useEffect, useMemo } from "preact/hooks";
-import { BALANCE_GRADES, PART_SHAPE_KINDS, type MirrorAxis } from "../../calc/mass/mass.ts";
+import { BALANCE_GRADES } from "../../calc/mass/balance.ts";
+import { PART_SHAPE_KINDS } from "../../calc/mass/parts.ts";
+import type { MirrorAxis } from "../../calc/mass/editing.ts";
 import { MATERIALS } from "../../calc/materials/materials.ts";
 import { formatNumber, formatQuantity, quantityToText, type QuantityKind, type UnitId, type UnitSystem } from "../../calc/core/units.ts";
 import { QuantityField } from "../calc-ui/QuantityField.tsx";

@@ -3,7 +3,7 @@
  * mass, the sensor and the proposed counterweight, with a scale bar and a text summary. Geometry
  * comes from calc/ (layoutDrawing); this only maps metres to the picture.
  */
-import type { LayoutDrawing, Point2 } from "../../calc/mass/mass.ts";
+import type { LayoutDrawing, Point2 } from "../../calc/mass/drawing.ts";
 import { formatQuantity, type UnitSystem } from "../../calc/core/units.ts";
 
 export interface TopViewProps {

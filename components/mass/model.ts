@@ -7,18 +7,12 @@
 import { batch, computed, signal } from "../calc-ui/reactive.ts";
 import { CalcInputError } from "../../calc/core/errors.ts";
 import { readField, type InputSpec } from "../../calc/core/inputs.ts";
-import {
-  counterweightPlan,
-  encodeLayout,
-  layoutDrawing,
-  massBalance,
-  massBalanceInputs,
-  mirrorPart,
-  parseLayout,
-  type LayoutPart,
-  type MirrorAxis,
-  type MountingPoint,
-} from "../../calc/mass/mass.ts";
+import { counterweightPlan, massBalance, massBalanceInputs } from "../../calc/mass/mass-balance.ts";
+import { encodeLayout, parseLayout } from "../../calc/mass/layout-text.ts";
+import { layoutDrawing } from "../../calc/mass/drawing.ts";
+import { mirrorPart, type MirrorAxis } from "../../calc/mass/editing.ts";
+import type { LayoutPart } from "../../calc/mass/parts.ts";
+import type { MountingPoint } from "../../calc/mass/counterweight.ts";
 import { fromSI, type UnitSystem } from "../../calc/core/units.ts";
 import { createFieldsModel, fieldMessage } from "../calc-ui/fields.ts";
 import { encodeState } from "../calc-ui/permalink.ts";

@@ -9,7 +9,7 @@ import { rpmToRadPerSecond, radPerSecondToRpm } from "../../calc/core/units.ts";
 import { isSourceKey } from "../../calc/sources/index.ts";
 import { LOADS_SOURCES as LOADS_BIBLIOGRAPHY } from "../../calc/sources/loads.ts";
 import { MATERIALS } from "../../calc/materials/materials.ts";
-import { demoRobotBalance } from "../../calc/mass/mass.ts";
+import { demoRobotBalance } from "../../calc/mass/demo.ts";
 import {
   EN1993_THREAD_SHEAR_FACTOR,
   eurocodeBoltShearResistance,
@@ -862,15 +862,18 @@ describe("sources", () => {
     return { undocumented: exported.filter((name) => !documented.has(name)), keys };
   }
 
-  it.each(["../../calc/loads/index.ts", "../../calc/loads/common.ts", "../../calc/loads/bolts.ts", "../../calc/loads/rims.ts", "../../calc/loads/fasteners.ts"])(
-    "documents every exported function of %s and cites only known keys",
-    (path) => {
-      const { undocumented, keys } = documentedSourceKeys(path);
-      expect(undocumented).toEqual([]);
-      expect(keys.length).toBeGreaterThan(0);
-      expect(keys.filter((k) => !isSourceKey(k))).toEqual([]);
-    },
-  );
+  it.each([
+    "../../calc/loads/index.ts",
+    "../../calc/loads/common.ts",
+    "../../calc/loads/bolts.ts",
+    "../../calc/loads/rims.ts",
+    "../../calc/loads/fasteners.ts",
+  ])("documents every exported function of %s and cites only known keys", (path) => {
+    const { undocumented, keys } = documentedSourceKeys(path);
+    expect(undocumented).toEqual([]);
+    expect(keys.length).toBeGreaterThan(0);
+    expect(keys.filter((k) => !isSourceKey(k))).toEqual([]);
+  });
 
   it("lists only known source keys, and uses every bibliography entry it adds", () => {
     expect([...LOADS_SOURCES, ...FASTENERS_SOURCES].filter((k) => !isSourceKey(k))).toEqual([]);

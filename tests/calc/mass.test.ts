@@ -1,44 +1,23 @@
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
+import { addMirrorCopy, addPart, duplicatePart, mirrorPart, mirrorPartInList, movePart, removePart } from "../../calc/mass/editing.ts";
+import { applyCounterweight, counterweightAtCandidates, counterweightAtRadius, counterweightRadiusForMass } from "../../calc/mass/counterweight.ts";
 import {
-  addMirrorCopy,
-  addPart,
-  applyCounterweight,
   BALANCE_GRADES,
-  checkPart,
-  counterweightAtCandidates,
-  counterweightAtRadius,
-  counterweightRadiusForMass,
-  counterweightPlan,
   coupleUnbalance,
-  demoRobotBalance,
-  demoRobotParts,
-  duplicatePart,
-  encodeLayout,
   equivalentBalanceGrade,
   finestGradeMet,
-  layoutDrawing,
-  MASS_BALANCE_SOURCE_KEYS,
-  massBalance,
-  massBalanceInputs,
-  massProperties,
-  mirrorPart,
-  mirrorPartInList,
-  movePart,
-  parseLayout,
-  partMass,
-  partOutline,
-  partOwnInertia,
-  partVolume,
   permissibleResidualUnbalance,
-  removePart,
   staticUnbalance,
-  trueSensorRadius,
   twoPlaneCorrection,
-  type LayoutPart,
-  type MassBalanceScalars,
-  type PartShape,
-} from "../../calc/mass/mass.ts";
+} from "../../calc/mass/balance.ts";
+import { checkPart, partMass, partOwnInertia, partVolume, type LayoutPart, type PartShape } from "../../calc/mass/parts.ts";
+import { counterweightPlan, massBalance, massBalanceInputs, type MassBalanceScalars } from "../../calc/mass/mass-balance.ts";
+import { demoRobotBalance, demoRobotParts, MASS_BALANCE_SOURCE_KEYS } from "../../calc/mass/demo.ts";
+import { encodeLayout, parseLayout } from "../../calc/mass/layout-text.ts";
+import { layoutDrawing, partOutline } from "../../calc/mass/drawing.ts";
+import { massProperties } from "../../calc/mass/properties.ts";
+import { trueSensorRadius } from "../../calc/mass/sensor.ts";
 import { CalcInputError } from "../../calc/core/errors.ts";
 import { MATERIAL_IDS, MATERIALS } from "../../calc/materials/materials.ts";
 import { isSourceKey } from "../../calc/sources/index.ts";

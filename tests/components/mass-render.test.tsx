@@ -1,7 +1,8 @@
 import { describe, expect, it } from "vitest";
 import { renderToString } from "preact-render-to-string";
 import MassLayoutCalculator from "../../components/mass/MassLayoutCalculator.tsx";
-import { demoRobotParts, encodeLayout } from "../../calc/mass/mass.ts";
+import { demoRobotParts } from "../../calc/mass/demo.ts";
+import { encodeLayout } from "../../calc/mass/layout-text.ts";
 
 describe("mass-layout calculator, server render (the path Astro islands take)", () => {
   const html = renderToString(<MassLayoutCalculator id="mc" layout={encodeLayout(demoRobotParts())} />);

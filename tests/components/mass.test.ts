@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
-import { demoRobotBalance, demoRobotParts, encodeLayout, parseLayout } from "../../calc/mass/mass.ts";
+import { demoRobotBalance, demoRobotParts } from "../../calc/mass/demo.ts";
+import { encodeLayout, parseLayout } from "../../calc/mass/layout-text.ts";
 import { createMassModel, readPoints } from "../../components/mass/model.ts";
 import { createPart, partFields, readPart } from "../../components/mass/parts.ts";
 

@@ -1,0 +1,348 @@
+/**
+ * The mass-layout calculator: its scalar inputs, its one entry point `massBalance` (layout, balance
+ * grade, couple, counterweight and sensor radius at once) and the counterweight it offers to add,
+ * with the figures after it.
+ */
+import { requireInRange, requirePositive } from "../core/errors.ts";
+import { defineInputs } from "../core/inputs.ts";
+import { rpmToRadPerSecond } from "../core/units.ts";
+
+import {
+  type BalanceGrade,
+  type CoupleUnbalance,
+  type PermissibleUnbalance,
+  type StaticUnbalance,
+  type TwoPlaneCorrection,
+  coupleUnbalance,
+  equivalentBalanceGrade,
+  finestGradeMet,
+  permissibleResidualUnbalance,
+  staticUnbalance,
+  twoPlaneCorrection,
+} from "./balance.ts";
+import {
+  type AppliedCounterweight,
+  type CandidateChoice,
+  type CounterweightAtRadius,
+  type CounterweightForMass,
+  type MountingPoint,
+  applyCounterweight,
+  counterweightAtCandidates,
+  counterweightAtRadius,
+  counterweightRadiusForMass,
+} from "./counterweight.ts";
+import { type LayoutPart, MAX_PARTS, MAX_PART_MASS } from "./parts.ts";
+import { type MassProperties, massProperties } from "./properties.ts";
+import { type TrueSensorRadius, trueSensorRadius } from "./sensor.ts";
+
+// ---------------------------------------------------------------------------------------------
+// The mass-and-balance calculator: its scalar inputs and its one entry point.
+
+/** Scalar inputs of the mass-and-balance calculator, in SI (the parts list comes separately). */
+export const massBalanceInputs = defineInputs({
+  spinSpeed: {
+    label: "Spin speed",
+    kind: "angularSpeed",
+    min: 0,
+    minOpen: true,
+    max: rpmToRadPerSecond(60000),
+    default: rpmToRadPerSecond(2400),
+    urlKey: "rpm",
+    help: "The fastest the robot spins in service.",
+  },
+  targetOffset: {
+    label: "Target offset",
+    kind: "length",
+    min: 0,
+    minOpen: true,
+    max: 0.05,
+    default: 0.0002,
+    urlKey: "et",
+    help: "The largest distance between the centre of mass and the geometric centre you will accept.",
+  },
+  balanceGrade: {
+    label: "Balance grade",
+    kind: "speed",
+    min: 0.0004,
+    max: 4,
+    default: 0.1,
+    urlKey: "G",
+    unit: { metric: "mm/s", us: "mm/s" },
+    help: "Balance quality grade G = e·Ω in mm/s, from G 0.4 to G 4000; G 100 is 100 mm/s.",
+  },
+  correctionRadius: {
+    label: "Counterweight radius",
+    kind: "length",
+    min: 0,
+    minOpen: true,
+    max: 2,
+    default: 0.055,
+    urlKey: "cr",
+    help: "Distance from the geometric centre at which a counterweight (or a correction mass) can sit.",
+  },
+  maxRadius: {
+    label: "Largest mounting radius",
+    kind: "length",
+    min: 0,
+    minOpen: true,
+    max: 2,
+    default: 0.065,
+    urlKey: "rmax",
+    help: "The farthest from the centre a counterweight can be mounted.",
+  },
+  counterweightMass: {
+    label: "Counterweight mass",
+    kind: "mass",
+    min: 0,
+    minOpen: true,
+    max: 100,
+    default: 0.045,
+    urlKey: "cm",
+    help: "A counterweight you already have: the calculator finds the radius it needs.",
+  },
+  planeZ1: {
+    label: "Lower correction plane",
+    kind: "length",
+    min: -2,
+    max: 2,
+    default: 0.004,
+    urlKey: "z1",
+    help: "Height of the lower plane for a two-plane correction.",
+  },
+  planeZ2: {
+    label: "Upper correction plane",
+    kind: "length",
+    min: -2,
+    max: 2,
+    default: 0.024,
+    urlKey: "z2",
+    help: "Height of the upper plane; must differ from the lower one.",
+  },
+  sensorX: {
+    label: "Sensor x",
+    kind: "length",
+    min: -2,
+    max: 2,
+    default: -0.032,
+    urlKey: "sx",
+    help: "Sensor position from the geometric centre, x.",
+  },
+  sensorY: {
+    label: "Sensor y",
+    kind: "length",
+    min: -2,
+    max: 2,
+    default: 0,
+    urlKey: "sy",
+    help: "Sensor position from the geometric centre, y.",
+  },
+});
+
+export type MassBalanceScalars = { [K in keyof typeof massBalanceInputs]: number };
+
+export type MassBalanceInput = MassBalanceScalars & {
+  /** The parts list. */
+  parts: readonly LayoutPart[];
+  /** Mounting points offered for a counterweight (optional). */
+  candidates?: readonly MountingPoint[];
+};
+
+export interface MassBalance {
+  layout: MassProperties;
+  static: StaticUnbalance;
+  /** e·Ω [m/s]. */
+  equivalentGrade: number;
+  /** The finest standard grade met, or null when coarser than G 4000. */
+  gradeMet: BalanceGrade | null;
+  /** U_per for the chosen grade. */
+  permissible: PermissibleUnbalance;
+  /** Whether U ≤ U_per. */
+  gradeVerdict: "meets-grade" | "exceeds-grade";
+  /** Whether e ≤ e_target. */
+  offsetVerdict: "within-target" | "outside-target";
+  couple: CoupleUnbalance;
+  twoPlane: TwoPlaneCorrection;
+  counterweight: {
+    atRadius: CounterweightAtRadius;
+    forMass: CounterweightForMass;
+    candidates: CandidateChoice | null;
+  };
+  /**
+   * The layout with the least counterweight added: at the best candidate if one works, else at the
+   * correction radius; at height z̄. "too-heavy" (layout unchanged) when the mass would exceed the
+   * 10 000 kg part limit.
+   */
+  fix: AppliedCounterweight & { method: "none" | "correction-radius" | "candidate" | "too-heavy" };
+  sensor: { before: TrueSensorRadius; after: TrueSensorRadius };
+}
+
+/**
+ * The mass-and-balance check: mass properties of the layout, static and couple unbalance, the
+ * balance grade it meets against the chosen one, counterweight options, a two-plane correction,
+ * the layout with the counterweight added, and the sensor radius before and after.
+ *
+ * Formula: $e = |\bar{\mathbf c}|$, $U = M e$, $G = e\,\Omega$, $U_{per} = M G_{chosen} / \Omega$,
+ * $M_{rock} = \Omega^2\sqrt{I_{xz}^2 + I_{yz}^2}$, $m_{min} = M(e - e_t)/(r + e_t)$
+ *
+ * @param input the parts, optional candidates, and every field of `massBalanceInputs` (SI)
+ * @returns MassBalance
+ *
+ * Assumptions: rigid body spinning steadily about the vertical axis through its centre of mass; the
+ * counterweight goes at the height of the centre of mass so that it adds no couple.
+ * Sources: centre-of-mass, parallel-axis-theorem, iso-21940-11, rigid-rotor-unbalance,
+ * openstax-college-physics.
+ */
+export function massBalance(input: MassBalanceInput): MassBalance {
+  const { parts, candidates, spinSpeed, targetOffset, balanceGrade, correctionRadius, maxRadius, counterweightMass, planeZ1, planeZ2, sensorX, sensorY } =
+    input;
+  requirePositive("spinSpeed", spinSpeed, "rad/s");
+  const layout = massProperties(parts);
+  const stat = staticUnbalance({ totalMass: layout.totalMass, offset: layout.offset, angularSpeed: spinSpeed });
+  const equivalentGrade = equivalentBalanceGrade({ offset: layout.offset, angularSpeed: spinSpeed });
+  requireInRange("balanceGrade", balanceGrade, "m/s", { min: 0.0004, max: 4 });
+  const permissible = permissibleResidualUnbalance({ totalMass: layout.totalMass, grade: balanceGrade, angularSpeed: spinSpeed });
+  const centre = { totalMass: layout.totalMass, centreX: layout.centreX, centreY: layout.centreY, targetOffset };
+  const atRadius = counterweightAtRadius({ ...centre, radius: correctionRadius });
+  const forMass = counterweightRadiusForMass({ ...centre, mass: counterweightMass, maxRadius });
+  const choice = candidates && candidates.length > 0 ? counterweightAtCandidates({ ...centre, candidates }) : null;
+  const twoPlane = twoPlaneCorrection({
+    firstMomentX: layout.firstMomentX,
+    firstMomentY: layout.firstMomentY,
+    productXZ: layout.productXZAboutOrigin,
+    productYZ: layout.productYZAboutOrigin,
+    planeZ1,
+    planeZ2,
+    radius: correctionRadius,
+  });
+  const bestCandidate = choice && choice.best !== null ? choice.candidates[choice.best]! : null;
+  const unchanged = { parts: [...parts], before: layout, after: layout };
+  const useCandidate = bestCandidate !== null && bestCandidate.mass !== null && bestCandidate.mass > 0;
+  const fixMass = useCandidate ? bestCandidate.mass! : atRadius.mass;
+  let fix: MassBalance["fix"];
+  if (atRadius.status === "not-needed") {
+    fix = { method: "none", ...unchanged };
+  } else if (!(fixMass <= MAX_PART_MASS)) {
+    fix = { method: "too-heavy", ...unchanged };
+  } else if (useCandidate) {
+    fix = { method: "candidate", ...applyCounterweight({ parts, mass: fixMass, x: bestCandidate.x, y: bestCandidate.y, z: layout.centreZ }) };
+  } else {
+    fix = { method: "correction-radius", ...applyCounterweight({ parts, mass: fixMass, x: atRadius.x, y: atRadius.y, z: layout.centreZ }) };
+  }
+  return {
+    layout,
+    static: stat,
+    equivalentGrade,
+    gradeMet: finestGradeMet(equivalentGrade),
+    permissible,
+    gradeVerdict: stat.unbalance <= permissible.unbalance ? "meets-grade" : "exceeds-grade",
+    offsetVerdict: layout.offset <= targetOffset ? "within-target" : "outside-target",
+    couple: coupleUnbalance({ productXZ: layout.productXZ, productYZ: layout.productYZ, angularSpeed: spinSpeed }),
+    twoPlane,
+    counterweight: { atRadius, forMass, candidates: choice },
+    fix,
+    sensor: {
+      before: trueSensorRadius({ centreX: layout.centreX, centreY: layout.centreY, sensorX, sensorY }),
+      after: trueSensorRadius({ centreX: fix.after.centreX, centreY: fix.after.centreY, sensorX, sensorY }),
+    },
+  };
+}
+
+// ---------------------------------------------------------------------------------------------
+// The counterweight the calculator offers to add, with the figures after it.
+
+/**
+ * Which counterweight question to answer: the mass at a chosen radius ("radius"), the radius for a
+ * mass in hand ("mass"), or the least mass among mounting points ("points").
+ */
+export type CounterweightMode = "radius" | "mass" | "points";
+
+/** Balance figures of a layout, for a before/after comparison. */
+export interface BalanceSnapshot {
+  /** e [m] */
+  offset: number;
+  /** e·Ω [m/s] */
+  equivalentGrade: number;
+  /** Finest standard grade met, or null when coarser than G 4000. */
+  gradeMet: BalanceGrade | null;
+  /** The sensor about the new centre of mass. */
+  sensor: TrueSensorRadius;
+}
+
+export interface CounterweightPlan {
+  /**
+   * "apply": adding `counterweight` brings the offset within the target; "not-needed": it already
+   * is; "none": this mode has no answer (mass too light for the max radius, no feasible mounting
+   * point, no points given, more than 10 000 kg, or the list already holds the most parts allowed).
+   */
+  status: "apply" | "not-needed" | "none";
+  /** The point mass to add, at height z̄: mass [kg], position [m]; null unless "apply". */
+  counterweight: { mass: number; x: number; y: number; z: number } | null;
+  /** The layout with the counterweight as its last row, and its figures; null unless "apply". */
+  after: (BalanceSnapshot & { parts: LayoutPart[] }) | null;
+}
+
+/** Rounds a positive value up to `figures` significant figures; exact values stay put. */
+function roundUpSignificant(value: number, figures: number): number {
+  const step = 10 ** (Math.floor(Math.log10(value)) - figures + 1);
+  return Number((Math.ceil(value / step - 1e-9) * step).toPrecision(figures));
+}
+
+/**
+ * The counterweight one mode of the calculator proposes, ready to add to the layout, and the
+ * offset, balance grade and sensor figures with it in place (centre-of-mass; iso-21940-11 for the
+ * grade; openstax-college-physics for the sensor radius).
+ *
+ * Formula: adding m at $\mathbf p$: $\bar{\mathbf c}' = \dfrac{M\bar{\mathbf c} + m\,\mathbf p}{M + m}$,
+ * $e' = |\bar{\mathbf c}'|$, $G' = e'\,\Omega$
+ *
+ * @param input the calculator's input (parts, candidates and every scalar, SI)
+ * @param balance massBalance(input)
+ * @param mode "radius", "mass" or "points"
+ * @returns status; counterweight (mass [kg], x, y, z [m]) or null; after (parts, offset [m],
+ * equivalentGrade [m/s], gradeMet, sensor) or null
+ *
+ * Assumptions: a least mass puts the offset exactly on the target, where rounding or a mounting
+ * tolerance pushes it out; so the "radius" and "points" masses are rounded UP to 3 significant
+ * figures (what a workshop scale resolves), which moves the offset inside the target, unless that
+ * would overshoot the far edge of the workable band (then the exact mass is kept). In "mass" mode
+ * the given mass goes at the radius counterweightRadiusForMass recommends. The counterweight sits
+ * at z̄, so it adds no couple.
+ * Example: the invented demo robot (1.399 kg, e = 1.738 mm toward +x, target 0.2 mm, r = 55 mm)
+ * needs 38.99 g; the plan adds 39.0 g at (−55, 0) mm and leaves e = 0.1996 mm.
+ * Sources: centre-of-mass, iso-21940-11, openstax-college-physics.
+ */
+export function counterweightPlan({ input, balance, mode }: { input: MassBalanceInput; balance: MassBalance; mode: CounterweightMode }): CounterweightPlan {
+  const none = (status: "not-needed" | "none"): CounterweightPlan => ({ status, counterweight: null, after: null });
+  if (balance.offsetVerdict === "within-target") return none("not-needed");
+  const { atRadius, forMass, candidates } = balance.counterweight;
+  const best = candidates && candidates.best !== null ? candidates.candidates[candidates.best]! : null;
+  const pick =
+    mode === "radius"
+      ? atRadius
+      : mode === "mass"
+        ? forMass.status === "placed"
+          ? { mass: input.counterweightMass, x: forMass.x!, y: forMass.y! }
+          : null
+        : best;
+  if (!pick || !(pick.mass! <= MAX_PART_MASS) || input.parts.length >= MAX_PARTS) return none("none");
+  const z = balance.layout.centreZ;
+  const place = (mass: number) => ({ mass, ...applyCounterweight({ parts: input.parts, mass, x: pick.x, y: pick.y, z }) });
+  let placed = place(pick.mass!);
+  if (mode !== "mass") {
+    const rounded = place(roundUpSignificant(pick.mass!, 3));
+    if (rounded.after.offset <= input.targetOffset) placed = rounded;
+  }
+  const { after } = placed;
+  const equivalentGrade = equivalentBalanceGrade({ offset: after.offset, angularSpeed: input.spinSpeed });
+  return {
+    status: "apply",
+    counterweight: { mass: placed.mass, x: pick.x, y: pick.y, z },
+    after: {
+      parts: placed.parts,
+      offset: after.offset,
+      equivalentGrade,
+      gradeMet: finestGradeMet(equivalentGrade),
+      sensor: trueSensorRadius({ centreX: after.centreX, centreY: after.centreY, sensorX: input.sensorX, sensorY: input.sensorY }),
+    },
+  };
+}
