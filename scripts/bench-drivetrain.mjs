@@ -11,7 +11,9 @@
  * and reports the longest batch (how long the page can go without answering input).
  */
 import { loadavg } from "node:os";
-import { DEMO_SPINNER, DEMO_WEAPON, markSweepOptimum, simulateSpinUp, sweepDrivetrain, sweepPoint, sweepValues } from "../calc/drivetrain/drivetrain.ts";
+import { DEMO_SPINNER, DEMO_WEAPON } from "../calc/drivetrain/demo.ts";
+import { markSweepOptimum, sweepDrivetrain, sweepPoint, sweepValues } from "../calc/drivetrain/compare.ts";
+import { simulateSpinUp } from "../calc/drivetrain/simulate.ts";
 
 /** Runs `fn` `warmup` times untimed, then `runs` times timed; returns times in ms, sorted, and the last result. */
 function time(fn, runs, warmup) {

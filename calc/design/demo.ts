@@ -7,7 +7,8 @@ import { DESIGN_FORMAT, DESIGN_VERSION, defaultSection, type Design } from "./de
 import { demoRobotParts } from "../mass/demo.ts";
 import { massBalanceInputs } from "../mass/mass-balance.ts";
 import { massProperties } from "../mass/properties.ts";
-import { DEMO_SPINNER, drivetrainInputs } from "../drivetrain/drivetrain.ts";
+import { DEMO_SPINNER } from "../drivetrain/demo.ts";
+import { drivetrainInputs } from "../drivetrain/inputs.ts";
 import { accelerometerPlacementInputs } from "../rotation/rotation.ts";
 import { headingDriftInputs } from "../heading/index.ts";
 import { rimMaterial, DEFAULT_SAFETY_THRESHOLDS, DEFAULT_SHEAR_RATIO } from "../loads/index.ts";

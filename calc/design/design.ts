@@ -21,7 +21,7 @@ import {
   RIM_SHAPE_OPTIONS,
 } from "../loads/index.ts";
 import { THREAD_SIZE_OPTIONS, PROPERTY_CLASS_OPTIONS } from "../loads/fasteners.ts";
-import { drivetrainInputs, DRIVE_TYPE_OPTIONS } from "../drivetrain/drivetrain.ts";
+import { drivetrainInputs, DRIVE_TYPE_OPTIONS } from "../drivetrain/inputs.ts";
 import { CalcInputError } from "../core/errors.ts";
 
 /** The format tag every design file carries. */

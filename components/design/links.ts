@@ -7,7 +7,7 @@ import { accelerometerPlacementInputs } from "../../calc/rotation/rotation.ts";
 import { headingDriftInputs } from "../../calc/heading/index.ts";
 import type { UnitSystem } from "../../calc/core/units.ts";
 import { permalinkQuery } from "../calc-ui/permalink.ts";
-import { drivetrainInputs, DRIVE_TYPE_URL_KEY } from "../../calc/drivetrain/drivetrain.ts";
+import { drivetrainInputs, DRIVE_TYPE_URL_KEY } from "../../calc/drivetrain/inputs.ts";
 import type { FastenerCheckInput, RimCheckInput } from "../../calc/loads/index.ts";
 import { fastenerLink } from "../loads/fastener-model.ts";
 import { rimLink, CUSTOM_MATERIAL } from "../loads/rim-model.ts";

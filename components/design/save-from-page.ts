@@ -10,7 +10,7 @@ import { headingDriftInputs } from "../../calc/heading/index.ts";
 import type { UnitSystem } from "../../calc/core/units.ts";
 import { decodeState } from "../calc-ui/permalink.ts";
 import { fastenerCheckInputs, rimCheckInputs } from "../../calc/loads/index.ts";
-import { drivetrainInputs, DRIVE_TYPE_URL_KEY, requireDriveType } from "../../calc/drivetrain/drivetrain.ts";
+import { drivetrainInputs, DRIVE_TYPE_URL_KEY, requireDriveType } from "../../calc/drivetrain/inputs.ts";
 import { readChoices } from "../loads/choices.ts";
 import { FASTENER_CHOICES } from "../loads/fastener-model.ts";
 import { rimChoices } from "../loads/rim-model.ts";

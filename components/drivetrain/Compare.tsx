@@ -6,7 +6,7 @@ import { useSignal } from "../calc-ui/reactive.ts";
 import { QuantityField } from "../calc-ui/QuantityField.tsx";
 import { Chart } from "../calc-ui/Chart.tsx";
 import { formatNumber, radPerSecondToRpm } from "../../calc/core/units.ts";
-import type { DriveType } from "../../calc/drivetrain/drivetrain.ts";
+import type { DriveType } from "../../calc/drivetrain/inputs.ts";
 import { amps, fmt, rpm } from "./format.ts";
 import { applies, NAMES, SPECS, VARIANT_KEYS, type Name, type SpinUpModel, type Variant } from "./model.ts";
 

@@ -3,7 +3,8 @@
  * over time, the energy balance, the simulation's warnings, and the speed and current plots with
  * the regime strip between them.
  */
-import type { DrivetrainInput, SpinUpRegime, SpinUpResult } from "../../calc/drivetrain/drivetrain.ts";
+import type { DrivetrainInput } from "../../calc/drivetrain/inputs.ts";
+import type { SpinUpRegime, SpinUpResult } from "../../calc/drivetrain/results.ts";
 import type { UnitSystem } from "../../calc/core/units.ts";
 import { formatNumber, radPerSecondToRpm } from "../../calc/core/units.ts";
 import { Chart } from "../calc-ui/Chart.tsx";

@@ -5,7 +5,7 @@
  * one input with the best value marked. The simulation is calc/drivetrain.ts.
  */
 import { useEffect, useMemo } from "preact/hooks";
-import { DRIVE_TYPE_OPTIONS, type DriveType } from "../../calc/drivetrain/drivetrain.ts";
+import { DRIVE_TYPE_OPTIONS, type DriveType } from "../../calc/drivetrain/inputs.ts";
 import { QuantityField } from "../calc-ui/QuantityField.tsx";
 import { Toolbar } from "../calc-ui/Toolbar.tsx";
 import { Notices } from "../calc-ui/Notices.tsx";

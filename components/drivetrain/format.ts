@@ -2,7 +2,7 @@
  * Formatting for the spin-up calculator: quantities in the user's unit system, speeds in rpm to
  * four figures, the regimes in words. No DOM.
  */
-import type { SpinUpRegime } from "../../calc/drivetrain/drivetrain.ts";
+import type { SpinUpRegime } from "../../calc/drivetrain/results.ts";
 import { formatNumber, formatQuantity, type QuantityKind, type UnitSystem } from "../../calc/core/units.ts";
 
 /** A quantity in the user's system: "1.01 s", "345 J", "62.8 m/s". */

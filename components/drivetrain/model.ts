@@ -21,25 +21,19 @@
  * out of place is reported as a plain-text notice and ignored.
  */
 import { batch, computed, effect, signal, type ReadonlySignal, type Signal } from "../calc-ui/reactive.ts";
+import { compareDrivetrains, markSweepOptimum, sweepPoint, sweepValues, type DrivetrainSweep, type SweepPoint } from "../../calc/drivetrain/compare.ts";
+import { DEMO_SPINNER, DEMO_WEAPON } from "../../calc/drivetrain/demo.ts";
 import {
-  compareDrivetrains,
-  DEMO_SPINNER,
-  DEMO_WEAPON,
   DRIVE_TYPE_OPTIONS,
   DRIVE_TYPE_URL_KEY,
   drivetrainInputs,
-  markSweepOptimum,
-  simulateSpinUp,
-  sweepPoint,
-  sweepValues,
   validateDrivetrainInput,
   type DriveType,
   type DrivetrainInput,
   type DrivetrainParameter,
-  type DrivetrainSweep,
-  type SpinUpResult,
-  type SweepPoint,
-} from "../../calc/drivetrain/drivetrain.ts";
+} from "../../calc/drivetrain/inputs.ts";
+import { simulateSpinUp } from "../../calc/drivetrain/simulate.ts";
+import type { SpinUpResult } from "../../calc/drivetrain/results.ts";
 import { fieldUnit, readField, type FieldReading, type InputSpec } from "../../calc/core/inputs.ts";
 import { fromSI, parseQuantity, UNITS, type UnitSystem } from "../../calc/core/units.ts";
 import { createFieldsModel, fieldMessage, type FieldsModel } from "../calc-ui/fields.ts";

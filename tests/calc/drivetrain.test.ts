@@ -2,30 +2,19 @@ import { readFileSync } from "node:fs";
 import { createRequire } from "node:module";
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
+import { biteDepth, currentLimitedAcceleration, rotorKineticEnergy, rotorTipSpeed, tractionLimitedAcceleration } from "../../calc/drivetrain/figures.ts";
+import { compareDrivetrains, markSweepOptimum, sweepDrivetrain, sweepPoint, sweepValues } from "../../calc/drivetrain/compare.ts";
+import { DEMO_SPINNER, DEMO_WEAPON, DRIVETRAIN_SOURCE_KEYS, drivetrainWorkedExample } from "../../calc/drivetrain/demo.ts";
 import {
-  biteDepth,
-  compareDrivetrains,
-  currentLimitedAcceleration,
-  DEMO_SPINNER,
-  DEMO_WEAPON,
   DRIVE_TYPE_OPTIONS,
   DRIVE_TYPE_URL_KEY,
-  DRIVETRAIN_SOURCE_KEYS,
   drivetrainInputs,
-  drivetrainWorkedExample,
-  markSweepOptimum,
-  rotorKineticEnergy,
-  rotorTipSpeed,
-  simulateSpinUp,
-  sweepDrivetrain,
-  sweepPoint,
-  sweepValues,
-  tractionLimitedAcceleration,
   validateDrivetrainInput,
   type DrivetrainInput,
   type DrivetrainParameter,
-  type SpinUpResult,
-} from "../../calc/drivetrain/drivetrain.ts";
+} from "../../calc/drivetrain/inputs.ts";
+import { simulateSpinUp } from "../../calc/drivetrain/simulate.ts";
+import type { SpinUpResult } from "../../calc/drivetrain/results.ts";
 import { CalcInputError } from "../../calc/core/errors.ts";
 import { isSourceKey } from "../../calc/sources/index.ts";
 import { rpmToRadPerSecond } from "../../calc/core/units.ts";
@@ -781,7 +770,9 @@ describe("regression pins (COMPUTED, not outside authorities)", () => {
 });
 
 describe("documentation and bibliography", () => {
-  const text = readFileSync(new URL("../../calc/drivetrain/drivetrain.ts", import.meta.url), "utf8");
+  const text = ["figures", "inputs", "results", "model", "dopri5", "simulate", "compare", "demo"]
+    .map((f) => readFileSync(new URL(`../../calc/drivetrain/${f}.ts`, import.meta.url), "utf8"))
+    .join("\n");
 
   it("names only source keys that exist", () => {
     for (const key of DRIVETRAIN_SOURCE_KEYS) expect(isSourceKey(key), key).toBe(true);
@@ -792,7 +783,7 @@ describe("documentation and bibliography", () => {
     const exported = [...text.matchAll(/^export function (\w+)/gm)].map((m) => m[1]);
     expect(docs.map((d) => d[2])).toEqual(exported);
     for (const [, doc, name] of docs) {
-      if (name === "requireDriveType" || name === "validateDrivetrainInput") continue;
+      if (name === "requireDriveType" || name === "validateDrivetrainInput" || doc!.includes("@internal")) continue;
       expect(doc, name).toMatch(/@returns/);
       expect(doc, name).toMatch(/Example/);
       expect(doc, name).toMatch(/Sources:/);

@@ -5,7 +5,9 @@
  */
 import { describe, expect, it } from "vitest";
 import { renderToString } from "preact-render-to-string";
-import { DEMO_SPINNER, DEMO_WEAPON, simulateSpinUp, sweepDrivetrain } from "../../calc/drivetrain/drivetrain.ts";
+import { DEMO_SPINNER, DEMO_WEAPON } from "../../calc/drivetrain/demo.ts";
+import { simulateSpinUp } from "../../calc/drivetrain/simulate.ts";
+import { sweepDrivetrain } from "../../calc/drivetrain/compare.ts";
 import { rpmToRadPerSecond } from "../../calc/core/units.ts";
 import { applies, createSpinUpModel, defaultSweepRange, NAMES, SPECS, SPINNER_ONLY, type SpinUpModel } from "../../components/drivetrain/model.ts";
 import SpinUpCalculator from "../../components/drivetrain/SpinUpCalculator.tsx";

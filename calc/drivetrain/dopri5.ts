@@ -1,0 +1,115 @@
+import { NS, type SpinUpSystem } from "./model.ts";
+
+// Dormand–Prince 5(4) tableau, error weights (b − b̂) and dense-output weights
+// (dormand-prince-1980; dense output as in hairer-norsett-wanner-1 §II.6).
+const A21 = 1 / 5;
+const A31 = 3 / 40,
+  A32 = 9 / 40;
+const A41 = 44 / 45,
+  A42 = -56 / 15,
+  A43 = 32 / 9;
+const A51 = 19372 / 6561,
+  A52 = -25360 / 2187,
+  A53 = 64448 / 6561,
+  A54 = -212 / 729;
+const A61 = 9017 / 3168,
+  A62 = -355 / 33,
+  A63 = 46732 / 5247,
+  A64 = 49 / 176,
+  A65 = -5103 / 18656;
+const A71 = 35 / 384,
+  A73 = 500 / 1113,
+  A74 = 125 / 192,
+  A75 = -2187 / 6784,
+  A76 = 11 / 84;
+const E1 = 71 / 57600,
+  E3 = -71 / 16695,
+  E4 = 71 / 1920,
+  E5 = -17253 / 339200,
+  E6 = 22 / 525,
+  E7 = -1 / 40;
+const D1 = -12715105075 / 11282082432,
+  D3 = 87487479700 / 32700410799,
+  D4 = -10690763975 / 1880347072;
+const D5 = 701980252875 / 199316789632,
+  D6 = -1453857185 / 822651844,
+  D7 = 69997945 / 29380423;
+
+/** One Dormand–Prince 5(4) step with its error estimate and dense output (dormand-prince-1980, hairer-norsett-wanner-1). */
+export class Dopri5 {
+  readonly y = new Float64Array(NS);
+  readonly y1 = new Float64Array(NS);
+  readonly yt = new Float64Array(NS);
+  k1 = new Float64Array(NS);
+  readonly k2 = new Float64Array(NS);
+  readonly k3 = new Float64Array(NS);
+  readonly k4 = new Float64Array(NS);
+  readonly k5 = new Float64Array(NS);
+  readonly k6 = new Float64Array(NS);
+  k7 = new Float64Array(NS);
+  readonly r1 = new Float64Array(NS);
+  readonly r2 = new Float64Array(NS);
+  readonly r3 = new Float64Array(NS);
+  readonly r4 = new Float64Array(NS);
+  readonly r5 = new Float64Array(NS);
+  readonly atol = new Float64Array(NS);
+  rtol = 1e-8;
+  h = 0;
+  denseReady = false;
+
+  /** Takes a trial step of size h from y into y1 (k7 = f(y1)); returns the scaled error norm (≤ 1 to accept). */
+  step(sys: SpinUpSystem): number {
+    const { y, y1, yt, k1, k2, k3, k4, k5, k6, k7, atol, rtol, h } = this;
+    for (let i = 0; i < NS; i++) yt[i] = y[i]! + h * A21 * k1[i]!;
+    sys.deriv(yt, k2);
+    for (let i = 0; i < NS; i++) yt[i] = y[i]! + h * (A31 * k1[i]! + A32 * k2[i]!);
+    sys.deriv(yt, k3);
+    for (let i = 0; i < NS; i++) yt[i] = y[i]! + h * (A41 * k1[i]! + A42 * k2[i]! + A43 * k3[i]!);
+    sys.deriv(yt, k4);
+    for (let i = 0; i < NS; i++) yt[i] = y[i]! + h * (A51 * k1[i]! + A52 * k2[i]! + A53 * k3[i]! + A54 * k4[i]!);
+    sys.deriv(yt, k5);
+    for (let i = 0; i < NS; i++) yt[i] = y[i]! + h * (A61 * k1[i]! + A62 * k2[i]! + A63 * k3[i]! + A64 * k4[i]! + A65 * k5[i]!);
+    sys.deriv(yt, k6);
+    for (let i = 0; i < NS; i++) y1[i] = y[i]! + h * (A71 * k1[i]! + A73 * k3[i]! + A74 * k4[i]! + A75 * k5[i]! + A76 * k6[i]!);
+    sys.deriv(y1, k7);
+    // Error estimate (hairer-norsett-wanner-1 §II.4): RMS of the 5th−4th order difference over the tolerance.
+    let sum = 0;
+    for (let i = 0; i < NS; i++) {
+      const e = h * (E1 * k1[i]! + E3 * k3[i]! + E4 * k4[i]! + E5 * k5[i]! + E6 * k6[i]! + E7 * k7[i]!);
+      const sc = atol[i]! + rtol * Math.max(Math.abs(y[i]!), Math.abs(y1[i]!));
+      sum += (e / sc) * (e / sc);
+    }
+    this.denseReady = false;
+    return Math.sqrt(sum / NS);
+  }
+
+  /** Builds the continuous extension of the accepted step (hairer-norsett-wanner-1 §II.6). */
+  prepareDense(): void {
+    if (this.denseReady) return;
+    const { y, y1, k1, k3, k4, k5, k6, k7, r1, r2, r3, r4, r5, h } = this;
+    for (let i = 0; i < NS; i++) {
+      const dy = y1[i]! - y[i]!;
+      const bspl = h * k1[i]! - dy;
+      r1[i] = y[i]!;
+      r2[i] = dy;
+      r3[i] = bspl;
+      r4[i] = dy - h * k7[i]! - bspl;
+      r5[i] = h * (D1 * k1[i]! + D3 * k3[i]! + D4 * k4[i]! + D5 * k5[i]! + D6 * k6[i]! + D7 * k7[i]!);
+    }
+    this.denseReady = true;
+  }
+
+  /** Component i at the fraction th of the accepted step (prepareDense first). */
+  dense(i: number, th: number): number {
+    const th1 = 1 - th;
+    return this.r1[i]! + th * (this.r2[i]! + th1 * (this.r3[i]! + th * (this.r4[i]! + th1 * this.r5[i]!)));
+  }
+
+  /** Accepts y1 as the new state; k7 becomes k1 (first same as last). */
+  advance(): void {
+    this.y.set(this.y1);
+    const swap = this.k1;
+    this.k1 = this.k7;
+    this.k7 = swap;
+  }
+}

@@ -1,0 +1,333 @@
+import { STANDARD_GRAVITY } from "../core/constants.ts";
+import { torqueConstantFromKv } from "./motor.ts";
+import type { DrivetrainInput } from "./inputs.ts";
+import { R_CURRENT, R_STALLED, R_TRACTION, R_VOLTAGE, type RegimeSegment, type SpinUpEndReason, type SpinUpPoint } from "./results.ts";
+
+// ---------------------------------------------------------------------------------------------
+// The model, reduced to numbers.
+
+export interface Model {
+  spinner: boolean;
+  N: number;
+  kt: number;
+  rm: number;
+  i0: number;
+  jm: number;
+  ilim: number;
+  duty: number;
+  voc: number;
+  rp: number;
+  g: number;
+  eta: number;
+  j: number;
+  tf: number;
+  c: number;
+  rw: number;
+  roff: number;
+  jw: number;
+  fs: number;
+  fk: number;
+  target: number;
+  maxTime: number;
+}
+
+/** The input reduced to the model's numbers (SI; see the module comment). @internal */
+export function buildModel(input: DrivetrainInput, spinner: boolean): Model {
+  const kt = torqueConstantFromKv({ kv: input.motorKv });
+  const normal = input.weightShare * input.robotMass * STANDARD_GRAVITY;
+  return {
+    spinner,
+    N: input.motorCount,
+    kt,
+    rm: input.motorResistance,
+    i0: input.noLoadCurrent,
+    jm: input.motorRotorInertia,
+    ilim: input.currentLimit,
+    duty: input.throttle,
+    voc: input.cellCount * input.cellVoltage, // battery-thevenin-model: pack of n cells in series
+    rp: input.cellCount * input.cellResistance,
+    g: input.gearRatio,
+    eta: input.gearEfficiency,
+    j: input.inertia,
+    tf: input.frictionTorque,
+    c: input.dragTorque / (input.dragReferenceSpeed * input.dragReferenceSpeed), // quadratic-air-drag: T = c Ω²
+    rw: spinner ? input.wheelRadius : 1,
+    roff: spinner ? input.wheelOffset : 1,
+    jw: spinner ? input.drivenWheels * input.wheelInertia : 0,
+    fs: spinner ? input.staticFriction * normal : Infinity, // serway-beichner-5e: f_s ≤ μ_s n
+    fk: spinner ? input.kineticFriction * normal : Infinity, // serway-beichner-5e: f_k = μ_k n
+    target: input.targetSpeed,
+    maxTime: input.maxTime,
+  };
+}
+
+// State vector: speeds, then the running integrals of every power flow.
+export const S_SPEED = 0; // Ω, rotor or robot [rad/s]
+export const S_MOTOR = 1; // ω_m, motor shaft (relative to the robot) [rad/s]
+export const S_DRAWN = 2;
+export const S_BATT = 3;
+export const S_COPPER = 4;
+export const S_MLOSS = 5;
+export const S_GEAR = 6;
+export const S_FRIC = 7;
+export const S_DRAG = 8;
+export const S_SLIP = 9;
+export const S_CHARGE = 10;
+export const NS = 11;
+
+export const MAX_TRIALS = 50_000;
+export const MAX_SWITCHES = 10_000;
+export const STEADY_TOLERANCE = 1e-5;
+export const SPEED_FRACTIONS = [0.5, 0.9, 1] as const;
+
+export const LOCKED = 0;
+export const SLIPPING = 1;
+
+export interface RawRun {
+  endTime: number;
+  endReason: SpinUpEndReason;
+  y: Float64Array;
+  crossTimes: (number | null)[];
+  chargeAtTarget: number | null;
+  drawnAtTarget: number | null;
+  topSpeed: number;
+  peakMotorSpeed: number;
+  peakBatteryCurrent: number;
+  peakMotorCurrent: number;
+  minBatteryVoltage: number;
+  segments: RegimeSegment[];
+  series: SpinUpPoint[];
+  accepted: number;
+  rejected: number;
+  evaluations: number;
+  switches: number;
+  tauLocked: number;
+  tauWheel: number;
+  jLocked: number;
+}
+
+/**
+ * The drive as a system of ODEs: parameters, the state's derivative, and the auxiliary values
+ * (currents, voltage, traction force) of the last evaluation. A class, so that every run shares
+ * the same compiled methods.
+ */
+export class SpinUpSystem {
+  readonly spinner: boolean;
+  readonly N: number;
+  readonly kt: number;
+  readonly rm: number;
+  readonly i0: number;
+  readonly jm: number;
+  readonly ilim: number;
+  readonly duty: number;
+  readonly voc: number;
+  readonly rp: number;
+  readonly g: number;
+  readonly eta: number;
+  readonly j: number;
+  readonly tf: number;
+  readonly c: number;
+  readonly rw: number;
+  readonly roff: number;
+  readonly jw: number;
+  readonly fs: number;
+  readonly fk: number;
+  /** Wheel turns per robot turn while gripping (1 for a weapon). */
+  readonly rho: number;
+  /** Motor turns per output turn while locked. */
+  readonly k: number;
+  /** Robot (or rotor) plus wheels, at the output. */
+  readonly jLoad: number;
+  readonly jLockF: number;
+  readonly jLockR: number;
+  readonly jWheelF: number;
+  readonly jWheelR: number;
+  readonly jWheelTrue: number;
+  /** One motor's view of its winding plus the sagging pack. */
+  readonly rTot: number;
+  readonly tauLocked: number;
+  readonly tauWheel: number;
+
+  mode = LOCKED;
+  dir = 1;
+  /** Motor current [A], battery current [A], battery voltage [V], traction force [N]. */
+  current = 0;
+  battCurrent = 0;
+  battVoltage = 0;
+  force = 0;
+  limited = false;
+  stuck = false;
+  evaluations = 0;
+
+  constructor(m: Model) {
+    this.spinner = m.spinner;
+    this.N = m.N;
+    this.kt = m.kt;
+    this.rm = m.rm;
+    this.i0 = m.i0;
+    this.jm = m.jm;
+    this.ilim = m.ilim;
+    this.duty = m.duty;
+    this.voc = m.voc;
+    this.rp = m.rp;
+    this.g = m.g;
+    this.eta = m.eta;
+    this.j = m.j;
+    this.tf = m.tf;
+    this.c = m.c;
+    this.rw = m.rw;
+    this.roff = m.roff;
+    this.jw = m.jw;
+    this.fs = m.fs;
+    this.fk = m.fk;
+    this.battVoltage = m.voc;
+    const rho = m.spinner ? m.roff / m.rw : 1;
+    const k = m.g * rho;
+    this.rho = rho;
+    this.k = k;
+    this.jLoad = m.j + rho * rho * m.jw;
+    this.jLockF = this.jLoad + m.eta * k * k * m.N * m.jm;
+    this.jLockR = this.jLoad + (k * k * m.N * m.jm) / m.eta;
+    this.jWheelF = m.jw + m.eta * m.g * m.g * m.N * m.jm;
+    this.jWheelR = m.jw + (m.g * m.g * m.N * m.jm) / m.eta;
+    this.jWheelTrue = m.jw + m.g * m.g * m.N * m.jm;
+    this.rTot = m.rm + m.N * m.duty * m.duty * m.rp;
+    this.tauLocked = (this.jLockF * this.rTot) / (m.eta * k * k * m.N * m.kt * m.kt);
+    this.tauWheel = m.spinner ? (this.jWheelF * this.rTot) / (m.eta * m.g * m.g * m.N * m.kt * m.kt) : this.tauLocked;
+  }
+
+  /** Controller, battery and motor at motor speed wm (erickson-power-electronics, battery-thevenin-model). */
+  electrical(wm: number): void {
+    const emf = this.kt * wm; // ctms-dc-motor-speed: e = K_e ω
+    let current = (this.duty * this.voc - emf) / this.rTot; // D·V_b − e = I·R with V_b = V_oc − R_p·N·D·I
+    let d = this.duty;
+    this.limited = false;
+    if (current > this.ilim) {
+      // The controller lowers its duty so that D·(V_oc − R_p·N·D·I_lim) = e + I_lim·R: the smaller root.
+      current = this.ilim;
+      const need = emf + this.ilim * this.rm;
+      const a = this.N * this.rp * this.ilim;
+      d = (2 * need) / (this.voc + Math.sqrt(Math.max(0, this.voc * this.voc - 4 * a * need)));
+      this.limited = true;
+    }
+    this.current = current;
+    this.battCurrent = this.N * d * current; // erickson-power-electronics: ideal converter, I_in = D·I_out
+    this.battVoltage = this.voc - this.rp * this.battCurrent; // battery-thevenin-model
+  }
+
+  /** Locked (weapon, or spinner gripping): one degree of freedom. Returns Ω̇ and sets the traction force. */
+  lockedAcceleration(om: number, wm: number): number {
+    this.electrical(wm);
+    const tm = this.N * this.kt * (this.current - this.i0); // motor torque net of the constant loss torque
+    const load = this.tf + this.c * om * om;
+    let acc = (this.k * this.eta * tm - load) / this.jLockF; // gear-efficiency-model, motors driving
+    if ((this.jLoad * acc + load) / this.rho < 0) acc = (this.k * (tm / this.eta) - load) / this.jLockR; // load driving the motors
+    if (om <= 0 && acc <= 0) {
+      this.stuck = true;
+      this.force = (this.k * this.eta * tm) / this.roff; // held: the wheels push with all the motors give
+      return 0;
+    }
+    this.stuck = false;
+    this.force = (this.j * acc + load) / this.roff; // traction the robot needs (spinner)
+    return acc;
+  }
+
+  /** The state's derivative: accelerations, then every power flow (see the module comment). */
+  deriv(y: Float64Array, dy: Float64Array): void {
+    const om = y[S_SPEED]!;
+    const wm = y[S_MOTOR]!;
+    const ww = wm / this.g;
+    const load = this.tf + this.c * om * om;
+    let accBody: number;
+    let dwm: number;
+    let tg: number; // torque out of the reduction
+    let pSlip = 0;
+    if (this.mode === LOCKED) {
+      accBody = this.lockedAcceleration(om, wm);
+      dwm = this.k * accBody;
+      tg = this.stuck ? 0 : (this.jLoad * accBody + load) / this.rho;
+    } else {
+      this.electrical(wm);
+      const tm = this.N * this.kt * (this.current - this.i0);
+      const f = this.dir * this.fk; // serway-beichner-5e: f_k = μ_k n
+      let dww = (this.g * this.eta * tm - f * this.rw) / this.jWheelF;
+      tg = this.jw * dww + f * this.rw;
+      if (tg < 0) {
+        dww = (this.g * (tm / this.eta) - f * this.rw) / this.jWheelR;
+        tg = this.jw * dww + f * this.rw;
+      }
+      if (wm <= 0 && dww <= 0) {
+        dww = 0;
+        tg = 0;
+      }
+      dwm = this.g * dww;
+      accBody = (f * this.roff - load) / this.j;
+      if (om <= 0 && accBody <= 0) accBody = 0;
+      this.force = f;
+      this.stuck = false;
+      pSlip = f * (ww * this.rw - om * this.roff);
+    }
+    const tin = this.N * this.kt * (this.current - this.i0) - this.N * this.jm * dwm; // torque into the reduction
+    // gear-efficiency-model: driving, T_out = η·G·T_in, so the loss is (1 − η)·T_in·ω_m; driven, (1 − η)·(−T_out)·ω_w.
+    const pGear = wm > 0 ? (tg >= 0 ? (1 - this.eta) * tin * wm : -(1 - this.eta) * tg * ww) : 0;
+    const ib = this.battCurrent;
+    dy[S_SPEED] = accBody;
+    dy[S_MOTOR] = dwm;
+    dy[S_DRAWN] = this.voc * ib;
+    dy[S_BATT] = this.rp * ib * ib;
+    dy[S_COPPER] = this.N * this.rm * this.current * this.current;
+    dy[S_MLOSS] = wm > 0 ? this.N * this.kt * this.i0 * wm : 0;
+    dy[S_GEAR] = pGear;
+    dy[S_FRIC] = om > 0 ? this.tf * om : 0;
+    dy[S_DRAG] = om > 0 ? this.c * om * om * om : 0;
+    dy[S_SLIP] = pSlip;
+    dy[S_CHARGE] = ib;
+    this.evaluations++;
+  }
+
+  /** Kinetic energy of rotor or robot, wheels and motor rotors [J]. */
+  kineticEnergy(y: Float64Array): number {
+    const om = y[S_SPEED]!;
+    const wm = y[S_MOTOR]!;
+    const ww = wm / this.g;
+    return 0.5 * (this.j * om * om + this.jw * ww * ww + this.N * this.jm * wm * wm);
+  }
+
+  /** Positive while the controller limits the current. */
+  currentMargin(wm: number): number {
+    return (this.duty * this.voc - this.kt * wm) / this.rTot - this.ilim;
+  }
+
+  /** Wheel rim speed minus ground speed at the contact [m/s]. */
+  slipSpeed(om: number, wm: number): number {
+    return (wm / this.g) * this.rw - om * this.roff;
+  }
+
+  /** Picks grip or slip at a state: a spinner slips when gripping would need more than μ_s·N_n. */
+  setModeAt(y: Float64Array): void {
+    this.mode = LOCKED;
+    if (!this.spinner) return;
+    this.lockedAcceleration(y[S_SPEED]!, y[S_MOTOR]!);
+    if (Math.abs(this.force) > this.fs) {
+      this.mode = SLIPPING;
+      this.dir = this.force >= 0 ? 1 : -1;
+    }
+  }
+
+  /** Re-grip: a contact impulse removes the remaining slip speed; its energy is booked as slip loss. */
+  regrip(y: Float64Array): void {
+    const before = this.kineticEnergy(y);
+    const vs = this.slipSpeed(y[S_SPEED]!, y[S_MOTOR]!);
+    const impulse = vs / ((this.rw * this.rw) / this.jWheelTrue + (this.roff * this.roff) / this.j);
+    const om = y[S_SPEED]! + (impulse * this.roff) / this.j;
+    y[S_SPEED] = om;
+    y[S_MOTOR] = this.k * om;
+    y[S_SLIP] = y[S_SLIP]! + Math.max(0, before - this.kineticEnergy(y));
+    this.setModeAt(y);
+  }
+
+  /** Which regime the last evaluation was in. */
+  regime(): number {
+    return this.mode === SLIPPING ? R_TRACTION : this.stuck ? R_STALLED : this.limited ? R_CURRENT : R_VOLTAGE;
+  }
+}
