@@ -5,6 +5,7 @@
  * SI results in metric or US customary units to a sensible number of significant figures.
  */
 import { STANDARD_GRAVITY } from "./constants.ts";
+import { CalcInputError } from "./errors.ts";
 
 /** The quantity a field holds; it decides which units a typed value may carry. */
 export type QuantityKind =
@@ -31,8 +32,6 @@ export type QuantityKind =
   | "motorVelocityConstant"
   | "fraction"
   | "count";
-
-export type { Exactness } from "./unit-definitions.ts";
 
 export interface UnitDef {
   /** Symbol shown to users. */
@@ -407,4 +406,20 @@ function example(kind: QuantityKind, unit: UnitId): string {
   const symbol = UNITS[unit].symbol;
   const sample = kind === "angularSpeed" ? 2400 : kind === "fraction" ? 10 : 32;
   return symbol ? `${sample} ${symbol}` : String(sample);
+}
+
+/**
+ * Checks that `unit` is a known unit id of `kind`; throws a CalcInputError naming `param` otherwise.
+ *
+ * @param param the input's name, for the message
+ * @param unit a unit id (untrusted)
+ * @param kind the quantity kind the unit must measure
+ * @returns the unit id, typed
+ */
+export function requireUnitOfKind(param: string, unit: unknown, kind: QuantityKind): UnitId {
+  const def = typeof unit === "string" && Object.hasOwn(UNITS, unit) ? UNITS[unit as UnitId] : undefined;
+  if (!def || def.kind !== kind) {
+    throw new CalcInputError({ param, value: String(unit), expected: `a unit of ${kindName(kind)} (${unitsOfKind(kind).join(", ")})`, unit: "" });
+  }
+  return unit as UnitId;
 }

@@ -4,7 +4,7 @@
  * code feeds the build-sheet page and the command line.
  */
 import { accelerometerPlacement } from "../rotation/rotation.ts";
-import { headingDrift } from "../heading/index.ts";
+import { headingDrift } from "../heading/drift-budget.ts";
 import { massBalance } from "../mass/mass-balance.ts";
 import { fastenerCheck, rimCheck } from "../loads/index.ts";
 import { simulateSpinUp } from "../drivetrain/simulate.ts";

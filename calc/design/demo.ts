@@ -10,7 +10,7 @@ import { massProperties } from "../mass/properties.ts";
 import { DEMO_SPINNER } from "../drivetrain/demo.ts";
 import { drivetrainInputs } from "../drivetrain/inputs.ts";
 import { accelerometerPlacementInputs } from "../rotation/rotation.ts";
-import { headingDriftInputs } from "../heading/index.ts";
+import { headingDriftInputs } from "../heading/drift-budget.ts";
 import { rimMaterial, DEFAULT_SAFETY_THRESHOLDS, DEFAULT_SHEAR_RATIO } from "../loads/index.ts";
 import { rpmToRadPerSecond } from "../core/units.ts";
 import { STANDARD_GRAVITY } from "../core/constants.ts";

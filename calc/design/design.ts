@@ -7,7 +7,7 @@
 import * as v from "valibot";
 import { describeRange, type InputSpecs } from "../core/inputs.ts";
 import { accelerometerPlacementInputs } from "../rotation/rotation.ts";
-import { headingDriftInputs } from "../heading/index.ts";
+import { headingDriftInputs } from "../heading/drift-budget.ts";
 import { checkPart, type LayoutPart } from "../mass/parts.ts";
 import { massBalanceInputs } from "../mass/mass-balance.ts";
 import type { MountingPoint } from "../mass/counterweight.ts";

@@ -7,15 +7,7 @@
 import { CalcInputError } from "../core/errors.ts";
 import type { CalibrationRow } from "./calibration.ts";
 import type { CalibrationCsv, CalibrationCsvOptions } from "./csv.ts";
-import { UNITS, type UnitId } from "../core/units.ts";
-
-/** Throws unless `unit` is a unit of `kind`. */
-export function requireUnitOfKind(param: string, unit: UnitId, kind: "angularSpeed" | "acceleration"): void {
-  const def = (UNITS as Record<string, { kind: string } | undefined>)[unit];
-  if (!def || def.kind !== kind) {
-    throw new CalcInputError({ param, value: String(unit), expected: `a unit of ${kind === "angularSpeed" ? "rotational speed" : "acceleration"}`, unit: "" });
-  }
-}
+import { requireUnitOfKind, UNITS, type UnitId } from "../core/units.ts";
 
 /** The rows as written: text lines and the numbers a reader gets back from them (six significant figures). */
 function written(rows: readonly CalibrationRow[], options: CalibrationCsvOptions) {

@@ -6,8 +6,7 @@
  * never throws on any text.
  */
 import type { CalibrationRow } from "./calibration.ts";
-import { requireUnitOfKind } from "./calibration-text.ts";
-import { findUnit, parseQuantity, UNITS, type UnitId } from "../core/units.ts";
+import { findUnit, parseQuantity, requireUnitOfKind, UNITS, type UnitId } from "../core/units.ts";
 
 export type CsvSeparator = "," | ";" | "\t" | "whitespace";
 

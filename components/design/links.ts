@@ -4,7 +4,7 @@
  */
 import type { Design, DesignSection } from "../../calc/design/design.ts";
 import { accelerometerPlacementInputs } from "../../calc/rotation/rotation.ts";
-import { headingDriftInputs } from "../../calc/heading/index.ts";
+import { headingDriftInputs } from "../../calc/heading/drift-budget.ts";
 import type { UnitSystem } from "../../calc/core/units.ts";
 import { permalinkQuery } from "../calc-ui/permalink.ts";
 import { drivetrainInputs, DRIVE_TYPE_URL_KEY } from "../../calc/drivetrain/inputs.ts";

@@ -6,7 +6,7 @@
 import { newDesign, type Design, type DesignSection } from "../../calc/design/design.ts";
 import { readField, type InputSpecs } from "../../calc/core/inputs.ts";
 import { accelerometerPlacementInputs } from "../../calc/rotation/rotation.ts";
-import { headingDriftInputs } from "../../calc/heading/index.ts";
+import { headingDriftInputs } from "../../calc/heading/drift-budget.ts";
 import type { UnitSystem } from "../../calc/core/units.ts";
 import { decodeState } from "../calc-ui/permalink.ts";
 import { fastenerCheckInputs, rimCheckInputs } from "../../calc/loads/index.ts";

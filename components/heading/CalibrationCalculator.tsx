@@ -5,7 +5,8 @@
  * link that carries the fitted radius and offset into the drift budget.
  */
 import { useEffect, useMemo } from "preact/hooks";
-import type { CalibrationCurvePoint, ConfidenceInterval } from "../../calc/heading/calibration.ts";
+import type { CalibrationCurvePoint } from "../../calc/heading/calibration.ts";
+import type { ConfidenceInterval } from "../../calc/numerics/line-fit.ts";
 import { formatNumber, fromSI, radPerSecondToRpm, type UnitSystem } from "../../calc/core/units.ts";
 import { Toolbar } from "../calc-ui/Toolbar.tsx";
 import { Notices } from "../calc-ui/Notices.tsx";

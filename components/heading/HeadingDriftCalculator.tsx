@@ -5,7 +5,9 @@
  * against an opposed pair when the spin centre is uncertain.
  */
 import { useEffect, useMemo } from "preact/hooks";
-import type { headingDriftInputs, HeadingDriftResult, opposedSensorsInputs, RadiusBand, SpeedRange } from "../../calc/heading/drift.ts";
+import type { headingDriftInputs, HeadingDriftResult } from "../../calc/heading/drift-budget.ts";
+import type { opposedSensorsInputs } from "../../calc/heading/opposed.ts";
+import type { RadiusBand, SpeedRange } from "../../calc/heading/drift.ts";
 import { formatNumber, fromSI, radPerSecondToRpm, type UnitSystem } from "../../calc/core/units.ts";
 import { Toolbar } from "../calc-ui/Toolbar.tsx";
 import { Notices } from "../calc-ui/Notices.tsx";

@@ -5,7 +5,8 @@
  * comparison of median windows and a trade-off plot over the smoothing factor α.
  */
 import { useEffect, useMemo } from "preact/hooks";
-import type { HeadingTimingResult, headingSmoothingInputs, headingTimingInputs } from "../../calc/heading/timing.ts";
+import type { HeadingTimingResult, headingTimingInputs } from "../../calc/heading/timing.ts";
+import type { headingSmoothingInputs } from "../../calc/heading/smoothing.ts";
 import { formatNumber, formatQuantity, fromSI } from "../../calc/core/units.ts";
 import { Toolbar } from "../calc-ui/Toolbar.tsx";
 import { Notices } from "../calc-ui/Notices.tsx";

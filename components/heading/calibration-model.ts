@@ -8,15 +8,8 @@
  * No DOM.
  */
 import { batch, computed, signal } from "../calc-ui/reactive.ts";
-import {
-  CALIBRATION_ROWS_MAX,
-  calibrationCurve,
-  calibrationFitInputs,
-  decodeCalibrationRows,
-  demoCalibrationRows,
-  encodeCalibrationRows,
-  fitCalibration,
-} from "../../calc/heading/calibration.ts";
+import { CALIBRATION_ROWS_MAX, decodeCalibrationRows, encodeCalibrationRows } from "../../calc/heading/calibration-rows.ts";
+import { calibrationCurve, calibrationFitInputs, demoCalibrationRows, fitCalibration } from "../../calc/heading/calibration.ts";
 import { calibrationRowsToCsv, readingOfWrittenRows } from "../../calc/heading/calibration-text.ts";
 import type { CalibrationCsv, parseCalibrationCsv } from "../../calc/heading/csv.ts";
 import { CalcInputError } from "../../calc/core/errors.ts";

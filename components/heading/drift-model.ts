@@ -4,7 +4,8 @@
  * field. No DOM.
  */
 import { computed } from "../calc-ui/reactive.ts";
-import { headingDrift, headingDriftInputs, opposedSensorsCheck, opposedSensorsInputs } from "../../calc/heading/drift.ts";
+import { headingDrift, headingDriftInputs } from "../../calc/heading/drift-budget.ts";
+import { opposedSensorsCheck, opposedSensorsInputs } from "../../calc/heading/opposed.ts";
 import { formatQuantity, fromSI, radPerSecondToRpm, type UnitSystem } from "../../calc/core/units.ts";
 import { createFieldsModel, fieldMessage } from "../calc-ui/fields.ts";
 

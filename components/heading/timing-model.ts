@@ -4,7 +4,8 @@
  * its field; the median-window comparison and the trade-off series over α. No DOM.
  */
 import { computed } from "../calc-ui/reactive.ts";
-import { headingSmoothing, headingSmoothingInputs, headingTiming, headingTimingInputs, smoothingTradeoffSeries } from "../../calc/heading/timing.ts";
+import { headingSmoothing, headingSmoothingInputs, smoothingTradeoffSeries } from "../../calc/heading/smoothing.ts";
+import { headingTiming, headingTimingInputs } from "../../calc/heading/timing.ts";
 import type { UnitSystem } from "../../calc/core/units.ts";
 import { createFieldsModel, fieldMessage } from "../calc-ui/fields.ts";
 

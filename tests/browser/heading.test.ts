@@ -8,7 +8,8 @@
 import { describe, expect, it } from "vitest";
 import type { Page } from "playwright-core";
 import { axeViolations, useSite, waitForIslands } from "../support/browser.ts";
-import { decodeCalibrationRows, encodeCalibrationRows, fitCalibration } from "../../calc/heading/calibration.ts";
+import { decodeCalibrationRows, encodeCalibrationRows } from "../../calc/heading/calibration-rows.ts";
+import { fitCalibration } from "../../calc/heading/calibration.ts";
 import { parseCalibrationCsv } from "../../calc/heading/csv.ts";
 import { formatQuantity } from "../../calc/core/units.ts";
 

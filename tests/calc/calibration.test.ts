@@ -10,17 +10,12 @@ import {
   calibrationFitInputs,
   DEMO_CALIBRATION_READINGS,
   demoCalibrationRows,
-  decodeCalibrationRows,
-  encodeCalibrationRows,
   fitCalibration,
-  fitStraightLine,
-  logGamma,
-  normalCdf,
-  normalQuantile,
-  studentTCdf,
-  studentTQuantile,
   type CalibrationRow,
 } from "../../calc/heading/calibration.ts";
+import { decodeCalibrationRows, encodeCalibrationRows } from "../../calc/heading/calibration-rows.ts";
+import { fitStraightLine } from "../../calc/numerics/line-fit.ts";
+import { logGamma, normalCdf, normalQuantile, studentTCdf, studentTQuantile } from "../../calc/numerics/special.ts";
 import { readFileSync } from "node:fs";
 
 /** mulberry32, then Box–Muller: a seeded source of normal deviates for the Monte Carlo checks. */

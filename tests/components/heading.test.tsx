@@ -5,7 +5,7 @@
  */
 import { describe, expect, it } from "vitest";
 import { renderToString } from "preact-render-to-string";
-import { headingDriftInputs } from "../../calc/heading/drift.ts";
+import { headingDriftInputs } from "../../calc/heading/drift-budget.ts";
 import { STANDARD_GRAVITY } from "../../calc/core/constants.ts";
 import { createDriftModel } from "../../components/heading/drift-model.ts";
 import { createTimingModel } from "../../components/heading/timing-model.ts";

@@ -1,0 +1,115 @@
+/**
+ * The heading-drift chapter's worked example: an invented demo spinner (not a real machine) and the
+ * drift a radius mismatch causes.
+ */
+import { CalcInputError, requirePositive } from "../core/errors.ts";
+import { fromSI, rpmToRadPerSecond } from "../core/units.ts";
+import { type RadiusBand, type SpinRateErrorModel, assumedRadiusBand, headingDriftAt } from "./drift.ts";
+
+// 3. Worked example for the chapter.
+
+/** One row of the radius-mismatch example, in SI and in the degrees the chapter prints. */
+export interface RadiusMismatchRow {
+  /** Spin speed [rpm] as given. */
+  rpm: number;
+  /** ω [rad/s]. */
+  angularSpeed: number;
+  /** ω̂ − ω [rad/s]. */
+  driftRate: number;
+  /** The same [°/s]. */
+  driftRateDegreesPerSecond: number;
+  /** Per revolution [rad]. */
+  driftPerRevolution: number;
+  /** The same [°]. */
+  driftPerRevolutionDegrees: number;
+}
+
+export interface RadiusMismatchExample {
+  assumedRadius: number;
+  trueRadius: number;
+  /** ω̂/ω = √(r/r̂) [-]. */
+  speedRatio: number;
+  rows: RadiusMismatchRow[];
+  /** Assumed-radius band that would keep |drift| ≤ budget at the highest speed given. */
+  bandAtTopSpeed: RadiusBand;
+  /** The budget used for the band [rad/s]. */
+  budget: number;
+}
+
+/**
+ * Drift from a radius mismatch alone at a few speeds, with degree figures for the text
+ * (spinner-heading-practice, openstax-college-physics).
+ *
+ * Formula: $\hat\omega/\omega = \sqrt{r/\hat r}$, drift $= \omega(\sqrt{r/\hat r} - 1)$, per revolution $360°(\sqrt{r/\hat r} - 1)$
+ *
+ * @param assumedRadius r̂ [m], greater than 0
+ * @param trueRadius r [m], greater than 0
+ * @param speedsRpm speeds [rpm], each greater than 0, at least one
+ * @param budget D for the radius band at the top speed [rad/s], greater than 0 (default 10 °/s)
+ * @returns rows [rad/s, °/s, rad, °] and the band [m]
+ *
+ * Example: see `demoSpinnerRadiusExample`. Sources: spinner-heading-practice, openstax-college-physics.
+ */
+export function radiusMismatchExample({
+  assumedRadius,
+  trueRadius,
+  speedsRpm,
+  budget = (10 * Math.PI) / 180,
+}: {
+  assumedRadius: number;
+  trueRadius: number;
+  speedsRpm: readonly number[];
+  budget?: number;
+}): RadiusMismatchExample {
+  if (speedsRpm.length === 0) throw new CalcInputError({ param: "speedsRpm", value: 0, expected: "at least one speed", unit: "" });
+  const model: SpinRateErrorModel = { assumedRadius, trueRadius, scaleError: 0, bias: 0, biasCorrection: 0, tilt: 0 };
+  const rows = speedsRpm.map((rpm, i) => {
+    requirePositive(`speedsRpm[${i}]`, rpm, "rpm");
+    const point = headingDriftAt({ ...model, angularSpeed: rpmToRadPerSecond(rpm) });
+    const driftRate = point.driftRate!;
+    const driftPerRevolution = point.driftPerRevolution!;
+    return {
+      rpm,
+      angularSpeed: point.angularSpeed,
+      driftRate,
+      driftRateDegreesPerSecond: fromSI(driftRate, "deg/s"),
+      driftPerRevolution,
+      driftPerRevolutionDegrees: fromSI(driftPerRevolution, "deg"),
+    };
+  });
+  const top = Math.max(...speedsRpm);
+  return {
+    assumedRadius,
+    trueRadius,
+    speedRatio: Math.sqrt(trueRadius / assumedRadius),
+    rows,
+    bandAtTopSpeed: assumedRadiusBand({ ...model, angularSpeed: rpmToRadPerSecond(top), budget }),
+    budget,
+  };
+}
+
+/**
+ * An invented demo robot for the chapter (not a real machine): its firmware assumes the sensor
+ * sits 12.0 mm from the spin axis, but the real centre of mass puts it at 12.7 mm.
+ */
+export const DEMO_HEADING_SPINNER = {
+  assumedRadius: 0.012,
+  trueRadius: 0.0127,
+  speedsRpm: [1200, 2800],
+} as const;
+
+/**
+ * The chapter's worked example: the invented demo spinner's drift at 1200 and 2800 rpm
+ * (spinner-heading-practice, openstax-college-physics).
+ *
+ * Formula: $\hat\omega/\omega = \sqrt{12.7/12.0} = 1.028753$; drift per revolution 10.35°
+ *
+ * @returns see `radiusMismatchExample`
+ *
+ * Example: 1200 rpm: 3.613 rad/s (207.0 °/s); 2800 rpm: 8.431 rad/s (483.1 °/s); 10.35° per
+ * revolution at both. To stay within 10 °/s at 2800 rpm the firmware radius must lie between
+ * 12.6849 mm and 12.7151 mm. Sources: spinner-heading-practice, openstax-college-physics.
+ */
+export function demoSpinnerRadiusExample(): RadiusMismatchExample {
+  return radiusMismatchExample({ ...DEMO_HEADING_SPINNER });
+}
