@@ -100,7 +100,7 @@ describe("reading calibration text", () => {
   it("refuses a default unit of the wrong kind, by name", () => {
     const call = () => parseCalibrationCsv("1,2", { speedUnit: "mm" });
     expect(call).toThrow(CalcInputError);
-    expect(call).toThrow('speedUnit must be a unit of rotational speed (got "mm")');
+    expect(call).toThrow('speedUnit must be a unit of rotational speed (rad/s, rpm, rps, deg/s) (got "mm")');
   });
 });
 
