@@ -35,7 +35,15 @@ export default defineConfig({
   },
   devToolbar: { enabled: false },
   vite: {
-    plugins: [katexWoff2Only()],
+    plugins: [
+      katexWoff2Only(),
+      {
+        // Pages list their calculator's chunks as <link rel="modulepreload"> at build time
+        // (scripts/site/modulepreload.mjs), so the bundler's run-time preload helper is not needed.
+        name: "whirlbook:no-preload-helper",
+        configEnvironment: (name) => (name === "client" ? { build: { modulePreload: false } } : undefined),
+      },
+    ],
     build: {
       assetsInlineLimit: 0,
       sourcemap: process.env.SOURCEMAP === "1",
@@ -45,7 +53,10 @@ export default defineConfig({
           // calculator parts): one chunk for it compresses better than nine small ones.
           codeSplitting: {
             groups: [
-              { name: "runtime", test: /node_modules[\\/](preact|d3-array)[\\/]|calc[\\/](units|inputs|errors|constants)\.ts|components[\\/]calc-ui[\\/]/ },
+              {
+                name: "runtime",
+                test: /node_modules[\\/](preact|d3-array)[\\/]|calc[\\/]core[\\/](units|inputs|errors|constants)\.ts|components[\\/]calc-ui[\\/]/,
+              },
             ],
           },
         },

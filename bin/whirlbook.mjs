@@ -16,6 +16,10 @@ if (major < 22 || (major === 22 && minor < 18)) {
   process.exit(2);
 }
 
+// calc/ finds its calculators by file name (import.meta.glob); this hook does that under Node.
+const { register } = await import("node:module");
+register("../scripts/node-glob.mjs", import.meta.url);
+
 const { readDesignText, describeProblems } = await import("../calc/design/design.ts");
 const { runChecks, buildSheetText, overallStatus } = await import("../calc/design/checks.ts");
 

@@ -1,56 +1,51 @@
-// Writes the README's calculation-module reference from calc/'s doc comments: for each module,
-// every exported function with its one-line summary, its inputs and what it returns.
-// Usage: npm run docs:api   (tests/calc/meta.test.ts checks that the README lists every function)
-import { readFileSync, readdirSync, writeFileSync } from "node:fs";
+// Writes docs/calc-api.md, the reference of the calculation module, from calc/'s own doc comments
+// and declarations: every exported function with its one-line summary, its inputs and what it
+// returns, folder by folder; and every calculator with its inputs and their link keys.
+// Usage: npm run docs:api   (tests/calc/meta.test.ts fails when the file is out of date)
+import { register } from "node:module";
+import { readdirSync, readFileSync, writeFileSync } from "node:fs";
 import { join } from "node:path";
 import { fileURLToPath } from "node:url";
 import ts from "typescript";
 
+// calc/ finds its calculators by file name (import.meta.glob); this hook does that under Node.
+register("./node-glob.mjs", import.meta.url);
+
 const root = fileURLToPath(new URL("../", import.meta.url));
 const calcDir = join(root, "calc");
-const START = "<!-- api:start -->";
-const END = "<!-- api:end -->";
+export const API_DOCS = join(root, "docs/calc-api.md");
 
-/** Module order and titles; anything else in calc/ follows alphabetically. */
-const TITLES = {
-  "units.ts": "Units",
-  "unit-definitions.ts": "Unit provenance",
-  "inputs.ts": "Input declarations",
-  "errors.ts": "Errors",
-  "rotation.ts": "Rotation and accelerometer placement",
-  "heading.ts": "Heading drift, timing and smoothing",
-  "calibration.ts": "Calibration fit",
-  "csv.ts": "Calibration data (CSV)",
-  "mass.ts": "Mass layout and balance",
-  "materials.ts": "Materials",
-  "fasteners.ts": "ISO metric fasteners",
-  "loads.ts": "Centrifugal loads, bolts and rims",
-  "motor.ts": "DC motor",
-  "drivetrain.ts": "Spin-up simulation",
-  "design.ts": "Design file",
-  "checks.ts": "Build-sheet checks",
-  "demo-design.ts": "Demo design",
+/** Folder order and titles. */
+const FOLDERS = {
+  core: "Core: units, inputs, choices, errors, links, calculators",
+  numerics: "Numerics",
+  rotation: "Rotation and accelerometer placement",
+  heading: "Heading: drift, timing, smoothing, calibration",
+  mass: "Mass layout and balance",
+  materials: "Materials",
+  loads: "Centrifugal loads: bolts and rims",
+  drivetrain: "Drive train and spin-up",
+  weapon: "A spinning weapon in motion",
+  steering: "Steering while spinning",
+  calculators: "Calculator descriptors",
+  design: "Design file and build sheet",
+  sources: "Bibliography",
 };
 
-function clean(text) {
-  return text.replace(/\s+/g, " ").replace(/\|/g, "\\|").trim();
-}
+const clean = (text) => text.replace(/\s+/g, " ").replace(/\|/g, "\\|").trim();
 
 function describe(file) {
   const source = ts.createSourceFile(file, readFileSync(join(calcDir, file), "utf8"), ts.ScriptTarget.Latest, true);
   const rows = [];
   for (const statement of source.statements) {
     if (!ts.canHaveModifiers(statement) || !ts.getModifiers(statement)?.some((m) => m.kind === ts.SyntaxKind.ExportKeyword)) continue;
-    let name = null;
-    let params = "";
-    if (ts.isFunctionDeclaration(statement) && statement.name) {
-      name = statement.name.text;
-      params = statement.parameters
-        .map((p) => (ts.isObjectBindingPattern(p.name) ? `{ ${p.name.elements.map((e) => e.name.getText()).join(", ")} }` : p.name.getText()))
-        .join(", ");
-    } else continue;
+    if (!ts.isFunctionDeclaration(statement) || !statement.name) continue;
     const docs = ts.getJSDocCommentsAndTags(statement);
     if (docs.some((d) => d.getFullText().includes("@internal"))) continue;
+    const name = statement.name.text;
+    const params = statement.parameters
+      .map((p) => (ts.isObjectBindingPattern(p.name) ? `{ ${p.name.elements.map((e) => e.name.getText()).join(", ")} }` : p.name.getText()))
+      .join(", ");
     const comment = docs.map((d) => (typeof d.comment === "string" ? d.comment : (ts.getTextOfJSDocComment(d.comment) ?? ""))).join(" ");
     const summary = clean(comment.split(/\n\s*\n|(?<=\.)\s/)[0] ?? "");
     const returns = docs.flatMap((d) =>
@@ -65,38 +60,58 @@ function describe(file) {
   return rows;
 }
 
-const files = readdirSync(calcDir, { recursive: true }).filter(
-  (f) => f.endsWith(".ts") && !["index.ts", "sources/index.ts", "sources/types.ts", "core/constants.ts"].includes(f),
-);
-files.sort((a, b) => (a in TITLES ? Object.keys(TITLES).indexOf(a) : 99) - (b in TITLES ? Object.keys(TITLES).indexOf(b) : 99) || a.localeCompare(b));
-const parts = [
-  START,
-  "",
-  "Generated from the doc comments by `npm run docs:api`; each function's doc comment in calc/ has the formula, units, assumptions, an example and its sources.",
-  "",
-];
-for (const file of files) {
-  const rows = describe(file);
-  if (rows.length === 0) continue;
-  parts.push(`#### ${TITLES[file] ?? file} (\`calc/${file}\`)`, "", "| Function | What it does | Returns |", "|---|---|---|", ...rows, "");
-}
-// Every calculator's declared inputs: name, label, kind, SI range and URL key.
-const calc = await import("../calc/index.ts");
-parts.push("#### Calculator inputs and their URL keys", "");
-for (const [exportName, value] of Object.entries(calc)) {
-  if (!/Inputs$/.test(exportName) || typeof value !== "object" || value === null) continue;
-  const specs = Object.entries(value).filter(([, spec]) => spec && typeof spec === "object" && "urlKey" in spec);
-  if (specs.length === 0) continue;
+/** The whole reference, as Markdown. */
+export async function renderApiDocs() {
+  const files = readdirSync(calcDir, { recursive: true })
+    .filter((f) => f.endsWith(".ts") && f.includes("/"))
+    .sort();
+  const parts = [
+    "# The calculation module: reference",
+    "",
+    "Generated by `npm run docs:api` from calc/'s doc comments and declarations; do not edit by hand. Each",
+    "function's doc comment in calc/ has its formula, units, assumptions, an example and its sources.",
+    "",
+    "Everything is SI in and out. Every function takes one object with descriptive names, validates it at",
+    "the entry and throws a `CalcInputError { param, value, expected, unit, bound? }` instead of returning",
+    "NaN or clamping. The public API is `calc/index.ts` (`#calc`).",
+    "",
+  ];
+  const folders = [...Object.keys(FOLDERS), ...new Set(files.map((f) => f.split("/")[0]))].filter((f, i, all) => all.indexOf(f) === i);
+  for (const folder of folders) {
+    const inFolder = files.filter((f) => f.startsWith(`${folder}/`));
+    const sections = inFolder.map((file) => [file, describe(file)]).filter(([, rows]) => rows.length > 0);
+    if (sections.length === 0) continue;
+    parts.push(`## ${FOLDERS[folder] ?? folder} (\`calc/${folder}/\`)`, "");
+    for (const [file, rows] of sections) parts.push(`### \`calc/${file}\``, "", "| Function | What it does | Returns |", "|---|---|---|", ...rows, "");
+  }
+  const { CALCULATORS } = await import("../calc/design/registry.ts");
   parts.push(
-    `\`${exportName}\`: ${specs.map(([name, spec]) => `\`${spec.urlKey}\` ${name} (${spec.kind}, ${spec.minOpen ? "(" : "["}${Number(spec.min.toPrecision(6))}, ${Number(spec.max.toPrecision(6))}] SI)`).join("; ")}.`,
+    "## Calculators and their link keys",
+    "",
+    "Each calculator's descriptor (calc/calculators/) declares its inputs, the chapter and anchor it lives at, and",
+    "its link grammar: `?v=1&u=metric|us&<key>=<text>…`, with a scope prefix (`p.rpm`) when it shares a page.",
     "",
   );
+  for (const calc of CALCULATORS) {
+    const keys = [
+      ...Object.entries(calc.inputs).map(
+        ([name, s]) =>
+          `\`${calc.scope ? `${calc.scope}.` : ""}${s.urlKey}\` ${name} (${s.kind}, ${s.minOpen ? "(" : "["}${Number(s.min.toPrecision(6))}, ${Number(s.max.toPrecision(6))}] SI)`,
+      ),
+      ...Object.entries(calc.choices).map(([name, s]) => `\`${s.urlKey}\` ${name} (one of ${s.options.map((o) => o.value).join(", ")})`),
+      ...Object.entries(calc.extras).map(([name, s]) => `\`${s.urlKey}\` ${name} (${s.label.toLowerCase()})`),
+    ];
+    parts.push(
+      `### ${calc.title} (\`${calc.id}\`, chapter \`${calc.chapter}\`${calc.section.kind === "list" ? `, a list of up to ${calc.section.max}` : ""})`,
+      "",
+      `${keys.join("; ")}.`,
+      "",
+    );
+  }
+  return `${parts.join("\n").trimEnd()}\n`;
 }
-parts.push(END);
-const readmePath = join(root, "README.md");
-const readme = readFileSync(readmePath, "utf8");
-const next = readme.includes(START)
-  ? readme.replace(new RegExp(`${START}[\\s\\S]*?${END}`), parts.join("\n"))
-  : readme.replace("### Sources (`calc/sources.ts`)", `### Reference of every function\n\n${parts.join("\n")}\n\n### Sources (\`calc/sources.ts\`)`);
-writeFileSync(readmePath, next);
-console.log(`README: ${files.length} modules documented`);
+
+if (import.meta.url === `file://${process.argv[1]}`) {
+  writeFileSync(API_DOCS, await renderApiDocs());
+  console.log(`wrote ${API_DOCS}`);
+}

@@ -18,6 +18,21 @@ function describeValue(value: unknown): string {
   return String(value);
 }
 
+/**
+ * A rule that compares the input with a limit, kept as data so that a screen can word it in the
+ * user's units ("greater than Low end of the plot (500 rpm)") instead of the SI message.
+ */
+export interface Bound {
+  /** How the value must stand to the limit. */
+  relation: "greater" | "at-least" | "less" | "at-most";
+  /** The limit [SI]. */
+  limit: number;
+  /** The quantity kind of value and limit (a units.ts kind, e.g. "angularSpeed"). */
+  kind: string;
+  /** The parameter whose value is the limit, when the limit is another input. */
+  other?: string;
+}
+
 export interface CalcInputErrorFields {
   /** The input's name, as the function's parameter object spells it (e.g. "radius"). */
   param: string;
@@ -27,6 +42,8 @@ export interface CalcInputErrorFields {
   expected: string;
   /** The unit `value` is expressed in ("" when dimensionless or not a number). */
   unit: string;
+  /** The rule as data, when it compares the value with a limit. */
+  bound?: Bound;
 }
 
 /** An input outside the domain of a calculation. */
@@ -35,6 +52,7 @@ export class CalcInputError extends RangeError implements CalcInputErrorFields {
   readonly value: unknown;
   readonly expected: string;
   readonly unit: string;
+  readonly bound: Bound | undefined;
 
   constructor(fields: CalcInputErrorFields) {
     const got = describeValue(fields.value);
@@ -45,7 +63,36 @@ export class CalcInputError extends RangeError implements CalcInputErrorFields {
     this.value = fields.value;
     this.expected = fields.expected;
     this.unit = fields.unit;
+    this.bound = fields.bound;
   }
+}
+
+const RELATION_WORDS: Record<Bound["relation"], string> = { greater: "greater than", "at-least": "at least", less: "less than", "at-most": "at most" };
+
+/**
+ * Throws unless `value` stands to `limit` as `relation` says; the error carries the rule as data.
+ * `other` names the input the limit comes from ("lowSpeed"), for the message.
+ */
+export function requireRelation(
+  param: string,
+  value: number,
+  relation: Bound["relation"],
+  limit: number,
+  options: { kind: string; unit: string; other?: string },
+): number {
+  requireFinite(param, value, options.unit);
+  const ok = relation === "greater" ? value > limit : relation === "at-least" ? value >= limit : relation === "less" ? value < limit : value <= limit;
+  if (!ok) {
+    const shown = `${Number(limit.toPrecision(6))}${options.unit ? ` ${options.unit}` : ""}`;
+    throw new CalcInputError({
+      param,
+      value,
+      expected: `${RELATION_WORDS[relation]} ${options.other ? `${options.other} (${shown})` : shown}`,
+      unit: options.unit,
+      bound: { relation, limit, kind: options.kind, ...(options.other ? { other: options.other } : {}) },
+    });
+  }
+  return value;
 }
 
 /** Throws unless `value` is a finite number. */

@@ -4,7 +4,18 @@
  * the message shown beside the field, in the user's units.
  */
 import { CalcInputError } from "./errors.ts";
-import { displayUnit, formatQuantity, fromSI, parseQuantity, quantityToText, UNITS, type QuantityKind, type UnitId, type UnitSystem } from "./units.ts";
+import {
+  displayUnit,
+  exactQuantity,
+  fromSI,
+  parseQuantity,
+  quantityToText,
+  type QuantityKind,
+  type UnitDef,
+  UNITS,
+  type UnitId,
+  type UnitSystem,
+} from "./units.ts";
 
 export interface InputSpec {
   /** Label shown to users, e.g. "Top speed". */
@@ -66,11 +77,8 @@ export function describeRange(spec: InputSpec, system: UnitSystem): string {
  */
 export function checkValue(spec: InputSpec, valueSI: number, system: UnitSystem): CalcInputError | null {
   const unit = fieldUnit(spec, system);
-  const shownValue = Number(
-    formatQuantity(valueSI, spec.kind, { unit, significant: 4 })
-      .number.replace("−", "-")
-      .replace(/ × 10.*/, ""),
-  );
+  // The value in the field's unit, to 6 significant figures: computed, never read back from display text.
+  const shownValue = Number(fromSI(valueSI, unit).toPrecision(6));
   const tooLow = spec.minOpen ? !(valueSI > spec.min) : !(valueSI >= spec.min);
   const tooHigh = !(valueSI <= spec.max);
   const notWhole = spec.integer === true && !Number.isInteger(valueSI);
@@ -106,6 +114,18 @@ export function defaultText(spec: InputSpec, system: UnitSystem): string {
   const unit = fieldUnit(spec, system);
   const symbol = UNITS[unit].symbol;
   return `${Number(fromSI(spec.default, unit).toPrecision(6))}${symbol ? ` ${symbol}` : ""}`;
+}
+
+/**
+ * Field text for an SI value that reads back as exactly that value: "33.73790238966863 mm", or in
+ * the SI unit ("0.3 m") when no number in the field's unit does. A value carried from a link or a
+ * design keeps every digit, so the calculator shows the stored value's verdict.
+ */
+export function exactFieldText(spec: InputSpec, valueSI: number, system: UnitSystem): string {
+  const exact = exactQuantity(valueSI, fieldUnit(spec, system));
+  const def: UnitDef = UNITS[exact.unit];
+  const symbol = def.symbol || def.aliases?.[0] || "";
+  return symbol === "" || symbol === "°" ? `${exact.number}${symbol}` : `${exact.number} ${symbol}`;
 }
 
 /** Compact text for a URL: "32mm". */

@@ -10,6 +10,7 @@ import { CalcInputError } from "./errors.ts";
 /** The quantity a field holds; it decides which units a typed value may carry. */
 export type QuantityKind =
   | "length"
+  | "area"
   | "mass"
   | "acceleration"
   | "angularSpeed"
@@ -58,6 +59,10 @@ export const UNITS = {
   mm: { symbol: "mm", kind: "length", factor: 0.001, aliases: ["millimetre", "millimeter", "millimeters", "millimetres"] },
   in: { symbol: "in", kind: "length", factor: INCH, aliases: ["inch", "inches", '"', "″"] },
   ft: { symbol: "ft", kind: "length", factor: FOOT, aliases: ["foot", "feet", "'", "′"] },
+  // area [m²]
+  m2: { symbol: "m²", kind: "area", factor: 1, aliases: ["m²", "m^2", "sq m"] },
+  mm2: { symbol: "mm²", kind: "area", factor: 1e-6, aliases: ["mm²", "mm^2", "sq mm"] },
+  in2: { symbol: "in²", kind: "area", factor: INCH * INCH, aliases: ["in²", "in^2", "sq in"] },
   // mass [kg]
   kg: { symbol: "kg", kind: "mass", factor: 1 },
   g: { symbol: "g", kind: "mass", factor: 0.001, aliases: ["gram", "grams", "gr"] },
@@ -194,6 +199,7 @@ const DISPLAY: Record<QuantityKind, readonly [DisplaySteps, DisplaySteps?]> = {
     ["mm", ["m", 10]],
     ["in", ["ft", 10 * FOOT]],
   ],
+  area: [["mm2"], ["in2"]],
   mass: [
     ["g", ["kg", 1]],
     ["oz", ["lb", POUND]],
@@ -278,12 +284,99 @@ export function formatQuantity(
 }
 
 /**
- * Writes an SI value as compact text that `parseQuantity` reads back exactly enough for a URL:
- * up to 6 significant figures, no spaces ("32mm", "2400rpm").
+ * Writes a number without an exponent where that stays short ("0.0001", "1200"), so links and files
+ * read as people write numbers; a very small or very large number keeps its exponent ("5e-324").
+ * The text reads back as exactly the same number.
+ */
+export function plainNumber(value: number): string {
+  const text = String(value);
+  const match = /^(-?)(\d)(?:\.(\d+))?e([+-]\d+)$/.exec(text);
+  if (!match) return text;
+  const [, sign, lead, rest = "", exp] = match;
+  const digits = lead! + rest;
+  const power = Number(exp);
+  const plain = power < 0 ? `${sign}0.${"0".repeat(-power - 1)}${digits}` : `${sign}${digits}${"0".repeat(Math.max(0, power - rest.length))}`;
+  return plain.length <= 24 ? plain : text;
+}
+
+/**
+ * The shortest number n (as few significant figures as possible) with n × factor = valueSI exactly
+ * in floating point, the way `parseQuantity` turns a number in a unit back into SI; null when no
+ * such number exists.
+ */
+function exactMultiple(valueSI: number, factor: number): number | null {
+  if (factor === 1) return valueSI;
+  const n = valueSI / factor;
+  for (let figures = 1; figures <= 17; figures += 1) {
+    const candidate = Number(n.toPrecision(figures));
+    if (candidate * factor === valueSI) return candidate;
+  }
+  // Division and multiplication each round: the number sits within a few units in the last place.
+  const bits = new Float64Array(1);
+  const word = new BigInt64Array(bits.buffer);
+  for (const step of [1n, -1n, 2n, -2n, 3n, -3n, 4n, -4n]) {
+    bits[0] = n;
+    word[0]! += step;
+    const candidate = bits[0]!;
+    if (Number.isFinite(candidate) && candidate * factor === valueSI) return candidate;
+  }
+  return null;
+}
+
+/** The kind's SI unit: the one unit of the kind whose factor is 1 (e.g. "m", "rad/s", "frac"). */
+export function siUnit(kind: QuantityKind): UnitId {
+  return unitsOfKind(kind).find((u) => UNITS[u].factor === 1)!;
+}
+
+/** How a link spells the kind's SI unit. */
+function siUnitText(kind: QuantityKind): string {
+  const id = siUnit(kind);
+  const def: UnitDef = UNITS[id];
+  return def.symbol === "" ? (def.aliases?.[0] ?? "") : urlSpelling(id);
+}
+
+/**
+ * The shortest number that reads back as exactly `valueSI` in `unit`, and the unit it is in: `unit`
+ * itself, or the kind's SI unit when no number in `unit` multiplies back exactly.
+ */
+export function exactQuantity(valueSI: number, unit: UnitId): { number: string; unit: UnitId } {
+  if (!Number.isFinite(valueSI)) throw new CalcInputError({ param: "value", value: valueSI, expected: "a finite number", unit: "" });
+  const n = exactMultiple(valueSI, UNITS[unit].factor);
+  if (n === null) return { number: plainNumber(valueSI), unit: siUnit(UNITS[unit].kind) };
+  return { number: plainNumber(Object.is(n, -0) ? 0 : n), unit };
+}
+
+/**
+ * Writes an SI value as compact text ("32mm", "2400rpm", "12.703125mm") that `parseQuantity` reads
+ * back as exactly the same SI value: the shortest number that does so in `unit`, in plain decimal;
+ * when no number in `unit` multiplies back exactly, the value in the kind's SI unit ("0.0127031m").
  */
 export function quantityToText(valueSI: number, unit: UnitId): string {
-  const n = Number(fromSI(valueSI, unit).toPrecision(6));
-  return `${n}${UNITS[unit].symbol === "" ? "" : urlSpelling(unit)}`;
+  const exact = exactQuantity(valueSI, unit);
+  if (exact.unit !== unit) return `${exact.number}${siUnitText(UNITS[unit].kind)}`;
+  return `${exact.number}${UNITS[unit].symbol === "" ? "" : urlSpelling(unit)}`;
+}
+
+/**
+ * Writes an SI value as a bare number in a unit of size `factor` (mm: 0.001) for compact list texts
+ * (a parts list, calibration readings) so that `readExactNumber` gives back exactly the same value:
+ * the shortest such number, or, when none exists, the SI value itself marked "si" ("0.0127031si").
+ */
+export function exactNumberText(valueSI: number, factor: number): string {
+  if (!Number.isFinite(valueSI)) throw new CalcInputError({ param: "value", value: valueSI, expected: "a finite number", unit: "" });
+  const n = exactMultiple(valueSI, factor);
+  return n === null ? `${plainNumber(valueSI)}si` : plainNumber(Object.is(n, -0) ? 0 : n);
+}
+
+const EXACT_NUMBER = /^([+-]?(?:\d+(?:\.\d*)?|\.\d+)(?:[eE][+-]?\d+)?)(si)?$/;
+
+/** Reads a number written by `exactNumberText` into SI; null when the text is not such a number. */
+export function readExactNumber(text: string, factor: number): number | null {
+  const match = EXACT_NUMBER.exec(text);
+  if (!match) return null;
+  const n = Number(match[1]);
+  if (!Number.isFinite(n)) return null;
+  return match[2] ? n : n * factor;
 }
 
 /** ASCII spellings for units whose symbol and id both have characters a URL would percent-encode. */

@@ -3,14 +3,17 @@
  * robot), assembled from the chapters' own demo data so that every check has something to show.
  * Its sensor radius and inertia come from its own mass layout, so the sections agree.
  */
-import { DESIGN_FORMAT, DESIGN_VERSION, defaultSection, type Design } from "./design.ts";
+import { initialValues } from "../core/calculator.ts";
+import fastenerCalculator from "../calculators/fasteners.ts";
+import rimCalculator from "../calculators/rims.ts";
+import { DESIGN_FORMAT, DESIGN_VERSION, type Design } from "./design.ts";
 import { demoRobotParts } from "../mass/demo.ts";
 import { massBalanceInputs } from "../mass/mass-balance.ts";
 import { massProperties } from "../mass/properties.ts";
 import { DEMO_SPINNER } from "../drivetrain/demo.ts";
 import { drivetrainInputs } from "../drivetrain/inputs.ts";
 import { accelerometerPlacementInputs } from "../rotation/rotation.ts";
-import { headingDriftInputs } from "../heading/drift-budget.ts";
+import { headingDriftInputs } from "../heading/drift-inputs.ts";
 import { rimMaterial, DEFAULT_SAFETY_THRESHOLDS, DEFAULT_SHEAR_RATIO } from "../loads/index.ts";
 import { rpmToRadPerSecond } from "../core/units.ts";
 import { STANDARD_GRAVITY } from "../core/constants.ts";
@@ -59,7 +62,10 @@ export function demoDesign(): Design {
       trueRadius,
     },
     mass: {
-      scalars: { ...defaults(massBalanceInputs), spinSpeed: speed, balanceGrade: 0.25 },
+      ...defaults(massBalanceInputs),
+      spinSpeed: speed,
+      balanceGrade: 0.25,
+      mode: "p",
       parts,
       candidates: [
         { x: -0.055, y: 0 },
@@ -69,7 +75,7 @@ export function demoDesign(): Design {
     },
     fasteners: [
       {
-        ...defaultSection("fasteners")[0]!,
+        ...initialValues(fastenerCalculator),
         name: "Counterweight washers (one M4 bolt)",
         partMass: 0.042,
         radius: 0.055,
@@ -83,7 +89,7 @@ export function demoDesign(): Design {
         shearPlane: "thread",
       },
       {
-        ...defaultSection("fasteners")[0]!,
+        ...initialValues(fastenerCalculator),
         name: "Battery bracket (two M3 bolts)",
         partMass: 0.3,
         radius: 0.016,
@@ -99,7 +105,7 @@ export function demoDesign(): Design {
     ],
     rims: [
       {
-        ...defaultSection("rims")[0]!,
+        ...initialValues(rimCalculator),
         name: "Steel armour ring",
         shape: "thin-ring",
         outerRadius: 0.075,

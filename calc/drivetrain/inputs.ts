@@ -3,7 +3,7 @@
  * every motor, battery, controller, reduction, load and wheel figure, declared once with their
  * ranges, defaults and URL keys; and the check of a whole input against them.
  */
-import { CalcInputError, requireInRange } from "../core/errors.ts";
+import { CalcInputError, requireInRange, requireRelation } from "../core/errors.ts";
 import { defineInputs, type InputSpec } from "../core/inputs.ts";
 import { rpmToRadPerSecond, type QuantityKind } from "../core/units.ts";
 
@@ -371,13 +371,7 @@ export function validateDrivetrainInput(input: DrivetrainInput): { driveType: Dr
   }
   const driveType = requireDriveType(input.driveType);
   for (const name of Object.keys(drivetrainInputs) as DrivetrainParameter[]) requireDeclared(name, input[name]);
-  if (driveType === "spinner" && !(input.kineticFriction <= input.staticFriction)) {
-    throw new CalcInputError({
-      param: "kineticFriction",
-      value: input.kineticFriction,
-      expected: `at most the grip coefficient (${input.staticFriction})`,
-      unit: "",
-    });
-  }
+  if (driveType === "spinner")
+    requireRelation("kineticFriction", input.kineticFriction, "at-most", input.staticFriction, { kind: "fraction", unit: "", other: "staticFriction" });
   return { driveType };
 }

@@ -3,7 +3,7 @@
  * reading it back with a problem per row that cannot be read.
  */
 import { CalcInputError, requireFinite, requireNonNegative } from "../core/errors.ts";
-import { fromSI, toSI } from "../core/units.ts";
+import { exactNumberText, readExactNumber, UNITS } from "../core/units.ts";
 import type { CalibrationRow } from "./calibration.ts";
 
 // Compact text form of the rows, for a URL: "v1:1200:31.5,1800:70.9" (rpm:g).
@@ -12,12 +12,6 @@ import type { CalibrationRow } from "./calibration.ts";
 export const CALIBRATION_ROWS_VERSION = 1;
 /** Most rows the text form carries. */
 export const CALIBRATION_ROWS_MAX = 500;
-
-const PLAIN_NUMBER = /^[+-]?(?:\d+(?:\.\d*)?|\.\d+)(?:[eE][+-]?\d+)?$/;
-
-function compactNumber(value: number): string {
-  return String(Number(value.toPrecision(6))).replace("e+", "e");
-}
 
 /**
  * Writes calibration rows as compact text for a URL: a version tag, then speed:acceleration pairs
@@ -37,7 +31,7 @@ export function encodeCalibrationRows(rows: readonly CalibrationRow[]): string {
   const pieces = rows.map((row, i) => {
     requireNonNegative(`rows[${i}].angularSpeed`, row.angularSpeed, "rad/s");
     requireFinite(`rows[${i}].acceleration`, row.acceleration, "m/s²");
-    return `${compactNumber(fromSI(row.angularSpeed, "rpm"))}:${compactNumber(fromSI(row.acceleration, "gn"))}`;
+    return `${exactNumberText(row.angularSpeed, UNITS.rpm.factor)}:${exactNumberText(row.acceleration, UNITS.gn.factor)}`;
   });
   return `v${CALIBRATION_ROWS_VERSION}:${pieces.join(",")}`;
 }
@@ -112,25 +106,25 @@ export function decodeCalibrationRows(text: string): DecodedCalibrationRows {
       return;
     }
     const [speedText, accText] = parts as [string, string];
-    if (!PLAIN_NUMBER.test(speedText)) {
+    const angularSpeed = readExactNumber(speedText, UNITS.rpm.factor);
+    const acceleration = readExactNumber(accText, UNITS.gn.factor);
+    if (angularSpeed === null) {
       problems.push({ piece: at, text: clip(piece), reason: `speed "${clip(speedText)}" is not a number` });
       return;
     }
-    if (!PLAIN_NUMBER.test(accText)) {
+    if (acceleration === null) {
       problems.push({ piece: at, text: clip(piece), reason: `acceleration "${clip(accText)}" is not a number` });
       return;
     }
-    const rpm = Number(speedText);
-    const g = Number(accText);
-    if (!Number.isFinite(rpm) || !Number.isFinite(g)) {
+    if (!Number.isFinite(angularSpeed) || !Number.isFinite(acceleration)) {
       problems.push({ piece: at, text: clip(piece), reason: "number too large" });
       return;
     }
-    if (rpm < 0) {
+    if (angularSpeed < 0) {
       problems.push({ piece: at, text: clip(piece), reason: "speed must be 0 or more" });
       return;
     }
-    rows.push({ angularSpeed: toSI(rpm, "rpm"), acceleration: toSI(g, "gn") });
+    rows.push({ angularSpeed, acceleration });
   });
   return { version, rows, problems };
 }

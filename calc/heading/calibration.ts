@@ -4,10 +4,10 @@
  * error and tilt) and the offset b; the calculator's inputs, its demo data and the fitted curve.
  * SI in and out.
  */
-import { CalcInputError, requireFinite, requireInRange, requireNonNegative } from "../core/errors.ts";
+import { CalcInputError, requireFinite, requireInRange, requireNonNegative, requireRelation } from "../core/errors.ts";
 import { defineInputs } from "../core/inputs.ts";
 import { toSI } from "../core/units.ts";
-import { type StraightLineFit, countDistinct, fitChecked, requireFitOptions, round4 } from "../numerics/line-fit.ts";
+import { type StraightLineFit, countDistinct, fitChecked, requireFitOptions } from "../numerics/line-fit.ts";
 
 // The calibration fit.
 
@@ -184,9 +184,7 @@ export function calibrationCurve({
 }): CalibrationCurvePoint[] {
   requireNonNegative("lowSpeed", lowSpeed, "rad/s");
   requireFinite("highSpeed", highSpeed, "rad/s");
-  if (!(highSpeed > lowSpeed)) {
-    throw new CalcInputError({ param: "highSpeed", value: highSpeed, expected: `greater than lowSpeed (${round4(lowSpeed)} rad/s)`, unit: "rad/s" });
-  }
+  requireRelation("highSpeed", highSpeed, "greater", lowSpeed, { kind: "angularSpeed", unit: "rad/s", other: "lowSpeed" });
   requireInRange("points", points, "", { min: 2, max: 2001 });
   if (!Number.isInteger(points)) throw new CalcInputError({ param: "points", value: points, expected: "a whole number", unit: "" });
   const out: CalibrationCurvePoint[] = [];

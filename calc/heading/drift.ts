@@ -8,16 +8,11 @@
  * Sign convention throughout: drift = ω̂ − ω. Positive drift means the estimated heading runs ahead
  * of the true heading (the robot "thinks" it has turned further than it has).
  */
-import { CalcInputError, requireFinite, requireInRange, requirePositive } from "../core/errors.ts";
+import { CalcInputError, requireFinite, requireInRange, requirePositive, requireRelation } from "../core/errors.ts";
 import { TURN } from "../core/constants.ts";
 
 // ---------------------------------------------------------------------------------------------
 // Helpers.
-
-/** Rounds to 6 significant figures, for messages. @internal */
-export function round6(x: number): number {
-  return Number(x.toPrecision(6));
-}
 
 /**
  * Real roots of A x² + B x + C = 0 without cancellation (numerical-recipes-2007 §5.6:
@@ -371,9 +366,7 @@ export function headingDriftSeries(input: { lowSpeed: number; highSpeed: number;
   const { lowSpeed, highSpeed, points = 61 } = input;
   requirePositive("lowSpeed", lowSpeed, "rad/s");
   requireFinite("highSpeed", highSpeed, "rad/s");
-  if (!(highSpeed > lowSpeed)) {
-    throw new CalcInputError({ param: "highSpeed", value: highSpeed, expected: `greater than lowSpeed (${round6(lowSpeed)} rad/s)`, unit: "rad/s" });
-  }
+  requireRelation("highSpeed", highSpeed, "greater", lowSpeed, { kind: "angularSpeed", unit: "rad/s", other: "lowSpeed" });
   requireInRange("points", points, "", { min: 2, max: 2001 });
   if (!Number.isInteger(points)) throw new CalcInputError({ param: "points", value: points, expected: "a whole number", unit: "" });
   requireModel(input);

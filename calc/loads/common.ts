@@ -1,33 +1,13 @@
 /**
- * Centrifugal loads, the shared part: choosing from a fixed list, the safety factor, its verdict,
+ * Centrifugal loads, the shared part: the safety factor, its verdict,
  * the speed at which a stress that grows with ω² reaches a limit, and input validation against a
  * declaration. Used by the bolt check (loads-bolts.ts) and the rim check (loads-rims.ts); the
  * public face of the topic is calc/loads.ts. SI in and out.
  */
-import { CalcInputError, requireFinite, requireInRange, requirePositive } from "../core/errors.ts";
+import { CalcInputError, requireFinite, requireInRange, requirePositive, requireRelation } from "../core/errors.ts";
 import type { InputSpecs } from "../core/inputs.ts";
+export { requireChoice, type ChoiceOption } from "../core/choices.ts";
 import type { QuantityKind } from "../core/units.ts";
-
-// ---------------------------------------------------------------------------------------------
-// Choosing from a fixed list.
-
-/** One entry of a fixed list of choices: the value the code uses and the label a person reads. */
-export interface ChoiceOption<V extends string = string> {
-  readonly value: V;
-  readonly label: string;
-}
-
-/**
- * Throws a `CalcInputError` naming `param` and listing the allowed values unless `value` is one
- * of `options`; returns it narrowed to the option type otherwise.
- */
-export function requireChoice<V extends string>(param: string, value: unknown, options: readonly ChoiceOption<V>[]): V {
-  const found = options.find((option) => option.value === value);
-  if (!found) {
-    throw new CalcInputError({ param, value, expected: `one of ${options.map((o) => o.value).join(", ")}`, unit: "" });
-  }
-  return found.value;
-}
 
 // ---------------------------------------------------------------------------------------------
 // Safety factor, verdict and limit speed (shared by the bolt and the rim checks).
@@ -115,9 +95,7 @@ export function safetyVerdict({
 /** Throws a `CalcInputError` naming "marginalBelow" unless it is at least `failBelow`. */
 export function requireMarginalAtLeastFail(failBelow: number, marginalBelow: number): void {
   requirePositive("marginalBelow", marginalBelow, "");
-  if (!(marginalBelow >= failBelow)) {
-    throw new CalcInputError({ param: "marginalBelow", value: marginalBelow, expected: `at least the fail threshold, ${failBelow}`, unit: "" });
-  }
+  requireRelation("marginalBelow", marginalBelow, "at-least", failBelow, { kind: "fraction", unit: "", other: "failBelow" });
 }
 
 /**

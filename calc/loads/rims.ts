@@ -3,7 +3,7 @@
  * disk or bored disk, where they peak, the safety factors against the material, the speeds at which
  * it yields and is estimated to burst, and a verdict. Re-exported by calc/loads.ts. SI in and out.
  */
-import { CalcInputError, requireInRange, requireNonNegative, requirePositive } from "../core/errors.ts";
+import { requireInRange, requireNonNegative, requirePositive, requireRelation } from "../core/errors.ts";
 import { defineInputs } from "../core/inputs.ts";
 import { rpmToRadPerSecond } from "../core/units.ts";
 import type { MaterialId } from "../materials/materials.ts";
@@ -466,9 +466,7 @@ export function rimCheck(input: RimCheckInput): RimCheck {
   const failBelow = requireDeclared(rimCheckInputs, "failBelow", input.failBelow);
   const marginalBelow = requireDeclared(rimCheckInputs, "marginalBelow", input.marginalBelow);
   requireMarginalAtLeastFail(failBelow, marginalBelow);
-  if (!(yieldStrength <= ultimateStrength)) {
-    throw new CalcInputError({ param: "yieldStrength", value: yieldStrength, expected: "at most the ultimate strength", unit: "Pa" });
-  }
+  requireRelation("yieldStrength", yieldStrength, "at-most", ultimateStrength, { kind: "stress", unit: "Pa", other: "ultimateStrength" });
   if (shape === "annular-disk") requireBore(input.innerRadius, outerRadius);
   const innerRadius = shape === "annular-disk" ? input.innerRadius : 0; // not read for a ring or a solid disk
 

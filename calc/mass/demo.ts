@@ -64,6 +64,8 @@ export function demoRobotParts(): LayoutPart[] {
 
 export interface DemoRobotBalance {
   parts: LayoutPart[];
+  /** The four mounting points offered for the counterweight, 55 mm out on ±x and ±y [m]. */
+  mountingPoints: MountingPoint[];
   spinSpeed: number;
   targetOffset: number;
   balance: MassBalance;
@@ -106,6 +108,7 @@ export function demoRobotBalance(): DemoRobotBalance {
       : { parts: [...parts], before: balance.layout, after: balance.layout };
   return {
     parts,
+    mountingPoints: candidates,
     spinSpeed: defaults.spinSpeed,
     targetOffset: defaults.targetOffset,
     balance,

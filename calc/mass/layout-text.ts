@@ -3,6 +3,7 @@
  * problem per part that cannot be read (never throws).
  */
 import { CalcInputError } from "../core/errors.ts";
+import { exactNumberText, readExactNumber } from "../core/units.ts";
 import { isMaterialId } from "../materials/materials.ts";
 
 import { type LayoutPart, MAX_PARTS, type PartMassSpec, type PartShape, type PartShapeKind, checkPart } from "./parts.ts";
@@ -11,7 +12,8 @@ import { type LayoutPart, MAX_PARTS, type PartMassSpec, type PartShape, type Par
 // A compact, versioned text form of the parts list for the calculator's URL.
 //
 // "v1~disk_body_0_0_2_70_al-6061-t6_5~pt_battery_15_0_12_280" — parts separated by "~", fields
-// by "_", all URL-safe. Lengths in mm, masses in g, angles in degrees, inertia in g·mm².
+// by "_", all URL-safe. Lengths in mm, masses in g, angles in degrees, inertia in g·mm²; a number
+// followed by "si" is in SI units instead (written when no number in the unit reads back exactly).
 // Field order: shape, name, x, y, z, then the shape's dimensions, then the mass: a number (grams)
 // or a material id followed, except for cylinders, by the thickness in mm.
 //   pt     (no dimensions)          disk  radius            ring radius
@@ -38,41 +40,49 @@ const MM = 1e-3;
 const GRAM = 1e-3;
 const DEG = Math.PI / 180;
 const G_MM2 = 1e-9;
-const NUMBER_TEXT = /^-?(?:\d+(?:\.\d*)?|\.\d+)(?:[eE][+-]?\d+)?$/;
+/** The unit of each dimension of a shape, as a factor to SI. */
+const DIM_FACTORS: Record<PartShapeKind, readonly number[]> = {
+  point: [],
+  disk: [MM],
+  ring: [MM],
+  annulus: [MM, MM],
+  plate: [MM, MM, DEG],
+  rod: [MM, DEG],
+  cylinder: [MM, MM],
+  custom: [G_MM2, G_MM2, G_MM2],
+};
 /** Longest layout text the parser reads [characters]. */
 const MAX_LAYOUT_TEXT = 20_000;
-
-function numberText(value: number): string {
-  const n = Number(value.toPrecision(9));
-  return Object.is(n, -0) ? "0" : String(n);
-}
 
 function nameText(name: string): string {
   return encodeURIComponent(name).replace(/_/g, "%5F").replace(/~/g, "%7E");
 }
 
-function shapeDims(shape: PartShape): number[] {
+/** A shape's dimensions as text, each in its unit (mm, degrees, g·mm²), exactly. */
+function shapeDims(shape: PartShape): string[] {
+  const mm = (v: number) => exactNumberText(v, MM);
   switch (shape.kind) {
     case "point":
       return [];
     case "disk":
     case "ring":
-      return [shape.radius / MM];
+      return [mm(shape.radius)];
     case "annulus":
-      return [shape.innerRadius / MM, shape.outerRadius / MM];
+      return [mm(shape.innerRadius), mm(shape.outerRadius)];
     case "plate":
-      return [shape.length / MM, shape.width / MM, shape.angle / DEG];
+      return [mm(shape.length), mm(shape.width), exactNumberText(shape.angle, DEG)];
     case "rod":
-      return [shape.length / MM, shape.angle / DEG];
+      return [mm(shape.length), exactNumberText(shape.angle, DEG)];
     case "cylinder":
-      return [shape.radius / MM, shape.height / MM];
+      return [mm(shape.radius), mm(shape.height)];
     case "custom":
-      return [shape.inertiaZ / G_MM2, shape.productXZ / G_MM2, shape.productYZ / G_MM2];
+      return [shape.inertiaZ, shape.productXZ, shape.productYZ].map((v) => exactNumberText(v, G_MM2));
   }
 }
 
 /**
- * Writes a parts list as compact URL-safe text (format above), 9 significant figures per number.
+ * Writes a parts list as compact URL-safe text (format above); every number reads back exactly
+ * (the shortest such number in its unit, or the SI value marked "si" when no number in the unit does).
  *
  * @param parts the parts list (each checked)
  * @returns text such as "v1~disk_body_0_0_2_70_al-6061-t6_5~pt_battery_15_0_12_280"
@@ -94,13 +104,13 @@ export function encodeLayout(parts: readonly LayoutPart[]): string {
     const fields = [
       SHAPE_TOKENS[part.shape.kind],
       nameText(part.name),
-      ...[part.x, part.y, part.z].map((v) => numberText(v / MM)),
-      ...shapeDims(part.shape).map(numberText),
+      ...[part.x, part.y, part.z].map((v) => exactNumberText(v, MM)),
+      ...shapeDims(part.shape),
     ];
-    if (part.mass.kind === "given") fields.push(numberText(part.mass.mass / GRAM));
+    if (part.mass.kind === "given") fields.push(exactNumberText(part.mass.mass, GRAM));
     else {
       fields.push(part.mass.material);
-      if (part.shape.kind !== "cylinder") fields.push(numberText((part.mass.thickness ?? 0) / MM));
+      if (part.shape.kind !== "cylinder") fields.push(exactNumberText(part.mass.thickness ?? 0, MM));
     }
     return fields.join("_");
   });
@@ -138,11 +148,14 @@ function parsePartToken(token: string): LayoutPart | string {
   } catch {
     return "the name is not valid percent-encoded text";
   }
+  // Each number field's unit: x, y, z in mm, then the shape's dimensions.
+  const factors = [MM, MM, MM, ...DIM_FACTORS[kind]];
   const numbers: number[] = [];
   for (let i = 2; i < 5 + nDims; i++) {
     const text = fields[i]!;
-    if (!NUMBER_TEXT.test(text)) return `field ${i + 1} ("${text.slice(0, 12)}") is not a number`;
-    numbers.push(Number(text));
+    const value = readExactNumber(text, factors[i - 2]!);
+    if (value === null) return `field ${i + 1} ("${text.slice(0, 12)}") is not a number`;
+    numbers.push(value);
   }
   const [x, y, z, ...dims] = numbers as [number, number, number, ...number[]];
   const d = (i: number): number => dims[i]!;
@@ -150,35 +163,36 @@ function parsePartToken(token: string): LayoutPart | string {
     kind === "point"
       ? { kind }
       : kind === "disk" || kind === "ring"
-        ? { kind, radius: d(0) * MM }
+        ? { kind, radius: d(0) }
         : kind === "annulus"
-          ? { kind, innerRadius: d(0) * MM, outerRadius: d(1) * MM }
+          ? { kind, innerRadius: d(0), outerRadius: d(1) }
           : kind === "plate"
-            ? { kind, length: d(0) * MM, width: d(1) * MM, angle: d(2) * DEG }
+            ? { kind, length: d(0), width: d(1), angle: d(2) }
             : kind === "rod"
-              ? { kind, length: d(0) * MM, angle: d(1) * DEG }
+              ? { kind, length: d(0), angle: d(1) }
               : kind === "cylinder"
-                ? { kind, radius: d(0) * MM, height: d(1) * MM }
-                : { kind, inertiaZ: d(0) * G_MM2, productXZ: d(1) * G_MM2, productYZ: d(2) * G_MM2 };
+                ? { kind, radius: d(0), height: d(1) }
+                : { kind, inertiaZ: d(0), productXZ: d(1), productYZ: d(2) };
   const massField = fields[5 + nDims]!;
   let mass: PartMassSpec;
   let used = 6 + nDims;
-  if (NUMBER_TEXT.test(massField)) {
-    mass = { kind: "given", mass: Number(massField) * GRAM };
+  const given = readExactNumber(massField, GRAM);
+  if (given !== null) {
+    mass = { kind: "given", mass: given };
   } else if (isMaterialId(massField)) {
     if (kind === "cylinder") {
       mass = { kind: "material", material: massField };
     } else {
-      const t = fields[used];
-      if (t === undefined || !NUMBER_TEXT.test(t)) return `material "${massField}" needs a thickness in mm after it`;
-      mass = { kind: "material", material: massField, thickness: Number(t) * MM };
+      const t = fields[used] === undefined ? null : readExactNumber(fields[used]!, MM);
+      if (t === null) return `material "${massField}" needs a thickness in mm after it`;
+      mass = { kind: "material", material: massField, thickness: t };
       used += 1;
     }
   } else {
     return `mass "${massField.slice(0, 20)}" is neither a number of grams nor a known material`;
   }
   if (fields.length !== used) return `a ${SHAPE_TOKENS[kind]} part has ${used} fields here, got ${fields.length}`;
-  const part: LayoutPart = { name, shape, mass, x: x * MM, y: y * MM, z: z * MM };
+  const part: LayoutPart = { name, shape, mass, x, y, z };
   try {
     checkPart(part);
   } catch (error) {

@@ -9,7 +9,7 @@
  * convention: $I'_{xz}$ is a part's own product about its own centre; the inertia-tensor element is
  * the negative of it.
  */
-import { CalcInputError, requireInRange, requirePositive } from "../core/errors.ts";
+import { CalcInputError, requireInRange, requirePositive, requireRelation } from "../core/errors.ts";
 import { isMaterialId, MATERIALS, type MaterialId } from "../materials/materials.ts";
 
 // ---------------------------------------------------------------------------------------------
@@ -117,9 +117,7 @@ export function checkPart(part: LayoutPart, prefix = "part"): void {
     case "annulus":
       requireInRange(`${p}.innerRadius`, s.innerRadius, "m", { min: 0, max: MAX_LENGTH });
       requireLength(`${p}.outerRadius`, s.outerRadius);
-      if (!(s.innerRadius < s.outerRadius)) {
-        throw new CalcInputError({ param: `${p}.innerRadius`, value: s.innerRadius, expected: `less than the outer radius (${s.outerRadius} m)`, unit: "m" });
-      }
+      requireRelation(`${p}.innerRadius`, s.innerRadius, "less", s.outerRadius, { kind: "length", unit: "m", other: "outerRadius" });
       break;
     case "plate":
       requireLength(`${p}.length`, s.length);

@@ -224,11 +224,6 @@ function theilSenLine(x: readonly number[], y: readonly number[], confidence: nu
   return { slope, intercept, slopeInterval, ranks: { low: m1, high: m2 + 1 }, pairCount: nPairs, residuals };
 }
 
-/** Rounds to 4 significant figures, for messages. @internal */
-export function round4(x: number): number {
-  return Number(x.toPrecision(4));
-}
-
 function robustScale(residuals: readonly number[], floor: number): { center: number; scale: number; from: ScaleSource } {
   const center = median(residuals);
   const deviations = residuals.map((r) => Math.abs(r - center));

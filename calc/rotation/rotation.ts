@@ -2,7 +2,7 @@
  * Rotation: acceleration at a radius, where an accelerometer can sit on a spinning robot, and the
  * pull a spinning part puts on its mounts. SI in and out: rad/s, m, m/s², kg, N.
  */
-import { CalcInputError, requireInRange, requireNonNegative, requirePositive } from "../core/errors.ts";
+import { requireInRange, requireNonNegative, requirePositive, requireRelation } from "../core/errors.ts";
 import { defineInputs } from "../core/inputs.ts";
 import { STANDARD_GRAVITY } from "../core/constants.ts";
 import { rpmToRadPerSecond } from "../core/units.ts";
@@ -279,6 +279,8 @@ export interface AccelerometerPlacement {
   accelerationAtTop: number;
   /** That as a fraction of full scale [-]. */
   fullScaleUsed: number;
+  /** The most the sensor may read: full scale less the headroom, (1 − m)·F [m/s²]. */
+  readingLimit: number;
   /** Acceleration at the sensor at the lowest tracked speed [m/s²]. */
   accelerationAtLow: number;
   /** Speed resolution of one reading at the lowest tracked speed [-]. */
@@ -308,9 +310,7 @@ export function accelerometerPlacement(input: AccelerometerPlacementInput): Acce
   requirePositive("radius", radius, "m");
   requireNonNegative("noise", noise, "m/s²");
   requirePositive("topSpeed", topSpeed, "rad/s");
-  if (!(lowSpeed <= topSpeed)) {
-    throw new CalcInputError({ param: "lowSpeed", value: lowSpeed, expected: "at most the top speed", unit: "rad/s" });
-  }
+  requireRelation("lowSpeed", lowSpeed, "at-most", topSpeed, { kind: "angularSpeed", unit: "rad/s", other: "topSpeed" });
   const effectiveStep = Math.max(step, noise);
   const minRadius = minSensorRadius({ step: effectiveStep, lowSpeed, resolution });
   const maxRadius = maxSensorRadius({ fullScale, margin, topSpeed });
@@ -326,6 +326,7 @@ export function accelerometerPlacement(input: AccelerometerPlacementInput): Acce
     effectiveStep,
     accelerationAtTop,
     fullScaleUsed: accelerationAtTop / fullScale,
+    readingLimit: (1 - margin) * fullScale, // headroom kept below full scale
     accelerationAtLow,
     resolutionAtLow,
     saturationSpeed: angularSpeedForAcceleration({ radius, acceleration: fullScale }),

@@ -12,11 +12,11 @@ export interface ToolbarProps {
   onSystem(next: UnitSystem): void;
   /** Builds the full link to copy. */
   link(): string;
-  /** The design section this calculator fills; shows a "Save to design" button when given. */
-  designSection?: import("../../calc/design/design.ts").DesignSection;
+  /** Saves the calculator's values into a design and says how it went; shows "Save to design" when given. */
+  save?: () => Promise<string>;
 }
 
-export function Toolbar({ idPrefix, system, onSystem, link, designSection }: ToolbarProps) {
+export function Toolbar({ idPrefix, system, onSystem, link, save }: ToolbarProps) {
   const status = useSignal("");
   const fallback = useSignal<string | null>(null);
   async function copy() {
@@ -31,13 +31,7 @@ export function Toolbar({ idPrefix, system, onSystem, link, designSection }: Too
     }
   }
   async function saveToDesign() {
-    if (!designSection) return;
-    try {
-      const { saveToActiveDesign } = await import("../design/save-from-page.ts");
-      status.value = saveToActiveDesign(localStorage, designSection, new URL(link()).search);
-    } catch {
-      status.value = "Not saved: this browser does not allow saving (storage disabled).";
-    }
+    if (save) status.value = await save();
   }
   return (
     <div class="calc-actions">
@@ -53,7 +47,7 @@ export function Toolbar({ idPrefix, system, onSystem, link, designSection }: Too
       <button type="button" class="button" onClick={copy}>
         Copy link to this check
       </button>
-      {designSection ? (
+      {save ? (
         <button type="button" class="button button--quiet" onClick={saveToDesign}>
           Save to design
         </button>

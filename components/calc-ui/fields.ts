@@ -5,9 +5,8 @@
  */
 import { batch, computed, signal, type ReadonlySignal, type Signal } from "./reactive.ts";
 import { CalcInputError } from "../../calc/core/errors.ts";
-import { defaultText, fieldUnit, readField, type FieldReading, type InputSpecs } from "../../calc/core/inputs.ts";
-import { parseQuantity, UNITS, type UnitSystem } from "../../calc/core/units.ts";
-import { decodeState, encodeState } from "./permalink.ts";
+import { defaultText, fieldUnit, readField, type FieldReading, type InputSpec, type InputSpecs } from "../../calc/core/inputs.ts";
+import { displayUnit, fromSI, parseQuantity, type QuantityKind, UNITS, type UnitSystem } from "../../calc/core/units.ts";
 
 export interface FieldsModel<S extends InputSpecs> {
   specs: S;
@@ -20,10 +19,8 @@ export interface FieldsModel<S extends InputSpecs> {
   notices: Signal<string[]>;
   /** Switches the unit system, re-expressing each valid field in the new system's unit. */
   setSystem(next: UnitSystem): void;
-  /** Applies a query string (a permalink). */
-  applyQuery(search: string): void;
-  /** The query string for the current state, merged into `existing` (other calculators' keys). */
-  queryFor(existing: string): string;
+  /** Shows field texts from a link ("3000rpm" as "3000 rpm"), after switching to `system` when given. */
+  applyTexts(texts: Partial<Record<keyof S, string>>, system?: UnitSystem): void;
 }
 
 /** Rewrites an SI value as field text in `unit`, to 6 significant figures. */
@@ -32,7 +29,7 @@ function textIn(valueSI: number, unitSymbol: string, factor: number): string {
   return unitSymbol ? `${n} ${unitSymbol}` : String(n);
 }
 
-export function createFieldsModel<S extends InputSpecs>(specs: S, initialSystem: UnitSystem = "metric", scope = ""): FieldsModel<S> {
+export function createFieldsModel<S extends InputSpecs>(specs: S, initialSystem: UnitSystem = "metric"): FieldsModel<S> {
   const names = Object.keys(specs) as (keyof S & string)[];
   const system = signal<UnitSystem>(initialSystem);
   const texts = {} as { [K in keyof S]: Signal<string> };
@@ -78,35 +75,52 @@ export function createFieldsModel<S extends InputSpecs>(specs: S, initialSystem:
     });
   }
 
-  function applyQuery(search: string): void {
-    const decoded = decodeState(specs, search, scope);
+  function applyTexts(linked: Partial<Record<keyof S, string>>, linkedSystem?: UnitSystem): void {
     batch(() => {
-      if (decoded.system) system.value = decoded.system;
-      for (const [name, text] of Object.entries(decoded.texts)) {
+      if (linkedSystem) system.value = linkedSystem;
+      for (const [name, text] of Object.entries(linked) as [keyof S & string, string][]) {
         // Show "3000rpm" from a link as "3000 rpm"; leave text that does not read as it came.
         const parsed = parseQuantity(text, specs[name]!.kind, fieldUnit(specs[name]!, system.value));
         const symbol = parsed.ok ? UNITS[parsed.unit].symbol : "";
-        texts[name as keyof S].value = parsed.ok && /\d\s*\D/.test(text) ? `${parsed.number}${symbol ? ` ${symbol}` : ""}` : text;
+        texts[name].value = parsed.ok && /\d\s*\D/.test(text) ? `${parsed.number}${symbol ? ` ${symbol}` : ""}` : text;
       }
-      notices.value = decoded.notices;
     });
   }
 
-  function queryFor(existing: string): string {
-    const current: Record<string, string> = {};
-    for (const name of names) current[name] = texts[name].value;
-    return encodeState(specs, current, system.value, scope, existing);
-  }
-
-  return { specs, system, texts, readings, values, notices, setSystem, applyQuery, queryFor };
+  return { specs, system, texts, readings, values, notices, setSystem, applyTexts };
 }
 
-/** A calc/ error mapped to the field it names, with a message in the user's words. */
-export function fieldMessage(error: unknown, labels: Record<string, string>): { field: string | null; message: string } {
+/** The words of each relation of a bound. */
+const RELATION_WORDS = { greater: "greater than", "at-least": "at least", less: "less than", "at-most": "at most" } as const;
+
+/**
+ * A calc/ error mapped to the field it names, with a message in the user's words and units: a rule
+ * that compares with a limit (another field's value, say) is worded from the error's bound, in the
+ * unit of the field the limit belongs to.
+ *
+ * @param fields each field's label, and its declaration where it has one (for the unit)
+ */
+export function fieldMessage(
+  error: unknown,
+  fields: Record<string, string | (Partial<InputSpec> & { label: string })>,
+  system: UnitSystem = "metric",
+): { field: string | null; message: string } {
   if (error instanceof CalcInputError) {
-    const label = labels[error.param];
-    if (label) return { field: error.param, message: `${label} must be ${error.expected}.` };
-    return { field: null, message: error.message };
+    const named = fields[error.param];
+    if (!named) return { field: null, message: error.message };
+    const label = typeof named === "string" ? named : named.label;
+    const bound = error.bound;
+    if (bound) {
+      const owner = fields[bound.other ?? error.param];
+      const spec = typeof owner === "object" && owner.kind ? (owner as InputSpec) : null;
+      const unit = spec ? fieldUnit(spec, system) : displayUnit(bound.kind as QuantityKind, system, bound.limit);
+      const limit = `${Number(fromSI(bound.limit, unit).toPrecision(6))}${UNITS[unit].symbol ? ` ${UNITS[unit].symbol}` : ""}`;
+      const other = bound.other ? (typeof owner === "string" ? owner : owner?.label) : undefined;
+      // "Top speed" reads "the top speed" inside a sentence; "Kv" stays as it is.
+      const inSentence = other && /^[A-Z][a-z]/.test(other) ? `the ${other[0]!.toLowerCase()}${other.slice(1)}` : other;
+      return { field: error.param, message: `${label} must be ${RELATION_WORDS[bound.relation]} ${inSentence ? `${inSentence} (${limit})` : limit}.` };
+    }
+    return { field: error.param, message: `${label} must be ${error.expected}.` };
   }
   return { field: null, message: "This combination of inputs cannot be computed; please check the values." };
 }

@@ -5,9 +5,10 @@
 import { useEffect, useMemo, useRef } from "preact/hooks";
 import { useSignal } from "../calc-ui/reactive.ts";
 import type { CheckResult, CheckStatus } from "../../calc/design/checks.ts";
-import { DESIGN_SECTIONS, SECTION_TITLES } from "../../calc/design/design.ts";
+import { linkFor } from "../../calc/core/calculator.ts";
+import { CALCULATORS, calculatorFor } from "../../calc/design/registry.ts";
+import type { AnyValues } from "../../calc/core/calculator.ts";
 import { createBuildSheetModel, type BuildSheetModel } from "./model.ts";
-import { calculatorLink, SECTION_CHAPTER } from "./links.ts";
 
 const BADGE: Record<CheckStatus, { mark: string; word: string }> = {
   holds: { mark: "✔", word: "Holds" },
@@ -20,7 +21,10 @@ const base = () => import.meta.env.BASE_URL.replace(/\/?$/, "/");
 
 function CheckCard({ result, model }: { result: CheckResult; model: BuildSheetModel }) {
   const design = model.current.value.design;
-  const link = calculatorLink(design, result.section, result.index, design.units);
+  const calc = calculatorFor(result.section);
+  const stored = design[result.section];
+  const values = (result.index === null ? stored : (stored as AnyValues[] | undefined)?.[result.index]) as AnyValues | undefined;
+  const link = calc && values ? linkFor(calc, values, { system: design.units }) : null;
   return (
     <li class={`check check--${result.status}`} data-check={result.id}>
       <p class="check-head">
@@ -132,7 +136,7 @@ export default function BuildSheet() {
 
   const { design, origin } = model.current.value;
   const presentSections = new Set(model.results.value.map((r) => r.section));
-  const missing = DESIGN_SECTIONS.filter((s) => !presentSections.has(s));
+  const missing = CALCULATORS.filter((c) => !presentSections.has(c.id) && !CALCULATORS.some((o) => o.chapter === c.chapter && o.order < c.order));
   const originText: Record<typeof origin, string> = {
     saved: "Saved in this browser; changes are saved as you make them.",
     link: "Opened from a link; not saved in this browser yet.",
@@ -292,10 +296,10 @@ export default function BuildSheet() {
       {missing.length ? (
         <p class="sheet-missing">
           Not in this design:{" "}
-          {missing.map((s, i) => (
-            <span key={s}>
+          {missing.map((c, i) => (
+            <span key={c.id}>
               {i > 0 ? ", " : ""}
-              <a href={`${base()}chapters/${SECTION_CHAPTER[s]}/`}>{SECTION_TITLES[s]}</a>
+              <a href={`${base()}chapters/${c.chapter}/`}>{c.title}</a>
             </span>
           ))}
           . Open a calculator and use “Save to design” to add it.

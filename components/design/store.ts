@@ -4,7 +4,9 @@
  */
 import { readDesign, type Design } from "../../calc/design/design.ts";
 
-export const STORE_KEY = "whirlbook.designs.v1";
+import { newId, STORE_KEY } from "./saved.ts";
+
+export { newId, STORE_KEY };
 
 export interface SavedDesign {
   /** Local id, stable for the life of the entry. */
@@ -50,10 +52,6 @@ export function loadStore(storage: Storage): { store: DesignStore; warning: stri
 
 export function saveStore(storage: Storage, store: DesignStore): void {
   storage.setItem(STORE_KEY, JSON.stringify(store));
-}
-
-export function newId(): string {
-  return `${Date.now().toString(36)}-${Math.random().toString(36).slice(2, 8)}`;
 }
 
 /** A name not yet used in the store: "Robot", "Robot (2)", … */

@@ -13,9 +13,13 @@ import { calibrationCurve, calibrationFitInputs, demoCalibrationRows, fitCalibra
 import { calibrationRowsToCsv, readingOfWrittenRows } from "../../calc/heading/calibration-text.ts";
 import type { CalibrationCsv, parseCalibrationCsv } from "../../calc/heading/csv.ts";
 import { CalcInputError } from "../../calc/core/errors.ts";
-import { quantityToText, type UnitId, type UnitSystem } from "../../calc/core/units.ts";
+import type { UnitId, UnitSystem } from "../../calc/core/units.ts";
 import { createFieldsModel, fieldMessage } from "../calc-ui/fields.ts";
-import { encodeState } from "../calc-ui/permalink.ts";
+import { linkFor, readLink, writeLink } from "../../calc/core/calculator.ts";
+import calibration from "../../calc/calculators/calibration.ts";
+import { headingDriftForm as headingDrift } from "../../calc/heading/drift-inputs.ts";
+import { saveToDesign } from "../calc-ui/save.ts";
+import { siteUrl } from "../calc-ui/site.ts";
 
 /** Units a bare speed may be read in, by the name the link uses. */
 export const SPEED_UNITS = { rpm: "rpm", "rev/s": "rps", "rad/s": "rad/s" } as const satisfies Record<string, UnitId>;
@@ -24,15 +28,9 @@ export const ACCELERATION_UNITS = { g: "gn", "m/s2": "m/s2" } as const satisfies
 export type SpeedUnitKey = keyof typeof SPEED_UNITS;
 export type AccelerationUnitKey = keyof typeof ACCELERATION_UNITS;
 
-/** URL keys this model reads itself: the rows, and the two units for bare numbers. */
-export const DATA_KEY = "d";
+/** Link keys of the page: the units bare numbers in the text box are read in. */
 const SPEED_UNIT_KEY = "su";
 const ACCELERATION_UNIT_KEY = "au";
-
-/** The drift-budget page and the URL keys of its firmware radius and firmware offset (headingDriftInputs). */
-export const DRIFT_PAGE = "chapters/heading-drift/";
-export const DRIFT_KEYS = { assumedRadius: "ra", biasCorrection: "bh" } as const;
-const DRIFT_ANCHOR = "drift-calculator";
 
 const DEMO_ROWS = demoCalibrationRows();
 /** The text the box starts with: the chapter's invented demo readings (a comment line, then the rows). */
@@ -52,7 +50,7 @@ const LABELS = Object.fromEntries(Object.entries(calibrationFitInputs).map(([k, 
  * loads the first time the text differs from what the model wrote
  */
 export function createCalibrationModel(system: UnitSystem = "metric", reader?: TextReader) {
-  const fields = createFieldsModel(calibrationFitInputs, system);
+  const fields = createFieldsModel(calibration.inputs, system);
   const text = signal(DEMO_TEXT);
   const speedUnit = signal<SpeedUnitKey>("rpm");
   const accelerationUnit = signal<AccelerationUnitKey>("g");
@@ -93,7 +91,7 @@ export function createCalibrationModel(system: UnitSystem = "metric", reader?: T
   });
 
   /**
-   * The rows as the link carries them (first 500, six significant figures), read back: the fit
+   * The rows as the link carries them (the first 500, each number exactly), read back: the fit
    * always uses these, so a reopened link gives exactly the same numbers.
    */
   const data = computed(() => {
@@ -114,7 +112,7 @@ export function createCalibrationModel(system: UnitSystem = "metric", reader?: T
       if (error instanceof CalcInputError && error.param === "rows") {
         return { fit: null, curve: null, error: { field: "rows", message: `The fit needs ${error.expected}; the text gives ${rows.length} usable.` } };
       }
-      return { fit: null, curve: null, error: fieldMessage(error, LABELS) };
+      return { fit: null, curve: null, error: fieldMessage(error, LABELS, fields.system.value) };
     }
   });
 
@@ -122,54 +120,49 @@ export function createCalibrationModel(system: UnitSystem = "metric", reader?: T
   const handoff = computed(() => {
     const fit = outcome.value.fit;
     if (!fit || !(fit.radius > 0)) return null;
-    const us = fields.system.value === "us";
-    const query = `v=1&u=${fields.system.value}&${DRIFT_KEYS.assumedRadius}=${quantityToText(fit.radius, us ? "in" : "mm")}&${DRIFT_KEYS.biasCorrection}=${quantityToText(fit.bias, "gn")}`;
-    return `${import.meta.env.BASE_URL.replace(/\/?$/, "/")}${DRIFT_PAGE}?${query}#${DRIFT_ANCHOR}`;
+    const link = linkFor(headingDrift, { assumedRadius: fit.radius, biasCorrection: fit.bias }, { system: fields.system.value });
+    return siteUrl(link);
   });
 
-  /** Applies a link: the fit settings through the fields model, the rows and units here. */
+  /** Applies a link: the fit settings and the rows as the calculator declares them; the text box's units here. */
   function applyQuery(search: string): void {
+    const read = readLink(calibration, search);
+    const notices = [...read.notices];
     const params = new URLSearchParams(search);
-    const own = {} as Record<string, string[]>;
-    for (const key of [DATA_KEY, SPEED_UNIT_KEY, ACCELERATION_UNIT_KEY]) {
-      own[key] = params.getAll(key);
-      params.delete(key);
-    }
-    fields.applyQuery(params.toString());
-    const notices = [...fields.notices.value];
     const unitFrom = <K extends string>(key: string, options: Record<K, string>, target: { value: K }, what: string) => {
-      const [value, ...more] = own[key]!;
+      const [value, ...more] = params.getAll(key);
       if (value === undefined) return;
       if (more.length > 0) notices.push(`The link sets "${key}" more than once; the first value was used.`);
       if (Object.hasOwn(options, value)) target.value = value as K;
       else notices.push(`The link's unit for bare ${what} is not one this page reads (use ${Object.keys(options).join(", ")}); kept ${target.value}.`);
     };
-    unitFrom(SPEED_UNIT_KEY, SPEED_UNITS, speedUnit, "speeds");
-    unitFrom(ACCELERATION_UNIT_KEY, ACCELERATION_UNITS, accelerationUnit, "readings");
-    const [rowsText, ...moreRows] = own[DATA_KEY]!;
-    if (rowsText !== undefined) {
-      if (moreRows.length > 0) notices.push(`The link sets "${DATA_KEY}" more than once; the first value was used.`);
-      const decoded = decodeCalibrationRows(rowsText);
-      for (const p of decoded.problems) {
-        notices.push(p.piece === 0 ? `The link's readings: ${p.reason}.` : `The link's reading ${p.piece} ("${p.text}"): ${p.reason}; it was skipped.`);
-      }
-      const linkText = calibrationRowsToCsv(decoded.rows);
-      batch(() => {
-        written.value = { text: linkText, speedUnit: speedUnit.value, accelerationUnit: accelerationUnit.value, reading: readingOfWrittenRows(decoded.rows) };
+    batch(() => {
+      fields.applyTexts(read.texts, read.system);
+      unitFrom(SPEED_UNIT_KEY, SPEED_UNITS, speedUnit, "speeds");
+      unitFrom(ACCELERATION_UNIT_KEY, ACCELERATION_UNITS, accelerationUnit, "readings");
+      if (read.extras.rows !== undefined) {
+        const decoded = calibration.extras.rows.read(read.extras.rows, fields.system.value);
+        notices.push(...decoded.notices);
+        const rows = decoded.value ?? [];
+        const linkText = calibrationRowsToCsv(rows);
+        written.value = { text: linkText, speedUnit: speedUnit.value, accelerationUnit: accelerationUnit.value, reading: readingOfWrittenRows(rows) };
         text.value = linkText;
-      });
-    }
-    fields.notices.value = notices;
+      }
+      fields.notices.value = notices;
+    });
   }
 
-  /** The query string for the current state, keeping other keys found in `existing`; ":" and "," left readable. */
+  /** The query string for the current state, keeping other keys found in `existing`. */
   function queryFor(existing: string): string {
     const texts = Object.fromEntries(Object.entries(fields.texts).map(([k, t]) => [k, t.value]));
-    const extra = { [SPEED_UNIT_KEY]: speedUnit.value, [ACCELERATION_UNIT_KEY]: accelerationUnit.value, [DATA_KEY]: data.value.encoded };
-    return encodeState(calibrationFitInputs, texts, fields.system.value, "", existing, extra).replace(/%3A/gi, ":").replace(/%2C/gi, ",");
+    const page = { [SPEED_UNIT_KEY]: speedUnit.value, [ACCELERATION_UNIT_KEY]: accelerationUnit.value };
+    return writeLink(calibration, { texts, choices: {}, extras: { rows: data.value.encoded } }, fields.system.value, existing, page);
   }
 
-  return { fields, text, speedUnit, accelerationUnit, fileError, parsed, data, outcome, handoff, applyQuery, queryFor, loadTextReader };
+  /** Saves the fit settings and the rows into a design. */
+  const save = () => saveToDesign(calibration, fields.values.value ? { ...fields.values.value, rows: data.value.rows } : null);
+
+  return { fields, text, speedUnit, accelerationUnit, fileError, parsed, data, outcome, handoff, applyQuery, queryFor, save, loadTextReader };
 }
 
 export type CalibrationModel = ReturnType<typeof createCalibrationModel>;

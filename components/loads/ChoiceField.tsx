@@ -3,7 +3,7 @@
  * error beside it. Large touch targets; keyboard use is the browser's own.
  */
 import type { ReadonlySignal, Signal } from "../calc-ui/reactive.ts";
-import type { ChoiceSpec } from "./choices.ts";
+import type { ChoiceSpec } from "../../calc/core/choices.ts";
 
 export interface ChoiceFieldProps {
   /** Unique id prefix for this calculator instance. */

@@ -6,26 +6,24 @@
  */
 import { batch, computed, signal } from "../calc-ui/reactive.ts";
 import { CalcInputError } from "../../calc/core/errors.ts";
-import { readField, type InputSpec } from "../../calc/core/inputs.ts";
-import { counterweightPlan, massBalance, massBalanceInputs } from "../../calc/mass/mass-balance.ts";
+import type { InputSpec } from "../../calc/core/inputs.ts";
+import { counterweightPlan, massBalance } from "../../calc/mass/mass-balance.ts";
 import { encodeLayout, parseLayout } from "../../calc/mass/layout-text.ts";
+import { readMountingPoints } from "../../calc/mass/points-text.ts";
+import massCalculator from "../../calc/calculators/mass.ts";
+import { readLink, writeLink } from "../../calc/core/calculator.ts";
+import { saveToDesign } from "../calc-ui/save.ts";
 import { layoutDrawing } from "../../calc/mass/drawing.ts";
 import { mirrorPart, type MirrorAxis } from "../../calc/mass/editing.ts";
 import type { LayoutPart } from "../../calc/mass/parts.ts";
 import type { MountingPoint } from "../../calc/mass/counterweight.ts";
 import { fromSI, type UnitSystem } from "../../calc/core/units.ts";
 import { createFieldsModel, fieldMessage } from "../calc-ui/fields.ts";
-import { encodeState } from "../calc-ui/permalink.ts";
-import { copyPart, createPart, PART_INPUTS, readPart, setValues, type PartField, type PartModel } from "./parts.ts";
+import { copyPart, createPart, PART_INPUTS, readPart, setValues, type PartModel } from "./parts.ts";
 
 /** Counterweight modes by URL value: at a chosen radius, for a mass in hand, at the best mounting point. */
 export const MODES = { r: "radius", m: "mass", p: "points" } as const;
 export type ModeKey = keyof typeof MODES;
-
-const LABELS = Object.fromEntries(Object.entries(massBalanceInputs).map(([k, s]) => [k, s.label]));
-const POINT: InputSpec = { label: "Coordinate", kind: "length", min: -2, max: 2, default: 0, urlKey: "", unit: { metric: "mm", us: "in" } };
-/** Most mounting points read from the text field. */
-const MAX_POINTS = 20;
 
 /** An error to show: beside a part's field, beside a scalar field, or above the results. */
 export interface MassError {
@@ -35,34 +33,19 @@ export interface MassError {
 }
 
 /** Reads "55, 0; 0, 55" (x, y pairs in the length unit, or with units) into mounting points. */
-export function readPoints(text: string, system: UnitSystem): { points: MountingPoint[] | null; error: string | null } {
-  const items = text.split(";").filter((item) => item.trim() !== "");
-  if (items.length === 0 || items.length > MAX_POINTS)
-    return { points: null, error: `Enter 1 to ${MAX_POINTS} points, as x, y pairs separated by semicolons.` };
-  const points: MountingPoint[] = [];
-  for (const [i, item] of items.entries()) {
-    const xy = item.split(",");
-    const read = xy.map((t) => readField(POINT, t, system));
-    const bad = read.find((r) => !r.ok);
-    if (xy.length !== 2 || bad) {
-      return {
-        points: null,
-        error: `Point ${i + 1} must be two coordinates, x and y, separated by a comma${bad && !bad.ok ? ` (${bad.error.message})` : ""}.`,
-      };
-    }
-    points.push({ x: (read[0] as { value: number }).value, y: (read[1] as { value: number }).value });
-  }
-  return { points, error: null };
-}
+export const readPoints = readMountingPoints;
 
-function mapError(error: unknown): MassError {
+function mapError(error: unknown, system: { value: UnitSystem }): MassError {
   const match = error instanceof CalcInputError ? /^parts\[(\d+)\]\.(?:\w+\.)?(\w+)$/.exec(error.param) : null;
   if (match) {
     const field = match[2]! in PART_INPUTS ? match[2]! : null;
-    const label = field ? PART_INPUTS[field as PartField].label : match[2];
-    return { part: Number(match[1]), field, message: `${label} must be ${(error as CalcInputError).expected}.` };
+    const e = error as CalcInputError;
+    // The part's own fields, under the names the error uses (its full path, and a bound's other field).
+    const fields = Object.fromEntries(Object.entries(PART_INPUTS).map(([name, spec]) => [name, spec as InputSpec]));
+    const named = { ...fields, [e.param]: field ? fields[field]! : match[2]! };
+    return { part: Number(match[1]), field, message: fieldMessage(e, named, system.value).message };
   }
-  return { part: null, ...fieldMessage(error, LABELS) };
+  return { part: null, ...fieldMessage(error, massCalculator.inputs, system.value) };
 }
 
 /** Balance figures shown before and after a counterweight. */
@@ -74,8 +57,8 @@ export interface Snapshot {
 }
 
 export function createMassModel(system: UnitSystem = "metric", layoutText = "") {
-  const fields = createFieldsModel(massBalanceInputs, system);
-  const parts = signal(parseLayout(layoutText).parts.map((p) => createPart(system, p)));
+  const fields = createFieldsModel(massCalculator.inputs, system);
+  const parts = signal(parseLayout(layoutText).parts.map((p) => createPart(system, p, false, true)));
   const mode = signal<ModeKey>("r");
   const points = signal("55, 0; 0, 55; -55, 0; 0, -55");
   const notices = signal<string[]>([]);
@@ -97,7 +80,7 @@ export function createMassModel(system: UnitSystem = "metric", layoutText = "") 
       const balance = massBalance(input);
       return { input, balance, plan: counterweightPlan({ input, balance, mode: MODES[mode.value] }), drawing: layoutDrawing(list), error: null };
     } catch (error) {
-      return { error: mapError(error) };
+      return { error: mapError(error, fields.system) };
     }
   });
 
@@ -180,40 +163,23 @@ export function createMassModel(system: UnitSystem = "metric", layoutText = "") 
     });
   }
 
+  /** Applies a link: numbers, the counterweight question, the parts list and the mounting points as the calculator declares them. */
   function applyQuery(search: string): void {
-    const params = new URLSearchParams(search);
-    const mine: Record<string, string> = {};
-    const notes: string[] = [];
-    for (const key of ["l", "cw", "pts"]) {
-      const all = params.getAll(key);
-      if (all.length > 1) notes.push(`The link sets "${key}" more than once; the first value was used.`);
-      if (all.length) mine[key] = all[0]!;
-      params.delete(key);
-    }
+    const read = readLink(massCalculator, search);
+    const notes = [...read.notices];
     batch(() => {
-      fields.applyQuery(params.toString());
-      if (mine.l !== undefined) {
-        const read = parseLayout(mine.l);
-        const whole = read.problems.some((p) => p.index === null);
-        if (!whole || read.parts.length) {
-          parts.value = read.parts.map((p) => createPart(fields.system.value, p));
-          lastLayoutText = mine.l;
-        }
-        for (const p of read.problems) {
-          notes.push(
-            p.index === null
-              ? `The parts list in the link could not be read (${p.reason}); ${whole && !read.parts.length ? "the example layout is shown" : "the readable parts were kept"}.`
-              : `Part ${p.index + 1} of the link's parts list was left out: ${p.reason}.`,
-          );
+      fields.applyTexts(read.texts, read.system);
+      if (read.choices.mode !== undefined) mode.value = read.choices.mode as ModeKey;
+      if (read.extras.parts !== undefined) {
+        const parsed = massCalculator.extras.parts.read(read.extras.parts, fields.system.value);
+        notes.push(...parsed.notices);
+        if (parsed.value !== null) {
+          parts.value = parsed.value.map((p) => createPart(fields.system.value, p, false, true));
+          lastLayoutText = read.extras.parts;
         }
       }
-      if (mine.cw !== undefined) {
-        if (mine.cw in MODES) mode.value = mine.cw as ModeKey;
-        else notes.push(`Unknown counterweight mode in the link (use r, m or p); kept "at a radius".`);
-      }
-      if (mine.pts !== undefined && mine.pts.length > 400) notes.push("The link's mounting points are longer than 400 characters; they were ignored.");
-      else if (mine.pts !== undefined) points.value = mine.pts.replace(/;/g, "; ").replace(/,/g, ", ");
-      notices.value = [...fields.notices.value, ...notes];
+      if (read.extras.candidates !== undefined) points.value = read.extras.candidates.replace(/;/g, "; ").replace(/,/g, ", ");
+      notices.value = notes;
     });
   }
 
@@ -225,14 +191,19 @@ export function createMassModel(system: UnitSystem = "metric", layoutText = "") 
     } catch {
       // A part that reads but breaks a rule across fields (inner radius ≥ outer): keep the last good list.
     }
-    return encodeState(massBalanceInputs, texts, fields.system.value, "", existing, {
-      l: lastLayoutText,
-      cw: mode.value,
-      pts: points.value.replace(/\s+/g, ""),
-    })
-      .replace(/%7E/g, "~")
-      .replace(/%2C/g, ",")
-      .replace(/%3B/g, ";");
+    return writeLink(
+      massCalculator,
+      { texts, choices: { mode: mode.value }, extras: { parts: lastLayoutText, candidates: points.value.replace(/\s+/g, "") } },
+      fields.system.value,
+      existing,
+    );
+  }
+
+  /** Saves the numbers, the parts list and the mounting points into a design. */
+  function save(): Promise<string> {
+    const values = fields.values.value;
+    const list = layout.value;
+    return saveToDesign(massCalculator, values && list ? { ...values, mode: mode.value, parts: list, candidates: mounting.value.points ?? [] } : null);
   }
 
   return {
@@ -255,6 +226,7 @@ export function createMassModel(system: UnitSystem = "metric", layoutText = "") 
     setSystem,
     applyQuery,
     queryFor,
+    save,
   };
 }
 

@@ -4,7 +4,7 @@
  * between the fields and calc/'s `LayoutPart`. No DOM.
  */
 import { signal, type Signal } from "../calc-ui/reactive.ts";
-import { defineInputs, fieldUnit, type InputSpec } from "../../calc/core/inputs.ts";
+import { defineInputs, exactFieldText, fieldUnit, type InputSpec } from "../../calc/core/inputs.ts";
 import type { MaterialId } from "../../calc/materials/materials.ts";
 import type { LayoutPart, PartShape, PartShapeKind } from "../../calc/mass/parts.ts";
 import { fromSI, UNITS, type UnitSystem } from "../../calc/core/units.ts";
@@ -102,8 +102,8 @@ export function partFields(shape: PartShapeKind, source: MassSource): PartField[
 
 let nextKey = 1;
 
-/** Field text for an SI value in the field's unit: 6 significant figures, float dust below 1e-9 shown as 0. */
-function textOf(spec: InputSpec, valueSI: number, system: UnitSystem): string {
+/** Field text for a value worked out here (a mirror image, a counterweight): 6 significant figures, float dust below 1e-9 shown as 0. */
+function roundedText(spec: InputSpec, valueSI: number, system: UnitSystem): string {
   const unit = fieldUnit(spec, system);
   const n = Number(fromSI(valueSI, unit).toPrecision(6));
   const symbol = UNITS[unit].symbol;
@@ -125,8 +125,11 @@ function valuesOf(part: LayoutPart): Partial<Record<PartField, number>> {
   };
 }
 
-/** A new part model, from a calc/ part or with the defaults. */
-export function createPart(system: UnitSystem, part?: LayoutPart, open = false): PartModel {
+/**
+ * A new part model, from a calc/ part or with the defaults. A part read from a link or a design is
+ * shown exactly (`exact`), so it keeps its stored value; one worked out here is shown rounded.
+ */
+export function createPart(system: UnitSystem, part?: LayoutPart, open = false, exact = false): PartModel {
   const fields = createFieldsModel(PART_INPUTS, system);
   const model: PartModel = {
     key: nextKey++,
@@ -136,14 +139,15 @@ export function createPart(system: UnitSystem, part?: LayoutPart, open = false):
     fields,
     open: signal(open),
   };
-  if (part) setValues(model, part);
+  if (part) setValues(model, part, exact);
   return model;
 }
 
 /** Writes a calc/ part's values into the model's fields (in the current unit system). */
-export function setValues(model: PartModel, part: LayoutPart): void {
+export function setValues(model: PartModel, part: LayoutPart, exact = false): void {
   const values = valuesOf(part);
   const system = model.fields.system.value;
+  const textOf = exact ? exactFieldText : roundedText;
   for (const [name, value] of Object.entries(values) as [PartField, number | undefined][]) {
     if (value !== undefined && name in PART_INPUTS) model.fields.texts[name].value = textOf(PART_INPUTS[name], value, system);
   }

@@ -171,7 +171,8 @@ describe("spin-up timing in chromium (printed for the record; never asserted)", 
   it("times one 10-second simulation and a 50-point sweep", async () => {
     const bundle = await build({
       stdin: {
-        contents: 'export { simulateSpinUp, sweepDrivetrain, DEMO_WEAPON, DEMO_SPINNER } from "./calc/drivetrain.ts";',
+        contents:
+          'export { simulateSpinUp } from "./calc/drivetrain/simulate.ts"; export { sweepDrivetrain } from "./calc/drivetrain/compare.ts"; export { DEMO_WEAPON, DEMO_SPINNER } from "./calc/drivetrain/demo.ts";',
         resolveDir: fileURLToPath(new URL("../../", import.meta.url)),
         loader: "ts",
       },

@@ -73,7 +73,7 @@ describe("heading drift budget", () => {
     expect(await page.getAttribute("#drift-calculator-assumedRadius", "aria-invalid")).toBe("true");
     await page.fill("#drift-calculator-assumedRadius", "12 mm");
     await page.fill("#drift-calculator-highSpeed", "100 rpm");
-    await expect.poll(() => page.locator("#drift-calculator-highSpeed-error").textContent()).toBe("Plot to must be greater than Plot from (200 rpm).");
+    await expect.poll(() => page.locator("#drift-calculator-highSpeed-error").textContent()).toBe("Plot to must be greater than the plot from (200 rpm).");
     await page.fill("#drift-calculator-p-radius2", "-3 mm");
     await expect
       .poll(() => page.locator("#drift-calculator-p-radius2-error").textContent())
@@ -159,10 +159,13 @@ describe("calibration from logged readings", () => {
     await page.locator('#calibration-calculator [data-out="handoff"]').click();
     await page.waitForURL(/\/chapters\/heading-drift\//);
     await waitForIslands(page);
-    // the link carries six significant figures: 14.9964 mm and 0.513845 g
-    expect(await page.inputValue("#drift-calculator-assumedRadius")).toBe(`${Number((fit.radius * 1000).toPrecision(6))} mm`);
-    expect(await page.inputValue("#drift-calculator-assumedRadius")).toBe("14.9964 mm");
-    expect(await page.inputValue("#drift-calculator-biasCorrection")).toBe(`${Number((fit.bias / 9.80665).toPrecision(6))} g`);
+    // the link carries the fit exactly: the drift budget gets the very radius and offset fitted
+    const handedRadius = await page.inputValue("#drift-calculator-assumedRadius");
+    expect(handedRadius).toMatch(/^14\.996\d* mm$/);
+    expect(Number(handedRadius.replace(" mm", "")) * 0.001).toBe(fit.radius);
+    const offset = await page.inputValue("#drift-calculator-biasCorrection");
+    // in g when a number in g reads back exactly, else in m/s²
+    expect(offset.endsWith(" g") ? Number(offset.replace(" g", "")) * 9.80665 : Number(offset.replace(" m/s²", ""))).toBe(fit.bias);
     expect(await page.locator(".calc-notices").count()).toBe(0);
     expect(problems).toEqual([]);
     await context.close();

@@ -128,7 +128,7 @@ describe("mass layout in the browser", () => {
     const notices = (await page.locator(".calc-notices").textContent()) ?? "";
     expect(notices).toContain(`Part 2 of the link's parts list was left out: unknown shape "blob"`);
     expect(notices).toContain("Part 3 of the link's parts list was left out: a disk part needs 7 fields, got 6");
-    expect(notices).toContain("Unknown counterweight mode in the link");
+    expect(notices).toContain(`The link's counterweight question "zz" is not one this calculator offers`);
     // One 100 g part at 10 mm: the centre of mass is at 10 mm.
     expect(await out(page, "com-x")).toBe("10.0 mm");
     expect(problems).toEqual([]);
@@ -169,7 +169,7 @@ describe("mass layout in the browser", () => {
     // Mounting points mode: of (−40, 0) and (0, −40) mm, the second lies opposite the offset of b.
     expect(await page.locator('[data-out="cw-points"] li').count()).toBe(2);
     const href = await page.locator('[data-out="drift-link"]').getAttribute("href");
-    expect(href).toMatch(/^\/chapters\/heading-drift\/\?v=1&ra=32mm&rt=[\d.]+mm&rpm=2400rpm$/);
+    expect(href).toMatch(/^\/chapters\/heading-drift\/\?v=1&ra=32mm&rpm=2400rpm&rt=[\d.]+mm&u=metric#drift-calculator$/);
     await context.close();
   });
 });

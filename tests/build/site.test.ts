@@ -23,7 +23,7 @@ const chapters = readdirSync(contentDir)
     return {
       slug: f.replace(/\.mdx$/, ""),
       calculator: /^calculator:\s*true\s*$/m.test(source),
-      islands: (source.match(/<[A-Z]\w*Calculator\b/g) ?? []).length,
+      islands: (source.match(/<Calculator\b/g) ?? []).length,
     };
   });
 

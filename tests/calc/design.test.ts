@@ -15,7 +15,9 @@ import {
   type Design,
 } from "#calc";
 
-const demo = demoDesign();
+// Sections are read by their calculators; the tests look into them as plain objects.
+// biome-ignore lint/suspicious/noExplicitAny: test access to any section
+const demo = demoDesign() as Design & Record<string, any>;
 
 /** Any valid placement section: every value inside its declared range. */
 const placementArb = fc.record(
@@ -91,20 +93,23 @@ describe("design file", () => {
     const reading = readDesign(broken);
     expect(reading.ok).toBe(true);
     if (!reading.ok) return;
-    expect(reading.design.placement!.radius).toBe(accelerometerPlacementInputs.radius.default);
-    expect(reading.design.placement!.fullScale).toBe(demo.placement!.fullScale);
-    expect(reading.design.fasteners![1]!.size).toBe("M4");
-    expect(reading.design.fasteners![1]!.partMass).toBe(demo.fasteners![1]!.partMass);
-    expect(reading.design.mass!.parts).toHaveLength(demo.mass!.parts.length - 1);
+    // biome-ignore lint/suspicious/noExplicitAny: test access to any section
+    const read = reading.design as Record<string, any>;
+    expect(read.placement!.radius).toBe(accelerometerPlacementInputs.radius.default);
+    expect(read.placement!.fullScale).toBe(demo.placement!.fullScale);
+    expect(read.fasteners![1]!.size).toBe("M4");
+    expect(read.fasteners![1]!.partMass).toBe(demo.fasteners![1]!.partMass);
+    expect(read.mass!.parts).toHaveLength(demo.mass!.parts.length - 1);
     const paths = reading.problems.map((p) => `${p.path}: ${p.action}`);
     expect(paths).toEqual([
       "colour: section-dropped",
       "placement.topSpeed: default-used",
       "placement.radius: default-used",
-      expect.stringMatching(/^mass\.parts\[2\]\.shape.*: item-dropped$/),
+      "mass.parts[2]: item-dropped",
       "fasteners[1].size: default-used",
     ]);
     expect(reading.problems[2]!.message).toBe("must be greater than 0 mm and at most 2000 mm (got -3); the default was used");
+    expect(reading.problems[3]!.message).toMatch(/must be .*; the part was left out$/);
     expect(reading.problems[4]!.message).toMatch(/^must be one of M2, M2\.5, M3, M4, M5, M6, M8, M10, M12 \(got "M99"\); "M4" was used$/);
   });
 
@@ -114,7 +119,16 @@ describe("design file", () => {
       2: (d: Record<string, unknown>) => ({ ...d, units: "metric" }),
     };
     expect(migrateDesign({ version: 1, old: 5 }, migrations, 3)).toEqual({ version: 3, old: 5, renamed: 5, units: "metric" });
-    expect(() => migrateDesign({ version: 1 }, {}, 2)).toThrow("no migration from design version 1");
+    expect(() => migrateDesign({ version: 1 }, {}, 2)).toThrow("version must be a design version this handbook can bring forward (1 to 2) (got 1)");
+  });
+
+  it('reads a version 1 file: the mass section\'s numbers move out of "scalars"', () => {
+    const { mass, ...rest } = JSON.parse(designToText(demo));
+    const { parts, candidates, mode, ...scalars } = mass;
+    const reading = readDesign({ ...rest, version: 1, mass: { scalars, parts, candidates } });
+    expect(reading.ok && reading.migratedFrom).toBe(1);
+    expect(reading.ok && (reading.design.mass as Record<string, unknown>).spinSpeed).toBe(scalars.spinSpeed);
+    expect(reading.ok && (reading.design.mass as Record<string, unknown>).parts).toEqual(parts);
   });
 });
 
@@ -157,14 +171,14 @@ describe("build-sheet checks", () => {
     const design: Design = { ...demo, placement: { ...demo.placement!, lowSpeed: demo.placement!.topSpeed * 2 } };
     const placement = runChecks(design).find((r) => r.id === "placement")!;
     expect(placement.status).toBe("fails");
-    expect(placement.margin).toBe("Could not compute: lowSpeed must be at most the top speed (got 502.655 rad/s)");
+    expect(placement.margin).toBe("Could not compute: lowSpeed must be at most topSpeed (251.327 rad/s) (got 502.655 rad/s)");
   });
 
   it("prints a text sheet with every figure and the safety notice", () => {
     const text = buildSheetText(demo, results);
     expect(text).toContain("Build sheet: Demo: invented 1.4 kg whole-body spinner");
-    expect(text).toContain("HOLDS     Accelerometer placement: Sensor reading at top speed 217 g");
-    expect(text).toContain("Overall: fails");
+    expect(text).toContain("HOLDS            Accelerometer placement: Sensor reading at top speed 217 g");
+    expect(text).toContain("Overall: Fails");
     expect(text).toContain("Safety:");
   });
 });

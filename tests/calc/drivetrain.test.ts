@@ -597,7 +597,7 @@ describe("input declarations", () => {
 
   it("refuses a sliding coefficient above the grip coefficient", () => {
     expect(() => validateDrivetrainInput({ ...DEMO_SPINNER, kineticFriction: 1.2 })).toThrowError(
-      "kineticFriction must be at most the grip coefficient (1) (got 1.2)",
+      "kineticFriction must be at most staticFriction (1) (got 1.2)",
     );
   });
 

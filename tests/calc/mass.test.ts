@@ -19,7 +19,7 @@ import { layoutDrawing, partOutline } from "../../calc/mass/drawing.ts";
 import { massProperties } from "../../calc/mass/properties.ts";
 import { trueSensorRadius } from "../../calc/mass/sensor.ts";
 import { CalcInputError } from "../../calc/core/errors.ts";
-import { MATERIAL_IDS, MATERIALS } from "../../calc/materials/materials.ts";
+import { MATERIALS } from "../../calc/materials/materials.ts";
 import { isSourceKey } from "../../calc/sources/index.ts";
 import { fromSI, rpmToRadPerSecond, toSI } from "../../calc/core/units.ts";
 
@@ -66,50 +66,7 @@ function expectInputError(run: () => unknown, param: string, text?: RegExp): voi
 
 const DEFAULTS = Object.fromEntries(Object.entries(massBalanceInputs).map(([k, spec]) => [k, spec.default])) as MassBalanceScalars;
 
-// fast-check arbitraries: sensible robot-sized parts.
-const len = (min = 0.001, max = 0.2) => fc.double({ min, max, noNaN: true, noDefaultInfinity: true });
-const coord = fc.double({ min: -0.2, max: 0.2, noNaN: true, noDefaultInfinity: true });
-const massArb = fc.double({ min: 0.001, max: 2, noNaN: true, noDefaultInfinity: true });
-const angleArb = fc.double({ min: -Math.PI, max: Math.PI, noNaN: true, noDefaultInfinity: true });
-const shapeArb: fc.Arbitrary<PartShape> = fc.oneof(
-  fc.constant({ kind: "point" as const }),
-  len().map((radius) => ({ kind: "disk" as const, radius })),
-  len().map((radius) => ({ kind: "ring" as const, radius })),
-  fc.tuple(len(0, 0.1), len(0.001, 0.1)).map(([a, b]) => ({ kind: "annulus" as const, innerRadius: a, outerRadius: a + b })),
-  fc.tuple(len(), len(), angleArb).map(([length, width, angle]) => ({ kind: "plate" as const, length, width, angle })),
-  fc.tuple(len(), angleArb).map(([length, angle]) => ({ kind: "rod" as const, length, angle })),
-  fc.tuple(len(), len()).map(([radius, height]) => ({ kind: "cylinder" as const, radius, height })),
-  fc
-    .tuple(
-      fc.double({ min: 0, max: 0.01, noNaN: true }),
-      fc.double({ min: -0.001, max: 0.001, noNaN: true }),
-      fc.double({ min: -0.001, max: 0.001, noNaN: true }),
-    )
-    .map(([inertiaZ, productXZ, productYZ]) => ({ kind: "custom" as const, inertiaZ, productXZ, productYZ })),
-);
-const partArb: fc.Arbitrary<LayoutPart> = fc
-  .record({
-    shape: shapeArb,
-    m: massArb,
-    x: coord,
-    y: coord,
-    z: coord,
-    material: fc.constantFrom(...MATERIAL_IDS),
-    useMaterial: fc.boolean(),
-    t: len(0.001, 0.02),
-    name: fc.constantFrom("body", "battery", "motor_1", "a~b", "wheel, left", "ünï"),
-  })
-  .map(({ shape, m, x, y, z, material, useMaterial, t, name }) => ({
-    name,
-    shape,
-    mass:
-      useMaterial && shape.kind !== "point" && shape.kind !== "custom"
-        ? { kind: "material" as const, material, thickness: t }
-        : { kind: "given" as const, mass: m },
-    x,
-    y,
-    z,
-  }));
+import { coord, len, massArb, partArb } from "../support/arbitraries.ts";
 const layoutArb = fc.array(partArb, { minLength: 1, maxLength: 8 });
 
 // ---------------------------------------------------------------------------------------------
@@ -852,7 +809,7 @@ describe("URL text of the parts list", () => {
     expect(r.problems.map((p) => p.index)).toEqual([1, 2, 3, 4, 5, 6, 7]);
     expect(r.problems[0]!.reason).toMatch(/unknown shape "blob"/);
     expect(r.problems[1]!.reason).toMatch(/field 6 \("abc"\) is not a number/);
-    expect(r.problems[2]!.reason).toMatch(/innerRadius must be less than the outer radius/);
+    expect(r.problems[2]!.reason).toMatch(/innerRadius must be less than outerRadius/);
     expect(r.problems[3]!.reason).toMatch(/neither a number of grams nor a known material/);
     expect(r.problems[4]!.reason).toMatch(/needs a thickness/);
     expect(r.problems[5]!.reason).toMatch(/has 6 fields here, got 7/);
@@ -930,7 +887,7 @@ describe("input checks", () => {
     expectInputError(
       () => massProperties([point(1, 0, 0), given({ kind: "annulus", innerRadius: 0.06, outerRadius: 0.05 }, 1)]),
       "parts[1].shape.innerRadius",
-      /^parts\[1\]\.shape\.innerRadius must be less than the outer radius \(0\.05 m\) \(got 0\.06 m\)$/,
+      /^parts\[1\]\.shape\.innerRadius must be less than outerRadius \(0\.05 m\) \(got 0\.06 m\)$/,
     );
     expectInputError(() => massProperties([point(-1, 0, 0)]), "parts[0].mass.mass", /greater than 0 kg \(got -1 kg\)/);
     expectInputError(

@@ -135,7 +135,7 @@ describe("rotation: errors name the input and the allowed range", () => {
     } catch (error) {
       expect(error).toBeInstanceOf(CalcInputError);
       expect((error as CalcInputError).param).toBe("lowSpeed");
-      expect((error as CalcInputError).expected).toBe("at most the top speed");
+      expect((error as CalcInputError).expected).toBe("at most topSpeed (209.44 rad/s)");
     }
   });
 });

@@ -30,16 +30,16 @@ describe("whirlbook check", () => {
     const { code, stdout } = run("check", demoFile);
     expect(code).toBe(1);
     expect(stdout).toContain("Build sheet: Demo: invented 1.4 kg whole-body spinner");
-    expect(stdout).toContain("HOLDS     Accelerometer placement: Sensor reading at top speed 217 g");
-    expect(stdout).toContain("FAILS     Heading drift");
-    expect(stdout).toMatch(/Overall: fails\n/);
+    expect(stdout).toContain("HOLDS            Accelerometer placement: Sensor reading at top speed 217 g");
+    expect(stdout).toContain("FAILS            Heading drift");
+    expect(stdout).toMatch(/Overall: Fails\n/);
   });
 
   it("exits 0 when nothing fails", () => {
     const holding: Design = { ...demoDesign() };
     delete holding.headingDrift;
     const { code, stdout } = run("check", write("holding.json", designToText(holding)));
-    expect(stdout).toMatch(/Overall: (holds|marginal)\n/);
+    expect(stdout).toMatch(/Overall: (Holds|Marginal)\n/);
     expect(code).toBe(0);
   });
 
@@ -54,7 +54,7 @@ describe("whirlbook check", () => {
 
   it("prints US units with --units us", () => {
     const { stdout } = run("check", demoFile, "--units", "us");
-    expect(stdout).toContain("Sensor at 1.33 in");
+    expect(stdout).toContain("The sensor at 1.33 in");
   });
 
   it("explains a file that is not a design and exits 2", () => {

@@ -10,7 +10,7 @@ import { simulateSpinUp } from "../../calc/drivetrain/simulate.ts";
 import { sweepDrivetrain } from "../../calc/drivetrain/compare.ts";
 import { rpmToRadPerSecond } from "../../calc/core/units.ts";
 import { applies, createSpinUpModel, defaultSweepRange, NAMES, SPECS, SPINNER_ONLY, type SpinUpModel } from "../../components/drivetrain/model.ts";
-import SpinUpCalculator from "../../components/drivetrain/SpinUpCalculator.tsx";
+import SpinUpCalculator from "../../components/calculators/spin-up.tsx";
 import { Results, SpinUpCharts } from "../../components/drivetrain/Results.tsx";
 
 const RPM = rpmToRadPerSecond(1);

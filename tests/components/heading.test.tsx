@@ -5,15 +5,13 @@
  */
 import { describe, expect, it } from "vitest";
 import { renderToString } from "preact-render-to-string";
-import { headingDriftInputs } from "../../calc/heading/drift-budget.ts";
+import { headingDriftInputs } from "../../calc/heading/drift-inputs.ts";
 import { STANDARD_GRAVITY } from "../../calc/core/constants.ts";
-import { createDriftModel } from "../../components/heading/drift-model.ts";
-import { createTimingModel } from "../../components/heading/timing-model.ts";
-import { createCalibrationModel, DATA_KEY, DEMO_TEXT, DRIFT_KEYS } from "../../components/heading/calibration-model.ts";
+import HeadingDriftCalculator, { createDriftModel } from "../../components/calculators/heading-drift.tsx";
+import HeadingTimingCalculator, { createTimingModel } from "../../components/calculators/heading-timing.tsx";
+import CalibrationCalculator from "../../components/calculators/calibration.tsx";
+import { createCalibrationModel, DEMO_TEXT } from "../../components/heading/calibration-model.ts";
 import { parseCalibrationCsv } from "../../calc/heading/csv.ts";
-import HeadingDriftCalculator from "../../components/heading/HeadingDriftCalculator.tsx";
-import HeadingTimingCalculator from "../../components/heading/HeadingTimingCalculator.tsx";
-import CalibrationCalculator from "../../components/heading/CalibrationCalculator.tsx";
 
 const DEG = Math.PI / 180;
 
@@ -33,15 +31,15 @@ describe("drift-budget model", () => {
   it("applies a link to both sections, each from its own keys, and reports what it does not use", () => {
     const model = createDriftModel();
     const link = "?v=1&rpm=2800rpm&ra=12.69mm&b=0.02g&p.r1=10mm&p.e=1mm&p.rpm=1500rpm&zz=1";
-    model.fields.applyQuery(link);
-    model.pair.applyQuery(link);
+    model.drift.applyQuery(link);
+    model.pairModel.applyQuery(link);
     expect(model.fields.texts.angularSpeed.value).toBe("2800 rpm");
     expect(model.fields.texts.assumedRadius.value).toBe("12.69 mm");
     expect(model.pair.texts.radius1.value).toBe("10 mm");
     expect(model.pair.texts.offset.value).toBe("1 mm");
     expect(model.fields.notices.value.join(" ")).toContain('"zz"');
     expect(model.pair.notices.value).toEqual([]);
-    const query = new URLSearchParams(model.pair.queryFor(model.fields.queryFor("")));
+    const query = new URLSearchParams(model.pairModel.queryFor(model.drift.queryFor("")));
     expect(query.get("ra")).toBe("12.69mm");
     expect(query.get("p.r1")).toBe("10mm");
     expect(query.get("v")).toBe("1");
@@ -50,7 +48,7 @@ describe("drift-budget model", () => {
   it("puts the plot-range rule on the 'Plot to' field, in the user's units", () => {
     const model = createDriftModel();
     model.fields.texts.highSpeed.value = "100 rpm";
-    expect(model.outcome.value.error).toEqual({ field: "highSpeed", message: "Plot to must be greater than Plot from (200 rpm)." });
+    expect(model.outcome.value.error).toEqual({ field: "highSpeed", message: "Plot to must be greater than the plot from (200 rpm)." });
     expect(model.curves.value).toBeNull();
   });
 
@@ -93,8 +91,8 @@ describe("timing and smoothing model", () => {
 
   it("keeps the smoothing keys in their own scope", () => {
     const model = createTimingModel();
-    model.smoothing.applyQuery("?v=1&rpm=2500rpm&s.a=0.05&s.rpm=1000rpm");
-    model.timing.applyQuery("?v=1&rpm=2500rpm&s.a=0.05&s.rpm=1000rpm");
+    model.smoothingModel.applyQuery("?v=1&rpm=2500rpm&s.a=0.05&s.rpm=1000rpm");
+    model.timingModel.applyQuery("?v=1&rpm=2500rpm&s.a=0.05&s.rpm=1000rpm");
     expect(model.timing.texts.topSpeed.value).toBe("2500 rpm");
     expect(model.smoothing.texts.speed.value).toBe("1000 rpm");
     expect(model.smoothing.texts.smoothingFactor.value).toBe("0.05");
@@ -154,24 +152,24 @@ describe("calibration model", () => {
 
   it("explains a malformed or foreign link and never throws", () => {
     const model = createCalibrationModel("metric", parseCalibrationCsv);
-    model.applyQuery(`?v=1&${DATA_KEY}=v9:1:2&su=furlongs`);
+    model.applyQuery(`?v=1&d=v9:1:2&su=furlongs`);
     expect(model.fields.notices.value.join(" ")).toContain("unknown version 9");
     expect(model.fields.notices.value.join(" ")).toContain("bare speeds");
     expect(model.outcome.value.fit).toBeNull();
     const other = createCalibrationModel("metric", parseCalibrationCsv);
-    other.applyQuery(`?${DATA_KEY}=${encodeURIComponent("v1:600:5.37,abc,1200:20.6,1800:46.3,<b>")}`);
+    other.applyQuery(`?d=${encodeURIComponent("v1:600:5.37,abc,1200:20.6,1800:46.3,<b>")}`);
     expect(other.fields.notices.value.some((n) => n.includes('reading 2 ("abc")'))).toBe(true);
     expect(other.outcome.value.fit!.count).toBe(3);
   });
 
   it("hands the fitted radius and offset to the drift page under the keys that page reads", () => {
-    expect(DRIFT_KEYS.assumedRadius).toBe(headingDriftInputs.assumedRadius.urlKey);
-    expect(DRIFT_KEYS.biasCorrection).toBe(headingDriftInputs.biasCorrection.urlKey);
     const model = createCalibrationModel("metric", parseCalibrationCsv);
     const link = new URL(model.handoff.value!, "https://example.org/");
     expect(link.pathname).toBe("/chapters/heading-drift/");
-    expect(link.searchParams.get("ra")).toBe("12.7031mm");
-    expect(Number(link.searchParams.get("bh")!.replace("g", "")) * STANDARD_GRAVITY).toBeCloseTo(model.outcome.value.fit!.bias, 4);
+    // the drift page's own keys, each value written so that it reads back exactly
+    expect(link.searchParams.get(headingDriftInputs.assumedRadius.urlKey)).toMatch(/^12\.703\d*mm$/);
+    expect(Number(link.searchParams.get("ra")!.replace("mm", "")) * 0.001).toBe(model.outcome.value.fit!.radius);
+    expect(Number(link.searchParams.get(headingDriftInputs.biasCorrection.urlKey)!.replace("g", "")) * STANDARD_GRAVITY).toBe(model.outcome.value.fit!.bias);
     expect(link.hash).toBe("#drift-calculator");
   });
 
@@ -180,7 +178,7 @@ describe("calibration model", () => {
     model.fields.setSystem("us");
     const link = new URL(model.handoff.value!, "https://example.org/");
     expect(link.searchParams.get("u")).toBe("us");
-    expect(link.searchParams.get("ra")).toBe("0.50012in"); // 12.70306 mm / 25.4 = 0.5001204 in, six figures
+    expect(link.searchParams.get("ra")).toMatch(/^0\.50012\d*in$/); // 12.70306 mm / 25.4 = 0.5001204 in
   });
 
   it("reads bare numbers in the units chosen, and keeps those in the link", () => {
@@ -188,8 +186,8 @@ describe("calibration model", () => {
     model.speedUnit.value = "rad/s";
     model.accelerationUnit.value = "m/s2";
     model.text.value = "100,127\n200,508\n300,1143\n";
-    // 127 m/s² at 100 rad/s is 12.7 mm exactly; the link's six significant figures (rpm, g) move it by < 5e-6
-    expect(Math.abs(model.outcome.value.fit!.radius / 0.0127 - 1)).toBeLessThan(5e-6);
+    // 127 m/s² at 100 rad/s is 12.7 mm exactly; the link carries every reading exactly
+    expect(Math.abs(model.outcome.value.fit!.radius / 0.0127 - 1)).toBeLessThan(1e-12);
     const query = new URLSearchParams(model.queryFor(""));
     expect(query.get("su")).toBe("rad/s");
     expect(query.get("au")).toBe("m/s2");

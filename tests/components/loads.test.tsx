@@ -5,11 +5,13 @@
 import { describe, expect, it } from "vitest";
 import { renderToString } from "preact-render-to-string";
 import { demoRobotLoads, rimMaterialChoices } from "../../calc/loads/index.ts";
-import { readChoices } from "../../components/loads/choices.ts";
-import { createFastenerModel, FASTENER_CHOICES, fastenerLink } from "../../components/loads/fastener-model.ts";
-import { createRimModel, CUSTOM_MATERIAL, rimLink } from "../../components/loads/rim-model.ts";
-import FastenerCalculator from "../../components/loads/FastenerCalculator.tsx";
-import RimCalculator from "../../components/loads/RimCalculator.tsx";
+import fasteners from "../../calc/calculators/fasteners.ts";
+import rims from "../../calc/calculators/rims.ts";
+import { linkQuery, readLink } from "../../calc/core/calculator.ts";
+import FastenerCalculator, { createFastenerModel } from "../../components/calculators/fasteners.tsx";
+import RimCalculator, { createRimModel } from "../../components/calculators/rims.tsx";
+
+const CUSTOM_MATERIAL = "custom";
 
 const MATERIALS = rimMaterialChoices();
 
@@ -31,7 +33,7 @@ describe("the bolt calculator's model", () => {
 
   it("applies a permalink with its choices: 42 g at 55 mm on one M2 class 4.6 screw is marginal", () => {
     const model = createFastenerModel();
-    model.sync.applyQuery("?v=1&u=metric&m=42g&r=55mm&rpm=2400rpm&n=1&size=M2&cls=4.6&mode=shear&plane=thread");
+    model.applyQuery("?v=1&u=metric&m=42g&r=55mm&rpm=2400rpm&n=1&size=M2&cls=4.6&mode=shear&plane=thread");
     expect(model.fields.texts.partMass.value).toBe("42 g");
     expect(model.choices.size.value).toBe("M2");
     expect(model.choices.propertyClass.value).toBe("4.6");
@@ -45,7 +47,7 @@ describe("the bolt calculator's model", () => {
 
   it("changes the result when the loading mode changes", () => {
     const model = createFastenerModel();
-    model.sync.applyQuery("?m=42g&r=55mm&size=M2&cls=4.6");
+    model.applyQuery("?m=42g&r=55mm&size=M2&cls=4.6");
     model.choices.mode.value = "tension";
     // In tension the same 70.5 MPa meets R_eL,min = 240 MPa: n = 3.40 → holds.
     close(model.outcome.value.result?.safetyFactor, 3.4, 5e-3);
@@ -56,7 +58,7 @@ describe("the bolt calculator's model", () => {
     const model = createFastenerModel();
     model.choices.size.value = "M6";
     model.choices.mode.value = "tension";
-    const query = new URLSearchParams(model.sync.queryFor(""));
+    const query = new URLSearchParams(model.queryFor(""));
     expect(query.get("v")).toBe("1");
     expect(query.get("size")).toBe("M6");
     expect(query.get("cls")).toBe("8.8");
@@ -68,14 +70,14 @@ describe("the bolt calculator's model", () => {
 
   it("reports a choice that is not on the list, and a repeated one, and keeps the default", () => {
     const model = createFastenerModel();
-    model.sync.applyQuery(`?size=M7&cls=8.8&cls=12.9&mode=${encodeURIComponent("<b>x</b>")}&colour=red`);
+    model.applyQuery(`?size=M7&cls=8.8&cls=12.9&mode=${encodeURIComponent("<b>x</b>")}&colour=red`);
     expect(model.choices.size.value).toBe("M4");
     expect(model.choices.propertyClass.value).toBe("8.8");
     expect(model.choices.mode.value).toBe("shear");
     expect(model.fields.notices.value).toEqual([
+      'The link sets "cls" more than once; the first value was used.',
       'The link has a parameter "colour" that this calculator does not use; it was ignored.',
       `The link's thread size "M7" is not one this calculator offers; it was ignored.`,
-      'The link sets "cls" more than once; the first value was used.',
       `The link's loading "<b>x</b>" is not one this calculator offers; it was ignored.`,
     ]);
   });
@@ -84,7 +86,7 @@ describe("the bolt calculator's model", () => {
     const model = createFastenerModel();
     model.fields.texts.failBelow.value = "3";
     expect(model.outcome.value.result).toBeNull();
-    expect(model.outcome.value.error).toEqual({ field: "marginalBelow", message: "Thin below must be at least the fail threshold, 3." });
+    expect(model.outcome.value.error).toEqual({ field: "marginalBelow", message: "Thin below must be at least the fails below (3)." });
   });
 
   it("withholds results while a field does not read, and names it", () => {
@@ -98,7 +100,7 @@ describe("the bolt calculator's model", () => {
   it("builds a worked-example link that reopens exactly the demo check", () => {
     const demo = demoRobotLoads();
     const model = createFastenerModel();
-    model.sync.applyQuery(`?${fastenerLink(demo.boltInput)}`);
+    model.applyQuery(`?${linkQuery(fasteners, demo.boltInput)}`);
     const result = model.outcome.value.result!;
     close(result.stress, demo.bolt.stress, 1e-5);
     close(result.speedAtYield, demo.bolt.speedAtYield, 1e-5);
@@ -108,11 +110,10 @@ describe("the bolt calculator's model", () => {
 });
 
 describe("reading choices from a link", () => {
-  it("returns the other keys untouched for the fields", () => {
-    const read = readChoices(FASTENER_CHOICES, "?v=1&size=M3&r=5mm");
-    expect(read.values).toEqual({ size: "M3" });
-    expect(new URLSearchParams(read.rest).get("r")).toBe("5mm");
-    expect(new URLSearchParams(read.rest).has("size")).toBe(false);
+  it("reads the choices apart from the fields' texts", () => {
+    const read = readLink(fasteners, "?v=1&size=M3&r=5mm");
+    expect(read.choices).toEqual({ size: "M3" });
+    expect(read.texts).toEqual({ radius: "5mm" });
   });
 });
 
@@ -135,7 +136,7 @@ describe("the rim calculator's model", () => {
     expect(model.material.value).toBe("steel-4130-normalized");
     model.fields.texts.yieldStrength.value = "400 MPa";
     expect(model.material.value).toBe(CUSTOM_MATERIAL);
-    expect(new URLSearchParams(model.sync.queryFor("")).get("mat")).toBe("custom");
+    expect(new URLSearchParams(model.queryFor("")).get("mat")).toBe("custom");
   });
 
   it("keeps the material picked when the units switch to US", () => {
@@ -148,7 +149,7 @@ describe("the rim calculator's model", () => {
 
   it("applies a permalink: a 4130 disk with a 10 mm bore at 10 000 rpm peaks at the bore", () => {
     const model = createRimModel(MATERIALS);
-    model.sync.applyQuery("?v=1&shape=annular-disk&mat=steel-4130-normalized&ro=100mm&ri=10mm&rpm=10000rpm");
+    model.applyQuery("?v=1&shape=annular-disk&mat=steel-4130-normalized&ro=100mm&ri=10mm&rpm=10000rpm");
     expect(model.fields.texts.density.value).toBe("7.85 g/cm³");
     const result = model.outcome.value.result!;
     // σ_θ(a) = ρω²/4 · [(3+ν)b² + (1−ν)a²] = 7850 × 1047.2² / 4 × (3.29 × 0.01 + 0.71 × 0.0001) = 71.0 MPa; n_y = 435/71.0 = 6.13.
@@ -161,14 +162,14 @@ describe("the rim calculator's model", () => {
 
   it("lets the link's own values override the material's, and then calls the material custom", () => {
     const model = createRimModel(MATERIALS);
-    model.sync.applyQuery("?mat=al-6061-t6&sy=240MPa&su=290MPa");
+    model.applyQuery("?mat=al-6061-t6&sy=240MPa&su=290MPa");
     expect(model.fields.texts.yieldStrength.value).toBe("240 MPa");
     expect(model.material.value).toBe(CUSTOM_MATERIAL);
   });
 
   it("reports an unknown material and keeps the default", () => {
     const model = createRimModel(MATERIALS);
-    model.sync.applyQuery("?mat=unobtainium");
+    model.applyQuery("?mat=unobtainium");
     expect(model.material.value).toBe("al-6061-t6");
     expect(model.fields.notices.value).toEqual([`The link's material "unobtainium" is not one this calculator offers; it was ignored.`]);
   });
@@ -181,13 +182,13 @@ describe("the rim calculator's model", () => {
     expect(model.outcome.value.error?.message).toMatch(/^Bore radius must be /);
     model.fields.texts.innerRadius.value = "20 mm";
     model.fields.texts.yieldStrength.value = "400 MPa";
-    expect(model.outcome.value.error).toEqual({ field: "yieldStrength", message: "Yield strength must be at most the ultimate strength." });
+    expect(model.outcome.value.error).toEqual({ field: "yieldStrength", message: "Yield strength must be at most the ultimate strength (310 MPa)." });
   });
 
   it("builds a worked-example link that reopens exactly the demo rim", () => {
     const demo = demoRobotLoads();
     const model = createRimModel(MATERIALS);
-    model.sync.applyQuery(`?${rimLink(demo.rimInput, "al-6061-t6")}`);
+    model.applyQuery(`?${linkQuery(rims, demo.rimInput)}`);
     expect(model.material.value).toBe("al-6061-t6");
     close(model.outcome.value.result?.peakStress, demo.rim.peakStress, 1e-5);
     close(model.outcome.value.result?.speedAtUltimate, demo.rim.speedAtUltimate, 1e-5);

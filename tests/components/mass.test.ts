@@ -90,10 +90,10 @@ describe("mass-layout model", () => {
     model.applyQuery("?v=1&l=v9~pt_a_0_0_0_10&l=v1&cw=zz&colour=red");
     expect(model.parts.value).toHaveLength(9);
     expect(model.notices.value).toEqual([
-      'The link has a parameter "colour" that this calculator does not use; it was ignored.',
       'The link sets "l" more than once; the first value was used.',
+      'The link has a parameter "colour" that this calculator does not use; it was ignored.',
+      `The link's counterweight question "zz" is not one this calculator offers; it was ignored.`,
       "The parts list in the link could not be read (version 9 is not known; this reader understands v1); the example layout is shown.",
-      'Unknown counterweight mode in the link (use r, m or p); kept "at a radius".',
     ]);
     expect(model.mode.value).toBe("r");
   });
@@ -102,13 +102,13 @@ describe("mass-layout model", () => {
     const model = createMassModel("metric", DEMO);
     model.applyQuery(`?v=1&pts=${"1,1;".repeat(101)}`);
     expect(model.points.value).toBe("55, 0; 0, 55; -55, 0; 0, -55");
-    expect(model.notices.value).toEqual(["The link's mounting points are longer than 400 characters; they were ignored."]);
+    expect(model.notices.value).toEqual(["The link's value for Mounting points is longer than 400 characters; it was ignored."]);
   });
 
   it("maps a rule across a part's fields to that part's field", () => {
     const model = createMassModel("metric", "v1~ann_ring_0_0_0_10_20_100");
     model.parts.value[0]!.fields.texts.innerRadius.value = "30 mm";
-    expect(model.outcome.value?.error).toEqual({ part: 0, field: "innerRadius", message: "Inner radius must be less than the outer radius (0.02 m)." });
+    expect(model.outcome.value?.error).toEqual({ part: 0, field: "innerRadius", message: "Inner radius must be less than the outer radius (20 mm)." });
   });
 
   it("maps scalar rules to their fields and waits for fields that do not read", () => {

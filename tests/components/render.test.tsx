@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { renderToString } from "preact-render-to-string";
-import PlacementCalculator from "../../components/placement/PlacementCalculator.tsx";
+import PlacementCalculator from "../../components/calculators/placement.tsx";
 
 describe("server render (the path Astro islands take)", () => {
   const html = renderToString(<PlacementCalculator id="pc" />);

@@ -1,0 +1,127 @@
+/**
+ * One calculator's section of a design file: read from JSON the way its descriptor declares it
+ * (numbers within their declared ranges, choices among their options, extras by their own
+ * readers), and written back. A bad value takes its default and is reported; a bad list entry is
+ * left out and reported; nothing is dropped silently.
+ */
+import { type AnyCalculator, type AnyValues, initialValues } from "../core/calculator.ts";
+import { describeRange, type InputSpec } from "../core/inputs.ts";
+
+/** One thing wrong with a file, and what was done about it. */
+export interface DesignProblem {
+  /** Where, as a path: "placement.radius", "fasteners[2].size", "" for the whole file. */
+  path: string;
+  message: string;
+  /** What happened: the field took its default, the item was dropped, the section was dropped, or nothing could be read. */
+  action: "default-used" | "item-dropped" | "section-dropped" | "not-read";
+}
+
+/** Thrown inside section reading when a whole section cannot be read (the problem is already recorded). */
+export class SectionDropped extends Error {}
+
+/** Longest name of a list entry [characters]. */
+export const MAX_ENTRY_NAME = 80;
+
+function preview(value: unknown): string {
+  const text = typeof value === "string" ? JSON.stringify(value) : String(JSON.stringify(value) ?? value);
+  return text.length > 40 ? `${text.slice(0, 40)}…` : text;
+}
+
+/** Whether a stored number is one the field would accept. */
+function numberFits(spec: InputSpec, value: unknown): value is number {
+  return (
+    typeof value === "number" &&
+    Number.isFinite(value) &&
+    (spec.minOpen ? value > spec.min : value >= spec.min) &&
+    value <= spec.max &&
+    (!spec.integer || Number.isInteger(value))
+  );
+}
+
+const isRecord = (v: unknown): v is Record<string, unknown> => typeof v === "object" && v !== null && !Array.isArray(v);
+
+/**
+ * Reads one set of a calculator's values from a stored object: each bad or missing value takes its
+ * default and is reported; fields that are not the calculator's are reported and ignored.
+ */
+export function readValues(calc: AnyCalculator, raw: unknown, path: string, problems: DesignProblem[], allowed: readonly string[] = []): AnyValues {
+  if (!isRecord(raw)) {
+    problems.push({ path, message: "must be an object of named values", action: "section-dropped" });
+    throw new SectionDropped();
+  }
+  const out: AnyValues = initialValues(calc);
+  for (const [name, spec] of Object.entries(calc.inputs)) {
+    const value = raw[name];
+    if (value === undefined) {
+      problems.push({ path: `${path}.${name}`, message: `is missing; the default (${spec.default} SI) was used`, action: "default-used" });
+    } else if (numberFits(spec, value)) {
+      out[name] = value;
+    } else {
+      const why = typeof value !== "number" ? "must be a number" : `must be ${describeRange(spec, "metric")}`;
+      problems.push({ path: `${path}.${name}`, message: `${why} (got ${preview(value)}); the default was used`, action: "default-used" });
+    }
+  }
+  for (const [name, spec] of Object.entries(calc.choices)) {
+    const value = raw[name];
+    if (typeof value === "string" && spec.options.some((o) => o.value === value)) out[name] = value;
+    else if (value === undefined) {
+      problems.push({ path: `${path}.${name}`, message: `is missing; "${spec.default}" was used`, action: "default-used" });
+    } else {
+      problems.push({
+        path: `${path}.${name}`,
+        message: `must be one of ${spec.options.map((o) => o.value).join(", ")} (got ${preview(value)}); "${spec.default}" was used`,
+        action: "default-used",
+      });
+    }
+  }
+  for (const [name, spec] of Object.entries(calc.extras)) {
+    const value = raw[name];
+    if (value === undefined) continue;
+    const read = spec.fromDesign(value);
+    for (const p of read.problems)
+      problems.push({ path: `${path}.${name}${p.path}`, message: p.message, action: read.value === null ? "default-used" : "item-dropped" });
+    if (read.value !== null) out[name] = read.value;
+  }
+  const known = new Set([...Object.keys(calc.inputs), ...Object.keys(calc.choices), ...Object.keys(calc.extras), ...allowed]);
+  for (const key of Object.keys(raw)) {
+    if (!known.has(key)) problems.push({ path: `${path}.${key}`, message: "is not a value of this calculator; it was ignored", action: "default-used" });
+  }
+  return out;
+}
+
+/**
+ * Reads a calculator's whole section: its values, or for a list calculator its named entries (at
+ * most the declared number; each entry that is not an object is left out and reported).
+ */
+export function readSection(calc: AnyCalculator, raw: unknown, path: string, problems: DesignProblem[]): AnyValues | AnyValues[] {
+  if (calc.section.kind === "single") return readValues(calc, raw, path, problems);
+  const { max, entryName } = calc.section;
+  if (!Array.isArray(raw)) {
+    problems.push({ path, message: "must be a list", action: "section-dropped" });
+    throw new SectionDropped();
+  }
+  if (raw.length > max) problems.push({ path, message: `lists ${raw.length} entries; only the first ${max} were read`, action: "item-dropped" });
+  const entries: AnyValues[] = [];
+  for (const [index, item] of raw.slice(0, max).entries()) {
+    const itemPath = `${path}[${index}]`;
+    if (!isRecord(item)) {
+      problems.push({ path: itemPath, message: "must be an object; the entry was left out", action: "item-dropped" });
+      continue;
+    }
+    let name = `${entryName} ${index + 1}`;
+    if (typeof item.name === "string" && item.name.length <= MAX_ENTRY_NAME) name = item.name;
+    else if (item.name !== undefined) {
+      problems.push({
+        path: `${itemPath}.name`,
+        message: `must be text of at most ${MAX_ENTRY_NAME} characters; a default name was used`,
+        action: "default-used",
+      });
+    }
+    try {
+      entries.push({ name, ...readValues(calc, item, itemPath, problems, ["name"]) });
+    } catch (error) {
+      if (!(error instanceof SectionDropped)) throw error;
+    }
+  }
+  return entries;
+}

@@ -1,0 +1,202 @@
+/**
+ * The accelerometer-placement calculator: where a sensor can sit on a spinning robot, what it and
+ * one other part see at top speed, with a plot of acceleration against speed.
+ */
+import { useEffect, useMemo } from "preact/hooks";
+import placement from "../../calc/calculators/placement.ts";
+import { centripetalAcceleration, type AccelerometerPlacement } from "../../calc/rotation/rotation.ts";
+import { STANDARD_GRAVITY } from "../../calc/core/constants.ts";
+import { formatNumber, formatQuantity, radPerSecondToRpm, rpmToRadPerSecond, type UnitSystem } from "../../calc/core/units.ts";
+import { QuantityField } from "../calc-ui/QuantityField.tsx";
+import { Toolbar } from "../calc-ui/Toolbar.tsx";
+import { Notices } from "../calc-ui/Notices.tsx";
+import { Chart } from "../calc-ui/Chart.tsx";
+import { linkFor, syncWithUrl } from "../calc-ui/url-sync.ts";
+import { computed } from "../calc-ui/reactive.ts";
+import { createCalculatorModel } from "../calc-ui/model.ts";
+
+/** The island name: this file's name. */
+export const island = "placement";
+
+export function createPlacementModel() {
+  const model = createCalculatorModel(placement);
+  /** Acceleration [g] against speed [rpm] at the chosen radius, from 0 to 1.2 × top speed. */
+  const curve = computed(() => {
+    const values = model.values.value;
+    if (!values || !model.outcome.value.result) return null;
+    const maxRpm = radPerSecondToRpm(values.topSpeed) * 1.2;
+    const points: [number, number][] = [];
+    for (let i = 0; i <= 60; i += 1) {
+      const rpm = (maxRpm * i) / 60;
+      points.push([rpm, centripetalAcceleration({ angularSpeed: rpmToRadPerSecond(rpm), radius: values.radius }) / STANDARD_GRAVITY]);
+    }
+    return { points, maxRpm };
+  });
+  return { ...model, curve };
+}
+
+type PlacementModel = ReturnType<typeof createPlacementModel>;
+
+export interface PlacementCalculatorProps {
+  /** Element id of the calculator (the link's anchor). */
+  id?: string;
+}
+
+const GROUPS: { legend: string; names: (keyof typeof placement.inputs)[] }[] = [
+  { legend: "Speeds", names: ["topSpeed", "lowSpeed"] },
+  { legend: "Sensor", names: ["radius", "fullScale", "margin", "step", "noise", "resolution"] },
+  { legend: "Another part to check", names: ["partMass", "partRadius"] },
+];
+
+function verdictText(r: AccelerometerPlacement, system: UnitSystem): { tone: "ok" | "warn" | "bad"; title: string; detail: string } {
+  const len = (v: number) => formatQuantity(v, "length", { system }).text;
+  const window = `${len(r.minRadius)} to ${len(r.maxRadius)}`;
+  switch (r.verdict) {
+    case "fits":
+      return { tone: "ok", title: "Fits", detail: `The sensor radius lies inside the usable window, ${window}.` };
+    case "too-far-out":
+      return {
+        tone: "bad",
+        title: "Too far out",
+        detail: `At top speed the sensor would read ${formatNumber(r.accelerationAtTop / STANDARD_GRAVITY)} g, ${formatNumber(r.fullScaleUsed * 100)} % of its full scale. Move it in to ${len(r.maxRadius)} or less, or use a sensor with a larger range.`,
+      };
+    case "too-close-in":
+      return {
+        tone: "warn",
+        title: "Too close in",
+        detail: `At the lowest tracked speed one reading resolves the spin rate only to ${formatNumber(r.resolutionAtLow * 100)} %. Move it out to ${len(r.minRadius)} or more (the window is ${window}).`,
+      };
+    case "no-window":
+      return {
+        tone: "bad",
+        title: "No radius satisfies both limits",
+        detail: `Resolving the lowest speed needs at least ${len(r.minRadius)}, but staying under full scale at top speed needs at most ${len(r.maxRadius)}. Use a sensor with a larger range or finer steps, track from a higher speed, or accept coarser resolution.`,
+      };
+  }
+}
+
+function Results({ model }: { model: PlacementModel }) {
+  const system = model.fields.system.value;
+  const { result, error } = model.outcome.value;
+  if (!result) {
+    return (
+      <div class="calc-results calc-results--empty" aria-live="polite">
+        <p>{error && error.field === null ? error.message : "Results appear when every field above holds a valid value."}</p>
+      </div>
+    );
+  }
+  const q = (v: number, kind: Parameters<typeof formatQuantity>[1]) => formatQuantity(v, kind, { system }).text;
+  const verdict = verdictText(result, system);
+  const g = (v: number) => `${formatNumber(v / STANDARD_GRAVITY)} g`;
+  return (
+    <div class="calc-results" aria-live="polite">
+      <p class={`verdict verdict--${verdict.tone}`}>
+        <strong>{verdict.title}.</strong> {verdict.detail}
+      </p>
+      <dl class="results-grid">
+        <div>
+          <dt>Smallest usable radius</dt>
+          <dd data-out="min-radius">{q(result.minRadius, "length")}</dd>
+        </div>
+        <div>
+          <dt>Largest usable radius</dt>
+          <dd data-out="max-radius">{q(result.maxRadius, "length")}</dd>
+        </div>
+        <div>
+          <dt>Sensor reading at top speed</dt>
+          <dd data-out="accel-top">{g(result.accelerationAtTop)}</dd>
+        </div>
+        <div>
+          <dt>Share of full scale used</dt>
+          <dd data-out="fs-used">{formatNumber(result.fullScaleUsed * 100)} %</dd>
+        </div>
+        <div>
+          <dt>Speed at which the sensor saturates</dt>
+          <dd data-out="sat-speed">{formatNumber(radPerSecondToRpm(result.saturationSpeed))} rpm</dd>
+        </div>
+        <div>
+          <dt>Sensor reading at lowest tracked speed</dt>
+          <dd data-out="accel-low">{g(result.accelerationAtLow)}</dd>
+        </div>
+        <div>
+          <dt>Speed resolution of one reading there</dt>
+          <dd data-out="res-low">{formatNumber(result.resolutionAtLow * 100)} %</dd>
+        </div>
+        <div>
+          <dt>Other part: load at top speed</dt>
+          <dd data-out="part-g">{g(result.part.acceleration)}</dd>
+        </div>
+        <div>
+          <dt>Other part: pull on its mounts</dt>
+          <dd data-out="part-force">{q(result.part.force, "force")}</dd>
+        </div>
+      </dl>
+    </div>
+  );
+}
+
+function PlacementChart({ model }: { model: PlacementModel }) {
+  const values = model.fields.values.value;
+  const curve = model.curve.value;
+  const result = model.outcome.value.result;
+  if (!values || !curve || !result) return null;
+  const fullScaleG = values.fullScale / STANDARD_GRAVITY;
+  const limitG = fullScaleG * (1 - values.margin);
+  const topG = result.accelerationAtTop / STANDARD_GRAVITY;
+  const yMax = Math.max(fullScaleG, Math.min(topG * 1.44, fullScaleG * 3)) * 1.1;
+  return (
+    <Chart
+      title="Acceleration at the sensor against spin speed"
+      summary={`At the chosen radius the sensor reads ${formatNumber(topG)} g at top speed against a limit of ${formatNumber(limitG)} g (full scale ${formatNumber(fullScaleG)} g).`}
+      xLabel="Spin speed (rpm)"
+      yLabel="Acceleration (g)"
+      xDomain={[0, curve.maxRpm]}
+      yDomain={[0, yMax]}
+      hBands={[{ from: 0, to: limitG, label: "Safe region (below full scale less headroom)", className: "plot-safe" }]}
+      series={[{ label: "Sensor reading at the chosen radius", points: curve.points, className: "plot-curve" }]}
+      hLines={[
+        { value: fullScaleG, label: "Sensor full scale", className: "plot-limit" },
+        { value: limitG, label: "Full scale less headroom", className: "plot-limit plot-dashed" },
+      ]}
+      vLines={[
+        { value: radPerSecondToRpm(values.topSpeed), label: "Top speed", className: "plot-marker" },
+        { value: radPerSecondToRpm(values.lowSpeed), label: "Lowest tracked speed", className: "plot-marker plot-dashed" },
+      ]}
+    />
+  );
+}
+
+export default function PlacementCalculator({ id = "placement-calculator" }: PlacementCalculatorProps) {
+  const model = useMemo(() => createPlacementModel(), []);
+  useEffect(() => syncWithUrl(model), [model]);
+  const { fields } = model;
+  const system = fields.system.value;
+  const error = model.outcome.value.error;
+  return (
+    <section class="calc" id={id} aria-label="Accelerometer placement calculator">
+      <Notices notices={model.notices} />
+      <form class="calc-form" onSubmit={(event) => event.preventDefault()} noValidate>
+        {GROUPS.map((group) => (
+          <fieldset key={group.legend}>
+            <legend>{group.legend}</legend>
+            {group.names.map((name) => (
+              <QuantityField
+                key={name}
+                idPrefix={id}
+                name={name}
+                spec={fields.specs[name]}
+                text={fields.texts[name]}
+                reading={fields.readings[name]}
+                system={system}
+                extraError={error && error.field === name ? error.message : null}
+              />
+            ))}
+          </fieldset>
+        ))}
+      </form>
+      <Results model={model} />
+      <PlacementChart model={model} />
+      <Toolbar idPrefix={id} system={fields.system} onSystem={fields.setSystem} link={() => linkFor(model, id)} save={model.save} />
+    </section>
+  );
+}

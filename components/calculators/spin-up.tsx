@@ -1,0 +1,118 @@
+/**
+ * The spin-up calculator: a spinning weapon or a whole-body spinner from rest to speed — times to
+ * 50, 90 and 100 % of the target, top speed, what limits it over time, battery current and sag,
+ * stored energy and where the rest of the energy went; design variants side by side; and a sweep of
+ * one input with the best value marked. The simulation is calc/drivetrain.ts.
+ */
+import { useEffect, useMemo } from "preact/hooks";
+import { DRIVE_TYPE_OPTIONS, type DriveType } from "../../calc/drivetrain/inputs.ts";
+import { QuantityField } from "../calc-ui/QuantityField.tsx";
+import { Toolbar } from "../calc-ui/Toolbar.tsx";
+import { Notices } from "../calc-ui/Notices.tsx";
+import { linkFor, syncWithUrl } from "../calc-ui/url-sync.ts";
+import { createSpinUpModel, SPINNER_ONLY, type Name, type SpinUpModel } from "../drivetrain/model.ts";
+import { Empty, Results, SpinUpCharts } from "../drivetrain/Results.tsx";
+import { Compare } from "../drivetrain/Compare.tsx";
+import { Sweep } from "../drivetrain/Sweep.tsx";
+import spinUp from "../../calc/calculators/spin-up.ts";
+
+/** The island name: this file's name. */
+export const island = "spin-up";
+
+export interface SpinUpCalculatorProps {
+  /** Element id of the calculator (the link's anchor). */
+  id?: string;
+}
+
+interface Group {
+  legend: string | Record<DriveType, string>;
+  names: readonly Name[];
+  spinnerOnly?: boolean;
+}
+
+const GROUPS: Group[] = [
+  { legend: "Motors", names: ["motorCount", "motorKv", "motorResistance", "noLoadCurrent", "motorRotorInertia"] },
+  { legend: "Battery", names: ["cellCount", "cellVoltage", "cellResistance"] },
+  { legend: "Controller", names: ["currentLimit", "throttle"] },
+  { legend: "Reduction", names: ["gearRatio", "gearEfficiency"] },
+  { legend: { weapon: "Rotor", spinner: "Robot" }, names: ["inertia", "robotMass", "tipRadius", "impactors"] },
+  { legend: "Wheels and traction", names: SPINNER_ONLY, spinnerOnly: true },
+  { legend: "Resistive torques", names: ["frictionTorque", "dragTorque", "dragReferenceSpeed"] },
+  { legend: "Target", names: ["targetSpeed", "closingSpeed", "maxTime"] },
+];
+
+function Form({ model, id }: { model: SpinUpModel; id: string }) {
+  const { fields } = model;
+  const type = model.driveType.value;
+  const error = model.outcome.value.error;
+  return (
+    <form class="calc-form" onSubmit={(event) => event.preventDefault()} noValidate>
+      {GROUPS.map((group) => {
+        const legend = typeof group.legend === "string" ? group.legend : group.legend[type];
+        return (
+          <fieldset key={legend}>
+            <legend>{legend}</legend>
+            {group.spinnerOnly && type !== "spinner" ? (
+              <p class="field-help" data-out="wheels-note">
+                Only a whole-body spinner has these inputs; choose that drive type above to edit them.
+              </p>
+            ) : (
+              group.names.map((name) => (
+                <QuantityField
+                  key={name}
+                  idPrefix={id}
+                  name={name}
+                  spec={fields.specs[name]}
+                  text={fields.texts[name]}
+                  reading={fields.readings[name]}
+                  system={fields.system.value}
+                  extraError={error && error.field === name ? error.message : null}
+                />
+              ))
+            )}
+          </fieldset>
+        );
+      })}
+    </form>
+  );
+}
+
+export default function SpinUpCalculator({ id = spinUp.anchor }: SpinUpCalculatorProps) {
+  const model = useMemo(() => createSpinUpModel(), []);
+  useEffect(() => {
+    const stopUrl = syncWithUrl(model.link);
+    const stopSweeps = model.runSweeps();
+    return () => {
+      stopUrl();
+      stopSweeps();
+    };
+  }, [model]);
+  const type = model.driveType.value;
+  const { input, result, error } = model.outcome.value;
+  return (
+    <section class="calc" id={id} aria-label="Spin-up calculator">
+      <Notices notices={model.notices} />
+      <fieldset class="dt-choice">
+        <legend>Drive type</legend>
+        {DRIVE_TYPE_OPTIONS.map((option) => (
+          <label key={option.value}>
+            <input type="radio" name={`${id}-type`} value={option.value} checked={type === option.value} onChange={() => model.setDriveType(option.value)} />
+            <span>{option.label}</span>
+          </label>
+        ))}
+      </fieldset>
+      <Form model={model} id={id} />
+      {result && input ? (
+        <>
+          <Results r={result} input={input} system={model.fields.system.value} />
+          <SpinUpCharts r={result} input={input} />
+        </>
+      ) : (
+        <Empty error={error} />
+      )}
+      <Compare model={model} idPrefix={id} />
+      <Sweep model={model} idPrefix={id} />
+      <Toolbar idPrefix={id} system={model.fields.system} onSystem={model.setSystem} link={() => linkFor(model.link, id)} save={model.save} />
+    </section>
+  );
+}

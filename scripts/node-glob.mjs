@@ -1,0 +1,37 @@
+// A Node module hook that expands `import.meta.glob("./dir/*.ts", { eager: true })` the way the
+// bundler does, so calc/ modules that find their siblings by file name (calc/design/registry.ts)
+// also run under plain Node: the command line, scripts and benchmarks. Only the eager form with a
+// single `*` in the file name is supported, which is all calc/ uses.
+// Usage: `import { register } from "node:module"; register("./node-glob.mjs", import.meta.url);`
+// or `node --import ./scripts/node-glob-register.mjs …`.
+import { readdirSync } from "node:fs";
+import { fileURLToPath, pathToFileURL } from "node:url";
+import { dirname, join } from "node:path";
+
+const GLOB = /import\.meta\.glob(?:<[^>]*>)?\(\s*(["'])([^"']+)\1\s*,\s*\{\s*eager:\s*true\s*\}\s*\)/g;
+
+export async function load(url, context, nextLoad) {
+  const result = await nextLoad(url, context);
+  if (!url.startsWith("file:") || !/\.(ts|mts|js|mjs)$/.test(url)) return result;
+  const source = String(result.source ?? "");
+  if (!source.includes("import.meta.glob")) return result;
+  const here = dirname(fileURLToPath(url));
+  const imports = [];
+  const expanded = source.replace(GLOB, (_, _q, pattern) => {
+    const star = pattern.lastIndexOf("*");
+    if (star < 0 || pattern.indexOf("*") !== star || pattern.slice(0, star).includes("*")) throw new Error(`node-glob: unsupported pattern ${pattern}`);
+    const dir = pattern.slice(0, pattern.lastIndexOf("/", star) + 1);
+    const prefix = pattern.slice(dir.length, star);
+    const suffix = pattern.slice(star + 1);
+    const names = readdirSync(join(here, dir))
+      .filter((name) => name.startsWith(prefix) && name.endsWith(suffix) && name.length >= prefix.length + suffix.length)
+      .sort();
+    const entries = names.map((name) => {
+      const id = `__glob_${imports.length}`;
+      imports.push(`import * as ${id} from ${JSON.stringify(pathToFileURL(join(here, dir, name)).href)};`);
+      return `${JSON.stringify(dir + name)}: ${id}`;
+    });
+    return `{ ${entries.join(", ")} }`;
+  });
+  return { ...result, source: `${imports.join("\n")}\n${expanded}` };
+}
