@@ -342,7 +342,15 @@ export function bearingCheck(input: {
   const ratingLife = Number.isFinite(life) ? life : null;
   const hours = ratingLife === null ? null : (ratingLife * 1e6) / ((fields.angularSpeed / (2 * Math.PI)) * 3600); // iso-281: L10h = 10⁶·L10/(60·n)
   const staticFactors = bearingType === "ball" ? BALL_STATIC_FACTORS : { radialFactor: 1, axialFactor: 0 };
-  const staticEquivalentLoad = equivalentStaticLoad({ radialLoad: fields.shockRadialLoad, axialLoad, ...staticFactors });
+  const shock = fields.shockRadialLoad;
+  const staticEquivalentLoad = requireFiniteResult(
+    Math.max(shock, staticFactors.radialFactor * shock + staticFactors.axialFactor * axialLoad),
+    "static equivalent load",
+    {
+      shockRadialLoad: [shock, "N"],
+      axialLoad: [axialLoad, "N"],
+    },
+  ); // iso-76: P0r = max(F_r, X0·F_r + Y0·F_a)
   const s0 = fields.staticLoadRating / staticEquivalentLoad; // iso-76: s0 = C0/P0
   return {
     equivalentLoad,

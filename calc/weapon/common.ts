@@ -135,3 +135,12 @@ export function requireFiniteResult(result: number, what: string, inputs: Record
   const expected = Math.abs(value) >= 1 ? `small enough for the ${what} to stay finite` : `large enough for the ${what} to stay finite`;
   throw new CalcInputError({ param, value, expected, unit });
 }
+
+/**
+ * a/b, or null when the quotient is not finite (b is 0, or so small that the quotient passes the
+ * largest double): for ratios whose "infinite" end means "nothing comes near the limit".
+ */
+export function ratioOrNull(a: number, b: number): number | null {
+  const q = a / b;
+  return Number.isFinite(q) ? q : null;
+}

@@ -17,7 +17,7 @@ import { STANDARD_GRAVITY } from "../constants.ts";
 import { CalcInputError, requireFinite, requireNonNegative, requirePositive } from "../errors.ts";
 import { defineInputs } from "../inputs.ts";
 import { rpmToRadPerSecond } from "../units.ts";
-import { type ChoiceOption, requireDeclaredInputs, requireFiniteResult, requireInputObject, requireOption, type Verdict } from "./common.ts";
+import { type ChoiceOption, ratioOrNull, requireDeclaredInputs, requireFiniteResult, requireInputObject, requireOption, type Verdict } from "./common.ts";
 
 // ---------------------------------------------------------------------------------------------
 // Choices and direction words.
@@ -214,7 +214,15 @@ export function gyroscopicReaction(input: {
   const axle = requireOption("axle", fields.axle, AXLE_OPTIONS);
   const h = spinAxis(axle, fields.spin);
   const motion = requireOption("motion", fields.motion, ROBOT_MOTION_OPTIONS);
-  const moment = gyroscopicMoment({ inertia: fields.inertia, spinSpeed: fields.spinSpeed, turnRate: fields.rate });
+  const { inertia, spinSpeed, rate } = fields;
+  requirePositive("inertia", inertia, "kg·m²");
+  requireNonNegative("spinSpeed", spinSpeed, "rad/s");
+  requireNonNegative("rate", rate, "rad/s");
+  const moment = requireFiniteResult(inertia * spinSpeed * rate, "gyroscopic moment", {
+    inertia: [inertia, "kg·m²"],
+    spinSpeed: [spinSpeed, "rad/s"],
+    rate: [rate, "rad/s"],
+  }); // meriam-kraige-dynamics: |M| = IΩp
   const direction = motionOf(cross(h, MOTION_AXIS[motion])); // meriam-kraige-dynamics: robot feels H × ω
   return { moment: direction === null ? 0 : moment, effect: direction };
 }
@@ -791,12 +799,6 @@ export interface WeaponTurnCheck {
   governs: "turn" | "tilt" | null;
   /** One or two sentences: why. */
   reason: string;
-}
-
-/** a/b, or null when b is 0 or the quotient passes the largest double (nothing comes near the limit). */
-function ratioOrNull(a: number, b: number): number | null {
-  const q = a / b;
-  return Number.isFinite(q) ? q : null;
 }
 
 function ratioText(x: number): string {

@@ -16,7 +16,7 @@ import { defineInputs } from "../inputs.ts";
 import { isMaterialId, MATERIAL_IDS, MATERIALS, type MaterialId } from "../materials.ts";
 import { rpmToRadPerSecond } from "../units.ts";
 import { type BearingCheck, bearingCheck, BEARING_TYPE_OPTIONS, type BearingType, staticSafetyGuide } from "./bearings.ts";
-import { type ChoiceOption, requireDeclaredInputs, requireFiniteResult, requireInputObject, requireOption, type Verdict } from "./common.ts";
+import { type ChoiceOption, ratioOrNull, requireDeclaredInputs, requireFiniteResult, requireInputObject, requireOption, type Verdict } from "./common.ts";
 
 // ---------------------------------------------------------------------------------------------
 // Round sections and their stresses.
@@ -649,7 +649,7 @@ export interface ShaftCriterion {
   /** What is checked. */
   criterion: "shaft-yield" | "bearing-static" | "bearing-life";
   verdict: Verdict;
-  /** The figure judged: safety factor on yield, s0, or L10h ÷ required life [-]; null when there is no load. */
+  /** The figure judged: safety factor on yield, s0, or L10h ÷ required life [-]; null when there is no load (or too little for the figure to be a finite double). */
   value: number | null;
   /** Below this it fails [-]. */
   failBelow: number;
@@ -695,7 +695,7 @@ export interface WeaponShaftCheck {
   vonMisesStress: number;
   /** "fully-reversed" for a live shaft (rotating bending), "steady" for a dead one. */
   stressCycle: "fully-reversed" | "steady";
-  /** S_y / σ' [-]; null when nothing loads the shaft. */
+  /** S_y / σ' [-]; null when nothing loads the shaft (or the stress is so small the factor passes the largest double). */
   safetyFactor: number | null;
   /** Deflection of the shaft at the rotor, running and at the peak [m]. */
   deflection: { running: number; peak: number };
@@ -850,7 +850,7 @@ export function weaponShaftCheck(input: WeaponShaftInput): WeaponShaftCheck {
   const sigma = bendingStress({ moment: peak.moment, diameter: v.shaftDiameter, bore: v.shaftBore });
   const tau = torsionalStress({ torque, diameter: v.shaftDiameter, bore: v.shaftBore });
   const sigmaVm = vonMisesStress({ bendingStress: sigma, shearStress: tau });
-  const safety = sigmaVm > 0 ? material.yieldStrength / sigmaVm : null; // safety-factor-practice: n = S_y/σ'
+  const safety = ratioOrNull(material.yieldStrength, sigmaVm); // safety-factor-practice: n = S_y/σ'
 
   // Bearings: at the supports of a live shaft, in the hub of a dead one.
   const hubLoad = (P: number) => P / 2 + gyroscopic / v.hubBearingSpacing; // khurmi-gupta-theory-of-machines: F = C/x on each bearing
@@ -873,6 +873,7 @@ export function weaponShaftCheck(input: WeaponShaftInput): WeaponShaftCheck {
   });
   const guide = staticSafetyGuide({ bearingType, loading: "shock", requirements: "normal" });
   const requiredLifeHours = v.requiredLife / 3600;
+  const lifeRatio = check.ratingLifeHours === null ? null : ratioOrNull(check.ratingLifeHours, requiredLifeHours);
 
   const criteria: ShaftCriterion[] = [
     {
@@ -891,10 +892,10 @@ export function weaponShaftCheck(input: WeaponShaftInput): WeaponShaftCheck {
     },
     {
       criterion: "bearing-life",
-      value: check.ratingLifeHours === null ? null : check.ratingLifeHours / requiredLifeHours,
+      value: lifeRatio,
       failBelow: 1,
       marginalBelow: LIFE_THIN_FACTOR,
-      verdict: verdictOf(check.ratingLifeHours === null ? null : check.ratingLifeHours / requiredLifeHours, 1, LIFE_THIN_FACTOR),
+      verdict: verdictOf(lifeRatio, 1, LIFE_THIN_FACTOR),
     },
   ];
   const closeness = (c: ShaftCriterion) => (c.value === null ? Number.POSITIVE_INFINITY : c.value / c.marginalBelow);
