@@ -363,7 +363,7 @@ export interface WeaponHit {
  * @example
  * weaponHit(DEMO_HIT) // → { tipSpeed: 75.4, bite: 0.0075, impact: { impulse: 95.5, … }, force: { average: 1.5e5, peak: 3.0e5, … } }
  * Sources: beer-johnston-dynamics, hibbeler-eccentric-impact, weapon-bite, hyperphysics-work-energy,
- * linear-contact-model, lalanne-mechanical-shock.
+ * linear-contact-model, lalanne-mechanical-shock, openstax-university-physics-1.
  */
 export function weaponHit(input: WeaponHitInput): WeaponHit {
   const v = requireDeclaredInputs(weaponHitInputs, input);

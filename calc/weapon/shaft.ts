@@ -253,7 +253,7 @@ export interface SpanCouple {
  * Assumptions: as `simplySupportedPointLoad`.
  * @example
  * simplySupportedCouple({ moment: 60, span: 0.06, position: 0.02, youngsModulus: 200e9, secondMoment: 1.0179e-9 })
- * // → { reaction: 1000, momentBeforeCouple: 20, momentAfterCouple: 40, deflectionAtCouple: 1.31e-6 }
+ * // → { reaction: 1000, momentBeforeCouple: 20, momentAfterCouple: 40, deflectionAtCouple: 2.62e-5 }
  * Sources: shigley-beam-deflection-table, roark-beam-formulas.
  */
 export function simplySupportedCouple(input: { moment: number; span: number; position: number; youngsModulus: number; secondMoment: number }): SpanCouple {
@@ -350,7 +350,7 @@ export interface OverhangCouple {
  * that support), carried to the tip as θ·c, plus the overhang's own bending M·c²/(2EI).
  * @example
  * overhungCouple({ moment: 20, span: 0.04, overhang: 0.02, youngsModulus: 200e9, secondMoment: 1.0179e-9 })
- * // → { reaction: 500, momentAtNearSupport: 20, tipDeflection: 2.29e-5 }
+ * // → { reaction: 500, momentAtNearSupport: 20, tipDeflection: 4.58e-5 }
  * Sources: shigley-beam-deflection-table, roark-beam-formulas.
  */
 export function overhungCouple(input: { moment: number; span: number; overhang: number; youngsModulus: number; secondMoment: number }): OverhangCouple {
