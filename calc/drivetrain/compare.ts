@@ -4,7 +4,8 @@
  */
 import { CalcInputError, requireInRange } from "../core/errors.ts";
 import type { InputSpec } from "../core/inputs.ts";
-import { type DrivetrainInput, type DrivetrainParameter, SI_SYMBOL, drivetrainInputs, requireWhole, validateDrivetrainInput } from "./inputs.ts";
+import { type DrivetrainInput, type DrivetrainParameter, drivetrainInputs, validateDrivetrainInput } from "./inputs.ts";
+import { requireWhole, siSymbol } from "../core/spec-check.ts";
 import type { SpinUpOptions, SpinUpResult, SpinUpVerdict } from "./results.ts";
 import { simulateSpinUp } from "./simulate.ts";
 
@@ -112,7 +113,7 @@ export function sweepValues({
 }): number[] {
   const name = requireParameter(parameter);
   const spec: InputSpec = drivetrainInputs[name];
-  const unit = SI_SYMBOL[spec.kind] ?? "";
+  const unit = siSymbol(spec);
   const range = { min: spec.min, max: spec.max, minOpen: spec.minOpen };
   requireInRange("from", from, unit, range);
   requireInRange("to", to, unit, range);

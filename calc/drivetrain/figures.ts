@@ -3,7 +3,7 @@
  * acceleration a traction or current limit allows. SI: kg·m², rad/s, m, m/s, J, N·m.
  */
 import { requireFinite, requireInRange, requireNonNegative, requirePositive } from "../core/errors.ts";
-import { requireWhole } from "./inputs.ts";
+import { requireWhole } from "../core/spec-check.ts";
 
 // ---------------------------------------------------------------------------------------------
 // Closed-form figures at a speed.

@@ -3,9 +3,10 @@
  * every motor, battery, controller, reduction, load and wheel figure, declared once with their
  * ranges, defaults and URL keys; and the check of a whole input against them.
  */
-import { CalcInputError, requireInRange, requireRelation } from "../core/errors.ts";
-import { defineInputs, type InputSpec } from "../core/inputs.ts";
-import { rpmToRadPerSecond, type QuantityKind } from "../core/units.ts";
+import { CalcInputError, requireRelation } from "../core/errors.ts";
+import { requireWithinSpecs } from "../core/spec-check.ts";
+import { defineInputs } from "../core/inputs.ts";
+import { rpmToRadPerSecond } from "../core/units.ts";
 
 // ---------------------------------------------------------------------------------------------
 // Inputs.
@@ -329,37 +330,6 @@ export type DrivetrainInput = DrivetrainNumericInput & {
 /** A numeric input the sweep can vary. */
 export type DrivetrainParameter = keyof typeof drivetrainInputs;
 
-export const SI_SYMBOL: Partial<Record<QuantityKind, string>> = {
-  length: "m",
-  mass: "kg",
-  angularSpeed: "rad/s",
-  time: "s",
-  speed: "m/s",
-  torque: "N·m",
-  inertia: "kg·m²",
-  voltage: "V",
-  current: "A",
-  resistance: "Ω",
-  motorVelocityConstant: "rad/(s·V)",
-  fraction: "",
-  count: "",
-};
-
-/** Checks a whole number within [min, max] (param names the input). @internal */
-export function requireWhole(param: string, value: number, min: number, max: number): number {
-  requireInRange(param, value, "", { min, max });
-  if (!Number.isInteger(value)) throw new CalcInputError({ param, value, expected: "a whole number", unit: "" });
-  return value;
-}
-
-function requireDeclared(name: DrivetrainParameter, value: number): number {
-  const spec: InputSpec = drivetrainInputs[name];
-  const unit = SI_SYMBOL[spec.kind] ?? "";
-  requireInRange(name, value, unit, { min: spec.min, max: spec.max, minOpen: spec.minOpen });
-  if (spec.integer && !Number.isInteger(value)) throw new CalcInputError({ param: name, value, expected: "a whole number", unit });
-  return value;
-}
-
 /**
  * Checks a spin-up input: every numeric field in its declared range, the drive type one of the
  * options, and the sliding coefficient at most the grip coefficient. Throws `CalcInputError`
@@ -370,7 +340,7 @@ export function validateDrivetrainInput(input: DrivetrainInput): { driveType: Dr
     throw new CalcInputError({ param: "input", value: input, expected: "an object of spin-up inputs", unit: "" });
   }
   const driveType = requireDriveType(input.driveType);
-  for (const name of Object.keys(drivetrainInputs) as DrivetrainParameter[]) requireDeclared(name, input[name]);
+  requireWithinSpecs(drivetrainInputs, input);
   if (driveType === "spinner")
     requireRelation("kineticFriction", input.kineticFriction, "at-most", input.staticFriction, { kind: "fraction", unit: "", other: "staticFriction" });
   return { driveType };

@@ -21,7 +21,8 @@ import { requireInRange } from "../core/errors.ts";
 import { STANDARD_GRAVITY } from "../core/constants.ts";
 import { Dopri5 } from "./dopri5.ts";
 import { biteDepth, rotorKineticEnergy, rotorTipSpeed, tractionLimitedAcceleration } from "./figures.ts";
-import { type DrivetrainInput, requireWhole, validateDrivetrainInput } from "./inputs.ts";
+import { type DrivetrainInput, validateDrivetrainInput } from "./inputs.ts";
+import { requireWhole } from "../core/spec-check.ts";
 import {
   LOCKED,
   MAX_SWITCHES,

@@ -4,6 +4,7 @@
  * bolts yield and break, and a verdict. Re-exported by calc/loads.ts. SI in and out.
  */
 import { CalcInputError, requireInRange, requireNonNegative, requirePositive } from "../core/errors.ts";
+import { requireDeclared } from "../core/spec-check.ts";
 import { defineInputs } from "../core/inputs.ts";
 import type { PartLoad } from "../rotation/rotation.ts";
 import { STANDARD_GRAVITY } from "../core/constants.ts";
@@ -19,7 +20,6 @@ import {
 import {
   safetyThresholdInputs,
   requireChoice,
-  requireDeclared,
   requireMarginalAtLeastFail,
   requirePointCount,
   safetyFactor,
@@ -219,7 +219,7 @@ export function fastenerStrengths({
 }): FastenerStrengths {
   const strengths = propertyClassRow(classId);
   const mode = requireChoice("mode", modeId, LOADING_MODE_OPTIONS);
-  requireDeclared(fastenerCheckInputs, "shearRatio", shearRatio);
+  requireDeclared(fastenerCheckInputs.shearRatio, "shearRatio", shearRatio);
   return mode === "tension"
     ? { yieldStrength: strengths.yieldStrengthMin, ultimateStrength: strengths.tensileStrengthMin } // iso-898-1 Table 3
     : {
@@ -262,13 +262,13 @@ export function fastenerCheck(input: FastenerCheckInput): FastenerCheck {
   const classId = requireChoice("propertyClass", input.propertyClass, PROPERTY_CLASS_OPTIONS);
   const mode = requireChoice("mode", input.mode, LOADING_MODE_OPTIONS);
   const shearPlane = requireChoice("shearPlane", input.shearPlane ?? FASTENER_CHOICE_DEFAULTS.shearPlane, SHEAR_PLANE_OPTIONS);
-  const partMass = requireDeclared(fastenerCheckInputs, "partMass", input.partMass);
-  const radius = requireDeclared(fastenerCheckInputs, "radius", input.radius);
-  const angularSpeed = requireDeclared(fastenerCheckInputs, "angularSpeed", input.angularSpeed);
-  const count = requireDeclared(fastenerCheckInputs, "count", input.count);
-  const shearRatio = requireDeclared(fastenerCheckInputs, "shearRatio", input.shearRatio);
-  const failBelow = requireDeclared(fastenerCheckInputs, "failBelow", input.failBelow);
-  const marginalBelow = requireDeclared(fastenerCheckInputs, "marginalBelow", input.marginalBelow);
+  const partMass = requireDeclared(fastenerCheckInputs.partMass, "partMass", input.partMass);
+  const radius = requireDeclared(fastenerCheckInputs.radius, "radius", input.radius);
+  const angularSpeed = requireDeclared(fastenerCheckInputs.angularSpeed, "angularSpeed", input.angularSpeed);
+  const count = requireDeclared(fastenerCheckInputs.count, "count", input.count);
+  const shearRatio = requireDeclared(fastenerCheckInputs.shearRatio, "shearRatio", input.shearRatio);
+  const failBelow = requireDeclared(fastenerCheckInputs.failBelow, "failBelow", input.failBelow);
+  const marginalBelow = requireDeclared(fastenerCheckInputs.marginalBelow, "marginalBelow", input.marginalBelow);
   requireMarginalAtLeastFail(failBelow, marginalBelow);
 
   const thread = metricThread(size);

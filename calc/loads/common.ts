@@ -4,10 +4,8 @@
  * declaration. Used by the bolt check (loads-bolts.ts) and the rim check (loads-rims.ts); the
  * public face of the topic is calc/loads.ts. SI in and out.
  */
-import { CalcInputError, requireFinite, requireInRange, requirePositive, requireRelation } from "../core/errors.ts";
-import type { InputSpecs } from "../core/inputs.ts";
+import { CalcInputError, requireInRange, requirePositive, requireRelation } from "../core/errors.ts";
 export { requireChoice, type ChoiceOption } from "../core/choices.ts";
-import type { QuantityKind } from "../core/units.ts";
 
 // ---------------------------------------------------------------------------------------------
 // Safety factor, verdict and limit speed (shared by the bolt and the rim checks).
@@ -118,31 +116,6 @@ export function speedAtStress({ angularSpeed, stress, strength }: { angularSpeed
 
 // ---------------------------------------------------------------------------------------------
 // Input validation against a declaration.
-
-const SI_UNIT: Partial<Record<QuantityKind, string>> = {
-  mass: "kg",
-  length: "m",
-  angularSpeed: "rad/s",
-  stress: "Pa",
-  density: "kg/m³",
-  fraction: "",
-  count: "",
-};
-
-/** Throws a `CalcInputError` naming `name` unless `value` lies in the declared range of `specs[name]`. */
-export function requireDeclared<T extends InputSpecs>(specs: T, name: keyof T & string, value: number): number {
-  const spec = specs[name]!;
-  const unit = SI_UNIT[spec.kind] ?? "";
-  requireFinite(name, value, unit);
-  const lowOk = spec.minOpen ? value > spec.min : value >= spec.min;
-  if (!lowOk || !(value <= spec.max) || (spec.integer === true && !Number.isInteger(value))) {
-    const shown = (bound: number) => `${Number(bound.toPrecision(6))}${unit ? ` ${unit}` : ""}`;
-    const low = `${spec.minOpen ? "greater than" : "at least"} ${shown(spec.min)}`;
-    const expected = `${spec.integer ? "a whole number " : ""}${low} and at most ${shown(spec.max)}`;
-    throw new CalcInputError({ param: name, value, expected, unit });
-  }
-  return value;
-}
 
 /** Throws a `CalcInputError` naming "points" unless it is a whole number from 2 to 1000. */
 export function requirePointCount(points: number): void {

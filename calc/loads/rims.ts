@@ -4,13 +4,13 @@
  * it yields and is estimated to burst, and a verdict. Re-exported by calc/loads.ts. SI in and out.
  */
 import { requireInRange, requireNonNegative, requirePositive, requireRelation } from "../core/errors.ts";
+import { requireDeclared } from "../core/spec-check.ts";
 import { defineInputs } from "../core/inputs.ts";
 import { rpmToRadPerSecond } from "../core/units.ts";
 import type { MaterialId } from "../materials/materials.ts";
 import {
   safetyThresholdInputs,
   requireChoice,
-  requireDeclared,
   requireMarginalAtLeastFail,
   requirePointCount,
   safetyFactor,
@@ -456,15 +456,15 @@ function peakStresses(
  */
 export function rimCheck(input: RimCheckInput): RimCheck {
   const shape = requireChoice("shape", input.shape, RIM_SHAPE_OPTIONS);
-  const outerRadius = requireDeclared(rimCheckInputs, "outerRadius", input.outerRadius);
-  requireDeclared(rimCheckInputs, "innerRadius", input.innerRadius);
-  const density = requireDeclared(rimCheckInputs, "density", input.density);
-  const yieldStrength = requireDeclared(rimCheckInputs, "yieldStrength", input.yieldStrength);
-  const ultimateStrength = requireDeclared(rimCheckInputs, "ultimateStrength", input.ultimateStrength);
-  const poisson = requireDeclared(rimCheckInputs, "poisson", input.poisson);
-  const angularSpeed = requireDeclared(rimCheckInputs, "angularSpeed", input.angularSpeed);
-  const failBelow = requireDeclared(rimCheckInputs, "failBelow", input.failBelow);
-  const marginalBelow = requireDeclared(rimCheckInputs, "marginalBelow", input.marginalBelow);
+  const outerRadius = requireDeclared(rimCheckInputs.outerRadius, "outerRadius", input.outerRadius);
+  requireDeclared(rimCheckInputs.innerRadius, "innerRadius", input.innerRadius);
+  const density = requireDeclared(rimCheckInputs.density, "density", input.density);
+  const yieldStrength = requireDeclared(rimCheckInputs.yieldStrength, "yieldStrength", input.yieldStrength);
+  const ultimateStrength = requireDeclared(rimCheckInputs.ultimateStrength, "ultimateStrength", input.ultimateStrength);
+  const poisson = requireDeclared(rimCheckInputs.poisson, "poisson", input.poisson);
+  const angularSpeed = requireDeclared(rimCheckInputs.angularSpeed, "angularSpeed", input.angularSpeed);
+  const failBelow = requireDeclared(rimCheckInputs.failBelow, "failBelow", input.failBelow);
+  const marginalBelow = requireDeclared(rimCheckInputs.marginalBelow, "marginalBelow", input.marginalBelow);
   requireMarginalAtLeastFail(failBelow, marginalBelow);
   requireRelation("yieldStrength", yieldStrength, "at-most", ultimateStrength, { kind: "stress", unit: "Pa", other: "ultimateStrength" });
   if (shape === "annular-disk") requireBore(input.innerRadius, outerRadius);

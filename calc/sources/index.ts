@@ -7,6 +7,7 @@ import { HEADING_SOURCES } from "./heading.ts";
 import { MASS_SOURCES } from "./mass.ts";
 import { LOADS_SOURCES } from "./loads.ts";
 import { DRIVETRAIN_SOURCES } from "./drivetrain.ts";
+import { WEAPON_SOURCES } from "./weapon.ts";
 
 export type { Source };
 
@@ -55,6 +56,7 @@ export const SOURCES = {
   ...MASS_SOURCES,
   ...LOADS_SOURCES,
   ...DRIVETRAIN_SOURCES,
+  ...WEAPON_SOURCES,
 } as const satisfies Record<string, Source>;
 
 export type SourceKey = keyof typeof SOURCES;

@@ -145,7 +145,9 @@ describe("rotational kinetic energy, tip speed and bite", () => {
 
   it("refuses a bite at zero speed and a fractional impactor count", () => {
     expect(() => biteDepth({ closingSpeed: 3, angularSpeed: 0, impactors: 2 })).toThrowError("angularSpeed must be greater than 0 rad/s (got 0 rad/s)");
-    expect(() => biteDepth({ closingSpeed: 3, angularSpeed: 100, impactors: 1.5 })).toThrowError("impactors must be a whole number (got 1.5)");
+    expect(() => biteDepth({ closingSpeed: 3, angularSpeed: 100, impactors: 1.5 })).toThrowError(
+      "impactors must be a whole number at least 1 and at most 1000 (got 1.5)",
+    );
   });
 });
 
@@ -559,7 +561,7 @@ describe("design comparison", () => {
       "from must be at least 0.05 and at most 100 (got 0)",
     );
     expect(() => sweepDrivetrain({ base: DEMO_WEAPON, parameter: "gearRatio", from: 1, to: 2, points: 1 })).toThrowError(
-      "points must be at least 2 and at most 200 (got 1)",
+      "points must be a whole number at least 2 and at most 200 (got 1)",
     );
   });
 });
@@ -603,7 +605,7 @@ describe("input declarations", () => {
 
   it("names the unit in range errors", () => {
     expect(() => simulateSpinUp({ ...DEMO_WEAPON, currentLimit: 0 })).toThrowError("currentLimit must be greater than 0 A and at most 1000 A (got 0 A)");
-    expect(() => simulateSpinUp({ ...DEMO_WEAPON, cellCount: 3.5 })).toThrowError("cellCount must be a whole number (got 3.5)");
+    expect(() => simulateSpinUp({ ...DEMO_WEAPON, cellCount: 3.5 })).toThrowError("cellCount must be a whole number at least 1 and at most 24 (got 3.5)");
   });
 
   it("refuses every invalid input with a CalcInputError naming it (fast-check)", () => {
@@ -625,7 +627,7 @@ describe("input declarations", () => {
   });
 
   it("refuses bad run options", () => {
-    expect(() => simulateSpinUp(DEMO_WEAPON, { maxPoints: 1 })).toThrowError("maxPoints must be at least 2 and at most 5000 (got 1)");
+    expect(() => simulateSpinUp(DEMO_WEAPON, { maxPoints: 1 })).toThrowError("maxPoints must be a whole number at least 2 and at most 5000 (got 1)");
     expect(() => simulateSpinUp(DEMO_WEAPON, { relativeTolerance: 0.1 })).toThrowError(CalcInputError);
   });
 });

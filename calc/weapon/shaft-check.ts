@@ -1,0 +1,581 @@
+/**
+ * The calculator "weapon shaft and bearings": its inputs, its entry `weaponShaftCheck` (the loads
+ * on the shaft from the gyroscopic moment, the residual unbalance, the rotor's weight and a hit;
+ * bending stress and deflection for the layout; the bearings' rating life and static safety; with
+ * a verdict naming what governs) and an invented demo.
+ */
+import { STANDARD_GRAVITY } from "../core/constants.ts";
+import { CalcInputError } from "../core/errors.ts";
+import { defineInputs } from "../core/inputs.ts";
+import { isMaterialId, MATERIAL_IDS, MATERIALS, type MaterialId } from "../materials/materials.ts";
+import { rpmToRadPerSecond } from "../core/units.ts";
+import { type BearingCheck, bearingCheck, BEARING_TYPE_OPTIONS, type BearingType, staticSafetyGuide } from "./bearings.ts";
+import { ratioOrNull, requireWithinSpecs as requireDeclaredInputs, requireInputObject } from "../core/spec-check.ts";
+import { type ChoiceOption, requireChoice as requireOption } from "../core/choices.ts";
+import type { LoadVerdict as Verdict } from "../loads/common.ts";
+import { overhungCouple, overhungPointLoad, simplySupportedCouple, simplySupportedPointLoad } from "./beams.ts";
+import { type RoundSection, bendingStress, roundSection, torsionalStress, vonMisesStress } from "./shaft.ts";
+
+// The calculator: weapon shaft and bearings.
+
+/** Where the rotor sits on its shaft. */
+export const SHAFT_LAYOUT_OPTIONS = [
+  { value: "between", label: "Rotor between two supports" },
+  { value: "overhung", label: "Rotor overhung beyond the nearer support" },
+] as const satisfies readonly ChoiceOption[];
+
+export type ShaftLayout = (typeof SHAFT_LAYOUT_OPTIONS)[number]["value"];
+
+/** Whether the shaft turns. */
+export const SHAFT_KIND_OPTIONS = [
+  { value: "dead", label: "Dead shaft: held by the frame, the rotor turns on its own bearings" },
+  { value: "live", label: "Live shaft: turns with the rotor, in bearings at the supports" },
+] as const satisfies readonly ChoiceOption[];
+
+export type ShaftKind = (typeof SHAFT_KIND_OPTIONS)[number]["value"];
+
+/** Which way the shaft points (decides whether the rotor's weight bends the shaft or pushes along it). */
+export const SHAFT_AXLE_OPTIONS = [
+  { value: "horizontal", label: "Horizontal shaft (vertical disc, drum, bar)" },
+  { value: "vertical", label: "Vertical shaft (horizontal spinner)" },
+] as const satisfies readonly ChoiceOption[];
+
+export type ShaftAxle = (typeof SHAFT_AXLE_OPTIONS)[number]["value"];
+
+/** The shaft materials: every row of calc/materials.ts. */
+export const SHAFT_MATERIAL_OPTIONS: readonly ChoiceOption<MaterialId>[] = MATERIAL_IDS.map((id) => ({
+  value: id,
+  label: `${MATERIALS[id].name}, ${MATERIALS[id].condition}`,
+}));
+
+/** Choice defaults of the shaft check (the numeric defaults are in `weaponShaftInputs`). */
+export const WEAPON_SHAFT_CHOICE_DEFAULTS = {
+  layout: "between",
+  shaft: "dead",
+  axle: "horizontal",
+  bearingType: "ball",
+  material: "steel-4340-qt650",
+} as const satisfies { layout: ShaftLayout; shaft: ShaftKind; axle: ShaftAxle; bearingType: BearingType; material: MaterialId };
+
+/** Life the rolling bearings should reach below which the margin is called thin, as a multiple of the required life (a choice; 2 on life is 1.26 on load for ball bearings). */
+export const LIFE_THIN_FACTOR = 2;
+
+/**
+ * Numeric inputs of the shaft check, in SI. Choices: `SHAFT_LAYOUT_OPTIONS`, `SHAFT_KIND_OPTIONS`,
+ * `SHAFT_AXLE_OPTIONS`, `BEARING_TYPE_OPTIONS`, `SHAFT_MATERIAL_OPTIONS`. Defaults: the invented
+ * `DEMO_SHAFT`.
+ */
+export const weaponShaftInputs = defineInputs({
+  rotorMass: { label: "Rotor mass", kind: "mass", min: 0.001, max: 500, default: 2.5, urlKey: "mr", help: "Everything that turns with the weapon." },
+  rotorInertia: {
+    label: "Rotor inertia",
+    kind: "inertia",
+    min: 1e-7,
+    max: 50,
+    default: 0.010125,
+    urlKey: "J",
+    help: "Moment of inertia of the rotor about its spin axis.",
+  },
+  weaponSpeed: {
+    label: "Weapon speed",
+    kind: "angularSpeed",
+    min: rpmToRadPerSecond(10),
+    max: rpmToRadPerSecond(100000),
+    default: rpmToRadPerSecond(8000),
+    urlKey: "rpm",
+    help: "Spin speed while running; it sets the unbalance force and the bearings' life in hours.",
+  },
+  turnRate: {
+    label: "Turn rate of the axle",
+    kind: "angularSpeed",
+    min: 0,
+    max: 200,
+    default: 2 * Math.PI,
+    unit: { metric: "deg/s", us: "deg/s" },
+    urlKey: "yaw",
+    help: "How fast the shaft's direction changes: the robot's yaw rate for a horizontal shaft, its pitch or roll rate for a vertical one.",
+  },
+  unbalance: {
+    label: "Residual unbalance",
+    kind: "unbalance",
+    min: 0,
+    max: 1,
+    default: 2e-5,
+    urlKey: "U",
+    help: "Mass times offset of the rotor's centre of mass from the spin axis (the mass-layout chapter computes it).",
+  },
+  impactForce: {
+    label: "Peak force of a hit",
+    kind: "force",
+    min: 0,
+    max: 1e7,
+    default: 8000,
+    urlKey: "Fi",
+    help: "The largest force a hit puts on the rotor, across the shaft (the hit calculator estimates it).",
+  },
+  motorTorque: {
+    label: "Motor torque through the shaft",
+    kind: "torque",
+    min: 0,
+    max: 1e4,
+    default: 1.5,
+    urlKey: "T",
+    help: "Torque the shaft carries from the drive to the rotor; read for a live shaft only.",
+  },
+  bearingSpan: {
+    label: "Support span",
+    kind: "length",
+    min: 0.002,
+    max: 2,
+    default: 0.06,
+    urlKey: "L",
+    help: "Distance between the shaft's two supports: the bearings of a live shaft, the frame mounts of a dead one.",
+  },
+  rotorPosition: {
+    label: "Rotor position",
+    kind: "length",
+    min: 0,
+    max: 2,
+    default: 0.03,
+    urlKey: "a",
+    help: "Rotor between the supports: from the first support to the rotor's mid-plane, at most the span.",
+  },
+  overhang: {
+    label: "Overhang",
+    kind: "length",
+    min: 0.0005,
+    max: 2,
+    default: 0.02,
+    urlKey: "c",
+    help: "Overhung rotor: from the nearer support to the rotor's mid-plane.",
+  },
+  hubBearingSpacing: {
+    label: "Rotor bearing spacing",
+    kind: "length",
+    min: 0.001,
+    max: 1,
+    default: 0.02,
+    urlKey: "s",
+    help: "Dead shaft: distance between the two bearings inside the rotor's hub; they carry the gyroscopic moment as a force pair.",
+  },
+  shaftDiameter: {
+    label: "Shaft diameter",
+    kind: "length",
+    min: 0.001,
+    max: 0.5,
+    default: 0.012,
+    urlKey: "d",
+    help: "Outer diameter where the bending moment is largest.",
+  },
+  shaftBore: { label: "Shaft bore", kind: "length", min: 0, max: 0.5, default: 0, urlKey: "di", help: "Inner diameter of a hollow shaft; 0 for a solid one." },
+  dynamicLoadRating: {
+    label: "Bearing dynamic load rating C",
+    kind: "force",
+    min: 1,
+    max: 1e7,
+    default: 5400,
+    urlKey: "C",
+    help: "Basic dynamic load rating of one bearing, from its maker's table.",
+  },
+  staticLoadRating: {
+    label: "Bearing static load rating C0",
+    kind: "force",
+    min: 1,
+    max: 1e7,
+    default: 2360,
+    urlKey: "C0",
+    help: "Basic static load rating of one bearing, from its maker's table.",
+  },
+  axialLoad: {
+    label: "Axial load on the bearings",
+    kind: "force",
+    min: 0,
+    max: 1e7,
+    default: 0,
+    urlKey: "Fa",
+    help: "Thrust along the shaft (a vertical rotor's weight is added to it). Roller bearings are taken to carry none.",
+  },
+  radialFactor: {
+    label: "Radial load factor X",
+    kind: "fraction",
+    min: 0.1,
+    max: 2,
+    default: 1,
+    unit: { metric: "frac", us: "frac" },
+    urlKey: "X",
+    help: "From the bearing table for your axial-to-radial ratio; 1 for a purely radial load.",
+  },
+  axialFactor: {
+    label: "Axial load factor Y",
+    kind: "fraction",
+    min: 0,
+    max: 5,
+    default: 0,
+    unit: { metric: "frac", us: "frac" },
+    urlKey: "Y",
+    help: "From the bearing table for your axial-to-radial ratio; 0 for a purely radial load.",
+  },
+  requiredLife: {
+    label: "Required bearing life",
+    kind: "time",
+    min: 60,
+    max: 1e9,
+    default: 20 * 3600,
+    urlKey: "life",
+    help: "Running time the bearings should last at the weapon speed (20 h is 72 000 s).",
+  },
+  failBelow: {
+    label: "Fails below",
+    kind: "fraction",
+    min: 1,
+    max: 10,
+    default: 1,
+    unit: { metric: "frac", us: "frac" },
+    urlKey: "fail",
+    help: "Shaft safety factor on yield under which the shaft is called a failure.",
+  },
+  marginalBelow: {
+    label: "Thin below",
+    kind: "fraction",
+    min: 1,
+    max: 20,
+    default: 2,
+    unit: { metric: "frac", us: "frac" },
+    urlKey: "thin",
+    help: "Shaft safety factor on yield under which the margin is flagged as thin.",
+  },
+});
+
+export type WeaponShaftInput = { [K in keyof typeof weaponShaftInputs]: number } & {
+  /** A value of `SHAFT_LAYOUT_OPTIONS`. */
+  layout: string;
+  /** A value of `SHAFT_KIND_OPTIONS`. */
+  shaft: string;
+  /** A value of `SHAFT_AXLE_OPTIONS`. */
+  axle: string;
+  /** A value of `BEARING_TYPE_OPTIONS`. */
+  bearingType: string;
+  /** A value of `SHAFT_MATERIAL_OPTIONS`. */
+  material: string;
+};
+
+/** A criterion of the shaft check with its verdict. */
+export interface ShaftCriterion {
+  /** What is checked. */
+  criterion: "shaft-yield" | "bearing-static" | "bearing-life";
+  verdict: Verdict;
+  /** The figure judged: safety factor on yield, s0, or L10h ÷ required life [-]; null when there is no load (or too little for the figure to be a finite double). */
+  value: number | null;
+  /** Below this it fails [-]. */
+  failBelow: number;
+  /** Below this the margin is thin [-]. */
+  marginalBelow: number;
+}
+
+/** The result of `weaponShaftCheck`. */
+export interface WeaponShaftCheck {
+  layout: ShaftLayout;
+  shaft: ShaftKind;
+  axle: ShaftAxle;
+  bearingType: BearingType;
+  material: { id: MaterialId; name: string; condition: string; basis: "typical" | "minimum"; yieldStrength: number; youngsModulus: number };
+  loads: {
+    /** U·Ω² [N]. */
+    unbalanceForce: number;
+    /** m·g [N]; across the shaft when horizontal, along it when vertical. */
+    weight: number;
+    /** The hit [N]. */
+    impactForce: number;
+    /** Running load across the shaft at the rotor, unbalance + weight (horizontal) [N]. */
+    runningForce: number;
+    /** Running load plus the hit [N]. */
+    peakForce: number;
+    /** J·Ω·q [N·m]. */
+    gyroscopicMoment: number;
+    /** Axial load on the bearings: the input plus the weight of a vertical rotor [N]. */
+    axialLoad: number;
+    /** Motor torque carried (0 for a dead shaft) [N·m]. */
+    torque: number;
+  };
+  /** Support reactions (bearings of a live shaft, frame mounts of a dead one), running and at the peak of a hit [N]. */
+  supports: { first: { running: number; peak: number }; second: { running: number; peak: number } };
+  /** Largest bending moment (at the rotor, or at the near support when overhung), running and peak [N·m]. */
+  bendingMoment: { running: number; peak: number };
+  section: RoundSection;
+  /** Bending stress at the peak [Pa]. */
+  bendingStress: number;
+  /** Torsional stress (live shaft) [Pa]. */
+  torsionalStress: number;
+  /** Von Mises stress at the peak [Pa]. */
+  vonMisesStress: number;
+  /** "fully-reversed" for a live shaft (rotating bending), "steady" for a dead one. */
+  stressCycle: "fully-reversed" | "steady";
+  /** S_y / σ' [-]; null when nothing loads the shaft (or the stress is so small the factor passes the largest double). */
+  safetyFactor: number | null;
+  /** Deflection of the shaft at the rotor, running and at the peak [m]. */
+  deflection: { running: number; peak: number };
+  /** Radial loads on the two bearings (live: at the supports; dead: in the rotor's hub), running and at the peak [N]. */
+  bearingLoads: { first: { running: number; peak: number }; second: { running: number; peak: number } };
+  /** The more heavily loaded bearing's checks (iso-281, iso-76). */
+  bearing: BearingCheck & { requiredLifeHours: number; staticSafetyGuide: number };
+  criteria: ShaftCriterion[];
+  verdict: Verdict;
+  /** The criterion that decides the verdict. */
+  governs: ShaftCriterion["criterion"];
+  reason: string;
+}
+
+function verdictOf(value: number | null, failBelow: number, marginalBelow: number): Verdict {
+  if (value === null) return "holds";
+  return value < failBelow ? "fails" : value < marginalBelow ? "marginal" : "holds";
+}
+
+const SEVERITY: Record<Verdict, number> = { holds: 0, marginal: 1, fails: 2 };
+
+/**
+ * The weapon shaft and its bearings while the weapon runs and when it hits: loads, support and
+ * bearing reactions, bending moment, stresses, deflection at the rotor, safety factor on yield,
+ * ISO 281 life and ISO 76 static safety, with a verdict naming what governs
+ * (shigley-beam-deflection-table, roark-beam-formulas, shigley-bending-torsion,
+ * shigley-distortion-energy, meriam-kraige-dynamics, rigid-rotor-unbalance, iso-281, iso-76,
+ * bearing-static-safety-guide, safety-factor-practice).
+ *
+ * Formula: $F_u = U\Omega^2$, $W = m g$, $M_g = J\Omega q$, $P = F_u + W + F_{hit}$;
+ * between: $M = \dfrac{P a b}{L} + \dfrac{M_g \max(a,b)}{L}$, $y = \dfrac{P a^2 b^2}{3EIL} + \dfrac{M_g a b |b-a|}{3EIL}$;
+ * overhung: $M = P c + M_g$, $y = \dfrac{P c^2 (L+c)}{3EI} + \dfrac{M_g c (2L+3c)}{6EI}$;
+ * $\sigma = \dfrac{32 M d}{\pi(d^4 - d_i^4)}$, $\tau = \dfrac{16 T d}{\pi(d^4 - d_i^4)}$, $\sigma' = \sqrt{\sigma^2 + 3\tau^2}$, $n = S_y/\sigma'$;
+ * bearings: live $R$ = support reactions; dead $R = P/2 + M_g/s$; $L_{10} = (C/P)^p$, $s_0 = C_0/P_0$
+ *
+ * @param input the numeric fields of `weaponShaftInputs` (SI) plus `layout`, `shaft`, `axle`, `bearingType`, `material`
+ * @returns loads, reactions, moment, stresses, deflection, safety factor, bearing life and static safety, the criteria with their verdicts, and the verdict with what governs and why
+ *
+ * Verdict: the worst of three criteria (ties: the one closest to its threshold):
+ * - shaft yield: n = S_y/σ' at the peak of a hit, fails below `failBelow`, thin below `marginalBelow`;
+ * - bearing static safety under the hit: s0 below 1 fails (the raceways dent), below the guideline
+ *   for rotating bearings under pronounced shock with normal requirements (1.5 ball, 3 roller) thin;
+ * - bearing life in running (no hit): L10h below the required life fails, below `LIFE_THIN_FACTOR`
+ *   times it thin.
+ *
+ * Assumptions:
+ * - Every transverse load (unbalance, weight, hit) acts in one plane and they add, and the
+ *   gyroscopic couple adds to them with the sign that hurts: the worst case, since the unbalance
+ *   force turns and the others point where the robot's motion puts them.
+ * - The rotor acts at one point (its mid-plane); the supports are simple (free to tilt); the shaft
+ *   is uniform, slender (shear deflection and transverse shear stress ignored), linear elastic.
+ * - Dead shaft: the rotor's centre of mass lies midway between its two hub bearings, which share
+ *   the transverse load equally and carry the gyroscopic couple as a force pair over their spacing.
+ *   Strictly the unbalance share of the stress turns with the rotor and so alternates.
+ * - Live shaft: bending stress is fully reversed every turn, so FATIGUE governs its long-term life:
+ *   this check is against yield only; check the endurance limit (with surface, size and notch
+ *   factors) separately. The torque is the motor's steady torque, not a torque spike from a hit.
+ * - Both bearings have the same ratings; the axial load (with a vertical rotor's weight) is taken
+ *   by each bearing in its check (conservative: usually one bearing locates the shaft).
+ * - Strength: the material table's yield strength, typical or specified minimum as its basis says.
+ * - Not checked: shaft slope at the bearings, keyways and shoulders (stress concentration), the
+ *   critical (whirling) speed, fretting of the bearing seats.
+ * @example
+ * weaponShaftCheck(DEMO_SHAFT) // → { verdict: "fails", governs: "bearing-static", … } (see the demo)
+ * Sources: shigley-beam-deflection-table, roark-beam-formulas, shigley-bending-torsion,
+ * shigley-distortion-energy, meriam-kraige-dynamics, rigid-rotor-unbalance, iso-281, iso-76,
+ * bearing-static-safety-guide, safety-factor-practice, cgpm-1901.
+ */
+export function weaponShaftCheck(input: WeaponShaftInput): WeaponShaftCheck {
+  const fields = requireInputObject(input);
+  const layout = requireOption("layout", fields.layout, SHAFT_LAYOUT_OPTIONS);
+  const shaft = requireOption("shaft", fields.shaft, SHAFT_KIND_OPTIONS);
+  const axle = requireOption("axle", fields.axle, SHAFT_AXLE_OPTIONS);
+  const bearingType = requireOption("bearingType", fields.bearingType, BEARING_TYPE_OPTIONS);
+  if (typeof fields.material !== "string" || !isMaterialId(fields.material)) {
+    throw new CalcInputError({ param: "material", value: fields.material, expected: `one of ${MATERIAL_IDS.map((id) => `"${id}"`).join(", ")}`, unit: "" });
+  }
+  const materialId = fields.material;
+  const v = requireDeclaredInputs(weaponShaftInputs, fields);
+  if (layout === "between" && !(v.rotorPosition <= v.bearingSpan)) {
+    throw new CalcInputError({
+      param: "rotorPosition",
+      value: v.rotorPosition,
+      expected: `at most the support span (${Number(v.bearingSpan.toPrecision(6))} m) for a rotor between the supports`,
+      unit: "m",
+    });
+  }
+  if (!(v.shaftBore < v.shaftDiameter)) {
+    throw new CalcInputError({
+      param: "shaftBore",
+      value: v.shaftBore,
+      expected: `less than the shaft diameter (${Number(v.shaftDiameter.toPrecision(6))} m)`,
+      unit: "m",
+    });
+  }
+  if (!(v.marginalBelow >= v.failBelow)) {
+    throw new CalcInputError({ param: "marginalBelow", value: v.marginalBelow, expected: `at least the fail threshold, ${v.failBelow}`, unit: "" });
+  }
+  const weightOnAxle = axle === "vertical" ? v.rotorMass * STANDARD_GRAVITY : 0;
+  const axialLoad = v.axialLoad + weightOnAxle;
+  if (bearingType === "roller" && axialLoad > 0) {
+    throw new CalcInputError({
+      param: "bearingType",
+      value: bearingType,
+      expected:
+        '"ball" when the bearings carry an axial load (here the axial input or a vertical rotor\'s weight): cylindrical roller bearings are taken to carry none, so give the thrust its own bearing',
+      unit: "",
+    });
+  }
+
+  const material = MATERIALS[materialId];
+  const E = material.youngsModulus;
+  const section = roundSection({ diameter: v.shaftDiameter, bore: v.shaftBore });
+  const I = section.secondMoment;
+
+  // Loads.
+  const unbalanceForce = v.unbalance * v.weaponSpeed * v.weaponSpeed; // rigid-rotor-unbalance: F = U·ω²
+  const weight = v.rotorMass * STANDARD_GRAVITY; // cgpm-1901: W = m·g_n
+  const runningForce = unbalanceForce + (axle === "horizontal" ? weight : 0);
+  const peakForce = runningForce + v.impactForce;
+  const gyroscopic = v.rotorInertia * v.weaponSpeed * v.turnRate; // meriam-kraige-dynamics: M = I·Ω·p
+  const torque = shaft === "live" ? v.motorTorque : 0;
+
+  // Beam: supports, largest moment, deflection at the rotor, for a transverse force P with the couple.
+  const beam = (P: number) => {
+    if (layout === "between") {
+      const span = v.bearingSpan;
+      const a = v.rotorPosition;
+      const b = span - a;
+      const point = simplySupportedPointLoad({ force: P, span, position: a, youngsModulus: E, secondMoment: I });
+      const couple = simplySupportedCouple({ moment: gyroscopic, span, position: a, youngsModulus: E, secondMoment: I });
+      return {
+        first: point.leftReaction + couple.reaction,
+        second: point.rightReaction + couple.reaction,
+        moment: point.momentAtLoad + (a >= b ? couple.momentBeforeCouple : couple.momentAfterCouple), // worst side of the jump
+        deflection: point.deflectionAtLoad + couple.deflectionAtCouple,
+      };
+    }
+    const point = overhungPointLoad({ force: P, span: v.bearingSpan, overhang: v.overhang, youngsModulus: E, secondMoment: I });
+    const couple = overhungCouple({ moment: gyroscopic, span: v.bearingSpan, overhang: v.overhang, youngsModulus: E, secondMoment: I });
+    return {
+      first: point.farReaction + couple.reaction,
+      second: point.nearReaction + couple.reaction,
+      moment: point.momentAtNearSupport + couple.momentAtNearSupport,
+      deflection: point.tipDeflection + couple.tipDeflection,
+    };
+  };
+  const running = beam(runningForce);
+  const peak = beam(peakForce);
+
+  // Stresses at the peak.
+  const sigma = bendingStress({ moment: peak.moment, diameter: v.shaftDiameter, bore: v.shaftBore });
+  const tau = torsionalStress({ torque, diameter: v.shaftDiameter, bore: v.shaftBore });
+  const sigmaVm = vonMisesStress({ bendingStress: sigma, shearStress: tau });
+  const safety = ratioOrNull(material.yieldStrength, sigmaVm); // safety-factor-practice: n = S_y/σ'
+
+  // Bearings: at the supports of a live shaft, in the hub of a dead one.
+  const hubLoad = (P: number) => P / 2 + gyroscopic / v.hubBearingSpacing; // khurmi-gupta-theory-of-machines: F = C/x on each bearing
+  const bearingLoads =
+    shaft === "live"
+      ? { first: { running: running.first, peak: peak.first }, second: { running: running.second, peak: peak.second } }
+      : { first: { running: hubLoad(runningForce), peak: hubLoad(peakForce) }, second: { running: hubLoad(runningForce), peak: hubLoad(peakForce) } };
+  const heavier = bearingLoads.first.peak >= bearingLoads.second.peak ? bearingLoads.first : bearingLoads.second;
+  const heavierRunning = Math.max(bearingLoads.first.running, bearingLoads.second.running);
+  const check = bearingCheck({
+    bearingType,
+    dynamicLoadRating: v.dynamicLoadRating,
+    staticLoadRating: v.staticLoadRating,
+    radialLoad: heavierRunning,
+    shockRadialLoad: heavier.peak,
+    axialLoad,
+    radialFactor: v.radialFactor,
+    axialFactor: v.axialFactor,
+    angularSpeed: v.weaponSpeed,
+  });
+  const guide = staticSafetyGuide({ bearingType, loading: "shock", requirements: "normal" });
+  const requiredLifeHours = v.requiredLife / 3600;
+  const lifeRatio = check.ratingLifeHours === null ? null : ratioOrNull(check.ratingLifeHours, requiredLifeHours);
+
+  const criteria: ShaftCriterion[] = [
+    {
+      criterion: "shaft-yield",
+      value: safety,
+      failBelow: v.failBelow,
+      marginalBelow: v.marginalBelow,
+      verdict: verdictOf(safety, v.failBelow, v.marginalBelow),
+    },
+    {
+      criterion: "bearing-static",
+      value: check.staticSafetyFactor,
+      failBelow: 1,
+      marginalBelow: guide,
+      verdict: verdictOf(check.staticSafetyFactor, 1, guide),
+    },
+    {
+      criterion: "bearing-life",
+      value: lifeRatio,
+      failBelow: 1,
+      marginalBelow: LIFE_THIN_FACTOR,
+      verdict: verdictOf(lifeRatio, 1, LIFE_THIN_FACTOR),
+    },
+  ];
+  const closeness = (c: ShaftCriterion) => (c.value === null ? Number.POSITIVE_INFINITY : c.value / c.marginalBelow);
+  const governing = criteria.reduce((worst, c) =>
+    SEVERITY[c.verdict] > SEVERITY[worst.verdict] || (SEVERITY[c.verdict] === SEVERITY[worst.verdict] && closeness(c) < closeness(worst)) ? c : worst,
+  );
+
+  const result: WeaponShaftCheck = {
+    layout,
+    shaft,
+    axle,
+    bearingType,
+    material: {
+      id: materialId,
+      name: material.name,
+      condition: material.condition,
+      basis: material.basis,
+      yieldStrength: material.yieldStrength,
+      youngsModulus: material.youngsModulus,
+    },
+    loads: { unbalanceForce, weight, impactForce: v.impactForce, runningForce, peakForce, gyroscopicMoment: gyroscopic, axialLoad, torque },
+    supports: { first: { running: running.first, peak: peak.first }, second: { running: running.second, peak: peak.second } },
+    bendingMoment: { running: running.moment, peak: peak.moment },
+    section,
+    bendingStress: sigma,
+    torsionalStress: tau,
+    vonMisesStress: sigmaVm,
+    stressCycle: shaft === "live" ? "fully-reversed" : "steady",
+    safetyFactor: safety,
+    deflection: { running: running.deflection, peak: peak.deflection },
+    bearingLoads,
+    bearing: { ...check, requiredLifeHours, staticSafetyGuide: guide },
+    criteria,
+    verdict: governing.verdict,
+    governs: governing.criterion,
+    reason: "",
+  };
+  result.reason = shaftReason(result, governing);
+  return result;
+}
+
+function figure(x: number): string {
+  return Number(x.toPrecision(2)).toString();
+}
+
+function shaftReason(r: WeaponShaftCheck, c: ShaftCriterion): string {
+  const basis = r.material.basis === "typical" ? " (typical strength: the specified minimum can be lower)" : "";
+  if (c.value === null) return "Nothing loads the shaft or the bearings.";
+  switch (c.criterion) {
+    case "shaft-yield": {
+      const cycle = r.stressCycle === "fully-reversed" ? "; the live shaft's bending is fully reversed, so check fatigue too" : "";
+      if (c.verdict === "fails")
+        return `The shaft yields at the peak of a hit: safety factor ${figure(c.value)} on yield${basis}, below ${figure(c.failBelow)}.`;
+      if (c.verdict === "marginal")
+        return `The shaft's safety factor on yield at the peak of a hit is ${figure(c.value)}${basis}, below ${figure(c.marginalBelow)}${cycle}.`;
+      return `Every check holds; the closest is the shaft, at a safety factor of ${figure(c.value)} on yield at the peak of a hit${basis}${cycle}.`;
+    }
+    case "bearing-static":
+      if (c.verdict === "fails") return `A hit overloads the bearings: static safety factor s0 = ${figure(c.value)}, below 1, so the raceways dent.`;
+      if (c.verdict === "marginal")
+        return `The bearings' static safety factor under a hit is ${figure(c.value)}, below the guideline of ${figure(c.marginalBelow)} for shock loads.`;
+      return `Every check holds; the closest is the bearings' static safety factor under a hit, ${figure(c.value)} against a guideline of ${figure(c.marginalBelow)}.`;
+    case "bearing-life":
+      if (c.verdict === "fails") return `The bearings' rating life is ${figure(c.value)} times the life required: fewer than 90 % of them would last.`;
+      if (c.verdict === "marginal") return `The bearings' rating life is only ${figure(c.value)} times the life required.`;
+      return `Every check holds; the closest is the bearings' rating life, ${figure(c.value)} times the life required.`;
+  }
+}

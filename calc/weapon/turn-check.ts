@@ -1,0 +1,462 @@
+import { defineInputs } from "../core/inputs.ts";
+import { rpmToRadPerSecond } from "../core/units.ts";
+import { ratioOrNull, requireWithinSpecs as requireDeclaredInputs, requireInputObject } from "../core/spec-check.ts";
+import { requireChoice as requireOption } from "../core/choices.ts";
+import type { LoadVerdict as Verdict } from "../loads/common.ts";
+import {
+  AXLE_OPTIONS,
+  type AxleOrientation,
+  HORIZONTAL_SPIN_OPTIONS,
+  type HorizontalSpin,
+  type RobotMotion,
+  VERTICAL_SPIN_OPTIONS,
+  type VerticalSpin,
+  angularMomentum,
+  bearingForcePair,
+  gyroscopicMoment,
+  gyroscopicReaction,
+} from "./gyroscopic.ts";
+import { precessionRate } from "./precession.ts";
+import { type TurnLift, driveTurnRateLimit, liftTurnRate, requireComInsideTrack, weightRestoringMoment } from "./tipping.ts";
+
+// The calculator: turning with a spinning weapon.
+
+/** Choice defaults of the turn check (the numeric defaults are in `weaponTurnInputs`). */
+export const WEAPON_TURN_CHOICE_DEFAULTS = { axle: "horizontal", horizontalSpin: "front-up", verticalSpin: "counterclockwise" } as const satisfies {
+  axle: AxleOrientation;
+  horizontalSpin: HorizontalSpin;
+  verticalSpin: VerticalSpin;
+};
+
+/** Default lift margin: the robot should lift only at 1.5 times the fastest turn it can make (a choice, see the help text). */
+export const DEFAULT_LIFT_MARGIN = 1.5;
+
+/**
+ * Numeric inputs of the turn check, in SI. Choices: `AXLE_OPTIONS`, `HORIZONTAL_SPIN_OPTIONS`,
+ * `VERTICAL_SPIN_OPTIONS`. Defaults: the invented demo robot of `DEMO_VERTICAL_SPINNER_TURN`.
+ */
+export const weaponTurnInputs = defineInputs({
+  rotorInertia: {
+    label: "Rotor inertia",
+    kind: "inertia",
+    min: 1e-7,
+    max: 50,
+    default: 0.010125,
+    urlKey: "J",
+    help: "Moment of inertia of everything that spins, about the spin axis (for a whole-body spinner, the whole robot).",
+  },
+  weaponSpeed: {
+    label: "Weapon speed",
+    kind: "angularSpeed",
+    min: rpmToRadPerSecond(10),
+    max: rpmToRadPerSecond(100000),
+    default: rpmToRadPerSecond(8000),
+    urlKey: "rpm",
+    help: "The spin speed while you drive.",
+  },
+  robotMass: {
+    label: "Robot mass",
+    kind: "mass",
+    min: 0.05,
+    max: 1000,
+    default: 13.6,
+    urlKey: "m",
+    help: "The whole robot, weapon included.",
+  },
+  trackWidth: {
+    label: "Track width",
+    kind: "length",
+    min: 0.01,
+    max: 5,
+    default: 0.28,
+    urlKey: "t",
+    help: "From the left wheels' ground contact to the right wheels' ground contact.",
+  },
+  comHeight: {
+    label: "Centre-of-mass height",
+    kind: "length",
+    min: 0,
+    max: 2,
+    default: 0.045,
+    urlKey: "h",
+    help: "Height of the whole robot's centre of mass above the ground.",
+  },
+  comOffset: {
+    label: "Centre-of-mass offset to the left",
+    kind: "length",
+    min: -2.5,
+    max: 2.5,
+    default: 0,
+    urlKey: "yc",
+    help: "How far the centre of mass sits left of the centreline between the wheels (negative: to the right). It must lie between the wheels.",
+  },
+  forwardSpeed: {
+    label: "Forward speed while turning",
+    kind: "speed",
+    min: -50,
+    max: 50,
+    default: 1,
+    urlKey: "v",
+    help: "Speed along the path while turning (negative when reversing); a turn at speed adds a centrifugal moment. At most the wheels' top speed.",
+  },
+  wheelTopSpeed: {
+    label: "Wheel top speed",
+    kind: "speed",
+    min: 0.01,
+    max: 50,
+    default: 3.5,
+    urlKey: "vw",
+    help: "The drive's top ground speed; spinning in place, the wheels run at this speed in opposite directions.",
+  },
+  turnRate: {
+    label: "Turn rate",
+    kind: "angularSpeed",
+    min: 0,
+    max: 200,
+    default: rpmToRadPerSecond(60),
+    unit: { metric: "deg/s", us: "deg/s" },
+    urlKey: "yaw",
+    help: "A yaw rate you want the numbers for, e.g. your transmitter's turn-rate limit or a measured turn; checked in both directions.",
+  },
+  tiltRate: {
+    label: "Pitch or roll rate",
+    kind: "angularSpeed",
+    min: 0,
+    max: 200,
+    default: 3,
+    unit: { metric: "deg/s", us: "deg/s" },
+    urlKey: "tilt",
+    help: "How fast the robot tips when lifted by a wedge, hit from below or landing. For a vertical axle, pitching rolls the robot.",
+  },
+  bearingSpan: {
+    label: "Bearing span",
+    kind: "length",
+    min: 0.002,
+    max: 2,
+    default: 0.05,
+    urlKey: "L",
+    help: "Distance between the two bearings that carry the weapon; the gyroscopic moment loads them as an opposite pair of forces.",
+  },
+  tiltingMoment: {
+    label: "Tilting moment",
+    kind: "torque",
+    min: 0,
+    max: 1e5,
+    default: 20,
+    urlKey: "Mt",
+    help: "A moment trying to tip the spinning axis, e.g. a hit below the centre of mass: it makes the spinner precess.",
+  },
+  precessionAngle: {
+    label: "Precession angle",
+    kind: "angle",
+    min: 0,
+    minOpen: true,
+    max: 2 * Math.PI,
+    default: Math.PI / 12,
+    urlKey: "ang",
+    help: "The angle through which the precession time is reported.",
+  },
+  liftMargin: {
+    label: "Lift margin",
+    kind: "fraction",
+    min: 1,
+    max: 10,
+    default: DEFAULT_LIFT_MARGIN,
+    unit: { metric: "frac", us: "frac" },
+    urlKey: "mg",
+    help: "How many times the fastest turn (or tilt) the wheels should stay down for: between 1 and this the margin is called thin.",
+  },
+});
+
+export type WeaponTurnInput = { [K in keyof typeof weaponTurnInputs]: number } & {
+  /** A value of `AXLE_OPTIONS`. */
+  axle: string;
+  /** A value of `HORIZONTAL_SPIN_OPTIONS`; read for a horizontal axle only. */
+  horizontalSpin: string;
+  /** A value of `VERTICAL_SPIN_OPTIONS`; read for a vertical axle or a whole-body spinner only. */
+  verticalSpin: string;
+};
+
+/** The turn part of the check (not made for a whole-body spinner). */
+export interface WeaponTurnSection {
+  /** The turn rate entered [rad/s]. */
+  turnRate: number;
+  /** Gyroscopic moment at that turn rate: J·Ω·ψ̇ for a horizontal axle, 0 for a vertical one [N·m]. */
+  gyroscopicMoment: number;
+  /** What that moment does while turning left (turning right does the opposite); null for a vertical axle. */
+  gyroscopicEffectTurningLeft: RobotMotion | null;
+  /** Centrifugal overturning moment at that turn rate and the forward speed, m·|v|·ψ̇·h [N·m]. */
+  centrifugalMoment: number;
+  /** Force pair on the weapon's bearings at that turn rate [N]. */
+  bearingForce: number;
+  /** Turning left and turning right at the forward speed. */
+  left: TurnLift;
+  right: TurnLift;
+  /** The lower of the two lift turn rates [rad/s]; null when no turn lifts a wheel. */
+  liftTurnRate: number | null;
+  /** The turn that lifts first; null when none does. */
+  liftTurn: "left" | "right" | null;
+  /** Fastest turn the drive reaches at the forward speed, 2(v_max − |v|)/t [rad/s]. */
+  driveTurnRate: number;
+  /** Fastest turn in place, 2·v_max/t [rad/s]. */
+  driveTurnRateInPlace: number;
+  /** True when the turn rate entered lifts a wheel in at least one direction. */
+  turnRateLifts: boolean;
+  /** True when the drive's fastest turn lifts a wheel in at least one direction. */
+  driveTurnLifts: boolean;
+  /** Lift turn rate ÷ the larger of the drive's turn rate and the turn rate entered [-]; null when none lifts or neither turns (or the quotient passes the largest double). */
+  margin: number | null;
+}
+
+/** The tilt part: what a pitch or roll rate does. */
+export interface WeaponTiltSection {
+  /** The pitch or roll rate entered [rad/s]. */
+  tiltRate: number;
+  /** J·Ω·rate [N·m]. */
+  moment: number;
+  /** Force pair on the weapon's bearings [N]; null for a whole-body spinner (no weapon bearings). */
+  bearingForce: number | null;
+  /** What the moment does when the nose rises. */
+  whenNoseRises: RobotMotion | null;
+  /** What the moment does when the left side rises. */
+  whenLeftSideRises: RobotMotion | null;
+  /** Vertical axes only: the pitch rate at which the roll it causes lifts a side, m·g·(t/2 − |y_c|)/(J·Ω) [rad/s]; null for a horizontal axle (it yaws instead). */
+  liftTiltRate: number | null;
+  /** Lift pitch rate ÷ the rate entered [-]; null when not applicable or the rate is 0 (or so small the quotient passes the largest double). */
+  margin: number | null;
+}
+
+/** The result of `weaponTurnCheck`. */
+export interface WeaponTurnCheck {
+  axle: AxleOrientation;
+  /** The spin direction read (horizontal or vertical option, by axle). */
+  spin: HorizontalSpin | VerticalSpin;
+  /** H = J·Ω [N·m·s]. */
+  angularMomentum: number;
+  /** Null for a whole-body spinner. */
+  turn: WeaponTurnSection | null;
+  tilt: WeaponTiltSection;
+  precession: {
+    /** The tilting moment entered [N·m]. */
+    tiltingMoment: number;
+    /** Ω_p = M/(J·Ω) [rad/s]. */
+    rate: number;
+    /** The angle entered [rad]. */
+    angle: number;
+    /** Time to precess through it [s]; null when the moment is 0 (or so small the time passes the largest double). */
+    time: number | null;
+  };
+  verdict: Verdict;
+  /** Which check decides the verdict; null when nothing lifts. */
+  governs: "turn" | "tilt" | null;
+  /** One or two sentences: why. */
+  reason: string;
+}
+
+function ratioText(x: number): string {
+  return Number(x.toPrecision(2)).toString();
+}
+
+/**
+ * Turning with a spinning weapon: the gyroscopic and centrifugal moments at a turn, the turn rate
+ * at which a wheel lifts (each way) against the turn rate the drive can reach, what a pitch or
+ * roll does, the bearing force pair, and how fast a tilted spinner precesses
+ * (meriam-kraige-dynamics, khurmi-gupta-theory-of-machines, gillespie-vehicle-dynamics,
+ * siegwart-autonomous-mobile-robots, dudek-jenkin-mobile-robotics).
+ *
+ * Formula: $M_g = J\Omega\dot\psi$, $\dot\psi_{lift} = \dfrac{m g (t/2 \pm y_c)}{|s J\Omega + m v h|}$,
+ * $\dot\psi_{drive} = \dfrac{2(v_{max} - |v|)}{t}$, $F = M/L$, $\Omega_p = \dfrac{M_t}{J\Omega}$
+ *
+ * @param input the numeric fields of `weaponTurnInputs` (SI) plus `axle`, `horizontalSpin`, `verticalSpin`
+ * @returns the turn section (horizontal and vertical axles), the tilt and precession sections, a verdict, what governs it and the reason
+ *
+ * Verdict (thresholds: 1 and `liftMargin`):
+ * - turn (horizontal and vertical axles): margin = lowest lift turn rate ÷ the larger of the
+ *   drive's fastest turn at the forward speed and the turn rate entered;
+ * - tilt (vertical axle and whole body): margin = lift pitch rate ÷ the pitch rate entered;
+ * - the smaller margin governs: at most 1 "fails" (a full-speed turn, or the rate entered, lifts
+ *   a wheel), below `liftMargin` "marginal", otherwise "holds" (also when nothing lifts).
+ * Assumptions: as `liftTurnRate` and `precessionRate`; for a vertical axle, turning makes no
+ * gyroscopic moment (the turn is about the spin axis) and only the centrifugal moment can lift a
+ * wheel in a turn; the lift pitch rate treats the robot as if all four corners were still on the
+ * ground, so it is an estimate. Not modelled: bumps, the robot's roll inertia, tyre slip.
+ * @example
+ * weaponTurnCheck(DEMO_VERTICAL_SPINNER_TURN) // → { verdict: "fails", governs: "turn", … } (see the demo)
+ * Sources: meriam-kraige-dynamics, khurmi-gupta-theory-of-machines, gillespie-vehicle-dynamics,
+ * siegwart-autonomous-mobile-robots, dudek-jenkin-mobile-robotics.
+ */
+export function weaponTurnCheck(input: WeaponTurnInput): WeaponTurnCheck {
+  const fields = requireInputObject(input);
+  const axle = requireOption("axle", fields.axle, AXLE_OPTIONS);
+  const spin =
+    axle === "horizontal"
+      ? requireOption("horizontalSpin", fields.horizontalSpin, HORIZONTAL_SPIN_OPTIONS)
+      : requireOption("verticalSpin", fields.verticalSpin, VERTICAL_SPIN_OPTIONS);
+  const v = requireDeclaredInputs(weaponTurnInputs, fields);
+  requireComInsideTrack(v.comOffset, v.trackWidth);
+  const J = v.rotorInertia;
+  const omega = v.weaponSpeed;
+  const angularMomentumValue = angularMomentum({ inertia: J, spinSpeed: omega });
+
+  // Turn section.
+  let turn: WeaponTurnSection | null = null;
+  if (axle !== "whole-body") {
+    const driveTurnRate = driveTurnRateLimit({ wheelTopSpeed: v.wheelTopSpeed, trackWidth: v.trackWidth, forwardSpeed: v.forwardSpeed });
+    const driveTurnRateInPlace = driveTurnRateLimit({ wheelTopSpeed: v.wheelTopSpeed, trackWidth: v.trackWidth });
+    // A vertical axle makes no gyroscopic moment in a turn (the turn is about the spin axis), so only
+    // the centrifugal moment is left: the spin is set to 0 for the roll moment.
+    const lift = (turnWay: "left" | "right"): TurnLift =>
+      axle === "horizontal"
+        ? liftTurnRate({
+            inertia: J,
+            spinSpeed: omega,
+            spin,
+            robotMass: v.robotMass,
+            trackWidth: v.trackWidth,
+            comHeight: v.comHeight,
+            comOffset: v.comOffset,
+            forwardSpeed: v.forwardSpeed,
+            turn: turnWay,
+          })
+        : liftTurnRate({
+            inertia: J,
+            spinSpeed: 0,
+            spin: "front-up",
+            robotMass: v.robotMass,
+            trackWidth: v.trackWidth,
+            comHeight: v.comHeight,
+            comOffset: v.comOffset,
+            forwardSpeed: v.forwardSpeed,
+            turn: turnWay,
+          });
+    const left = lift("left");
+    const right = lift("right");
+    const candidates = [left, right].filter((l) => l.liftTurnRate !== null);
+    const first = candidates.length === 0 ? null : candidates.reduce((a, b) => (b.liftTurnRate! < a.liftTurnRate! ? b : a));
+    const gyroscopic = axle === "horizontal" ? gyroscopicMoment({ inertia: J, spinSpeed: omega, turnRate: v.turnRate }) : 0;
+    const reference = Math.max(driveTurnRate, v.turnRate);
+    const lowest = first?.liftTurnRate ?? null;
+    turn = {
+      turnRate: v.turnRate,
+      gyroscopicMoment: gyroscopic,
+      gyroscopicEffectTurningLeft:
+        axle === "horizontal" ? gyroscopicReaction({ axle, spin, motion: "yaw-left", inertia: J, spinSpeed: omega, rate: 1 }).effect : null,
+      centrifugalMoment: v.robotMass * Math.abs(v.forwardSpeed) * v.turnRate * v.comHeight, // gillespie-vehicle-dynamics: m·v·ψ̇·h
+      bearingForce: bearingForcePair({ moment: gyroscopic, bearingSpan: v.bearingSpan }),
+      left,
+      right,
+      liftTurnRate: lowest,
+      liftTurn: first?.turn ?? null,
+      driveTurnRate,
+      driveTurnRateInPlace,
+      turnRateLifts: lowest !== null && v.turnRate >= lowest,
+      driveTurnLifts: lowest !== null && driveTurnRate >= lowest,
+      margin: lowest === null ? null : ratioOrNull(lowest, reference),
+    };
+  }
+
+  // Tilt section.
+  const tiltMoment = gyroscopicMoment({ inertia: J, spinSpeed: omega, turnRate: v.tiltRate });
+  const reactionTo = (motion: RobotMotion) => gyroscopicReaction({ axle, spin, motion, inertia: J, spinSpeed: omega, rate: 1 }).effect;
+  let liftTiltRate: number | null = null;
+  if (axle !== "horizontal") {
+    // khurmi-gupta-theory-of-machines: C = I·ω·ω_P about the roll axis; gillespie-vehicle-dynamics: lift at m·g·(t/2 − |y_c|)
+    const weakerSide = weightRestoringMoment({ robotMass: v.robotMass, trackWidth: v.trackWidth, comOffset: Math.abs(v.comOffset), side: "right" });
+    liftTiltRate = weakerSide / angularMomentumValue;
+  }
+  const tilt: WeaponTiltSection = {
+    tiltRate: v.tiltRate,
+    moment: tiltMoment,
+    bearingForce: axle === "whole-body" ? null : bearingForcePair({ moment: tiltMoment, bearingSpan: v.bearingSpan }),
+    whenNoseRises: reactionTo("nose-up"),
+    whenLeftSideRises: reactionTo("left-up"),
+    liftTiltRate,
+    margin: liftTiltRate === null ? null : ratioOrNull(liftTiltRate, v.tiltRate),
+  };
+
+  const rate = precessionRate({ moment: v.tiltingMoment, inertia: J, spinSpeed: omega });
+  const precession = {
+    tiltingMoment: v.tiltingMoment,
+    rate,
+    angle: v.precessionAngle,
+    // khurmi-gupta-theory-of-machines: t = θ/ω_P; null for no moment, or one so small the time passes the largest double
+    time: ratioOrNull(v.precessionAngle * angularMomentumValue, v.tiltingMoment),
+  };
+
+  // Verdict: the smaller margin governs.
+  const turnMargin = turn?.margin ?? null;
+  const tiltMargin = tilt.margin;
+  let governs: "turn" | "tilt" | null = null;
+  if (turnMargin !== null && (tiltMargin === null || turnMargin <= tiltMargin)) governs = "turn";
+  else if (tiltMargin !== null) governs = "tilt";
+  const margin = governs === "turn" ? turnMargin! : governs === "tilt" ? tiltMargin! : null;
+  const verdict: Verdict = margin === null ? "holds" : margin <= 1 ? "fails" : margin < v.liftMargin ? "marginal" : "holds";
+  return {
+    axle,
+    spin,
+    angularMomentum: angularMomentumValue,
+    turn,
+    tilt,
+    precession,
+    verdict,
+    governs,
+    reason: turnReason(verdict, governs, margin, turn, v.turnRate, v.liftMargin, axle),
+  };
+}
+
+function turnReason(
+  verdict: Verdict,
+  governs: "turn" | "tilt" | null,
+  margin: number | null,
+  turn: WeaponTurnSection | null,
+  turnRate: number,
+  liftMargin: number,
+  axle: AxleOrientation,
+): string {
+  if (governs === null || margin === null) {
+    return axle === "whole-body"
+      ? "Nothing entered tips the robot: with no pitch or roll rate, the spin makes no moment that could lift a side."
+      : "No turn and no tilt entered lifts a wheel: the moments either cancel or nothing turns.";
+  }
+  if (governs === "turn" && turn) {
+    const lifting = turn.liftTurn === "left" ? turn.left : turn.right;
+    const which = turn.driveTurnRate >= turnRate ? "the drive's fastest turn" : "the turn rate entered";
+    const what = `Turning ${turn.liftTurn} lifts the ${lifting.wheel} (${lifting.side}) wheels at ${ratioText(margin)} times ${which}`;
+    if (verdict === "fails") return `${what}: a full turn lifts a wheel.`;
+    if (verdict === "marginal") return `${what}: below the margin of ${ratioText(liftMargin)}, so a hard turn, a bump or a hit can lift a wheel.`;
+    return `${what}: the wheels stay down with the margin of ${ratioText(liftMargin)} or more.`;
+  }
+  const what = `A pitch at the rate entered rolls the robot; a side lifts at ${ratioText(margin)} times that rate`;
+  if (verdict === "fails") return `${what}: the pitch rate entered lifts a side.`;
+  if (verdict === "marginal") return `${what}: below the margin of ${ratioText(liftMargin)}.`;
+  return `${what}: the margin of ${ratioText(liftMargin)} is kept.`;
+}
+
+/**
+ * An invented scenario (no real robot): a 13.6 kg robot carrying a 2.5 kg, 180 mm steel disc
+ * (J = ½·m·r² = 0.010125 kg·m²) on a horizontal axle, front edge moving up at 8000 rpm; wheels
+ * 280 mm apart with a 3.5 m/s top speed; centre of mass 45 mm up, on the centreline; turning at
+ * 360 °/s while moving forward at 1 m/s; weapon bearings 50 mm apart. Result: H = 8.48 N·m·s;
+ * the outer wheels lift from 2.37 rad/s (136 °/s) either way, 0.13 of the 17.9 rad/s the drive
+ * reaches at 1 m/s, so the check fails: the weapon, not the drive, sets how fast this robot can
+ * turn. For the chapter's worked example.
+ */
+export const DEMO_VERTICAL_SPINNER_TURN: WeaponTurnInput = {
+  axle: "horizontal",
+  horizontalSpin: "front-up",
+  verticalSpin: "counterclockwise",
+  rotorInertia: 0.010125,
+  weaponSpeed: rpmToRadPerSecond(8000),
+  robotMass: 13.6,
+  trackWidth: 0.28,
+  comHeight: 0.045,
+  comOffset: 0,
+  forwardSpeed: 1,
+  wheelTopSpeed: 3.5,
+  turnRate: 2 * Math.PI,
+  tiltRate: 3,
+  bearingSpan: 0.05,
+  tiltingMoment: 20,
+  precessionAngle: Math.PI / 12,
+  liftMargin: DEFAULT_LIFT_MARGIN,
+};
