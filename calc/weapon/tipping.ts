@@ -7,8 +7,6 @@ import { STANDARD_GRAVITY } from "../core/constants.ts";
 import { CalcInputError, requireFinite, requireNonNegative, requirePositive } from "../core/errors.ts";
 import { requireFiniteResult, requireInputObject } from "../core/spec-check.ts";
 import { type ChoiceOption, requireChoice as requireOption } from "../core/choices.ts";
-/** How a checked design stands. */
-type Verdict = "holds" | "marginal" | "fails";
 import { type Side, spinAxis } from "./gyroscopic.ts";
 
 // Tipping while turning (horizontal axle across the robot).
