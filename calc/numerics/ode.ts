@@ -23,7 +23,8 @@
  * returned is the end of the final bracket that lies on the NEW side, so that after a restart g
  * is already past its zero and the same crossing is not found twice. Crossings inside one step
  * are handled in time order; the `onEvent` callback answers "continue" (nothing changed: go on
- * with the step), "restart" (the callback changed y in place or a mode the right-hand side reads:
+ * with the step; that event's g is read again at the step's end, so a callback may move its own
+ * event's zero, e.g. a revolution counter), "restart" (the callback changed y in place or a mode the right-hand side reads:
  * the step is cut at the event and integration restarts there with a fresh f(t, y)) or "stop".
  * A g that crosses zero twice inside one step is not seen; `maxStep` bounds that. A g that is
  * exactly 0 at the start (or where a restart leaves it) takes the side it moves to: no event there.
@@ -495,6 +496,14 @@ export class DormandPrince45 implements OdeStepView {
       }
       const t = this.t;
       const tTime = nextTimeEvent ? nextTimeEvent(t) : Number.POSITIVE_INFINITY;
+      if (tTime <= t + 16 * Number.EPSILON * Math.max(Math.abs(t), Math.abs(tEnd))) {
+        // Due now (within round-off of t, or a callback broke the "strictly after t" rule): fire it here.
+        this.steps++;
+        const action = fireTime();
+        if (action === "stop") status = "stopped";
+        else if (action === "restart") afterRestart();
+        continue;
+      }
       const stopAt = Math.min(tEnd, tTime);
       const hPlanned = h;
       let landing = false;
@@ -561,6 +570,11 @@ export class DormandPrince45 implements OdeStepView {
           this.denseAt(hitTheta[e]!, yEvent);
           eventCount++;
           const action = onEvent ? (onEvent({ index: e, t: tHit, direction: gNew[e]! > 0 ? 1 : -1 }, yEvent) ?? "restart") : "restart";
+          // The callback may have moved its own event's zero (a counter's next target): read g again at the step's end.
+          if (action === "continue") {
+            gNew[e] = events[e]!.g(t1, this.y1);
+            if (!Number.isFinite(gNew[e]!)) throw new OdeNonFiniteError({ t: t1, quantity: "event", index: e, value: gNew[e]! });
+          }
           if (action !== "continue") {
             cutAt = tHit;
             cutKind = 1;
@@ -571,7 +585,7 @@ export class DormandPrince45 implements OdeStepView {
       }
       if (cutKind === 0 && nextTimeEvent) {
         const tDue = nextTimeEvent(t);
-        if (tDue < t1 && tDue > t) {
+        if (tDue <= t1 && tDue > t) {
           cutAt = tDue;
           cutKind = 2;
         } else if (landing && t1 === tTime) {
