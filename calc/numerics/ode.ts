@@ -695,7 +695,10 @@ export class DormandPrince45 implements OdeStepView {
  *
  * Sources: dormand-prince-1980, hairer-norsett-wanner-1, hairer-dopri5-code, dowell-jarratt-1971.
  */
-export function solveOde({ rhs, t0, y0, tEnd, ...options }: { rhs: OdeRhs; t0: number; y0: ArrayLike<number>; tEnd: number } & OdeOptions): OdeResult {
+export function solveOde(problem: { rhs: OdeRhs; t0: number; y0: ArrayLike<number>; tEnd: number } & OdeOptions): OdeResult {
+  if (problem === null || typeof problem !== "object")
+    throw new CalcInputError({ param: "problem", value: problem, expected: "an object { rhs, t0, y0, tEnd, … }", unit: "" });
+  const { rhs, t0, y0, tEnd, ...options } = problem;
   if (y0 === null || typeof y0 !== "object" || !(y0.length >= 1)) {
     throw new CalcInputError({ param: "y0", value: y0 === null || typeof y0 !== "object" ? y0 : y0.length, expected: "a list of at least 1 number", unit: "" });
   }

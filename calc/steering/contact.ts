@@ -20,6 +20,7 @@
  * regularised as μF_N·V/√(V² + v_ε²) (the square-root regularisation of the Coulomb jump).
  */
 import { CalcInputError, requireFinite, requireNonNegative } from "../errors.ts";
+import { requireInputObject } from "./guard.ts";
 
 /** Regularisation speed v_ε [m/s] (see the module comment). */
 export const LOW_SPEED = 0.05;
@@ -68,14 +69,7 @@ export function brushForceInto(slipX: number, slipY: number, rollingSpeed: numbe
  *
  * Sources: pacejka-tyre-dynamics.
  */
-export function brushTyreForce({
-  slipVelocityX,
-  slipVelocityY,
-  rollingSpeed,
-  normalLoad,
-  frictionCoefficient,
-  slipStiffness,
-}: {
+export function brushTyreForce(input: {
   slipVelocityX: number;
   slipVelocityY: number;
   rollingSpeed: number;
@@ -83,6 +77,7 @@ export function brushTyreForce({
   frictionCoefficient: number;
   slipStiffness: number;
 }): { forceX: number; forceY: number; force: number; gripShare: number } {
+  const { slipVelocityX, slipVelocityY, rollingSpeed, normalLoad, frictionCoefficient, slipStiffness } = requireInputObject(input);
   requireFinite("slipVelocityX", slipVelocityX, "m/s");
   requireFinite("slipVelocityY", slipVelocityY, "m/s");
   requireFinite("rollingSpeed", rollingSpeed, "m/s");
@@ -95,7 +90,8 @@ export function brushTyreForce({
   const vs = Math.hypot(slipVelocityX, slipVelocityY);
   if (vs === 0 || limit === 0) return { forceX: 0, forceY: 0, force: 0, gripShare: 0 };
   const sigma = vs / Math.hypot(rollingSpeed, LOW_SPEED); // pacejka-tyre-dynamics: σ = |V_s|/V_r (may be Infinity: full sliding)
-  const u = slipStiffness === 0 || sigma === 0 ? 0 : (slipStiffness / (3 * limit)) * sigma; // θσ, θ = C/(3μF_z)
+  const product = (slipStiffness / (3 * limit)) * sigma; // θσ, θ = C/(3μF_z)
+  const u = Number.isNaN(product) ? 0 : product; // 0·∞ only when C/(3μF_z) underflows: no grip built up
   const gripShare = u >= 1 ? 1 : u * (3 - 3 * u + u * u); // pacejka-tyre-dynamics: 3θσ − 3(θσ)² + (θσ)³
   const force = limit * gripShare;
   return { forceX: -force * (slipVelocityX / vs), forceY: -force * (slipVelocityY / vs), force, gripShare };

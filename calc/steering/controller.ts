@@ -48,6 +48,9 @@ export class Modulator {
   direction: number;
   /** Offsets β of the distinct event functions (wheel angles, and wheel angles + π with the opposite window). */
   private readonly offsets: number[] = [];
+  /** For each wheel, the index of its add-window event and of its opposite-window event (−1 when unused). */
+  private readonly addEvent: Int32Array;
+  private readonly oppositeEvent: Int32Array;
   private readonly scheduled: Int8Array;
   private readonly target: Int8Array;
   private readonly qTime = new Float64Array(QUEUE);
@@ -74,13 +77,18 @@ export class Modulator {
     this.scheduled = new Int8Array(model.n);
     this.target = new Int8Array(model.n);
     const seen: number[] = [];
-    const add = (beta: number) => {
+    const indexOf = (beta: number): number => {
       const b = ((beta % (2 * Math.PI)) + 2 * Math.PI) % (2 * Math.PI);
-      if (!seen.some((x) => Math.abs(x - b) < 1e-9 || Math.abs(Math.abs(x - b) - 2 * Math.PI) < 1e-9)) seen.push(b);
+      const k = seen.findIndex((x) => Math.abs(x - b) < 1e-9 || Math.abs(Math.abs(x - b) - 2 * Math.PI) < 1e-9);
+      if (k >= 0) return k;
+      seen.push(b);
+      return seen.length - 1;
     };
+    this.addEvent = new Int32Array(model.n);
+    this.oppositeEvent = new Int32Array(model.n).fill(-1);
     for (let i = 0; i < model.n; i++) {
-      add((2 * Math.PI * i) / model.n);
-      if (this.opposite) add((2 * Math.PI * i) / model.n + Math.PI);
+      this.addEvent[i] = indexOf((2 * Math.PI * i) / model.n);
+      if (this.opposite) this.oppositeEvent[i] = indexOf((2 * Math.PI * i) / model.n + Math.PI);
     }
     this.offsets = seen;
     this.events = seen.map((beta) => ({
@@ -88,12 +96,15 @@ export class Modulator {
     }));
   }
 
-  /** Window membership of every wheel at heading θ, into `out` (see the module comment). */
-  membership(theta: number, out: Int8Array): void {
-    const n = this.model.n;
-    for (let i = 0; i < n; i++) {
-      const cosd = Math.cos(theta + (2 * Math.PI * i) / n + Math.PI / 2 + this.lead - this.direction);
-      out[i] = cosd > this.cosHalf ? 1 : this.opposite && -cosd > this.cosHalf ? -1 : 0;
+  /**
+   * Window membership of every wheel at state y, into `out` (see the module comment). It reads the
+   * event functions themselves, so that a located crossing and the membership it leads to agree to
+   * the last bit.
+   */
+  membership(y: Float64Array, out: Int8Array): void {
+    for (let i = 0; i < this.model.n; i++) {
+      const opp = this.oppositeEvent[i]!;
+      out[i] = this.events[this.addEvent[i]!]!.g(0, y) > 0 ? 1 : opp >= 0 && this.events[opp]!.g(0, y) > 0 ? -1 : 0;
     }
   }
 
@@ -102,9 +113,9 @@ export class Modulator {
     return Math.ceil(time / this.period - 1e-9) * this.period;
   }
 
-  /** Queues (or applies now) each wheel whose membership at heading θ differs from what is scheduled; true when a change was applied now. */
-  private schedule(readingTime: number, theta: number, now: number): boolean {
-    this.membership(theta, this.target);
+  /** Queues (or applies now) each wheel whose membership at state y differs from what is scheduled; true when a change was applied now. */
+  private schedule(readingTime: number, y: Float64Array, now: number): boolean {
+    this.membership(y, this.target);
     const due = this.tickAfter(readingTime + this.latency);
     let applied = false;
     for (let i = 0; i < this.model.n; i++) {
@@ -138,7 +149,7 @@ export class Modulator {
     this.direction = this.legs[0]!.direction;
     // Legs whose readings start at or before 0 (given within the latency of the start): the last one holds.
     while (this.nextLegReading() <= 0) this.direction = this.legs[this.legNext++]!.direction;
-    this.schedule(0, y[S_TH]!, 0);
+    this.schedule(0, y, 0);
   }
 
   /** Reading time of the next leg change, or Infinity. */
@@ -156,7 +167,7 @@ export class Modulator {
 
   /** For the integrator: a window edge crossed at reading time t. */
   onEdge(t: number, y: Float64Array): OdeAction {
-    return this.schedule(t, y[S_TH]!, t) ? "restart" : "continue";
+    return this.schedule(t, y, t) ? "restart" : "continue";
   }
 
   /** For the integrator: at a time event, apply what is due and take up a new leg. */
@@ -171,7 +182,7 @@ export class Modulator {
     while (this.nextLegReading() <= t + slack) {
       this.direction = this.legs[this.legNext]!.direction;
       this.legNext++;
-      this.schedule(t, y[S_TH]!, t);
+      this.schedule(t, y, t);
     }
     return "restart";
   }

@@ -15,6 +15,7 @@
  * stage then saturates at 0 or 1 and the current is what that duty gives).
  */
 import { requireFinite, requireInRange, requireNonNegative, requirePositive } from "../errors.ts";
+import { requireInputObject } from "./guard.ts";
 
 /** One pack, the motor constants, and the per-motor current limit. */
 export interface PackDriveParameters {
@@ -54,6 +55,7 @@ export class PackSolver {
    * @param groups number of motor groups, 1 to 16
    */
   constructor(parameters: PackDriveParameters, groups: number) {
+    requireInputObject(parameters, "parameters");
     requirePositive("openCircuitVoltage", parameters.openCircuitVoltage, "V");
     requireNonNegative("packResistance", parameters.packResistance, "Ω");
     requirePositive("motorResistance", parameters.motorResistance, "Ω");
@@ -161,6 +163,8 @@ export class PackSolver {
  * Sources: battery-thevenin-model, erickson-power-electronics, ctms-dc-motor-speed.
  */
 export function steadyDuty(parameters: PackDriveParameters, groups: number, motorSpeed: number, current: number): number | null {
+  requireInputObject(parameters, "parameters");
+  requireInRange("groups", groups, "", { min: 1, max: 16 });
   requireFinite("motorSpeed", motorSpeed, "rad/s");
   requireFinite("current", current, "A");
   const { openCircuitVoltage: voc, packResistance: rp, motorResistance: rm, torqueConstant: kt, motorsPerGroup: m } = parameters;

@@ -19,6 +19,7 @@
  */
 import { CalcInputError, requireFinite, requireInRange, requireNonNegative, requirePositive } from "../errors.ts";
 import { STANDARD_GRAVITY } from "../constants.ts";
+import { requireInputObject } from "./guard.ts";
 
 function requireFiniteResult(value: number, param: string, input: number, unit: string, what: string): number {
   if (!Number.isFinite(value)) throw new CalcInputError({ param, value: input, expected: `small enough that ${what} is a finite number`, unit });
@@ -61,14 +62,7 @@ function spinningInertia(wheelInertia: number, rotorInertia: number, gearRatio: 
  *
  * Sources: meriam-kraige-dynamics, khurmi-gupta-theory-of-machines.
  */
-export function wheelGyroscopicMoment({
-  wheelInertia,
-  rotorInertia = 0,
-  gearRatio = 1,
-  rotorSense = 1,
-  wheelSpeed,
-  spinSpeed,
-}: {
+export function wheelGyroscopicMoment(input: {
   wheelInertia: number;
   rotorInertia?: number;
   gearRatio?: number;
@@ -76,6 +70,7 @@ export function wheelGyroscopicMoment({
   wheelSpeed: number;
   spinSpeed: number;
 }): number {
+  const { wheelInertia, rotorInertia = 0, gearRatio = 1, rotorSense = 1, wheelSpeed, spinSpeed } = requireInputObject(input);
   const inertia = spinningInertia(wheelInertia, rotorInertia, gearRatio, rotorSense);
   requireFinite("wheelSpeed", wheelSpeed, "rad/s");
   requireFinite("spinSpeed", spinSpeed, "rad/s");
@@ -100,15 +95,7 @@ export function wheelGyroscopicMoment({
  *
  * Sources: meriam-kraige-dynamics.
  */
-export function rollingWheelGyroscopicMoment({
-  wheelInertia,
-  rotorInertia = 0,
-  gearRatio = 1,
-  rotorSense = 1,
-  wheelRadius,
-  contactRadius,
-  spinSpeed,
-}: {
+export function rollingWheelGyroscopicMoment(input: {
   wheelInertia: number;
   rotorInertia?: number;
   gearRatio?: number;
@@ -117,6 +104,7 @@ export function rollingWheelGyroscopicMoment({
   contactRadius: number;
   spinSpeed: number;
 }): number {
+  const { wheelInertia, rotorInertia = 0, gearRatio = 1, rotorSense = 1, wheelRadius, contactRadius, spinSpeed } = requireInputObject(input);
   requirePositive("wheelRadius", wheelRadius, "m");
   requirePositive("contactRadius", contactRadius, "m");
   requireFinite("spinSpeed", spinSpeed, "rad/s");
@@ -139,7 +127,8 @@ export function rollingWheelGyroscopicMoment({
  *
  * Sources: khurmi-gupta-theory-of-machines.
  */
-export function gyroscopicBearingForce({ moment, bearingSpacing }: { moment: number; bearingSpacing: number }): number {
+export function gyroscopicBearingForce(input: { moment: number; bearingSpacing: number }): number {
+  const { moment, bearingSpacing } = requireInputObject(input);
   requireFinite("moment", moment, "N·m");
   requirePositive("bearingSpacing", bearingSpacing, "m");
   const force = moment / bearingSpacing; // khurmi-gupta-theory-of-machines: F = C/x
@@ -169,14 +158,7 @@ export function gyroscopicBearingForce({ moment, bearingSpacing }: { moment: num
  *
  * Sources: meriam-kraige-dynamics, cgpm-1901.
  */
-export function skidLiftSpeed({
-  robotMass,
-  wheelRadius,
-  wheelInertia,
-  rotorInertia = 0,
-  gearRatio = 1,
-  rotorSense = 1,
-}: {
+export function skidLiftSpeed(input: {
   robotMass: number;
   wheelRadius: number;
   wheelInertia: number;
@@ -184,6 +166,7 @@ export function skidLiftSpeed({
   gearRatio?: number;
   rotorSense?: 1 | -1;
 }): number | null {
+  const { robotMass, wheelRadius, wheelInertia, rotorInertia = 0, gearRatio = 1, rotorSense = 1 } = requireInputObject(input);
   requirePositive("robotMass", robotMass, "kg");
   requirePositive("wheelRadius", wheelRadius, "m");
   const inertia = spinningInertia(wheelInertia, rotorInertia, gearRatio, rotorSense);
@@ -226,18 +209,7 @@ export interface WheelLoads {
  *
  * Sources: meriam-kraige-dynamics, cgpm-1901.
  */
-export function wheelNormalLoads({
-  wheelCount,
-  robotMass,
-  weightShare = 1,
-  wheelInertia,
-  rotorInertia = 0,
-  gearRatio = 1,
-  rotorSense = 1,
-  wheelRadius,
-  contactRadius,
-  spinSpeed,
-}: {
+export function wheelNormalLoads(input: {
   wheelCount: number;
   robotMass: number;
   weightShare?: number;
@@ -249,6 +221,18 @@ export function wheelNormalLoads({
   contactRadius: number;
   spinSpeed: number;
 }): WheelLoads {
+  const {
+    wheelCount,
+    robotMass,
+    weightShare = 1,
+    wheelInertia,
+    rotorInertia = 0,
+    gearRatio = 1,
+    rotorSense = 1,
+    wheelRadius,
+    contactRadius,
+    spinSpeed,
+  } = requireInputObject(input);
   requireInRange("wheelCount", wheelCount, "", { min: 1, max: 8 });
   if (!Number.isInteger(wheelCount)) throw new CalcInputError({ param: "wheelCount", value: wheelCount, expected: "a whole number", unit: "" });
   requirePositive("robotMass", robotMass, "kg");

@@ -257,7 +257,7 @@ export const steeringInputs = defineInputs({
     urlKey: "dist",
     help: "How far the robot is asked to go.",
   },
-  duration: { label: "Simulated time", kind: "time", min: 0.05, max: 10, default: 1, urlKey: "tmax", help: "How long the move is simulated." },
+  duration: { label: "Simulated time", kind: "time", min: 0.05, max: 10, default: 1.5, urlKey: "tmax", help: "How long the move is simulated." },
   directionTolerance: {
     label: "Direction tolerance",
     kind: "angle",
@@ -340,7 +340,7 @@ export function validateSteeringInput(input: SteeringInput): SteeringInput {
  * whole-body spinner, J = 0.005 kg·m², two direct-drive wheels of 18 mm radius at 70 mm from the
  * centre, one 1100 rpm/V motor per wheel (90 mΩ, 0.6 A no-load, 30 A limit), four cells at 4.1 V
  * and 10 mΩ, rubber tyres on concrete (μ = 1.0), spinning at 3000 rpm; it steers with a 120° window,
- * 25 % depth and the opposite window on, a 2 kHz loop and 0.3 ms of latency, asked to go 1 m.
+ * 25 % depth and the opposite window on, a 2 kHz loop and 0.3 ms of latency, asked to go 1 m in 1.5 s.
  */
 export const DEMO_STEERING_SPINNER: Readonly<SteeringInput> = Object.freeze(
   Object.fromEntries(Object.entries(steeringInputs).map(([key, spec]) => [key, spec.default])) as SteeringInput,

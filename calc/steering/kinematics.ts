@@ -13,6 +13,7 @@
  */
 import { CalcInputError, requireFinite, requireInRange, requireNonNegative, requirePositive } from "../errors.ts";
 import { headingStepPerLoop, latencyHeadingLag } from "../heading-timing.ts";
+import { requireInputObject } from "./guard.ts";
 
 const TWO_PI = 2 * Math.PI;
 
@@ -50,7 +51,8 @@ export interface PulseTrainFundamental {
  *
  * Sources: oppenheim-willsky-signals.
  */
-export function pulseTrainFundamental({ windowWidth }: { windowWidth: number }): PulseTrainFundamental {
+export function pulseTrainFundamental(input: { windowWidth: number }): PulseTrainFundamental {
+  const { windowWidth } = requireInputObject(input);
   requireWidth(windowWidth, false);
   const fundamental = Math.sin(windowWidth / 2) / Math.PI; // oppenheim-willsky-signals: a_k = sin(kω₀T₁)/(kπ), k = 1
   return { dutyCycle: windowWidth / TWO_PI, fundamental, cosineAmplitude: 2 * fundamental };
@@ -82,19 +84,12 @@ export function pulseTrainFundamental({ windowWidth }: { windowWidth: number }):
  *
  * Sources: siegwart-autonomous-robots, oppenheim-willsky-signals.
  */
-export function kinematicTranslationSpeed({
-  depth,
-  windowWidth,
-  oppositeWindow = false,
-}: {
-  depth: number;
-  windowWidth: number;
-  oppositeWindow?: boolean;
-}): number {
+export function kinematicTranslationSpeed(input: { depth: number; windowWidth: number; oppositeWindow?: boolean }): number {
+  const { depth, windowWidth, oppositeWindow = false } = requireInputObject(input);
   requireNonNegative("depth", depth, "m/s");
   requireWidth(windowWidth, oppositeWindow === true);
   const factor = oppositeWindow === true ? 2 : 1;
-  return (factor * depth * Math.sin(windowWidth / 2)) / Math.PI; // oppenheim-willsky-signals: c₁ = sin(w/2)/π
+  return depth * ((factor * Math.sin(windowWidth / 2)) / Math.PI); // oppenheim-willsky-signals: c₁ = sin(w/2)/π (a factor below 1 first: no overflow)
 }
 
 /**
@@ -117,19 +112,8 @@ export function kinematicTranslationSpeed({
  *
  * Sources: motor-constants-wikipedia, erickson-power-electronics.
  */
-export function kinematicRimSpeedDepth({
-  dutyStep,
-  voltage,
-  kv,
-  wheelRadius,
-  gearRatio = 1,
-}: {
-  dutyStep: number;
-  voltage: number;
-  kv: number;
-  wheelRadius: number;
-  gearRatio?: number;
-}): number {
+export function kinematicRimSpeedDepth(input: { dutyStep: number; voltage: number; kv: number; wheelRadius: number; gearRatio?: number }): number {
+  const { dutyStep, voltage, kv, wheelRadius, gearRatio = 1 } = requireInputObject(input);
   requireInRange("dutyStep", dutyStep, "", { min: 0, max: 1 });
   requirePositive("voltage", voltage, "V");
   requirePositive("kv", kv, "rad/(s·V)");
@@ -164,15 +148,8 @@ export interface DifferentialDriveMotion {
  *
  * Sources: siegwart-autonomous-robots.
  */
-export function differentialDriveKinematics({
-  leftSpeed,
-  rightSpeed,
-  track,
-}: {
-  leftSpeed: number;
-  rightSpeed: number;
-  track: number;
-}): DifferentialDriveMotion {
+export function differentialDriveKinematics(input: { leftSpeed: number; rightSpeed: number; track: number }): DifferentialDriveMotion {
+  const { leftSpeed, rightSpeed, track } = requireInputObject(input);
   requireFinite("leftSpeed", leftSpeed, "m/s");
   requireFinite("rightSpeed", rightSpeed, "m/s");
   requirePositive("track", track, "m");
@@ -197,7 +174,8 @@ export function differentialDriveKinematics({
  *
  * Sources: siegwart-autonomous-robots.
  */
-export function differentialDriveWheelSpeeds({ speed, turnRate, track }: { speed: number; turnRate: number; track: number }): { left: number; right: number } {
+export function differentialDriveWheelSpeeds(input: { speed: number; turnRate: number; track: number }): { left: number; right: number } {
+  const { speed, turnRate, track } = requireInputObject(input);
   requireFinite("speed", speed, "m/s");
   requireFinite("turnRate", turnRate, "rad/s");
   requirePositive("track", track, "m");
@@ -230,17 +208,8 @@ export function differentialDriveWheelSpeeds({ speed, turnRate, track }: { speed
  *
  * Sources: openstax-up1-rotational-kinematics, franklin-powell-workman-digital-control.
  */
-export function latencyDirectionError({
-  spinSpeed,
-  latency,
-  loopRate,
-  phaseLead = 0,
-}: {
-  spinSpeed: number;
-  latency: number;
-  loopRate: number;
-  phaseLead?: number;
-}): number {
+export function latencyDirectionError(input: { spinSpeed: number; latency: number; loopRate: number; phaseLead?: number }): number {
+  const { spinSpeed, latency, loopRate, phaseLead = 0 } = requireInputObject(input);
   requireFinite("phaseLead", phaseLead, "rad");
   const lag = latencyHeadingLag({ angularSpeed: spinSpeed, latency }); // openstax-up1-rotational-kinematics: ψ = ωL
   const hold = headingStepPerLoop({ angularSpeed: spinSpeed, loopRate }) / 2; // franklin-powell-workman-digital-control: mean hold delay T/2
@@ -262,6 +231,7 @@ export function latencyDirectionError({
  *
  * Sources: openstax-up1-rotational-kinematics, franklin-powell-workman-digital-control.
  */
-export function phaseLeadForLatency({ spinSpeed, latency, loopRate }: { spinSpeed: number; latency: number; loopRate: number }): number {
+export function phaseLeadForLatency(input: { spinSpeed: number; latency: number; loopRate: number }): number {
+  const { spinSpeed, latency, loopRate } = requireInputObject(input);
   return latencyDirectionError({ spinSpeed, latency, loopRate, phaseLead: 0 });
 }

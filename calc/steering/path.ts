@@ -5,6 +5,7 @@
 import { CalcInputError, requireFinite, requireInRange } from "../errors.ts";
 import { type SteeringInput, validateSteeringInput } from "./inputs.ts";
 import { S_OM, S_TH, SteeringModel } from "./model.ts";
+import { requireInputObject } from "./guard.ts";
 import { runSteering } from "./run.ts";
 import type { SteeringOptions } from "./simulate.ts";
 import { readSteeringOptions } from "./simulate.ts";
@@ -51,22 +52,23 @@ export interface SteeringPath {
  *
  * Sources: dormand-prince-1980, pacejka-tyre-dynamics, hairer-norsett-wanner-1.
  */
-export function steeringPath({
-  input,
-  legs = [
-    { direction: 0, duration: 0.5 },
-    { direction: Math.PI / 2, duration: 0.5 },
-  ],
-  pointsPerRevolution = 12,
-  maxPoints = 6000,
-  options,
-}: {
+export function steeringPath(args: {
   input: SteeringInput;
   legs?: readonly { direction: number; duration: number }[];
   pointsPerRevolution?: number;
   maxPoints?: number;
   options?: SteeringOptions;
 }): SteeringPath {
+  const {
+    input,
+    legs = [
+      { direction: 0, duration: 0.5 },
+      { direction: Math.PI / 2, duration: 0.5 },
+    ],
+    pointsPerRevolution = 12,
+    maxPoints = 6000,
+    options,
+  } = requireInputObject(args, "args");
   validateSteeringInput(input);
   const opts = readSteeringOptions(options);
   if (!Array.isArray(legs) || legs.length < 1 || legs.length > 20) {

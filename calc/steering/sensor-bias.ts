@@ -24,6 +24,7 @@
  */
 import { CalcInputError, requireFinite, requireInRange, requireNonNegative, requirePositive } from "../errors.ts";
 import { headingDriftAt, opposedSensorsDrift } from "../heading-drift.ts";
+import { requireInputObject } from "./guard.ts";
 
 function requireFiniteResult(value: number, param: string, input: number, unit: string, what: string): number {
   if (!Number.isFinite(value)) throw new CalcInputError({ param, value: input, expected: `small enough that ${what} is a finite number`, unit });
@@ -53,14 +54,7 @@ function requireFiniteResult(value: number, param: string, input: number, unit: 
  *
  * Sources: oppenheim-willsky-signals, newton-second-law.
  */
-export function drivePulseBias({
-  pulseForce,
-  robotMass,
-  windowWidth,
-  oppositeWindow = false,
-  wheelCount = 1,
-  sensorAngle,
-}: {
+export function drivePulseBias(input: {
   pulseForce: number;
   robotMass: number;
   windowWidth: number;
@@ -68,6 +62,7 @@ export function drivePulseBias({
   wheelCount?: number;
   sensorAngle: number;
 }): number {
+  const { pulseForce, robotMass, windowWidth, oppositeWindow = false, wheelCount = 1, sensorAngle } = requireInputObject(input);
   requireNonNegative("pulseForce", pulseForce, "N");
   requirePositive("robotMass", robotMass, "kg");
   requireInRange("windowWidth", windowWidth, "rad", { min: 0, max: oppositeWindow === true ? Math.PI : 2 * Math.PI, minOpen: true });
@@ -111,7 +106,8 @@ export interface DrivePulseDrift {
  *
  * Sources: spinner-heading-practice, hibbeler-dynamics-2016.
  */
-export function drivePulseHeadingDrift({ bias, angularSpeed, sensorRadius }: { bias: number; angularSpeed: number; sensorRadius: number }): DrivePulseDrift {
+export function drivePulseHeadingDrift(input: { bias: number; angularSpeed: number; sensorRadius: number }): DrivePulseDrift {
+  const { bias, angularSpeed, sensorRadius } = requireInputObject(input);
   requireFinite("bias", bias, "m/s²");
   requirePositive("angularSpeed", angularSpeed, "rad/s");
   requirePositive("sensorRadius", sensorRadius, "m");
@@ -119,6 +115,11 @@ export function drivePulseHeadingDrift({ bias, angularSpeed, sensorRadius }: { b
   const single = headingDriftAt({ angularSpeed, assumedRadius: sensorRadius, trueRadius: sensorRadius, scaleError: 0, bias, biasCorrection: 0, tilt: 0 });
   // hibbeler-dynamics-2016: a translation acceleration a_L adds to one sensor and takes from the other
   const pair = opposedSensorsDrift({ angularSpeed, radius1: sensorRadius, radius2: sensorRadius, offset: 0, linearAcceleration: -bias });
+  for (const v of [single.driftRate, single.driftPerRevolution, pair.pair.driftRate]) {
+    if (v !== null && !Number.isFinite(v)) {
+      throw new CalcInputError({ param: "sensorRadius", value: sensorRadius, expected: "small enough that the readings are finite numbers", unit: "m" });
+    }
+  }
   return {
     bias,
     driftRate: single.driftRate,

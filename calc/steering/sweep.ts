@@ -8,6 +8,7 @@ import { type SteeringInput, steeringInputs, validateSteeringInput } from "./inp
 import { SteeringModel } from "./model.ts";
 import { runSteering } from "./run.ts";
 import { revolutionFigures } from "./simulate.ts";
+import { requireInputObject } from "./guard.ts";
 
 export interface SteeringSweepCell {
   windowWidth: number;
@@ -60,17 +61,8 @@ function evenly(from: number, to: number, count: number): number[] {
  *
  * Sources: dormand-prince-1980, pacejka-tyre-dynamics, battery-thevenin-model.
  */
-export function sweepSteering({
-  input,
-  windowWidths,
-  depths,
-  duration,
-}: {
-  input: SteeringInput;
-  windowWidths?: readonly number[];
-  depths?: readonly number[];
-  duration?: number;
-}): SteeringSweep {
+export function sweepSteering(args: { input: SteeringInput; windowWidths?: readonly number[]; depths?: readonly number[]; duration?: number }): SteeringSweep {
+  const { input, windowWidths, depths, duration } = requireInputObject(args, "args");
   validateSteeringInput(input);
   const maxWidth = input.oppositeWindow === 1 ? Math.PI : 2 * Math.PI;
   const widths = windowWidths ? [...windowWidths] : evenly(Math.PI / 6, input.oppositeWindow === 1 ? Math.PI : (300 * Math.PI) / 180, 7);
