@@ -208,11 +208,30 @@ export class SteeringModel {
     this.loadSkid = this.weight - this.loadWheel;
   }
 
-  /** The initial state: at rest in translation, heading 0, steady spin, wheels at their steady speed. */
+  /**
+   * The initial state: heading 0, steady spin, wheels at their steady speed, no drive pulses. Two or
+   * more wheels: at rest in translation. One wheel: its wheel and skid forces add to a force fixed
+   * in the body, so at steady spin the centre of mass circles once per turn with velocity
+   * F/(M·Ω) turned back a quarter turn from the force (M·v̇ = F rotating at Ω); the run starts on
+   * that circle (found by a few fixed-point passes, the force depending a little on the velocity),
+   * so that with no pulses the centre stays put instead of drifting off at the circle's speed.
+   */
   initialState(): Float64Array {
     const y = new Float64Array(this.dimension);
     y[S_OM] = this.spin0;
     for (let i = 0; i < this.n; i++) y[S_W0 + i] = this.wheel0;
+    if (this.n === 1) {
+      const saved = this.mode[0]!;
+      this.mode[0] = 0;
+      const dy = new Float64Array(this.dimension);
+      for (let pass = 0; pass < 4; pass++) {
+        this.rhs(y, dy);
+        // meriam-kraige-dynamics: v = F/(iΩM) for a force rotating at Ω, i.e. (F_y, −F_x)/(ΩM)
+        y[S_VX] = dy[S_VY]! / this.spin0;
+        y[S_VY] = -dy[S_VX]! / this.spin0;
+      }
+      this.mode[0] = saved;
+    }
     return y;
   }
 

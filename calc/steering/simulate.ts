@@ -5,11 +5,11 @@
  *
  * Verdict rule: "holds" when the mean direction of travel over the final revolutions is within the
  * direction tolerance of the commanded direction and the robot covers the commanded distance
- * within the simulated time; "marginal" when the direction is off by up to twice the tolerance, or
- * the distance is not covered in time, or the run stopped at its step budget (the figures then
- * cover only the part simulated); "fails" when the direction is off by more than twice the
- * tolerance, when the robot does not translate (under 1 mm/s), or when a one-wheel robot's skid
- * lifts (it would ride on its wheel and tip, which this planar model cannot follow).
+ * within the simulated time; "fails" when a one-wheel robot's skid lifts (it would ride on its
+ * wheel and tip, which this planar model cannot follow); otherwise "marginal" when the run stopped
+ * at its step budget (the figures then cover only the part simulated); "fails" when the robot does
+ * not translate (under 1 mm/s) or goes off by more than twice the tolerance; "marginal" when it is
+ * off by up to twice the tolerance or does not cover the distance in time.
  */
 import { CalcInputError, requireInRange } from "../errors.ts";
 import type { OdeStatus } from "../numerics/ode.ts";
@@ -308,15 +308,15 @@ export function simulateSteering(input: SteeringInput, options?: SteeringOptions
   if (run.skidLiftedTime > 0) {
     verdict = "fails";
     reason = "The wheel's gyroscopic moment lifts the skid at this spin speed.";
+  } else if (budgetHit) {
+    verdict = "marginal";
+    reason = `The run stopped at its step budget at ${endTime.toPrecision(3)} s; the figures cover only that part.`;
   } else if (speed < 1e-3) {
     verdict = "fails";
     reason = "The robot does not translate (under 1 mm/s).";
   } else if (Math.abs(directionError) > 2 * tol) {
     verdict = "fails";
     reason = `It travels ${deg(directionError)} off the commanded direction, more than twice the ${deg(tol)} tolerance; a phase lead of ${deg(wrap(input.phaseLead + directionError))} would cancel it.`;
-  } else if (budgetHit) {
-    verdict = "marginal";
-    reason = `The run stopped at its step budget at ${endTime.toPrecision(3)} s; the figures cover only that part.`;
   } else if (Math.abs(directionError) > tol) {
     verdict = "marginal";
     reason = `It travels ${deg(directionError)} off the commanded direction, beyond the ${deg(tol)} tolerance.`;
