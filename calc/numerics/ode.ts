@@ -226,6 +226,7 @@ function tolerances(name: string, value: number | ArrayLike<number>, n: number, 
  *
  * Formula: $y_1 = y_0 + h\sum_i b_i k_i$, $\mathrm{err} = \sqrt{\tfrac1n\sum_i (e_i/sc_i)^2}$, $h_{new} = h\,\min(10, \max(0.2, 0.9\,\mathrm{err}^{-1/5}))$
  *
+ * @returns (from `solve`) the status, the time reached, the state there, the counts and the samples (see `OdeResult`)
  * @example
  * const ode = new DormandPrince45(1);
  * ode.solve((t, y, dy) => { dy[0] = -y[0]; }, 0, [1], 1, { rtol: 1e-10, atol: 1e-12 }).y[0] // → 0.36787944 (e^−1)

@@ -40,6 +40,13 @@ export interface PackDriveParameters {
  * Formula: unlimited groups $I_i = \dfrac{D_iV_b - e_i}{R_m}$; limited $I_i = \pm I_{lim}$, $D_i' = \dfrac{e_i + I_iR_m}{V_b}$;
  * $V_b = V_{oc} - R_p\sum_i m\,D_i' I_i$, which with $A = \sum_u mD_i^2/R_m$, $B = \sum_u mD_ie_i/R_m$,
  * $P = \sum_\ell m\,I_i(e_i + I_iR_m)$ is the larger root of $(1 + R_pA)V_b^2 - (V_{oc} + R_pB)V_b + R_pP = 0$
+ *
+ * @returns (from `solve`) the battery current [A]; the currents [A] and applied duties [-] go into the arrays given
+ * @example
+ * new PackSolver({ openCircuitVoltage: 16, packResistance: 0, motorResistance: 0.1, torqueConstant: 0.01, currentLimit: 30, motorsPerGroup: 1 }, 1)
+ *   .solve(Float64Array.of(0.5), Float64Array.of(600), new Float64Array(1), new Float64Array(1)) // → 10 (I = (8 − 6)/0.1 = 20 A at D = 0.5)
+ *
+ * Sources: battery-thevenin-model, erickson-power-electronics, ctms-dc-motor-speed.
  */
 export class PackSolver {
   readonly groups: number;

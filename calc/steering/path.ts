@@ -48,7 +48,7 @@ export interface SteeringPath {
  * @returns the sampled path [m, rad, rad/s], the legs and where each ended
  *
  * @example
- * steeringPath({ input: { ...DEMO_STEERING_SPINNER, phaseLead: 1.35 } }).legEnds // → about 0.4 m along x, then 0.4 m up y
+ * steeringPath({ input: { ...DEMO_STEERING_SPINNER, phaseLead: 1.319 } }).legEnds // → (0.29, −0.02) m, then (0.55, 0.28) m: it coasts on along x while it turns
  *
  * Sources: dormand-prince-1980, pacejka-tyre-dynamics, hairer-norsett-wanner-1.
  */

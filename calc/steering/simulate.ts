@@ -231,7 +231,7 @@ export function revolutionFigures(run: SteeringRun): {
  * firmware's heading is the true heading delayed by the latency (its own estimation errors are
  * the heading chapter's subject, see `sensor`). The robot starts spinning steadily at the spin speed, at rest.
  * @example
- * simulateSteering(DEMO_STEERING_SPINNER).translationSpeed // → about 1.1 m/s, 77° off the commanded direction without a lead
+ * simulateSteering(DEMO_STEERING_SPINNER).translationSpeed // → 1.16 m/s, but 75.5° ahead of the commanded direction; with phaseLead 1.319 rad it holds the direction (−0.7°) and covers 1 m in 1.16 s
  *
  * Sources: dormand-prince-1980, hairer-norsett-wanner-1, pacejka-tyre-dynamics, battery-thevenin-model,
  * erickson-power-electronics, meriam-kraige-dynamics, franklin-powell-workman-digital-control,
