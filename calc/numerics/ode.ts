@@ -75,6 +75,8 @@ export interface OdeStepView {
   readonly t: number;
   /** Current state (after any change an event made); read only. */
   readonly y: Float64Array;
+  /** f(t, y) at the current point (the next step's first stage); read only. */
+  readonly dydt: Float64Array;
   /** Trial steps so far (accepted + rejected + restarts). */
   readonly steps: number;
   /** Writes the dense-output state at `time` in [tPrev, t] into `out` (the state before any event change at t). */
@@ -104,6 +106,8 @@ export interface OdeOptions {
   nextTimeEvent?: (t: number) => number;
   /** Called when the integration lands on a time event; y may be changed in place. Default answer "restart". */
   onTimeEvent?: (t: number, y: Float64Array) => OdeAction | undefined;
+  /** Largest first step after a restart (an event or time event), given the time there; by default the step controller's proposal is kept. */
+  restartStep?: (t: number) => number;
   /** Called after each accepted step; answer "stop" to end the run there. */
   onStep?: (step: OdeStepView) => "stop" | undefined;
   /** Times (ascending, within [t0, tEnd]) at which to sample the solution from the dense output. */
@@ -380,6 +384,10 @@ export class DormandPrince45 implements OdeStepView {
     return this.r1[index]! + theta * (this.r2[index]! + th1 * (this.r3[index]! + theta * (this.r4[index]! + th1 * this.r5[index]!)));
   }
 
+  get dydt(): Float64Array {
+    return this.k1;
+  }
+
   /** Evaluates f at the current point into k1 and throws if it is not finite. */
   private restartDerivative(): void {
     const { k1, y, dimension: n } = this;
@@ -440,7 +448,7 @@ export class DormandPrince45 implements OdeStepView {
     const hitTheta = new Float64Array(ne);
     const hitOrder = new Int32Array(ne);
     const yEvent = new Float64Array(n);
-    const { onEvent, onTimeEvent, onStep, nextTimeEvent } = opts;
+    const { onEvent, onTimeEvent, onStep, nextTimeEvent, restartStep } = opts;
 
     this.rhs = rhs;
     this.evaluations = 0;
@@ -625,6 +633,10 @@ export class DormandPrince45 implements OdeStepView {
       }
       // A step shortened to land on a stop says little about the step the solution allows: keep the planned one.
       h = Math.min(hMax, landing && factor >= 1 ? Math.max(hPlanned, h * factor) : h * factor);
+      if (cutKind !== 0 && restartStep) {
+        const cap = restartStep(this.t);
+        if (cap > 0 && cap < h) h = cap;
+      }
       if (status === "done" && onStep && onStep(this) === "stop") status = "stopped";
     }
     if (status === "done" && this.t >= tEnd) this.t = tEnd;

@@ -355,6 +355,41 @@ describe("events located on the dense output (Illinois method, dowell-jarratt-19
     close(r.y[0]!, 0.5, 0, 1e-9);
   });
 
+  it("restarts with at most the step restartStep allows, and shows f(t, y) at each accepted point", () => {
+    const firstAfter: number[] = [];
+    let cut = false;
+    let next = false;
+    solveOde({
+      rhs: oscillator,
+      t0: 0,
+      y0: [0, 1],
+      tEnd: 4,
+      rtol: 1e-8,
+      atol: 1e-10,
+      events: [{ g: (_t, y) => y[0]! }],
+      onEvent: () => {
+        cut = true;
+        return "restart";
+      },
+      restartStep: () => 1e-4,
+      onStep: (s) => {
+        close(s.dydt[0]!, s.y[1]!, 1e-15, 1e-15);
+        close(s.dydt[1]!, -s.y[0]!, 1e-15, 1e-15);
+        if (next) {
+          firstAfter.push(s.t - s.tPrev);
+          next = false;
+        }
+        if (cut) {
+          next = true; // this step ended at the event: the next one is the first after the restart
+          cut = false;
+        }
+        return undefined;
+      },
+    });
+    expect(firstAfter.length).toBe(1);
+    expect(firstAfter[0]!).toBeLessThanOrEqual(1e-4 * (1 + 1e-9)); // t − tPrev carries the round-off of t ≈ π
+  });
+
   it("gives the same solution whether a record-only event continues or restarts", () => {
     const run = (action: "continue" | "restart") =>
       solveOde({ rhs: oscillator, t0: 0, y0: [0, 1], tEnd: 10, rtol: 1e-10, atol: 1e-12, events: [{ g: (_t, y) => y[0]! }], onEvent: () => action });
