@@ -49,7 +49,7 @@ const cases = [
     note: steps,
   },
   {
-    label: "calculator default (1 s)",
+    label: "calculator default (1.5 s)",
     target: 10,
     runs: 200,
     warmup: 20,
