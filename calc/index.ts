@@ -55,3 +55,5 @@ export * from "./weapon/bearings.ts";
 export * from "./weapon/shaft-check.ts";
 export * from "./weapon/impact.ts";
 export * from "./weapon/shaft-demo.ts";
+export * from "./steering/index.ts";
+export * from "./numerics/ode.ts";

@@ -1,39 +1,38 @@
 import { NS, type SpinUpSystem } from "./model.ts";
-
-// Dormand–Prince 5(4) tableau, error weights (b − b̂) and dense-output weights
-// (dormand-prince-1980; dense output as in hairer-norsett-wanner-1 §II.6).
-const A21 = 1 / 5;
-const A31 = 3 / 40,
-  A32 = 9 / 40;
-const A41 = 44 / 45,
-  A42 = -56 / 15,
-  A43 = 32 / 9;
-const A51 = 19372 / 6561,
-  A52 = -25360 / 2187,
-  A53 = 64448 / 6561,
-  A54 = -212 / 729;
-const A61 = 9017 / 3168,
-  A62 = -355 / 33,
-  A63 = 46732 / 5247,
-  A64 = 49 / 176,
-  A65 = -5103 / 18656;
-const A71 = 35 / 384,
-  A73 = 500 / 1113,
-  A74 = 125 / 192,
-  A75 = -2187 / 6784,
-  A76 = 11 / 84;
-const E1 = 71 / 57600,
-  E3 = -71 / 16695,
-  E4 = 71 / 1920,
-  E5 = -17253 / 339200,
-  E6 = 22 / 525,
-  E7 = -1 / 40;
-const D1 = -12715105075 / 11282082432,
-  D3 = 87487479700 / 32700410799,
-  D4 = -10690763975 / 1880347072;
-const D5 = 701980252875 / 199316789632,
-  D6 = -1453857185 / 822651844,
-  D7 = 69997945 / 29380423;
+import {
+  A21,
+  A31,
+  A32,
+  A41,
+  A42,
+  A43,
+  A51,
+  A52,
+  A53,
+  A54,
+  A61,
+  A62,
+  A63,
+  A64,
+  A65,
+  A71,
+  A73,
+  A74,
+  A75,
+  A76,
+  E1,
+  E3,
+  E4,
+  E5,
+  E6,
+  E7,
+  D1,
+  D3,
+  D4,
+  D5,
+  D6,
+  D7,
+} from "../numerics/dopri5-tableau.ts";
 
 /** One Dormand–Prince 5(4) step with its error estimate and dense output (dormand-prince-1980, hairer-norsett-wanner-1). */
 export class Dopri5 {

@@ -8,6 +8,7 @@ import { MASS_SOURCES } from "./mass.ts";
 import { LOADS_SOURCES } from "./loads.ts";
 import { DRIVETRAIN_SOURCES } from "./drivetrain.ts";
 import { WEAPON_SOURCES } from "./weapon.ts";
+import { STEERING_SOURCES } from "./steering.ts";
 
 export type { Source };
 
@@ -57,6 +58,7 @@ export const SOURCES = {
   ...LOADS_SOURCES,
   ...DRIVETRAIN_SOURCES,
   ...WEAPON_SOURCES,
+  ...STEERING_SOURCES,
 } as const satisfies Record<string, Source>;
 
 export type SourceKey = keyof typeof SOURCES;

@@ -1,0 +1,95 @@
+/**
+ * Timing of the steering simulation (calc/steering/): a 3 s move at 3000 rpm (about 150
+ * revolutions, two pulse edges per wheel per revolution and more with the opposite window), the
+ * calculator's default run, the window-and-depth map and the two-leg path, each the median of many
+ * runs after a warm-up.
+ *
+ * Run from the repository root with the pinned Node:
+ *   npx node --experimental-strip-types scripts/bench-steering.mjs
+ *
+ * Targets: the 3 s simulation under 20 ms; the default map (7 × 6 cells) under 150 ms. Timings on a
+ * shared machine vary; the median and the 90th percentile are printed, with the load average.
+ */
+import { loadavg } from "node:os";
+import { DEMO_STEERING_SPINNER, simulateSteering, steeringPath, sweepSteering } from "../calc/steering/index.ts";
+
+/** Runs `fn` `warmup` times untimed, then `runs` times timed; returns times in ms, sorted, and the last result. */
+function time(fn, runs, warmup) {
+  let last;
+  for (let i = 0; i < warmup; i++) last = fn();
+  const times = [];
+  for (let i = 0; i < runs; i++) {
+    const start = performance.now();
+    last = fn();
+    times.push(performance.now() - start);
+  }
+  times.sort((a, b) => a - b);
+  return { times, last };
+}
+
+const quantile = (sorted, q) => sorted[Math.min(sorted.length - 1, Math.floor(q * sorted.length))];
+const ms = (x) => `${x.toFixed(3)} ms`;
+const steps = (r) => `${r.solver.steps} steps, ${r.solver.evaluations} evaluations, ${r.pulseEdges} pulse edges, ${r.revolutions.length} revolutions`;
+
+const cases = [
+  {
+    label: "3 s move at 3000 rpm, demo robot (two wheels, opposite window on)",
+    target: 20,
+    runs: 100,
+    warmup: 20,
+    fn: () => simulateSteering({ ...DEMO_STEERING_SPINNER, duration: 3 }),
+    note: steps,
+  },
+  {
+    label: "3 s move at 3000 rpm, demo robot, add-only windows",
+    target: 20,
+    runs: 100,
+    warmup: 20,
+    fn: () => simulateSteering({ ...DEMO_STEERING_SPINNER, duration: 3, oppositeWindow: 0 }),
+    note: steps,
+  },
+  {
+    label: "calculator default (1.5 s)",
+    target: 10,
+    runs: 200,
+    warmup: 20,
+    fn: () => simulateSteering(DEMO_STEERING_SPINNER),
+    note: steps,
+  },
+  {
+    label: "window × depth map, 7 × 6 cells of 0.4 s",
+    target: 150,
+    runs: 20,
+    warmup: 3,
+    fn: () => sweepSteering({ input: DEMO_STEERING_SPINNER }),
+    note: (r) => `best: ${((r.windowWidths[r.best.row] * 180) / Math.PI).toFixed(0)}°, depth ${r.depths[r.best.column].toFixed(2)}`,
+  },
+  {
+    label: "two-leg path (0.5 s + 0.5 s), 12 points per revolution",
+    target: 20,
+    runs: 100,
+    warmup: 10,
+    fn: () => steeringPath({ input: DEMO_STEERING_SPINNER }),
+    note: (r) => `${r.points.length} points`,
+  },
+];
+
+console.log(
+  `Steering simulation timing — Node ${process.version}, load average ${loadavg()
+    .map((x) => x.toFixed(2))
+    .join(" ")}`,
+);
+console.log("");
+let missed = 0;
+for (const c of cases) {
+  const { times, last } = time(c.fn, c.runs, c.warmup);
+  const median = quantile(times, 0.5);
+  const ok = median < c.target;
+  if (!ok) missed++;
+  console.log(c.label);
+  console.log(
+    `  median ${ms(median)}   p90 ${ms(quantile(times, 0.9))}   min ${ms(times[0])}   over ${c.runs} runs   target < ${c.target} ms: ${ok ? "met" : "MISSED"}   (${c.note(last)})`,
+  );
+}
+console.log("");
+console.log(missed === 0 ? "All targets met." : `${missed} target(s) missed.`);
