@@ -7,6 +7,7 @@ import { HEADING_SOURCES } from "./sources/heading.ts";
 import { MASS_SOURCES } from "./sources/mass.ts";
 import { LOADS_SOURCES } from "./sources/loads.ts";
 import { DRIVETRAIN_SOURCES } from "./sources/drivetrain.ts";
+import { JOINT_SOURCES } from "./sources/joints.ts";
 
 export type { Source };
 
@@ -55,6 +56,7 @@ export const SOURCES = {
   ...MASS_SOURCES,
   ...LOADS_SOURCES,
   ...DRIVETRAIN_SOURCES,
+  ...JOINT_SOURCES,
 } as const satisfies Record<string, Source>;
 
 export type SourceKey = keyof typeof SOURCES;
