@@ -205,6 +205,7 @@ describe("ISO metric 6g/6H limits in the unified lookup (ASME B1.13M, interchang
   const EXTERNAL = "metric external thread chart, ASME B1.13M limits, amesweb.info metric-thread-chart (CONFIRMED)";
   const CASES = [
     { source: "asme-b1-13m", locator: EXTERNAL, size: "M2", majorMin: 1.886, pitchMax: 1.83, pitchNote: "from memory: 1.740 + T_D2 0.090 (ISO 965-1 grade 6)" },
+    // biome-ignore lint/suspicious/noApproximativeNumericConstant: 2.303 mm is a thread limit, not ln 10
     { source: "asme-b1-13m", locator: EXTERNAL, size: "M2.5", majorMin: 2.38, pitchMax: 2.303, pitchNote: "from memory: 2.208 + 0.095" },
     { source: "asme-b1-13m", locator: EXTERNAL, size: "M3", majorMin: 2.874, pitchMax: 2.775, pitchNote: "from memory: 2.675 + 0.100" },
     { source: "asme-b1-13m", locator: EXTERNAL, size: "M4", majorMin: 3.838, pitchMax: 3.663, pitchNote: "from memory: 3.545 + 0.118" },
