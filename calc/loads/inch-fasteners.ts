@@ -134,7 +134,7 @@ function requireUnifiedPitch(nominalDiameter: number, pitch: number): void {
  * @returns d_p and d_r [m]
  *
  * @example
- * unifiedThreadDiameters({ nominalDiameter: 0.00635, pitch: 0.00127 }) // → d_p = 5.5251 mm, d_r = 4.6999 mm (1/4-20)
+ * unifiedThreadDiameters({ nominalDiameter: 0.00635, pitch: 0.00127 }) // → d_p = 5.5251 mm, d_r = 4.7002 mm (1/4-20)
  *
  * Sources: asme-b1-1, shigley-mechanical-design.
  */
