@@ -5,6 +5,7 @@
  * public face of the topic is calc/loads.ts. SI in and out.
  */
 import { CalcInputError, requireInRange, requirePositive, requireRelation } from "../core/errors.ts";
+import { requireFiniteResult, requireInputObject } from "../core/spec-check.ts";
 export { requireChoice, type ChoiceOption } from "../core/choices.ts";
 
 // ---------------------------------------------------------------------------------------------
@@ -121,4 +122,31 @@ export function speedAtStress({ angularSpeed, stress, strength }: { angularSpeed
 export function requirePointCount(points: number): void {
   requireInRange("points", points, "", { min: 2, max: 1000 });
   if (!Number.isInteger(points)) throw new CalcInputError({ param: "points", value: points, expected: "a whole number", unit: "" });
+}
+
+/**
+ * Von Mises (distortion-energy) equivalent stress of a normal stress and a shear stress on one
+ * plane: a shaft surface in bending and torsion, a bolt root in bending and shear
+ * (shigley-distortion-energy, shigley-bending-torsion).
+ *
+ * Formula: $\sigma' = \sqrt{\sigma^2 + 3\tau^2}$
+ *
+ * @param normalStress σ [Pa], finite
+ * @param shearStress τ [Pa], finite
+ * @returns σ' [Pa]
+ *
+ * @example
+ * vonMisesStress({ normalStress: 100e6, shearStress: 50e6 }) // → 1.323e8
+ *
+ * Sources: shigley-distortion-energy, shigley-bending-torsion.
+ */
+export function vonMisesStress(input: { normalStress: number; shearStress: number }): number {
+  const fields = requireInputObject(input);
+  const sigma = fields.normalStress;
+  const tau = fields.shearStress;
+  if (typeof sigma !== "number" || !Number.isFinite(sigma))
+    throw new CalcInputError({ param: "normalStress", value: sigma, expected: "a finite number", unit: "Pa" });
+  if (typeof tau !== "number" || !Number.isFinite(tau)) throw new CalcInputError({ param: "shearStress", value: tau, expected: "a finite number", unit: "Pa" });
+  // hypot avoids the overflow of σ² for very large finite stresses.
+  return requireFiniteResult(Math.hypot(sigma, Math.sqrt(3) * tau), "equivalent stress", { normalStress: [sigma, "Pa"], shearStress: [tau, "Pa"] }); // shigley-distortion-energy
 }

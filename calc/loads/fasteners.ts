@@ -240,6 +240,80 @@ export function proofLoad({ size, propertyClass: classId }: { size: string; prop
 }
 
 // ---------------------------------------------------------------------------------------------
+// Shear strength of a bolt: one rule for every class and grade.
+
+/**
+ * Shear ultimate of bolt steel as a fraction of its specified minimum tensile strength: τ_u = 0.6 R_m,min
+ * (ifi-shear-rule: "shear strengths of carbon steel fasteners may be assumed to be approximately 60
+ * percent of their specified minimum tensile strengths"). ISO 898-1 specifies no shear strength.
+ *
+ * One rule for every class, paired with the distortion-energy shear yield τ_y = R_p0.2,min/√3
+ * (shigley-distortion-energy). Since R_p0.2 ≤ R_m for every class, τ_y/τ_u ≤ 1/(0.6·√3) = 0.962: the
+ * shear yield can never exceed the shear ultimate. Eurocode 3's α_v (0.6 for 4.6, 5.6 and 8.8, 0.5 for
+ * 10.9; en-1993-1-8 Table 3.4) is a design-resistance coefficient that goes with γ_M2, not a material
+ * shear strength: paired with the von Mises yield, α_v = 0.5 gives τ_u below τ_y for 10.9 (520 < 542.7 MPa)
+ * and for 12.9 (610 < 635.1 MPa). The handbook spread of the ratio is about 0.5 to 0.75 (shear-ultimate-ratio).
+ */
+export const BOLT_SHEAR_ULTIMATE_RATIO = 0.6;
+
+/** A bolt's shear strengths under the one rule of `boltShearStrengths`. */
+export interface BoltShearStrengths {
+  /** τ_y = R_p0.2,min/√3, distortion-energy shear yield [Pa]. */
+  shearYield: number;
+  /** τ_u = 0.6 R_m,min [Pa]. */
+  shearUltimate: number;
+}
+
+/**
+ * Shear yield and shear ultimate of bolt steel from its specified minimum tensile yield and tensile
+ * strength, by one rule for every class and grade (shigley-distortion-energy, ifi-shear-rule).
+ *
+ * Formula: $\tau_y = \dfrac{R_{p0.2,min}}{\sqrt3} \approx 0.577\,R_{p0.2,min},\qquad \tau_u = 0.6\,R_{m,min}$
+ *
+ * @param yieldStrength R_p0.2,min (or R_eL,min) [Pa], greater than 0 and at most `tensileStrength`
+ * @param tensileStrength R_m,min [Pa], greater than 0
+ * @returns shearYield and shearUltimate [Pa]; shearYield ≤ 0.962 × shearUltimate always
+ *
+ * Assumptions: both are estimates from the tensile values (the standards specify no shear strength);
+ * the basis stays that of the inputs (specified minimum for the ISO 898-1, SAE J429 and ASTM A574 rows).
+ *
+ * @example
+ * boltShearStrengths({ yieldStrength: 940e6, tensileStrength: 1040e6 }) // → { shearYield: 542.7e6, shearUltimate: 624e6 } (class 10.9)
+ *
+ * Sources: shigley-distortion-energy, ifi-shear-rule, iso-898-1.
+ */
+export function boltShearStrengths({ yieldStrength, tensileStrength }: { yieldStrength: number; tensileStrength: number }): BoltShearStrengths {
+  requirePositive("tensileStrength", tensileStrength, "Pa");
+  requirePositive("yieldStrength", yieldStrength, "Pa");
+  if (!(yieldStrength <= tensileStrength)) {
+    throw new CalcInputError({ param: "yieldStrength", value: yieldStrength, expected: `at most the tensile strength, ${tensileStrength} Pa`, unit: "Pa" });
+  }
+  return {
+    shearYield: yieldStrength / Math.sqrt(3), // shigley-distortion-energy
+    shearUltimate: BOLT_SHEAR_ULTIMATE_RATIO * tensileStrength, // ifi-shear-rule
+  };
+}
+
+/**
+ * Shear strengths of an ISO 898-1 property class from its minimum R_p0.2 (R_eL for 4.6) and R_m
+ * (iso-898-1 Table 3, shigley-distortion-energy, ifi-shear-rule).
+ *
+ * Formula: $\tau_y = R_{p0.2,min}/\sqrt3,\qquad \tau_u = 0.6\,R_{m,min}$
+ *
+ * @param propertyClass a value of `PROPERTY_CLASS_OPTIONS`
+ * @returns shearYield and shearUltimate [Pa]
+ *
+ * @example
+ * propertyClassShearStrengths({ propertyClass: "12.9" }) // → { shearYield: 635.1e6, shearUltimate: 732e6 }
+ *
+ * Sources: iso-898-1, shigley-distortion-energy, ifi-shear-rule.
+ */
+export function propertyClassShearStrengths({ propertyClass: classId }: { propertyClass: string }): BoltShearStrengths {
+  const row = propertyClass(classId);
+  return boltShearStrengths({ yieldStrength: row.yieldStrengthMin, tensileStrength: row.tensileStrengthMin });
+}
+
+// ---------------------------------------------------------------------------------------------
 // Eurocode 3 design resistances (a cross-check and a reference point for the shear ratio).
 
 /**
@@ -321,4 +395,13 @@ export function eurocodeBoltTensionResistance({
 }
 
 /** Source keys this module relies on (checked by the meta test). */
-export const FASTENERS_SOURCES: readonly SourceKey[] = ["iso-898-1", "iso-261", "iso-68-1", "iso-724", "gb-t-16823-1", "en-1993-1-8"];
+export const FASTENERS_SOURCES: readonly SourceKey[] = [
+  "iso-898-1",
+  "iso-261",
+  "iso-68-1",
+  "iso-724",
+  "gb-t-16823-1",
+  "en-1993-1-8",
+  "shigley-distortion-energy",
+  "ifi-shear-rule",
+];

@@ -50,7 +50,6 @@ import {
   type OdeRhs,
   type OdeEvent,
   type OdeAction,
-  type OdeEventHit,
   type OdeStepView,
   type OdeOptions,
   type OdeStatus,

@@ -9,6 +9,7 @@ import { LOADS_SOURCES } from "./loads.ts";
 import { DRIVETRAIN_SOURCES } from "./drivetrain.ts";
 import { WEAPON_SOURCES } from "./weapon.ts";
 import { STEERING_SOURCES } from "./steering.ts";
+import { JOINT_SOURCES } from "./joints.ts";
 
 export type { Source };
 
@@ -59,6 +60,7 @@ export const SOURCES = {
   ...DRIVETRAIN_SOURCES,
   ...WEAPON_SOURCES,
   ...STEERING_SOURCES,
+  ...JOINT_SOURCES,
 } as const satisfies Record<string, Source>;
 
 export type SourceKey = keyof typeof SOURCES;

@@ -20,7 +20,7 @@
  * regularised as μF_N·V/√(V² + v_ε²) (the square-root regularisation of the Coulomb jump).
  */
 import { CalcInputError, requireFinite, requireNonNegative } from "../core/errors.ts";
-import { requireInputObject } from "./guard.ts";
+import { requireInputObject } from "../core/spec-check.ts";
 
 /** Regularisation speed v_ε [m/s] (see the module comment). */
 export const LOW_SPEED = 0.05;

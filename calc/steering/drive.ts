@@ -15,7 +15,7 @@
  * stage then saturates at 0 or 1 and the current is what that duty gives).
  */
 import { requireFinite, requireInRange, requireNonNegative, requirePositive } from "../core/errors.ts";
-import { requireInputObject } from "./guard.ts";
+import { requireInputObject } from "../core/spec-check.ts";
 
 /** One pack, the motor constants, and the per-motor current limit. */
 export interface PackDriveParameters {

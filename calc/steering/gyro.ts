@@ -19,12 +19,7 @@
  */
 import { CalcInputError, requireFinite, requireInRange, requireNonNegative, requirePositive } from "../core/errors.ts";
 import { STANDARD_GRAVITY } from "../core/constants.ts";
-import { requireInputObject } from "./guard.ts";
-
-function requireFiniteResult(value: number, param: string, input: number, unit: string, what: string): number {
-  if (!Number.isFinite(value)) throw new CalcInputError({ param, value: input, expected: `small enough that ${what} is a finite number`, unit });
-  return value;
-}
+import { requireFiniteResult, requireInputObject } from "../core/spec-check.ts";
 
 function requireSense(rotorSense: number): 1 | -1 {
   if (rotorSense !== 1 && rotorSense !== -1) throw new CalcInputError({ param: "rotorSense", value: rotorSense, expected: "1 or −1", unit: "" });
@@ -38,7 +33,7 @@ function spinningInertia(wheelInertia: number, rotorInertia: number, gearRatio: 
   requirePositive("gearRatio", gearRatio, "");
   const s = requireSense(rotorSense);
   const inertia = wheelInertia + s * gearRatio * rotorInertia; // meriam-kraige-dynamics: H = Σ I·ω about the axle
-  return requireFiniteResult(inertia, "rotorInertia", rotorInertia, "kg·m²", "the angular momentum per wheel speed");
+  return requireFiniteResult(inertia, "angular momentum per wheel speed", { rotorInertia: [rotorInertia, "kg·m²"] });
 }
 
 /**
@@ -75,7 +70,7 @@ export function wheelGyroscopicMoment(input: {
   requireFinite("wheelSpeed", wheelSpeed, "rad/s");
   requireFinite("spinSpeed", spinSpeed, "rad/s");
   const moment = inertia * wheelSpeed * spinSpeed; // meriam-kraige-dynamics: M = I·ω·Ω (steady precession, 90°)
-  return requireFiniteResult(moment, "spinSpeed", spinSpeed, "rad/s", "the gyroscopic moment");
+  return requireFiniteResult(moment, "gyroscopic moment", { spinSpeed: [spinSpeed, "rad/s"] });
 }
 
 /**
@@ -108,7 +103,7 @@ export function rollingWheelGyroscopicMoment(input: {
   requirePositive("wheelRadius", wheelRadius, "m");
   requirePositive("contactRadius", contactRadius, "m");
   requireFinite("spinSpeed", spinSpeed, "rad/s");
-  const wheelSpeed = requireFiniteResult((spinSpeed * contactRadius) / wheelRadius, "spinSpeed", spinSpeed, "rad/s", "the wheel speed"); // rolling: ω_w r_w = Ω R
+  const wheelSpeed = requireFiniteResult((spinSpeed * contactRadius) / wheelRadius, "wheel speed", { spinSpeed: [spinSpeed, "rad/s"] }); // rolling: ω_w r_w = Ω R
   return wheelGyroscopicMoment({ wheelInertia, rotorInertia, gearRatio, rotorSense, wheelSpeed, spinSpeed });
 }
 
@@ -132,7 +127,7 @@ export function gyroscopicBearingForce(input: { moment: number; bearingSpacing: 
   requireFinite("moment", moment, "N·m");
   requirePositive("bearingSpacing", bearingSpacing, "m");
   const force = moment / bearingSpacing; // khurmi-gupta-theory-of-machines: F = C/x
-  return requireFiniteResult(force, "bearingSpacing", bearingSpacing, "m", "the bearing force");
+  return requireFiniteResult(force, "bearing force", { bearingSpacing: [bearingSpacing, "m"] });
 }
 
 /**
@@ -172,7 +167,7 @@ export function skidLiftSpeed(input: {
   const inertia = spinningInertia(wheelInertia, rotorInertia, gearRatio, rotorSense);
   if (!(inertia > 0)) return null;
   const speed = Math.sqrt(((robotMass * STANDARD_GRAVITY) / inertia) * wheelRadius); // Ω² = M g r_w/(J_w + sGJ_m)
-  return requireFiniteResult(speed, "wheelInertia", wheelInertia, "kg·m²", "the lift speed");
+  return requireFiniteResult(speed, "lift speed", { wheelInertia: [wheelInertia, "kg·m²"] });
 }
 
 export interface WheelLoads {
@@ -238,7 +233,7 @@ export function wheelNormalLoads(input: {
   requirePositive("robotMass", robotMass, "kg");
   requireInRange("weightShare", weightShare, "", { min: 0, max: 1, minOpen: true });
   const moment = rollingWheelGyroscopicMoment({ wheelInertia, rotorInertia, gearRatio, rotorSense, wheelRadius, contactRadius, spinSpeed });
-  const weight = requireFiniteResult(robotMass * STANDARD_GRAVITY, "robotMass", robotMass, "kg", "the weight"); // cgpm-1901: W = M·g_n
+  const weight = requireFiniteResult(robotMass * STANDARD_GRAVITY, "weight", { robotMass: [robotMass, "kg"] }); // cgpm-1901: W = M·g_n
   if (wheelCount >= 2) {
     return {
       wheelLoad: (weightShare * weight) / wheelCount,
@@ -248,7 +243,7 @@ export function wheelNormalLoads(input: {
       gyroscopicMoment: moment,
     };
   }
-  const shift = requireFiniteResult(moment / (2 * contactRadius), "spinSpeed", spinSpeed, "rad/s", "the load shift"); // (N_w − N_s)·R = M_gy
+  const shift = requireFiniteResult(moment / (2 * contactRadius), "load shift", { spinSpeed: [spinSpeed, "rad/s"] }); // (N_w − N_s)·R = M_gy
   const wheelLoad = weight / 2 + shift;
   if (wheelLoad >= weight) return { wheelLoad: weight, skidLoad: 0, skidLifted: true, wheelLifted: false, gyroscopicMoment: moment };
   if (wheelLoad <= 0) return { wheelLoad: 0, skidLoad: weight, skidLifted: false, wheelLifted: true, gyroscopicMoment: moment };

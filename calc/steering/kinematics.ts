@@ -11,20 +11,15 @@
  * rectangular pulse train (oppenheim-willsky-signals): δ·sin(w/2)/π along ψ, twice that with the
  * opposite window. SI in and out: m, m/s, rad, rad/s, s, Hz.
  */
-import { CalcInputError, requireFinite, requireInRange, requireNonNegative, requirePositive } from "../core/errors.ts";
+import { requireFinite, requireInRange, requireNonNegative, requirePositive } from "../core/errors.ts";
 import { headingStepPerLoop, latencyHeadingLag } from "../heading/timing.ts";
-import { requireInputObject } from "./guard.ts";
+import { requireFiniteResult, requireInputObject } from "../core/spec-check.ts";
 
 const TWO_PI = 2 * Math.PI;
 
 function requireWidth(windowWidth: number, oppositeWindow: boolean): void {
   // With the opposite window both windows must fit in one turn without overlapping.
   requireInRange("windowWidth", windowWidth, "rad", { min: 0, max: oppositeWindow ? Math.PI : TWO_PI, minOpen: true });
-}
-
-function requireFiniteResult(value: number, param: string, input: number, unit: string, what: string): number {
-  if (!Number.isFinite(value)) throw new CalcInputError({ param, value: input, expected: `small enough that ${what} is a finite number`, unit });
-  return value;
 }
 
 export interface PulseTrainFundamental {
@@ -120,7 +115,7 @@ export function kinematicRimSpeedDepth(input: { dutyStep: number; voltage: numbe
   requirePositive("wheelRadius", wheelRadius, "m");
   requirePositive("gearRatio", gearRatio, "");
   const depth = ((dutyStep * voltage) / gearRatio) * kv * wheelRadius; // motor-constants-wikipedia: ω = K_v·V
-  return requireFiniteResult(depth, "voltage", voltage, "V", "the rim speed");
+  return requireFiniteResult(depth, "rim speed", { voltage: [voltage, "V"] });
 }
 
 export interface DifferentialDriveMotion {
@@ -155,7 +150,7 @@ export function differentialDriveKinematics(input: { leftSpeed: number; rightSpe
   requirePositive("track", track, "m");
   const speed = rightSpeed / 2 + leftSpeed / 2; // siegwart-autonomous-robots: v = (v_R + v_L)/2, halved first so it cannot overflow
   const turnRate = rightSpeed / track - leftSpeed / track; // siegwart-autonomous-robots: ω = (v_R − v_L)/b
-  requireFiniteResult(turnRate, "track", track, "m", "the turn rate");
+  requireFiniteResult(turnRate, "turn rate", { track: [track, "m"] });
   const radius = turnRate === 0 ? Number.POSITIVE_INFINITY : speed / turnRate;
   return { speed, turnRate, turnRadius: Number.isFinite(radius) ? radius : null };
 }
@@ -180,11 +175,11 @@ export function differentialDriveWheelSpeeds(input: { speed: number; turnRate: n
   requireFinite("turnRate", turnRate, "rad/s");
   requirePositive("track", track, "m");
   const half = turnRate * (track / 2); // siegwart-autonomous-robots: ±ω·b/2
-  requireFiniteResult(half, "turnRate", turnRate, "rad/s", "ω·b/2");
+  requireFiniteResult(half, "half-track speed", { turnRate: [turnRate, "rad/s"] });
   const left = speed - half;
   const right = speed + half;
-  requireFiniteResult(left, "speed", speed, "m/s", "the left rim speed");
-  requireFiniteResult(right, "speed", speed, "m/s", "the right rim speed");
+  requireFiniteResult(left, "left rim speed", { speed: [speed, "m/s"] });
+  requireFiniteResult(right, "right rim speed", { speed: [speed, "m/s"] });
   return { left, right };
 }
 
@@ -214,7 +209,7 @@ export function latencyDirectionError(input: { spinSpeed: number; latency: numbe
   const lag = latencyHeadingLag({ angularSpeed: spinSpeed, latency }); // openstax-up1-rotational-kinematics: ψ = ωL
   const hold = headingStepPerLoop({ angularSpeed: spinSpeed, loopRate }) / 2; // franklin-powell-workman-digital-control: mean hold delay T/2
   const error = lag + hold - phaseLead;
-  return requireFiniteResult(error, "spinSpeed", spinSpeed, "rad/s", "the direction error");
+  return requireFiniteResult(error, "direction error", { spinSpeed: [spinSpeed, "rad/s"] });
 }
 
 /**

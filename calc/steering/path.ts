@@ -5,7 +5,7 @@
 import { CalcInputError, requireFinite, requireInRange } from "../core/errors.ts";
 import { type SteeringInput, validateSteeringInput } from "./inputs.ts";
 import { S_OM, S_TH, SteeringModel } from "./model.ts";
-import { requireInputObject } from "./guard.ts";
+import { requireInputObject } from "../core/spec-check.ts";
 import { runSteering } from "./run.ts";
 import type { SteeringOptions } from "./simulate.ts";
 import { readSteeringOptions } from "./simulate.ts";

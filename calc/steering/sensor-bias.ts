@@ -25,12 +25,7 @@
 import { CalcInputError, requireFinite, requireInRange, requireNonNegative, requirePositive } from "../core/errors.ts";
 import { headingDriftAt } from "../heading/drift.ts";
 import { opposedSensorsDrift } from "../heading/opposed.ts";
-import { requireInputObject } from "./guard.ts";
-
-function requireFiniteResult(value: number, param: string, input: number, unit: string, what: string): number {
-  if (!Number.isFinite(value)) throw new CalcInputError({ param, value: input, expected: `small enough that ${what} is a finite number`, unit });
-  return value;
-}
+import { requireFiniteResult, requireInputObject } from "../core/spec-check.ts";
 
 /**
  * Bias on a radial accelerometer from the drive pulses: the body-frame average of the pulse
@@ -76,7 +71,7 @@ export function drivePulseBias(input: {
   if (wheelCount === 1) sum = Math.sin(sensorAngle);
   const duty = windowWidth / (2 * Math.PI); // oppenheim-willsky-signals: mean of the pulse train
   const bias = -((pulseForce / robotMass) * duty * sum); // newton-second-law: a = F/M, inward axis
-  return requireFiniteResult(bias === 0 ? 0 : bias, "pulseForce", pulseForce, "N", "the bias");
+  return requireFiniteResult(bias === 0 ? 0 : bias, "bias", { pulseForce: [pulseForce, "N"] });
 }
 
 export interface DrivePulseDrift {

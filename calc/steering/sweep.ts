@@ -8,7 +8,7 @@ import { type SteeringInput, steeringInputs, validateSteeringInput } from "./inp
 import { SteeringModel } from "./model.ts";
 import { runSteering } from "./run.ts";
 import { revolutionFigures } from "./simulate.ts";
-import { requireInputObject } from "./guard.ts";
+import { requireInputObject } from "../core/spec-check.ts";
 
 export interface SteeringSweepCell {
   windowWidth: number;

@@ -12,9 +12,9 @@ import { rpmToRadPerSecond } from "../core/units.ts";
 import { type BearingCheck, bearingCheck, BEARING_TYPE_OPTIONS, type BearingType, staticSafetyGuide } from "./bearings.ts";
 import { ratioOrNull, requireWithinSpecs as requireDeclaredInputs, requireInputObject } from "../core/spec-check.ts";
 import { type ChoiceOption, requireChoice as requireOption } from "../core/choices.ts";
-import type { LoadVerdict as Verdict } from "../loads/common.ts";
+import { type LoadVerdict as Verdict, vonMisesStress } from "../loads/common.ts";
 import { overhungCouple, overhungPointLoad, simplySupportedCouple, simplySupportedPointLoad } from "./beams.ts";
-import { type RoundSection, bendingStress, roundSection, torsionalStress, vonMisesStress } from "./shaft.ts";
+import { type RoundSection, bendingStress, roundSection, torsionalStress } from "./shaft.ts";
 
 // The calculator: weapon shaft and bearings.
 
@@ -464,7 +464,7 @@ export function weaponShaftCheck(input: WeaponShaftInput): WeaponShaftCheck {
   // Stresses at the peak.
   const sigma = bendingStress({ moment: peak.moment, diameter: v.shaftDiameter, bore: v.shaftBore });
   const tau = torsionalStress({ torque, diameter: v.shaftDiameter, bore: v.shaftBore });
-  const sigmaVm = vonMisesStress({ bendingStress: sigma, shearStress: tau });
+  const sigmaVm = vonMisesStress({ normalStress: sigma, shearStress: tau });
   const safety = ratioOrNull(material.yieldStrength, sigmaVm); // safety-factor-practice: n = S_y/σ'
 
   // Bearings: at the supports of a live shaft, in the hub of a dead one.

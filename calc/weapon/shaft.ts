@@ -110,29 +110,4 @@ export function torsionalStress(input: { torque: number; diameter: number; bore?
   }); // shigley-bending-torsion: τ = T·r/J
 }
 
-/**
- * Von Mises (distortion-energy) equivalent stress of a shaft surface carrying bending and
- * torsion (shigley-distortion-energy, shigley-bending-torsion).
- *
- * Formula: $\sigma' = \sqrt{\sigma^2 + 3\tau^2}$
- *
- * @param bendingStress σ [Pa], finite
- * @param shearStress τ [Pa], finite
- * @returns σ' [Pa]
- *
- * @example
- * vonMisesStress({ bendingStress: 100e6, shearStress: 50e6 }) // → 1.323e8
- * Sources: shigley-distortion-energy, shigley-bending-torsion.
- */
-export function vonMisesStress(input: { bendingStress: number; shearStress: number }): number {
-  const fields = requireInputObject(input);
-  const sigma = fields.bendingStress;
-  const tau = fields.shearStress;
-  if (typeof sigma !== "number" || !Number.isFinite(sigma))
-    throw new CalcInputError({ param: "bendingStress", value: sigma, expected: "a finite number", unit: "Pa" });
-  if (typeof tau !== "number" || !Number.isFinite(tau)) throw new CalcInputError({ param: "shearStress", value: tau, expected: "a finite number", unit: "Pa" });
-  // hypot avoids the overflow of σ² for very large finite stresses.
-  return requireFiniteResult(Math.hypot(sigma, Math.sqrt(3) * tau), "von Mises stress", { bendingStress: [sigma, "Pa"], shearStress: [tau, "Pa"] }); // shigley-distortion-energy
-}
-
 // ---------------------------------------------------------------------------------------------

@@ -2,6 +2,8 @@ import { describe, expect, it } from "vitest";
 import fc from "fast-check";
 import { CalcInputError } from "../../calc/core/errors.ts";
 import {
+  BOLT_SHEAR_ULTIMATE_RATIO,
+  boltShearStrengths,
   EN1993_GAMMA_M2,
   EN1993_THREAD_SHEAR_FACTOR,
   eurocodeBoltShearResistance,
@@ -12,6 +14,7 @@ import {
   PROPERTY_CLASS_OPTIONS,
   PROPERTY_CLASSES,
   propertyClass,
+  propertyClassShearStrengths,
   proofLoad,
   requireChoice,
   tensileStressArea,
@@ -314,6 +317,93 @@ describe("EN 1993-1-8 design resistances (cross-check of the shear factor)", () 
     expect(() => eurocodeBoltShearResistance({ area: 1e-5, ultimateStrength: 8e8, shearFactor: 1.2 })).toThrow(
       /^shearFactor must be greater than 0 and at most 1 \(got 1\.2\)$/,
     );
+  });
+});
+
+describe("shear strength of a bolt: one rule for every class", () => {
+  const MPa = 1e6;
+  // The rule: τ_y = R_p0.2,min/√3 (Shigley's distortion-energy shear yield, 0.577 S_y) and
+  // τ_u = 0.6 R_m,min (Industrial Fasteners Institute: "approximately 60 percent of their specified
+  // minimum tensile strengths", as quoted by a fastener maker's technical note). Inputs: ISO 898-1 Table 3.
+  const CASES = [
+    {
+      source: "iso-898-1 + ifi-shear-rule",
+      locator: "Table 3, class 4.6 (R_eL 240, R_m 400 MPa)",
+      inputs: { propertyClass: "4.6" },
+      expected: { y: 138.564, u: 240 },
+      rtol: 5e-6,
+      note: "",
+    },
+    {
+      source: "iso-898-1 + ifi-shear-rule",
+      locator: "Table 3, class 8.8 (640, 800 MPa)",
+      inputs: { propertyClass: "8.8" },
+      expected: { y: 369.504, u: 480 },
+      rtol: 5e-6,
+      note: "",
+    },
+    {
+      source: "iso-898-1 + ifi-shear-rule",
+      locator: "Table 3, class 10.9 (940, 1040 MPa)",
+      inputs: { propertyClass: "10.9" },
+      expected: { y: 542.709, u: 624 },
+      rtol: 5e-6,
+      note: "",
+    },
+    {
+      source: "iso-898-1 + ifi-shear-rule",
+      locator: "Table 3, class 12.9 (1100, 1220 MPa)",
+      inputs: { propertyClass: "12.9" },
+      expected: { y: 635.085, u: 732 },
+      rtol: 5e-6,
+      note: "",
+    },
+  ] as const;
+
+  it.each(CASES)("$source, $locator: τ_y = $expected.y MPa and τ_u = $expected.u MPa", ({ inputs, expected, rtol }) => {
+    const { shearYield, shearUltimate } = propertyClassShearStrengths(inputs);
+    expectClose(shearYield, expected.y * MPa, rtol);
+    expectClose(shearUltimate, expected.u * MPa, rtol);
+  });
+
+  it("uses 0.6 of the minimum tensile strength for the shear ultimate of every class", () => {
+    expect(BOLT_SHEAR_ULTIMATE_RATIO).toBe(0.6);
+  });
+
+  it.each(PROPERTY_CLASS_OPTIONS.map((o) => o.value))("never puts the shear yield of class %s above its shear ultimate", (id) => {
+    const { shearYield, shearUltimate } = propertyClassShearStrengths({ propertyClass: id });
+    expect(shearYield).toBeLessThanOrEqual(shearUltimate);
+  });
+
+  it("never puts the shear yield above the shear ultimate for any yield at or below the tensile strength", () => {
+    fc.assert(
+      fc.property(fc.double({ min: 1e6, max: 3e9, noNaN: true }), fc.double({ min: 1e-6, max: 1, noNaN: true }), (tensileStrength, ratio) => {
+        const { shearYield, shearUltimate } = boltShearStrengths({ tensileStrength, yieldStrength: ratio * tensileStrength });
+        expect(shearYield).toBeLessThanOrEqual(shearUltimate);
+      }),
+    );
+  });
+
+  it("refuses a yield strength above the tensile strength, naming it", () => {
+    expect(() => boltShearStrengths({ yieldStrength: 900e6, tensileStrength: 800e6 })).toThrow(CalcInputError);
+    expect(() => boltShearStrengths({ yieldStrength: 900e6, tensileStrength: 800e6 })).toThrow(/^yieldStrength must be at most the tensile strength/);
+  });
+});
+
+describe("regression pins from the engineering review: the old pairing of α_v with the von Mises yield", () => {
+  // The review found τ_y above τ_u for 10.9 and 12.9 when τ_u = 0.5 R_m (Eurocode's α_v for 10.9)
+  // is paired with τ_y = R_p0.2/√3. These pins keep the review's numbers and show the new rule's.
+  const MPa = 1e6;
+  it.each([
+    { id: "10.9", oldUltimate: 520, yield: 542.7 },
+    { id: "12.9", oldUltimate: 610, yield: 635.1 },
+  ] as const)("class $id: τ_y = $yield MPa exceeded the old 0.5 R_m = $oldUltimate MPa, and stays below the new τ_u", ({ id, oldUltimate, yield: y }) => {
+    const row = PROPERTY_CLASSES[id];
+    const { shearYield, shearUltimate } = propertyClassShearStrengths({ propertyClass: id });
+    expectClose(shearYield, y * MPa, 1e-3);
+    expect(0.5 * row.tensileStrengthMin).toBe(oldUltimate * MPa);
+    expect(shearYield).toBeGreaterThan(0.5 * row.tensileStrengthMin);
+    expect(shearYield).toBeLessThan(shearUltimate);
   });
 });
 

@@ -5,7 +5,8 @@ import { STANDARD_GRAVITY } from "../../../calc/core/constants.ts";
 import { MATERIALS } from "../../../calc/materials/materials.ts";
 import { rpmToRadPerSecond } from "../../../calc/core/units.ts";
 import { BEARING_TYPE_OPTIONS, basicRatingLife, ratingLifeHours } from "../../../calc/weapon/bearings.ts";
-import { bendingStress, roundSection, torsionalStress, vonMisesStress } from "../../../calc/weapon/shaft.ts";
+import { vonMisesStress } from "../../../calc/loads/common.ts";
+import { bendingStress, roundSection, torsionalStress } from "../../../calc/weapon/shaft.ts";
 import { cantileverEndLoad, overhungCouple, overhungPointLoad, simplySupportedCouple, simplySupportedPointLoad } from "../../../calc/weapon/beams.ts";
 import {
   SHAFT_AXLE_OPTIONS,
@@ -138,9 +139,9 @@ describe("beam cases against published tables and worked examples", () => {
   });
 
   it("von Mises: pure torsion gives √3·τ, so the shaft yields in shear at S_y/√3 = 0.577·S_y (Shigley, distortion-energy theory)", () => {
-    expectClose(vonMisesStress({ bendingStress: 0, shearStress: 100e6 }), Math.sqrt(3) * 100e6, 1e-15);
-    expect(vonMisesStress({ bendingStress: -250e6, shearStress: 0 })).toBe(250e6);
-    expect(Number.isFinite(vonMisesStress({ bendingStress: 1e200, shearStress: 1e200 }))).toBe(true);
+    expectClose(vonMisesStress({ normalStress: 0, shearStress: 100e6 }), Math.sqrt(3) * 100e6, 1e-15);
+    expect(vonMisesStress({ normalStress: -250e6, shearStress: 0 })).toBe(250e6);
+    expect(Number.isFinite(vonMisesStress({ normalStress: 1e200, shearStress: 1e200 }))).toBe(true);
   });
 
   it("regression pins (our own digits, not published): d = 12 mm, L = 60 mm, 2000 N at mid-span gives 176.8388257 MPa and 44.20970641 µm; a 20 mm cantilever with 5000 N at 30 mm gives 190.9859317 MPa and 28.64788976 µm (E = 200 GPa)", () => {
@@ -393,7 +394,7 @@ describe("fuzz: never a non-finite number, every bad input a named CalcInputErro
     ["roundSection", (x) => roundSection(x as never), ["diameter", "bore"]],
     ["bendingStress", (x) => bendingStress(x as never), ["moment", "diameter", "bore"]],
     ["torsionalStress", (x) => torsionalStress(x as never), ["torque", "diameter", "bore"]],
-    ["vonMisesStress", (x) => vonMisesStress(x as never), ["bendingStress", "shearStress"]],
+    ["vonMisesStress", (x) => vonMisesStress(x as never), ["normalStress", "shearStress"]],
     ["simplySupportedPointLoad", (x) => simplySupportedPointLoad(x as never), ["force", "span", "position", ...stiff]],
     ["simplySupportedCouple", (x) => simplySupportedCouple(x as never), ["moment", "span", "position", ...stiff]],
     ["overhungPointLoad", (x) => overhungPointLoad(x as never), ["force", "span", "overhang", ...stiff]],
