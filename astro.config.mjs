@@ -8,6 +8,7 @@ import rehypeKatex from "rehype-katex";
 import { rehypeBaseLinks } from "./scripts/site/rehype-base-links.mjs";
 import { rehypeScrollableMath } from "./scripts/site/rehype-scrollable-math.mjs";
 import { katexWoff2Only } from "./scripts/site/katex-woff2-only.mjs";
+import { katexFontPreload } from "./scripts/site/katex-fonts.mjs";
 import { offlineAndSearch } from "./scripts/site/offline-and-search.mjs";
 
 /**
@@ -26,7 +27,8 @@ export default defineConfig({
   base,
   trailingSlash: "ignore",
   build: { format: "directory", inlineStylesheets: "never" },
-  integrations: [preact(), mdx(), offlineAndSearch()],
+  // The build:done steps run in this order: font preloads (HTML), then search index and offline cache.
+  integrations: [preact(), mdx(), katexFontPreload(), offlineAndSearch()],
   markdown: {
     processor: unified({
       remarkPlugins: [remarkMath],
