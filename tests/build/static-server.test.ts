@@ -90,9 +90,9 @@ describe("choosing a content coding from Accept-Encoding", () => {
 
 describe("serving", () => {
   it.each([
-    { accept: "gzip, deflate, br", encoding: "br", label: "brotli" },
-    { accept: "gzip", encoding: "gzip", label: "gzip" },
-    { accept: "identity", encoding: undefined, label: "it is" },
+    { accept: "gzip, deflate, br", encoding: "br", label: "as brotli" },
+    { accept: "gzip", encoding: "gzip", label: "as gzip" },
+    { accept: "identity", encoding: undefined, label: "as it is" },
   ])("sends a page $label for Accept-Encoding: $accept, with its own type and the sent length", async ({ accept, encoding }) => {
     const r = await get("/", { "accept-encoding": accept });
     expect(r.status).toBe(200);
