@@ -8,7 +8,10 @@ import rehypeKatex from "rehype-katex";
 import { rehypeBaseLinks } from "./scripts/site/rehype-base-links.mjs";
 import { rehypeScrollableMath } from "./scripts/site/rehype-scrollable-math.mjs";
 import { katexWoff2Only } from "./scripts/site/katex-woff2-only.mjs";
+import { katexFontPreload } from "./scripts/site/katex-fonts.mjs";
+import { contentSecurityPolicyPlugin } from "./scripts/site/content-security-policy.mjs";
 import { offlineAndSearch } from "./scripts/site/offline-and-search.mjs";
+import { precompressPlugin } from "./scripts/site/precompress.mjs";
 
 /**
  * BASE: the sub-path the site is served under ("/" by default; e.g. BASE=/handbook/ for
@@ -26,7 +29,10 @@ export default defineConfig({
   base,
   trailingSlash: "ignore",
   build: { format: "directory", inlineStylesheets: "never" },
-  integrations: [preact(), mdx(), offlineAndSearch()],
+  // The build:done steps run in this order: font preloads (HTML), the security policy (hashes the
+  // final HTML's inline scripts), search index and offline cache (versioned by the final files),
+  // then the compressed copies of everything.
+  integrations: [preact(), mdx(), katexFontPreload(), contentSecurityPolicyPlugin(), offlineAndSearch(), precompressPlugin()],
   markdown: {
     processor: unified({
       remarkPlugins: [remarkMath],

@@ -1,5 +1,6 @@
-// Prints the handbook's figures: build time, per-page bytes (gzip), and how long each calculator
-// takes to recompute after one input changes. A benchmark prints; it never asserts.
+// Prints the handbook's figures: build time, per-page bytes (gzip) and render-blocking requests, the
+// offline cache's first download, and how long each calculator takes to recompute after one input
+// changes. A benchmark prints; it never asserts.
 // Usage: npm run bench  (SKIP_BUILD=1 to weigh an existing dist/)
 import { execFileSync } from "node:child_process";
 import { readdirSync, existsSync } from "node:fs";
@@ -7,6 +8,7 @@ import { join } from "node:path";
 import { fileURLToPath } from "node:url";
 import { performance } from "node:perf_hooks";
 import { createWeigher } from "./site/page-weight.mjs";
+import { precachedFiles, precacheSelection, transferSize } from "./site/precache.mjs";
 
 const root = fileURLToPath(new URL("../", import.meta.url));
 const dist = join(root, "dist");
@@ -18,13 +20,30 @@ if (!process.env.SKIP_BUILD) {
   console.log(`build: ${((performance.now() - start) / 1000).toFixed(2)} s`);
 }
 
-console.log("\npage weight (gzip)                              html      css       js     total");
+console.log("\npage weight (gzip)                              html      css       js     total   render-blocking");
 const weigh = createWeigher(dist, "/");
-const pages = ["index.html", "404.html", ...readdirSync(join(dist, "chapters")).map((slug) => `chapters/${slug}/index.html`)];
+const pages = [
+  "index.html",
+  "404.html",
+  "build-sheet/index.html",
+  "search/index.html",
+  ...readdirSync(join(dist, "chapters")).map((slug) => `chapters/${slug}/index.html`),
+];
 for (const page of pages.filter((p) => existsSync(join(dist, p)))) {
   const w = weigh(page);
-  console.log(`${page.padEnd(44)}${kb(w.html).padStart(9)}${kb(w.css).padStart(9)}${kb(w.js).padStart(9)}${kb(w.total).padStart(10)}`);
+  console.log(
+    `${page.padEnd(44)}${kb(w.html).padStart(9)}${kb(w.css).padStart(9)}${kb(w.js).padStart(9)}${kb(w.total).padStart(10)}${String(w.renderBlocking).padStart(10)}`,
+  );
 }
+
+// What a first visit downloads for offline use (fonts and the search index count at their own,
+// already compressed, size), and what the build leaves out of it.
+const precache = transferSize(dist, precachedFiles(dist, "/"));
+const left = precacheSelection(dist, "/").excluded;
+console.log(
+  `\noffline cache (first visit): ${precache.files} files, ${kb(precache.raw)} raw, ${kb(precache.gzip)} gzip, ${kb(precache.brotli)} brotli` +
+    ` (${left.size} built files left out: nothing uses them)`,
+);
 
 /** Median time of `fn` over `runs` runs, in microseconds. */
 function median(fn, runs) {

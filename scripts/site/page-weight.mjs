@@ -1,7 +1,7 @@
 // Page weight of a built page: the gzip bytes of its HTML, of every stylesheet it links and of
 // every script it can run (inline scripts, module scripts, island components and renderers, and
-// everything they import), plus the font files its CSS can request. Deterministic: same build,
-// same bytes. Used by the budget tests and by `npm run bench`.
+// everything they import), plus the font files its CSS can request and how many requests hold its
+// first paint. Deterministic: same build, same bytes. Used by the budget tests and by `npm run bench`.
 import { readFileSync, existsSync } from "node:fs";
 import { gzipSync } from "node:zlib";
 import { dirname, join, posix } from "node:path";
@@ -77,8 +77,15 @@ export function createWeigher(distDir, base = "/") {
       const text = readFileSync(fileFor(href), "utf8");
       for (const m of text.matchAll(/url\(([^)]+)\)/g)) fonts.add(m[1].replace(/["']/g, ""));
     }
+    // Requests that hold the first paint: stylesheets (unless for print only) and classic scripts
+    // in <head> that are neither async nor deferred. Module scripts are deferred; fonts swap in.
+    const head = html.slice(0, html.indexOf("</head>") + 1 || html.length);
+    const renderBlocking =
+      [...head.matchAll(/<link\b[^>]*\brel="stylesheet"[^>]*>/g)].filter((m) => !/\bmedia="print"/.test(m[0])).length +
+      [...head.matchAll(/<script\b[^>]*\bsrc="[^"]+"[^>]*>/g)].filter((m) => !/\b(async|defer)\b|type="module"/.test(m[0])).length;
     return {
       page: pagePath,
+      renderBlocking,
       html: gz(html),
       css: cssBytes,
       js: jsBytes,

@@ -4,10 +4,11 @@
  */
 import { describe, expect, it } from "vitest";
 import { spawnSync } from "node:child_process";
-import { mkdtempSync, readdirSync, readFileSync } from "node:fs";
+import { existsSync, mkdtempSync, readdirSync, readFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { fileURLToPath } from "node:url";
+import { precachedFiles } from "../../scripts/site/precache.mjs";
 
 const root = fileURLToPath(new URL("../../", import.meta.url));
 const out = join(mkdtempSync(join(tmpdir(), "whirlbook-base-")), "site");
@@ -39,5 +40,9 @@ describe("a build under a sub-path (BASE=/handbook/)", () => {
       .join("\n");
     for (const m of css.matchAll(/url\((\/[^)]*)\)/g)) expect(m[1]).toMatch(/^\/handbook\/_astro\//);
     expect(readFileSync(join(out, "sw.js"), "utf8")).toContain('const BASE = "/handbook/";');
+    // The offline cache lists files under the base, every one of them built, and only the fonts in use.
+    const precached = precachedFiles(out, "/handbook/");
+    expect(precached.filter((f) => !existsSync(join(out, f)))).toEqual([]);
+    expect(precached.filter((f) => f.includes("KaTeX_")).length).toBe(6);
   });
 });
