@@ -61,7 +61,7 @@ export default defineConfig({
             groups: [
               {
                 name: "runtime",
-                test: /node_modules[\\/](preact|d3-array)[\\/]|calc[\\/]core[\\/](units|inputs|errors|constants)\.ts|components[\\/]calc-ui[\\/]/,
+                test: /node_modules[\\/](preact|d3-array)[\\/]|calc[\\/]core[\\/](units|inputs|errors|constants|check|calculator|permalink|choices|spec-check)\.ts|components[\\/]calc-ui[\\/]/,
               },
             ],
           },
