@@ -37,6 +37,7 @@ export * from "./numerics/line-fit.ts";
 export * from "./heading/calibration.ts";
 export * from "./heading/calibration-rows.ts";
 export * from "./heading/csv.ts";
+export * from "./materials/densities.ts";
 export * from "./materials/materials.ts";
 export * from "./loads/fasteners.ts";
 export * from "./loads/inch-fasteners.ts";

@@ -13,7 +13,8 @@ import { DEFAULT_SAFETY_THRESHOLDS } from "./common.ts";
 import { DEFAULT_SHEAR_RATIO, fastenerCheck, type FastenerCheck, type FastenerCheckInput } from "./bolts.ts";
 import { rimCheck, type RimCheck, type RimCheckInput, type RimMaterialValues } from "./rims.ts";
 import { requireChoice, type ChoiceOption } from "./common.ts";
-import { MATERIAL_IDS, MATERIALS, type MaterialId } from "../materials/materials.ts";
+import { MATERIALS } from "../materials/materials.ts";
+import { MATERIAL_IDS, type MaterialId } from "../materials/densities.ts";
 import type { SourceKey } from "../sources/index.ts";
 
 export * from "./common.ts";

@@ -1,6 +1,7 @@
 import { defineInputs } from "../core/inputs.ts";
 import { safetyThresholdInputs, type ChoiceOption, type LoadVerdict } from "./common.ts";
-import { MATERIAL_IDS, MATERIALS, type MaterialId } from "../materials/materials.ts";
+import { MATERIALS } from "../materials/materials.ts";
+import { MATERIAL_IDS, type MaterialId } from "../materials/densities.ts";
 import type { PartLoad } from "../rotation/rotation.ts";
 import { rpmToRadPerSecond } from "../core/units.ts";
 import type { FastenerGrade, FastenerGradeId, FastenerSizeId, FastenerThread } from "./inch-fasteners.ts";

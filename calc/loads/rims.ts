@@ -7,7 +7,7 @@ import { requireInRange, requireNonNegative, requirePositive, requireRelation } 
 import { requireDeclared } from "../core/spec-check.ts";
 import { defineInputs } from "../core/inputs.ts";
 import { rpmToRadPerSecond } from "../core/units.ts";
-import type { MaterialId } from "../materials/materials.ts";
+import type { MaterialId } from "../materials/densities.ts";
 import {
   safetyThresholdInputs,
   requireChoice,

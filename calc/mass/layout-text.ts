@@ -4,7 +4,7 @@
  */
 import { CalcInputError } from "../core/errors.ts";
 import { exactNumberText, readExactNumber } from "../core/units.ts";
-import { isMaterialId } from "../materials/materials.ts";
+import { isMaterialId } from "../materials/densities.ts";
 
 import { type LayoutPart, MAX_PARTS, type PartMassSpec, type PartShape, type PartShapeKind, checkPart } from "./parts.ts";
 

@@ -10,7 +10,7 @@
  * the negative of it.
  */
 import { CalcInputError, requireInRange, requirePositive, requireRelation } from "../core/errors.ts";
-import { isMaterialId, MATERIALS, type MaterialId } from "../materials/materials.ts";
+import { isMaterialId, MATERIAL_DENSITIES, type MaterialId } from "../materials/densities.ts";
 
 // ---------------------------------------------------------------------------------------------
 // Parts.
@@ -237,7 +237,7 @@ export function partMass(part: LayoutPart): number {
 /** A checked part's mass [kg]: given, or its material's density × its volume. @internal */
 export function massOf(part: LayoutPart): number {
   if (part.mass.kind === "given") return part.mass.mass;
-  return MATERIALS[part.mass.material].density * volumeOf(part.shape, part.mass.thickness ?? 0);
+  return MATERIAL_DENSITIES[part.mass.material].density * volumeOf(part.shape, part.mass.thickness ?? 0);
 }
 
 /** A part's own inertia about its own centre (axes parallel to the layout's). */

@@ -7,6 +7,7 @@
  * conservative choice for strength) and the range is kept beside it.
  */
 import type { SourceKey } from "../sources/index.ts";
+import { MATERIAL_DENSITIES, type MaterialId } from "./densities.ts";
 
 /** The numeric properties a row carries. */
 export type MaterialProperty = "density" | "yieldStrength" | "ultimateStrength" | "youngsModulus" | "poissonRatio";
@@ -58,7 +59,6 @@ export interface Material {
 
 const MPa = 1e6;
 const GPa = 1e9;
-const G_PER_CM3 = 1000;
 
 /**
  * The material table (see /work/shared/references.md §9 for the quotes behind each row).
@@ -67,11 +67,8 @@ const G_PER_CM3 = 1000;
  */
 export const MATERIALS = {
   "al-6061-t6": {
-    id: "al-6061-t6",
-    name: "Aluminium alloy 6061",
-    condition: "T6 / T651",
+    ...MATERIAL_DENSITIES["al-6061-t6"],
     basis: "typical",
-    density: 2.7 * G_PER_CM3,
     yieldStrength: 276 * MPa,
     ultimateStrength: 310 * MPa,
     youngsModulus: 68.9 * GPa,
@@ -84,11 +81,8 @@ export const MATERIALS = {
     note: "Typical values; the specified minimums (about 240/290 MPa) are lower, so design on those when it matters.",
   },
   "steel-4130-normalized": {
-    id: "steel-4130-normalized",
-    name: "AISI 4130 steel",
-    condition: "normalized at 870 °C",
+    ...MATERIAL_DENSITIES["steel-4130-normalized"],
     basis: "typical",
-    density: 7.85 * G_PER_CM3,
     yieldStrength: 435 * MPa,
     ultimateStrength: 670 * MPa,
     youngsModulus: 205 * GPa,
@@ -101,11 +95,8 @@ export const MATERIALS = {
     note: "Strength depends strongly on heat treatment; quote the condition with the numbers.",
   },
   "steel-4130-annealed": {
-    id: "steel-4130-annealed",
-    name: "AISI 4130 steel",
-    condition: "annealed at 865 °C",
+    ...MATERIAL_DENSITIES["steel-4130-annealed"],
     basis: "typical",
-    density: 7.85 * G_PER_CM3,
     yieldStrength: 460 * MPa,
     ultimateStrength: 560 * MPa,
     youngsModulus: 205 * GPa,
@@ -118,11 +109,8 @@ export const MATERIALS = {
     note: "As printed, the annealed yield (460 MPa) exceeds the normalized yield (435 MPa); both are the data sheets' typical values.",
   },
   "steel-4340-annealed": {
-    id: "steel-4340-annealed",
-    name: "AISI 4340 steel",
-    condition: "annealed",
+    ...MATERIAL_DENSITIES["steel-4340-annealed"],
     basis: "typical",
-    density: 7.85 * G_PER_CM3,
     yieldStrength: 470 * MPa,
     ultimateStrength: 745 * MPa,
     youngsModulus: 205 * GPa,
@@ -135,11 +123,8 @@ export const MATERIALS = {
     note: "Soft condition, as bought before hardening.",
   },
   "steel-4340-normalized": {
-    id: "steel-4340-normalized",
-    name: "AISI 4340 steel",
-    condition: "normalized (100 mm round)",
+    ...MATERIAL_DENSITIES["steel-4340-normalized"],
     basis: "typical",
-    density: 7.85 * G_PER_CM3,
     yieldStrength: 710 * MPa,
     ultimateStrength: 1110 * MPa,
     youngsModulus: 205 * GPa,
@@ -152,11 +137,8 @@ export const MATERIALS = {
     note: "Section size matters: the data sheet is for a 100 mm round.",
   },
   "steel-4340-qt650": {
-    id: "steel-4340-qt650",
-    name: "AISI 4340 steel",
-    condition: "oil quenched from 800 °C, tempered at 650 °C (50 mm round)",
+    ...MATERIAL_DENSITIES["steel-4340-qt650"],
     basis: "typical",
-    density: 7.85 * G_PER_CM3,
     yieldStrength: 834 * MPa,
     ultimateStrength: 931 * MPa,
     youngsModulus: 205 * GPa,
@@ -169,11 +151,8 @@ export const MATERIALS = {
     note: "A high temper: tough rather than hard. Lower tempering temperatures give far higher strength.",
   },
   "tool-steel-s7-t205": {
-    id: "tool-steel-s7-t205",
-    name: "AISI S7 shock-resisting tool steel",
-    condition: "fan-cooled from 940 °C, tempered at 205 °C (58 HRC)",
+    ...MATERIAL_DENSITIES["tool-steel-s7-t205"],
     basis: "typical",
-    density: 7.76 * G_PER_CM3,
     yieldStrength: 1450 * MPa,
     ultimateStrength: 2170 * MPa,
     youngsModulus: 205 * GPa,
@@ -186,11 +165,8 @@ export const MATERIALS = {
     note: "Nominal values from a secondary copy of the table. E and ν are taken as the typical steel values (205 GPa, 0.29), not read from an S7 source.",
   },
   "ti-6al-4v-annealed": {
-    id: "ti-6al-4v-annealed",
-    name: "Titanium alloy Ti-6Al-4V (Grade 5)",
-    condition: "annealed bar",
+    ...MATERIAL_DENSITIES["ti-6al-4v-annealed"],
     basis: "typical",
-    density: 4.43 * G_PER_CM3,
     yieldStrength: 830 * MPa,
     ultimateStrength: 900 * MPa,
     youngsModulus: 114 * GPa,
@@ -203,11 +179,8 @@ export const MATERIALS = {
     note: "Typical values; the specified minimums (ASTM B348/B265 Grade 5) are about 828/897 MPa.",
   },
   "uhmw-pe": {
-    id: "uhmw-pe",
-    name: "Ultra-high-molecular-weight polyethylene (UHMW-PE)",
-    condition: "as supplied (sheet or bar)",
+    ...MATERIAL_DENSITIES["uhmw-pe"],
     basis: "typical",
-    density: 0.94 * G_PER_CM3,
     yieldStrength: 21.4 * MPa,
     ultimateStrength: 38.6 * MPa,
     yieldStrengthRange: [21.4 * MPa, 27.6 * MPa],
@@ -223,11 +196,8 @@ export const MATERIALS = {
     note: "Density and modulus are confirmed; the strengths and ν are from memory and vary with grade and temperature.",
   },
   polycarbonate: {
-    id: "polycarbonate",
-    name: "Polycarbonate (PC)",
-    condition: "molded / extruded sheet",
+    ...MATERIAL_DENSITIES.polycarbonate,
     basis: "typical",
-    density: 1.2 * G_PER_CM3,
     yieldStrength: 62.1 * MPa,
     ultimateStrength: 62.8 * MPa,
     ultimateStrengthRange: [62.8 * MPa, 72.4 * MPa],
@@ -241,14 +211,4 @@ export const MATERIALS = {
     fromMemory: ["ultimateStrength", "poissonRatio"],
     note: "Density, yield and modulus are confirmed; the tensile range and ν are from memory.",
   },
-} as const satisfies Record<string, Material>;
-
-export type MaterialId = keyof typeof MATERIALS;
-
-/** The material ids in table order. */
-export const MATERIAL_IDS = Object.keys(MATERIALS) as readonly MaterialId[];
-
-/** True when `id` names a row of `MATERIALS`. */
-export function isMaterialId(id: string): id is MaterialId {
-  return Object.hasOwn(MATERIALS, id);
-}
+} as const satisfies Record<MaterialId, Material>;

@@ -7,7 +7,8 @@
 import { STANDARD_GRAVITY } from "../core/constants.ts";
 import { CalcInputError } from "../core/errors.ts";
 import { defineInputs } from "../core/inputs.ts";
-import { isMaterialId, MATERIAL_IDS, MATERIALS, type MaterialId } from "../materials/materials.ts";
+import { MATERIALS } from "../materials/materials.ts";
+import { isMaterialId, MATERIAL_IDS, type MaterialId } from "../materials/densities.ts";
 import { rpmToRadPerSecond } from "../core/units.ts";
 import { type BearingCheck, bearingCheck, BEARING_TYPE_OPTIONS, type BearingType, staticSafetyGuide } from "./bearings.ts";
 import { ratioOrNull, requireWithinSpecs as requireDeclaredInputs, requireInputObject } from "../core/spec-check.ts";

@@ -9,7 +9,7 @@ import { useEffect, useMemo } from "preact/hooks";
 import { BALANCE_GRADES } from "../../calc/mass/balance.ts";
 import { PART_SHAPE_KINDS } from "../../calc/mass/parts.ts";
 import type { MirrorAxis } from "../../calc/mass/editing.ts";
-import { MATERIALS } from "../../calc/materials/materials.ts";
+import { MATERIAL_DENSITIES } from "../../calc/materials/densities.ts";
 import { formatNumber, formatQuantity, type QuantityKind, type UnitId, type UnitSystem } from "../../calc/core/units.ts";
 import { QuantityField } from "../calc-ui/QuantityField.tsx";
 import { Toolbar } from "../calc-ui/Toolbar.tsx";
@@ -120,7 +120,7 @@ function PartCard({ model, part, index, id, error, q }: { model: MassModel; part
                   <label for={`${pid}-src`}>Mass from</label>
                   <select id={`${pid}-src`} value={part.source.value} onChange={(e) => (part.source.value = e.currentTarget.value as typeof part.source.value)}>
                     <option value="given">Weighed mass</option>
-                    {Object.values(MATERIALS).map((m) => (
+                    {Object.values(MATERIAL_DENSITIES).map((m) => (
                       <option key={m.id} value={m.id}>
                         {m.name}, {m.condition}
                       </option>

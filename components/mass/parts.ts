@@ -5,7 +5,7 @@
  */
 import { signal, type Signal } from "../calc-ui/reactive.ts";
 import { defineInputs, exactFieldText, fieldUnit, type InputSpec } from "../../calc/core/inputs.ts";
-import type { MaterialId } from "../../calc/materials/materials.ts";
+import type { MaterialId } from "../../calc/materials/densities.ts";
 import type { LayoutPart, PartShape, PartShapeKind } from "../../calc/mass/parts.ts";
 import { fromSI, UNITS, type UnitSystem } from "../../calc/core/units.ts";
 import { createFieldsModel, type FieldsModel } from "../calc-ui/fields.ts";

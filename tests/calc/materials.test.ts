@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
-import { isMaterialId, MATERIAL_IDS, MATERIALS, type MaterialId, type MaterialProperty } from "../../calc/materials/materials.ts";
+import { MATERIALS, type MaterialProperty } from "../../calc/materials/materials.ts";
+import { isMaterialId, MATERIAL_IDS, type MaterialId } from "../../calc/materials/densities.ts";
 import { isSourceKey } from "../../calc/sources/index.ts";
 
 const MPA = 1e6;

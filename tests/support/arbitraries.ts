@@ -5,7 +5,7 @@
 import fc from "fast-check";
 import type { AnyCalculator, AnyValues } from "../../calc/core/calculator.ts";
 import type { InputSpec } from "../../calc/core/inputs.ts";
-import { MATERIAL_IDS } from "../../calc/materials/materials.ts";
+import { MATERIAL_IDS } from "../../calc/materials/densities.ts";
 import type { LayoutPart, PartShape } from "../../calc/mass/parts.ts";
 
 // fast-check arbitraries: sensible robot-sized parts.
