@@ -60,7 +60,7 @@ export interface MotorLine {
  * @returns the line's end points and peak power (see `MotorLine`)
  *
  * Assumptions: no inductance (steady state), constant loss torque K_t·I_0 (with I_0 = 0 this is
- * the ideal line, P_max = V²/(4R)). Example (COMPUTED): V = 24 V, Kv = 100 rpm/V, R = 0.1 Ω →
+ * the ideal line, P_max = V²/(4R)). Example (computed in double precision from these relations): V = 24 V, Kv = 100 rpm/V, R = 0.1 Ω →
  * ω_nl = 251.33 rad/s (2400 rpm), I_stall = 240 A, T_stall = 22.918 N·m, P_max = 1440 W.
  *
  * Sources: hughes-drury-motors, motor-constants-wikipedia.
@@ -121,7 +121,7 @@ export interface MotorLinePoint {
  * @param points number of points, a whole number from 2 to 1000 (default 41)
  * @returns evenly spaced points from ω = 0 to ω_nl: speed [rad/s], torque [N·m], current [A], power [W]
  *
- * Example (COMPUTED): 24 V, 100 rpm/V, 0.1 Ω, 3 points → torque 22.92, 11.46, 0 N·m; power 0, 1440, 0 W.
+ * Example (computed in double precision from T = T_stall(1 − ω/ω_nl)): 24 V, 100 rpm/V, 0.1 Ω, 3 points → torque 22.92, 11.46, 0 N·m; power 0, 1440, 0 W.
  * Sources: hughes-drury-motors.
  */
 export function torqueSpeedLine(
@@ -156,7 +156,7 @@ export function torqueSpeedLine(
  * @returns τ [s]
  *
  * Assumptions: no inductance, linear motor, load with no speed-dependent torque.
- * Example (COMPUTED): J = 0.01 kg·m², R = 0.1 Ω, Kv = 100 rpm/V → τ = 0.109 662 271 1 s.
+ * Example (computed in double precision from τ = J·R/(K_t·K_e)): J = 0.01 kg·m², R = 0.1 Ω, Kv = 100 rpm/V → τ = 0.109 662 271 1 s.
  *
  * Sources: ctms-dc-motor-speed, first-order-step-response.
  */
@@ -197,7 +197,7 @@ export function spinUpTimeConstant({
  * @param initialSpeed ω_0 [rad/s], finite (default 0)
  * @returns ω(t) [rad/s]
  *
- * Example (COMPUTED): ω_nl = 251.327 rad/s, τ = 0.109 662 s → ω(0.1 s) = 150.353 128 6 rad/s.
+ * Example (computed in double precision from ω(t) = ω_nl(1 − e^(−t/τ))): ω_nl = 251.327 rad/s, τ = 0.109 662 s → ω(0.1 s) = 150.353 128 6 rad/s.
  * Sources: first-order-step-response.
  */
 export function voltageLimitedSpeed({
@@ -228,7 +228,7 @@ export function voltageLimitedSpeed({
  * @param fraction f of the final speed [-], 0 ≤ f < 1 (the final speed itself is never reached)
  * @returns t_f [s]
  *
- * Example (COMPUTED): τ = 0.109 662 271 1 s → t_90 = 0.252 506 710 8 s. Sources: first-order-step-response.
+ * Example (computed in double precision from t_f = −τ·ln(1 − f)): τ = 0.109 662 271 1 s → t_90 = 0.252 506 710 8 s. Sources: first-order-step-response.
  */
 export function timeToSpeedFraction({ timeConstant, fraction }: { timeConstant: number; fraction: number }): number {
   requirePositive("timeConstant", timeConstant, "s");

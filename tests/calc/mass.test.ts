@@ -72,8 +72,9 @@ const layoutArb = fc.array(partArb, { minLength: 1, maxLength: 8 });
 // ---------------------------------------------------------------------------------------------
 
 describe("moments of inertia of each shape against the handbook table", () => {
-  // Formulas: /work/shared/references.md §5 (CONFIRMED quotes); values: the COMPUTED test vectors
-  // printed there to 10 significant figures or exactly, so rtol 1e-12 (floating point only).
+  // Formulas: each row's source (Concise Oxford Dictionary of Mathematics App. 3, mathmos, web-formulas,
+  // Young & Freedman Table 9.2); values computed in double precision from those formulas, to 10
+  // significant figures or exactly, so rtol 1e-12 (floating point only).
   const CASES = [
     {
       source: "oxford-concise-mathematics",
@@ -159,7 +160,7 @@ describe("moments of inertia of each shape against the handbook table", () => {
     expectRel(massProperties([rod]).inertiaAboutOrigin, (1 * 0.3 ** 2) / 3, 1e-12);
   });
 
-  it("oxford-concise-mathematics, annulus from dimensions: steel ρ 7850, 20–100 mm, 10 mm thick (references §5 COMPUTED m = 2.367504224 kg, I = 0.01231102196 kg·m²)", () => {
+  it("oxford-concise-mathematics, annulus from dimensions: steel ρ 7850, 20–100 mm, 10 mm thick (computed in double precision from I = ρπt(R₂⁴ − R₁⁴)/2: m = 2.367504224 kg, I = 0.01231102196 kg·m²)", () => {
     const ring: LayoutPart = {
       name: "flywheel",
       shape: { kind: "annulus", innerRadius: 0.02, outerRadius: 0.1 },
@@ -319,7 +320,7 @@ describe("ISO 21940-11 balance quality grades", () => {
       expected: 1.0,
       pick: (u: { unbalance: number; perPlane: number }) => fromSI(u.unbalance, "oz·in"),
       rtol: 0.05,
-      note: "printed 1.0 oz·in: ± half a unit in the last digit (ours 1.0026, also within the 1 % the reference file suggests)",
+      note: "printed 1.0 oz·in: ± half a unit in the last digit (ours 1.0026, also within 1 %)",
     },
     {
       source: "energy-tech-balancing-example",
@@ -1091,7 +1092,7 @@ describe("the counterweight the calculator applies (counterweightPlan)", () => {
   });
 });
 
-describe("regression pins (COMPUTED by this module, not outside references)", () => {
+describe("regression pins (our own digits from this module, not outside references)", () => {
   const d = demoRobotBalance();
   const b = d.balance;
   it.each([
@@ -1113,12 +1114,12 @@ describe("regression pins (COMPUTED by this module, not outside references)", ()
     { what: "demo offset with 7 washers [m]", value: d.withWashers.after.offset, pin: 8.464062957991494e-5 },
     { what: "demo sensor drift with washers [rad/rev]", value: d.sensorWithWashers.driftPerRevolution, pin: 0.008304086885545583 },
     {
-      what: "G 6.3 at 3000 rpm, e_per [m] (references §2.3 c)",
+      what: "G 6.3 at 3000 rpm, e_per [m] (computed in double precision from ISO 21940-11 G = e_per·Ω)",
       value: permissibleResidualUnbalance({ totalMass: 1, grade: 0.0063, angularSpeed: rpmToRadPerSecond(3000) }).specificUnbalance,
       pin: 20.05352283e-6,
     },
     {
-      what: "1000 lb, 15 000 rpm, G 2.5 in g·mm (references §2.3 a)",
+      what: "1000 lb, 15 000 rpm, G 2.5 in g·mm (energy-tech-balancing-example p. 4, recomputed in SI in double precision)",
       value: fromSI(permissibleResidualUnbalance({ totalMass: toSI(1000, "lb"), grade: 0.0025, angularSpeed: rpmToRadPerSecond(15000) }).unbalance, "g·mm"),
       pin: 721.914678,
     },

@@ -15,77 +15,77 @@ interface Row {
   note: string;
 }
 
-// Reference values: /work/shared/references.md §9 (each row names the source it was read from).
+// Reference values: each row names the published data sheet or table it was read from.
 const TABLE: Row[] = [
   {
     source: "substech-materials",
-    locator: "6061 T6/T651 (references §9 row 1)",
+    locator: "6061 T6/T651: tensile 310 MPa, yield 276 MPa, density 2.70·10³ kg/m³",
     id: "al-6061-t6",
     expected: { densityGcm3: 2.7, yieldMPa: 276, ultimateMPa: 310 },
-    note: "published, CONFIRMED",
+    note: "published",
   },
   {
     source: "asm-matweb-datasheets",
     locator: "AISI 4130 normalized 870 °C, M4130R",
     id: "steel-4130-normalized",
     expected: { densityGcm3: 7.85, yieldMPa: 435, ultimateMPa: 670 },
-    note: "published, CONFIRMED",
+    note: "published",
   },
   {
     source: "asm-matweb-datasheets",
     locator: "AISI 4130 annealed 865 °C, M4130A",
     id: "steel-4130-annealed",
     expected: { densityGcm3: 7.85, yieldMPa: 460, ultimateMPa: 560 },
-    note: "published, CONFIRMED",
+    note: "published",
   },
   {
     source: "asm-matweb-datasheets",
     locator: "AISI 4340 annealed, M434AA",
     id: "steel-4340-annealed",
     expected: { densityGcm3: 7.85, yieldMPa: 470, ultimateMPa: 745 },
-    note: "published, CONFIRMED",
+    note: "published",
   },
   {
     source: "asm-matweb-datasheets",
     locator: "AISI 4340 normalized 100 mm round, M434AE",
     id: "steel-4340-normalized",
     expected: { densityGcm3: 7.85, yieldMPa: 710, ultimateMPa: 1110 },
-    note: "published, CONFIRMED",
+    note: "published",
   },
   {
     source: "asm-matweb-datasheets",
     locator: "AISI 4340 OQ 800 °C, 650 °C temper, 50 mm, M434AP",
     id: "steel-4340-qt650",
     expected: { densityGcm3: 7.85, yieldMPa: 834, ultimateMPa: 931 },
-    note: "published, CONFIRMED",
+    note: "published",
   },
   {
     source: "s7-nominal-properties-table",
     locator: "S7 tempered 205 °C (58 HRC)",
     id: "tool-steel-s7-t205",
     expected: { densityGcm3: 7.76, yieldMPa: 1450, ultimateMPa: 2170 },
-    note: "published, CONFIRMED in a secondary copy",
+    note: "published, read in a secondary reproduction of the nominal-properties table",
   },
   {
     source: "asm-matweb-datasheets",
     locator: "Ti-6Al-4V Grade 5 annealed, MTP644",
     id: "ti-6al-4v-annealed",
     expected: { densityGcm3: 4.43, yieldMPa: 830, ultimateMPa: 900 },
-    note: "published, CONFIRMED",
+    note: "published",
   },
   {
     source: "callister-integrated-3e",
     locator: "App. B Tables B.1 and B.4, UHMWPE",
     id: "uhmw-pe",
     expected: { densityGcm3: 0.94, yieldMPa: 21.4, ultimateMPa: 38.6, yieldRangeMPa: [21.4, 27.6], ultimateRangeMPa: [38.6, 48.3] },
-    note: "density CONFIRMED; strength ranges FROM MEMORY; design value = low end",
+    note: "density published (Table B.1); strength ranges (Table B.4) from memory; design value = low end",
   },
   {
     source: "callister-integrated-3e",
     locator: "App. B Tables B.4 and B.5, polycarbonate",
     id: "polycarbonate",
     expected: { densityGcm3: 1.2, yieldMPa: 62.1, ultimateMPa: 62.8, ultimateRangeMPa: [62.8, 72.4] },
-    note: "density and yield CONFIRMED; tensile range FROM MEMORY; design value = low end",
+    note: "density (MatWeb polycarbonate overview) and yield (Table B.5) published; tensile range (Table B.4) from memory; design value = low end",
   },
 ];
 

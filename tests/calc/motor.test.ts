@@ -28,7 +28,8 @@ const { Solver } = createRequire(import.meta.url)("odex") as { Solver: new (n: n
 const close = (actual: number, expected: number, rtol: number, atol = 0) =>
   expect(Math.abs(actual - expected)).toBeLessThanOrEqual(rtol * Math.abs(expected) + atol);
 
-// The worked example of references §6.3: V = 24 V, Kv = 100 rpm/V, R = 0.1 Ω, J = 0.01 kg·m².
+// An invented worked example, computed in double precision from the ideal DC-motor relations and
+// τ = J·R/(K_t·K_e): V = 24 V, Kv = 100 rpm/V, R = 0.1 Ω, J = 0.01 kg·m².
 const EX = { voltage: 24, kv: rpmToRadPerSecond(100), resistance: 0.1, inertia: 0.01 };
 
 describe("torque constant from Kv", () => {
@@ -39,15 +40,15 @@ describe("torque constant from Kv", () => {
       inputs: { kvRpm: 1000 },
       expected: 60 / (2 * Math.PI * 1000),
       rtol: 1e-12,
-      note: "the published formula evaluated exactly (DERIVED-EXACT); 0.009 549 296 586 N·m/A",
+      note: "the published formula evaluated exactly; 0.009 549 296 586 N·m/A",
     },
     {
       source: "motor-constants-wikipedia",
-      locator: "K_T = 60/(2π K_v(RPM)), the §6.3 motor",
+      locator: "K_T = 60/(2π K_v(RPM)), the worked-example motor",
       inputs: { kvRpm: 100 },
       expected: 0.09549296586,
       rtol: 1e-10,
-      note: "references §6.3 prints 0.095 492 965 86 (11 digits)",
+      note: "computed in double precision from the published formula, printed as 0.095 492 965 86 (11 digits)",
     },
     {
       source: "ctms-dc-motor-speed",
@@ -55,7 +56,7 @@ describe("torque constant from Kv", () => {
       inputs: { kvRpm: 1000 / 25 },
       expected: 25 / rpmToRadPerSecond(1000),
       rtol: 1e-12,
-      note: "COMPUTED: K_e = 25 V / 104.72 rad/s = 0.2387 V·s/rad, which is K_t in N·m/A (the book's answer is not shown)",
+      note: "computed from K_t = K_e in SI: K_e = 25 V / 104.72 rad/s = 0.2387 V·s/rad, which is K_t in N·m/A (the book's answer is not shown)",
     },
   ])("$source, $locator: $expected N·m/A ($note)", ({ inputs, expected, rtol }) => {
     close(torqueConstantFromKv({ kv: rpmToRadPerSecond(inputs.kvRpm) }), expected, rtol);
@@ -120,7 +121,8 @@ describe("the torque–speed line (hughes-drury-motors)", () => {
 
 describe("first-order spin-up of an inertia (first-order-step-response)", () => {
   it("reaches 63.2 % of the final speed at t = τ (the mechanical-time-constant definition)", () => {
-    // Published only at low authority (references §6.3); 3 significant figures → rtol 5e-3.
+    // The 63.2 % definition is published only on low-authority web pages (common practice otherwise);
+    // 3 significant figures → rtol 5e-3.
     close(voltageLimitedSpeed({ finalSpeed: 1, timeConstant: 0.2, time: 0.2 }), 0.632, 5e-3);
   });
 
@@ -158,7 +160,7 @@ describe("first-order spin-up of an inertia (first-order-step-response)", () => 
 });
 
 describe("steady speed against friction: the CTMS DC-motor example (ctms-dc-motor-speed)", () => {
-  const CTMS = { J: 0.01, b: 0.1, K: 0.01, R: 1, L: 0.5, V: 1 }; // parameters FROM MEMORY (references §6.3)
+  const CTMS = { J: 0.01, b: 0.1, K: 0.01, R: 1, L: 0.5, V: 1 }; // parameters from memory (Control Tutorials for MATLAB & Simulink, DC Motor Speed)
 
   it("settles near the published 0.1 rad/s for a 1 V step", () => {
     // The tutorial prints one significant figure: ± half a unit in the last digit is ±0.05 rad/s.
@@ -182,7 +184,7 @@ describe("steady speed against friction: the CTMS DC-motor example (ctms-dc-moto
   });
 });
 
-describe("regression pins (COMPUTED in references §6.2–6.3, not outside authorities)", () => {
+describe("regression pins (our own digits, computed in double precision from the ideal DC-motor relations, not outside authorities)", () => {
   it.each([
     { quantity: "no-load speed", actual: () => motorLine(EX).noLoadSpeed, expected: 251.3274123, rtol: 1e-9 },
     { quantity: "stall current", actual: () => motorLine(EX).stallCurrent, expected: 240, rtol: 1e-12 },

@@ -43,8 +43,8 @@ function halfUnitRtol(printed: string): number {
 // -------------------------------------------------------------------------------------------------
 
 describe("Unified inch tensile stress areas (ASME B1.1 / FED-STD-H28 formula against the printed tables)", () => {
-  const TABLE_8_2 = "Shigley's Mechanical Engineering Design, 9th ed., Table 8-2 (compiled from ANSI B1.1-1974), p. 438 (CONFIRMED)";
-  const UNC_2B = "a published UNC 2B internal-thread table with stress areas, scribd copy (CONFIRMED)";
+  const TABLE_8_2 = "Shigley's Mechanical Engineering Design, 9th ed., Table 8-2 (compiled from ANSI B1.1-1974), p. 438";
+  const UNC_2B = "a published UNC 2B internal-thread table with stress areas, scribd copy";
   const CASES: { source: string; locator: string; inputs: { size: InchThreadSize }; printed: string; rtol: number; note: string }[] = [
     { source: "shigley-mechanical-design", locator: TABLE_8_2, inputs: { size: "#2-56" }, printed: "0.00370", rtol: halfUnitRtol("0.00370"), note: "" },
     {
@@ -59,7 +59,7 @@ describe("Unified inch tensile stress areas (ASME B1.1 / FED-STD-H28 formula aga
     { source: "shigley-mechanical-design", locator: TABLE_8_2, inputs: { size: "#8-32" }, printed: "0.0140", rtol: halfUnitRtol("0.0140"), note: "" },
     {
       source: "astm-a574",
-      locator: "load table row '0.190 24 3,150 0.0175 2,450' (CONFIRMED)",
+      locator: "load table row '0.190 24 3,150 0.0175 2,450'",
       inputs: { size: "#10-24" },
       printed: "0.0175",
       rtol: halfUnitRtol("0.0175"),
@@ -68,7 +68,7 @@ describe("Unified inch tensile stress areas (ASME B1.1 / FED-STD-H28 formula aga
     { source: "shigley-mechanical-design", locator: TABLE_8_2, inputs: { size: "#10-32" }, printed: "0.0200", rtol: halfUnitRtol("0.0200"), note: "UNF" },
     {
       source: "astm-a574",
-      locator: "load table row '0.250 20 5,730 0.0318 4,450' (CONFIRMED)",
+      locator: "load table row '0.250 20 5,730 0.0318 4,450'",
       inputs: { size: "1/4-20" },
       printed: "0.0318",
       rtol: halfUnitRtol("0.0318"),
@@ -76,7 +76,7 @@ describe("Unified inch tensile stress areas (ASME B1.1 / FED-STD-H28 formula aga
     },
     {
       source: "astm-a574",
-      locator: "load table row '0.3125 18 9,440 0.0524 7,340' (CONFIRMED)",
+      locator: "load table row '0.3125 18 9,440 0.0524 7,340'",
       inputs: { size: "5/16-18" },
       printed: "0.0524",
       rtol: halfUnitRtol("0.0524"),
@@ -84,7 +84,7 @@ describe("Unified inch tensile stress areas (ASME B1.1 / FED-STD-H28 formula aga
     },
     {
       source: "astm-a574",
-      locator: "load table row '0.375 16 13,900 0.0775 10,800' (CONFIRMED)",
+      locator: "load table row '0.375 16 13,900 0.0775 10,800'",
       inputs: { size: "3/8-16" },
       printed: "0.0775",
       rtol: halfUnitRtol("0.0775"),
@@ -146,7 +146,7 @@ describe("Unified inch tensile stress areas (ASME B1.1 / FED-STD-H28 formula aga
 });
 
 describe("class 2A/2B limits from the ASME B1.1 tolerance formulas", () => {
-  const UNC_2B = "UNC 2B internal-thread table (pitch diameter max), scribd copy (CONFIRMED)";
+  const UNC_2B = "UNC 2B internal-thread table (pitch diameter max), scribd copy";
   const PITCH_MAX: { source: string; locator: string; inputs: { size: InchThreadSize }; expected: number; rtol: number; note: string }[] = [
     { source: "asme-b1-1", locator: UNC_2B, inputs: { size: "#2-56" }, expected: 0.0772, rtol: 0, note: "also in an ANSI B1.1 table reproduced at efunda" },
     { source: "asme-b1-1", locator: UNC_2B, inputs: { size: "#4-40" }, expected: 0.0991, rtol: 0, note: "" },
@@ -166,14 +166,14 @@ describe("class 2A/2B limits from the ASME B1.1 tolerance formulas", () => {
   it.each([
     {
       source: "asme-b1-1",
-      locator: "ANSI B1.1 table reproduced at efunda.com, '2-56 UNC 2A 0.0006 0.0854 0.0813' (CONFIRMED)",
+      locator: "ANSI B1.1 table reproduced at efunda.com, '2-56 UNC 2A 0.0006 0.0854 0.0813'",
       size: "#2-56",
       major: 0.0813,
       allowance: 0.0006,
     },
     {
       source: "asme-b1-1",
-      locator: "unified thread-limits table, 1/4-20 2A major minimum 0.2408 (CONFIRMED)",
+      locator: "unified thread-limits table, 1/4-20 2A major minimum 0.2408",
       size: "1/4-20",
       major: 0.2408,
       allowance: 0.0011,
@@ -202,7 +202,7 @@ describe("class 2A/2B limits from the ASME B1.1 tolerance formulas", () => {
 });
 
 describe("ISO metric 6g/6H limits in the unified lookup (ASME B1.13M, interchangeable with ISO 965)", () => {
-  const EXTERNAL = "metric external thread chart, ASME B1.13M limits, amesweb.info metric-thread-chart (CONFIRMED)";
+  const EXTERNAL = "metric external thread chart, ASME B1.13M limits, amesweb.info metric-thread-chart";
   const CASES = [
     { source: "asme-b1-13m", locator: EXTERNAL, size: "M2", majorMin: 1.886, pitchMax: 1.83, pitchNote: "from memory: 1.740 + T_D2 0.090 (ISO 965-1 grade 6)" },
     // biome-ignore lint/suspicious/noApproximativeNumericConstant: 2.303 mm is a thread limit, not ln 10
@@ -218,7 +218,7 @@ describe("ISO metric 6g/6H limits in the unified lookup (ASME B1.13M, interchang
       size: "M10",
       majorMin: 9.732,
       pitchMax: 9.206,
-      pitchNote: "CONFIRMED: internal chart per ASME B1.13M, engineersedge.com 'M10x1.5 6H … 9.026 9.206'",
+      pitchNote: "internal chart per ASME B1.13M, engineersedge.com 'M10x1.5 6H … 9.026 9.206'",
     },
     {
       source: "asme-b1-13m",
@@ -226,7 +226,7 @@ describe("ISO metric 6g/6H limits in the unified lookup (ASME B1.13M, interchang
       size: "M12",
       majorMin: 11.701,
       pitchMax: 11.063,
-      pitchNote: "CONFIRMED: engineersedge.com 'M12x1.75 6H … 10.863 11.063'",
+      pitchNote: "engineersedge.com 'M12x1.75 6H … 10.863 11.063'",
     },
   ] as const;
 
@@ -322,8 +322,8 @@ describe("the unified size lookup", () => {
 // -------------------------------------------------------------------------------------------------
 
 describe("SAE J429 and ASTM A574 strengths", () => {
-  const TABLE_8_9 = "Shigley 9th ed. Table 8-9, SAE specifications for steel bolts, p. 458 (CONFIRMED)";
-  const A574 = "mechanical requirements, 0.500 in and smaller: 'Tensile … 180', 'Proof load (stress), ksi 140', 'Yield … 153' (CONFIRMED, technical-data copy)";
+  const TABLE_8_9 = "Shigley 9th ed. Table 8-9, SAE specifications for steel bolts, p. 458";
+  const A574 = "mechanical requirements, 0.500 in and smaller: 'Tensile … 180', 'Proof load (stress), ksi 140', 'Yield … 153' (technical-data copy)";
   const ROWS: {
     source: string;
     locator: string;
@@ -379,7 +379,7 @@ describe("SAE J429 and ASTM A574 strengths", () => {
     }
   });
 
-  // ASTM A574's load table (technical-data copy, CONFIRMED): minimum tensile and proof loads [lbf],
+  // ASTM A574's load table (technical-data copy): minimum tensile and proof loads [lbf],
   // A_s × 180 ksi and A_s × 140 ksi, printed to about 3 significant figures and not uniformly
   // rounded (the 5/16 and 3/8 rows follow the unrounded area): ± 0.5 %.
   it.each([
@@ -446,7 +446,7 @@ describe("the unified grade lookup and its scope", () => {
   });
 });
 
-describe("regression pins (COMPUTED, not outside authorities)", () => {
+describe("regression pins (our own digits, not outside authorities)", () => {
   // Formula areas of the Unified sizes, python3 to 6 significant figures: ± 1e-5 relative.
   it.each([
     ["#2-56", 0.00369625],

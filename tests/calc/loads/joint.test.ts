@@ -90,7 +90,7 @@ describe("preload from torque and the recommended preload (Shigley 9th ed., ch. 
     },
     {
       source: "Mechanical Fastening, Joining, and Assembly (book), T = K × D × P example",
-      locator: "K = 0.3: 0.3 (0.190 in)(1275 lb) = 72.7 in·lb (CONFIRMED, online copy)",
+      locator: "K = 0.3: 0.3 (0.190 in)(1275 lb) = 72.7 in·lb (online copy)",
       inputs: { preload: 1275, nutFactor: 0.3, nominalDiameter: 0.19 },
       expected: 72.7,
       rtol: halfUnitRtol("72.7"),
@@ -98,7 +98,7 @@ describe("preload from torque and the recommended preload (Shigley 9th ed., ch. 
     },
     {
       source: "Mechanical Fastening, Joining, and Assembly (book)",
-      locator: "K = 0.15: 36.3 in·lb (CONFIRMED)",
+      locator: "K = 0.15: 36.3 in·lb",
       inputs: { preload: 1275, nutFactor: 0.15, nominalDiameter: 0.19 },
       expected: 36.3,
       rtol: halfUnitRtol("36.3"),
@@ -106,7 +106,7 @@ describe("preload from torque and the recommended preload (Shigley 9th ed., ch. 
     },
     {
       source: "Mechanical Fastening, Joining, and Assembly (book)",
-      locator: "K = 0.1: 24.2 in·lb (CONFIRMED)",
+      locator: "K = 0.1: 24.2 in·lb",
       inputs: { preload: 1275, nutFactor: 0.1, nominalDiameter: 0.19 },
       expected: 24.2,
       rtol: halfUnitRtol("24.2"),
@@ -130,14 +130,14 @@ describe("preload from torque and the recommended preload (Shigley 9th ed., ch. 
     );
   });
 
-  it("recommends 0.75 F_p for reused fasteners and 0.90 F_p for permanent joints (Shigley Eq. 8-31, p. 467, CONFIRMED)", () => {
+  it("recommends 0.75 F_p for reused fasteners and 0.90 F_p for permanent joints (Shigley Eq. 8-31, p. 467)", () => {
     expect(RECOMMENDED_PRELOAD_SHARE).toEqual({ reusable: 0.75, permanent: 0.9 });
-    // Shigley Ex. 8-4: F_i = 0.75 A_t S_p = 0.75 (0.226)(85) = 14.4 kip (CONFIRMED).
+    // Shigley Ex. 8-4: F_i = 0.75 A_t S_p = 0.75 (0.226)(85) = 14.4 kip.
     expectClose(recommendedPreload({ proofLoad: 0.226 * 85, use: "reusable" }), 14.4, halfUnitRtol("14.4"));
     expect(() => recommendedPreload({ proofLoad: 1000, use: "forever" as "permanent" })).toThrow(/^use must be one of reusable, permanent/);
   });
 
-  it("takes K = 0.2 by default and lists Shigley's Table 8-15 torque factors (p. 464, CONFIRMED)", () => {
+  it("takes K = 0.2 by default and lists Shigley's Table 8-15 torque factors (p. 464)", () => {
     expect(DEFAULT_NUT_FACTOR).toBe(0.2);
     expect(NUT_FACTORS.map((r) => r.nutFactor)).toEqual([0.3, 0.2, 0.18, 0.16, 0.12]);
   });
@@ -155,9 +155,9 @@ describe("preload from torque and the recommended preload (Shigley 9th ed., ch. 
 });
 
 describe("joint stiffness and load sharing (Shigley 9th ed., Examples 8-3 and 8-4)", () => {
-  // Ex. 8-4 (p. 468, CONFIRMED): 5/8-11 grade 5, grip 1.50 in of cast iron (E = 14 Mpsi), A_d = 0.3068,
+  // Ex. 8-4 (p. 468): 5/8-11 grade 5, grip 1.50 in of cast iron (E = 14 Mpsi), A_d = 0.3068,
   // A_t = 0.226 in², l_d = l_t = 0.75 in, E_bolt = 30 Mpsi. Printed to 3 significant figures.
-  const EX_8_4 = "Ex. 8-4, p. 468 (CONFIRMED)";
+  const EX_8_4 = "Ex. 8-4, p. 468";
   it.each([
     {
       source: "shigley-mechanical-design",
@@ -195,7 +195,7 @@ describe("joint stiffness and load sharing (Shigley 9th ed., Examples 8-3 and 8-
       actual: () => tensionJointFactors({ preload: 14.4, stiffnessFactor: 0.368, externalLoad: 6, proofLoad: 0.226 * 85 }).separationFactor,
       printed: "3.80",
     },
-    // Ex. 8-3 (p. 464, CONFIRMED): 3/4-16 UNF grade 5, A_t = 0.373 in², F_i = 25 kip, k_b 6.50, k_m 13.8 Mlbf/in, P = 6 kip.
+    // Ex. 8-3 (p. 464): 3/4-16 UNF grade 5, A_t = 0.373 in², F_i = 25 kip, k_b 6.50, k_m 13.8 Mlbf/in, P = 6 kip.
     {
       source: "shigley-mechanical-design",
       locator: "Ex. 8-3(a): C = 0.320",
@@ -267,14 +267,14 @@ describe("joint stiffness and load sharing (Shigley 9th ed., Examples 8-3 and 8-
 
 describe("clamp and slip", () => {
   it("gives the EN 1993-1-8 slip resistance of a published example before its partial factor (M20 10.9, two faying surfaces, μ 0.4)", () => {
-    // Published worked example (EN 1993-1-8 style, CONFIRMED): F_p,C = 0.7 × 1000 × 245 = 171.5 kN;
+    // Published worked example (EN 1993-1-8 style, on a third-party Eurocode 3 calculator web page): F_p,C = 0.7 × 1000 × 245 = 171.5 kN;
     // F_s,Rd = (1 × 2 × 0.4 / 1.25) × 171.5 = 109.76 kN. γ_M3 = 1.25 is applied here by the test.
     const preload = 0.7 * 1000e6 * 245e-6;
     expectClose(preload, 171.5e3, 1e-12);
     expectClose(slipResistance({ preload, frictionCoefficient: 0.4, boltCount: 1, interfaces: 2 }) / 1.25, 109.76e3, halfUnitRtol("109.76"));
   });
 
-  it("takes the EN 1090-2 Table 18 slip factors and defaults to the lowest, class D (CONFIRMED, OCR copy of the table)", () => {
+  it("takes the EN 1090-2 Table 18 slip factors and defaults to the lowest, class D (OCR copy of the table)", () => {
     expect(SLIP_FACTORS.filter((r) => r.source === "en-1090-2").map((r) => r.frictionCoefficient)).toEqual([0.5, 0.4, 0.3, 0.2]);
     expect(DEFAULT_FRICTION_COEFFICIENT).toBe(0.2);
     for (const row of SLIP_FACTORS) expect(isSourceKey(row.source)).toBe(true);
@@ -287,7 +287,7 @@ describe("clamp and slip", () => {
 });
 
 describe("the bolt once it slips: bending over the stack", () => {
-  it("takes M = F·h for a cantilever and F·h/2 for a guided bolt (Roark Table 8.1; Engineering ToolBox cantilever: 3000 N at 5000 mm → 1.5·10⁷ N·mm, CONFIRMED)", () => {
+  it("takes M = F·h for a cantilever and F·h/2 for a guided bolt (Roark Table 8.1; Engineering ToolBox cantilever: 3000 N at 5000 mm → 1.5·10⁷ N·mm)", () => {
     expect(boltBendingMoment({ force: 3000, height: 5000, endCondition: "cantilever" })).toBe(1.5e7);
     expect(boltBendingMoment({ force: 3000, height: 5000, endCondition: "guided" })).toBe(7.5e6);
     expect(END_CONDITION_OPTIONS[0].value).toBe("cantilever");
@@ -315,7 +315,7 @@ describe("the bolt once it slips: bending over the stack", () => {
     );
   });
 
-  it("gives Eurocode 3's packing factor 9d/(8d + 3t_p), never above 1 (en-1993-1-8 packing rule, CONFIRMED as restated in a textbook)", () => {
+  it("gives Eurocode 3's packing factor 9d/(8d + 3t_p), never above 1 (en-1993-1-8 packing rule, as restated in Ellobody, Finite Element Analysis and Design of Steel and Steel-Concrete Composite Bridges)", () => {
     expect(eurocodePackingFactor({ nominalDiameter: 0.004, packingThickness: 0.001 })).toBe(1);
     expectClose(eurocodePackingFactor({ nominalDiameter: 0.004, packingThickness: 0.005 }), 36 / 47, 1e-12);
   });
@@ -323,8 +323,8 @@ describe("the bolt once it slips: bending over the stack", () => {
 
 describe("the thread in the part: FED-STD-H28 shear area and stripping", () => {
   // A fastener distributor's engineering table, "Int Thread Stripping Area Asn, sq in per in of
-  // engagement" (scribd copy, CONFIRMED), computed by the FED-STD-H28 formula at the 2A/2B limits.
-  const TABLE = "distributor's technical table of internal thread stripping areas per inch of engagement (CONFIRMED)";
+  // engagement" (scribd copy), computed by the FED-STD-H28 formula at the 2A/2B limits.
+  const TABLE = "distributor's technical table of internal thread stripping areas per inch of engagement";
   it.each([
     { source: "fed-std-h28-2", locator: TABLE, inputs: { size: "1/4-20" }, printed: "0.539", note: "" },
     { source: "fed-std-h28-2", locator: TABLE, inputs: { size: "#10-24" }, printed: "0.401", note: "" },
@@ -792,7 +792,7 @@ describe("regression pins from the engineering review: the washer stack of the w
   });
 });
 
-describe("regression pins (COMPUTED from the formulas, not outside authorities)", () => {
+describe("regression pins (our own digits, computed with python3 from the formulas, not outside authorities)", () => {
   it("M5 12.9 and nut through two 5 mm aluminium plates (E 71.7 GPa, Shigley Table A-5), F_i = 0.75 F_p, P = 2000 N", () => {
     const kb = boltStiffness({
       shankArea: (Math.PI / 4) * 25e-6,
