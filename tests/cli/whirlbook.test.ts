@@ -25,7 +25,9 @@ function run(...args: string[]) {
 
 const demoFile = write("demo.json", designToText(demoDesign()));
 
-describe("whirlbook check", () => {
+// Each case starts Node a few times (about half a second each on an idle machine): give a busy
+// two-core machine room.
+describe("whirlbook check", { timeout: 30_000 }, () => {
   it("prints the demo design's build sheet and exits 1 because a check fails", () => {
     const { code, stdout } = run("check", demoFile);
     expect(code).toBe(1);
