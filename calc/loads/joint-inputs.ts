@@ -1,9 +1,9 @@
 import { defineInputs } from "../core/inputs.ts";
+import { fastenerCheckInputs } from "./bolts.ts";
 import { safetyThresholdInputs, type ChoiceOption, type LoadVerdict } from "./common.ts";
 import { MATERIALS } from "../materials/materials.ts";
 import { MATERIAL_IDS, type MaterialId } from "../materials/densities.ts";
 import type { PartLoad } from "../rotation/rotation.ts";
-import { rpmToRadPerSecond } from "../core/units.ts";
 import type { FastenerGrade, FastenerGradeId, FastenerSizeId, FastenerThread } from "./inch-fasteners.ts";
 import { DEFAULT_FRICTION_COEFFICIENT, DEFAULT_NUT_FACTOR, RECOMMENDED_PRELOAD_SHARE } from "./joint-data.ts";
 import type { TensionJointFactors, TensionJointLoads } from "./joint-stiffness.ts";
@@ -84,24 +84,8 @@ export const boltedJointInputs = defineInputs({
     urlKey: "m",
     help: "Everything the bolts hold against the spin (read when the load comes from a spinning part).",
   },
-  radius: {
-    label: "Radius of the part",
-    kind: "length",
-    min: 0.001,
-    max: 2,
-    default: 0.07,
-    urlKey: "r",
-    help: "From the spin axis to the part's own centre of mass.",
-  },
-  angularSpeed: {
-    label: "Speed",
-    kind: "angularSpeed",
-    min: rpmToRadPerSecond(1),
-    max: rpmToRadPerSecond(100000),
-    default: rpmToRadPerSecond(2400),
-    urlKey: "rpm",
-    help: "The top speed the part will see.",
-  },
+  radius: fastenerCheckInputs.radius,
+  angularSpeed: fastenerCheckInputs.angularSpeed,
   load: {
     label: "Load on the joint",
     kind: "force",

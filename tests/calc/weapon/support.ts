@@ -75,3 +75,24 @@ export function invalidValue(spec: InputSpec): fc.Arbitrary<unknown> {
   if (spec.integer) options.push(fc.double({ min: spec.min, max: spec.max, noNaN: true }).filter((x) => !Number.isInteger(x)));
   return fc.oneof(...options);
 }
+
+/**
+ * Checks that `run` refuses every invalid value of each declared field (out of range, non-finite,
+ * null, missing) with a `CalcInputError` naming that field, the other fields at their defaults.
+ */
+export function expectEachFieldNamed<T extends InputSpecs>(specs: T, defaults: object, run: (input: never) => unknown, runs: fc.Parameters<unknown>): void {
+  const names = Object.keys(specs);
+  fc.assert(
+    fc.property(fc.constantFrom(...names), fc.gen(), (name, gen) => {
+      const bad = gen(() => invalidValue(specs[name] as InputSpec));
+      try {
+        run({ ...defaults, [name]: bad } as never);
+        expect.unreachable(`accepted ${name} = ${String(bad)}`);
+      } catch (error) {
+        expect(error).toBeInstanceOf(CalcInputError);
+        expect((error as CalcInputError).param).toBe(name);
+      }
+    }),
+    runs,
+  );
+}
