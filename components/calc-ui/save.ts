@@ -2,9 +2,9 @@
  * What a calculator's "Save to design" button calls: the design writer loads on the first press
  * (components/design/save.ts), and only it.
  */
-import type { AnyCalculator, AnyValues } from "../../calc/core/calculator.ts";
+import type { AnyForm, AnyValues } from "../../calc/core/calculator.ts";
 
-export async function saveToDesign(calc: AnyCalculator, values: AnyValues | null): Promise<string> {
+export async function saveToDesign(calc: AnyForm, values: AnyValues | null): Promise<string> {
   if (!values) return "Not saved: correct the fields marked above first.";
   try {
     const { saveIntoActiveDesign } = await import("../design/save.ts");

@@ -3,12 +3,12 @@
  * saved in this browser (making one if there is none), as its descriptor lays them out. Loaded only
  * when the button is pressed, with nothing of the other calculators.
  */
-import type { AnyCalculator, AnyValues } from "../../calc/core/calculator.ts";
+import type { AnyForm, AnyValues } from "../../calc/core/calculator.ts";
 import { newDesign } from "../../calc/design/format.ts";
 import { newId, readRawStore, writeRawStore } from "./saved.ts";
 
 /** Saves `values` into the active design; returns a message for the page. */
-export function saveIntoActiveDesign(storage: Storage, calc: AnyCalculator, values: AnyValues): string {
+export function saveIntoActiveDesign(storage: Storage, calc: AnyForm, values: AnyValues): string {
   const store = readRawStore(storage);
   if (store === null) return "Not saved: the designs saved in this browser could not be read. Open the build sheet to see why.";
   let entry = store.designs.find((d) => d.id === store.activeId);

@@ -16,7 +16,7 @@ import { CalcInputError } from "../../calc/core/errors.ts";
 import type { UnitId, UnitSystem } from "../../calc/core/units.ts";
 import { createFieldsModel, fieldMessage } from "../calc-ui/fields.ts";
 import { linkFor, readLink, writeLink } from "../../calc/core/calculator.ts";
-import calibration from "../../calc/calculators/calibration.ts";
+import { form as calibration } from "../../calc/calculators/calibration.ts";
 import { headingDriftForm as headingDrift } from "../../calc/heading/drift-inputs.ts";
 import { saveToDesign } from "../calc-ui/save.ts";
 import { siteUrl } from "../calc-ui/site.ts";
