@@ -390,6 +390,11 @@ function readOptions(options: SpinUpOptions): Required<SpinUpOptions> {
   return { series: options.series ?? true, maxPoints, stopAtSteadyState: options.stopAtSteadyState ?? true, relativeTolerance };
 }
 
+/** The value when it is finite (a division by a zero or vanishing rate gives null instead). */
+function finiteOrNull(value: number): number | null {
+  return Number.isFinite(value) ? value : null;
+}
+
 /**
  * Spin-up of a spinning weapon or a whole-body spinner from rest at a fixed throttle: time to
  * 50 %, 90 % and 100 % of the target speed, the top speed, the limiting regime over time, battery
@@ -405,7 +410,8 @@ function readOptions(options: SpinUpOptions): Required<SpinUpOptions> {
  * @param input every field of `drivetrainInputs` [SI] and `driveType` ("weapon" | "spinner")
  * @param options what to record and when to stop (see `SpinUpOptions`)
  * @returns times [s], speeds [rad/s], currents [A], voltages [V], energies [J], figures at top and
- *   target speed, the regime segments, a verdict, and a time series of at most `maxPoints` points
+ *   target speed, the top speed's margin over the target [-], the regime segments, a verdict, and a
+ *   time series of at most `maxPoints` points
  *
  * Assumptions: listed in the module comment. Not modelled: motor heating (R rises with
  * temperature), the controller's own losses, inductance, the robot translating while it spins,
@@ -452,6 +458,8 @@ export function simulateSpinUp(input: DrivetrainInput, options: SpinUpOptions = 
     torqueConstant: m.kt,
     motorTurnsPerTurn: k,
     effectiveInertia: run.jLocked,
+    // Share added by the reflected inertias, J_eff/J − 1, with J_eff as above (serway-beichner-5e).
+    addedInertiaShare: run.jLocked / input.inertia - 1,
     timeConstant: run.tauLocked,
     idealNoLoadSpeed: (m.duty * m.voc) / (m.kt * k),
     currentLimitedAcceleration: Math.max(0, m.eta * k * m.N * m.kt * (m.ilim - m.i0) - m.tf) / run.jLocked,
@@ -488,9 +496,13 @@ export function simulateSpinUp(input: DrivetrainInput, options: SpinUpOptions = 
     endTime: run.endTime,
     targetSpeed: m.target,
     timeTo50: t50,
+    // Constant acceleration from rest: t = Ω/α, here Ω = ½Ω_target (openstax-university-physics-1).
+    straightLineTimeTo50: finiteOrNull((0.5 * input.targetSpeed) / drive.currentLimitedAcceleration),
     timeTo90: t90,
     timeToTarget: tTarget,
     topSpeed: run.topSpeed,
+    // Relative excess of the top speed over the target, Ω_top/Ω_target − 1 (definition of a relative difference, common practice).
+    topSpeedMargin: run.topSpeed / m.target - 1,
     peakMotorSpeed: run.peakMotorSpeed,
     regimes: run.segments,
     peakBatteryCurrent: run.peakBatteryCurrent,

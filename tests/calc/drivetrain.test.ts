@@ -433,6 +433,30 @@ describe("run outputs", () => {
     expect(far.atTopSpeed.angularSpeed).toBe(far.topSpeed);
   });
 
+  it("gives the share the motor's rotor adds through the belt, J_eff/J − 1 with J_eff = J + ηG²N·J_m", () => {
+    // Reflected inertia through a gear stage, J_eff = J + ηG²N·J_m (serway-beichner-5e, rotational dynamics; the model's own formula).
+    const p = DEMO_WEAPON;
+    const expected = (p.inertia + p.gearEfficiency * p.gearRatio ** 2 * p.motorCount * p.motorRotorInertia) / p.inertia - 1;
+    expect(weapon.drive.addedInertiaShare).toBeCloseTo(expected, 12);
+    expect(weapon.drive.addedInertiaShare).toBeCloseTo(weapon.drive.effectiveInertia / p.inertia - 1, 15);
+  });
+
+  it("gives the time to half the target at the current-limited acceleration held constant, t = ½Ω/α", () => {
+    // Constant angular acceleration from rest, ω = αt (openstax-university-physics-1, rotational kinematics).
+    expect(weapon.straightLineTimeTo50).toBeCloseTo((0.5 * DEMO_WEAPON.targetSpeed) / weapon.drive.currentLimitedAcceleration, 12);
+    expect(weapon.straightLineTimeTo50!).toBeLessThan(weapon.timeTo50!);
+    expect(simulateSpinUp({ ...DEMO_WEAPON, frictionTorque: 5 }).straightLineTimeTo50).toBeNull();
+  });
+
+  it("gives the top speed's margin over the target, Ω_top/Ω_target − 1: above 0 when reached, below when it falls short, −1 when stalled", () => {
+    // Relative difference of two speeds (common practice).
+    expect(weapon.topSpeedMargin).toBeCloseTo(weapon.topSpeed / DEMO_WEAPON.targetSpeed - 1, 15);
+    expect(weapon.topSpeedMargin).toBeGreaterThan(0);
+    const far = simulateSpinUp({ ...DEMO_WEAPON, targetSpeed: 20000 * RPM });
+    expect(far.topSpeedMargin).toBeLessThan(0);
+    expect(simulateSpinUp({ ...DEMO_WEAPON, frictionTorque: 5 }).topSpeedMargin).toBe(-1);
+  });
+
   it("says so when friction holds the drive at rest", () => {
     const stuck = simulateSpinUp({ ...DEMO_WEAPON, frictionTorque: 5 });
     expect(stuck.verdict).toBe("stalled");
