@@ -395,6 +395,27 @@ describe("calibration fit", () => {
     expect(Math.abs(f.leastSquares.slope / truth.radius - 1)).toBeGreaterThan(Math.abs(f.radius / truth.radius - 1));
   });
 
+  it("gives the radius's relative standard error, SE(r̂)/r̂, from the least-squares line it chose", () => {
+    // Standard error of a least-squares slope, s/√Sxx (draper-smith-1998, ch. 1), over the slope.
+    const noise = normalSource(31);
+    const rows = speeds.map((w) => ({ angularSpeed: w, acceleration: truth.radius * w * w + truth.bias + 0.2 * STANDARD_GRAVITY * noise() }));
+    rows[6]!.acceleration += 15 * STANDARD_GRAVITY;
+    const f = fitCalibration(rows);
+    const clean = f.leastSquaresWithoutSpikes!;
+    const x = f.speedSquared.filter((_, i) => i !== 6);
+    const residuals = clean.residuals;
+    const mean = x.reduce((a, b) => a + b, 0) / x.length;
+    const sxx = x.reduce((a, v) => a + (v - mean) ** 2, 0);
+    const s = Math.sqrt(residuals.reduce((a, r) => a + r * r, 0) / (x.length - 2));
+    expect(f.radiusRelativeStdError!).toBeCloseTo(s / Math.sqrt(sxx) / f.radius, 9);
+    expect(f.radiusRelativeStdError).toBe(clean.slopeStdError / f.radius);
+  });
+
+  it("has no relative standard error when the radius comes from Theil–Sen", () => {
+    const rows = [1, 1, 1, 1, 2, 2, 2, 2, 3, 4].map((w, i) => ({ angularSpeed: w, acceleration: 2 * w * w + (i >= 8 ? 50 : 0) }));
+    expect(fitCalibration(rows).radiusRelativeStdError).toBeNull();
+  });
+
   it("falls back to Theil–Sen when fewer than 3 different speeds remain after removing spikes", () => {
     // four readings each at two speeds on the line a = 2ω², then one spiked reading at each of two more speeds
     const speedsUsed = [1, 1, 1, 1, 2, 2, 2, 2, 3, 4];
