@@ -987,6 +987,9 @@ describe("the mass-and-balance calculator", () => {
     expect(b.fix.method).toBe("candidate");
     expect(b.counterweight.forMass.status).toBe("placed");
     expect(d.washers).toBe(7);
+    // The stack's distance from the axis, √(x² + y²) (oxford-concise-mathematics): the 55 mm bolt circle.
+    expect(d.washerRadius).toBeCloseTo(Math.hypot(b.counterweight.atRadius.x, b.counterweight.atRadius.y), 15);
+    expect(d.washerRadius).toBeCloseTo(0.055, 12);
     expect(d.withWashers.after.offset).toBeLessThan(d.targetOffset);
     expect(d.sensorWithWashers.driftPerRevolution).toBeLessThan(b.sensor.before.driftPerRevolution / 10);
     // The layout is symmetric in y, so the centre of mass lies on the x axis.
