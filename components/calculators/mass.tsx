@@ -10,7 +10,7 @@ import { BALANCE_GRADES } from "../../calc/mass/balance.ts";
 import { PART_SHAPE_KINDS } from "../../calc/mass/parts.ts";
 import type { MirrorAxis } from "../../calc/mass/editing.ts";
 import { MATERIALS } from "../../calc/materials/materials.ts";
-import { formatNumber, formatQuantity, type QuantityKind, type UnitId, type UnitSystem } from "../../calc/core/units.ts";
+import { formatNumber, formatQuantity, fromSI, type QuantityKind, type UnitId, type UnitSystem } from "../../calc/core/units.ts";
 import { QuantityField } from "../calc-ui/QuantityField.tsx";
 import { Toolbar } from "../calc-ui/Toolbar.tsx";
 import { Notices } from "../calc-ui/Notices.tsx";
@@ -268,10 +268,10 @@ export default function MassLayoutCalculator({ id = massCalculator.anchor, layou
     const fm = b.counterweight.forMass;
     const cand = b.counterweight.candidates;
     const s = b.sensor.before;
-    const chosen = grade?.label ?? `G ${formatNumber(g.ok ? g.value * 1000 : 0)}`;
-    const ratio = b.static.unbalance / b.permissible.unbalance;
+    const chosen = grade?.label ?? `G ${formatNumber(g.ok ? fromSI(g.value, "mm/s") : 0)}`;
+    const meets = b.gradeVerdict === "meets-grade";
     const cw = plan.counterweight;
-    const where = (x: number, y: number) => `${q(Math.hypot(x, y), "length")} at ${q(Math.atan2(y, x), "angle")}`;
+    const where = (c: { radius: number; angle: number }) => `${q(c.radius, "length")} at ${q(c.angle, "angle")}`;
     mass = (
       <>
         <Outs
@@ -293,15 +293,15 @@ export default function MassLayoutCalculator({ id = massCalculator.anchor, layou
           sensor={[input.sensorX, input.sensorY]}
           counterweight={cw ? [cw.x, cw.y] : null}
           system={system}
-          summary={`${L.parts.length} parts. Centre of mass ${q(L.offset, "length")} from the geometric centre toward ${q(L.offsetAngle, "angle")}; sensor ${q(s.radiusTrue, "length")} from it.${cw ? ` Counterweight ${q(cw.mass, "mass")} at ${where(cw.x, cw.y)}.` : ""}`}
+          summary={`${L.parts.length} parts. Centre of mass ${q(L.offset, "length")} from the geometric centre toward ${q(L.offsetAngle, "angle")}; sensor ${q(s.radiusTrue, "length")} from it.${cw ? ` Counterweight ${q(cw.mass, "mass")} at ${where(cw)}.` : ""}`}
         />
       </>
     );
     balance = (
       <>
-        <p class={`verdict verdict--${ratio <= 1 ? "ok" : "bad"}`} data-out="grade-verdict">
-          <strong>{ratio <= 1 ? `Meets ${chosen}.` : `Exceeds ${chosen}.`}</strong> U = {q(b.static.unbalance, "unbalance")} is {formatNumber(ratio * 100)} % of
-          the permissible {q(b.permissible.unbalance, "unbalance")}
+        <p class={`verdict verdict--${meets ? "ok" : "bad"}`} data-out="grade-verdict">
+          <strong>{meets ? `Meets ${chosen}.` : `Exceeds ${chosen}.`}</strong> U = {q(b.static.unbalance, "unbalance")} is{" "}
+          {formatNumber(b.unbalanceShareOfPermissible * 100)} % of the permissible {q(b.permissible.unbalance, "unbalance")}
           {b.gradeMet ? `; the finest grade it meets is ${b.gradeMet.label}.` : "; it is coarser than G 4000."}
         </p>
         <Outs
@@ -338,8 +338,8 @@ export default function MassLayoutCalculator({ id = massCalculator.anchor, layou
     counter = (
       <>
         <p class={`verdict verdict--${within ? "ok" : "bad"}`} data-out="offset-verdict">
-          <strong>{within ? "Within target." : "Outside target."}</strong> e = {q(L.offset, "length")}, {formatNumber((L.offset / input.targetOffset) * 100)} %
-          of the {q(input.targetOffset, "length")} target.
+          <strong>{within ? "Within target." : "Outside target."}</strong> e = {q(L.offset, "length")}, {formatNumber(b.offsetShareOfTarget * 100)} % of the{" "}
+          {q(input.targetOffset, "length")} target.
         </p>
         {within ? null : mode === "r" ? (
           <Outs
@@ -373,7 +373,7 @@ export default function MassLayoutCalculator({ id = massCalculator.anchor, layou
           <>
             <table class="mass-compare">
               <caption>
-                Add <span data-out="cw-mass">{q(cw.mass, "mass")}</span> at <span data-out="cw-where">{where(cw.x, cw.y)}</span>, height {q(cw.z, "length")}
+                Add <span data-out="cw-mass">{q(cw.mass, "mass")}</span> at <span data-out="cw-where">{where(cw)}</span>, height {q(cw.z, "length")}
               </caption>
               <thead>
                 <tr>

@@ -996,6 +996,22 @@ describe("the mass-and-balance calculator", () => {
     expect(b.layout.centreY).toBe(0);
   });
 
+  it("iso-21940-11: gives U/U_per, which equals eΩ/G for the chosen grade, and e/e_target, each on the side of 1 its verdict says", () => {
+    // U = M·e and U_per = M·G/Ω (iso-21940-11), so U/U_per = eΩ/G; e/e_target by definition (centre-of-mass).
+    const d = demoRobotBalance();
+    const b = d.balance;
+    const grade = massBalanceInputs.balanceGrade.default;
+    expectRel(b.unbalanceShareOfPermissible, (b.layout.offset * d.spinSpeed) / grade, 1e-12);
+    expect(b.unbalanceShareOfPermissible).toBe(b.static.unbalance / b.permissible.unbalance);
+    expect(b.unbalanceShareOfPermissible > 1).toBe(b.gradeVerdict === "exceeds-grade");
+    expect(b.offsetShareOfTarget).toBe(b.layout.offset / d.targetOffset);
+    expect(b.offsetShareOfTarget > 1).toBe(b.offsetVerdict === "outside-target");
+  });
+
+  it("names targetOffset when e/e_target would overflow, instead of returning Infinity", () => {
+    expectInputError(() => massBalance({ ...DEFAULTS, parts: demoRobotParts(), targetOffset: 5e-324 }), "targetOffset", /finite/);
+  });
+
   it("uses only bibliography keys that exist", () => {
     for (const key of MASS_BALANCE_SOURCE_KEYS) expect(isSourceKey(key), key).toBe(true);
   });
@@ -1024,6 +1040,10 @@ describe("the counterweight the calculator applies (counterweightPlan)", () => {
     expect(p.after!.parts.at(-1)).toMatchObject({ name: "counterweight", shape: { kind: "point" }, mass: { kind: "given", mass: 0.039 } });
     // At the height of the centre of mass: the products of inertia about it are unchanged.
     expect(p.counterweight!.z).toBe(massProperties(demoRobotParts()).centreZ);
+    // Polar form of the mounting point, r = √(x² + y²), θ = atan2(y, x) (oxford-concise-mathematics): 55 mm toward −x.
+    expectRel(p.counterweight!.radius, 0.055, 1e-12);
+    expectRel(p.counterweight!.angle, Math.PI, 1e-12);
+    expect(p.counterweight!.radius).toBe(Math.hypot(p.counterweight!.x, p.counterweight!.y));
   });
 
   it("centre-of-mass: puts a 45 g weight in hand at the zero-offset radius, 54.04 mm, unrounded", () => {
