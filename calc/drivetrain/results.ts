@@ -71,6 +71,8 @@ export interface SpeedFigures {
   tipSpeed: number;
   /** Stored energy per kilogram of robot [J/kg]. */
   energyPerMass: number;
+  /** Height a 1 kg mass must fall to carry the same energy, E/(1 kg·g_n) [m]. */
+  dropHeightPerKilogram: number;
   /** Bite per impactor at the closing speed [m]; null at zero speed. */
   bite: number | null;
 }

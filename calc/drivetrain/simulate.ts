@@ -378,6 +378,8 @@ function speedFigures(input: DrivetrainInput, angularSpeed: number): SpeedFigure
     storedEnergy,
     tipSpeed: rotorTipSpeed({ angularSpeed, radius: input.tipRadius }),
     energyPerMass: storedEnergy / input.robotMass,
+    // Gravitational potential energy E = m g h solved for h with m = 1 kg (openstax-university-physics-1).
+    dropHeightPerKilogram: storedEnergy / STANDARD_GRAVITY,
     bite: angularSpeed > 0 ? biteDepth({ closingSpeed: input.closingSpeed, angularSpeed, impactors: input.impactors }) : null,
   };
 }

@@ -291,16 +291,22 @@ export interface AccelerometerPlacement {
   verdict: PlacementVerdict;
   /** The other part's load at top speed. */
   part: PartLoad;
+  /** Mass whose weight under standard gravity equals that part's pull, F/g_n [kg]. */
+  partHangingMass: number;
+  /** Speed at which that part leaves if it lets go at top speed, tangent to its circle, ω·r [m/s]. */
+  partReleaseSpeed: number;
 }
 
 /**
  * The accelerometer-placement check: the window of radii that neither saturates at top speed nor
  * starves at low speed, where the chosen radius stands, and the load on one other part.
  *
- * Formula: $r_{min} = \dfrac{\Delta a}{\omega_{low}^2[(1+p)^2-1]} \le r \le r_{max} = \dfrac{(1-m)F}{\omega_{top}^2}$
+ * Formula: $r_{min} = \dfrac{\Delta a}{\omega_{low}^2[(1+p)^2-1]} \le r \le r_{max} = \dfrac{(1-m)F}{\omega_{top}^2}$;
+ * for the other part $F_p = m_p\,\omega_{top}^2 r_p$, $m_{eq} = F_p/g_n$, $v = \omega_{top} r_p$
  *
  * @param input every field of `accelerometerPlacementInputs`, SI
- * @returns the window, the chosen radius's figures and a verdict
+ * @returns the window, the chosen radius's figures and a verdict; the other part's load, the mass
+ * that weighs as much [kg] and the speed it leaves at if it lets go [m/s]
  *
  * Assumptions: rotation about the centre of mass; the radius is measured from there. Sources:
  * openstax-college-physics, sensor-quantisation, newton-second-law.
@@ -318,6 +324,7 @@ export function accelerometerPlacement(input: AccelerometerPlacementInput): Acce
   const accelerationAtLow = centripetalAcceleration({ angularSpeed: lowSpeed, radius });
   const resolutionAtLow = speedResolution({ step: effectiveStep, angularSpeed: lowSpeed, radius });
   const windowExists = minRadius <= maxRadius;
+  const part = partLoad({ mass: partMass, radius: partRadius, angularSpeed: topSpeed });
   const verdict: PlacementVerdict = !windowExists ? "no-window" : radius > maxRadius ? "too-far-out" : radius < minRadius ? "too-close-in" : "fits";
   return {
     minRadius,
@@ -331,7 +338,11 @@ export function accelerometerPlacement(input: AccelerometerPlacementInput): Acce
     resolutionAtLow,
     saturationSpeed: angularSpeedForAcceleration({ radius, acceleration: fullScale }),
     verdict,
-    part: partLoad({ mass: partMass, radius: partRadius, angularSpeed: topSpeed }),
+    part,
+    // Weight W = m g solved for m (newton-second-law).
+    partHangingMass: part.force / STANDARD_GRAVITY,
+    // Tangential speed of a point on a circle, v = ω r (openstax-college-physics).
+    partReleaseSpeed: topSpeed * partRadius,
   };
 }
 

@@ -457,6 +457,11 @@ describe("run outputs", () => {
     expect(simulateSpinUp({ ...DEMO_WEAPON, frictionTorque: 5 }).topSpeedMargin).toBe(-1);
   });
 
+  it("gives the height a 1 kg mass falls to carry the stored energy, h = E/(m·g) with m = 1 kg", () => {
+    // Gravitational potential energy E = m·g·h (openstax-university-physics-1, §8.1), g_n = 9.80665 m/s² (cgpm-1901).
+    for (const f of [weapon.atTopSpeed, weapon.atTargetSpeed]) expect(f.dropHeightPerKilogram).toBeCloseTo(f.storedEnergy / 9.80665, 12);
+  });
+
   it("says so when friction holds the drive at rest", () => {
     const stuck = simulateSpinUp({ ...DEMO_WEAPON, frictionTorque: 5 });
     expect(stuck.verdict).toBe("stalled");

@@ -192,6 +192,15 @@ describe("accelerometer placement", () => {
     expect(accelerometerPlacement(defaults()).verdict).toBe("fits");
   });
 
+  it("gives the other part's pull as the mass that weighs as much, F/g_n (W = m·g, Newton's second law), and its release speed v = ω·r (OpenStax College Physics §6.1)", () => {
+    // 50 g at 60 mm and 2400 rpm: ω = 80π rad/s, F = 0.05 × (80π)² × 0.06 = 189.4964 N; g_n = 9.80665 m/s² exactly (CGPM 1901).
+    const r = accelerometerPlacement({ ...defaults(), topSpeed: rpmToRadPerSecond(2400), partMass: 0.05, partRadius: 0.06 });
+    expect(r.partHangingMass).toBeCloseTo((0.05 * (80 * Math.PI) ** 2 * 0.06) / 9.80665, 9);
+    expect(r.partHangingMass).toBeCloseTo(19.3233, 4);
+    // v = 80π × 0.06 = 4.8π = 15.0796 m/s.
+    expect(r.partReleaseSpeed).toBeCloseTo(4.8 * Math.PI, 12);
+  });
+
   it("uses the larger of step and noise", () => {
     const r = accelerometerPlacement({ ...defaults(), step: 0.1 * STANDARD_GRAVITY, noise: 0.5 * STANDARD_GRAVITY });
     expect(r.effectiveStep).toBe(0.5 * STANDARD_GRAVITY);
