@@ -6,6 +6,7 @@ import { requireInRange, requireNonNegative, requirePositive, requireRelation } 
 import { defineInputs } from "../core/inputs.ts";
 import { STANDARD_GRAVITY } from "../core/constants.ts";
 import { rpmToRadPerSecond } from "../core/units.ts";
+import { requireWhole } from "../core/spec-check.ts";
 import type { SourceKey } from "../sources/index.ts";
 
 /**
@@ -106,6 +107,28 @@ export function speedResolution({ step, angularSpeed, radius }: { step: number; 
   requirePositive("angularSpeed", angularSpeed, "rad/s");
   requirePositive("radius", radius, "m");
   return Math.sqrt(1 + step / (angularSpeed * angularSpeed * radius)) - 1;
+}
+
+/**
+ * Size of one count of a digital sensor: its full-scale span split into 2^bits equal steps
+ * (sensor-quantisation).
+ *
+ * Formula: $\Delta a = \dfrac{S}{2^{b}}$
+ *
+ * @param span S, the full-scale span, e.g. 400 g for a ±200 g range [m/s²], greater than 0
+ * @param bits b, the output word length [-], a whole number from 1 to 32
+ * @returns Δa, one count [m/s²]
+ *
+ * Assumptions: a linear converter with equal steps over the whole span.
+ * @example
+ * sensorCountSize({ span: 400 * 9.80665, bits: 12 }) // → 0.957681 (0.0977 g)
+ * Sources: sensor-quantisation.
+ */
+export function sensorCountSize({ span, bits }: { span: number; bits: number }): number {
+  requirePositive("span", span, "m/s²");
+  requireWhole("bits", bits, 1, 32);
+  // Uniform quantiser step, full span over 2^bits codes (sensor-quantisation).
+  return span / 2 ** bits;
 }
 
 /**

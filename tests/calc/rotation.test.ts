@@ -11,6 +11,7 @@ import {
   partLoad,
   radiusForAcceleration,
   rpmToRadPerSecond,
+  sensorCountSize,
   speedResolution,
   STANDARD_GRAVITY,
   type AccelerometerPlacementInput,
@@ -111,6 +112,45 @@ describe("part load F = m·ω²·r (Newton's second law, OpenStax University Phy
     const load = partLoad({ mass: 0.05, radius: 0.06, angularSpeed: rpmToRadPerSecond(2400) });
     expect(load.force).toBeCloseTo(189.4964045, 6);
     expect(load.gLoad).toBeCloseTo(386.4651119, 6);
+  });
+});
+
+describe("sensor count size Δa = S/2^b (a uniform quantiser, common practice: data-sheet sensitivity in g per count)", () => {
+  it("gives 400 g / 4096 = 0.09765625 g per count for a ±200 g, 12-bit part (exact: 4096 is a power of two)", () => {
+    // 400/4096 = 0.09765625 exactly; times g_n = 9.80665 m/s² (CGPM 1901).
+    expect(sensorCountSize({ span: 400 * STANDARD_GRAVITY, bits: 12 })).toBe(0.09765625 * STANDARD_GRAVITY);
+    expect(sensorCountSize({ span: 400 * STANDARD_GRAVITY, bits: 12 })).toBeCloseTo(0.957680664, 9);
+  });
+
+  it("halves with each extra bit (second method: repeated halving)", () => {
+    let half = 32 * STANDARD_GRAVITY;
+    for (let bits = 1; bits <= 16; bits++) {
+      half /= 2;
+      expect(sensorCountSize({ span: 32 * STANDARD_GRAVITY, bits })).toBe(half);
+    }
+  });
+
+  it.each([
+    { inputs: { span: 0, bits: 12 }, param: "span" },
+    { inputs: { span: 1, bits: 0 }, param: "bits" },
+    { inputs: { span: 1, bits: 33 }, param: "bits" },
+    { inputs: { span: 1, bits: 12.5 }, param: "bits" },
+    { inputs: { span: Number.NaN, bits: 12 }, param: "span" },
+  ])("names $param for $inputs", ({ inputs, param }) => {
+    expect(() => sensorCountSize(inputs)).toThrow(CalcInputError);
+    try {
+      sensorCountSize(inputs);
+    } catch (e) {
+      expect((e as CalcInputError).param).toBe(param);
+    }
+  });
+
+  it("never returns a non-finite number over the whole double range (property)", () => {
+    fc.assert(
+      fc.property(fc.double({ min: Number.MIN_VALUE, max: Number.MAX_VALUE, noNaN: true }), fc.integer({ min: 1, max: 32 }), (span, bits) => {
+        expect(Number.isFinite(sensorCountSize({ span, bits }))).toBe(true);
+      }),
+    );
   });
 });
 
