@@ -2,7 +2,7 @@
  * Rotation: acceleration at a radius, where an accelerometer can sit on a spinning robot, and the
  * pull a spinning part puts on its mounts. SI in and out: rad/s, m, m/s², kg, N.
  */
-import { requireInRange, requireNonNegative, requirePositive, requireRelation } from "../core/errors.ts";
+import { CalcInputError, requireInRange, requireNonNegative, requirePositive, requireRelation } from "../core/errors.ts";
 import { defineInputs } from "../core/inputs.ts";
 import { STANDARD_GRAVITY } from "../core/constants.ts";
 import { rpmToRadPerSecond } from "../core/units.ts";
@@ -27,6 +27,54 @@ export function centripetalAcceleration({ angularSpeed, radius }: { angularSpeed
   requireNonNegative("angularSpeed", angularSpeed, "rad/s");
   requireNonNegative("radius", radius, "m");
   return angularSpeed * angularSpeed * radius;
+}
+
+/** One point of an acceleration-against-speed curve. */
+export interface AccelerationCurvePoint {
+  /** ω [rad/s] */
+  angularSpeed: number;
+  /** a = ω²r [m/s²] */
+  acceleration: number;
+}
+
+/**
+ * Centripetal acceleration at one radius over evenly spaced speeds from 0 to a maximum, for a plot
+ * (openstax-college-physics).
+ *
+ * Formula: $\omega_i = \omega_{max}\,i/n$, $a_i = \omega_i^2 r$ for $i = 0 \dots n$
+ *
+ * @param radius r, distance from the spin axis [m], 0 or more
+ * @param maxSpeed ω_max, the last speed [rad/s], greater than 0
+ * @param intervals n, the number of equal steps [-], a whole number from 1 to 1000 (n + 1 points)
+ * @returns the n + 1 points, speeds [rad/s] and accelerations [m/s²]
+ *
+ * Assumptions: as `centripetalAcceleration` (steady rotation).
+ * @example
+ * centripetalAccelerationCurve({ radius: 0.012, maxSpeed: 400, intervals: 2 }) // → a = 0, 480, 1920 m/s² at ω = 0, 200, 400 rad/s
+ * Sources: openstax-college-physics.
+ */
+export function centripetalAccelerationCurve({
+  radius,
+  maxSpeed,
+  intervals,
+}: {
+  radius: number;
+  maxSpeed: number;
+  intervals: number;
+}): AccelerationCurvePoint[] {
+  requireNonNegative("radius", radius, "m");
+  requirePositive("maxSpeed", maxSpeed, "rad/s");
+  requireWhole("intervals", intervals, 1, 1000);
+  if (!Number.isFinite(maxSpeed * maxSpeed * radius)) {
+    throw new CalcInputError({ param: "maxSpeed", value: maxSpeed, expected: "small enough that ω²r stays finite", unit: "rad/s" });
+  }
+  const points: AccelerationCurvePoint[] = [];
+  for (let i = 0; i <= intervals; i += 1) {
+    // Evenly spaced speeds; a = ω²r at each (openstax-college-physics).
+    const angularSpeed = (maxSpeed * i) / intervals;
+    points.push({ angularSpeed, acceleration: centripetalAcceleration({ angularSpeed, radius }) });
+  }
+  return points;
 }
 
 /**

@@ -6,6 +6,7 @@ import {
   angularSpeedForAcceleration,
   CalcInputError,
   centripetalAcceleration,
+  centripetalAccelerationCurve,
   maxSensorRadius,
   minSensorRadius,
   partLoad,
@@ -151,6 +152,39 @@ describe("sensor count size Δa = S/2^b (a uniform quantiser, common practice: d
         expect(Number.isFinite(sensorCountSize({ span, bits }))).toBe(true);
       }),
     );
+  });
+});
+
+describe("acceleration curve a_i = ω_i²r over evenly spaced speeds (OpenStax College Physics §6.2)", () => {
+  it("gives 0, 480 and 1920 m/s² at 0, 200 and 400 rad/s and 12 mm (a = ω²r by hand)", () => {
+    // 200² × 0.012 = 480; 400² × 0.012 = 1920.
+    const c = centripetalAccelerationCurve({ radius: 0.012, maxSpeed: 400, intervals: 2 });
+    expect(c.map((p) => p.angularSpeed)).toEqual([0, 200, 400]);
+    expect(c[0]!.acceleration).toBe(0);
+    expect(c[1]!.acceleration).toBeCloseTo(480, 9);
+    expect(c[2]!.acceleration).toBeCloseTo(1920, 9);
+  });
+
+  it("agrees point by point with centripetalAcceleration and has intervals + 1 points", () => {
+    const c = centripetalAccelerationCurve({ radius: 0.03, maxSpeed: rpmToRadPerSecond(3600), intervals: 60 });
+    expect(c).toHaveLength(61);
+    for (const p of c) expect(p.acceleration).toBe(centripetalAcceleration({ angularSpeed: p.angularSpeed, radius: 0.03 }));
+  });
+
+  it.each([
+    { inputs: { radius: -1, maxSpeed: 1, intervals: 2 }, param: "radius" },
+    { inputs: { radius: 1, maxSpeed: 0, intervals: 2 }, param: "maxSpeed" },
+    { inputs: { radius: 1, maxSpeed: 1, intervals: 0 }, param: "intervals" },
+    { inputs: { radius: 1, maxSpeed: 1, intervals: 2.5 }, param: "intervals" },
+    { inputs: { radius: 1e300, maxSpeed: 1e300, intervals: 2 }, param: "maxSpeed" },
+  ])("names $param for $inputs", ({ inputs, param }) => {
+    try {
+      centripetalAccelerationCurve(inputs);
+      expect.unreachable();
+    } catch (e) {
+      expect(e).toBeInstanceOf(CalcInputError);
+      expect((e as CalcInputError).param).toBe(param);
+    }
   });
 });
 
