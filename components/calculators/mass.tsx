@@ -6,7 +6,7 @@
  */
 import { useSignal } from "../calc-ui/reactive.ts";
 import { useEffect, useMemo } from "preact/hooks";
-import { BALANCE_GRADES } from "../../calc/mass/balance.ts";
+import { BALANCE_GRADES, standardBalanceGrade } from "../../calc/mass/balance.ts";
 import { PART_SHAPE_KINDS } from "../../calc/mass/parts.ts";
 import type { MirrorAxis } from "../../calc/mass/editing.ts";
 import { MATERIALS } from "../../calc/materials/materials.ts";
@@ -240,7 +240,7 @@ export default function MassLayoutCalculator({ id = massCalculator.anchor, layou
     />
   );
   const g = fields.readings.balanceGrade.value;
-  const grade = g.ok ? BALANCE_GRADES.find((s) => Math.abs(s.value - g.value) <= 1e-9 * s.value) : undefined;
+  const grade = g.ok ? standardBalanceGrade(g.value) : null;
   const mode = model.mode.value;
   const pointsError = model.mounting.value.error;
   const parts = model.parts.value;

@@ -44,8 +44,8 @@ function Verdict({ r }: { r: SpinUpResult }) {
   }
   return (
     <p class="verdict verdict--ok">
-      <strong>Reaches the target.</strong> {target} in {seconds(r.timeToTarget!)}; it tops out at {rpm(r.topSpeed)} ({settled}),{" "}
-      {percent(r.topSpeedMargin)} above the target.
+      <strong>Reaches the target.</strong> {target} in {seconds(r.timeToTarget!)}; it tops out at {rpm(r.topSpeed)} ({settled}), {percent(r.topSpeedMargin)}{" "}
+      above the target.
     </p>
   );
 }

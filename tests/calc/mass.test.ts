@@ -7,6 +7,7 @@ import {
   coupleUnbalance,
   equivalentBalanceGrade,
   finestGradeMet,
+  standardBalanceGrade,
   permissibleResidualUnbalance,
   staticUnbalance,
   twoPlaneCorrection,
@@ -372,6 +373,18 @@ describe("ISO 21940-11 balance quality grades", () => {
   it("iso-21940-11: e_per in µm equals e_per in g·mm/kg", () => {
     const u = permissibleResidualUnbalance({ totalMass: 1, grade: 0.0063, angularSpeed: rpmToRadPerSecond(3000) });
     expectRel(u.specificUnbalance / 1e-6, fromSI(u.unbalance, "g·mm"), 1e-12);
+  });
+
+  it("iso-21940-11 Table 1: names the standard grade a value equals (to a relative 1e-9), and none between grades", () => {
+    // The grades G 0.4 … G 4000 in mm/s, from iso-21940-11 Table 1.
+    expect(standardBalanceGrade(0.0063)?.label).toBe("G 6.3");
+    expect(standardBalanceGrade(6.3 * 0.001)?.label).toBe("G 6.3");
+    expect(standardBalanceGrade(4)?.label).toBe("G 4000");
+    expect(standardBalanceGrade(0.0004)?.label).toBe("G 0.4");
+    expect(standardBalanceGrade(0.005)).toBeNull();
+    expect(standardBalanceGrade(0.0063 * (1 + 1e-6))).toBeNull();
+    for (const g of BALANCE_GRADES) expect(standardBalanceGrade(g.value)).toBe(g);
+    expectInputError(() => standardBalanceGrade(-1), "grade");
   });
 
   it("picks the finest grade met, and none beyond G 4000", () => {
