@@ -3,7 +3,7 @@ import { createRequire } from "node:module";
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { biteDepth, currentLimitedAcceleration, rotorKineticEnergy, rotorTipSpeed, tractionLimitedAcceleration } from "../../calc/drivetrain/figures.ts";
-import { compareDrivetrains, markSweepOptimum, sweepDrivetrain, sweepPoint, sweepValues } from "../../calc/drivetrain/compare.ts";
+import { compareDrivetrains, markSweepOptimum, summariseSweep, sweepDrivetrain, sweepPoint, sweepValues } from "../../calc/drivetrain/compare.ts";
 import { DEMO_SPINNER, DEMO_WEAPON, DRIVETRAIN_SOURCE_KEYS, drivetrainWorkedExample } from "../../calc/drivetrain/demo.ts";
 import {
   DRIVE_TYPE_OPTIONS,
@@ -481,6 +481,39 @@ describe("run outputs", () => {
       expect(e.totalLoss).toBeCloseTo(e.batteryLoss + e.copperLoss + e.motorLoss + e.gearLoss + e.frictionLoss + e.dragLoss + e.slipLoss, 9);
       expect(Math.abs(e.drawn - e.kinetic - e.totalLoss) / e.drawn).toBeCloseTo(e.balanceError, 12);
     }
+  });
+});
+
+describe("sweep summary (order statistics of the swept points)", () => {
+  const point = (timeToTarget: number | null, topSpeed: number) => ({
+    value: 1,
+    timeToTarget,
+    timeTo90: null,
+    topSpeed,
+    verdict: timeToTarget === null ? ("falls-short" as const) : ("reaches-target" as const),
+    peakBatteryCurrent: 0,
+    storedEnergy: 0,
+    isOptimum: false,
+  });
+
+  it("gives the shortest and longest time to target, the count that miss, and the range of top speeds (by hand)", () => {
+    const s = summariseSweep([point(null, 900), point(1.2, 1100), point(1.0, 1200), point(1.1, 1150)]);
+    expect(s).toEqual({ shortestTimeToTarget: 1.0, longestTimeToTarget: 1.2, missedCount: 1, lowestTopSpeed: 900, highestTopSpeed: 1200 });
+  });
+
+  it("has no times when no point reaches the target", () => {
+    expect(summariseSweep([point(null, 900), point(null, 950)])).toMatchObject({ shortestTimeToTarget: null, longestTimeToTarget: null, missedCount: 2 });
+  });
+
+  it("agrees with the demo weapon's gear-ratio sweep, whose best point is the shortest time", () => {
+    const sweep = sweepDrivetrain({ base: DEMO_WEAPON, parameter: "gearRatio", from: 1, to: 4, points: 31 });
+    const s = summariseSweep(sweep.points);
+    expect(s.shortestTimeToTarget).toBe(sweep.points[sweep.optimumIndex]!.timeToTarget);
+    expect(s.missedCount).toBe(sweep.points.filter((p) => p.timeToTarget === null).length);
+  });
+
+  it("names points when the list is empty", () => {
+    expect(() => summariseSweep([])).toThrowError(CalcInputError);
   });
 });
 
