@@ -217,13 +217,13 @@ export interface SweepSummary {
  * Example: times to target null, 1.2 s and 1.0 s give shortest 1.0 s, longest 1.2 s and 1 missed.
  * @example
  * summariseSweep(points) // → { shortestTimeToTarget: 1, longestTimeToTarget: 1.2, missedCount: 1, … }
- * Sources: as `simulateSpinUp`.
+ * Sources: tukey-1977 (the extremes of a batch); the points themselves as `simulateSpinUp`.
  */
 export function summariseSweep(points: readonly SweepPoint[]): SweepSummary {
   if (!Array.isArray(points) || points.length === 0) {
     throw new CalcInputError({ param: "points", value: Array.isArray(points) ? 0 : String(points), expected: "a list of at least one sweep point", unit: "" });
   }
-  // Order statistics: the least and greatest of each figure (no formula beyond comparison).
+  // The extremes of each batch of figures, its least and greatest values (tukey-1977).
   const times = points.flatMap((p) => (p.timeToTarget === null ? [] : [p.timeToTarget]));
   const tops = points.map((p) => p.topSpeed);
   return {
