@@ -346,6 +346,14 @@ describe("spike flags", () => {
     expect(f.spikes.flagged).toEqual([5]);
   });
 
+  it("gives each point's distance from the median in robust standard deviations, |M_i| (Iglewicz & Hoaglin 1993), and flags those beyond k", () => {
+    // Same data: residuals 0,0,0,0,0,10 about the median 0, σ̂ = √(π/2)·10/6, so the last point lies 10/σ̂ = 6/√(π/2) = 4.787 away.
+    const f = fitStraightLine({ x: [1, 2, 3, 4, 5, 6], y: [3, 5, 7, 9, 11, 23] });
+    expect(f.spikes.robustDistance[5]).toBeCloseTo(6 / Math.sqrt(Math.PI / 2), 12);
+    expect(f.spikes.robustDistance).toEqual(f.spikes.modifiedZ.map(Math.abs));
+    expect(f.spikes.flagged).toEqual(f.spikes.robustDistance.flatMap((d, i) => (d > f.spikes.threshold ? [i] : [])));
+  });
+
   it("never flags round-off in exact data (resolution floor)", () => {
     const rows = [300, 700, 1100, 1500, 1900, 2300, 2700].map((rpm) => {
       const w = rpmToRadPerSecond(rpm);
