@@ -191,6 +191,50 @@ export function markSweepOptimum(points: SweepPoint[]): { optimumIndex: number; 
   return { optimumIndex, optimumBy };
 }
 
+/** What a sweep's points add up to, for a one-line summary. */
+export interface SweepSummary {
+  /** Shortest time to target among the points [s]; null when none reaches it. */
+  shortestTimeToTarget: number | null;
+  /** Longest time to target among the points that reach it [s]; null when none does. */
+  longestTimeToTarget: number | null;
+  /** How many points never reach the target [-]. */
+  missedCount: number;
+  /** Lowest and highest top speed among the points [rad/s]. */
+  lowestTopSpeed: number;
+  highestTopSpeed: number;
+}
+
+/**
+ * The extremes of a sweep: shortest and longest time to target, how many values miss the target,
+ * and the range of top speeds (order statistics of the simulated points).
+ *
+ * Formula: $t_{min} = \min_i t_i$, $t_{max} = \max_i t_i$ over the points that reach the target;
+ * $\Omega_{min}, \Omega_{max}$ over all points
+ *
+ * @param points one or more sweep points
+ * @returns times [s] (null when no point reaches the target), a count [-], top speeds [rad/s]
+ *
+ * Example: times to target null, 1.2 s and 1.0 s give shortest 1.0 s, longest 1.2 s and 1 missed.
+ * @example
+ * summariseSweep(points) // → { shortestTimeToTarget: 1, longestTimeToTarget: 1.2, missedCount: 1, … }
+ * Sources: tukey-1977 (the extremes of a batch); the points themselves as `simulateSpinUp`.
+ */
+export function summariseSweep(points: readonly SweepPoint[]): SweepSummary {
+  if (!Array.isArray(points) || points.length === 0) {
+    throw new CalcInputError({ param: "points", value: Array.isArray(points) ? 0 : String(points), expected: "a list of at least one sweep point", unit: "" });
+  }
+  // The extremes of each batch of figures, its least and greatest values (tukey-1977).
+  const times = points.flatMap((p) => (p.timeToTarget === null ? [] : [p.timeToTarget]));
+  const tops = points.map((p) => p.topSpeed);
+  return {
+    shortestTimeToTarget: times.length ? Math.min(...times) : null,
+    longestTimeToTarget: times.length ? Math.max(...times) : null,
+    missedCount: points.length - times.length,
+    lowestTopSpeed: Math.min(...tops),
+    highestTopSpeed: Math.max(...tops),
+  };
+}
+
 /**
  * Varies one numeric input over a range and reports time to target and top speed at each value,
  * with the best point marked (the same simulation as `simulateSpinUp`, without time series):

@@ -71,6 +71,8 @@ export interface SpeedFigures {
   tipSpeed: number;
   /** Stored energy per kilogram of robot [J/kg]. */
   energyPerMass: number;
+  /** Height a 1 kg mass must fall to carry the same energy, E/(1 kg·g_n) [m]. */
+  dropHeightPerKilogram: number;
   /** Bite per impactor at the closing speed [m]; null at zero speed. */
   bite: number | null;
 }
@@ -82,6 +84,8 @@ export interface DriveSummary {
   motorTurnsPerTurn: number;
   /** Inertia the motors accelerate, seen at the output (rotor or robot, plus reflected wheels and rotors, the rotors through η) [kg·m²]. */
   effectiveInertia: number;
+  /** What the reflected rotors and wheels add to the output's own inertia, J_eff/J − 1 [-]. */
+  addedInertiaShare: number;
   /** Mechanical time constant with the throttle's duty and the battery sag included [s]. */
   timeConstant: number;
   /** Output speed at which the motors' back-EMF equals the throttle's share of the open-circuit voltage [rad/s]. */
@@ -113,12 +117,16 @@ export interface SpinUpResult {
   targetSpeed: number;
   /** Time to 50 % of the target [s]; null if not reached. */
   timeTo50: number | null;
+  /** Time to 50 % of the target at the current-limited acceleration held constant, ½Ω_target/Ω̇_lim [s]; null when that acceleration is 0. */
+  straightLineTimeTo50: number | null;
   /** Time to 90 % of the target [s]; null if not reached. */
   timeTo90: number | null;
   /** Time to the target [s]; null if not reached (then `topSpeed` is what the drive gets to). */
   timeToTarget: number | null;
   /** Highest speed reached [rad/s]. */
   topSpeed: number;
+  /** How far the top speed lies above (+) or below (−) the target, as a fraction of it, Ω_top/Ω_target − 1 [-]. */
+  topSpeedMargin: number;
   /** Highest motor shaft speed [rad/s]. */
   peakMotorSpeed: number;
   /** The limiting regime over time, as contiguous segments from 0 to `endTime`. */

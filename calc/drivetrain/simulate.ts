@@ -378,6 +378,8 @@ function speedFigures(input: DrivetrainInput, angularSpeed: number): SpeedFigure
     storedEnergy,
     tipSpeed: rotorTipSpeed({ angularSpeed, radius: input.tipRadius }),
     energyPerMass: storedEnergy / input.robotMass,
+    // Gravitational potential energy E = m g h solved for h with m = 1 kg (openstax-university-physics-1).
+    dropHeightPerKilogram: storedEnergy / STANDARD_GRAVITY,
     bite: angularSpeed > 0 ? biteDepth({ closingSpeed: input.closingSpeed, angularSpeed, impactors: input.impactors }) : null,
   };
 }
@@ -388,6 +390,11 @@ function readOptions(options: SpinUpOptions): Required<SpinUpOptions> {
   const relativeTolerance = options.relativeTolerance ?? 1e-8;
   requireInRange("relativeTolerance", relativeTolerance, "", { min: 1e-12, max: 1e-3 });
   return { series: options.series ?? true, maxPoints, stopAtSteadyState: options.stopAtSteadyState ?? true, relativeTolerance };
+}
+
+/** The value when it is finite (a division by a zero or vanishing rate gives null instead). */
+function finiteOrNull(value: number): number | null {
+  return Number.isFinite(value) ? value : null;
 }
 
 /**
@@ -405,7 +412,8 @@ function readOptions(options: SpinUpOptions): Required<SpinUpOptions> {
  * @param input every field of `drivetrainInputs` [SI] and `driveType` ("weapon" | "spinner")
  * @param options what to record and when to stop (see `SpinUpOptions`)
  * @returns times [s], speeds [rad/s], currents [A], voltages [V], energies [J], figures at top and
- *   target speed, the regime segments, a verdict, and a time series of at most `maxPoints` points
+ *   target speed, the top speed's margin over the target [-], the regime segments, a verdict, and a
+ *   time series of at most `maxPoints` points
  *
  * Assumptions: listed in the module comment. Not modelled: motor heating (R rises with
  * temperature), the controller's own losses, inductance, the robot translating while it spins,
@@ -452,6 +460,8 @@ export function simulateSpinUp(input: DrivetrainInput, options: SpinUpOptions = 
     torqueConstant: m.kt,
     motorTurnsPerTurn: k,
     effectiveInertia: run.jLocked,
+    // Share added by the reflected inertias, J_eff/J − 1, with J_eff as above (serway-beichner-5e).
+    addedInertiaShare: run.jLocked / input.inertia - 1,
     timeConstant: run.tauLocked,
     idealNoLoadSpeed: (m.duty * m.voc) / (m.kt * k),
     currentLimitedAcceleration: Math.max(0, m.eta * k * m.N * m.kt * (m.ilim - m.i0) - m.tf) / run.jLocked,
@@ -488,9 +498,13 @@ export function simulateSpinUp(input: DrivetrainInput, options: SpinUpOptions = 
     endTime: run.endTime,
     targetSpeed: m.target,
     timeTo50: t50,
+    // Constant acceleration from rest: t = Ω/α, here Ω = ½Ω_target (openstax-university-physics-1).
+    straightLineTimeTo50: finiteOrNull((0.5 * input.targetSpeed) / drive.currentLimitedAcceleration),
     timeTo90: t90,
     timeToTarget: tTarget,
     topSpeed: run.topSpeed,
+    // Relative excess of the top speed over the target, Ω_top/Ω_target − 1 (definition of a relative difference, common practice).
+    topSpeedMargin: run.topSpeed / m.target - 1,
     peakMotorSpeed: run.peakMotorSpeed,
     regimes: run.segments,
     peakBatteryCurrent: run.peakBatteryCurrent,

@@ -28,6 +28,8 @@ export interface CalibrationFit extends StraightLineFit {
   bias: number;
   /** Which fit gave radius and bias. */
   method: CalibrationMethod;
+  /** Standard error of the radius relative to it, SE(r̂)/r̂ [-]; null for Theil–Sen (no standard error) or when r̂ is 0 or too small for the ratio. */
+  radiusRelativeStdError: number | null;
   /** x_i = ω_i² [rad²/s²], in input order. */
   speedSquared: number[];
 }
@@ -43,7 +45,7 @@ export interface CalibrationFit extends StraightLineFit {
  * @param options confidence [-] (0.95), spikeThreshold k [-] (3.5), huberTuning c [-] (1.345)
  * @returns every fit, the spike report, and the recommended radius [m] and offset [m/s²]:
  * least squares when nothing is flagged, least squares without the spikes when enough points
- * remain, else Theil–Sen
+ * remain, else Theil–Sen; and the radius's standard error relative to it [-] (least-squares methods)
  *
  * Assumptions: the reference speed is right; the fitted radius is (1 + k) r cos θ, which is the
  * number the firmware needs (it cancels scale error and tilt at every speed). Example: readings
@@ -83,7 +85,16 @@ export function fitCalibration(
       : fit.leastSquaresWithoutSpikes
         ? { line: fit.leastSquaresWithoutSpikes, method: "least-squares-without-spikes" as const }
         : { line: fit.theilSen, method: "theil-sen" as const };
-  return { ...fit, radius: chosen.line.slope, bias: chosen.line.intercept, method: chosen.method, speedSquared };
+  // Relative standard error of the slope, SE(r̂)/r̂, with SE(r̂) from least squares (draper-smith-1998).
+  const relative = "slopeStdError" in chosen.line ? chosen.line.slopeStdError / Math.abs(chosen.line.slope) : Number.NaN;
+  return {
+    ...fit,
+    radius: chosen.line.slope,
+    bias: chosen.line.intercept,
+    method: chosen.method,
+    radiusRelativeStdError: Number.isFinite(relative) ? relative : null,
+    speedSquared,
+  };
 }
 
 /** Inputs of the calibration calculator besides the readings themselves, in SI. */

@@ -32,6 +32,8 @@ export interface RadiusMismatchExample {
   rows: RadiusMismatchRow[];
   /** Assumed-radius band that would keep |drift| ≤ budget at the highest speed given. */
   bandAtTopSpeed: RadiusBand;
+  /** Half the band's width as a fraction of the true radius, (high − low)/(2r) [-]; null when the band is open or undefined. */
+  bandHalfWidthFraction: number | null;
   /** The budget used for the band [rad/s]. */
   budget: number;
 }
@@ -46,7 +48,7 @@ export interface RadiusMismatchExample {
  * @param trueRadius r [m], greater than 0
  * @param speedsRpm speeds [rpm], each greater than 0, at least one
  * @param budget D for the radius band at the top speed [rad/s], greater than 0 (default 10 °/s)
- * @returns rows [rad/s, °/s, rad, °] and the band [m]
+ * @returns rows [rad/s, °/s, rad, °], the band [m] and its half-width as a fraction of r [-]
  *
  * Example: see `demoSpinnerRadiusExample`. Sources: spinner-heading-practice, openstax-college-physics.
  */
@@ -78,12 +80,15 @@ export function radiusMismatchExample({
     };
   });
   const top = Math.max(...speedsRpm);
+  const band = assumedRadiusBand({ ...model, angularSpeed: rpmToRadPerSecond(top), budget });
   return {
     assumedRadius,
     trueRadius,
     speedRatio: Math.sqrt(trueRadius / assumedRadius),
     rows,
-    bandAtTopSpeed: assumedRadiusBand({ ...model, angularSpeed: rpmToRadPerSecond(top), budget }),
+    bandAtTopSpeed: band,
+    // Half-width of the band relative to r: (r̂_high − r̂_low) / 2 / r (spinner-heading-practice).
+    bandHalfWidthFraction: band.low === null || band.high === null ? null : (band.high - band.low) / 2 / trueRadius,
     budget,
   };
 }
@@ -108,7 +113,7 @@ export const DEMO_HEADING_SPINNER = {
  *
  * Example: 1200 rpm: 3.613 rad/s (207.0 °/s); 2800 rpm: 8.431 rad/s (483.1 °/s); 10.35° per
  * revolution at both. To stay within 10 °/s at 2800 rpm the firmware radius must lie between
- * 12.6849 mm and 12.7151 mm. Sources: spinner-heading-practice, openstax-college-physics.
+ * 12.6849 mm and 12.7151 mm, about ±0.12 % of the true radius. Sources: spinner-heading-practice, openstax-college-physics.
  */
 export function demoSpinnerRadiusExample(): RadiusMismatchExample {
   return radiusMismatchExample({ ...DEMO_HEADING_SPINNER });

@@ -73,6 +73,8 @@ export interface DemoRobotBalance {
   washers: number;
   /** Their total mass [kg]. */
   washerMass: number;
+  /** Distance of the washer stack from the spin axis, √(x² + y²) of its mounting point [m]. */
+  washerRadius: number;
   /** The layout with the washer stack added, and its properties. */
   withWashers: AppliedCounterweight;
   /** Sensor figures with the washers in place. */
@@ -84,7 +86,8 @@ export interface DemoRobotBalance {
  * counterweight that brings its centre of mass within 0.2 mm, rounded up to whole 6 g washers
  * stacked under one bolt at 55 mm, and what that does to the sensor radius.
  *
- * @returns the inputs, the full MassBalance, the washer count and the layout with the washers
+ * @returns the inputs, the full MassBalance, the washer count, mass [kg] and radius [m], and the
+ * layout with the washers
  * Sources: centre-of-mass, parallel-axis-theorem, iso-21940-11, openstax-college-physics.
  */
 export function demoRobotBalance(): DemoRobotBalance {
@@ -114,6 +117,8 @@ export function demoRobotBalance(): DemoRobotBalance {
     balance,
     washers,
     washerMass,
+    // Plan distance from the axis, √(x² + y²) (oxford-concise-mathematics, distance formula).
+    washerRadius: Math.hypot(at.x, at.y),
     withWashers,
     sensorWithWashers: trueSensorRadius({
       centreX: withWashers.after.centreX,

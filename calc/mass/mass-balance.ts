@@ -3,7 +3,7 @@
  * grade, couple, counterweight and sensor radius at once) and the counterweight it offers to add,
  * with the figures after it.
  */
-import { requireInRange, requirePositive } from "../core/errors.ts";
+import { CalcInputError, requireInRange, requirePositive } from "../core/errors.ts";
 import { defineInputs } from "../core/inputs.ts";
 import { rpmToRadPerSecond } from "../core/units.ts";
 
@@ -158,8 +158,12 @@ export interface MassBalance {
   permissible: PermissibleUnbalance;
   /** Whether U ≤ U_per. */
   gradeVerdict: "meets-grade" | "exceeds-grade";
+  /** U/U_per, the static unbalance as a share of the permissible one (1 or less meets the grade) [-]. */
+  unbalanceShareOfPermissible: number;
   /** Whether e ≤ e_target. */
   offsetVerdict: "within-target" | "outside-target";
+  /** e/e_target, the offset as a share of the target (1 or less is within it) [-]. */
+  offsetShareOfTarget: number;
   couple: CoupleUnbalance;
   twoPlane: TwoPlaneCorrection;
   counterweight: {
@@ -185,7 +189,7 @@ export interface MassBalance {
  * $M_{rock} = \Omega^2\sqrt{I_{xz}^2 + I_{yz}^2}$, $m_{min} = M(e - e_t)/(r + e_t)$
  *
  * @param input the parts, optional candidates, and every field of `massBalanceInputs` (SI)
- * @returns MassBalance
+ * @returns MassBalance, with U/U_per and e/e_target as shares [-]
  *
  * Assumptions: rigid body spinning steadily about the vertical axis through its centre of mass; the
  * counterweight goes at the height of the centre of mass so that it adds no couple.
@@ -214,6 +218,16 @@ export function massBalance(input: MassBalanceInput): MassBalance {
     planeZ2,
     radius: correctionRadius,
   });
+  // The offset against its target, e/e_target (the comparison behind offsetVerdict; centre-of-mass).
+  const offsetShareOfTarget = layout.offset / targetOffset;
+  if (!Number.isFinite(offsetShareOfTarget)) {
+    throw new CalcInputError({
+      param: "targetOffset",
+      value: targetOffset,
+      expected: "large enough that e/e_target stays finite",
+      unit: "m",
+    });
+  }
   const bestCandidate = choice && choice.best !== null ? choice.candidates[choice.best]! : null;
   const unchanged = { parts: [...parts], before: layout, after: layout };
   const useCandidate = bestCandidate !== null && bestCandidate.mass !== null && bestCandidate.mass > 0;
@@ -235,7 +249,10 @@ export function massBalance(input: MassBalanceInput): MassBalance {
     gradeMet: finestGradeMet(equivalentGrade),
     permissible,
     gradeVerdict: stat.unbalance <= permissible.unbalance ? "meets-grade" : "exceeds-grade",
+    // U/U_per, the ratio iso-21940-11 judges by; equal to eΩ/G_chosen, so finite for any valid grade.
+    unbalanceShareOfPermissible: stat.unbalance / permissible.unbalance,
     offsetVerdict: layout.offset <= targetOffset ? "within-target" : "outside-target",
+    offsetShareOfTarget,
     couple: coupleUnbalance({ productXZ: layout.productXZ, productYZ: layout.productYZ, angularSpeed: spinSpeed }),
     twoPlane,
     counterweight: { atRadius, forMass, candidates: choice },
@@ -275,8 +292,11 @@ export interface CounterweightPlan {
    * point, no points given, more than 10 000 kg, or the list already holds the most parts allowed).
    */
   status: "apply" | "not-needed" | "none";
-  /** The point mass to add, at height z̄: mass [kg], position [m]; null unless "apply". */
-  counterweight: { mass: number; x: number; y: number; z: number } | null;
+  /**
+   * The point mass to add, at height z̄: mass [kg], position [m], and the same position as a
+   * distance from the axis [m] and a direction atan2(y, x) [rad]; null unless "apply".
+   */
+  counterweight: { mass: number; x: number; y: number; z: number; radius: number; angle: number } | null;
   /** The layout with the counterweight as its last row, and its figures; null unless "apply". */
   after: (BalanceSnapshot & { parts: LayoutPart[] }) | null;
 }
@@ -298,7 +318,7 @@ function roundUpSignificant(value: number, figures: number): number {
  * @param input the calculator's input (parts, candidates and every scalar, SI)
  * @param balance massBalance(input)
  * @param mode "radius", "mass" or "points"
- * @returns status; counterweight (mass [kg], x, y, z [m]) or null; after (parts, offset [m],
+ * @returns status; counterweight (mass [kg], x, y, z [m], radius [m], angle [rad]) or null; after (parts, offset [m],
  * equivalentGrade [m/s], gradeMet, sensor) or null
  *
  * Assumptions: a least mass puts the offset exactly on the target, where rounding or a mounting
@@ -336,7 +356,8 @@ export function counterweightPlan({ input, balance, mode }: { input: MassBalance
   const equivalentGrade = equivalentBalanceGrade({ offset: after.offset, angularSpeed: input.spinSpeed });
   return {
     status: "apply",
-    counterweight: { mass: placed.mass, x: pick.x, y: pick.y, z },
+    // Polar form of the mounting point: r = √(x² + y²), θ = atan2(y, x) (oxford-concise-mathematics).
+    counterweight: { mass: placed.mass, x: pick.x, y: pick.y, z, radius: Math.hypot(pick.x, pick.y), angle: Math.atan2(pick.y, pick.x) },
     after: {
       parts: placed.parts,
       offset: after.offset,

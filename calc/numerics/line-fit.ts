@@ -86,6 +86,8 @@ export interface SpikeReport {
   bounds: ConfidenceInterval;
   /** (r_i − median r)/σ̂ for each point [-]. */
   modifiedZ: number[];
+  /** |modified z| for each point: how many robust standard deviations it lies from the median, on either side [-]. */
+  robustDistance: number[];
   /** Indices (0-based, input order) of points with |modified z| > k. */
   flagged: number[];
 }
@@ -384,7 +386,9 @@ export function fitChecked(
   const floor = Math.max(1e-9 * yScale, 1e-300);
   const robust = robustScale(theilSen.residuals, floor);
   const modifiedZ = theilSen.residuals.map((r) => (r - robust.center) / robust.scale);
-  const flagged = modifiedZ.flatMap((m, i) => (Math.abs(m) > spikeThreshold ? [i] : []));
+  // Distance from the centre in robust standard deviations, |M_i| (iglewicz-hoaglin-1993).
+  const robustDistance = modifiedZ.map((m) => Math.abs(m));
+  const flagged = robustDistance.flatMap((d, i) => (d > spikeThreshold ? [i] : []));
   const huber = huberLine(x, y, theilSen, robust.scale, huberTuning, 1e-12 * (yScale + robust.scale));
   let leastSquaresWithoutSpikes: LeastSquaresLine | null = null;
   if (flagged.length > 0) {
@@ -413,6 +417,7 @@ export function fitChecked(
       // iglewicz-hoaglin-1993: |r − median r| > k·σ̂ flags a point
       bounds: { low: robust.center - spikeThreshold * robust.scale, high: robust.center + spikeThreshold * robust.scale },
       modifiedZ,
+      robustDistance,
       flagged,
     },
     leastSquaresWithoutSpikes,

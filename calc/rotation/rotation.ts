@@ -2,10 +2,11 @@
  * Rotation: acceleration at a radius, where an accelerometer can sit on a spinning robot, and the
  * pull a spinning part puts on its mounts. SI in and out: rad/s, m, m/s², kg, N.
  */
-import { requireInRange, requireNonNegative, requirePositive, requireRelation } from "../core/errors.ts";
+import { CalcInputError, requireInRange, requireNonNegative, requirePositive, requireRelation } from "../core/errors.ts";
 import { defineInputs } from "../core/inputs.ts";
 import { STANDARD_GRAVITY } from "../core/constants.ts";
 import { rpmToRadPerSecond } from "../core/units.ts";
+import { requireWhole } from "../core/spec-check.ts";
 import type { SourceKey } from "../sources/index.ts";
 
 /**
@@ -26,6 +27,54 @@ export function centripetalAcceleration({ angularSpeed, radius }: { angularSpeed
   requireNonNegative("angularSpeed", angularSpeed, "rad/s");
   requireNonNegative("radius", radius, "m");
   return angularSpeed * angularSpeed * radius;
+}
+
+/** One point of an acceleration-against-speed curve. */
+export interface AccelerationCurvePoint {
+  /** ω [rad/s] */
+  angularSpeed: number;
+  /** a = ω²r [m/s²] */
+  acceleration: number;
+}
+
+/**
+ * Centripetal acceleration at one radius over evenly spaced speeds from 0 to a maximum, for a plot
+ * (openstax-college-physics).
+ *
+ * Formula: $\omega_i = \omega_{max}\,i/n$, $a_i = \omega_i^2 r$ for $i = 0 \dots n$
+ *
+ * @param radius r, distance from the spin axis [m], 0 or more
+ * @param maxSpeed ω_max, the last speed [rad/s], greater than 0
+ * @param intervals n, the number of equal steps [-], a whole number from 1 to 1000 (n + 1 points)
+ * @returns the n + 1 points, speeds [rad/s] and accelerations [m/s²]
+ *
+ * Assumptions: as `centripetalAcceleration` (steady rotation).
+ * @example
+ * centripetalAccelerationCurve({ radius: 0.012, maxSpeed: 400, intervals: 2 }) // → a = 0, 480, 1920 m/s² at ω = 0, 200, 400 rad/s
+ * Sources: openstax-college-physics.
+ */
+export function centripetalAccelerationCurve({
+  radius,
+  maxSpeed,
+  intervals,
+}: {
+  radius: number;
+  maxSpeed: number;
+  intervals: number;
+}): AccelerationCurvePoint[] {
+  requireNonNegative("radius", radius, "m");
+  requirePositive("maxSpeed", maxSpeed, "rad/s");
+  requireWhole("intervals", intervals, 1, 1000);
+  if (!Number.isFinite(maxSpeed * maxSpeed * radius)) {
+    throw new CalcInputError({ param: "maxSpeed", value: maxSpeed, expected: "small enough that ω²r stays finite", unit: "rad/s" });
+  }
+  const points: AccelerationCurvePoint[] = [];
+  for (let i = 0; i <= intervals; i += 1) {
+    // Evenly spaced speeds; a = ω²r at each (openstax-college-physics).
+    const angularSpeed = (maxSpeed * i) / intervals;
+    points.push({ angularSpeed, acceleration: centripetalAcceleration({ angularSpeed, radius }) });
+  }
+  return points;
 }
 
 /**
@@ -106,6 +155,28 @@ export function speedResolution({ step, angularSpeed, radius }: { step: number; 
   requirePositive("angularSpeed", angularSpeed, "rad/s");
   requirePositive("radius", radius, "m");
   return Math.sqrt(1 + step / (angularSpeed * angularSpeed * radius)) - 1;
+}
+
+/**
+ * Size of one count of a digital sensor: its full-scale span split into 2^bits equal steps
+ * (sensor-quantisation).
+ *
+ * Formula: $\Delta a = \dfrac{S}{2^{b}}$
+ *
+ * @param span S, the full-scale span, e.g. 400 g for a ±200 g range [m/s²], greater than 0
+ * @param bits b, the output word length [-], a whole number from 1 to 32
+ * @returns Δa, one count [m/s²]
+ *
+ * Assumptions: a linear converter with equal steps over the whole span.
+ * @example
+ * sensorCountSize({ span: 400 * 9.80665, bits: 12 }) // → 0.957681 (0.0977 g)
+ * Sources: sensor-quantisation.
+ */
+export function sensorCountSize({ span, bits }: { span: number; bits: number }): number {
+  requirePositive("span", span, "m/s²");
+  requireWhole("bits", bits, 1, 32);
+  // Uniform quantiser step, full span over 2^bits codes (sensor-quantisation).
+  return span / 2 ** bits;
 }
 
 /**
@@ -291,16 +362,22 @@ export interface AccelerometerPlacement {
   verdict: PlacementVerdict;
   /** The other part's load at top speed. */
   part: PartLoad;
+  /** Mass whose weight under standard gravity equals that part's pull, F/g_n [kg]. */
+  partHangingMass: number;
+  /** Speed at which that part leaves if it lets go at top speed, tangent to its circle, ω·r [m/s]. */
+  partReleaseSpeed: number;
 }
 
 /**
  * The accelerometer-placement check: the window of radii that neither saturates at top speed nor
  * starves at low speed, where the chosen radius stands, and the load on one other part.
  *
- * Formula: $r_{min} = \dfrac{\Delta a}{\omega_{low}^2[(1+p)^2-1]} \le r \le r_{max} = \dfrac{(1-m)F}{\omega_{top}^2}$
+ * Formula: $r_{min} = \dfrac{\Delta a}{\omega_{low}^2[(1+p)^2-1]} \le r \le r_{max} = \dfrac{(1-m)F}{\omega_{top}^2}$;
+ * for the other part $F_p = m_p\,\omega_{top}^2 r_p$, $m_{eq} = F_p/g_n$, $v = \omega_{top} r_p$
  *
  * @param input every field of `accelerometerPlacementInputs`, SI
- * @returns the window, the chosen radius's figures and a verdict
+ * @returns the window, the chosen radius's figures and a verdict; the other part's load, the mass
+ * that weighs as much [kg] and the speed it leaves at if it lets go [m/s]
  *
  * Assumptions: rotation about the centre of mass; the radius is measured from there. Sources:
  * openstax-college-physics, sensor-quantisation, newton-second-law.
@@ -318,6 +395,7 @@ export function accelerometerPlacement(input: AccelerometerPlacementInput): Acce
   const accelerationAtLow = centripetalAcceleration({ angularSpeed: lowSpeed, radius });
   const resolutionAtLow = speedResolution({ step: effectiveStep, angularSpeed: lowSpeed, radius });
   const windowExists = minRadius <= maxRadius;
+  const part = partLoad({ mass: partMass, radius: partRadius, angularSpeed: topSpeed });
   const verdict: PlacementVerdict = !windowExists ? "no-window" : radius > maxRadius ? "too-far-out" : radius < minRadius ? "too-close-in" : "fits";
   return {
     minRadius,
@@ -331,7 +409,11 @@ export function accelerometerPlacement(input: AccelerometerPlacementInput): Acce
     resolutionAtLow,
     saturationSpeed: angularSpeedForAcceleration({ radius, acceleration: fullScale }),
     verdict,
-    part: partLoad({ mass: partMass, radius: partRadius, angularSpeed: topSpeed }),
+    part,
+    // Weight W = m g solved for m (newton-second-law).
+    partHangingMass: part.force / STANDARD_GRAVITY,
+    // Tangential speed of a point on a circle, v = ω r (openstax-college-physics).
+    partReleaseSpeed: topSpeed * partRadius,
   };
 }
 

@@ -233,7 +233,7 @@ function Results({ model, id }: { model: CalibrationModel; id: string }) {
             {fit.spikes.flagged.map((i) => (
               <li key={i}>
                 Line {lines[i]}: {inSystem(rows[i]!.angularSpeed, "angularSpeed", system, 4)}, {acc(rows[i]!.acceleration)}; residual{" "}
-                {acc(fit.theilSen.residuals[i]!)}, {formatNumber(Math.abs(fit.spikes.modifiedZ[i]!))} robust σ from the median.
+                {acc(fit.theilSen.residuals[i]!)}, {formatNumber(fit.spikes.robustDistance[i]!)} robust σ from the median.
               </li>
             ))}
           </ul>

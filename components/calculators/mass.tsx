@@ -6,11 +6,11 @@
  */
 import { useSignal } from "../calc-ui/reactive.ts";
 import { useEffect, useMemo } from "preact/hooks";
-import { BALANCE_GRADES } from "../../calc/mass/balance.ts";
+import { BALANCE_GRADES, standardBalanceGrade } from "../../calc/mass/balance.ts";
 import { PART_SHAPE_KINDS } from "../../calc/mass/parts.ts";
 import type { MirrorAxis } from "../../calc/mass/editing.ts";
 import { MATERIAL_DENSITIES } from "../../calc/materials/densities.ts";
-import { formatNumber, formatQuantity, type QuantityKind, type UnitId, type UnitSystem } from "../../calc/core/units.ts";
+import { formatNumber, formatQuantity, fromSI, type QuantityKind, type UnitId, type UnitSystem } from "../../calc/core/units.ts";
 import { QuantityField } from "../calc-ui/QuantityField.tsx";
 import { Toolbar } from "../calc-ui/Toolbar.tsx";
 import { Notices } from "../calc-ui/Notices.tsx";
@@ -65,6 +65,15 @@ function Outs({ rows }: { rows: [string, string, string][] }) {
         </div>
       ))}
     </dl>
+  );
+}
+
+/** A part's action button; its accessible name says which part it acts on ("Remove: Left wheel"). */
+function Act({ label, part, ...rest }: { label: string; part: string; id?: string; disabled?: boolean; onClick: () => void }) {
+  return (
+    <button type="button" class="button button--quiet" aria-label={`${label}: ${part}`} {...rest}>
+      {label}
+    </button>
   );
 }
 
@@ -143,40 +152,17 @@ function PartCard({ model, part, index, id, error, q }: { model: MassModel; part
             </div>
             {mine && !mine.field ? <p class="field-error">{mine.message}</p> : null}
             <div class="mass-actions">
-              <button
-                type="button"
-                class="button button--quiet"
-                id={`${pid}-up`}
-                disabled={index === 0}
-                aria-label={`Move up: ${name}`}
-                onClick={() => move(-1)}
-              >
-                Move up
-              </button>
-              <button
-                type="button"
-                class="button button--quiet"
-                id={`${pid}-down`}
-                disabled={index === count - 1}
-                aria-label={`Move down: ${name}`}
-                onClick={() => move(1)}
-              >
-                Move down
-              </button>
-              <button type="button" class="button button--quiet" aria-label={`Duplicate: ${name}`} onClick={() => model.duplicate(index)}>
-                Duplicate
-              </button>
-              <button
-                type="button"
-                class="button button--quiet"
-                aria-label={`Remove: ${name}`}
+              <Act part={name} label="Move up" id={`${pid}-up`} disabled={index === 0} onClick={() => move(-1)} />
+              <Act part={name} label="Move down" id={`${pid}-down`} disabled={index === count - 1} onClick={() => move(1)} />
+              <Act part={name} label="Duplicate" onClick={() => model.duplicate(index)} />
+              <Act
+                part={name}
+                label="Remove"
                 onClick={() => {
                   model.remove(index);
                   focusLater(`${id}-add`);
                 }}
-              >
-                Remove
-              </button>
+              />
             </div>
             <div class="mass-actions">
               <div class="field">
@@ -189,24 +175,8 @@ function PartCard({ model, part, index, id, error, q }: { model: MassModel; part
                   ))}
                 </select>
               </div>
-              <button
-                type="button"
-                class="button button--quiet"
-                disabled={!!bad}
-                aria-label={`Mirror: ${name}`}
-                onClick={() => model.mirror(index, axis.value, false)}
-              >
-                Mirror
-              </button>
-              <button
-                type="button"
-                class="button button--quiet"
-                disabled={!!bad}
-                aria-label={`Add mirrored copy: ${name}`}
-                onClick={() => model.mirror(index, axis.value, true)}
-              >
-                Add mirrored copy
-              </button>
+              <Act part={name} label="Mirror" disabled={!!bad} onClick={() => model.mirror(index, axis.value, false)} />
+              <Act part={name} label="Add mirrored copy" disabled={!!bad} onClick={() => model.mirror(index, axis.value, true)} />
             </div>
           </div>
         ) : null}
@@ -240,7 +210,7 @@ export default function MassLayoutCalculator({ id = massCalculator.anchor, layou
     />
   );
   const g = fields.readings.balanceGrade.value;
-  const grade = g.ok ? BALANCE_GRADES.find((s) => Math.abs(s.value - g.value) <= 1e-9 * s.value) : undefined;
+  const grade = g.ok ? standardBalanceGrade(g.value) : null;
   const mode = model.mode.value;
   const pointsError = model.mounting.value.error;
   const parts = model.parts.value;
@@ -268,10 +238,10 @@ export default function MassLayoutCalculator({ id = massCalculator.anchor, layou
     const fm = b.counterweight.forMass;
     const cand = b.counterweight.candidates;
     const s = b.sensor.before;
-    const chosen = grade?.label ?? `G ${formatNumber(g.ok ? g.value * 1000 : 0)}`;
-    const ratio = b.static.unbalance / b.permissible.unbalance;
+    const chosen = grade?.label ?? `G ${formatNumber(g.ok ? fromSI(g.value, "mm/s") : 0)}`;
+    const meets = b.gradeVerdict === "meets-grade";
     const cw = plan.counterweight;
-    const where = (x: number, y: number) => `${q(Math.hypot(x, y), "length")} at ${q(Math.atan2(y, x), "angle")}`;
+    const where = (c: { radius: number; angle: number }) => `${q(c.radius, "length")} at ${q(c.angle, "angle")}`;
     mass = (
       <>
         <Outs
@@ -293,15 +263,18 @@ export default function MassLayoutCalculator({ id = massCalculator.anchor, layou
           sensor={[input.sensorX, input.sensorY]}
           counterweight={cw ? [cw.x, cw.y] : null}
           system={system}
-          summary={`${L.parts.length} parts. Centre of mass ${q(L.offset, "length")} from the geometric centre toward ${q(L.offsetAngle, "angle")}; sensor ${q(s.radiusTrue, "length")} from it.${cw ? ` Counterweight ${q(cw.mass, "mass")} at ${where(cw.x, cw.y)}.` : ""}`}
+          summary={`${L.parts.length} parts. Centre of mass ${q(L.offset, "length")} from the geometric centre toward ${q(L.offsetAngle, "angle")}; sensor ${q(s.radiusTrue, "length")} from it.${cw ? ` Counterweight ${q(cw.mass, "mass")} at ${where(cw)}.` : ""}`}
         />
       </>
     );
     balance = (
       <>
-        <p class={`verdict verdict--${ratio <= 1 ? "ok" : "bad"}`} data-out="grade-verdict">
-          <strong>{ratio <= 1 ? `Meets ${chosen}.` : `Exceeds ${chosen}.`}</strong> U = {q(b.static.unbalance, "unbalance")} is {formatNumber(ratio * 100)} % of
-          the permissible {q(b.permissible.unbalance, "unbalance")}
+        <p class={`verdict verdict--${meets ? "ok" : "bad"}`} data-out="grade-verdict">
+          <strong>
+            {meets ? "Meets" : "Exceeds"} {chosen}.
+          </strong>{" "}
+          U = {q(b.static.unbalance, "unbalance")} is {formatNumber(b.unbalanceShareOfPermissible * 100)} % of the permissible{" "}
+          {q(b.permissible.unbalance, "unbalance")}
           {b.gradeMet ? `; the finest grade it meets is ${b.gradeMet.label}.` : "; it is coarser than G 4000."}
         </p>
         <Outs
@@ -338,8 +311,8 @@ export default function MassLayoutCalculator({ id = massCalculator.anchor, layou
     counter = (
       <>
         <p class={`verdict verdict--${within ? "ok" : "bad"}`} data-out="offset-verdict">
-          <strong>{within ? "Within target." : "Outside target."}</strong> e = {q(L.offset, "length")}, {formatNumber((L.offset / input.targetOffset) * 100)} %
-          of the {q(input.targetOffset, "length")} target.
+          <strong>{within ? "Within target." : "Outside target."}</strong> e = {q(L.offset, "length")}, {formatNumber(b.offsetShareOfTarget * 100)} % of the{" "}
+          {q(input.targetOffset, "length")} target.
         </p>
         {within ? null : mode === "r" ? (
           <Outs
@@ -373,7 +346,7 @@ export default function MassLayoutCalculator({ id = massCalculator.anchor, layou
           <>
             <table class="mass-compare">
               <caption>
-                Add <span data-out="cw-mass">{q(cw.mass, "mass")}</span> at <span data-out="cw-where">{where(cw.x, cw.y)}</span>, height {q(cw.z, "length")}
+                Add <span data-out="cw-mass">{q(cw.mass, "mass")}</span> at <span data-out="cw-where">{where(cw)}</span>, height {q(cw.z, "length")}
               </caption>
               <thead>
                 <tr>
@@ -443,7 +416,7 @@ export default function MassLayoutCalculator({ id = massCalculator.anchor, layou
           <legend>Parts ({parts.length})</legend>
           <ol>
             {parts.map((part, index) => (
-              <PartCard key={part.key} model={model} part={part} index={index} id={id} error={error} q={(v, k) => formatQuantity(v, k, { system }).text} />
+              <PartCard key={part.key} model={model} part={part} index={index} id={id} error={error} q={q} />
             ))}
           </ol>
           <button type="button" class="button" id={`${id}-add`} onClick={() => focusLater(`${id}-p${model.add().key}-name`)}>

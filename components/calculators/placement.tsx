@@ -4,9 +4,8 @@
  */
 import { useEffect, useMemo } from "preact/hooks";
 import placement from "../../calc/calculators/placement.ts";
-import { centripetalAcceleration, type AccelerometerPlacement } from "../../calc/rotation/rotation.ts";
-import { STANDARD_GRAVITY } from "../../calc/core/constants.ts";
-import { formatNumber, formatQuantity, radPerSecondToRpm, rpmToRadPerSecond, type UnitSystem } from "../../calc/core/units.ts";
+import { centripetalAccelerationCurve, type AccelerometerPlacement } from "../../calc/rotation/rotation.ts";
+import { formatNumber, formatQuantity, fromSI, radPerSecondToRpm, type UnitSystem } from "../../calc/core/units.ts";
 import { QuantityField } from "../calc-ui/QuantityField.tsx";
 import { Toolbar } from "../calc-ui/Toolbar.tsx";
 import { Notices } from "../calc-ui/Notices.tsx";
@@ -18,19 +17,18 @@ import { createCalculatorModel } from "../calc-ui/model.ts";
 /** The island name: this file's name. */
 export const island = "placement";
 
+/** The plot runs past the top speed by this factor, to show the margin. */
+const CURVE_PAST_TOP = 1.2;
+
 export function createPlacementModel() {
   const model = createCalculatorModel(placement);
   /** Acceleration [g] against speed [rpm] at the chosen radius, from 0 to 1.2 × top speed. */
   const curve = computed(() => {
     const values = model.values.value;
     if (!values || !model.outcome.value.result) return null;
-    const maxRpm = radPerSecondToRpm(values.topSpeed) * 1.2;
-    const points: [number, number][] = [];
-    for (let i = 0; i <= 60; i += 1) {
-      const rpm = (maxRpm * i) / 60;
-      points.push([rpm, centripetalAcceleration({ angularSpeed: rpmToRadPerSecond(rpm), radius: values.radius }) / STANDARD_GRAVITY]);
-    }
-    return { points, maxRpm };
+    const curve = centripetalAccelerationCurve({ radius: values.radius, maxSpeed: values.topSpeed * CURVE_PAST_TOP, intervals: 60 });
+    const points = curve.map((p) => [radPerSecondToRpm(p.angularSpeed), fromSI(p.acceleration, "gn")] as [number, number]);
+    return { points, maxRpm: points.at(-1)![0] };
   });
   return { ...model, curve };
 }
@@ -58,7 +56,7 @@ function verdictText(r: AccelerometerPlacement, system: UnitSystem): { tone: "ok
       return {
         tone: "bad",
         title: "Too far out",
-        detail: `At top speed the sensor would read ${formatNumber(r.accelerationAtTop / STANDARD_GRAVITY)} g, ${formatNumber(r.fullScaleUsed * 100)} % of its full scale. Move it in to ${len(r.maxRadius)} or less, or use a sensor with a larger range.`,
+        detail: `At top speed the sensor would read ${formatNumber(fromSI(r.accelerationAtTop, "gn"))} g, ${formatNumber(r.fullScaleUsed * 100)} % of its full scale. Move it in to ${len(r.maxRadius)} or less, or use a sensor with a larger range.`,
       };
     case "too-close-in":
       return {
@@ -87,7 +85,7 @@ function Results({ model }: { model: PlacementModel }) {
   }
   const q = (v: number, kind: Parameters<typeof formatQuantity>[1]) => formatQuantity(v, kind, { system }).text;
   const verdict = verdictText(result, system);
-  const g = (v: number) => `${formatNumber(v / STANDARD_GRAVITY)} g`;
+  const g = (v: number) => `${formatNumber(fromSI(v, "gn"))} g`;
   return (
     <div class="calc-results" aria-live="polite">
       <p class={`verdict verdict--${verdict.tone}`}>
@@ -140,9 +138,9 @@ function PlacementChart({ model }: { model: PlacementModel }) {
   const curve = model.curve.value;
   const result = model.outcome.value.result;
   if (!values || !curve || !result) return null;
-  const fullScaleG = values.fullScale / STANDARD_GRAVITY;
-  const limitG = fullScaleG * (1 - values.margin);
-  const topG = result.accelerationAtTop / STANDARD_GRAVITY;
+  const fullScaleG = fromSI(values.fullScale, "gn");
+  const limitG = fromSI(result.readingLimit, "gn");
+  const topG = fromSI(result.accelerationAtTop, "gn");
   const yMax = Math.max(fullScaleG, Math.min(topG * 1.44, fullScaleG * 3)) * 1.1;
   return (
     <Chart

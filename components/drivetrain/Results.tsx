@@ -38,14 +38,14 @@ function Verdict({ r }: { r: SpinUpResult }) {
   if (r.verdict === "falls-short") {
     return (
       <p class="verdict verdict--bad">
-        <strong>Falls short.</strong> It tops out at {rpm(r.topSpeed)} ({settled}), {percent(1 - r.topSpeed / r.targetSpeed)} below the {target} target.
+        <strong>Falls short.</strong> It tops out at {rpm(r.topSpeed)} ({settled}), {percent(-r.topSpeedMargin)} below the {target} target.
       </p>
     );
   }
   return (
     <p class="verdict verdict--ok">
-      <strong>Reaches the target.</strong> {target} in {seconds(r.timeToTarget!)}; it tops out at {rpm(r.topSpeed)} ({settled}),{" "}
-      {percent(r.topSpeed / r.targetSpeed - 1)} above the target.
+      <strong>Reaches the target.</strong> {target} in {seconds(r.timeToTarget!)}; it tops out at {rpm(r.topSpeed)} ({settled}), {percent(r.topSpeedMargin)}{" "}
+      above the target.
     </p>
   );
 }

@@ -6,6 +6,7 @@ import { QuantityField } from "../calc-ui/QuantityField.tsx";
 import { Chart } from "../calc-ui/Chart.tsx";
 import { fieldUnit, type InputSpec } from "../../calc/core/inputs.ts";
 import { formatNumber, fromSI, radPerSecondToRpm, UNITS, type UnitSystem } from "../../calc/core/units.ts";
+import { summariseSweep } from "../../calc/drivetrain/compare.ts";
 import { fmt, rpm } from "./format.ts";
 import { applies, POINTS_SPEC, SPECS, SWEEPABLE, sweepSpec, type Name, type SpinUpModel, type SweepState } from "./model.ts";
 
@@ -45,7 +46,7 @@ function SweepResults({ state, target, system }: { state: Done; target: number; 
     } else run.push([x(p.value), p.timeToTarget]);
   }
   if (run.length) runs.push(run);
-  const times = state.points.flatMap((p) => (p.timeToTarget === null ? [] : [p.timeToTarget]));
+  const summary = summariseSweep(state.points);
   const tops = state.points.map((p) => radPerSecondToRpm(p.topSpeed) / 1000);
   const axis = `${spec.label}${symbol ? ` (${symbol})` : ""}`;
   const marker = [{ value: x(best.value), label: `Best: ${show(best.value)}`, className: "plot-marker plot-dashed" }];
@@ -62,18 +63,18 @@ function SweepResults({ state, target, system }: { state: Done; target: number; 
       {runs.length > 0 ? (
         <Chart
           title={`Time to target against ${spec.label.toLowerCase()}`}
-          summary={`Shortest time to target ${formatNumber(Math.min(...times))} s at ${show(best.value)}; ${state.points.length - times.length} of ${state.points.length} values do not reach the target.`}
+          summary={`Shortest time to target ${formatNumber(summary.shortestTimeToTarget!)} s at ${show(best.value)}; ${summary.missedCount} of ${state.points.length} values do not reach the target.`}
           xLabel={axis}
           yLabel="Time to target (s)"
           xDomain={xDomain}
-          yDomain={[0, Math.max(...times) * 1.1]}
+          yDomain={[0, summary.longestTimeToTarget! * 1.1]}
           series={runs.map((points, i) => ({ label: i === 0 ? "Time to target" : `Time to target (part ${i + 1})`, points, className: "plot-curve" }))}
           vLines={state.optimumBy === "time-to-target" ? marker : []}
         />
       ) : null}
       <Chart
         title={`Top speed against ${spec.label.toLowerCase()}`}
-        summary={`Top speed from ${formatNumber(Math.min(...tops) * 1000, 4)} to ${formatNumber(Math.max(...tops) * 1000, 4)} rpm; target ${formatNumber(radPerSecondToRpm(target), 4)} rpm.`}
+        summary={`Top speed from ${formatNumber(radPerSecondToRpm(summary.lowestTopSpeed), 4)} to ${formatNumber(radPerSecondToRpm(summary.highestTopSpeed), 4)} rpm; target ${formatNumber(radPerSecondToRpm(target), 4)} rpm.`}
         xLabel={axis}
         yLabel="Top speed (1000 rpm)"
         xDomain={xDomain}

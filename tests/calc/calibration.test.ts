@@ -346,6 +346,14 @@ describe("spike flags", () => {
     expect(f.spikes.flagged).toEqual([5]);
   });
 
+  it("gives each point's distance from the median in robust standard deviations, |M_i| (Iglewicz & Hoaglin 1993), and flags those beyond k", () => {
+    // Same data: residuals 0,0,0,0,0,10 about the median 0, σ̂ = √(π/2)·10/6, so the last point lies 10/σ̂ = 6/√(π/2) = 4.787 away.
+    const f = fitStraightLine({ x: [1, 2, 3, 4, 5, 6], y: [3, 5, 7, 9, 11, 23] });
+    expect(f.spikes.robustDistance[5]).toBeCloseTo(6 / Math.sqrt(Math.PI / 2), 12);
+    expect(f.spikes.robustDistance).toEqual(f.spikes.modifiedZ.map(Math.abs));
+    expect(f.spikes.flagged).toEqual(f.spikes.robustDistance.flatMap((d, i) => (d > f.spikes.threshold ? [i] : [])));
+  });
+
   it("never flags round-off in exact data (resolution floor)", () => {
     const rows = [300, 700, 1100, 1500, 1900, 2300, 2700].map((rpm) => {
       const w = rpmToRadPerSecond(rpm);
@@ -393,6 +401,27 @@ describe("calibration fit", () => {
     expect(f.method).toBe("least-squares-without-spikes");
     expect(Math.abs(f.radius / truth.radius - 1)).toBeLessThan(0.005);
     expect(Math.abs(f.leastSquares.slope / truth.radius - 1)).toBeGreaterThan(Math.abs(f.radius / truth.radius - 1));
+  });
+
+  it("gives the radius's relative standard error, SE(r̂)/r̂, from the least-squares line it chose", () => {
+    // Standard error of a least-squares slope, s/√Sxx (draper-smith-1998, ch. 1), over the slope.
+    const noise = normalSource(31);
+    const rows = speeds.map((w) => ({ angularSpeed: w, acceleration: truth.radius * w * w + truth.bias + 0.2 * STANDARD_GRAVITY * noise() }));
+    rows[6]!.acceleration += 15 * STANDARD_GRAVITY;
+    const f = fitCalibration(rows);
+    const clean = f.leastSquaresWithoutSpikes!;
+    const x = f.speedSquared.filter((_, i) => i !== 6);
+    const residuals = clean.residuals;
+    const mean = x.reduce((a, b) => a + b, 0) / x.length;
+    const sxx = x.reduce((a, v) => a + (v - mean) ** 2, 0);
+    const s = Math.sqrt(residuals.reduce((a, r) => a + r * r, 0) / (x.length - 2));
+    expect(f.radiusRelativeStdError!).toBeCloseTo(s / Math.sqrt(sxx) / f.radius, 9);
+    expect(f.radiusRelativeStdError).toBe(clean.slopeStdError / f.radius);
+  });
+
+  it("has no relative standard error when the radius comes from Theil–Sen", () => {
+    const rows = [1, 1, 1, 1, 2, 2, 2, 2, 3, 4].map((w, i) => ({ angularSpeed: w, acceleration: 2 * w * w + (i >= 8 ? 50 : 0) }));
+    expect(fitCalibration(rows).radiusRelativeStdError).toBeNull();
   });
 
   it("falls back to Theil–Sen when fewer than 3 different speeds remain after removing spikes", () => {

@@ -3,7 +3,7 @@ import { createRequire } from "node:module";
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { biteDepth, currentLimitedAcceleration, rotorKineticEnergy, rotorTipSpeed, tractionLimitedAcceleration } from "../../calc/drivetrain/figures.ts";
-import { compareDrivetrains, markSweepOptimum, sweepDrivetrain, sweepPoint, sweepValues } from "../../calc/drivetrain/compare.ts";
+import { compareDrivetrains, markSweepOptimum, summariseSweep, sweepDrivetrain, sweepPoint, sweepValues } from "../../calc/drivetrain/compare.ts";
 import { DEMO_SPINNER, DEMO_WEAPON, DRIVETRAIN_SOURCE_KEYS, drivetrainWorkedExample } from "../../calc/drivetrain/demo.ts";
 import {
   DRIVE_TYPE_OPTIONS,
@@ -434,6 +434,35 @@ describe("run outputs", () => {
     expect(far.atTopSpeed.angularSpeed).toBe(far.topSpeed);
   });
 
+  it("gives the share the motor's rotor adds through the belt, J_eff/J − 1 with J_eff = J + ηG²N·J_m", () => {
+    // Reflected inertia through a gear stage, J_eff = J + ηG²N·J_m (serway-beichner-5e, rotational dynamics; the model's own formula).
+    const p = DEMO_WEAPON;
+    const expected = (p.inertia + p.gearEfficiency * p.gearRatio ** 2 * p.motorCount * p.motorRotorInertia) / p.inertia - 1;
+    expect(weapon.drive.addedInertiaShare).toBeCloseTo(expected, 12);
+    expect(weapon.drive.addedInertiaShare).toBeCloseTo(weapon.drive.effectiveInertia / p.inertia - 1, 15);
+  });
+
+  it("gives the time to half the target at the current-limited acceleration held constant, t = ½Ω/α", () => {
+    // Constant angular acceleration from rest, ω = αt (openstax-university-physics-1, rotational kinematics).
+    expect(weapon.straightLineTimeTo50).toBeCloseTo((0.5 * DEMO_WEAPON.targetSpeed) / weapon.drive.currentLimitedAcceleration, 12);
+    expect(weapon.straightLineTimeTo50!).toBeLessThan(weapon.timeTo50!);
+    expect(simulateSpinUp({ ...DEMO_WEAPON, frictionTorque: 5 }).straightLineTimeTo50).toBeNull();
+  });
+
+  it("gives the top speed's margin over the target, Ω_top/Ω_target − 1: above 0 when reached, below when it falls short, −1 when stalled", () => {
+    // Relative difference of two speeds (common practice).
+    expect(weapon.topSpeedMargin).toBeCloseTo(weapon.topSpeed / DEMO_WEAPON.targetSpeed - 1, 15);
+    expect(weapon.topSpeedMargin).toBeGreaterThan(0);
+    const far = simulateSpinUp({ ...DEMO_WEAPON, targetSpeed: 20000 * RPM });
+    expect(far.topSpeedMargin).toBeLessThan(0);
+    expect(simulateSpinUp({ ...DEMO_WEAPON, frictionTorque: 5 }).topSpeedMargin).toBe(-1);
+  });
+
+  it("gives the height a 1 kg mass falls to carry the stored energy, h = E/(m·g) with m = 1 kg", () => {
+    // Gravitational potential energy E = m·g·h (openstax-university-physics-1, §8.1), g_n = 9.80665 m/s² (cgpm-1901).
+    for (const f of [weapon.atTopSpeed, weapon.atTargetSpeed]) expect(f.dropHeightPerKilogram).toBeCloseTo(f.storedEnergy / 9.80665, 12);
+  });
+
   it("says so when friction holds the drive at rest", () => {
     const stuck = simulateSpinUp({ ...DEMO_WEAPON, frictionTorque: 5 });
     expect(stuck.verdict).toBe("stalled");
@@ -453,6 +482,39 @@ describe("run outputs", () => {
       expect(e.totalLoss).toBeCloseTo(e.batteryLoss + e.copperLoss + e.motorLoss + e.gearLoss + e.frictionLoss + e.dragLoss + e.slipLoss, 9);
       expect(Math.abs(e.drawn - e.kinetic - e.totalLoss) / e.drawn).toBeCloseTo(e.balanceError, 12);
     }
+  });
+});
+
+describe("sweep summary (order statistics of the swept points)", () => {
+  const point = (timeToTarget: number | null, topSpeed: number) => ({
+    value: 1,
+    timeToTarget,
+    timeTo90: null,
+    topSpeed,
+    verdict: timeToTarget === null ? ("falls-short" as const) : ("reaches-target" as const),
+    peakBatteryCurrent: 0,
+    storedEnergy: 0,
+    isOptimum: false,
+  });
+
+  it("gives the shortest and longest time to target, the count that miss, and the range of top speeds (by hand)", () => {
+    const s = summariseSweep([point(null, 900), point(1.2, 1100), point(1.0, 1200), point(1.1, 1150)]);
+    expect(s).toEqual({ shortestTimeToTarget: 1.0, longestTimeToTarget: 1.2, missedCount: 1, lowestTopSpeed: 900, highestTopSpeed: 1200 });
+  });
+
+  it("has no times when no point reaches the target", () => {
+    expect(summariseSweep([point(null, 900), point(null, 950)])).toMatchObject({ shortestTimeToTarget: null, longestTimeToTarget: null, missedCount: 2 });
+  });
+
+  it("agrees with the demo weapon's gear-ratio sweep, whose best point is the shortest time", () => {
+    const sweep = sweepDrivetrain({ base: DEMO_WEAPON, parameter: "gearRatio", from: 1, to: 4, points: 31 });
+    const s = summariseSweep(sweep.points);
+    expect(s.shortestTimeToTarget).toBe(sweep.points[sweep.optimumIndex]!.timeToTarget);
+    expect(s.missedCount).toBe(sweep.points.filter((p) => p.timeToTarget === null).length);
+  });
+
+  it("names points when the list is empty", () => {
+    expect(() => summariseSweep([])).toThrowError(CalcInputError);
   });
 });
 

@@ -804,6 +804,13 @@ describe("regression pins (our own digits, not outside references)", () => {
     expect(ex.bandAtTopSpeed.high!).toBeCloseTo(0.0127151325574903, 14);
   });
 
+  it("gives the demo band's half-width as a fraction of the true radius, (r̂_high − r̂_low)/(2r) ≈ 0.119 %", () => {
+    // Half-width of the band over r, the definition in spinner-heading-practice; band edges pinned above.
+    const ex = demoSpinnerRadiusExample();
+    expect(ex.bandHalfWidthFraction!).toBeCloseTo((0.0127151325574903 - 0.012684894440825) / (2 * 0.0127), 12);
+    expect(ex.bandHalfWidthFraction!).toBeCloseTo(0.00119047703, 10);
+  });
+
   it("pins the drift calculator's defaults", () => {
     const r = headingDrift(defaultsOf(headingDriftInputs));
     expect(toDeg(r.atSpeed.driftRate!)).toBeCloseTo(366.75202097162, 8);

@@ -7,6 +7,7 @@ import {
   coupleUnbalance,
   equivalentBalanceGrade,
   finestGradeMet,
+  standardBalanceGrade,
   permissibleResidualUnbalance,
   staticUnbalance,
   twoPlaneCorrection,
@@ -373,6 +374,18 @@ describe("ISO 21940-11 balance quality grades", () => {
   it("iso-21940-11: e_per in µm equals e_per in g·mm/kg", () => {
     const u = permissibleResidualUnbalance({ totalMass: 1, grade: 0.0063, angularSpeed: rpmToRadPerSecond(3000) });
     expectRel(u.specificUnbalance / 1e-6, fromSI(u.unbalance, "g·mm"), 1e-12);
+  });
+
+  it("iso-21940-11 Table 1: names the standard grade a value equals (to a relative 1e-9), and none between grades", () => {
+    // The grades G 0.4 … G 4000 in mm/s, from iso-21940-11 Table 1.
+    expect(standardBalanceGrade(0.0063)?.label).toBe("G 6.3");
+    expect(standardBalanceGrade(6.3 * 0.001)?.label).toBe("G 6.3");
+    expect(standardBalanceGrade(4)?.label).toBe("G 4000");
+    expect(standardBalanceGrade(0.0004)?.label).toBe("G 0.4");
+    expect(standardBalanceGrade(0.005)).toBeNull();
+    expect(standardBalanceGrade(0.0063 * (1 + 1e-6))).toBeNull();
+    for (const g of BALANCE_GRADES) expect(standardBalanceGrade(g.value)).toBe(g);
+    expectInputError(() => standardBalanceGrade(-1), "grade");
   });
 
   it("picks the finest grade met, and none beyond G 4000", () => {
@@ -988,10 +1001,29 @@ describe("the mass-and-balance calculator", () => {
     expect(b.fix.method).toBe("candidate");
     expect(b.counterweight.forMass.status).toBe("placed");
     expect(d.washers).toBe(7);
+    // The stack's distance from the axis, √(x² + y²) (oxford-concise-mathematics): the 55 mm bolt circle.
+    expect(d.washerRadius).toBeCloseTo(Math.hypot(b.counterweight.atRadius.x, b.counterweight.atRadius.y), 15);
+    expect(d.washerRadius).toBeCloseTo(0.055, 12);
     expect(d.withWashers.after.offset).toBeLessThan(d.targetOffset);
     expect(d.sensorWithWashers.driftPerRevolution).toBeLessThan(b.sensor.before.driftPerRevolution / 10);
     // The layout is symmetric in y, so the centre of mass lies on the x axis.
     expect(b.layout.centreY).toBe(0);
+  });
+
+  it("iso-21940-11: gives U/U_per, which equals eΩ/G for the chosen grade, and e/e_target, each on the side of 1 its verdict says", () => {
+    // U = M·e and U_per = M·G/Ω (iso-21940-11), so U/U_per = eΩ/G; e/e_target by definition (centre-of-mass).
+    const d = demoRobotBalance();
+    const b = d.balance;
+    const grade = massBalanceInputs.balanceGrade.default;
+    expectRel(b.unbalanceShareOfPermissible, (b.layout.offset * d.spinSpeed) / grade, 1e-12);
+    expect(b.unbalanceShareOfPermissible).toBe(b.static.unbalance / b.permissible.unbalance);
+    expect(b.unbalanceShareOfPermissible > 1).toBe(b.gradeVerdict === "exceeds-grade");
+    expect(b.offsetShareOfTarget).toBe(b.layout.offset / d.targetOffset);
+    expect(b.offsetShareOfTarget > 1).toBe(b.offsetVerdict === "outside-target");
+  });
+
+  it("names targetOffset when e/e_target would overflow, instead of returning Infinity", () => {
+    expectInputError(() => massBalance({ ...DEFAULTS, parts: demoRobotParts(), targetOffset: 5e-324 }), "targetOffset", /finite/);
   });
 
   it("uses only bibliography keys that exist", () => {
@@ -1022,6 +1054,10 @@ describe("the counterweight the calculator applies (counterweightPlan)", () => {
     expect(p.after!.parts.at(-1)).toMatchObject({ name: "counterweight", shape: { kind: "point" }, mass: { kind: "given", mass: 0.039 } });
     // At the height of the centre of mass: the products of inertia about it are unchanged.
     expect(p.counterweight!.z).toBe(massProperties(demoRobotParts()).centreZ);
+    // Polar form of the mounting point, r = √(x² + y²), θ = atan2(y, x) (oxford-concise-mathematics): 55 mm toward −x.
+    expectRel(p.counterweight!.radius, 0.055, 1e-12);
+    expectRel(p.counterweight!.angle, Math.PI, 1e-12);
+    expect(p.counterweight!.radius).toBe(Math.hypot(p.counterweight!.x, p.counterweight!.y));
   });
 
   it("centre-of-mass: puts a 45 g weight in hand at the zero-offset radius, 54.04 mm, unrounded", () => {

@@ -6,11 +6,13 @@ import {
   angularSpeedForAcceleration,
   CalcInputError,
   centripetalAcceleration,
+  centripetalAccelerationCurve,
   maxSensorRadius,
   minSensorRadius,
   partLoad,
   radiusForAcceleration,
   rpmToRadPerSecond,
+  sensorCountSize,
   speedResolution,
   STANDARD_GRAVITY,
   type AccelerometerPlacementInput,
@@ -114,6 +116,78 @@ describe("part load F = m·ω²·r (Newton's second law, OpenStax University Phy
   });
 });
 
+describe("sensor count size Δa = S/2^b (a uniform quantiser, common practice: data-sheet sensitivity in g per count)", () => {
+  it("gives 400 g / 4096 = 0.09765625 g per count for a ±200 g, 12-bit part (exact: 4096 is a power of two)", () => {
+    // 400/4096 = 0.09765625 exactly; times g_n = 9.80665 m/s² (CGPM 1901).
+    expect(sensorCountSize({ span: 400 * STANDARD_GRAVITY, bits: 12 })).toBe(0.09765625 * STANDARD_GRAVITY);
+    expect(sensorCountSize({ span: 400 * STANDARD_GRAVITY, bits: 12 })).toBeCloseTo(0.957680664, 9);
+  });
+
+  it("halves with each extra bit (second method: repeated halving)", () => {
+    let half = 32 * STANDARD_GRAVITY;
+    for (let bits = 1; bits <= 16; bits++) {
+      half /= 2;
+      expect(sensorCountSize({ span: 32 * STANDARD_GRAVITY, bits })).toBe(half);
+    }
+  });
+
+  it.each([
+    { inputs: { span: 0, bits: 12 }, param: "span" },
+    { inputs: { span: 1, bits: 0 }, param: "bits" },
+    { inputs: { span: 1, bits: 33 }, param: "bits" },
+    { inputs: { span: 1, bits: 12.5 }, param: "bits" },
+    { inputs: { span: Number.NaN, bits: 12 }, param: "span" },
+  ])("names $param for $inputs", ({ inputs, param }) => {
+    expect(() => sensorCountSize(inputs)).toThrow(CalcInputError);
+    try {
+      sensorCountSize(inputs);
+    } catch (e) {
+      expect((e as CalcInputError).param).toBe(param);
+    }
+  });
+
+  it("never returns a non-finite number over the whole double range (property)", () => {
+    fc.assert(
+      fc.property(fc.double({ min: Number.MIN_VALUE, max: Number.MAX_VALUE, noNaN: true }), fc.integer({ min: 1, max: 32 }), (span, bits) => {
+        expect(Number.isFinite(sensorCountSize({ span, bits }))).toBe(true);
+      }),
+    );
+  });
+});
+
+describe("acceleration curve a_i = ω_i²r over evenly spaced speeds (OpenStax College Physics §6.2)", () => {
+  it("gives 0, 480 and 1920 m/s² at 0, 200 and 400 rad/s and 12 mm (a = ω²r by hand)", () => {
+    // 200² × 0.012 = 480; 400² × 0.012 = 1920.
+    const c = centripetalAccelerationCurve({ radius: 0.012, maxSpeed: 400, intervals: 2 });
+    expect(c.map((p) => p.angularSpeed)).toEqual([0, 200, 400]);
+    expect(c[0]!.acceleration).toBe(0);
+    expect(c[1]!.acceleration).toBeCloseTo(480, 9);
+    expect(c[2]!.acceleration).toBeCloseTo(1920, 9);
+  });
+
+  it("agrees point by point with centripetalAcceleration and has intervals + 1 points", () => {
+    const c = centripetalAccelerationCurve({ radius: 0.03, maxSpeed: rpmToRadPerSecond(3600), intervals: 60 });
+    expect(c).toHaveLength(61);
+    for (const p of c) expect(p.acceleration).toBe(centripetalAcceleration({ angularSpeed: p.angularSpeed, radius: 0.03 }));
+  });
+
+  it.each([
+    { inputs: { radius: -1, maxSpeed: 1, intervals: 2 }, param: "radius" },
+    { inputs: { radius: 1, maxSpeed: 0, intervals: 2 }, param: "maxSpeed" },
+    { inputs: { radius: 1, maxSpeed: 1, intervals: 0 }, param: "intervals" },
+    { inputs: { radius: 1, maxSpeed: 1, intervals: 2.5 }, param: "intervals" },
+    { inputs: { radius: 1e300, maxSpeed: 1e300, intervals: 2 }, param: "maxSpeed" },
+  ])("names $param for $inputs", ({ inputs, param }) => {
+    try {
+      centripetalAccelerationCurve(inputs);
+      expect.unreachable();
+    } catch (e) {
+      expect(e).toBeInstanceOf(CalcInputError);
+      expect((e as CalcInputError).param).toBe(param);
+    }
+  });
+});
+
 describe("rotation: errors name the input and the allowed range", () => {
   it.each([
     { call: () => centripetalAcceleration({ angularSpeed: -1, radius: 0.1 }), message: "angularSpeed must be 0 rad/s or more (got -1 rad/s)" },
@@ -190,6 +264,15 @@ describe("accelerometer placement", () => {
 
   it("opens on defaults that fit (the first thing a reader sees is a working check)", () => {
     expect(accelerometerPlacement(defaults()).verdict).toBe("fits");
+  });
+
+  it("gives the other part's pull as the mass that weighs as much, F/g_n (W = m·g, Newton's second law), and its release speed v = ω·r (OpenStax College Physics §6.1)", () => {
+    // 50 g at 60 mm and 2400 rpm: ω = 80π rad/s, F = 0.05 × (80π)² × 0.06 = 189.4964 N; g_n = 9.80665 m/s² exactly (CGPM 1901).
+    const r = accelerometerPlacement({ ...defaults(), topSpeed: rpmToRadPerSecond(2400), partMass: 0.05, partRadius: 0.06 });
+    expect(r.partHangingMass).toBeCloseTo((0.05 * (80 * Math.PI) ** 2 * 0.06) / 9.80665, 9);
+    expect(r.partHangingMass).toBeCloseTo(19.3233, 4);
+    // v = 80π × 0.06 = 4.8π = 15.0796 m/s.
+    expect(r.partReleaseSpeed).toBeCloseTo(4.8 * Math.PI, 12);
   });
 
   it("uses the larger of step and noise", () => {
