@@ -56,6 +56,7 @@ import {
   type FastenerCheckInput,
   type RimCheckInput,
 } from "../../calc/loads/index.ts";
+import { expectParamError, invalidInputArb } from "../support/arbitraries.ts";
 
 function expectClose(actual: number, expected: number, rtol: number): void {
   expect(Math.abs(actual - expected)).toBeLessThanOrEqual(rtol * Math.abs(expected));
@@ -569,17 +570,6 @@ describe("inputs", () => {
     return fc.double({ min: spec.min, max: spec.max, noNaN: true, minExcluded: spec.minOpen === true });
   }
 
-  function invalidFor(spec: InputSpec): fc.Arbitrary<number> {
-    const options: fc.Arbitrary<number>[] = [
-      fc.constantFrom(Number.NaN, Number.POSITIVE_INFINITY, Number.NEGATIVE_INFINITY),
-      // Filtered numerically: fast-check counts −0 as below 0, but −0 ≥ 0 is a valid input.
-      fc.double({ max: spec.min, noNaN: true, noDefaultInfinity: true }).filter((v) => (spec.minOpen ? v <= spec.min : v < spec.min)),
-      fc.double({ min: spec.max, noNaN: true, noDefaultInfinity: true }).filter((v) => v > spec.max),
-    ];
-    if (spec.integer) options.push(fc.double({ min: spec.min, max: spec.max, noNaN: true }).filter((v) => !Number.isInteger(v)));
-    return fc.oneof(...options);
-  }
-
   function validInputs<T extends InputSpecs>(specs: T): fc.Arbitrary<{ [K in keyof T]: number }> {
     const record = Object.fromEntries(Object.entries(specs).map(([k, spec]) => [k, arbitraryFor(spec)]));
     return fc.record(record) as unknown as fc.Arbitrary<{ [K in keyof T]: number }>;
@@ -638,23 +628,11 @@ describe("inputs", () => {
     );
   });
 
-  function expectParamError(run: () => unknown, param: string): void {
-    try {
-      run();
-    } catch (error) {
-      expect(error).toBeInstanceOf(CalcInputError);
-      expect((error as CalcInputError).param).toBe(param);
-      expect((error as CalcInputError).message.startsWith(`${param} must be`)).toBe(true);
-      return;
-    }
-    throw new Error(`expected a CalcInputError naming ${param}`);
-  }
-
   it("throws a CalcInputError naming the field for every invalid number in the fastener check", () => {
     const fields = Object.keys(fastenerCheckInputs) as (keyof typeof fastenerCheckInputs)[];
     fc.assert(
       fc.property(
-        fc.constantFrom(...fields).chain((field) => fc.tuple(fc.constant(field), invalidFor(fastenerCheckInputs[field]))),
+        fc.constantFrom(...fields).chain((field) => fc.tuple(fc.constant(field), invalidInputArb(fastenerCheckInputs[field]))),
         ([field, value]) => expectParamError(() => fastenerCheck({ ...FASTENER_DEFAULTS, [field]: value }), field),
       ),
     );
@@ -664,7 +642,7 @@ describe("inputs", () => {
     const fields = Object.keys(rimCheckInputs) as (keyof typeof rimCheckInputs)[];
     fc.assert(
       fc.property(
-        fc.constantFrom(...fields).chain((field) => fc.tuple(fc.constant(field), invalidFor(rimCheckInputs[field]))),
+        fc.constantFrom(...fields).chain((field) => fc.tuple(fc.constant(field), invalidInputArb(rimCheckInputs[field]))),
         fc.constantFrom(...RIM_SHAPE_OPTIONS.map((o) => o.value)),
         ([field, value], shape) => expectParamError(() => rimCheck({ ...RIM_DEFAULTS, shape, [field]: value }), field),
       ),

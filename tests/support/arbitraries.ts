@@ -2,7 +2,9 @@
  * fast-check arbitraries shared by the tests: robot-sized parts for layouts, and any valid values
  * of any calculator, drawn from its own declaration.
  */
+import { expect } from "vitest";
 import fc from "fast-check";
+import { CalcInputError } from "../../calc/core/errors.ts";
 import type { AnyCalculator, AnyValues } from "../../calc/core/calculator.ts";
 import type { InputSpec } from "../../calc/core/inputs.ts";
 import { MATERIAL_IDS } from "../../calc/materials/densities.ts";
@@ -59,6 +61,31 @@ export function inputArb(spec: InputSpec): fc.Arbitrary<number> {
   return fc
     .double({ min: spec.min, max: spec.max, noNaN: true, noDefaultInfinity: true, minExcluded: spec.minOpen === true })
     .map((v) => (Object.is(v, -0) ? 0 : v));
+}
+
+/** Invalid numbers for a declared input: non-finite, below its range (−0 counts as 0), above it, or a fraction where a whole number is due. */
+export function invalidInputArb(spec: InputSpec): fc.Arbitrary<number> {
+  const options: fc.Arbitrary<number>[] = [
+    fc.constantFrom(Number.NaN, Number.POSITIVE_INFINITY, Number.NEGATIVE_INFINITY),
+    // Filtered numerically: fast-check counts −0 as below 0, but −0 ≥ 0 is a valid input.
+    fc.double({ max: spec.min, noNaN: true, noDefaultInfinity: true }).filter((v) => (spec.minOpen ? v <= spec.min : v < spec.min)),
+    fc.double({ min: spec.max, noNaN: true, noDefaultInfinity: true }).filter((v) => v > spec.max),
+  ];
+  if (spec.integer) options.push(fc.double({ min: spec.min, max: spec.max, noNaN: true }).filter((v) => !Number.isInteger(v)));
+  return fc.oneof(...options);
+}
+
+/** Fails unless `run` throws a CalcInputError naming `param` whose message starts "<param> must be". */
+export function expectParamError(run: () => unknown, param: string): void {
+  try {
+    run();
+  } catch (error) {
+    expect(error).toBeInstanceOf(CalcInputError);
+    expect((error as CalcInputError).param).toBe(param);
+    expect((error as CalcInputError).message.startsWith(`${param} must be`)).toBe(true);
+    return;
+  }
+  throw new Error(`expected a CalcInputError naming ${param}`);
 }
 
 /** Arbitraries of the extra values calculators hold, by calculator id and value name. */

@@ -32,6 +32,7 @@ import { preloadFromTorque, recommendedPreload, tighteningTorque } from "../../.
 import { partLoad } from "../../../calc/rotation/rotation.ts";
 import { isSourceKey } from "../../../calc/sources/index.ts";
 import { rpmToRadPerSecond, UNITS } from "../../../calc/core/units.ts";
+import { expectParamError, invalidInputArb } from "../../support/arbitraries.ts";
 
 const MPa = 1e6;
 const MM = 1e-3;
@@ -555,16 +556,6 @@ describe("inputs", () => {
     return fc.double({ min: spec.min, max: spec.max, noNaN: true, minExcluded: spec.minOpen === true });
   }
 
-  function invalidFor(spec: InputSpec): fc.Arbitrary<number> {
-    const options: fc.Arbitrary<number>[] = [
-      fc.constantFrom(Number.NaN, Number.POSITIVE_INFINITY, Number.NEGATIVE_INFINITY),
-      fc.double({ max: spec.min, noNaN: true, noDefaultInfinity: true }).filter((v) => (spec.minOpen ? v <= spec.min : v < spec.min)),
-      fc.double({ min: spec.max, noNaN: true, noDefaultInfinity: true }).filter((v) => v > spec.max),
-    ];
-    if (spec.integer) options.push(fc.double({ min: spec.min, max: spec.max, noNaN: true }).filter((v) => !Number.isInteger(v)));
-    return fc.oneof(...options);
-  }
-
   const numericInputs = fc.record(
     Object.fromEntries(Object.entries(boltedJointInputs).map(([k, spec]) => [k, arbitraryFor(spec)])) as Record<
       keyof typeof boltedJointInputs,
@@ -628,23 +619,11 @@ describe("inputs", () => {
     );
   });
 
-  function expectParamError(run: () => unknown, param: string): void {
-    try {
-      run();
-    } catch (error) {
-      expect(error).toBeInstanceOf(CalcInputError);
-      expect((error as CalcInputError).param).toBe(param);
-      expect((error as CalcInputError).message.startsWith(`${param} must be`)).toBe(true);
-      return;
-    }
-    throw new Error(`expected a CalcInputError naming ${param}`);
-  }
-
   it("throws a CalcInputError naming the field for every invalid number", () => {
     const fields = Object.keys(boltedJointInputs) as (keyof typeof boltedJointInputs)[];
     fc.assert(
       fc.property(
-        fc.constantFrom(...fields).chain((field) => fc.tuple(fc.constant(field), invalidFor(boltedJointInputs[field]))),
+        fc.constantFrom(...fields).chain((field) => fc.tuple(fc.constant(field), invalidInputArb(boltedJointInputs[field]))),
         ([field, value]) => expectParamError(() => boltedJointCheck({ ...DEFAULTS, [field]: value }), field),
       ),
     );
