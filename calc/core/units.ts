@@ -248,15 +248,16 @@ const SUPERSCRIPT: Record<string, string> = { "-": "⁻", "0": "⁰", "1": "¹",
 export function formatNumber(value: number, significant = 3): string {
   if (!Number.isFinite(value)) return "—";
   if (value === 0) return "0";
-  const abs = Math.abs(value);
+  // Choose the form after rounding: 999 500 to three figures is 1.00 × 10⁶, not "1000000".
+  const rounded = Number(value.toPrecision(significant));
+  const abs = Math.abs(rounded);
   if (abs >= 1e6 || abs < 1e-3) {
-    const [mantissa, exponent] = value.toExponential(significant - 1).split("e");
+    const [mantissa, exponent] = rounded.toExponential(significant - 1).split("e");
     const power = String(Number(exponent)).replace(/./g, (c) => SUPERSCRIPT[c] ?? c);
     return `${mantissa!.replace("-", "−")} × 10${power}`;
   }
   const digitsBeforePoint = Math.floor(Math.log10(abs)) + 1;
   const decimals = Math.max(0, significant - digitsBeforePoint);
-  const rounded = Number(value.toPrecision(significant));
   return rounded.toFixed(decimals).replace("-", "−");
 }
 

@@ -98,8 +98,20 @@ function incompleteBeta(x: number, oneMinusX: number, a: number, b: number): num
 export function studentTCdf({ t, degreesOfFreedom }: { t: number; degreesOfFreedom: number }): number {
   requireFinite("t", t, "");
   requirePositive("degreesOfFreedom", degreesOfFreedom, "");
+  if (degreesOfFreedom >= LARGE_NU) {
+    // abramowitz-stegun-1964 26.7.5 inverted to first order: F(t) = Φ(t) − φ(t)·(t³ + t)/(4ν) + O(ν⁻²).
+    // For ν ≥ 10⁶ the neglected terms are below 10⁻¹²; the beta form loses precision there
+    // (ln Γ(ν/2 + ½) − ln Γ(ν/2) cancels).
+    const density = Math.exp(-0.5 * t * t) / Math.sqrt(2 * Math.PI);
+    // The correction moves F toward ½ (its sign is that of t), so F stays within [0, 1].
+    // Beyond |t| ≈ 38 the density is 0 in doubles (and t³ may overflow): F is Φ(t) there.
+    return density === 0 ? normalCdf({ z: t }) : normalCdf({ z: t }) - (density * (t * t * t + t)) / (4 * degreesOfFreedom);
+  }
   return studentTCdfUnchecked(t, degreesOfFreedom);
 }
+
+/** ν from which Student's t is taken from its expansion about the normal distribution. */
+const LARGE_NU = 1e6;
 
 function studentTCdfUnchecked(t: number, nu: number): number {
   const t2 = t * t;
@@ -138,6 +150,12 @@ export function studentTQuantile({ probability, degreesOfFreedom }: { probabilit
   requireInRange("probability", probability, "", { min: 0, max: 1, minOpen: true, maxOpen: true });
   requirePositive("degreesOfFreedom", degreesOfFreedom, "");
   if (probability === 0.5) return 0;
+  if (degreesOfFreedom >= LARGE_NU) {
+    // abramowitz-stegun-1964 26.7.5: t_p = z + (z³ + z)/(4ν) + (5z⁵ + 16z³ + 3z)/(96ν²) + O(ν⁻³), z = Φ⁻¹(p).
+    const z = normalQuantile({ probability });
+    const nu = degreesOfFreedom;
+    return z + (z ** 3 + z) / (4 * nu) + (5 * z ** 5 + 16 * z ** 3 + 3 * z) / (96 * nu * nu);
+  }
   const upper = probability > 0.5;
   const tailArea = upper ? 1 - probability : probability;
   const x = solveBetaForTail(2 * tailArea, degreesOfFreedom);
@@ -198,6 +216,9 @@ function erfcPositive(x: number): number {
  */
 export function normalCdf({ z }: { z: number }): number {
   requireFinite("z", z, "");
+  // Φ(−40) ≈ 4·10⁻³⁵⁰ is below the smallest double: the tails are exactly 0 and 1 in doubles beyond
+  // |z| = 40, and the series would overflow (z² = ∞) for |z| above 10¹⁵⁴.
+  if (Math.abs(z) >= 40) return z > 0 ? 1 : 0;
   const e = 0.5 * erfcPositive(Math.abs(z) / Math.SQRT2);
   return z >= 0 ? 1 - e : e;
 }

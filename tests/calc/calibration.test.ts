@@ -208,6 +208,28 @@ describe("Student t and normal distributions", () => {
     expect(t - z).toBeCloseTo((z ** 3 + z) / 4e6, 8);
   });
 
+  it("stays right at any number of degrees of freedom, up to the normal limit", () => {
+    // The expansion about the normal distribution (abramowitz-stegun-1964 26.7.5, first order):
+    // F(t) = Φ(t) − φ(t)·(t³ + t)/(4ν) + O(ν⁻²). Before, the beta form lost all precision for large ν
+    // (F(2) at ν = 10¹⁵ came out as 0.9906, and the quantile at ν = 10²⁰ as 0).
+    const phi2 = Math.exp(-2) / Math.sqrt(2 * Math.PI);
+    for (const nu of [1e6, 1e8, 1e10, 1e15, 1e20, 1e300]) {
+      expect(Math.abs(studentTCdf({ t: 2, degreesOfFreedom: nu }) - (normalCdf({ z: 2 }) - (phi2 * 10) / (4 * nu))), String(nu)).toBeLessThanOrEqual(1e-12);
+      const z = normalQuantile({ probability: 0.975 });
+      expect(Math.abs(studentTQuantile({ probability: 0.975, degreesOfFreedom: nu }) - z - (z ** 3 + z) / (4 * nu)), String(nu)).toBeLessThanOrEqual(1e-10);
+    }
+    // No step where the method changes: just below ν = 10⁶ the beta form agrees.
+    expect(Math.abs(studentTCdf({ t: 2, degreesOfFreedom: 999_999 }) - studentTCdf({ t: 2, degreesOfFreedom: 1e6 }))).toBeLessThanOrEqual(1e-10);
+    expect(studentTCdf({ t: -40, degreesOfFreedom: 1e12 })).toBeGreaterThanOrEqual(0);
+    expect(studentTCdf({ t: 40, degreesOfFreedom: 1e12 })).toBeLessThanOrEqual(1);
+    expect(studentTCdf({ t: 1e200, degreesOfFreedom: 1e12 })).toBe(1);
+    expect(studentTCdf({ t: -Number.MAX_VALUE, degreesOfFreedom: 1e300 })).toBe(0);
+    // Φ itself at the extremes (it gave NaN for z = −10³⁰⁰).
+    expect(normalCdf({ z: -1e300 })).toBe(0);
+    expect(normalCdf({ z: 1e300 })).toBe(1);
+    expect(normalCdf({ z: -38 })).toBeGreaterThan(0);
+  });
+
   it("gives z₀.₉₇₅ = 1.959964 (normal table, FROM MEMORY; 7 significant figures)", () => {
     expect(Math.abs(normalQuantile({ probability: 0.975 }) - 1.959964)).toBeLessThanOrEqual(5e-7);
     expect(normalCdf({ z: normalQuantile({ probability: 0.1 }) })).toBeCloseTo(0.1, 14);

@@ -216,6 +216,11 @@ describe("units: formatting", () => {
     { value: 0.00012, sig: 2, text: "1.2 × 10⁻⁴" },
     { value: -1.5, sig: 2, text: "−1.5" },
     { value: 0, sig: 3, text: "0" },
+    // The form is chosen after rounding: these round up across the 1e6 and 1e-3 switches.
+    { value: 999_500, sig: 3, text: "1.00 × 10⁶" },
+    { value: -999_999.5, sig: 4, text: "−1.000 × 10⁶" },
+    { value: 999_499, sig: 3, text: "999000" },
+    { value: 0.00099996, sig: 3, text: "0.00100" },
   ])("formats $value to $sig significant figures as $text", ({ value, sig, text }) => {
     expect(formatNumber(value, sig)).toBe(text);
   });
