@@ -134,7 +134,7 @@ function requireUnifiedPitch(nominalDiameter: number, pitch: number): void {
  * @returns d_p and d_r [m]
  *
  * @example
- * unifiedThreadDiameters({ nominalDiameter: 0.00635, pitch: 0.00127 }) // → d_p = 5.5251 mm, d_r = 4.7002 mm (1/4-20)
+ * unifiedThreadDiameters({ nominalDiameter: 0.00635, pitch: 0.00127 }) // → { pitchDiameter: 5.5251e-3, rootDiameter: 4.7002e-3 } (1/4-20: d_p = 5.5251 mm, d_r = 4.7002 mm)
  *
  * Sources: asme-b1-1, shigley-mechanical-design.
  */
@@ -160,7 +160,7 @@ export function unifiedThreadDiameters({ nominalDiameter, pitch }: { nominalDiam
  * 9√3/16 = 0.974 278 6; the standard prints it as 0.9743.
  *
  * @example
- * unifiedTensileStressArea({ nominalDiameter: 0.00635, pitch: 0.00127 }) // → 20.529e-6 (0.031 821 in², table 0.0318)
+ * unifiedTensileStressArea({ nominalDiameter: 0.00635, pitch: 0.00127 }) // → 20.530e-6 (0.031 821 in², table 0.0318)
  *
  * Sources: asme-b1-1, fed-std-h28-2, shigley-mechanical-design.
  */
@@ -206,7 +206,7 @@ const round6 = (inches: number) => Math.round(inches * 1e6) / 1e6;
  * e.g. 1/4-20: D_s,min 0.2408 in, E_n,max 0.2224 in); uncoated threads.
  *
  * @example
- * unifiedClass2Limits({ nominalDiameter: 0.00635, pitch: 0.00127 }) // → D_s,min = 0.2408 in, E_n,max = 0.2224 in (1/4-20)
+ * unifiedClass2Limits({ nominalDiameter: 0.00635, pitch: 0.00127 }) // → { externalMajorMin: 6.11632e-3, internalPitchMax: 5.64896e-3, … } (1/4-20: D_s,min = 0.2408 in, E_n,max = 0.2224 in)
  *
  * Sources: asme-b1-1.
  */

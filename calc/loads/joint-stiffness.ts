@@ -129,7 +129,7 @@ export interface TensionJointLoads {
  * @returns F_b, F_m, P_0 [N] and whether the joint has separated
  *
  * @example
- * tensionJointLoads({ preload: 10330.5, stiffnessFactor: 0.453734, externalLoad: 2000 }) // → F_b = 11237.97, F_m = 9237.97, P_0 = 18911.1
+ * tensionJointLoads({ preload: 10330.5, stiffnessFactor: 0.453734, externalLoad: 2000 }) // → { boltLoad: 11237.97, memberLoad: 9237.97, separationLoad: 18911.1, separated: false }
  *
  * Sources: shigley-mechanical-design.
  */
@@ -182,7 +182,7 @@ export interface TensionJointFactors {
  * to 0.75 F_p starts with n_p = 1.33 at most, whatever the load: most of its strength is already used.
  *
  * @example
- * tensionJointFactors({ preload: 14400, stiffnessFactor: 0.368, externalLoad: 6000, proofLoad: 19210 }) // → n_p = 1.16, n_L = 2.18, n_0 = 3.80 (Shigley Ex. 8-4, lbf)
+ * tensionJointFactors({ preload: 14400, stiffnessFactor: 0.368, externalLoad: 6000, proofLoad: 19210 }) // → { yieldFactor: 1.16, loadFactor: 2.18, separationFactor: 3.80 } (Shigley Ex. 8-4, in lbf)
  *
  * Sources: shigley-mechanical-design.
  */

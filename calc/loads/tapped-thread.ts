@@ -21,7 +21,7 @@ import { MATERIAL_SHEAR_RATIO } from "./joint-data.ts";
  * notes that the effective area is "somewhat less" than this geometric value.
  *
  * @example
- * internalThreadShearArea({ engagedLength: 0.0254, pitch: 0.00127, externalMajorMin: 0.2408 * 0.0254, internalPitchMax: 0.2224 * 0.0254 }) // → 0.539 in² (1/4-20 per inch)
+ * internalThreadShearArea({ engagedLength: 0.0254, pitch: 0.00127, externalMajorMin: 0.2408 * 0.0254, internalPitchMax: 0.2224 * 0.0254 }) // → 3.4773e-4 (0.539 in²: 1/4-20 over one inch of engagement)
  *
  * Sources: fed-std-h28-2, machinerys-handbook.
  */
@@ -102,7 +102,7 @@ export interface TappedThreadStrength {
  * full-form thread over L_e; the geometric shear area of the worst fit.
  *
  * @example
- * tappedThreadStrength({ thread: fastenerThread("M4"), boltTensileStrength: 1220e6, partUltimateStrength: 345e6, engagedLength: 0.008 }) // → F_strip = 12 865 N (τ = 207 MPa)
+ * tappedThreadStrength({ thread: fastenerThread("M4"), boltTensileStrength: 1220e6, partUltimateStrength: 345e6, engagedLength: 0.008 }) // → { strippingLoad: 12 866, shearStrength: 207e6, … } (F_strip = 12 866 N at τ = 207 MPa)
  *
  * Sources: fed-std-h28-2, machinerys-handbook, ifi-shear-rule.
  */

@@ -50,7 +50,7 @@ export interface AccelerationCurvePoint {
  *
  * Assumptions: as `centripetalAcceleration` (steady rotation).
  * @example
- * centripetalAccelerationCurve({ radius: 0.012, maxSpeed: 400, intervals: 2 }) // → a = 0, 480, 1920 m/s² at ω = 0, 200, 400 rad/s
+ * centripetalAccelerationCurve({ radius: 0.012, maxSpeed: 400, intervals: 2 })[1] // → { angularSpeed: 200, acceleration: 480 } (then 400 rad/s, 1920 m/s²)
  * Sources: openstax-college-physics.
  */
 export function centripetalAccelerationCurve({

@@ -86,7 +86,7 @@ export function wheelGyroscopicMoment(input: {
  * @returns M [N·m]
  *
  * @example
- * rollingWheelGyroscopicMoment({ wheelInertia: 4e-6, rotorInertia: 3e-6, wheelRadius: 0.018, contactRadius: 0.07, spinSpeed: 314.16 }) // → 2.6868
+ * rollingWheelGyroscopicMoment({ wheelInertia: 4e-6, rotorInertia: 3e-6, wheelRadius: 0.018, contactRadius: 0.07, spinSpeed: 314.16 }) // → 2.6867
  *
  * Sources: meriam-kraige-dynamics.
  */
@@ -200,7 +200,7 @@ export interface WheelLoads {
  * @returns loads [N], whether the skid (or a reversed rotor's wheel) lifts, and the moment [N·m]; a lifted skid reports N_s = 0, N_w = M·g
  *
  * @example
- * wheelNormalLoads({ wheelCount: 1, robotMass: 1.5, wheelInertia: 4e-6, rotorInertia: 3e-6, wheelRadius: 0.018, contactRadius: 0.07, spinSpeed: 100 }) // → wheelLoad 9.2994 N, skidLoad 5.4105 N
+ * wheelNormalLoads({ wheelCount: 1, robotMass: 1.5, wheelInertia: 4e-6, rotorInertia: 3e-6, wheelRadius: 0.018, contactRadius: 0.07, spinSpeed: 100 }) // → { wheelLoad: 9.2994, skidLoad: 5.4105, … } [N]
  *
  * Sources: meriam-kraige-dynamics, cgpm-1901.
  */

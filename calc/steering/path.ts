@@ -48,7 +48,7 @@ export interface SteeringPath {
  * @returns the sampled path [m, rad, rad/s], the legs and where each ended
  *
  * @example
- * steeringPath({ input: { ...DEMO_STEERING_SPINNER, phaseLead: 1.319 } }).legEnds // → (0.29, −0.02) m, then (0.55, 0.28) m: it coasts on along x while it turns
+ * steeringPath({ input: { ...DEMO_STEERING_SPINNER, phaseLead: 1.319 } }).legEnds[1] // → { x: 0.55, y: 0.28 } [m], after (0.29, −0.02) m: it coasts on along x while it turns
  *
  * Sources: dormand-prince-1980, pacejka-tyre-dynamics, hairer-norsett-wanner-1.
  */
