@@ -1,5 +1,5 @@
 /**
- * Timing of the spin-up simulation (calc/drivetrain.ts): one simulation of 10 s of spin-up, and a
+ * Timing of the spin-up simulation (calc/drivetrain/): one simulation of 10 s of spin-up, and a
  * 50-point design sweep, each the median of many runs after a warm-up.
  *
  * Run from the repository root with the pinned Node:

@@ -1,6 +1,6 @@
 /**
  * Where each unit's factor comes from: its definition in words, whether it is exact, derived or
- * approximate, and the source. Kept apart from calc/units.ts so that calculators in the browser
+ * approximate, and the source. Kept apart from calc/core/units.ts so that calculators in the browser
  * do not carry this text; tests check that every unit has an entry here.
  */
 import type { SourceKey } from "../sources/index.ts";

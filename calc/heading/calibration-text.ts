@@ -1,6 +1,6 @@
 /**
  * Calibration rows written as text: the CSV the calibration page shows and offers for download,
- * and — without running the reader — exactly what `parseCalibrationCsv` (calc/csv.ts) would make of
+ * and — without running the reader — exactly what `parseCalibrationCsv` (calc/heading/csv.ts) would make of
  * that text. A page opened from a link shows rows it wrote itself, so it needs the reader only
  * once someone edits the text; the reader then loads on that first edit.
  */
@@ -30,7 +30,7 @@ function written(rows: readonly CalibrationRow[], options: CalibrationCsvOptions
 /**
  * Writes calibration rows as text that `parseCalibrationCsv` reads back: a header naming the units,
  * then one "speed,reading" line per row, six significant figures (rfc-4180 §2 layout; units by
- * nist-sp811 and cgpm-1901 through calc/units.ts).
+ * nist-sp811 and cgpm-1901 through calc/core/units.ts).
  *
  * Formula: value = SI value / unit factor, to six significant figures
  *

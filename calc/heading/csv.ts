@@ -145,7 +145,7 @@ function separatorName(sep: CsvSeparator): string {
 
 /**
  * Reads calibration readings from text (rfc-4180 §2 for quoting and the optional header; units by
- * nist-sp811 and cgpm-1901 through calc/units.ts).
+ * nist-sp811 and cgpm-1901 through calc/core/units.ts).
  *
  * Formula: ω [rad/s] = value × unit factor (rpm: π/30; rev/s: 2π); a [m/s²] = value × unit
  * factor (g: 9.806 65)

@@ -1,7 +1,7 @@
 /**
  * Centrifugal loads on bolts: the pull a spinning part puts on the bolts that hold it, the stress
  * on each bolt against its ISO 898-1 property class, the safety factors, the speeds at which the
- * bolts yield and break, and a verdict. Re-exported by calc/loads.ts. SI in and out.
+ * bolts yield and break, and a verdict. Re-exported by calc/loads/index.ts. SI in and out.
  */
 import { CalcInputError, requireInRange, requireNonNegative, requirePositive } from "../core/errors.ts";
 import { requireDeclared } from "../core/spec-check.ts";

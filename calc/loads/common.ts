@@ -2,7 +2,7 @@
  * Centrifugal loads, the shared part: the safety factor, its verdict,
  * the speed at which a stress that grows with ω² reaches a limit, and input validation against a
  * declaration. Used by the bolt check (loads-bolts.ts) and the rim check (loads-rims.ts); the
- * public face of the topic is calc/loads.ts. SI in and out.
+ * public face of the topic is calc/loads/index.ts. SI in and out.
  */
 import { CalcInputError, requireInRange, requirePositive, requireRelation } from "../core/errors.ts";
 import { requireFiniteResult, requireInputObject } from "../core/spec-check.ts";

@@ -157,7 +157,7 @@ export interface PropertyClass {
 
 /**
  * ISO 898-1 Table 3 rows for 4.6, 8.8 (d ≤ 16 mm), 10.9 and 12.9 (iso-898-1). The checks in
- * calc/loads.ts use the minimum values: a bolt of the class is only guaranteed to reach those.
+ * calc/loads/index.ts use the minimum values: a bolt of the class is only guaranteed to reach those.
  */
 export const PROPERTY_CLASSES: Readonly<Record<PropertyClassId, PropertyClass>> = {
   "4.6": {

@@ -1,7 +1,7 @@
 /**
  * Centrifugal loads on rims and disks: the hoop and radial stresses in a spinning thin ring, solid
  * disk or bored disk, where they peak, the safety factors against the material, the speeds at which
- * it yields and is estimated to burst, and a verdict. Re-exported by calc/loads.ts. SI in and out.
+ * it yields and is estimated to burst, and a verdict. Re-exported by calc/loads/index.ts. SI in and out.
  */
 import { requireInRange, requireNonNegative, requirePositive, requireRelation } from "../core/errors.ts";
 import { requireDeclared } from "../core/spec-check.ts";
@@ -290,12 +290,12 @@ export const DEFAULT_RIM_MATERIAL: MaterialId = "al-6061-t6";
  * The default material's values, as the rim check's field defaults: the 6061-T6 row of the
  * materials table (substech-materials; ν from asm-matweb-datasheets). Written out here so that the
  * rim calculator's page does not load the whole table; a test keeps them equal to
- * `rimMaterial(DEFAULT_RIM_MATERIAL)`, and the table itself is offered through calc/loads.ts.
+ * `rimMaterial(DEFAULT_RIM_MATERIAL)`, and the table itself is offered through calc/loads/index.ts.
  */
 export const DEFAULT_RIM_MATERIAL_VALUES: Readonly<RimMaterialValues> = { density: 2700, yieldStrength: 276e6, ultimateStrength: 310e6, poisson: 0.33 };
 const DEFAULT_MATERIAL = DEFAULT_RIM_MATERIAL_VALUES;
 
-/** Numeric inputs of the rim check, in SI. Choices: `RIM_SHAPE_OPTIONS` (and, in calc/loads.ts, `RIM_MATERIAL_OPTIONS` to fill the material fields via `rimMaterial`). */
+/** Numeric inputs of the rim check, in SI. Choices: `RIM_SHAPE_OPTIONS` (and, in calc/loads/index.ts, `RIM_MATERIAL_OPTIONS` to fill the material fields via `rimMaterial`). */
 export const rimCheckInputs = defineInputs({
   outerRadius: {
     label: "Outer radius",

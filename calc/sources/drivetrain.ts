@@ -1,6 +1,6 @@
 import type { Source } from "./types.ts";
 
-/** Bibliography entries used by calc/motor.ts and calc/drivetrain.ts. */
+/** Bibliography entries used by calc/motor.ts and calc/drivetrain/. */
 export const DRIVETRAIN_SOURCES = {
   "motor-constants-wikipedia": {
     author: "Wikipedia contributors",

@@ -1,6 +1,6 @@
 import type { Source } from "./types.ts";
 
-/** Bibliography entries used by calc/heading.ts, calc/calibration.ts and calc/csv.ts. */
+/** Bibliography entries used by calc/heading.ts, calc/heading/calibration.ts and calc/heading/csv.ts. */
 export const HEADING_SOURCES = {
   "spinner-heading-practice": {
     author: "Common practice",

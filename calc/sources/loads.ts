@@ -1,6 +1,6 @@
 import type { Source } from "./types.ts";
 
-/** Bibliography entries used by calc/loads.ts and calc/fasteners.ts. */
+/** Bibliography entries used by calc/loads/index.ts and calc/fasteners.ts. */
 export const LOADS_SOURCES = {
   "iso-898-1": {
     author: "International Organization for Standardization",

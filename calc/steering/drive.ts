@@ -3,7 +3,7 @@
  * its own duty: the pack sags under the total current, each controller is an averaged switching
  * stage, and each motor's current is limited in both directions.
  *
- * The spin-up model (calc/drivetrain.ts) solves the same physics for one group inside its private
+ * The spin-up model (calc/drivetrain/) solves the same physics for one group inside its private
  * system class; this file is the shared, exported form for several groups with different duties
  * (the steering model pulses each wheel's motor separately). The two can be unified later.
  *

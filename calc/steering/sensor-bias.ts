@@ -5,7 +5,7 @@
  * at the same heading every turn, so the extra wheel force reaches a body-mounted sensor at the
  * same phase every time: its body-frame average over a turn does not vanish, and a radial sensor
  * reads it as a bias b that only exists while the robot is driving. The firmware turns the reading
- * into a spin rate ω̂ = √((a + b)/r) (spinner-heading-practice; calc/heading-drift.ts), so the bias
+ * into a spin rate ω̂ = √((a + b)/r) (spinner-heading-practice; calc/heading/drift.ts), so the bias
  * becomes a heading drift ≈ b/(2rω) that appears only during a move.
  *
  * Body-frame average of the pulse forces: wheel i pulsed by ΔF_i over a window of width w (and by
@@ -19,7 +19,7 @@
  * - the sensor's radial axis is perpendicular to the pulsed wheel's rolling direction (the sensor on
  *   the line through the wheel's contact point and the centre);
  * - two opposed sensors are averaged: any translation of the centre adds to one reading what it
- *   takes from the other (hibbeler-dynamics-2016 §16.7, calc/heading-drift.ts `opposedSensorsDrift`).
+ *   takes from the other (hibbeler-dynamics-2016 §16.7, calc/heading/drift.ts `opposedSensorsDrift`).
  * So it bites a one-wheel robot with add-only windows, and any robot whose wheels respond unequally.
  */
 import { CalcInputError, requireFinite, requireInRange, requireNonNegative, requirePositive } from "../core/errors.ts";
@@ -87,7 +87,7 @@ export interface DrivePulseDrift {
 
 /**
  * Heading drift a drive-pulse bias causes on one radial accelerometer, in the terms of
- * calc/heading-drift.ts (spinner-heading-practice: ω̂ = √((a + b)/r)), and on an opposed pair,
+ * calc/heading/drift.ts (spinner-heading-practice: ω̂ = √((a + b)/r)), and on an opposed pair,
  * which cancels it (hibbeler-dynamics-2016 §16.7).
  *
  * Formula: $\hat\omega = \sqrt{\dfrac{\omega^2 r + b}{r}}$, drift $= \hat\omega - \omega \approx \dfrac{b}{2r\omega}$; pair: $\hat\omega = \sqrt{\dfrac{a_1 + a_2}{2r}} = \omega$
@@ -107,7 +107,7 @@ export function drivePulseHeadingDrift(input: { bias: number; angularSpeed: numb
   requireFinite("bias", bias, "m/s²");
   requirePositive("angularSpeed", angularSpeed, "rad/s");
   requirePositive("sensorRadius", sensorRadius, "m");
-  // spinner-heading-practice: ω̂ = √((ω²r + b)/r), via calc/heading-drift.ts
+  // spinner-heading-practice: ω̂ = √((ω²r + b)/r), via calc/heading/drift.ts
   const single = headingDriftAt({ angularSpeed, assumedRadius: sensorRadius, trueRadius: sensorRadius, scaleError: 0, bias, biasCorrection: 0, tilt: 0 });
   // hibbeler-dynamics-2016: a translation acceleration a_L adds to one sensor and takes from the other
   const pair = opposedSensorsDrift({ angularSpeed, radius1: sensorRadius, radius2: sensorRadius, offset: 0, linearAcceleration: -bias });

@@ -100,7 +100,7 @@ type RimModel = ReturnType<typeof createRimModel>;
 export interface RimCalculatorProps {
   /** Element id of the calculator (the link's anchor). */
   id?: string;
-  /** The materials offered, with their values (calc/loads.ts `rimMaterialChoices()`, built at build time). */
+  /** The materials offered, with their values (calc/loads/index.ts `rimMaterialChoices()`, built at build time). */
   materials?: readonly MaterialChoice[];
 }
 

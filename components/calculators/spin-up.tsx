@@ -2,7 +2,7 @@
  * The spin-up calculator: a spinning weapon or a whole-body spinner from rest to speed — times to
  * 50, 90 and 100 % of the target, top speed, what limits it over time, battery current and sag,
  * stored energy and where the rest of the energy went; design variants side by side; and a sweep of
- * one input with the best value marked. The simulation is calc/drivetrain.ts.
+ * one input with the best value marked. The simulation is calc/drivetrain/.
  */
 import { useEffect, useMemo } from "preact/hooks";
 import { DRIVE_TYPE_OPTIONS, type DriveType } from "../../calc/drivetrain/inputs.ts";

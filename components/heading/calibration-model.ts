@@ -2,9 +2,9 @@
  * The calibration calculator's model: the readings as text (pasted, typed or loaded from a file),
  * the units bare numbers are read in, the fit settings; the rows read from the text, the fit of
  * a = r·ω² + b and its curves, and the page link. The rows travel in the link in the versioned
- * compact form of calc/calibration.ts; the text box is rebuilt from them when a link is opened.
+ * compact form of calc/heading/calibration.ts; the text box is rebuilt from them when a link is opened.
  * Text the model wrote itself (the demo, a link's rows) comes with its reading, so the text reader
- * (calc/csv.ts) loads only when someone edits the text or picks another unit for bare numbers.
+ * (calc/heading/csv.ts) loads only when someone edits the text or picks another unit for bare numbers.
  * No DOM.
  */
 import { batch, computed, signal } from "../calc-ui/reactive.ts";

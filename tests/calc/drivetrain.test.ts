@@ -65,7 +65,7 @@ const IDEAL: DrivetrainInput = {
 /**
  * Closed form of a drag-free weapon drive: a constant-acceleration current-limited phase, then a
  * first-order approach to the speed where the motor torque meets the constant losses. Written here
- * from the model's equations, independently of calc/drivetrain.ts.
+ * from the model's equations, independently of calc/drivetrain/.
  */
 function twoPhase(p: DrivetrainInput) {
   const kt = 1 / p.motorKv;

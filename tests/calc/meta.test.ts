@@ -75,7 +75,7 @@ describe("calc/ documentation", () => {
     (_, f) => {
       expect(
         keys.some((key) => f.doc.includes(key)),
-        `${f.module}: ${f.name} cites no key of calc/sources.ts`,
+        `${f.module}: ${f.name} cites no key of calc/sources/index.ts`,
       ).toBe(true);
       expect(/@returns|\breturns?\b/i.test(f.doc), `${f.module}: ${f.name} has no @returns`).toBe(true);
     },

@@ -25,7 +25,7 @@ function sweepNow(model: SpinUpModel) {
 }
 
 describe("the spin-up model", () => {
-  it("computes the invented demo weapon by default, as calc/drivetrain.ts does", () => {
+  it("computes the invented demo weapon by default, as calc/drivetrain/ does", () => {
     const model = createSpinUpModel();
     const { result, error } = model.outcome.value;
     expect(error).toBeNull();

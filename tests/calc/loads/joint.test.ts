@@ -62,7 +62,7 @@ const DEFAULTS: BoltedJointInput = {
 };
 
 /**
- * The chapter's worked example (content/chapters/fasteners.mdx; calc/loads.ts DEMO_WASHER_STACK,
+ * The chapter's worked example (content/chapters/fasteners.mdx; calc/loads/index.ts DEMO_WASHER_STACK,
  * an invented robot): seven 6 g steel washers, 42 g, under one M4 class 8.8 bolt at 55 mm, 2400 rpm,
  * in shear. The stack height is not in the example; the review's bracket is 5 to 8.4 mm.
  */

@@ -127,7 +127,7 @@ describe("one pack, several motor groups (battery-thevenin-model, erickson-power
     expect(steadyDuty(params, 2, 2000, 3)).toBeNull(); // back-EMF 20 V > 16 V
   });
 
-  it("gives the spin-up model's battery current, voltage and motor current at each recorded point (same physics, calc/drivetrain.ts)", () => {
+  it("gives the spin-up model's battery current, voltage and motor current at each recorded point (same physics, calc/drivetrain/)", () => {
     const p = DEMO_WEAPON;
     const run = simulateSpinUp(p, { maxPoints: 40 });
     const s = new PackSolver(

@@ -29,7 +29,7 @@ describe("the bias a one-wheel robot's pulses put on a radial sensor", () => {
   });
 });
 
-describe("the heading drift it causes (spinner-heading-practice, in the terms of calc/heading-drift.ts)", () => {
+describe("the heading drift it causes (spinner-heading-practice, in the terms of calc/heading/drift.ts)", () => {
   it("is ω̂ − ω with ω̂ = √((ω²r + b)/r), about b/(2rω)", () => {
     const d = drivePulseHeadingDrift({ bias: -0.5, angularSpeed: 314.16, sensorRadius: 0.012 });
     close(d.driftRate!, -0.5 / (2 * 0.012 * 314.16), 1e-3);

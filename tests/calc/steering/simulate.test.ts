@@ -214,7 +214,7 @@ describe("the demo robot (invented for the chapter)", () => {
   });
 });
 
-describe("drive pulses on one accelerometer (sensor-bias.ts; drift as in calc/heading-drift.ts)", () => {
+describe("drive pulses on one accelerometer (sensor-bias.ts; drift as in calc/heading/drift.ts)", () => {
   // A fast loop, so that the sampling jitter of the pulse edges does not blur the comparison.
   const one = { ...D, wheelCount: 1, oppositeWindow: 0, spinSpeed: 150, depth: 0.1, duration: 1, loopRate: 20000 };
   const addOnly = simulateSteering({ ...one, sensorAngle: Math.PI / 2 });
