@@ -58,17 +58,23 @@ function median(fn, runs) {
 }
 
 console.log("\ncalculator recompute (one input changed, result and plot data read), median:");
-const { createPlacementModel } = await import("../components/placement/model.ts");
-const model = createPlacementModel();
+// The page's model as the widget builds it (components/calc-ui/model.ts over the placement
+// descriptor), without the component: the plot's points are the calc curve the widget draws.
+const { createCalculatorModel } = await import("../components/calc-ui/model.ts");
+const { default: placement } = await import("../calc/calculators/placement.ts");
+const { centripetalAccelerationCurve } = await import("../calc/rotation/rotation.ts");
+const model = createCalculatorModel(placement);
 const placementUs = median((i) => {
   model.fields.texts.radius.value = `${10 + (i % 50)} mm`;
   void model.outcome.value;
-  void model.curve.value;
+  const values = model.values.value;
+  if (values) centripetalAccelerationCurve({ radius: values.radius, maxSpeed: values.topSpeed * 1.2, intervals: 60 });
 }, 2000);
 console.log(`  accelerometer placement: ${placementUs.toFixed(1)} µs per update`);
 
-const extra = join(root, "scripts/bench-drivetrain.mjs");
-if (existsSync(extra)) {
+for (const name of ["bench-drivetrain.mjs", "bench-steering.mjs"]) {
+  const extra = join(root, "scripts", name);
+  if (!existsSync(extra)) continue;
   console.log("");
   execFileSync(process.execPath, [extra], { cwd: root, stdio: "inherit" });
 }
