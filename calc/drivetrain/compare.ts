@@ -97,8 +97,10 @@ function requireParameter(parameter: string): DrivetrainParameter {
  *   the range once, at most `points` of them, spread evenly
  * @returns the values [SI], in sweep order
  *
- * Example: the reduction from 1 to 4 in 4 points → 1, 2, 3, 4; cells from 2 to 8 in 50 points →
- * 2, 3, 4, 5, 6, 7, 8. Sources: as `simulateSpinUp`.
+ * @example
+ * sweepValues({ parameter: "gearRatio", from: 1, to: 4, points: 4 }).length // → 4 (1, 2, 3, 4)
+ * sweepValues({ parameter: "cellCount", from: 2, to: 8, points: 50 }).length // → 7 (2, 3, 4, 5, 6, 7, 8)
+ * Sources: as `simulateSpinUp`.
  */
 export function sweepValues({
   parameter,
@@ -140,8 +142,9 @@ export function sweepValues({
  * @returns times to 90 % and 100 % of the target [s] (null if not reached), top speed [rad/s],
  *   verdict, peak battery current [A] and stored energy at the top speed [J]; `isOptimum` false
  *
- * Example: the demo weapon with a 3:1 reduction tops out below 10 000 rpm, so its time to target
- * is null and its verdict "falls-short". Sources: as `simulateSpinUp`.
+ * @example
+ * sweepPoint({ base: DEMO_WEAPON, parameter: "gearRatio", value: 3 }) // → { timeToTarget: null, verdict: "falls-short", … } (tops out below 10 000 rpm)
+ * Sources: as `simulateSpinUp`.
  */
 export function sweepPoint({ base, parameter, value }: { base: DrivetrainInput; parameter: DrivetrainParameter | string; value: number }): SweepPoint {
   const name = requireParameter(parameter);
@@ -166,7 +169,8 @@ export function sweepPoint({ base, parameter, value }: { base: DrivetrainInput; 
  * @param points one or more sweep points, in sweep order
  * @returns the index of the best point and the rule that chose it
  *
- * Example: times to target null, 1.2 s, 1.0 s, 1.1 s → index 2, "time-to-target".
+ * @example
+ * markSweepOptimum([{ timeToTarget: null, topSpeed: 100 }, { timeToTarget: 1.2, topSpeed: 200 }, { timeToTarget: 1, topSpeed: 300 }, { timeToTarget: 1.1, topSpeed: 300 }]) // → { optimumIndex: 2, optimumBy: "time-to-target" }
  * Sources: as `simulateSpinUp`.
  */
 export function markSweepOptimum(points: SweepPoint[]): { optimumIndex: number; optimumBy: DrivetrainSweep["optimumBy"] } {

@@ -37,7 +37,9 @@ export function rotorKineticEnergy({ inertia, angularSpeed }: { inertia: number;
  * @param radius r [m], 0 or more
  * @returns v [m/s]
  *
- * Example: 10 000 rpm (1047.2 rad/s) at 60 mm → 62.83 m/s. Sources: openstax-university-physics-1.
+ * @example
+ * rotorTipSpeed({ angularSpeed: rpmToRadPerSecond(10000), radius: 0.06 }) // → 62.83 [m/s]
+ * Sources: openstax-university-physics-1.
  */
 export function rotorTipSpeed({ angularSpeed, radius }: { angularSpeed: number; radius: number }): number {
   requireNonNegative("angularSpeed", angularSpeed, "rad/s");
@@ -56,7 +58,9 @@ export function rotorTipSpeed({ angularSpeed, radius }: { angularSpeed: number; 
  * @returns d [m]
  *
  * Assumptions: evenly spaced impactors of equal reach; constant closing speed over one pass.
- * Example: 3 m/s closing, 10 000 rpm, 2 impactors → 9.0 mm. Sources: weapon-bite.
+ * @example
+ * biteDepth({ closingSpeed: 3, angularSpeed: rpmToRadPerSecond(10000), impactors: 2 }) // → 0.0090 [m]
+ * Sources: weapon-bite.
  */
 export function biteDepth({ closingSpeed, angularSpeed, impactors }: { closingSpeed: number; angularSpeed: number; impactors: number }): number {
   requireNonNegative("closingSpeed", closingSpeed, "m/s");
@@ -78,7 +82,8 @@ export function biteDepth({ closingSpeed, angularSpeed, impactors }: { closingSp
  * @param frictionTorque T_f, constant friction torque (skids, bearings) [N·m], 0 or more (default 0)
  * @returns Ω̇ [rad/s²]; 0 when the friction torque holds the robot still
  *
- * Example: μ_k = 0.8, N_n = 13.24 N, R = 0.07 m, J = 0.005 kg·m² → 148.3 rad/s².
+ * @example
+ * tractionLimitedAcceleration({ frictionCoefficient: 0.8, normalForce: 13.24, contactRadius: 0.07, inertia: 0.005 }) // → 148.3 [rad/s²]
  * Sources: serway-beichner-5e.
  */
 export function tractionLimitedAcceleration({

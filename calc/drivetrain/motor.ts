@@ -121,7 +121,8 @@ export interface MotorLinePoint {
  * @param points number of points, a whole number from 2 to 1000 (default 41)
  * @returns evenly spaced points from ω = 0 to ω_nl: speed [rad/s], torque [N·m], current [A], power [W]
  *
- * Example (computed in double precision from T = T_stall(1 − ω/ω_nl)): 24 V, 100 rpm/V, 0.1 Ω, 3 points → torque 22.92, 11.46, 0 N·m; power 0, 1440, 0 W.
+ * @example
+ * torqueSpeedLine({ kv: rpmToRadPerSecond(100), resistance: 0.1, voltage: 24 }, { points: 3 })[1] // → { torque: 11.46, power: 1440, … } (the ends: 22.92 N·m at stall, 0 at no load, power 0 at both)
  * Sources: hughes-drury-motors.
  */
 export function torqueSpeedLine(
@@ -156,7 +157,8 @@ export function torqueSpeedLine(
  * @returns τ [s]
  *
  * Assumptions: no inductance, linear motor, load with no speed-dependent torque.
- * Example (computed in double precision from τ = J·R/(K_t·K_e)): J = 0.01 kg·m², R = 0.1 Ω, Kv = 100 rpm/V → τ = 0.109 662 271 1 s.
+ * @example
+ * spinUpTimeConstant({ inertia: 0.01, resistance: 0.1, torqueConstant: torqueConstantFromKv({ kv: rpmToRadPerSecond(100) }) }) // → 0.1096622711 [s]
  *
  * Sources: ctms-dc-motor-speed, first-order-step-response.
  */
@@ -197,7 +199,8 @@ export function spinUpTimeConstant({
  * @param initialSpeed ω_0 [rad/s], finite (default 0)
  * @returns ω(t) [rad/s]
  *
- * Example (computed in double precision from ω(t) = ω_nl(1 − e^(−t/τ))): ω_nl = 251.327 rad/s, τ = 0.109 662 s → ω(0.1 s) = 150.353 128 6 rad/s.
+ * @example
+ * voltageLimitedSpeed({ finalSpeed: 251.327, timeConstant: 0.109662, time: 0.1 }) // → 150.3531096 [rad/s]
  * Sources: first-order-step-response.
  */
 export function voltageLimitedSpeed({
@@ -228,7 +231,9 @@ export function voltageLimitedSpeed({
  * @param fraction f of the final speed [-], 0 ≤ f < 1 (the final speed itself is never reached)
  * @returns t_f [s]
  *
- * Example (computed in double precision from t_f = −τ·ln(1 − f)): τ = 0.109 662 271 1 s → t_90 = 0.252 506 710 8 s. Sources: first-order-step-response.
+ * @example
+ * timeToSpeedFraction({ timeConstant: 0.1096622711, fraction: 0.9 }) // → 0.252506711 [s] (t_90)
+ * Sources: first-order-step-response.
  */
 export function timeToSpeedFraction({ timeConstant, fraction }: { timeConstant: number; fraction: number }): number {
   requirePositive("timeConstant", timeConstant, "s");
@@ -249,8 +254,9 @@ export function timeToSpeedFraction({ timeConstant, fraction }: { timeConstant: 
  * @param frictionTorque T_f, a constant loss torque [N·m], 0 or more (default 0)
  * @returns ω_ss [rad/s]; 0 when the friction holds the motor at rest
  *
- * Assumptions: steady state, so the inductance drops out. Example: the CTMS case K = 0.01,
- * R = 1 Ω, b = 0.1 N·m·s, V = 1 V → 0.0999 rad/s (the tutorial prints 0.1 rad/s).
+ * Assumptions: steady state, so the inductance drops out.
+ * @example
+ * dcMotorSteadySpeed({ torqueConstant: 0.01, resistance: 1, viscousFriction: 0.1, voltage: 1 }) // → 0.0999 [rad/s] (the CTMS case; the tutorial prints 0.1 rad/s)
  *
  * Sources: ctms-dc-motor-speed.
  */

@@ -175,7 +175,9 @@ export interface FastenerCheck {
  * @param area A, each bolt's load-bearing area [m²], greater than 0
  * @returns σ (or τ in shear) [Pa]
  *
- * Example: 176.9 N on one M4 (8.78 mm²) → 20.1 MPa. Sources: iso-898-1.
+ * @example
+ * boltStress({ force: 176.9, count: 1, area: 8.78e-6 }) // → 20.1e6 [Pa] (one M4)
+ * Sources: iso-898-1.
  */
 export function boltStress({ force, count, area }: { force: number; count: number; area: number }): number {
   requireNonNegative("force", force, "N");
@@ -205,7 +207,8 @@ export interface FastenerStrengths {
  * @param shearRatio k [-], 0.3 to 1 (read in shear only; default `DEFAULT_SHEAR_RATIO`)
  * @returns yieldStrength and ultimateStrength [Pa]
  *
- * Example: class 8.8 in shear with k = 0.5 → τ_y = 640/√3 = 369.5 MPa, τ_u = 400 MPa.
+ * @example
+ * fastenerStrengths({ propertyClass: "8.8", mode: "shear", shearRatio: 0.5 }) // → { yieldStrength: 369.5e6, ultimateStrength: 400e6 } (τ_y = 640 MPa/√3)
  * Sources: iso-898-1, shigley-distortion-energy, shear-ultimate-ratio.
  */
 export function fastenerStrengths({

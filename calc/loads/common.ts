@@ -56,7 +56,9 @@ export function safetyThresholdInputs(subject: string) {
  * @param stress σ, the working stress [Pa], greater than 0
  * @returns n [-]
  *
- * Example: 400 MPa against 20.1 MPa → 19.9. Sources: safety-factor-practice.
+ * @example
+ * safetyFactor({ strength: 400e6, stress: 20.1e6 }) // → 19.9
+ * Sources: safety-factor-practice.
  */
 export function safetyFactor({ strength, stress }: { strength: number; stress: number }): number {
   requirePositive("strength", strength, "Pa");
@@ -74,7 +76,9 @@ export function safetyFactor({ strength, stress }: { strength: number; stress: n
  * @param marginalBelow n_thin [-], at least n_fail (default 2, a common margin when loads are rough estimates)
  * @returns "fails", "marginal" or "holds"
  *
- * Example: n = 1.6 with the defaults → "marginal". Sources: safety-factor-practice.
+ * @example
+ * safetyVerdict({ safetyFactor: 1.6 }) // → "marginal"
+ * Sources: safety-factor-practice.
  */
 export function safetyVerdict({
   safetyFactor: n,
@@ -108,7 +112,9 @@ export function requireMarginalAtLeastFail(failBelow: number, marginalBelow: num
  * @param strength S, the limit [Pa], greater than 0
  * @returns ω_lim [rad/s]
  *
- * Example: σ = 2.665 MPa at 2400 rpm against 310 MPa → 25 900 rpm. Sources: newton-second-law.
+ * @example
+ * speedAtStress({ angularSpeed: rpmToRadPerSecond(2400), stress: 2.665e6, strength: 310e6 }) // → 2711 [rad/s] (25 900 rpm)
+ * Sources: newton-second-law.
  */
 export function speedAtStress({ angularSpeed, stress, strength }: { angularSpeed: number; stress: number; strength: number }): number {
   requirePositive("angularSpeed", angularSpeed, "rad/s");

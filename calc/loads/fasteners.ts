@@ -87,7 +87,8 @@ export interface ThreadDiameters {
  * @param pitch P [m], greater than 0 and less than d/1.3 (so that d₃ stays positive)
  * @returns H, d₂, d₁, d₃ [m]
  *
- * Example: M4 × 0.7 → d₂ = 3.545 34 mm, d₁ = 3.242 23 mm, d₃ = 3.141 19 mm.
+ * @example
+ * threadDiameters({ nominalDiameter: 0.004, pitch: 0.0007 }) // → { pitchDiameter: 0.00354534, minorDiameter: 0.00324223, stressDiameterD3: 0.00314119, … } (M4 × 0.7)
  * Sources: iso-68-1, iso-724, iso-898-1.
  */
 export function threadDiameters({ nominalDiameter, pitch }: { nominalDiameter: number; pitch: number }): ThreadDiameters {
@@ -115,7 +116,10 @@ export function threadDiameters({ nominalDiameter, pitch }: { nominalDiameter: n
  * @returns A_s [m²]
  *
  * Assumptions: basic (zero-tolerance) thread profile; that is what the standard's table is built
- * on. Example: M4 × 0.7 → 8.778 72 mm² (table: 8.78 mm²); M2 × 0.4 → 2.073 23 mm² (table: 2.07).
+ * on.
+ * @example
+ * tensileStressArea({ nominalDiameter: 0.004, pitch: 0.0007 }) // → 8.77872e-6 [m²] (M4 × 0.7; table: 8.78 mm²)
+ * tensileStressArea({ nominalDiameter: 0.002, pitch: 0.0004 }) // → 2.07323e-6 [m²] (M2 × 0.4; table: 2.07 mm²)
  * Sources: iso-898-1, iso-724, iso-68-1.
  */
 export function tensileStressArea({ nominalDiameter, pitch }: { nominalDiameter: number; pitch: number }): number {
@@ -217,7 +221,9 @@ export function propertyClass(id: string, param = "propertyClass"): PropertyClas
  * @param propertyClass a value of `PROPERTY_CLASS_OPTIONS`
  * @returns F_m,min [N]
  *
- * Example: M6, 8.8 → 20.1 mm² × 800 MPa = 16 080 N (table: 16 100 N). Sources: iso-898-1.
+ * @example
+ * minimumUltimateTensileLoad({ size: "M6", propertyClass: "8.8" }) // → 16080 [N] (20.1 mm² × 800 MPa; table: 16 100 N)
+ * Sources: iso-898-1.
  */
 export function minimumUltimateTensileLoad({ size, propertyClass: classId }: { size: string; propertyClass: string }): number {
   return metricThread(size).stressArea * propertyClass(classId).tensileStrengthMin; // iso-898-1
@@ -233,7 +239,9 @@ export function minimumUltimateTensileLoad({ size, propertyClass: classId }: { s
  * @param propertyClass a value of `PROPERTY_CLASS_OPTIONS`
  * @returns F_p [N]
  *
- * Example: M4, 8.8 → 8.78 mm² × 580 MPa = 5092 N (table: 5100 N). Sources: iso-898-1.
+ * @example
+ * proofLoad({ size: "M4", propertyClass: "8.8" }) // → 5092 [N] (8.78 mm² × 580 MPa; table: 5100 N)
+ * Sources: iso-898-1.
  */
 export function proofLoad({ size, propertyClass: classId }: { size: string; propertyClass: string }): number {
   return metricThread(size).stressArea * propertyClass(classId).proofStress; // iso-898-1
@@ -342,8 +350,10 @@ export const EN1993_GAMMA_M2 = 1.25;
  * @returns F_v,Rd [N]
  *
  * Assumptions: a structural design value, with the partial factor built in; the loads module's
- * safety factors are reported against the unfactored strength instead. Example: class 4.6, M20
- * (A_s 245 mm²): 0.6 × 400 MPa × 245 mm² / 1.25 = 47.04 kN. Sources: en-1993-1-8.
+ * safety factors are reported against the unfactored strength instead.
+ * @example
+ * eurocodeBoltShearResistance({ area: 245e-6, ultimateStrength: 400e6, shearFactor: 0.6 }) // → 47040 [N] (class 4.6, M20: 0.6 × 400 MPa × 245 mm² / 1.25)
+ * Sources: en-1993-1-8.
  */
 export function eurocodeBoltShearResistance({
   area,
@@ -374,7 +384,9 @@ export function eurocodeBoltShearResistance({
  * @param partialFactor γ_M2 [-], at least 1 (1.25 recommended)
  * @returns F_t,Rd [N]
  *
- * Example: class 4.6, M20: 0.9 × 400 MPa × 245 mm² / 1.25 = 70.56 kN. Sources: en-1993-1-8.
+ * @example
+ * eurocodeBoltTensionResistance({ stressArea: 245e-6, ultimateStrength: 400e6 }) // → 70560 [N] (class 4.6, M20: 0.9 × 400 MPa × 245 mm² / 1.25)
+ * Sources: en-1993-1-8.
  */
 export function eurocodeBoltTensionResistance({
   stressArea,

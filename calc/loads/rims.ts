@@ -32,7 +32,9 @@ import {
  * @param radius R [m], 0 or more
  * @returns v [m/s]
  *
- * Example: 2400 rpm at 125 mm → 31.4 m/s. Sources: openstax-college-physics.
+ * @example
+ * tipSpeed({ angularSpeed: rpmToRadPerSecond(2400), radius: 0.125 }) // → 31.4 [m/s]
+ * Sources: openstax-college-physics.
  */
 export function tipSpeed({ angularSpeed, radius }: { angularSpeed: number; radius: number }): number {
   requireNonNegative("angularSpeed", angularSpeed, "rad/s");
@@ -68,7 +70,10 @@ function requirePoisson(poisson: number): void {
  * @returns σ_θ [Pa]
  *
  * Assumptions: radial thickness small next to R; nothing inside the ring supports it (no spokes
- * or web). Example: steel, ρ = 7850 kg/m³, v = 100 m/s → 78.5 MPa. Sources: carvill-data-handbook,
+ * or web).
+ * @example
+ * thinRingHoopStress({ density: 7850, angularSpeed: 1000, radius: 0.1 }) // → 78.5e6 [Pa] (steel, v = 100 m/s)
+ * Sources: carvill-data-handbook,
  * timoshenko-goodier.
  */
 export function thinRingHoopStress({ density, angularSpeed, radius }: SpinningBody & { radius: number }): number {
@@ -87,7 +92,9 @@ export function thinRingHoopStress({ density, angularSpeed, radius }: SpinningBo
  * @param strength S, the yield or ultimate strength [Pa], greater than 0
  * @returns v_lim [m/s]
  *
- * Assumptions: as `thinRingHoopStress`. Example: 6061-T6 (2700 kg/m³, ultimate 310 MPa) → 338.8 m/s.
+ * Assumptions: as `thinRingHoopStress`.
+ * @example
+ * thinRingLimitTipSpeed({ density: 2700, strength: 310e6 }) // → 338.8 [m/s] (6061-T6)
  * Sources: carvill-data-handbook.
  */
 export function thinRingLimitTipSpeed({ density, strength }: { density: number; strength: number }): number {
@@ -118,8 +125,10 @@ export interface DiskStress {
  * @returns σ_r, σ_θ [Pa]
  *
  * Assumptions: plane stress (thin disk), isotropic and linear elastic, free rim, no hub load.
- * Example: steel (7850 kg/m³, ν = 0.3), b = 0.1 m, 10 000 rpm: centre 35.51 MPa both, rim hoop
- * 15.06 MPa. Sources: timoshenko-goodier, roark-rotating-disks, carvill-data-handbook.
+ * @example
+ * solidDiskStress({ density: 7850, poisson: 0.3, angularSpeed: rpmToRadPerSecond(10000), outerRadius: 0.1, radius: 0 }) // → { radial: 35.51e6, hoop: 35.51e6 } (steel, centre)
+ * solidDiskStress({ density: 7850, poisson: 0.3, angularSpeed: rpmToRadPerSecond(10000), outerRadius: 0.1, radius: 0.1 }) // → { hoop: 15.06e6, … } (rim)
+ * Sources: timoshenko-goodier, roark-rotating-disks, carvill-data-handbook.
  */
 export function solidDiskStress({
   density,
@@ -151,7 +160,8 @@ export function solidDiskStress({
  * @param outerRadius b [m], greater than 0
  * @returns σ_max [Pa]
  *
- * Example: steel (7850 kg/m³, ν = 0.3), b = 0.1 m, 10 000 rpm → 35.51 MPa.
+ * @example
+ * solidDiskCentreStress({ density: 7850, poisson: 0.3, angularSpeed: rpmToRadPerSecond(10000), outerRadius: 0.1 }) // → 35.51e6 [Pa] (steel)
  * Sources: carvill-data-handbook, timoshenko-goodier, roark-rotating-disks.
  */
 export function solidDiskCentreStress({ density, poisson, angularSpeed, outerRadius }: SpinningBody & { poisson: number; outerRadius: number }): number {
@@ -178,8 +188,10 @@ function requireBore(innerRadius: number, outerRadius: number): void {
  * @returns σ_r, σ_θ [Pa]
  *
  * Assumptions: plane stress, isotropic and linear elastic, nothing pressing on the bore (a disk
- * shrunk or keyed onto a shaft carries extra stress not counted here). Example: steel, a = 0.01 m,
- * b = 0.1 m, 10 000 rpm: bore hoop 71.17 MPa. Sources: timoshenko-goodier, roark-rotating-disks.
+ * shrunk or keyed onto a shaft carries extra stress not counted here).
+ * @example
+ * annularDiskStress({ density: 7850, poisson: 0.3, angularSpeed: rpmToRadPerSecond(10000), innerRadius: 0.01, outerRadius: 0.1, radius: 0.01 }) // → { hoop: 71.17e6, … } (steel, at the bore)
+ * Sources: timoshenko-goodier, roark-rotating-disks.
  */
 export function annularDiskStress({
   density,
@@ -217,7 +229,8 @@ export function annularDiskStress({
  * @param outerRadius b [m], greater than 0
  * @returns σ_θ(a) [Pa]
  *
- * Example: steel (7850 kg/m³, ν = 0.3), a = 0.01 m, b = 0.1 m, 10 000 rpm → 71.17 MPa.
+ * @example
+ * annularDiskBoreStress({ density: 7850, poisson: 0.3, angularSpeed: rpmToRadPerSecond(10000), innerRadius: 0.01, outerRadius: 0.1 }) // → 71.17e6 [Pa] (steel)
  * Sources: timoshenko-goodier, roark-rotating-disks.
  */
 export function annularDiskBoreStress({
@@ -247,7 +260,9 @@ export function annularDiskBoreStress({
  * @param outerRadius b [m], greater than 0
  * @returns stress σ_r,max [Pa] and radius √(ab) [m]
  *
- * Example: steel, a = 0.01 m, b = 0.1 m, 10 000 rpm → 28.76 MPa at 31.6 mm. Sources: timoshenko-goodier.
+ * @example
+ * annularDiskPeakRadialStress({ density: 7850, poisson: 0.3, angularSpeed: rpmToRadPerSecond(10000), innerRadius: 0.01, outerRadius: 0.1 }) // → { stress: 28.76e6, radius: 0.0316 } (steel)
+ * Sources: timoshenko-goodier.
  */
 export function annularDiskPeakRadialStress({
   density,

@@ -31,8 +31,9 @@ export interface StaticUnbalance {
  *
  * Assumptions: F is the force needed to hold the geometric centre on the axis (as bearings would).
  * A free-spinning robot instead turns about its centre of mass, and its geometric centre (and every
- * wheel) orbits it on a circle of radius e. Example: 1.4 kg, e = 2 mm, 2400 rpm: U = 2800 g·mm,
- * F = 176.9 N.
+ * wheel) orbits it on a circle of radius e.
+ * @example
+ * staticUnbalance({ totalMass: 1.4, offset: 0.002, angularSpeed: rpmToRadPerSecond(2400) }) // → { unbalance: 0.0028, force: 176.9 } (U = 2800 g·mm)
  * Sources: rigid-rotor-unbalance, newton-second-law.
  */
 export function staticUnbalance({ totalMass, offset, angularSpeed }: { totalMass: number; offset: number; angularSpeed: number }): StaticUnbalance {
@@ -70,7 +71,9 @@ export const BALANCE_GRADES: readonly BalanceGrade[] = [0.4, 1, 2.5, 6.3, 16, 40
  * @param angularSpeed Ω, the maximum service speed [rad/s], 0 or more
  * @returns G [m/s] (the grade number is G in mm/s)
  *
- * Example: e = 20.05 µm at 3000 rpm gives 6.30 mm/s (G 6.3). Sources: iso-21940-11.
+ * @example
+ * equivalentBalanceGrade({ offset: 20.05e-6, angularSpeed: rpmToRadPerSecond(3000) }) // → 0.00630 [m/s] (G 6.3)
+ * Sources: iso-21940-11.
  */
 export function equivalentBalanceGrade({ offset, angularSpeed }: { offset: number; angularSpeed: number }): number {
   requireNonNegative("offset", offset, "m");
@@ -105,7 +108,10 @@ export function standardBalanceGrade(grade: number): BalanceGrade | null {
  * @param grade the equivalent grade [m/s], 0 or more
  * @returns the grade, or null
  *
- * Example: 0.0063 m/s meets G 6.3; 0.00631 m/s meets only G 16. Sources: iso-21940-11.
+ * @example
+ * finestGradeMet(0.0063) // → { label: "G 6.3", value: 0.0063 }
+ * finestGradeMet(0.00631) // → { label: "G 16", value: 0.016 }
+ * Sources: iso-21940-11.
  */
 export function finestGradeMet(grade: number): BalanceGrade | null {
   requireNonNegative("grade", grade, "m/s");
@@ -134,8 +140,9 @@ export interface PermissibleUnbalance {
  * @returns unbalance [kg·m], specificUnbalance [m], perPlane [kg·m]
  *
  * Assumptions: rigid rotor. For a disc-shaped body with one correction plane the full U_per applies
- * to that plane; with two planes, half is usually allowed in each. Example: 453.59237 kg (1000 lb),
- * 15 000 rpm, G 2.5: U_per = 7.219e-4 kg·m = 721.9 g·mm = 1.003 oz·in (0.501 oz·in per plane).
+ * to that plane; with two planes, half is usually allowed in each.
+ * @example
+ * permissibleResidualUnbalance({ totalMass: 453.59237, grade: 0.0025, angularSpeed: rpmToRadPerSecond(15000) }) // → { unbalance: 7.219e-4, perPlane: 3.610e-4, … } (1000 lb at 15 000 rpm, G 2.5: 721.9 g·mm = 1.003 oz·in, 0.501 oz·in per plane)
  * Sources: iso-21940-11, energy-tech-balancing-example, bloch-geitner-machinery-maintenance.
  */
 export function permissibleResidualUnbalance({
@@ -177,8 +184,9 @@ export interface CoupleUnbalance {
  *
  * Assumptions: steady spin about the z axis through the centre of mass; in body axes the moment
  * that must act on the body is (ω² I_yz, −ω² I_xz, 0). The sign convention does not change the
- * magnitude. Example: 10 g at (50 mm, 0, +10 mm) and 10 g at (−50 mm, 0, −10 mm): I_xz =
- * 1.0e-5 kg·m²; at 2400 rpm the rocking moment is 0.632 N·m.
+ * magnitude. For 10 g at (50 mm, 0, +10 mm) and 10 g at (−50 mm, 0, −10 mm), I_xz = 1.0e-5 kg·m².
+ * @example
+ * coupleUnbalance({ productXZ: 1e-5, productYZ: 0, angularSpeed: rpmToRadPerSecond(2400) }) // → { couple: 1.0e-5, moment: 0.632, … }
  * Sources: rigid-rotor-unbalance.
  */
 export function coupleUnbalance({ productXZ, productYZ, angularSpeed }: { productXZ: number; productYZ: number; angularSpeed: number }): CoupleUnbalance {
@@ -230,8 +238,10 @@ export interface TwoPlaneCorrection {
  * @returns lower and upper correction masses (mass [kg], angle [rad], position [m])
  *
  * Assumptions: the corrections are point masses; after adding them the centre of mass lies on the
- * geometric axis and both products of inertia about it vanish. Example: 10 g at (50 mm, 0, 10 mm)
- * alone, planes at 0 and 20 mm, r = 50 mm: 5 g at 180° in each plane.
+ * geometric axis and both products of inertia about it vanish. For 10 g at (50 mm, 0, 10 mm) alone (first moment 5e-4 kg·m, product 5e-6 kg·m²), planes at 0
+ * and 20 mm, r = 50 mm: 5 g at 180° (π rad) in each plane.
+ * @example
+ * twoPlaneCorrection({ firstMomentX: 5e-4, firstMomentY: 0, productXZ: 5e-6, productYZ: 0, planeZ1: 0, planeZ2: 0.02, radius: 0.05 }) // → { lower: { mass: 0.005, angle: 3.1416, … }, upper: { mass: 0.005, angle: 3.1416, … } }
  * Sources: rigid-rotor-unbalance, centre-of-mass, parallel-axis-theorem.
  */
 export function twoPlaneCorrection(input: {

@@ -68,8 +68,9 @@ export interface CounterweightAtRadius {
  * @returns status, mass [kg], massForZero [kg], maxMass [kg] or null, angle [rad], x, y [m], offsetAfter [m]
  *
  * Assumptions: the counterweight is a point mass. The direction opposite the offset needs the least
- * mass at any radius (it shortens the first moment the most for each gram). Example: 1.4 kg with
- * e = 2 mm, e_t = 0.2 mm, r = 55 mm: 45.65 g (50.91 g for zero offset).
+ * mass at any radius (it shortens the first moment the most for each gram).
+ * @example
+ * counterweightAtRadius({ totalMass: 1.4, centreX: 0.002, centreY: 0, targetOffset: 0.0002, radius: 0.055 }) // → { mass: 0.04565, massForZero: 0.05091, … }
  * Sources: centre-of-mass.
  */
 export function counterweightAtRadius(input: CentreInput & { radius: number }): CounterweightAtRadius {
@@ -128,8 +129,10 @@ export interface CounterweightForMass {
  * max radius is recommended: it is the closest to r_0 the robot allows, so it leaves the smallest
  * offset, rather than the band's inner edge, where the offset sits exactly on the target and any
  * mounting tolerance pushes it out.
- * Example: 1.4 kg with e = 2 mm, e_t = 0.2 mm, m = 50 g: r_0 = 56 mm; workable 50.2–61.8 mm. With a
- * 53 mm limit: 53 mm, offset 0.103 mm. With a 45 mm limit: too far out.
+ * @example
+ * counterweightRadiusForMass({ totalMass: 1.4, centreX: 0.002, centreY: 0, targetOffset: 0.0002, mass: 0.05, maxRadius: 1 }) // → { radius: 0.056, minRadius: 0.0502, maxRadiusWithinTarget: 0.0618, … }
+ * counterweightRadiusForMass({ totalMass: 1.4, centreX: 0.002, centreY: 0, targetOffset: 0.0002, mass: 0.05, maxRadius: 0.053 }) // → { radius: 0.053, offsetAfter: 0.000103, … }
+ * counterweightRadiusForMass({ totalMass: 1.4, centreX: 0.002, centreY: 0, targetOffset: 0.0002, mass: 0.05, maxRadius: 0.045 }) // → { status: "too-far-out", radius: null, … }
  * Sources: centre-of-mass.
  */
 export function counterweightRadiusForMass(input: CentreInput & { mass: number; maxRadius: number }): CounterweightForMass {
@@ -194,8 +197,10 @@ export interface CandidateChoice {
  *
  * Assumptions: each point takes only mass (m ≥ 0), as a point mass. As m grows the centre of mass
  * slides from c toward p; a point works when that segment enters the target circle. The root form
- * used is free of cancellation and covers A > 0, A = 0 and A < 0 alike. Example: 1.4 kg with
- * c = (2 mm, 0), e_t = 0.2 mm, point (−55 mm, 0): 45.65 g; point (55 mm, 0): infeasible.
+ * used is free of cancellation and covers A > 0, A = 0 and A < 0 alike.
+ * @example
+ * counterweightAtCandidates({ totalMass: 1.4, centreX: 0.002, centreY: 0, targetOffset: 0.0002, candidates: [{ x: -0.055, y: 0 }, { x: 0.055, y: 0 }] }).candidates[0] // → { feasible: true, mass: 0.04565, … } (at (−55 mm, 0))
+ * counterweightAtCandidates({ totalMass: 1.4, centreX: 0.002, centreY: 0, targetOffset: 0.0002, candidates: [{ x: -0.055, y: 0 }, { x: 0.055, y: 0 }] }).candidates[1] // → { feasible: false, mass: null, … } (at (55 mm, 0))
  * Sources: centre-of-mass.
  */
 export function counterweightAtCandidates(input: CentreInput & { candidates: readonly MountingPoint[] }): CandidateChoice {
@@ -254,7 +259,8 @@ export interface AppliedCounterweight {
  * @param name row name, default "counterweight"
  * @returns the new list, and MassProperties before and after
  *
- * Example: 1 kg at (10 mm, 0) plus 0.1 kg at (−100 mm, 0) puts the centre of mass on the axis.
+ * @example
+ * applyCounterweight({ parts: [{ name: "hub", shape: { kind: "point" }, mass: { kind: "given", mass: 1 }, x: 0.01, y: 0, z: 0 }], mass: 0.1, x: -0.1, y: 0, z: 0 }).after // → { totalMass: 1.1, offset: 0.0000, … } (centre of mass on the axis)
  *
  * Assumptions: a counterweight at the height of the centre of mass (z = z̄) leaves the products of
  * inertia about the centre of mass unchanged; any other height adds couple unbalance.

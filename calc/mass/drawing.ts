@@ -23,8 +23,11 @@ export type PartOutline =
  * @param part the part (checked)
  * @returns the outline [m]
  *
- * Example: a 40 × 20 mm plate at (100, 0) mm turned 90° has corners (110, −20), (110, 20),
- * (90, 20), (90, −20) mm. Sources: none (plane geometry, no formula).
+ * A 40 × 20 mm plate at (100, 0) mm turned 90° has corners (110, −20), (110, 20), (90, 20), (90, −20) mm.
+ * @example
+ * partOutline({ name: "plate", shape: { kind: "plate", length: 0.04, width: 0.02, angle: Math.PI / 2 }, mass: { kind: "given", mass: 0.1 }, x: 0.1, y: 0, z: 0 }).corners[0][0] // → 0.11 [m]
+ * partOutline({ name: "plate", shape: { kind: "plate", length: 0.04, width: 0.02, angle: Math.PI / 2 }, mass: { kind: "given", mass: 0.1 }, x: 0.1, y: 0, z: 0 }).corners[0][1] // → -0.02 [m]
+ * Sources: none (plane geometry, no formula).
  */
 export function partOutline(part: LayoutPart): PartOutline {
   checkPart(part);

@@ -97,8 +97,9 @@ export type MirrorAxis = "x" | "y" | "origin";
  * @param axis "x", "y" or "origin"
  * @returns the mirrored part (same name)
  *
- * Example: a plate at (30, 40, 10) mm turned 0.5 rad, mirrored across x, sits at (30, −40, 10) mm
- * turned −0.5 rad. Sources: none (plane geometry, no formula).
+ * @example
+ * mirrorPart({ name: "plate", shape: { kind: "plate", length: 0.04, width: 0.02, angle: 0.5 }, mass: { kind: "given", mass: 0.1 }, x: 0.03, y: 0.04, z: 0.01 }, "x") // → { x: 0.03, y: -0.04, z: 0.01, shape: { angle: -0.5, … }, … }
+ * Sources: none (plane geometry, no formula).
  */
 export function mirrorPart(part: LayoutPart, axis: MirrorAxis): LayoutPart {
   checkPart(part);

@@ -208,8 +208,12 @@ function parsePartToken(token: string): LayoutPart | string {
  * @param text the text, e.g. from the URL
  * @returns ok, version, the parts read and the problems found
  *
- * Example: "v1~pt_a_0_0_0_10~blob_b_0_0_0_1" gives one part and the problem
- * { index: 1, reason: 'unknown shape "blob"; …' }. Sources: none (a text format of our own).
+ * The text "v1~pt_a_0_0_0_10~blob_b_0_0_0_1" gives one part and the problem { index: 1, reason:
+ * 'unknown shape "blob"; …' }.
+ * @example
+ * parseLayout("v1~pt_a_0_0_0_10~blob_b_0_0_0_1").problems[0] // → { index: 1, … }
+ * parseLayout("v1~pt_a_0_0_0_10~blob_b_0_0_0_1").parts.length // → 1
+ * Sources: none (a text format of our own).
  */
 export function parseLayout(text: unknown): LayoutParseResult {
   if (typeof text !== "string") return { ok: false, version: null, parts: [], problems: [{ index: null, reason: "the layout must be text" }] };

@@ -186,7 +186,8 @@ export function checkPart(part: LayoutPart, prefix = "part"): void {
  * @param part a part whose mass kind is "material" (checked)
  * @returns V [m³]
  *
- * Example: a 6061 disk of radius 70 mm and thickness 5 mm has V = 7.697e-5 m³ (0.208 kg).
+ * @example
+ * partVolume({ name: "plate", shape: { kind: "disk", radius: 0.07 }, mass: { kind: "material", material: "al-6061-t6", thickness: 0.005 }, x: 0, y: 0, z: 0 }) // → 7.697e-5 [m³] (0.208 kg of 6061)
  * Sources: oxford-concise-mathematics.
  */
 export function partVolume(part: LayoutPart): number {
@@ -226,7 +227,8 @@ function volumeOf(shape: PartShape, thickness: number): number {
  * @param part the part (checked)
  * @returns m [kg]
  *
- * Example: a 4130 annulus, 68–75 mm radii, 24 mm thick: ρ = 7850 kg/m³, m = 0.592 kg.
+ * @example
+ * partMass({ name: "ring", shape: { kind: "annulus", innerRadius: 0.068, outerRadius: 0.075 }, mass: { kind: "material", material: "steel-4130-normalized", thickness: 0.024 }, x: 0, y: 0, z: 0 }) // → 0.592 [kg] (4130, ρ = 7850 kg/m³)
  * Sources: oxford-concise-mathematics, asm-matweb-datasheets.
  */
 export function partMass(part: LayoutPart): number {
@@ -265,7 +267,8 @@ export interface OwnInertia {
  * products I'_xz and I'_yz are exactly 0 (only a custom part can carry its own). The plate formula
  * holds for any thickness; the ring and rod are idealised: a round section of diameter d adds
  * 3md²/16 (ring) and md²/16 (rod), a relative error of 0.19 (d/R)² and 0.75 (d/L)².
- * Example: a solid disk of 2 kg and radius 0.1 m has I = 0.01 kg·m².
+ * @example
+ * partOwnInertia({ name: "disk", shape: { kind: "disk", radius: 0.1 }, mass: { kind: "given", mass: 2 }, x: 0, y: 0, z: 0 }) // → { inertiaZ: 0.01, productXZ: 0, productYZ: 0 }
  * Sources: oxford-concise-mathematics, mathmos-moments-of-inertia (annulus),
  * web-formulas-moment-of-inertia (plate, rod), young-freedman-university-physics (rod).
  */

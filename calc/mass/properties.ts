@@ -73,8 +73,8 @@ export interface MassProperties {
  * Assumptions: rigid body; positions are the parts' own centres of mass. Products use the
  * positive-product convention (tensor element = −I_xz). The I about the centre is summed
  * directly about x̄, ȳ (not as I_O − Me²) to avoid cancellation.
- * Example: 2 kg disk (R 0.1 m) at the origin plus 0.1 kg at (0.1, 0, 0): M = 2.1 kg,
- * x̄ = 4.762 mm, I_O = 0.011 kg·m², I_G = 0.011 − 2.1·0.004762² = 0.0109524 kg·m².
+ * @example
+ * massProperties([{ name: "disk", shape: { kind: "disk", radius: 0.1 }, mass: { kind: "given", mass: 2 }, x: 0, y: 0, z: 0 }, { name: "weight", shape: { kind: "point" }, mass: { kind: "given", mass: 0.1 }, x: 0.1, y: 0, z: 0 }]) // → { totalMass: 2.1, centreX: 0.004762, inertiaAboutOrigin: 0.011, inertiaAboutCentre: 0.0109524, … } (I_G = 0.011 − 2.1·0.004762²)
  * Sources: centre-of-mass, parallel-axis-theorem, oxford-concise-mathematics.
  */
 export function massProperties(parts: readonly LayoutPart[]): MassProperties {

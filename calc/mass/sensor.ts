@@ -42,8 +42,9 @@ export interface TrueSensorRadius {
  *
  * Assumptions: steady spin about the centre of mass; `rateRatio` is for a reading of the whole
  * in-plane acceleration (two axes combined). A single axis aimed at the geometric centre reads only
- * the component ω²(r̂ − c·p̂) and gives `singleAxis`. Example: sensor at (−32 mm, 0), centre of mass
- * at (2 mm, 0): r = 34 mm, ω̂/ω = 1.0308, drift +11.1° per revolution.
+ * the component ω²(r̂ − c·p̂) and gives `singleAxis`.
+ * @example
+ * trueSensorRadius({ centreX: 0.002, centreY: 0, sensorX: -0.032, sensorY: 0 }) // → { radiusTrue: 0.034, rateRatio: 1.0308, driftPerRevolution: 0.1934, … } (drift +11.1° per revolution)
  * Sources: openstax-college-physics.
  */
 export function trueSensorRadius({

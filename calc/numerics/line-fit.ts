@@ -327,7 +327,8 @@ export function requireFitOptions(confidence: number, spikeThreshold: number, hu
  * falls below 1e-9 of the largest |y| (so round-off in exact data is never flagged); when the MAD is
  * 0 the scale comes from the mean absolute deviation. Data whose sums underflow or overflow in
  * double precision are refused with a CalcInputError.
- * Example: Anscombe's data set I gives y = 3.0001 + 0.5001x, R² = 0.6665.
+ * @example
+ * fitStraightLine({ x: [10, 8, 13, 9, 11, 14, 6, 4, 12, 7, 5], y: [8.04, 6.95, 7.58, 8.81, 8.33, 9.96, 7.24, 4.26, 10.84, 4.82, 5.68] }).leastSquares // → { intercept: 3.0001, slope: 0.5001, rSquared: 0.6665, … } (Anscombe's data set I)
  *
  * Sources: draper-smith-1998, theil-1950, sen-1968, gilbert-1987, huber-1964, holland-welsch-1977,
  * iglewicz-hoaglin-1993, johnson-kotz-balakrishnan-1994, abramowitz-stegun-1964.

@@ -22,7 +22,9 @@ const LANCZOS = [
  * @param x [-], greater than 0
  * @returns ln Γ(x) [-]
  *
- * Example: ln Γ(0.5) = ln √π = 0.5723649429; ln Γ(5) = ln 24 = 3.1780538303.
+ * @example
+ * logGamma(0.5) // → 0.5723649429 (ln √π)
+ * logGamma(5) // → 3.1780538303 (ln 24)
  * Sources: numerical-recipes-2007, abramowitz-stegun-1964.
  */
 export function logGamma(x: number): number {
@@ -93,7 +95,9 @@ function incompleteBeta(x: number, oneMinusX: number, a: number, b: number): num
  * @param degreesOfFreedom ν [-], greater than 0
  * @returns F(t) [-]
  *
- * Example: ν = 1 (Cauchy): F(1) = 0.75. Sources: abramowitz-stegun-1964, numerical-recipes-2007.
+ * @example
+ * studentTCdf({ t: 1, degreesOfFreedom: 1 }) // → 0.75 (Cauchy)
+ * Sources: abramowitz-stegun-1964, numerical-recipes-2007.
  */
 export function studentTCdf({ t, degreesOfFreedom }: { t: number; degreesOfFreedom: number }): number {
   requireFinite("t", t, "");
@@ -143,8 +147,11 @@ function solveBetaForTail(target: number, nu: number): number {
  * @param degreesOfFreedom ν [-], greater than 0
  * @returns t_p [-]
  *
- * Assumptions: accurate to about 1e-10 relative. Example: p = 0.975, ν = 1: tan(0.475π) = 12.7062;
- * ν = 2: 4.3027. Sources: abramowitz-stegun-1964, numerical-recipes-2007.
+ * Assumptions: accurate to about 1e-10 relative.
+ * @example
+ * studentTQuantile({ probability: 0.975, degreesOfFreedom: 1 }) // → 12.7062 (tan(0.475π))
+ * studentTQuantile({ probability: 0.975, degreesOfFreedom: 2 }) // → 4.3027
+ * Sources: abramowitz-stegun-1964, numerical-recipes-2007.
  */
 export function studentTQuantile({ probability, degreesOfFreedom }: { probability: number; degreesOfFreedom: number }): number {
   requireInRange("probability", probability, "", { min: 0, max: 1, minOpen: true, maxOpen: true });
@@ -212,7 +219,9 @@ function erfcPositive(x: number): number {
  * @param z [-], finite
  * @returns Φ(z) [-]
  *
- * Example: Φ(1.959964) = 0.975. Sources: abramowitz-stegun-1964, numerical-recipes-2007.
+ * @example
+ * normalCdf({ z: 1.959964 }) // → 0.975
+ * Sources: abramowitz-stegun-1964, numerical-recipes-2007.
  */
 export function normalCdf({ z }: { z: number }): number {
   requireFinite("z", z, "");
@@ -232,7 +241,9 @@ export function normalCdf({ z }: { z: number }): number {
  * @param probability p [-], 0 < p < 1
  * @returns z_p [-]
  *
- * Example: p = 0.975: 1.959964. Sources: abramowitz-stegun-1964, numerical-recipes-2007.
+ * @example
+ * normalQuantile({ probability: 0.975 }) // → 1.959964
+ * Sources: abramowitz-stegun-1964, numerical-recipes-2007.
  */
 export function normalQuantile({ probability }: { probability: number }): number {
   requireInRange("probability", probability, "", { min: 0, max: 1, minOpen: true, maxOpen: true });
