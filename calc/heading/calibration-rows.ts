@@ -22,7 +22,10 @@ export const CALIBRATION_ROWS_MAX = 500;
  * @param rows readings (ω [rad/s] ≥ 0, a [m/s²] finite), at most 500
  * @returns the text, e.g. "v1:1200:31.5,1800:70.9"
  *
- * Example: 1200 rpm reading 31.5 g → "v1:1200:31.5". Sources: nist-sp811 (rpm and g_n definitions).
+ * @example
+ * encodeCalibrationRows([{ angularSpeed: rpmToRadPerSecond(1200), acceleration: 31.5 * STANDARD_GRAVITY }]) // → "v1:1200:31.5"
+ *
+ * Sources: nist-sp811 (rpm and g_n definitions).
  */
 export function encodeCalibrationRows(rows: readonly CalibrationRow[]): string {
   if (rows.length > CALIBRATION_ROWS_MAX) {
@@ -66,7 +69,11 @@ function clip(text: string): string {
  * @returns the rows [rad/s, m/s²], the version, and the problems
  *
  * Assumptions: text without a version tag is read as version 1 and says so; an unknown version
- * yields no rows. Example: "v1:1200:31.5,abc" → one row and a problem at piece 2.
+ * yields no rows.
+ *
+ * @example
+ * decodeCalibrationRows("v1:1200:31.5,abc").rows.length // → 1; decodeCalibrationRows("v1:1200:31.5,abc").problems.at(0) // → { piece: 2, text: "abc", … }
+ *
  * Sources: nist-sp811, cgpm-1901.
  */
 export function decodeCalibrationRows(text: string): DecodedCalibrationRows {

@@ -48,9 +48,11 @@ export interface CalibrationFit extends StraightLineFit {
  * remain, else Theil–Sen; and the radius's standard error relative to it [-] (least-squares methods)
  *
  * Assumptions: the reference speed is right; the fitted radius is (1 + k) r cos θ, which is the
- * number the firmware needs (it cancels scale error and tilt at every speed). Example: readings
- * made exactly from r = 12.7 mm and b = 0.3 g at 600, 1200, 1800 and 2400 rpm give back 12.7 mm
- * and 2.942 m/s².
+ * number the firmware needs (it cancels scale error and tilt at every speed).
+ *
+ * @example
+ * const rows = [600, 1200, 1800, 2400].map((rpm) => ({ angularSpeed: rpmToRadPerSecond(rpm), acceleration: 0.0127 * rpmToRadPerSecond(rpm) ** 2 + 0.3 * STANDARD_GRAVITY }));
+ * fitCalibration(rows) // → { radius: 0.0127, bias: 2.942, method: "least-squares", … } (readings made exactly from r = 12.7 mm and b = 0.3 g give both back)
  *
  * Sources: openstax-college-physics, ieee-1293-1998, draper-smith-1998, theil-1950, sen-1968,
  * gilbert-1987, iglewicz-hoaglin-1993.
@@ -149,7 +151,9 @@ export const DEMO_CALIBRATION_READINGS: readonly (readonly [number, number])[] =
  *
  * @returns the rows of `DEMO_CALIBRATION_READINGS` [rad/s, m/s²]
  *
- * Example: the first row, 600 rpm and 5.37 g, is 62.83 rad/s and 52.66 m/s².
+ * @example
+ * demoCalibrationRows().at(0) // → { angularSpeed: 62.83, acceleration: 52.66 } (the first row, 600 rpm and 5.37 g)
+ *
  * Sources: nist-sp811, cgpm-1901.
  */
 export function demoCalibrationRows(): CalibrationRow[] {
@@ -180,7 +184,11 @@ export interface CalibrationCurvePoint {
  * @param points number of speeds [-], whole, 2 to 2001 (default 61)
  * @returns one point per speed [rad/s, m/s²]
  *
- * Example: r = 12.7 mm, b = 0 at 2000 rpm: 557.1 m/s². Sources: openstax-college-physics.
+ * @example
+ * const fit = fitCalibration([600, 1200, 1800, 2400].map((rpm) => ({ angularSpeed: rpmToRadPerSecond(rpm), acceleration: 0.0127 * rpmToRadPerSecond(rpm) ** 2 })));
+ * calibrationCurve({ fit, lowSpeed: 0, highSpeed: rpmToRadPerSecond(2000), points: 2 }).at(-1) // → { angularSpeed: 209.44, leastSquares: 557.1, recommended: 557.1, … } (r = 12.7 mm, b = 0 at 2000 rpm)
+ *
+ * Sources: openstax-college-physics.
  */
 export function calibrationCurve({
   fit,

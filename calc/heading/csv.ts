@@ -160,8 +160,10 @@ function separatorName(sep: CsvSeparator): string {
  * line. The first line is a header when none of its fields starts with a number; a header field
  * naming a unit ("speed (rpm)", "a [m/s2]", "g", "rad/s") fixes that column's unit and kind, and
  * the speed and acceleration columns are found by kind (else speed first, acceleration second).
- * A cell may carry its own unit ("1200 rpm"). Example: "rpm;g\n1200;31,5" gives one row of
- * 125.66 rad/s and 308.91 m/s².
+ * A cell may carry its own unit ("1200 rpm").
+ *
+ * @example
+ * parseCalibrationCsv("rpm;g\n1200;31,5") // → { rows: { length: 1 }, separator: ";", decimalComma: true, … }; parseCalibrationCsv("rpm;g\n1200;31,5").rows.at(0) // → { angularSpeed: 125.66, acceleration: 308.91, … }
  *
  * Sources: rfc-4180, nist-sp811, cgpm-1901.
  */

@@ -51,8 +51,10 @@ export interface HeadingDriftResult {
  *
  * Assumptions: steady spin; the noise figure is first-order (propagation of error) and says how
  * much one reading scatters, not how the heading wanders (that depends on the loop rate and any
- * smoothing). Example: the defaults (2000 rpm, r̂ = 12.0 mm, r = 12.7 mm, 0.2 g offset left in):
- * drift 6.401 rad/s (366.8 °/s), over budget; radius band 12.7235 mm to 12.7660 mm; no speed range.
+ * smoothing).
+ *
+ * @example
+ * headingDrift({ angularSpeed: rpmToRadPerSecond(2000), assumedRadius: 0.012, trueRadius: 0.0127, scaleError: 0, bias: 0.2 * STANDARD_GRAVITY, biasCorrection: 0, tilt: 0, budget: (10 * Math.PI) / 180, lowSpeed: rpmToRadPerSecond(200), highSpeed: rpmToRadPerSecond(3000), accelerationNoise: 0 }) // → { atSpeed: { driftRate: 6.401, … }, verdict: "over-budget", radiusBand: { low: 0.0127235, high: 0.0127660, … }, speedRange: { status: "empty", … }, … } (the defaults: 366.8 °/s; no speed range within budget)
  *
  * Sources: spinner-heading-practice, openstax-college-physics, ieee-1293-1998, nist-ehandbook-propagation.
  */

@@ -50,7 +50,10 @@ export interface RadiusMismatchExample {
  * @param budget D for the radius band at the top speed [rad/s], greater than 0 (default 10 °/s)
  * @returns rows [rad/s, °/s, rad, °], the band [m] and its half-width as a fraction of r [-]
  *
- * Example: see `demoSpinnerRadiusExample`. Sources: spinner-heading-practice, openstax-college-physics.
+ * @example
+ * radiusMismatchExample({ assumedRadius: 0.012, trueRadius: 0.0127, speedsRpm: [1200, 2800] }) // → { speedRatio: 1.028753, bandHalfWidthFraction: 0.00119, … } (the demo spinner, see `demoSpinnerRadiusExample`)
+ *
+ * Sources: spinner-heading-practice, openstax-college-physics.
  */
 export function radiusMismatchExample({
   assumedRadius,
@@ -111,9 +114,13 @@ export const DEMO_HEADING_SPINNER = {
  *
  * @returns see `radiusMismatchExample`
  *
- * Example: 1200 rpm: 3.613 rad/s (207.0 °/s); 2800 rpm: 8.431 rad/s (483.1 °/s); 10.35° per
- * revolution at both. To stay within 10 °/s at 2800 rpm the firmware radius must lie between
- * 12.6849 mm and 12.7151 mm, about ±0.12 % of the true radius. Sources: spinner-heading-practice, openstax-college-physics.
+ * @example
+ * demoSpinnerRadiusExample().rows.at(0) // → { rpm: 1200, driftRate: 3.613, driftRateDegreesPerSecond: 207.0, driftPerRevolutionDegrees: 10.35, … }
+ * demoSpinnerRadiusExample().rows.at(1) // → { rpm: 2800, driftRate: 8.431, driftRateDegreesPerSecond: 483.1, driftPerRevolutionDegrees: 10.35, … }
+ * demoSpinnerRadiusExample().bandAtTopSpeed // → { low: 0.0126849, high: 0.0127151, … } [m] (within 10 °/s at 2800 rpm)
+ * demoSpinnerRadiusExample().bandHalfWidthFraction // → 0.0012 (about ±0.12 % of the true radius)
+ *
+ * Sources: spinner-heading-practice, openstax-college-physics.
  */
 export function demoSpinnerRadiusExample(): RadiusMismatchExample {
   return radiusMismatchExample({ ...DEMO_HEADING_SPINNER });

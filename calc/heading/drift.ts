@@ -169,8 +169,9 @@ export interface DriftPoint {
  *
  * Assumptions: steady spin about a fixed axis through the centre of mass; noise-free reading.
  * The radius and scale terms grow ∝ ω (a constant angle per revolution); the bias term falls ∝ 1/ω.
- * Example: r̂ = 8 mm, r = 9 mm, at 2000 rpm: ω̂/ω = √(9/8) = 1.06066, drift 12.70 rad/s
- * (728 °/s), 0.3811 rad (21.84°) per revolution.
+ *
+ * @example
+ * headingDriftAt({ angularSpeed: rpmToRadPerSecond(2000), assumedRadius: 0.008, trueRadius: 0.009, scaleError: 0, bias: 0, biasCorrection: 0, tilt: 0 }) // → { speedRatio: 1.06066, driftRate: 12.70, driftPerRevolution: 0.3811, … } (ω̂/ω = √(9/8); 728 °/s, 21.84° per revolution)
  *
  * Sources: spinner-heading-practice, openstax-college-physics, ieee-1293-1998, abramowitz-stegun-1964.
  */
@@ -221,7 +222,9 @@ export function headingDriftAt(input: { angularSpeed: number } & SpinRateErrorMo
  * @param model see `SpinRateErrorModel`
  * @returns ω₀ [rad/s]; 0 when the estimate exists at every speed above 0
  *
- * Example: over-corrected bias b̂ − b = 0.5 g with r = 12 mm gives ω₀ = 20.2 rad/s (193 rpm).
+ * @example
+ * lowestEstimableSpeed({ assumedRadius: 0.012, trueRadius: 0.012, scaleError: 0, bias: 0, biasCorrection: 0.5 * STANDARD_GRAVITY, tilt: 0 }) // → 20.2 [rad/s] (193 rpm: the offset over-corrected by 0.5 g)
+ *
  * Sources: spinner-heading-practice, openstax-college-physics.
  */
 export function lowestEstimableSpeed(model: SpinRateErrorModel): number {
@@ -257,8 +260,10 @@ export interface RadiusBand {
  * @param model the error model; its `assumedRadius` is ignored (it is what this function finds)
  * @returns the band [m] and its status
  *
- * Example: r = 12.7 mm, no other error, 2800 rpm, D = 10 °/s: r̂ from 12.6849 mm to 12.7151 mm
- * (about ±0.12 %). Sources: spinner-heading-practice, openstax-college-physics.
+ * @example
+ * assumedRadiusBand({ angularSpeed: rpmToRadPerSecond(2800), budget: (10 * Math.PI) / 180, assumedRadius: 0.012, trueRadius: 0.0127, scaleError: 0, bias: 0, biasCorrection: 0, tilt: 0 }) // → { status: "bounded", low: 0.0126849, high: 0.0127151, … } [m] (about ±0.12 % around r = 12.7 mm)
+ *
+ * Sources: spinner-heading-practice, openstax-college-physics.
  */
 export function assumedRadiusBand(input: { angularSpeed: number; budget: number } & SpinRateErrorModel): RadiusBand {
   const { angularSpeed, budget } = input;
@@ -304,9 +309,11 @@ export interface SpeedRange {
  *
  * Assumptions: the set is one interval (ω̂ − ω is convex when β > 0, concave with a negative maximum
  * or monotone otherwise); it is found from the roots and each segment between them is tested
- * with the exact drift, so no linearisation enters. Example: r̂ = 12.0 mm, r = 12.7 mm, D = 10 °/s:
- * from standstill to 6.07 rad/s (58.0 rpm) only; r̂ = 12.69 mm with 0.02 g of offset left in:
- * 49.79 to 393.2 rad/s (475 to 3755 rpm).
+ * with the exact drift, so no linearisation enters.
+ *
+ * @example
+ * speedRangeWithinBudget({ budget: (10 * Math.PI) / 180, assumedRadius: 0.012, trueRadius: 0.0127, scaleError: 0, bias: 0, biasCorrection: 0, tilt: 0 }) // → { low: 0, high: 6.07, lowLimit: "standstill", … } [rad/s] (up to 58.0 rpm only)
+ * speedRangeWithinBudget({ budget: (10 * Math.PI) / 180, assumedRadius: 0.01269, trueRadius: 0.0127, scaleError: 0, bias: 0.02 * STANDARD_GRAVITY, biasCorrection: 0, tilt: 0 }) // → { low: 49.79, high: 393.2, lowLimit: "budget", highLimit: "budget", … } [rad/s] (475 to 3755 rpm, 0.02 g of offset left in)
  *
  * Sources: spinner-heading-practice, numerical-recipes-2007.
  */
@@ -359,7 +366,10 @@ export function speedRangeWithinBudget(input: { budget: number } & SpinRateError
  * @param model see `SpinRateErrorModel`
  * @returns one `DriftPoint` per speed; undefined points carry `defined: false` and nulls
  *
- * Example: r̂ = 12 mm, r = 12.7 mm from 1200 to 2800 rpm in 3 points: 207, 345, 483 °/s.
+ * @example
+ * const rates = headingDriftSeries({ lowSpeed: rpmToRadPerSecond(1200), highSpeed: rpmToRadPerSecond(2800), points: 3, assumedRadius: 0.012, trueRadius: 0.0127, scaleError: 0, bias: 0, biasCorrection: 0, tilt: 0 }).map((point) => point.driftRate);
+ * rates.at(0) // → 3.613 [rad/s] (207 °/s); rates.at(1) // → 6.022 [rad/s] (345 °/s); rates.at(2) // → 8.431 [rad/s] (483 °/s)
+ *
  * Sources: spinner-heading-practice, openstax-college-physics, abramowitz-stegun-1964.
  */
 export function headingDriftSeries(input: { lowSpeed: number; highSpeed: number; points?: number } & SpinRateErrorModel): DriftPoint[] {

@@ -59,8 +59,10 @@ function estimateFrom(reading: number, radius: number, angularSpeed: number): Op
  * @returns each estimate with its drift [rad/s] and drift per revolution [rad], and ê [m]
  *
  * Assumptions: both sensing axes point at the nominal centre and lie in the spin plane; steady
- * spin. Example: r₁ = r₂ = 12 mm, e = 0.5 mm, 2000 rpm: sensor 1 alone drifts −4.410 rad/s
- * (−7.58° per revolution), sensor 2 +4.319 rad/s, the pair 0, and ê = 0.5 mm.
+ * spin.
+ *
+ * @example
+ * opposedSensorsDrift({ angularSpeed: rpmToRadPerSecond(2000), radius1: 0.012, radius2: 0.012, offset: 0.0005 }) // → { sensor1: { driftRate: −4.410, driftPerRevolution: −0.1323, … }, sensor2: { driftRate: 4.319, … }, pair: { driftRate: 0.000, … }, offsetEstimate: 0.00050 } (sensor 1 alone −7.58° per revolution; the pair 0; ê = 0.5 mm)
  *
  * Sources: hibbeler-dynamics-2016, openstax-college-physics, spinner-heading-practice.
  */
@@ -163,8 +165,10 @@ export interface OpposedSensorsCheck {
  * [rad] (null when sensor 1 gives no estimate at an end, e ≥ r₁), and the pair's worst drift [rad/s]
  *
  * Assumptions: as `opposedSensorsDrift`, with no residual offsets and no common acceleration; one
- * sensor's drift is monotone in e, so the worst case sits at one end of ±e. Example: r₁ = r₂ =
- * 12 mm, e = 0.5 mm, 2000 rpm: one sensor up to 4.410 rad/s (252.7 °/s, 7.58° per revolution), the pair 0.
+ * sensor's drift is monotone in e, so the worst case sits at one end of ±e.
+ *
+ * @example
+ * opposedSensorsCheck({ angularSpeed: rpmToRadPerSecond(2000), radius1: 0.012, radius2: 0.012, offset: 0.0005 }) // → { singleWorstDriftRate: 4.410, singleWorstPerRevolution: 0.1323, pairWorstDriftRate: 0.000, … } (one sensor up to 252.7 °/s, 7.58° per revolution; the pair 0)
  *
  * Sources: hibbeler-dynamics-2016, openstax-college-physics, spinner-heading-practice.
  */

@@ -24,7 +24,9 @@ function requireSmoothingFactor(smoothingFactor: number): void {
  * @param samplePeriod Δt [s], greater than 0
  * @returns τ [s] (0 when α = 1: no smoothing) and the small-α approximation [s]
  *
- * Example: α = 0.1 at 1 kHz: τ = 9.49 ms (approximation 10 ms).
+ * @example
+ * emaTimeConstant({ smoothingFactor: 0.1, samplePeriod: 0.001 }) // → { exact: 0.00949, smallFactorApproximation: 0.010 } [s] (α = 0.1 at 1 kHz: 9.49 ms, approximation 10 ms)
+ *
  * Sources: smith-dsp-1997, nist-ehandbook-exp-smoothing.
  */
 export function emaTimeConstant({ smoothingFactor, samplePeriod }: { smoothingFactor: number; samplePeriod: number }): {
@@ -48,7 +50,10 @@ export function emaTimeConstant({ smoothingFactor, samplePeriod }: { smoothingFa
  * @param samplePeriod Δt [s], greater than 0
  * @returns α [-]
  *
- * Example: τ = 10 ms at 1 kHz: α = 0.0952. Sources: smith-dsp-1997.
+ * @example
+ * emaFactorForTimeConstant({ timeConstant: 0.01, samplePeriod: 0.001 }) // → 0.0952 (τ = 10 ms at 1 kHz)
+ *
+ * Sources: smith-dsp-1997.
  */
 export function emaFactorForTimeConstant({ timeConstant, samplePeriod }: { timeConstant: number; samplePeriod: number }): number {
   requireNonNegative("timeConstant", timeConstant, "s");
@@ -71,7 +76,11 @@ export function emaFactorForTimeConstant({ timeConstant, samplePeriod }: { timeC
  * Assumptions: the output is compared with the input at the same sample (both taken at t_n). The
  * mean delay of the filter's impulse response is the same (1 − α)/α samples, so a speed change Δω
  * leaves a heading error of Δω·τ_lag once the filter settles, whatever the ramp's shape.
- * Example: α = 0.1 at 1 kHz: 9.0 ms. Sources: brown-1963, smith-dsp-1997.
+ *
+ * @example
+ * emaRampLag({ smoothingFactor: 0.1, samplePeriod: 0.001 }) // → 0.0090 [s] (9.0 ms)
+ *
+ * Sources: brown-1963, smith-dsp-1997.
  */
 export function emaRampLag({ smoothingFactor, samplePeriod }: { smoothingFactor: number; samplePeriod: number }): number {
   requireSmoothingFactor(smoothingFactor);
@@ -89,7 +98,10 @@ export function emaRampLag({ smoothingFactor, samplePeriod }: { smoothingFactor:
  * @param smoothingFactor α [-], 0 < α ≤ 1
  * @returns σ_y/σ_x [-]
  *
- * Example: α = 0.1: 0.229. Sources: roberts-1959.
+ * @example
+ * emaNoiseFactor({ smoothingFactor: 0.1 }) // → 0.229
+ *
+ * Sources: roberts-1959.
  */
 export function emaNoiseFactor({ smoothingFactor }: { smoothingFactor: number }): number {
   requireSmoothingFactor(smoothingFactor);
@@ -107,7 +119,10 @@ export function emaNoiseFactor({ smoothingFactor }: { smoothingFactor: number })
  * @param spike S, the extra acceleration in one reading [m/s²], 0 or more
  * @returns S_ω [rad/s]
  *
- * Example: a 50 g spike at 2000 rpm with r̂ = 12 mm: 81.64 rad/s. Sources: spinner-heading-practice.
+ * @example
+ * spikeRateError({ angularSpeed: rpmToRadPerSecond(2000), assumedRadius: 0.012, spike: 50 * STANDARD_GRAVITY }) // → 81.64 [rad/s]
+ *
+ * Sources: spinner-heading-practice.
  */
 export function spikeRateError({ angularSpeed, assumedRadius, spike }: { angularSpeed: number; assumedRadius: number; spike: number }): number {
   requireNonNegative("angularSpeed", angularSpeed, "rad/s");
@@ -129,7 +144,10 @@ export function spikeRateError({ angularSpeed, assumedRadius, spike }: { angular
  * @param samplePeriod Δt [s], greater than 0
  * @returns τ_med [s]
  *
- * Example: median of 3 at 1 kHz: 1 ms. Sources: tukey-1977.
+ * @example
+ * medianFilterDelay({ windowLength: 3, samplePeriod: 0.001 }) // → 0.001 [s] (1 ms)
+ *
+ * Sources: tukey-1977.
  */
 export function medianFilterDelay({ windowLength, samplePeriod }: { windowLength: number; samplePeriod: number }): number {
   requireMedianWindow(windowLength);
@@ -324,9 +342,10 @@ export interface HeadingSmoothingResult extends SmoothingFigures {
  *
  * Assumptions: the filter smooths the spin-rate estimate ω̂ (after the square root) once per
  * sample; the median sees each spike as a single sample. An EMA does not shrink the heading error
- * of a spike, it spreads it: the sum of α(1 − α)^m over m is 1. Example: the defaults (1 kHz,
- * α = 0.1, median of 3, 2000 rpm/s to 3000 rpm): delay 10 ms, drift −2.09 rad/s (−120 °/s) during
- * the 1.5 s spin-up, 3.14 rad (180°) behind afterwards.
+ * of a spike, it spreads it: the sum of α(1 − α)^m over m is 1.
+ *
+ * @example
+ * headingSmoothing({ sampleRate: 1000, smoothingFactor: 0.1, spinUpAcceleration: rpmToRadPerSecond(2000), speedChange: rpmToRadPerSecond(3000), speed: rpmToRadPerSecond(2000), assumedRadius: 0.012, spike: 50 * STANDARD_GRAVITY, medianLength: 3 }) // → { totalDelay: 0.010, driftRateDuringSpinUp: −2.09, spinUpDuration: 1.5, headingErrorAfterSpinUp: 3.14, … } (the defaults: 10 ms delay, −120 °/s during the spin-up, 180° behind afterwards)
  *
  * Sources: smith-dsp-1997, brown-1963, roberts-1959, tukey-1977, spinner-heading-practice.
  */
@@ -357,7 +376,9 @@ export function headingSmoothing(input: HeadingSmoothingInput): HeadingSmoothing
  * @param points number of α values [-], whole, 2 to 501 (default 60)
  * @returns one `SmoothingFigures` per α, α rising
  *
- * Example: at α = 1 the EMA adds no delay and passes the whole spike (noise factor 1).
+ * @example
+ * smoothingTradeoffSeries({ sampleRate: 1000, smoothingFactor: 0.1, spinUpAcceleration: rpmToRadPerSecond(2000), speedChange: rpmToRadPerSecond(3000), speed: rpmToRadPerSecond(2000), assumedRadius: 0.012, spike: 50 * STANDARD_GRAVITY, medianLength: 1 }).at(-1) // → { smoothingFactor: 1, emaLag: 0, noiseFactor: 1, spikeRateError: 81.64, spikeFirstShift: 81.64, … } (at α = 1 and no median the EMA adds no delay and passes the whole spike)
+ *
  * Sources: smith-dsp-1997, brown-1963, roberts-1959, tukey-1977.
  */
 export function smoothingTradeoffSeries(

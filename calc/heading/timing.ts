@@ -22,7 +22,9 @@ import { requireWithinSpecs } from "../core/spec-check.ts";
  * @param loopRate f, control-loop rate [Hz], greater than 0
  * @returns Δψ [rad]
  *
- * Example: 3000 rpm with a 1 kHz loop: 0.314 rad (18.0°) per update.
+ * @example
+ * headingStepPerLoop({ angularSpeed: rpmToRadPerSecond(3000), loopRate: 1000 }) // → 0.314 [rad] (18.0° per update)
+ *
  * Sources: openstax-up1-rotational-kinematics.
  */
 export function headingStepPerLoop({ angularSpeed, loopRate }: { angularSpeed: number; loopRate: number }): number {
@@ -42,7 +44,10 @@ export function headingStepPerLoop({ angularSpeed, loopRate }: { angularSpeed: n
  * @param latency L [s], 0 or more
  * @returns ψ_lag [rad]
  *
- * Example: 0.5 ms at 3000 rpm: 0.157 rad (9.0°). Sources: openstax-up1-rotational-kinematics.
+ * @example
+ * latencyHeadingLag({ angularSpeed: rpmToRadPerSecond(3000), latency: 0.0005 }) // → 0.157 [rad] (9.0°)
+ *
+ * Sources: openstax-up1-rotational-kinematics.
  */
 export function latencyHeadingLag({ angularSpeed, latency }: { angularSpeed: number; latency: number }): number {
   requireNonNegative("angularSpeed", angularSpeed, "rad/s");
@@ -61,7 +66,10 @@ export function latencyHeadingLag({ angularSpeed, latency }: { angularSpeed: num
  *
  * Assumptions: the LED is switched by a timer; if the loop switches it, the on-time cannot be
  * shorter than one loop period and the arc's start moves by up to one heading step.
- * Example: 1 ms at 3000 rpm: 0.314 rad (18.0°). Sources: openstax-up1-rotational-kinematics.
+ * @example
+ * beaconArc({ angularSpeed: rpmToRadPerSecond(3000), onTime: 0.001 }) // → 0.314 [rad] (18.0°)
+ *
+ * Sources: openstax-up1-rotational-kinematics.
  */
 export function beaconArc({ angularSpeed, onTime }: { angularSpeed: number; onTime: number }): number {
   requireNonNegative("angularSpeed", angularSpeed, "rad/s");
@@ -79,7 +87,10 @@ export function beaconArc({ angularSpeed, onTime }: { angularSpeed: number; onTi
  * @param targetStep Δψ_target [rad], greater than 0
  * @returns f [Hz]
  *
- * Example: 5° steps at 3000 rpm need 3600 Hz. Sources: openstax-up1-rotational-kinematics.
+ * @example
+ * loopRateForStep({ angularSpeed: rpmToRadPerSecond(3000), targetStep: (5 * Math.PI) / 180 }) // → 3600 [Hz] (5° steps)
+ *
+ * Sources: openstax-up1-rotational-kinematics.
  */
 export function loopRateForStep({ angularSpeed, targetStep }: { angularSpeed: number; targetStep: number }): number {
   requireNonNegative("angularSpeed", angularSpeed, "rad/s");
@@ -96,7 +107,10 @@ export function loopRateForStep({ angularSpeed, targetStep }: { angularSpeed: nu
  * @param targetArc w_target [rad], 0 or more
  * @returns t_on [s]
  *
- * Example: a 20° arc at 3000 rpm needs 1.11 ms. Sources: openstax-up1-rotational-kinematics.
+ * @example
+ * onTimeForArc({ angularSpeed: rpmToRadPerSecond(3000), targetArc: (20 * Math.PI) / 180 }) // → 0.00111 [s] (1.11 ms for a 20° arc)
+ *
+ * Sources: openstax-up1-rotational-kinematics.
  */
 export function onTimeForArc({ angularSpeed, targetArc }: { angularSpeed: number; targetArc: number }): number {
   requirePositive("angularSpeed", angularSpeed, "rad/s");
@@ -197,8 +211,9 @@ export interface HeadingTimingResult {
  * @param input every field of `headingTimingInputs`, SI
  * @returns the figures above [rad, s, Hz] and a verdict
  *
- * Example: the defaults (3000 rpm, 1 kHz, 0.5 ms, 1 ms, 20°, 5°): step 18.0°, lag 9.0°, arc
- * 18.0°, 3600 Hz needed, 1.11 ms for 20°; verdict "step-too-large".
+ * @example
+ * headingTiming({ topSpeed: rpmToRadPerSecond(3000), loopRate: 1000, latency: 0.0005, onTime: 0.001, targetArc: (20 * Math.PI) / 180, targetStep: (5 * Math.PI) / 180 }) // → { headingStep: 0.314, latencyLag: 0.157, arcWidth: 0.314, loopRateNeeded: 3600, onTimeNeeded: 0.00111, verdict: "step-too-large", … } (the defaults: step and arc 18.0°, lag 9.0°)
+ *
  * Sources: openstax-up1-rotational-kinematics.
  */
 export function headingTiming(input: HeadingTimingInput): HeadingTimingResult {

@@ -19,7 +19,10 @@ import type { SourceKey } from "../sources/index.ts";
  * @returns a, acceleration toward the axis [m/s²]
  *
  * Assumptions: steady rotation about a fixed axis; the tangential term r·dω/dt of a spin-up is not
- * included. Example: 2000 rpm (209.44 rad/s) at 0.089 m gives 3903.98 m/s² (398.09 g).
+ * included.
+ *
+ * @example
+ * centripetalAcceleration({ angularSpeed: rpmToRadPerSecond(2000), radius: 0.089 }) // → 3903.98 [m/s²] (398.09 g at 209.44 rad/s)
  *
  * Sources: openstax-college-physics.
  */
@@ -87,7 +90,10 @@ export function centripetalAccelerationCurve({
  * @param acceleration a [m/s²], 0 or more
  * @returns r [m]
  *
- * Example: 398.09 g at 2000 rpm lies at 0.089 m. Sources: openstax-college-physics.
+ * @example
+ * radiusForAcceleration({ angularSpeed: rpmToRadPerSecond(2000), acceleration: 398.09 * STANDARD_GRAVITY }) // → 0.089 [m]
+ *
+ * Sources: openstax-college-physics.
  */
 export function radiusForAcceleration({ angularSpeed, acceleration }: { angularSpeed: number; acceleration: number }): number {
   requirePositive("angularSpeed", angularSpeed, "rad/s");
@@ -105,7 +111,10 @@ export function radiusForAcceleration({ angularSpeed, acceleration }: { angularS
  * @param acceleration a [m/s²], 0 or more
  * @returns ω [rad/s]
  *
- * Example: 3903.98 m/s² at 0.089 m is 209.44 rad/s (2000 rpm). Sources: openstax-college-physics.
+ * @example
+ * angularSpeedForAcceleration({ radius: 0.089, acceleration: 3903.98 }) // → 209.44 [rad/s] (2000 rpm)
+ *
+ * Sources: openstax-college-physics.
  */
 export function angularSpeedForAcceleration({ radius, acceleration }: { radius: number; acceleration: number }): number {
   requirePositive("radius", radius, "m");
@@ -125,7 +134,10 @@ export function angularSpeedForAcceleration({ radius, acceleration }: { radius: 
  * @returns r_max [m]
  *
  * Assumptions: the sensor's radial axis points at the spin axis; only the centripetal term counts
- * (impacts add far larger, brief spikes). Example: F = 200 g, m = 0.2, 3000 rpm → 15.9 mm.
+ * (impacts add far larger, brief spikes).
+ *
+ * @example
+ * maxSensorRadius({ fullScale: 200 * STANDARD_GRAVITY, margin: 0.2, topSpeed: rpmToRadPerSecond(3000) }) // → 0.0159 [m] (15.9 mm)
  *
  * Sources: openstax-college-physics.
  */
@@ -147,8 +159,10 @@ export function maxSensorRadius({ fullScale, margin, topSpeed }: { fullScale: nu
  * @param radius r [m], greater than 0
  * @returns Δω/ω [-]
  *
- * Example: Δa = 1 g at 400 rpm and 20 mm (3.58 g) → 0.131 (13 %). Sources: sensor-quantisation,
- * openstax-college-physics.
+ * @example
+ * speedResolution({ step: STANDARD_GRAVITY, angularSpeed: rpmToRadPerSecond(400), radius: 0.02 }) // → 0.131 (13 %: a step of 1 g on 3.58 g)
+ *
+ * Sources: sensor-quantisation, openstax-college-physics.
  */
 export function speedResolution({ step, angularSpeed, radius }: { step: number; angularSpeed: number; radius: number }): number {
   requirePositive("step", step, "m/s²");
@@ -192,7 +206,11 @@ export function sensorCountSize({ span, bits }: { span: number; bits: number }):
  *
  * Assumptions: exact inversion, not the small-step approximation Δω/ω ≈ Δa/(2a). Averaging several
  * readings can resolve finer than one count; this is the single-reading bound.
- * Example: Δa = 0.1 g, 400 rpm, p = 1 % → 27.8 mm. Sources: sensor-quantisation, openstax-college-physics.
+ *
+ * @example
+ * minSensorRadius({ step: 0.1 * STANDARD_GRAVITY, lowSpeed: rpmToRadPerSecond(400), resolution: 0.01 }) // → 0.0278 [m] (27.8 mm)
+ *
+ * Sources: sensor-quantisation, openstax-college-physics.
  */
 export function minSensorRadius({ step, lowSpeed, resolution }: { step: number; lowSpeed: number; resolution: number }): number {
   requirePositive("step", step, "m/s²");
@@ -221,7 +239,11 @@ export interface PartLoad {
  * @returns acceleration [m/s²], gLoad [-], force [N]
  *
  * Assumptions: the part is small next to its radius (for a large part use its own centre of mass).
- * Example: 50 g at 60 mm and 2400 rpm → 3790 m/s² (386 g), 189 N. Sources: newton-second-law.
+ *
+ * @example
+ * partLoad({ mass: 0.05, radius: 0.06, angularSpeed: rpmToRadPerSecond(2400) }) // → { acceleration: 3790, gLoad: 386, force: 189 } (a 50 g part)
+ *
+ * Sources: newton-second-law.
  */
 export function partLoad({ mass, radius, angularSpeed }: { mass: number; radius: number; angularSpeed: number }): PartLoad {
   requirePositive("mass", mass, "kg");
