@@ -218,7 +218,6 @@ export interface SweepSummary {
  * @param points one or more sweep points
  * @returns times [s] (null when no point reaches the target), a count [-], top speeds [rad/s]
  *
- * Example: times to target null, 1.2 s and 1.0 s give shortest 1.0 s, longest 1.2 s and 1 missed.
  * @example
  * summariseSweep([{ timeToTarget: null, topSpeed: 100 }, { timeToTarget: 1.2, topSpeed: 200 }, { timeToTarget: 1, topSpeed: 300 }]) // → { shortestTimeToTarget: 1, longestTimeToTarget: 1.2, missedCount: 1, … }
  * Sources: tukey-1977 (the extremes of a batch); the points themselves as `simulateSpinUp`.

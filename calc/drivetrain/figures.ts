@@ -17,8 +17,9 @@ import { requireWhole } from "../core/spec-check.ts";
  * @param angularSpeed Ω [rad/s], finite
  * @returns E [J]
  *
- * Example: J = 1.000 × 10⁻⁴ kg·m² at 760.0 rad/s stores 28.88 J (softschools-rotational-ke);
- * J = 0.01 kg·m² at 2000 rpm stores 219.32 J.
+ * @example
+ * rotorKineticEnergy({ inertia: 1e-4, angularSpeed: 760 }) // → 28.88 [J] (softschools-rotational-ke)
+ * rotorKineticEnergy({ inertia: 0.01, angularSpeed: rpmToRadPerSecond(2000) }) // → 219.32 [J]
  *
  * Sources: openstax-university-physics-1, softschools-rotational-ke.
  */

@@ -856,7 +856,7 @@ describe("documentation and bibliography", () => {
     for (const [, doc, name] of docs) {
       if (name === "requireDriveType" || name === "validateDrivetrainInput" || doc!.includes("@internal")) continue;
       expect(doc, name).toMatch(/@returns/);
-      expect(doc, name).toMatch(/Example/);
+      expect(doc, name).toMatch(/@example|Example/);
       expect(doc, name).toMatch(/Sources:/);
       const keys = [...doc!.split("Sources:")[1]!.matchAll(/[a-z0-9]+(?:-[a-z0-9]+)+/g)].map((m) => m[0]);
       for (const key of keys) expect(isSourceKey(key), `${name}: ${key}`).toBe(true);
