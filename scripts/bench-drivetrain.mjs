@@ -10,27 +10,10 @@
  * The last case runs a sweep as the spin-up page does: point by point, in batches of about 8 ms,
  * and reports the longest batch (how long the page can go without answering input).
  */
-import { loadavg } from "node:os";
+import { printTimings } from "./bench-timing.mjs";
 import { DEMO_SPINNER, DEMO_WEAPON } from "../calc/drivetrain/demo.ts";
 import { markSweepOptimum, sweepDrivetrain, sweepPoint, sweepValues } from "../calc/drivetrain/compare.ts";
 import { simulateSpinUp } from "../calc/drivetrain/simulate.ts";
-
-/** Runs `fn` `warmup` times untimed, then `runs` times timed; returns times in ms, sorted, and the last result. */
-function time(fn, runs, warmup) {
-  let last;
-  for (let i = 0; i < warmup; i++) last = fn();
-  const times = [];
-  for (let i = 0; i < runs; i++) {
-    const start = performance.now();
-    last = fn();
-    times.push(performance.now() - start);
-  }
-  times.sort((a, b) => a - b);
-  return { times, last };
-}
-
-const quantile = (sorted, q) => sorted[Math.min(sorted.length - 1, Math.floor(q * sorted.length))];
-const ms = (x) => `${x.toFixed(3)} ms`;
 
 const cases = [
   {
@@ -103,22 +86,4 @@ const cases = [
   },
 ];
 
-console.log(
-  `Spin-up simulation timing — Node ${process.version}, load average ${loadavg()
-    .map((x) => x.toFixed(2))
-    .join(" ")}`,
-);
-console.log("");
-let missed = 0;
-for (const c of cases) {
-  const { times, last } = time(c.fn, c.runs, c.warmup);
-  const median = quantile(times, 0.5);
-  const ok = median < c.target;
-  if (!ok) missed++;
-  console.log(c.label);
-  console.log(
-    `  median ${ms(median)}   p90 ${ms(quantile(times, 0.9))}   min ${ms(times[0])}   over ${c.runs} runs   target < ${c.target} ms: ${ok ? "met" : "MISSED"}   (${c.note(last)})`,
-  );
-}
-console.log("");
-console.log(missed === 0 ? "All targets met." : `${missed} target(s) missed.`);
+printTimings("Spin-up simulation timing", cases);

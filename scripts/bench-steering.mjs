@@ -10,25 +10,9 @@
  * Targets: the 3 s simulation under 20 ms; the default map (7 × 6 cells) under 150 ms. Timings on a
  * shared machine vary; the median and the 90th percentile are printed, with the load average.
  */
-import { loadavg } from "node:os";
+import { printTimings } from "./bench-timing.mjs";
 import { DEMO_STEERING_SPINNER, simulateSteering, steeringPath, sweepSteering } from "../calc/steering/index.ts";
 
-/** Runs `fn` `warmup` times untimed, then `runs` times timed; returns times in ms, sorted, and the last result. */
-function time(fn, runs, warmup) {
-  let last;
-  for (let i = 0; i < warmup; i++) last = fn();
-  const times = [];
-  for (let i = 0; i < runs; i++) {
-    const start = performance.now();
-    last = fn();
-    times.push(performance.now() - start);
-  }
-  times.sort((a, b) => a - b);
-  return { times, last };
-}
-
-const quantile = (sorted, q) => sorted[Math.min(sorted.length - 1, Math.floor(q * sorted.length))];
-const ms = (x) => `${x.toFixed(3)} ms`;
 const steps = (r) => `${r.solver.steps} steps, ${r.solver.evaluations} evaluations, ${r.pulseEdges} pulse edges, ${r.revolutions.length} revolutions`;
 
 const cases = [
@@ -74,22 +58,4 @@ const cases = [
   },
 ];
 
-console.log(
-  `Steering simulation timing — Node ${process.version}, load average ${loadavg()
-    .map((x) => x.toFixed(2))
-    .join(" ")}`,
-);
-console.log("");
-let missed = 0;
-for (const c of cases) {
-  const { times, last } = time(c.fn, c.runs, c.warmup);
-  const median = quantile(times, 0.5);
-  const ok = median < c.target;
-  if (!ok) missed++;
-  console.log(c.label);
-  console.log(
-    `  median ${ms(median)}   p90 ${ms(quantile(times, 0.9))}   min ${ms(times[0])}   over ${c.runs} runs   target < ${c.target} ms: ${ok ? "met" : "MISSED"}   (${c.note(last)})`,
-  );
-}
-console.log("");
-console.log(missed === 0 ? "All targets met." : `${missed} target(s) missed.`);
+printTimings("Steering simulation timing", cases);

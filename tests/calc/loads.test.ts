@@ -56,7 +56,7 @@ import {
   type FastenerCheckInput,
   type RimCheckInput,
 } from "../../calc/loads/index.ts";
-import { expectParamError, invalidInputArb } from "../support/arbitraries.ts";
+import { expectParamError, expectWellDeclared, invalidInputArb } from "../support/arbitraries.ts";
 
 function expectClose(actual: number, expected: number, rtol: number): void {
   expect(Math.abs(actual - expected)).toBeLessThanOrEqual(rtol * Math.abs(expected));
@@ -576,15 +576,7 @@ describe("inputs", () => {
   }
 
   it("declares a unique URL key, a label and a default inside the range for every field", () => {
-    for (const specs of [fastenerCheckInputs, rimCheckInputs] as InputSpecs[]) {
-      const keys = Object.values(specs).map((s) => s.urlKey);
-      expect(new Set(keys).size).toBe(keys.length);
-      for (const spec of Object.values(specs)) {
-        expect(spec.label.length).toBeGreaterThan(0);
-        expect(spec.default).toBeGreaterThanOrEqual(spec.min);
-        expect(spec.default).toBeLessThanOrEqual(spec.max);
-      }
-    }
+    for (const specs of [fastenerCheckInputs, rimCheckInputs] as InputSpecs[]) expectWellDeclared(specs);
   });
 
   it("gives a finite result for every valid fastener input", () => {

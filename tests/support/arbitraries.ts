@@ -6,7 +6,7 @@ import { expect } from "vitest";
 import fc from "fast-check";
 import { CalcInputError } from "../../calc/core/errors.ts";
 import type { AnyCalculator, AnyValues } from "../../calc/core/calculator.ts";
-import type { InputSpec } from "../../calc/core/inputs.ts";
+import type { InputSpec, InputSpecs } from "../../calc/core/inputs.ts";
 import { MATERIAL_IDS } from "../../calc/materials/densities.ts";
 import type { LayoutPart, PartShape } from "../../calc/mass/parts.ts";
 
@@ -73,6 +73,17 @@ export function invalidInputArb(spec: InputSpec): fc.Arbitrary<number> {
   ];
   if (spec.integer) options.push(fc.double({ min: spec.min, max: spec.max, noNaN: true }).filter((v) => !Number.isInteger(v)));
   return fc.oneof(...options);
+}
+
+/** Fails unless every input of `specs` has a label, a URL key no other input uses, and a default inside its range. */
+export function expectWellDeclared(specs: InputSpecs): void {
+  const all = Object.values(specs);
+  expect(new Set(all.map((s) => s.urlKey)).size).toBe(all.length);
+  for (const spec of all) {
+    expect(spec.label.length).toBeGreaterThan(0);
+    expect(spec.default).toBeGreaterThanOrEqual(spec.min);
+    expect(spec.default).toBeLessThanOrEqual(spec.max);
+  }
 }
 
 /** Fails unless `run` throws a CalcInputError naming `param` whose message starts "<param> must be". */

@@ -1,4 +1,5 @@
 import { describe, expect, it } from "vitest";
+import { expectWellDeclared } from "../../support/arbitraries.ts";
 import fc from "fast-check";
 import { CalcInputError } from "../../../calc/core/errors.ts";
 import { STANDARD_GRAVITY } from "../../../calc/core/constants.ts";
@@ -270,13 +271,7 @@ describe("differential-drive turn rate", () => {
 
 describe("weaponTurnCheck", () => {
   it("declares a unique URL key, a label and a default inside the range for every field", () => {
-    const specs = Object.values(weaponTurnInputs);
-    expect(new Set(specs.map((s) => s.urlKey)).size).toBe(specs.length);
-    for (const spec of specs) {
-      expect(spec.label.length).toBeGreaterThan(0);
-      expect(spec.default).toBeGreaterThanOrEqual(spec.min);
-      expect(spec.default).toBeLessThanOrEqual(spec.max);
-    }
+    expectWellDeclared(weaponTurnInputs);
   });
 
   it("uses the invented demo as its defaults", () => {

@@ -1,4 +1,5 @@
 import { describe, expect, it } from "vitest";
+import { expectWellDeclared } from "../../support/arbitraries.ts";
 import fc from "fast-check";
 import { biteDepth } from "../../../calc/drivetrain/figures.ts";
 import { rpmToRadPerSecond } from "../../../calc/core/units.ts";
@@ -237,13 +238,7 @@ describe("weaponHit", () => {
   const DEFAULTS = defaultsOf(weaponHitInputs) as WeaponHitInput;
 
   it("declares a unique URL key, a label and a default inside the range for every field", () => {
-    const specs = Object.values(weaponHitInputs);
-    expect(new Set(specs.map((s) => s.urlKey)).size).toBe(specs.length);
-    for (const spec of specs) {
-      expect(spec.label.length).toBeGreaterThan(0);
-      expect(spec.default).toBeGreaterThanOrEqual(spec.min);
-      expect(spec.default).toBeLessThanOrEqual(spec.max);
-    }
+    expectWellDeclared(weaponHitInputs);
     expect(DEMO_HIT).toEqual(DEFAULTS);
   });
 
