@@ -1,7 +1,7 @@
 /**
  * The model behind a calculator, built from its descriptor (calc/core/calculator.ts): a text signal
  * per field, a signal per choice and per extra value, the values in SI when everything reads, the
- * calc entry's result and cards (or the error it raised, mapped to its field), the link state, and
+ * calc entry's result (or the error it raised, mapped to its field), the link state, and
  * saving into a design. Widgets read and format; they never compute. No DOM.
  */
 import {
@@ -16,7 +16,6 @@ import {
 } from "../../calc/core/calculator.ts";
 import type { ChoiceSpecs } from "../../calc/core/choices.ts";
 import type { InputSpec, InputSpecs } from "../../calc/core/inputs.ts";
-import type { CheckCard } from "../../calc/core/check.ts";
 import type { UnitSystem } from "../../calc/core/units.ts";
 import { createFieldsModel, fieldMessage } from "./fields.ts";
 import { batch, computed, signal, type ReadonlySignal, type Signal } from "./reactive.ts";
@@ -38,8 +37,6 @@ export type FieldError = { field: string | null; message: string } | null;
 export interface Outcome<R> {
   result: R | null;
   error: FieldError;
-  /** The calculator's cards for the values: the first is its verdict. */
-  cards: CheckCard[];
 }
 
 /**
@@ -91,12 +88,11 @@ export function createCalculatorModel<S extends InputSpecs, C extends ChoiceSpec
 
   const outcome = computed((): Outcome<R> => {
     const current = values.value;
-    if (!current) return { result: null, error: null, cards: [] };
+    if (!current) return { result: null, error: null };
     try {
-      const result = calc.run(current);
-      return { result, error: null, cards: calc.cards(current, result, fields.system.value) };
+      return { result: calc.run(current), error: null };
     } catch (error) {
-      return { result: null, error: fieldMessage(error, labels, fields.system.value), cards: [] };
+      return { result: null, error: fieldMessage(error, labels, fields.system.value) };
     }
   });
 
