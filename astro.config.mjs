@@ -12,6 +12,7 @@ import { katexFontPreload } from "./scripts/site/katex-fonts.mjs";
 import { contentSecurityPolicyPlugin } from "./scripts/site/content-security-policy.mjs";
 import { offlineAndSearch } from "./scripts/site/offline-and-search.mjs";
 import { precompressPlugin } from "./scripts/site/precompress.mjs";
+import { islandEntries } from "./scripts/site/island-entries.mjs";
 
 /**
  * BASE: the sub-path the site is served under ("/" by default; e.g. BASE=/handbook/ for
@@ -29,10 +30,10 @@ export default defineConfig({
   base,
   trailingSlash: "ignore",
   build: { format: "directory", inlineStylesheets: "never" },
-  // The build:done steps run in this order: font preloads (HTML), the security policy (hashes the
-  // final HTML's inline scripts), search index and offline cache (versioned by the final files),
+  // The build:done steps run in this order: each page's calculator scripts and their preloads
+  // (HTML), font preloads (HTML), the security policy (hashes the final HTML's inline scripts), search index and offline cache (versioned by the final files),
   // then the compressed copies of everything.
-  integrations: [preact(), mdx(), katexFontPreload(), contentSecurityPolicyPlugin(), offlineAndSearch(), precompressPlugin()],
+  integrations: [preact(), mdx(), islandEntries(), katexFontPreload(), contentSecurityPolicyPlugin(), offlineAndSearch(), precompressPlugin()],
   markdown: {
     processor: unified({
       remarkPlugins: [remarkMath],
@@ -44,8 +45,17 @@ export default defineConfig({
     plugins: [
       katexWoff2Only(),
       {
-        // Pages list their calculator's chunks as <link rel="modulepreload"> at build time
-        // (scripts/site/modulepreload.mjs), so the bundler's run-time preload helper is not needed.
+        // With module preloading off, the bundler's helper around each dynamic import() has nothing
+        // left to do (it would preload the chunk's dependencies and report failures as an event) but
+        // still costs 0.7 KB gzip on every calculator page: use a plain import instead. Guarded by
+        // the page-weight test (tests/build/site.test.ts) should the helper's module id change.
+        name: "whirlbook:plain-dynamic-import",
+        enforce: "pre",
+        load: (id) => (id === "\0vite/preload-helper.js" ? "export const __vitePreload = (load) => load();" : null),
+      },
+      {
+        // Pages list their calculators' chunks as <link rel="modulepreload"> at build time
+        // (scripts/site/island-entries.mjs), so the bundler's run-time preload helper is not needed.
         name: "whirlbook:no-preload-helper",
         configEnvironment: (name) => (name === "client" ? { build: { modulePreload: false } } : undefined),
       },
@@ -54,6 +64,9 @@ export default defineConfig({
       assetsInlineLimit: 0,
       sourcemap: process.env.SOURCEMAP === "1",
       rolldownOptions: {
+        // calc/ is pure by rule (no DOM, no I/O, nothing runs on import): a calc module a chunk
+        // imports but does not use is left out instead of being kept for its "side effects".
+        treeshake: { moduleSideEffects: [{ test: /[\\/]calc[\\/][^?]*\.ts(\?.*)?$/, sideEffects: false }] },
         output: {
           // Every calculator page needs the same runtime (Preact, reactive state, units, the shared
           // calculator parts): one chunk for it compresses better than nine small ones.
@@ -61,7 +74,7 @@ export default defineConfig({
             groups: [
               {
                 name: "runtime",
-                test: /node_modules[\\/](preact|d3-array)[\\/]|calc[\\/]core[\\/](units|inputs|errors|constants|check|calculator|permalink|choices|spec-check)\.ts|components[\\/]calc-ui[\\/]/,
+                test: /node_modules[\\/](preact|d3-array)[\\/]|calc[\\/]core[\\/](units|inputs|errors|constants|calculator|permalink|choices|spec-check)\.ts|components[\\/]calc-ui[\\/]/,
               },
             ],
           },

@@ -1,14 +1,15 @@
 // A Node module hook that expands `import.meta.glob("./dir/*.ts", { eager: true })` the way the
 // bundler does, so calc/ modules that find their siblings by file name (calc/design/registry.ts)
 // also run under plain Node: the command line, scripts and benchmarks. Only the eager form with a
-// single `*` in the file name is supported, which is all calc/ uses.
+// single `*` in the file name is supported, which is all calc/ uses; `import: "name"` takes that
+// export of each module, and `query` (a bundler-only module id, for chunking) is ignored.
 // Usage: `import { register } from "node:module"; register("./node-glob.mjs", import.meta.url);`
 // or `node --import ./scripts/node-glob-register.mjs …`.
 import { readdirSync } from "node:fs";
 import { fileURLToPath, pathToFileURL } from "node:url";
 import { dirname, join } from "node:path";
 
-const GLOB = /import\.meta\.glob(?:<[^>]*>)?\(\s*(["'])([^"']+)\1\s*,\s*\{\s*eager:\s*true\s*\}\s*\)/g;
+const GLOB = /import\.meta\.glob(?:<[^>]*>)?\(\s*(["'])([^"']+)\1\s*,\s*\{\s*eager:\s*true\s*((?:,\s*(?:import|query):\s*"[^"]*"\s*)*)\}\s*\)/g;
 
 export async function load(url, context, nextLoad) {
   const result = await nextLoad(url, context);
@@ -17,7 +18,8 @@ export async function load(url, context, nextLoad) {
   if (!source.includes("import.meta.glob")) return result;
   const here = dirname(fileURLToPath(url));
   const imports = [];
-  const expanded = source.replace(GLOB, (_, _q, pattern) => {
+  const expanded = source.replace(GLOB, (_, _q, pattern, options) => {
+    const name = /import:\s*"([^"]*)"/.exec(options)?.[1];
     const star = pattern.lastIndexOf("*");
     if (star < 0 || pattern.indexOf("*") !== star || pattern.slice(0, star).includes("*")) throw new Error(`node-glob: unsupported pattern ${pattern}`);
     const dir = pattern.slice(0, pattern.lastIndexOf("/", star) + 1);
@@ -26,10 +28,10 @@ export async function load(url, context, nextLoad) {
     const names = readdirSync(join(here, dir))
       .filter((name) => name.startsWith(prefix) && name.endsWith(suffix) && name.length >= prefix.length + suffix.length)
       .sort();
-    const entries = names.map((name) => {
+    const entries = names.map((file) => {
       const id = `__glob_${imports.length}`;
-      imports.push(`import * as ${id} from ${JSON.stringify(pathToFileURL(join(here, dir, name)).href)};`);
-      return `${JSON.stringify(dir + name)}: ${id}`;
+      imports.push(`import * as ${id} from ${JSON.stringify(pathToFileURL(join(here, dir, file)).href)};`);
+      return `${JSON.stringify(dir + file)}: ${name ? `${id}[${JSON.stringify(name)}]` : id}`;
     });
     return `{ ${entries.join(", ")} }`;
   });

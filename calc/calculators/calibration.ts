@@ -3,7 +3,7 @@
  * speed, a = r·ω² + b, to get the firmware's radius and offset from logged readings.
  */
 import { figureOf } from "../core/check.ts";
-import { defineCalculator, defineForm, type ExtraSpec, type ValueProblem } from "../core/calculator.ts";
+import { defineCalculator, defineForm, type ExtraSpec, type ValueProblem, type ValuesOf } from "../core/calculator.ts";
 import { formatNumber, formatQuantity } from "../core/units.ts";
 import { CALIBRATION_ROWS_MAX, decodeCalibrationRows, encodeCalibrationRows } from "../heading/calibration-rows.ts";
 import { type CalibrationRow, calibrationFitInputs, demoCalibrationRows, fitCalibration } from "../heading/calibration.ts";
@@ -51,8 +51,14 @@ export const form = /* @__PURE__ */ defineForm({
   pageKeys: ["su", "au"],
 });
 
+/** What the calculator computes: its page runs this; the cards below speak for the build sheet and the command line. */
+export function run(values: ValuesOf<typeof form>) {
+  const { rows, ...options } = values;
+  return fitCalibration(rows, options);
+}
+
 export default /* @__PURE__ */ defineCalculator(form, {
-  run: ({ rows: readings, ...options }) => fitCalibration(readings, options),
+  run,
   cards(_values, fit, system) {
     const len = (v: number) => formatQuantity(v, "length", { system, significant: 4 }).text;
     const flagged = fit.spikes.flagged.length;

@@ -52,8 +52,11 @@ export const form = /* @__PURE__ */ defineForm({
   choices: fastenerChoices,
 });
 
+/** What the calculator computes: its page runs this; the cards below speak for the build sheet and the command line. */
+export const run = fastenerCheck;
+
 export default /* @__PURE__ */ defineCalculator(form, {
-  run: fastenerCheck,
+  run,
   cards(values, r, system) {
     const q = (v: number, kind: "force" | "angularSpeed" | "stress") => formatQuantity(v, kind, { system }).text;
     return [

@@ -10,8 +10,11 @@ import { headingDriftForm } from "../heading/drift-inputs.ts";
 
 export const form = headingDriftForm;
 
+/** What the calculator computes: its page runs this; the cards below speak for the build sheet and the command line. */
+export const run = headingDrift;
+
 export default /* @__PURE__ */ defineCalculator(form, {
-  run: headingDrift,
+  run,
   cards(values, r, system) {
     const q = (v: number, kind: "angularSpeed" | "angle", unit?: "deg/s") => formatQuantity(v, kind, { system, unit }).text;
     const drift = r.atSpeed.driftRate;

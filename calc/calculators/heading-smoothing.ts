@@ -17,8 +17,11 @@ export const form = /* @__PURE__ */ defineForm({
   inputs: headingSmoothingInputs,
 });
 
+/** What the calculator computes: its page runs this; the cards below speak for the build sheet and the command line. */
+export const run = headingSmoothing;
+
 export default /* @__PURE__ */ defineCalculator(form, {
-  run: headingSmoothing,
+  run,
   cards(_values, r, system) {
     return [
       {

@@ -16,8 +16,11 @@ export const form = /* @__PURE__ */ defineForm({
   inputs: headingTimingInputs,
 });
 
+/** What the calculator computes: its page runs this; the cards below speak for the build sheet and the command line. */
+export const run = headingTiming;
+
 export default /* @__PURE__ */ defineCalculator(form, {
-  run: headingTiming,
+  run,
   cards(values, r, system) {
     const deg = (v: number) => formatQuantity(v, "angle", { system }).text;
     const hz = (v: number) => formatQuantity(v, "frequency", { system }).text;

@@ -5,7 +5,7 @@
  */
 import { figureOf } from "../core/check.ts";
 import { defineChoices } from "../core/choices.ts";
-import { defineCalculator, defineForm, type ExtraSpec, type ValueProblem } from "../core/calculator.ts";
+import { defineCalculator, defineForm, type ExtraSpec, type ValueProblem, type ValuesOf } from "../core/calculator.ts";
 import { CalcInputError } from "../core/errors.ts";
 import { formatNumber, formatQuantity, type QuantityKind } from "../core/units.ts";
 import type { MountingPoint } from "../mass/counterweight.ts";
@@ -106,9 +106,14 @@ export const form = /* @__PURE__ */ defineForm({
   extras: { parts, candidates },
 });
 
+/** What the calculator computes: its page runs this; the cards below speak for the build sheet and the command line. */
+export function run(values: ValuesOf<typeof form>) {
+  return massBalance({ ...values, candidates: values.candidates.length ? values.candidates : undefined });
+}
+
 export default /* @__PURE__ */ defineCalculator(form, {
   present: (values) => values.parts.length > 0,
-  run: (values) => massBalance({ ...values, candidates: values.candidates.length ? values.candidates : undefined }),
+  run,
   cards(values, r, system) {
     const q = (v: number, kind: QuantityKind) => formatQuantity(v, kind, { system }).text;
     const chosen = values.balanceGrade;

@@ -17,8 +17,11 @@ export const form = /* @__PURE__ */ defineForm({
   inputs: opposedSensorsInputs,
 });
 
+/** What the calculator computes: its page runs this; the cards below speak for the build sheet and the command line. */
+export const run = opposedSensorsCheck;
+
 export default /* @__PURE__ */ defineCalculator(form, {
-  run: opposedSensorsCheck,
+  run,
   cards(values, r, system) {
     const off = formatQuantity(values.offset, "length", { system }).text;
     const single = r.singleWorstPerRevolution;

@@ -54,7 +54,10 @@ export const form = /* @__PURE__ */ defineForm({
   inputs: accelerometerPlacementInputs,
 });
 
+/** What the calculator computes: its page runs this; the cards below speak for the build sheet and the command line. */
+export const run = accelerometerPlacement;
+
 export default /* @__PURE__ */ defineCalculator(form, {
-  run: accelerometerPlacement,
+  run,
   cards: (values, result, system) => [card(values, result, system)],
 });

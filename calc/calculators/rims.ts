@@ -32,8 +32,11 @@ export const form = /* @__PURE__ */ defineForm({
   pageKeys: ["mat"],
 });
 
+/** What the calculator computes: its page runs this; the cards below speak for the build sheet and the command line. */
+export const run = rimCheck;
+
 export default /* @__PURE__ */ defineCalculator(form, {
-  run: rimCheck,
+  run,
   cards(values, r, system) {
     const q = (v: number, kind: "angularSpeed" | "stress" | "speed") => formatQuantity(v, kind, { system }).text;
     return [

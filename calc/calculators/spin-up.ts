@@ -6,7 +6,7 @@
  */
 import { figureOf } from "../core/check.ts";
 import { defineChoices } from "../core/choices.ts";
-import { defineCalculator, defineForm } from "../core/calculator.ts";
+import { defineCalculator, defineForm, type ValuesOf } from "../core/calculator.ts";
 import { fieldUnit } from "../core/inputs.ts";
 import { MAX_VALUE_LENGTH, quoteForNotice } from "../core/permalink.ts";
 import { formatNumber, formatQuantity, quantityToText, type QuantityKind, type UnitSystem } from "../core/units.ts";
@@ -36,8 +36,13 @@ export const form = /* @__PURE__ */ defineForm({
   applies: (input, values) => applies(input, values.driveType ?? "weapon"),
 });
 
+/** What the calculator computes: its page runs this; the cards below speak for the build sheet and the command line. */
+export function run(values: ValuesOf<typeof form>) {
+  return simulateSpinUp(values, { series: false });
+}
+
 export default /* @__PURE__ */ defineCalculator(form, {
-  run: (values) => simulateSpinUp(values, { series: false }),
+  run,
   cards(_values, r, system) {
     const q = (v: number, kind: QuantityKind) => formatQuantity(v, kind, { system }).text;
     // At the operating (target) speed when it is reached, else at the top speed the drive gets to.

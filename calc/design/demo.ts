@@ -4,8 +4,8 @@
  * Its sensor radius and inertia come from its own mass layout, so the sections agree.
  */
 import { initialValues } from "../core/calculator.ts";
-import fastenerCalculator from "../calculators/fasteners.ts";
-import rimCalculator from "../calculators/rims.ts";
+import { form as fastenerCalculator } from "../calculators/fasteners.ts";
+import { form as rimCalculator } from "../calculators/rims.ts";
 import { DESIGN_FORMAT, DESIGN_VERSION, type Design } from "./design.ts";
 import { demoRobotParts } from "../mass/demo.ts";
 import { massBalanceInputs } from "../mass/mass-balance.ts";

@@ -6,12 +6,13 @@
  */
 import type { AnyCalculator } from "../core/calculator.ts";
 
-const modules = import.meta.glob<{ default: AnyCalculator }>("../calculators/*.ts", { eager: true });
+// Imported under their own module ids ("?registry"): a chapter imports only a descriptor's `form`
+// and `run`, and the bundler can then leave the cards (build-sheet sentences) out of its pages
+// instead of putting them in a chunk the chapter shares with the build sheet.
+const modules = import.meta.glob<AnyCalculator>("../calculators/*.ts", { eager: true, import: "default", query: "?registry" });
 
 /** The calculators, in build-sheet order. */
-export const CALCULATORS: readonly AnyCalculator[] = Object.values(modules)
-  .map((m) => m.default)
-  .sort((a, b) => a.order - b.order);
+export const CALCULATORS: readonly AnyCalculator[] = Object.values(modules).sort((a, b) => a.order - b.order);
 
 const BY_ID = new Map(CALCULATORS.map((c) => [c.id, c]));
 

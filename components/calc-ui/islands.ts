@@ -1,17 +1,16 @@
 /**
- * Brings a chapter's calculators to life: every `[data-island]` element holds the HTML its widget
- * rendered at build time and its props as JSON; the widget module (components/calculators/<name>.tsx)
- * loads on its own, so a page downloads only the calculators it shows, and hydrates that HTML.
+ * The development server's calculator loader: every `[data-island]` element holds the HTML its
+ * widget rendered on the server and its props as JSON; the widget module
+ * (components/calculators/<name>.tsx) loads by file name and hydrates that HTML. A built site does
+ * not use this file: the build gives each calculator its own module script
+ * (scripts/site/island-entries.mjs).
  */
-import { h, hydrate, type ComponentType } from "preact";
+import type { ComponentType } from "preact";
+import { hydrateIslands } from "./hydrate.ts";
 
 const widgets = import.meta.glob<{ default: ComponentType<object> }>("../calculators/*.tsx");
 
 for (const element of document.querySelectorAll<HTMLElement>("[data-island]")) {
   const load = widgets[`../calculators/${element.dataset.island}.tsx`];
-  if (!load) continue;
-  void load().then((widget) => {
-    hydrate(h(widget.default, JSON.parse(element.dataset.props || "{}")), element);
-    element.dataset.hydrated = "";
-  });
+  if (load) void load().then((widget) => hydrateIslands(element.dataset.island!, widget.default));
 }

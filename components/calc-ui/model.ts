@@ -1,13 +1,13 @@
 /**
- * The model behind a calculator, built from its descriptor (calc/core/calculator.ts): a text signal
+ * The model behind a calculator, built from its descriptor's form and calc entry (calc/calculators/:
+ * `form`, `run`; the cards stay with the build sheet): a text signal
  * per field, a signal per choice and per extra value, the values in SI when everything reads, the
  * calc entry's result (or the error it raised, mapped to its field), the link state, and
  * saving into a design. Widgets read and format; they never compute. No DOM.
  */
 import {
-  type AnyCalculator,
   type AnyValues,
-  type Calculator,
+  type CalculatorForm,
   type CalculatorValues,
   type ExtraSpecs,
   type ExtraValues,
@@ -50,7 +50,8 @@ export interface PageState {
 }
 
 export function createCalculatorModel<S extends InputSpecs, C extends ChoiceSpecs, E extends ExtraSpecs, R>(
-  calc: Calculator<S, C, E, R>,
+  calc: CalculatorForm<S, C, E>,
+  run: (values: CalculatorValues<S, C, E>) => R,
   initialSystem: UnitSystem = "metric",
   page?: PageState,
 ) {
@@ -90,7 +91,7 @@ export function createCalculatorModel<S extends InputSpecs, C extends ChoiceSpec
     const current = values.value;
     if (!current) return { result: null, error: null };
     try {
-      return { result: calc.run(current), error: null };
+      return { result: run(current), error: null };
     } catch (error) {
       return { result: null, error: fieldMessage(error, labels, fields.system.value) };
     }
@@ -139,6 +140,6 @@ export function createCalculatorModel<S extends InputSpecs, C extends ChoiceSpec
     applyQuery,
     queryFor,
     /** Saves the current values into a design; resolves to the message to show. */
-    save: () => saveToDesign(calc as unknown as AnyCalculator, values.value),
+    save: () => saveToDesign(calc, values.value),
   };
 }

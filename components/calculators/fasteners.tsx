@@ -4,7 +4,7 @@
  * break, and a plot of bolt stress against speed.
  */
 import { useEffect, useMemo } from "preact/hooks";
-import fastenerCalculator, { fastenerChoices as FASTENER_CHOICES } from "../../calc/calculators/fasteners.ts";
+import { form as fastenerCalculator, fastenerChoices as FASTENER_CHOICES, run as fastenerRun } from "../../calc/calculators/fasteners.ts";
 import { fastenerStressCurve, type fastenerCheckInputs, type FastenerCheck } from "../../calc/loads/bolts.ts";
 import { formatNumber, radPerSecondToRpm } from "../../calc/core/units.ts";
 import { QuantityField } from "../calc-ui/QuantityField.tsx";
@@ -29,7 +29,7 @@ const CURVE_PAST_LIMIT = 1.15;
 const CURVE_MAX_MULTIPLE = 10;
 
 export function createFastenerModel() {
-  const model = createCalculatorModel(fastenerCalculator);
+  const model = createCalculatorModel(fastenerCalculator, fastenerRun);
   /** Bolt stress [Pa] against speed [rad/s], from standstill past the ultimate speed where it fits. */
   const curve = computed(() => {
     const current = model.values.value;

@@ -5,8 +5,8 @@
  * against an opposed pair when the spin centre is uncertain.
  */
 import { useEffect, useMemo } from "preact/hooks";
-import driftCalculator from "../../calc/calculators/heading-drift.ts";
-import opposedCalculator from "../../calc/calculators/opposed-sensors.ts";
+import { form as driftCalculator, run as driftRun } from "../../calc/calculators/heading-drift.ts";
+import { form as opposedCalculator, run as opposedRun } from "../../calc/calculators/opposed-sensors.ts";
 import type { HeadingDriftResult } from "../../calc/heading/drift-budget.ts";
 import type { headingDriftInputs } from "../../calc/heading/drift-inputs.ts";
 import type { opposedSensorsInputs } from "../../calc/heading/opposed.ts";
@@ -27,8 +27,8 @@ export const island = "heading-drift";
 
 /** The drift budget (plain link keys) and the opposed-sensors comparison (keys "p."). */
 export function createDriftModel() {
-  const drift = createCalculatorModel(driftCalculator);
-  const pair = createCalculatorModel(opposedCalculator);
+  const drift = createCalculatorModel(driftCalculator, driftRun);
+  const pair = createCalculatorModel(opposedCalculator, opposedRun);
   /** The drift plot's curves [rpm, °/s]: exact drift, and the linearised speed-proportional and offset parts. */
   const curves = computed(() => {
     const result = drift.outcome.value.result;

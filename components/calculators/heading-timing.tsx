@@ -5,8 +5,8 @@
  * comparison of median windows and a trade-off plot over the smoothing factor α.
  */
 import { useEffect, useMemo } from "preact/hooks";
-import timingCalculator from "../../calc/calculators/heading-timing.ts";
-import smoothingCalculator from "../../calc/calculators/heading-smoothing.ts";
+import { form as timingCalculator, run as timingRun } from "../../calc/calculators/heading-timing.ts";
+import { form as smoothingCalculator, run as smoothingRun } from "../../calc/calculators/heading-smoothing.ts";
 import type { HeadingTimingResult, headingTimingInputs } from "../../calc/heading/timing.ts";
 import { headingSmoothing, smoothingTradeoffSeries, type headingSmoothingInputs } from "../../calc/heading/smoothing.ts";
 import { formatNumber, formatQuantity, fromSI } from "../../calc/core/units.ts";
@@ -29,8 +29,8 @@ const MEDIAN_WINDOWS = [1, 3, 5];
 
 /** The loop timing (plain link keys) and the smoothing (keys "s."), with the median-window comparison and the trade-off over α. */
 export function createTimingModel() {
-  const timing = createCalculatorModel(timingCalculator);
-  const smoothing = createCalculatorModel(smoothingCalculator);
+  const timing = createCalculatorModel(timingCalculator, timingRun);
+  const smoothing = createCalculatorModel(smoothingCalculator, smoothingRun);
   const labels = Object.fromEntries(Object.entries(smoothingCalculator.inputs).map(([k, s]) => [k, s.label]));
   // headingSmoothing names the median window "medianLength"; smoothingFigures' helpers call it "windowLength".
   labels.windowLength = smoothingCalculator.inputs.medianLength.label;

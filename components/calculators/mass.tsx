@@ -19,7 +19,7 @@ import { createMassModel, type MassError, type MassModel, type ModeKey, type Sna
 import { needsGivenMass, partFields, PART_INPUTS, type PartModel } from "../mass/parts.ts";
 import { TopView } from "../mass/TopView.tsx";
 import { linkFor } from "../../calc/core/calculator.ts";
-import massCalculator from "../../calc/calculators/mass.ts";
+import { form as massCalculator } from "../../calc/calculators/mass.ts";
 import { headingDriftForm as headingDrift } from "../../calc/heading/drift-inputs.ts";
 import { siteUrl } from "../calc-ui/site.ts";
 

@@ -3,7 +3,7 @@
  * one other part see at top speed, with a plot of acceleration against speed.
  */
 import { useEffect, useMemo } from "preact/hooks";
-import placement from "../../calc/calculators/placement.ts";
+import { form as placement, run as placementRun } from "../../calc/calculators/placement.ts";
 import { centripetalAccelerationCurve, type AccelerometerPlacement } from "../../calc/rotation/rotation.ts";
 import { formatNumber, formatQuantity, fromSI, radPerSecondToRpm, type UnitSystem } from "../../calc/core/units.ts";
 import { QuantityField } from "../calc-ui/QuantityField.tsx";
@@ -21,7 +21,7 @@ export const island = "placement";
 const CURVE_PAST_TOP = 1.2;
 
 export function createPlacementModel() {
-  const model = createCalculatorModel(placement);
+  const model = createCalculatorModel(placement, placementRun);
   /** Acceleration [g] against speed [rpm] at the chosen radius, from 0 to 1.2 × top speed. */
   const curve = computed(() => {
     const values = model.values.value;

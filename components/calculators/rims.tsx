@@ -4,7 +4,7 @@
  * radial and hoop stress across the radius.
  */
 import { useEffect, useMemo } from "preact/hooks";
-import rimCalculator, { rimChoices } from "../../calc/calculators/rims.ts";
+import { form as rimCalculator, rimChoices, run as rimRun } from "../../calc/calculators/rims.ts";
 import { DEFAULT_RIM_MATERIAL, rimStressProfile, type rimCheckInputs, type RimCheck, type RimMaterialValues } from "../../calc/loads/rims.ts";
 import { defaultText } from "../../calc/core/inputs.ts";
 import type { ChoiceSpec } from "../../calc/core/choices.ts";
@@ -66,7 +66,7 @@ export function createRimModel(materials: readonly MaterialChoice[]) {
     },
     write: (): Record<string, string> => ({ mat: material.value }),
   };
-  const model = createCalculatorModel(rimCalculator, "metric", page);
+  const model = createCalculatorModel(rimCalculator, rimRun, "metric", page);
   const { fields } = model;
   /** The material as the fields show it: the picked row while all four fields still hold its values, else custom. */
   const material = computed((): string => {

@@ -5,7 +5,17 @@
  * variants ("variants=2&b.ratio=3") and the sweep ("s.p=ratio&s.from=1…"), as
  * `readSpinUpView`/`spinUpViewKeys` read and write them. No DOM.
  */
-import spinUp, { applies, readSpinUpView, SPINNER_ONLY, spinUpViewKeys, SWEEP_SCOPE, SWEEPABLE, VARIANT_SCOPES } from "../../calc/calculators/spin-up.ts";
+import {
+  applies,
+  form as spinUp,
+  run as spinUpRun,
+  readSpinUpView,
+  SPINNER_ONLY,
+  spinUpViewKeys,
+  SWEEP_SCOPE,
+  SWEEPABLE,
+  VARIANT_SCOPES,
+} from "../../calc/calculators/spin-up.ts";
 import { DEMO_SPINNER, DEMO_WEAPON } from "../../calc/drivetrain/demo.ts";
 import type { DriveType, DrivetrainInput, DrivetrainParameter } from "../../calc/drivetrain/inputs.ts";
 import type { SpinUpResult } from "../../calc/drivetrain/results.ts";
@@ -37,7 +47,7 @@ export interface Outcome {
 }
 
 export function createSpinUpModel(system: UnitSystem = "metric") {
-  const design = createCalculatorModel(spinUp, system);
+  const design = createCalculatorModel(spinUp, spinUpRun, system);
   const { fields } = design;
   const driveType = design.choices.driveType as Signal<DriveType>;
   const values = computed(() => design.values.value as DrivetrainInput | null);

@@ -4,7 +4,7 @@
  * started).
  */
 import { applies, SWEEPABLE } from "../../calc/calculators/spin-up.ts";
-import spinUp from "../../calc/calculators/spin-up.ts";
+import { form as spinUp } from "../../calc/calculators/spin-up.ts";
 import { type DrivetrainSweep, markSweepOptimum, type SweepPoint, sweepPoint, sweepValues } from "../../calc/drivetrain/compare.ts";
 import type { DriveType, DrivetrainInput, DrivetrainParameter } from "../../calc/drivetrain/inputs.ts";
 import { fieldUnit, type InputSpec, readField } from "../../calc/core/inputs.ts";

@@ -4,7 +4,7 @@
  * editing the design moves every variant with it. No DOM.
  */
 import { applies, VARIANT_SCOPES } from "../../calc/calculators/spin-up.ts";
-import spinUp from "../../calc/calculators/spin-up.ts";
+import { form as spinUp } from "../../calc/calculators/spin-up.ts";
 import { compareDrivetrains } from "../../calc/drivetrain/compare.ts";
 import { type DrivetrainInput, type DrivetrainParameter, validateDrivetrainInput } from "../../calc/drivetrain/inputs.ts";
 import type { SpinUpResult } from "../../calc/drivetrain/results.ts";

@@ -10,7 +10,7 @@ import type { InputSpec } from "../../calc/core/inputs.ts";
 import { counterweightPlan, massBalance } from "../../calc/mass/mass-balance.ts";
 import { encodeLayout, parseLayout } from "../../calc/mass/layout-text.ts";
 import { readMountingPoints } from "../../calc/mass/points-text.ts";
-import massCalculator from "../../calc/calculators/mass.ts";
+import { form as massCalculator } from "../../calc/calculators/mass.ts";
 import { readLink, writeLink } from "../../calc/core/calculator.ts";
 import { saveToDesign } from "../calc-ui/save.ts";
 import { layoutDrawing } from "../../calc/mass/drawing.ts";

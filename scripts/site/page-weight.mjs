@@ -58,15 +58,6 @@ export function createWeigher(distDir, base = "/") {
     const scripts = new Set();
     const lazyEntries = new Set();
     for (const entry of entries) scriptClosure(entry, scripts, lazyEntries);
-    // Every calculator on the page loads its widget module at once (calc-ui/islands.ts): that
-    // chunk and what it imports count as the page's own script, not as lazy code.
-    for (const name of new Set([...html.matchAll(/\bdata-island="([\w-]+)"/g)].map((m) => m[1]))) {
-      for (const src of [...scripts]) {
-        const code = readFileSync(fileFor(src), "utf8");
-        const found = new RegExp(`"\\.\\./calculators/${name}\\.tsx":[^\`"']{0,80}import\\(\\s*[\`"']([^\`"']+\\.js)`).exec(code);
-        if (found) scriptClosure(posix.join(posix.dirname(src), found[1]), scripts, lazyEntries);
-      }
-    }
     const lazy = new Set();
     for (const entry of lazyEntries) if (!scripts.has(entry)) scriptClosure(entry, lazy, new Set());
     for (const src of scripts) lazy.delete(src);

@@ -1,8 +1,8 @@
 import { describe, expect, it } from "vitest";
-import placement from "../../calc/calculators/placement.ts";
+import placement, { form, run } from "../../calc/calculators/placement.ts";
 import { createCalculatorModel } from "../../components/calc-ui/model.ts";
 
-const createPlacementModel = () => createCalculatorModel(placement);
+const createPlacementModel = () => createCalculatorModel(form, run);
 
 describe("a calculator model (the placement calculator for all)", () => {
   it("computes a result from the defaults", () => {
@@ -50,9 +50,9 @@ describe("a calculator model (the placement calculator for all)", () => {
     expect(model.queryFor("")).toMatch(/^v=1&/);
   });
 
-  it("feeds the calculator's cards (what the build sheet shows) with its verdict in the handbook's words", () => {
+  it("gives the values and result the calculator's cards (what the build sheet shows) speak of, with its verdict in the handbook's words", () => {
     const model = createPlacementModel();
-    const cards = () => model.calc.cards(model.values.value!, model.outcome.value.result!, model.system.value);
+    const cards = () => placement.cards(model.values.value!, model.outcome.value.result!, model.system.value);
     expect(cards()[0]).toMatchObject({ status: "holds", title: "Accelerometer placement" });
     model.fields.texts.radius.value = "200 mm";
     expect(cards()[0]!.status).toBe("fails");

@@ -1,8 +1,9 @@
 /**
  * Brings a server-rendered calculator to life: every `[data-island="name"]` element holds the
  * HTML the component rendered at build time and its props as JSON; `hydrate` attaches the
- * component to that HTML instead of drawing it again. Each calculator's `.astro` wrapper calls
- * this from its own module script, so a page loads only the calculator it shows.
+ * component to that HTML instead of drawing it again. Each calculator's module script (emitted by
+ * the build, scripts/site/island-entries.mjs) and the build sheet's call this, so a page loads only
+ * the calculators it shows.
  *
  * This replaces a framework-agnostic island loader (props encoding, several frameworks, slots,
  * load strategies) that cost about 2.5 KB gzip on every calculator page; ours needs none of that.

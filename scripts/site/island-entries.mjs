@@ -1,0 +1,92 @@
+// One module script per calculator. The client build emits an entry chunk for every widget in
+// components/calculators/ (the widget plus the call that hydrates it); after the build, each page
+// gets the scripts of the calculators it shows, with <link rel="modulepreload"> for every chunk
+// those scripts import, so a page downloads only its own calculators and fetches their chunks in
+// one round trip instead of finding them one import at a time. The development server has no build
+// output to point at: there, every page loads components/calc-ui/islands.ts, which finds widgets
+// by file name at run time.
+import { readdirSync, readFileSync, writeFileSync } from "node:fs";
+import { join } from "node:path";
+import { fileURLToPath } from "node:url";
+
+const PREFIX = "whirlbook-island:";
+const widgetsDir = fileURLToPath(new URL("../../components/calculators/", import.meta.url));
+const hydrateModule = fileURLToPath(new URL("../../components/calc-ui/hydrate.ts", import.meta.url));
+const devLoader = fileURLToPath(new URL("../../components/calc-ui/islands.ts", import.meta.url));
+
+/** The widget names: the file names in components/calculators/. */
+export const widgetNames = () =>
+  readdirSync(widgetsDir)
+    .filter((f) => f.endsWith(".tsx"))
+    .map((f) => f.slice(0, -".tsx".length))
+    .sort();
+
+/** The HTML files under a folder. */
+const htmlFiles = (dir) =>
+  readdirSync(dir, { recursive: true })
+    .filter((f) => String(f).endsWith(".html"))
+    .map((f) => join(dir, String(f)));
+
+export function islandEntries() {
+  /** Widget name → its entry's file and the chunks it imports (all paths under the build's output). */
+  const built = new Map();
+  let base = "/";
+
+  /** @type {import("vite").Plugin} */
+  const plugin = {
+    name: "whirlbook:island-entries",
+    applyToEnvironment: (environment) => environment.name === "client",
+    buildStart() {
+      for (const name of widgetNames()) this.emitFile({ type: "chunk", id: PREFIX + name, name: `island-${name}` });
+    },
+    resolveId: (id) => (id.startsWith(PREFIX) ? `\0${id}` : null),
+    load(id) {
+      if (!id.startsWith(`\0${PREFIX}`)) return null;
+      const name = id.slice(PREFIX.length + 1);
+      return [
+        `import widget from ${JSON.stringify(join(widgetsDir, `${name}.tsx`))};`,
+        `import { hydrateIslands } from ${JSON.stringify(hydrateModule)};`,
+        `hydrateIslands(${JSON.stringify(name)}, widget);`,
+      ].join("\n");
+    },
+    generateBundle(_options, bundle) {
+      const chunks = new Map(
+        Object.values(bundle)
+          .filter((c) => c.type === "chunk")
+          .map((c) => [c.fileName, c]),
+      );
+      const closure = (file, seen = new Set()) => {
+        for (const imported of chunks.get(file)?.imports ?? []) if (!seen.has(imported)) closure(imported, seen.add(imported));
+        return seen;
+      };
+      for (const chunk of chunks.values()) {
+        if (!chunk.isEntry || !chunk.facadeModuleId?.startsWith(`\0${PREFIX}`)) continue;
+        built.set(chunk.facadeModuleId.slice(PREFIX.length + 1), { file: chunk.fileName, imports: [...closure(chunk.fileName)] });
+      }
+    },
+  };
+
+  return {
+    name: "whirlbook:island-entries",
+    hooks: {
+      "astro:config:setup": ({ command, updateConfig, injectScript }) => {
+        if (command === "build") updateConfig({ vite: { plugins: [plugin] } });
+        else injectScript("page", `import ${JSON.stringify(devLoader)};`);
+      },
+      "astro:config:done": ({ config }) => {
+        base = config.base.endsWith("/") ? config.base : `${config.base}/`;
+      },
+      "astro:build:done": ({ dir }) => {
+        const out = fileURLToPath(dir);
+        for (const file of htmlFiles(out)) {
+          const html = readFileSync(file, "utf8");
+          const names = [...new Set([...html.matchAll(/\bdata-island="([\w-]+)"/g)].map((m) => m[1]))].filter((name) => built.has(name));
+          if (names.length === 0) continue;
+          const scripts = names.map((name) => `<script type="module" src="${base}${built.get(name).file}"></script>`);
+          const preloads = [...new Set(names.flatMap((name) => built.get(name).imports))].map((chunk) => `<link rel="modulepreload" href="${base}${chunk}">`);
+          writeFileSync(file, html.replace("</head>", `${[...preloads, ...scripts].join("")}</head>`));
+        }
+      },
+    },
+  };
+}
