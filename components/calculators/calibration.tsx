@@ -9,6 +9,7 @@ import type { CalibrationCurvePoint } from "../../calc/heading/calibration.ts";
 import type { ConfidenceInterval } from "../../calc/numerics/line-fit.ts";
 import { formatNumber, fromSI, radPerSecondToRpm, type UnitSystem } from "../../calc/core/units.ts";
 import { Toolbar } from "../calc-ui/Toolbar.tsx";
+import { ResultBar } from "../calc-ui/ResultBar.tsx";
 import { Notices } from "../calc-ui/Notices.tsx";
 import { linkFor, syncWithUrl } from "../calc-ui/url-sync.ts";
 import { QuantityField } from "../calc-ui/QuantityField.tsx";
@@ -143,6 +144,25 @@ function Settings({ model, id }: { model: CalibrationModel; id: string }) {
   );
 }
 
+/** The fitted radius and offset, in view while the readings are edited. */
+function CalibrationBar({ model, id }: { model: CalibrationModel; id: string }) {
+  const { fit } = model.outcome.value;
+  const system: UnitSystem = model.fields.system.value;
+  const resultsId = `${id}-results`;
+  if (!fit) return <ResultBar tone={null} figures={[]} resultsId={resultsId} missing="No fit yet: see the readings above." />;
+  if (!model.handoff.value) return <ResultBar tone="bad" reason="no usable radius" figures={[]} resultsId={resultsId} />;
+  return (
+    <ResultBar
+      tone={null}
+      resultsId={resultsId}
+      figures={[
+        { name: "radius", label: "Radius r̂", value: inSystem(fit.radius, "length", system, 5) },
+        { name: "bias", label: "Offset b̂", value: inSystem(fit.bias, "acceleration", system, 3) },
+      ]}
+    />
+  );
+}
+
 function Results({ model, id }: { model: CalibrationModel; id: string }) {
   const { fit, error } = model.outcome.value;
   const { lines, rows, dropped } = model.data.value;
@@ -168,7 +188,7 @@ function Results({ model, id }: { model: CalibrationModel; id: string }) {
   if (!fit) {
     return (
       <>
-        <Empty error={error && error.field === "rows" ? null : error} />
+        <Empty error={error && error.field === "rows" ? null : error} id={`${id}-results`} />
         {skippedList}
       </>
     );
@@ -183,7 +203,7 @@ function Results({ model, id }: { model: CalibrationModel; id: string }) {
     ["huber", `Huber M-fit (c = ${fit.huber.tuning})`, fit.huber],
   ] as const;
   return (
-    <div class="calc-results" aria-live="polite">
+    <div class="calc-results" id={`${id}-results`} aria-live="polite">
       <Verdict
         tone={handoff ? (fit.spikes.flagged.length ? "warn" : "ok") : "bad"}
         title={handoff ? `Radius ${len(fit.radius)}, offset ${acc(fit.bias)}` : "No usable radius"}
@@ -320,6 +340,7 @@ export default function CalibrationCalculator({ id = "calibration-calculator" }:
         <DataField model={model} id={id} />
         <Settings model={model} id={id} />
       </form>
+      <CalibrationBar model={model} id={id} />
       <Results model={model} id={id} />
       <Charts model={model} />
       <Toolbar idPrefix={id} system={model.fields.system} onSystem={model.fields.setSystem} link={() => linkFor(model, id)} save={model.save} />

@@ -9,6 +9,7 @@ import { fastenerStressCurve, type fastenerCheckInputs, type FastenerCheck } fro
 import { formatNumber, radPerSecondToRpm } from "../../calc/core/units.ts";
 import { QuantityField } from "../calc-ui/QuantityField.tsx";
 import { Toolbar } from "../calc-ui/Toolbar.tsx";
+import { ResultBar } from "../calc-ui/ResultBar.tsx";
 import { Notices } from "../calc-ui/Notices.tsx";
 import { Chart } from "../calc-ui/Chart.tsx";
 import { linkFor, syncWithUrl } from "../calc-ui/url-sync.ts";
@@ -66,13 +67,33 @@ function strengthNames(r: FastenerCheck): { yield: string; ultimate: string } {
     : { yield: `yield, ${proof}`, ultimate: `ultimate, R_m,min` };
 }
 
-function Results({ model }: { model: FastenerModel }) {
+/** The verdict, the safety factor and the speed at which the bolts yield, in view while editing. */
+function FastenerBar({ model, id }: { model: FastenerModel; id: string }) {
+  const { result, error } = model.outcome.value;
+  const resultsId = `${id}-results`;
+  if (!result)
+    return (
+      <ResultBar tone={null} figures={[]} resultsId={resultsId} missing={error?.field === null ? error.message : "No result yet: correct the marked field."} />
+    );
+  return (
+    <ResultBar
+      tone={VERDICT_TONE[result.verdict]}
+      resultsId={resultsId}
+      figures={[
+        { name: "sf", label: "Safety factor", value: formatNumber(result.safetyFactor) },
+        { name: "speed-yield", label: "Yields at", value: rpm(result.speedAtYield) },
+      ]}
+    />
+  );
+}
+
+function Results({ model, id }: { model: FastenerModel; id: string }) {
   const system = model.fields.system.value;
   const { result, error } = model.outcome.value;
   const values = model.fields.values.value;
   if (!result || !values) {
     return (
-      <div class="calc-results calc-results--empty" aria-live="polite">
+      <div class="calc-results calc-results--empty" id={`${id}-results`} aria-live="polite">
         <p>{error && error.field === null ? error.message : "Results appear when every field above holds a valid value."}</p>
       </div>
     );
@@ -85,7 +106,7 @@ function Results({ model }: { model: FastenerModel }) {
   const stressName = result.mode === "shear" ? "Shear stress τ on each bolt" : "Tensile stress σ on each bolt";
   const areaName = result.mode === "shear" && result.shearPlane === "shank" ? "shank area" : "stress area A_s";
   return (
-    <div class="calc-results" aria-live="polite">
+    <div class="calc-results" id={`${id}-results`} aria-live="polite">
       <p class={`verdict verdict--${VERDICT_TONE[result.verdict]}`} data-out="verdict">
         <strong>{VERDICT_TITLE[result.verdict]}.</strong> Safety factor {formatNumber(result.safetyFactor)} against {governing}. Rule:{" "}
         {verdictRule(values.failBelow, values.marginalBelow)}.
@@ -195,7 +216,8 @@ export default function FastenerCalculator({ id = fastenerCalculator.anchor }: F
           </fieldset>
         ))}
       </form>
-      <Results model={model} />
+      <FastenerBar model={model} id={id} />
+      <Results model={model} id={id} />
       <StressChart model={model} />
       <Toolbar idPrefix={id} system={fields.system} onSystem={fields.setSystem} link={() => linkFor(model, id)} save={model.save} />
     </section>

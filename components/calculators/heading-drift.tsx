@@ -15,6 +15,7 @@ import { formatNumber, fromSI, radPerSecondToRpm, type UnitSystem } from "../../
 import { Toolbar } from "../calc-ui/Toolbar.tsx";
 import { Notices } from "../calc-ui/Notices.tsx";
 import { Chart } from "../calc-ui/Chart.tsx";
+import { ResultBar } from "../calc-ui/ResultBar.tsx";
 import { syncWithUrl } from "../calc-ui/url-sync.ts";
 import { computed } from "../calc-ui/reactive.ts";
 import { createCalculatorModel } from "../calc-ui/model.ts";
@@ -108,10 +109,36 @@ function DriftVerdict({ r, speed, budget }: { r: HeadingDriftResult; speed: stri
   );
 }
 
+/** The verdict, the drift per revolution and the radius that zeroes it, in view while editing. */
+function DriftBar({ model, id }: { model: DriftModel; id: string }) {
+  const { result, error } = model.outcome.value;
+  const resultsId = `${id}-results`;
+  if (!result)
+    return (
+      <ResultBar tone={null} figures={[]} resultsId={resultsId} missing={error?.field === null ? error.message : "No result yet: correct the marked field."} />
+    );
+  const system = model.fields.system.value;
+  const p = result.atSpeed;
+  if (p.driftRate === null || result.budgetMargin === null)
+    return <ResultBar tone="bad" reason="no estimate at this speed" figures={[]} resultsId={resultsId} />;
+  const zero = result.radiusBand.zeroDriftRadius;
+  return (
+    <ResultBar
+      tone={result.verdict === "within-budget" ? "ok" : "bad"}
+      reason={result.verdict === "within-budget" ? undefined : "over the trim budget"}
+      resultsId={resultsId}
+      figures={[
+        { name: "drift-rev", label: p.driftRate > 0 ? "Ahead per turn" : "Behind per turn", value: degrees(Math.abs(p.driftPerRevolution!), false) },
+        { name: "radius-zero", label: "Radius for zero drift", value: zero === null ? "none" : inSystem(zero, "length", system, 5) },
+      ]}
+    />
+  );
+}
+
 function DriftResults({ model, id }: { model: DriftModel; id: string }) {
   const { result, error } = model.outcome.value;
   const values = model.fields.values.value;
-  if (!result || !values) return <Empty error={error} />;
+  if (!result || !values) return <Empty error={error} id={`${id}-results`} />;
   const system = model.fields.system.value;
   const speed = inSystem(values.angularSpeed, "angularSpeed", system, 4);
   const p = result.atSpeed;
@@ -125,7 +152,7 @@ function DriftResults({ model, id }: { model: DriftModel; id: string }) {
     ["sum", "Sum, to first order", p.linear.total, ""],
   ] as const;
   return (
-    <div class="calc-results" aria-live="polite">
+    <div class="calc-results" id={`${id}-results`} aria-live="polite">
       <DriftVerdict r={result} speed={speed} budget={size(values.budget)} />
       <Outputs
         items={[
@@ -240,6 +267,7 @@ export default function HeadingDriftCalculator({ id = driftCalculator.anchor }: 
       <Notices notices={model.fields.notices} />
       <Notices notices={model.pair.notices} />
       <FieldsForm fields={model.fields} groups={DRIFT_GROUPS} idPrefix={id} error={model.outcome.value.error} />
+      <DriftBar model={model} id={id} />
       <DriftResults model={model} id={id} />
       <DriftChart model={model} />
       <div class="calc-section" role="group" aria-labelledby={`${id}-pair-title`}>

@@ -66,6 +66,7 @@ export function createTimingModel() {
 
 type TimingModel = ReturnType<typeof createTimingModel>;
 import { Chart } from "../calc-ui/Chart.tsx";
+import { ResultBar } from "../calc-ui/ResultBar.tsx";
 
 export interface HeadingTimingCalculatorProps {
   /** Element id of the calculator (the link's anchor). */
@@ -101,15 +102,55 @@ function timingVerdict(r: HeadingTimingResult, t: { targetStep: number; targetAr
   }
 }
 
-function TimingResults({ model }: { model: TimingModel }) {
+const NO_RESULT = "No result yet: correct the marked field.";
+
+/** The loop verdict, the heading step and the beacon arc, in view while editing. */
+function TimingBar({ model, id }: { model: TimingModel; id: string }) {
   const { result, error } = model.timingOutcome.value;
   const values = model.timing.values.value;
-  if (!result || !values) return <Empty error={error} />;
+  const resultsId = `${id}-timing-results`;
+  if (!result || !values) return <ResultBar tone={null} figures={[]} resultsId={resultsId} missing={error?.field === null ? error.message : NO_RESULT} />;
+  const verdict = timingVerdict(result, values, "", (v) => inSystem(v, "time", model.timing.system.value));
+  return (
+    <ResultBar
+      tone={verdict.tone}
+      reason={verdict.tone === "ok" ? undefined : verdict.title.toLowerCase()}
+      resultsId={resultsId}
+      figures={[
+        { name: "step", label: "Step per update", value: deg(result.headingStep) },
+        { name: "arc", label: "Beacon arc", value: deg(result.arcWidth) },
+      ]}
+    />
+  );
+}
+
+/** The smoothing's delay and the heading error it leaves after a spin-up, in view while editing. */
+function SmoothingBar({ model, id }: { model: TimingModel; id: string }) {
+  const { result, error } = model.smoothingOutcome.value;
+  const resultsId = `${id}-smoothing-results`;
+  if (!result) return <ResultBar tone={null} figures={[]} resultsId={resultsId} missing={error?.field === null ? error.message : NO_RESULT} />;
+  const time = (v: number) => inSystem(v, "time", model.smoothing.system.value);
+  return (
+    <ResultBar
+      tone={null}
+      resultsId={resultsId}
+      figures={[
+        { name: "delay", label: "Delay", value: time(result.totalDelay) },
+        { name: "heading-after", label: "Behind after the spin-up", value: deg(result.headingErrorAfterSpinUp) },
+      ]}
+    />
+  );
+}
+
+function TimingResults({ model, id }: { model: TimingModel; id: string }) {
+  const { result, error } = model.timingOutcome.value;
+  const values = model.timing.values.value;
+  if (!result || !values) return <Empty error={error} id={`${id}-timing-results`} />;
   const system = model.timing.system.value;
   const time = (v: number) => inSystem(v, "time", system);
   const verdict = timingVerdict(result, values, inSystem(values.topSpeed, "angularSpeed", system, 4), time);
   return (
-    <div class="calc-results" aria-live="polite">
+    <div class="calc-results" id={`${id}-timing-results`} aria-live="polite">
       <Verdict tone={verdict.tone} title={verdict.title}>
         {verdict.detail}
       </Verdict>
@@ -136,13 +177,13 @@ function TimingResults({ model }: { model: TimingModel }) {
 function SmoothingResults({ model, id }: { model: TimingModel; id: string }) {
   const { result, error, medians } = model.smoothingOutcome.value;
   const values = model.smoothing.values.value;
-  if (!result || !values) return <Empty error={error} />;
+  if (!result || !values) return <Empty error={error} id={`${id}-smoothing-results`} />;
   const system = model.smoothing.system.value;
   const time = (v: number) => inSystem(v, "time", system);
   const speed = (v: number) => inSystem(v, "angularSpeed", system, 3);
   const removed = result.spikesRejectedPerWindow > 0 ? " (the median removes it)" : "";
   return (
-    <div class="calc-results" aria-live="polite">
+    <div class="calc-results" id={`${id}-smoothing-results`} aria-live="polite">
       <Verdict tone={result.headingErrorAfterSpinUp > 0 ? "warn" : "ok"} title={`${time(result.totalDelay)} of delay`}>
         During the spin-up the heading falls behind at {degPerSecond(-result.driftRateDuringSpinUp, false)}; once the speed settles it is{" "}
         {deg(result.headingErrorAfterSpinUp)} behind, unless the firmware corrects it.
@@ -250,10 +291,12 @@ export default function HeadingTimingCalculator({ id = "timing-calculator" }: He
       <Notices notices={model.smoothing.notices} />
       <h3 id={`${id}-timing-title`}>Loop, latency and beacon</h3>
       <FieldsForm fields={model.timing} groups={TIMING_GROUPS} idPrefix={id} error={model.timingOutcome.value.error} />
-      <TimingResults model={model} />
+      <TimingBar model={model} id={id} />
+      <TimingResults model={model} id={id} />
       <div class="calc-section" role="group" aria-labelledby={`${id}-smoothing-title`}>
         <h3 id={`${id}-smoothing-title`}>Smoothing the spin-rate estimate</h3>
         <FieldsForm fields={model.smoothing} groups={SMOOTHING_GROUPS} idPrefix={`${id}-s`} error={model.smoothingOutcome.value.error} />
+        <SmoothingBar model={model} id={id} />
         <SmoothingResults model={model} id={id} />
         <TradeoffChart model={model} />
       </div>

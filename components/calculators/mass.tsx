@@ -13,6 +13,7 @@ import { MATERIAL_DENSITIES } from "../../calc/materials/densities.ts";
 import { formatNumber, formatQuantity, fromSI, type QuantityKind, type UnitId, type UnitSystem } from "../../calc/core/units.ts";
 import { QuantityField } from "../calc-ui/QuantityField.tsx";
 import { Toolbar } from "../calc-ui/Toolbar.tsx";
+import { ResultBar } from "../calc-ui/ResultBar.tsx";
 import { Notices } from "../calc-ui/Notices.tsx";
 import { syncWithUrl } from "../calc-ui/url-sync.ts";
 import { createMassModel, type MassError, type MassModel, type ModeKey, type Snapshot } from "../mass/model.ts";
@@ -424,7 +425,7 @@ export default function MassLayoutCalculator({ id = massCalculator.anchor, layou
           </button>
         </fieldset>
 
-        <h3>Mass properties and top view</h3>
+        <h3 id={`${id}-results`}>Mass properties and top view</h3>
         {mass ?? empty}
 
         <h3>Balance</h3>
@@ -517,6 +518,24 @@ export default function MassLayoutCalculator({ id = massCalculator.anchor, layou
           {field("sensorY")}
         </div>
         {sensor}
+        {ok ? (
+          <ResultBar
+            tone={ok.balance.offsetVerdict === "within-target" ? "ok" : "bad"}
+            reason={ok.balance.offsetVerdict === "within-target" ? undefined : "offset outside the target"}
+            resultsId={`${id}-results`}
+            figures={[
+              { name: "offset", label: "Offset e", value: q(ok.balance.layout.offset, "length") },
+              { name: "unbalance", label: "Unbalance U", value: q(ok.balance.static.unbalance, "unbalance") },
+            ]}
+          />
+        ) : (
+          <ResultBar
+            tone={null}
+            figures={[]}
+            resultsId={`${id}-results`}
+            missing={parts.length ? "No result yet: correct the marked field." : "Add a part to see results."}
+          />
+        )}
       </form>
       <Toolbar
         idPrefix={id}

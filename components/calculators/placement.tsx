@@ -10,6 +10,7 @@ import { QuantityField } from "../calc-ui/QuantityField.tsx";
 import { Toolbar } from "../calc-ui/Toolbar.tsx";
 import { Notices } from "../calc-ui/Notices.tsx";
 import { Chart } from "../calc-ui/Chart.tsx";
+import { ResultBar } from "../calc-ui/ResultBar.tsx";
 import { linkFor, syncWithUrl } from "../calc-ui/url-sync.ts";
 import { computed } from "../calc-ui/reactive.ts";
 import { createCalculatorModel } from "../calc-ui/model.ts";
@@ -73,12 +74,36 @@ function verdictText(r: AccelerometerPlacement, system: UnitSystem): { tone: "ok
   }
 }
 
-function Results({ model }: { model: PlacementModel }) {
+/** The verdict and the usable window, kept in view while the fields are edited. */
+function PlacementBar({ model, id }: { model: PlacementModel; id: string }) {
+  const system = model.fields.system.value;
+  const { result, error } = model.outcome.value;
+  if (!result) {
+    const missing = error && error.field === null ? error.message : "No result yet: correct the marked field.";
+    return <ResultBar tone={null} figures={[]} resultsId={`${id}-results`} missing={missing} />;
+  }
+  const verdict = verdictText(result, system);
+  const len = (v: number) => formatQuantity(v, "length", { system }).text;
+  const window = result.verdict === "no-window" ? "none" : `${len(result.minRadius)} – ${len(result.maxRadius)}`;
+  return (
+    <ResultBar
+      tone={verdict.tone}
+      reason={verdict.tone === "ok" ? undefined : verdict.title.toLowerCase()}
+      resultsId={`${id}-results`}
+      figures={[
+        { name: "window", label: "Usable radius", value: window },
+        { name: "accel-top", label: "At top speed", value: `${formatNumber(fromSI(result.accelerationAtTop, "gn"))} g` },
+      ]}
+    />
+  );
+}
+
+function Results({ model, id }: { model: PlacementModel; id: string }) {
   const system = model.fields.system.value;
   const { result, error } = model.outcome.value;
   if (!result) {
     return (
-      <div class="calc-results calc-results--empty" aria-live="polite">
+      <div class="calc-results calc-results--empty" id={`${id}-results`} aria-live="polite">
         <p>{error && error.field === null ? error.message : "Results appear when every field above holds a valid value."}</p>
       </div>
     );
@@ -87,7 +112,7 @@ function Results({ model }: { model: PlacementModel }) {
   const verdict = verdictText(result, system);
   const g = (v: number) => `${formatNumber(fromSI(v, "gn"))} g`;
   return (
-    <div class="calc-results" aria-live="polite">
+    <div class="calc-results" id={`${id}-results`} aria-live="polite">
       <p class={`verdict verdict--${verdict.tone}`}>
         <strong>{verdict.title}.</strong> {verdict.detail}
       </p>
@@ -192,7 +217,8 @@ export default function PlacementCalculator({ id = "placement-calculator" }: Pla
           </fieldset>
         ))}
       </form>
-      <Results model={model} />
+      <PlacementBar model={model} id={id} />
+      <Results model={model} id={id} />
       <PlacementChart model={model} />
       <Toolbar idPrefix={id} system={fields.system} onSystem={fields.setSystem} link={() => linkFor(model, id)} save={model.save} />
     </section>

@@ -11,6 +11,7 @@ import type { ChoiceSpec } from "../../calc/core/choices.ts";
 import { formatNumber, type UnitSystem } from "../../calc/core/units.ts";
 import { QuantityField } from "../calc-ui/QuantityField.tsx";
 import { Toolbar } from "../calc-ui/Toolbar.tsx";
+import { ResultBar } from "../calc-ui/ResultBar.tsx";
 import { Notices } from "../calc-ui/Notices.tsx";
 import { Chart } from "../calc-ui/Chart.tsx";
 import { linkFor, syncWithUrl } from "../calc-ui/url-sync.ts";
@@ -121,20 +122,41 @@ function where(r: RimCheck, radius: number, system: UnitSystem): string {
   return radius === r.peakStressRadius && r.shape === "annular-disk" ? `at the bore, ${at}` : at;
 }
 
-function Results({ model }: { model: RimModel }) {
+/** The verdict, the safety factor and the tip speed, in view while editing. */
+function RimBar({ model, id }: { model: RimModel; id: string }) {
+  const { result, error } = model.outcome.value;
+  const resultsId = `${id}-results`;
+  if (!result)
+    return (
+      <ResultBar tone={null} figures={[]} resultsId={resultsId} missing={error?.field === null ? error.message : "No result yet: correct the marked field."} />
+    );
+  const system = model.fields.system.value;
+  return (
+    <ResultBar
+      tone={VERDICT_TONE[result.verdict]}
+      resultsId={resultsId}
+      figures={[
+        { name: "sf", label: "Safety factor", value: formatNumber(result.safetyFactor) },
+        { name: "tip-speed", label: "Tip speed", value: q(result.tipSpeed, "speed", system) },
+      ]}
+    />
+  );
+}
+
+function Results({ model, id }: { model: RimModel; id: string }) {
   const system = model.fields.system.value;
   const { result, error } = model.outcome.value;
   const values = model.fields.values.value;
   if (!result || !values) {
     return (
-      <div class="calc-results calc-results--empty" aria-live="polite">
+      <div class="calc-results calc-results--empty" id={`${id}-results`} aria-live="polite">
         <p>{error && error.field === null ? error.message : "Results appear when every field above holds a valid value."}</p>
       </div>
     );
   }
   const peak = `${q(result.peakStress, "stress", system)} ${where(result, result.peakStressRadius, system)}`;
   return (
-    <div class="calc-results" aria-live="polite">
+    <div class="calc-results" id={`${id}-results`} aria-live="polite">
       <p class={`verdict verdict--${VERDICT_TONE[result.verdict]}`} data-out="verdict">
         <strong>{VERDICT_TITLE[result.verdict]}.</strong> Safety factor {formatNumber(result.safetyFactor)} against yield (
         {q(values.yieldStrength, "stress", system)}) at the peak hoop stress, {peak}. Rule: {verdictRule(values.failBelow, values.marginalBelow)}.
@@ -249,7 +271,8 @@ export default function RimCalculator({ id = rimCalculator.anchor, materials = [
           </fieldset>
         ))}
       </form>
-      <Results model={model} />
+      <RimBar model={model} id={id} />
+      <Results model={model} id={id} />
       <ProfileChart model={model} />
       <Toolbar idPrefix={id} system={fields.system} onSystem={fields.setSystem} link={() => linkFor(model, id)} save={model.save} />
     </section>

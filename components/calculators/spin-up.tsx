@@ -11,10 +11,10 @@ import { Toolbar } from "../calc-ui/Toolbar.tsx";
 import { Notices } from "../calc-ui/Notices.tsx";
 import { linkFor, syncWithUrl } from "../calc-ui/url-sync.ts";
 import { createSpinUpModel, SPINNER_ONLY, type Name, type SpinUpModel } from "../drivetrain/model.ts";
-import { Empty, Results, SpinUpCharts } from "../drivetrain/Results.tsx";
+import { Empty, Results, SpinUpBar, SpinUpCharts } from "../drivetrain/Results.tsx";
 import { Compare } from "../drivetrain/Compare.tsx";
 import { Sweep } from "../drivetrain/Sweep.tsx";
-import spinUp from "../../calc/calculators/spin-up.ts";
+import { form as spinUp } from "../../calc/calculators/spin-up.ts";
 
 /** The island name: this file's name. */
 export const island = "spin-up";
@@ -102,13 +102,14 @@ export default function SpinUpCalculator({ id = spinUp.anchor }: SpinUpCalculato
         ))}
       </fieldset>
       <Form model={model} id={id} />
+      <SpinUpBar r={result && input ? result : null} system={model.fields.system.value} error={error} resultsId={`${id}-results`} />
       {result && input ? (
         <>
-          <Results r={result} input={input} system={model.fields.system.value} />
+          <Results r={result} input={input} system={model.fields.system.value} id={`${id}-results`} />
           <SpinUpCharts r={result} input={input} />
         </>
       ) : (
-        <Empty error={error} />
+        <Empty error={error} id={`${id}-results`} />
       )}
       <Compare model={model} idPrefix={id} />
       <Sweep model={model} idPrefix={id} />

@@ -8,6 +8,7 @@ import type { SpinUpRegime, SpinUpResult } from "../../calc/drivetrain/results.t
 import type { UnitSystem } from "../../calc/core/units.ts";
 import { formatNumber, radPerSecondToRpm } from "../../calc/core/units.ts";
 import { Chart } from "../calc-ui/Chart.tsx";
+import { ResultBar } from "../calc-ui/ResultBar.tsx";
 import { amps, fmt, mAh, percent, REGIME_NAME, REGIME_TEXT, rpm, seconds } from "./format.ts";
 import type { FieldError } from "./model.ts";
 
@@ -16,9 +17,9 @@ const WIDTH = 640;
 const LEFT = 56;
 const RIGHT = 16;
 
-export function Empty({ error }: { error: FieldError }) {
+export function Empty({ error, id }: { error: FieldError; id?: string }) {
   return (
-    <div class="calc-results calc-results--empty" aria-live="polite">
+    <div class="calc-results calc-results--empty" id={id} aria-live="polite">
       <p>{error && error.field === null ? error.message : "Results appear when every field above holds a valid value."}</p>
     </div>
   );
@@ -50,7 +51,29 @@ function Verdict({ r }: { r: SpinUpResult }) {
   );
 }
 
-export function Results({ r, input, system }: { r: SpinUpResult; input: DrivetrainInput; system: UnitSystem }) {
+/** The verdict, the time to target and the stored energy, in view while editing. */
+export function SpinUpBar({ r, system, error, resultsId }: { r: SpinUpResult | null; system: UnitSystem; error: FieldError; resultsId: string }) {
+  if (!r)
+    return (
+      <ResultBar tone={null} figures={[]} resultsId={resultsId} missing={error?.field === null ? error.message : "No result yet: correct the marked field."} />
+    );
+  const reached = r.verdict === "reaches-target";
+  return (
+    <ResultBar
+      tone={reached ? "ok" : "bad"}
+      reason={reached ? undefined : r.verdict === "stalled" ? "does not move" : "falls short of the target"}
+      resultsId={resultsId}
+      figures={[
+        reached
+          ? { name: "time-100", label: "Time to target", value: seconds(r.timeToTarget!) }
+          : { name: "top-speed", label: "Tops out at", value: rpm(r.topSpeed) },
+        { name: "stored-energy", label: "Stored", value: fmt(r.atTopSpeed.storedEnergy, "energy", system) },
+      ]}
+    />
+  );
+}
+
+export function Results({ r, input, system, id }: { r: SpinUpResult; input: DrivetrainInput; system: UnitSystem; id?: string }) {
   const q = (v: number, kind: Parameters<typeof fmt>[1]) => fmt(v, kind, system);
   const time = (v: number | null) => (v === null ? `not reached — tops out at ${rpm(r.topSpeed)}` : q(v, "time"));
   const top = r.atTopSpeed;
@@ -91,7 +114,7 @@ export function Results({ r, input, system }: { r: SpinUpResult; input: Drivetra
   ];
   if (spinner) losses.push(["Wheel slip", "slip", e.slipLoss]);
   return (
-    <div class="calc-results" aria-live="polite">
+    <div class="calc-results" id={id} aria-live="polite">
       <Verdict r={r} />
       {r.warnings.length > 0 ? (
         <ul class="dt-warnings" data-out="warnings">

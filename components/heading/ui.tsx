@@ -49,9 +49,9 @@ export function FieldsForm<S extends InputSpecs>({
   );
 }
 
-export function Empty({ error }: { error: FieldError }) {
+export function Empty({ error, id }: { error: FieldError; id?: string }) {
   return (
-    <div class="calc-results calc-results--empty" aria-live="polite">
+    <div class="calc-results calc-results--empty" id={id} aria-live="polite">
       <p>{error && error.field === null ? error.message : "Results appear when every field above holds a valid value."}</p>
     </div>
   );
