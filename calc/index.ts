@@ -11,6 +11,7 @@ export * from "./rotation/rotation.ts";
 export * from "./heading/drift.ts";
 export * from "./heading/drift-inputs.ts";
 export * from "./heading/drift-budget.ts";
+export * from "./heading/drift-trim.ts";
 export * from "./heading/opposed.ts";
 export * from "./heading/drift-demo.ts";
 export * from "./heading/timing.ts";

@@ -35,6 +35,7 @@ export function islandEntries() {
   /** @type {import("vite").Plugin} */
   const plugin = {
     name: "whirlbook:island-entries",
+    apply: "build",
     applyToEnvironment: (environment) => environment.name === "client",
     buildStart() {
       for (const name of widgetNames()) this.emitFile({ type: "chunk", id: PREFIX + name, name: `island-${name}` });

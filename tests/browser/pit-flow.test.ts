@@ -25,6 +25,7 @@ async function inView(page: Page, selector: string): Promise<boolean> {
 const CHAPTERS = [
   { slug: "acceleration", anchor: "placement-calculator", bar: "accel-top" },
   { slug: "heading-drift", anchor: "drift-calculator", bar: "drift-rev" },
+  { slug: "heading-trim", anchor: "trim-calculator", bar: "radius" },
   { slug: "heading-timing", anchor: "timing-calculator", bar: "step" },
   { slug: "calibration", anchor: "calibration-calculator", bar: "radius" },
   { slug: "mass-layout", anchor: "mass-calculator", bar: "offset" },
@@ -69,6 +70,26 @@ describe("the pit flow", () => {
     expect(await inView(page, "#placement-calculator [data-result-bar]")).toBe(true);
     await page.fill("#placement-calculator-radius", "abc");
     await expect.poll(() => page.locator("#placement-calculator [data-result-bar]").textContent()).toContain("No result yet: correct the marked field.");
+    await context.close();
+  });
+
+  it("answers the pit's heading question the way it is asked: 20° a turn ahead at 8 mm, then 10 °/s behind at 2000 rpm with 12 mm", async () => {
+    const { page, context, problems } = await open("/chapters/heading-trim/");
+    await page.locator(".to-calculator a").click();
+    await page.fill("#trim-calculator-assumedRadius", "8 mm");
+    await page.fill("#trim-calculator-driftPerTurn", "20°");
+    // r̂′ = 8 mm × (1 + 20/360)² = 8.914 mm (tests/calc/drift-trim.test.ts).
+    await expect.poll(() => page.locator('#trim-calculator [data-result-bar] [data-bar="radius"]').textContent()).toBe("8.914 mm");
+    expect(await page.locator('[data-out="radius"]').textContent()).toBe("8.914 mm");
+    await page.selectOption("#trim-calculator-sense", "behind");
+    await page.selectOption("#trim-calculator-measure", "second");
+    await page.fill("#trim-calculator-assumedRadius", "12 mm");
+    await page.fill("#trim-calculator-driftRate", "10 °/s");
+    await page.fill("#trim-calculator-angularSpeed", "2000 rpm");
+    // 10 °/s at 33.3 turns/s is 0.3° a turn behind: 12 mm × (1 − 0.3/360)² = 11.98 mm.
+    await expect.poll(() => page.locator('[data-out="radius"]').textContent()).toBe("11.98 mm");
+    await expect.poll(() => new URL(page.url()).searchParams.get("per")).toBe("second");
+    expect(problems).toEqual([]);
     await context.close();
   });
 });

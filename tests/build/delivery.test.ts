@@ -28,11 +28,12 @@ const fontName = (url: string) => url.replace(/^.*\/(KaTeX_[^.]+)\..*$/, "$1");
 const KIB = 1024;
 /**
  * Ceiling for the first visit's offline download, gzip bytes (fonts and the search index count at
- * their own, already compressed, size). Measured 515 KiB at this change (1.60 MB raw; 471 KiB as
- * brotli), from 739 KiB before it; the 500 KiB target is not met: what remains is used (12 pages
- * 136 KiB, 26 scripts 108 KiB, 6 fonts 80 KiB, the search index and its code 229 KiB).
+ * their own, already compressed, size). Measured 515 KiB with 12 pages (1.60 MB raw; 471 KiB as
+ * brotli), from 739 KiB before; 534 KiB with 13 (the radius-trim chapter: its page, script and
+ * search entries). The 500 KiB target is not met: what remains is used (pages, scripts, 6 fonts, the
+ * search index and its code).
  */
-const PRECACHE_GZIP_CEILING = 525 * KIB;
+const PRECACHE_GZIP_CEILING = 545 * KIB;
 
 describe("compressed copies", () => {
   const text = () => files().filter((f) => /\.(html|css|js|svg|json)$/.test(f));

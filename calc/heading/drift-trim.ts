@@ -1,0 +1,129 @@
+/**
+ * The pit's question about heading: "it drifts X° a turn (ahead or behind) with the firmware radius
+ * at R: what radius do I set?" The firmware's spin-rate estimate ω̂ = √((a − b̂)/r̂) is off by the
+ * ratio q = ω̂/ω that the drift shows: after one true turn the heading has moved 360°·q, so q = 1 +
+ * X/360° (X positive when the heading runs ahead). The reading a − b̂ is what it is at that speed,
+ * so the radius that makes the estimate exact there is r̂′ = r̂·q². Whatever caused the drift (a
+ * wrong radius, an offset left in, a scale error), this radius cancels it at the speed it was seen;
+ * an offset's share changes with speed, so a trim made at one speed is exact only there.
+ * SI in and out: m, rad, rad/s.
+ */
+import { defineInputs } from "../core/inputs.ts";
+import { rpmToRadPerSecond } from "../core/units.ts";
+import { CalcInputError } from "../core/errors.ts";
+import { requireWithinSpecs } from "../core/spec-check.ts";
+import { TURN } from "../core/constants.ts";
+
+/** Inputs of the radius trim, in SI. */
+export const radiusTrimInputs = /* @__PURE__ */ defineInputs({
+  assumedRadius: {
+    label: "Radius in firmware now",
+    kind: "length",
+    min: 0.0001,
+    max: 1,
+    default: 0.008,
+    urlKey: "ra",
+    help: "The radius the firmware divided by while you watched the drift.",
+  },
+  driftPerTurn: {
+    label: "Drift per turn",
+    kind: "angle",
+    min: 0,
+    max: Math.PI,
+    default: (20 * Math.PI) / 180,
+    urlKey: "x",
+    help: "How far the heading moves in one turn of the robot, from a video or by counting turns against the heading LED.",
+  },
+  driftRate: {
+    label: "Drift per second",
+    kind: "angularSpeed",
+    min: 0,
+    max: (3600 * Math.PI) / 180,
+    default: (10 * Math.PI) / 180,
+    unit: { metric: "deg/s", us: "deg/s" },
+    urlKey: "dr",
+    help: "How fast the heading turns on its own while the robot spins at the speed below.",
+  },
+  angularSpeed: {
+    label: "Spin speed when you saw it",
+    kind: "angularSpeed",
+    min: 0.1,
+    max: 10000,
+    default: /* @__PURE__ */ rpmToRadPerSecond(2000),
+    urlKey: "rpm",
+    help: "The true spin rate during the drift you timed.",
+  },
+});
+
+export type RadiusTrimSense = "ahead" | "behind";
+export type RadiusTrimMeasure = "turn" | "second";
+
+export interface RadiusTrimInput {
+  /** r̂, the radius the firmware used [m]. */
+  assumedRadius: number;
+  /** Whether the heading ran ahead of the robot (estimate too fast) or fell behind. */
+  sense: RadiusTrimSense;
+  /** Whether the drift was seen per turn or timed per second. */
+  measure: RadiusTrimMeasure;
+  /** |X|, the drift in one turn [rad] (read when `measure` is "turn"). */
+  driftPerTurn: number;
+  /** |D|, the drift rate [rad/s] (read when `measure` is "second"). */
+  driftRate: number;
+  /** ω, the true spin rate while the drift rate was timed [rad/s] (read when `measure` is "second"). */
+  angularSpeed: number;
+}
+
+export interface RadiusTrim {
+  /** X, the signed drift per turn [rad]: positive when the heading ran ahead. */
+  driftPerRevolution: number;
+  /** q = ω̂/ω, how fast the estimate ran [-]. */
+  speedRatio: number;
+  /** r̂′ = r̂·q², the radius that cancels the drift at that speed [m]. */
+  radius: number;
+  /** r̂′ − r̂ [m]: positive means set a larger radius. */
+  change: number;
+}
+
+/**
+ * The firmware radius that cancels a drift seen at one speed (spinner-heading-practice): from the
+ * drift per turn X, or from a drift rate D timed at spin rate ω (one turn takes 2π/ω, so X = 2π·D/ω).
+ *
+ * Formula: $q = \hat\omega/\omega = 1 + X/2\pi$, $\hat r' = \hat r\,q^2$, since
+ * $\hat\omega = \sqrt{(a - \hat b)/\hat r}$ at a fixed reading scales as $\hat r^{-1/2}$.
+ *
+ * @param input.assumedRadius r̂ [m]; `sense` "ahead" | "behind"; `measure` "turn" | "second";
+ *   `driftPerTurn` |X| [rad]; `driftRate` |D| [rad/s]; `angularSpeed` ω [rad/s].
+ * @returns The signed drift per turn [rad], q [-], r̂′ [m] and r̂′ − r̂ [m].
+ * Assumptions: steady speed while the drift was seen; the drift is the spin-rate estimate's (not a
+ * loop timing lag, which is an offset, not a drift). A heading that falls behind by a full turn or
+ * more per turn has no radius that cancels it.
+ * @example radiusTrim({ assumedRadius: 0.008, sense: "ahead", measure: "turn", driftPerTurn: Math.PI / 9, driftRate: 0, angularSpeed: 200 }).radius // → 0.00891358
+ * Sources: spinner-heading-practice, openstax-college-physics.
+ */
+export function radiusTrim(input: RadiusTrimInput): RadiusTrim {
+  const { assumedRadius, driftPerTurn, driftRate, angularSpeed } = requireWithinSpecs(radiusTrimInputs, input);
+  const { sense, measure } = input;
+  if (sense !== "ahead" && sense !== "behind") throw new CalcInputError({ param: "sense", value: sense, expected: "one of ahead, behind", unit: "" });
+  if (measure !== "turn" && measure !== "second") throw new CalcInputError({ param: "measure", value: measure, expected: "one of turn, second", unit: "" });
+  // One turn takes 2π/ω, so a drift rate D gives X = 2π·D/ω per turn (openstax-college-physics, ω = Δθ/Δt).
+  const size = measure === "turn" ? driftPerTurn : (TURN * driftRate) / angularSpeed;
+  if (size > Math.PI) {
+    // Past half a turn per turn the heading is not drifting but lost; the declared range of the
+    // per-turn input ends there, and a timed rate is held to the same.
+    throw new CalcInputError({ param: "driftRate", value: driftRate, expected: "at most 180° of drift per turn at this spin speed", unit: "rad/s" });
+  }
+  const driftPerRevolution = sense === "ahead" ? size : -size;
+  // q = ω̂/ω = 1 + X/2π: the heading moves 2π·q in one true turn (spinner-heading-practice).
+  const speedRatio = 1 + driftPerRevolution / TURN;
+  if (!(speedRatio > 0)) {
+    throw new CalcInputError({
+      param: measure === "turn" ? "driftPerTurn" : "driftRate",
+      value: measure === "turn" ? driftPerTurn : driftRate,
+      expected: "less than a full turn behind per turn (no radius cancels a heading that stands still or runs backwards)",
+      unit: measure === "turn" ? "rad" : "rad/s",
+    });
+  }
+  // r̂′ = r̂·q²: at a fixed reading ω̂ ∝ r̂^(−1/2) (spinner-heading-practice).
+  const radius = assumedRadius * speedRatio * speedRatio;
+  return { driftPerRevolution, speedRatio, radius, change: radius - assumedRadius };
+}
