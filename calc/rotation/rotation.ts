@@ -364,6 +364,8 @@ export interface AccelerometerPlacement {
   minRadius: number;
   /** Largest radius that keeps `margin` of full scale free at `topSpeed` [m]. */
   maxRadius: number;
+  /** Largest radius at which the sensor just reaches full scale at `topSpeed`, with no headroom, F/ω² [m]. */
+  maxRadiusNoHeadroom: number;
   /** True when minRadius ≤ maxRadius: some radius satisfies both. */
   windowExists: boolean;
   /** The larger of step and noise [m/s²]. */
@@ -398,7 +400,7 @@ export interface AccelerometerPlacement {
  * for the other part $F_p = m_p\,\omega_{top}^2 r_p$, $m_{eq} = F_p/g_n$, $v = \omega_{top} r_p$
  *
  * @param input every field of `accelerometerPlacementInputs`, SI
- * @returns the window, the chosen radius's figures and a verdict; the other part's load, the mass
+ * @returns the window (and its outer edge with no headroom), the chosen radius's figures and a verdict; the other part's load, the mass
  * that weighs as much [kg] and the speed it leaves at if it lets go [m/s]
  *
  * Assumptions: rotation about the centre of mass; the radius is measured from there. Sources:
@@ -422,6 +424,8 @@ export function accelerometerPlacement(input: AccelerometerPlacementInput): Acce
   return {
     minRadius,
     maxRadius,
+    // The same bound with no headroom, r = F/ω² (openstax-college-physics, a = ω²r).
+    maxRadiusNoHeadroom: maxSensorRadius({ fullScale, margin: 0, topSpeed }),
     windowExists,
     effectiveStep,
     accelerationAtTop,

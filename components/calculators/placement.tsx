@@ -126,6 +126,10 @@ function Results({ model, id }: { model: PlacementModel; id: string }) {
           <dd data-out="max-radius">{q(result.maxRadius, "length")}</dd>
         </div>
         <div>
+          <dt>Largest radius with no headroom (reads full scale at top speed)</dt>
+          <dd data-out="max-radius-bare">{q(result.maxRadiusNoHeadroom, "length")}</dd>
+        </div>
+        <div>
           <dt>Sensor reading at top speed</dt>
           <dd data-out="accel-top">{g(result.accelerationAtTop)}</dd>
         </div>

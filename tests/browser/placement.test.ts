@@ -19,6 +19,8 @@ describe("accelerometer placement in the browser", () => {
     );
     // r_max = 0.8 × 200 g / ω² at 3000 rpm = 15.9 mm; r_min at 500 rpm, 2 % = 8.65 mm (see tests/calc/rotation.test.ts).
     expect(await out(page, "max-radius")).toBe("15.9 mm");
+    // With no headroom the edge is F/ω² = 19.9 mm (tests/calc/rotation.test.ts).
+    expect(await out(page, "max-radius-bare")).toBe("19.9 mm");
     expect(await out(page, "min-radius")).toBe("8.65 mm");
     expect(await out(page, "accel-top")).toBe("121 g");
     expect(await page.locator(".verdict").textContent()).toContain("Fits.");

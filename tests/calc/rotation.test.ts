@@ -244,6 +244,14 @@ describe("accelerometer placement", () => {
     expect(r.fullScaleUsed).toBeCloseTo((314.1592653589793 ** 2 * 0.012) / (200 * STANDARD_GRAVITY), 12);
   });
 
+  it("gives the outer edge with no headroom beside the one with it: r = F/ω², 19.87 mm for ±200 g at 3000 rpm (a = ω²r, OpenStax College Physics ch. 6)", () => {
+    const r = accelerometerPlacement({ ...defaults(), topSpeed: rpmToRadPerSecond(3000), margin: 0.2 });
+    // 200 × 9.80665 / (100π)² = 1961.33 / 98 696.04 = 0.0198724 m
+    expect(r.maxRadiusNoHeadroom).toBeCloseTo((200 * STANDARD_GRAVITY) / (100 * Math.PI) ** 2, 15);
+    expect(r.maxRadiusNoHeadroom * 1000).toBeCloseTo(19.8724, 4);
+    expect(r.maxRadius / r.maxRadiusNoHeadroom).toBeCloseTo(0.8, 12);
+  });
+
   it("says when no radius satisfies both limits", () => {
     const r = accelerometerPlacement({
       ...defaults(),
