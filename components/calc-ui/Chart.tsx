@@ -3,10 +3,14 @@
  * scales use, at 1.3 KB instead of d3-scale's 11 KB with colour interpolation), any number of
  * line series and of dot series (readings, residuals), horizontal and vertical reference lines,
  * shaded bands, and an optional logarithmic x axis.
- * Renders on the server too. It carries a text summary for screen readers; the numbers
- * themselves are in the results beside it.
+ * Renders on the server too, 640 units wide; in the browser it redraws at the width it is shown
+ * at when that is narrower (a phone), so its text keeps its CSS size (12–13 px) instead of shrinking
+ * with the drawing. It carries a text summary for screen readers; the numbers themselves are in
+ * the results beside it.
  */
 import { ticks } from "d3-array";
+import { useEffect, useMemo } from "preact/hooks";
+import { signal } from "./reactive.ts";
 
 type Point = readonly [number, number];
 
@@ -49,6 +53,8 @@ export interface ChartProps {
   hBands?: readonly ChartBand[];
   width?: number;
   height?: number;
+  /** Keep the drawing `width` units wide at any size (a strip drawn beside it must line up). */
+  fixed?: boolean;
 }
 
 /** A map from a domain to a pixel range, linear or in log10, to 0.1 px (finer is invisible and only bloats the markup). */
@@ -81,9 +87,26 @@ export function Chart(props: ChartProps) {
     hLines = [],
     vLines = [],
     hBands = [],
-    width = 640,
-    height = 320,
+    width: drawn = 640,
+    height: tall = 320,
+    fixed = false,
   } = props;
+  // The width the figure is shown at, once known (a signal: the chart redraws when it changes).
+  const view = useMemo(() => ({ shown: signal(0), el: null as HTMLElement | null }), []);
+  useEffect(() => {
+    const el = view.el;
+    if (fixed || !el || typeof ResizeObserver === "undefined") return;
+    const observer = new ResizeObserver(() => {
+      view.shown.value = Math.round(el.clientWidth);
+    });
+    observer.observe(el);
+    return () => observer.disconnect();
+  }, [fixed, view]);
+  const shown = view.shown.value;
+  // Narrower than drawn: draw at the shown width (one unit = one CSS pixel), a little taller than
+  // the drawing's proportion so the plot keeps some height.
+  const width = shown > 0 && shown < drawn ? shown : drawn;
+  const height = width === drawn ? tall : Math.round(Math.max(220, tall * (width / drawn) * 1.3));
   const m = { top: 12, right: 16, bottom: 44, left: 56 };
   const x = scale(xDomain, [m.left, width - m.right], xLog);
   const y = scale(yDomain, [height - m.bottom, m.top]);
@@ -93,7 +116,12 @@ export function Chart(props: ChartProps) {
   const bottom = height - m.bottom;
   const legend = [...hBands, ...series, ...dots.map((d) => ({ ...d, className: `${d.className} swatch-dot` })), ...hLines, ...vLines];
   return (
-    <figure class="chart">
+    <figure
+      class="chart"
+      ref={(el) => {
+        view.el = el;
+      }}
+    >
       <svg viewBox={`0 0 ${width} ${height}`} role="img" aria-label={`${title}. ${summary}`} preserveAspectRatio="xMidYMid meet">
         <defs>
           <clipPath id={clipId}>
@@ -115,7 +143,7 @@ export function Chart(props: ChartProps) {
               </text>
             </g>
           ))}
-          {(xTicks ?? ticks(xDomain[0], xDomain[1], 6)).map((t) => (
+          {(xTicks ?? ticks(xDomain[0], xDomain[1], Math.min(6, Math.floor(plotW / 70)))).map((t) => (
             <g key={`x${t}`}>
               <line x1={x(t)} x2={x(t)} y1={m.top} y2={bottom} />
               <text x={x(t)} y={bottom + 16} text-anchor="middle">

@@ -225,7 +225,9 @@ export function SpinUpCharts({ r, input }: { r: SpinUpResult; input: DrivetrainI
   const peak = Math.max(r.peakBatteryCurrent, r.peakMotorCurrent, Math.min(input.currentLimit, 2 * r.peakMotorCurrent));
   return (
     <div class="dt-charts">
+      {/* Drawn at a fixed 640 units: the regime strip between the two charts lines up with their time axis. */}
       <Chart
+        fixed
         title="Speed against time"
         summary={`From rest to ${formatNumber(topRpm, 4)} rpm in ${formatNumber(r.endTime)} s; target ${formatNumber(targetRpm, 4)} rpm${r.timeToTarget === null ? ", not reached" : `, reached at ${formatNumber(r.timeToTarget)} s`}.`}
         xLabel="Time (s)"
@@ -238,6 +240,7 @@ export function SpinUpCharts({ r, input }: { r: SpinUpResult; input: DrivetrainI
       />
       <RegimeStrip r={r} />
       <Chart
+        fixed
         title="Current against time"
         summary={`Battery current peaks at ${formatNumber(r.peakBatteryCurrent)} A; each motor peaks at ${formatNumber(r.peakMotorCurrent)} A against a limit of ${formatNumber(input.currentLimit)} A.`}
         xLabel="Time (s)"
