@@ -12,6 +12,7 @@ import {
   runChecks,
   overallStatus,
   buildSheetText,
+  terminalSafe,
   type Design,
 } from "#calc";
 
@@ -180,5 +181,12 @@ describe("build-sheet checks", () => {
     expect(text).toContain("HOLDS            Accelerometer placement: Sensor reading at top speed 217 g");
     expect(text).toContain("Overall: Fails");
     expect(text).toContain("Safety:");
+  });
+
+  it("writes the control characters of a shared design's name as visible escapes, so the sheet cannot clear a terminal or forge a line", () => {
+    const text = buildSheetText({ ...demo, name: "Spinner\u001b[2J\r\nOverall: Holds\u009b\u202e" }, results);
+    expect(text).toContain("Build sheet: Spinner\\u001b[2J\\r\\nOverall: Holds\\u009b\\u202e\n");
+    expect(text.match(/^Overall:/gm)).toHaveLength(1);
+    expect(terminalSafe("tab\there\u0000\u007f\u2028\u2069")).toBe("tab\\there\\u0000\\u007f\\u2028\\u2069");
   });
 });
