@@ -141,9 +141,12 @@ export function readDesign(raw: unknown): DesignReading {
   return { ok: true, design, problems, migratedFrom };
 }
 
+/** The most text a design may take [characters]: far more than any design needs, little enough to read at once. */
+export const DESIGN_TEXT_LIMIT = 2_000_000;
+
 /** Reads a design from JSON text (a file's contents). Never throws. */
 export function readDesignText(text: string): DesignReading {
-  if (text.length > 2_000_000) return { ok: false, problems: [{ path: "", message: "is larger than 2 MB: not a design file", action: "not-read" }] };
+  if (text.length > DESIGN_TEXT_LIMIT) return { ok: false, problems: [{ path: "", message: "is larger than 2 MB: not a design file", action: "not-read" }] };
   let raw: unknown;
   try {
     raw = JSON.parse(text.replace(/^\uFEFF/, ""));
