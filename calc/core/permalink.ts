@@ -49,7 +49,9 @@ export function quoteForNotice(text: string): string {
 export function readLinkKeys(search: string, scope: string, keys: readonly LinkKey[], passthrough: readonly string[] = []): LinkReading {
   const params = new URLSearchParams(search);
   const known = new Map(keys.map((k) => [k.key, k]));
-  const values: Record<string, string> = {};
+  // No prototype: a reader asking for a key the link did not set gets undefined, even for a key
+  // named like something every object has ("constructor").
+  const values: Record<string, string> = Object.create(null);
   const notices: string[] = [];
   let system: UnitSystem | undefined;
   const seen = new Set<string>();

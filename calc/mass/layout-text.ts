@@ -34,7 +34,8 @@ const SHAPE_TOKENS: Record<PartShapeKind, string> = {
   cylinder: "cyl",
   custom: "cust",
 };
-const TOKEN_SHAPES: Record<string, PartShapeKind> = Object.fromEntries(Object.entries(SHAPE_TOKENS).map(([k, v]) => [v, k as PartShapeKind]));
+// A Map, not an object: a token such as "toString" or "constructor" must not find what every object inherits.
+const TOKEN_SHAPES = new Map(Object.entries(SHAPE_TOKENS).map(([k, v]) => [v, k as PartShapeKind]));
 const DIM_COUNT: Record<PartShapeKind, number> = { point: 0, disk: 1, ring: 1, annulus: 2, plate: 3, rod: 2, cylinder: 2, custom: 3 };
 const MM = 1e-3;
 const GRAM = 1e-3;
@@ -137,7 +138,7 @@ export interface LayoutParseResult {
 
 function parsePartToken(token: string): LayoutPart | string {
   const fields = token.split("_");
-  const kind = TOKEN_SHAPES[fields[0] ?? ""];
+  const kind = TOKEN_SHAPES.get(fields[0] ?? "");
   if (!kind) return `unknown shape "${(fields[0] ?? "").slice(0, 12)}"; use one of ${Object.values(SHAPE_TOKENS).join(", ")}`;
   const nDims = DIM_COUNT[kind];
   const minFields = 5 + nDims + 1;

@@ -136,6 +136,23 @@ describe("mass layout in the browser", () => {
     await context.close();
   });
 
+  it.each(["toString", "constructor", "hasOwnProperty"])(
+    "refuses %s as the counterweight question, a shape and a material, each with a notice, and keeps working",
+    async (name) => {
+      const layout = `v1~pt_a_10_0_0_100~${name}_b_0_0_0_10_100~disk_c_0_0_0_10_${name}_3`;
+      const { page, context, problems } = await open(`${PAGE}?v=1&cw=${name}&l=${encodeURIComponent(layout)}`);
+      const notices = (await page.locator(".calc-notices").textContent()) ?? "";
+      expect(notices).toContain(`The link's counterweight question "${name}" is not one this calculator offers; it was ignored.`);
+      expect(notices).toContain(`Part 2 of the link's parts list was left out: unknown shape "${name.slice(0, 12)}"`);
+      expect(notices).toContain(`Part 3 of the link's parts list was left out: mass "${name}" is neither a number of grams nor a known material`);
+      expect(await page.locator(".mass-parts details").count()).toBe(1);
+      expect(await page.getByRole("radio", { name: "Mass at a radius" }).isChecked()).toBe(true);
+      expect(await out(page, "com-x")).toBe("10.0 mm");
+      expect(problems).toEqual([]);
+      await context.close();
+    },
+  );
+
   it("opens the worked example from the chapter's link: the invented demo robot with its four bolts", async () => {
     const first = await open(PAGE);
     const href = await first.page.getByRole("link", { name: "Open this example in the calculator" }).getAttribute("href");
