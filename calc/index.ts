@@ -19,6 +19,7 @@ export * from "./mass/parts.ts";
 export * from "./mass/properties.ts";
 export * from "./mass/editing.ts";
 export * from "./mass/layout-text.ts";
+export * from "./mass/part-messages.ts";
 export * from "./mass/drawing.ts";
 export * from "./mass/balance.ts";
 export * from "./mass/counterweight.ts";

@@ -92,8 +92,12 @@ const CONTROL_CHARACTERS = /[\u0000-\u001f\u007f-\u009f\u200e\u200f\u2028\u2029\
 
 /**
  * Writes every control character (which could clear a terminal, move its cursor, retitle its window,
- * forge a line or reverse the text after it) as a visible escape, `\r` and `\n` included:
- * `terminalSafe("a\u001b[2J\r\nb")` is the text `a\u001b[2J\r\nb` with each backslash printed.
+ * forge a line or reverse the text after it) as a visible escape, `\r` and `\n` included.
+ *
+ * @param text any text, e.g. a design's name
+ * @returns the text with each control character written as `\n`, `\r`, `\t` or `\uXXXX`
+ * @example
+ * terminalSafe("a\u001b[2J\r\nb") // → "a\u001b[2J\r\nb"
  */
 export function terminalSafe(text: string): string {
   return text.replace(CONTROL_CHARACTERS, (c) => {

@@ -5,12 +5,16 @@
  * left out and reported; nothing is dropped silently.
  */
 import { type AnyCalculator, type AnyValues, initialValues } from "../core/calculator.ts";
-import { describeRange, type InputSpec } from "../core/inputs.ts";
+import { choiceLabel } from "../core/choices.ts";
+import { defaultText, describeRange, describeReceived, fieldUnit, type InputSpec } from "../core/inputs.ts";
+import type { UnitSystem } from "../core/units.ts";
 
 /** One thing wrong with a file, and what was done about it. */
 export interface DesignProblem {
   /** Where, as a path: "placement.radius", "fasteners[2].size", "" for the whole file. */
   path: string;
+  /** The calculator (and list entry) the value belongs to, in the handbook's words: "Fasteners: Battery bracket". */
+  section?: string;
   message: string;
   /** What happened: the field took its default, the item was dropped, the section was dropped, or nothing could be read. */
   action: "default-used" | "item-dropped" | "section-dropped" | "not-read";
@@ -21,11 +25,6 @@ export class SectionDropped extends Error {}
 
 /** Longest name of a list entry [characters]. */
 export const MAX_ENTRY_NAME = 80;
-
-function preview(value: unknown): string {
-  const text = typeof value === "string" ? JSON.stringify(value) : String(JSON.stringify(value) ?? value);
-  return text.length > 40 ? `${text.slice(0, 40)}…` : text;
-}
 
 /** Whether a stored number is one the field would accept. */
 function numberFits(spec: InputSpec, value: unknown): value is number {
@@ -40,36 +39,49 @@ function numberFits(spec: InputSpec, value: unknown): value is number {
 
 const isRecord = (v: unknown): v is Record<string, unknown> => typeof v === "object" && v !== null && !Array.isArray(v);
 
+/** How a section is read: the design's unit system (for messages), the section's words, keys besides the calculator's own. */
+export interface ReadOptions {
+  system?: UnitSystem;
+  section?: string;
+  allowed?: readonly string[];
+}
+
 /**
  * Reads one set of a calculator's values from a stored object: each bad or missing value takes its
- * default and is reported; fields that are not the calculator's are reported and ignored.
+ * default and is reported in the field's words and the design's units; fields that are not the
+ * calculator's are reported and ignored.
  */
-export function readValues(calc: AnyCalculator, raw: unknown, path: string, problems: DesignProblem[], allowed: readonly string[] = []): AnyValues {
+export function readValues(calc: AnyCalculator, raw: unknown, path: string, problems: DesignProblem[], options: ReadOptions = {}): AnyValues {
+  const { system = "metric", section = calc.title, allowed = [] } = options;
   if (!isRecord(raw)) {
-    problems.push({ path, message: "must be an object of named values", action: "section-dropped" });
+    problems.push({ path, section, message: "must be an object of named values", action: "section-dropped" });
     throw new SectionDropped();
   }
   const out: AnyValues = initialValues(calc);
   for (const [name, spec] of Object.entries(calc.inputs)) {
     const value = raw[name];
+    const fallback = `the default, ${defaultText(spec, system)}, was used`;
     if (value === undefined) {
-      problems.push({ path: `${path}.${name}`, message: `is missing; the default (${spec.default} SI) was used`, action: "default-used" });
+      problems.push({ path: `${path}.${name}`, section, message: `${spec.label} is missing; ${fallback}`, action: "default-used" });
     } else if (numberFits(spec, value)) {
       out[name] = value;
     } else {
-      const why = typeof value !== "number" ? "must be a number" : `must be ${describeRange(spec, "metric")}`;
-      problems.push({ path: `${path}.${name}`, message: `${why} (got ${preview(value)}); the default was used`, action: "default-used" });
+      const rule = typeof value === "number" ? describeRange(spec, system) : "a number";
+      const got = describeReceived(value, fieldUnit(spec, system));
+      problems.push({ path: `${path}.${name}`, section, message: `${spec.label} must be ${rule} (got ${got}); ${fallback}`, action: "default-used" });
     }
   }
   for (const [name, spec] of Object.entries(calc.choices)) {
     const value = raw[name];
+    const fallback = `${choiceLabel(spec, spec.default)} was used`;
     if (typeof value === "string" && spec.options.some((o) => o.value === value)) out[name] = value;
     else if (value === undefined) {
-      problems.push({ path: `${path}.${name}`, message: `is missing; "${spec.default}" was used`, action: "default-used" });
+      problems.push({ path: `${path}.${name}`, section, message: `${spec.label} is missing; ${fallback}`, action: "default-used" });
     } else {
       problems.push({
         path: `${path}.${name}`,
-        message: `must be one of ${spec.options.map((o) => o.value).join(", ")} (got ${preview(value)}); "${spec.default}" was used`,
+        section,
+        message: `${spec.label} must be one of ${spec.options.map((o) => o.value).join(", ")} (got ${describeReceived(value)}); ${fallback}`,
         action: "default-used",
       });
     }
@@ -77,9 +89,9 @@ export function readValues(calc: AnyCalculator, raw: unknown, path: string, prob
   for (const [name, spec] of Object.entries(calc.extras)) {
     const value = raw[name];
     if (value === undefined) continue;
-    const read = spec.fromDesign(value);
+    const read = spec.fromDesign(value, system);
     for (const p of read.problems)
-      problems.push({ path: `${path}.${name}${p.path}`, message: p.message, action: read.value === null ? "default-used" : "item-dropped" });
+      problems.push({ path: `${path}.${name}${p.path}`, section, message: p.message, action: read.value === null ? "default-used" : "item-dropped" });
     if (read.value !== null) out[name] = read.value;
   }
   const known = new Set([...Object.keys(calc.inputs), ...Object.keys(calc.choices), ...Object.keys(calc.extras), ...allowed]);
@@ -93,8 +105,14 @@ export function readValues(calc: AnyCalculator, raw: unknown, path: string, prob
  * Reads a calculator's whole section: its values, or for a list calculator its named entries (at
  * most the declared number; each entry that is not an object is left out and reported).
  */
-export function readSection(calc: AnyCalculator, raw: unknown, path: string, problems: DesignProblem[]): AnyValues | AnyValues[] {
-  if (calc.section.kind === "single") return readValues(calc, raw, path, problems);
+export function readSection(
+  calc: AnyCalculator,
+  raw: unknown,
+  path: string,
+  problems: DesignProblem[],
+  system: UnitSystem = "metric",
+): AnyValues | AnyValues[] {
+  if (calc.section.kind === "single") return readValues(calc, raw, path, problems, { system });
   const { max, entryName } = calc.section;
   if (!Array.isArray(raw)) {
     problems.push({ path, message: "must be a list", action: "section-dropped" });
@@ -118,7 +136,7 @@ export function readSection(calc: AnyCalculator, raw: unknown, path: string, pro
       });
     }
     try {
-      entries.push({ name, ...readValues(calc, item, itemPath, problems, ["name"]) });
+      entries.push({ name, ...readValues(calc, item, itemPath, problems, { system, section: `${calc.title}: ${name}`, allowed: ["name"] }) });
     } catch (error) {
       if (!(error instanceof SectionDropped)) throw error;
     }

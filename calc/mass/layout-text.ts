@@ -6,6 +6,7 @@ import { CalcInputError } from "../core/errors.ts";
 import { exactNumberText, readExactNumber } from "../core/units.ts";
 import { isMaterialId } from "../materials/densities.ts";
 
+import { describePartProblem } from "./part-messages.ts";
 import { type LayoutPart, MAX_PARTS, type PartMassSpec, type PartShape, type PartShapeKind, checkPart } from "./parts.ts";
 
 // ---------------------------------------------------------------------------------------------
@@ -197,7 +198,8 @@ function parsePartToken(token: string): LayoutPart | string {
   try {
     checkPart(part);
   } catch (error) {
-    return error instanceof CalcInputError ? error.message.replace(/^part\./, "") : "the part is not valid";
+    const { label, rule } = describePartProblem(error, { shape: kind });
+    return `${label} ${rule}`;
   }
   return part;
 }

@@ -9,7 +9,7 @@
  * convention: $I'_{xz}$ is a part's own product about its own centre; the inertia-tensor element is
  * the negative of it.
  */
-import { CalcInputError, requireInRange, requirePositive, requireRelation } from "../core/errors.ts";
+import { CalcInputError, requireInRange, requireRelation } from "../core/errors.ts";
 import { isMaterialId, MATERIAL_DENSITIES, type MaterialId } from "../materials/densities.ts";
 
 // ---------------------------------------------------------------------------------------------
@@ -77,7 +77,6 @@ export const MAX_PARTS = 200;
 
 /** Checks a part dimension: greater than 0 m and at most 100 m (param names the field). @internal */
 export function requireLength(param: string, value: number): number {
-  requirePositive(param, value, "m");
   return requireInRange(param, value, "m", { min: 0, max: MAX_LENGTH, minOpen: true });
 }
 
@@ -147,7 +146,6 @@ export function checkPart(part: LayoutPart, prefix = "part"): void {
   }
   const m = part.mass;
   if (m?.kind === "given") {
-    requirePositive(`${prefix}.mass.mass`, m.mass, "kg");
     requireInRange(`${prefix}.mass.mass`, m.mass, "kg", { min: 0, max: MAX_PART_MASS, minOpen: true });
   } else if (m?.kind === "material") {
     if (!isMaterialId(m.material)) {

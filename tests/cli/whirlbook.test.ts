@@ -77,7 +77,9 @@ describe("whirlbook check", { timeout: 30_000 }, () => {
     broken.placement.radius = -1;
     const { stdout } = run("check", write("partly.json", JSON.stringify(broken)));
     expect(stdout).toContain("Read ");
-    expect(stdout).toContain("placement.radius must be greater than 0 mm and at most 2000 mm (got -1); the default was used.");
+    expect(stdout).toContain(
+      "Accelerometer placement (placement.radius): Sensor radius must be greater than 0 mm and at most 2000 mm (got -1000 mm); the default, 20 mm, was used.",
+    );
   });
 
   describe("with a hostile design file", () => {

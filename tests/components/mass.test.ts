@@ -2,7 +2,8 @@ import { describe, expect, it } from "vitest";
 import { demoRobotBalance, demoRobotParts } from "../../calc/mass/demo.ts";
 import { encodeLayout, parseLayout } from "../../calc/mass/layout-text.ts";
 import { createMassModel, readPoints } from "../../components/mass/model.ts";
-import { createPart, partFields, readPart } from "../../components/mass/parts.ts";
+import { createPart, PART_INPUTS, partFields, readPart } from "../../components/mass/parts.ts";
+import { PART_FIELD_UNITS, PART_FIELD_WORDS } from "../../calc/mass/part-messages.ts";
 
 const DEMO = encodeLayout(demoRobotParts());
 const demo = demoRobotBalance().balance;
@@ -81,7 +82,7 @@ describe("mass-layout model", () => {
     expect(model.parts.value.map((p) => p.name.value)).toEqual(["a"]);
     expect(model.notices.value).toEqual([
       'Part 2 of the link\'s parts list was left out: unknown shape "blob"; use one of pt, disk, ring, ann, plate, rod, cyl, cust.',
-      "Part 3 of the link's parts list was left out: shape.radius must be greater than 0 m (got -0.005 m).",
+      "Part 3 of the link's parts list was left out: Radius must be greater than 0 mm and at most 100000 mm (got -5 mm).",
     ]);
   });
 
@@ -220,5 +221,13 @@ describe("mass-layout model", () => {
     const text = model.queryFor("");
     const l = new URLSearchParams(text).get("l")!;
     expect(parseLayout(l).parts).toEqual(parseLayout(DEMO).parts);
+  });
+});
+
+describe("messages about a part read from a link or a design", () => {
+  it.each(Object.entries(PART_INPUTS))("name the %s field as the parts editor labels it, in its units", (name, spec) => {
+    const words = PART_FIELD_WORDS[name as keyof typeof PART_FIELD_WORDS];
+    expect(words.label).toBe(spec.label);
+    expect(PART_FIELD_UNITS[words.kind]).toEqual(spec.unit);
   });
 });
