@@ -4,7 +4,6 @@
  */
 import { figureOf } from "../core/check.ts";
 import { defineCalculator, defineForm, type ExtraSpec, type ValueProblem } from "../core/calculator.ts";
-import { describeReceived } from "../core/inputs.ts";
 import { formatNumber, formatQuantity } from "../core/units.ts";
 import { CALIBRATION_ROWS_MAX, decodeCalibrationRows, encodeCalibrationRows } from "../heading/calibration-rows.ts";
 import { type CalibrationRow, calibrationFitInputs, demoCalibrationRows, fitCalibration } from "../heading/calibration.ts";
@@ -33,13 +32,7 @@ const rows: ExtraSpec<CalibrationRow[]> = {
       const acceleration = r?.acceleration;
       if (typeof speed === "number" && Number.isFinite(speed) && speed >= 0 && typeof acceleration === "number" && Number.isFinite(acceleration)) {
         value.push({ angularSpeed: speed, acceleration });
-      } else {
-        const got = `got ${describeReceived(speed, "rpm")} and ${describeReceived(acceleration, "gn")}`;
-        problems.push({
-          path: `[${i}]`,
-          message: `Reading ${i + 1} must be a speed of 0 rpm or more and an acceleration, both numbers (${got}); it was left out`,
-        });
-      }
+      } else problems.push({ path: `[${i}]`, message: `Reading ${i + 1} must be a speed of 0 rpm or more and an acceleration, both numbers; it was left out` });
     }
     if (raw.length > CALIBRATION_ROWS_MAX)
       problems.push({ path: "", message: `lists ${raw.length} readings; only the first ${CALIBRATION_ROWS_MAX} were read` });

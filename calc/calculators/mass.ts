@@ -5,14 +5,12 @@
  */
 import { figureOf } from "../core/check.ts";
 import { defineChoices } from "../core/choices.ts";
-import { defineCalculator, defineForm, type ExtraSpec, type ValueProblem } from "../core/calculator.ts";
-import { describeReceived } from "../core/inputs.ts";
+import { defineCalculator, defineForm, type ExtraSpec } from "../core/calculator.ts";
 import { formatNumber, formatQuantity, type QuantityKind } from "../core/units.ts";
 import type { MountingPoint } from "../mass/counterweight.ts";
 import { encodeLayout, parseLayout } from "../mass/layout-text.ts";
 import { massBalance, massBalanceInputs } from "../mass/mass-balance.ts";
-import { describePartProblem } from "../mass/part-messages.ts";
-import { type LayoutPart, MAX_PARTS } from "../mass/parts.ts";
+import type { LayoutPart } from "../mass/parts.ts";
 import { readMountingPoints, writeMountingPoints } from "../mass/points-text.ts";
 
 /** The parts list, in a link as the compact layout text ("v1~disk_base_…"). */
@@ -31,28 +29,6 @@ const parts: ExtraSpec<LayoutPart[]> = {
         : `Part ${p.index + 1} of the link's parts list was left out: ${p.reason}.`,
     );
     return { value: whole && read.parts.length === 0 ? null : read.parts, notices };
-  },
-  // A stored part is read the way a link's part is: written as layout text and read back, so a
-  // design can hold no part a link could not.
-  fromDesign(raw, system) {
-    if (!Array.isArray(raw)) return { value: null, problems: [{ path: "", message: "must be a list of parts" }] };
-    const value: LayoutPart[] = [];
-    const problems: ValueProblem[] = [];
-    for (const [i, item] of raw.slice(0, MAX_PARTS).entries()) {
-      const name = typeof item?.name === "string" ? ` “${item.name.slice(0, 60)}”` : "";
-      let read: ReturnType<typeof parseLayout>;
-      try {
-        read = parseLayout(encodeLayout([item as LayoutPart]));
-      } catch (error) {
-        const { label, rule } = describePartProblem(error, { system, shape: item?.shape?.kind });
-        problems.push({ path: `[${i}]`, message: `${label} of part ${i + 1}${name} ${rule}; the part was left out` });
-        continue;
-      }
-      if (read.parts[0]) value.push(read.parts[0]);
-      else problems.push({ path: `[${i}]`, message: `Part ${i + 1}${name} ${read.problems[0]?.reason ?? "is not a part"}; the part was left out` });
-    }
-    if (raw.length > MAX_PARTS) problems.push({ path: "", message: `lists ${raw.length} parts; only the first ${MAX_PARTS} were read` });
-    return { value, problems };
   },
 };
 
@@ -75,9 +51,7 @@ const candidates: ExtraSpec<MountingPoint[]> = {
       const read = raw.length === 0 ? { points: [], error: null } : readMountingPoints(writeMountingPoints(raw as MountingPoint[], "metric"), "metric");
       return read.points ? { value: read.points, problems: [] } : { value: [], problems: [{ path: "", message: `${read.error} The points were left out` }] };
     } catch {
-      const at = raw.findIndex((p) => !(Number.isFinite(p?.x) && Number.isFinite(p?.y)));
-      const got = at < 0 ? "" : ` (point ${at + 1} has ${describeReceived(raw[at]?.x, "mm")} and ${describeReceived(raw[at]?.y, "mm")})`;
-      return { value: [], problems: [{ path: "", message: `Mounting points must each have x and y as numbers${got}; they were left out` }] };
+      return { value: [], problems: [{ path: "", message: "must be points { x, y } in metres; they were left out" }] };
     }
   },
 };

@@ -49,9 +49,7 @@ export function quoteForNotice(text: string): string {
 export function readLinkKeys(search: string, scope: string, keys: readonly LinkKey[], passthrough: readonly string[] = []): LinkReading {
   const params = new URLSearchParams(search);
   const known = new Map(keys.map((k) => [k.key, k]));
-  // No prototype: a reader asking for a key the link did not set gets undefined, even for a key
-  // named like something every object has ("constructor").
-  const values: Record<string, string> = Object.create(null);
+  const values: Record<string, string> = {};
   const notices: string[] = [];
   let system: UnitSystem | undefined;
   const seen = new Set<string>();

@@ -8,7 +8,7 @@
 import * as v from "valibot";
 import type { AnyCalculator } from "../core/calculator.ts";
 import { CalcInputError } from "../core/errors.ts";
-import { describeReceived } from "../core/inputs.ts";
+import { describeReceived } from "../core/received.ts";
 import { CALCULATORS } from "./registry.ts";
 import { DESIGN_FORMAT, DESIGN_VERSION, type Design, HEADER_FIELDS } from "./format.ts";
 import { readSection, type DesignProblem, SectionDropped } from "./sections.ts";

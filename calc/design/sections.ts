@@ -4,10 +4,12 @@
  * readers), and written back. A bad value takes its default and is reported; a bad list entry is
  * left out and reported; nothing is dropped silently.
  */
-import { type AnyCalculator, type AnyValues, initialValues } from "../core/calculator.ts";
+import { type AnyCalculator, type AnyValues, type ExtraSpec, initialValues, type ValueProblem } from "../core/calculator.ts";
 import { choiceLabel } from "../core/choices.ts";
-import { defaultText, describeRange, describeReceived, fieldUnit, type InputSpec } from "../core/inputs.ts";
+import { defaultText, describeRange, fieldUnit, type InputSpec } from "../core/inputs.ts";
+import { describeReceived } from "../core/received.ts";
 import type { UnitSystem } from "../core/units.ts";
+import { describePartProblem } from "../mass/part-messages.ts";
 
 /** One thing wrong with a file, and what was done about it. */
 export interface DesignProblem {
@@ -38,6 +40,48 @@ function numberFits(spec: InputSpec, value: unknown): value is number {
 }
 
 const isRecord = (v: unknown): v is Record<string, unknown> => typeof v === "object" && v !== null && !Array.isArray(v);
+
+/** Whether a list reads back whole from the link text it is written as. */
+function fits(spec: ExtraSpec<unknown>, list: unknown[]): boolean {
+  try {
+    return (spec.read(spec.write(list, "metric"), "metric").value as unknown[] | null)?.length === list.length;
+  } catch {
+    return false;
+  }
+}
+
+/**
+ * Reads a stored list that has no reader of its own the way a link carries it: each entry written
+ * as link text and read back, so a design holds nothing a link could not. An entry that cannot be
+ * written is left out and reported in the parts editor's words (the mass layout's lists are the ones
+ * read this way) and the design's units; a list longer than a link carries keeps its first entries.
+ */
+function readAsLink(spec: ExtraSpec<unknown>, raw: unknown, system: UnitSystem): { value: unknown[] | null; problems: ValueProblem[] } {
+  if (!Array.isArray(raw)) return { value: null, problems: [{ path: "", message: `${spec.label} must be a list` }] };
+  const value: unknown[] = [];
+  const problems: ValueProblem[] = [];
+  for (const [i, item] of raw.entries()) {
+    const entry = `entry ${i + 1}${typeof item?.name === "string" ? ` “${item.name.slice(0, 60)}”` : ""} of the ${spec.label.toLowerCase()}`;
+    try {
+      const [read] = (spec.read(spec.write([item], "metric"), "metric").value as unknown[] | null) ?? [];
+      if (read === undefined) throw new Error("unreadable");
+      value.push(read);
+    } catch (error) {
+      const { label, rule } = describePartProblem(error, { system, shape: item?.shape?.kind, received: describeReceived });
+      problems.push({ path: `[${i}]`, message: `${label} ${rule}, in ${entry}; it was left out` });
+    }
+  }
+  // The longest start of the list that a link carries (fitting is monotone: binary search).
+  let [low, high] = [0, value.length];
+  while (low < high) {
+    const middle = Math.ceil((low + high) / 2);
+    if (fits(spec, value.slice(0, middle))) low = middle;
+    else high = middle - 1;
+  }
+  if (low < value.length)
+    problems.push({ path: "", message: `${spec.label} holds ${value.length} entries; only the first ${low} were read, as many as a link carries` });
+  return { value: value.slice(0, low), problems };
+}
 
 /** How a section is read: the design's unit system (for messages), the section's words, keys besides the calculator's own. */
 export interface ReadOptions {
@@ -89,7 +133,7 @@ export function readValues(calc: AnyCalculator, raw: unknown, path: string, prob
   for (const [name, spec] of Object.entries(calc.extras)) {
     const value = raw[name];
     if (value === undefined) continue;
-    const read = spec.fromDesign(value, system);
+    const read = spec.fromDesign ? spec.fromDesign(value) : readAsLink(spec, value, system);
     for (const p of read.problems)
       problems.push({ path: `${path}.${name}${p.path}`, section, message: p.message, action: read.value === null ? "default-used" : "item-dropped" });
     if (read.value !== null) out[name] = read.value;

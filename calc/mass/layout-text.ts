@@ -6,7 +6,6 @@ import { CalcInputError } from "../core/errors.ts";
 import { exactNumberText, readExactNumber } from "../core/units.ts";
 import { isMaterialId } from "../materials/densities.ts";
 
-import { describePartProblem } from "./part-messages.ts";
 import { type LayoutPart, MAX_PARTS, type PartMassSpec, type PartShape, type PartShapeKind, checkPart } from "./parts.ts";
 
 // ---------------------------------------------------------------------------------------------
@@ -125,6 +124,13 @@ export interface LayoutProblem {
   index: number | null;
   /** What is wrong, in words. */
   reason: string;
+  /**
+   * The rule a part broke, when it broke one (a `CalcInputError` from `checkPart`), and its shape:
+   * for a page to word in its editor's terms (`describePartProblem`); `reason` then gives the error
+   * as `checkPart` states it.
+   */
+  error?: unknown;
+  shape?: PartShapeKind;
 }
 
 export interface LayoutParseResult {
@@ -137,7 +143,7 @@ export interface LayoutParseResult {
   problems: LayoutProblem[];
 }
 
-function parsePartToken(token: string): LayoutPart | string {
+function parsePartToken(token: string): LayoutPart | string | { error: unknown; shape: PartShapeKind } {
   const fields = token.split("_");
   const kind = TOKEN_SHAPES.get(fields[0] ?? "");
   if (!kind) return `unknown shape "${(fields[0] ?? "").slice(0, 12)}"; use one of ${Object.values(SHAPE_TOKENS).join(", ")}`;
@@ -198,8 +204,7 @@ function parsePartToken(token: string): LayoutPart | string {
   try {
     checkPart(part);
   } catch (error) {
-    const { label, rule } = describePartProblem(error, { shape: kind });
-    return `${label} ${rule}`;
+    return { error, shape: kind };
   }
   return part;
 }
@@ -240,6 +245,7 @@ export function parseLayout(text: unknown): LayoutParseResult {
   tokens.slice(0, MAX_PARTS).forEach((token, index) => {
     const result = parsePartToken(token);
     if (typeof result === "string") problems.push({ index, reason: result });
+    else if ("error" in result) problems.push({ index, reason: (result.error as Error).message, ...result });
     else parts.push(result);
   });
   return { ok: problems.length === 0, version, parts, problems };

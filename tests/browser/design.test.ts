@@ -70,7 +70,11 @@ describe("build sheet", () => {
     const file = join(scratch, "edited.json");
     writeFileSync(file, JSON.stringify(exported));
     await page.setInputFiles('input[type="file"]', file);
-    await expect.poll(() => page.locator(".calc-notices").first().textContent()).toContain("placement.radius must be greater than 0 mm");
+    await expect
+      .poll(() => page.locator(".calc-notices").first().textContent())
+      .toContain(
+        "Accelerometer placement (placement.radius): Sensor radius must be greater than 0 mm and at most 2000 mm (got -1000 mm); the default, 20 mm, was used.",
+      );
     // The valid values of the file come through beside the refused one: the fastener check now uses two bolts.
     await expect.poll(() => checkFigure(page, "fasteners[0]")).not.toBe(fastenersBefore);
     expect(await checkFigure(page, "fasteners[0]")).toBeTruthy();

@@ -111,7 +111,7 @@ describe("design file", () => {
       "fasteners[1].size: default-used",
     ]);
     expect(reading.problems[2]!.message).toBe("Sensor radius must be greater than 0 mm and at most 2000 mm (got -3000 mm); the default, 20 mm, was used");
-    expect(reading.problems[3]!.message).toMatch(/must be .*; the part was left out$/);
+    expect(reading.problems[3]!.message).toBe("x is missing, in entry 3 “lid” of the parts list; it was left out");
     expect(reading.problems[4]!.message).toBe('Thread size must be one of M2, M2.5, M3, M4, M5, M6, M8, M10, M12 (got the text "M99"); M4 × 0.7 was used');
   });
 
@@ -178,7 +178,7 @@ describe("what a design file's problems say", () => {
     ]);
   });
 
-  it("words a stored reading and mounting point in the calculator's units", () => {
+  it("says which stored reading or mounting point is not a pair of numbers", () => {
     const withRows = (rows: unknown[]) => {
       const file = JSON.parse(designToText(demo));
       file.calibration = { confidence: 0.95, spikeThreshold: 3.5, rows };
@@ -189,31 +189,45 @@ describe("what a design file's problems say", () => {
         { angularSpeed: 10, acceleration: 1 },
         { angularSpeed: "fast", acceleration: "__too large__" },
       ]),
-    ).toEqual([
-      'Calibration fit (calibration.rows[1]): Reading 2 must be a speed of 0 rpm or more and an acceleration, both numbers (got the text "fast" and a number too large to store); it was left out.',
-    ]);
+    ).toEqual(["Calibration fit (calibration.rows[1]): Reading 2 must be a speed of 0 rpm or more and an acceleration, both numbers; it was left out."]);
     expect(said((d) => (d.mass.candidates[1].x = "0"))).toEqual([
-      'Mass layout and balance (mass.candidates): Mounting points must each have x and y as numbers (point 2 has the text "0" and 20 mm); they were left out.',
+      "Mass layout and balance (mass.candidates): must be points { x, y } in metres; they were left out.",
     ]);
   });
 
   it("words a part's field as the parts editor does: its label, and its range and the value in the editor's units", () => {
-    expect(said((d) => (d.mass.parts[0].x = "0"))).toEqual([
-      'Mass layout and balance (mass.parts[0]): x of part 1 “base plate” must be a number (got the text "0"); the part was left out.',
-    ]);
-    expect(said((d) => (d.mass.parts[0].shape.radius = -1))).toEqual([
-      "Mass layout and balance (mass.parts[0]): Radius of part 1 “base plate” must be greater than 0 mm and at most 100000 mm (got -1000 mm); the part was left out.",
-    ]);
-    expect(said((d) => (d.mass.parts[0].z = "__too large__"), TOO_LARGE)).toEqual([
-      "Mass layout and balance (mass.parts[0]): Height z of part 1 “base plate” must be between -100000 mm and 100000 mm (got a number too large to store); the part was left out.",
-    ]);
+    const part = (change: Parameters<typeof said>[0]) => said(change)[0];
+    expect(part((d) => (d.mass.parts[0].x = "0"))).toBe(
+      'Mass layout and balance (mass.parts[0]): x must be a number (got the text "0"), in entry 1 “base plate” of the parts list; it was left out.',
+    );
+    expect(part((d) => (d.mass.parts[0].shape.radius = -1))).toBe(
+      "Mass layout and balance (mass.parts[0]): Radius must be greater than 0 mm and at most 100000 mm (got -1000 mm), in entry 1 “base plate” of the parts list; it was left out.",
+    );
+    expect(said((d) => (d.mass.parts[0].z = "__too large__"), TOO_LARGE)[0]).toBe(
+      "Mass layout and balance (mass.parts[0]): Height z must be between -100000 mm and 100000 mm (got a number too large to store), in entry 1 “base plate” of the parts list; it was left out.",
+    );
     expect(
-      said((d) => {
+      part((d) => {
         d.units = "us";
         d.mass.parts[3].mass.mass = 0;
       }),
-    ).toEqual([
-      "Mass layout and balance (mass.parts[3]): Mass of part 4 “battery” must be greater than 0 oz and at most 352700 oz (got 0 oz); the part was left out.",
+    ).toBe(
+      "Mass layout and balance (mass.parts[3]): Mass must be greater than 0 oz and at most 352700 oz (got 0 oz), in entry 4 “battery” of the parts list; it was left out.",
+    );
+    expect(part((d) => (d.mass.parts[0].mass.kind = "weighed"))).toBe(
+      'Mass layout and balance (mass.parts[0]): Mass source must be "given" or "material", in entry 1 “base plate” of the parts list; it was left out.',
+    );
+    expect(part((d) => (d.mass.parts[1].shape.innerRadius = 0.08))).toBe(
+      "Mass layout and balance (mass.parts[1]): Inner radius must be less than the outer radius (75 mm) (got 80 mm), in entry 2 “armour ring” of the parts list; it was left out.",
+    );
+    expect(part((d) => delete d.mass.parts[1].x)).toBe(
+      "Mass layout and balance (mass.parts[1]): x is missing, in entry 2 “armour ring” of the parts list; it was left out.",
+    );
+  });
+
+  it("keeps as many stored parts as a link carries, and says so", () => {
+    expect(said((d) => (d.mass.parts = Array.from({ length: 250 }, () => d.mass.parts[8])))).toEqual([
+      "Mass layout and balance (mass.parts): Parts list holds 250 entries; only the first 200 were read, as many as a link carries.",
     ]);
   });
 });

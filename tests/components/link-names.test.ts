@@ -18,6 +18,20 @@ import { createMassModel } from "../../components/mass/model.ts";
 const NAMES = ["toString", "__proto__", "constructor", "hasOwnProperty", "valueOf"];
 const link = (params: Record<string, string>) => `?${new URLSearchParams({ v: "1", ...params })}`;
 
+describe("link keys", () => {
+  // readLink looks values up by key in a plain object: a key named like an inherited property would
+  // find the property where the link set nothing.
+  it("are never named like a property every object inherits", () => {
+    const keys = CALCULATORS.flatMap((calc) => [
+      ...Object.values(calc.inputs).map((s) => s.urlKey),
+      ...Object.values(calc.choices).map((s) => s.urlKey),
+      ...Object.values(calc.extras).map((s) => s.urlKey),
+      ...(calc.pageKeys ?? []),
+    ]);
+    expect(keys.filter((key) => key in Object.prototype || key === "__proto__")).toEqual([]);
+  });
+});
+
 describe.each(NAMES)("a link that says %s", (name) => {
   const plain = CALCULATORS.filter((calc) => calc.scope === "");
 
