@@ -21,10 +21,17 @@ const { register } = await import("node:module");
 register("../scripts/node-glob.mjs", import.meta.url);
 
 const { readDesignText, describeProblems } = await import("../calc/design/design.ts");
-const { runChecks, buildSheetText, overallStatus } = await import("../calc/design/checks.ts");
+const { runChecks, buildSheetText, overallStatus, terminalSafe } = await import("../calc/design/checks.ts");
+
+// Everything this command prints may carry text from a shared design file or from the command line
+// (a name, an unknown key, a file name): each such piece is escaped by itself with `shown` (line
+// breaks too, so it cannot forge a line), and every write escapes what is left but its own line breaks.
+const shown = (text) => terminalSafe(String(text));
+const printable = (text) => text.split("\n").map(terminalSafe).join("\n");
+const print = (text) => process.stdout.write(printable(text));
 
 function fail(message) {
-  console.error(message);
+  process.stderr.write(`${printable(message)}\n`);
   process.exit(2);
 }
 
@@ -34,7 +41,7 @@ if (args.includes("--help") || args.includes("-h")) {
   process.exit(0);
 }
 const [command, ...rest] = args;
-if (command !== "check") fail(`${command ? `Unknown command "${command}".` : "No command given."}\n\n${USAGE}`);
+if (command !== "check") fail(`${command ? `Unknown command "${shown(command)}".` : "No command given."}\n\n${USAGE}`);
 
 let file = null;
 let json = false;
@@ -44,24 +51,24 @@ for (let i = 0; i < rest.length; i += 1) {
   if (arg === "--json") json = true;
   else if (arg === "--units") units = rest[++i] ?? "";
   else if (arg.startsWith("--units=")) units = arg.slice("--units=".length);
-  else if (arg.startsWith("-")) fail(`Unknown option "${arg}".\n\n${USAGE}`);
+  else if (arg.startsWith("-")) fail(`Unknown option "${shown(arg)}".\n\n${USAGE}`);
   else if (file === null) file = arg;
-  else fail(`Only one design file at a time (got "${file}" and "${arg}").`);
+  else fail(`Only one design file at a time (got "${shown(file)}" and "${shown(arg)}").`);
 }
 if (file === null) fail(`No design file given.\n\n${USAGE}`);
-if (units !== null && units !== "metric" && units !== "us") fail(`--units must be "metric" or "us" (got "${units}").`);
+if (units !== null && units !== "metric" && units !== "us") fail(`--units must be "metric" or "us" (got "${shown(units)}").`);
 
 let text;
 try {
   text = readFileSync(file, "utf8");
 } catch (error) {
-  fail(`Cannot read ${file}: ${error.code === "ENOENT" ? "no such file" : error.message}`);
+  fail(`Cannot read ${shown(file)}: ${error.code === "ENOENT" ? "no such file" : shown(error.message)}`);
 }
 const reading = readDesignText(text);
 if (!reading.ok) {
   fail(
-    `${file} is not a design Whirlbook can read:\n${describeProblems(reading.problems)
-      .map((l) => `  ${l}`)
+    `${shown(file)} is not a design Whirlbook can read:\n${describeProblems(reading.problems)
+      .map((l) => `  ${shown(l)}`)
       .join("\n")}`,
   );
 }
@@ -69,19 +76,17 @@ const system = units ?? reading.design.units;
 const results = runChecks(reading.design, system);
 const overall = overallStatus(results);
 if (json) {
-  console.log(
-    JSON.stringify(
-      { design: reading.design.name, units: system, overall, problems: reading.problems, migratedFrom: reading.migratedFrom, checks: results },
-      null,
-      2,
-    ),
-  );
+  // JSON.stringify escapes C0 controls but leaves DEL, C1, the separators and the direction controls
+  // raw; print writes them as \uXXXX escapes, which a JSON string may hold for any character (they
+  // can only be inside strings), so the parsed text is unchanged.
+  const report = { design: reading.design.name, units: system, overall, problems: reading.problems, migratedFrom: reading.migratedFrom, checks: results };
+  print(`${JSON.stringify(report, null, 2)}\n`);
 } else {
   if (reading.problems.length) {
-    console.log(`Read ${file} with ${reading.problems.length} problem(s); valid values were kept:`);
-    for (const line of describeProblems(reading.problems)) console.log(`  ${line}`);
-    console.log("");
+    print(`Read ${shown(file)} with ${reading.problems.length} problem(s); valid values were kept:\n`);
+    for (const line of describeProblems(reading.problems)) print(`  ${shown(line)}\n`);
+    print("\n");
   }
-  process.stdout.write(buildSheetText(reading.design, results));
+  print(buildSheetText(reading.design, results));
 }
 process.exit(overall === "fails" ? 1 : 0);

@@ -32,7 +32,7 @@ const rows: ExtraSpec<CalibrationRow[]> = {
       const acceleration = r?.acceleration;
       if (typeof speed === "number" && Number.isFinite(speed) && speed >= 0 && typeof acceleration === "number" && Number.isFinite(acceleration)) {
         value.push({ angularSpeed: speed, acceleration });
-      } else problems.push({ path: `[${i}]`, message: "must be { angularSpeed ≥ 0 rad/s, acceleration m/s² }; the reading was left out" });
+      } else problems.push({ path: `[${i}]`, message: `Reading ${i + 1} must be a speed of 0 rpm or more and an acceleration, both numbers; it was left out` });
     }
     if (raw.length > CALIBRATION_ROWS_MAX)
       problems.push({ path: "", message: `lists ${raw.length} readings; only the first ${CALIBRATION_ROWS_MAX} were read` });

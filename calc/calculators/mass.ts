@@ -5,13 +5,12 @@
  */
 import { figureOf } from "../core/check.ts";
 import { defineChoices } from "../core/choices.ts";
-import { defineCalculator, defineForm, type ExtraSpec, type ValueProblem, type ValuesOf } from "../core/calculator.ts";
-import { CalcInputError } from "../core/errors.ts";
+import { defineCalculator, defineForm, type ExtraSpec, type ValuesOf } from "../core/calculator.ts";
 import { formatNumber, formatQuantity, type QuantityKind } from "../core/units.ts";
 import type { MountingPoint } from "../mass/counterweight.ts";
 import { encodeLayout, parseLayout } from "../mass/layout-text.ts";
 import { massBalance, massBalanceInputs } from "../mass/mass-balance.ts";
-import { type LayoutPart, MAX_PARTS } from "../mass/parts.ts";
+import type { LayoutPart } from "../mass/parts.ts";
 import { readMountingPoints, writeMountingPoints } from "../mass/points-text.ts";
 
 /** The parts list, in a link as the compact layout text ("v1~disk_base_…"). */
@@ -30,29 +29,6 @@ const parts: ExtraSpec<LayoutPart[]> = {
         : `Part ${p.index + 1} of the link's parts list was left out: ${p.reason}.`,
     );
     return { value: whole && read.parts.length === 0 ? null : read.parts, notices };
-  },
-  // A stored part is read the way a link's part is: written as layout text and read back, so a
-  // design can hold no part a link could not.
-  fromDesign(raw) {
-    if (!Array.isArray(raw)) return { value: null, problems: [{ path: "", message: "must be a list of parts" }] };
-    const value: LayoutPart[] = [];
-    const problems: ValueProblem[] = [];
-    for (const [i, item] of raw.slice(0, MAX_PARTS).entries()) {
-      let read: ReturnType<typeof parseLayout>;
-      try {
-        read = parseLayout(encodeLayout([item as LayoutPart]));
-      } catch (error) {
-        problems.push({
-          path: `[${i}]`,
-          message: `${error instanceof CalcInputError ? `${error.param.replace(/^parts\[0\]\.?/, "") || "part"} must be ${error.expected}` : "is not a part"}; the part was left out`,
-        });
-        continue;
-      }
-      if (read.parts[0]) value.push(read.parts[0]);
-      else problems.push({ path: `[${i}]`, message: `${read.problems[0]?.reason ?? "is not a part"}; the part was left out` });
-    }
-    if (raw.length > MAX_PARTS) problems.push({ path: "", message: `lists ${raw.length} parts; only the first ${MAX_PARTS} were read` });
-    return { value, problems };
   },
 };
 

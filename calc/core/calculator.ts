@@ -36,8 +36,11 @@ export interface ExtraSpec<T> {
   write(value: T, system: UnitSystem): string;
   /** Reads link text; never throws. `value` is null when nothing usable could be read. */
   read(text: string, system: UnitSystem): { value: T | null; notices: string[] };
-  /** Reads the value stored in a design file; never throws. `value` is null when nothing usable could be read. */
-  fromDesign(raw: unknown): { value: T | null; problems: ValueProblem[] };
+  /**
+   * Reads the value stored in a design file; never throws. `value` is null when nothing usable could
+   * be read. Without it, a stored list is read the way a link carries it (calc/design/sections.ts).
+   */
+  fromDesign?(raw: unknown): { value: T | null; problems: ValueProblem[] };
 }
 
 // biome-ignore lint/suspicious/noExplicitAny: a record of extras of any value type

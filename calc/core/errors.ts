@@ -33,6 +33,14 @@ export interface Bound {
   other?: string;
 }
 
+/** An allowed range, kept as data so that a screen can word it in the user's units [SI]. */
+export interface InputRange {
+  min: number;
+  max: number;
+  minOpen?: boolean;
+  maxOpen?: boolean;
+}
+
 export interface CalcInputErrorFields {
   /** The input's name, as the function's parameter object spells it (e.g. "radius"). */
   param: string;
@@ -44,6 +52,8 @@ export interface CalcInputErrorFields {
   unit: string;
   /** The rule as data, when it compares the value with a limit. */
   bound?: Bound;
+  /** The allowed range as data, when the rule is one [SI]. */
+  range?: InputRange;
 }
 
 /** An input outside the domain of a calculation. */
@@ -53,6 +63,7 @@ export class CalcInputError extends RangeError implements CalcInputErrorFields {
   readonly expected: string;
   readonly unit: string;
   readonly bound: Bound | undefined;
+  readonly range: InputRange | undefined;
 
   constructor(fields: CalcInputErrorFields) {
     const got = describeValue(fields.value);
@@ -64,6 +75,7 @@ export class CalcInputError extends RangeError implements CalcInputErrorFields {
     this.expected = fields.expected;
     this.unit = fields.unit;
     this.bound = fields.bound;
+    this.range = fields.range;
   }
 }
 
@@ -124,15 +136,17 @@ export function requireNonNegative(param: string, value: number, unit: string): 
 /**
  * Throws unless `min <= value <= max` (or `min < value` / `value < max` where the bound is open).
  */
-export function requireInRange(param: string, value: number, unit: string, range: { min: number; max: number; minOpen?: boolean; maxOpen?: boolean }): number {
-  requireFinite(param, value, unit);
+export function requireInRange(param: string, value: number, unit: string, range: InputRange): number {
+  if (typeof value !== "number" || !Number.isFinite(value)) {
+    throw new CalcInputError({ param, value, expected: "a finite number", unit, range });
+  }
   const lowOk = range.minOpen ? value > range.min : value >= range.min;
   const highOk = range.maxOpen ? value < range.max : value <= range.max;
   if (!lowOk || !highOk) {
     const u = unit ? ` ${unit}` : "";
     const low = range.minOpen ? `greater than ${range.min}${u}` : `at least ${range.min}${u}`;
     const high = range.maxOpen ? `less than ${range.max}${u}` : `at most ${range.max}${u}`;
-    throw new CalcInputError({ param, value, expected: `${low} and ${high}`, unit });
+    throw new CalcInputError({ param, value, expected: `${low} and ${high}`, unit, range });
   }
   return value;
 }

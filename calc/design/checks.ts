@@ -82,21 +82,40 @@ export function overallStatus(results: readonly CheckResult[]): CheckStatus | "e
   return worstStatus(results.map((r) => r.status));
 }
 
-/** Replaces control characters (which could move a terminal's cursor or forge a line) with "?". */
+/**
+ * Characters a terminal or a text viewer acts on instead of showing: C0 controls (line feed, carriage
+ * return, escape, tab…), DEL, C1 controls (U+009B starts a control sequence like ESC [), the Unicode
+ * line and paragraph separators, and the direction marks, embeddings, overrides and isolates that
+ * reorder what follows them.
+ */
+const CONTROL_CHARACTERS = /[\u0000-\u001f\u007f-\u009f\u200e\u200f\u2028\u2029\u202a-\u202e\u2066-\u2069]/g;
+
+/**
+ * Writes every control character (which could clear a terminal, move its cursor, retitle its window,
+ * forge a line or reverse the text after it) as a visible escape, `\r` and `\n` included.
+ *
+ * @param text any text, e.g. a design's name
+ * @returns the text with each control character written as `\n`, `\r`, `\t` or `\uXXXX`
+ * @example
+ * terminalSafe("a\u001b[2J\r\nb") // → "a\u001b[2J\r\nb"
+ */
 export function terminalSafe(text: string): string {
-  return text.replace(/[\u0000-\u0008\u000b-\u001f\u007f-\u009f\u2028\u2029]/g, "?").replace(/\n/g, " ");
+  return text.replace(CONTROL_CHARACTERS, (c) => {
+    const named: Record<string, string> = { "\n": "\\n", "\r": "\\r", "\t": "\\t" };
+    return named[c] ?? `\\u${c.charCodeAt(0).toString(16).padStart(4, "0")}`;
+  });
 }
 
-/** Plain-text build sheet, as the command line prints it. */
+/** Plain-text build sheet, as the command line prints it; every text from the design goes through `terminalSafe`. */
 export function buildSheetText(design: Design, results: readonly CheckResult[]): string {
   const mark = (status: CheckStatus) => STATUS_WORDS[status].toUpperCase().padEnd(15);
   const safe = terminalSafe;
   const lines = [`Build sheet: ${safe(design.name)}`, `Design saved ${safe(design.modified.slice(0, 10))}; units ${design.units}`, ""];
   for (const r of results) {
-    lines.push(`${mark(r.status)}  ${safe(r.title)}${r.figure ? `: ${r.figure.label} ${r.figure.text}` : ""}`);
+    lines.push(`${mark(r.status)}  ${safe(r.title)}${r.figure ? `: ${safe(r.figure.label)} ${safe(r.figure.text)}` : ""}`);
     lines.push(`                 rule:   ${safe(r.rule)}`);
     lines.push(`                 result: ${safe(r.margin)}`);
-    for (const d of r.details) lines.push(`                 ${d.label}: ${d.text}`);
+    for (const d of r.details) lines.push(`                 ${safe(d.label)}: ${safe(d.text)}`);
   }
   const overall = overallStatus(results);
   lines.push("", `Overall: ${overall === "empty" ? "nothing to check" : STATUS_WORDS[overall]}`);

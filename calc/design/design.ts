@@ -8,6 +8,7 @@
 import * as v from "valibot";
 import type { AnyCalculator } from "../core/calculator.ts";
 import { CalcInputError } from "../core/errors.ts";
+import { describeReceived } from "../core/received.ts";
 import { CALCULATORS } from "./registry.ts";
 import { DESIGN_FORMAT, DESIGN_VERSION, type Design, HEADER_FIELDS } from "./format.ts";
 import { readSection, type DesignProblem, SectionDropped } from "./sections.ts";
@@ -58,11 +59,6 @@ export function migrateDesign(
 
 // ---------------------------------------------------------------------------------------------
 // Reading and writing.
-
-function preview(value: unknown): string {
-  const text = typeof value === "string" ? JSON.stringify(value) : String(JSON.stringify(value) ?? value);
-  return text.length > 40 ? `${text.slice(0, 40)}…` : text;
-}
 
 const headerSchema = v.object({
   format: v.literal(DESIGN_FORMAT, `must be "${DESIGN_FORMAT}"`),
@@ -123,7 +119,7 @@ export function readDesign(raw: unknown): DesignReading {
     units: record.units === "us" ? "us" : "metric",
   };
   if (record.units !== undefined && record.units !== "us" && record.units !== "metric") {
-    problems.push({ path: "units", message: `must be "metric" or "us" (got ${preview(record.units)}); metric was used`, action: "default-used" });
+    problems.push({ path: "units", message: `must be "metric" or "us" (got ${describeReceived(record.units)}); metric was used`, action: "default-used" });
   }
 
   const known = new Set<string>([...HEADER_FIELDS, ...CALCULATORS.map((c) => c.id)]);
@@ -133,7 +129,7 @@ export function readDesign(raw: unknown): DesignReading {
   for (const calc of CALCULATORS) {
     if (record[calc.id] === undefined) continue;
     try {
-      design[calc.id] = readSection(calc, record[calc.id], calc.id, problems);
+      design[calc.id] = readSection(calc, record[calc.id], calc.id, problems, design.units);
     } catch (error) {
       if (!(error instanceof SectionDropped)) throw error;
     }
@@ -141,9 +137,12 @@ export function readDesign(raw: unknown): DesignReading {
   return { ok: true, design, problems, migratedFrom };
 }
 
+/** The most text a design may take [characters]: far more than any design needs, little enough to read at once. */
+export const DESIGN_TEXT_LIMIT = 2_000_000;
+
 /** Reads a design from JSON text (a file's contents). Never throws. */
 export function readDesignText(text: string): DesignReading {
-  if (text.length > 2_000_000) return { ok: false, problems: [{ path: "", message: "is larger than 2 MB: not a design file", action: "not-read" }] };
+  if (text.length > DESIGN_TEXT_LIMIT) return { ok: false, problems: [{ path: "", message: "is larger than 2 MB: not a design file", action: "not-read" }] };
   let raw: unknown;
   try {
     raw = JSON.parse(text.replace(/^\uFEFF/, ""));
@@ -161,5 +160,5 @@ export function designToText(design: Design): string {
 
 /** A description of the problems for people, one line each. */
 export function describeProblems(problems: readonly DesignProblem[]): string[] {
-  return problems.map((p) => `${p.path || "The file"} ${p.message}.`);
+  return problems.map((p) => (p.section ? `${p.section} (${p.path}): ${p.message}.` : `${p.path || "The file"} ${p.message}.`));
 }

@@ -4,13 +4,19 @@
  * readers), and written back. A bad value takes its default and is reported; a bad list entry is
  * left out and reported; nothing is dropped silently.
  */
-import { type AnyCalculator, type AnyValues, initialValues } from "../core/calculator.ts";
-import { describeRange, type InputSpec } from "../core/inputs.ts";
+import { type AnyCalculator, type AnyValues, type ExtraSpec, initialValues, type ValueProblem } from "../core/calculator.ts";
+import { choiceLabel } from "../core/choices.ts";
+import { defaultText, describeRange, fieldUnit, type InputSpec } from "../core/inputs.ts";
+import { describeReceived } from "../core/received.ts";
+import type { UnitSystem } from "../core/units.ts";
+import { describePartProblem } from "../mass/part-messages.ts";
 
 /** One thing wrong with a file, and what was done about it. */
 export interface DesignProblem {
   /** Where, as a path: "placement.radius", "fasteners[2].size", "" for the whole file. */
   path: string;
+  /** The calculator (and list entry) the value belongs to, in the handbook's words: "Fasteners: Battery bracket". */
+  section?: string;
   message: string;
   /** What happened: the field took its default, the item was dropped, the section was dropped, or nothing could be read. */
   action: "default-used" | "item-dropped" | "section-dropped" | "not-read";
@@ -21,11 +27,6 @@ export class SectionDropped extends Error {}
 
 /** Longest name of a list entry [characters]. */
 export const MAX_ENTRY_NAME = 80;
-
-function preview(value: unknown): string {
-  const text = typeof value === "string" ? JSON.stringify(value) : String(JSON.stringify(value) ?? value);
-  return text.length > 40 ? `${text.slice(0, 40)}…` : text;
-}
 
 /** Whether a stored number is one the field would accept. */
 function numberFits(spec: InputSpec, value: unknown): value is number {
@@ -40,36 +41,91 @@ function numberFits(spec: InputSpec, value: unknown): value is number {
 
 const isRecord = (v: unknown): v is Record<string, unknown> => typeof v === "object" && v !== null && !Array.isArray(v);
 
+/** Whether a list reads back whole from the link text it is written as. */
+function fits(spec: ExtraSpec<unknown>, list: unknown[]): boolean {
+  try {
+    return (spec.read(spec.write(list, "metric"), "metric").value as unknown[] | null)?.length === list.length;
+  } catch {
+    return false;
+  }
+}
+
+/**
+ * Reads a stored list that has no reader of its own the way a link carries it: each entry written
+ * as link text and read back, so a design holds nothing a link could not. An entry that cannot be
+ * written is left out and reported in the parts editor's words (the mass layout's lists are the ones
+ * read this way) and the design's units; a list longer than a link carries keeps its first entries.
+ */
+function readAsLink(spec: ExtraSpec<unknown>, raw: unknown, system: UnitSystem): { value: unknown[] | null; problems: ValueProblem[] } {
+  if (!Array.isArray(raw)) return { value: null, problems: [{ path: "", message: `${spec.label} must be a list` }] };
+  const value: unknown[] = [];
+  const problems: ValueProblem[] = [];
+  for (const [i, item] of raw.entries()) {
+    const entry = `entry ${i + 1}${typeof item?.name === "string" ? ` “${item.name.slice(0, 60)}”` : ""} of the ${spec.label.toLowerCase()}`;
+    try {
+      const [read] = (spec.read(spec.write([item], "metric"), "metric").value as unknown[] | null) ?? [];
+      if (read === undefined) throw new Error("unreadable");
+      value.push(read);
+    } catch (error) {
+      const { label, rule } = describePartProblem(error, { system, shape: item?.shape?.kind, received: describeReceived });
+      problems.push({ path: `[${i}]`, message: `${label} ${rule}, in ${entry}; it was left out` });
+    }
+  }
+  // The longest start of the list that a link carries (fitting is monotone: binary search).
+  let [low, high] = [0, value.length];
+  while (low < high) {
+    const middle = Math.ceil((low + high) / 2);
+    if (fits(spec, value.slice(0, middle))) low = middle;
+    else high = middle - 1;
+  }
+  if (low < value.length)
+    problems.push({ path: "", message: `${spec.label} holds ${value.length} entries; only the first ${low} were read, as many as a link carries` });
+  return { value: value.slice(0, low), problems };
+}
+
+/** How a section is read: the design's unit system (for messages), the section's words, keys besides the calculator's own. */
+export interface ReadOptions {
+  system?: UnitSystem;
+  section?: string;
+  allowed?: readonly string[];
+}
+
 /**
  * Reads one set of a calculator's values from a stored object: each bad or missing value takes its
- * default and is reported; fields that are not the calculator's are reported and ignored.
+ * default and is reported in the field's words and the design's units; fields that are not the
+ * calculator's are reported and ignored.
  */
-export function readValues(calc: AnyCalculator, raw: unknown, path: string, problems: DesignProblem[], allowed: readonly string[] = []): AnyValues {
+export function readValues(calc: AnyCalculator, raw: unknown, path: string, problems: DesignProblem[], options: ReadOptions = {}): AnyValues {
+  const { system = "metric", section = calc.title, allowed = [] } = options;
   if (!isRecord(raw)) {
-    problems.push({ path, message: "must be an object of named values", action: "section-dropped" });
+    problems.push({ path, section, message: "must be an object of named values", action: "section-dropped" });
     throw new SectionDropped();
   }
   const out: AnyValues = initialValues(calc);
   for (const [name, spec] of Object.entries(calc.inputs)) {
     const value = raw[name];
+    const fallback = `the default, ${defaultText(spec, system)}, was used`;
     if (value === undefined) {
-      problems.push({ path: `${path}.${name}`, message: `is missing; the default (${spec.default} SI) was used`, action: "default-used" });
+      problems.push({ path: `${path}.${name}`, section, message: `${spec.label} is missing; ${fallback}`, action: "default-used" });
     } else if (numberFits(spec, value)) {
       out[name] = value;
     } else {
-      const why = typeof value !== "number" ? "must be a number" : `must be ${describeRange(spec, "metric")}`;
-      problems.push({ path: `${path}.${name}`, message: `${why} (got ${preview(value)}); the default was used`, action: "default-used" });
+      const rule = typeof value === "number" ? describeRange(spec, system) : "a number";
+      const got = describeReceived(value, fieldUnit(spec, system));
+      problems.push({ path: `${path}.${name}`, section, message: `${spec.label} must be ${rule} (got ${got}); ${fallback}`, action: "default-used" });
     }
   }
   for (const [name, spec] of Object.entries(calc.choices)) {
     const value = raw[name];
+    const fallback = `${choiceLabel(spec, spec.default)} was used`;
     if (typeof value === "string" && spec.options.some((o) => o.value === value)) out[name] = value;
     else if (value === undefined) {
-      problems.push({ path: `${path}.${name}`, message: `is missing; "${spec.default}" was used`, action: "default-used" });
+      problems.push({ path: `${path}.${name}`, section, message: `${spec.label} is missing; ${fallback}`, action: "default-used" });
     } else {
       problems.push({
         path: `${path}.${name}`,
-        message: `must be one of ${spec.options.map((o) => o.value).join(", ")} (got ${preview(value)}); "${spec.default}" was used`,
+        section,
+        message: `${spec.label} must be one of ${spec.options.map((o) => o.value).join(", ")} (got ${describeReceived(value)}); ${fallback}`,
         action: "default-used",
       });
     }
@@ -77,9 +133,9 @@ export function readValues(calc: AnyCalculator, raw: unknown, path: string, prob
   for (const [name, spec] of Object.entries(calc.extras)) {
     const value = raw[name];
     if (value === undefined) continue;
-    const read = spec.fromDesign(value);
+    const read = spec.fromDesign ? spec.fromDesign(value) : readAsLink(spec, value, system);
     for (const p of read.problems)
-      problems.push({ path: `${path}.${name}${p.path}`, message: p.message, action: read.value === null ? "default-used" : "item-dropped" });
+      problems.push({ path: `${path}.${name}${p.path}`, section, message: p.message, action: read.value === null ? "default-used" : "item-dropped" });
     if (read.value !== null) out[name] = read.value;
   }
   const known = new Set([...Object.keys(calc.inputs), ...Object.keys(calc.choices), ...Object.keys(calc.extras), ...allowed]);
@@ -93,8 +149,14 @@ export function readValues(calc: AnyCalculator, raw: unknown, path: string, prob
  * Reads a calculator's whole section: its values, or for a list calculator its named entries (at
  * most the declared number; each entry that is not an object is left out and reported).
  */
-export function readSection(calc: AnyCalculator, raw: unknown, path: string, problems: DesignProblem[]): AnyValues | AnyValues[] {
-  if (calc.section.kind === "single") return readValues(calc, raw, path, problems);
+export function readSection(
+  calc: AnyCalculator,
+  raw: unknown,
+  path: string,
+  problems: DesignProblem[],
+  system: UnitSystem = "metric",
+): AnyValues | AnyValues[] {
+  if (calc.section.kind === "single") return readValues(calc, raw, path, problems, { system });
   const { max, entryName } = calc.section;
   if (!Array.isArray(raw)) {
     problems.push({ path, message: "must be a list", action: "section-dropped" });
@@ -118,7 +180,7 @@ export function readSection(calc: AnyCalculator, raw: unknown, path: string, pro
       });
     }
     try {
-      entries.push({ name, ...readValues(calc, item, itemPath, problems, ["name"]) });
+      entries.push({ name, ...readValues(calc, item, itemPath, problems, { system, section: `${calc.title}: ${name}`, allowed: ["name"] }) });
     } catch (error) {
       if (!(error instanceof SectionDropped)) throw error;
     }

@@ -34,7 +34,8 @@ const SHAPE_TOKENS: Record<PartShapeKind, string> = {
   cylinder: "cyl",
   custom: "cust",
 };
-const TOKEN_SHAPES: Record<string, PartShapeKind> = Object.fromEntries(Object.entries(SHAPE_TOKENS).map(([k, v]) => [v, k as PartShapeKind]));
+// A Map, not an object: a token such as "toString" or "constructor" must not find what every object inherits.
+const TOKEN_SHAPES = new Map(Object.entries(SHAPE_TOKENS).map(([k, v]) => [v, k as PartShapeKind]));
 const DIM_COUNT: Record<PartShapeKind, number> = { point: 0, disk: 1, ring: 1, annulus: 2, plate: 3, rod: 2, cylinder: 2, custom: 3 };
 const MM = 1e-3;
 const GRAM = 1e-3;
@@ -123,6 +124,13 @@ export interface LayoutProblem {
   index: number | null;
   /** What is wrong, in words. */
   reason: string;
+  /**
+   * The rule a part broke, when it broke one (a `CalcInputError` from `checkPart`), and its shape:
+   * for a page to word in its editor's terms (`describePartProblem`); `reason` then gives the error
+   * as `checkPart` states it.
+   */
+  error?: unknown;
+  shape?: PartShapeKind;
 }
 
 export interface LayoutParseResult {
@@ -135,9 +143,9 @@ export interface LayoutParseResult {
   problems: LayoutProblem[];
 }
 
-function parsePartToken(token: string): LayoutPart | string {
+function parsePartToken(token: string): LayoutPart | string | { error: unknown; shape: PartShapeKind } {
   const fields = token.split("_");
-  const kind = TOKEN_SHAPES[fields[0] ?? ""];
+  const kind = TOKEN_SHAPES.get(fields[0] ?? "");
   if (!kind) return `unknown shape "${(fields[0] ?? "").slice(0, 12)}"; use one of ${Object.values(SHAPE_TOKENS).join(", ")}`;
   const nDims = DIM_COUNT[kind];
   const minFields = 5 + nDims + 1;
@@ -196,7 +204,7 @@ function parsePartToken(token: string): LayoutPart | string {
   try {
     checkPart(part);
   } catch (error) {
-    return error instanceof CalcInputError ? error.message.replace(/^part\./, "") : "the part is not valid";
+    return { error, shape: kind };
   }
   return part;
 }
@@ -237,6 +245,7 @@ export function parseLayout(text: unknown): LayoutParseResult {
   tokens.slice(0, MAX_PARTS).forEach((token, index) => {
     const result = parsePartToken(token);
     if (typeof result === "string") problems.push({ index, reason: result });
+    else if ("error" in result) problems.push({ index, reason: (result.error as Error).message, ...result });
     else parts.push(result);
   });
   return { ok: problems.length === 0, version, parts, problems };

@@ -9,7 +9,7 @@
  * convention: $I'_{xz}$ is a part's own product about its own centre; the inertia-tensor element is
  * the negative of it.
  */
-import { CalcInputError, requireInRange, requirePositive, requireRelation } from "../core/errors.ts";
+import { CalcInputError, requireInRange, requireRelation } from "../core/errors.ts";
 import { isMaterialId, MATERIAL_DENSITIES, type MaterialId } from "../materials/densities.ts";
 
 // ---------------------------------------------------------------------------------------------
@@ -75,15 +75,19 @@ export const MAX_NAME_LENGTH = 60;
 /** Most parts in one layout. */
 export const MAX_PARTS = 200;
 
+const LENGTH = { min: 0, max: MAX_LENGTH, minOpen: true };
+const COORDINATE = { min: -MAX_LENGTH, max: MAX_LENGTH };
+const ANGLE = { min: -4 * Math.PI, max: 4 * Math.PI };
+const PRODUCT = { min: -MAX_OWN_INERTIA, max: MAX_OWN_INERTIA };
+
 /** Checks a part dimension: greater than 0 m and at most 100 m (param names the field). @internal */
 export function requireLength(param: string, value: number): number {
-  requirePositive(param, value, "m");
-  return requireInRange(param, value, "m", { min: 0, max: MAX_LENGTH, minOpen: true });
+  return requireInRange(param, value, "m", LENGTH);
 }
 
 /** Checks a coordinate: within ±100 m (param names the field). @internal */
 export function requireCoordinate(param: string, value: number): number {
-  return requireInRange(param, value, "m", { min: -MAX_LENGTH, max: MAX_LENGTH });
+  return requireInRange(param, value, "m", COORDINATE);
 }
 
 /**
@@ -122,11 +126,11 @@ export function checkPart(part: LayoutPart, prefix = "part"): void {
     case "plate":
       requireLength(`${p}.length`, s.length);
       requireLength(`${p}.width`, s.width);
-      requireInRange(`${p}.angle`, s.angle, "rad", { min: -4 * Math.PI, max: 4 * Math.PI });
+      requireInRange(`${p}.angle`, s.angle, "rad", ANGLE);
       break;
     case "rod":
       requireLength(`${p}.length`, s.length);
-      requireInRange(`${p}.angle`, s.angle, "rad", { min: -4 * Math.PI, max: 4 * Math.PI });
+      requireInRange(`${p}.angle`, s.angle, "rad", ANGLE);
       break;
     case "cylinder":
       requireLength(`${p}.radius`, s.radius);
@@ -134,8 +138,8 @@ export function checkPart(part: LayoutPart, prefix = "part"): void {
       break;
     case "custom":
       requireInRange(`${p}.inertiaZ`, s.inertiaZ, "kg·m²", { min: 0, max: MAX_OWN_INERTIA });
-      requireInRange(`${p}.productXZ`, s.productXZ, "kg·m²", { min: -MAX_OWN_INERTIA, max: MAX_OWN_INERTIA });
-      requireInRange(`${p}.productYZ`, s.productYZ, "kg·m²", { min: -MAX_OWN_INERTIA, max: MAX_OWN_INERTIA });
+      requireInRange(`${p}.productXZ`, s.productXZ, "kg·m²", PRODUCT);
+      requireInRange(`${p}.productYZ`, s.productYZ, "kg·m²", PRODUCT);
       break;
     default:
       throw new CalcInputError({
@@ -147,7 +151,6 @@ export function checkPart(part: LayoutPart, prefix = "part"): void {
   }
   const m = part.mass;
   if (m?.kind === "given") {
-    requirePositive(`${prefix}.mass.mass`, m.mass, "kg");
     requireInRange(`${prefix}.mass.mass`, m.mass, "kg", { min: 0, max: MAX_PART_MASS, minOpen: true });
   } else if (m?.kind === "material") {
     if (!isMaterialId(m.material)) {

@@ -123,6 +123,7 @@ export default function BuildSheet() {
   const fileInput = useRef<HTMLInputElement>(null);
   const link = useSignal<string | null>(null);
   useEffect(() => {
+    model.loadSaved();
     void model.openFromLocation(window.location.hash);
     const onHash = () => void model.openFromLocation(window.location.hash);
     window.addEventListener("hashchange", onHash);

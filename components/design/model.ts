@@ -25,11 +25,15 @@ export interface Conflict {
   existingId: string;
 }
 
+/**
+ * The model starts as the page is rendered at build time: no saved designs, the demo on screen.
+ * `loadSaved` then reads this browser's storage, once the page is live: the first render in the
+ * browser must match the build's markup, which the browser adopts instead of drawing it again.
+ */
 export function createBuildSheetModel(storage: Storage | null) {
-  const initial = storage ? loadStore(storage) : { store: { designs: [], activeId: null } as DesignStore, warning: null };
-  const store = signal<DesignStore>(initial.store);
+  const store = signal<DesignStore>({ designs: [], activeId: null });
   const current = signal<OnScreen>({ design: demoDesign(), origin: "demo", id: null });
-  const messages = signal<string[]>(initial.warning ? [initial.warning] : []);
+  const messages = signal<string[]>([]);
   const problems = signal<string[]>([]);
   const conflict = signal<Conflict | null>(null);
   const undo = signal<{ entry: SavedDesign; index: number } | null>(null);
@@ -47,6 +51,16 @@ export function createBuildSheetModel(storage: Storage | null) {
         messages.value = [...messages.value, "This browser refused to save (storage full or disabled); export the design to a file to keep it."];
       }
     }
+  }
+
+  /** Reads the designs saved in this browser, and says so when some could not be read. */
+  function loadSaved(): void {
+    if (!storage) return;
+    const { store: saved, warning } = loadStore(storage);
+    batch(() => {
+      store.value = saved;
+      if (warning) messages.value = [...messages.value, warning];
+    });
   }
 
   function show(design: Design, origin: Origin, id: string | null = null): void {
@@ -196,6 +210,7 @@ export function createBuildSheetModel(storage: Storage | null) {
     conflict,
     undo,
     status,
+    loadSaved,
     openFromLocation,
     saveCurrent,
     resolveConflict,

@@ -4,8 +4,8 @@
  * as such instead of being read wrongly. Form: `#d1.<length>.<data>.<checksum>`; the link ends in
  * hex digits, which link detectors keep.
  */
-import { deflateSync, inflateSync, strFromU8, strToU8 } from "fflate";
-import { designToText, readDesignText, type Design, type DesignReading } from "../../calc/design/design.ts";
+import { deflateSync, Inflate, strFromU8, strToU8 } from "fflate";
+import { DESIGN_TEXT_LIMIT, designToText, readDesignText, type Design, type DesignReading } from "../../calc/design/design.ts";
 
 const PREFIX = "d1.";
 
@@ -31,6 +31,37 @@ function fromBase64Url(text: string): Uint8Array {
   const bytes = new Uint8Array(binary.length);
   for (let i = 0; i < binary.length; i += 1) bytes[i] = binary.charCodeAt(i);
   return bytes;
+}
+
+/**
+ * How much packed data is unpacked at a time [bytes]. DEFLATE unpacks at most 1032 bytes from one
+ * (258 bytes for a two-bit match), so one step adds at most about 1 MB to what is checked.
+ */
+const INFLATE_STEP = 1024;
+
+/**
+ * Unpacks DEFLATE data a step at a time and stops as soon as the output passes `limit` bytes, so
+ * a small link that would unpack to hundreds of megabytes costs no more than the limit. Null when
+ * the output is too large; throws when the data is not DEFLATE.
+ */
+export function inflateWithin(data: Uint8Array, limit: number): Uint8Array | null {
+  const chunks: Uint8Array[] = [];
+  let size = 0;
+  const inflater = new Inflate((chunk) => {
+    size += chunk.length;
+    if (size <= limit) chunks.push(chunk);
+  });
+  for (let at = 0; at < data.length; at += INFLATE_STEP) {
+    inflater.push(data.subarray(at, at + INFLATE_STEP), at + INFLATE_STEP >= data.length);
+    if (size > limit) return null;
+  }
+  const out = new Uint8Array(size);
+  let at = 0;
+  for (const chunk of chunks) {
+    out.set(chunk, at);
+    at += chunk.length;
+  }
+  return out;
 }
 
 /** The fragment (without "#") that carries a design. */
@@ -68,11 +99,20 @@ export function designFromFragment(fragment: string): FragmentReading {
       message: "This design link is damaged: its check digits do not match its contents. Ask for the link again, or for the design file.",
     };
   }
+  let json: string;
   try {
-    return { kind: "design", reading: readDesignText(strFromU8(inflateSync(fromBase64Url(data)))) };
+    const bytes = inflateWithin(fromBase64Url(data), DESIGN_TEXT_LIMIT);
+    if (bytes === null) {
+      return {
+        kind: "broken",
+        message: `This design link is too large: it unpacks to more than ${DESIGN_TEXT_LIMIT / 1e6} MB, far more than any design holds. Ask for the design file instead.`,
+      };
+    }
+    json = strFromU8(bytes);
   } catch {
     return { kind: "broken", message: "This design link is damaged: its contents cannot be unpacked. Ask for the link again, or for the design file." };
   }
+  return { kind: "design", reading: readDesignText(json) };
 }
 
 export { designToText };

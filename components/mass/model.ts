@@ -163,6 +163,22 @@ export function createMassModel(system: UnitSystem = "metric", layoutText = "") 
     });
   }
 
+  /**
+   * A part of a link that breaks a rule is described in the parts editor's words, in the link's own
+   * units (mm, g, degrees); that wording loads only when a link needs it.
+   */
+  function reword(text: string): void {
+    const broken = parseLayout(text).problems.filter((p) => p.error);
+    if (broken.length)
+      import("../../calc/mass/part-messages.ts").then(
+        ({ describePartProblem }) =>
+          (notices.value = notices.value.map((notice) =>
+            broken.reduce((line, p) => line.replace(p.reason, Object.values(describePartProblem(p.error, p)).join(" ")), notice),
+          )),
+        () => {},
+      );
+  }
+
   /** Applies a link: numbers, the counterweight question, the parts list and the mounting points as the calculator declares them. */
   function applyQuery(search: string): void {
     const read = readLink(massCalculator, search);
@@ -177,6 +193,7 @@ export function createMassModel(system: UnitSystem = "metric", layoutText = "") 
           parts.value = parsed.value.map((p) => createPart(fields.system.value, p, false, true));
           lastLayoutText = read.extras.parts;
         }
+        reword(read.extras.parts);
       }
       if (read.extras.candidates !== undefined) points.value = read.extras.candidates.replace(/;/g, "; ").replace(/,/g, ", ");
       notices.value = notes;

@@ -9,6 +9,8 @@ import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { startStaticServer } from "../../scripts/static-server.mjs";
 import { DIST_DIR, axeViolations, useSite, waitForIslands } from "../support/browser.ts";
+import { demoDesign, designToText } from "../../calc/index.ts";
+import { STORE_KEY } from "../../components/design/saved.ts";
 
 const site = useSite();
 const { origin } = site;
@@ -68,7 +70,11 @@ describe("build sheet", () => {
     const file = join(scratch, "edited.json");
     writeFileSync(file, JSON.stringify(exported));
     await page.setInputFiles('input[type="file"]', file);
-    await expect.poll(() => page.locator(".calc-notices").first().textContent()).toContain("placement.radius must be greater than 0 mm");
+    await expect
+      .poll(() => page.locator(".calc-notices").first().textContent())
+      .toContain(
+        "Accelerometer placement (placement.radius): Sensor radius must be greater than 0 mm and at most 2000 mm (got -1000 mm); the default, 20 mm, was used.",
+      );
     // The valid values of the file come through beside the refused one: the fastener check now uses two bolts.
     await expect.poll(() => checkFigure(page, "fasteners[0]")).not.toBe(fastenersBefore);
     expect(await checkFigure(page, "fasteners[0]")).toBeTruthy();
@@ -120,6 +126,46 @@ describe("build sheet", () => {
     await expect.poll(() => sheet.inputValue("#design-name")).toBe("My robot");
     // 3000 rpm at 12 mm: 314.16² × 0.012 = 1184 m/s² = 121 g (as on the chapter page).
     await expect.poll(() => checkFigure(sheet, "placement")).toBe("121 g");
+    await context.close();
+  });
+
+  /** A browser whose saved designs are stored as `text` before the build sheet opens. */
+  async function withStore(text: string) {
+    const context = await site.browser().newContext();
+    await context.addInitScript(([key, value]) => localStorage.setItem(key!, value!), [STORE_KEY, text]);
+    return { context, page: await openSheet(context, "") };
+  }
+
+  // The page is rendered at build time without the browser's storage: what storage adds must come
+  // out the same as if the page had been drawn in the browser (hydration keeps the server's markup).
+  it("says at once, as an alert in the notice style, that the saved designs could not be read", async () => {
+    const { context, page } = await withStore("{not json");
+    const alert = page.getByRole("alert");
+    await expect.poll(() => alert.textContent()).toContain("The saved designs in this browser could not be read; a copy of the stored data was kept aside.");
+    expect(await alert.getAttribute("class")).toBe("calc-notices");
+    await alert.getByRole("button", { name: "Dismiss" }).click();
+    expect(await page.getByRole("alert").count()).toBe(0);
+    await context.close();
+  });
+
+  it("opens the readable saved design and lists it, and says how many could not be read", async () => {
+    const kept = JSON.parse(designToText({ ...demoDesign(), name: "Kept robot" }));
+    const { context, page } = await withStore(
+      JSON.stringify({
+        designs: [
+          { id: "a", design: kept },
+          { id: "b", design: { format: "other" } },
+        ],
+        activeId: "a",
+      }),
+    );
+    const alert = page.getByRole("alert");
+    await expect.poll(() => alert.textContent()).toContain("1 saved design(s) could not be read; a copy of the stored data was kept aside in this browser.");
+    expect(await alert.getAttribute("class")).toBe("calc-notices");
+    await expect.poll(() => page.inputValue("#design-name")).toBe("Kept robot");
+    expect(await page.locator(".design-list li .design-name").allTextContents()).toEqual(["Kept robot"]);
+    expect(await page.locator(".design-list li .design-actions button").count()).toBe(3);
+    expect(await page.getByRole("button", { name: "Open Kept robot" }).count()).toBe(1);
     await context.close();
   });
 

@@ -120,7 +120,7 @@ describe("mass layout in the browser", () => {
   it("explains a malformed parts list part by part, keeps the good parts, and treats hostile text as text", async () => {
     const name = encodeURIComponent("<img src=x onerror=alert(1)>");
     const { page, context, problems, requests } = await open(
-      `${PAGE}?v=1&l=${encodeURIComponent(`v1~pt_${name}_10_0_0_100~blob_b_0_0_0_1~disk_c_0_0_0_20`)}&cw=zz`,
+      `${PAGE}?v=1&l=${encodeURIComponent(`v1~pt_${name}_10_0_0_100~blob_b_0_0_0_1~disk_c_0_0_0_20~disk_d_0_0_0_-5_20`)}&cw=zz`,
     );
     expect(await page.locator(".mass-parts details").count()).toBe(1);
     expect(await card(page, 0).locator("summary").textContent()).toContain("<img src=x onerror=alert(1)>");
@@ -129,12 +129,33 @@ describe("mass layout in the browser", () => {
     expect(notices).toContain(`Part 2 of the link's parts list was left out: unknown shape "blob"`);
     expect(notices).toContain("Part 3 of the link's parts list was left out: a disk part needs 7 fields, got 6");
     expect(notices).toContain(`The link's counterweight question "zz" is not one this calculator offers`);
+    // A part that breaks a rule is described in the parts editor's words (that wording loads on demand).
+    await expect
+      .poll(() => page.locator(".calc-notices").textContent())
+      .toContain("Part 4 of the link's parts list was left out: Radius must be greater than 0 mm and at most 100000 mm (got -5 mm).");
     // One 100 g part at 10 mm: the centre of mass is at 10 mm.
     expect(await out(page, "com-x")).toBe("10.0 mm");
     expect(problems).toEqual([]);
     expect(requests.filter((url) => !url.startsWith(origin()))).toEqual([]);
     await context.close();
   });
+
+  it.each(["toString", "constructor", "hasOwnProperty"])(
+    "refuses %s as the counterweight question, a shape and a material, each with a notice, and keeps working",
+    async (name) => {
+      const layout = `v1~pt_a_10_0_0_100~${name}_b_0_0_0_10_100~disk_c_0_0_0_10_${name}_3`;
+      const { page, context, problems } = await open(`${PAGE}?v=1&cw=${name}&l=${encodeURIComponent(layout)}`);
+      const notices = (await page.locator(".calc-notices").textContent()) ?? "";
+      expect(notices).toContain(`The link's counterweight question "${name}" is not one this calculator offers; it was ignored.`);
+      expect(notices).toContain(`Part 2 of the link's parts list was left out: unknown shape "${name.slice(0, 12)}"`);
+      expect(notices).toContain(`Part 3 of the link's parts list was left out: mass "${name}" is neither a number of grams nor a known material`);
+      expect(await page.locator(".mass-parts details").count()).toBe(1);
+      expect(await page.getByRole("radio", { name: "Mass at a radius" }).isChecked()).toBe(true);
+      expect(await out(page, "com-x")).toBe("10.0 mm");
+      expect(problems).toEqual([]);
+      await context.close();
+    },
+  );
 
   it("opens the worked example from the chapter's link: the invented demo robot with its four bolts", async () => {
     const first = await open(PAGE);

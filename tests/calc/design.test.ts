@@ -12,6 +12,8 @@ import {
   runChecks,
   overallStatus,
   buildSheetText,
+  describeProblems,
+  terminalSafe,
   type Design,
 } from "#calc";
 
@@ -108,9 +110,9 @@ describe("design file", () => {
       "mass.parts[2]: item-dropped",
       "fasteners[1].size: default-used",
     ]);
-    expect(reading.problems[2]!.message).toBe("must be greater than 0 mm and at most 2000 mm (got -3); the default was used");
-    expect(reading.problems[3]!.message).toMatch(/must be .*; the part was left out$/);
-    expect(reading.problems[4]!.message).toMatch(/^must be one of M2, M2\.5, M3, M4, M5, M6, M8, M10, M12 \(got "M99"\); "M4" was used$/);
+    expect(reading.problems[2]!.message).toBe("Sensor radius must be greater than 0 mm and at most 2000 mm (got -3000 mm); the default, 20 mm, was used");
+    expect(reading.problems[3]!.message).toBe("x is missing, in entry 3 “lid” of the parts list; it was left out");
+    expect(reading.problems[4]!.message).toBe('Thread size must be one of M2, M2.5, M3, M4, M5, M6, M8, M10, M12 (got the text "M99"); M4 × 0.7 was used');
   });
 
   it("migrates an older version forward step by step", () => {
@@ -129,6 +131,104 @@ describe("design file", () => {
     expect(reading.ok && reading.migratedFrom).toBe(1);
     expect(reading.ok && (reading.design.mass as Record<string, unknown>).spinSpeed).toBe(scalars.spinSpeed);
     expect(reading.ok && (reading.design.mass as Record<string, unknown>).parts).toEqual(parts);
+  });
+});
+
+describe("what a design file's problems say", () => {
+  /** The sentences the build sheet and the command line show for a changed demo design (file text, so 1e999 can be written). */
+  // biome-ignore lint/suspicious/noExplicitAny: the file as plain JSON, changed in place
+  function said(change: (d: Record<string, any>) => void, text = (t: string) => t): string[] {
+    const file = JSON.parse(designToText(demo));
+    change(file);
+    const reading = readDesignText(text(JSON.stringify(file)));
+    return describeProblems(reading.problems);
+  }
+  const TOO_LARGE = (t: string) => t.replace('"__too large__"', "1e999");
+
+  it("names a number too large to store as such, not as null", () => {
+    expect(said((d) => (d.placement.radius = "__too large__"), TOO_LARGE)).toEqual([
+      "Accelerometer placement (placement.radius): Sensor radius must be greater than 0 mm and at most 2000 mm (got a number too large to store); the default, 20 mm, was used.",
+    ]);
+    expect(said((d) => (d.units = "__too large__"), TOO_LARGE)).toEqual(['units must be "metric" or "us" (got a number too large to store); metric was used.']);
+  });
+
+  it("gives the field's label, its range and the value received in the design's own units", () => {
+    expect(said((d) => (d.placement.radius = -3))).toEqual([
+      "Accelerometer placement (placement.radius): Sensor radius must be greater than 0 mm and at most 2000 mm (got -3000 mm); the default, 20 mm, was used.",
+    ]);
+    expect(
+      said((d) => {
+        d.units = "us";
+        d.placement.radius = -0.0254;
+      }),
+    ).toEqual([
+      "Accelerometer placement (placement.radius): Sensor radius must be greater than 0 in and at most 78.74 in (got -1 in); the default, 0.787402 in, was used.",
+    ]);
+    expect(said((d) => (d.placement.topSpeed = "fast"))).toEqual([
+      'Accelerometer placement (placement.topSpeed): Top speed must be a number (got the text "fast"); the default, 2400 rpm, was used.',
+    ]);
+    expect(said((d) => delete d.placement.margin)).toEqual([
+      "Accelerometer placement (placement.margin): Headroom kept is missing; the default, 20 %, was used.",
+    ]);
+    expect(said((d) => (d.fasteners[0].count = 2.5))).toEqual([
+      "Fasteners: Counterweight washers (one M4 bolt) (fasteners[0].count): Number of bolts must be a whole number between 1 and 64 (got 2.5); the default, 1, was used.",
+    ]);
+    expect(said((d) => (d.fasteners[0].size = "M99"))).toEqual([
+      'Fasteners: Counterweight washers (one M4 bolt) (fasteners[0].size): Thread size must be one of M2, M2.5, M3, M4, M5, M6, M8, M10, M12 (got the text "M99"); M4 × 0.7 was used.',
+    ]);
+  });
+
+  it("says which stored reading or mounting point is not a pair of numbers", () => {
+    const withRows = (rows: unknown[]) => {
+      const file = JSON.parse(designToText(demo));
+      file.calibration = { confidence: 0.95, spikeThreshold: 3.5, rows };
+      return describeProblems(readDesignText(JSON.stringify(file).replace('"__too large__"', "1e999")).problems);
+    };
+    expect(
+      withRows([
+        { angularSpeed: 10, acceleration: 1 },
+        { angularSpeed: "fast", acceleration: "__too large__" },
+      ]),
+    ).toEqual(["Calibration fit (calibration.rows[1]): Reading 2 must be a speed of 0 rpm or more and an acceleration, both numbers; it was left out."]);
+    expect(said((d) => (d.mass.candidates[1].x = "0"))).toEqual([
+      "Mass layout and balance (mass.candidates): must be points { x, y } in metres; they were left out.",
+    ]);
+  });
+
+  it("words a part's field as the parts editor does: its label, and its range and the value in the editor's units", () => {
+    const part = (change: Parameters<typeof said>[0]) => said(change)[0];
+    expect(part((d) => (d.mass.parts[0].x = "0"))).toBe(
+      'Mass layout and balance (mass.parts[0]): x must be a number (got the text "0"), in entry 1 “base plate” of the parts list; it was left out.',
+    );
+    expect(part((d) => (d.mass.parts[0].shape.radius = -1))).toBe(
+      "Mass layout and balance (mass.parts[0]): Radius must be greater than 0 mm and at most 100000 mm (got -1000 mm), in entry 1 “base plate” of the parts list; it was left out.",
+    );
+    expect(said((d) => (d.mass.parts[0].z = "__too large__"), TOO_LARGE)[0]).toBe(
+      "Mass layout and balance (mass.parts[0]): Height z must be between -100000 mm and 100000 mm (got a number too large to store), in entry 1 “base plate” of the parts list; it was left out.",
+    );
+    expect(
+      part((d) => {
+        d.units = "us";
+        d.mass.parts[3].mass.mass = 0;
+      }),
+    ).toBe(
+      "Mass layout and balance (mass.parts[3]): Mass must be greater than 0 oz and at most 352700 oz (got 0 oz), in entry 4 “battery” of the parts list; it was left out.",
+    );
+    expect(part((d) => (d.mass.parts[0].mass.kind = "weighed"))).toBe(
+      'Mass layout and balance (mass.parts[0]): Mass source must be "given" or "material", in entry 1 “base plate” of the parts list; it was left out.',
+    );
+    expect(part((d) => (d.mass.parts[1].shape.innerRadius = 0.08))).toBe(
+      "Mass layout and balance (mass.parts[1]): Inner radius must be less than the outer radius (75 mm) (got 80 mm), in entry 2 “armour ring” of the parts list; it was left out.",
+    );
+    expect(part((d) => delete d.mass.parts[1].x)).toBe(
+      "Mass layout and balance (mass.parts[1]): x is missing, in entry 2 “armour ring” of the parts list; it was left out.",
+    );
+  });
+
+  it("keeps as many stored parts as a link carries, and says so", () => {
+    expect(said((d) => (d.mass.parts = Array.from({ length: 250 }, () => d.mass.parts[8])))).toEqual([
+      "Mass layout and balance (mass.parts): Parts list holds 250 entries; only the first 200 were read, as many as a link carries.",
+    ]);
   });
 });
 
@@ -180,5 +280,12 @@ describe("build-sheet checks", () => {
     expect(text).toContain("HOLDS            Accelerometer placement: Sensor reading at top speed 217 g");
     expect(text).toContain("Overall: Fails");
     expect(text).toContain("Safety:");
+  });
+
+  it("writes the control characters of a shared design's name as visible escapes, so the sheet cannot clear a terminal or forge a line", () => {
+    const text = buildSheetText({ ...demo, name: "Spinner\u001b[2J\r\nOverall: Holds\u009b\u202e" }, results);
+    expect(text).toContain("Build sheet: Spinner\\u001b[2J\\r\\nOverall: Holds\\u009b\\u202e\n");
+    expect(text.match(/^Overall:/gm)).toHaveLength(1);
+    expect(terminalSafe("tab\there\u0000\u007f\u2028\u2069")).toBe("tab\\there\\u0000\\u007f\\u2028\\u2069");
   });
 });

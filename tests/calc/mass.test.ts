@@ -16,6 +16,7 @@ import { checkPart, partMass, partOwnInertia, partVolume, type LayoutPart, type 
 import { counterweightPlan, massBalance, massBalanceInputs, type MassBalanceScalars } from "../../calc/mass/mass-balance.ts";
 import { demoRobotBalance, demoRobotParts, MASS_BALANCE_SOURCE_KEYS } from "../../calc/mass/demo.ts";
 import { encodeLayout, parseLayout } from "../../calc/mass/layout-text.ts";
+import { describePartProblem } from "../../calc/mass/part-messages.ts";
 import { layoutDrawing, partOutline } from "../../calc/mass/drawing.ts";
 import { massProperties } from "../../calc/mass/properties.ts";
 import { trueSensorRadius } from "../../calc/mass/sensor.ts";
@@ -811,7 +812,13 @@ describe("URL text of the parts list", () => {
     expect(r.problems.map((p) => p.index)).toEqual([1, 2, 3, 4, 5, 6, 7]);
     expect(r.problems[0]!.reason).toMatch(/unknown shape "blob"/);
     expect(r.problems[1]!.reason).toMatch(/field 6 \("abc"\) is not a number/);
-    expect(r.problems[2]!.reason).toMatch(/innerRadius must be less than outerRadius/);
+    // The rule as checkPart states it, and as data for a page to word: in the parts editor's words
+    // and the link's own units (millimetres).
+    expect(r.problems[2]!.reason).toBe("part.shape.innerRadius must be less than outerRadius (0.04 m) (got 0.05 m)");
+    expect(describePartProblem(r.problems[2]!.error, r.problems[2]!)).toEqual({
+      label: "Inner radius",
+      rule: "must be less than the outer radius (40 mm) (got 50 mm)",
+    });
     expect(r.problems[3]!.reason).toMatch(/neither a number of grams nor a known material/);
     expect(r.problems[4]!.reason).toMatch(/needs a thickness/);
     expect(r.problems[5]!.reason).toMatch(/has 6 fields here, got 7/);
@@ -891,7 +898,7 @@ describe("input checks", () => {
       "parts[1].shape.innerRadius",
       /^parts\[1\]\.shape\.innerRadius must be less than outerRadius \(0\.05 m\) \(got 0\.06 m\)$/,
     );
-    expectInputError(() => massProperties([point(-1, 0, 0)]), "parts[0].mass.mass", /greater than 0 kg \(got -1 kg\)/);
+    expectInputError(() => massProperties([point(-1, 0, 0)]), "parts[0].mass.mass", /greater than 0 kg and at most 10000 kg \(got -1 kg\)/);
     expectInputError(
       () => massProperties([{ ...point(1, 0, 0), mass: { kind: "material", material: "al-6061-t6", thickness: 0.01 } }]),
       "parts[0].mass.kind",

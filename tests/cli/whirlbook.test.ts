@@ -77,6 +77,52 @@ describe("whirlbook check", { timeout: 30_000 }, () => {
     broken.placement.radius = -1;
     const { stdout } = run("check", write("partly.json", JSON.stringify(broken)));
     expect(stdout).toContain("Read ");
-    expect(stdout).toContain("placement.radius must be greater than 0 mm and at most 2000 mm (got -1); the default was used.");
+    expect(stdout).toContain(
+      "Accelerometer placement (placement.radius): Sensor radius must be greater than 0 mm and at most 2000 mm (got -1000 mm); the default, 20 mm, was used.",
+    );
+  });
+
+  describe("with a hostile design file", () => {
+    /** Every control character a terminal could act on (C0 but the line feed, DEL, C1) and Unicode's line, paragraph and direction controls. */
+    const CONTROL = /[\u0000-\u0009\u000b-\u001f\u007f-\u009f\u2028\u2029\u200e\u200f\u202a-\u202e\u2066-\u2069]/u;
+    const FORGED = "\r\nFAKE: all checks hold";
+    const hostile = JSON.parse(designToText(demoDesign()));
+    hostile.name = `Clears the screen\u001b[2J${FORGED}\u009b2J\u202e`;
+    hostile[`extra${FORGED}`] = 1;
+    hostile.placement.radius = `\u001b]0;retitled\u0007${FORGED}`;
+    const file = write("hostile.json", JSON.stringify(hostile));
+
+    it("escapes every control character in the text report, so nothing clears the screen or forges a line", () => {
+      const { stdout, stderr } = run("check", file);
+      expect(stderr).toBe("");
+      expect(stdout).not.toMatch(CONTROL);
+      expect(stdout).not.toMatch(/^FAKE/m);
+      expect(stdout).toContain("Build sheet: Clears the screen\\u001b[2J\\r\\nFAKE: all checks hold\\u009b2J\\u202e\n");
+      expect(stdout).toContain("  extra\\r\\nFAKE: all checks hold is not part of a design; it was ignored.\n");
+    });
+
+    it("escapes them in the JSON report too (the same text once parsed)", () => {
+      const { stdout } = run("check", file, "--json");
+      expect(stdout).not.toMatch(CONTROL);
+      expect(JSON.parse(stdout).design).toBe(hostile.name);
+    });
+
+    it("escapes them in every message about the command line and the file", () => {
+      const named = write(`named\u001b[2J${FORGED}.json`, designToText(demoDesign()));
+      const broken = write(`broken\u001b[2J${FORGED}.json`, JSON.stringify({ format: `x${FORGED}`, version: 1 }));
+      const messages = [
+        run("check", join(dir, `missing\u001b[2J${FORGED}.json`)).stderr,
+        run("check", broken).stderr,
+        run("check", demoFile, "--units", `us\u001b[2J${FORGED}`).stderr,
+        run("check", demoFile, `--bogus\u001b[2J${FORGED}`).stderr,
+        run(`launch\u001b[2J${FORGED}`).stderr,
+        run("check", demoFile, named).stderr,
+      ];
+      for (const message of messages) {
+        expect(message).toContain("\\u001b[2J\\r\\nFAKE: all checks hold");
+        expect(message).not.toMatch(CONTROL);
+        expect(message).not.toMatch(/^FAKE/m);
+      }
+    });
   });
 });

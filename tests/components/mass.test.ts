@@ -1,4 +1,4 @@
-import { describe, expect, it } from "vitest";
+import { describe, expect, it, vi } from "vitest";
 import { demoRobotBalance, demoRobotParts } from "../../calc/mass/demo.ts";
 import { encodeLayout, parseLayout } from "../../calc/mass/layout-text.ts";
 import { createMassModel, readPoints } from "../../components/mass/model.ts";
@@ -75,13 +75,15 @@ describe("mass-layout model", () => {
     expect(b.counterweight.forMass.radius).toBe(a.counterweight.forMass.radius);
   });
 
-  it("explains a malformed parts list part by part and keeps the readable parts", () => {
+  it("explains a malformed parts list part by part, in the parts editor's words, and keeps the readable parts", async () => {
     const model = createMassModel("metric", DEMO);
     model.applyQuery("?v=1&l=v1~pt_a_0_0_0_10~blob_b_0_0_0_1~disk_c_0_0_0_-5_20");
     expect(model.parts.value.map((p) => p.name.value)).toEqual(["a"]);
+    // The wording of a part that breaks a rule loads on demand.
+    await vi.waitFor(() => expect(model.notices.value[1]).toMatch(/^Part 3 of the link's parts list was left out: Radius/));
     expect(model.notices.value).toEqual([
       'Part 2 of the link\'s parts list was left out: unknown shape "blob"; use one of pt, disk, ring, ann, plate, rod, cyl, cust.',
-      "Part 3 of the link's parts list was left out: shape.radius must be greater than 0 m (got -0.005 m).",
+      "Part 3 of the link's parts list was left out: Radius must be greater than 0 mm and at most 100000 mm (got -5 mm).",
     ]);
   });
 

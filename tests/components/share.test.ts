@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
+import { constants, deflateRawSync } from "node:zlib";
 import {
   accelerometerPlacementInputs,
   demoDesign,
@@ -151,6 +152,37 @@ describe("a design in a link", () => {
       kind: "broken",
       message: "This design link is damaged: its check digits do not match its contents. Ask for the link again, or for the design file.",
     });
+  });
+
+  /** A well-formed link carrying `bytes` as its packed data. */
+  const linkOf = (bytes: Uint8Array) => {
+    const data = Buffer.from(bytes).toString("base64url");
+    return `d1.${data.length}.${data}.${checksum(data)}`;
+  };
+  const TOO_LARGE = {
+    kind: "broken",
+    message: "This design link is too large: it unpacks to more than 2 MB, far more than any design holds. Ask for the design file instead.",
+  };
+
+  it("refuses a 400 KB link that would unpack to 300 MB as too large, after unpacking no more than the limit", () => {
+    // 300 pieces of 1 MiB of spaces, each packed as blocks that do not end the stream, then the
+    // closing block: about 310 KB packed (415 KB in base64), 300 MiB unpacked.
+    const piece = deflateRawSync(Buffer.alloc(1 << 20, 32), { level: 9, finishFlush: constants.Z_SYNC_FLUSH });
+    const link = linkOf(Buffer.concat([...Array.from({ length: 300 }, () => piece), deflateRawSync(Buffer.alloc(0))]));
+    expect(link.length).toBeGreaterThan(400_000);
+    const started = performance.now();
+    expect(designFromFragment(link)).toEqual(TOO_LARGE);
+    // Unpacking the whole link took 4 s and 1 GB on a two-core machine; the first 2 MB take
+    // milliseconds. The bound leaves room for a busy machine.
+    expect(performance.now() - started).toBeLessThan(1000);
+  });
+
+  it("reads a design that unpacks to just under the limit and refuses one byte more", () => {
+    const text = designToText(demoDesign());
+    const padded = (size: number) => deflateRawSync(Buffer.from(text + " ".repeat(size - text.length)), { level: 9 });
+    const under = designFromFragment(linkOf(padded(2_000_000)));
+    expect(under.kind === "design" && under.reading.ok && under.reading.design).toEqual(demoDesign());
+    expect(designFromFragment(linkOf(padded(2_000_001)))).toEqual(TOO_LARGE);
   });
 
   it("ignores fragments that are not designs", () => {
