@@ -34,6 +34,17 @@ const FOLDERS = {
 
 const clean = (text) => text.replace(/\s+/g, " ").replace(/\|/g, "\\|").trim();
 
+/** The fields a function's body first takes from its parameter `name` (\`const { a, b } = requireInputObject(name)\`), or null. */
+function fieldsTaken(fn, name) {
+  const first = fn.body?.statements[0];
+  if (!first || !ts.isVariableStatement(first)) return null;
+  const [d] = first.declarationList.declarations;
+  const init = d?.initializer;
+  if (!d || !ts.isObjectBindingPattern(d.name) || !init || !ts.isCallExpression(init) || init.arguments[0]?.getText() !== name) return null;
+  if (d.name.elements.some((e) => e.dotDotDotToken)) return null;
+  return d.name.elements.map((e) => (e.propertyName ?? e.name).getText());
+}
+
 function describe(file) {
   const source = ts.createSourceFile(file, readFileSync(join(calcDir, file), "utf8"), ts.ScriptTarget.Latest, true);
   const rows = [];
@@ -44,7 +55,15 @@ function describe(file) {
     if (docs.some((d) => d.getFullText().includes("@internal"))) continue;
     const name = statement.name.text;
     const params = statement.parameters
-      .map((p) => (ts.isObjectBindingPattern(p.name) ? `{ ${p.name.elements.map((e) => e.name.getText()).join(", ")} }` : p.name.getText()))
+      .map((p) => {
+        if (ts.isObjectBindingPattern(p.name)) return `{ ${p.name.elements.map((e) => e.name.getText()).join(", ")} }`;
+        // An object parameter checked in the body reads as its fields: those of its type when the type
+        // is written out, else those the body takes from it first (and "…" for the rest of its type).
+        if (p.type && ts.isTypeLiteralNode(p.type)) return `{ ${p.type.members.map((m) => m.name?.getText()).join(", ")} }`;
+        const taken = fieldsTaken(statement, p.name.getText());
+        if (taken && p.type && ts.isIntersectionTypeNode(p.type)) return `{ ${[...taken, "…"].join(", ")} }`;
+        return p.name.getText();
+      })
       .join(", ");
     const comment = docs.map((d) => (typeof d.comment === "string" ? d.comment : (ts.getTextOfJSDocComment(d.comment) ?? ""))).join(" ");
     const summary = clean(comment.split(/\n\s*\n|(?<=\.)\s/)[0] ?? "");

@@ -8,9 +8,14 @@
  * Targets: a 10-second simulation under 5 ms; a 50-point sweep well under 100 ms. Timings on a
  * shared machine vary; the median and the 90th percentile are printed, with the load average.
  * The last case runs a sweep as the spin-up page does: point by point, in batches of about 8 ms,
- * and reports the longest batch (how long the page can go without answering input).
+ * and reports the longest batch (how long the page can go without answering input). Last, the
+ * worst case found: the slowest single run over inputs anywhere in their declared ranges.
  */
-import { printTimings } from "./bench-timing.mjs";
+import { ms, printTimings } from "./bench-timing.mjs";
+import { CalcInputError } from "../calc/core/errors.ts";
+import { drivetrainInputs } from "../calc/drivetrain/inputs.ts";
+import { MAX_TRIALS } from "../calc/drivetrain/model.ts";
+import { siSymbol } from "../calc/core/spec-check.ts";
 import { DEMO_SPINNER, DEMO_WEAPON } from "../calc/drivetrain/demo.ts";
 import { markSweepOptimum, sweepDrivetrain, sweepPoint, sweepValues } from "../calc/drivetrain/compare.ts";
 import { simulateSpinUp } from "../calc/drivetrain/simulate.ts";
@@ -87,3 +92,98 @@ const cases = [
 ];
 
 printTimings("Spin-up simulation timing", cases);
+
+// The worst case: the slowest single spin-up over inputs anywhere in their declared ranges. Every
+// input at each end of its range beside the demo values, then random designs (a fixed seed, so
+// runs compare) with each input drawn log-uniformly across its range and now and then at an end.
+// A run is bounded by its step budget (MAX_TRIALS); a design out of the model's reach is refused
+// by name (CalcInputError) before it starts.
+const random = (() => {
+  let state = 20240611;
+  return () => {
+    state = (state + 0x6d2b79f5) | 0;
+    let t = Math.imul(state ^ (state >>> 15), 1 | state);
+    t = (t + Math.imul(t ^ (t >>> 7), 61 | t)) ^ t;
+    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
+  };
+})();
+const lowEnd = (spec) => (spec.minOpen ? (spec.min === 0 ? Number.MIN_VALUE : spec.min * (1 + Number.EPSILON)) : spec.min);
+function draw(spec) {
+  const u = random();
+  if (u < 0.05) return lowEnd(spec);
+  if (u < 0.1) return spec.max;
+  if (spec.integer) return Math.ceil(spec.min) + Math.floor(random() * (Math.floor(spec.max) - Math.ceil(spec.min) + 1));
+  const low = Math.max(lowEnd(spec), spec.max * 1e-6, 1e-12);
+  return low * (spec.max / low) ** random();
+}
+const candidates = [];
+for (const base of [DEMO_WEAPON, DEMO_SPINNER]) {
+  for (const [name, spec] of Object.entries(drivetrainInputs)) {
+    candidates.push({ ...base, [name]: lowEnd(spec) }, { ...base, [name]: spec.max });
+  }
+}
+// A spinner with absurdly light wheels for strong motors: the stiffest design the tests know.
+const RPM = Math.PI / 30;
+candidates.push({
+  ...DEMO_SPINNER,
+  wheelInertia: 1e-8,
+  motorRotorInertia: 0,
+  motorCount: 8,
+  motorKv: 50 * RPM,
+  motorResistance: 1e-3,
+  cellResistance: 0,
+  currentLimit: 1000,
+});
+for (let i = 0; i < 400; i++) {
+  const input = { driveType: random() < 0.5 ? "weapon" : "spinner" };
+  for (const [name, spec] of Object.entries(drivetrainInputs)) input[name] = draw(spec);
+  candidates.push(input);
+}
+let worst = null;
+let most = null;
+let refused = 0;
+const stopped = new Map();
+for (const input of candidates) {
+  const start = performance.now();
+  let result;
+  try {
+    result = simulateSpinUp(input, { series: false });
+  } catch (error) {
+    if (!(error instanceof CalcInputError)) throw error;
+    refused++;
+    continue;
+  }
+  const elapsed = performance.now() - start;
+  if (result.endReason === "step-limit") {
+    const why = /in \d+ steps/.test(result.warnings[0])
+      ? "at the step count"
+      : /switched/.test(result.warnings[0])
+        ? "by grip switches"
+        : "by a step shrunk to nothing";
+    stopped.set(why, (stopped.get(why) ?? 0) + 1);
+  }
+  if (!worst || elapsed > worst.elapsed) worst = { elapsed, input, result };
+  const steps = result.solver.acceptedSteps + result.solver.rejectedSteps;
+  if (!most || steps > most.steps) most = { steps, elapsed, result };
+}
+const base = worst.input.driveType === "spinner" ? DEMO_SPINNER : DEMO_WEAPON;
+const unusual = Object.keys(drivetrainInputs)
+  .map((name) => [name, worst.input[name], Math.abs(Math.log10(Math.abs(worst.input[name] / base[name]) || Number.MIN_VALUE))])
+  .filter(([, , distance]) => distance > 0.3)
+  .sort((a, b) => b[2] - a[2])
+  .slice(0, 4)
+  .map(([name, value]) => `${name} ${Number(value.toPrecision(3))} ${siSymbol(drivetrainInputs[name])}`.trim());
+const s = worst.result.solver;
+console.log(
+  `\nWorst case over ${candidates.length} designs (${refused} refused as beyond the model's reach; stopped by the step budget of ${MAX_TRIALS} steps: ${
+    [...stopped].map(([why, n]) => `${n} ${why}`).join(", ") || "none"
+  }):`,
+);
+console.log(
+  `  ${ms(worst.elapsed)} for a ${worst.input.driveType}, ${s.acceptedSteps + s.rejectedSteps} steps, ended by ${worst.result.endReason} at ${worst.result.endTime.toPrecision(3)} s; ` +
+    `furthest from the demo: ${unusual.join(", ") || "none"}`,
+);
+if (worst.result.warnings.length) console.log(`  "${worst.result.warnings.join(" ")}"`);
+console.log(
+  `  most steps: ${most.steps} in ${ms(most.elapsed)}, ended by ${most.result.endReason}${most.result.warnings.length ? `: "${most.result.warnings.join(" ")}"` : ""}`,
+);

@@ -14,6 +14,8 @@ import type { ChoiceSpecs } from "./choices.ts";
 import { fieldUnit, readField, type InputSpecs } from "./inputs.ts";
 import { type LinkKey, MAX_VALUE_LENGTH, quoteForNotice, readLinkKeys, writeLinkKeys } from "./permalink.ts";
 import { quantityToText, type UnitSystem } from "./units.ts";
+import { requireInputObject } from "./spec-check.ts";
+import { CalcInputError } from "./errors.ts";
 
 /** A problem found reading a stored value: where (a path under the value) and what. */
 export interface ValueProblem {
@@ -119,15 +121,16 @@ export type AnyValues = Record<string, any>;
 export function defineForm<S extends InputSpecs, const C extends ChoiceSpecs = Record<never, never>, E extends ExtraSpecs = Record<never, never>>(
   spec: FormSpec<S, C, E>,
 ): CalculatorForm<S, C, E> {
-  const { choices = {} as C, extras = {} as E, scope = "", list, ...rest } = spec;
+  const { choices = {} as C, extras = {} as E, scope = "", list, ...rest } = requireInputObject(spec, "spec");
   const keys = [
-    ...Object.values(spec.inputs).map((s) => s.urlKey),
+    ...Object.values(requireInputObject(spec.inputs, "inputs")).map((s) => s.urlKey),
     ...Object.values(choices).map((s) => s.urlKey),
     ...Object.values(extras).map((s) => s.urlKey),
     ...(spec.pageKeys ?? []),
   ];
   const repeated = keys.filter((k, i) => keys.indexOf(k) !== i || k === "u" || k === "v");
-  if (repeated.length) throw new Error(`calculator "${spec.id}": link keys used twice or reserved: ${repeated.join(", ")}`);
+  if (repeated.length)
+    throw new CalcInputError({ param: "urlKey", value: repeated.join(", "), expected: `used once in calculator "${spec.id}", and not u or v`, unit: "" });
   return { ...rest, scope, choices, extras, section: list ? { kind: "list", ...list } : { kind: "single" } };
 }
 
@@ -141,6 +144,7 @@ export function defineCalculator<S extends InputSpecs, C extends ChoiceSpecs, E 
 
 /** The values a calculator starts with. */
 export function initialValues<K extends AnyForm>(calc: K): ValuesOf<K> {
+  requireInputObject(calc, "calc");
   const out: AnyValues = {};
   for (const [name, spec] of Object.entries(calc.inputs)) out[name] = spec.default;
   for (const [name, spec] of Object.entries(calc.choices)) out[name] = spec.default;
@@ -150,6 +154,7 @@ export function initialValues<K extends AnyForm>(calc: K): ValuesOf<K> {
 
 /** Every link key the calculator reads, with its label and longest value. */
 export function linkKeys(calc: AnyForm): LinkKey[] {
+  requireInputObject(calc, "calc");
   return [
     ...Object.values(calc.inputs).map((s) => ({ key: s.urlKey, label: s.label, maxLength: MAX_VALUE_LENGTH })),
     ...Object.values(calc.choices).map((s) => ({ key: s.urlKey, label: s.label, maxLength: MAX_VALUE_LENGTH })),
@@ -181,6 +186,8 @@ export interface LinkedState extends Partial<TextState> {
  * their options, extras as text for the calculator to read. Never throws.
  */
 export function readLink(calc: AnyForm, search: string): LinkedState {
+  requireInputObject(calc, "calc");
+  if (typeof search !== "string") throw new CalcInputError({ param: "search", value: search, expected: "a query string", unit: "" });
   const read = readLinkKeys(search, calc.scope, linkKeys(calc), calc.pageKeys ?? []);
   const texts: Record<string, string> = {};
   const choices: Record<string, string> = {};
@@ -199,10 +206,14 @@ export function readLink(calc: AnyForm, search: string): LinkedState {
 
 /** Writes a calculator's text state into a query string, keeping other scopes' keys of `existing`. */
 export function writeLink(calc: AnyForm, state: TextState, system: UnitSystem, existing = "", pageValues: Record<string, string> = {}): string {
+  requireInputObject(calc, "calc");
+  requireInputObject(state, "state");
+  if (typeof existing !== "string") throw new CalcInputError({ param: "existing", value: existing, expected: "a query string", unit: "" });
   const values: Record<string, string> = {};
-  for (const [name, spec] of Object.entries(calc.inputs)) if (state.texts[name] !== undefined) values[spec.urlKey] = state.texts[name]!.replace(/\s+/g, "");
-  for (const [name, spec] of Object.entries(calc.choices)) if (state.choices[name] !== undefined) values[spec.urlKey] = state.choices[name]!;
-  for (const [name, spec] of Object.entries(calc.extras)) if (state.extras[name] !== undefined) values[spec.urlKey] = state.extras[name]!;
+  for (const [name, spec] of Object.entries(calc.inputs))
+    if (state.texts?.[name] !== undefined) values[spec.urlKey] = String(state.texts[name]).replace(/\s+/g, "");
+  for (const [name, spec] of Object.entries(calc.choices)) if (state.choices?.[name] !== undefined) values[spec.urlKey] = String(state.choices[name]);
+  for (const [name, spec] of Object.entries(calc.extras)) if (state.extras?.[name] !== undefined) values[spec.urlKey] = String(state.extras[name]);
   return writeLinkKeys(existing, calc.scope, system, { ...values, ...pageValues });
 }
 
@@ -211,6 +222,8 @@ export function writeLink(calc: AnyForm, state: TextState, system: UnitSystem, e
  * Values left out (a hand-off that sets two fields) are left out of the text too.
  */
 export function textsOf(calc: AnyForm, values: Partial<AnyValues>, system: UnitSystem): TextState {
+  requireInputObject(calc, "calc");
+  requireInputObject(values, "values");
   const texts: Record<string, string> = {};
   const choices: Record<string, string> = {};
   const extras: Record<string, string> = {};
@@ -237,6 +250,7 @@ export function valuesOf<K extends AnyCalculator>(
   state: Partial<TextState>,
   system: UnitSystem,
 ): { values: ValuesOf<K> | null; errors: ValueError[]; notices: string[] } {
+  requireInputObject(state, "state");
   const values: AnyValues = initialValues(calc);
   const errors: ValueError[] = [];
   const notices: string[] = [];
@@ -265,7 +279,7 @@ export function linkQuery(
   values: AnyValues,
   options: { system?: UnitSystem; pageValues?: Record<string, string>; existing?: string } = {},
 ): string {
-  const system = options.system ?? "metric";
+  const system = requireInputObject(options, "options").system ?? "metric";
   return writeLink(calc, textsOf(calc, values, system), system, options.existing ?? "", options.pageValues ?? {});
 }
 
@@ -275,7 +289,8 @@ export function pageLink(
   values: AnyValues,
   options: { system?: UnitSystem; pageValues?: Record<string, string>; existing?: string } = {},
 ): string {
-  return `?${linkQuery(calc, values, options)}#${calc.anchor}`;
+  const query = linkQuery(calc, values, options);
+  return `?${query}#${calc.anchor}`;
 }
 
 /**
@@ -288,5 +303,6 @@ export function linkFor(
   values: AnyValues,
   options: { system?: UnitSystem; pageValues?: Record<string, string>; existing?: string } = {},
 ): string {
-  return `chapters/${calc.chapter}/?${linkQuery(calc, values, options)}#${calc.anchor}`;
+  const query = linkQuery(calc, values, options);
+  return `chapters/${calc.chapter}/?${query}#${calc.anchor}`;
 }

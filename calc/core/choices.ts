@@ -29,9 +29,10 @@ export type ChoiceSpecs = Readonly<Record<string, ChoiceSpec>>;
  * of `options`; returns it narrowed to the option type otherwise.
  */
 export function requireChoice<V extends string>(param: string, value: unknown, options: readonly ChoiceOption<V>[]): V {
-  const found = options.find((option) => option.value === value);
+  const list = Array.isArray(options) ? options : [];
+  const found = list.find((option) => option?.value === value);
   if (!found) {
-    throw new CalcInputError({ param, value, expected: `one of ${options.map((o) => o.value).join(", ")}`, unit: "" });
+    throw new CalcInputError({ param, value, expected: `one of ${list.map((o) => o?.value).join(", ")}`, unit: "" });
   }
   return found.value;
 }

@@ -92,16 +92,18 @@ export function requireRelation(
   limit: number,
   options: { kind: string; unit: string; other?: string },
 ): number {
-  requireFinite(param, value, options.unit);
+  // Missing options or limit (a call with null) still give this error family: the check then fails.
+  const { kind, unit, other } = options ?? { kind: "", unit: "" };
+  requireFinite(param, value, unit);
   const ok = relation === "greater" ? value > limit : relation === "at-least" ? value >= limit : relation === "less" ? value < limit : value <= limit;
   if (!ok) {
-    const shown = `${Number(limit.toPrecision(6))}${options.unit ? ` ${options.unit}` : ""}`;
+    const shown = `${Number(Number(limit).toPrecision(6))}${unit ? ` ${unit}` : ""}`;
     throw new CalcInputError({
       param,
       value,
-      expected: `${RELATION_WORDS[relation]} ${options.other ? `${options.other} (${shown})` : shown}`,
-      unit: options.unit,
-      bound: { relation, limit, kind: options.kind, ...(options.other ? { other: options.other } : {}) },
+      expected: `${RELATION_WORDS[relation] ?? relation} ${other ? `${other} (${shown})` : shown}`,
+      unit,
+      bound: { relation, limit, kind, ...(other ? { other } : {}) },
     });
   }
   return value;
@@ -137,15 +139,17 @@ export function requireNonNegative(param: string, value: number, unit: string): 
  * Throws unless `min <= value <= max` (or `min < value` / `value < max` where the bound is open).
  */
 export function requireInRange(param: string, value: number, unit: string, range: InputRange): number {
+  // A missing range (a call with null) fails every comparison: the value is refused, by name.
+  const { min, max, minOpen, maxOpen } = range ?? ({} as InputRange);
   if (typeof value !== "number" || !Number.isFinite(value)) {
     throw new CalcInputError({ param, value, expected: "a finite number", unit, range });
   }
-  const lowOk = range.minOpen ? value > range.min : value >= range.min;
-  const highOk = range.maxOpen ? value < range.max : value <= range.max;
+  const lowOk = minOpen ? value > min : value >= min;
+  const highOk = maxOpen ? value < max : value <= max;
   if (!lowOk || !highOk) {
     const u = unit ? ` ${unit}` : "";
-    const low = range.minOpen ? `greater than ${range.min}${u}` : `at least ${range.min}${u}`;
-    const high = range.maxOpen ? `less than ${range.max}${u}` : `at most ${range.max}${u}`;
+    const low = minOpen ? `greater than ${min}${u}` : `at least ${min}${u}`;
+    const high = maxOpen ? `less than ${max}${u}` : `at most ${max}${u}`;
     throw new CalcInputError({ param, value, expected: `${low} and ${high}`, unit, range });
   }
   return value;

@@ -42,19 +42,33 @@ export interface InputSpec {
 
 export type InputSpecs = Record<string, InputSpec>;
 
-/** Declares a calculator's inputs (identity at run time; keeps the literal types). */
+/**
+ * Declares a calculator's inputs (identity at run time; keeps the literal types). Throws a
+ * CalcInputError naming "<input>.default" when a default lies outside its finite range.
+ */
 export function defineInputs<const T extends InputSpecs>(specs: T): T {
-  for (const [name, spec] of Object.entries(specs)) {
-    if (!(spec.min <= spec.default && spec.default <= spec.max) || (spec.minOpen && spec.default === spec.min)) {
-      throw new Error(`input "${name}": default ${spec.default} lies outside [${spec.min}, ${spec.max}]`);
+  for (const [name, spec] of Object.entries(specs ?? requireSpec(specs))) {
+    const { min, max, default: start, minOpen } = spec ?? requireSpec(spec);
+    if (!(Number.isFinite(min) && Number.isFinite(max) && min <= start && start <= max) || (minOpen && start === min)) {
+      throw new CalcInputError({
+        param: `${name}.default`,
+        value: start,
+        expected: `within the declared range, ${minOpen ? "above" : "from"} ${min} to ${max}`,
+        unit: "",
+      });
     }
   }
   return specs;
 }
 
+/** Throws the CalcInputError for a missing declaration (called where one is null or undefined). */
+function requireSpec(spec: unknown): never {
+  throw new CalcInputError({ param: "spec", value: spec, expected: "an input declaration", unit: "" });
+}
+
 /** The unit a field shows and reads bare numbers in. */
 export function fieldUnit(spec: InputSpec, system: UnitSystem): UnitId {
-  return spec.unit?.[system] ?? displayUnit(spec.kind, system, spec.default);
+  return (spec ?? requireSpec(spec)).unit?.[system] ?? displayUnit(spec.kind, system, spec.default);
 }
 
 /** Formats a range bound in the field's unit, without trailing zeros ("50 %", "2000 mm"). */
@@ -66,7 +80,7 @@ function show(spec: InputSpec, valueSI: number, system: UnitSystem): string {
 
 /** The allowed range in words, in the user's units: "between 1 mm and 2000 mm". */
 export function describeRange(spec: InputSpec, system: UnitSystem): string {
-  const low = show(spec, spec.min, system);
+  const low = show(spec, (spec ?? requireSpec(spec)).min, system);
   const high = show(spec, spec.max, system);
   const kindWord = spec.integer ? "a whole number " : "";
   return spec.minOpen ? `${kindWord}greater than ${low} and at most ${high}` : `${kindWord}between ${low} and ${high}`;
@@ -78,7 +92,7 @@ export function describeRange(spec: InputSpec, system: UnitSystem): string {
 export function checkValue(spec: InputSpec, valueSI: number, system: UnitSystem): CalcInputError | null {
   const unit = fieldUnit(spec, system);
   // The value in the field's unit, to 6 significant figures: computed, never read back from display text.
-  const shownValue = Number(fromSI(valueSI, unit).toPrecision(6));
+  const shownValue = Number((valueSI / UNITS[unit].factor).toPrecision(6));
   const tooLow = spec.minOpen ? !(valueSI > spec.min) : !(valueSI >= spec.min);
   const tooHigh = !(valueSI <= spec.max);
   const notWhole = spec.integer === true && !Number.isInteger(valueSI);

@@ -23,9 +23,11 @@ export function describeReceived(value: unknown, unit?: UnitId): string {
   if (typeof value === "number") {
     if (Number.isNaN(value)) return "not a number";
     if (!Number.isFinite(value)) return value > 0 ? "a number too large to store" : "a negative number too large to store";
-    if (unit === undefined) return String(Number(value.toPrecision(6)));
-    const symbol = UNITS[unit].symbol;
-    return `${Number(fromSI(value, unit).toPrecision(6))}${symbol ? ` ${symbol}` : ""}`;
+    // An unknown unit (not one of calc/core's ids) is left out rather than guessed.
+    const def: { symbol: string } | undefined = unit === undefined ? undefined : UNITS[unit];
+    if (!def) return String(Number(value.toPrecision(6)));
+    const shown = Number(fromSI(value, unit!).toPrecision(6));
+    return Number.isFinite(shown) ? `${shown}${def.symbol ? ` ${def.symbol}` : ""}` : "a number too large to show in that unit";
   }
   if (typeof value === "string") return `the text ${JSON.stringify(value.length > 40 ? `${value.slice(0, 40)}…` : value)}`;
   if (value === null) return "nothing (null)";

@@ -33,6 +33,9 @@ export function requireInputObject<T>(input: T, param = "input"): NonNullable<T>
  * `spec` declares (min excluded where `minOpen`) and whole where it must be; returns it otherwise.
  */
 export function requireDeclared(spec: InputSpec, name: string, value: unknown): number {
+  // A name the declaration does not hold (its spec looked up as undefined) is refused the same way.
+  if (spec === null || typeof spec !== "object")
+    throw new CalcInputError({ param: String(name), value, expected: "an input this calculator declares", unit: "" });
   const unit = siSymbol(spec);
   if (typeof value !== "number" || !Number.isFinite(value)) {
     throw new CalcInputError({ param: name, value, expected: "a finite number", unit });
@@ -54,6 +57,7 @@ export function requireDeclared(spec: InputSpec, name: string, value: unknown): 
  * greater than 0.0001 m and at most 1 m (got 0 m)"
  */
 export function requireWithinSpecs<T extends InputSpecs>(specs: T, input: unknown): { [K in keyof T]: number } {
+  requireInputObject(specs, "specs");
   const fields = requireInputObject(input);
   const out: Record<string, number> = {};
   for (const [name, spec] of Object.entries(specs)) out[name] = requireDeclared(spec, name, fields[name]);
@@ -68,6 +72,9 @@ export function requireWhole(param: string, value: number, min: number, max: num
 /** An input as the finiteness guard sees it: its value and its SI unit. */
 export type NamedValue = readonly [value: number, unit: string];
 
+/** The inputs a result came from, by name, or a function that lists them (called only when the result is not finite). */
+export type NamedValues = Record<string, NamedValue> | (() => Record<string, NamedValue>);
+
 /**
  * Returns `result` when it is finite. Otherwise throws a `CalcInputError` naming the input of most
  * extreme magnitude among `inputs` (the one furthest from 1 in orders of magnitude): with every
@@ -79,20 +86,13 @@ export type NamedValue = readonly [value: number, unit: string];
  * @param inputs the inputs the result was computed from, by name
  * @returns `result`, finite
  */
-export function requireFiniteResult(result: number, what: string, inputs: Record<string, NamedValue>): number {
+export function requireFiniteResult(result: number, what: string, inputs: NamedValues): number {
   if (Number.isFinite(result)) return result;
-  let worst: [string, number, string] | null = null;
-  let worstScore = -1;
-  for (const [name, [value, unit]] of Object.entries(inputs)) {
-    const score = value === 0 ? 0 : Math.abs(Math.log10(Math.abs(value)));
-    if (score > worstScore) {
-      worstScore = score;
-      worst = [name, value, unit];
-    }
-  }
-  const [param, value, unit] = worst ?? ["input", result, ""];
-  const expected = Math.abs(value) >= 1 ? `small enough for the ${what} to stay finite` : `large enough for the ${what} to stay finite`;
-  throw new CalcInputError({ param, value, expected, unit });
+  // Orders of magnitude from 1 (0 for an input of 0).
+  const score = ([, [value]]: [string, NamedValue]) => Math.abs(Math.log10(Math.abs(value) || 1));
+  const entries: [string, NamedValue][] = Object.entries(typeof inputs === "function" ? inputs() : inputs);
+  const [param, [value, unit]] = entries.length ? entries.reduce((a, b) => (score(b) > score(a) ? b : a)) : ["input", [result, ""] as NamedValue];
+  throw new CalcInputError({ param, value, expected: `${Math.abs(value) >= 1 ? "small" : "large"} enough for the ${what} to stay finite`, unit });
 }
 
 /**
@@ -102,4 +102,39 @@ export function requireFiniteResult(result: number, what: string, inputs: Record
 export function ratioOrNull(a: number, b: number): number | null {
   const q = a / b;
   return Number.isFinite(q) ? q : null;
+}
+
+/** True when every number in `value` (its fields and list items, deeply) is finite. */
+function everyNumberFinite(value: unknown): boolean {
+  if (typeof value === "number") return Number.isFinite(value);
+  if (value === null || typeof value !== "object") return true;
+  // A loop without copies: a simulation's result holds a few thousand numbers.
+  for (const key in value) if (!everyNumberFinite((value as Record<string, unknown>)[key])) return false;
+  return true;
+}
+
+/**
+ * Returns `result` when every number in it (fields and list items, deeply) is finite; otherwise
+ * throws as `requireFiniteResult` does, naming the most extreme of `inputs`.
+ *
+ * @param result a computed result object
+ * @param what the quantity, for the message ("stress profile")
+ * @param inputs the inputs the result was computed from, by name
+ * @returns `result`, every number in it finite
+ */
+export function requireFiniteFields<T>(result: T, what: string, inputs: NamedValues): T {
+  if (!everyNumberFinite(result)) requireFiniteResult(Number.NaN, what, inputs);
+  return result;
+}
+
+/** Throws a `CalcInputError` naming `param` unless `list` is an array; returns it otherwise. */
+export function requireList<T>(list: readonly T[], param: string): readonly T[] {
+  if (!Array.isArray(list)) throw new CalcInputError({ param, value: list, expected: "a list", unit: "" });
+  return list;
+}
+
+/** The declared inputs of `input` by name, each with its SI unit: what the finiteness guards name. */
+export function declaredInputs(specs: InputSpecs, input: unknown): Record<string, NamedValue> {
+  const fields = requireInputObject(input);
+  return Object.fromEntries(Object.entries(specs).map(([name, spec]) => [name, [Number(fields[name]), siSymbol(spec)]]));
 }

@@ -155,32 +155,45 @@ export function unitsOfKind(kind: QuantityKind): UnitId[] {
   return (Object.keys(UNITS) as UnitId[]).filter((id) => UNITS[id].kind === kind);
 }
 
+/** `table[id]` when the table holds `id` (a unit, a kind); a CalcInputError naming `param` otherwise. */
+function known<T>(table: Readonly<Record<string, T>>, id: unknown, param: string): T {
+  if (typeof id === "string" && Object.hasOwn(table, id)) return table[id]!;
+  throw new CalcInputError({ param, value: String(id), expected: `one of ${Object.keys(table).slice(0, 3).join(", ")}, …`, unit: "" });
+}
+
+/** `value`·`factor` (or `value`/`factor`), or a CalcInputError naming "value" when that is not finite. */
+function scaled(value: number, factor: number, divide: boolean): number {
+  const result = divide ? value / factor : value * factor;
+  if (typeof value === "number" && Number.isFinite(result)) return result;
+  throw new CalcInputError({ param: "value", value, expected: "a number that stays finite in the new unit", unit: "" });
+}
+
 /** Converts `value` in unit `from` to SI. */
 export function toSI(value: number, from: UnitId): number {
-  return value * UNITS[from].factor;
+  return scaled(value, known(UNITS, from, "from").factor, false);
 }
 
 /** Converts an SI `value` into unit `to`. */
 export function fromSI(value: number, to: UnitId): number {
-  return value / UNITS[to].factor;
+  return scaled(value, known(UNITS, to, "to").factor, true);
 }
 
 /** Converts between two units of the same kind. */
 export function convert(value: number, from: UnitId, to: UnitId): number {
-  if (UNITS[from].kind !== UNITS[to].kind) {
-    throw new TypeError(`cannot convert ${UNITS[from].kind} (${from}) to ${UNITS[to].kind} (${to})`);
-  }
+  const kind = known<UnitDef>(UNITS, from, "from").kind;
+  if (known<UnitDef>(UNITS, to, "to").kind !== kind)
+    throw new CalcInputError({ param: "to", value: to, expected: `a unit of ${kindName(kind)}, as ${from} is`, unit: "" });
   return fromSI(toSI(value, from), to);
 }
 
 /** rpm → rad/s (exact: 1 rpm = 2π/60 rad/s). */
 export function rpmToRadPerSecond(rpm: number): number {
-  return rpm * RPM;
+  return scaled(rpm, RPM, false);
 }
 
 /** rad/s → rpm (exact: 1 rad/s = 60/2π rpm). */
 export function radPerSecondToRpm(angularSpeed: number): number {
-  return angularSpeed / RPM;
+  return scaled(angularSpeed, RPM, true);
 }
 
 // ---------------------------------------------------------------------------------------------
@@ -229,7 +242,7 @@ const DISPLAY: Record<QuantityKind, readonly [DisplaySteps, DisplaySteps?]> = {
 
 /** The unit a value of `kind` is shown in for `system`, chosen by magnitude. */
 export function displayUnit(kind: QuantityKind, system: UnitSystem, valueSI = 0): UnitId {
-  const [metric, us] = DISPLAY[kind];
+  const [metric, us] = known(DISPLAY, kind, "kind");
   let chosen = metric[0] as UnitId;
   for (const step of (system === "us" && us) || metric) {
     if (typeof step === "string") chosen = step;
@@ -241,11 +254,14 @@ export function displayUnit(kind: QuantityKind, system: UnitSystem, valueSI = 0)
 const SUPERSCRIPT: Record<string, string> = { "-": "⁻", "0": "⁰", "1": "¹", "2": "²", "3": "³", "4": "⁴", "5": "⁵", "6": "⁶", "7": "⁷", "8": "⁸", "9": "⁹" };
 
 /**
- * Formats a plain number to `significant` figures: no exponent between 1e-3 and 1e6, trailing
- * zeros kept as the precision implies ("32.0"), and "× 10ⁿ" outside that range. Never prints NaN:
- * a non-finite value is the caller's bug and yields "—".
+ * Formats a plain number to `significant` figures (a whole number from 1 to 100): no exponent
+ * between 1e-3 and 1e6, trailing zeros kept as the precision implies ("32.0"), and "× 10ⁿ" outside
+ * that range. Never prints NaN: a non-finite value is the caller's bug and yields "—".
  */
 export function formatNumber(value: number, significant = 3): string {
+  if (!(Number.isInteger(significant) && significant >= 1 && significant <= 100)) {
+    throw new CalcInputError({ param: "significant", value: significant, expected: "a whole number from 1 to 100", unit: "" });
+  }
   if (!Number.isFinite(value)) return "—";
   if (value === 0) return "0";
   // Choose the form after rounding: 999 500 to three figures is 1.00 × 10⁶, not "1000000".
@@ -277,8 +293,9 @@ export function formatQuantity(
   kind: QuantityKind,
   options: { system?: UnitSystem; unit?: UnitId; significant?: number } = {},
 ): FormattedQuantity {
-  const unit = options.unit ?? displayUnit(kind, options.system ?? "metric", valueSI);
-  const number = formatNumber(fromSI(valueSI, unit), options.significant ?? 3);
+  const { unit = displayUnit(kind, options?.system ?? "metric", valueSI), significant = 3 } = options ?? {};
+  // A value beyond the largest double in a small unit shows as "—", as formatNumber shows any non-finite value.
+  const number = formatNumber(valueSI / known<UnitDef>(UNITS, unit, "unit").factor, significant);
   const symbol = UNITS[unit].symbol;
   const joiner = symbol === "" || symbol === "°" ? "" : " ";
   return { text: `${number}${joiner}${symbol}`, number, symbol, unit };
@@ -342,7 +359,7 @@ function siUnitText(kind: QuantityKind): string {
  */
 export function exactQuantity(valueSI: number, unit: UnitId): { number: string; unit: UnitId } {
   if (!Number.isFinite(valueSI)) throw new CalcInputError({ param: "value", value: valueSI, expected: "a finite number", unit: "" });
-  const n = exactMultiple(valueSI, UNITS[unit].factor);
+  const n = exactMultiple(valueSI, known<UnitDef>(UNITS, unit, "unit").factor);
   if (n === null) return { number: plainNumber(valueSI), unit: siUnit(UNITS[unit].kind) };
   return { number: plainNumber(Object.is(n, -0) ? 0 : n), unit };
 }
@@ -371,13 +388,12 @@ export function exactNumberText(valueSI: number, factor: number): string {
 
 const EXACT_NUMBER = /^([+-]?(?:\d+(?:\.\d*)?|\.\d+)(?:[eE][+-]?\d+)?)(si)?$/;
 
-/** Reads a number written by `exactNumberText` into SI; null when the text is not such a number. */
+/** Reads a number written by `exactNumberText` into SI; null when the text is not such a number (or passes the largest double in SI). */
 export function readExactNumber(text: string, factor: number): number | null {
   const match = EXACT_NUMBER.exec(text);
   if (!match) return null;
-  const n = Number(match[1]);
-  if (!Number.isFinite(n)) return null;
-  return match[2] ? n : n * factor;
+  const n = match[2] ? Number(match[1]) : Number(match[1]) * factor;
+  return Number.isFinite(n) ? n : null;
 }
 
 /** ASCII spellings for units whose symbol and id both have characters a URL would percent-encode. */
@@ -424,7 +440,7 @@ function normaliseUnitText(text: string): string {
 
 /** Looks up a unit of `kind` by symbol, id or alias: exact spelling first, then ignoring case. */
 export function findUnit(text: string, kind: QuantityKind): UnitId | undefined {
-  const wanted = normaliseUnitText(text);
+  const wanted = normaliseUnitText(String(text));
   const candidates = unitsOfKind(kind);
   const spellings = (id: UnitId): string[] => {
     const def: UnitDef = UNITS[id];
@@ -456,7 +472,8 @@ export function kindName(kind: QuantityKind): string {
  * an acceleration field: the field's kind decides.
  */
 export function parseQuantity(text: string, kind: QuantityKind, defaultUnit: UnitId): ParseResult {
-  const trimmed = text.trim();
+  known(UNITS, defaultUnit, "defaultUnit");
+  const trimmed = String(text).trim();
   if (trimmed === "") return { ok: false, reason: "empty", message: "is required" };
   const match = NUMBER_AND_UNIT.exec(trimmed);
   if (!match) {
@@ -493,7 +510,9 @@ export function parseQuantity(text: string, kind: QuantityKind, defaultUnit: Uni
       };
     }
   }
-  return { ok: true, valueSI: toSI(number, unit), unit, number };
+  const valueSI = number * UNITS[unit].factor;
+  if (!Number.isFinite(valueSI)) return { ok: false, reason: "not-a-number", message: "is too large a number" };
+  return { ok: true, valueSI, unit, number };
 }
 
 function example(kind: QuantityKind, unit: UnitId): string {

@@ -9,6 +9,7 @@ import { CalcInputError } from "../core/errors.ts";
 import type { UnitSystem } from "../core/units.ts";
 import type { Design } from "./design.ts";
 import { CALCULATORS } from "./registry.ts";
+import { requireInputObject, requireList } from "../core/spec-check.ts";
 
 export type { CheckFigure, CheckStatus } from "../core/check.ts";
 
@@ -23,22 +24,25 @@ export interface CheckResult extends CheckCard {
 
 /** The cards of one set of values; a set that cannot be computed gives one failing card with the reason. */
 export function cardsFor(calc: AnyCalculator, values: AnyValues, system: UnitSystem): CheckCard[] {
+  requireInputObject(calc, "calc");
   try {
     return calc.cards(values, calc.run(values), system);
   } catch (error) {
-    const message = error instanceof Error ? error.message : String(error);
     if (!(error instanceof CalcInputError) && !(error instanceof Error)) throw error;
-    return [
-      {
-        title: calc.title,
-        status: "fails",
-        rule: "The inputs must be valid before anything can be checked",
-        margin: `Could not compute: ${message}`,
-        figure: null,
-        details: [],
-      },
-    ];
+    return [notComputed(calc, error.message)];
   }
+}
+
+/** The one failing card of a set of values that cannot be computed. */
+function notComputed(calc: AnyCalculator, message: string): CheckCard {
+  return {
+    title: calc.title,
+    status: "fails",
+    rule: "The inputs must be valid before anything can be checked",
+    margin: `Could not compute: ${message}`,
+    figure: null,
+    details: [],
+  };
 }
 
 /**
@@ -52,24 +56,38 @@ export function cardsFor(calc: AnyCalculator, values: AnyValues, system: UnitSys
  * Sources: those of each calculator's entry function (openstax-college-physics, iso-21940-11,
  * iso-898-1, timoshenko-goodier, …).
  */
-export function runChecks(design: Design, system: UnitSystem = design.units): CheckResult[] {
+export function runChecks(design: Design, system: UnitSystem = design?.units): CheckResult[] {
+  requireInputObject(design, "design");
   const results: CheckResult[] = [];
   for (const calc of CALCULATORS) {
     const stored = design[calc.id];
     if (stored === undefined) continue;
     const list = calc.section.kind === "list";
-    const entries = (list ? stored : [stored]) as AnyValues[];
+    // A design that did not come through readDesign may hold anything: a section of the wrong
+    // shape gives the failing card, as values that cannot be computed do.
+    const entries = (list ? (Array.isArray(stored) ? stored : [stored]) : [stored]) as unknown[];
     for (const [i, values] of entries.entries()) {
-      if (calc.present && !calc.present(values)) continue;
       const index = list ? i : null;
-      for (const card of cardsFor(calc, values, system)) {
+      let cards: CheckCard[];
+      if (list && !Array.isArray(stored)) cards = [notComputed(calc, `${calc.id} must be a list`)];
+      else if (values === null || typeof values !== "object") cards = [notComputed(calc, `${calc.id} must be an object of named values`)];
+      else {
+        try {
+          if (calc.present && !calc.present(values as AnyValues)) continue;
+        } catch (error) {
+          if (!(error instanceof Error)) throw error;
+        }
+        cards = cardsFor(calc, values as AnyValues, system);
+      }
+      const name = (values as { name?: unknown } | null)?.name;
+      for (const card of cards) {
         const base = index === null ? calc.id : `${calc.id}[${index}]`;
         results.push({
           ...card,
           id: card.key ? `${base}.${card.key}` : base,
           section: calc.id,
           index,
-          title: list ? `${card.title}: ${values.name}` : card.title,
+          title: list ? `${card.title}: ${name}` : card.title,
         });
       }
     }
@@ -79,6 +97,7 @@ export function runChecks(design: Design, system: UnitSystem = design.units): Ch
 
 /** The worst status of a set of results (information does not count). */
 export function overallStatus(results: readonly CheckResult[]): CheckStatus | "empty" {
+  if (!Array.isArray(results)) throw new CalcInputError({ param: "results", value: results, expected: "a list of check results", unit: "" });
   return worstStatus(results.map((r) => r.status));
 }
 
@@ -100,6 +119,7 @@ const CONTROL_CHARACTERS = /[\u0000-\u001f\u007f-\u009f\u200e\u200f\u2028\u2029\
  * terminalSafe("a\u001b[2J\r\nb") // → "a\u001b[2J\r\nb"
  */
 export function terminalSafe(text: string): string {
+  if (typeof text !== "string") throw new CalcInputError({ param: "text", value: text, expected: "text", unit: "" });
   return text.replace(CONTROL_CHARACTERS, (c) => {
     const named: Record<string, string> = { "\n": "\\n", "\r": "\\r", "\t": "\\t" };
     return named[c] ?? `\\u${c.charCodeAt(0).toString(16).padStart(4, "0")}`;
@@ -108,9 +128,11 @@ export function terminalSafe(text: string): string {
 
 /** Plain-text build sheet, as the command line prints it; every text from the design goes through `terminalSafe`. */
 export function buildSheetText(design: Design, results: readonly CheckResult[]): string {
+  requireInputObject(design, "design");
+  requireList(results, "results");
   const mark = (status: CheckStatus) => STATUS_WORDS[status].toUpperCase().padEnd(15);
   const safe = terminalSafe;
-  const lines = [`Build sheet: ${safe(design.name)}`, `Design saved ${safe(design.modified.slice(0, 10))}; units ${design.units}`, ""];
+  const lines = [`Build sheet: ${safe(design.name)}`, `Design saved ${safe(String(design.modified).slice(0, 10))}; units ${safe(String(design.units))}`, ""];
   for (const r of results) {
     lines.push(`${mark(r.status)}  ${safe(r.title)}${r.figure ? `: ${safe(r.figure.label)} ${safe(r.figure.text)}` : ""}`);
     lines.push(`                 rule:   ${safe(r.rule)}`);

@@ -9,6 +9,7 @@ import * as v from "valibot";
 import type { AnyCalculator } from "../core/calculator.ts";
 import { CalcInputError } from "../core/errors.ts";
 import { describeReceived } from "../core/received.ts";
+import { requireInputObject } from "../core/spec-check.ts";
 import { CALCULATORS } from "./registry.ts";
 import { DESIGN_FORMAT, DESIGN_VERSION, type Design, HEADER_FIELDS } from "./format.ts";
 import { readSection, type DesignProblem, SectionDropped } from "./sections.ts";
@@ -20,6 +21,7 @@ export type DesignReading = { ok: true; design: Design; problems: DesignProblem[
 
 /** The ids of the sections a design holds, in build-sheet order. */
 export function sectionsIn(design: Design): AnyCalculator[] {
+  requireInputObject(design, "design");
   return CALCULATORS.filter((c) => design[c.id] !== undefined);
 }
 
@@ -45,6 +47,8 @@ export function migrateDesign(
   migrations: Readonly<Record<number, Migration>> = MIGRATIONS,
   target = DESIGN_VERSION,
 ): Record<string, unknown> {
+  requireInputObject(raw, "raw");
+  requireInputObject(migrations, "migrations");
   let current = raw;
   let version = Number(current.version);
   while (version < target) {
@@ -142,6 +146,7 @@ export const DESIGN_TEXT_LIMIT = 2_000_000;
 
 /** Reads a design from JSON text (a file's contents). Never throws. */
 export function readDesignText(text: string): DesignReading {
+  if (typeof text !== "string") return { ok: false, problems: [{ path: "", message: "is not text: a design file is JSON text", action: "not-read" }] };
   if (text.length > DESIGN_TEXT_LIMIT) return { ok: false, problems: [{ path: "", message: "is larger than 2 MB: not a design file", action: "not-read" }] };
   let raw: unknown;
   try {
@@ -160,5 +165,6 @@ export function designToText(design: Design): string {
 
 /** A description of the problems for people, one line each. */
 export function describeProblems(problems: readonly DesignProblem[]): string[] {
+  if (!Array.isArray(problems)) throw new CalcInputError({ param: "problems", value: problems, expected: "a list of problems", unit: "" });
   return problems.map((p) => (p.section ? `${p.section} (${p.path}): ${p.message}.` : `${p.path || "The file"} ${p.message}.`));
 }

@@ -4,6 +4,7 @@
  * nothing of the other calculators (reading a whole design is calc/design/design.ts).
  */
 import type { AnyCalculator, AnyValues, ValuesOf } from "../core/calculator.ts";
+import { requireInputObject } from "../core/spec-check.ts";
 
 /** The format tag every design file carries. */
 export const DESIGN_FORMAT = "whirlbook-design";
@@ -34,11 +35,15 @@ export const HEADER_FIELDS = ["format", "version", "name", "notes", "created", "
 
 /** The values a design holds for a single-section calculator, or undefined. */
 export function sectionValues<K extends AnyCalculator>(design: Design, calc: K): ValuesOf<K> | undefined {
+  requireInputObject(design, "design");
+  requireInputObject(calc, "calc");
   return calc.section.kind === "single" ? (design[calc.id] as ValuesOf<K> | undefined) : undefined;
 }
 
 /** The named entries a design holds for a list calculator (empty when none). */
 export function sectionEntries<K extends AnyCalculator>(design: Design, calc: K): (ValuesOf<K> & { name: string })[] {
+  requireInputObject(design, "design");
+  requireInputObject(calc, "calc");
   return calc.section.kind === "list" ? ((design[calc.id] as (ValuesOf<K> & { name: string })[] | undefined) ?? []) : [];
 }
 

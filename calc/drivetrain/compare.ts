@@ -2,10 +2,10 @@
  * Comparing drive designs: several variants simulated side by side, and a sweep of one input with
  * the best point marked.
  */
-import { CalcInputError, requireInRange } from "../core/errors.ts";
+import { CalcInputError, requireInRange, requireNonNegative } from "../core/errors.ts";
 import type { InputSpec } from "../core/inputs.ts";
 import { type DrivetrainInput, type DrivetrainParameter, drivetrainInputs, validateDrivetrainInput } from "./inputs.ts";
-import { requireWhole, siSymbol } from "../core/spec-check.ts";
+import { requireWhole, siSymbol, requireInputObject } from "../core/spec-check.ts";
 import type { SpinUpOptions, SpinUpResult, SpinUpVerdict } from "./results.ts";
 import { simulateSpinUp } from "./simulate.ts";
 
@@ -102,17 +102,8 @@ function requireParameter(parameter: string): DrivetrainParameter {
  * sweepValues({ parameter: "cellCount", from: 2, to: 8, points: 50 }).length // → 7 (2, 3, 4, 5, 6, 7, 8)
  * Sources: as `simulateSpinUp`.
  */
-export function sweepValues({
-  parameter,
-  from,
-  to,
-  points = 50,
-}: {
-  parameter: DrivetrainParameter | string;
-  from: number;
-  to: number;
-  points?: number;
-}): number[] {
+export function sweepValues(input: { parameter: DrivetrainParameter | string; from: number; to: number; points?: number }): number[] {
+  const { parameter, from, to, points = 50 } = requireInputObject(input);
   const name = requireParameter(parameter);
   const spec: InputSpec = drivetrainInputs[name];
   const unit = siSymbol(spec);
@@ -146,7 +137,8 @@ export function sweepValues({
  * sweepPoint({ base: DEMO_WEAPON, parameter: "gearRatio", value: 3 }) // → { timeToTarget: null, verdict: "falls-short", … } (tops out below 10 000 rpm)
  * Sources: as `simulateSpinUp`.
  */
-export function sweepPoint({ base, parameter, value }: { base: DrivetrainInput; parameter: DrivetrainParameter | string; value: number }): SweepPoint {
+export function sweepPoint(input: { base: DrivetrainInput; parameter: DrivetrainParameter | string; value: number }): SweepPoint {
+  const { base, parameter, value } = requireInputObject(input);
   const name = requireParameter(parameter);
   const r = simulateSpinUp({ ...base, [name]: value }, { series: false });
   return {
@@ -177,6 +169,7 @@ export function markSweepOptimum(points: SweepPoint[]): { optimumIndex: number; 
   if (!Array.isArray(points) || points.length === 0) {
     throw new CalcInputError({ param: "points", value: Array.isArray(points) ? 0 : points, expected: "a list of at least one sweep point", unit: "" });
   }
+  points.forEach(requireSweepPoint);
   const TIE = 1e-7;
   let optimumIndex = -1;
   points.forEach((p, i) => {
@@ -193,6 +186,13 @@ export function markSweepOptimum(points: SweepPoint[]): { optimumIndex: number; 
   }
   points[optimumIndex]!.isOptimum = true;
   return { optimumIndex, optimumBy };
+}
+
+/** Throws a `CalcInputError` naming the field unless point `i` has a finite top speed and a finite or null time to target. */
+function requireSweepPoint(point: Pick<SweepPoint, "timeToTarget" | "topSpeed">, i: number): void {
+  requireInputObject(point, `points[${i}]`);
+  if (point.timeToTarget !== null) requireNonNegative(`points[${i}].timeToTarget`, point.timeToTarget, "s");
+  requireNonNegative(`points[${i}].topSpeed`, point.topSpeed, "rad/s");
 }
 
 /** What a sweep's points add up to, for a one-line summary. */
@@ -226,6 +226,7 @@ export function summariseSweep(points: readonly SweepPoint[]): SweepSummary {
   if (!Array.isArray(points) || points.length === 0) {
     throw new CalcInputError({ param: "points", value: Array.isArray(points) ? 0 : String(points), expected: "a list of at least one sweep point", unit: "" });
   }
+  points.forEach(requireSweepPoint);
   // The extremes of each batch of figures, its least and greatest values (tukey-1977).
   const times = points.flatMap((p) => (p.timeToTarget === null ? [] : [p.timeToTarget]));
   const tops = points.map((p) => p.topSpeed);
@@ -255,19 +256,14 @@ export function summariseSweep(points: readonly SweepPoint[]): SweepSummary {
  * 2.0 (1.01 s); above 2.2 the motor can no longer reach 10 000 rpm, so those points report null.
  * Sources: as `simulateSpinUp`.
  */
-export function sweepDrivetrain({
-  base,
-  parameter,
-  from,
-  to,
-  points = 50,
-}: {
+export function sweepDrivetrain(input: {
   base: DrivetrainInput;
   parameter: DrivetrainParameter | string;
   from: number;
   to: number;
   points?: number;
 }): DrivetrainSweep {
+  const { base, parameter, from, to, points = 50 } = requireInputObject(input);
   validateDrivetrainInput(base);
   const name = requireParameter(parameter);
   const values = sweepValues({ parameter: name, from, to, points });

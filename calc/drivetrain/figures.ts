@@ -3,7 +3,7 @@
  * acceleration a traction or current limit allows. SI: kg·m², rad/s, m, m/s, J, N·m.
  */
 import { requireFinite, requireInRange, requireNonNegative, requirePositive } from "../core/errors.ts";
-import { requireWhole } from "../core/spec-check.ts";
+import { requireWhole, requireInputObject, requireFiniteResult } from "../core/spec-check.ts";
 
 // ---------------------------------------------------------------------------------------------
 // Closed-form figures at a speed.
@@ -23,10 +23,14 @@ import { requireWhole } from "../core/spec-check.ts";
  *
  * Sources: openstax-university-physics-1, softschools-rotational-ke.
  */
-export function rotorKineticEnergy({ inertia, angularSpeed }: { inertia: number; angularSpeed: number }): number {
+export function rotorKineticEnergy(input: { inertia: number; angularSpeed: number }): number {
+  const { inertia, angularSpeed } = requireInputObject(input);
   requireNonNegative("inertia", inertia, "kg·m²");
   requireFinite("angularSpeed", angularSpeed, "rad/s");
-  return 0.5 * inertia * angularSpeed * angularSpeed; // openstax-university-physics-1: K = ½Iω²
+  return requireFiniteResult(0.5 * inertia * angularSpeed * angularSpeed, "kinetic energy", {
+    inertia: [inertia, "kg·m²"],
+    angularSpeed: [angularSpeed, "rad/s"],
+  }); // openstax-university-physics-1: K = ½Iω²
 }
 
 /**
@@ -42,10 +46,11 @@ export function rotorKineticEnergy({ inertia, angularSpeed }: { inertia: number;
  * rotorTipSpeed({ angularSpeed: rpmToRadPerSecond(10000), radius: 0.06 }) // → 62.83 [m/s]
  * Sources: openstax-university-physics-1.
  */
-export function rotorTipSpeed({ angularSpeed, radius }: { angularSpeed: number; radius: number }): number {
+export function rotorTipSpeed(input: { angularSpeed: number; radius: number }): number {
+  const { angularSpeed, radius } = requireInputObject(input);
   requireNonNegative("angularSpeed", angularSpeed, "rad/s");
   requireNonNegative("radius", radius, "m");
-  return angularSpeed * radius; // openstax-university-physics-1: v = rω
+  return requireFiniteResult(angularSpeed * radius, "rotor tip speed", { angularSpeed: [angularSpeed, "rad/s"], radius: [radius, "m"] }); // openstax-university-physics-1: v = rω
 }
 
 /**
@@ -63,11 +68,15 @@ export function rotorTipSpeed({ angularSpeed, radius }: { angularSpeed: number; 
  * biteDepth({ closingSpeed: 3, angularSpeed: rpmToRadPerSecond(10000), impactors: 2 }) // → 0.0090 [m]
  * Sources: weapon-bite.
  */
-export function biteDepth({ closingSpeed, angularSpeed, impactors }: { closingSpeed: number; angularSpeed: number; impactors: number }): number {
+export function biteDepth(input: { closingSpeed: number; angularSpeed: number; impactors: number }): number {
+  const { closingSpeed, angularSpeed, impactors } = requireInputObject(input);
   requireNonNegative("closingSpeed", closingSpeed, "m/s");
   requirePositive("angularSpeed", angularSpeed, "rad/s");
   requireWhole("impactors", impactors, 1, 1000);
-  return (closingSpeed * (2 * Math.PI)) / (angularSpeed * impactors); // weapon-bite: d = v·T/n
+  return requireFiniteResult((closingSpeed * (2 * Math.PI)) / (angularSpeed * impactors), "bite depth", {
+    closingSpeed: [closingSpeed, "m/s"],
+    angularSpeed: [angularSpeed, "rad/s"],
+  }); // weapon-bite: d = v·T/n
 }
 
 /**
@@ -87,25 +96,26 @@ export function biteDepth({ closingSpeed, angularSpeed, impactors }: { closingSp
  * tractionLimitedAcceleration({ frictionCoefficient: 0.8, normalForce: 13.24, contactRadius: 0.07, inertia: 0.005 }) // → 148.3 [rad/s²]
  * Sources: serway-beichner-5e.
  */
-export function tractionLimitedAcceleration({
-  frictionCoefficient,
-  normalForce,
-  contactRadius,
-  inertia,
-  frictionTorque = 0,
-}: {
+export function tractionLimitedAcceleration(input: {
   frictionCoefficient: number;
   normalForce: number;
   contactRadius: number;
   inertia: number;
   frictionTorque?: number;
 }): number {
+  const { frictionCoefficient, normalForce, contactRadius, inertia, frictionTorque = 0 } = requireInputObject(input);
   requirePositive("frictionCoefficient", frictionCoefficient, "");
   requirePositive("normalForce", normalForce, "N");
   requirePositive("contactRadius", contactRadius, "m");
   requirePositive("inertia", inertia, "kg·m²");
   requireNonNegative("frictionTorque", frictionTorque, "N·m");
-  return Math.max(0, frictionCoefficient * normalForce * contactRadius - frictionTorque) / inertia; // serway-beichner-5e: f_k = μ_k n
+  return requireFiniteResult(Math.max(0, frictionCoefficient * normalForce * contactRadius - frictionTorque) / inertia, "acceleration", {
+    frictionCoefficient: [frictionCoefficient, ""],
+    normalForce: [normalForce, "N"],
+    contactRadius: [contactRadius, "m"],
+    inertia: [inertia, "kg·m²"],
+    frictionTorque: [frictionTorque, "N·m"],
+  }); // serway-beichner-5e: f_k = μ_k n
 }
 
 /**
@@ -126,17 +136,7 @@ export function tractionLimitedAcceleration({
  *
  * Sources: motor-constants-wikipedia, gear-efficiency-model.
  */
-export function currentLimitedAcceleration({
-  currentLimit,
-  torqueConstant,
-  inertia,
-  motorCount = 1,
-  ratio = 1,
-  efficiency = 1,
-  noLoadCurrent = 0,
-  frictionTorque = 0,
-  motorRotorInertia = 0,
-}: {
+export function currentLimitedAcceleration(input: {
   currentLimit: number;
   torqueConstant: number;
   inertia: number;
@@ -147,6 +147,17 @@ export function currentLimitedAcceleration({
   frictionTorque?: number;
   motorRotorInertia?: number;
 }): number {
+  const {
+    currentLimit,
+    torqueConstant,
+    inertia,
+    motorCount = 1,
+    ratio = 1,
+    efficiency = 1,
+    noLoadCurrent = 0,
+    frictionTorque = 0,
+    motorRotorInertia = 0,
+  } = requireInputObject(input);
   requirePositive("currentLimit", currentLimit, "A");
   requirePositive("torqueConstant", torqueConstant, "N·m/A");
   requirePositive("inertia", inertia, "kg·m²");
@@ -157,5 +168,15 @@ export function currentLimitedAcceleration({
   requireNonNegative("frictionTorque", frictionTorque, "N·m");
   requireNonNegative("motorRotorInertia", motorRotorInertia, "kg·m²");
   const drive = efficiency * ratio * motorCount * torqueConstant * (currentLimit - noLoadCurrent) - frictionTorque; // T = η G N K_t I
-  return Math.max(0, drive) / (inertia + efficiency * ratio * ratio * motorCount * motorRotorInertia);
+  return requireFiniteResult(Math.max(0, drive) / (inertia + efficiency * ratio * ratio * motorCount * motorRotorInertia), "current limited acceleration", {
+    currentLimit: [currentLimit, "A"],
+    torqueConstant: [torqueConstant, "N·m/A"],
+    inertia: [inertia, "kg·m²"],
+    motorCount: [motorCount, ""],
+    ratio: [ratio, ""],
+    efficiency: [efficiency, ""],
+    noLoadCurrent: [noLoadCurrent, "A"],
+    frictionTorque: [frictionTorque, "N·m"],
+    motorRotorInertia: [motorRotorInertia, "kg·m²"],
+  });
 }

@@ -8,6 +8,7 @@
  */
 import { CalcInputError, requireInRange, requireNonNegative, requirePositive } from "../core/errors.ts";
 import type { SourceKey } from "../sources/index.ts";
+import { type NamedValue, requireFiniteFields, requireFiniteResult, requireInputObject } from "../core/spec-check.ts";
 
 /**
  * Torque constant from the velocity constant (motor-constants-wikipedia); in SI the torque and
@@ -24,9 +25,10 @@ import type { SourceKey } from "../sources/index.ts";
  *
  * Sources: motor-constants-wikipedia, ctms-dc-motor-speed.
  */
-export function torqueConstantFromKv({ kv }: { kv: number }): number {
+export function torqueConstantFromKv(input: { kv: number }): number {
+  const { kv } = requireInputObject(input);
   requirePositive("kv", kv, "rad/(s·V)");
-  return 1 / kv; // motor-constants-wikipedia: K_T = 1/K_v(SI)
+  return requireFiniteResult(1 / kv, "torque constant", { kv: [kv, "rad/(s·V)"] }); // motor-constants-wikipedia: K_T = 1/K_v(SI)
 }
 
 export interface MotorLine {
@@ -65,17 +67,8 @@ export interface MotorLine {
  *
  * Sources: hughes-drury-motors, motor-constants-wikipedia.
  */
-export function motorLine({
-  kv,
-  resistance,
-  voltage,
-  noLoadCurrent = 0,
-}: {
-  kv: number;
-  resistance: number;
-  voltage: number;
-  noLoadCurrent?: number;
-}): MotorLine {
+export function motorLine(input: { kv: number; resistance: number; voltage: number; noLoadCurrent?: number }): MotorLine {
+  const { kv, resistance, voltage, noLoadCurrent = 0 } = requireInputObject(input);
   const kt = torqueConstantFromKv({ kv });
   requirePositive("resistance", resistance, "Ω");
   requirePositive("voltage", voltage, "V");
@@ -91,7 +84,7 @@ export function motorLine({
   }
   const drivingVoltage = voltage - noLoadCurrent * resistance;
   const noLoadSpeed = drivingVoltage / kt; // hughes-drury-motors: ω_nl = V/K_e (less the I_0·R drop)
-  return {
+  const line = {
     torqueConstant: kt,
     noLoadSpeed,
     stallCurrent,
@@ -99,6 +92,12 @@ export function motorLine({
     maxPower: (drivingVoltage * drivingVoltage) / (4 * resistance), // hughes-drury-motors: P_max = V²/(4R)
     speedAtMaxPower: noLoadSpeed / 2,
   };
+  return requireFiniteFields(line, "motor line", motorInputs(kv, resistance, voltage));
+}
+
+/** A motor's inputs by name, for the finiteness guard. */
+function motorInputs(kv: number, resistance: number, voltage: number): Record<string, NamedValue> {
+  return { kv: [kv, "rad/(s·V)"], resistance: [resistance, "Ω"], voltage: [voltage, "V"] };
 }
 
 export interface MotorLinePoint {
@@ -126,9 +125,11 @@ export interface MotorLinePoint {
  * Sources: hughes-drury-motors.
  */
 export function torqueSpeedLine(
-  { kv, resistance, voltage, noLoadCurrent = 0 }: { kv: number; resistance: number; voltage: number; noLoadCurrent?: number },
-  { points = 41 }: { points?: number } = {},
+  input: { kv: number; resistance: number; voltage: number; noLoadCurrent?: number },
+  options: { points?: number } = {},
 ): MotorLinePoint[] {
+  const { kv, resistance, voltage, noLoadCurrent = 0 } = requireInputObject(input);
+  const { points = 41 } = requireInputObject(options);
   const line = motorLine({ kv, resistance, voltage, noLoadCurrent });
   requireInRange("points", points, "", { min: 2, max: 1000 });
   if (!Number.isInteger(points)) throw new CalcInputError({ param: "points", value: points, expected: "a whole number", unit: "" });
@@ -139,7 +140,7 @@ export function torqueSpeedLine(
     const torque = i === points - 1 ? 0 : line.torqueConstant * (current - noLoadCurrent);
     out.push({ speed, torque, current, power: torque * speed });
   }
-  return out;
+  return requireFiniteFields(out, "torque-speed line", motorInputs(kv, resistance, voltage));
 }
 
 /**
@@ -162,14 +163,7 @@ export function torqueSpeedLine(
  *
  * Sources: ctms-dc-motor-speed, first-order-step-response.
  */
-export function spinUpTimeConstant({
-  inertia,
-  resistance,
-  torqueConstant,
-  motorCount = 1,
-  ratio = 1,
-  efficiency = 1,
-}: {
+export function spinUpTimeConstant(input: {
   inertia: number;
   resistance: number;
   torqueConstant: number;
@@ -177,6 +171,7 @@ export function spinUpTimeConstant({
   ratio?: number;
   efficiency?: number;
 }): number {
+  const { inertia, resistance, torqueConstant, motorCount = 1, ratio = 1, efficiency = 1 } = requireInputObject(input);
   requirePositive("inertia", inertia, "kg·m²");
   requirePositive("resistance", resistance, "Ω");
   requirePositive("torqueConstant", torqueConstant, "N·m/A");
@@ -184,7 +179,14 @@ export function spinUpTimeConstant({
   requirePositive("ratio", ratio, "");
   requireInRange("efficiency", efficiency, "", { min: 0, max: 1, minOpen: true });
   // ctms-dc-motor-speed: J ω̇ = K_t (V − K_e ω)/R → τ = J R/(K_t K_e), here with N motors through G at η
-  return (inertia * resistance) / (motorCount * ratio * ratio * efficiency * torqueConstant * torqueConstant);
+  return requireFiniteResult((inertia * resistance) / (motorCount * ratio * ratio * efficiency * torqueConstant * torqueConstant), "time constant", {
+    inertia: [inertia, "kg·m²"],
+    resistance: [resistance, "Ω"],
+    torqueConstant: [torqueConstant, "N·m/A"],
+    motorCount: [motorCount, ""],
+    ratio: [ratio, ""],
+    efficiency: [efficiency, ""],
+  });
 }
 
 /**
@@ -203,22 +205,16 @@ export function spinUpTimeConstant({
  * voltageLimitedSpeed({ finalSpeed: 251.327, timeConstant: 0.109662, time: 0.1 }) // → 150.3531096 [rad/s]
  * Sources: first-order-step-response.
  */
-export function voltageLimitedSpeed({
-  finalSpeed,
-  timeConstant,
-  time,
-  initialSpeed = 0,
-}: {
-  finalSpeed: number;
-  timeConstant: number;
-  time: number;
-  initialSpeed?: number;
-}): number {
+export function voltageLimitedSpeed(input: { finalSpeed: number; timeConstant: number; time: number; initialSpeed?: number }): number {
+  const { finalSpeed, timeConstant, time, initialSpeed = 0 } = requireInputObject(input);
   requirePositive("timeConstant", timeConstant, "s");
   requireNonNegative("time", time, "s");
   if (!Number.isFinite(finalSpeed)) throw new CalcInputError({ param: "finalSpeed", value: finalSpeed, expected: "a finite number", unit: "rad/s" });
   if (!Number.isFinite(initialSpeed)) throw new CalcInputError({ param: "initialSpeed", value: initialSpeed, expected: "a finite number", unit: "rad/s" });
-  return finalSpeed - (finalSpeed - initialSpeed) * Math.exp(-time / timeConstant); // first-order-step-response
+  return requireFiniteResult(finalSpeed - (finalSpeed - initialSpeed) * Math.exp(-time / timeConstant), "speed", {
+    timeConstant: [timeConstant, "s"],
+    time: [time, "s"],
+  }); // first-order-step-response
 }
 
 /**
@@ -235,10 +231,14 @@ export function voltageLimitedSpeed({
  * timeToSpeedFraction({ timeConstant: 0.1096622711, fraction: 0.9 }) // → 0.252506711 [s] (t_90)
  * Sources: first-order-step-response.
  */
-export function timeToSpeedFraction({ timeConstant, fraction }: { timeConstant: number; fraction: number }): number {
+export function timeToSpeedFraction(input: { timeConstant: number; fraction: number }): number {
+  const { timeConstant, fraction } = requireInputObject(input);
   requirePositive("timeConstant", timeConstant, "s");
   requireInRange("fraction", fraction, "", { min: 0, max: 1, maxOpen: true });
-  return -timeConstant * Math.log1p(-fraction); // first-order-step-response
+  return requireFiniteResult(-timeConstant * Math.log1p(-fraction), "time to the speed fraction", {
+    timeConstant: [timeConstant, "s"],
+    fraction: [fraction, ""],
+  }); // first-order-step-response
 }
 
 /**
@@ -260,19 +260,14 @@ export function timeToSpeedFraction({ timeConstant, fraction }: { timeConstant: 
  *
  * Sources: ctms-dc-motor-speed.
  */
-export function dcMotorSteadySpeed({
-  torqueConstant,
-  resistance,
-  voltage,
-  viscousFriction = 0,
-  frictionTorque = 0,
-}: {
+export function dcMotorSteadySpeed(input: {
   torqueConstant: number;
   resistance: number;
   voltage: number;
   viscousFriction?: number;
   frictionTorque?: number;
 }): number {
+  const { torqueConstant, resistance, voltage, viscousFriction = 0, frictionTorque = 0 } = requireInputObject(input);
   requirePositive("torqueConstant", torqueConstant, "N·m/A");
   requirePositive("resistance", resistance, "Ω");
   requireNonNegative("voltage", voltage, "V");
@@ -280,7 +275,13 @@ export function dcMotorSteadySpeed({
   requireNonNegative("frictionTorque", frictionTorque, "N·m");
   const drive = torqueConstant * voltage - resistance * frictionTorque;
   if (drive <= 0) return 0;
-  return drive / (viscousFriction * resistance + torqueConstant * torqueConstant); // ctms-dc-motor-speed
+  return requireFiniteResult(drive / (viscousFriction * resistance + torqueConstant * torqueConstant), "steady speed", {
+    torqueConstant: [torqueConstant, "N·m/A"],
+    resistance: [resistance, "Ω"],
+    voltage: [voltage, "V"],
+    viscousFriction: [viscousFriction, "N·m·s/rad"],
+    frictionTorque: [frictionTorque, "N·m"],
+  }); // ctms-dc-motor-speed
 }
 
 /** Source keys this module relies on (checked by the meta test). */

@@ -10,19 +10,22 @@
  * error estimate picks each step, the dense output locates every switch and every speed crossing to
  * about 1e-13 of a step, and the energy flows are integrated as extra states under the same error
  * control, so the energy balance closes to the integration tolerance. The run stops at steady state
- * (the speed could rise by less than 1e-5 of itself), at the time limit, or after 50 000 steps,
- * whichever comes first; it never runs unbounded. A spinner whose wheels and motor rotors are
- * extremely light next to the motors' torque (a wheel-side time constant of microseconds) is stiff
- * for an explicit method: such a run stops at the step cap and says so in `warnings` rather than
- * take seconds. Realistic pairings of motor and wheel give wheel-side time constants of milliseconds
+ * (the speed could rise by less than 1e-5 of itself), at the time limit, or at its step budget
+ * (50 000 steps, a step shrunk below 1e-14 of the time, or 10 000 grip switches), whichever comes
+ * first; it never runs unbounded. A spinner whose wheels and motor rotors are extremely light next
+ * to the motors' torque (a wheel-side time constant of microseconds) is stiff for an explicit
+ * method: such a run ends with `endReason` "step-limit" and a warning that starts "Stopped at … s:
+ * too stiff to resolve in 50000 steps" (or says which other bound stopped it) rather than take
+ * seconds. Inputs whose time constants leave the doubles are refused by name before any step.
+ * Realistic pairings of motor and wheel give wheel-side time constants of milliseconds
  * and finish in well under 1 ms.
  */
 import { requireInRange } from "../core/errors.ts";
 import { STANDARD_GRAVITY } from "../core/constants.ts";
 import { Dopri5 } from "./dopri5.ts";
 import { biteDepth, rotorKineticEnergy, rotorTipSpeed, tractionLimitedAcceleration } from "./figures.ts";
-import { type DrivetrainInput, validateDrivetrainInput } from "./inputs.ts";
-import { requireWhole } from "../core/spec-check.ts";
+import { type DrivetrainInput, drivetrainInputs, validateDrivetrainInput } from "./inputs.ts";
+import { declaredInputs, type NamedValue, requireFiniteFields, requireFiniteResult, requireInputObject, requireWhole } from "../core/spec-check.ts";
 import {
   LOCKED,
   MAX_SWITCHES,
@@ -385,6 +388,7 @@ function speedFigures(input: DrivetrainInput, angularSpeed: number): SpeedFigure
 }
 
 function readOptions(options: SpinUpOptions): Required<SpinUpOptions> {
+  requireInputObject(options, "options");
   const maxPoints = options.maxPoints ?? 300;
   requireWhole("maxPoints", maxPoints, 2, 5000);
   const relativeTolerance = options.relativeTolerance ?? 1e-8;
@@ -432,6 +436,14 @@ export function simulateSpinUp(input: DrivetrainInput, options: SpinUpOptions = 
   const opts = readOptions(options);
   const spinner = driveType === "spinner";
   const m = buildModel(input, spinner);
+  const named = () => declaredInputs(drivetrainInputs, input) as { [K in keyof typeof drivetrainInputs]: NamedValue };
+  // Time constants beyond the doubles (a gear efficiency near the smallest double) are out of the
+  // model's reach: refused by name before any step is taken.
+  const probe = new SpinUpSystem(m);
+  if (!(probe.tauLocked > 0 && Number.isFinite(probe.tauLocked) && probe.tauWheel > 0 && Number.isFinite(probe.tauWheel))) {
+    const { gearEfficiency, gearRatio, motorKv, inertia, motorResistance, motorRotorInertia } = named();
+    requireFiniteResult(Number.NaN, "drive's time constant", { gearEfficiency, gearRatio, motorKv, inertia, motorResistance, motorRotorInertia });
+  }
   const run = integrate(m, opts);
   const y = run.y;
 
@@ -485,13 +497,22 @@ export function simulateSpinUp(input: DrivetrainInput, options: SpinUpOptions = 
   } else if (run.endReason === "max-time") {
     warnings.push(`The speed was still changing at the time limit (${m.maxTime} s); the top speed is the speed reached by then.`);
   } else if (run.endReason === "step-limit") {
+    // Which bound of the step budget stopped it: the number of steps, a step size shrunk to nothing, or the grip chattering.
+    const steps = run.accepted + run.rejected;
+    const cause =
+      steps >= MAX_TRIALS
+        ? `too stiff to resolve in ${MAX_TRIALS} steps`
+        : run.switches > MAX_SWITCHES
+          ? `the grip switched between holding and slipping more than ${MAX_SWITCHES} times`
+          : `too stiff to resolve: after ${steps} steps the step size fell below 10⁻¹⁴ of the time`;
     warnings.push(
-      spinner && run.tauWheel < 1e-4
-        ? `The run stopped after ${MAX_TRIALS} steps at ${run.endTime.toPrecision(3)} s: the wheels and motor rotors settle in ${run.tauWheel.toPrecision(2)} s, too fast to simulate beside the rest. Check the wheel and motor rotor inertias.`
-        : `The run stopped after ${MAX_TRIALS} steps at ${run.endTime.toPrecision(3)} s, before the speed settled.`,
+      `Stopped at ${run.endTime.toPrecision(3)} s: ${cause}` +
+        (spinner && run.tauWheel < 1e-4
+          ? `; the wheels and motor rotors settle in ${run.tauWheel.toPrecision(2)} s, too fast to simulate beside the rest. Check the wheel and motor rotor inertias.`
+          : ", before the speed settled."),
     );
   }
-  return {
+  const result: SpinUpResult = {
     driveType,
     verdict,
     endReason: run.endReason,
@@ -523,4 +544,5 @@ export function simulateSpinUp(input: DrivetrainInput, options: SpinUpOptions = 
     solver: { acceptedSteps: run.accepted, rejectedSteps: run.rejected, evaluations: run.evaluations, modeSwitches: run.switches },
     warnings,
   };
+  return requireFiniteFields(result, "spin-up figures", named);
 }

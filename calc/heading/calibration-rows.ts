@@ -5,6 +5,7 @@
 import { CalcInputError, requireFinite, requireNonNegative } from "../core/errors.ts";
 import { exactNumberText, readExactNumber, UNITS } from "../core/units.ts";
 import type { CalibrationRow } from "./calibration.ts";
+import { requireInputObject, requireList } from "../core/spec-check.ts";
 
 // Compact text form of the rows, for a URL: "v1:1200:31.5,1800:70.9" (rpm:g).
 
@@ -28,10 +29,11 @@ export const CALIBRATION_ROWS_MAX = 500;
  * Sources: nist-sp811 (rpm and g_n definitions).
  */
 export function encodeCalibrationRows(rows: readonly CalibrationRow[]): string {
-  if (rows.length > CALIBRATION_ROWS_MAX) {
+  if (requireList(rows, "rows").length > CALIBRATION_ROWS_MAX) {
     throw new CalcInputError({ param: "rows", value: rows.length, expected: `at most ${CALIBRATION_ROWS_MAX} readings`, unit: "" });
   }
   const pieces = rows.map((row, i) => {
+    requireInputObject(row, `rows[${i}]`);
     requireNonNegative(`rows[${i}].angularSpeed`, row.angularSpeed, "rad/s");
     requireFinite(`rows[${i}].acceleration`, row.acceleration, "m/s²");
     return `${exactNumberText(row.angularSpeed, UNITS.rpm.factor)}:${exactNumberText(row.acceleration, UNITS.gn.factor)}`;

@@ -8,6 +8,7 @@ import { CalcInputError, requireFinite, requireInRange, requireNonNegative, requ
 import { defineInputs } from "../core/inputs.ts";
 import { toSI } from "../core/units.ts";
 import { type StraightLineFit, countDistinct, fitChecked, requireFitOptions } from "../numerics/line-fit.ts";
+import { requireDeclared, requireFiniteFields, requireInputObject } from "../core/spec-check.ts";
 
 // The calibration fit.
 
@@ -42,7 +43,8 @@ export interface CalibrationFit extends StraightLineFit {
  * Formula: $a_i = \hat r\,\omega_i^2 + \hat b$, fitted in $x_i = \omega_i^2$
  *
  * @param rows readings, at least 3 at different speeds; ω [rad/s] ≥ 0 and a [m/s²] finite
- * @param options confidence [-] (0.95), spikeThreshold k [-] (3.5), huberTuning c [-] (1.345)
+ * @param options confidence [-] (0.95), spikeThreshold k [-] (3.5), each within its range in
+ *   `calibrationFitInputs`; huberTuning c [-] (1.345), greater than 0
  * @returns every fit, the spike report, and the recommended radius [m] and offset [m/s²]:
  * least squares when nothing is flagged, least squares without the spikes when enough points
  * remain, else Theil–Sen; and the radius's standard error relative to it [-] (least-squares methods)
@@ -61,12 +63,14 @@ export function fitCalibration(
   rows: readonly CalibrationRow[],
   options: { confidence?: number; spikeThreshold?: number; huberTuning?: number } = {},
 ): CalibrationFit {
-  const { confidence = 0.95, spikeThreshold = 3.5, huberTuning = 1.345 } = options;
+  const { confidence = 0.95, spikeThreshold = 3.5, huberTuning = 1.345 } = requireInputObject(options, "options");
   if (!Array.isArray(rows)) throw new CalcInputError({ param: "rows", value: String(rows), expected: "a list of readings", unit: "" });
   rows.forEach((row, i) => {
     requireNonNegative(`rows[${i}].angularSpeed`, row?.angularSpeed, "rad/s");
     requireFinite(`rows[${i}].acceleration`, row?.acceleration, "m/s²");
   });
+  requireDeclared(calibrationFitInputs.confidence, "confidence", confidence);
+  requireDeclared(calibrationFitInputs.spikeThreshold, "spikeThreshold", spikeThreshold);
   requireFitOptions(confidence, spikeThreshold, huberTuning);
   const speedSquared = rows.map((r) => r.angularSpeed * r.angularSpeed);
   const distinct = countDistinct(speedSquared);
@@ -190,17 +194,9 @@ export interface CalibrationCurvePoint {
  *
  * Sources: openstax-college-physics.
  */
-export function calibrationCurve({
-  fit,
-  lowSpeed,
-  highSpeed,
-  points = 61,
-}: {
-  fit: CalibrationFit;
-  lowSpeed: number;
-  highSpeed: number;
-  points?: number;
-}): CalibrationCurvePoint[] {
+export function calibrationCurve(input: { fit: CalibrationFit; lowSpeed: number; highSpeed: number; points?: number }): CalibrationCurvePoint[] {
+  const { fit, lowSpeed, highSpeed, points = 61 } = requireInputObject(input);
+  requireInputObject(fit, "fit");
   requireNonNegative("lowSpeed", lowSpeed, "rad/s");
   requireFinite("highSpeed", highSpeed, "rad/s");
   requireRelation("highSpeed", highSpeed, "greater", lowSpeed, { kind: "angularSpeed", unit: "rad/s", other: "lowSpeed" });
@@ -208,6 +204,7 @@ export function calibrationCurve({
   if (!Number.isInteger(points)) throw new CalcInputError({ param: "points", value: points, expected: "a whole number", unit: "" });
   const out: CalibrationCurvePoint[] = [];
   for (let i = 0; i < points; i++) {
+    // Evenly spaced speeds, and a = r·ω² + b on each line (openstax-college-physics).
     const w = i === points - 1 ? highSpeed : lowSpeed + ((highSpeed - lowSpeed) * i) / (points - 1);
     const x = w * w;
     out.push({
@@ -217,7 +214,7 @@ export function calibrationCurve({
       recommended: fit.radius * x + fit.bias,
     });
   }
-  return out;
+  return requireFiniteFields(out, "calibration curve", { highSpeed: [highSpeed, "rad/s"] });
 }
 
 // ---------------------------------------------------------------------------------------------

@@ -4,7 +4,7 @@
  */
 import { requireRelation } from "../core/errors.ts";
 import { type HeadingDriftInput, headingDriftInputs } from "./drift-inputs.ts";
-import { requireWithinSpecs } from "../core/spec-check.ts";
+import { requireWithinSpecs, declaredInputs, requireFiniteFields } from "../core/spec-check.ts";
 import {
   type DriftPoint,
   type RadiusBand,
@@ -73,16 +73,20 @@ export function headingDrift(input: HeadingDriftInput): HeadingDriftResult {
   const verdict: DriftVerdict = atSpeed.driftRate === null ? "no-estimate" : Math.abs(atSpeed.driftRate) <= input.budget ? "within-budget" : "over-budget";
   // nist-ehandbook-propagation: σ_ω̂ = |∂ω̂/∂a| σ_a, ∂ω̂/∂a = 1/(2 r̂ ω̂)
   const rateNoise = atSpeed.estimate === null ? null : input.accelerationNoise / (2 * input.assumedRadius * atSpeed.estimate);
-  return {
-    atSpeed,
-    verdict,
-    budgetMargin: atSpeed.driftRate === null ? null : input.budget - Math.abs(atSpeed.driftRate),
-    radiusBand: assumedRadiusBand({ ...model, angularSpeed: input.angularSpeed, budget: input.budget }),
-    speedRange: speedRangeWithinBudget({ ...model, budget: input.budget }),
-    lowestEstimableSpeed: lowestEstimableSpeed(model),
-    rateNoise,
-    series: headingDriftSeries({ ...model, lowSpeed: input.lowSpeed, highSpeed: input.highSpeed, points: 61 }),
-  };
+  return requireFiniteFields(
+    {
+      atSpeed,
+      verdict,
+      budgetMargin: atSpeed.driftRate === null ? null : input.budget - Math.abs(atSpeed.driftRate),
+      radiusBand: assumedRadiusBand({ ...model, angularSpeed: input.angularSpeed, budget: input.budget }),
+      speedRange: speedRangeWithinBudget({ ...model, budget: input.budget }),
+      lowestEstimableSpeed: lowestEstimableSpeed(model),
+      rateNoise,
+      series: headingDriftSeries({ ...model, lowSpeed: input.lowSpeed, highSpeed: input.highSpeed, points: 61 }),
+    },
+    "heading drift",
+    () => declaredInputs(headingDriftInputs, input),
+  );
 }
 
 // ---------------------------------------------------------------------------------------------

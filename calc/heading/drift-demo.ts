@@ -5,6 +5,7 @@
 import { CalcInputError, requirePositive } from "../core/errors.ts";
 import { fromSI, rpmToRadPerSecond } from "../core/units.ts";
 import { type RadiusBand, type SpinRateErrorModel, assumedRadiusBand, headingDriftAt } from "./drift.ts";
+import { requireInputObject, requireList } from "../core/spec-check.ts";
 
 // 3. Worked example for the chapter.
 
@@ -55,18 +56,14 @@ export interface RadiusMismatchExample {
  *
  * Sources: spinner-heading-practice, openstax-college-physics.
  */
-export function radiusMismatchExample({
-  assumedRadius,
-  trueRadius,
-  speedsRpm,
-  budget = (10 * Math.PI) / 180,
-}: {
+export function radiusMismatchExample(input: {
   assumedRadius: number;
   trueRadius: number;
   speedsRpm: readonly number[];
   budget?: number;
 }): RadiusMismatchExample {
-  if (speedsRpm.length === 0) throw new CalcInputError({ param: "speedsRpm", value: 0, expected: "at least one speed", unit: "" });
+  const { assumedRadius, trueRadius, speedsRpm, budget = (10 * Math.PI) / 180 } = requireInputObject(input);
+  if (requireList(speedsRpm, "speedsRpm").length === 0) throw new CalcInputError({ param: "speedsRpm", value: 0, expected: "at least one speed", unit: "" });
   const model: SpinRateErrorModel = { assumedRadius, trueRadius, scaleError: 0, bias: 0, biasCorrection: 0, tilt: 0 };
   const rows = speedsRpm.map((rpm, i) => {
     requirePositive(`speedsRpm[${i}]`, rpm, "rpm");

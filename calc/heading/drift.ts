@@ -10,6 +10,7 @@
  */
 import { CalcInputError, requireFinite, requireInRange, requirePositive, requireRelation } from "../core/errors.ts";
 import { TURN } from "../core/constants.ts";
+import { type NamedValue, requireFiniteFields, requireFiniteResult, requireInputObject } from "../core/spec-check.ts";
 
 // ---------------------------------------------------------------------------------------------
 // Helpers.
@@ -60,6 +61,7 @@ export interface SpinRateErrorModel {
 }
 
 function requireModel(m: SpinRateErrorModel): void {
+  requireInputObject(m, "model");
   requirePositive("assumedRadius", m.assumedRadius, "m");
   requirePositive("trueRadius", m.trueRadius, "m");
   requireFinite("scaleError", m.scaleError, "");
@@ -72,6 +74,17 @@ function requireModel(m: SpinRateErrorModel): void {
   if (!(m.tilt >= 0 && m.tilt < Math.PI / 2)) {
     throw new CalcInputError({ param: "tilt", value: m.tilt, expected: "at least 0 rad and less than π/2 rad (90°)", unit: "rad" });
   }
+}
+
+/** The model's inputs by name, for the finiteness guard. */
+function modelInputs(m: SpinRateErrorModel, extra: Record<string, NamedValue> = {}): Record<string, NamedValue> {
+  return {
+    assumedRadius: [m.assumedRadius, "m"],
+    trueRadius: [m.trueRadius, "m"],
+    bias: [m.bias, "m/s²"],
+    biasCorrection: [m.biasCorrection, "m/s²"],
+    ...extra,
+  };
 }
 
 /** The model reduced to ω̂² = G ω² + β, with G − 1 formed without cancellation. */
@@ -176,7 +189,7 @@ export interface DriftPoint {
  * Sources: spinner-heading-practice, openstax-college-physics, ieee-1293-1998, abramowitz-stegun-1964.
  */
 export function headingDriftAt(input: { angularSpeed: number } & SpinRateErrorModel): DriftPoint {
-  const { angularSpeed } = input;
+  const { angularSpeed } = requireInputObject(input);
   requirePositive("angularSpeed", angularSpeed, "rad/s");
   requireModel(input);
   const reduced = reduce(input);
@@ -200,17 +213,21 @@ export function headingDriftAt(input: { angularSpeed: number } & SpinRateErrorMo
     tilt: angularSpeed * (Math.sqrt(Math.cos(input.tilt)) - 1),
     bias: w2 + reduced.biasTerm > 0 ? reduced.biasTerm / (aloneBias + angularSpeed) : null,
   };
-  return {
-    angularSpeed,
-    defined: exact !== null,
-    correctedReading,
-    estimate: exact?.estimate ?? null,
-    driftRate: exact?.drift ?? null,
-    driftPerRevolution: exact ? (TURN * exact.drift) / angularSpeed : null,
-    speedRatio: exact ? exact.estimate / angularSpeed : null,
-    linear: { ...linear, speedProportional: linear.radius + linear.scale + linear.tilt, total: linear.radius + linear.scale + linear.tilt + linear.bias },
-    alone,
-  };
+  return requireFiniteFields(
+    {
+      angularSpeed,
+      defined: exact !== null,
+      correctedReading,
+      estimate: exact?.estimate ?? null,
+      driftRate: exact?.drift ?? null,
+      driftPerRevolution: exact ? (TURN * exact.drift) / angularSpeed : null,
+      speedRatio: exact ? exact.estimate / angularSpeed : null,
+      linear: { ...linear, speedProportional: linear.radius + linear.scale + linear.tilt, total: linear.radius + linear.scale + linear.tilt + linear.bias },
+      alone,
+    },
+    "drift",
+    modelInputs(input, { angularSpeed: [angularSpeed, "rad/s"] }),
+  );
 }
 
 /**
@@ -230,7 +247,7 @@ export function headingDriftAt(input: { angularSpeed: number } & SpinRateErrorMo
 export function lowestEstimableSpeed(model: SpinRateErrorModel): number {
   requireModel(model);
   const r = reduce(model);
-  return r.biasTerm < 0 ? Math.sqrt(-r.biasTerm / r.gain) : 0;
+  return requireFiniteResult(r.biasTerm < 0 ? Math.sqrt(-r.biasTerm / r.gain) : 0, "lowest speed", modelInputs(model));
 }
 
 export type RadiusBandStatus = "bounded" | "upper-unbounded" | "no-estimate";
@@ -266,16 +283,17 @@ export interface RadiusBand {
  * Sources: spinner-heading-practice, openstax-college-physics.
  */
 export function assumedRadiusBand(input: { angularSpeed: number; budget: number } & SpinRateErrorModel): RadiusBand {
-  const { angularSpeed, budget } = input;
+  const { angularSpeed, budget } = requireInputObject(input);
   requirePositive("angularSpeed", angularSpeed, "rad/s");
   requirePositive("budget", budget, "rad/s");
   requireModel(input);
   const n = (1 + input.scaleError) * Math.cos(input.tilt) * input.trueRadius * angularSpeed * angularSpeed + input.bias - input.biasCorrection;
+  const named = modelInputs(input, { angularSpeed: [angularSpeed, "rad/s"], budget: [budget, "rad/s"] });
   if (!(n > 0)) return { status: "no-estimate", low: null, high: null, zeroDriftRadius: null };
   const low = n / (angularSpeed + budget) ** 2;
   const zeroDriftRadius = n / (angularSpeed * angularSpeed);
-  if (budget >= angularSpeed) return { status: "upper-unbounded", low, high: null, zeroDriftRadius };
-  return { status: "bounded", low, high: n / (angularSpeed - budget) ** 2, zeroDriftRadius };
+  if (budget >= angularSpeed) return requireFiniteFields({ status: "upper-unbounded", low, high: null, zeroDriftRadius }, "radius band", named);
+  return requireFiniteFields({ status: "bounded", low, high: n / (angularSpeed - budget) ** 2, zeroDriftRadius }, "radius band", named);
 }
 
 export type SpeedRangeStatus = "bounded" | "unbounded-above" | "empty";
@@ -318,7 +336,7 @@ export interface SpeedRange {
  * Sources: spinner-heading-practice, numerical-recipes-2007.
  */
 export function speedRangeWithinBudget(input: { budget: number } & SpinRateErrorModel): SpeedRange {
-  const { budget } = input;
+  const { budget } = requireInputObject(input);
   requirePositive("budget", budget, "rad/s");
   requireModel(input);
   const reduced = reduce(input);
@@ -373,7 +391,7 @@ export function speedRangeWithinBudget(input: { budget: number } & SpinRateError
  * Sources: spinner-heading-practice, openstax-college-physics, abramowitz-stegun-1964.
  */
 export function headingDriftSeries(input: { lowSpeed: number; highSpeed: number; points?: number } & SpinRateErrorModel): DriftPoint[] {
-  const { lowSpeed, highSpeed, points = 61 } = input;
+  const { lowSpeed, highSpeed, points = 61 } = requireInputObject(input);
   requirePositive("lowSpeed", lowSpeed, "rad/s");
   requireFinite("highSpeed", highSpeed, "rad/s");
   requireRelation("highSpeed", highSpeed, "greater", lowSpeed, { kind: "angularSpeed", unit: "rad/s", other: "lowSpeed" });

@@ -6,7 +6,7 @@ import { requireFinite, requirePositive } from "../core/errors.ts";
 import { defineInputs } from "../core/inputs.ts";
 import { TURN } from "../core/constants.ts";
 import { rpmToRadPerSecond } from "../core/units.ts";
-import { requireWithinSpecs } from "../core/spec-check.ts";
+import { requireWithinSpecs, requireInputObject, requireFiniteFields, declaredInputs } from "../core/spec-check.ts";
 
 // 2. Two opposed sensors.
 
@@ -75,7 +75,7 @@ export function opposedSensorsDrift(input: {
   residualBias2?: number;
   linearAcceleration?: number;
 }): OpposedSensorsResult {
-  const { angularSpeed, radius1, radius2, offset, residualBias1 = 0, residualBias2 = 0, linearAcceleration = 0 } = input;
+  const { angularSpeed, radius1, radius2, offset, residualBias1 = 0, residualBias2 = 0, linearAcceleration = 0 } = requireInputObject(input);
   requirePositive("angularSpeed", angularSpeed, "rad/s");
   requirePositive("radius1", radius1, "m");
   requirePositive("radius2", radius2, "m");
@@ -89,12 +89,24 @@ export function opposedSensorsDrift(input: {
   const a2 = w2 * (radius2 + offset) + linearAcceleration + residualBias2;
   const pair = estimateFrom(a1 + a2, radius1 + radius2, angularSpeed);
   const offsetEstimate = pair.estimate === null ? null : (radius1 - radius2 - (a1 - a2) / (pair.estimate * pair.estimate)) / 2;
-  return {
-    sensor1: estimateFrom(a1, radius1, angularSpeed),
-    sensor2: estimateFrom(a2, radius2, angularSpeed),
-    pair,
-    offsetEstimate,
-  };
+  return requireFiniteFields(
+    {
+      sensor1: estimateFrom(a1, radius1, angularSpeed),
+      sensor2: estimateFrom(a2, radius2, angularSpeed),
+      pair,
+      offsetEstimate,
+    },
+    "opposed sensors drift",
+    {
+      angularSpeed: [angularSpeed, "rad/s"],
+      radius1: [radius1, "m"],
+      radius2: [radius2, "m"],
+      offset: [offset, "m"],
+      residualBias1: [residualBias1, "m/s²"],
+      residualBias2: [residualBias2, "m/s²"],
+      linearAcceleration: [linearAcceleration, "m/s²"],
+    },
+  );
 }
 
 /** Inputs of the opposed-sensors comparison, in SI. */
@@ -180,13 +192,17 @@ export function opposedSensorsCheck(input: OpposedSensorsInput): OpposedSensorsC
   const a = towardSensor1.sensor1;
   const b = towardSensor2.sensor1;
   const worst = a.driftRate === null || b.driftRate === null ? null : Math.max(Math.abs(a.driftRate), Math.abs(b.driftRate));
-  return {
-    towardSensor1,
-    towardSensor2,
-    singleWorstDriftRate: worst,
-    singleWorstPerRevolution: worst === null ? null : (TURN * worst) / input.angularSpeed,
-    pairWorstDriftRate: Math.max(Math.abs(towardSensor1.pair.driftRate ?? 0), Math.abs(towardSensor2.pair.driftRate ?? 0)),
-  };
+  return requireFiniteFields(
+    {
+      towardSensor1,
+      towardSensor2,
+      singleWorstDriftRate: worst,
+      singleWorstPerRevolution: worst === null ? null : (TURN * worst) / input.angularSpeed,
+      pairWorstDriftRate: Math.max(Math.abs(towardSensor1.pair.driftRate ?? 0), Math.abs(towardSensor2.pair.driftRate ?? 0)),
+    },
+    "opposed-sensors figures",
+    () => declaredInputs(opposedSensorsInputs, input),
+  );
 }
 
 // ---------------------------------------------------------------------------------------------

@@ -6,7 +6,7 @@ import { CalcInputError, requireInRange, requireNonNegative, requirePositive } f
 import { defineInputs } from "../core/inputs.ts";
 import { STANDARD_GRAVITY } from "../core/constants.ts";
 import { rpmToRadPerSecond } from "../core/units.ts";
-import { requireWithinSpecs } from "../core/spec-check.ts";
+import { requireWithinSpecs, requireInputObject, requireFiniteFields, requireFiniteResult, declaredInputs } from "../core/spec-check.ts";
 
 // 2. Smoothing.
 
@@ -29,15 +29,16 @@ function requireSmoothingFactor(smoothingFactor: number): void {
  *
  * Sources: smith-dsp-1997, nist-ehandbook-exp-smoothing.
  */
-export function emaTimeConstant({ smoothingFactor, samplePeriod }: { smoothingFactor: number; samplePeriod: number }): {
+export function emaTimeConstant(input: { smoothingFactor: number; samplePeriod: number }): {
   exact: number;
   smallFactorApproximation: number;
 } {
+  const { smoothingFactor, samplePeriod } = requireInputObject(input);
   requireSmoothingFactor(smoothingFactor);
   requirePositive("samplePeriod", samplePeriod, "s");
   // smith-dsp-1997: 1 − α = e^(−Δt/τ)
   const exact = smoothingFactor === 1 ? 0 : -samplePeriod / Math.log1p(-smoothingFactor);
-  return { exact, smallFactorApproximation: samplePeriod / smoothingFactor };
+  return requireFiniteFields({ exact, smallFactorApproximation: samplePeriod / smoothingFactor }, "time constant", { samplePeriod: [samplePeriod, "s"] });
 }
 
 /**
@@ -55,11 +56,15 @@ export function emaTimeConstant({ smoothingFactor, samplePeriod }: { smoothingFa
  *
  * Sources: smith-dsp-1997.
  */
-export function emaFactorForTimeConstant({ timeConstant, samplePeriod }: { timeConstant: number; samplePeriod: number }): number {
+export function emaFactorForTimeConstant(input: { timeConstant: number; samplePeriod: number }): number {
+  const { timeConstant, samplePeriod } = requireInputObject(input);
   requireNonNegative("timeConstant", timeConstant, "s");
   requirePositive("samplePeriod", samplePeriod, "s");
   if (timeConstant === 0) return 1;
-  return -Math.expm1(-samplePeriod / timeConstant);
+  return requireFiniteResult(-Math.expm1(-samplePeriod / timeConstant), "smoothing factor", {
+    timeConstant: [timeConstant, "s"],
+    samplePeriod: [samplePeriod, "s"],
+  });
 }
 
 /**
@@ -82,11 +87,12 @@ export function emaFactorForTimeConstant({ timeConstant, samplePeriod }: { timeC
  *
  * Sources: brown-1963, smith-dsp-1997.
  */
-export function emaRampLag({ smoothingFactor, samplePeriod }: { smoothingFactor: number; samplePeriod: number }): number {
+export function emaRampLag(input: { smoothingFactor: number; samplePeriod: number }): number {
+  const { smoothingFactor, samplePeriod } = requireInputObject(input);
   requireSmoothingFactor(smoothingFactor);
   requirePositive("samplePeriod", samplePeriod, "s");
   // brown-1963: single smoothing lags a linear trend by (1 − α)/α periods
-  return (samplePeriod * (1 - smoothingFactor)) / smoothingFactor;
+  return requireFiniteResult((samplePeriod * (1 - smoothingFactor)) / smoothingFactor, "ramp lag", { samplePeriod: [samplePeriod, "s"] });
 }
 
 /**
@@ -103,7 +109,8 @@ export function emaRampLag({ smoothingFactor, samplePeriod }: { smoothingFactor:
  *
  * Sources: roberts-1959.
  */
-export function emaNoiseFactor({ smoothingFactor }: { smoothingFactor: number }): number {
+export function emaNoiseFactor(input: { smoothingFactor: number }): number {
+  const { smoothingFactor } = requireInputObject(input);
   requireSmoothingFactor(smoothingFactor);
   return Math.sqrt(smoothingFactor / (2 - smoothingFactor));
 }
@@ -124,14 +131,19 @@ export function emaNoiseFactor({ smoothingFactor }: { smoothingFactor: number })
  *
  * Sources: spinner-heading-practice.
  */
-export function spikeRateError({ angularSpeed, assumedRadius, spike }: { angularSpeed: number; assumedRadius: number; spike: number }): number {
+export function spikeRateError(input: { angularSpeed: number; assumedRadius: number; spike: number }): number {
+  const { angularSpeed, assumedRadius, spike } = requireInputObject(input);
   requireNonNegative("angularSpeed", angularSpeed, "rad/s");
   requirePositive("assumedRadius", assumedRadius, "m");
   requireNonNegative("spike", spike, "m/s²");
   const extra = spike / assumedRadius;
   if (extra === 0) return 0;
   // √(ω² + x) − ω = x/(√(ω² + x) + ω), no cancellation
-  return extra / (Math.sqrt(angularSpeed * angularSpeed + extra) + angularSpeed);
+  return requireFiniteResult(extra / (Math.sqrt(angularSpeed * angularSpeed + extra) + angularSpeed), "rate error", {
+    angularSpeed: [angularSpeed, "rad/s"],
+    assumedRadius: [assumedRadius, "m"],
+    spike: [spike, "m/s²"],
+  });
 }
 
 /**
@@ -149,10 +161,11 @@ export function spikeRateError({ angularSpeed, assumedRadius, spike }: { angular
  *
  * Sources: tukey-1977.
  */
-export function medianFilterDelay({ windowLength, samplePeriod }: { windowLength: number; samplePeriod: number }): number {
+export function medianFilterDelay(input: { windowLength: number; samplePeriod: number }): number {
+  const { windowLength, samplePeriod } = requireInputObject(input);
   requireMedianWindow(windowLength);
   requirePositive("samplePeriod", samplePeriod, "s");
-  return ((windowLength - 1) / 2) * samplePeriod;
+  return requireFiniteResult(((windowLength - 1) / 2) * samplePeriod, "filter delay", { samplePeriod: [samplePeriod, "s"] });
 }
 
 function requireMedianWindow(windowLength: number): void {
@@ -357,12 +370,16 @@ export function headingSmoothing(input: HeadingSmoothingInput): HeadingSmoothing
   const samplePeriod = 1 / input.sampleRate;
   const spikeRate = spikeRateError({ angularSpeed: input.speed, assumedRadius: input.assumedRadius, spike: input.spike });
   const figures = smoothingFigures(input.smoothingFactor, samplePeriod, input.spinUpAcceleration, input.speedChange, spikeRate, input.medianLength);
-  return {
-    ...figures,
-    samplePeriod,
-    spinUpDuration: input.speedChange / input.spinUpAcceleration,
-    spikesRejectedPerWindow: (input.medianLength - 1) / 2,
-  };
+  return requireFiniteFields(
+    {
+      ...figures,
+      samplePeriod,
+      spinUpDuration: input.speedChange / input.spinUpAcceleration,
+      spikesRejectedPerWindow: (input.medianLength - 1) / 2,
+    },
+    "smoothing figures",
+    () => declaredInputs(headingSmoothingInputs, input),
+  );
 }
 
 /**
@@ -381,10 +398,8 @@ export function headingSmoothing(input: HeadingSmoothingInput): HeadingSmoothing
  *
  * Sources: smith-dsp-1997, brown-1963, roberts-1959, tukey-1977.
  */
-export function smoothingTradeoffSeries(
-  input: HeadingSmoothingInput,
-  { smallestFactor = 0.005, points = 60 }: { smallestFactor?: number; points?: number } = {},
-): SmoothingFigures[] {
+export function smoothingTradeoffSeries(input: HeadingSmoothingInput, options: { smallestFactor?: number; points?: number } = {}): SmoothingFigures[] {
+  const { smallestFactor = 0.005, points = 60 } = requireInputObject(options);
   requireWithinSpecs(headingSmoothingInputs, input);
   if (input.medianLength % 2 !== 1) {
     throw new CalcInputError({ param: "medianLength", value: input.medianLength, expected: "an odd whole number", unit: "" });
@@ -400,5 +415,5 @@ export function smoothingTradeoffSeries(
     const alpha = i === points - 1 ? 1 : Math.exp(logMin * (1 - i / (points - 1)));
     out.push(smoothingFigures(alpha, samplePeriod, input.spinUpAcceleration, input.speedChange, spikeRate, input.medianLength));
   }
-  return out;
+  return requireFiniteFields(out, "trade-off series", () => declaredInputs(headingSmoothingInputs, input));
 }

@@ -7,7 +7,7 @@ import { requireNonNegative, requirePositive } from "../core/errors.ts";
 import { defineInputs } from "../core/inputs.ts";
 import { TURN } from "../core/constants.ts";
 import { rpmToRadPerSecond } from "../core/units.ts";
-import { requireWithinSpecs } from "../core/spec-check.ts";
+import { requireWithinSpecs, requireInputObject, requireFiniteResult, declaredInputs, requireFiniteFields } from "../core/spec-check.ts";
 
 // ---------------------------------------------------------------------------------------------
 // 1. Timing.
@@ -27,10 +27,11 @@ import { requireWithinSpecs } from "../core/spec-check.ts";
  *
  * Sources: openstax-up1-rotational-kinematics.
  */
-export function headingStepPerLoop({ angularSpeed, loopRate }: { angularSpeed: number; loopRate: number }): number {
+export function headingStepPerLoop(input: { angularSpeed: number; loopRate: number }): number {
+  const { angularSpeed, loopRate } = requireInputObject(input);
   requireNonNegative("angularSpeed", angularSpeed, "rad/s");
   requirePositive("loopRate", loopRate, "Hz");
-  return angularSpeed / loopRate;
+  return requireFiniteResult(angularSpeed / loopRate, "heading step", { angularSpeed: [angularSpeed, "rad/s"], loopRate: [loopRate, "Hz"] });
 }
 
 /**
@@ -49,10 +50,11 @@ export function headingStepPerLoop({ angularSpeed, loopRate }: { angularSpeed: n
  *
  * Sources: openstax-up1-rotational-kinematics.
  */
-export function latencyHeadingLag({ angularSpeed, latency }: { angularSpeed: number; latency: number }): number {
+export function latencyHeadingLag(input: { angularSpeed: number; latency: number }): number {
+  const { angularSpeed, latency } = requireInputObject(input);
   requireNonNegative("angularSpeed", angularSpeed, "rad/s");
   requireNonNegative("latency", latency, "s");
-  return angularSpeed * latency;
+  return requireFiniteResult(angularSpeed * latency, "heading lag", { angularSpeed: [angularSpeed, "rad/s"], latency: [latency, "s"] });
 }
 
 /**
@@ -71,10 +73,11 @@ export function latencyHeadingLag({ angularSpeed, latency }: { angularSpeed: num
  *
  * Sources: openstax-up1-rotational-kinematics.
  */
-export function beaconArc({ angularSpeed, onTime }: { angularSpeed: number; onTime: number }): number {
+export function beaconArc(input: { angularSpeed: number; onTime: number }): number {
+  const { angularSpeed, onTime } = requireInputObject(input);
   requireNonNegative("angularSpeed", angularSpeed, "rad/s");
   requireNonNegative("onTime", onTime, "s");
-  return angularSpeed * onTime;
+  return requireFiniteResult(angularSpeed * onTime, "beacon arc", { angularSpeed: [angularSpeed, "rad/s"], onTime: [onTime, "s"] });
 }
 
 /**
@@ -92,10 +95,11 @@ export function beaconArc({ angularSpeed, onTime }: { angularSpeed: number; onTi
  *
  * Sources: openstax-up1-rotational-kinematics.
  */
-export function loopRateForStep({ angularSpeed, targetStep }: { angularSpeed: number; targetStep: number }): number {
+export function loopRateForStep(input: { angularSpeed: number; targetStep: number }): number {
+  const { angularSpeed, targetStep } = requireInputObject(input);
   requireNonNegative("angularSpeed", angularSpeed, "rad/s");
   requirePositive("targetStep", targetStep, "rad");
-  return angularSpeed / targetStep;
+  return requireFiniteResult(angularSpeed / targetStep, "loop rate", { angularSpeed: [angularSpeed, "rad/s"], targetStep: [targetStep, "rad"] });
 }
 
 /**
@@ -112,10 +116,11 @@ export function loopRateForStep({ angularSpeed, targetStep }: { angularSpeed: nu
  *
  * Sources: openstax-up1-rotational-kinematics.
  */
-export function onTimeForArc({ angularSpeed, targetArc }: { angularSpeed: number; targetArc: number }): number {
+export function onTimeForArc(input: { angularSpeed: number; targetArc: number }): number {
+  const { angularSpeed, targetArc } = requireInputObject(input);
   requirePositive("angularSpeed", angularSpeed, "rad/s");
   requireNonNegative("targetArc", targetArc, "rad");
-  return targetArc / angularSpeed;
+  return requireFiniteResult(targetArc / angularSpeed, "on-time", { angularSpeed: [angularSpeed, "rad/s"], targetArc: [targetArc, "rad"] });
 }
 
 /** Inputs of the timing calculator, in SI. */
@@ -218,24 +223,28 @@ export interface HeadingTimingResult {
  */
 export function headingTiming(input: HeadingTimingInput): HeadingTimingResult {
   requireWithinSpecs(headingTimingInputs, input);
-  const { topSpeed, loopRate, latency, onTime, targetArc, targetStep } = input;
+  const { topSpeed, loopRate, latency, onTime, targetArc, targetStep } = requireInputObject(input);
   const headingStep = headingStepPerLoop({ angularSpeed: topSpeed, loopRate });
   const arcWidth = beaconArc({ angularSpeed: topSpeed, onTime });
   const stepOk = headingStep <= targetStep;
   const arcOk = arcWidth <= targetArc;
-  return {
-    loopPeriod: 1 / loopRate,
-    headingStep,
-    updatesPerRevolution: (TURN * loopRate) / topSpeed,
-    latencyLag: latencyHeadingLag({ angularSpeed: topSpeed, latency }),
-    arcWidth,
-    loopRateNeeded: loopRateForStep({ angularSpeed: topSpeed, targetStep }),
-    onTimeNeeded: onTimeForArc({ angularSpeed: topSpeed, targetArc }),
-    onTimeBelowLoopPeriod: onTime < 1 / loopRate,
-    stepOk,
-    arcOk,
-    verdict: stepOk && arcOk ? "ok" : !stepOk && !arcOk ? "both" : !stepOk ? "step-too-large" : "arc-too-wide",
-  };
+  return requireFiniteFields(
+    {
+      loopPeriod: 1 / loopRate,
+      headingStep,
+      updatesPerRevolution: (TURN * loopRate) / topSpeed,
+      latencyLag: latencyHeadingLag({ angularSpeed: topSpeed, latency }),
+      arcWidth,
+      loopRateNeeded: loopRateForStep({ angularSpeed: topSpeed, targetStep }),
+      onTimeNeeded: onTimeForArc({ angularSpeed: topSpeed, targetArc }),
+      onTimeBelowLoopPeriod: onTime < 1 / loopRate,
+      stepOk,
+      arcOk,
+      verdict: stepOk && arcOk ? "ok" : !stepOk && !arcOk ? "both" : !stepOk ? "step-too-large" : "arc-too-wide",
+    },
+    "timing figures",
+    () => declaredInputs(headingTimingInputs, input),
+  );
 }
 
 // ---------------------------------------------------------------------------------------------

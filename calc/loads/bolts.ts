@@ -4,7 +4,7 @@
  * bolts yield and break, and a verdict. Re-exported by calc/loads/index.ts. SI in and out.
  */
 import { CalcInputError, requireInRange, requireNonNegative, requirePositive } from "../core/errors.ts";
-import { requireDeclared } from "../core/spec-check.ts";
+import { requireDeclared, requireFiniteFields, requireInputObject, requireFiniteResult, declaredInputs } from "../core/spec-check.ts";
 import { defineInputs } from "../core/inputs.ts";
 import type { PartLoad } from "../rotation/rotation.ts";
 import { STANDARD_GRAVITY } from "../core/constants.ts";
@@ -179,12 +179,13 @@ export interface FastenerCheck {
  * boltStress({ force: 176.9, count: 1, area: 8.78e-6 }) // → 20.1e6 [Pa] (one M4)
  * Sources: iso-898-1.
  */
-export function boltStress({ force, count, area }: { force: number; count: number; area: number }): number {
+export function boltStress(input: { force: number; count: number; area: number }): number {
+  const { force, count, area } = requireInputObject(input);
   requireNonNegative("force", force, "N");
   requireInRange("count", count, "", { min: 1, max: Number.MAX_SAFE_INTEGER });
   if (!Number.isInteger(count)) throw new CalcInputError({ param: "count", value: count, expected: "a whole number", unit: "" });
   requirePositive("area", area, "m²");
-  return force / (count * area);
+  return requireFiniteResult(force / (count * area), "bolt stress", { force: [force, "N"], count: [count, ""], area: [area, "m²"] });
 }
 
 /** The strengths a bolt's stress is compared with, for one property class and loading mode. */
@@ -211,15 +212,8 @@ export interface FastenerStrengths {
  * fastenerStrengths({ propertyClass: "8.8", mode: "shear", shearRatio: 0.5 }) // → { yieldStrength: 369.5e6, ultimateStrength: 400e6 } (τ_y = 640 MPa/√3)
  * Sources: iso-898-1, shigley-distortion-energy, shear-ultimate-ratio.
  */
-export function fastenerStrengths({
-  propertyClass: classId,
-  mode: modeId,
-  shearRatio = DEFAULT_SHEAR_RATIO,
-}: {
-  propertyClass: string;
-  mode: string;
-  shearRatio?: number;
-}): FastenerStrengths {
+export function fastenerStrengths(input: { propertyClass: string; mode: string; shearRatio?: number }): FastenerStrengths {
+  const { propertyClass: classId, mode: modeId, shearRatio = DEFAULT_SHEAR_RATIO } = requireInputObject(input);
   const strengths = propertyClassRow(classId);
   const mode = requireChoice("mode", modeId, LOADING_MODE_OPTIONS);
   requireDeclared(fastenerCheckInputs.shearRatio, "shearRatio", shearRatio);
@@ -261,6 +255,7 @@ export function fastenerStrengths({
  * en-1993-1-8, safety-factor-practice.
  */
 export function fastenerCheck(input: FastenerCheckInput): FastenerCheck {
+  requireInputObject(input);
   const size = requireChoice("size", input.size, THREAD_SIZE_OPTIONS);
   const classId = requireChoice("propertyClass", input.propertyClass, PROPERTY_CLASS_OPTIONS);
   const mode = requireChoice("mode", input.mode, LOADING_MODE_OPTIONS);
@@ -286,27 +281,31 @@ export function fastenerCheck(input: FastenerCheckInput): FastenerCheck {
   const safetyFactorUltimate = safetyFactor({ strength: ultimateStrength, stress });
   const governs = safetyFactorYield <= safetyFactorUltimate ? "yield" : "ultimate";
   const governing = Math.min(safetyFactorYield, safetyFactorUltimate);
-  return {
-    size,
-    propertyClass: classId,
-    mode,
-    shearPlane,
-    part,
-    forcePerBolt: part.force / count,
-    area,
-    stress,
-    yieldStrength,
-    ultimateStrength,
-    shearRatio,
-    safetyFactorYield,
-    safetyFactorUltimate,
-    safetyFactor: governing,
-    governs,
-    speedAtYield: speedAtStress({ angularSpeed, stress, strength: yieldStrength }),
-    speedAtUltimate: speedAtStress({ angularSpeed, stress, strength: ultimateStrength }),
-    ultimateLoad: count * area * ultimateStrength,
-    verdict: safetyVerdict({ safetyFactor: governing, failBelow, marginalBelow }),
-  };
+  return requireFiniteFields(
+    {
+      size,
+      propertyClass: classId,
+      mode,
+      shearPlane,
+      part,
+      forcePerBolt: part.force / count,
+      area,
+      stress,
+      yieldStrength,
+      ultimateStrength,
+      shearRatio,
+      safetyFactorYield,
+      safetyFactorUltimate,
+      safetyFactor: governing,
+      governs,
+      speedAtYield: speedAtStress({ angularSpeed, stress, strength: yieldStrength }),
+      speedAtUltimate: speedAtStress({ angularSpeed, stress, strength: ultimateStrength }),
+      ultimateLoad: count * area * ultimateStrength,
+      verdict: safetyVerdict({ safetyFactor: governing, failBelow, marginalBelow }),
+    },
+    "fastener figures",
+    () => declaredInputs(fastenerCheckInputs, input),
+  );
 }
 
 /** One point of a stress-against-speed curve. */
@@ -330,13 +329,15 @@ export interface StressAtSpeed {
  *
  * Sources: newton-second-law, iso-898-1.
  */
-export function fastenerStressCurve(input: FastenerCheckInput, { maxSpeed, points = 50 }: { maxSpeed: number; points?: number }): StressAtSpeed[] {
+export function fastenerStressCurve(input: FastenerCheckInput, options: { maxSpeed: number; points?: number }): StressAtSpeed[] {
+  const { maxSpeed, points = 50 } = requireInputObject(options);
   requirePositive("maxSpeed", maxSpeed, "rad/s");
   requirePointCount(points);
   const atInput = fastenerCheck(input);
   const perOmegaSquared = atInput.stress / (input.angularSpeed * input.angularSpeed);
-  return Array.from({ length: points }, (_, i) => {
+  const curve = Array.from({ length: points }, (_, i) => {
     const angularSpeed = i === points - 1 ? maxSpeed : (maxSpeed * i) / (points - 1);
     return { angularSpeed, stress: perOmegaSquared * angularSpeed * angularSpeed };
   });
+  return requireFiniteFields(curve, "stress", { maxSpeed: [maxSpeed, "rad/s"] });
 }

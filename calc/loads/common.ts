@@ -60,10 +60,11 @@ export function safetyThresholdInputs(subject: string) {
  * safetyFactor({ strength: 400e6, stress: 20.1e6 }) // → 19.9
  * Sources: safety-factor-practice.
  */
-export function safetyFactor({ strength, stress }: { strength: number; stress: number }): number {
+export function safetyFactor(input: { strength: number; stress: number }): number {
+  const { strength, stress } = requireInputObject(input);
   requirePositive("strength", strength, "Pa");
   requirePositive("stress", stress, "Pa");
-  return strength / stress; // safety-factor-practice
+  return requireFiniteResult(strength / stress, "safety factor", { strength: [strength, "Pa"], stress: [stress, "Pa"] }); // safety-factor-practice
 }
 
 /**
@@ -80,15 +81,12 @@ export function safetyFactor({ strength, stress }: { strength: number; stress: n
  * safetyVerdict({ safetyFactor: 1.6 }) // → "marginal"
  * Sources: safety-factor-practice.
  */
-export function safetyVerdict({
-  safetyFactor: n,
-  failBelow = DEFAULT_SAFETY_THRESHOLDS.failBelow,
-  marginalBelow = DEFAULT_SAFETY_THRESHOLDS.marginalBelow,
-}: {
-  safetyFactor: number;
-  failBelow?: number;
-  marginalBelow?: number;
-}): LoadVerdict {
+export function safetyVerdict(input: { safetyFactor: number; failBelow?: number; marginalBelow?: number }): LoadVerdict {
+  const {
+    safetyFactor: n,
+    failBelow = DEFAULT_SAFETY_THRESHOLDS.failBelow,
+    marginalBelow = DEFAULT_SAFETY_THRESHOLDS.marginalBelow,
+  } = requireInputObject(input);
   requirePositive("safetyFactor", n, "");
   requirePositive("failBelow", failBelow, "");
   requireMarginalAtLeastFail(failBelow, marginalBelow);
@@ -116,9 +114,10 @@ export function requireMarginalAtLeastFail(failBelow: number, marginalBelow: num
  * speedAtStress({ angularSpeed: rpmToRadPerSecond(2400), stress: 2.665e6, strength: 310e6 }) // → 2711 [rad/s] (25 900 rpm)
  * Sources: newton-second-law.
  */
-export function speedAtStress({ angularSpeed, stress, strength }: { angularSpeed: number; stress: number; strength: number }): number {
+export function speedAtStress(input: { angularSpeed: number; stress: number; strength: number }): number {
+  const { angularSpeed, stress, strength } = requireInputObject(input);
   requirePositive("angularSpeed", angularSpeed, "rad/s");
-  return angularSpeed * Math.sqrt(safetyFactor({ strength, stress })); // σ ∝ ω², newton-second-law
+  return requireFiniteResult(angularSpeed * Math.sqrt(safetyFactor({ strength, stress })), "speed at stress", { angularSpeed: [angularSpeed, "rad/s"] }); // σ ∝ ω², newton-second-law
 }
 
 // ---------------------------------------------------------------------------------------------

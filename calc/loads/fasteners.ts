@@ -9,6 +9,7 @@
 import { CalcInputError, requireInRange, requirePositive } from "../core/errors.ts";
 import { requireChoice, type ChoiceOption } from "./common.ts";
 import type { SourceKey } from "../sources/index.ts";
+import { requireInputObject, requireFiniteResult } from "../core/spec-check.ts";
 
 // Choosing from a fixed list lives with the shared load-check helpers; re-exported here, where it started.
 export { requireChoice, type ChoiceOption };
@@ -91,7 +92,8 @@ export interface ThreadDiameters {
  * threadDiameters({ nominalDiameter: 0.004, pitch: 0.0007 }) // → { pitchDiameter: 0.00354534, minorDiameter: 0.00324223, stressDiameterD3: 0.00314119, … } (M4 × 0.7)
  * Sources: iso-68-1, iso-724, iso-898-1.
  */
-export function threadDiameters({ nominalDiameter, pitch }: { nominalDiameter: number; pitch: number }): ThreadDiameters {
+export function threadDiameters(input: { nominalDiameter: number; pitch: number }): ThreadDiameters {
+  const { nominalDiameter, pitch } = requireInputObject(input);
   requirePositive("nominalDiameter", nominalDiameter, "m");
   requirePositive("pitch", pitch, "m");
   if (!(pitch < nominalDiameter / 1.3)) {
@@ -122,10 +124,11 @@ export function threadDiameters({ nominalDiameter, pitch }: { nominalDiameter: n
  * tensileStressArea({ nominalDiameter: 0.002, pitch: 0.0004 }) // → 2.07323e-6 [m²] (M2 × 0.4; table: 2.07 mm²)
  * Sources: iso-898-1, iso-724, iso-68-1.
  */
-export function tensileStressArea({ nominalDiameter, pitch }: { nominalDiameter: number; pitch: number }): number {
+export function tensileStressArea(input: { nominalDiameter: number; pitch: number }): number {
+  const { nominalDiameter, pitch } = requireInputObject(input);
   const { pitchDiameter, stressDiameterD3 } = threadDiameters({ nominalDiameter, pitch });
   const mean = (pitchDiameter + stressDiameterD3) / 2;
-  return (Math.PI / 4) * mean * mean; // iso-898-1
+  return requireFiniteResult((Math.PI / 4) * mean * mean, "stress area", { nominalDiameter: [nominalDiameter, "m"] }); // iso-898-1
 }
 
 // ---------------------------------------------------------------------------------------------
@@ -225,7 +228,8 @@ export function propertyClass(id: string, param = "propertyClass"): PropertyClas
  * minimumUltimateTensileLoad({ size: "M6", propertyClass: "8.8" }) // → 16080 [N] (20.1 mm² × 800 MPa; table: 16 100 N)
  * Sources: iso-898-1.
  */
-export function minimumUltimateTensileLoad({ size, propertyClass: classId }: { size: string; propertyClass: string }): number {
+export function minimumUltimateTensileLoad(input: { size: string; propertyClass: string }): number {
+  const { size, propertyClass: classId } = requireInputObject(input);
   return metricThread(size).stressArea * propertyClass(classId).tensileStrengthMin; // iso-898-1
 }
 
@@ -243,7 +247,8 @@ export function minimumUltimateTensileLoad({ size, propertyClass: classId }: { s
  * proofLoad({ size: "M4", propertyClass: "8.8" }) // → 5092 [N] (8.78 mm² × 580 MPa; table: 5100 N)
  * Sources: iso-898-1.
  */
-export function proofLoad({ size, propertyClass: classId }: { size: string; propertyClass: string }): number {
+export function proofLoad(input: { size: string; propertyClass: string }): number {
+  const { size, propertyClass: classId } = requireInputObject(input);
   return metricThread(size).stressArea * propertyClass(classId).proofStress; // iso-898-1
 }
 
@@ -290,7 +295,8 @@ export interface BoltShearStrengths {
  *
  * Sources: shigley-distortion-energy, ifi-shear-rule, iso-898-1.
  */
-export function boltShearStrengths({ yieldStrength, tensileStrength }: { yieldStrength: number; tensileStrength: number }): BoltShearStrengths {
+export function boltShearStrengths(input: { yieldStrength: number; tensileStrength: number }): BoltShearStrengths {
+  const { yieldStrength, tensileStrength } = requireInputObject(input);
   requirePositive("tensileStrength", tensileStrength, "Pa");
   requirePositive("yieldStrength", yieldStrength, "Pa");
   if (!(yieldStrength <= tensileStrength)) {
@@ -316,7 +322,8 @@ export function boltShearStrengths({ yieldStrength, tensileStrength }: { yieldSt
  *
  * Sources: iso-898-1, shigley-distortion-energy, ifi-shear-rule.
  */
-export function propertyClassShearStrengths({ propertyClass: classId }: { propertyClass: string }): BoltShearStrengths {
+export function propertyClassShearStrengths(input: { propertyClass: string }): BoltShearStrengths {
+  const { propertyClass: classId } = requireInputObject(input);
   const row = propertyClass(classId);
   return boltShearStrengths({ yieldStrength: row.yieldStrengthMin, tensileStrength: row.tensileStrengthMin });
 }
@@ -355,22 +362,18 @@ export const EN1993_GAMMA_M2 = 1.25;
  * eurocodeBoltShearResistance({ area: 245e-6, ultimateStrength: 400e6, shearFactor: 0.6 }) // → 47040 [N] (class 4.6, M20: 0.6 × 400 MPa × 245 mm² / 1.25)
  * Sources: en-1993-1-8.
  */
-export function eurocodeBoltShearResistance({
-  area,
-  ultimateStrength,
-  shearFactor,
-  partialFactor = EN1993_GAMMA_M2,
-}: {
-  area: number;
-  ultimateStrength: number;
-  shearFactor: number;
-  partialFactor?: number;
-}): number {
+export function eurocodeBoltShearResistance(input: { area: number; ultimateStrength: number; shearFactor: number; partialFactor?: number }): number {
+  const { area, ultimateStrength, shearFactor, partialFactor = EN1993_GAMMA_M2 } = requireInputObject(input);
   requirePositive("area", area, "m²");
   requirePositive("ultimateStrength", ultimateStrength, "Pa");
   requireInRange("shearFactor", shearFactor, "", { min: 0, max: 1, minOpen: true });
   requireInRange("partialFactor", partialFactor, "", { min: 1, max: 10 });
-  return (shearFactor * ultimateStrength * area) / partialFactor; // en-1993-1-8 Table 3.4
+  return requireFiniteResult((shearFactor * ultimateStrength * area) / partialFactor, "shear resistance", {
+    area: [area, "m²"],
+    ultimateStrength: [ultimateStrength, "Pa"],
+    shearFactor: [shearFactor, ""],
+    partialFactor: [partialFactor, ""],
+  }); // en-1993-1-8 Table 3.4
 }
 
 /**
@@ -388,22 +391,18 @@ export function eurocodeBoltShearResistance({
  * eurocodeBoltTensionResistance({ stressArea: 245e-6, ultimateStrength: 400e6 }) // → 70560 [N] (class 4.6, M20: 0.9 × 400 MPa × 245 mm² / 1.25)
  * Sources: en-1993-1-8.
  */
-export function eurocodeBoltTensionResistance({
-  stressArea,
-  ultimateStrength,
-  k2 = 0.9,
-  partialFactor = EN1993_GAMMA_M2,
-}: {
-  stressArea: number;
-  ultimateStrength: number;
-  k2?: number;
-  partialFactor?: number;
-}): number {
+export function eurocodeBoltTensionResistance(input: { stressArea: number; ultimateStrength: number; k2?: number; partialFactor?: number }): number {
+  const { stressArea, ultimateStrength, k2 = 0.9, partialFactor = EN1993_GAMMA_M2 } = requireInputObject(input);
   requirePositive("stressArea", stressArea, "m²");
   requirePositive("ultimateStrength", ultimateStrength, "Pa");
   requireInRange("k2", k2, "", { min: 0, max: 1, minOpen: true });
   requireInRange("partialFactor", partialFactor, "", { min: 1, max: 10 });
-  return (k2 * ultimateStrength * stressArea) / partialFactor; // en-1993-1-8 Table 3.4
+  return requireFiniteResult((k2 * ultimateStrength * stressArea) / partialFactor, "tension resistance", {
+    stressArea: [stressArea, "m²"],
+    ultimateStrength: [ultimateStrength, "Pa"],
+    k2: [k2, ""],
+    partialFactor: [partialFactor, ""],
+  }); // en-1993-1-8 Table 3.4
 }
 
 /** Source keys this module relies on (checked by the meta test). */

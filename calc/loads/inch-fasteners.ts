@@ -21,6 +21,7 @@ import {
 import { requireChoice, type ChoiceOption } from "./common.ts";
 import type { SourceKey } from "../sources/index.ts";
 import { UNITS } from "../core/units.ts";
+import { requireFiniteResult, requireInputObject } from "../core/spec-check.ts";
 
 /** 1 in = 0.0254 m exactly (intl-yard-pound-1959, nist-sp811). */
 const INCH = UNITS.in.factor;
@@ -138,7 +139,8 @@ function requireUnifiedPitch(nominalDiameter: number, pitch: number): void {
  *
  * Sources: asme-b1-1, shigley-mechanical-design.
  */
-export function unifiedThreadDiameters({ nominalDiameter, pitch }: { nominalDiameter: number; pitch: number }): UnifiedThreadDiameters {
+export function unifiedThreadDiameters(input: { nominalDiameter: number; pitch: number }): UnifiedThreadDiameters {
+  const { nominalDiameter, pitch } = requireInputObject(input);
   requireUnifiedPitch(nominalDiameter, pitch);
   return {
     pitchDiameter: nominalDiameter - PITCH_DIAMETER_COEFF * pitch, // asme-b1-1
@@ -164,10 +166,11 @@ export function unifiedThreadDiameters({ nominalDiameter, pitch }: { nominalDiam
  *
  * Sources: asme-b1-1, fed-std-h28-2, shigley-mechanical-design.
  */
-export function unifiedTensileStressArea({ nominalDiameter, pitch }: { nominalDiameter: number; pitch: number }): number {
+export function unifiedTensileStressArea(input: { nominalDiameter: number; pitch: number }): number {
+  const { nominalDiameter, pitch } = requireInputObject(input);
   const { pitchDiameter, rootDiameter } = unifiedThreadDiameters({ nominalDiameter, pitch });
   const mean = (pitchDiameter + rootDiameter) / 2;
-  return (Math.PI / 4) * mean * mean; // asme-b1-1
+  return requireFiniteResult((Math.PI / 4) * mean * mean, "stress area", { nominalDiameter: [nominalDiameter, "m"] }); // asme-b1-1
 }
 
 // ---------------------------------------------------------------------------------------------
@@ -210,7 +213,8 @@ const round6 = (inches: number) => Math.round(inches * 1e6) / 1e6;
  *
  * Sources: asme-b1-1.
  */
-export function unifiedClass2Limits({ nominalDiameter, pitch }: { nominalDiameter: number; pitch: number }): UnifiedClass2Limits {
+export function unifiedClass2Limits(input: { nominalDiameter: number; pitch: number }): UnifiedClass2Limits {
+  const { nominalDiameter, pitch } = requireInputObject(input);
   requireUnifiedPitch(nominalDiameter, pitch);
   if (!(nominalDiameter <= 6 * INCH)) {
     throw new CalcInputError({ param: "nominalDiameter", value: nominalDiameter, expected: `at most 6 in (${6 * INCH} m)`, unit: "m" });
@@ -513,7 +517,8 @@ export interface GradeForSize {
  *
  * Sources: sae-j429, astm-a574, iso-898-1.
  */
-export function gradeForSize({ grade, size }: { grade: string; size: string }): GradeForSize {
+export function gradeForSize(input: { grade: string; size: string }): GradeForSize {
+  const { grade, size } = requireInputObject(input);
   const thread = fastenerThread(size);
   const row = fastenerGrade(grade);
   if (row.system !== thread.system) {

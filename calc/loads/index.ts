@@ -16,6 +16,7 @@ import { requireChoice, type ChoiceOption } from "./common.ts";
 import { MATERIALS } from "../materials/materials.ts";
 import { MATERIAL_IDS, type MaterialId } from "../materials/densities.ts";
 import type { SourceKey } from "../sources/index.ts";
+import { requireInputObject } from "../core/spec-check.ts";
 
 export * from "./common.ts";
 export * from "./bolts.ts";
@@ -92,15 +93,12 @@ export const DEMO_WASHER_STACK = { mass: 0.042, radius: 0.055, rpm: 2400 } as co
  * Sources: newton-second-law, iso-898-1, shear-ultimate-ratio, carvill-data-handbook,
  * safety-factor-practice.
  */
-export function demoRobotLoads({
-  washerMass = DEMO_WASHER_STACK.mass,
-  washerRadius = DEMO_WASHER_STACK.radius,
-  topSpeed = rpmToRadPerSecond(DEMO_WASHER_STACK.rpm),
-}: {
-  washerMass?: number;
-  washerRadius?: number;
-  topSpeed?: number;
-} = {}): DemoRobotLoads {
+export function demoRobotLoads(input: { washerMass?: number; washerRadius?: number; topSpeed?: number } = {}): DemoRobotLoads {
+  const {
+    washerMass = DEMO_WASHER_STACK.mass,
+    washerRadius = DEMO_WASHER_STACK.radius,
+    topSpeed = rpmToRadPerSecond(DEMO_WASHER_STACK.rpm),
+  } = requireInputObject(input);
   const boltInput: FastenerCheckInput = {
     partMass: washerMass,
     radius: washerRadius,

@@ -1,5 +1,5 @@
 import { CalcInputError, requireInRange, requireNonNegative, requirePositive } from "../core/errors.ts";
-import { requireFiniteResult } from "../core/spec-check.ts";
+import { requireFiniteResult, requireInputObject } from "../core/spec-check.ts";
 
 // Joint stiffness and the share of an external tension.
 
@@ -21,19 +21,8 @@ import { requireFiniteResult } from "../core/spec-check.ts";
  *
  * Sources: shigley-mechanical-design.
  */
-export function boltStiffness({
-  shankArea,
-  stressArea,
-  shankLength,
-  threadLength,
-  youngsModulus,
-}: {
-  shankArea: number;
-  stressArea: number;
-  shankLength: number;
-  threadLength: number;
-  youngsModulus: number;
-}): number {
+export function boltStiffness(input: { shankArea: number; stressArea: number; shankLength: number; threadLength: number; youngsModulus: number }): number {
+  const { shankArea, stressArea, shankLength, threadLength, youngsModulus } = requireInputObject(input);
   requirePositive("shankArea", shankArea, "m²");
   requirePositive("stressArea", stressArea, "m²");
   requireNonNegative("shankLength", shankLength, "m");
@@ -66,15 +55,8 @@ export function boltStiffness({
  *
  * Sources: shigley-mechanical-design.
  */
-export function memberStiffness({
-  youngsModulus,
-  nominalDiameter,
-  gripLength,
-}: {
-  youngsModulus: number;
-  nominalDiameter: number;
-  gripLength: number;
-}): number {
+export function memberStiffness(input: { youngsModulus: number; nominalDiameter: number; gripLength: number }): number {
+  const { youngsModulus, nominalDiameter, gripLength } = requireInputObject(input);
   requirePositive("youngsModulus", youngsModulus, "Pa");
   requirePositive("nominalDiameter", nominalDiameter, "m");
   requirePositive("gripLength", gripLength, "m");
@@ -99,7 +81,8 @@ export function memberStiffness({
  *
  * Sources: shigley-mechanical-design.
  */
-export function jointStiffnessFactor({ boltStiffness: kb, memberStiffness: km }: { boltStiffness: number; memberStiffness: number }): number {
+export function jointStiffnessFactor(input: { boltStiffness: number; memberStiffness: number }): number {
+  const { boltStiffness: kb, memberStiffness: km } = requireInputObject(input);
   requirePositive("boltStiffness", kb, "N/m");
   requirePositive("memberStiffness", km, "N/m");
   return 1 / (1 + km / kb); // shigley-mechanical-design, C = k_b/(k_b + k_m), written so that no sum overflows
@@ -133,15 +116,8 @@ export interface TensionJointLoads {
  *
  * Sources: shigley-mechanical-design.
  */
-export function tensionJointLoads({
-  preload,
-  stiffnessFactor,
-  externalLoad,
-}: {
-  preload: number;
-  stiffnessFactor: number;
-  externalLoad: number;
-}): TensionJointLoads {
+export function tensionJointLoads(input: { preload: number; stiffnessFactor: number; externalLoad: number }): TensionJointLoads {
+  const { preload, stiffnessFactor, externalLoad } = requireInputObject(input);
   requireNonNegative("preload", preload, "N");
   requireInRange("stiffnessFactor", stiffnessFactor, "", { min: 0, max: 1, minOpen: true, maxOpen: true });
   requireNonNegative("externalLoad", externalLoad, "N");
@@ -186,17 +162,8 @@ export interface TensionJointFactors {
  *
  * Sources: shigley-mechanical-design.
  */
-export function tensionJointFactors({
-  preload,
-  stiffnessFactor,
-  externalLoad,
-  proofLoad,
-}: {
-  preload: number;
-  stiffnessFactor: number;
-  externalLoad: number;
-  proofLoad: number;
-}): TensionJointFactors {
+export function tensionJointFactors(input: { preload: number; stiffnessFactor: number; externalLoad: number; proofLoad: number }): TensionJointFactors {
+  const { preload, stiffnessFactor, externalLoad, proofLoad } = requireInputObject(input);
   requirePositive("externalLoad", externalLoad, "N");
   requirePositive("proofLoad", proofLoad, "N");
   const { boltLoad, separationLoad } = tensionJointLoads({ preload, stiffnessFactor, externalLoad });

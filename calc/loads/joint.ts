@@ -2,7 +2,7 @@
  * The bolted-joint check: preload, clamp and slip, the bolt in shear and bending or in tension,
  * and the thread in the part; which mode governs, its safety factor and a verdict with the reason.
  */
-import { requireDeclared } from "../core/spec-check.ts";
+import { requireDeclared, declaredInputs, requireFiniteFields } from "../core/spec-check.ts";
 import { STANDARD_GRAVITY } from "../core/constants.ts";
 import { CalcInputError, requireRelation } from "../core/errors.ts";
 import { requireChoice, requireMarginalAtLeastFail, type LoadVerdict, vonMisesStress } from "./common.ts";
@@ -267,33 +267,37 @@ export function boltedJointCheck(input: BoltedJointInput): BoltedJointCheck {
     reason = `The preload is ${n3(preload.shareOfProof)} × the proof load: the bolt yields while it is tightened.`;
   }
 
-  return {
-    size,
-    grade: strengths.id,
-    jointMode,
-    endCondition,
-    preloadFrom,
-    loadFrom,
-    threadIn,
-    memberMaterial,
-    thread,
-    strengths,
-    gradeWithinScope: withinScope,
-    gradeScopeNote: scopeNote,
-    part,
-    totalLoad,
-    loadPerBolt,
-    preload,
-    stiffness,
-    slip,
-    tension,
-    tappedThread,
-    safetyFactors,
-    governs,
-    safetyFactor,
-    verdict,
-    reason,
-  };
+  return requireFiniteFields(
+    {
+      size,
+      grade: strengths.id,
+      jointMode,
+      endCondition,
+      preloadFrom,
+      loadFrom,
+      threadIn,
+      memberMaterial,
+      thread,
+      strengths,
+      gradeWithinScope: withinScope,
+      gradeScopeNote: scopeNote,
+      part,
+      totalLoad,
+      loadPerBolt,
+      preload,
+      stiffness,
+      slip,
+      tension,
+      tappedThread,
+      safetyFactors,
+      governs,
+      safetyFactor,
+      verdict,
+      reason,
+    },
+    "joint figures",
+    () => declaredInputs(boltedJointInputs, input),
+  );
 }
 
 /** Source keys this module relies on. */

@@ -1,6 +1,6 @@
 import { requireInRange, requireNonNegative, requirePositive } from "../core/errors.ts";
 import { requireChoice, type ChoiceOption } from "./common.ts";
-import { requireFiniteResult } from "../core/spec-check.ts";
+import { requireFiniteResult, requireInputObject } from "../core/spec-check.ts";
 import { RECOMMENDED_PRELOAD_SHARE } from "./joint-data.ts";
 
 // Preload.
@@ -23,7 +23,8 @@ import { RECOMMENDED_PRELOAD_SHARE } from "./joint-data.ts";
  *
  * Sources: shigley-mechanical-design, bickford-bolted-joints.
  */
-export function preloadFromTorque({ torque, nutFactor, nominalDiameter }: { torque: number; nutFactor: number; nominalDiameter: number }): number {
+export function preloadFromTorque(input: { torque: number; nutFactor: number; nominalDiameter: number }): number {
+  const { torque, nutFactor, nominalDiameter } = requireInputObject(input);
   requireNonNegative("torque", torque, "N·m");
   requireInRange("nutFactor", nutFactor, "", { min: 0.01, max: 1 });
   requirePositive("nominalDiameter", nominalDiameter, "m");
@@ -45,7 +46,8 @@ export function preloadFromTorque({ torque, nutFactor, nominalDiameter }: { torq
  *
  * Sources: shigley-mechanical-design.
  */
-export function tighteningTorque({ preload, nutFactor, nominalDiameter }: { preload: number; nutFactor: number; nominalDiameter: number }): number {
+export function tighteningTorque(input: { preload: number; nutFactor: number; nominalDiameter: number }): number {
+  const { preload, nutFactor, nominalDiameter } = requireInputObject(input);
   requireNonNegative("preload", preload, "N");
   requireInRange("nutFactor", nutFactor, "", { min: 0.01, max: 1 });
   requirePositive("nominalDiameter", nominalDiameter, "m");
@@ -66,10 +68,11 @@ export function tighteningTorque({ preload, nutFactor, nominalDiameter }: { prel
  *
  * Sources: shigley-mechanical-design.
  */
-export function recommendedPreload({ proofLoad, use }: { proofLoad: number; use: "reusable" | "permanent" }): number {
+export function recommendedPreload(input: { proofLoad: number; use: "reusable" | "permanent" }): number {
+  const { proofLoad, use } = requireInputObject(input);
   requirePositive("proofLoad", proofLoad, "N");
   const share = RECOMMENDED_PRELOAD_SHARE[requireChoice("use", use, USE_OPTIONS)];
-  return share * proofLoad; // shigley-mechanical-design Eq. 8-31
+  return requireFiniteResult(share * proofLoad, "recommended preload", { proofLoad: [proofLoad, "N"] }); // shigley-mechanical-design Eq. 8-31
 }
 
 const USE_OPTIONS = [

@@ -4,7 +4,7 @@
  * it yields and is estimated to burst, and a verdict. Re-exported by calc/loads/index.ts. SI in and out.
  */
 import { requireInRange, requireNonNegative, requirePositive, requireRelation } from "../core/errors.ts";
-import { requireDeclared } from "../core/spec-check.ts";
+import { type NamedValue, requireDeclared, requireFiniteFields, requireFiniteResult, requireInputObject, declaredInputs } from "../core/spec-check.ts";
 import { defineInputs } from "../core/inputs.ts";
 import { rpmToRadPerSecond } from "../core/units.ts";
 import type { MaterialId } from "../materials/densities.ts";
@@ -19,6 +19,11 @@ import {
   type ChoiceOption,
   type LoadVerdict,
 } from "./common.ts";
+
+/** A spinning body's inputs by name, for the finiteness guard. */
+function spinningInputs(density: number, angularSpeed: number, radius: number, radiusName = "outerRadius"): Record<string, NamedValue> {
+  return { density: [density, "kg/m³"], angularSpeed: [angularSpeed, "rad/s"], [radiusName]: [radius, "m"] };
+}
 
 // ---------------------------------------------------------------------------------------------
 // Spinning rings and disks.
@@ -36,10 +41,11 @@ import {
  * tipSpeed({ angularSpeed: rpmToRadPerSecond(2400), radius: 0.125 }) // → 31.4 [m/s]
  * Sources: openstax-college-physics.
  */
-export function tipSpeed({ angularSpeed, radius }: { angularSpeed: number; radius: number }): number {
+export function tipSpeed(input: { angularSpeed: number; radius: number }): number {
+  const { angularSpeed, radius } = requireInputObject(input);
   requireNonNegative("angularSpeed", angularSpeed, "rad/s");
   requireNonNegative("radius", radius, "m");
-  return angularSpeed * radius; // openstax-college-physics
+  return requireFiniteResult(angularSpeed * radius, "tip speed", { angularSpeed: [angularSpeed, "rad/s"], radius: [radius, "m"] }); // openstax-college-physics
 }
 
 interface SpinningBody {
@@ -76,10 +82,11 @@ function requirePoisson(poisson: number): void {
  * Sources: carvill-data-handbook,
  * timoshenko-goodier.
  */
-export function thinRingHoopStress({ density, angularSpeed, radius }: SpinningBody & { radius: number }): number {
+export function thinRingHoopStress(input: SpinningBody & { radius: number }): number {
+  const { density, angularSpeed, radius } = requireInputObject(input);
   requireSpinningBody({ density, angularSpeed });
   const v = tipSpeed({ angularSpeed, radius });
-  return density * v * v; // carvill-data-handbook §1.2.7
+  return requireFiniteResult(density * v * v, "hoop stress", spinningInputs(density, angularSpeed, radius, "radius")); // carvill-data-handbook §1.2.7
 }
 
 /**
@@ -97,10 +104,11 @@ export function thinRingHoopStress({ density, angularSpeed, radius }: SpinningBo
  * thinRingLimitTipSpeed({ density: 2700, strength: 310e6 }) // → 338.8 [m/s] (6061-T6)
  * Sources: carvill-data-handbook.
  */
-export function thinRingLimitTipSpeed({ density, strength }: { density: number; strength: number }): number {
+export function thinRingLimitTipSpeed(input: { density: number; strength: number }): number {
+  const { density, strength } = requireInputObject(input);
   requirePositive("density", density, "kg/m³");
   requirePositive("strength", strength, "Pa");
-  return Math.sqrt(strength / density); // carvill-data-handbook §1.2.7
+  return requireFiniteResult(Math.sqrt(strength / density), "limit tip speed", { density: [density, "kg/m³"], strength: [strength, "Pa"] }); // carvill-data-handbook §1.2.7
 }
 
 /** Radial and hoop stress at one radius of a spinning disk [Pa]. */
@@ -130,22 +138,21 @@ export interface DiskStress {
  * solidDiskStress({ density: 7850, poisson: 0.3, angularSpeed: rpmToRadPerSecond(10000), outerRadius: 0.1, radius: 0.1 }) // → { hoop: 15.06e6, … } (rim)
  * Sources: timoshenko-goodier, roark-rotating-disks, carvill-data-handbook.
  */
-export function solidDiskStress({
-  density,
-  poisson,
-  angularSpeed,
-  outerRadius,
-  radius,
-}: SpinningBody & { poisson: number; outerRadius: number; radius: number }): DiskStress {
+export function solidDiskStress(input: SpinningBody & { poisson: number; outerRadius: number; radius: number }): DiskStress {
+  const { density, poisson, angularSpeed, outerRadius, radius } = requireInputObject(input);
   requireSpinningBody({ density, angularSpeed });
   requirePoisson(poisson);
   requirePositive("outerRadius", outerRadius, "m");
   requireInRange("radius", radius, "m", { min: 0, max: outerRadius });
   const q = density * angularSpeed * angularSpeed;
-  return {
-    radial: ((3 + poisson) / 8) * q * (outerRadius * outerRadius - radius * radius), // timoshenko-goodier
-    hoop: (q / 8) * ((3 + poisson) * outerRadius * outerRadius - (1 + 3 * poisson) * radius * radius), // timoshenko-goodier
-  };
+  return requireFiniteFields(
+    {
+      radial: ((3 + poisson) / 8) * q * (outerRadius * outerRadius - radius * radius), // timoshenko-goodier
+      hoop: (q / 8) * ((3 + poisson) * outerRadius * outerRadius - (1 + 3 * poisson) * radius * radius), // timoshenko-goodier
+    },
+    "solid disk stress",
+    { outerRadius: [outerRadius, "m"], radius: [radius, "m"] },
+  );
 }
 
 /**
@@ -164,7 +171,8 @@ export function solidDiskStress({
  * solidDiskCentreStress({ density: 7850, poisson: 0.3, angularSpeed: rpmToRadPerSecond(10000), outerRadius: 0.1 }) // → 35.51e6 [Pa] (steel)
  * Sources: carvill-data-handbook, timoshenko-goodier, roark-rotating-disks.
  */
-export function solidDiskCentreStress({ density, poisson, angularSpeed, outerRadius }: SpinningBody & { poisson: number; outerRadius: number }): number {
+export function solidDiskCentreStress(input: SpinningBody & { poisson: number; outerRadius: number }): number {
+  const { density, poisson, angularSpeed, outerRadius } = requireInputObject(input);
   return solidDiskStress({ density, poisson, angularSpeed, outerRadius, radius: 0 }).hoop;
 }
 
@@ -193,14 +201,8 @@ function requireBore(innerRadius: number, outerRadius: number): void {
  * annularDiskStress({ density: 7850, poisson: 0.3, angularSpeed: rpmToRadPerSecond(10000), innerRadius: 0.01, outerRadius: 0.1, radius: 0.01 }) // → { hoop: 71.17e6, … } (steel, at the bore)
  * Sources: timoshenko-goodier, roark-rotating-disks.
  */
-export function annularDiskStress({
-  density,
-  poisson,
-  angularSpeed,
-  innerRadius,
-  outerRadius,
-  radius,
-}: SpinningBody & { poisson: number; innerRadius: number; outerRadius: number; radius: number }): DiskStress {
+export function annularDiskStress(input: SpinningBody & { poisson: number; innerRadius: number; outerRadius: number; radius: number }): DiskStress {
+  const { density, poisson, angularSpeed, innerRadius, outerRadius, radius } = requireInputObject(input);
   requireSpinningBody({ density, angularSpeed });
   requirePoisson(poisson);
   requireBore(innerRadius, outerRadius);
@@ -209,10 +211,14 @@ export function annularDiskStress({
   const a2 = innerRadius * innerRadius;
   const b2 = outerRadius * outerRadius;
   const r2 = radius * radius;
-  return {
-    radial: ((3 + poisson) / 8) * q * (b2 + a2 - (a2 * b2) / r2 - r2), // timoshenko-goodier
-    hoop: ((3 + poisson) / 8) * q * (b2 + a2 + (a2 * b2) / r2) - ((1 + 3 * poisson) / 8) * q * r2, // timoshenko-goodier
-  };
+  return requireFiniteFields(
+    {
+      radial: ((3 + poisson) / 8) * q * (b2 + a2 - (a2 * b2) / r2 - r2), // timoshenko-goodier
+      hoop: ((3 + poisson) / 8) * q * (b2 + a2 + (a2 * b2) / r2) - ((1 + 3 * poisson) / 8) * q * r2, // timoshenko-goodier
+    },
+    "annular disk stress",
+    { radius: [radius, "m"] },
+  );
 }
 
 /**
@@ -233,18 +239,14 @@ export function annularDiskStress({
  * annularDiskBoreStress({ density: 7850, poisson: 0.3, angularSpeed: rpmToRadPerSecond(10000), innerRadius: 0.01, outerRadius: 0.1 }) // → 71.17e6 [Pa] (steel)
  * Sources: timoshenko-goodier, roark-rotating-disks.
  */
-export function annularDiskBoreStress({
-  density,
-  poisson,
-  angularSpeed,
-  innerRadius,
-  outerRadius,
-}: SpinningBody & { poisson: number; innerRadius: number; outerRadius: number }): number {
+export function annularDiskBoreStress(input: SpinningBody & { poisson: number; innerRadius: number; outerRadius: number }): number {
+  const { density, poisson, angularSpeed, innerRadius, outerRadius } = requireInputObject(input);
   requireSpinningBody({ density, angularSpeed });
   requirePoisson(poisson);
   requireBore(innerRadius, outerRadius);
   const q = density * angularSpeed * angularSpeed;
-  return (q / 4) * ((3 + poisson) * outerRadius * outerRadius + (1 - poisson) * innerRadius * innerRadius); // timoshenko-goodier
+  const stress = (q / 4) * ((3 + poisson) * outerRadius * outerRadius + (1 - poisson) * innerRadius * innerRadius); // timoshenko-goodier
+  return requireFiniteResult(stress, "bore stress", spinningInputs(density, angularSpeed, outerRadius));
 }
 
 /**
@@ -264,21 +266,20 @@ export function annularDiskBoreStress({
  * annularDiskPeakRadialStress({ density: 7850, poisson: 0.3, angularSpeed: rpmToRadPerSecond(10000), innerRadius: 0.01, outerRadius: 0.1 }) // → { stress: 28.76e6, radius: 0.0316 } (steel)
  * Sources: timoshenko-goodier.
  */
-export function annularDiskPeakRadialStress({
-  density,
-  poisson,
-  angularSpeed,
-  innerRadius,
-  outerRadius,
-}: SpinningBody & { poisson: number; innerRadius: number; outerRadius: number }): { stress: number; radius: number } {
+export function annularDiskPeakRadialStress(input: SpinningBody & { poisson: number; innerRadius: number; outerRadius: number }): {
+  stress: number;
+  radius: number;
+} {
+  const { density, poisson, angularSpeed, innerRadius, outerRadius } = requireInputObject(input);
   requireSpinningBody({ density, angularSpeed });
   requirePoisson(poisson);
   requireBore(innerRadius, outerRadius);
   const gap = outerRadius - innerRadius;
-  return {
+  const peak = {
     stress: ((3 + poisson) / 8) * density * angularSpeed * angularSpeed * gap * gap, // timoshenko-goodier
     radius: Math.sqrt(innerRadius * outerRadius),
   };
+  return requireFiniteFields(peak, "peak radial stress", spinningInputs(density, angularSpeed, outerRadius));
 }
 
 /** Shapes the rim check knows. */
@@ -470,6 +471,7 @@ function peakStresses(
  * safety-factor-practice.
  */
 export function rimCheck(input: RimCheckInput): RimCheck {
+  requireInputObject(input);
   const shape = requireChoice("shape", input.shape, RIM_SHAPE_OPTIONS);
   const outerRadius = requireDeclared(rimCheckInputs.outerRadius, "outerRadius", input.outerRadius);
   requireDeclared(rimCheckInputs.innerRadius, "innerRadius", input.innerRadius);
@@ -490,22 +492,26 @@ export function rimCheck(input: RimCheckInput): RimCheck {
   const safetyFactorYield = safetyFactor({ strength: yieldStrength, stress: peak.hoop });
   const safetyFactorUltimate = safetyFactor({ strength: ultimateStrength, stress: peak.hoop });
   const speedAtUltimate = speedAtStress({ angularSpeed, stress: peak.hoop, strength: ultimateStrength });
-  return {
-    shape,
-    tipSpeed: v,
-    peakStress: peak.hoop,
-    peakStressRadius: peak.hoopRadius,
-    shapeFactor: peak.hoop / (density * v * v),
-    peakRadialStress: peak.radial,
-    peakRadialStressRadius: peak.radialRadius,
-    safetyFactorYield,
-    safetyFactorUltimate,
-    safetyFactor: safetyFactorYield,
-    speedAtYield: speedAtStress({ angularSpeed, stress: peak.hoop, strength: yieldStrength }),
-    speedAtUltimate,
-    tipSpeedAtUltimate: speedAtUltimate * outerRadius,
-    verdict: safetyVerdict({ safetyFactor: safetyFactorYield, failBelow, marginalBelow }),
-  };
+  return requireFiniteFields(
+    {
+      shape,
+      tipSpeed: v,
+      peakStress: peak.hoop,
+      peakStressRadius: peak.hoopRadius,
+      shapeFactor: peak.hoop / (density * v * v),
+      peakRadialStress: peak.radial,
+      peakRadialStressRadius: peak.radialRadius,
+      safetyFactorYield,
+      safetyFactorUltimate,
+      safetyFactor: safetyFactorYield,
+      speedAtYield: speedAtStress({ angularSpeed, stress: peak.hoop, strength: yieldStrength }),
+      speedAtUltimate,
+      tipSpeedAtUltimate: speedAtUltimate * outerRadius,
+      verdict: safetyVerdict({ safetyFactor: safetyFactorYield, failBelow, marginalBelow }),
+    },
+    "rim figures",
+    () => declaredInputs(rimCheckInputs, input),
+  );
 }
 
 /** One point of a disk stress distribution. */
@@ -526,10 +532,11 @@ export interface DiskStressPoint extends DiskStress {
  *
  * Sources: timoshenko-goodier, roark-rotating-disks, carvill-data-handbook.
  */
-export function rimStressProfile(input: RimCheckInput, { points = 41 }: { points?: number } = {}): DiskStressPoint[] {
+export function rimStressProfile(input: RimCheckInput, options: { points?: number } = {}): DiskStressPoint[] {
+  const { points = 41 } = requireInputObject(options);
   requirePointCount(points);
   const { shape } = rimCheck(input); // validates every field
-  const { density, poisson, angularSpeed, innerRadius, outerRadius } = input;
+  const { density, poisson, angularSpeed, innerRadius, outerRadius } = requireInputObject(input);
   if (shape === "thin-ring") {
     return [{ radius: outerRadius, radial: 0, hoop: thinRingHoopStress({ density, angularSpeed, radius: outerRadius }) }];
   }

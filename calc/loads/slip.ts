@@ -1,6 +1,6 @@
 import { CalcInputError, requireInRange, requireNonNegative, requirePositive } from "../core/errors.ts";
 import { requireChoice, type ChoiceOption } from "./common.ts";
-import { requireFiniteResult } from "../core/spec-check.ts";
+import { requireFiniteResult, requireInputObject } from "../core/spec-check.ts";
 
 // Clamp and slip; the bolt once it slips.
 
@@ -24,17 +24,8 @@ import { requireFiniteResult } from "../core/spec-check.ts";
  *
  * Sources: en-1090-2, en-1993-1-8, shigley-mechanical-design.
  */
-export function slipResistance({
-  preload,
-  frictionCoefficient,
-  boltCount,
-  interfaces,
-}: {
-  preload: number;
-  frictionCoefficient: number;
-  boltCount: number;
-  interfaces: number;
-}): number {
+export function slipResistance(input: { preload: number; frictionCoefficient: number; boltCount: number; interfaces: number }): number {
+  const { preload, frictionCoefficient, boltCount, interfaces } = requireInputObject(input);
   requireNonNegative("preload", preload, "N");
   requireInRange("frictionCoefficient", frictionCoefficient, "", { min: 0, max: 1.5, minOpen: true });
   requireWholeCount("boltCount", boltCount);
@@ -75,7 +66,8 @@ export type EndCondition = (typeof END_CONDITION_OPTIONS)[number]["value"];
  *
  * Sources: roark-beams.
  */
-export function boltBendingMoment({ force, height, endCondition }: { force: number; height: number; endCondition: string }): number {
+export function boltBendingMoment(input: { force: number; height: number; endCondition: string }): number {
+  const { force, height, endCondition } = requireInputObject(input);
   requireNonNegative("force", force, "N");
   requireNonNegative("height", height, "m");
   const condition = requireChoice("endCondition", endCondition, END_CONDITION_OPTIONS);
@@ -98,7 +90,8 @@ export function boltBendingMoment({ force, height, endCondition }: { force: numb
  *
  * Sources: roark-beams, shigley-mechanical-design.
  */
-export function rootBendingStress({ moment, rootDiameter }: { moment: number; rootDiameter: number }): number {
+export function rootBendingStress(input: { moment: number; rootDiameter: number }): number {
+  const { moment, rootDiameter } = requireInputObject(input);
   requireNonNegative("moment", moment, "N·m");
   requirePositive("rootDiameter", rootDiameter, "m");
   const stress = (32 * moment) / (Math.PI * rootDiameter ** 3); // roark-beams, σ = M/Z with Z = πd³/32
@@ -121,11 +114,15 @@ export function rootBendingStress({ moment, rootDiameter }: { moment: number; ro
  *
  * Sources: en-1993-1-8.
  */
-export function eurocodePackingFactor({ nominalDiameter, packingThickness }: { nominalDiameter: number; packingThickness: number }): number {
+export function eurocodePackingFactor(input: { nominalDiameter: number; packingThickness: number }): number {
+  const { nominalDiameter, packingThickness } = requireInputObject(input);
   requirePositive("nominalDiameter", nominalDiameter, "m");
   requireNonNegative("packingThickness", packingThickness, "m");
   const ratio = packingThickness / nominalDiameter;
-  return Math.min(1, 9 / (8 + 3 * ratio)); // en-1993-1-8: β_p = 9d/(8d + 3t_p) ≤ 1
+  return requireFiniteResult(Math.min(1, 9 / (8 + 3 * ratio)), "packing factor", {
+    nominalDiameter: [nominalDiameter, "m"],
+    packingThickness: [packingThickness, "m"],
+  }); // en-1993-1-8: β_p = 9d/(8d + 3t_p) ≤ 1
 }
 
 // ---------------------------------------------------------------------------------------------

@@ -1,6 +1,6 @@
 import { CalcInputError, requirePositive } from "../core/errors.ts";
 import type { FastenerThread } from "./inch-fasteners.ts";
-import { requireFiniteResult } from "../core/spec-check.ts";
+import { requireFiniteResult, requireInputObject } from "../core/spec-check.ts";
 import { MATERIAL_SHEAR_RATIO } from "./joint-data.ts";
 
 // The thread in the part.
@@ -25,17 +25,8 @@ import { MATERIAL_SHEAR_RATIO } from "./joint-data.ts";
  *
  * Sources: fed-std-h28-2, machinerys-handbook.
  */
-export function internalThreadShearArea({
-  engagedLength,
-  pitch,
-  externalMajorMin,
-  internalPitchMax,
-}: {
-  engagedLength: number;
-  pitch: number;
-  externalMajorMin: number;
-  internalPitchMax: number;
-}): number {
+export function internalThreadShearArea(input: { engagedLength: number; pitch: number; externalMajorMin: number; internalPitchMax: number }): number {
+  const { engagedLength, pitch, externalMajorMin, internalPitchMax } = requireInputObject(input);
   requirePositive("engagedLength", engagedLength, "m");
   requirePositive("pitch", pitch, "m");
   requirePositive("externalMajorMin", externalMajorMin, "m");
@@ -67,9 +58,10 @@ export function internalThreadShearArea({
  *
  * Sources: ifi-shear-rule, aluminum-association-typical.
  */
-export function materialShearStrength({ ultimateStrength }: { ultimateStrength: number }): number {
+export function materialShearStrength(input: { ultimateStrength: number }): number {
+  const { ultimateStrength } = requireInputObject(input);
   requirePositive("ultimateStrength", ultimateStrength, "Pa");
-  return MATERIAL_SHEAR_RATIO * ultimateStrength; // ifi-shear-rule
+  return requireFiniteResult(MATERIAL_SHEAR_RATIO * ultimateStrength, "shear strength", { ultimateStrength: [ultimateStrength, "Pa"] }); // ifi-shear-rule
 }
 
 /** Stripping of a thread tapped into a part. */
@@ -106,17 +98,14 @@ export interface TappedThreadStrength {
  *
  * Sources: fed-std-h28-2, machinerys-handbook, ifi-shear-rule.
  */
-export function tappedThreadStrength({
-  thread,
-  boltTensileStrength,
-  partUltimateStrength,
-  engagedLength,
-}: {
+export function tappedThreadStrength(input: {
   thread: FastenerThread;
   boltTensileStrength: number;
   partUltimateStrength: number;
   engagedLength: number;
 }): TappedThreadStrength {
+  const { thread, boltTensileStrength, partUltimateStrength, engagedLength } = requireInputObject(input);
+  requireInputObject(thread, "thread");
   requirePositive("boltTensileStrength", boltTensileStrength, "Pa");
   const shearStrength = materialShearStrength({ ultimateStrength: partUltimateStrength });
   const geometry = { pitch: thread.pitch, externalMajorMin: thread.externalMajorMin, internalPitchMax: thread.internalPitchMax };

@@ -7,6 +7,7 @@ import { CalcInputError, requireFinite, requireNonNegative, requirePositive } fr
 
 import { requireCoordinate, requireLength } from "./parts.ts";
 import { directionOf } from "./parts.ts";
+import { requireInputObject, requireFiniteFields, requireFiniteResult } from "../core/spec-check.ts";
 
 // ---------------------------------------------------------------------------------------------
 // Balance: static unbalance, balance quality grade, couple unbalance, two-plane correction.
@@ -36,12 +37,17 @@ export interface StaticUnbalance {
  * staticUnbalance({ totalMass: 1.4, offset: 0.002, angularSpeed: rpmToRadPerSecond(2400) }) // → { unbalance: 0.0028, force: 176.9 } (U = 2800 g·mm)
  * Sources: rigid-rotor-unbalance, newton-second-law.
  */
-export function staticUnbalance({ totalMass, offset, angularSpeed }: { totalMass: number; offset: number; angularSpeed: number }): StaticUnbalance {
+export function staticUnbalance(input: { totalMass: number; offset: number; angularSpeed: number }): StaticUnbalance {
+  const { totalMass, offset, angularSpeed } = requireInputObject(input);
   requirePositive("totalMass", totalMass, "kg");
   requireNonNegative("offset", offset, "m");
   requireNonNegative("angularSpeed", angularSpeed, "rad/s");
   const unbalance = totalMass * offset;
-  return { unbalance, force: unbalance * angularSpeed * angularSpeed };
+  return requireFiniteFields({ unbalance, force: unbalance * angularSpeed * angularSpeed }, "static unbalance", {
+    totalMass: [totalMass, "kg"],
+    offset: [offset, "m"],
+    angularSpeed: [angularSpeed, "rad/s"],
+  });
 }
 
 /** One standard balance quality grade. */
@@ -75,10 +81,11 @@ export const BALANCE_GRADES: readonly BalanceGrade[] = [0.4, 1, 2.5, 6.3, 16, 40
  * equivalentBalanceGrade({ offset: 20.05e-6, angularSpeed: rpmToRadPerSecond(3000) }) // → 0.00630 [m/s] (G 6.3)
  * Sources: iso-21940-11.
  */
-export function equivalentBalanceGrade({ offset, angularSpeed }: { offset: number; angularSpeed: number }): number {
+export function equivalentBalanceGrade(input: { offset: number; angularSpeed: number }): number {
+  const { offset, angularSpeed } = requireInputObject(input);
   requireNonNegative("offset", offset, "m");
   requireNonNegative("angularSpeed", angularSpeed, "rad/s");
-  return offset * angularSpeed;
+  return requireFiniteResult(offset * angularSpeed, "balance grade", { offset: [offset, "m"], angularSpeed: [angularSpeed, "rad/s"] });
 }
 
 /**
@@ -145,21 +152,18 @@ export interface PermissibleUnbalance {
  * permissibleResidualUnbalance({ totalMass: 453.59237, grade: 0.0025, angularSpeed: rpmToRadPerSecond(15000) }) // → { unbalance: 7.219e-4, perPlane: 3.610e-4, … } (1000 lb at 15 000 rpm, G 2.5: 721.9 g·mm = 1.003 oz·in, 0.501 oz·in per plane)
  * Sources: iso-21940-11, energy-tech-balancing-example, bloch-geitner-machinery-maintenance.
  */
-export function permissibleResidualUnbalance({
-  totalMass,
-  grade,
-  angularSpeed,
-}: {
-  totalMass: number;
-  grade: number;
-  angularSpeed: number;
-}): PermissibleUnbalance {
+export function permissibleResidualUnbalance(input: { totalMass: number; grade: number; angularSpeed: number }): PermissibleUnbalance {
+  const { totalMass, grade, angularSpeed } = requireInputObject(input);
   requirePositive("totalMass", totalMass, "kg");
   requirePositive("grade", grade, "m/s");
   requirePositive("angularSpeed", angularSpeed, "rad/s");
   const specificUnbalance = grade / angularSpeed;
   const unbalance = totalMass * specificUnbalance;
-  return { unbalance, specificUnbalance, perPlane: unbalance / 2 };
+  return requireFiniteFields({ unbalance, specificUnbalance, perPlane: unbalance / 2 }, "permissible unbalance", {
+    totalMass: [totalMass, "kg"],
+    grade: [grade, "m/s"],
+    angularSpeed: [angularSpeed, "rad/s"],
+  });
 }
 
 export interface CoupleUnbalance {
@@ -189,12 +193,17 @@ export interface CoupleUnbalance {
  * coupleUnbalance({ productXZ: 1e-5, productYZ: 0, angularSpeed: rpmToRadPerSecond(2400) }) // → { couple: 1.0e-5, moment: 0.632, … }
  * Sources: rigid-rotor-unbalance.
  */
-export function coupleUnbalance({ productXZ, productYZ, angularSpeed }: { productXZ: number; productYZ: number; angularSpeed: number }): CoupleUnbalance {
+export function coupleUnbalance(input: { productXZ: number; productYZ: number; angularSpeed: number }): CoupleUnbalance {
+  const { productXZ, productYZ, angularSpeed } = requireInputObject(input);
   requireFinite("productXZ", productXZ, "kg·m²");
   requireFinite("productYZ", productYZ, "kg·m²");
   requireNonNegative("angularSpeed", angularSpeed, "rad/s");
   const couple = Math.hypot(productXZ, productYZ);
-  return { couple, moment: angularSpeed * angularSpeed * couple, angle: couple > 0 ? directionOf(productXZ, productYZ) : 0 };
+  return requireFiniteFields(
+    { couple, moment: angularSpeed * angularSpeed * couple, angle: couple > 0 ? directionOf(productXZ, productYZ) : 0 },
+    "couple unbalance",
+    { productXZ: [productXZ, "kg·m²"], productYZ: [productYZ, "kg·m²"], angularSpeed: [angularSpeed, "rad/s"] },
+  );
 }
 
 /** A correction mass at a point. */
@@ -253,7 +262,7 @@ export function twoPlaneCorrection(input: {
   planeZ2: number;
   radius: number;
 }): TwoPlaneCorrection {
-  const { firstMomentX: ux, firstMomentY: uy, productXZ: cx, productYZ: cy, planeZ1: z1, planeZ2: z2, radius } = input;
+  const { firstMomentX: ux, firstMomentY: uy, productXZ: cx, productYZ: cy, planeZ1: z1, planeZ2: z2, radius } = requireInputObject(input);
   requireFinite("firstMomentX", ux, "kg·m");
   requireFinite("firstMomentY", uy, "kg·m");
   requireFinite("productXZ", cx, "kg·m²");
@@ -270,8 +279,16 @@ export function twoPlaneCorrection(input: {
     const angle = unbalance > 0 ? directionOf(vx, vy) : 0;
     return { mass: unbalance / radius, angle, x: radius * Math.cos(angle), y: radius * Math.sin(angle), z, unbalance };
   };
-  return {
-    lower: place((z2 * ux - cx) / span, (z2 * uy - cy) / span, z1),
-    upper: place((cx - z1 * ux) / span, (cy - z1 * uy) / span, z2),
-  };
+  return requireFiniteFields(
+    { lower: place((z2 * ux - cx) / span, (z2 * uy - cy) / span, z1), upper: place((cx - z1 * ux) / span, (cy - z1 * uy) / span, z2) },
+    "correction mass",
+    {
+      radius: [radius, "m"],
+      firstMomentX: [ux, "kg·m"],
+      firstMomentY: [uy, "kg·m"],
+      productXZ: [cx, "kg·m²"],
+      productYZ: [cy, "kg·m²"],
+      planeZ2: [z2 - z1, "m"],
+    },
+  );
 }

@@ -8,6 +8,7 @@ import { CalcInputError, requireInRange, requirePositive } from "../core/errors.
 import { type LayoutPart, MAX_PART_MASS, checkPart, requireCoordinate, requireLength } from "./parts.ts";
 import { directionOf } from "./parts.ts";
 import { type MassProperties, massProperties } from "./properties.ts";
+import { type NamedValue, requireFiniteFields, requireInputObject } from "../core/spec-check.ts";
 
 // ---------------------------------------------------------------------------------------------
 // Counterweights: bring the centre of mass back within a target offset.
@@ -29,6 +30,11 @@ function checkCentre({ totalMass, centreX, centreY, targetOffset }: CentreInput)
   requireCoordinate("centreY", centreY);
   requirePositive("targetOffset", targetOffset, "m");
   return Math.hypot(centreX, centreY);
+}
+
+/** The centre inputs by name, for the finiteness guard. */
+function centreInputs(input: CentreInput, extra: Record<string, NamedValue> = {}): Record<string, NamedValue> {
+  return { totalMass: [input.totalMass, "kg"], targetOffset: [input.targetOffset, "m"], ...extra };
 }
 
 /** Plan offset of the centre of mass after adding mass m at (px, py). */
@@ -74,19 +80,21 @@ export interface CounterweightAtRadius {
  * Sources: centre-of-mass.
  */
 export function counterweightAtRadius(input: CentreInput & { radius: number }): CounterweightAtRadius {
-  const e = checkCentre(input);
-  const { totalMass, centreX, centreY, targetOffset, radius } = input;
+  const e = checkCentre(requireInputObject(input));
+  const { totalMass, centreX, centreY, targetOffset, radius } = requireInputObject(input);
   requireLength("radius", radius);
   const angle = e > 0 ? directionOf(-centreX, -centreY) : 0;
   const x = radius * Math.cos(angle);
   const y = radius * Math.sin(angle);
   const massForZero = (totalMass * e) / radius;
   const maxMass = radius > targetOffset ? (totalMass * (e + targetOffset)) / (radius - targetOffset) : null;
+  const named = centreInputs(input, { radius: [radius, "m"] });
   if (e <= targetOffset) {
-    return { status: "not-needed", mass: 0, massForZero, maxMass, angle, x, y, offsetAfter: e };
+    return requireFiniteFields({ status: "not-needed", mass: 0, massForZero, maxMass, angle, x, y, offsetAfter: e }, "counterweight", named);
   }
   const mass = (totalMass * (e - targetOffset)) / (radius + targetOffset);
-  return { status: "placed", mass, massForZero, maxMass, angle, x, y, offsetAfter: offsetWith(totalMass, centreX, centreY, mass, x, y) };
+  const offsetAfter = offsetWith(totalMass, centreX, centreY, mass, x, y);
+  return requireFiniteFields({ status: "placed", mass, massForZero, maxMass, angle, x, y, offsetAfter }, "counterweight", named);
 }
 
 export interface CounterweightForMass {
@@ -136,8 +144,8 @@ export interface CounterweightForMass {
  * Sources: centre-of-mass.
  */
 export function counterweightRadiusForMass(input: CentreInput & { mass: number; maxRadius: number }): CounterweightForMass {
-  const e = checkCentre(input);
-  const { totalMass, centreX, centreY, targetOffset, mass, maxRadius } = input;
+  const e = checkCentre(requireInputObject(input));
+  const { totalMass, centreX, centreY, targetOffset, mass, maxRadius } = requireInputObject(input);
   requirePositive("mass", mass, "kg");
   requireInRange("mass", mass, "kg", { min: 0, max: MAX_PART_MASS, minOpen: true });
   requireLength("maxRadius", maxRadius);
@@ -147,12 +155,20 @@ export function counterweightRadiusForMass(input: CentreInput & { mass: number; 
   const maxRadiusWithinTarget = (totalMass * e + targetOffset * (totalMass + mass)) / mass;
   const status: CounterweightForMass["status"] = e <= targetOffset ? "not-needed" : minRadius > maxRadius ? "too-far-out" : "placed";
   if (status === "too-far-out") {
-    return { status, radius: null, radiusForZero, minRadius, maxRadiusWithinTarget, angle, x: null, y: null, offsetAfter: null };
+    return requireFiniteFields(
+      { status, radius: null, radiusForZero, minRadius, maxRadiusWithinTarget, angle, x: null, y: null, offsetAfter: null },
+      "counterweight",
+      centreInputs(input, { mass: [mass, "kg"] }),
+    );
   }
   const radius = Math.min(radiusForZero, maxRadius);
   const x = radius * Math.cos(angle);
   const y = radius * Math.sin(angle);
-  return { status, radius, radiusForZero, minRadius, maxRadiusWithinTarget, angle, x, y, offsetAfter: offsetWith(totalMass, centreX, centreY, mass, x, y) };
+  return requireFiniteFields(
+    { status, radius, radiusForZero, minRadius, maxRadiusWithinTarget, angle, x, y, offsetAfter: offsetWith(totalMass, centreX, centreY, mass, x, y) },
+    "counterweight",
+    centreInputs(input, { mass: [mass, "kg"] }),
+  );
 }
 
 /** A mounting point offered for a counterweight [m]. */
@@ -204,8 +220,8 @@ export interface CandidateChoice {
  * Sources: centre-of-mass.
  */
 export function counterweightAtCandidates(input: CentreInput & { candidates: readonly MountingPoint[] }): CandidateChoice {
-  const e = checkCentre(input);
-  const { totalMass: M, centreX: cx, centreY: cy, targetOffset: et, candidates } = input;
+  const e = checkCentre(requireInputObject(input));
+  const { totalMass: M, centreX: cx, centreY: cy, targetOffset: et, candidates } = requireInputObject(input);
   if (!Array.isArray(candidates) || candidates.length === 0 || candidates.length > 100) {
     throw new CalcInputError({
       param: "candidates",
@@ -215,6 +231,7 @@ export function counterweightAtCandidates(input: CentreInput & { candidates: rea
     });
   }
   const results = candidates.map((c, index): CandidateResult => {
+    requireInputObject(c, `candidates[${index}]`);
     requireCoordinate(`candidates[${index}].x`, c.x);
     requireCoordinate(`candidates[${index}].y`, c.y);
     if (e <= et) return { index, x: c.x, y: c.y, feasible: true, mass: 0, offsetAfter: e, reason: "already within target" };
@@ -239,7 +256,7 @@ export function counterweightAtCandidates(input: CentreInput & { candidates: rea
   });
   let best: number | null = null;
   for (const r of results) if (r.feasible && (best === null || r.mass! < results[best]!.mass!)) best = r.index;
-  return { best, candidates: results };
+  return requireFiniteFields({ best, candidates: results }, "counterweight", centreInputs(input));
 }
 
 export interface AppliedCounterweight {
@@ -266,14 +283,7 @@ export interface AppliedCounterweight {
  * inertia about the centre of mass unchanged; any other height adds couple unbalance.
  * Sources: centre-of-mass, parallel-axis-theorem.
  */
-export function applyCounterweight({
-  parts,
-  mass,
-  x,
-  y,
-  z,
-  name = "counterweight",
-}: {
+export function applyCounterweight(input: {
   parts: readonly LayoutPart[];
   mass: number;
   x: number;
@@ -281,6 +291,7 @@ export function applyCounterweight({
   z: number;
   name?: string;
 }): AppliedCounterweight {
+  const { parts, mass, x, y, z, name = "counterweight" } = requireInputObject(input);
   const before = massProperties(parts);
   requireInRange("mass", mass, "kg", { min: 0, max: MAX_PART_MASS, minOpen: true });
   const counterweight: LayoutPart = { name, shape: { kind: "point" }, mass: { kind: "given", mass }, x, y, z };

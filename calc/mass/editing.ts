@@ -5,6 +5,7 @@
 import { CalcInputError } from "../core/errors.ts";
 
 import { type LayoutPart, MAX_NAME_LENGTH, type PartShape, checkPart } from "./parts.ts";
+import { requireList } from "../core/spec-check.ts";
 
 // ---------------------------------------------------------------------------------------------
 // Editing the parts list: pure helpers, each returning a new array.
@@ -27,10 +28,12 @@ function requireIndex(param: string, index: number, length: number, allowEnd = f
  *
  * Sources: none (list bookkeeping, no formula).
  */
-export function addPart(parts: readonly LayoutPart[], part: LayoutPart, index: number = parts.length): LayoutPart[] {
+export function addPart(parts: readonly LayoutPart[], part: LayoutPart, index?: number): LayoutPart[] {
+  requireList(parts, "parts");
   checkPart(part);
-  requireIndex("index", index, parts.length, true);
-  return [...parts.slice(0, index), part, ...parts.slice(index)];
+  const at = index ?? parts.length;
+  requireIndex("index", at, parts.length, true);
+  return [...parts.slice(0, at), part, ...parts.slice(at)];
 }
 
 /**
@@ -43,8 +46,9 @@ export function addPart(parts: readonly LayoutPart[], part: LayoutPart, index: n
  * Sources: none (list bookkeeping, no formula).
  */
 export function duplicatePart(parts: readonly LayoutPart[], index: number): LayoutPart[] {
-  requireIndex("index", index, parts.length);
+  requireIndex("index", index, requireList(parts, "parts").length);
   const original = parts[index]!;
+  checkPart(original, `parts[${index}]`);
   const name = `${original.name} (copy)`.slice(0, MAX_NAME_LENGTH);
   return [...parts.slice(0, index + 1), { ...original, name }, ...parts.slice(index + 1)];
 }
@@ -59,7 +63,7 @@ export function duplicatePart(parts: readonly LayoutPart[], index: number): Layo
  * Sources: none (list bookkeeping, no formula).
  */
 export function removePart(parts: readonly LayoutPart[], index: number): LayoutPart[] {
-  requireIndex("index", index, parts.length);
+  requireIndex("index", index, requireList(parts, "parts").length);
   return [...parts.slice(0, index), ...parts.slice(index + 1)];
 }
 
@@ -74,7 +78,7 @@ export function removePart(parts: readonly LayoutPart[], index: number): LayoutP
  * Sources: none (list bookkeeping, no formula).
  */
 export function movePart(parts: readonly LayoutPart[], from: number, to: number): LayoutPart[] {
-  requireIndex("from", from, parts.length);
+  requireIndex("from", from, requireList(parts, "parts").length);
   requireIndex("to", to, parts.length);
   const next = [...parts];
   const [moved] = next.splice(from, 1);
@@ -134,7 +138,7 @@ export function mirrorPart(part: LayoutPart, axis: MirrorAxis): LayoutPart {
  * Sources: none (list bookkeeping, no formula).
  */
 export function mirrorPartInList(parts: readonly LayoutPart[], index: number, axis: MirrorAxis): LayoutPart[] {
-  requireIndex("index", index, parts.length);
+  requireIndex("index", index, requireList(parts, "parts").length);
   return parts.map((p, i) => (i === index ? mirrorPart(p, axis) : p));
 }
 
@@ -150,7 +154,7 @@ export function mirrorPartInList(parts: readonly LayoutPart[], index: number, ax
  * Sources: none (list bookkeeping, no formula).
  */
 export function addMirrorCopy(parts: readonly LayoutPart[], index: number, axis: MirrorAxis): LayoutPart[] {
-  requireIndex("index", index, parts.length);
+  requireIndex("index", index, requireList(parts, "parts").length);
   const image = mirrorPart(parts[index]!, axis);
   const name = `${image.name} (mirror)`.slice(0, MAX_NAME_LENGTH);
   return [...parts.slice(0, index + 1), { ...image, name }, ...parts.slice(index + 1)];

@@ -3,7 +3,7 @@
  * grade, couple, counterweight and sensor radius at once) and the counterweight it offers to add,
  * with the figures after it.
  */
-import { CalcInputError, requireInRange, requirePositive } from "../core/errors.ts";
+import { CalcInputError, requireInRange } from "../core/errors.ts";
 import { defineInputs } from "../core/inputs.ts";
 import { rpmToRadPerSecond } from "../core/units.ts";
 
@@ -34,6 +34,7 @@ import {
 import { type LayoutPart, MAX_PARTS, MAX_PART_MASS } from "./parts.ts";
 import { type MassProperties, massProperties } from "./properties.ts";
 import { type TrueSensorRadius, trueSensorRadius } from "./sensor.ts";
+import { requireInputObject, requireList, requireWithinSpecs, declaredInputs, requireFiniteFields } from "../core/spec-check.ts";
 
 // ---------------------------------------------------------------------------------------------
 // The mass-and-balance calculator: its scalar inputs and its one entry point.
@@ -197,9 +198,11 @@ export interface MassBalance {
  * openstax-college-physics.
  */
 export function massBalance(input: MassBalanceInput): MassBalance {
-  const { parts, candidates, spinSpeed, targetOffset, balanceGrade, correctionRadius, maxRadius, counterweightMass, planeZ1, planeZ2, sensorX, sensorY } =
-    input;
-  requirePositive("spinSpeed", spinSpeed, "rad/s");
+  const { parts, candidates } = requireInputObject(input);
+  const { spinSpeed, targetOffset, balanceGrade, correctionRadius, maxRadius, counterweightMass, planeZ1, planeZ2, sensorX, sensorY } = requireWithinSpecs(
+    massBalanceInputs,
+    input,
+  );
   const layout = massProperties(parts);
   const stat = staticUnbalance({ totalMass: layout.totalMass, offset: layout.offset, angularSpeed: spinSpeed });
   const equivalentGrade = equivalentBalanceGrade({ offset: layout.offset, angularSpeed: spinSpeed });
@@ -242,26 +245,30 @@ export function massBalance(input: MassBalanceInput): MassBalance {
   } else {
     fix = { method: "correction-radius", ...applyCounterweight({ parts, mass: fixMass, x: atRadius.x, y: atRadius.y, z: layout.centreZ }) };
   }
-  return {
-    layout,
-    static: stat,
-    equivalentGrade,
-    gradeMet: finestGradeMet(equivalentGrade),
-    permissible,
-    gradeVerdict: stat.unbalance <= permissible.unbalance ? "meets-grade" : "exceeds-grade",
-    // U/U_per, the ratio iso-21940-11 judges by; equal to eΩ/G_chosen, so finite for any valid grade.
-    unbalanceShareOfPermissible: stat.unbalance / permissible.unbalance,
-    offsetVerdict: layout.offset <= targetOffset ? "within-target" : "outside-target",
-    offsetShareOfTarget,
-    couple: coupleUnbalance({ productXZ: layout.productXZ, productYZ: layout.productYZ, angularSpeed: spinSpeed }),
-    twoPlane,
-    counterweight: { atRadius, forMass, candidates: choice },
-    fix,
-    sensor: {
-      before: trueSensorRadius({ centreX: layout.centreX, centreY: layout.centreY, sensorX, sensorY }),
-      after: trueSensorRadius({ centreX: fix.after.centreX, centreY: fix.after.centreY, sensorX, sensorY }),
+  return requireFiniteFields(
+    {
+      layout,
+      static: stat,
+      equivalentGrade,
+      gradeMet: finestGradeMet(equivalentGrade),
+      permissible,
+      gradeVerdict: stat.unbalance <= permissible.unbalance ? "meets-grade" : "exceeds-grade",
+      // U/U_per, the ratio iso-21940-11 judges by; equal to eΩ/G_chosen, so finite for any valid grade.
+      unbalanceShareOfPermissible: stat.unbalance / permissible.unbalance,
+      offsetVerdict: layout.offset <= targetOffset ? "within-target" : "outside-target",
+      offsetShareOfTarget,
+      couple: coupleUnbalance({ productXZ: layout.productXZ, productYZ: layout.productYZ, angularSpeed: spinSpeed }),
+      twoPlane,
+      counterweight: { atRadius, forMass, candidates: choice },
+      fix,
+      sensor: {
+        before: trueSensorRadius({ centreX: layout.centreX, centreY: layout.centreY, sensorX, sensorY }),
+        after: trueSensorRadius({ centreX: fix.after.centreX, centreY: fix.after.centreY, sensorX, sensorY }),
+      },
     },
-  };
+    "balance figures",
+    () => declaredInputs(massBalanceInputs, input),
+  );
 }
 
 // ---------------------------------------------------------------------------------------------
@@ -331,7 +338,11 @@ function roundUpSignificant(value: number, figures: number): number {
  * needs 38.99 g; the plan adds 39.0 g at (−55, 0) mm and leaves e = 0.1996 mm.
  * Sources: centre-of-mass, iso-21940-11, openstax-college-physics.
  */
-export function counterweightPlan({ input, balance, mode }: { input: MassBalanceInput; balance: MassBalance; mode: CounterweightMode }): CounterweightPlan {
+export function counterweightPlan(request: { input: MassBalanceInput; balance: MassBalance; mode: CounterweightMode }): CounterweightPlan {
+  const { input, balance, mode } = requireInputObject(request, "request");
+  requireInputObject(input, "input");
+  requireInputObject(balance, "balance");
+  requireList(input.parts, "parts");
   const none = (status: "not-needed" | "none"): CounterweightPlan => ({ status, counterweight: null, after: null });
   if (balance.offsetVerdict === "within-target") return none("not-needed");
   const { atRadius, forMass, candidates } = balance.counterweight;

@@ -9,8 +9,9 @@
  * convention: $I'_{xz}$ is a part's own product about its own centre; the inertia-tensor element is
  * the negative of it.
  */
-import { CalcInputError, requireInRange, requireRelation } from "../core/errors.ts";
+import { CalcInputError, requireFinite, requireInRange, requireNonNegative, requireRelation } from "../core/errors.ts";
 import { isMaterialId, MATERIAL_DENSITIES, type MaterialId } from "../materials/densities.ts";
+import { requireFiniteFields } from "../core/spec-check.ts";
 
 // ---------------------------------------------------------------------------------------------
 // Parts.
@@ -170,6 +171,18 @@ export function checkPart(part: LayoutPart, prefix = "part"): void {
       }
       requireLength(`${prefix}.mass.thickness`, m.thickness);
     }
+    if (!(MATERIAL_DENSITIES[m.material].density * volumeOf(s, m.thickness ?? 0) > 0)) {
+      // A volume below the smallest double comes out as 0: the smallest dimension in it took it there.
+      const dims: [string, number][] = Object.entries(s).filter(([k, v]) => k !== "angle" && typeof v === "number") as [string, number][];
+      if (m.thickness !== undefined) dims.push(["thickness", m.thickness]);
+      const [name, value] = dims.reduce((a, b) => (b[1] < a[1] ? b : a));
+      throw new CalcInputError({
+        param: name === "thickness" ? `${prefix}.mass.thickness` : `${p}.${name}`,
+        value,
+        expected: "large enough for the part's volume, and so its mass, to be greater than 0",
+        unit: "m",
+      });
+    }
   } else {
     throw new CalcInputError({
       param: `${prefix}.mass.kind`,
@@ -235,12 +248,12 @@ function volumeOf(shape: PartShape, thickness: number): number {
  * Sources: oxford-concise-mathematics, asm-matweb-datasheets.
  */
 export function partMass(part: LayoutPart): number {
-  checkPart(part);
   return massOf(part);
 }
 
-/** A checked part's mass [kg]: given, or its material's density × its volume. @internal */
+/** A part's mass [kg]: given, or its material's density × its volume (the part is checked first). @internal */
 export function massOf(part: LayoutPart): number {
+  checkPart(part);
   if (part.mass.kind === "given") return part.mass.mass;
   return MATERIAL_DENSITIES[part.mass.material].density * volumeOf(part.shape, part.mass.thickness ?? 0);
 }
@@ -280,8 +293,15 @@ export function partOwnInertia(part: LayoutPart): OwnInertia {
   return ownInertiaOf(part.shape, massOf(part));
 }
 
-/** A shape's own inertia and products about its own centre for mass m [kg·m²]. @internal */
+/** A shape's own inertia and products about its own centre for mass m [kg·m²] (both checked first). @internal */
 export function ownInertiaOf(shape: PartShape, m: number): OwnInertia {
+  requireNonNegative("m", m, "kg");
+  checkPart({ name: "", shape, mass: { kind: "given", mass: 1 }, x: 0, y: 0, z: 0 }, "part");
+  return requireFiniteFields(inertiaOf(shape, m), "own inertia", { m: [m, "kg"] });
+}
+
+/** ownInertiaOf for a shape and mass already checked. */
+function inertiaOf(shape: PartShape, m: number): OwnInertia {
   const zero = { productXZ: 0, productYZ: 0 };
   switch (shape.kind) {
     case "point":
@@ -304,6 +324,8 @@ export function ownInertiaOf(shape: PartShape, m: number): OwnInertia {
 
 /** Direction of a plan vector, atan2 kept in (−π, π] and without a negative zero [rad]. @internal */
 export function directionOf(vx: number, vy: number): number {
+  requireFinite("vx", vx, "");
+  requireFinite("vy", vy, "");
   const a = Math.atan2(vy, vx);
   return a === -Math.PI ? Math.PI : a + 0;
 }

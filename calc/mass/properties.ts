@@ -89,6 +89,9 @@ export function massProperties(parts: readonly LayoutPart[]): MassProperties {
   for (const [i, part] of parts.entries()) checkPart(part, `parts[${i}]`);
   const masses = parts.map(massOf);
   const own = parts.map((p, i) => ownInertiaOf(p.shape, masses[i]!));
+  // Masses near the smallest doubles would lose their digits in m·x: the sums that give the centre
+  // are taken over masses scaled up by a power of two (exact), then scaled back.
+  const scale = Math.max(...masses) < 2 ** -500 ? 2 ** 500 : 1;
   let totalMass = 0;
   let sx = 0;
   let sy = 0;
@@ -99,10 +102,10 @@ export function massProperties(parts: readonly LayoutPart[]): MassProperties {
   parts.forEach((p, i) => {
     const m = masses[i]!;
     const o = own[i]!;
-    totalMass += m;
-    sx += m * p.x;
-    sy += m * p.y;
-    sz += m * p.z;
+    totalMass += m * scale;
+    sx += m * scale * p.x;
+    sy += m * scale * p.y;
+    sz += m * scale * p.z;
     inertiaAboutOrigin += o.inertiaZ + m * (p.x * p.x + p.y * p.y);
     productXZAboutOrigin += o.productXZ + m * p.x * p.z;
     productYZAboutOrigin += o.productYZ + m * p.y * p.z;
@@ -110,6 +113,10 @@ export function massProperties(parts: readonly LayoutPart[]): MassProperties {
   const centreX = sx / totalMass;
   const centreY = sy / totalMass;
   const centreZ = sz / totalMass;
+  const fractions = masses.map((m) => (m * scale) / totalMass);
+  totalMass /= scale;
+  sx /= scale;
+  sy /= scale;
   let inertiaAboutCentre = 0;
   let productXZ = 0;
   let productYZ = 0;
@@ -144,7 +151,7 @@ export function massProperties(parts: readonly LayoutPart[]): MassProperties {
       mass: masses[i]!,
       ownInertia: own[i]!.inertiaZ,
       radius: Math.hypot(p.x, p.y),
-      massFraction: masses[i]! / totalMass,
+      massFraction: fractions[i]!,
     })),
   };
 }

@@ -6,6 +6,7 @@
 import { CalcInputError } from "../core/errors.ts";
 
 import { requireCoordinate } from "./parts.ts";
+import { requireFiniteFields, requireInputObject } from "../core/spec-check.ts";
 
 // ---------------------------------------------------------------------------------------------
 // True sensor radius and the heading drift it causes.
@@ -47,17 +48,8 @@ export interface TrueSensorRadius {
  * trueSensorRadius({ centreX: 0.002, centreY: 0, sensorX: -0.032, sensorY: 0 }) // → { radiusTrue: 0.034, rateRatio: 1.0308, driftPerRevolution: 0.1934, … } (drift +11.1° per revolution)
  * Sources: openstax-college-physics.
  */
-export function trueSensorRadius({
-  centreX,
-  centreY,
-  sensorX,
-  sensorY,
-}: {
-  centreX: number;
-  centreY: number;
-  sensorX: number;
-  sensorY: number;
-}): TrueSensorRadius {
+export function trueSensorRadius(input: { centreX: number; centreY: number; sensorX: number; sensorY: number }): TrueSensorRadius {
+  const { centreX, centreY, sensorX, sensorY } = requireInputObject(input);
   requireCoordinate("centreX", centreX);
   requireCoordinate("centreY", centreY);
   requireCoordinate("sensorX", sensorX);
@@ -79,14 +71,18 @@ export function trueSensorRadius({
   const sideways = (sensorX * dy - sensorY * dx) / radiusAssumed;
   const axisMisalignment = radiusTrue > 0 ? Math.atan2(sideways, radialComponent) : 0;
   const singleRatio = radialComponent > 0 ? Math.sqrt(radialComponent / radiusAssumed) : null;
-  return {
-    radiusTrue,
-    radiusAssumed,
-    difference: radiusTrue - radiusAssumed,
-    rateRatio,
-    rateError: rateRatio - 1,
-    driftPerRevolution: 2 * Math.PI * (rateRatio - 1),
-    axisMisalignment,
-    singleAxis: singleRatio === null ? null : { radialComponent, rateRatio: singleRatio, driftPerRevolution: 2 * Math.PI * (singleRatio - 1) },
-  };
+  return requireFiniteFields(
+    {
+      radiusTrue,
+      radiusAssumed,
+      difference: radiusTrue - radiusAssumed,
+      rateRatio,
+      rateError: rateRatio - 1,
+      driftPerRevolution: 2 * Math.PI * (rateRatio - 1),
+      axisMisalignment,
+      singleAxis: singleRatio === null ? null : { radialComponent, rateRatio: singleRatio, driftPerRevolution: 2 * Math.PI * (singleRatio - 1) },
+    },
+    "rate ratio",
+    { sensorX: [sensorX, "m"], sensorY: [sensorY, "m"] },
+  );
 }

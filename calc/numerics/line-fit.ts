@@ -5,6 +5,7 @@
  */
 import { CalcInputError, requireFinite, requireInRange, requirePositive } from "../core/errors.ts";
 import { normalQuantile, studentTQuantile } from "./special.ts";
+import { requireInputObject, requireList } from "../core/spec-check.ts";
 
 // Straight-line fits.
 
@@ -109,10 +110,19 @@ export interface StraightLineFit {
 
 /** The median of a list (a copy is sorted). @internal */
 export function median(values: readonly number[]): number {
+  if (!Array.isArray(values) || values.length === 0)
+    throw new CalcInputError({ param: "values", value: values, expected: "a list of at least one number", unit: "" });
+  for (const [i, v] of values.entries()) requireFinite(`values[${i}]`, v, "");
+  return middleOf(values);
+}
+
+/** The median of values already checked (tukey-1977). */
+function middleOf(values: readonly number[]): number {
   const s = [...values].sort((a, b) => a - b);
   const n = s.length;
   const mid = Math.floor(n / 2);
-  return n % 2 === 1 ? s[mid]! : (s[mid - 1]! + s[mid]!) / 2;
+  // The mean of the two middle values of an even list, each halved first so that it cannot overflow.
+  return n % 2 === 1 ? s[mid]! : s[mid - 1]! / 2 + s[mid]! / 2;
 }
 
 /** Values closer than this fraction of the largest |x| count as the same x. */
@@ -138,6 +148,7 @@ function xGroups(x: readonly number[]): number[] {
 
 /** How many different values a list holds. @internal */
 export function countDistinct(values: readonly number[]): number {
+  requireList(values, "values");
   return xGroups(values).length;
 }
 
@@ -209,9 +220,9 @@ function theilSenLine(x: readonly number[], y: readonly number[], confidence: nu
     }
   }
   slopes.sort((a, b) => a - b);
-  const slope = median(slopes);
+  const slope = middleOf(slopes);
   // sen-1968 / theil-1950: intercept as the median of y_i − slope·x_i
-  const intercept = median(x.map((xi, i) => y[i]! - slope * xi));
+  const intercept = middleOf(x.map((xi, i) => y[i]! - slope * xi));
   const residuals = x.map((xi, i) => y[i]! - (slope * xi + intercept));
   // gilbert-1987 ch. 16: Var(S) = [n(n−1)(2n+5) − Σ t(t−1)(2t+5)]/18 (ties in x), C = z √Var(S)
   let tieTerm = 0;
@@ -227,10 +238,10 @@ function theilSenLine(x: readonly number[], y: readonly number[], confidence: nu
 }
 
 function robustScale(residuals: readonly number[], floor: number): { center: number; scale: number; from: ScaleSource } {
-  const center = median(residuals);
+  const center = middleOf(residuals);
   const deviations = residuals.map((r) => Math.abs(r - center));
   // iglewicz-hoaglin-1993: σ̂ = MAD/0.6745 = 1.4826·MAD
-  let scale = 1.482602218505602 * median(deviations);
+  let scale = 1.482602218505602 * middleOf(deviations);
   let from: ScaleSource = "mad";
   if (scale === 0) {
     // johnson-kotz-balakrishnan-1994 ch. 13: mean absolute deviation = σ√(2/π), so σ = √(π/2)·MeanAD
@@ -333,19 +344,14 @@ export function requireFitOptions(confidence: number, spikeThreshold: number, hu
  * Sources: draper-smith-1998, theil-1950, sen-1968, gilbert-1987, huber-1964, holland-welsch-1977,
  * iglewicz-hoaglin-1993, johnson-kotz-balakrishnan-1994, abramowitz-stegun-1964.
  */
-export function fitStraightLine({
-  x,
-  y,
-  confidence = 0.95,
-  spikeThreshold = 3.5,
-  huberTuning = 1.345,
-}: {
+export function fitStraightLine(input: {
   x: readonly number[];
   y: readonly number[];
   confidence?: number;
   spikeThreshold?: number;
   huberTuning?: number;
 }): StraightLineFit {
+  const { x, y, confidence = 0.95, spikeThreshold = 3.5, huberTuning = 1.345 } = requireInputObject(input);
   if (!Array.isArray(x) || !Array.isArray(y) || x.length !== y.length) {
     throw new CalcInputError({
       param: "y",
@@ -381,6 +387,15 @@ export function fitChecked(
   huberTuning: number,
   param: string,
 ): StraightLineFit {
+  if (!Array.isArray(x) || !Array.isArray(y) || x.length !== y.length || x.length < 3 || !x.every(Number.isFinite) || !y.every(Number.isFinite)) {
+    throw new CalcInputError({
+      param: String(param),
+      value: Array.isArray(x) ? x.length : x,
+      expected: "two lists of as many finite numbers, at least 3",
+      unit: "",
+    });
+  }
+  requireFitOptions(confidence, spikeThreshold, huberTuning);
   const leastSquares = leastSquaresLine(x, y, confidence);
   const theilSen = theilSenLine(x, y, confidence);
   const yScale = y.reduce((m, v) => Math.max(m, Math.abs(v)), 0);

@@ -3,6 +3,8 @@
  * may answer, the step view, the options, the result, and the error for a derivative that cannot
  * be made finite.
  */
+import { CalcInputError } from "../core/errors.ts";
+
 /** The right-hand side: writes f(t, y) into `dydt`; must not keep `y` or `dydt`. */
 export type OdeRhs = (t: number, y: Float64Array, dydt: Float64Array) => void;
 
@@ -99,21 +101,30 @@ export interface OdeResult {
   outputCount: number;
 }
 
-/** A derivative or event value that is not a finite number where no smaller step can help. */
-export class OdeNonFiniteError extends Error {
+/**
+ * A derivative or event value that is not a finite number where no smaller step can help: a
+ * `CalcInputError` naming the problem's function that gave it ("rhs", or "events[i]"), so that
+ * a caller of calc/ meets one error family.
+ */
+export class OdeNonFiniteError extends CalcInputError {
   /** Time of the evaluation. */
   readonly t: number;
   /** "derivative" (component `index` of f) or "event" (event `index`). */
   readonly quantity: "derivative" | "event" | "state";
   readonly index: number;
-  readonly value: number;
+  declare readonly value: number;
 
   constructor(fields: { t: number; quantity: "derivative" | "event" | "state"; index: number; value: number }) {
-    super(`the ${fields.quantity} ${fields.index} is not a finite number (${fields.value}) at t = ${fields.t}`);
+    super({
+      param: fields.quantity === "event" ? `events[${fields.index}]` : "rhs",
+      value: fields.value,
+      expected: `a finite ${fields.quantity === "event" ? "event function" : "derivative"} at every step`,
+      unit: "",
+    });
+    this.message = `the ${fields.quantity} ${fields.index} is not a finite number (${fields.value}) at t = ${fields.t}`;
     this.name = "OdeNonFiniteError";
     this.t = fields.t;
     this.quantity = fields.quantity;
     this.index = fields.index;
-    this.value = fields.value;
   }
 }

@@ -55,6 +55,7 @@ import {
   type OdeStatus,
   type OdeResult,
 } from "./ode-types.ts";
+import { requireInputObject } from "../core/spec-check.ts";
 
 // Step-size factors of hairer-dopri5-code (hairer-norsett-wanner-1 §II.4 (4.13)): safety, bounds, exponent 1/(q+1) with q = 4.
 const SAFETY = 0.9;
@@ -570,7 +571,7 @@ export class DormandPrince45 implements OdeStepView {
 export function solveOde(problem: { rhs: OdeRhs; t0: number; y0: ArrayLike<number>; tEnd: number } & OdeOptions): OdeResult {
   if (problem === null || typeof problem !== "object")
     throw new CalcInputError({ param: "problem", value: problem, expected: "an object { rhs, t0, y0, tEnd, … }", unit: "" });
-  const { rhs, t0, y0, tEnd, ...options } = problem;
+  const { rhs, t0, y0, tEnd, ...options } = requireInputObject(problem, "problem");
   if (y0 === null || typeof y0 !== "object" || !(y0.length >= 1)) {
     throw new CalcInputError({ param: "y0", value: y0 === null || typeof y0 !== "object" ? y0 : y0.length, expected: "a list of at least 1 number", unit: "" });
   }

@@ -3,9 +3,13 @@
  * normal distributions (cumulative and quantile).
  */
 import { requireFinite, requireInRange, requirePositive } from "../core/errors.ts";
+import { requireFiniteResult, requireInputObject } from "../core/spec-check.ts";
 
 // ---------------------------------------------------------------------------------------------
 // Special functions.
+
+/** The Euler–Mascheroni constant γ (abramowitz-stegun-1964 6.1.3). */
+const EULER_GAMMA = 0.5772156649015329;
 
 /** Lanczos coefficients (g = 7, n = 9) for ln Γ; numerical-recipes-2007 §6.1 describes the method. */
 const LANCZOS = [
@@ -19,8 +23,10 @@ const LANCZOS = [
  *
  * Formula: $\Gamma(x+1) \approx \sqrt{2\pi}\,(x + g + \tfrac12)^{x + 1/2} e^{-(x+g+1/2)} A_g(x)$, with reflection for x < ½
  *
- * @param x [-], greater than 0
- * @returns ln Γ(x) [-]
+ * @param x [-], greater than 0; below 1e-10 the series ln Γ(x) = −ln x − γx (abramowitz-stegun-1964
+ *   6.1.33, with ln Γ(x) = ln Γ(1 + x) − ln x) replaces the reflection, whose π/sin(πx) would
+ *   overflow for x near the smallest doubles
+ * @returns ln Γ(x) [-]; a CalcInputError names x when ln Γ(x) passes the largest double (x near Number.MAX_VALUE)
  *
  * @example
  * logGamma(0.5) // → 0.5723649429 (ln √π)
@@ -29,6 +35,8 @@ const LANCZOS = [
  */
 export function logGamma(x: number): number {
   requirePositive("x", x, "");
+  // abramowitz-stegun-1964 6.1.33: ln Γ(1 + x) = −γx + O(x²), and ln Γ(x) = ln Γ(1 + x) − ln x
+  if (x < 1e-10) return -Math.log(x) - EULER_GAMMA * x;
   if (x < 0.5) {
     // reflection Γ(x)Γ(1 − x) = π / sin(πx) (abramowitz-stegun-1964 6.1.17)
     return Math.log(Math.PI / Math.sin(Math.PI * x)) - logGamma(1 - x);
@@ -37,7 +45,7 @@ export function logGamma(x: number): number {
   let sum = LANCZOS[0]!;
   for (let i = 1; i < LANCZOS.length; i++) sum += LANCZOS[i]! / (z + i);
   const t = z + 7.5;
-  return 0.5 * Math.log(2 * Math.PI) + (z + 0.5) * Math.log(t) - t + Math.log(sum);
+  return requireFiniteResult(0.5 * Math.log(2 * Math.PI) + (z + 0.5) * Math.log(t) - t + Math.log(sum), "ln Γ(x)", { x: [x, ""] });
 }
 
 /** Continued fraction for the incomplete beta function, modified Lentz (numerical-recipes-2007 §6.4, betacf). */
@@ -99,7 +107,8 @@ function incompleteBeta(x: number, oneMinusX: number, a: number, b: number): num
  * studentTCdf({ t: 1, degreesOfFreedom: 1 }) // → 0.75 (Cauchy)
  * Sources: abramowitz-stegun-1964, numerical-recipes-2007.
  */
-export function studentTCdf({ t, degreesOfFreedom }: { t: number; degreesOfFreedom: number }): number {
+export function studentTCdf(input: { t: number; degreesOfFreedom: number }): number {
+  const { t, degreesOfFreedom } = requireInputObject(input);
   requireFinite("t", t, "");
   requirePositive("degreesOfFreedom", degreesOfFreedom, "");
   if (degreesOfFreedom >= LARGE_NU) {
@@ -153,7 +162,8 @@ function solveBetaForTail(target: number, nu: number): number {
  * studentTQuantile({ probability: 0.975, degreesOfFreedom: 2 }) // → 4.3027
  * Sources: abramowitz-stegun-1964, numerical-recipes-2007.
  */
-export function studentTQuantile({ probability, degreesOfFreedom }: { probability: number; degreesOfFreedom: number }): number {
+export function studentTQuantile(input: { probability: number; degreesOfFreedom: number }): number {
+  const { probability, degreesOfFreedom } = requireInputObject(input);
   requireInRange("probability", probability, "", { min: 0, max: 1, minOpen: true, maxOpen: true });
   requirePositive("degreesOfFreedom", degreesOfFreedom, "");
   if (probability === 0.5) return 0;
@@ -223,7 +233,8 @@ function erfcPositive(x: number): number {
  * normalCdf({ z: 1.959964 }) // → 0.975
  * Sources: abramowitz-stegun-1964, numerical-recipes-2007.
  */
-export function normalCdf({ z }: { z: number }): number {
+export function normalCdf(input: { z: number }): number {
+  const { z } = requireInputObject(input);
   requireFinite("z", z, "");
   // Φ(−40) ≈ 4·10⁻³⁵⁰ is below the smallest double: the tails are exactly 0 and 1 in doubles beyond
   // |z| = 40, and the series would overflow (z² = ∞) for |z| above 10¹⁵⁴.
@@ -245,7 +256,8 @@ export function normalCdf({ z }: { z: number }): number {
  * normalQuantile({ probability: 0.975 }) // → 1.959964
  * Sources: abramowitz-stegun-1964, numerical-recipes-2007.
  */
-export function normalQuantile({ probability }: { probability: number }): number {
+export function normalQuantile(input: { probability: number }): number {
+  const { probability } = requireInputObject(input);
   requireInRange("probability", probability, "", { min: 0, max: 1, minOpen: true, maxOpen: true });
   if (probability === 0.5) return 0;
   const upper = probability > 0.5;

@@ -6,7 +6,7 @@ import { CalcInputError, requireInRange, requireNonNegative, requirePositive, re
 import { defineInputs } from "../core/inputs.ts";
 import { STANDARD_GRAVITY } from "../core/constants.ts";
 import { rpmToRadPerSecond } from "../core/units.ts";
-import { requireWhole } from "../core/spec-check.ts";
+import { requireFiniteResult, requireInputObject, requireWhole, requireWithinSpecs, declaredInputs, requireFiniteFields } from "../core/spec-check.ts";
 import type { SourceKey } from "../sources/index.ts";
 
 /**
@@ -26,10 +26,11 @@ import type { SourceKey } from "../sources/index.ts";
  *
  * Sources: openstax-college-physics.
  */
-export function centripetalAcceleration({ angularSpeed, radius }: { angularSpeed: number; radius: number }): number {
+export function centripetalAcceleration(input: { angularSpeed: number; radius: number }): number {
+  const { angularSpeed, radius } = requireInputObject(input);
   requireNonNegative("angularSpeed", angularSpeed, "rad/s");
   requireNonNegative("radius", radius, "m");
-  return angularSpeed * angularSpeed * radius;
+  return requireFiniteResult(angularSpeed * angularSpeed * radius, "acceleration", { angularSpeed: [angularSpeed, "rad/s"], radius: [radius, "m"] });
 }
 
 /** One point of an acceleration-against-speed curve. */
@@ -56,15 +57,8 @@ export interface AccelerationCurvePoint {
  * centripetalAccelerationCurve({ radius: 0.012, maxSpeed: 400, intervals: 2 })[1] // → { angularSpeed: 200, acceleration: 480 } (then 400 rad/s, 1920 m/s²)
  * Sources: openstax-college-physics.
  */
-export function centripetalAccelerationCurve({
-  radius,
-  maxSpeed,
-  intervals,
-}: {
-  radius: number;
-  maxSpeed: number;
-  intervals: number;
-}): AccelerationCurvePoint[] {
+export function centripetalAccelerationCurve(input: { radius: number; maxSpeed: number; intervals: number }): AccelerationCurvePoint[] {
+  const { radius, maxSpeed, intervals } = requireInputObject(input);
   requireNonNegative("radius", radius, "m");
   requirePositive("maxSpeed", maxSpeed, "rad/s");
   requireWhole("intervals", intervals, 1, 1000);
@@ -95,10 +89,14 @@ export function centripetalAccelerationCurve({
  *
  * Sources: openstax-college-physics.
  */
-export function radiusForAcceleration({ angularSpeed, acceleration }: { angularSpeed: number; acceleration: number }): number {
+export function radiusForAcceleration(input: { angularSpeed: number; acceleration: number }): number {
+  const { angularSpeed, acceleration } = requireInputObject(input);
   requirePositive("angularSpeed", angularSpeed, "rad/s");
   requireNonNegative("acceleration", acceleration, "m/s²");
-  return acceleration / (angularSpeed * angularSpeed);
+  return requireFiniteResult(acceleration / (angularSpeed * angularSpeed), "radius", {
+    angularSpeed: [angularSpeed, "rad/s"],
+    acceleration: [acceleration, "m/s²"],
+  });
 }
 
 /**
@@ -116,10 +114,11 @@ export function radiusForAcceleration({ angularSpeed, acceleration }: { angularS
  *
  * Sources: openstax-college-physics.
  */
-export function angularSpeedForAcceleration({ radius, acceleration }: { radius: number; acceleration: number }): number {
+export function angularSpeedForAcceleration(input: { radius: number; acceleration: number }): number {
+  const { radius, acceleration } = requireInputObject(input);
   requirePositive("radius", radius, "m");
   requireNonNegative("acceleration", acceleration, "m/s²");
-  return Math.sqrt(acceleration / radius);
+  return requireFiniteResult(Math.sqrt(acceleration / radius), "speed", { radius: [radius, "m"], acceleration: [acceleration, "m/s²"] });
 }
 
 /**
@@ -141,11 +140,15 @@ export function angularSpeedForAcceleration({ radius, acceleration }: { radius: 
  *
  * Sources: openstax-college-physics.
  */
-export function maxSensorRadius({ fullScale, margin, topSpeed }: { fullScale: number; margin: number; topSpeed: number }): number {
+export function maxSensorRadius(input: { fullScale: number; margin: number; topSpeed: number }): number {
+  const { fullScale, margin, topSpeed } = requireInputObject(input);
   requirePositive("fullScale", fullScale, "m/s²");
   requireInRange("margin", margin, "", { min: 0, max: 1, maxOpen: true });
   requirePositive("topSpeed", topSpeed, "rad/s");
-  return ((1 - margin) * fullScale) / (topSpeed * topSpeed);
+  return requireFiniteResult(((1 - margin) * fullScale) / (topSpeed * topSpeed), "largest radius", {
+    topSpeed: [topSpeed, "rad/s"],
+    fullScale: [fullScale, "m/s²"],
+  });
 }
 
 /**
@@ -164,11 +167,18 @@ export function maxSensorRadius({ fullScale, margin, topSpeed }: { fullScale: nu
  *
  * Sources: sensor-quantisation, openstax-college-physics.
  */
-export function speedResolution({ step, angularSpeed, radius }: { step: number; angularSpeed: number; radius: number }): number {
+export function speedResolution(input: { step: number; angularSpeed: number; radius: number }): number {
+  const { step, angularSpeed, radius } = requireInputObject(input);
   requirePositive("step", step, "m/s²");
   requirePositive("angularSpeed", angularSpeed, "rad/s");
   requirePositive("radius", radius, "m");
-  return Math.sqrt(1 + step / (angularSpeed * angularSpeed * radius)) - 1;
+  // √(1 + x) − 1 written as x/(√(1 + x) + 1), which keeps its digits when x is small.
+  const x = step / (angularSpeed * angularSpeed * radius);
+  return requireFiniteResult(x / (Math.sqrt(1 + x) + 1), "speed resolution", {
+    angularSpeed: [angularSpeed, "rad/s"],
+    radius: [radius, "m"],
+    step: [step, "m/s²"],
+  });
 }
 
 /**
@@ -186,11 +196,12 @@ export function speedResolution({ step, angularSpeed, radius }: { step: number; 
  * sensorCountSize({ span: 400 * 9.80665, bits: 12 }) // → 0.957681 (0.0977 g)
  * Sources: sensor-quantisation.
  */
-export function sensorCountSize({ span, bits }: { span: number; bits: number }): number {
+export function sensorCountSize(input: { span: number; bits: number }): number {
+  const { span, bits } = requireInputObject(input);
   requirePositive("span", span, "m/s²");
   requireWhole("bits", bits, 1, 32);
   // Uniform quantiser step, full span over 2^bits codes (sensor-quantisation).
-  return span / 2 ** bits;
+  return requireFiniteResult(span / 2 ** bits, "count size", { span: [span, "m/s²"] });
 }
 
 /**
@@ -212,11 +223,17 @@ export function sensorCountSize({ span, bits }: { span: number; bits: number }):
  *
  * Sources: sensor-quantisation, openstax-college-physics.
  */
-export function minSensorRadius({ step, lowSpeed, resolution }: { step: number; lowSpeed: number; resolution: number }): number {
+export function minSensorRadius(input: { step: number; lowSpeed: number; resolution: number }): number {
+  const { step, lowSpeed, resolution } = requireInputObject(input);
   requirePositive("step", step, "m/s²");
   requirePositive("lowSpeed", lowSpeed, "rad/s");
   requireInRange("resolution", resolution, "", { min: 0, max: 1, minOpen: true });
-  return step / (lowSpeed * lowSpeed * ((1 + resolution) ** 2 - 1));
+  // (1 + p)² − 1 written as p(2 + p), which keeps its digits when p is small.
+  return requireFiniteResult(step / (lowSpeed * lowSpeed * resolution * (2 + resolution)), "smallest radius", {
+    lowSpeed: [lowSpeed, "rad/s"],
+    step: [step, "m/s²"],
+    resolution: [resolution, ""],
+  });
 }
 
 export interface PartLoad {
@@ -245,10 +262,12 @@ export interface PartLoad {
  *
  * Sources: newton-second-law.
  */
-export function partLoad({ mass, radius, angularSpeed }: { mass: number; radius: number; angularSpeed: number }): PartLoad {
+export function partLoad(input: { mass: number; radius: number; angularSpeed: number }): PartLoad {
+  const { mass, radius, angularSpeed } = requireInputObject(input);
   requirePositive("mass", mass, "kg");
   const acceleration = centripetalAcceleration({ angularSpeed, radius });
-  return { acceleration, gLoad: acceleration / STANDARD_GRAVITY, force: mass * acceleration };
+  const force = requireFiniteResult(mass * acceleration, "force", { mass: [mass, "kg"], angularSpeed: [angularSpeed, "rad/s"], radius: [radius, "m"] });
+  return { acceleration, gLoad: acceleration / STANDARD_GRAVITY, force };
 }
 
 // ---------------------------------------------------------------------------------------------
@@ -407,10 +426,10 @@ export interface AccelerometerPlacement {
  * openstax-college-physics, sensor-quantisation, newton-second-law.
  */
 export function accelerometerPlacement(input: AccelerometerPlacementInput): AccelerometerPlacement {
-  const { topSpeed, lowSpeed, radius, fullScale, margin, step, noise, resolution, partMass, partRadius } = input;
-  requirePositive("radius", radius, "m");
-  requireNonNegative("noise", noise, "m/s²");
-  requirePositive("topSpeed", topSpeed, "rad/s");
+  const { topSpeed, lowSpeed, radius, fullScale, margin, step, noise, resolution, partMass, partRadius } = requireWithinSpecs(
+    accelerometerPlacementInputs,
+    input,
+  );
   requireRelation("lowSpeed", lowSpeed, "at-most", topSpeed, { kind: "angularSpeed", unit: "rad/s", other: "topSpeed" });
   const effectiveStep = Math.max(step, noise);
   const minRadius = minSensorRadius({ step: effectiveStep, lowSpeed, resolution });
@@ -421,26 +440,30 @@ export function accelerometerPlacement(input: AccelerometerPlacementInput): Acce
   const windowExists = minRadius <= maxRadius;
   const part = partLoad({ mass: partMass, radius: partRadius, angularSpeed: topSpeed });
   const verdict: PlacementVerdict = !windowExists ? "no-window" : radius > maxRadius ? "too-far-out" : radius < minRadius ? "too-close-in" : "fits";
-  return {
-    minRadius,
-    maxRadius,
-    // The same bound with no headroom, r = F/ω² (openstax-college-physics, a = ω²r).
-    maxRadiusNoHeadroom: maxSensorRadius({ fullScale, margin: 0, topSpeed }),
-    windowExists,
-    effectiveStep,
-    accelerationAtTop,
-    fullScaleUsed: accelerationAtTop / fullScale,
-    readingLimit: (1 - margin) * fullScale, // headroom kept below full scale
-    accelerationAtLow,
-    resolutionAtLow,
-    saturationSpeed: angularSpeedForAcceleration({ radius, acceleration: fullScale }),
-    verdict,
-    part,
-    // Weight W = m g solved for m (newton-second-law).
-    partHangingMass: part.force / STANDARD_GRAVITY,
-    // Tangential speed of a point on a circle, v = ω r (openstax-college-physics).
-    partReleaseSpeed: topSpeed * partRadius,
-  };
+  return requireFiniteFields(
+    {
+      minRadius,
+      maxRadius,
+      // The same bound with no headroom, r = F/ω² (openstax-college-physics, a = ω²r).
+      maxRadiusNoHeadroom: maxSensorRadius({ fullScale, margin: 0, topSpeed }),
+      windowExists,
+      effectiveStep,
+      accelerationAtTop,
+      fullScaleUsed: requireFiniteResult(accelerationAtTop / fullScale, "share of full scale", { fullScale: [fullScale, "m/s²"] }),
+      readingLimit: (1 - margin) * fullScale, // headroom kept below full scale
+      accelerationAtLow,
+      resolutionAtLow,
+      saturationSpeed: angularSpeedForAcceleration({ radius, acceleration: fullScale }),
+      verdict,
+      part,
+      // Weight W = m g solved for m (newton-second-law).
+      partHangingMass: part.force / STANDARD_GRAVITY,
+      // Tangential speed of a point on a circle, v = ω r (openstax-college-physics).
+      partReleaseSpeed: topSpeed * partRadius,
+    },
+    "placement figures",
+    () => declaredInputs(accelerometerPlacementInputs, input),
+  );
 }
 
 /** Source keys this module relies on (checked by the meta test). */

@@ -32,6 +32,8 @@ export const LOW_SPEED = 0.05;
  * Formula: $\sigma = \dfrac{|V_s|}{\sqrt{V_r^2 + v_\varepsilon^2}}$, $u = \dfrac{C\sigma}{3\mu F_z}$, $F = \mu F_z\,(3u - 3u^2 + u^3)$ for u < 1, else μF_z; $\vec F = -F\,\vec V_s/|V_s|$
  *
  * @param slipX, slipY V_s components [m/s]; rollingSpeed V_r [m/s]; load F_z [N]; mu μ [-]; stiffness C [N per unit slip]; out: [F_x, F_y] [N]
+ *
+ * Unchecked, for the simulation's inner loop; callers outside it use `brushTyreForce`. @internal
  */
 export function brushForceInto(slipX: number, slipY: number, rollingSpeed: number, load: number, mu: number, stiffness: number, out: Float64Array): number {
   const vs = Math.sqrt(slipX * slipX + slipY * slipY);
@@ -104,6 +106,8 @@ export function brushTyreForce(input: {
  * Formula: $\vec F = -\mu N\,\dfrac{\vec V}{\sqrt{|V|^2 + v_\varepsilon^2}}$
  *
  * @param vx, vy V [m/s]; load N [N]; mu μ [-]; out: [F_x, F_y] [N]
+ *
+ * Unchecked, for the simulation's inner loop (not part of the public API). @internal
  */
 export function skidForceInto(vx: number, vy: number, load: number, mu: number, out: Float64Array): number {
   const scale = (-mu * load) / Math.sqrt(vx * vx + vy * vy + LOW_SPEED * LOW_SPEED); // serway-beichner-5e: f_k = μ_k n, regularised

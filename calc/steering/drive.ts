@@ -174,7 +174,13 @@ export function steadyDuty(parameters: PackDriveParameters, groups: number, moto
   requireInRange("groups", groups, "", { min: 1, max: 16 });
   requireFinite("motorSpeed", motorSpeed, "rad/s");
   requireFinite("current", current, "A");
-  const { openCircuitVoltage: voc, packResistance: rp, motorResistance: rm, torqueConstant: kt, motorsPerGroup: m } = parameters;
+  const {
+    openCircuitVoltage: voc,
+    packResistance: rp,
+    motorResistance: rm,
+    torqueConstant: kt,
+    motorsPerGroup: m,
+  } = requireInputObject(parameters, "parameters");
   const c = kt * motorSpeed + current * rm; // ctms-dc-motor-speed: D·V_b = e + I·R
   const a = groups * m * current * rp; // battery-thevenin-model: V_b = V_oc − R_p·(n m D I)
   const disc = voc * voc - 4 * a * c;

@@ -1,15 +1,18 @@
 /**
  * Steering while spinning: closed forms (kinematics, gyroscopic wheel loads, drive-pulse sensor
  * bias), the simulation's entry, its sweep and its path. The model's inner parts (model.ts,
- * controller.ts, run.ts, drive.ts, contact.ts) are imported directly where needed.
+ * controller.ts, run.ts, drive.ts, contact.ts) are imported directly where needed; the unchecked
+ * kernels of the inner loop (the contact forces written into arrays, the per-revolution figures of
+ * a run) stay out of the public API.
  */
 export * from "./kinematics.ts";
 export * from "./gyro.ts";
 export * from "./sensor-bias.ts";
-export * from "./contact.ts";
+export { brushTyreForce, LOW_SPEED } from "./contact.ts";
 export * from "./drive.ts";
 export * from "./inputs.ts";
-export * from "./simulate.ts";
+export { readSteeringOptions, simulateSteering } from "./simulate.ts";
+export type { SteeringEnergy, SteeringOptions, SteeringResult, SteeringRevolution, SteeringVerdict } from "./simulate.ts";
 export * from "./sweep.ts";
 export * from "./path.ts";
 export { SteeringModel } from "./model.ts";

@@ -308,6 +308,9 @@ const SI_SYMBOL: Partial<Record<QuantityKind, string>> = {
 
 /** SI unit symbol of an input, for messages. */
 export function steeringUnit(name: SteeringParameter): string {
+  if (typeof name !== "string" || !Object.hasOwn(steeringInputs, name)) {
+    throw new CalcInputError({ param: "name", value: String(name), expected: "the name of a steering input", unit: "" });
+  }
   return SI_SYMBOL[steeringInputs[name].kind] ?? "";
 }
 

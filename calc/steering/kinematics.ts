@@ -12,7 +12,6 @@
  * opposite window. SI in and out: m, m/s, rad, rad/s, s, Hz.
  */
 import { requireFinite, requireInRange, requireNonNegative, requirePositive } from "../core/errors.ts";
-import { headingStepPerLoop, latencyHeadingLag } from "../heading/timing.ts";
 import { requireFiniteResult, requireInputObject } from "../core/spec-check.ts";
 
 const TWO_PI = 2 * Math.PI;
@@ -84,7 +83,7 @@ export function kinematicTranslationSpeed(input: { depth: number; windowWidth: n
   requireNonNegative("depth", depth, "m/s");
   requireWidth(windowWidth, oppositeWindow === true);
   const factor = oppositeWindow === true ? 2 : 1;
-  return depth * ((factor * Math.sin(windowWidth / 2)) / Math.PI); // oppenheim-willsky-signals: c₁ = sin(w/2)/π (a factor below 1 first: no overflow)
+  return requireFiniteResult(depth * ((factor * Math.sin(windowWidth / 2)) / Math.PI), "translation speed", { depth: [depth, "m/s"] }); // oppenheim-willsky-signals: c₁ = sin(w/2)/π (a factor below 1 first: no overflow)
 }
 
 /**
@@ -206,8 +205,12 @@ export function differentialDriveWheelSpeeds(input: { speed: number; turnRate: n
 export function latencyDirectionError(input: { spinSpeed: number; latency: number; loopRate: number; phaseLead?: number }): number {
   const { spinSpeed, latency, loopRate, phaseLead = 0 } = requireInputObject(input);
   requireFinite("phaseLead", phaseLead, "rad");
-  const lag = latencyHeadingLag({ angularSpeed: spinSpeed, latency }); // openstax-up1-rotational-kinematics: ψ = ωL
-  const hold = headingStepPerLoop({ angularSpeed: spinSpeed, loopRate }) / 2; // franklin-powell-workman-digital-control: mean hold delay T/2
+  // The sums below are checked as a whole, so that an overflow names spinSpeed (not the helpers' angularSpeed).
+  requireNonNegative("spinSpeed", spinSpeed, "rad/s");
+  requireNonNegative("latency", latency, "s");
+  requirePositive("loopRate", loopRate, "Hz");
+  const lag = spinSpeed * latency; // openstax-up1-rotational-kinematics: ψ = ωL (latencyHeadingLag)
+  const hold = spinSpeed / loopRate / 2; // franklin-powell-workman-digital-control: mean hold delay T/2 (headingStepPerLoop)
   const error = lag + hold - phaseLead;
   return requireFiniteResult(error, "direction error", { spinSpeed: [spinSpeed, "rad/s"] });
 }

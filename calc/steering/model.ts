@@ -25,7 +25,7 @@ import { CalcInputError } from "../core/errors.ts";
 import { torqueConstantFromKv } from "../drivetrain/motor.ts";
 import { brushForceInto, LOW_SPEED, skidForceInto } from "./contact.ts";
 import { PackSolver, type PackDriveParameters, steadyDuty } from "./drive.ts";
-import type { SteeringInput } from "./inputs.ts";
+import { type SteeringInput, validateSteeringInput } from "./inputs.ts";
 
 // State layout.
 export const S_X = 0;
@@ -98,6 +98,7 @@ export class SteeringModel {
   loadSkid = 0;
 
   constructor(input: SteeringInput) {
+    validateSteeringInput(input);
     const n = input.wheelCount;
     this.n = n;
     this.e0 = S_W0 + n;

@@ -3,9 +3,9 @@
  * 0.5 s at 90°), sampled densely enough to show the body's wobble, for a top-view plot.
  */
 import { CalcInputError, requireFinite, requireInRange } from "../core/errors.ts";
-import { type SteeringInput, validateSteeringInput } from "./inputs.ts";
+import { type SteeringInput, steeringInputs, validateSteeringInput } from "./inputs.ts";
 import { S_OM, S_TH, SteeringModel } from "./model.ts";
-import { requireInputObject } from "../core/spec-check.ts";
+import { requireInputObject, declaredInputs, requireFiniteFields } from "../core/spec-check.ts";
 import { runSteering } from "./run.ts";
 import type { SteeringOptions } from "./simulate.ts";
 import { readSteeringOptions } from "./simulate.ts";
@@ -116,5 +116,7 @@ export function steeringPath(args: {
     return { x: best.x, y: best.y };
   });
   legEnds.push({ x: run.y[0]!, y: run.y[1]! });
-  return { points, legs: runLegs, legEnds, status: run.status, endTime: run.endTime };
+  return requireFiniteFields({ points, legs: runLegs, legEnds, status: run.status, endTime: run.endTime }, "steering path", () =>
+    declaredInputs(steeringInputs, input),
+  );
 }

@@ -14,11 +14,12 @@
 import { CalcInputError, requireInRange } from "../core/errors.ts";
 import type { OdeStatus } from "../numerics/ode.ts";
 import { skidLiftSpeed } from "./gyro.ts";
-import { type SteeringInput, validateSteeringInput } from "./inputs.ts";
+import { type SteeringInput, steeringInputs, validateSteeringInput } from "./inputs.ts";
 import { kinematicRimSpeedDepth, kinematicTranslationSpeed, latencyDirectionError } from "./kinematics.ts";
 import { E_ABX, E_ABY, E_COPPER, E_DRAG, E_DRAWN, E_NOLOAD, E_PACK, E_SKID, E_SLIP, S_OM, SteeringModel } from "./model.ts";
 import { runSteering, type SteeringRun } from "./run.ts";
 import { drivePulseHeadingDrift } from "./sensor-bias.ts";
+import { declaredInputs, requireFiniteFields } from "../core/spec-check.ts";
 
 export type SteeringVerdict = "holds" | "marginal" | "fails";
 
@@ -163,7 +164,7 @@ function wrap(angle: number): number {
   return a;
 }
 
-/** Mean velocity over the final revolutions of a run, and the per-revolution figures. */
+/** Mean velocity over the final revolutions of a run, and the per-revolution figures. @internal */
 export function revolutionFigures(run: SteeringRun): {
   velocity: { x: number; y: number };
   /** Body-frame mean acceleration over the same revolutions [m/s²]. */
@@ -328,57 +329,61 @@ export function simulateSteering(input: SteeringInput, options?: SteeringOptions
     reason = `It travels within ${deg(tol)} of the commanded direction and covers ${input.commandedDistance} m in ${run.crossTime.toFixed(3)} s.`;
   }
 
-  return {
-    verdict,
-    reason,
-    status: run.status,
-    endTime,
-    commandedDirection: 0,
-    translationSpeed: speed,
-    peakTranslationSpeed: rev.peakSpeed,
-    peakAcceleration: rev.peakAcceleration,
-    travelDirection,
-    directionError,
-    latencyDirectionError: latencyError,
-    responseLag: wrap(directionError - latencyError),
-    leadToCancel: wrap(input.phaseLead + directionError),
-    displacement: { x: y[0]!, y: y[1]! },
-    timeToDistance: run.crossTime,
-    kinematicLimitSpeed: kinematicTranslationSpeed({ depth: rimDepth, windowWidth: input.windowWidth, oppositeWindow: input.oppositeWindow === 1 }),
-    initialSpin: input.spinSpeed,
-    finalSpin: rev.finalSpin,
-    spinLost: Math.max(0, input.spinSpeed - rev.lowestSpin),
-    baseDuty: model.baseDuty,
-    slipEnergyShare: drawn > 0 ? losses.slipLoss / drawn : 0,
-    peakGripShare: run.peakGrip,
-    slidingTimeShare: endTime > 0 ? run.slidingTime / endTime : 0,
-    skidLiftSpeed:
-      input.wheelCount === 1
-        ? skidLiftSpeed({
-            robotMass: input.robotMass,
-            wheelRadius: input.wheelRadius,
-            wheelInertia: input.wheelInertia,
-            rotorInertia: input.motorsPerWheel * input.motorRotorInertia,
-            gearRatio: input.gearRatio,
-          })
-        : null,
-    skidLiftedShare: endTime > 0 ? run.skidLiftedTime / endTime : 0,
-    energy,
-    peakBatteryCurrent: run.peakBatteryCurrent,
-    minBatteryVoltage: run.minBatteryVoltage,
-    peakMotorCurrent: run.peakMotorCurrent,
-    openCircuitVoltage: model.voc,
-    sensor: {
-      meanBodyAcceleration: { x: abx, y: aby },
-      steadyBodyAcceleration: steady,
-      bias,
-      driftRate: drift.driftRate,
-      driftPerRevolution: drift.driftPerRevolution,
-      opposedPairDriftRate: drift.opposedPairDriftRate,
+  return requireFiniteFields(
+    {
+      verdict,
+      reason,
+      status: run.status,
+      endTime,
+      commandedDirection: 0,
+      translationSpeed: speed,
+      peakTranslationSpeed: rev.peakSpeed,
+      peakAcceleration: rev.peakAcceleration,
+      travelDirection,
+      directionError,
+      latencyDirectionError: latencyError,
+      responseLag: wrap(directionError - latencyError),
+      leadToCancel: wrap(input.phaseLead + directionError),
+      displacement: { x: y[0]!, y: y[1]! },
+      timeToDistance: run.crossTime,
+      kinematicLimitSpeed: kinematicTranslationSpeed({ depth: rimDepth, windowWidth: input.windowWidth, oppositeWindow: input.oppositeWindow === 1 }),
+      initialSpin: input.spinSpeed,
+      finalSpin: rev.finalSpin,
+      spinLost: Math.max(0, input.spinSpeed - rev.lowestSpin),
+      baseDuty: model.baseDuty,
+      slipEnergyShare: drawn > 0 ? losses.slipLoss / drawn : 0,
+      peakGripShare: run.peakGrip,
+      slidingTimeShare: endTime > 0 ? run.slidingTime / endTime : 0,
+      skidLiftSpeed:
+        input.wheelCount === 1
+          ? skidLiftSpeed({
+              robotMass: input.robotMass,
+              wheelRadius: input.wheelRadius,
+              wheelInertia: input.wheelInertia,
+              rotorInertia: input.motorsPerWheel * input.motorRotorInertia,
+              gearRatio: input.gearRatio,
+            })
+          : null,
+      skidLiftedShare: endTime > 0 ? run.skidLiftedTime / endTime : 0,
+      energy,
+      peakBatteryCurrent: run.peakBatteryCurrent,
+      minBatteryVoltage: run.minBatteryVoltage,
+      peakMotorCurrent: run.peakMotorCurrent,
+      openCircuitVoltage: model.voc,
+      sensor: {
+        meanBodyAcceleration: { x: abx, y: aby },
+        steadyBodyAcceleration: steady,
+        bias,
+        driftRate: drift.driftRate,
+        driftPerRevolution: drift.driftPerRevolution,
+        opposedPairDriftRate: drift.opposedPairDriftRate,
+      },
+      revolutions: opts.revolutions ? rev.list : [],
+      pulseEdges: run.switches,
+      solver: run.solver,
+      warnings,
     },
-    revolutions: opts.revolutions ? rev.list : [],
-    pulseEdges: run.switches,
-    solver: run.solver,
-    warnings,
-  };
+    "steering figures",
+    () => declaredInputs(steeringInputs, input),
+  );
 }

@@ -8,7 +8,7 @@ import { type SteeringInput, steeringInputs, validateSteeringInput } from "./inp
 import { SteeringModel } from "./model.ts";
 import { runSteering } from "./run.ts";
 import { revolutionFigures } from "./simulate.ts";
-import { requireInputObject } from "../core/spec-check.ts";
+import { requireInputObject, declaredInputs, requireFiniteFields } from "../core/spec-check.ts";
 
 export interface SteeringSweepCell {
   windowWidth: number;
@@ -113,5 +113,5 @@ export function sweepSteering(args: { input: SteeringInput; windowWidths?: reado
     const b: { row: number; column: number } = best;
     cells[b.row]![b.column]!.isBest = true;
   }
-  return { windowWidths: widths, depths: ds, cells, best, duration: time };
+  return requireFiniteFields({ windowWidths: widths, depths: ds, cells, best, duration: time }, "steering sweep", () => declaredInputs(steeringInputs, input));
 }

@@ -10,7 +10,14 @@
 import { CalcInputError, requireFinite, requireInRange, requireNonNegative, requirePositive } from "../core/errors.ts";
 import { defineInputs } from "../core/inputs.ts";
 import { rpmToRadPerSecond } from "../core/units.ts";
-import { type NamedValue, requireWithinSpecs as requireDeclaredInputs, requireFiniteResult, requireInputObject } from "../core/spec-check.ts";
+import {
+  type NamedValue,
+  requireWithinSpecs as requireDeclaredInputs,
+  requireFiniteResult,
+  requireInputObject,
+  declaredInputs,
+  requireFiniteFields,
+} from "../core/spec-check.ts";
 
 /**
  * The mass a body turning about an axle presents at a point at radius r along the direction of
@@ -378,16 +385,20 @@ export function weaponHit(input: WeaponHitInput): WeaponHit {
     restitution: v.restitution,
     selfMass: v.robotMass,
   });
-  return {
-    tipSpeed,
-    storedEnergy,
-    timeBetweenImpactors,
-    bite: v.closingSpeed * timeBetweenImpactors, // weapon-bite: d = v·T/n
-    impact,
-    energyFractionUsed: impact.rotorEnergyDrop / storedEnergy,
-    speedRatioAfter: impact.spinSpeedAfter / v.weaponSpeed,
-    force: impactForceEstimate({ energy: impact.compressionEnergy, stoppingDistance: v.stoppingDistance, approachSpeed: impact.approachSpeed }),
-  };
+  return requireFiniteFields(
+    {
+      tipSpeed,
+      storedEnergy,
+      timeBetweenImpactors,
+      bite: v.closingSpeed * timeBetweenImpactors, // weapon-bite: d = v·T/n
+      impact,
+      energyFractionUsed: impact.rotorEnergyDrop / storedEnergy,
+      speedRatioAfter: impact.spinSpeedAfter / v.weaponSpeed,
+      force: impactForceEstimate({ energy: impact.compressionEnergy, stoppingDistance: v.stoppingDistance, approachSpeed: impact.approachSpeed }),
+    },
+    "hit figures",
+    () => declaredInputs(weaponHitInputs, input),
+  );
 }
 
 /**

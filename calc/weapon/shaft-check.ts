@@ -11,7 +11,7 @@ import { MATERIALS } from "../materials/materials.ts";
 import { isMaterialId, MATERIAL_IDS, type MaterialId } from "../materials/densities.ts";
 import { rpmToRadPerSecond } from "../core/units.ts";
 import { type BearingCheck, bearingCheck, BEARING_TYPE_OPTIONS, type BearingType, staticSafetyGuide } from "./bearings.ts";
-import { ratioOrNull, requireWithinSpecs as requireDeclaredInputs, requireInputObject } from "../core/spec-check.ts";
+import { ratioOrNull, requireWithinSpecs as requireDeclaredInputs, requireInputObject, declaredInputs, requireFiniteFields } from "../core/spec-check.ts";
 import { type ChoiceOption, requireChoice as requireOption } from "../core/choices.ts";
 import { type LoadVerdict as Verdict, vonMisesStress } from "../loads/common.ts";
 import { overhungCouple, overhungPointLoad, simplySupportedCouple, simplySupportedPointLoad } from "./beams.ts";
@@ -550,7 +550,7 @@ export function weaponShaftCheck(input: WeaponShaftInput): WeaponShaftCheck {
     reason: "",
   };
   result.reason = shaftReason(result, governing);
-  return result;
+  return requireFiniteFields(result, "shaft figures", () => declaredInputs(weaponShaftInputs, input));
 }
 
 function figure(x: number): string {

@@ -1,6 +1,6 @@
 import { defineInputs } from "../core/inputs.ts";
 import { rpmToRadPerSecond } from "../core/units.ts";
-import { ratioOrNull, requireWithinSpecs as requireDeclaredInputs, requireInputObject } from "../core/spec-check.ts";
+import { ratioOrNull, requireWithinSpecs as requireDeclaredInputs, requireInputObject, declaredInputs, requireFiniteFields } from "../core/spec-check.ts";
 import { requireChoice as requireOption } from "../core/choices.ts";
 import type { LoadVerdict as Verdict } from "../loads/common.ts";
 import {
@@ -391,17 +391,21 @@ export function weaponTurnCheck(input: WeaponTurnInput): WeaponTurnCheck {
   else if (tiltMargin !== null) governs = "tilt";
   const margin = governs === "turn" ? turnMargin! : governs === "tilt" ? tiltMargin! : null;
   const verdict: Verdict = margin === null ? "holds" : margin <= 1 ? "fails" : margin < v.liftMargin ? "marginal" : "holds";
-  return {
-    axle,
-    spin,
-    angularMomentum: angularMomentumValue,
-    turn,
-    tilt,
-    precession,
-    verdict,
-    governs,
-    reason: turnReason(verdict, governs, margin, turn, v.turnRate, v.liftMargin, axle),
-  };
+  return requireFiniteFields(
+    {
+      axle,
+      spin,
+      angularMomentum: angularMomentumValue,
+      turn,
+      tilt,
+      precession,
+      verdict,
+      governs,
+      reason: turnReason(verdict, governs, margin, turn, v.turnRate, v.liftMargin, axle),
+    },
+    "turn figures",
+    () => declaredInputs(weaponTurnInputs, input),
+  );
 }
 
 function turnReason(

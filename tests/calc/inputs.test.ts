@@ -67,9 +67,9 @@ describe("input declarations: reading a field", () => {
   });
 
   it("refuses a declaration whose default lies outside its range", () => {
-    expect(() => defineInputs({ x: { label: "X", kind: "length", min: 0, max: 1, default: 2, urlKey: "x" } })).toThrow(
-      'input "x": default 2 lies outside [0, 1]',
-    );
+    const define = () => defineInputs({ x: { label: "X", kind: "length", min: 0, max: 1, default: 2, urlKey: "x" } });
+    expect(define).toThrow(CalcInputError);
+    expect(define).toThrow("x.default must be within the declared range, from 0 to 1 (got 2)");
   });
 
   it("never throws and never accepts a non-finite value, whatever is typed (property)", () => {

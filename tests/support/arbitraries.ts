@@ -128,3 +128,143 @@ export function valuesArb(calc: AnyCalculator): fc.Arbitrary<AnyValues> {
   }
   return fc.record(record) as fc.Arbitrary<AnyValues>;
 }
+
+// ---------------------------------------------------------------------------------------------
+// The calc contract at the extremes (tests/calc/contract.test.ts): calls built from a valid one by
+// putting extreme doubles, null or undefined, or an unknown option in a few of its places.
+
+/** Doubles at the edges of the format: ±0, the subnormals, the normal floor, ±1e±300, ±Number.MAX_VALUE, 2^53. */
+export const EXTREME_DOUBLES: readonly number[] = [
+  0,
+  -0,
+  Number.MIN_VALUE,
+  -Number.MIN_VALUE,
+  2.2250738585072014e-308,
+  1e-300,
+  -1e-300,
+  1e-150,
+  1e-15,
+  0.5,
+  1,
+  -1,
+  2 ** 53,
+  1e15,
+  1e150,
+  1e300,
+  -1e300,
+  Number.MAX_VALUE,
+  -Number.MAX_VALUE,
+];
+
+/** Any finite double, with the edges of the format (and `extra`, e.g. the ends of declared ranges) drawn often. */
+export function extremeDoubleArb(extra: readonly number[] = []): fc.Arbitrary<number> {
+  return fc.oneof(
+    { weight: 2, arbitrary: fc.constantFrom(...EXTREME_DOUBLES, ...extra) },
+    { weight: 2, arbitrary: fc.double({ noNaN: true, noDefaultInfinity: true }) },
+    // Sizes a robot has, and their negatives: an extreme in one place beside ordinary values elsewhere.
+    { weight: 1, arbitrary: fc.double({ min: -1e4, max: 1e4, noNaN: true, noDefaultInfinity: true }) },
+  );
+}
+
+/** A place in an argument list: argument index, then keys and indices. */
+export type CallPath = readonly (string | number)[];
+
+/** Every place of `value` (itself included) as paths, with what is there; code paths (prefixes of `code`) are not entered. */
+function placesOf(value: unknown, path: CallPath, code: ReadonlySet<string>, out: { path: CallPath; value: unknown }[]): void {
+  out.push({ path, value });
+  if (code.has(path.join("."))) return;
+  if (Array.isArray(value)) for (const [i, v] of value.entries()) placesOf(v, [...path, i], code, out);
+  else if (isPlainObject(value)) for (const [k, v] of Object.entries(value)) placesOf(v, [...path, k], code, out);
+}
+
+function isPlainObject(value: unknown): value is Record<string, unknown> {
+  if (value === null || typeof value !== "object") return false;
+  const proto = Object.getPrototypeOf(value);
+  return proto === Object.prototype || proto === null;
+}
+
+/** A copy of arrays and plain objects (frozen or not); anything else (functions, descriptors, typed arrays) is shared. */
+export function copyCall<T>(value: T): T {
+  if (Array.isArray(value)) return value.map(copyCall) as T;
+  if (isPlainObject(value)) return Object.fromEntries(Object.entries(value).map(([k, v]) => [k, copyCall(v)])) as T;
+  return value;
+}
+
+function setAt(root: unknown[], path: CallPath, value: unknown): void {
+  let node = root as unknown as Record<string | number, unknown>;
+  for (const key of path.slice(0, -1)) node = node[key] as Record<string | number, unknown>;
+  node[path[path.length - 1]!] = value;
+}
+
+/** One change to a call: a number replaced, a place emptied, an option or unit replaced by an unknown one, or no arguments at all. */
+export type Mutation =
+  | { kind: "number"; pick: number; value: number }
+  | { kind: "scale"; pick: number; value: number }
+  | { kind: "empty"; pick: number; value: null | undefined }
+  | { kind: "text"; pick: number; value: string }
+  | { kind: "no-arguments" };
+
+/** Applies `mutations` to a copy of `args`; a mutation with no place of its kind to go is skipped. */
+export function mutateCall(args: readonly unknown[], mutations: readonly Mutation[], code: ReadonlySet<string> = new Set()): unknown[] {
+  let out = copyCall([...args]);
+  for (const m of mutations) {
+    if (m.kind === "no-arguments") {
+      out = [];
+      continue;
+    }
+    const places: { path: CallPath; value: unknown }[] = [];
+    for (const [i, arg] of out.entries()) placesOf(arg, [i], code, places);
+    const numeric = m.kind === "number" || m.kind === "scale";
+    const eligible = places.filter((p) => (numeric ? typeof p.value === "number" : m.kind === "text" ? typeof p.value === "string" : true));
+    if (eligible.length === 0) continue;
+    const place = eligible[m.pick % eligible.length]!;
+    const value = m.kind === "scale" ? (place.value as number) * m.value : m.value;
+    // A scaled extreme may leave the doubles: the calls stay finite, as the contract's inputs are.
+    if (typeof value !== "number" || Number.isFinite(value)) setAt(out, place.path, value);
+  }
+  return out;
+}
+
+/**
+ * One to three mutations, numbers most often (`extra`: doubles to draw often, such as declared range
+ * ends); a number scaled by a modest factor keeps most calls valid, so the deeper paths run too.
+ */
+export function mutationsArb(extra: readonly number[] = []): fc.Arbitrary<Mutation[]> {
+  const pick = fc.nat({ max: 1 << 20 });
+  const mutation: fc.Arbitrary<Mutation> = fc.oneof(
+    { weight: 12, arbitrary: fc.record({ kind: fc.constant("number" as const), pick, value: extremeDoubleArb(extra) }) },
+    { weight: 4, arbitrary: fc.record({ kind: fc.constant("scale" as const), pick, value: fc.constantFrom(0, 0.1, 0.5, 0.9, 1.1, 2, 10) }) },
+    { weight: 3, arbitrary: fc.record({ kind: fc.constant("empty" as const), pick, value: fc.constantFrom(null, undefined) }) },
+    { weight: 2, arbitrary: fc.record({ kind: fc.constant("text" as const), pick, value: fc.constantFrom("no-such-option", "", "__proto__", "toString") }) },
+    { weight: 1, arbitrary: fc.constant({ kind: "no-arguments" as const }) },
+  );
+  return fc.array(mutation, { minLength: 1, maxLength: 3 });
+}
+
+/** Where a result holds a number that is not finite ("minRadius", "series[3].speed"), or null when every number in it is finite. */
+export function nonFinitePlace(value: unknown, path = "", seen = new Set<unknown>()): string | null {
+  if (typeof value === "number") return Number.isFinite(value) ? null : path || "(the result)";
+  if (typeof value === "bigint" || value === null || typeof value !== "object") return null;
+  if (seen.has(value)) return null;
+  seen.add(value);
+  if (ArrayBuffer.isView(value) && !(value instanceof DataView)) {
+    const list = value as unknown as ArrayLike<number>;
+    for (let i = 0; i < list.length; i++) if (typeof list[i] === "number" && !Number.isFinite(list[i])) return `${path}[${i}]`;
+    return null;
+  }
+  if (value instanceof Map) {
+    for (const [k, v] of value) {
+      const found = nonFinitePlace(v, `${path}.get(${String(k)})`, seen);
+      if (found) return found;
+    }
+    return null;
+  }
+  const entries = Array.isArray(value)
+    ? value.map((v, i) => [`[${i}]`, v] as const)
+    : Object.entries(value).map(([k, v]) => [`${path ? "." : ""}${k}`, v] as const);
+  for (const [key, v] of entries) {
+    const found = nonFinitePlace(v, `${path}${key}`, seen);
+    if (found) return found;
+  }
+  return null;
+}
