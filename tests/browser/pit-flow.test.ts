@@ -5,7 +5,7 @@
  */
 import { describe, expect, it } from "vitest";
 import type { Page } from "playwright-core";
-import { useSite } from "../support/browser.ts";
+import { axeViolations, useSite } from "../support/browser.ts";
 
 const site = useSite();
 const { open } = site;
@@ -123,6 +123,7 @@ describe("the pit flow", () => {
     await page.fill("#balance-calculator-partMass", "3 kg");
     await expect.poll(() => page.locator("#balance-calculator [data-result-bar]").textContent()).toContain("No result yet: correct the marked field.");
     expect(await page.locator("#balance-calculator .field--error").count()).toBe(1);
+    expect(await axeViolations(page)).toEqual([]);
     expect(problems).toEqual([]);
     await context.close();
   });
