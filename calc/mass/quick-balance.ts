@@ -246,7 +246,7 @@ export function quickBalance(input: QuickBalanceInput): QuickBalance {
   }
   const status = shareOfLimit <= 1 ? "holds" : shareOfLimit <= QUICK_BALANCE_MARGIN ? "marginal" : "fails";
   const reason =
-    status === "holds" ? "within the limit" : status === "marginal" ? "up to one grade step over the limit" : "more than one grade step over the limit";
+    status === "holds" ? "within the limit" : status === "marginal" ? "over the limit, by up to 2.5 times (one grade step)" : "more than 2.5 times the limit";
   return {
     totalMass,
     allowance,

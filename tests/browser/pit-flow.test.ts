@@ -108,7 +108,7 @@ describe("the pit flow", () => {
     expect(await bar("verdict").textContent()).toBe("Holds: within the limit");
     expect(await page.locator('#balance-calculator [data-out="offset"]').textContent()).toBe("0.357 mm");
     await page.selectOption("#balance-calculator-grade", "16");
-    await expect.poll(() => bar("verdict").textContent()).toBe("Fails: more than one grade step over the limit");
+    await expect.poll(() => bar("verdict").textContent()).toBe("Fails: more than 2.5 times the limit");
     await expect.poll(() => new URL(page.url()).searchParams.get("G")).toBe("16");
     await page.selectOption("#balance-calculator-limit", "force");
     await page.selectOption("#balance-calculator-change", "moved");
@@ -117,7 +117,7 @@ describe("the pit flow", () => {
     await page.fill("#balance-calculator-moveDistance", "4 mm");
     // U = 180 g × 4 mm = 720 g·mm; F = U·Ω² = 45.5 N at 2400 rpm, over 30 N by less than × 2.5; m_cw = 720/50 = 14.4 g.
     await expect.poll(() => bar("counterweight").textContent()).toBe("14.4 g");
-    expect(await bar("verdict").textContent()).toBe("Marginal: up to one grade step over the limit");
+    expect(await bar("verdict").textContent()).toBe("Marginal: over the limit, by up to 2.5 times (one grade step)");
     expect(await page.locator('#balance-calculator [data-out="force"]').textContent()).toBe("45.5 N");
     await expect.poll(() => new URL(page.url()).searchParams.get("p")).toBe("moved");
     await page.fill("#balance-calculator-partMass", "3 kg");
