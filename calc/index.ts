@@ -29,6 +29,7 @@ export * from "./mass/counterweight.ts";
 export * from "./mass/sensor.ts";
 export * from "./mass/mass-balance.ts";
 export * from "./mass/demo.ts";
+export * from "./mass/quick-balance.ts";
 export * from "./loads/index.ts";
 export * from "./drivetrain/figures.ts";
 export * from "./drivetrain/inputs.ts";

@@ -97,7 +97,8 @@ export interface RadiusTrim {
  * Assumptions: steady speed while the drift was seen; the drift is the spin-rate estimate's (not a
  * loop timing lag, which is an offset, not a drift). A heading that falls behind by a full turn or
  * more per turn has no radius that cancels it.
- * @example radiusTrim({ assumedRadius: 0.008, sense: "ahead", measure: "turn", driftPerTurn: Math.PI / 9, driftRate: 0, angularSpeed: 200 }).radius // → 0.00891358
+ * @example
+ * radiusTrim({ assumedRadius: 0.008, sense: "ahead", measure: "turn", driftPerTurn: Math.PI / 9, driftRate: 0, angularSpeed: 200 }).radius // → 0.00891358
  * Sources: spinner-heading-practice, openstax-college-physics.
  */
 export function radiusTrim(input: RadiusTrimInput): RadiusTrim {

@@ -166,6 +166,12 @@ export interface MassBalance {
   /** e/e_target, the offset as a share of the target (1 or less is within it) [-]. */
   offsetShareOfTarget: number;
   couple: CoupleUnbalance;
+  /**
+   * (C/|z₂ − z₁|)/(U_per/2), the couple as the equal and opposite unbalance it makes in each
+   * correction plane, as a share of the half of U_per allowed in each plane [-]: 1 or less, the
+   * couple alone is within the grade and one counterweight at the height of the centre of mass does.
+   */
+  coupleShareOfPermissible: number;
   twoPlane: TwoPlaneCorrection;
   counterweight: {
     atRadius: CounterweightAtRadius;
@@ -187,15 +193,16 @@ export interface MassBalance {
  * the layout with the counterweight added, and the sensor radius before and after.
  *
  * Formula: $e = |\bar{\mathbf c}|$, $U = M e$, $G = e\,\Omega$, $U_{per} = M G_{chosen} / \Omega$,
- * $M_{rock} = \Omega^2\sqrt{I_{xz}^2 + I_{yz}^2}$, $m_{min} = M(e - e_t)/(r + e_t)$
+ * $M_{rock} = \Omega^2\sqrt{I_{xz}^2 + I_{yz}^2}$, $m_{min} = M(e - e_t)/(r + e_t)$,
+ * couple share $\dfrac{C/|z_2 - z_1|}{U_{per}/2}$ with $C = \sqrt{I_{xz}^2 + I_{yz}^2}$
  *
  * @param input the parts, optional candidates, and every field of `massBalanceInputs` (SI)
- * @returns MassBalance, with U/U_per and e/e_target as shares [-]
+ * @returns MassBalance, with U/U_per, e/e_target and the couple per plane against U_per/2 as shares [-]
  *
  * Assumptions: rigid body spinning steadily about the vertical axis through its centre of mass; the
  * counterweight goes at the height of the centre of mass so that it adds no couple.
  * Sources: centre-of-mass, parallel-axis-theorem, iso-21940-11, rigid-rotor-unbalance,
- * openstax-college-physics.
+ * bloch-geitner-machinery-maintenance, openstax-college-physics.
  */
 export function massBalance(input: MassBalanceInput): MassBalance {
   const { parts, candidates } = requireInputObject(input);
@@ -212,6 +219,17 @@ export function massBalance(input: MassBalanceInput): MassBalance {
   const atRadius = counterweightAtRadius({ ...centre, radius: correctionRadius });
   const forMass = counterweightRadiusForMass({ ...centre, mass: counterweightMass, maxRadius });
   const choice = candidates && candidates.length > 0 ? counterweightAtCandidates({ ...centre, candidates }) : null;
+  const couple = coupleUnbalance({ productXZ: layout.productXZ, productYZ: layout.productYZ, angularSpeed: spinSpeed });
+  // A couple C acts as ±C/b in two planes b apart (rigid-rotor-unbalance), against U_per/2 per plane (bloch-geitner-machinery-maintenance).
+  const coupleShareOfPermissible = couple.couple / Math.abs(planeZ2 - planeZ1) / permissible.perPlane;
+  if (!Number.isFinite(coupleShareOfPermissible)) {
+    throw new CalcInputError({
+      param: "planeZ2",
+      value: planeZ2,
+      expected: "far enough from the lower plane that the couple per plane stays finite",
+      unit: "m",
+    });
+  }
   const twoPlane = twoPlaneCorrection({
     firstMomentX: layout.firstMomentX,
     firstMomentY: layout.firstMomentY,
@@ -257,7 +275,8 @@ export function massBalance(input: MassBalanceInput): MassBalance {
       unbalanceShareOfPermissible: stat.unbalance / permissible.unbalance,
       offsetVerdict: layout.offset <= targetOffset ? "within-target" : "outside-target",
       offsetShareOfTarget,
-      couple: coupleUnbalance({ productXZ: layout.productXZ, productYZ: layout.productYZ, angularSpeed: spinSpeed }),
+      couple,
+      coupleShareOfPermissible,
       twoPlane,
       counterweight: { atRadius, forMass, candidates: choice },
       fix,

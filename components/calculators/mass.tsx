@@ -290,23 +290,33 @@ export default function MassLayoutCalculator({ id = massCalculator.anchor, layou
         />
       </>
     );
+    const rocks = b.coupleShareOfPermissible > 1;
+    // One line says what the couple means here; the two-plane figures show only when it matters.
     couple = (
-      <Outs
-        rows={[
-          ["Couple unbalance", "couple", small(b.couple.couple)],
-          ["Rocking moment at speed", "rocking", q(b.couple.moment, "torque")],
-          [
-            `Lower plane, at ${q(input.correctionRadius, "length")}`,
-            "plane-lower",
-            `${q(b.twoPlane.lower.mass, "mass")} at ${q(b.twoPlane.lower.angle, "angle")}`,
-          ],
-          [
-            `Upper plane, at ${q(input.correctionRadius, "length")}`,
-            "plane-upper",
-            `${q(b.twoPlane.upper.mass, "mass")} at ${q(b.twoPlane.upper.angle, "angle")}`,
-          ],
-        ]}
-      />
+      <>
+        <p data-out="couple-note">
+          Parts above and below the centre of mass rock it: {formatNumber(b.coupleShareOfPermissible * 100)} % of the {chosen} allowance per plane.{" "}
+          {rocks ? "A mass in each plane cancels rocking and offset:" : "One counterweight at the height of the centre of mass will do."}
+        </p>
+        {rocks && (
+          <Outs
+            rows={[
+              ["Couple unbalance", "couple", small(b.couple.couple)],
+              ["Rocking moment at speed", "rocking", q(b.couple.moment, "torque")],
+              [
+                `Lower plane, at ${q(input.correctionRadius, "length")}`,
+                "plane-lower",
+                `${q(b.twoPlane.lower.mass, "mass")} at ${q(b.twoPlane.lower.angle, "angle")}`,
+              ],
+              [
+                `Upper plane, at ${q(input.correctionRadius, "length")}`,
+                "plane-upper",
+                `${q(b.twoPlane.upper.mass, "mass")} at ${q(b.twoPlane.upper.angle, "angle")}`,
+              ],
+            ]}
+          />
+        )}
+      </>
     );
     const within = b.offsetVerdict === "within-target";
     counter = (
@@ -422,7 +432,34 @@ export default function MassLayoutCalculator({ id = massCalculator.anchor, layou
           </ol>
           <button type="button" class="button" id={`${id}-add`} onClick={() => focusLater(`${id}-p${model.add().key}-name`)}>
             Add a part
-          </button>
+          </button>{" "}
+          {parts.length ? (
+            <button
+              type="button"
+              class="button button--quiet"
+              id={`${id}-clear`}
+              onClick={() => {
+                model.clear();
+                focusLater(`${id}-restore`);
+              }}
+            >
+              Start empty
+            </button>
+          ) : (
+            model.cleared.value && (
+              <button
+                type="button"
+                class="button button--quiet"
+                id={`${id}-restore`}
+                onClick={() => {
+                  model.restore();
+                  focusLater(`${id}-clear`);
+                }}
+              >
+                Undo: put the parts back
+              </button>
+            )
+          )}
         </fieldset>
 
         <h3 id={`${id}-results`}>Mass properties and top view</h3>

@@ -64,6 +64,8 @@ export function createMassModel(system: UnitSystem = "metric", layoutText = "") 
   const notices = signal<string[]>([]);
   /** The counterweight last added with "Apply", for undo and the before/after line. */
   const applied = signal<{ key: number; before: Snapshot; after: Snapshot } | null>(null);
+  /** The list "Start empty" took away, for undo while the list stays empty. */
+  const cleared = signal<PartModel[] | null>(null);
   let lastLayoutText = layoutText;
 
   const layout = computed(() => {
@@ -137,6 +139,19 @@ export function createMassModel(system: UnitSystem = "metric", layoutText = "") 
         after: { offset: after.offset, grade: after.equivalentGrade, met: after.gradeMet?.label ?? "", drift: after.sensor.driftPerRevolution },
       };
       parts.value = [...parts.value, part];
+    });
+  }
+  /** Removes every part; `restore` puts them back while the list is still empty. */
+  function clear(): void {
+    batch(() => {
+      cleared.value = parts.value;
+      parts.value = [];
+    });
+  }
+  function restore(): void {
+    batch(() => {
+      if (parts.value.length === 0 && cleared.value) parts.value = cleared.value;
+      cleared.value = null;
     });
   }
   function undo(): void {
@@ -230,6 +245,7 @@ export function createMassModel(system: UnitSystem = "metric", layoutText = "") 
     points,
     notices,
     applied,
+    cleared,
     layout,
     mounting,
     outcome,
@@ -240,6 +256,8 @@ export function createMassModel(system: UnitSystem = "metric", layoutText = "") 
     mirror,
     apply,
     undo,
+    clear,
+    restore,
     setSystem,
     applyQuery,
     queryFor,

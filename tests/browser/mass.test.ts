@@ -193,6 +193,24 @@ describe("mass layout in the browser", () => {
     expect(href).toMatch(/^\/chapters\/heading-drift\/\?v=1&ra=32mm&rpm=2400rpm&rt=[\d.]+mm&u=metric#drift-calculator$/);
     await context.close();
   });
+
+  it("starts empty from the demo layout, the link following, and puts the parts back with undo; a negligible couple is one line", async () => {
+    const { page, context, problems } = await open(PAGE);
+    const count = () => page.locator(".mass-parts details").count();
+    expect(await count()).toBe(9);
+    // The demo's couple is 17 % of G 100's allowance per plane (tests/calc/mass.test.ts): a note, no two-plane figures.
+    expect(await out(page, "couple-note")).toContain("One counterweight at the height of the centre of mass will do.");
+    expect(await page.locator('[data-out="plane-lower"]').count()).toBe(0);
+    await page.getByRole("button", { name: "Start empty" }).click();
+    await expect.poll(count).toBe(0);
+    await expect.poll(() => new URL(page.url()).searchParams.get("l")).toBe("v1");
+    await expect.poll(() => page.evaluate(() => document.activeElement?.id ?? "")).toMatch(/-restore$/);
+    await page.getByRole("button", { name: "Undo: put the parts back" }).click();
+    await expect.poll(count).toBe(9);
+    await expect.poll(() => new URL(page.url()).searchParams.get("l")).toMatch(/^v1~disk_/);
+    expect(problems).toEqual([]);
+    await context.close();
+  });
 });
 
 describe("accessibility of the mass-layout page (axe-core)", () => {

@@ -5,7 +5,7 @@
  */
 import { describe, expect, it } from "vitest";
 import type { Page } from "playwright-core";
-import { useSite } from "../support/browser.ts";
+import { axeViolations, useSite } from "../support/browser.ts";
 
 const site = useSite();
 const { open } = site;
@@ -29,6 +29,7 @@ const CHAPTERS = [
   { slug: "heading-timing", anchor: "timing-calculator", bar: "step" },
   { slug: "calibration", anchor: "calibration-calculator", bar: "radius" },
   { slug: "mass-layout", anchor: "mass-calculator", bar: "offset" },
+  { slug: "quick-balance", anchor: "balance-calculator", bar: "counterweight" },
   { slug: "fasteners", anchor: "fastener-calculator", bar: "sf" },
   { slug: "rims", anchor: "rim-calculator", bar: "sf" },
   { slug: "spin-up", anchor: "spin-up-calculator", bar: "time-100" },
@@ -112,4 +113,38 @@ describe("the pit flow", () => {
       await context.close();
     },
   );
+
+  it("answers the pit's balance question the way it is asked: 12 g added at 45 mm, then a 180 g battery moved 4 mm against a 30 N wobble force", async () => {
+    const { page, context, problems } = await open("/chapters/quick-balance/");
+    await page.locator(".to-calculator a").click();
+    const bar = (name: string) => page.locator(`#balance-calculator [data-result-bar] [data-bar="${name}"]`);
+    await page.fill("#balance-calculator-robotMass", "1.5 kg");
+    await page.fill("#balance-calculator-spinSpeed", "2400 rpm");
+    await page.fill("#balance-calculator-partMass", "12 g");
+    await page.fill("#balance-calculator-partRadius", "45 mm");
+    await page.fill("#balance-calculator-counterweightRadius", "50 mm");
+    // m_cw = m·r/r_cw = 12 g × 45/50 = 10.8 g; e = 540 g·mm / 1.512 kg = 0.357 mm; 89.8 % of G 100 (tests/calc/quick-balance.test.ts).
+    await expect.poll(() => bar("counterweight").textContent()).toBe("10.8 g");
+    expect(await bar("verdict").textContent()).toBe("Holds: within the limit");
+    expect(await page.locator('#balance-calculator [data-out="offset"]').textContent()).toBe("0.357 mm");
+    await page.selectOption("#balance-calculator-grade", "16");
+    await expect.poll(() => bar("verdict").textContent()).toBe("Fails: more than 2.5 times the limit");
+    await expect.poll(() => new URL(page.url()).searchParams.get("G")).toBe("16");
+    await page.selectOption("#balance-calculator-limit", "force");
+    await page.selectOption("#balance-calculator-change", "moved");
+    await page.fill("#balance-calculator-wobbleForce", "30 N");
+    await page.fill("#balance-calculator-partMass", "180 g");
+    await page.fill("#balance-calculator-moveDistance", "4 mm");
+    // U = 180 g × 4 mm = 720 g·mm; F = U·Ω² = 45.5 N at 2400 rpm, over 30 N by less than × 2.5; m_cw = 720/50 = 14.4 g.
+    await expect.poll(() => bar("counterweight").textContent()).toBe("14.4 g");
+    expect(await bar("verdict").textContent()).toBe("Marginal: over the limit, by up to 2.5 times (one grade step)");
+    expect(await page.locator('#balance-calculator [data-out="force"]').textContent()).toBe("45.5 N");
+    await expect.poll(() => new URL(page.url()).searchParams.get("p")).toBe("moved");
+    await page.fill("#balance-calculator-partMass", "3 kg");
+    await expect.poll(() => page.locator("#balance-calculator [data-result-bar]").textContent()).toContain("No result yet: correct the marked field.");
+    expect(await page.locator("#balance-calculator .field--error").count()).toBe(1);
+    expect(await axeViolations(page)).toEqual([]);
+    expect(problems).toEqual([]);
+    await context.close();
+  });
 });

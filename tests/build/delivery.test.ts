@@ -30,10 +30,11 @@ const KIB = 1024;
  * Ceiling for the first visit's offline download, gzip bytes (fonts and the search index count at
  * their own, already compressed, size). Measured 515 KiB with 12 pages (1.60 MB raw; 471 KiB as
  * brotli), from 739 KiB before; 534 KiB with 13 (the radius-trim chapter: its page, script and
- * search entries). The 500 KiB target is not met: what remains is used (pages, scripts, 6 fonts, the
+ * search entries); 554 KiB with 14 (the quick-balance chapter: its page, script and search entries,
+ * about 20 KiB). The 500 KiB target is not met: what remains is used (pages, scripts, 6 fonts, the
  * search index and its code).
  */
-const PRECACHE_GZIP_CEILING = 545 * KIB;
+const PRECACHE_GZIP_CEILING = 565 * KIB;
 
 describe("compressed copies", () => {
   const text = () => files().filter((f) => /\.(html|css|js|svg|json)$/.test(f));

@@ -54,7 +54,9 @@ const EDITOR_JS = 36 * KB;
  */
 const OVER_BUDGET: Record<string, { js: number; total: number }> = {
   calibration: { js: 29_700, total: 60 * KB },
-  "mass-layout": { js: 36 * KB, total: 62_200 },
+  // 62 716 B measured with the quick-balance chapter: its navigation link (+136 B, on every page), and
+  // the editor's "Start empty" with undo and the one-line couple note (+380 B; JS 36 455 B, inside 36 KB).
+  "mass-layout": { js: 36 * KB, total: 62_800 },
   "spin-up": { js: 36 * KB, total: 64_700 },
 };
 

@@ -90,6 +90,38 @@ const c =
 /** Valid calls of every public function (built lazily: some need other functions' results). */
 const CALLS: Record<PublicFunction, Entry> = {
   // core: errors, sources, units, inputs
+  quickBalance: {
+    calls: c(
+      [
+        {
+          robotMass: 1.5,
+          spinSpeed: 251,
+          limit: "grade",
+          grade: "100",
+          wobbleForce: 50,
+          change: "added",
+          partMass: 0.012,
+          partRadius: 0.045,
+          moveDistance: 0.01,
+          counterweightRadius: 0.05,
+        },
+      ],
+      [
+        {
+          robotMass: 1.5,
+          spinSpeed: 251,
+          limit: "force",
+          grade: "16",
+          wobbleForce: 30,
+          change: "moved",
+          partMass: 0.18,
+          partRadius: 0.045,
+          moveDistance: 0.004,
+          counterweightRadius: 0.05,
+        },
+      ],
+    ),
+  },
   radiusTrim: {
     calls: c(
       [{ assumedRadius: 0.008, sense: "ahead", measure: "turn", driftPerTurn: 0.35, driftRate: 0.17, angularSpeed: 200 }],
@@ -531,6 +563,7 @@ const CONSTRUCTORS: Record<PublicClass, Entry | "error class"> = {
 const DECLARED: Partial<Record<PublicFunction, InputSpecs>> = {
   accelerometerPlacement: api.accelerometerPlacementInputs,
   radiusTrim: api.radiusTrimInputs,
+  quickBalance: api.quickBalanceInputs,
   headingDrift: api.headingDriftInputs,
   opposedSensorsCheck: api.opposedSensorsInputs,
   headingTiming: api.headingTimingInputs,

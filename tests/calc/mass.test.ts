@@ -440,6 +440,25 @@ describe("static and couple unbalance", () => {
   });
 });
 
+describe("the couple against the grade's allowance per plane", () => {
+  it("hand formula (rigid-rotor-unbalance; bloch-geitner-machinery-maintenance, half of U_per per plane): a pure couple of 1e-5 kg·m² between planes 20 mm apart is ±500 g·mm per plane", () => {
+    const parts = [given({ kind: "disk", radius: 0.06 }, 1.5), point(0.01, 0.05, 0, 0.01), point(0.01, -0.05, 0, -0.01)];
+    const r = massBalance({ ...DEFAULTS, parts, planeZ1: 0, planeZ2: 0.02 });
+    expect(r.layout.offset).toBe(0);
+    // C/b = 1e-5/0.02 = 5e-4 kg·m; U_per/2 = 1.52 kg × 0.1 m/s / 251.3 rad/s / 2 = 302.4 g·mm: share 1.653.
+    expectRel(r.coupleShareOfPermissible, 5e-4 / r.permissible.perPlane, 1e-12);
+    expectRel(r.coupleShareOfPermissible, 5e-4 / ((1.52 * 0.1) / rpmToRadPerSecond(2400) / 2), 1e-12);
+    // Planes twice as far apart halve the share; a layout with no couple has none.
+    expectRel(massBalance({ ...DEFAULTS, parts, planeZ1: -0.01, planeZ2: 0.03 }).coupleShareOfPermissible, r.coupleShareOfPermissible / 2, 1e-12);
+    expect(massBalance({ ...DEFAULTS, parts: [parts[0]!] }).coupleShareOfPermissible).toBe(0);
+  });
+
+  it("names the upper plane when the planes are so close that the couple per plane would overflow", () => {
+    const parts = [given({ kind: "disk", radius: 0.06 }, 1.5), point(0.01, 0.05, 0, 0.01), point(0.01, -0.05, 0, -0.01)];
+    expect(() => massBalance({ ...DEFAULTS, parts, planeZ1: 0, planeZ2: 5e-324 })).toThrow(/planeZ2/);
+  });
+});
+
 describe("two-plane correction", () => {
   it("rigid-rotor-unbalance: 10 g at (50 mm, 0, 10 mm) with planes at 0 and 20 mm and r = 50 mm takes 5 g at 180° in each plane", () => {
     const p = massProperties([point(0.01, 0.05, 0, 0.01)]);

@@ -189,6 +189,28 @@ describe("mass-layout model", () => {
     expect(resultOf(model).balance.layout.offset).toBe(before.balance.layout.offset);
   });
 
+  it("starts empty and puts the parts back with undo, the link following both", () => {
+    const model = createMassModel("metric", DEMO);
+    model.clear();
+    expect(model.parts.value).toHaveLength(0);
+    expect(model.outcome.value).toBeNull();
+    // An empty list is written as the bare layout version, and reads back as empty.
+    const empty = model.queryFor("");
+    expect(new URLSearchParams(empty).get("l")).toBe("v1");
+    const reopened = createMassModel("metric", DEMO);
+    reopened.applyQuery(empty);
+    expect(reopened.parts.value).toHaveLength(0);
+    model.restore();
+    expect(model.parts.value).toHaveLength(9);
+    expect(model.cleared.value).toBeNull();
+    expect(new URLSearchParams(model.queryFor("")).get("l")).toBe(DEMO);
+    // Undo is offered only while the list is still empty: a part added after it keeps the new list.
+    model.clear();
+    model.add();
+    model.restore();
+    expect(model.parts.value).toHaveLength(1);
+  });
+
   it("switches units for every part and the mounting points, and back", () => {
     const model = createMassModel("metric", DEMO);
     model.mode.value = "p";
