@@ -222,7 +222,8 @@ export function massBalance(input: MassBalanceInput): MassBalance {
   const couple = coupleUnbalance({ productXZ: layout.productXZ, productYZ: layout.productYZ, angularSpeed: spinSpeed });
   // A couple C acts as ±C/b in two planes b apart (rigid-rotor-unbalance), against U_per/2 per plane (bloch-geitner-machinery-maintenance).
   const coupleShareOfPermissible = couple.couple / Math.abs(planeZ2 - planeZ1) / permissible.perPlane;
-  if (!Number.isFinite(coupleShareOfPermissible)) {
+  // (Planes at one height are refused just below, by the two-plane correction, with its own words.)
+  if (!Number.isFinite(coupleShareOfPermissible) && planeZ2 !== planeZ1) {
     throw new CalcInputError({
       param: "planeZ2",
       value: planeZ2,
