@@ -22,6 +22,7 @@ register("../scripts/node-glob.mjs", import.meta.url);
 
 const { readDesignText, describeProblems } = await import("../calc/design/design.ts");
 const { runChecks, buildSheetText, overallStatus } = await import("../calc/design/checks.ts");
+const { STATUS_WORDS } = await import("../calc/core/check.ts");
 
 function fail(message) {
   console.error(message);
@@ -69,9 +70,19 @@ const system = units ?? reading.design.units;
 const results = runChecks(reading.design, system);
 const overall = overallStatus(results);
 if (json) {
+  // "status" is the key a program tests; "verdict" is the word the build sheet shows ("For information").
+  const verdict = (status) => (status === "empty" ? "Nothing to check" : STATUS_WORDS[status]);
   console.log(
     JSON.stringify(
-      { design: reading.design.name, units: system, overall, problems: reading.problems, migratedFrom: reading.migratedFrom, checks: results },
+      {
+        design: reading.design.name,
+        units: system,
+        overall,
+        overallVerdict: verdict(overall),
+        problems: reading.problems,
+        migratedFrom: reading.migratedFrom,
+        checks: results.map((r) => ({ ...r, verdict: verdict(r.status) })),
+      },
       null,
       2,
     ),

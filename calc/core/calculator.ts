@@ -13,7 +13,7 @@ import type { CheckCard } from "./check.ts";
 import type { ChoiceSpecs } from "./choices.ts";
 import { fieldUnit, readField, type InputSpecs } from "./inputs.ts";
 import { type LinkKey, MAX_VALUE_LENGTH, quoteForNotice, readLinkKeys, writeLinkKeys } from "./permalink.ts";
-import { quantityToText, type UnitSystem } from "./units.ts";
+import { linkSpelling, quantityToText, type UnitSystem } from "./units.ts";
 
 /** A problem found reading a stored value: where (a path under the value) and what. */
 export interface ValueProblem {
@@ -197,7 +197,7 @@ export function readLink(calc: AnyForm, search: string): LinkedState {
 /** Writes a calculator's text state into a query string, keeping other scopes' keys of `existing`. */
 export function writeLink(calc: AnyForm, state: TextState, system: UnitSystem, existing = "", pageValues: Record<string, string> = {}): string {
   const values: Record<string, string> = {};
-  for (const [name, spec] of Object.entries(calc.inputs)) if (state.texts[name] !== undefined) values[spec.urlKey] = state.texts[name]!.replace(/\s+/g, "");
+  for (const [name, spec] of Object.entries(calc.inputs)) if (state.texts[name] !== undefined) values[spec.urlKey] = linkSpelling(state.texts[name]!);
   for (const [name, spec] of Object.entries(calc.choices)) if (state.choices[name] !== undefined) values[spec.urlKey] = state.choices[name]!;
   for (const [name, spec] of Object.entries(calc.extras)) if (state.extras[name] !== undefined) values[spec.urlKey] = state.extras[name]!;
   return writeLinkKeys(existing, calc.scope, system, { ...values, ...pageValues });

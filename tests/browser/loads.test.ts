@@ -77,7 +77,9 @@ describe("the bolt calculator in the browser", () => {
       await page.fill(`#fastener-calculator-${id}`, id === "radius" ? "70 mm" : id === "count" ? "1" : "40 g");
     }
     await page.fill("#fastener-calculator-failBelow", "3");
-    await expect.poll(() => page.locator("#fastener-calculator-marginalBelow-error").textContent()).toBe("Thin below must be at least the fails below (3).");
+    await expect
+      .poll(() => page.locator("#fastener-calculator-marginalBelow-error").textContent())
+      .toBe("Marginal below must be at least the fails below (3).");
     expect(await page.getAttribute("#fastener-calculator-marginalBelow", "aria-describedby")).toContain("fastener-calculator-marginalBelow-error");
     expect(await page.locator(".calc-results--empty").count()).toBe(1);
     const body = (await page.textContent("body")) ?? "";
