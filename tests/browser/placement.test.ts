@@ -20,8 +20,8 @@ describe("accelerometer placement in the browser", () => {
     // r_max = 0.8 × 200 g / ω² at 3000 rpm = 15.9 mm; r_min at 500 rpm, 2 % = 8.65 mm (see tests/calc/rotation.test.ts).
     expect(await out(page, "max-radius")).toBe("15.9 mm");
     expect(await out(page, "min-radius")).toBe("8.65 mm");
-    expect(await out(page, "accel-top")).toBe("121 g");
-    expect(await page.locator(".verdict").textContent()).toContain("Fits.");
+    expect(await out(page, "accel-top")).toBe("121 gₙ");
+    expect(await page.locator(".verdict").textContent()).toContain("Holds.");
     expect(await page.inputValue("#placement-calculator-topSpeed")).toBe("3000 rpm");
     expect(problems).toEqual([]);
     await context.close();
@@ -30,8 +30,8 @@ describe("accelerometer placement in the browser", () => {
   it("updates outputs and the URL when an input changes", async () => {
     const { page, context } = await open("/chapters/acceleration/?v=1&rpm=3000rpm&r=12mm");
     await page.fill("#placement-calculator-radius", "30 mm");
-    await expect.poll(() => page.locator(".verdict").textContent()).toContain("Too far out.");
-    expect(await out(page, "accel-top")).toBe("302 g");
+    await expect.poll(() => page.locator(".verdict").textContent()).toContain("Fails: too far out.");
+    expect(await out(page, "accel-top")).toBe("302 gₙ");
     await expect.poll(() => new URL(page.url()).searchParams.get("r")).toBe("30mm");
     expect(new URL(page.url()).searchParams.get("rpm")).toBe("3000rpm");
     await context.close();
