@@ -29,6 +29,7 @@ const { runChecks, buildSheetText, overallStatus, terminalSafe } = await import(
 const shown = (text) => terminalSafe(String(text));
 const printable = (text) => text.split("\n").map(terminalSafe).join("\n");
 const print = (text) => process.stdout.write(printable(text));
+const { STATUS_WORDS } = await import("../calc/core/check.ts");
 
 function fail(message) {
   process.stderr.write(`${printable(message)}\n`);
@@ -78,8 +79,18 @@ const overall = overallStatus(results);
 if (json) {
   // JSON.stringify escapes C0 controls but leaves DEL, C1, the separators and the direction controls
   // raw; print writes them as \uXXXX escapes, which a JSON string may hold for any character (they
-  // can only be inside strings), so the parsed text is unchanged.
-  const report = { design: reading.design.name, units: system, overall, problems: reading.problems, migratedFrom: reading.migratedFrom, checks: results };
+  // can only be inside strings), so the parsed text is unchanged. "status" is the key a program
+  // tests; "verdict" is the word the build sheet shows ("For information").
+  const verdict = (status) => (status === "empty" ? "Nothing to check" : STATUS_WORDS[status]);
+  const report = {
+    design: reading.design.name,
+    units: system,
+    overall,
+    overallVerdict: verdict(overall),
+    problems: reading.problems,
+    migratedFrom: reading.migratedFrom,
+    checks: results.map((r) => ({ ...r, verdict: verdict(r.status) })),
+  };
   print(`${JSON.stringify(report, null, 2)}\n`);
 } else {
   if (reading.problems.length) {

@@ -23,7 +23,7 @@ export const fastenerChoices = defineChoices({
     urlKey: "cls",
     options: PROPERTY_CLASS_OPTIONS,
     default: FASTENER_CHOICE_DEFAULTS.propertyClass,
-    help: "The number stamped on the head; the strengths are the ISO 898-1 minimums.",
+    help: "The number stamped on the head; the strengths are the ISO 898-1 minimums. Q&T: quenched and tempered.",
   },
   mode: {
     label: "Loading",

@@ -13,7 +13,7 @@ import type { CheckCard } from "./check.ts";
 import type { ChoiceSpecs } from "./choices.ts";
 import { fieldUnit, readField, type InputSpecs } from "./inputs.ts";
 import { type LinkKey, MAX_VALUE_LENGTH, quoteForNotice, readLinkKeys, writeLinkKeys } from "./permalink.ts";
-import { quantityToText, type UnitSystem } from "./units.ts";
+import { linkSpelling, quantityToText, type UnitSystem } from "./units.ts";
 import { requireInputObject } from "./spec-check.ts";
 import { CalcInputError } from "./errors.ts";
 
@@ -210,8 +210,7 @@ export function writeLink(calc: AnyForm, state: TextState, system: UnitSystem, e
   requireInputObject(state, "state");
   if (typeof existing !== "string") throw new CalcInputError({ param: "existing", value: existing, expected: "a query string", unit: "" });
   const values: Record<string, string> = {};
-  for (const [name, spec] of Object.entries(calc.inputs))
-    if (state.texts?.[name] !== undefined) values[spec.urlKey] = String(state.texts[name]).replace(/\s+/g, "");
+  for (const [name, spec] of Object.entries(calc.inputs)) if (state.texts?.[name] !== undefined) values[spec.urlKey] = linkSpelling(String(state.texts[name]));
   for (const [name, spec] of Object.entries(calc.choices)) if (state.choices?.[name] !== undefined) values[spec.urlKey] = String(state.choices[name]);
   for (const [name, spec] of Object.entries(calc.extras)) if (state.extras?.[name] !== undefined) values[spec.urlKey] = String(state.extras[name]);
   return writeLinkKeys(existing, calc.scope, system, { ...values, ...pageValues });

@@ -70,7 +70,8 @@ export const UNITS = {
   oz: { symbol: "oz", kind: "mass", factor: OUNCE, aliases: ["ounce", "ounces"] },
   // acceleration [m/s²]
   "m/s2": { symbol: "m/s²", kind: "acceleration", factor: 1, aliases: ["m/s²", "m/s^2", "ms-2", "m s-2"] },
-  gn: { symbol: "g", kind: "acceleration", factor: STANDARD_GRAVITY, aliases: ["g", "G", "gₙ", "g0"] },
+  // Shown as gₙ so that an acceleration never reads like grams; "g" is still read in an acceleration field.
+  gn: { symbol: "gₙ", kind: "acceleration", factor: STANDARD_GRAVITY, aliases: ["g", "G", "g0"] },
   "ft/s2": { symbol: "ft/s²", kind: "acceleration", factor: FOOT, aliases: ["ft/s²", "ft/s^2"] },
   // angular speed [rad/s]
   "rad/s": { symbol: "rad/s", kind: "angularSpeed", factor: 1, aliases: ["rad s-1", "1/s"] },
@@ -398,6 +399,7 @@ export function readExactNumber(text: string, factor: number): number | null {
 
 /** ASCII spellings for units whose symbol and id both have characters a URL would percent-encode. */
 const URL_SPELLING: Partial<Record<UnitId, string>> = {
+  gn: "g",
   ft·lbf: "ft-lbf",
   N·m: "Nm",
   lbf·in: "lbf-in",
@@ -416,6 +418,20 @@ const URL_SPELLING: Partial<Record<UnitId, string>> = {
 function urlSpelling(id: UnitId): string {
   const symbol = UNITS[id].symbol;
   return URL_SPELLING[id] ?? (/^[\w/.]*$/.test(symbol) ? symbol : id);
+}
+
+/**
+ * Field text as a link writes it: without spaces, and with a unit symbol a URL would percent-encode
+ * written in its ASCII spelling ("200 gₙ" → "200g", "8 mΩ" → "8mohm"); `findUnit` reads both back
+ * as the same unit. Text in any other form is kept as typed.
+ */
+export function linkSpelling(text: string): string {
+  if (typeof text !== "string") throw new CalcInputError({ param: "text", value: text, expected: "text", unit: "" });
+  const compact = text.replace(/\s+/g, "");
+  const match = /^([+\-−]?[\d.,]+(?:[eE][+\-−]?\d+)?)(.+)$/.exec(compact);
+  if (!match || /^[\w/.%]*$/.test(match[2]!)) return compact;
+  const id = (Object.keys(UNITS) as UnitId[]).find((u) => UNITS[u].symbol === match[2]);
+  return id ? `${match[1]}${urlSpelling(id)}` : compact;
 }
 
 // ---------------------------------------------------------------------------------------------

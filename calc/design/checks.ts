@@ -3,7 +3,7 @@
  * status (Holds, Marginal, Fails, or for information), the rule and margin that decided it, and its
  * key figure. The same code feeds the build-sheet page and the command line.
  */
-import { type CheckCard, type CheckStatus, STATUS_WORDS, worstStatus } from "../core/check.ts";
+import { type CheckCard, type CheckStatus, STATUS_MARKS, STATUS_WORDS, worstStatus } from "../core/check.ts";
 import type { AnyCalculator, AnyValues } from "../core/calculator.ts";
 import { CalcInputError } from "../core/errors.ts";
 import type { UnitSystem } from "../core/units.ts";
@@ -126,18 +126,19 @@ export function terminalSafe(text: string): string {
   });
 }
 
-/** Plain-text build sheet, as the command line prints it; every text from the design goes through `terminalSafe`. */
+/** Plain-text build sheet, as the command line prints it: each card led by the build sheet's mark and word ("✔ Holds"); every text from the design goes through `terminalSafe`. */
 export function buildSheetText(design: Design, results: readonly CheckResult[]): string {
   requireInputObject(design, "design");
   requireList(results, "results");
-  const mark = (status: CheckStatus) => STATUS_WORDS[status].toUpperCase().padEnd(15);
+  const mark = (status: CheckStatus) => `${STATUS_MARKS[status]} ${STATUS_WORDS[status]}`.padEnd(17);
+  const indent = " ".repeat(19);
   const safe = terminalSafe;
   const lines = [`Build sheet: ${safe(design.name)}`, `Design saved ${safe(String(design.modified).slice(0, 10))}; units ${safe(String(design.units))}`, ""];
   for (const r of results) {
     lines.push(`${mark(r.status)}  ${safe(r.title)}${r.figure ? `: ${safe(r.figure.label)} ${safe(r.figure.text)}` : ""}`);
-    lines.push(`                 rule:   ${safe(r.rule)}`);
-    lines.push(`                 result: ${safe(r.margin)}`);
-    for (const d of r.details) lines.push(`                 ${safe(d.label)}: ${safe(d.text)}`);
+    lines.push(`${indent}rule:   ${safe(r.rule)}`);
+    lines.push(`${indent}result: ${safe(r.margin)}`);
+    for (const d of r.details) lines.push(`${indent}${safe(d.label)}: ${safe(d.text)}`);
   }
   const overall = overallStatus(results);
   lines.push("", `Overall: ${overall === "empty" ? "nothing to check" : STATUS_WORDS[overall]}`);

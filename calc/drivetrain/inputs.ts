@@ -105,7 +105,7 @@ export const drivetrainInputs = defineInputs({
     help: "Controller duty: the motors see this fraction of the battery voltage.",
   },
   cellCount: {
-    label: "Cells in series",
+    label: "Cells in series (S)",
     kind: "count",
     min: 1,
     max: 24,
@@ -134,7 +134,7 @@ export const drivetrainInputs = defineInputs({
     help: "Internal resistance of one cell; the pack sags by this times the current per cell.",
   },
   gearRatio: {
-    label: "Reduction",
+    label: "Gear ratio",
     kind: "fraction",
     min: 0.05,
     max: 100,
@@ -144,7 +144,7 @@ export const drivetrainInputs = defineInputs({
     help: "Motor turns per output turn (weapon) or per wheel turn (spinner); 1 for direct drive.",
   },
   gearEfficiency: {
-    label: "Reduction efficiency",
+    label: "Gear efficiency",
     kind: "fraction",
     min: 0,
     minOpen: true,

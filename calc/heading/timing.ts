@@ -58,7 +58,7 @@ export function latencyHeadingLag(input: { angularSpeed: number; latency: number
 }
 
 /**
- * Arc swept while a heading beacon (LED) is lit (openstax-up1-rotational-kinematics, θ = ωt).
+ * Arc swept while the heading LED is lit (openstax-up1-rotational-kinematics, θ = ωt).
  *
  * Formula: $w = \omega\,t_{on}$
  *
@@ -103,7 +103,7 @@ export function loopRateForStep(input: { angularSpeed: number; targetStep: numbe
 }
 
 /**
- * Beacon on-time that gives a target arc at top speed (openstax-up1-rotational-kinematics).
+ * Heading LED on-time that gives a target arc at top speed (openstax-up1-rotational-kinematics).
  *
  * Formula: $t_{on} = w_{target} / \omega_{top}$
  *
@@ -153,7 +153,7 @@ export const headingTimingInputs = /* @__PURE__ */ defineInputs({
     help: "Fixed delay from reading the sensor to the output acting (motor command or LED).",
   },
   onTime: {
-    label: "Beacon on-time",
+    label: "Heading LED on-time",
     kind: "time",
     min: 0,
     max: 1,
@@ -207,7 +207,7 @@ export interface HeadingTimingResult {
 }
 
 /**
- * The timing check at top speed: heading step per loop, latency offset, beacon arc, and the loop
+ * The timing check at top speed: heading step per loop, latency offset, heading LED arc, and the loop
  * rate and on-time that meet the targets (openstax-up1-rotational-kinematics).
  *
  * Formula: $\Delta\psi = \omega/f$, $\psi_{lag} = \omega L$, $w = \omega t_{on}$,

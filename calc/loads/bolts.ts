@@ -42,7 +42,7 @@ export type LoadingMode = (typeof LOADING_MODE_OPTIONS)[number]["value"];
 
 /** Where the shear plane cuts the bolt (only read in shear). */
 export const SHEAR_PLANE_OPTIONS = [
-  { value: "thread", label: "Through the thread (stress area A_s)" },
+  { value: "thread", label: "Through the thread (stress area Aₛ)" },
   { value: "shank", label: "Through the plain shank (nominal diameter)" },
 ] as const satisfies readonly ChoiceOption[];
 
@@ -112,7 +112,7 @@ export const fastenerCheckInputs = defineInputs({
     default: DEFAULT_SHEAR_RATIO,
     unit: { metric: "frac", us: "frac" },
     urlKey: "sr",
-    help: "Ultimate shear strength as a fraction of R_m. 0.5 is conservative; 0.6 is the common rule and Eurocode 3's value for 4.6 and 8.8.",
+    help: "Ultimate shear strength as a fraction of Rₘ. 0.5 is conservative; 0.6 is the common rule and Eurocode 3's value for 4.6 and 8.8.",
   },
   ...safetyThresholdInputs("bolt"),
 });

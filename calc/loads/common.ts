@@ -34,14 +34,14 @@ export function safetyThresholdInputs(subject: string) {
       help: `Safety factor under which the ${subject} is called a failure.`,
     },
     marginalBelow: {
-      label: "Thin below",
+      label: "Marginal below",
       kind: "fraction",
       min: 1,
       max: 20,
       default: DEFAULT_SAFETY_THRESHOLDS.marginalBelow,
       unit: { metric: "frac", us: "frac" },
       urlKey: "thin",
-      help: "Safety factor under which the margin is flagged as thin.",
+      help: `Safety factor under which the ${subject} is called marginal.`,
     },
   } as const;
 }

@@ -136,10 +136,10 @@ export function tensileStressArea(input: { nominalDiameter: number; pitch: numbe
 
 /** Steel property classes of ISO 898-1 this module knows. */
 export const PROPERTY_CLASS_OPTIONS = [
-  { value: "4.6", label: "4.6 (low-carbon steel)" },
-  { value: "8.8", label: "8.8 (quenched and tempered)" },
-  { value: "10.9", label: "10.9 (quenched and tempered)" },
-  { value: "12.9", label: "12.9 (alloy steel, quenched and tempered)" },
+  { value: "4.6", label: "4.6 (low-carbon)" },
+  { value: "8.8", label: "8.8 (Q&T)" },
+  { value: "10.9", label: "10.9 (Q&T)" },
+  { value: "12.9", label: "12.9 (Q&T alloy)" },
 ] as const satisfies readonly ChoiceOption[];
 
 export type PropertyClassId = (typeof PROPERTY_CLASS_OPTIONS)[number]["value"];
@@ -185,7 +185,7 @@ export const PROPERTY_CLASSES: Readonly<Record<PropertyClassId, PropertyClass>> 
     yieldStrengthMin: 640e6,
     yieldKind: "Rp0.2",
     proofStress: 580e6,
-    note: "row for d ≤ 16 mm (every size in THREAD_SIZE_OPTIONS)",
+    note: "row for d ≤ 16 mm (every size offered here)",
   },
   "10.9": {
     id: "10.9",

@@ -25,10 +25,10 @@ export * from "./rims.ts";
 // ---------------------------------------------------------------------------------------------
 // Materials for the rim check.
 
-/** Materials offered for the rim check: the rows of the materials table, labelled name and condition. */
+/** Materials offered for the rim check: the rows of the materials table, labelled with their short menu names. */
 export const RIM_MATERIAL_OPTIONS: readonly ChoiceOption<MaterialId>[] = MATERIAL_IDS.map((id) => ({
   value: id,
-  label: `${MATERIALS[id].name}, ${MATERIALS[id].condition}`,
+  label: MATERIALS[id].menuName,
 }));
 
 /** The rim check's material fields filled from a row of the materials table (param "material"). */
@@ -41,6 +41,8 @@ export function rimMaterial(id: string): RimMaterialValues {
 export interface RimMaterialChoice extends RimMaterialValues {
   value: MaterialId;
   label: string;
+  /** The row's full name and condition ("AISI 4340 steel, oil quenched from 800 °C, …"), shown under the menu. */
+  detail: string;
 }
 
 /**
@@ -51,7 +53,11 @@ export interface RimMaterialChoice extends RimMaterialValues {
  * @returns the choices in table order
  */
 export function rimMaterialChoices(): RimMaterialChoice[] {
-  return RIM_MATERIAL_OPTIONS.map((option) => ({ ...option, ...rimMaterial(option.value) }));
+  return RIM_MATERIAL_OPTIONS.map((option) => ({
+    ...option,
+    detail: `${MATERIALS[option.value].name}, ${MATERIALS[option.value].condition}`,
+    ...rimMaterial(option.value),
+  }));
 }
 
 // ---------------------------------------------------------------------------------------------
@@ -75,7 +81,7 @@ export interface DemoRobotLoads {
 export const DEMO_WASHER_STACK = { mass: 0.042, radius: 0.055, rpm: 2400 } as const;
 
 /**
- * Worked example on a demo robot of our own invention (not a real machine): a full-body spinner
+ * Worked example on a demo robot of our own invention (not a real machine): a whole-body spinner
  * with a 6061-T6 ring rim of 125 mm outer radius, topping out at 2400 rpm, balanced by a stack of
  * steel washers under one M4 class 8.8 bolt, the bolt loaded in shear (newton-second-law,
  * iso-898-1, carvill-data-handbook).
@@ -124,7 +130,7 @@ export function demoRobotLoads(input: { washerMass?: number; washerRadius?: numb
   const grams = Number((washerMass * 1000).toPrecision(4));
   const mm = Number((washerRadius * 1000).toPrecision(4));
   return {
-    description: `An invented full-body spinner (not a real robot): 6061-T6 ring rim, 125 mm outer radius; ${grams} g of steel counterweight washers under one M4 class 8.8 bolt at ${mm} mm radius, in shear.`,
+    description: `An invented whole-body spinner (not a real robot): 6061-T6 ring rim, 125 mm outer radius; ${grams} g of steel counterweight washers under one M4 class 8.8 bolt at ${mm} mm radius, in shear.`,
     boltInput,
     bolt: fastenerCheck(boltInput),
     rimInput,

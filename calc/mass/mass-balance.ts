@@ -246,7 +246,7 @@ export function massBalance(input: MassBalanceInput): MassBalance {
     throw new CalcInputError({
       param: "targetOffset",
       value: targetOffset,
-      expected: "large enough that e/e_target stays finite",
+      expected: "large enough that the offset as a share of it stays finite",
       unit: "m",
     });
   }

@@ -313,7 +313,7 @@ export const accelerometerPlacementInputs = defineInputs({
     max: 10000 * STANDARD_GRAVITY,
     default: 200 * STANDARD_GRAVITY,
     urlKey: "fs",
-    help: "The range of the radial axis, e.g. 200 g for a ±200 g part.",
+    help: "The range of the radial axis, e.g. 200 gₙ for a ±200 gₙ part.",
   },
   margin: {
     label: "Headroom kept",
@@ -325,14 +325,14 @@ export const accelerometerPlacementInputs = defineInputs({
     help: "Fraction of full scale left free at top speed, for wobble, vibration and sensor tolerance.",
   },
   step: {
-    label: "Sensor step",
+    label: "Resolution (1 LSB)",
     kind: "acceleration",
     min: 0,
     minOpen: true,
     max: 100 * STANDARD_GRAVITY,
     default: 0.1 * STANDARD_GRAVITY,
     urlKey: "step",
-    help: "The size of one count on the radial axis (full-scale span ÷ 2^bits).",
+    help: "One count (1 LSB) of the radial axis, as the data sheet gives it: full-scale span ÷ 2^bits.",
   },
   noise: {
     label: "Sensor noise",
@@ -341,7 +341,7 @@ export const accelerometerPlacementInputs = defineInputs({
     max: 100 * STANDARD_GRAVITY,
     default: 0,
     urlKey: "noise",
-    help: "RMS noise at your sample rate; the larger of step and noise is what the firmware can resolve. 0 if unknown.",
+    help: "RMS noise at your sample rate; the larger of the resolution and the noise is what the firmware can resolve. 0 if unknown.",
   },
   resolution: {
     label: "Speed resolution wanted",

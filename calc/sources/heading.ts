@@ -12,7 +12,7 @@ export const HEADING_SOURCES = {
     author: "IEEE Aerospace and Electronic Systems Society, Gyro and Accelerometer Panel",
     title: "IEEE Standard Specification Format Guide and Test Procedure for Linear, Single-Axis, Nongyroscopic Accelerometers",
     publication: "IEEE Std 1293-1998",
-    locator: "accelerometer model equation: bias, scale factor and input-axis misalignment terms",
+    locator: "accelerometer model equation: bias (this handbook's offset), scale factor and input-axis misalignment terms",
   },
   "abramowitz-stegun-1964": {
     author: "M. Abramowitz, I. A. Stegun (eds.)",

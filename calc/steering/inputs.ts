@@ -113,7 +113,7 @@ export const steeringInputs = defineInputs({
     help: "One motor's spinning part about its shaft (it also adds to the wheel's gyroscopic moment).",
   },
   gearRatio: {
-    label: "Reduction",
+    label: "Gear ratio",
     kind: "fraction",
     min: 0.05,
     max: 100,
@@ -122,7 +122,7 @@ export const steeringInputs = defineInputs({
     urlKey: "ratio",
     help: "Motor turns per wheel turn; the rotor is taken to turn the same way as the wheel.",
   },
-  cellCount: { label: "Cells in series", kind: "count", min: 1, max: 24, integer: true, default: 4, urlKey: "cells", help: "Battery cells in series." },
+  cellCount: { label: "Cells in series (S)", kind: "count", min: 1, max: 24, integer: true, default: 4, urlKey: "cells", help: "Battery cells in series." },
   cellVoltage: {
     label: "Cell open-circuit voltage",
     kind: "voltage",

@@ -236,14 +236,14 @@ export const weaponShaftInputs = defineInputs({
     help: "Shaft safety factor on yield under which the shaft is called a failure.",
   },
   marginalBelow: {
-    label: "Thin below",
+    label: "Marginal below",
     kind: "fraction",
     min: 1,
     max: 20,
     default: 2,
     unit: { metric: "frac", us: "frac" },
     urlKey: "thin",
-    help: "Shaft safety factor on yield under which the margin is flagged as thin.",
+    help: "Shaft safety factor on yield under which the shaft is called marginal.",
   },
 });
 

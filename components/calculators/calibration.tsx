@@ -109,7 +109,7 @@ function UnitSelect<K extends string>({ id, label, options, value }: { id: strin
       >
         {(Object.keys(options) as K[]).map((key) => (
           <option key={key} value={key}>
-            {key === "g" ? "g (standard gravity)" : key === "m/s2" ? "m/s²" : key}
+            {key === "g" ? "gₙ (standard gravity)" : key === "m/s2" ? "m/s²" : key}
           </option>
         ))}
       </select>
@@ -204,10 +204,7 @@ function Results({ model, id }: { model: CalibrationModel; id: string }) {
   ] as const;
   return (
     <div class="calc-results" id={`${id}-results`} aria-live="polite">
-      <Verdict
-        tone={handoff ? (fit.spikes.flagged.length ? "warn" : "ok") : "bad"}
-        title={handoff ? `Radius ${len(fit.radius)}, offset ${acc(fit.bias)}` : "No usable radius"}
-      >
+      <Verdict tone={handoff ? "info" : "bad"} reason={handoff ? `radius ${len(fit.radius)}, offset ${acc(fit.bias)}` : "no usable radius"}>
         {handoff
           ? `From ${METHOD_NAMES[fit.method]}, ${rows.length - fit.spikes.flagged.length} of ${rows.length} readings; ${fit.spikes.flagged.length} flagged as spikes (residual beyond k = ${plain(fit.spikes.threshold)} robust σ, σ = 1.4826 × MAD).`
           : "The fitted radius is 0 or less: check which column is speed and which is reading, and their units."}
@@ -289,9 +286,9 @@ function Charts({ model }: { model: CalibrationModel }) {
     <>
       <Chart
         title="Readings and fitted lines"
-        summary={`${rows.length} readings from ${formatNumber(Math.min(...ys))} g to ${formatNumber(Math.max(...ys))} g; ${spikes.length} flagged. The fitted line rises as the square of the speed.`}
+        summary={`${rows.length} readings from ${formatNumber(Math.min(...ys))} gₙ to ${formatNumber(Math.max(...ys))} gₙ; ${spikes.length} flagged. The fitted line rises as the square of the speed.`}
         xLabel="Reference speed (rpm)"
-        yLabel="Radial reading (g)"
+        yLabel="Radial reading (gₙ)"
         xDomain={[0, xMax]}
         yDomain={[Math.min(0, ...ys), Math.max(0, ...ys) * 1.08 || 1]}
         series={[
@@ -306,9 +303,9 @@ function Charts({ model }: { model: CalibrationModel }) {
       />
       <Chart
         title="Residuals from the Theil–Sen line"
-        summary={`Residuals from ${formatNumber(Math.min(...rs))} g to ${formatNumber(Math.max(...rs))} g; readings outside the shaded band are flagged.`}
+        summary={`Residuals from ${formatNumber(Math.min(...rs))} gₙ to ${formatNumber(Math.max(...rs))} gₙ; readings outside the shaded band are flagged.`}
         xLabel="Reference speed (rpm)"
-        yLabel="Residual (g)"
+        yLabel="Residual (gₙ)"
         xDomain={[0, xMax]}
         yDomain={[low - pad, high + pad]}
         height={220}
@@ -336,6 +333,7 @@ export default function CalibrationCalculator({ id = "calibration-calculator" }:
   return (
     <section class="calc" id={id} aria-label="Calibration fit calculator">
       <Notices notices={model.fields.notices} />
+      <Toolbar idPrefix={id} system={model.fields.system} onSystem={model.fields.setSystem} link={() => linkFor(model, id)} save={model.save} />
       <form class="calc-form" onSubmit={(event) => event.preventDefault()} noValidate>
         <DataField model={model} id={id} />
         <Settings model={model} id={id} />
@@ -343,7 +341,6 @@ export default function CalibrationCalculator({ id = "calibration-calculator" }:
       <CalibrationBar model={model} id={id} />
       <Results model={model} id={id} />
       <Charts model={model} />
-      <Toolbar idPrefix={id} system={model.fields.system} onSystem={model.fields.setSystem} link={() => linkFor(model, id)} save={model.save} />
     </section>
   );
 }

@@ -16,7 +16,9 @@ import { linkFor, syncWithUrl } from "../calc-ui/url-sync.ts";
 import { computed } from "../calc-ui/reactive.ts";
 import { createCalculatorModel } from "../calc-ui/model.ts";
 import { ChoiceField } from "../loads/ChoiceField.tsx";
-import { area, axis, Outputs, q, rpm, VERDICT_TITLE, VERDICT_TONE, verdictRule } from "../loads/format.tsx";
+import { area, axis, Outputs, q, rpm, VERDICT_TONE, verdictRule } from "../loads/format.tsx";
+import { Verdict } from "../calc-ui/Verdict.tsx";
+import type { ComponentChildren } from "preact";
 
 /** The island name: this file's name. */
 export const island = "fasteners";
@@ -59,12 +61,35 @@ const GROUPS: { legend: string; items: (FieldName | ChoiceName)[] }[] = [
   { legend: "Strength rule and verdict", items: ["shearRatio", "failBelow", "marginalBelow"] },
 ];
 
-/** What the stress is compared with, in words. */
-function strengthNames(r: FastenerCheck): { yield: string; ultimate: string } {
-  const proof = r.propertyClass === "4.6" ? "R_eL,min" : "R_p0.2,min";
+/** What the stress is compared with, in words with the standard's symbols (ISO 898-1), and in plain words for the chart. */
+function strengthNames(r: FastenerCheck): { yield: ComponentChildren; ultimate: ComponentChildren; yieldLine: string; ultimateLine: string } {
+  const proof =
+    r.propertyClass === "4.6" ? (
+      <>
+        R<sub>eL,min</sub>
+      </>
+    ) : (
+      <>
+        R<sub>p0.2,min</sub>
+      </>
+    );
+  const tensile = (
+    <>
+      R<sub>m,min</sub>
+    </>
+  );
   return r.mode === "shear"
-    ? { yield: `shear yield, ${proof} ÷ √3`, ultimate: `ultimate shear, ${Number(r.shearRatio.toPrecision(3))} × R_m,min` }
-    : { yield: `yield, ${proof}`, ultimate: `ultimate, R_m,min` };
+    ? {
+        yield: <>shear yield, {proof} ÷ √3</>,
+        ultimate: (
+          <>
+            ultimate shear, {Number(r.shearRatio.toPrecision(3))} × {tensile}
+          </>
+        ),
+        yieldLine: "shear yield",
+        ultimateLine: "ultimate shear strength",
+      }
+    : { yield: <>yield, {proof}</>, ultimate: <>ultimate, {tensile}</>, yieldLine: "yield", ultimateLine: "ultimate strength" };
 }
 
 /** The verdict, the safety factor and the speed at which the bolts yield, in view while editing. */
@@ -100,17 +125,22 @@ function Results({ model, id }: { model: FastenerModel; id: string }) {
   }
   const names = strengthNames(result);
   const governing =
-    result.governs === "yield"
-      ? `${names.yield}, ${q(result.yieldStrength, "stress", system)}`
-      : `${names.ultimate}, ${q(result.ultimateStrength, "stress", system)}`;
+    result.governs === "yield" ? (
+      <>
+        {names.yield}, {q(result.yieldStrength, "stress", system)}
+      </>
+    ) : (
+      <>
+        {names.ultimate}, {q(result.ultimateStrength, "stress", system)}
+      </>
+    );
   const stressName = result.mode === "shear" ? "Shear stress τ on each bolt" : "Tensile stress σ on each bolt";
-  const areaName = result.mode === "shear" && result.shearPlane === "shank" ? "shank area" : "stress area A_s";
+  const areaName = result.mode === "shear" && result.shearPlane === "shank" ? "shank area" : "stress area Aₛ";
   return (
     <div class="calc-results" id={`${id}-results`} aria-live="polite">
-      <p class={`verdict verdict--${VERDICT_TONE[result.verdict]}`} data-out="verdict">
-        <strong>{VERDICT_TITLE[result.verdict]}.</strong> Safety factor {formatNumber(result.safetyFactor)} against {governing}. Rule:{" "}
-        {verdictRule(values.failBelow, values.marginalBelow)}.
-      </p>
+      <Verdict tone={VERDICT_TONE[result.verdict]} out="verdict">
+        Safety factor {formatNumber(result.safetyFactor)} against {governing}. Rule: {verdictRule(values.failBelow, values.marginalBelow)}.
+      </Verdict>
       <Outputs
         rows={[
           ["Acceleration at the part", "part-g", q(result.part.acceleration, "acceleration", system)],
@@ -118,8 +148,8 @@ function Results({ model, id }: { model: FastenerModel; id: string }) {
           ["Pull on each bolt", "bolt-force", q(result.forcePerBolt, "force", system)],
           [`Area per bolt (${areaName})`, "area", area(result.area, system)],
           [stressName, "stress", q(result.stress, "stress", system)],
-          [`Compared with ${names.yield}`, "yield", q(result.yieldStrength, "stress", system)],
-          [`Compared with ${names.ultimate}`, "ultimate", q(result.ultimateStrength, "stress", system)],
+          [<>Compared with {names.yield}</>, "yield", q(result.yieldStrength, "stress", system)],
+          [<>Compared with {names.ultimate}</>, "ultimate", q(result.ultimateStrength, "stress", system)],
           ["Safety factor against yield", "sf-yield", formatNumber(result.safetyFactorYield)],
           ["Safety factor against ultimate", "sf-ult", formatNumber(result.safetyFactorUltimate)],
           ["Speed at which the bolts yield", "speed-yield", rpm(result.speedAtYield)],
@@ -137,13 +167,15 @@ function StressChart({ model }: { model: FastenerModel }) {
   const input = model.input.value;
   if (!curve || !result || !input) return null;
   const stress = axis("stress", model.fields.system.value);
-  const top = radPerSecondToRpm(input.angularSpeed);
+  // Speeds in thousands of rpm: the axis runs to several times the operating speed.
+  const krpm = (w: number) => radPerSecondToRpm(w) / 1000;
+  const top = krpm(input.angularSpeed);
   const end = curve.points[curve.points.length - 1]!.stress;
   const yMax = Math.max(end, result.ultimateStrength < end * 1.5 ? result.ultimateStrength : 0) * 1.08;
   const names = strengthNames(result);
   const limits = [
-    { value: result.yieldStrength, label: `Bolt ${names.yield}`, className: "plot-limit plot-dashed" },
-    { value: result.ultimateStrength, label: `Bolt ${names.ultimate}`, className: "plot-limit" },
+    { value: result.yieldStrength, label: `Bolt ${names.yieldLine}`, className: "plot-limit plot-dashed" },
+    { value: result.ultimateStrength, label: `Bolt ${names.ultimateLine}`, className: "plot-limit" },
   ].filter((line) => line.value <= yMax);
   const above = limits.length < 2 ? ` The ${limits.length === 0 ? "yield and ultimate lines lie" : "ultimate line lies"} above this plot.` : "";
   return (
@@ -151,14 +183,14 @@ function StressChart({ model }: { model: FastenerModel }) {
       <Chart
         title="Bolt stress against spin speed"
         summary={`The stress grows with the square of the speed: ${q(result.stress, "stress", model.fields.system.value)} at ${rpm(input.angularSpeed)}; the bolts reach yield at ${rpm(result.speedAtYield)} and break at ${rpm(result.speedAtUltimate)}.${above}`}
-        xLabel="Spin speed (rpm)"
+        xLabel="Spin speed (× 1000 rpm)"
         yLabel={`Bolt stress (${stress.symbol})`}
-        xDomain={[0, radPerSecondToRpm(curve.maxSpeed)]}
+        xDomain={[0, krpm(curve.maxSpeed)]}
         yDomain={[0, stress.of(yMax)]}
         series={[
           {
             label: "Stress on each bolt",
-            points: curve.points.map((p) => [radPerSecondToRpm(p.angularSpeed), stress.of(p.stress)] as const),
+            points: curve.points.map((p) => [krpm(p.angularSpeed), stress.of(p.stress)] as const),
             className: "plot-curve",
           },
         ]}
@@ -184,6 +216,7 @@ export default function FastenerCalculator({ id = fastenerCalculator.anchor }: F
   return (
     <section class="calc" id={id} aria-label="Bolt load calculator">
       <Notices notices={model.notices} />
+      <Toolbar idPrefix={id} system={fields.system} onSystem={fields.setSystem} link={() => linkFor(model, id)} save={model.save} />
       <form class="calc-form" onSubmit={(event) => event.preventDefault()} noValidate>
         {GROUPS.map((group) => (
           <fieldset key={group.legend}>
@@ -219,7 +252,6 @@ export default function FastenerCalculator({ id = fastenerCalculator.anchor }: F
       <FastenerBar model={model} id={id} />
       <Results model={model} id={id} />
       <StressChart model={model} />
-      <Toolbar idPrefix={id} system={fields.system} onSystem={fields.setSystem} link={() => linkFor(model, id)} save={model.save} />
     </section>
   );
 }

@@ -95,14 +95,14 @@ function DriftVerdict({ r, speed, budget }: { r: HeadingDriftResult; speed: stri
   const drift = r.atSpeed.driftRate;
   if (drift === null || r.budgetMargin === null) {
     return (
-      <Verdict tone="bad" title="No estimate">
+      <Verdict tone="bad" reason="no estimate">
         At {speed} the reading minus the firmware offset is 0 or less: there is no spin rate to integrate.
       </Verdict>
     );
   }
   const within = r.verdict === "within-budget";
   return (
-    <Verdict tone={within ? "ok" : "bad"} title={within ? "Within budget" : "Over budget"}>
+    <Verdict tone={within ? "ok" : "bad"} reason={within ? "within the trim budget" : "over the trim budget"}>
       At {speed} the heading {drift > 0 ? "runs ahead" : "falls behind"} at {size(drift)}; the driver can trim ±{budget},{" "}
       {within ? `leaving ${size(r.budgetMargin)} to spare` : `${size(r.budgetMargin)} short`}.
     </Verdict>
@@ -223,7 +223,7 @@ function PairResults({ model }: { model: DriftModel }) {
   const over = one === null || (budget !== undefined && one > budget);
   return (
     <div class="calc-results" aria-live="polite">
-      <Verdict tone={over ? "warn" : "ok"} title="The pair cancels the offset">
+      <Verdict tone="info" reason="the pair cancels the offset">
         {one === null
           ? `With the centre up to ${e} off, sensor 1 may sit at or past it and give no estimate`
           : `With the centre anywhere within ±${e}, sensor 1 alone drifts up to ${size(one)}${budget === undefined ? "" : `, ${over ? "over" : "within"} the ±${size(budget)} budget`}`}
@@ -266,6 +266,7 @@ export default function HeadingDriftCalculator({ id = driftCalculator.anchor }: 
     <section class="calc" id={id} aria-label="Heading drift budget calculator">
       <Notices notices={model.fields.notices} />
       <Notices notices={model.pair.notices} />
+      <Toolbar idPrefix={id} system={model.fields.system} onSystem={model.setSystem} link={link} save={() => saveAll([model.drift, model.pairModel])} />
       <FieldsForm fields={model.fields} groups={DRIFT_GROUPS} idPrefix={id} error={model.outcome.value.error} />
       <DriftBar model={model} id={id} />
       <DriftResults model={model} id={id} />
@@ -275,7 +276,6 @@ export default function HeadingDriftCalculator({ id = driftCalculator.anchor }: 
         <FieldsForm fields={model.pair} groups={PAIR_GROUPS} idPrefix={`${id}-p`} error={model.pairOutcome.value.error} />
         <PairResults model={model} />
       </div>
-      <Toolbar idPrefix={id} system={model.fields.system} onSystem={model.setSystem} link={link} save={() => saveAll([model.drift, model.pairModel])} />
     </section>
   );
 }

@@ -1,5 +1,5 @@
 /**
- * The heading timing-and-smoothing calculator: what the loop period, latency and beacon on-time
+ * The heading timing-and-smoothing calculator: what the loop period, latency and heading LED on-time
  * cost in heading at top speed and what meets the targets; then what an exponential moving average
  * (after an optional running median) costs in lag during a spin-up and does to one spike, with a
  * comparison of median windows and a trade-off plot over the smoothing factor α.
@@ -85,26 +85,27 @@ const SMOOTHING_GROUPS: FieldGroup<typeof headingSmoothingInputs>[] = [
 
 const deg = (v: number) => degrees(v, false);
 
+/** The verdict as the build sheet gives it: one target missed is marginal, both fail. */
 function timingVerdict(r: HeadingTimingResult, t: { targetStep: number; targetArc: number }, rpm: string, time: (v: number) => string) {
   const step = `each loop update turns ${deg(r.headingStep)} (allowed ${deg(t.targetStep)})`;
-  const arc = `the beacon sweeps ${deg(r.arcWidth)} (wanted ${deg(t.targetArc)} at most)`;
+  const arc = `the heading LED sweeps ${deg(r.arcWidth)} (wanted ${deg(t.targetArc)} at most)`;
   const fixStep = `run the loop at ${formatQuantity(r.loopRateNeeded, "frequency").text} or faster`;
-  const fixArc = `light the beacon for ${time(r.onTimeNeeded)} or less`;
+  const fixArc = `light the heading LED for ${time(r.onTimeNeeded)} or less`;
   switch (r.verdict) {
     case "ok":
-      return { tone: "ok" as const, title: "Timing holds", detail: `At ${rpm} ${step}; ${arc}.` };
+      return { tone: "ok" as const, detail: `At ${rpm} ${step}; ${arc}.` };
     case "step-too-large":
-      return { tone: "bad" as const, title: "Heading step too large", detail: `At ${rpm} ${step}: ${fixStep}.` };
+      return { tone: "warn" as const, reason: "heading step too large", detail: `At ${rpm} ${step}: ${fixStep}.` };
     case "arc-too-wide":
-      return { tone: "bad" as const, title: "Beacon arc too wide", detail: `At ${rpm} ${arc}: ${fixArc}.` };
+      return { tone: "warn" as const, reason: "heading LED arc too wide", detail: `At ${rpm} ${arc}: ${fixArc}.` };
     case "both":
-      return { tone: "bad" as const, title: "Step too large and arc too wide", detail: `At ${rpm} ${step}: ${fixStep}; ${arc}: ${fixArc}.` };
+      return { tone: "bad" as const, reason: "step too large and arc too wide", detail: `At ${rpm} ${step}: ${fixStep}; ${arc}: ${fixArc}.` };
   }
 }
 
 const NO_RESULT = "No result yet: correct the marked field.";
 
-/** The loop verdict, the heading step and the beacon arc, in view while editing. */
+/** The loop verdict, the heading step and the heading LED arc, in view while editing. */
 function TimingBar({ model, id }: { model: TimingModel; id: string }) {
   const { result, error } = model.timingOutcome.value;
   const values = model.timing.values.value;
@@ -114,11 +115,11 @@ function TimingBar({ model, id }: { model: TimingModel; id: string }) {
   return (
     <ResultBar
       tone={verdict.tone}
-      reason={verdict.tone === "ok" ? undefined : verdict.title.toLowerCase()}
+      reason={verdict.reason}
       resultsId={resultsId}
       figures={[
         { name: "step", label: "Step per update", value: deg(result.headingStep) },
-        { name: "arc", label: "Beacon arc", value: deg(result.arcWidth) },
+        { name: "arc", label: "Heading LED arc", value: deg(result.arcWidth) },
       ]}
     />
   );
@@ -151,7 +152,7 @@ function TimingResults({ model, id }: { model: TimingModel; id: string }) {
   const verdict = timingVerdict(result, values, inSystem(values.topSpeed, "angularSpeed", system, 4), time);
   return (
     <div class="calc-results" id={`${id}-timing-results`} aria-live="polite">
-      <Verdict tone={verdict.tone} title={verdict.title}>
+      <Verdict tone={verdict.tone} reason={verdict.reason}>
         {verdict.detail}
       </Verdict>
       <Outputs
@@ -160,14 +161,14 @@ function TimingResults({ model, id }: { model: TimingModel; id: string }) {
           ["Heading step per update", "step", deg(result.headingStep)],
           ["Updates per revolution", "updates-rev", formatNumber(result.updatesPerRevolution)],
           ["Heading lag from latency (an offset, not a drift)", "lag", deg(result.latencyLag)],
-          ["Beacon arc", "arc", deg(result.arcWidth)],
+          ["Heading LED arc", "arc", deg(result.arcWidth)],
           ["Loop rate for the step wanted", "loop-needed", formatQuantity(result.loopRateNeeded, "frequency", { system }).text],
           ["On-time for the arc wanted", "on-needed", time(result.onTimeNeeded)],
         ]}
       />
       {result.onTimeBelowLoopPeriod ? (
         <p class="calc-note" data-out="timer-note">
-          The on-time is shorter than one loop period: switch the beacon from a timer, not from the loop.
+          The on-time is shorter than one loop period: switch the heading LED from a timer, not from the loop.
         </p>
       ) : null}
     </div>
@@ -184,7 +185,7 @@ function SmoothingResults({ model, id }: { model: TimingModel; id: string }) {
   const removed = result.spikesRejectedPerWindow > 0 ? " (the median removes it)" : "";
   return (
     <div class="calc-results" id={`${id}-smoothing-results`} aria-live="polite">
-      <Verdict tone={result.headingErrorAfterSpinUp > 0 ? "warn" : "ok"} title={`${time(result.totalDelay)} of delay`}>
+      <Verdict tone="info" reason={`${time(result.totalDelay)} of delay`}>
         During the spin-up the heading falls behind at {degPerSecond(-result.driftRateDuringSpinUp, false)}; once the speed settles it is{" "}
         {deg(result.headingErrorAfterSpinUp)} behind, unless the firmware corrects it.
       </Verdict>
@@ -289,7 +290,14 @@ export default function HeadingTimingCalculator({ id = "timing-calculator" }: He
     <section class="calc" id={id} aria-label="Heading timing and smoothing calculator">
       <Notices notices={model.timing.notices} />
       <Notices notices={model.smoothing.notices} />
-      <h3 id={`${id}-timing-title`}>Loop, latency and beacon</h3>
+      <Toolbar
+        idPrefix={id}
+        system={model.timing.system}
+        onSystem={model.setSystem}
+        link={link}
+        save={() => saveAll([model.timingModel, model.smoothingModel])}
+      />
+      <h3 id={`${id}-timing-title`}>Loop, latency and heading LED</h3>
       <FieldsForm fields={model.timing} groups={TIMING_GROUPS} idPrefix={id} error={model.timingOutcome.value.error} />
       <TimingBar model={model} id={id} />
       <TimingResults model={model} id={id} />
@@ -300,13 +308,6 @@ export default function HeadingTimingCalculator({ id = "timing-calculator" }: He
         <SmoothingResults model={model} id={id} />
         <TradeoffChart model={model} />
       </div>
-      <Toolbar
-        idPrefix={id}
-        system={model.timing.system}
-        onSystem={model.setSystem}
-        link={link}
-        save={() => saveAll([model.timingModel, model.smoothingModel])}
-      />
     </section>
   );
 }

@@ -4,6 +4,7 @@
  * counterweight solver that can add its answer to the list (and take it back), and the sensor's
  * true radius. Explanations live in the chapter; this shows numbers.
  */
+import type { ComponentChildren } from "preact";
 import { useSignal } from "../calc-ui/reactive.ts";
 import { useEffect, useMemo } from "preact/hooks";
 import { BALANCE_GRADES, standardBalanceGrade } from "../../calc/mass/balance.ts";
@@ -14,6 +15,7 @@ import { formatNumber, formatQuantity, fromSI, type QuantityKind, type UnitId, t
 import { QuantityField } from "../calc-ui/QuantityField.tsx";
 import { Toolbar } from "../calc-ui/Toolbar.tsx";
 import { ResultBar } from "../calc-ui/ResultBar.tsx";
+import { Verdict } from "../calc-ui/Verdict.tsx";
 import { Notices } from "../calc-ui/Notices.tsx";
 import { syncWithUrl } from "../calc-ui/url-sync.ts";
 import { createMassModel, type MassError, type MassModel, type ModeKey, type Snapshot } from "../mass/model.ts";
@@ -56,7 +58,7 @@ const focusLater = (id: string) => requestAnimationFrame(() => document.getEleme
 type Fmt = (value: number, kind: QuantityKind, unit?: UnitId, significant?: number) => string;
 
 /** Output rows: [label, data-out name, text]. */
-function Outs({ rows }: { rows: [string, string, string][] }) {
+function Outs({ rows }: { rows: [ComponentChildren, string, string][] }) {
   return (
     <dl class="results-grid">
       {rows.map(([label, name, text]) => (
@@ -132,7 +134,7 @@ function PartCard({ model, part, index, id, error, q }: { model: MassModel; part
                     <option value="given">Weighed mass</option>
                     {Object.values(MATERIAL_DENSITIES).map((m) => (
                       <option key={m.id} value={m.id}>
-                        {m.name}, {m.condition}
+                        {m.menuName}
                       </option>
                     ))}
                   </select>
@@ -241,6 +243,8 @@ export default function MassLayoutCalculator({ id = massCalculator.anchor, layou
     const s = b.sensor.before;
     const chosen = grade?.label ?? `G ${formatNumber(g.ok ? fromSI(g.value, "mm/s") : 0)}`;
     const meets = b.gradeVerdict === "meets-grade";
+    // As the build sheet judges it (calc/calculators/mass.ts): up to one grade step (× 2.5) coarser is marginal.
+    const tone = meets ? "ok" : g.ok && b.equivalentGrade <= g.value * 2.5 ? "warn" : "bad";
     const cw = plan.counterweight;
     const where = (c: { radius: number; angle: number }) => `${q(c.radius, "length")} at ${q(c.angle, "angle")}`;
     mass = (
@@ -255,8 +259,20 @@ export default function MassLayoutCalculator({ id = massCalculator.anchor, layou
             ["Direction of the offset", "offset-angle", q(L.offsetAngle, "angle")],
             ["I about the centre of mass", "inertia-com", q(L.inertiaAboutCentre, "inertia", undefined, 4)],
             ["I about the geometric centre", "inertia-geo", q(L.inertiaAboutOrigin, "inertia", undefined, 4)],
-            ["Product of inertia I_xz", "product-xz", small(L.productXZ)],
-            ["Product of inertia I_yz", "product-yz", small(L.productYZ)],
+            [
+              <>
+                Product of inertia I<sub>xz</sub>
+              </>,
+              "product-xz",
+              small(L.productXZ),
+            ],
+            [
+              <>
+                Product of inertia I<sub>yz</sub>
+              </>,
+              "product-yz",
+              small(L.productYZ),
+            ],
           ]}
         />
         <TopView
@@ -270,14 +286,11 @@ export default function MassLayoutCalculator({ id = massCalculator.anchor, layou
     );
     balance = (
       <>
-        <p class={`verdict verdict--${meets ? "ok" : "bad"}`} data-out="grade-verdict">
-          <strong>
-            {meets ? "Meets" : "Exceeds"} {chosen}.
-          </strong>{" "}
+        <Verdict tone={tone} reason={`${meets ? "meets" : "exceeds"} ${chosen}${tone === "warn" ? " by less than one grade step" : ""}`} out="grade-verdict">
           U = {q(b.static.unbalance, "unbalance")} is {formatNumber(b.unbalanceShareOfPermissible * 100)} % of the permissible{" "}
           {q(b.permissible.unbalance, "unbalance")}
           {b.gradeMet ? `; the finest grade it meets is ${b.gradeMet.label}.` : "; it is coarser than G 4000."}
-        </p>
+        </Verdict>
         <Outs
           rows={[
             ["Static unbalance U = M·e", "unbalance", q(b.static.unbalance, "unbalance")],
@@ -321,10 +334,9 @@ export default function MassLayoutCalculator({ id = massCalculator.anchor, layou
     const within = b.offsetVerdict === "within-target";
     counter = (
       <>
-        <p class={`verdict verdict--${within ? "ok" : "bad"}`} data-out="offset-verdict">
-          <strong>{within ? "Within target." : "Outside target."}</strong> e = {q(L.offset, "length")}, {formatNumber(b.offsetShareOfTarget * 100)} % of the{" "}
-          {q(input.targetOffset, "length")} target.
-        </p>
+        <Verdict tone={within ? "ok" : "bad"} reason={within ? "offset within the target" : "offset outside the target"} out="offset-verdict">
+          e = {q(L.offset, "length")}, {formatNumber(b.offsetShareOfTarget * 100)} % of the {q(input.targetOffset, "length")} target.
+        </Verdict>
         {within ? null : mode === "r" ? (
           <Outs
             rows={[
@@ -418,6 +430,13 @@ export default function MassLayoutCalculator({ id = massCalculator.anchor, layou
   return (
     <section class="calc mass-calc" id={id} aria-label="Mass layout and balance calculator">
       <Notices notices={model.notices} />
+      <Toolbar
+        idPrefix={id}
+        system={fields.system}
+        onSystem={model.setSystem}
+        link={() => `${location.origin}${location.pathname}?${model.queryFor(location.search)}#${id}`}
+        save={model.save}
+      />
       <form onSubmit={(e) => e.preventDefault()} noValidate>
         <fieldset>
           <legend>Speed</legend>
@@ -574,13 +593,6 @@ export default function MassLayoutCalculator({ id = massCalculator.anchor, layou
           />
         )}
       </form>
-      <Toolbar
-        idPrefix={id}
-        system={fields.system}
-        onSystem={model.setSystem}
-        link={() => `${location.origin}${location.pathname}?${model.queryFor(location.search)}#${id}`}
-        save={model.save}
-      />
     </section>
   );
 }

@@ -11,12 +11,16 @@ import { Toolbar } from "../calc-ui/Toolbar.tsx";
 import { Notices } from "../calc-ui/Notices.tsx";
 import { Chart } from "../calc-ui/Chart.tsx";
 import { ResultBar } from "../calc-ui/ResultBar.tsx";
+import { Verdict } from "../calc-ui/Verdict.tsx";
 import { linkFor, syncWithUrl } from "../calc-ui/url-sync.ts";
 import { computed } from "../calc-ui/reactive.ts";
 import { createCalculatorModel } from "../calc-ui/model.ts";
 
 /** The island name: this file's name. */
 export const island = "placement";
+
+/** An acceleration as the sensor's data sheet gives it, in standard gravities: "217 gₙ". */
+const accel = (v: number) => formatQuantity(v, "acceleration", { unit: "gn" }).text;
 
 /** The plot runs past the top speed by this factor, to show the margin. */
 const CURVE_PAST_TOP = 1.2;
@@ -47,29 +51,29 @@ const GROUPS: { legend: string; names: (keyof typeof placement.inputs)[] }[] = [
   { legend: "Another part to check", names: ["partMass", "partRadius"] },
 ];
 
-function verdictText(r: AccelerometerPlacement, system: UnitSystem): { tone: "ok" | "warn" | "bad"; title: string; detail: string } {
+function verdictText(r: AccelerometerPlacement, system: UnitSystem): { tone: "ok" | "warn" | "bad"; reason?: string; detail: string } {
   const len = (v: number) => formatQuantity(v, "length", { system }).text;
   const window = `${len(r.minRadius)} to ${len(r.maxRadius)}`;
   switch (r.verdict) {
     case "fits":
-      return { tone: "ok", title: "Fits", detail: `The sensor radius lies inside the usable window, ${window}.` };
+      return { tone: "ok", detail: `The sensor radius lies inside the usable window, ${window}.` };
     case "too-far-out":
       return {
         tone: "bad",
-        title: "Too far out",
-        detail: `At top speed the sensor would read ${formatNumber(fromSI(r.accelerationAtTop, "gn"))} g, ${formatNumber(r.fullScaleUsed * 100)} % of its full scale. Move it in to ${len(r.maxRadius)} or less, or use a sensor with a larger range.`,
+        reason: "too far out",
+        detail: `At top speed the sensor would read ${accel(r.accelerationAtTop)}, ${formatNumber(r.fullScaleUsed * 100)} % of its full scale. Move it in to ${len(r.maxRadius)} or less, or use a sensor with a larger range.`,
       };
     case "too-close-in":
       return {
         tone: "warn",
-        title: "Too close in",
+        reason: "too close in",
         detail: `At the lowest tracked speed one reading resolves the spin rate only to ${formatNumber(r.resolutionAtLow * 100)} %. Move it out to ${len(r.minRadius)} or more (the window is ${window}).`,
       };
     case "no-window":
       return {
         tone: "bad",
-        title: "No radius satisfies both limits",
-        detail: `Resolving the lowest speed needs at least ${len(r.minRadius)}, but staying under full scale at top speed needs at most ${len(r.maxRadius)}. Use a sensor with a larger range or finer steps, track from a higher speed, or accept coarser resolution.`,
+        reason: "no radius satisfies both limits",
+        detail: `Resolving the lowest speed needs at least ${len(r.minRadius)}, but staying under full scale at top speed needs at most ${len(r.maxRadius)}. Use a sensor with a larger range or a finer resolution, track from a higher speed, or accept coarser speed resolution.`,
       };
   }
 }
@@ -88,11 +92,11 @@ function PlacementBar({ model, id }: { model: PlacementModel; id: string }) {
   return (
     <ResultBar
       tone={verdict.tone}
-      reason={verdict.tone === "ok" ? undefined : verdict.title.toLowerCase()}
+      reason={verdict.reason}
       resultsId={`${id}-results`}
       figures={[
         { name: "window", label: "Usable radius", value: window },
-        { name: "accel-top", label: "At top speed", value: `${formatNumber(fromSI(result.accelerationAtTop, "gn"))} g` },
+        { name: "accel-top", label: "At top speed", value: accel(result.accelerationAtTop) },
       ]}
     />
   );
@@ -110,12 +114,11 @@ function Results({ model, id }: { model: PlacementModel; id: string }) {
   }
   const q = (v: number, kind: Parameters<typeof formatQuantity>[1]) => formatQuantity(v, kind, { system }).text;
   const verdict = verdictText(result, system);
-  const g = (v: number) => `${formatNumber(fromSI(v, "gn"))} g`;
   return (
     <div class="calc-results" id={`${id}-results`} aria-live="polite">
-      <p class={`verdict verdict--${verdict.tone}`}>
-        <strong>{verdict.title}.</strong> {verdict.detail}
-      </p>
+      <Verdict tone={verdict.tone} reason={verdict.reason}>
+        {verdict.detail}
+      </Verdict>
       <dl class="results-grid">
         <div>
           <dt>Smallest usable radius</dt>
@@ -131,7 +134,7 @@ function Results({ model, id }: { model: PlacementModel; id: string }) {
         </div>
         <div>
           <dt>Sensor reading at top speed</dt>
-          <dd data-out="accel-top">{g(result.accelerationAtTop)}</dd>
+          <dd data-out="accel-top">{accel(result.accelerationAtTop)}</dd>
         </div>
         <div>
           <dt>Share of full scale used</dt>
@@ -143,7 +146,7 @@ function Results({ model, id }: { model: PlacementModel; id: string }) {
         </div>
         <div>
           <dt>Sensor reading at lowest tracked speed</dt>
-          <dd data-out="accel-low">{g(result.accelerationAtLow)}</dd>
+          <dd data-out="accel-low">{accel(result.accelerationAtLow)}</dd>
         </div>
         <div>
           <dt>Speed resolution of one reading there</dt>
@@ -151,7 +154,7 @@ function Results({ model, id }: { model: PlacementModel; id: string }) {
         </div>
         <div>
           <dt>Other part: load at top speed</dt>
-          <dd data-out="part-g">{g(result.part.acceleration)}</dd>
+          <dd data-out="part-g">{accel(result.part.acceleration)}</dd>
         </div>
         <div>
           <dt>Other part: pull on its mounts</dt>
@@ -174,9 +177,9 @@ function PlacementChart({ model }: { model: PlacementModel }) {
   return (
     <Chart
       title="Acceleration at the sensor against spin speed"
-      summary={`At the chosen radius the sensor reads ${formatNumber(topG)} g at top speed against a limit of ${formatNumber(limitG)} g (full scale ${formatNumber(fullScaleG)} g).`}
+      summary={`At the chosen radius the sensor reads ${accel(result.accelerationAtTop)} at top speed against a limit of ${accel(result.readingLimit)} (full scale ${accel(values.fullScale)}).`}
       xLabel="Spin speed (rpm)"
-      yLabel="Acceleration (g)"
+      yLabel="Acceleration (gₙ)"
       xDomain={[0, curve.maxRpm]}
       yDomain={[0, yMax]}
       hBands={[{ from: 0, to: limitG, label: "Safe region (below full scale less headroom)", className: "plot-safe" }]}
@@ -202,6 +205,7 @@ export default function PlacementCalculator({ id = "placement-calculator" }: Pla
   return (
     <section class="calc" id={id} aria-label="Accelerometer placement calculator">
       <Notices notices={model.notices} />
+      <Toolbar idPrefix={id} system={fields.system} onSystem={fields.setSystem} link={() => linkFor(model, id)} save={model.save} />
       <form class="calc-form" onSubmit={(event) => event.preventDefault()} noValidate>
         {GROUPS.map((group) => (
           <fieldset key={group.legend}>
@@ -224,7 +228,6 @@ export default function PlacementCalculator({ id = "placement-calculator" }: Pla
       <PlacementBar model={model} id={id} />
       <Results model={model} id={id} />
       <PlacementChart model={model} />
-      <Toolbar idPrefix={id} system={fields.system} onSystem={fields.setSystem} link={() => linkFor(model, id)} save={model.save} />
     </section>
   );
 }

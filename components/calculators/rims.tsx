@@ -19,7 +19,8 @@ import { batch, computed, signal } from "../calc-ui/reactive.ts";
 import { createCalculatorModel } from "../calc-ui/model.ts";
 import { quoteForNotice } from "../../calc/core/permalink.ts";
 import { ChoiceField } from "../loads/ChoiceField.tsx";
-import { axis, Outputs, q, rpm, VERDICT_TITLE, VERDICT_TONE, verdictRule } from "../loads/format.tsx";
+import { axis, Outputs, q, rpm, VERDICT_TONE, verdictRule } from "../loads/format.tsx";
+import { Verdict } from "../calc-ui/Verdict.tsx";
 
 /** The island name: this file's name. */
 export const island = "rims";
@@ -31,6 +32,8 @@ const CUSTOM_MATERIAL = "custom";
 export interface MaterialChoice extends RimMaterialValues {
   value: string;
   label: string;
+  /** The full name and condition, shown under the menu once picked. */
+  detail?: string;
 }
 
 /** The four fields a material fills. */
@@ -48,7 +51,7 @@ export function createRimModel(materials: readonly MaterialChoice[]) {
   const materialSpec: ChoiceSpec = {
     label: "Material",
     urlKey: "mat",
-    options: [...materials.map(({ value, label }) => ({ value, label })), { value: CUSTOM_MATERIAL, label: "Custom: type the values below" }],
+    options: [...materials.map(({ value, label }) => ({ value, label })), { value: CUSTOM_MATERIAL, label: "Custom values" }],
     default: materials.some((m) => m.value === DEFAULT_RIM_MATERIAL) ? DEFAULT_RIM_MATERIAL : CUSTOM_MATERIAL,
     help: "Fills density, strengths and Poisson's ratio from the materials table; editing any of them makes it custom.",
   };
@@ -157,10 +160,10 @@ function Results({ model, id }: { model: RimModel; id: string }) {
   const peak = `${q(result.peakStress, "stress", system)} ${where(result, result.peakStressRadius, system)}`;
   return (
     <div class="calc-results" id={`${id}-results`} aria-live="polite">
-      <p class={`verdict verdict--${VERDICT_TONE[result.verdict]}`} data-out="verdict">
-        <strong>{VERDICT_TITLE[result.verdict]}.</strong> Safety factor {formatNumber(result.safetyFactor)} against yield (
-        {q(values.yieldStrength, "stress", system)}) at the peak hoop stress, {peak}. Rule: {verdictRule(values.failBelow, values.marginalBelow)}.
-      </p>
+      <Verdict tone={VERDICT_TONE[result.verdict]} out="verdict">
+        Safety factor {formatNumber(result.safetyFactor)} against yield ({q(values.yieldStrength, "stress", system)}) at the peak hoop stress, {peak}. Rule:{" "}
+        {verdictRule(values.failBelow, values.marginalBelow)}.
+      </Verdict>
       <Outputs
         rows={[
           ["Tip speed", "tip-speed", q(result.tipSpeed, "speed", system)],
@@ -204,8 +207,8 @@ function ProfileChart({ model }: { model: RimModel }) {
   const series = ring
     ? [{ label: "Hoop stress of the ring (one value, at its outer radius)", points: [...points("hoop"), ...points("hoop")], className: "plot-dot" }]
     : [
-        { label: "Hoop stress σ_θ", points: points("hoop"), className: "plot-curve" },
-        { label: "Radial stress σ_r", points: points("radial"), className: "plot-curve-2" },
+        { label: "Hoop stress", points: points("hoop"), className: "plot-curve" },
+        { label: "Radial stress", points: points("radial"), className: "plot-curve-2" },
       ];
   const note =
     limits.length < 2
@@ -238,6 +241,7 @@ export default function RimCalculator({ id = rimCalculator.anchor, materials = [
   return (
     <section class="calc" id={id} aria-label="Rim and disk stress calculator">
       <Notices notices={model.notices} />
+      <Toolbar idPrefix={id} system={fields.system} onSystem={fields.setSystem} link={() => linkFor(model, id)} save={model.save} />
       <form class="calc-form" onSubmit={(event) => event.preventDefault()} noValidate>
         {GROUPS.map((group) => (
           <fieldset key={group.legend}>
@@ -253,6 +257,7 @@ export default function RimCalculator({ id = rimCalculator.anchor, materials = [
                   spec={model.specs.material}
                   value={model.material}
                   onPick={model.pickMaterial}
+                  note={materials.find((m) => m.value === model.material.value)?.detail}
                   error={errorFor(name)}
                 />
               ) : (
@@ -274,7 +279,6 @@ export default function RimCalculator({ id = rimCalculator.anchor, materials = [
       <RimBar model={model} id={id} />
       <Results model={model} id={id} />
       <ProfileChart model={model} />
-      <Toolbar idPrefix={id} system={fields.system} onSystem={fields.setSystem} link={() => linkFor(model, id)} save={model.save} />
     </section>
   );
 }

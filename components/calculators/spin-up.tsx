@@ -1,7 +1,7 @@
 /**
  * The spin-up calculator: a spinning weapon or a whole-body spinner from rest to speed — times to
  * 50, 90 and 100 % of the target, top speed, what limits it over time, battery current and sag,
- * stored energy and where the rest of the energy went; design variants side by side; and a sweep of
+ * stored energy and where the rest of the energy went; variants of the design in one table; and a sweep of
  * one input with the best value marked. The simulation is calc/drivetrain/.
  */
 import { useEffect, useMemo } from "preact/hooks";
@@ -34,7 +34,7 @@ const GROUPS: Group[] = [
   { legend: "Motors", names: ["motorCount", "motorKv", "motorResistance", "noLoadCurrent", "motorRotorInertia"] },
   { legend: "Battery", names: ["cellCount", "cellVoltage", "cellResistance"] },
   { legend: "Controller", names: ["currentLimit", "throttle"] },
-  { legend: "Reduction", names: ["gearRatio", "gearEfficiency"] },
+  { legend: "Gearing", names: ["gearRatio", "gearEfficiency"] },
   { legend: { weapon: "Rotor", spinner: "Robot" }, names: ["inertia", "robotMass", "tipRadius", "impactors"] },
   { legend: "Wheels and traction", names: SPINNER_ONLY, spinnerOnly: true },
   { legend: "Resistive torques", names: ["frictionTorque", "dragTorque", "dragReferenceSpeed"] },
@@ -92,6 +92,7 @@ export default function SpinUpCalculator({ id = spinUp.anchor }: SpinUpCalculato
   return (
     <section class="calc" id={id} aria-label="Spin-up calculator">
       <Notices notices={model.notices} />
+      <Toolbar idPrefix={id} system={model.fields.system} onSystem={model.setSystem} link={() => linkFor(model.link, id)} save={model.save} />
       <fieldset class="dt-choice">
         <legend>Drive type</legend>
         {DRIVE_TYPE_OPTIONS.map((option) => (
@@ -113,7 +114,6 @@ export default function SpinUpCalculator({ id = spinUp.anchor }: SpinUpCalculato
       )}
       <Compare model={model} idPrefix={id} />
       <Sweep model={model} idPrefix={id} />
-      <Toolbar idPrefix={id} system={model.fields.system} onSystem={model.setSystem} link={() => linkFor(model.link, id)} save={model.save} />
     </section>
   );
 }

@@ -4,18 +4,12 @@
  */
 import { useEffect, useMemo, useRef } from "preact/hooks";
 import { useSignal } from "../calc-ui/reactive.ts";
-import type { CheckResult, CheckStatus } from "../../calc/design/checks.ts";
+import type { CheckResult } from "../../calc/design/checks.ts";
+import { STATUS_MARKS, STATUS_WORDS } from "../../calc/core/check.ts";
 import { linkFor } from "../../calc/core/calculator.ts";
 import { CALCULATORS, calculatorFor } from "../../calc/design/registry.ts";
 import type { AnyValues } from "../../calc/core/calculator.ts";
 import { createBuildSheetModel, type BuildSheetModel } from "./model.ts";
-
-const BADGE: Record<CheckStatus, { mark: string; word: string }> = {
-  holds: { mark: "✔", word: "Holds" },
-  marginal: { mark: "▲", word: "Marginal" },
-  fails: { mark: "✖", word: "Fails" },
-  info: { mark: "i", word: "Info" },
-};
 
 const base = () => import.meta.env.BASE_URL.replace(/\/?$/, "/");
 
@@ -29,7 +23,7 @@ function CheckCard({ result, model }: { result: CheckResult; model: BuildSheetMo
     <li class={`check check--${result.status}`} data-check={result.id}>
       <p class="check-head">
         <span class={`badge badge--${result.status}`}>
-          <span aria-hidden="true">{BADGE[result.status].mark}</span> {BADGE[result.status].word}
+          <span aria-hidden="true">{STATUS_MARKS[result.status]}</span> {STATUS_WORDS[result.status]}
         </span>
         <strong class="check-title">{result.title}</strong>
         {result.figure ? (
@@ -66,14 +60,11 @@ function Summary({ model }: { model: BuildSheetModel }) {
   const counts = { holds: 0, marginal: 0, fails: 0, info: 0 };
   for (const r of model.results.value) counts[r.status] += 1;
   const overall = model.overall.value;
+  // The overall word leads, as on every calculator's verdict line: "Fails: at least one check fails."
   const text =
     overall === "empty"
       ? "Nothing to check yet"
-      : overall === "fails"
-        ? "At least one check fails"
-        : overall === "marginal"
-          ? "Everything holds or is marginal"
-          : "Every check holds";
+      : `${STATUS_WORDS[overall]}: ${overall === "fails" ? "at least one check fails" : overall === "marginal" ? "everything holds or is marginal" : "every check holds"}`;
   return (
     <p class={`verdict verdict--${overall === "fails" ? "bad" : overall === "marginal" ? "warn" : "ok"}`} data-out="overall">
       <strong>{text}.</strong> {counts.holds} hold, {counts.marginal} marginal, {counts.fails} fail, {counts.info} for information.

@@ -1,20 +1,25 @@
 /**
- * Design comparison: up to three variants of the design, each a copy with a few inputs changed,
- * on one speed-against-time chart and in one table.
+ * Variants of the design: up to three copies with a few inputs changed, in one table (a column per
+ * design, the changed inputs as rows above the results) and on one speed-against-time chart.
  */
 import { useSignal } from "../calc-ui/reactive.ts";
 import { QuantityField } from "../calc-ui/QuantityField.tsx";
 import { Chart } from "../calc-ui/Chart.tsx";
 import { formatNumber, radPerSecondToRpm } from "../../calc/core/units.ts";
 import type { DriveType } from "../../calc/drivetrain/inputs.ts";
-import { amps, fmt, rpm } from "./format.ts";
+import type { SpinUpResult } from "../../calc/drivetrain/results.ts";
+import type { ComponentChildren } from "preact";
+import { amps, fmt, inSentence, rpm } from "./format.ts";
 import { applies, NAMES, SPECS, VARIANT_KEYS, type Name, type SpinUpModel, type Variant } from "./model.ts";
 
 const CURVES = ["plot-curve", "plot-curve-2 plot-dashed", "plot-curve-3 dt-dash-long", "dt-curve-4"];
-const letter = (i: number) => (i === 0 ? "A" : VARIANT_KEYS[i - 1]!.toUpperCase());
+/** What each column is called: the design on the page, then its variants by number. */
+const nameOf = (i: number) => (i === 0 ? "This design" : `Variant ${i}`);
+/** The `data-out` key of a column: "a" for the design, then the variant's link scope. */
+const keyOf = (i: number) => (i === 0 ? "a" : VARIANT_KEYS[i - 1]!);
 
 function VariantEditor({ model, variant, index, idPrefix, type }: { model: SpinUpModel; variant: Variant; index: number; idPrefix: string; type: DriveType }) {
-  const name = letter(index + 1);
+  const name = nameOf(index + 1);
   const id = `${idPrefix}-${VARIANT_KEYS[index]}`;
   const changed = variant.changed.value.filter((n) => applies(n, type));
   const free = NAMES.filter((n) => applies(n, type) && !changed.includes(n));
@@ -23,8 +28,8 @@ function VariantEditor({ model, variant, index, idPrefix, type }: { model: SpinU
   const error = model.variantInputs.value[index]?.error ?? null;
   return (
     <fieldset class="dt-variant">
-      <legend>Variant {name}</legend>
-      {changed.length === 0 ? <p class="field-help">A copy of the design: change an input below.</p> : null}
+      <legend>{name}</legend>
+      {changed.length === 0 ? <p class="field-help">A copy of this design: change an input below.</p> : null}
       {changed.map((n) => (
         <div class="dt-change" key={n}>
           <QuantityField
@@ -37,7 +42,7 @@ function VariantEditor({ model, variant, index, idPrefix, type }: { model: SpinU
             extraError={error && error.field === n ? error.message : null}
           />
           <button type="button" class="button button--quiet" onClick={() => model.unchangeInVariant(index, n)}>
-            Use the design's {SPECS[n].label.toLowerCase()}
+            Use this design's {inSentence(SPECS[n].label)}
           </button>
         </div>
       ))}
@@ -60,12 +65,12 @@ function VariantEditor({ model, variant, index, idPrefix, type }: { model: SpinU
               </select>
             </div>
             <button type="button" class="button" onClick={() => model.changeInVariant(index, chosen)}>
-              Change it in {name}
+              Change it in {name.toLowerCase()}
             </button>
           </>
         ) : null}
         <button type="button" class="button button--quiet" onClick={() => model.removeVariant(index)}>
-          Remove variant {name}
+          Remove {name.toLowerCase()}
         </button>
       </div>
     </fieldset>
@@ -77,91 +82,102 @@ export function Compare({ model, idPrefix }: { model: SpinUpModel; idPrefix: str
   const type = model.driveType.value;
   const system = model.fields.system.value;
   const cmp = model.comparison.value;
-  const rows = cmp
-    ? [
-        { result: cmp.base, changes: "—", error: null },
-        ...cmp.variants.map((v, i) => ({ result: v.result, error: v.error, changes: describe(variants[i]!, type) })),
-      ]
-    : [];
-  const shown = rows.map((row, i) => ({ ...row, i })).filter((row) => row.result);
-  const end = Math.max(0, ...shown.map((row) => row.result!.endTime));
-  const top = Math.max(0, ...shown.map((row) => Math.max(row.result!.topSpeed, row.result!.targetSpeed)));
+  const columns = cmp ? [{ result: cmp.base, error: null }, ...cmp.variants] : [];
+  const shown = columns.map((column, i) => ({ ...column, i })).filter((column) => column.result);
+  const end = Math.max(0, ...shown.map((column) => column.result!.endTime));
+  const top = Math.max(0, ...shown.map((column) => Math.max(column.result!.topSpeed, column.result!.targetSpeed)));
+  // The inputs some variant changes, each once, in the form's order: the rows above the results.
+  const inputs = NAMES.filter((n) => applies(n, type) && variants.some((v) => v.changed.value.includes(n)));
+  /** A result row: its label, its `data-out` suffix, and the cell of each column that has a result. */
+  const results: [string, string, (r: SpinUpResult, i: number) => ComponentChildren][] = [
+    [
+      "Time to target",
+      "time",
+      (r, i) => (
+        <>
+          {r.timeToTarget === null ? `not reached (target ${rpm(r.targetSpeed)})` : fmt(r.timeToTarget, "time", system)}
+          {cmp!.fastest === i ? <strong> — fastest</strong> : null}
+        </>
+      ),
+    ],
+    [
+      "Top speed",
+      "top",
+      (r, i) => (
+        <>
+          {rpm(r.topSpeed)}
+          {cmp!.highest === i ? <strong> — highest</strong> : null}
+        </>
+      ),
+    ],
+    ["Peak battery current", "peak", (r) => amps(r.peakBatteryCurrent)],
+  ];
   return (
     <section class="dt-section" aria-labelledby={`${idPrefix}-cmp-title`}>
-      <h3 id={`${idPrefix}-cmp-title`}>Compare designs</h3>
+      <h3 id={`${idPrefix}-cmp-title`}>Variants of this design</h3>
+      <p class="field-help">Each variant is this design with a few inputs changed; it follows every other edit of the design.</p>
       {variants.map((variant, i) => (
         <VariantEditor key={i} model={model} variant={variant} index={i} idPrefix={idPrefix} type={type} />
       ))}
       <button type="button" class="button" disabled={variants.length >= VARIANT_KEYS.length} onClick={model.addVariant}>
-        Add variant {variants.length < VARIANT_KEYS.length ? letter(variants.length + 1) : "(three at most)"}
+        {variants.length < VARIANT_KEYS.length ? `Add variant ${variants.length + 1}` : "Add a variant (three at most)"}
       </button>
       {cmp ? (
         <>
-          <div class="dt-table-wrap" role="region" aria-label="Designs compared" tabIndex={0}>
+          <div class="dt-table-wrap" role="region" aria-label="This design and its variants" tabIndex={0}>
             <table class="dt-table" data-out="comparison">
-              <caption>Designs compared (A is the design above)</caption>
+              <caption>This design and its variants: the inputs they change, then the results</caption>
               <thead>
                 <tr>
-                  <th scope="col">Design</th>
-                  <th scope="col">Differs in</th>
-                  <th scope="col">Time to target</th>
-                  <th scope="col">Top speed</th>
-                  <th scope="col">Peak battery current</th>
+                  <td />
+                  {columns.map((_, i) => (
+                    <th scope="col" key={i}>
+                      {nameOf(i)}
+                    </th>
+                  ))}
                 </tr>
               </thead>
               <tbody>
-                {rows.map((row, i) => {
-                  const key = letter(i).toLowerCase();
-                  const r = row.result;
-                  return (
-                    <tr key={key}>
-                      <th scope="row">{letter(i)}</th>
-                      <td>{row.changes}</td>
-                      {r ? (
-                        <>
-                          <td data-out={`cmp-${key}-time`}>
-                            {r.timeToTarget === null ? `not reached (target ${rpm(r.targetSpeed)})` : fmt(r.timeToTarget, "time", system)}
-                            {cmp.fastest === i && rows.length > 1 ? <strong> — fastest</strong> : null}
-                          </td>
-                          <td data-out={`cmp-${key}-top`}>
-                            {rpm(r.topSpeed)}
-                            {cmp.highest === i && rows.length > 1 ? <strong> — highest</strong> : null}
-                          </td>
-                          <td data-out={`cmp-${key}-peak`}>{amps(r.peakBatteryCurrent)}</td>
-                        </>
-                      ) : (
-                        <td colSpan={3}>{row.error ? row.error.message : "Waiting for a valid value."}</td>
-                      )}
-                    </tr>
-                  );
-                })}
+                {inputs.map((n) => (
+                  <tr key={n}>
+                    <th scope="row">{SPECS[n].label}</th>
+                    <td>{model.fields.texts[n].value}</td>
+                    {variants.map((v, i) => (
+                      <td key={i}>{v.changed.value.includes(n) ? v.fields.texts[n].value : "same"}</td>
+                    ))}
+                  </tr>
+                ))}
+                {results.map(([label, key, cell]) => (
+                  <tr key={key} class={key === "time" ? "dt-first-result" : undefined}>
+                    <th scope="row">{label}</th>
+                    {columns.map((column, i) => (
+                      <td key={i} data-out={`cmp-${keyOf(i)}-${key}`}>
+                        {column.result ? cell(column.result, i) : key === "time" ? (column.error?.message ?? "Waiting for a valid value.") : "—"}
+                      </td>
+                    ))}
+                  </tr>
+                ))}
               </tbody>
             </table>
           </div>
           {end > 0 ? (
             <Chart
-              title="Speed against time, all designs"
-              summary={shown.map((row) => `${letter(row.i)} reaches ${formatNumber(radPerSecondToRpm(row.result!.topSpeed), 4)} rpm`).join("; ")}
+              title="Speed against time, this design and its variants"
+              summary={shown.map((column) => `${nameOf(column.i)} reaches ${formatNumber(radPerSecondToRpm(column.result!.topSpeed), 4)} rpm`).join("; ")}
               xLabel="Time (s)"
-              yLabel="Speed (1000 rpm)"
+              yLabel="Speed (× 1000 rpm)"
               xDomain={[0, end]}
               yDomain={[0, (radPerSecondToRpm(top) * 1.08) / 1000]}
-              series={shown.map((row) => ({
-                label: `Design ${letter(row.i)}`,
-                points: row.result!.series.map((p) => [p.time, radPerSecondToRpm(p.speed) / 1000] as const),
-                className: CURVES[row.i]!,
+              series={shown.map((column) => ({
+                label: nameOf(column.i),
+                points: column.result!.series.map((p) => [p.time, radPerSecondToRpm(p.speed) / 1000] as const),
+                className: CURVES[column.i]!,
               }))}
-              hLines={[{ value: radPerSecondToRpm(cmp.base.targetSpeed) / 1000, label: "Target speed of A", className: "plot-limit plot-dashed" }]}
+              hLines={[{ value: radPerSecondToRpm(cmp.base.targetSpeed) / 1000, label: "Target speed of this design", className: "plot-limit plot-dashed" }]}
             />
           ) : null}
         </>
       ) : null}
     </section>
   );
-}
-
-/** "Reduction 3, Cells in series 6": what a variant changes, as typed. */
-function describe(variant: Variant, type: DriveType): string {
-  const changed = variant.changed.value.filter((n) => applies(n, type));
-  return changed.length === 0 ? "nothing yet" : changed.map((n) => `${SPECS[n].label} ${variant.fields.texts[n].value}`).join(", ");
 }

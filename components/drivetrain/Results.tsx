@@ -1,7 +1,7 @@
 /**
- * The spin-up results: the verdict, times to speed, battery figures, stored energy, the regimes
- * over time, the energy balance, the simulation's warnings, and the speed and current plots with
- * the regime strip between them.
+ * The spin-up results: the verdict and the simulation's warnings, then what limits the acceleration
+ * over time and where the energy went, then the figures (times to speed, battery, stored energy);
+ * and the speed and current plots with the regime strip between them.
  */
 import type { DrivetrainInput } from "../../calc/drivetrain/inputs.ts";
 import type { SpinUpRegime, SpinUpResult } from "../../calc/drivetrain/results.ts";
@@ -9,6 +9,7 @@ import type { UnitSystem } from "../../calc/core/units.ts";
 import { formatNumber, radPerSecondToRpm } from "../../calc/core/units.ts";
 import { Chart } from "../calc-ui/Chart.tsx";
 import { ResultBar } from "../calc-ui/ResultBar.tsx";
+import { Verdict } from "../calc-ui/Verdict.tsx";
 import { amps, fmt, mAh, percent, REGIME_NAME, REGIME_TEXT, rpm, seconds } from "./format.ts";
 import type { FieldError } from "./model.ts";
 
@@ -25,29 +26,28 @@ export function Empty({ error, id }: { error: FieldError; id?: string }) {
   );
 }
 
-function Verdict({ r }: { r: SpinUpResult }) {
+function SpinUpVerdict({ r }: { r: SpinUpResult }) {
   const target = rpm(r.targetSpeed);
   const end = seconds(r.endTime);
   const settled = r.endReason === "steady-state" ? `settles by ${end}` : `is still rising at ${end}`;
   if (r.verdict === "stalled") {
     return (
-      <p class="verdict verdict--bad">
-        <strong>Does not move.</strong> Friction and the motors' no-load loss exceed the torque the motors give at the current limit.
-      </p>
+      <Verdict tone="bad" reason="does not move">
+        Friction and the motors' no-load loss exceed the torque the motors give at the current limit.
+      </Verdict>
     );
   }
   if (r.verdict === "falls-short") {
     return (
-      <p class="verdict verdict--bad">
-        <strong>Falls short.</strong> It tops out at {rpm(r.topSpeed)} ({settled}), {percent(-r.topSpeedMargin)} below the {target} target.
-      </p>
+      <Verdict tone="bad" reason="falls short of the target">
+        It tops out at {rpm(r.topSpeed)} ({settled}), {percent(-r.topSpeedMargin)} below the {target} target.
+      </Verdict>
     );
   }
   return (
-    <p class="verdict verdict--ok">
-      <strong>Reaches the target.</strong> {target} in {seconds(r.timeToTarget!)}; it tops out at {rpm(r.topSpeed)} ({settled}), {percent(r.topSpeedMargin)}{" "}
-      above the target.
-    </p>
+    <Verdict tone="ok" reason="reaches the target">
+      {target} in {seconds(r.timeToTarget!)}; it tops out at {rpm(r.topSpeed)} ({settled}), {percent(r.topSpeedMargin)} above the target.
+    </Verdict>
   );
 }
 
@@ -108,14 +108,14 @@ export function Results({ r, input, system, id }: { r: SpinUpResult; input: Driv
     ["Battery internal resistance", "battery", e.batteryLoss],
     ["Motor windings (I²R)", "copper", e.copperLoss],
     ["Motor no-load loss", "motor", e.motorLoss],
-    ["Reduction", "gear", e.gearLoss],
+    ["Gearing", "gear", e.gearLoss],
     ["Friction torque", "friction", e.frictionLoss],
     ["Air drag", "drag", e.dragLoss],
   ];
   if (spinner) losses.push(["Wheel slip", "slip", e.slipLoss]);
   return (
     <div class="calc-results" id={id} aria-live="polite">
-      <Verdict r={r} />
+      <SpinUpVerdict r={r} />
       {r.warnings.length > 0 ? (
         <ul class="dt-warnings" data-out="warnings">
           {r.warnings.map((w) => (
@@ -123,14 +123,6 @@ export function Results({ r, input, system, id }: { r: SpinUpResult; input: Driv
           ))}
         </ul>
       ) : null}
-      <dl class="results-grid">
-        {items.map(([label, name, value]) => (
-          <div key={name}>
-            <dt>{label}</dt>
-            <dd data-out={name}>{value}</dd>
-          </div>
-        ))}
-      </dl>
       <h3 class="dt-h">What limits the acceleration, over time</h3>
       <ol class="dt-list" data-out="regimes">
         {r.regimes.map((s) => (
@@ -139,7 +131,7 @@ export function Results({ r, input, system, id }: { r: SpinUpResult; input: Driv
           </li>
         ))}
       </ol>
-      <div class="dt-table-wrap" role="region" aria-label="Energy balance" tabIndex={0}>
+      <div class="dt-table-wrap" role="region" aria-label="Where the energy went" tabIndex={0}>
         <table class="dt-table">
           <caption>Where the energy went, 0 to {seconds(r.endTime)}</caption>
           <tbody>
@@ -163,13 +155,18 @@ export function Results({ r, input, system, id }: { r: SpinUpResult; input: Driv
               <th scope="row">All losses</th>
               <td data-out="energy-losses">{q(e.totalLoss, "energy")}</td>
             </tr>
-            <tr>
-              <th scope="row">Drawn − stored − losses, share of drawn</th>
-              <td data-out="energy-balance">{e.balanceError === 0 ? "0" : formatNumber(e.balanceError, 2)}</td>
-            </tr>
           </tbody>
         </table>
       </div>
+      <h3 class="dt-h">The run in figures</h3>
+      <dl class="results-grid">
+        {items.map(([label, name, value]) => (
+          <div key={name}>
+            <dt>{label}</dt>
+            <dd data-out={name}>{value}</dd>
+          </div>
+        ))}
+      </dl>
     </div>
   );
 }
@@ -231,7 +228,7 @@ export function SpinUpCharts({ r, input }: { r: SpinUpResult; input: DrivetrainI
         title="Speed against time"
         summary={`From rest to ${formatNumber(topRpm, 4)} rpm in ${formatNumber(r.endTime)} s; target ${formatNumber(targetRpm, 4)} rpm${r.timeToTarget === null ? ", not reached" : `, reached at ${formatNumber(r.timeToTarget)} s`}.`}
         xLabel="Time (s)"
-        yLabel="Speed (1000 rpm)"
+        yLabel="Speed (× 1000 rpm)"
         xDomain={x}
         yDomain={[0, (Math.max(targetRpm, topRpm) * 1.08) / 1000]}
         series={[{ label: r.driveType === "spinner" ? "Robot speed" : "Weapon speed", points: speeds, className: "plot-curve" }]}

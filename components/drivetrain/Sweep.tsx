@@ -7,7 +7,7 @@ import { Chart } from "../calc-ui/Chart.tsx";
 import { fieldUnit, type InputSpec } from "../../calc/core/inputs.ts";
 import { formatNumber, fromSI, radPerSecondToRpm, UNITS, type UnitSystem } from "../../calc/core/units.ts";
 import { summariseSweep } from "../../calc/drivetrain/compare.ts";
-import { fmt, rpm } from "./format.ts";
+import { fmt, inSentence, rpm } from "./format.ts";
 import { applies, POINTS_SPEC, SPECS, SWEEPABLE, sweepSpec, type Name, type SpinUpModel, type SweepState } from "./model.ts";
 
 type Done = Extract<SweepState, { status: "done" }>;
@@ -54,7 +54,7 @@ function SweepResults({ state, target, system }: { state: Done; target: number; 
     <>
       <p class="verdict verdict--ok" data-out="sweep-optimum">
         <strong>
-          Best {spec.label.toLowerCase()}: {show(best.value)}.
+          Best {inSentence(spec.label)}: {show(best.value)}.
         </strong>{" "}
         {state.optimumBy === "time-to-target"
           ? `It reaches the target soonest, in ${fmt(best.timeToTarget!, "time", system)} (shortest time to target of the values swept).`
@@ -62,7 +62,7 @@ function SweepResults({ state, target, system }: { state: Done; target: number; 
       </p>
       {runs.length > 0 ? (
         <Chart
-          title={`Time to target against ${spec.label.toLowerCase()}`}
+          title={`Time to target against ${inSentence(spec.label)}`}
           summary={`Shortest time to target ${formatNumber(summary.shortestTimeToTarget!)} s at ${show(best.value)}; ${summary.missedCount} of ${state.points.length} values do not reach the target.`}
           xLabel={axis}
           yLabel="Time to target (s)"
@@ -73,10 +73,10 @@ function SweepResults({ state, target, system }: { state: Done; target: number; 
         />
       ) : null}
       <Chart
-        title={`Top speed against ${spec.label.toLowerCase()}`}
+        title={`Top speed against ${inSentence(spec.label)}`}
         summary={`Top speed from ${formatNumber(radPerSecondToRpm(summary.lowestTopSpeed), 4)} to ${formatNumber(radPerSecondToRpm(summary.highestTopSpeed), 4)} rpm; target ${formatNumber(radPerSecondToRpm(target), 4)} rpm.`}
         xLabel={axis}
-        yLabel="Top speed (1000 rpm)"
+        yLabel="Top speed (× 1000 rpm)"
         xDomain={xDomain}
         yDomain={[0, Math.max(radPerSecondToRpm(target) / 1000, ...tops) * 1.08]}
         series={[{ label: "Top speed", points: state.points.map((_p, i) => [xs[i]!, tops[i]!] as const), className: "plot-curve-2" }]}

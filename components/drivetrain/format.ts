@@ -21,6 +21,9 @@ export const amps = (valueSI: number): string => formatQuantity(valueSI, "curren
 /** A charge in mAh (3.6 C = 1 mAh exactly): "125 mAh". */
 export const mAh = (coulombs: number): string => `${formatNumber(coulombs / 3.6)} mAh`;
 
+/** A label inside a sentence: only its first letter lowered, so "Motor Kv" reads "motor Kv" and "Cells in series (S)" keeps its S. */
+export const inSentence = (label: string): string => label.charAt(0).toLowerCase() + label.slice(1);
+
 /** A share in per cent: "12.7 %". */
 export const percent = (fraction: number): string => `${formatNumber(fraction * 100)} %`;
 

@@ -1,6 +1,6 @@
 /**
  * Small view parts shared by the heading calculators: a form of quantity fields in groups, the
- * placeholder shown while a field is invalid, a verdict line, and a grid of labelled outputs.
+ * placeholder shown while a field is invalid, the verdict line (calc-ui), and a grid of labelled outputs.
  */
 import type { ComponentChildren } from "preact";
 import type { InputSpecs } from "../../calc/core/inputs.ts";
@@ -57,13 +57,7 @@ export function Empty({ error, id }: { error: FieldError; id?: string }) {
   );
 }
 
-export function Verdict({ tone, title, children }: { tone: "ok" | "warn" | "bad"; title: string; children: ComponentChildren }) {
-  return (
-    <p class={`verdict verdict--${tone}`}>
-      <strong>{title}.</strong> {children}
-    </p>
-  );
-}
+export { Verdict } from "../calc-ui/Verdict.tsx";
 
 /** One output: its label, its `data-out` name, and the formatted value (null: left out). */
 export type Output = readonly [label: ComponentChildren, name: string, value: string | null];

@@ -1,8 +1,9 @@
 /**
  * Formatting shared by the two loads calculators: quantities in the user's system, speeds in rpm,
- * stresses for the chart axis, the verdict box and the grid of results. Formatting and conversion
+ * stresses for the chart axis, the verdict's tone and the grid of results. Formatting and conversion
  * only; no physics.
  */
+import type { ComponentChildren } from "preact";
 import type { LoadVerdict } from "../../calc/loads/common.ts";
 import { displayUnit, formatNumber, formatQuantity, fromSI, radPerSecondToRpm, UNITS, type QuantityKind, type UnitSystem } from "../../calc/core/units.ts";
 
@@ -23,7 +24,6 @@ export function axis(kind: QuantityKind, system: UnitSystem): { symbol: string; 
 }
 
 export const VERDICT_TONE: Record<LoadVerdict, "ok" | "warn" | "bad"> = { holds: "ok", marginal: "warn", fails: "bad" };
-export const VERDICT_TITLE: Record<LoadVerdict, string> = { holds: "Holds", marginal: "Marginal", fails: "Fails" };
 
 /** The verdict rule in words: "fails below 1, marginal below 2, holds at 2 or more". */
 export function verdictRule(failBelow: number, marginalBelow: number): string {
@@ -33,7 +33,7 @@ export function verdictRule(failBelow: number, marginalBelow: number): string {
 }
 
 /** The results grid: one [label, data-out key, formatted value] per row. */
-export function Outputs({ rows }: { rows: readonly (readonly [string, string, string])[] }) {
+export function Outputs({ rows }: { rows: readonly (readonly [ComponentChildren, string, string])[] }) {
   return (
     <dl class="results-grid">
       {rows.map(([label, key, value]) => (

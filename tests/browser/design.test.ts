@@ -29,9 +29,9 @@ describe("build sheet", () => {
   it("runs every check on the demo design", async () => {
     const context = await site.browser().newContext();
     const page = await openSheet(context);
-    expect(await page.locator("[data-out=overall]").textContent()).toContain("At least one check fails.");
+    expect(await page.locator("[data-out=overall]").textContent()).toContain("Fails: at least one check fails.");
     // Same figures as the command line and tests/calc/design.test.ts (same calc code).
-    expect(await checkFigure(page, "placement")).toBe("217 g");
+    expect(await checkFigure(page, "placement")).toBe("217 gₙ");
     expect(await page.locator("li.check").count()).toBe(9);
     const link = await page.locator('[data-check="placement"] a').getAttribute("href");
     expect(link).toMatch(/^\/chapters\/acceleration\/\?v=1&.*r=33\.\d+mm.*#placement-calculator$/);
@@ -125,7 +125,7 @@ describe("build sheet", () => {
     const sheet = await openSheet(context, "");
     await expect.poll(() => sheet.inputValue("#design-name")).toBe("My robot");
     // 3000 rpm at 12 mm: 314.16² × 0.012 = 1184 m/s² = 121 g (as on the chapter page).
-    await expect.poll(() => checkFigure(sheet, "placement")).toBe("121 g");
+    await expect.poll(() => checkFigure(sheet, "placement")).toBe("121 gₙ");
     await context.close();
   });
 
@@ -206,7 +206,7 @@ describe("offline", () => {
     }
     await page.goto(`${origin()}/chapters/acceleration/?v=1&rpm=3000rpm&r=12mm`);
     await waitForIslands(page);
-    expect(await page.locator('[data-out="accel-top"]').textContent()).toBe("121 g");
+    expect(await page.locator('[data-out="accel-top"]').textContent()).toBe("121 gₙ");
     await page.goto(`${origin()}/search/?q=headroom`);
     await expect.poll(() => page.locator("#search-results li").count(), { timeout: 10_000 }).toBeGreaterThan(0);
     await context.close();

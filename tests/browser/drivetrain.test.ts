@@ -44,7 +44,7 @@ describe("spin-up calculator in the browser", () => {
     // ½ J Ω² at the target: 0.5 × 6.3e-4 × 1047.2² = 345 J; tip speed 1047.2 × 0.06 = 62.8 m/s.
     expect(await out(page, "stored-target")).toBe("345 J");
     expect(await out(page, "energy-drag")).toBe("0 J");
-    expect(await page.locator(".verdict").first().textContent()).toContain("Reaches the target.");
+    expect(await page.locator(".verdict").first().textContent()).toContain("Holds: reaches the target.");
     expect(await page.inputValue(`${ID}-motorKv`)).toBe("1400 rpm/V");
     expect(await page.locator(`${ID} svg`).count()).toBe(3);
     expect(problems).toEqual([]);
@@ -72,38 +72,40 @@ describe("spin-up calculator in the browser", () => {
 
   it("adds a variant, compares two designs on one chart and in a table, and keeps them in the URL", async () => {
     const { page, context } = await open(PAGE, { width: 1100 });
-    await page.getByRole("button", { name: "Add variant B" }).click();
+    await page.getByRole("button", { name: "Add variant 1" }).click();
     await page.selectOption(`${ID}-b-pick`, "cellCount");
-    await page.getByRole("button", { name: "Change it in B" }).click();
+    await page.getByRole("button", { name: "Change it in variant 1" }).click();
     await page.fill(`${ID}-b-cellCount`, "6");
     // calc doc comment of compareDrivetrains: 4 cells 1.01 s, 6 cells 0.93 s; six cells is fastest and tops out highest.
     await expect.poll(() => out(page, "cmp-b-time")).toBe("928 ms — fastest");
     expect(await out(page, "cmp-a-time")).toBe("1.01 s");
     expect(await out(page, "cmp-b-top")).toBe("16810 rpm — highest");
     expect(await out(page, "cmp-b-peak")).toBe("60.0 A");
-    expect(await page.getByText("Design B", { exact: true }).count()).toBe(1);
+    // One column per design, named; the changed input is a row above the results.
+    expect(await page.locator('[data-out="comparison"] thead th').allTextContents()).toEqual(["This design", "Variant 1"]);
+    expect(await page.locator('[data-out="comparison"] tbody th').first().textContent()).toBe("Cells in series (S)");
     await expect.poll(() => param(page, "b.cells")).toBe("6");
     expect(param(page, "variants")).toBe("1");
-    // The variant follows the design: drag off in A, B keeps its six cells (0.920 s, see tests/calc).
+    // The variant follows the design: drag off in the design, variant 1 keeps its six cells (0.920 s, see tests/calc).
     await page.fill(`${ID}-dragTorque`, "0");
     await expect.poll(() => out(page, "cmp-b-time")).toBe("920 ms — fastest");
     const reopened = await open(new URL(page.url()).pathname + new URL(page.url()).search);
     expect(await out(reopened.page, "cmp-b-time")).toBe("920 ms — fastest");
     expect(await reopened.page.inputValue(`${ID}-b-cellCount`)).toBe("6");
     await reopened.context.close();
-    await page.getByRole("button", { name: "Remove variant B" }).click();
+    await page.getByRole("button", { name: "Remove variant 1" }).click();
     await expect.poll(() => param(page, "variants")).toBeNull();
     await context.close();
   });
 
-  it("runs a 50-point sweep without freezing the page, marks the best reduction, and keeps it in the URL", async () => {
+  it("runs a 50-point sweep without freezing the page, marks the best gear ratio, and keeps it in the URL", async () => {
     const { page, context } = await open(PAGE);
     const started = Date.now();
     await page.getByRole("button", { name: "Run the sweep" }).click();
     await expect.poll(() => out(page, "sweep-status")).toBe("50 values simulated.");
     const wall = Date.now() - started;
-    // sweepDrivetrain on the demo weapon, reduction 1 to 4 in 50 points: best at point 16, 1 + 3·16/49 = 1.980, 1.01 s.
-    expect(await out(page, "sweep-optimum")).toContain("Best reduction: 1.980.");
+    // sweepDrivetrain on the demo weapon, gear ratio 1 to 4 in 50 points: best at point 16, 1 + 3·16/49 = 1.980, 1.01 s.
+    expect(await out(page, "sweep-optimum")).toContain("Best gear ratio: 1.980.");
     expect(await out(page, "sweep-optimum")).toContain("1.01 s");
     await expect.poll(() => param(page, "s.p")).toBe("ratio");
     expect([param(page, "s.from"), param(page, "s.to"), param(page, "s.n")]).toEqual(["1", "4", "50"]);
@@ -125,7 +127,7 @@ describe("spin-up calculator in the browser", () => {
     await expect.poll(() => out(page, "sweep-status")).toBe("7 values simulated.");
     // 2 and 3 cells never reach 10 000 rpm; from 5 cells on the target comes inside the current-limited
     // phase, so 5, 6, 7 and 8 cells all take α-limited 0.928 s and the first of the tie wins.
-    expect(await out(page, "sweep-optimum")).toContain("Best cells in series: 5.");
+    expect(await out(page, "sweep-optimum")).toContain("Best cells in series (S): 5.");
     expect(await out(page, "sweep-optimum")).toContain("928 ms");
     expect(problems).toEqual([]);
     await context.close();
@@ -134,9 +136,9 @@ describe("spin-up calculator in the browser", () => {
   it("shows a clear error beside a bad field, and a rule across fields beside the field it names", async () => {
     const { page, context } = await open(PAGE);
     for (const [text, message] of [
-      ["abc", "Reduction must start with a number"],
-      ["0", "Reduction must be between 0.05 and 100 (got 0)"],
-      ["", "Reduction is required"],
+      ["abc", "Gear ratio must start with a number"],
+      ["0", "Gear ratio must be between 0.05 and 100 (got 0)"],
+      ["", "Gear ratio is required"],
     ] as const) {
       await page.fill(`${ID}-gearRatio`, text);
       await expect.poll(() => page.locator(`${ID}-gearRatio-error`).textContent()).toContain(message);
@@ -210,7 +212,7 @@ describe("spin-up timing in chromium (printed for the record; never asserted)", 
     const f = (t: { median: number; p90: number }) => `median ${t.median.toFixed(3)} ms, p90 ${t.p90.toFixed(3)} ms`;
     console.log(`[perf] chromium ${site.browser().version()}: 10 s simulation, demo weapon: ${f(timing.weapon10s)} (target < 5 ms)`);
     console.log(`[perf] chromium: 10 s simulation, demo spinner: ${f(timing.spinner10s)} (target < 5 ms)`);
-    console.log(`[perf] chromium: 50-point sweep, demo weapon, reduction 0.5 to 4: ${f(timing.weaponSweep50)} (target < 100 ms)`);
+    console.log(`[perf] chromium: 50-point sweep, demo weapon, gear ratio 0.5 to 4: ${f(timing.weaponSweep50)} (target < 100 ms)`);
     console.log(`[perf] chromium: 50-point sweep, demo spinner, wheel radius 8 to 40 mm: ${f(timing.spinnerSweep50)} (target < 100 ms)`);
     expect(timing.weapon10s.median).toBeGreaterThan(0);
     await context.close();

@@ -37,7 +37,7 @@ describe("heading drift budget", () => {
     // only up to 6.07 rad/s (57.96 rpm) is the drift within 10 °/s: closed below by standstill
     expect(await out(page, "speed-range")).toBe("from standstill to 57.96 rpm");
     expect(await out(page, "term-radius")).toBe("+490 °/s"); // first order: ω/2 · 0.7/12 = 146.6 × 0.05833 = 8.552 rad/s
-    expect(await page.locator(".verdict").first().textContent()).toContain("Over budget.");
+    expect(await page.locator(".verdict").first().textContent()).toContain("Fails: over the trim budget.");
     // pair section: one sensor, centre 0.5 mm toward it, 2000 rpm: 209.44 × (√(11.5/12) − 1) = −4.4097 rad/s
     expect(await out(page, "pair-s1-toward")).toBe("−253 °/s");
     expect(await out(page, "pair-s1-away")).toBe("+247 °/s");
@@ -55,7 +55,7 @@ describe("heading drift budget", () => {
     // r̂ = 12.69 mm with 0.02 g left in: within ±10 °/s from 49.79 to 393.2 rad/s (calc doc example)
     await expect.poll(() => out(page, "speed-range")).toBe("from 475.4 rpm to 3755 rpm");
     expect(await out(page, "drift-rate")).toBe("+8.13 °/s");
-    expect(await page.locator(".verdict").first().textContent()).toContain("Within budget.");
+    expect(await page.locator(".verdict").first().textContent()).toContain("Holds: within the trim budget.");
     await expect.poll(() => param(page, "ra")).toBe("12.69mm");
     expect(param(page, "b")).toBe("0.02g");
     expect(param(page, "p.e")).toBe("0.5mm");
@@ -107,7 +107,7 @@ describe("heading timing and smoothing", () => {
     expect(await out(page, "lag")).toBe("5.04°");
     expect(await out(page, "arc")).toBe("16.8°");
     expect(await out(page, "on-needed")).toBe("893 µs");
-    expect(await page.locator(".verdict").first().textContent()).toContain("Beacon arc too wide.");
+    expect(await page.locator(".verdict").first().textContent()).toContain("Marginal: heading LED arc too wide.");
     // EMA delay 0.5 ms × 0.95/0.05 = 9.5 ms, median +0.5 ms; 293.2 rad/s × 10 ms = 2.93 rad = 168°
     expect(await out(page, "delay")).toBe("9.50 ms + 500 µs");
     expect(await out(page, "heading-after")).toBe("168°");
@@ -164,8 +164,8 @@ describe("calibration from logged readings", () => {
     expect(handedRadius).toMatch(/^14\.996\d* mm$/);
     expect(Number(handedRadius.replace(" mm", "")) * 0.001).toBe(fit.radius);
     const offset = await page.inputValue("#drift-calculator-biasCorrection");
-    // in g when a number in g reads back exactly, else in m/s²
-    expect(offset.endsWith(" g") ? Number(offset.replace(" g", "")) * 9.80665 : Number(offset.replace(" m/s²", ""))).toBe(fit.bias);
+    // in gₙ when a number in gₙ reads back exactly, else in m/s²
+    expect(offset.endsWith(" gₙ") ? Number(offset.replace(" gₙ", "")) * 9.80665 : Number(offset.replace(" m/s²", ""))).toBe(fit.bias);
     expect(await page.locator(".calc-notices").count()).toBe(0);
     expect(problems).toEqual([]);
     await context.close();

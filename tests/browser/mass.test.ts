@@ -58,7 +58,7 @@ describe("mass layout in the browser", () => {
     expect(await out(page, "com-x")).toBe("6.57 mm");
     expect(await out(page, "unbalance")).toBe("3230 g·mm");
     expect(await out(page, "sensor-true")).toBe("38.6 mm");
-    expect(await page.locator('[data-out="offset-verdict"]').textContent()).toContain("Outside target.");
+    expect(await page.locator('[data-out="offset-verdict"]').textContent()).toContain("Fails: offset outside the target.");
     expect(new URL(page.url()).searchParams.get("l")).toBe("v1~disk_base_0_0_2.5_70_al-6061-t6_5~plate_battery_12_0_13.5_70_35_90_280~pt_sensor_-32_0_8_4");
 
     // m = M(e − e_t)/(r + e_t) = 491.8 g × 6.37 mm / 55.2 mm = 56.77 g, rounded up to 56.8 g at 180°.
@@ -68,7 +68,7 @@ describe("mass layout in the browser", () => {
     // (3232 − 56.8 × 55) g·mm / 548.6 g = 0.197 mm.
     expect(await out(page, "offset")).toBe("0.197 mm");
     expect(await out(page, "total-mass")).toBe("549 g");
-    expect(await page.locator('[data-out="offset-verdict"]').textContent()).toContain("Within target.");
+    expect(await page.locator('[data-out="offset-verdict"]').textContent()).toContain("Holds: offset within the target.");
     expect(await out(page, "applied")).toContain("offset 6.57 mm → 0.197 mm");
 
     const before = Object.fromEntries(await Promise.all(OUTPUTS.map(async (name) => [name, await out(page, name)] as const)));

@@ -22,8 +22,8 @@ describe("accelerometer placement in the browser", () => {
     // With no headroom the edge is F/ω² = 19.9 mm (tests/calc/rotation.test.ts).
     expect(await out(page, "max-radius-bare")).toBe("19.9 mm");
     expect(await out(page, "min-radius")).toBe("8.65 mm");
-    expect(await out(page, "accel-top")).toBe("121 g");
-    expect(await page.locator(".verdict").textContent()).toContain("Fits.");
+    expect(await out(page, "accel-top")).toBe("121 gₙ");
+    expect(await page.locator(".verdict").textContent()).toContain("Holds.");
     expect(await page.inputValue("#placement-calculator-topSpeed")).toBe("3000 rpm");
     expect(problems).toEqual([]);
     await context.close();
@@ -32,8 +32,8 @@ describe("accelerometer placement in the browser", () => {
   it("updates outputs and the URL when an input changes", async () => {
     const { page, context } = await open("/chapters/acceleration/?v=1&rpm=3000rpm&r=12mm");
     await page.fill("#placement-calculator-radius", "30 mm");
-    await expect.poll(() => page.locator(".verdict").textContent()).toContain("Too far out.");
-    expect(await out(page, "accel-top")).toBe("302 g");
+    await expect.poll(() => page.locator(".verdict").textContent()).toContain("Fails: too far out.");
+    expect(await out(page, "accel-top")).toBe("302 gₙ");
     await expect.poll(() => new URL(page.url()).searchParams.get("r")).toBe("30mm");
     expect(new URL(page.url()).searchParams.get("rpm")).toBe("3000rpm");
     await context.close();

@@ -451,6 +451,7 @@ const CALLS: Record<PublicFunction, Entry> = {
   runChecks: { calls: () => [[api.demoDesign()]], runs: 100 },
   overallStatus: { calls: () => [[api.runChecks(api.demoDesign())]], code: ["0"] },
   terminalSafe: { calls: c(["a\u0007b\nc"]) },
+  linkSpelling: { calls: c(["200 gₙ"], ["8 mΩ"], ["12.7 mm"], ["abc"]) },
   describeReceived: { calls: c([0.012, "mm"], [-3], ["abc"], [null]) },
   describePartProblem: {
     calls: c([new api.CalcInputError({ param: "parts.0.shape.radius", value: -0.005, expected: "greater than 0", unit: "m" })], ["not an error"]),

@@ -77,7 +77,7 @@ describe("reading calibration text", () => {
       [6, "expected at least 2 columns, found 1"],
       [7, "a double quote is not closed"],
       [8, "expected at least 2 columns, found 1"],
-      [9, 'acceleration "3e999" must be a finite number, e.g. 32 g'],
+      [9, 'acceleration "3e999" must be a finite number, e.g. 32 gₙ'],
     ]);
   });
 
@@ -166,7 +166,7 @@ describe("reading calibration text: properties", () => {
 
 describe("writing rows back as text", () => {
   it("writes a header naming the units and one line per row", () => {
-    expect(calibrationRowsToCsv([{ angularSpeed: rpm(1200), acceleration: g(31.5) }])).toBe("speed (rpm),reading (g)\n1200,31.5\n");
+    expect(calibrationRowsToCsv([{ angularSpeed: rpm(1200), acceleration: g(31.5) }])).toBe("speed (rpm),reading (gₙ)\n1200,31.5\n");
     expect(calibrationRowsToCsv([], { speedUnit: "rad/s", accelerationUnit: "m/s2" })).toBe("speed (rad/s),reading (m/s²)\n");
   });
 

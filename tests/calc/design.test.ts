@@ -261,8 +261,8 @@ describe("build-sheet checks", () => {
   it("agrees with the chapters' own entry points (same calc code)", () => {
     const placement = results.find((r) => r.id === "placement")!;
     expect(placement.status).toBe("holds");
-    // 2400 rpm at the sensor's true radius 33.7 mm: ω²r = 251.33² × 0.0337 ≈ 2130 m/s² ≈ 217 g
-    expect(placement.figure!.text).toBe("217 g");
+    // 2400 rpm at the sensor's true radius 33.7 mm: ω²r = 251.33² × 0.0337 ≈ 2130 m/s² ≈ 217 gₙ (standard gravities)
+    expect(placement.figure!.text).toBe("217 gₙ");
     expect(results.find((r) => r.id === "headingDrift")!.status).toBe("fails");
     expect(overallStatus(results)).toBe("fails");
   });
@@ -277,7 +277,8 @@ describe("build-sheet checks", () => {
   it("prints a text sheet with every figure and the safety notice", () => {
     const text = buildSheetText(demo, results);
     expect(text).toContain("Build sheet: Demo: invented 1.4 kg whole-body spinner");
-    expect(text).toContain("HOLDS            Accelerometer placement: Sensor reading at top speed 217 g");
+    expect(text).toContain("✔ Holds            Accelerometer placement: Sensor reading at top speed 217 gₙ");
+    expect(text).toContain("i For information  True sensor radius");
     expect(text).toContain("Overall: Fails");
     expect(text).toContain("Safety:");
   });

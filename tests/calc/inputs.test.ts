@@ -56,13 +56,13 @@ describe("input declarations: reading a field", () => {
   });
 
   it("describes ranges without trailing zeros", () => {
-    expect(describeRange(fullScale, "metric")).toBe("greater than 0 g and at most 10000 g");
+    expect(describeRange(fullScale, "metric")).toBe("greater than 0 gₙ and at most 10000 gₙ");
   });
 
   it("starts each field on its default, in the system's unit", () => {
     expect(defaultText(radius, "metric")).toBe("20 mm");
     expect(defaultText(radius, "us")).toBe("0.787402 in");
-    expect(defaultText(fullScale, "us")).toBe("200 g");
+    expect(defaultText(fullScale, "us")).toBe("200 gₙ");
     expect(fullScale.default).toBe(200 * STANDARD_GRAVITY);
   });
 

@@ -764,8 +764,17 @@ describe("helpers added for the chapters and calculators", () => {
     const choices = rimMaterialChoices();
     expect(choices.map((c) => c.value)).toEqual(RIM_MATERIAL_OPTIONS.map((o) => o.value));
     for (const choice of choices) {
-      expect(choice).toEqual({ ...RIM_MATERIAL_OPTIONS.find((o) => o.value === choice.value), ...rimMaterial(choice.value) });
+      const row = MATERIALS[choice.value];
+      expect(choice).toEqual({
+        ...RIM_MATERIAL_OPTIONS.find((o) => o.value === choice.value),
+        detail: `${row.name}, ${row.condition}`,
+        ...rimMaterial(choice.value),
+      });
     }
+  });
+
+  it("labels every material with a menu name short enough for a phone menu (24 characters at most)", () => {
+    for (const choice of rimMaterialChoices()) expect(choice.label.length).toBeLessThanOrEqual(24);
   });
 });
 

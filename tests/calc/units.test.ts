@@ -7,6 +7,7 @@ import {
   formatNumber,
   formatQuantity,
   fromSI,
+  linkSpelling,
   parseQuantity,
   quantityToText,
   radPerSecondToRpm,
@@ -208,6 +209,24 @@ describe("units: reading what a user typed", () => {
   });
 });
 
+describe("units: field text in a link", () => {
+  it.each([
+    { text: "200 gₙ", kind: "acceleration", unit: "gn", link: "200g" },
+    { text: "8 mΩ", kind: "resistance", unit: "mohm", link: "8mohm" },
+    { text: "15 °", kind: "angle", unit: "deg", link: "15deg" },
+    { text: "2400 rpm", kind: "angularSpeed", unit: "rpm", link: "2400rpm" },
+    { text: "20 %", kind: "fraction", unit: "frac", link: "20%" },
+  ] as const)("writes $text as $link, which reads back as the same quantity", ({ text, kind, unit, link }) => {
+    expect(linkSpelling(text)).toBe(link);
+    expect(parseQuantity(link, kind, unit)).toEqual(parseQuantity(text, kind, unit));
+  });
+
+  it("keeps text it cannot read as typed, less its spaces", () => {
+    expect(linkSpelling("three mm")).toBe("threemm");
+    expect(linkSpelling("12 furlongs")).toBe("12furlongs");
+  });
+});
+
 describe("units: formatting", () => {
   it.each([
     { value: 32, sig: 3, text: "32.0" },
@@ -240,6 +259,6 @@ describe("units: formatting", () => {
     expect(formatQuantity(0.1, "mass", { system: "us" }).text).toBe("3.53 oz");
     expect(formatQuantity(1, "mass", { system: "us" }).text).toBe("2.20 lb");
     expect(formatQuantity(189.5, "force", { system: "us" }).text).toBe("42.6 lbf");
-    expect(formatQuantity(3903.976852, "acceleration", { significant: 5 }).text).toBe("398.09 g");
+    expect(formatQuantity(3903.976852, "acceleration", { significant: 5 }).text).toBe("398.09 gₙ");
   });
 });

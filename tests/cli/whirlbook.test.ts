@@ -32,8 +32,16 @@ describe("whirlbook check", { timeout: 30_000 }, () => {
     const { code, stdout } = run("check", demoFile);
     expect(code).toBe(1);
     expect(stdout).toContain("Build sheet: Demo: invented 1.4 kg whole-body spinner");
-    expect(stdout).toContain("HOLDS            Accelerometer placement: Sensor reading at top speed 217 g");
-    expect(stdout).toContain("FAILS            Heading drift");
+    expect(stdout).toContain("✔ Holds            Accelerometer placement: Sensor reading at top speed 217 gₙ");
+    expect(stdout).toContain("✖ Fails            Heading drift");
+    expect(stdout).toContain("▲ Marginal         Balance");
+    expect(stdout).toContain("                   rule:   Balance grade G 250 or finer");
+  });
+
+  it('prints the build sheet\'s own words, "For information" included, never a status key', () => {
+    const { stdout } = run("check", demoFile);
+    expect(stdout).toContain("i For information  True sensor radius");
+    expect(stdout).not.toMatch(/\binfo\b|INFORMATION|HOLDS|FAILS/);
     expect(stdout).toMatch(/Overall: Fails\n/);
   });
 
@@ -51,7 +59,10 @@ describe("whirlbook check", { timeout: 30_000 }, () => {
     const report = JSON.parse(stdout);
     expect(report.overall).toBe("fails");
     expect(report.checks.map((c: { id: string }) => c.id)).toContain("fasteners[0]");
-    expect(report.checks[0].figure).toMatchObject({ label: "Sensor reading at top speed", unit: "m/s²", text: "217 g" });
+    expect(report.checks[0].figure).toMatchObject({ label: "Sensor reading at top speed", unit: "m/s²", text: "217 gₙ" });
+    // The status stays a key for programs; the verdict is the word the build sheet shows.
+    expect(report.overallVerdict).toBe("Fails");
+    expect(report.checks.find((c: { id: string }) => c.id === "mass.sensor")).toMatchObject({ status: "info", verdict: "For information" });
   });
 
   it("prints US units with --units us", () => {

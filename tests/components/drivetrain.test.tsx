@@ -268,10 +268,10 @@ describe("server render of the spin-up calculator (the path Astro islands take)"
   });
 
   it("renders the default results, the regimes, the energy table and the charts, with no NaN", () => {
-    expect(html).toContain("Reaches the target.");
+    expect(html).toContain("Holds: reaches the target.");
     expect(html).toMatch(/data-out="time-100">1.01 s</);
     expect(html).toContain('data-out="regimes"');
-    expect(html).toContain('data-out="energy-balance"');
+    expect(html).toContain('data-out="energy-losses"');
     expect((html.match(/<svg/g) ?? []).length).toBe(3);
     expect(html).not.toMatch(/NaN|Infinity/);
   });
@@ -280,14 +280,14 @@ describe("server render of the spin-up calculator (the path Astro islands take)"
     const short = { ...DEMO_WEAPON, targetSpeed: 15000 * RPM };
     const shortHtml = renderToString(<Results r={simulateSpinUp(short)} input={short} system="metric" />);
     // Tops out at 11 270 rpm: 24.9 % below 15 000 rpm.
-    expect(shortHtml).toContain("Falls short.");
+    expect(shortHtml).toContain("Fails: falls short of the target.");
     expect(shortHtml).toMatch(/11270 rpm \(settles by 3.\d+ s\), 24.9 % below the 15000 rpm target/);
     expect(shortHtml).toContain("not reached — tops out at 11270 rpm");
     const stuck = { ...DEMO_WEAPON, frictionTorque: 5 };
     const r = simulateSpinUp(stuck);
     expect(r.verdict).toBe("stalled");
     const stuckHtml = renderToString(<Results r={r} input={stuck} system="us" />) + renderToString(<SpinUpCharts r={r} input={stuck} />);
-    expect(stuckHtml).toContain("Does not move.");
+    expect(stuckHtml).toContain("Fails: does not move.");
     expect(stuckHtml).toContain("The drive never moves");
     expect(stuckHtml).toContain("none at rest");
     expect(stuckHtml).not.toMatch(/NaN|Infinity|−\d/);

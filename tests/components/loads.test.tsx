@@ -86,7 +86,7 @@ describe("the bolt calculator's model", () => {
     const model = createFastenerModel();
     model.fields.texts.failBelow.value = "3";
     expect(model.outcome.value.result).toBeNull();
-    expect(model.outcome.value.error).toEqual({ field: "marginalBelow", message: "Thin below must be at least the fails below (3)." });
+    expect(model.outcome.value.error).toEqual({ field: "marginalBelow", message: "Marginal below must be at least the fails below (3)." });
   });
 
   it("withholds results while a field does not read, and names it", () => {

@@ -12,7 +12,7 @@ describe("server render (the path Astro islands take)", () => {
   });
 
   it("renders the default result and the chart without touching window or document", () => {
-    expect(html).toContain("Fits.");
+    expect(html).toContain("Holds.");
     expect(html).toContain('data-out="max-radius"');
     expect(html).toContain("<svg");
     expect(html).not.toMatch(/NaN|Infinity/);
