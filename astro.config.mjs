@@ -74,7 +74,7 @@ export default defineConfig({
             groups: [
               {
                 name: "runtime",
-                test: /node_modules[\\/](preact|d3-array)[\\/]|calc[\\/]core[\\/](units|inputs|errors|constants|calculator|permalink|choices|spec-check)\.ts|components[\\/]calc-ui[\\/]/,
+                test: /node_modules[\\/]preact[\\/]|calc[\\/]core[\\/](units|inputs|errors|constants|calculator|permalink|choices|spec-check)\.ts|components[\\/]calc-ui[\\/](?!Chart\.tsx)/,
               },
             ],
           },

@@ -115,7 +115,7 @@ export default function QuickBalanceCalculator({ id = quickCalculator.anchor }: 
                   ["Least counterweight within the limit", "least", result.leastCounterweight > 0 ? q(result.leastCounterweight, "mass") : "none needed"],
                   [`Unbalance U = m·${moved ? "d" : "r"}`, "unbalance", q(result.unbalance, "unbalance")],
                   ["Rotating force U·Ω²", "force", q(result.force, "force")],
-                  ["Unbalance allowed, U_per", "unbalance-limit", q(result.allowance.unbalance, "unbalance")],
+                  ["Unbalance allowed, Uₚₑᵣ", "unbalance-limit", q(result.allowance.unbalance, "unbalance")],
                   [
                     result.allowance.grade ? "Force at the limit" : "The limit as a grade",
                     "limit-other",
