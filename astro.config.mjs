@@ -69,12 +69,13 @@ export default defineConfig({
         treeshake: { moduleSideEffects: [{ test: /[\\/]calc[\\/][^?]*\.ts(\?.*)?$/, sideEffects: false }] },
         output: {
           // Every calculator page needs the same runtime (Preact, reactive state, units, the shared
-          // calculator parts): one chunk for it compresses better than nine small ones.
+          // calculator parts): one chunk for it compresses better than nine small ones. Parts only
+          // some pages use (the chart, the form helper) stay out of it, so the others do not carry them.
           codeSplitting: {
             groups: [
               {
                 name: "runtime",
-                test: /node_modules[\\/]preact[\\/]|calc[\\/]core[\\/](units|inputs|errors|constants|calculator|permalink|choices|spec-check)\.ts|components[\\/]calc-ui[\\/](?!Chart\.tsx)/,
+                test: /node_modules[\\/]preact[\\/]|calc[\\/]core[\\/](units|inputs|errors|constants|calculator|permalink|choices|spec-check)\.ts|components[\\/]calc-ui[\\/](?!Chart\.tsx|form-parts\.tsx)/,
               },
             ],
           },

@@ -16,8 +16,8 @@ export const quickBalanceChoices = /* @__PURE__ */ defineChoices({
     label: "Set the limit by",
     urlKey: "lim",
     options: [
-      { value: "grade", label: "a balance grade (ISO 21940-11)" },
-      { value: "force", label: "the wobble force you accept" },
+      { value: "grade", label: "a balance grade" },
+      { value: "force", label: "a wobble force" },
     ],
     default: "grade",
   },

@@ -4,9 +4,9 @@
  * cancels it and a verdict. calc/mass/quick-balance.ts computes it.
  */
 import { useEffect, useMemo } from "preact/hooks";
-import { quickBalanceChoices, form as quickCalculator, run as quickRun } from "../../calc/calculators/quick-balance.ts";
+import { form as quickCalculator, run as quickRun } from "../../calc/calculators/quick-balance.ts";
 import { formatNumber, formatQuantity, type QuantityKind, type UnitSystem } from "../../calc/core/units.ts";
-import { QuantityField } from "../calc-ui/QuantityField.tsx";
+import { formParts } from "../calc-ui/form-parts.tsx";
 import { Toolbar } from "../calc-ui/Toolbar.tsx";
 import { Notices } from "../calc-ui/Notices.tsx";
 import { ResultBar, type Tone } from "../calc-ui/ResultBar.tsx";
@@ -31,30 +31,7 @@ export default function QuickBalanceCalculator({ id = quickCalculator.anchor }: 
   const { result, error } = model.outcome.value;
   const moved = choices.change.value === "moved";
   const byForce = choices.limit.value === "force";
-  const field = (name: keyof typeof fields.specs) => (
-    <QuantityField
-      key={name}
-      idPrefix={id}
-      name={name}
-      spec={fields.specs[name]}
-      text={fields.texts[name]}
-      reading={fields.readings[name]}
-      system={system}
-      extraError={error && error.field === name ? error.message : null}
-    />
-  );
-  const choice = (name: keyof typeof quickBalanceChoices) => (
-    <div class="field" key={name}>
-      <label for={`${id}-${name}`}>{quickBalanceChoices[name].label}</label>
-      <select id={`${id}-${name}`} value={choices[name].value} onChange={(e) => (choices[name].value = e.currentTarget.value)}>
-        {quickBalanceChoices[name].options.map((o) => (
-          <option key={o.value} value={o.value}>
-            {o.label}
-          </option>
-        ))}
-      </select>
-    </div>
-  );
+  const { field, choice } = formParts(model, id);
   const q = (v: number, kind: QuantityKind, significant = 3) => formatQuantity(v, kind, { system, significant }).text;
   const resultsId = `${id}-results`;
   const tone = result ? TONE[result.status] : null;

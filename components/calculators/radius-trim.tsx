@@ -3,9 +3,9 @@
  * the radius the firmware has now give the radius to set. calc/heading/drift-trim.ts computes it.
  */
 import { useEffect, useMemo } from "preact/hooks";
-import { form as trimCalculator, radiusTrimChoices, run as trimRun } from "../../calc/calculators/radius-trim.ts";
+import { form as trimCalculator, run as trimRun } from "../../calc/calculators/radius-trim.ts";
 import { formatNumber, type UnitSystem } from "../../calc/core/units.ts";
-import { QuantityField } from "../calc-ui/QuantityField.tsx";
+import { formParts } from "../calc-ui/form-parts.tsx";
 import { Toolbar } from "../calc-ui/Toolbar.tsx";
 import { Notices } from "../calc-ui/Notices.tsx";
 import { ResultBar } from "../calc-ui/ResultBar.tsx";
@@ -28,18 +28,7 @@ export default function RadiusTrimCalculator({ id = trimCalculator.anchor }: Rad
   const system: UnitSystem = fields.system.value;
   const { result, error } = model.outcome.value;
   const perTurn = choices.measure.value !== "second";
-  const field = (name: keyof typeof fields.specs) => (
-    <QuantityField
-      key={name}
-      idPrefix={id}
-      name={name}
-      spec={fields.specs[name]}
-      text={fields.texts[name]}
-      reading={fields.readings[name]}
-      system={system}
-      extraError={error && error.field === name ? error.message : null}
-    />
-  );
+  const { field, choice } = formParts(model, id);
   const len = (v: number) => inSystem(v, "length", system, 4);
   const resultsId = `${id}-results`;
   return (
@@ -50,18 +39,8 @@ export default function RadiusTrimCalculator({ id = trimCalculator.anchor }: Rad
         <fieldset>
           <legend>What you saw</legend>
           {field("assumedRadius")}
-          {(["sense", "measure"] as const).map((name) => (
-            <div class="field" key={name}>
-              <label for={`${id}-${name}`}>{radiusTrimChoices[name].label}</label>
-              <select id={`${id}-${name}`} value={choices[name].value} onChange={(e) => (choices[name].value = e.currentTarget.value)}>
-                {radiusTrimChoices[name].options.map((o) => (
-                  <option key={o.value} value={o.value}>
-                    {o.label}
-                  </option>
-                ))}
-              </select>
-            </div>
-          ))}
+          {choice("sense")}
+          {choice("measure")}
           {perTurn ? field("driftPerTurn") : [field("driftRate"), field("angularSpeed")]}
         </fieldset>
       </form>

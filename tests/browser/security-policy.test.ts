@@ -50,7 +50,7 @@ describe("the content security policy", () => {
     await page.goto(`${origin()}/chapters/acceleration/?v=1&rpm=3000rpm&r=12mm`);
     await waitForIslands(page);
     await page.fill("#placement-calculator-radius", "30 mm");
-    await expect.poll(() => page.locator('[data-out="accel-top"]').textContent()).toBe("302 g");
+    await expect.poll(() => page.locator('[data-out="accel-top"]').textContent()).toBe("302 gₙ");
     seen.push(...(await violations()));
     // A search: pagefind's worker and WebAssembly load and run.
     await page.goto(`${origin()}/search/?q=headroom`);
