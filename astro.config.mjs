@@ -77,6 +77,8 @@ export default defineConfig({
                 name: "runtime",
                 test: /node_modules[\\/]preact[\\/]|calc[\\/]core[\\/](units|inputs|errors|constants|calculator|permalink|choices|spec-check)\.ts|components[\\/]calc-ui[\\/](?!Chart\.tsx|form-parts\.tsx)/,
               },
+              // The heading chapters' shared view parts in one chunk rather than two small ones.
+              { name: "heading-ui", test: /components[\\/]heading[\\/](ui\.tsx|format\.ts)/ },
             ],
           },
         },

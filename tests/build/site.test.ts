@@ -54,11 +54,12 @@ const EDITOR_JS = 36 * KB;
  */
 const OVER_BUDGET: Record<string, { js: number; total: number }> = {
   // The calc contract (every public function refuses what it cannot compute, by name) added about
-  // 0.9 KB gzip of checks to the code every calculator page shares; the pages below were at or near
-  // their budget before it. Measured plus about 1 %.
-  calibration: { js: 31_150, total: 60 * KB },
-  "heading-drift": { js: 27_000, total: 60 * KB },
-  "heading-timing": { js: 26_050, total: 60 * KB },
+  // 0.9 KB gzip of checks to the code every calculator page shares, and pages with a chart load it as
+  // a chunk of its own (+0.3 KB; pages without one are 1.4 KB lighter); the pages below were at or
+  // near their budget before. Measured plus about 1 %.
+  calibration: { js: 31_050, total: 60 * KB },
+  "heading-drift": { js: 26_900, total: 60 * KB },
+  "heading-timing": { js: 25_950, total: 60 * KB },
   // Total over 60 KB: the chapter's math markup (HTML 19 KB gzip) with the editor.
   "mass-layout": { js: 36 * KB, total: 63_700 },
   "spin-up": { js: 38_700, total: 66_850 },
