@@ -6,6 +6,9 @@
 import { describe, expect, it } from "vitest";
 import type { Page } from "playwright-core";
 import { axeViolations, useSite } from "../support/browser.ts";
+import { linkFor } from "../../calc/core/calculator.ts";
+import { form as weaponTurnForm } from "../../calc/calculators/weapon-turn.ts";
+import { DEMO_VERTICAL_SPINNER_TURN } from "../../calc/weapon/turn-check.ts";
 
 const site = useSite();
 const { open } = site;
@@ -145,6 +148,34 @@ describe("the pit flow", () => {
     await page.fill("#balance-calculator-partMass", "3 kg");
     await expect.poll(() => page.locator("#balance-calculator [data-result-bar]").textContent()).toContain("No result yet: correct the marked field.");
     expect(await page.locator("#balance-calculator .field--error").count()).toBe(1);
+    expect(await axeViolations(page)).toEqual([]);
+    expect(problems).toEqual([]);
+    await context.close();
+  });
+
+  it("opens the invented disc robot from its link and answers the turn question: the outer wheels lift at 136 °/s against the drive's 1020 °/s, then in place, then with a light weapon", async () => {
+    const { page, context, problems } = await open(`/${linkFor(weaponTurnForm, DEMO_VERTICAL_SPINNER_TURN)}`);
+    const bar = (name: string) => page.locator(`#weapon-turn-calculator [data-result-bar] [data-bar="${name}"]`);
+    const out = (name: string) => page.locator(`#weapon-turn-calculator [data-out="${name}"]`);
+    // ψ̇_lift = 2.3724 rad/s = 135.9 °/s; 2(3.5 − 1)/0.28 = 17.857 rad/s = 1023 °/s; margin 0.133 (tests/calc/weapon/gyroscopic.test.ts).
+    await expect.poll(() => bar("lift").textContent()).toBe("136 °/s");
+    expect(await bar("drive").textContent()).toBe("1020 °/s");
+    expect(await bar("verdict").textContent()).toBe("Fails: a full turn lifts a wheel");
+    expect(await out("margin").textContent()).toBe("0.133");
+    // J·Ω·ψ̇ = 0.010125 × 837.76 × 2π = 53.3 N·m, over 50 mm: 1070 N (tests/calc/weapon/gyroscopic.test.ts).
+    expect(await out("moment").textContent()).toBe("53.3 N·m");
+    expect(await out("bearing").textContent()).toBe("1070 N");
+    // Turning in place: no centrifugal moment, so m·g·t/2 ÷ J·Ω = 18.67/8.482 = 2.201 rad/s = 126 °/s; the drive 2 × 3.5/0.28 = 25 rad/s = 1432 °/s.
+    await page.fill("#weapon-turn-calculator-forwardSpeed", "0 m/s");
+    await expect.poll(() => bar("lift").textContent()).toBe("126 °/s");
+    expect(await bar("drive").textContent()).toBe("1430 °/s");
+    await expect.poll(() => new URL(page.url()).searchParams.get("fv")).toMatch(/^0/);
+    // A light weapon, J = 0.0001 kg·m²: H = 0.0838 N·m·s lifts a wheel only at 223 rad/s, 8.9 times the drive's 25 rad/s.
+    await page.fill("#weapon-turn-calculator-rotorInertia", "0.0001 kg·m²");
+    await expect.poll(() => bar("verdict").textContent()).toBe("Holds: the wheels stay down");
+    await page.fill("#weapon-turn-calculator-trackWidth", "6 m");
+    await expect.poll(() => page.locator("#weapon-turn-calculator [data-result-bar]").textContent()).toContain("No result yet: correct the marked field.");
+    expect(await page.locator("#weapon-turn-calculator .field--error").count()).toBe(1);
     expect(await axeViolations(page)).toEqual([]);
     expect(problems).toEqual([]);
     await context.close();
