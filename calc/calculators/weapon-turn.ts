@@ -7,15 +7,19 @@ import { figureOf, ratioFigure } from "../core/check.ts";
 import { type ValuesOf, defineCalculator, defineForm } from "../core/calculator.ts";
 import { defineChoices } from "../core/choices.ts";
 import { type QuantityKind, type UnitId, formatNumber, formatQuantity } from "../core/units.ts";
-import { HORIZONTAL_SPIN_OPTIONS } from "../weapon/gyroscopic.ts";
+import type { HORIZONTAL_SPIN_OPTIONS } from "../weapon/gyroscopic.ts";
 import { WEAPON_TURN_CHOICE_DEFAULTS, weaponTurnCheck, weaponTurnInputs } from "../weapon/turn-check.ts";
 
 /** Which way the weapon spins. */
 export const weaponTurnChoices = /* @__PURE__ */ defineChoices({
   horizontalSpin: {
-    label: "Spin direction",
+    label: "The weapon's front edge moves",
     urlKey: "spin",
-    options: HORIZONTAL_SPIN_OPTIONS,
+    // The values of HORIZONTAL_SPIN_OPTIONS, with labels short enough for a phone's menu.
+    options: [
+      { value: "front-up", label: "up" },
+      { value: "front-down", label: "down" },
+    ] as const satisfies readonly { value: (typeof HORIZONTAL_SPIN_OPTIONS)[number]["value"]; label: string }[],
     default: WEAPON_TURN_CHOICE_DEFAULTS.horizontalSpin,
   },
 });
