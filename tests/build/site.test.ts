@@ -45,7 +45,7 @@ const BUDGET = {
  * Editor and simulation pages (the mass layout, spin-up) have their own JS budget: they carry an
  * editor or an integrator besides the shared calculator parts.
  */
-const EDITOR_PAGES = new Set(["mass-layout", "spin-up"]);
+const EDITOR_PAGES = new Set(["mass-layout", "spin-up", "steering"]);
 const EDITOR_JS = 36 * KB;
 
 /**
