@@ -6,36 +6,12 @@
  * spin at which the skid lifts. The simulation (simulate.ts) shows how far a real drive falls
  * below these limits. SI in and out.
  */
-import { defineInputs } from "../core/inputs.ts";
 import { requireWithinSpecs } from "../core/spec-check.ts";
+import { steeringEstimateInputs } from "./estimate-inputs.ts";
 import { rollingWheelGyroscopicMoment, skidLiftSpeed } from "./gyro.ts";
-import { steeringInputs } from "./inputs.ts";
 import { kinematicRimSpeedDepth, kinematicTranslationSpeed, latencyDirectionError, phaseLeadForLatency, pulseTrainFundamental } from "./kinematics.ts";
 
-const s = steeringInputs;
-
-/** Inputs of the steering estimate: the steering simulation's own declarations, the ones the closed forms read. */
-export const steeringEstimateInputs = /* @__PURE__ */ defineInputs({
-  spinSpeed: s.spinSpeed,
-  robotMass: s.robotMass,
-  wheelCount: s.wheelCount,
-  wheelRadius: s.wheelRadius,
-  wheelOffset: s.wheelOffset,
-  wheelInertia: s.wheelInertia,
-  motorsPerWheel: s.motorsPerWheel,
-  motorRotorInertia: s.motorRotorInertia,
-  gearRatio: s.gearRatio,
-  motorKv: s.motorKv,
-  cellCount: s.cellCount,
-  cellVoltage: s.cellVoltage,
-  windowWidth: s.windowWidth,
-  depth: s.depth,
-  oppositeWindow: s.oppositeWindow,
-  phaseLead: s.phaseLead,
-  loopRate: s.loopRate,
-  latency: s.latency,
-  directionTolerance: s.directionTolerance,
-});
+export { steeringEstimateInputs };
 
 export type SteeringEstimateInput = { [K in keyof typeof steeringEstimateInputs]: number };
 

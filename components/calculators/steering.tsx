@@ -4,7 +4,7 @@
  * the wheels' gyroscopic moment and, with one wheel, the skid lift speed
  * (calc/steering/estimate.ts). A button runs the full simulation once for the same values.
  */
-import { useEffect, useMemo, useState } from "preact/hooks";
+import { useEffect, useMemo } from "preact/hooks";
 import { form as steeringCalculator, run as steeringRun } from "../../calc/calculators/steering.ts";
 import { formatQuantity, type QuantityKind, type UnitSystem } from "../../calc/core/units.ts";
 import { STATUS_WORDS } from "../../calc/core/check.ts";
@@ -16,6 +16,7 @@ import { Notices } from "../calc-ui/Notices.tsx";
 import { ResultBar, type Tone } from "../calc-ui/ResultBar.tsx";
 import { linkFor, syncWithUrl } from "../calc-ui/url-sync.ts";
 import { createCalculatorModel } from "../calc-ui/model.ts";
+import { useSignal } from "../calc-ui/reactive.ts";
 
 /** The island name: this file's name. */
 export const island = "steering";
@@ -32,7 +33,7 @@ type Simulated = { values: unknown; result: SteeringResult | null; message: stri
 export default function SteeringCalculator({ id = steeringCalculator.anchor }: SteeringCalculatorProps) {
   const model = useMemo(() => createCalculatorModel(steeringCalculator, steeringRun), []);
   useEffect(() => syncWithUrl(model), [model]);
-  const [simulated, setSimulated] = useState<Simulated | null>(null);
+  const simulated = useSignal<Simulated | null>(null);
   const { fields } = model;
   const system: UnitSystem = fields.system.value;
   const { result, error } = model.outcome.value;
@@ -41,13 +42,14 @@ export default function SteeringCalculator({ id = steeringCalculator.anchor }: S
   const q = (v: number, kind: QuantityKind, significant = 3) => formatQuantity(v, kind, { system, significant }).text;
   const resultsId = `${id}-results`;
   const tone = result ? TONE[result.status] : null;
-  const sim = simulated && simulated.values === values ? simulated : null;
+  const last = simulated.value;
+  const sim = last && last.values === values ? last : null;
   const simulate = () => {
     if (!values) return;
     try {
-      setSimulated({ values, result: simulateSteering({ ...DEMO_STEERING_SPINNER, ...values }), message: null });
+      simulated.value = { values, result: simulateSteering({ ...DEMO_STEERING_SPINNER, ...values }), message: null };
     } catch (e) {
-      setSimulated({ values, result: null, message: e instanceof Error ? e.message : String(e) });
+      simulated.value = { values, result: null, message: e instanceof Error ? e.message : String(e) };
     }
   };
   return (

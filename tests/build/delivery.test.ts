@@ -31,10 +31,11 @@ const KIB = 1024;
  * their own, already compressed, size). Measured 515 KiB with 12 pages (1.60 MB raw; 471 KiB as
  * brotli), from 739 KiB before; 534 KiB with 13 (the radius-trim chapter: its page, script and
  * search entries); 554 KiB with 14 (the quick-balance chapter: its page, script and search entries,
- * about 20 KiB). The 500 KiB target is not met: what remains is used (pages, scripts, 6 fonts, the
+ * about 20 KiB); 596 KiB with 15 (the steering chapter: its page, its script with the simulation behind
+ * its button, its search entries and the steering check on the build sheet, about 42 KiB). The 500 KiB target is not met: what remains is used (pages, scripts, 6 fonts, the
  * search index and its code).
  */
-const PRECACHE_GZIP_CEILING = 565 * KIB;
+const PRECACHE_GZIP_CEILING = 600 * KIB;
 
 describe("compressed copies", () => {
   const text = () => files().filter((f) => /\.(html|css|js|svg|json)$/.test(f));

@@ -58,15 +58,19 @@ const OVER_BUDGET: Record<string, { js: number; total: number }> = {
   // a chunk of its own (+0.3 KB; pages without one are 1.4 KB lighter); the pages below were at or
   // near their budget before. Measured plus about 1 %.
   calibration: { js: 31_050, total: 60 * KB },
-  "heading-drift": { js: 26_900, total: 60 * KB },
+  // +50 B: the steering chapter's simulation shares the drift budget, which now loads as a chunk of its own.
+  "heading-drift": { js: 26_950, total: 60 * KB },
   "heading-timing": { js: 25_950, total: 60 * KB },
   // Total over 60 KB: the chapter's math markup (HTML 19 KB gzip) with the editor.
   "mass-layout": { js: 36 * KB, total: 63_700 },
   "spin-up": { js: 38_700, total: 66_850 },
 };
 
-/** The build sheet's script over its 70 KB budget (the contract's checks in every descriptor it runs): measured plus about 1 %. */
-const BUILD_SHEET_JS_CEILING = 74_200;
+/**
+ * The build sheet's script over its 70 KB budget (the contract's checks in every descriptor it runs): measured plus about 1 %.
+ * 77.2 KB with the steering check (its closed forms and their input declarations, about 3.7 KB), plus about 1 %.
+ */
+const BUILD_SHEET_JS_CEILING = 78_000;
 
 describe("the built site", () => {
   it("was built (run `npm run build` first)", () => {
