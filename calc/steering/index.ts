@@ -7,6 +7,7 @@
  */
 export * from "./kinematics.ts";
 export * from "./gyro.ts";
+export * from "./estimate.ts";
 export * from "./sensor-bias.ts";
 export { brushTyreForce, LOW_SPEED } from "./contact.ts";
 export * from "./drive.ts";

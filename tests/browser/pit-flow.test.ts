@@ -37,6 +37,7 @@ const CHAPTERS = [
   { slug: "rims", anchor: "rim-calculator", bar: "sf" },
   { slug: "spin-up", anchor: "spin-up-calculator", bar: "time-100" },
   { slug: "weapon-turn", anchor: "weapon-turn-calculator", bar: "lift" },
+  { slug: "steering", anchor: "steering-calculator", bar: "speed" },
 ] as const;
 
 describe("the pit flow", () => {
@@ -177,6 +178,26 @@ describe("the pit flow", () => {
     await expect.poll(() => page.locator("#weapon-turn-calculator [data-result-bar]").textContent()).toContain("No result yet: correct the marked field.");
     expect(await page.locator("#weapon-turn-calculator .field--error").count()).toBe(1);
     expect(await axeViolations(page)).toEqual([]);
+    expect(problems).toEqual([]);
+    await context.close();
+  });
+
+  it("opens a steering permalink with the numbers of the calc tests: 4.69 m/s, 18.9° off course at 0.8 ms latency, and a one-wheel robot's skid lifting at 1857 rpm", async () => {
+    const { page, context, problems } = await open("/chapters/steering/?v=1&u=metric&rpm=3000rpm&lat=0.8ms&wheels=1");
+    await page.locator(".to-calculator a").click();
+    const bar = (name: string) => page.locator(`#steering-calculator [data-result-bar] [data-bar="${name}"]`);
+    // v̄ = 2δ·sin 60°/π with δ = 0.25 · 16.4 V · 1100 rpm/V · 18 mm = 8.50 m/s (tests/calc/steering/estimate.test.ts).
+    await expect.poll(() => bar("speed").textContent()).toBe("4.69 m/s");
+    // Ω(L + 1/(2f)) = 314.16 rad/s × (0.8 ms + 0.25 ms) = 0.330 rad.
+    expect(await bar("error").textContent()).toBe("18.9°");
+    // √(M g r_w / (J_w + J_m)) = √(1.5 · 9.80665 · 0.018 / 7e-6) = 194.5 rad/s (tests/calc/steering/estimate.test.ts).
+    expect(await bar("verdict").textContent()).toBe("Fails: skid lifts");
+    expect(await page.locator('#steering-calculator [data-out="skid-lift"]').textContent()).toBe("1857 rpm");
+    await page.fill("#steering-calculator-wheelCount", "2");
+    await expect.poll(() => bar("verdict").textContent()).toBe("Marginal: push off course");
+    await page.locator('#steering-calculator [data-action="simulate"]').click();
+    await expect.poll(() => page.locator('#steering-calculator [data-out="sim-speed"]').textContent()).toMatch(/\d m\/s$/);
+    expect(await page.locator('#steering-calculator [data-out="sim-spin-lost"]').textContent()).toMatch(/\d/);
     expect(problems).toEqual([]);
     await context.close();
   });

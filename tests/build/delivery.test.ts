@@ -33,10 +33,12 @@ const KIB = 1024;
  * search entries); 554 KiB with 14 (the quick-balance chapter: its page, script and search entries,
  * about 20 KiB); 584 KiB with 15 (the weapon-turn chapter: its page, script, the turn check's code
  * and search entries, and that code on the build sheet, about 25 KiB, so the ceiling rose from 565
- * to 590 KiB). The 500 KiB target is not met: what remains is used (pages, scripts, 6 fonts, the
+ * to 590 KiB); with 16 (the steering chapter: its page, its script with the simulation behind its
+ * button, its search entries and the steering check on the build sheet, about 42 KiB) the ceiling
+ * is 640 KiB. The 500 KiB target is not met: what remains is used (pages, scripts, 6 fonts, the
  * search index and its code).
  */
-const PRECACHE_GZIP_CEILING = 590 * KIB;
+const PRECACHE_GZIP_CEILING = 640 * KIB;
 
 describe("compressed copies", () => {
   const text = () => files().filter((f) => /\.(html|css|js|svg|json)$/.test(f));

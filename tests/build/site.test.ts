@@ -45,7 +45,7 @@ const BUDGET = {
  * Editor and simulation pages (the mass layout, spin-up) have their own JS budget: they carry an
  * editor or an integrator besides the shared calculator parts.
  */
-const EDITOR_PAGES = new Set(["mass-layout", "spin-up"]);
+const EDITOR_PAGES = new Set(["mass-layout", "spin-up", "steering"]);
 const EDITOR_JS = 36 * KB;
 
 /**
@@ -58,7 +58,8 @@ const OVER_BUDGET: Record<string, { js: number; total: number }> = {
   // a chunk of its own (+0.3 KB; pages without one are 1.4 KB lighter); the pages below were at or
   // near their budget before. Measured plus about 1 %.
   calibration: { js: 31_050, total: 60 * KB },
-  "heading-drift": { js: 26_900, total: 60 * KB },
+  // +50 B: the steering chapter's simulation shares the drift budget, which now loads as a chunk of its own.
+  "heading-drift": { js: 26_950, total: 60 * KB },
   "heading-timing": { js: 25_950, total: 60 * KB },
   // Total over 60 KB: the chapter's math markup (HTML 19 KB gzip) with the editor.
   // The weapon-turn chapter's island made the code every calculator page shares 16 B gzip larger,
@@ -69,12 +70,13 @@ const OVER_BUDGET: Record<string, { js: number; total: number }> = {
 };
 
 /**
- * The build sheet's script over its 70 KB budget (the contract's checks in every descriptor it runs): measured plus about 1 %.
- * 78 800 since the weapon-turn calculator joined the sheet (the turn check's code, 3.8 KB gzip).
+ * The build sheet's script over its 70 KB budget: it loads every calculator's check at once (the
+ * contract's checks in each, then the weapon-turn check +3.8 KB and the steering check +3.7 KB).
+ * Measured 81 844 B JS and 91 093 B in all; ceilings are that plus about 1 %. The way back under
+ * budget is structural: load a check's code only for the sections a design holds.
  */
-const BUILD_SHEET_JS_CEILING = 78_800;
-/** The build sheet's whole page over its 85 KB budget since the weapon-turn calculator joined it (measured 87 230 B): measured plus about 1 %. */
-const BUILD_SHEET_TOTAL_CEILING = 88_100;
+const BUILD_SHEET_JS_CEILING = 82_700;
+const BUILD_SHEET_TOTAL_CEILING = 92_000;
 
 describe("the built site", () => {
   it("was built (run `npm run build` first)", () => {

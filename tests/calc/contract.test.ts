@@ -544,6 +544,7 @@ const CALLS: Record<PublicFunction, Entry> = {
   simulateSteering: { calls: () => [[quickSteering(), { maxSteps: 20_000 }]], runs: 30 },
   sweepSteering: { calls: () => [[{ input: quickSteering(), windowWidths: [1, 2], depths: [0.1], duration: 0.05 }]], runs: 20 },
   steeringPath: { calls: () => [[{ input: quickSteering() }]], runs: 20 },
+  steeringEstimate: { calls: () => [[{ ...api.DEMO_STEERING_SPINNER }], [{ ...api.DEMO_STEERING_SPINNER, wheelCount: 1, oppositeWindow: 0, windowWidth: 4 }]] },
 };
 
 /** Constructors the public API exports, with valid arguments; the error classes are the contract's own vocabulary. */
@@ -584,6 +585,7 @@ const DECLARED: Partial<Record<PublicFunction, InputSpecs>> = {
   fitCalibration: api.calibrationFitInputs,
   steeringPath: api.steeringInputs,
   sweepSteering: api.steeringInputs,
+  steeringEstimate: api.steeringEstimateInputs,
 };
 /** Entries that take their declared values in another argument than the first. */
 const DECLARED_AT: Partial<Record<PublicFunction, readonly (string | number)[]>> = {
