@@ -6,10 +6,8 @@
  */
 import { useEffect, useMemo } from "preact/hooks";
 import { form as driftCalculator, run as driftRun } from "../../calc/calculators/heading-drift.ts";
-import { form as opposedCalculator, run as opposedRun } from "../../calc/calculators/opposed-sensors.ts";
 import type { HeadingDriftResult } from "../../calc/heading/drift-budget.ts";
 import type { headingDriftInputs } from "../../calc/heading/drift-inputs.ts";
-import type { opposedSensorsInputs } from "../../calc/heading/opposed.ts";
 import type { RadiusBand, SpeedRange } from "../../calc/heading/drift.ts";
 import { formatNumber, fromSI, radPerSecondToRpm, type UnitSystem } from "../../calc/core/units.ts";
 import { Toolbar } from "../calc-ui/Toolbar.tsx";
@@ -17,19 +15,25 @@ import { Notices } from "../calc-ui/Notices.tsx";
 import { Chart } from "../calc-ui/Chart.tsx";
 import { ResultBar } from "../calc-ui/ResultBar.tsx";
 import { syncWithUrl } from "../calc-ui/url-sync.ts";
-import { computed } from "../calc-ui/reactive.ts";
+import { computed, signal } from "../calc-ui/reactive.ts";
 import { createCalculatorModel } from "../calc-ui/model.ts";
 import { saveAll } from "../calc-ui/save.ts";
 import { degPerSecond, degrees, inSystem } from "../heading/format.ts";
 import { DataTable, Empty, FieldsForm, Outputs, Verdict, type FieldGroup } from "../heading/ui.tsx";
+import type { PairModel } from "../heading/opposed-pair.tsx";
 
 /** The island name: this file's name. */
 export const island = "heading-drift";
 
-/** The drift budget (plain link keys) and the opposed-sensors comparison (keys "p."). */
+/**
+ * The drift budget (plain link keys) and, once opened, the opposed-sensors comparison (keys "p."),
+ * whose code loads only then (components/heading/opposed-pair.tsx).
+ */
 export function createDriftModel() {
   const drift = createCalculatorModel(driftCalculator, driftRun);
-  const pair = createCalculatorModel(opposedCalculator, opposedRun);
+  /** The pair section's code and model, once loaded. */
+  const pair = signal<{ model: PairModel; view: typeof import("../heading/opposed-pair.tsx") } | null>(null);
+  let opening: Promise<PairModel> | null = null;
   /** The drift plot's curves [rpm, °/s]: exact drift, and the linearised speed-proportional and offset parts. */
   const curves = computed(() => {
     const result = drift.outcome.value.result;
@@ -40,16 +44,23 @@ export function createDriftModel() {
   });
   return {
     drift,
-    pairModel: pair,
     fields: drift.fields,
-    pair: pair.fields,
     outcome: drift.outcome,
-    pairOutcome: pair.outcome,
+    pair,
     curves,
+    /** Loads and opens the pair section (once); resolves to its model. */
+    openPair(): Promise<PairModel> {
+      opening ??= import("../heading/opposed-pair.tsx").then((view) => {
+        const model = view.openPair(drift.fields.system.value);
+        pair.value = { model, view };
+        return model;
+      });
+      return opening;
+    },
     /** Switches both sections' unit system together. */
     setSystem(next: UnitSystem) {
       drift.setSystem(next);
-      pair.setSystem(next);
+      pair.value?.model.setSystem(next);
     },
   };
 }
@@ -66,9 +77,6 @@ const DRIFT_GROUPS: FieldGroup<typeof headingDriftInputs>[] = [
   { legend: "Radius", names: ["assumedRadius", "trueRadius"] },
   { legend: "Sensor", names: ["scaleError", "bias", "biasCorrection", "tilt", "accelerationNoise"] },
   { legend: "Plot range", names: ["lowSpeed", "highSpeed"] },
-];
-const PAIR_GROUPS: FieldGroup<typeof opposedSensorsInputs>[] = [
-  { legend: "Two sensors, one each side", names: ["angularSpeed", "radius1", "radius2", "offset"] },
 ];
 
 /** A drift rate without its sign: "10 °/s". */
@@ -209,72 +217,52 @@ function DriftChart({ model }: { model: DriftModel }) {
   );
 }
 
-function PairResults({ model }: { model: DriftModel }) {
-  const { result, error } = model.pairOutcome.value;
-  const values = model.pair.values.value;
-  if (!result || !values) return <Empty error={error} />;
-  const system = model.pair.system.value;
-  const e = inSystem(values.offset, "length", system);
-  const budget = model.fields.values.value?.budget;
-  const one = result.singleWorstDriftRate;
-  // Zero in exact arithmetic; anything left is round-off far below what can be shown.
-  const pair = result.pairWorstDriftRate < 1e-9 ? "0 °/s" : size(result.pairWorstDriftRate);
-  const s1 = (r: typeof result.towardSensor1) => (r.sensor1.driftRate === null ? "no estimate" : degPerSecond(r.sensor1.driftRate));
-  const over = one === null || (budget !== undefined && one > budget);
-  return (
-    <div class="calc-results" aria-live="polite">
-      <Verdict tone="info" reason="the pair cancels the offset">
-        {one === null
-          ? `With the centre up to ${e} off, sensor 1 may sit at or past it and give no estimate`
-          : `With the centre anywhere within ±${e}, sensor 1 alone drifts up to ${size(one)}${budget === undefined ? "" : `, ${over ? "over" : "within"} the ±${size(budget)} budget`}`}
-        ; the pair drifts {pair}.
-      </Verdict>
-      <Outputs
-        items={[
-          [`Sensor 1 alone, centre ${e} toward it`, "pair-s1-toward", s1(result.towardSensor1)],
-          [`Sensor 1 alone, centre ${e} away`, "pair-s1-away", s1(result.towardSensor2)],
-          [
-            "Sensor 1 alone, worst per revolution",
-            "pair-s1-rev",
-            result.singleWorstPerRevolution === null ? "no estimate" : degrees(result.singleWorstPerRevolution, false),
-          ],
-          ["The pair, (a₁ + a₂)/(r₁ + r₂)", "pair-drift", pair],
-          [
-            "Offset found from a₁ − a₂",
-            "pair-offset",
-            result.towardSensor1.offsetEstimate === null ? "none" : inSystem(result.towardSensor1.offsetEstimate, "length", system),
-          ],
-        ]}
-      />
-    </div>
-  );
+/** The pair section: a button until opened (or opened at once when the link carries its keys). */
+function PairPart({ model, id }: { model: DriftModel; id: string }) {
+  const open = model.pair.value;
+  if (!open)
+    return (
+      <p>
+        <button type="button" class="button" aria-controls={`${id}-pair`} aria-expanded="false" onClick={() => void model.openPair()}>
+          Compare with two opposed sensors
+        </button>
+      </p>
+    );
+  return <open.view.PairSection model={open.model} id={id} budget={model.fields.values.value?.budget} />;
 }
 
 export default function HeadingDriftCalculator({ id = driftCalculator.anchor }: HeadingDriftCalculatorProps) {
   const model = useMemo(() => createDriftModel(), []);
   useEffect(() => {
-    const stops = [syncWithUrl(model.drift), syncWithUrl(model.pairModel)];
-    return () => {
-      for (const stop of stops) stop();
-    };
+    const stop = syncWithUrl(model.drift);
+    if (/(?:^|[?&])p\./.test(window.location.search)) void model.openPair();
+    return stop;
   }, [model]);
+  const opened = model.pair.value?.model;
+  useEffect(() => (opened ? syncWithUrl(opened) : undefined), [opened]);
+  const pairModel = () => model.pair.value?.model;
   const link = () => {
     const { origin, pathname, search } = window.location;
-    return `${origin}${pathname}?${model.pairModel.queryFor(model.drift.queryFor(search))}#${id}`;
+    const query = model.drift.queryFor(search);
+    return `${origin}${pathname}?${pairModel()?.queryFor(query) ?? query}#${id}`;
   };
+  const save = () => {
+    const pair = pairModel();
+    return saveAll(pair ? [model.drift, pair] : [model.drift]);
+  };
+  const pairNotices = model.pair.value?.model.fields.notices;
   return (
     <section class="calc" id={id} aria-label="Heading drift budget calculator">
       <Notices notices={model.fields.notices} />
-      <Notices notices={model.pair.notices} />
-      <Toolbar idPrefix={id} system={model.fields.system} onSystem={model.setSystem} link={link} save={() => saveAll([model.drift, model.pairModel])} />
+      {pairNotices && <Notices notices={pairNotices} />}
+      <Toolbar idPrefix={id} system={model.fields.system} onSystem={model.setSystem} link={link} save={save} />
       <FieldsForm fields={model.fields} groups={DRIFT_GROUPS} idPrefix={id} error={model.outcome.value.error} />
       <DriftBar model={model} id={id} />
       <DriftResults model={model} id={id} />
       <DriftChart model={model} />
-      <div class="calc-section" role="group" aria-labelledby={`${id}-pair-title`}>
+      <div class="calc-section" role="group" aria-labelledby={`${id}-pair-title`} id={`${id}-pair`}>
         <h3 id={`${id}-pair-title`}>Two opposed sensors</h3>
-        <FieldsForm fields={model.pair} groups={PAIR_GROUPS} idPrefix={`${id}-p`} error={model.pairOutcome.value.error} />
-        <PairResults model={model} />
+        <PairPart model={model} id={id} />
       </div>
     </section>
   );

@@ -74,6 +74,10 @@ describe("heading drift budget", () => {
     await page.fill("#drift-calculator-assumedRadius", "12 mm");
     await page.fill("#drift-calculator-highSpeed", "100 rpm");
     await expect.poll(() => page.locator("#drift-calculator-highSpeed-error").textContent()).toBe("Plot to must be greater than the plot from (200 rpm).");
+    // The pair section opens on demand (its code loads then), with its fields in the page's units.
+    await page.getByRole("button", { name: "Compare with two opposed sensors" }).click();
+    await expect.poll(() => page.inputValue("#drift-calculator-p-radius1")).toBe("12 mm");
+    expect(new URL(page.url()).searchParams.has("p.r1")).toBe(false); // opening alone changes no link
     await page.fill("#drift-calculator-p-radius2", "-3 mm");
     await expect
       .poll(() => page.locator("#drift-calculator-p-radius2-error").textContent())
@@ -88,7 +92,10 @@ describe("heading drift budget", () => {
     const { page, context, problems, requests } = await open(`/chapters/heading-drift/${hostile}`);
     expect(await page.locator("main img").count()).toBe(0);
     expect(await page.inputValue("#drift-calculator-assumedRadius")).toBe('"><img src=x onerror=alert(1)>');
-    expect(await page.locator(".calc-notices").allTextContents()).toEqual([expect.stringContaining("does not use"), expect.stringContaining('"p.zz"')]);
+    // The pair's key opens its section at once, and its notice names the key it does not use.
+    await expect
+      .poll(() => page.locator(".calc-notices").allTextContents())
+      .toEqual([expect.stringContaining("does not use"), expect.stringContaining('"p.zz"')]);
     expect(problems).toEqual([]);
     expect(requests.filter((url) => !url.startsWith(origin()))).toEqual([]);
     await context.close();

@@ -24,22 +24,29 @@ describe("drift-budget model", () => {
     // regression pin from tests/calc/heading.test.ts: 366.752 °/s at 2000 rpm
     expect(result!.atSpeed.driftRate! / DEG).toBeCloseTo(366.75202097162, 6);
     expect(model.curves.value!.exact).toHaveLength(61);
-    // the opposed pair: r₁ = r₂ = 12 mm, e = 0.5 mm, 2000 rpm → one sensor up to 4.4097 rad/s
-    expect(model.pairOutcome.value.result!.singleWorstDriftRate!).toBeCloseTo(4.409746715664806, 9);
+    expect(model.pair.value).toBeNull(); // the pair section's code loads only when it is opened
   });
 
-  it("applies a link to both sections, each from its own keys, and reports what it does not use", () => {
+  it("opens the opposed pair on demand: r₁ = r₂ = 12 mm, e = 0.5 mm, 2000 rpm → one sensor up to 4.4097 rad/s", async () => {
+    const model = createDriftModel();
+    const pair = await model.openPair();
+    expect(await model.openPair()).toBe(pair); // once
+    expect(pair.outcome.value.result!.singleWorstDriftRate!).toBeCloseTo(4.409746715664806, 9);
+  });
+
+  it("applies a link to both sections, each from its own keys, and reports what it does not use", async () => {
     const model = createDriftModel();
     const link = "?v=1&rpm=2800rpm&ra=12.69mm&b=0.02g&p.r1=10mm&p.e=1mm&p.rpm=1500rpm&zz=1";
+    const pair = await model.openPair();
     model.drift.applyQuery(link);
-    model.pairModel.applyQuery(link);
+    pair.applyQuery(link);
     expect(model.fields.texts.angularSpeed.value).toBe("2800 rpm");
     expect(model.fields.texts.assumedRadius.value).toBe("12.69 mm");
-    expect(model.pair.texts.radius1.value).toBe("10 mm");
-    expect(model.pair.texts.offset.value).toBe("1 mm");
+    expect(pair.fields.texts.radius1.value).toBe("10 mm");
+    expect(pair.fields.texts.offset.value).toBe("1 mm");
     expect(model.fields.notices.value.join(" ")).toContain('"zz"');
-    expect(model.pair.notices.value).toEqual([]);
-    const query = new URLSearchParams(model.pairModel.queryFor(model.drift.queryFor("")));
+    expect(pair.fields.notices.value).toEqual([]);
+    const query = new URLSearchParams(pair.queryFor(model.drift.queryFor("")));
     expect(query.get("ra")).toBe("12.69mm");
     expect(query.get("p.r1")).toBe("10mm");
     expect(query.get("v")).toBe("1");
@@ -52,19 +59,23 @@ describe("drift-budget model", () => {
     expect(model.curves.value).toBeNull();
   });
 
-  it("gives no single-sensor figure, not NaN, once the uncertainty reaches a sensor", () => {
-    const model = createDriftModel();
-    model.pair.texts.offset.value = "13 mm";
-    const r = model.pairOutcome.value.result!;
+  it("gives no single-sensor figure, not NaN, once the uncertainty reaches a sensor", async () => {
+    const pair = await createDriftModel().openPair();
+    pair.fields.texts.offset.value = "13 mm";
+    const r = pair.outcome.value.result!;
     expect(r.singleWorstDriftRate).toBeNull();
     expect(r.pairWorstDriftRate).toBeLessThan(1e-9);
   });
 
-  it("switches both sections to US units together", () => {
+  it("switches both sections to US units together, and opens the pair in the page's units", async () => {
     const model = createDriftModel();
+    const pair = await model.openPair();
     model.setSystem("us");
     expect(model.fields.texts.assumedRadius.value).toBe("0.472441 in");
-    expect(model.pair.texts.radius1.value).toBe("0.472441 in");
+    expect(pair.fields.texts.radius1.value).toBe("0.472441 in");
+    const later = createDriftModel();
+    later.setSystem("us");
+    expect((await later.openPair()).fields.texts.radius1.value).toBe("0.472441 in");
   });
 });
 
@@ -215,7 +226,7 @@ describe("server render (the path Astro islands take)", () => {
 
   it("counts the inputs each page declares", () => {
     const count = (html: string) => [...html.matchAll(/<(?:input|select|textarea)\b/g)].length;
-    expect(count(pages.drift)).toBe(11 + 4 + 2); // drift fields, pair fields, unit radios
+    expect(count(pages.drift)).toBe(11 + 2); // drift fields, unit radios (the pair section opens on demand)
     expect(count(pages.timing)).toBe(6 + 8 + 2);
     expect(count(pages.calibration)).toBe(1 + 1 + 2 + 2 + 2); // text, file, two selects, k and level, radios
   });
