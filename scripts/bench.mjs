@@ -1,6 +1,6 @@
 // Prints the handbook's figures: build time, per-page bytes (gzip) and render-blocking requests, the
-// offline cache's first download, and how long each calculator takes to recompute after one input
-// changes. A benchmark prints; it never asserts.
+// offline cache's first download, how long each calculator takes to recompute after one input
+// changes, and in chromium how long a typed value takes to reach the page at 1× and 4× CPU slowdown. A benchmark prints; it never asserts.
 // Usage: npm run bench  (SKIP_BUILD=1 to weigh an existing dist/)
 import { execFileSync } from "node:child_process";
 import { readdirSync, existsSync } from "node:fs";
@@ -72,7 +72,7 @@ const placementUs = median((i) => {
 }, 2000);
 console.log(`  accelerometer placement: ${placementUs.toFixed(1)} µs per update`);
 
-for (const name of ["bench-drivetrain.mjs", "bench-steering.mjs"]) {
+for (const name of ["bench-drivetrain.mjs", "bench-steering.mjs", "bench-browser.mjs"]) {
   const extra = join(root, "scripts", name);
   if (!existsSync(extra)) continue;
   console.log("");

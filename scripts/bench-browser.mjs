@@ -1,0 +1,131 @@
+// How quickly each calculator answers in a real browser: from a typed value (an input event on the
+// calculator's first field) to the results changing in the page, and to the next frame, at full speed
+// and with the CPU slowed four times (Chrome's throttling, as for a slow phone); the longest task on
+// the main thread while editing and while any on-demand computation (a sweep, a simulation) runs.
+// A benchmark prints; it never asserts. Target (for a person reading it): no task over 50 ms at 4×.
+// Usage: npm run bench (after its build), or alone: node scripts/bench-browser.mjs [runs]
+import { existsSync, readdirSync } from "node:fs";
+import { join } from "node:path";
+import { fileURLToPath } from "node:url";
+import { chromium } from "playwright-core";
+import { startStaticServer } from "./static-server.mjs";
+
+const root = fileURLToPath(new URL("../", import.meta.url));
+const dist = join(root, "dist");
+const CHROMIUM = process.env.CHROMIUM_PATH ?? "/usr/bin/chromium";
+const RUNS = Number(process.argv[2] ?? 30);
+
+if (!existsSync(CHROMIUM)) {
+  console.log(`browser timings skipped: no chromium at ${CHROMIUM} (set CHROMIUM_PATH)`);
+  process.exit(0);
+}
+if (!existsSync(join(dist, "chapters"))) {
+  console.log("browser timings skipped: build the site first (npm run build)");
+  process.exit(0);
+}
+
+/** Collects long tasks (over 50 ms, the browser's own threshold) from the first script on. */
+function watchLongTasks() {
+  window.__longTasks = [];
+  new PerformanceObserver((list) => {
+    for (const entry of list.getEntries()) window.__longTasks.push({ start: entry.startTime, duration: entry.duration });
+  }).observe({ type: "longtask", buffered: true });
+}
+
+/**
+ * In the page: edits the calculator's first quantity field `runs` times (alternating its value and
+ * 1 % more) and times each edit to the first change of the page outside that field, and to the next
+ * frame. Returns the times [ms] and the longest task during the edits.
+ */
+async function timeEdits(runs) {
+  const calc = document.querySelector("section.calc");
+  const input = calc?.querySelector('input[type="text"], input:not([type])');
+  if (!input) return null;
+  const field = input.closest(".field, .quantity-field, label, div") ?? input;
+  const original = input.value;
+  const match = /^\s*([+-]?[\d.]+)(.*)$/.exec(original);
+  if (!match) return null;
+  const changed = `${Number((Number(match[1]) * 1.01).toPrecision(6))}${match[2]}`;
+  const nextFrame = () => new Promise((resolve) => requestAnimationFrame(() => setTimeout(resolve, 0)));
+  await nextFrame();
+  const from = performance.now();
+  const dom = [];
+  const frame = [];
+  for (let i = 0; i < runs; i += 1) {
+    const text = i % 2 === 0 ? changed : original;
+    let seen = null;
+    const observer = new MutationObserver((records) => {
+      if (seen === null && records.some((r) => !field.contains(r.target))) seen = performance.now();
+    });
+    observer.observe(calc, { subtree: true, childList: true, characterData: true, attributes: true });
+    const start = performance.now();
+    input.value = text;
+    input.dispatchEvent(new Event("input", { bubbles: true }));
+    await nextFrame();
+    observer.disconnect();
+    const end = performance.now();
+    dom.push((seen ?? end) - start);
+    frame.push(end - start);
+  }
+  const longest = Math.max(0, ...window.__longTasks.filter((t) => t.start >= from).map((t) => t.duration));
+  return { field: input.id, dom, frame, longest };
+}
+
+const median = (xs) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)];
+const ms = (x) => `${x.toFixed(1)}`.padStart(7);
+
+const server = await startStaticServer({ root: `${dist}/`, port: 0 });
+const browser = await chromium.launch({ executablePath: CHROMIUM, args: ["--headless", "--no-sandbox", "--disable-gpu", "--no-first-run"] });
+const slugs = readdirSync(join(dist, "chapters")).sort();
+
+console.log(`\nbrowser: input to DOM and to the next frame (median / worst of ${RUNS} edits, ms), longest task while editing and on demand`);
+console.log(`${"calculator page".padEnd(18)}${"field".padEnd(34)}   1×: dom   frame   worst    4×: dom   frame   worst  task(4×)  on demand (4×)`);
+for (const slug of slugs) {
+  const row = { slug };
+  for (const rate of [1, 4]) {
+    const context = await browser.newContext({ viewport: { width: 390, height: 844 } });
+    const page = await context.newPage();
+    await page.addInitScript(watchLongTasks);
+    const cdp = await context.newCDPSession(page);
+    await cdp.send("Emulation.setCPUThrottlingRate", { rate });
+    await page.goto(`${server.url}chapters/${slug}/`, { waitUntil: "load" });
+    if ((await page.locator("section.calc").count()) === 0) {
+      await context.close();
+      row.none = true;
+      break;
+    }
+    // Interactive once an island has rendered its results.
+    await page.waitForSelector("section.calc [data-out], section.calc [data-bar]", { timeout: 15_000 }).catch(() => {});
+    row[rate] = await page.evaluate(timeEdits, RUNS);
+    if (rate === 4) {
+      // On-demand work: each calculator button that starts a computation.
+      const buttons = page.locator("section.calc button").filter({ hasText: /sweep|simulat|run\b|compare/i });
+      const tasks = [];
+      for (let i = 0; i < (await buttons.count()); i += 1) {
+        const button = buttons.nth(i);
+        if (!(await button.isVisible()) || (await button.isDisabled())) continue;
+        const label = ((await button.textContent()) ?? "").trim().slice(0, 24);
+        const before = await page.evaluate(() => performance.now());
+        await button.click();
+        // Settled when no long task began in the last second (10 s at most).
+        const started = Date.now();
+        while (Date.now() - started < 10_000) {
+          await page.waitForTimeout(250);
+          const last = await page.evaluate(() => Math.max(0, ...window.__longTasks.map((t) => t.start + t.duration)));
+          const now = await page.evaluate(() => performance.now());
+          if (now - Math.max(last, before) > 1000) break;
+        }
+        const longest = await page.evaluate((t0) => Math.max(0, ...window.__longTasks.filter((t) => t.start >= t0).map((t) => t.duration)), before);
+        tasks.push(`${label}: ${longest.toFixed(0)} ms`);
+      }
+      row.demand = tasks.join("; ") || "—";
+    }
+    await context.close();
+  }
+  if (row.none) continue;
+  const part = (r) => (r ? `${ms(median(r.dom))} ${ms(median(r.frame))} ${ms(Math.max(...r.frame))}` : "   (no quantity field)".padEnd(23));
+  const task = row[4] ? `${row[4].longest.toFixed(0)} ms`.padStart(9) : "".padStart(9);
+  console.log(`${slug.padEnd(18)}${(row[1]?.field ?? "").slice(0, 33).padEnd(34)}${part(row[1])}   ${part(row[4])}${task}  ${row.demand}`);
+}
+await browser.close();
+await server.close();
