@@ -1,6 +1,7 @@
 // Prints the handbook's figures: build time, per-page bytes (gzip) and render-blocking requests, the
 // offline cache's first download, how long each calculator takes to recompute after one input
-// changes, and in chromium how long a typed value takes to reach the page at 1× and 4× CPU slowdown. A benchmark prints; it never asserts.
+// changes, and in chromium how long a typed value takes to reach the page at 1× and 4× CPU
+// slowdown. A benchmark prints; it never asserts.
 // Usage: npm run bench  (SKIP_BUILD=1 to weigh an existing dist/)
 import { execFileSync } from "node:child_process";
 import { readdirSync, existsSync } from "node:fs";
