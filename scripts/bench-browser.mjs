@@ -4,6 +4,7 @@
 // the main thread while editing and while any on-demand computation (a sweep, a simulation) runs.
 // A benchmark prints; it never asserts. Target (for a person reading it): no task over 50 ms at 4×.
 // Usage: npm run bench (after its build), or alone: node scripts/bench-browser.mjs [runs]
+// (BENCH_PAGES=heading-drift,spin-up to time only those chapters)
 import { existsSync, readdirSync } from "node:fs";
 import { join } from "node:path";
 import { fileURLToPath } from "node:url";
@@ -76,7 +77,10 @@ const ms = (x) => `${x.toFixed(1)}`.padStart(7);
 
 const server = await startStaticServer({ root: `${dist}/`, port: 0 });
 const browser = await chromium.launch({ executablePath: CHROMIUM, args: ["--headless", "--no-sandbox", "--disable-gpu", "--no-first-run"] });
-const slugs = readdirSync(join(dist, "chapters")).sort();
+const only = process.env.BENCH_PAGES?.split(",");
+const slugs = readdirSync(join(dist, "chapters"))
+  .filter((slug) => !only || only.includes(slug))
+  .sort();
 
 console.log(`\nbrowser: input to DOM and to the next frame (median / worst of ${RUNS} edits, ms), longest task while editing and on demand`);
 console.log(`${"calculator page".padEnd(18)}${"field".padEnd(34)}   1×: dom   frame   worst    4×: dom   frame   worst  task(4×)  on demand (4×)`);

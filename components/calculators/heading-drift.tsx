@@ -256,7 +256,7 @@ export default function HeadingDriftCalculator({ id = driftCalculator.anchor }: 
       <Notices notices={model.fields.notices} />
       {pairNotices && <Notices notices={pairNotices} />}
       <Toolbar idPrefix={id} system={model.fields.system} onSystem={model.setSystem} link={link} save={save} />
-      <FieldsForm fields={model.fields} groups={DRIFT_GROUPS} idPrefix={id} error={model.outcome.value.error} />
+      <FieldsForm fields={model.fields} groups={DRIFT_GROUPS} idPrefix={id} error={() => model.outcome.value.error} />
       <DriftBar model={model} id={id} />
       <DriftResults model={model} id={id} />
       <DriftChart model={model} />

@@ -298,12 +298,12 @@ export default function HeadingTimingCalculator({ id = "timing-calculator" }: He
         save={() => saveAll([model.timingModel, model.smoothingModel])}
       />
       <h3 id={`${id}-timing-title`}>Loop, latency and heading LED</h3>
-      <FieldsForm fields={model.timing} groups={TIMING_GROUPS} idPrefix={id} error={model.timingOutcome.value.error} />
+      <FieldsForm fields={model.timing} groups={TIMING_GROUPS} idPrefix={id} error={() => model.timingOutcome.value.error} />
       <TimingBar model={model} id={id} />
       <TimingResults model={model} id={id} />
       <div class="calc-section" role="group" aria-labelledby={`${id}-smoothing-title`}>
         <h3 id={`${id}-smoothing-title`}>Smoothing the spin-rate estimate</h3>
-        <FieldsForm fields={model.smoothing} groups={SMOOTHING_GROUPS} idPrefix={`${id}-s`} error={model.smoothingOutcome.value.error} />
+        <FieldsForm fields={model.smoothing} groups={SMOOTHING_GROUPS} idPrefix={`${id}-s`} error={() => model.smoothingOutcome.value.error} />
         <SmoothingBar model={model} id={id} />
         <SmoothingResults model={model} id={id} />
         <TradeoffChart model={model} />

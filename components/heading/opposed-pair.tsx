@@ -70,7 +70,7 @@ function PairResults({ model, budget }: { model: PairModel; budget: number | und
 export function PairSection({ model, id, budget }: { model: PairModel; id: string; budget: number | undefined }) {
   return (
     <>
-      <FieldsForm fields={model.fields} groups={PAIR_GROUPS} idPrefix={`${id}-p`} error={model.outcome.value.error} />
+      <FieldsForm fields={model.fields} groups={PAIR_GROUPS} idPrefix={`${id}-p`} error={() => model.outcome.value.error} />
       <PairResults model={model} budget={budget} />
     </>
   );

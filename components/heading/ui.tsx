@@ -24,8 +24,10 @@ export function FieldsForm<S extends InputSpecs>({
   fields: FieldsModel<S>;
   groups: FieldGroup<S>[];
   idPrefix: string;
-  error: FieldError;
+  /** The calculator's error, read here so that only the form re-renders when it changes. */
+  error: () => FieldError;
 }) {
+  const current = error();
   return (
     <form class="calc-form" onSubmit={(event) => event.preventDefault()} noValidate>
       {groups.map((group) => (
@@ -40,7 +42,7 @@ export function FieldsForm<S extends InputSpecs>({
               text={fields.texts[name]}
               reading={fields.readings[name]}
               system={fields.system.value}
-              extraError={error && error.field === name ? error.message : null}
+              extraError={current && current.field === name ? current.message : null}
             />
           ))}
         </fieldset>
