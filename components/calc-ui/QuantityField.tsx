@@ -1,11 +1,14 @@
 /**
- * A labelled text field for a quantity with a unit. Shows the unit a bare number is read in, the
- * help text, and the field's error right beside it. Typing a unit ("1.5 in") is always allowed.
+ * A labelled text field for a quantity with a unit, the help text, and the field's error right
+ * beside it. Phones open a numeric keypad (fields that take negative values keep the full
+ * keyboard for the minus sign); the unit is chosen from the menu beside the number, which writes
+ * it into the text, and typing a unit ("1.5 in") always works too. A kind with one unit names it in
+ * the label instead.
  */
 import type { Signal, ReadonlySignal } from "./reactive.ts";
 import type { FieldReading, InputSpec } from "../../calc/core/inputs.ts";
 import { fieldUnit } from "../../calc/core/inputs.ts";
-import { UNITS, type UnitSystem } from "../../calc/core/units.ts";
+import { findUnit, UNITS, unitsOfKind, type UnitSystem } from "../../calc/core/units.ts";
 
 export interface QuantityFieldProps {
   /** Unique id prefix for this calculator instance. */
@@ -21,7 +24,12 @@ export interface QuantityFieldProps {
 
 export function QuantityField({ idPrefix, name, spec, text, reading, system, extraError }: QuantityFieldProps) {
   const id = `${idPrefix}-${name}`;
-  const unit = UNITS[fieldUnit(spec, system)].symbol;
+  const bare = fieldUnit(spec, system);
+  const units = unitsOfKind(spec.kind).filter((u) => UNITS[u].symbol);
+  // The number and the unit as typed: "45 mm" → "45", "mm" (a bare number is in the field's unit).
+  const [, number = "", typed = ""] = /^([\s+\-−\d.,]*(?:[eE][+\-−]?\d+)?)\s*(.*)$/.exec(text.value) ?? [];
+  const shown = (typed ? findUnit(typed, spec.kind) : bare) ?? "";
+  const unit = units.length > 1 ? "" : UNITS[bare].symbol;
   const current = reading.value;
   const error = !current.ok ? current.error.message : (extraError ?? null);
   const describedBy = [spec.help ? `${id}-help` : "", error ? `${id}-error` : ""].filter(Boolean).join(" ") || undefined;
@@ -31,21 +39,39 @@ export function QuantityField({ idPrefix, name, spec, text, reading, system, ext
         {spec.label}
         {unit ? <span class="field-unit"> ({unit})</span> : null}
       </label>
-      <input
-        id={id}
-        name={spec.urlKey}
-        type="text"
-        inputMode="text"
-        autoComplete="off"
-        autoCapitalize="off"
-        spellcheck={false}
-        value={text.value}
-        aria-invalid={error ? "true" : undefined}
-        aria-describedby={describedBy}
-        onInput={(event) => {
-          text.value = (event.currentTarget as HTMLInputElement).value;
-        }}
-      />
+      <span class="field-entry">
+        <input
+          id={id}
+          name={spec.urlKey}
+          type="text"
+          inputMode={(spec.min ?? 0) < 0 ? "text" : "decimal"}
+          autoComplete="off"
+          autoCapitalize="off"
+          spellcheck={false}
+          value={text.value}
+          aria-invalid={error ? "true" : undefined}
+          aria-describedby={describedBy}
+          onInput={(event) => {
+            text.value = (event.currentTarget as HTMLInputElement).value;
+          }}
+        />
+        {unit === "" && units.length > 1 ? (
+          <select
+            aria-label={`${spec.label}: unit`}
+            value={shown}
+            onChange={(event) => {
+              text.value = `${number.trim()} ${UNITS[(event.currentTarget as HTMLSelectElement).value as typeof bare].symbol}`.trim();
+            }}
+          >
+            {shown === "" ? <option value="">?</option> : null}
+            {units.map((u) => (
+              <option key={u} value={u}>
+                {UNITS[u].symbol}
+              </option>
+            ))}
+          </select>
+        ) : null}
+      </span>
       {spec.help ? (
         <p class="field-help" id={`${id}-help`}>
           {spec.help}

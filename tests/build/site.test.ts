@@ -67,7 +67,9 @@ const OVER_BUDGET: Record<string, { js: number; total: number }> = {
   // which took fasteners (3 B under) just over its budget and mass-layout over its ceiling.
   fasteners: { js: 25_850, total: 60 * KB },
   "mass-layout": { js: 37_250, total: 63_700 },
-  "spin-up": { js: 38_700, total: 66_850 },
+  // +171 B JS and +0.6 KB in all: the unit menu beside every quantity field (numeric keypad on
+  // phones, #11). Measured 38 789 B JS, 67 230 B in all.
+  "spin-up": { js: 39_200, total: 67_900 },
 };
 
 /**

@@ -17,7 +17,7 @@ import { renderToString } from "preact-render-to-string";
 import PlacementCalculator, { createPlacementModel } from "../../components/calculators/placement.tsx";
 import FastenerCalculator from "../../components/calculators/fasteners.tsx";
 import RimCalculator from "../../components/calculators/rims.tsx";
-import HeadingDriftCalculator from "../../components/calculators/heading-drift.tsx";
+import HeadingDriftCalculator, { createDriftModel } from "../../components/calculators/heading-drift.tsx";
 import HeadingTimingCalculator from "../../components/calculators/heading-timing.tsx";
 import CalibrationCalculator from "../../components/calculators/calibration.tsx";
 import MassLayoutCalculator from "../../components/calculators/mass.tsx";
@@ -105,9 +105,14 @@ describe("verdict words: Holds, Marginal, Fails or For information, then the rea
     );
   });
 
-  it("gives the drift budget, the opposed pair and the smoothing their words", () => {
+  it("gives the drift budget, the opposed pair and the smoothing their words", async () => {
     const drift = verdictLeads(renderToString(<HeadingDriftCalculator id="d" />));
-    expect(drift).toEqual(["Fails: over the trim budget.", "For information: the pair cancels the offset."]);
+    expect(drift).toEqual(["Fails: over the trim budget."]);
+    // The opposed pair opens on demand, with its own verdict line.
+    const model = createDriftModel();
+    const pair = await model.openPair();
+    const { PairSection } = await import("../../components/heading/opposed-pair.tsx");
+    expect(verdictLeads(renderToString(<PairSection model={pair} id="d" budget={undefined} />))).toEqual(["For information: the pair cancels the offset."]);
     expect(verdictLeads(renderToString(<HeadingTimingCalculator id="t" />))[1]).toMatch(/^For information: \d.* of delay\.$/);
     expect(verdictLeads(renderToString(<CalibrationCalculator id="c" />))[0]).toMatch(/^For information: radius .*, offset .*\.$/);
   });
@@ -152,7 +157,9 @@ describe("one set of controls at the top of every calculator", () => {
 });
 
 describe("one term per idea", () => {
-  const texts = Object.fromEntries(WIDGETS.map(([name, widget]) => [name, textOf(renderToString(widget() as VNode))]));
+  // The unit menus list symbols, not quantities: they are read apart (below).
+  const withoutMenus = (html: string) => html.replace(/<select\b.*?<\/select>/gs, " ");
+  const texts = Object.fromEntries(WIDGETS.map(([name, widget]) => [name, textOf(withoutMenus(renderToString(widget() as VNode)))]));
 
   it.each(WIDGETS.map(([name]) => name))("uses the handbook's terms in the %s calculator", (name) => {
     const text = texts[name]!;
@@ -166,7 +173,11 @@ describe("one term per idea", () => {
     expect(html).toMatch(/data-out="accel-top">129 gₙ</);
     expect(html).toContain('value="200 gₙ"');
     expect(html).toContain('value="50 g"');
-    expect(html).toContain("Acceleration (gₙ)");
+    // The acceleration fields' unit menus offer gₙ (and m/s², ft/s²), never a bare g.
+    const menus = [...html.matchAll(/<select aria-label="([^"]*): unit"[^>]*>(.*?)<\/select>/gs)];
+    const accelerationMenus = menus.filter((m) => m[2]!.includes('value="gn"'));
+    expect(accelerationMenus.length).toBeGreaterThan(0);
+    for (const [, , options] of accelerationMenus) expect(options).toMatch(/<option selected value="gn">gₙ<\/option>/);
     const typed = readField(accelerometerPlacementInputs.fullScale, "200 g", "metric");
     expect(typed).toMatchObject({ ok: true, value: 200 * STANDARD_GRAVITY });
     // The link stays plain ASCII: the field's "200 gₙ" travels as "200g".
