@@ -202,3 +202,23 @@ describe("the pit flow", () => {
     await context.close();
   });
 });
+
+describe("number entry on a phone", () => {
+  it("opens a numeric keypad and lets the unit be picked from the menu beside the number", async () => {
+    const { page, context } = await open("/chapters/acceleration/#placement-calculator", { width: 390 });
+    const field = "#placement-calculator-partMass";
+    // A decimal keypad where values cannot be negative; the unit is not typed but picked.
+    expect(await page.getAttribute(field, "inputmode")).toBe("decimal");
+    const menu = page.getByRole("combobox", { name: "Part mass: unit" });
+    expect(await menu.inputValue()).toBe("g");
+    await page.fill(field, "2");
+    await menu.selectOption("oz");
+    // The chosen unit is written into the text: 2 oz = 56.70 g (1 oz = 28.349 523 125 g, NIST SP 811).
+    await expect.poll(() => page.inputValue(field)).toBe("2 oz");
+    await expect.poll(() => new URL(page.url()).searchParams.get("pm")).toBe("2oz");
+    // A unit typed on a desktop keyboard still counts, and the menu follows it.
+    await page.fill(field, "0.1 lb");
+    await expect.poll(() => menu.inputValue()).toBe("lb");
+    await context.close();
+  });
+});
