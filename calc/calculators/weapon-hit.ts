@@ -30,7 +30,7 @@ export default /* @__PURE__ */ defineCalculator(form, {
       {
         title: "What a hit does",
         status: "info",
-        rule: `One clean hit at ${q(values.weaponSpeed, "angularSpeed")} on a free ${q(values.targetMass, "mass")} opponent, restitution ${formatNumber(values.restitution)}; the force is an estimate from a ${q(values.stoppingDistance, "length")} crush`,
+        rule: `One clean hit at ${q(values.weaponSpeed, "angularSpeed")} on a free ${q(values.targetMass, "mass")} opponent, restitution ${String(Number(values.restitution.toPrecision(3)))}; the force is an estimate from a ${q(values.stoppingDistance, "length")} crush`,
         margin: `The rotor gives up ${q(hit.rotorEnergyDrop, "energy")} of ${q(r.storedEnergy, "energy")} and drops to ${q(Math.abs(hit.spinSpeedAfter), "angularSpeed")}${hit.spinSpeedAfter < 0 ? " backwards" : ""}; ${q(hit.energyToTarget, "energy")} goes to the opponent; the contact force is ${q(r.force.average, "force")} to ${q(r.force.peak, "force")}`,
         figure: figureOf("Energy to the opponent", hit.energyToTarget, "energy", system),
         details: [

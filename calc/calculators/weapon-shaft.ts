@@ -73,6 +73,7 @@ export default /* @__PURE__ */ defineCalculator(form, {
       ShaftCriterion,
       ShaftCriterion,
     ];
+    const plain = (x: number) => String(Number(x.toPrecision(3)));
     const n = (x: number | null) => (x === null ? "no load" : formatNumber(x, 2));
     const where = r.shaft === "live" ? "at the supports" : "in the rotor's hub";
     const life10 = r.bearing.ratingLifeHours;
@@ -80,7 +81,7 @@ export default /* @__PURE__ */ defineCalculator(form, {
       {
         title: "Weapon shaft",
         status: yieldCheck.verdict,
-        rule: `Safety factor on yield (${r.material.name}, ${r.material.condition}) at the peak of a hit, with the turn's gyroscopic moment: fails below ${formatNumber(yieldCheck.failBelow)}, marginal below ${formatNumber(yieldCheck.marginalBelow)}`,
+        rule: `Safety factor on yield (${r.material.name}, ${r.material.condition}) at the peak of a hit, with the turn's gyroscopic moment: fails below ${plain(yieldCheck.failBelow)}, marginal below ${plain(yieldCheck.marginalBelow)}`,
         margin: `${n(yieldCheck.value)} at ${q(r.bendingMoment.peak, "torque")} of bending (${q(r.vonMisesStress, "stress")} against ${q(r.material.yieldStrength, "stress")}); ${q(r.deflection.peak, "length")} of deflection at the rotor`,
         figure: r.safetyFactor === null ? null : ratioFigure("Safety factor on yield", r.safetyFactor),
         details: [
@@ -93,7 +94,7 @@ export default /* @__PURE__ */ defineCalculator(form, {
         key: "life",
         title: "Weapon bearings: life",
         status: life.verdict,
-        rule: `ISO 281 rating life L10 of the busier bearing ${where}, running at ${q(values.weaponSpeed, "angularSpeed")} in the turn: fails below the ${formatNumber(r.bearing.requiredLifeHours)} h required, marginal below ${formatNumber(life.marginalBelow)} times it`,
+        rule: `ISO 281 rating life L10 of the busier bearing ${where}, running at ${q(values.weaponSpeed, "angularSpeed")} in the turn: fails below the ${plain(r.bearing.requiredLifeHours)} h required, marginal below ${plain(life.marginalBelow)} times it`,
         margin:
           life10 === null
             ? "No running load on the bearings"
@@ -105,7 +106,7 @@ export default /* @__PURE__ */ defineCalculator(form, {
         key: "shock",
         title: "Weapon bearings: shock",
         status: shock.verdict,
-        rule: `ISO 76 static safety factor s0 = C0/P0 under the hit: fails below 1, marginal below ${formatNumber(shock.marginalBelow)} (rotating, shock loads)`,
+        rule: `ISO 76 static safety factor s0 = C0/P0 under the hit: fails below 1, marginal below ${plain(shock.marginalBelow)} (rotating, shock loads)`,
         margin: `s0 = ${n(shock.value)} at ${q(r.bearing.staticEquivalentLoad, "force")} against C0 = ${q(values.staticLoadRating, "force")}`,
         figure: shock.value === null ? null : ratioFigure("Static safety factor s0", shock.value),
         details: [],

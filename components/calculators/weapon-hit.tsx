@@ -78,7 +78,7 @@ export default function WeaponHitCalculator({ id = hitCalculator.anchor }: Weapo
         {result && hit ? (
           <>
             <Verdict tone="info" out="verdict">
-              The rotor gives up {formatNumber(100 * result.energyFractionUsed, 2)} % of its energy and leaves the hit at {after(hit.spinSpeedAfter)}; the
+              The rotor gives up {formatNumber(100 * result.energyFractionUsed, 4)} % of its energy and leaves the hit at {after(hit.spinSpeedAfter)}; the
               opponent takes {q(hit.energyToTarget, "energy")}.
             </Verdict>
             <dl class="results-grid">

@@ -126,20 +126,20 @@ export default function WeaponShaftCalculator({ id = shaftCalculator.anchor }: W
                 [
                   ["Gyroscopic moment J·Ω·q", "gyro", q(result.loads.gyroscopicMoment, "torque")],
                   ["Unbalance force U·Ω²", "unbalance", q(result.loads.unbalanceForce, "force")],
-                  ["Peak load with the hit", "peak", q(result.loads.peakForce, "force")],
-                  ["Bending moment at the peak", "moment", q(result.bendingMoment.peak, "torque")],
-                  ["Von Mises stress at the peak", "stress", q(result.vonMisesStress, "stress")],
+                  ["Peak load with a hit", "peak", q(result.loads.peakForce, "force")],
+                  ["Bending moment, peak", "moment", q(result.bendingMoment.peak, "torque")],
+                  ["Von Mises stress, peak", "stress", q(result.vonMisesStress, "stress")],
                   [`Yield strength (${result.material.basis})`, "yield", q(result.material.yieldStrength, "stress")],
                   ["Safety factor on yield", "safety", ratio(result.safetyFactor)],
                   ["Deflection at the rotor, running", "deflection-running", q(result.deflection.running, "length", undefined, 2)],
-                  ["Deflection at the rotor, at the peak", "deflection", q(result.deflection.peak, "length", undefined, 2)],
+                  ["Deflection at the rotor, peak", "deflection", q(result.deflection.peak, "length", undefined, 2)],
                   [
-                    "Busier bearing's load, running / in the hit",
+                    "Busier bearing's load, running / hit",
                     "bearing-load",
                     `${q(result.bearing.equivalentLoad, "force")} / ${q(result.bearing.staticEquivalentLoad, "force")}`,
                   ],
                   ["Bearing rating life L10", "life", hours(result.bearing.ratingLifeHours)],
-                  ["Static safety factor s0 in the hit", "s0", ratio(result.bearing.staticSafetyFactor)],
+                  ["Static safety factor s0, hit", "s0", ratio(result.bearing.staticSafetyFactor)],
                 ] as const
               ).map(([label, name, text]) => (
                 <div key={name}>
