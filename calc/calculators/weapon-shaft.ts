@@ -82,7 +82,7 @@ export default /* @__PURE__ */ defineCalculator(form, {
         title: "Weapon shaft",
         status: yieldCheck.verdict,
         rule: `Safety factor on yield (${r.material.name}, ${r.material.condition}) at the peak of a hit, with the turn's gyroscopic moment: fails below ${plain(yieldCheck.failBelow)}, marginal below ${plain(yieldCheck.marginalBelow)}`,
-        margin: `${n(yieldCheck.value)} at ${q(r.bendingMoment.peak, "torque")} of bending (${q(r.vonMisesStress, "stress")} against ${q(r.material.yieldStrength, "stress")}); ${q(r.deflection.peak, "length")} of deflection at the rotor`,
+        margin: `${n(yieldCheck.value)} on yield at ${q(r.bendingMoment.peak, "torque")} of bending (${q(r.vonMisesStress, "stress")} against ${q(r.material.yieldStrength, "stress")}); ${q(r.deflection.peak, "length")} of deflection at the rotor`,
         figure: r.safetyFactor === null ? null : ratioFigure("Safety factor on yield", r.safetyFactor),
         details: [
           figureOf("Gyroscopic moment", r.loads.gyroscopicMoment, "torque", system),
