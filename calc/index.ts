@@ -44,6 +44,7 @@ export * from "./heading/calibration-rows.ts";
 export * from "./heading/csv.ts";
 export * from "./materials/densities.ts";
 export * from "./materials/materials.ts";
+export * from "./materials/strengths.ts";
 export * from "./loads/fasteners.ts";
 export * from "./loads/inch-fasteners.ts";
 export * from "./loads/joint-data.ts";

@@ -42,6 +42,7 @@ export const UNIT_DEFINITIONS = {
   deg: { exactness: "exact", definition: "π/180 rad", source: "nist-sp811" },
   rev: { exactness: "exact", definition: "2π rad", source: "nist-sp811" },
   s: { exactness: "exact", definition: "SI base unit", source: "nist-sp811" },
+  h: { exactness: "exact", definition: "3600 s", source: "nist-sp811" },
   ms: { exactness: "exact", definition: "0.001 s", source: "nist-sp811" },
   us: { exactness: "exact", definition: "0.000 001 s", source: "nist-sp811" },
   Hz: { exactness: "exact", definition: "SI unit, 1/s", source: "nist-sp811" },

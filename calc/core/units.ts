@@ -87,6 +87,7 @@ export const UNITS = {
   rev: { symbol: "rev", kind: "angle", factor: 2 * Math.PI, aliases: ["turn", "turns"] },
   // time [s]
   s: { symbol: "s", kind: "time", factor: 1, aliases: ["sec", "second", "seconds"] },
+  h: { symbol: "h", kind: "time", factor: 3600, aliases: ["hr", "hour", "hours"] },
   ms: { symbol: "ms", kind: "time", factor: 1e-3 },
   us: { symbol: "µs", kind: "time", factor: 1e-6, aliases: ["µs", "μs"] },
   // frequency [Hz]

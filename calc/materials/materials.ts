@@ -8,6 +8,7 @@
  */
 import type { SourceKey } from "../sources/index.ts";
 import { MATERIAL_DENSITIES, type MaterialId } from "./densities.ts";
+import { MATERIAL_STRENGTHS } from "./strengths.ts";
 
 /** The numeric properties a row carries. */
 export type MaterialProperty = "density" | "yieldStrength" | "ultimateStrength" | "youngsModulus" | "poissonRatio";
@@ -57,9 +58,6 @@ export interface Material {
   note: string;
 }
 
-const MPa = 1e6;
-const GPa = 1e9;
-
 /**
  * The material table; each row names the data sheet or table its values were read from.
  * Sources: substech-materials, asm-matweb-datasheets, s7-nominal-properties-table,
@@ -68,11 +66,7 @@ const GPa = 1e9;
 export const MATERIALS = {
   "al-6061-t6": {
     ...MATERIAL_DENSITIES["al-6061-t6"],
-    basis: "typical",
-    yieldStrength: 276 * MPa,
-    ultimateStrength: 310 * MPa,
-    youngsModulus: 68.9 * GPa,
-    poissonRatio: 0.33,
+    ...MATERIAL_STRENGTHS["al-6061-t6"],
     source: "substech-materials",
     locator: "6061, T6/T651: yield 276 MPa, tensile 310 MPa, density 2.70 g/cm³; E = 68.9 GPa and ν = 0.33 from the ASM/MatWeb 6061-T6 data sheet",
     otherSources: ["asm-matweb-datasheets"],
@@ -82,11 +76,7 @@ export const MATERIALS = {
   },
   "steel-4130-normalized": {
     ...MATERIAL_DENSITIES["steel-4130-normalized"],
-    basis: "typical",
-    yieldStrength: 435 * MPa,
-    ultimateStrength: 670 * MPa,
-    youngsModulus: 205 * GPa,
-    poissonRatio: 0.29,
+    ...MATERIAL_STRENGTHS["steel-4130-normalized"],
     source: "asm-matweb-datasheets",
     locator: "AISI 4130 steel, normalized at 870 °C (data sheet M4130R); E and ν 'typical for steel'",
     otherSources: [],
@@ -96,11 +86,7 @@ export const MATERIALS = {
   },
   "steel-4130-annealed": {
     ...MATERIAL_DENSITIES["steel-4130-annealed"],
-    basis: "typical",
-    yieldStrength: 460 * MPa,
-    ultimateStrength: 560 * MPa,
-    youngsModulus: 205 * GPa,
-    poissonRatio: 0.29,
+    ...MATERIAL_STRENGTHS["steel-4130-annealed"],
     source: "asm-matweb-datasheets",
     locator: "AISI 4130 steel, annealed at 865 °C (data sheet M4130A); E and ν 'typical for steel'",
     otherSources: [],
@@ -110,11 +96,7 @@ export const MATERIALS = {
   },
   "steel-4340-annealed": {
     ...MATERIAL_DENSITIES["steel-4340-annealed"],
-    basis: "typical",
-    yieldStrength: 470 * MPa,
-    ultimateStrength: 745 * MPa,
-    youngsModulus: 205 * GPa,
-    poissonRatio: 0.29,
+    ...MATERIAL_STRENGTHS["steel-4340-annealed"],
     source: "asm-matweb-datasheets",
     locator: "AISI 4340 steel, annealed (data sheet M434AA); E and ν 'typical for steel'",
     otherSources: [],
@@ -124,11 +106,7 @@ export const MATERIALS = {
   },
   "steel-4340-normalized": {
     ...MATERIAL_DENSITIES["steel-4340-normalized"],
-    basis: "typical",
-    yieldStrength: 710 * MPa,
-    ultimateStrength: 1110 * MPa,
-    youngsModulus: 205 * GPa,
-    poissonRatio: 0.29,
+    ...MATERIAL_STRENGTHS["steel-4340-normalized"],
     source: "asm-matweb-datasheets",
     locator: "AISI 4340 steel, normalized, 100 mm round (data sheet M434AE); E and ν 'typical for steel'",
     otherSources: [],
@@ -138,11 +116,7 @@ export const MATERIALS = {
   },
   "steel-4340-qt650": {
     ...MATERIAL_DENSITIES["steel-4340-qt650"],
-    basis: "typical",
-    yieldStrength: 834 * MPa,
-    ultimateStrength: 931 * MPa,
-    youngsModulus: 205 * GPa,
-    poissonRatio: 0.29,
+    ...MATERIAL_STRENGTHS["steel-4340-qt650"],
     source: "asm-matweb-datasheets",
     locator: "AISI 4340 steel, oil quenched 800 °C, 650 °C temper, 50 mm round (data sheet M434AP); E and ν 'typical for steel'",
     otherSources: [],
@@ -152,11 +126,7 @@ export const MATERIALS = {
   },
   "tool-steel-s7-t205": {
     ...MATERIAL_DENSITIES["tool-steel-s7-t205"],
-    basis: "typical",
-    yieldStrength: 1450 * MPa,
-    ultimateStrength: 2170 * MPa,
-    youngsModulus: 205 * GPa,
-    poissonRatio: 0.29,
+    ...MATERIAL_STRENGTHS["tool-steel-s7-t205"],
     source: "s7-nominal-properties-table",
     locator: "row 'S7 205°C (400°F) 2170 (315) 1450 (210) 7.0 20 58'; density 7.76 g/cm³",
     otherSources: [],
@@ -166,11 +136,7 @@ export const MATERIALS = {
   },
   "ti-6al-4v-annealed": {
     ...MATERIAL_DENSITIES["ti-6al-4v-annealed"],
-    basis: "typical",
-    yieldStrength: 830 * MPa,
-    ultimateStrength: 900 * MPa,
-    youngsModulus: 114 * GPa,
-    poissonRatio: 0.33,
+    ...MATERIAL_STRENGTHS["ti-6al-4v-annealed"],
     source: "asm-matweb-datasheets",
     locator: "Ti-6Al-4V (Grade 5), annealed (data sheet MTP644): density 4.43 g/cc, UTS 900 MPa, yield 830 MPa, E 114 GPa, ν 0.33",
     otherSources: [],
@@ -180,13 +146,7 @@ export const MATERIALS = {
   },
   "uhmw-pe": {
     ...MATERIAL_DENSITIES["uhmw-pe"],
-    basis: "typical",
-    yieldStrength: 21.4 * MPa,
-    ultimateStrength: 38.6 * MPa,
-    yieldStrengthRange: [21.4 * MPa, 27.6 * MPa],
-    ultimateStrengthRange: [38.6 * MPa, 48.3 * MPa],
-    youngsModulus: 0.69 * GPa,
-    poissonRatio: 0.46,
+    ...MATERIAL_STRENGTHS["uhmw-pe"],
     source: "callister-integrated-3e",
     locator:
       "App. B: Table B.1 density 0.94 g/cm³ and Table B.2 E = 0.69 GPa (both confirmed); Table B.4 yield 21.4–27.6 MPa and tensile 38.6–48.3 MPa; ν ≈ 0.46",
@@ -197,12 +157,7 @@ export const MATERIALS = {
   },
   polycarbonate: {
     ...MATERIAL_DENSITIES.polycarbonate,
-    basis: "typical",
-    yieldStrength: 62.1 * MPa,
-    ultimateStrength: 62.8 * MPa,
-    ultimateStrengthRange: [62.8 * MPa, 72.4 * MPa],
-    youngsModulus: 2.38 * GPa,
-    poissonRatio: 0.36,
+    ...MATERIAL_STRENGTHS.polycarbonate,
     source: "callister-integrated-3e",
     locator:
       "App. B: Table B.5 yield 62.1 MPa and Table B.2 E = 2.38 GPa (both confirmed); Table B.4 tensile 62.8–72.4 MPa; Table B.3 ν ≈ 0.36; density 1.20 g/cc from the MatWeb polycarbonate overview",

@@ -10,8 +10,8 @@ import { type ChoiceOption, requireChoice as requireOption } from "../core/choic
 
 /** The two rolling-bearing families ISO 281 gives a life exponent for. */
 export const BEARING_TYPE_OPTIONS = [
-  { value: "ball", label: "Ball bearing (single-row deep-groove)" },
-  { value: "roller", label: "Roller bearing (cylindrical, radial load only)" },
+  { value: "ball", label: "Ball (deep-groove)" },
+  { value: "roller", label: "Roller (cylindrical)" },
 ] as const satisfies readonly ChoiceOption[];
 
 export type BearingType = (typeof BEARING_TYPE_OPTIONS)[number]["value"];

@@ -7,13 +7,13 @@
 import { STANDARD_GRAVITY } from "../core/constants.ts";
 import { CalcInputError } from "../core/errors.ts";
 import { defineInputs } from "../core/inputs.ts";
-import { MATERIALS } from "../materials/materials.ts";
-import { isMaterialId, MATERIAL_IDS, type MaterialId } from "../materials/densities.ts";
+import { isMaterialId, MATERIAL_DENSITIES, MATERIAL_IDS, type MaterialId } from "../materials/densities.ts";
+import { MATERIAL_STRENGTHS } from "../materials/strengths.ts";
 import { rpmToRadPerSecond } from "../core/units.ts";
-import { type BearingCheck, bearingCheck, BEARING_TYPE_OPTIONS, type BearingType, staticSafetyGuide } from "./bearings.ts";
+import { type BearingCheck, bearingCheck, BEARING_TYPE_OPTIONS, type BearingType, STATIC_SAFETY_GUIDE } from "./bearings.ts";
 import { ratioOrNull, requireWithinSpecs as requireDeclaredInputs, requireInputObject, declaredInputs, requireFiniteFields } from "../core/spec-check.ts";
 import { type ChoiceOption, requireChoice as requireOption } from "../core/choices.ts";
-import { type LoadVerdict as Verdict, vonMisesStress } from "../loads/common.ts";
+import type { LoadVerdict as Verdict } from "../loads/common.ts";
 import { overhungCouple, overhungPointLoad, simplySupportedCouple, simplySupportedPointLoad } from "./beams.ts";
 import { type RoundSection, bendingStress, roundSection, torsionalStress } from "./shaft.ts";
 
@@ -21,32 +21,32 @@ import { type RoundSection, bendingStress, roundSection, torsionalStress } from 
 
 /** Where the rotor sits on its shaft. */
 export const SHAFT_LAYOUT_OPTIONS = [
-  { value: "between", label: "Rotor between two supports" },
-  { value: "overhung", label: "Rotor overhung beyond the nearer support" },
+  { value: "between", label: "Between two supports" },
+  { value: "overhung", label: "Overhung" },
 ] as const satisfies readonly ChoiceOption[];
 
 export type ShaftLayout = (typeof SHAFT_LAYOUT_OPTIONS)[number]["value"];
 
 /** Whether the shaft turns. */
 export const SHAFT_KIND_OPTIONS = [
-  { value: "dead", label: "Dead shaft: held by the frame, the rotor turns on its own bearings" },
-  { value: "live", label: "Live shaft: turns with the rotor, in bearings at the supports" },
+  { value: "dead", label: "Dead shaft" },
+  { value: "live", label: "Live shaft" },
 ] as const satisfies readonly ChoiceOption[];
 
 export type ShaftKind = (typeof SHAFT_KIND_OPTIONS)[number]["value"];
 
 /** Which way the shaft points (decides whether the rotor's weight bends the shaft or pushes along it). */
 export const SHAFT_AXLE_OPTIONS = [
-  { value: "horizontal", label: "Horizontal shaft (vertical disc, drum, bar)" },
-  { value: "vertical", label: "Vertical shaft (horizontal spinner)" },
+  { value: "horizontal", label: "Horizontal shaft" },
+  { value: "vertical", label: "Vertical shaft" },
 ] as const satisfies readonly ChoiceOption[];
 
 export type ShaftAxle = (typeof SHAFT_AXLE_OPTIONS)[number]["value"];
 
 /** The shaft materials: every row of calc/materials.ts. */
-export const SHAFT_MATERIAL_OPTIONS: readonly ChoiceOption<MaterialId>[] = MATERIAL_IDS.map((id) => ({
+export const SHAFT_MATERIAL_OPTIONS: readonly ChoiceOption<MaterialId>[] = /* @__PURE__ */ MATERIAL_IDS.map((id) => ({
   value: id,
-  label: `${MATERIALS[id].name}, ${MATERIALS[id].condition}`,
+  label: `${MATERIAL_DENSITIES[id].name}, ${MATERIAL_DENSITIES[id].condition}`,
 }));
 
 /** Choice defaults of the shaft check (the numeric defaults are in `weaponShaftInputs`). */
@@ -75,7 +75,7 @@ export const weaponShaftInputs = defineInputs({
     max: 50,
     default: 0.010125,
     urlKey: "J",
-    help: "Moment of inertia of the rotor about its spin axis.",
+    help: "About the rotor's spin axis.",
   },
   weaponSpeed: {
     label: "Weapon speed",
@@ -84,7 +84,7 @@ export const weaponShaftInputs = defineInputs({
     max: rpmToRadPerSecond(100000),
     default: rpmToRadPerSecond(8000),
     urlKey: "rpm",
-    help: "Spin speed while running; it sets the unbalance force and the bearings' life in hours.",
+    help: "Running speed: it sets the unbalance force and the bearings' life.",
   },
   turnRate: {
     label: "Turn rate of the axle",
@@ -94,7 +94,7 @@ export const weaponShaftInputs = defineInputs({
     default: 2 * Math.PI,
     unit: { metric: "deg/s", us: "deg/s" },
     urlKey: "yaw",
-    help: "How fast the shaft's direction changes: the robot's yaw rate for a horizontal shaft, its pitch or roll rate for a vertical one.",
+    help: "Yaw rate for a horizontal shaft; pitch or roll rate for a vertical one.",
   },
   unbalance: {
     label: "Residual unbalance",
@@ -103,7 +103,7 @@ export const weaponShaftInputs = defineInputs({
     max: 1,
     default: 2e-5,
     urlKey: "U",
-    help: "Mass times offset of the rotor's centre of mass from the spin axis (the mass-layout chapter computes it).",
+    help: "Rotor mass times its centre of mass's offset from the axis.",
   },
   impactForce: {
     label: "Peak force of a hit",
@@ -112,7 +112,7 @@ export const weaponShaftInputs = defineInputs({
     max: 1e7,
     default: 8000,
     urlKey: "Fi",
-    help: "The largest force a hit puts on the rotor, across the shaft (the hit calculator estimates it).",
+    help: "Largest force of a hit on the rotor, across the shaft.",
   },
   motorTorque: {
     label: "Motor torque through the shaft",
@@ -121,7 +121,7 @@ export const weaponShaftInputs = defineInputs({
     max: 1e4,
     default: 1.5,
     urlKey: "T",
-    help: "Torque the shaft carries from the drive to the rotor; read for a live shaft only.",
+    help: "Torque a live shaft carries from the drive to the rotor.",
   },
   bearingSpan: {
     label: "Support span",
@@ -130,7 +130,7 @@ export const weaponShaftInputs = defineInputs({
     max: 2,
     default: 0.06,
     urlKey: "L",
-    help: "Distance between the shaft's two supports: the bearings of a live shaft, the frame mounts of a dead one.",
+    help: "A live shaft's bearings, a dead shaft's frame mounts.",
   },
   rotorPosition: {
     label: "Rotor position",
@@ -139,7 +139,7 @@ export const weaponShaftInputs = defineInputs({
     max: 2,
     default: 0.03,
     urlKey: "a",
-    help: "Rotor between the supports: from the first support to the rotor's mid-plane, at most the span.",
+    help: "First support to the rotor's mid-plane, at most the span.",
   },
   overhang: {
     label: "Overhang",
@@ -148,7 +148,7 @@ export const weaponShaftInputs = defineInputs({
     max: 2,
     default: 0.02,
     urlKey: "c",
-    help: "Overhung rotor: from the nearer support to the rotor's mid-plane.",
+    help: "Nearer support to the rotor's mid-plane.",
   },
   hubBearingSpacing: {
     label: "Rotor bearing spacing",
@@ -157,7 +157,7 @@ export const weaponShaftInputs = defineInputs({
     max: 1,
     default: 0.02,
     urlKey: "s",
-    help: "Dead shaft: distance between the two bearings inside the rotor's hub; they carry the gyroscopic moment as a force pair.",
+    help: "Between the two bearings in the rotor's hub.",
   },
   shaftDiameter: {
     label: "Shaft diameter",
@@ -176,7 +176,7 @@ export const weaponShaftInputs = defineInputs({
     max: 1e7,
     default: 5400,
     urlKey: "C",
-    help: "Basic dynamic load rating of one bearing, from its maker's table.",
+    help: "Of one bearing, from its maker's table.",
   },
   staticLoadRating: {
     label: "Bearing static load rating C0",
@@ -185,7 +185,7 @@ export const weaponShaftInputs = defineInputs({
     max: 1e7,
     default: 2360,
     urlKey: "C0",
-    help: "Basic static load rating of one bearing, from its maker's table.",
+    help: "Of one bearing, from its maker's table.",
   },
   axialLoad: {
     label: "Axial load on the bearings",
@@ -194,7 +194,7 @@ export const weaponShaftInputs = defineInputs({
     max: 1e7,
     default: 0,
     urlKey: "Fa",
-    help: "Thrust along the shaft (a vertical rotor's weight is added to it). Roller bearings are taken to carry none.",
+    help: "Thrust along the shaft; a vertical rotor's weight is added.",
   },
   radialFactor: {
     label: "Radial load factor X",
@@ -204,7 +204,7 @@ export const weaponShaftInputs = defineInputs({
     default: 1,
     unit: { metric: "frac", us: "frac" },
     urlKey: "X",
-    help: "From the bearing table for your axial-to-radial ratio; 1 for a purely radial load.",
+    help: "From the bearing table; 1 for a purely radial load.",
   },
   axialFactor: {
     label: "Axial load factor Y",
@@ -214,7 +214,7 @@ export const weaponShaftInputs = defineInputs({
     default: 0,
     unit: { metric: "frac", us: "frac" },
     urlKey: "Y",
-    help: "From the bearing table for your axial-to-radial ratio; 0 for a purely radial load.",
+    help: "From the bearing table; 0 for a purely radial load.",
   },
   requiredLife: {
     label: "Required bearing life",
@@ -222,8 +222,9 @@ export const weaponShaftInputs = defineInputs({
     min: 60,
     max: 1e9,
     default: 20 * 3600,
+    unit: { metric: "h", us: "h" },
     urlKey: "life",
-    help: "Running time the bearings should last at the weapon speed (20 h is 72 000 s).",
+    help: "Running time at the weapon speed they should last.",
   },
   failBelow: {
     label: "Fails below",
@@ -233,7 +234,7 @@ export const weaponShaftInputs = defineInputs({
     default: 1,
     unit: { metric: "frac", us: "frac" },
     urlKey: "fail",
-    help: "Shaft safety factor on yield under which the shaft is called a failure.",
+    help: "Shaft safety factor on yield below which it fails.",
   },
   marginalBelow: {
     label: "Marginal below",
@@ -243,7 +244,7 @@ export const weaponShaftInputs = defineInputs({
     default: 2,
     unit: { metric: "frac", us: "frac" },
     urlKey: "thin",
-    help: "Shaft safety factor on yield under which the shaft is called marginal.",
+    help: "Shaft safety factor on yield below which it is marginal.",
   },
 });
 
@@ -422,7 +423,9 @@ export function weaponShaftCheck(input: WeaponShaftInput): WeaponShaftCheck {
     });
   }
 
-  const material = MATERIALS[materialId];
+  // The rows of calc/materials/materials.ts, read from the two parts it is made of (the page then
+  // carries the numbers without the sources and notes).
+  const material = { ...MATERIAL_DENSITIES[materialId], ...MATERIAL_STRENGTHS[materialId] };
   const E = material.youngsModulus;
   const section = roundSection({ diameter: v.shaftDiameter, bore: v.shaftBore });
   const I = section.secondMoment;
@@ -465,7 +468,8 @@ export function weaponShaftCheck(input: WeaponShaftInput): WeaponShaftCheck {
   // Stresses at the peak.
   const sigma = bendingStress({ moment: peak.moment, diameter: v.shaftDiameter, bore: v.shaftBore });
   const tau = torsionalStress({ torque, diameter: v.shaftDiameter, bore: v.shaftBore });
-  const sigmaVm = vonMisesStress({ normalStress: sigma, shearStress: tau });
+  // As vonMisesStress (calc/loads/common.ts), written out so the page does not load the loads module for one line.
+  const sigmaVm = Math.hypot(sigma, Math.sqrt(3) * tau); // shigley-distortion-energy: σ' = √(σ² + 3τ²)
   const safety = ratioOrNull(material.yieldStrength, sigmaVm); // safety-factor-practice: n = S_y/σ'
 
   // Bearings: at the supports of a live shaft, in the hub of a dead one.
@@ -487,7 +491,7 @@ export function weaponShaftCheck(input: WeaponShaftInput): WeaponShaftCheck {
     axialFactor: v.axialFactor,
     angularSpeed: v.weaponSpeed,
   });
-  const guide = staticSafetyGuide({ bearingType, loading: "shock", requirements: "normal" });
+  const guide = STATIC_SAFETY_GUIDE.rotating.shock.normal[bearingType]; // bearing-static-safety-guide: rotating, pronounced shock, normal requirements (as staticSafetyGuide)
   const requiredLifeHours = v.requiredLife / 3600;
   const lifeRatio = check.ratingLifeHours === null ? null : ratioOrNull(check.ratingLifeHours, requiredLifeHours);
 

@@ -38,6 +38,8 @@ const CHAPTERS = [
   { slug: "spin-up", anchor: "spin-up-calculator", bar: "time-100" },
   { slug: "weapon-turn", anchor: "weapon-turn-calculator", bar: "lift" },
   { slug: "steering", anchor: "steering-calculator", bar: "speed" },
+  { slug: "weapon-shaft", anchor: "weapon-shaft-calculator", bar: "sf" },
+  { slug: "weapon-hit", anchor: "weapon-hit-calculator", bar: "given" },
 ] as const;
 
 describe("the pit flow", () => {

@@ -35,10 +35,11 @@ const KIB = 1024;
  * and search entries, and that code on the build sheet, about 25 KiB, so the ceiling rose from 565
  * to 590 KiB); with 16 (the steering chapter: its page, its script with the simulation behind its
  * button, its search entries and the steering check on the build sheet, about 42 KiB) the ceiling
- * is 640 KiB. The 500 KiB target is not met: what remains is used (pages, scripts, 6 fonts, the
+ * is 640 KiB; with 18 (the shaft and hit chapters: their pages, scripts and search entries, and both
+ * checks on the build sheet; measured 682 KiB) 690 KiB. The 500 KiB target is not met: what remains is used (pages, scripts, 6 fonts, the
  * search index and its code).
  */
-const PRECACHE_GZIP_CEILING = 640 * KIB;
+const PRECACHE_GZIP_CEILING = 690 * KIB;
 
 describe("compressed copies", () => {
   const text = () => files().filter((f) => /\.(html|css|js|svg|json)$/.test(f));

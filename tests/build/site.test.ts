@@ -75,11 +75,14 @@ const OVER_BUDGET: Record<string, { js: number; total: number }> = {
 /**
  * The build sheet's script over its 70 KB budget: it loads every calculator's check at once (the
  * contract's checks in each, then the weapon-turn check +3.8 KB and the steering check +3.7 KB).
- * Measured 81 844 B JS and 91 093 B in all; ceilings are that plus about 1 %. The way back under
- * budget is structural: load a check's code only for the sections a design holds.
+ * Measured 81 844 B JS and 91 093 B in all; then the shaft and bearings check (+5.2 KB: the check
+ * with its beam, bearing and section formulas, its inputs and the table's strengths) and the hit
+ * (+1.9 KB), with their cards (+1.3 KB): measured 90 251 B JS and 99 535 B in all. Ceilings are
+ * that plus about 1 %. The way back under budget is structural: load a check's code only for the
+ * sections a design holds.
  */
-const BUILD_SHEET_JS_CEILING = 82_700;
-const BUILD_SHEET_TOTAL_CEILING = 92_000;
+const BUILD_SHEET_JS_CEILING = 91_150;
+const BUILD_SHEET_TOTAL_CEILING = 100_500;
 
 describe("the built site", () => {
   it("was built (run `npm run build` first)", () => {
