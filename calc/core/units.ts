@@ -180,14 +180,6 @@ export function fromSI(value: number, to: UnitId): number {
   return scaled(value, known(UNITS, to, "to").factor, true);
 }
 
-/** Converts between two units of the same kind. */
-export function convert(value: number, from: UnitId, to: UnitId): number {
-  const kind = known<UnitDef>(UNITS, from, "from").kind;
-  if (known<UnitDef>(UNITS, to, "to").kind !== kind)
-    throw new CalcInputError({ param: "to", value: to, expected: `a unit of ${kindName(kind)}, as ${from} is`, unit: "" });
-  return fromSI(toSI(value, from), to);
-}
-
 /** rpm → rad/s (exact: 1 rpm = 2π/60 rad/s). */
 export function rpmToRadPerSecond(rpm: number): number {
   return scaled(rpm, RPM, false);
@@ -536,20 +528,4 @@ function example(kind: QuantityKind, unit: UnitId): string {
   const symbol = UNITS[unit].symbol;
   const sample = kind === "angularSpeed" ? 2400 : kind === "fraction" ? 10 : 32;
   return symbol ? `${sample} ${symbol}` : String(sample);
-}
-
-/**
- * Checks that `unit` is a known unit id of `kind`; throws a CalcInputError naming `param` otherwise.
- *
- * @param param the input's name, for the message
- * @param unit a unit id (untrusted)
- * @param kind the quantity kind the unit must measure
- * @returns the unit id, typed
- */
-export function requireUnitOfKind(param: string, unit: unknown, kind: QuantityKind): UnitId {
-  const def = typeof unit === "string" && Object.hasOwn(UNITS, unit) ? UNITS[unit as UnitId] : undefined;
-  if (!def || def.kind !== kind) {
-    throw new CalcInputError({ param, value: String(unit), expected: `a unit of ${kindName(kind)} (${unitsOfKind(kind).join(", ")})`, unit: "" });
-  }
-  return unit as UnitId;
 }

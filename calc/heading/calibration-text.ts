@@ -7,7 +7,8 @@
 import { CalcInputError } from "../core/errors.ts";
 import type { CalibrationRow } from "./calibration.ts";
 import type { CalibrationCsv, CalibrationCsvOptions } from "./csv.ts";
-import { requireUnitOfKind, UNITS, type UnitId } from "../core/units.ts";
+import { UNITS, type UnitId } from "../core/units.ts";
+import { requireUnitOfKind } from "../core/unit-tools.ts";
 
 /** The rows as written: text lines and the numbers a reader gets back from them (six significant figures). */
 function written(rows: readonly CalibrationRow[], options: CalibrationCsvOptions) {

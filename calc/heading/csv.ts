@@ -6,7 +6,8 @@
  * never throws on any text.
  */
 import type { CalibrationRow } from "./calibration.ts";
-import { findUnit, parseQuantity, requireUnitOfKind, UNITS, type UnitId } from "../core/units.ts";
+import { findUnit, parseQuantity, UNITS, type UnitId } from "../core/units.ts";
+import { requireUnitOfKind } from "../core/unit-tools.ts";
 
 export type CsvSeparator = "," | ";" | "\t" | "whitespace";
 
