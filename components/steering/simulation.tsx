@@ -5,7 +5,7 @@
  * (calc/steering/sweep.ts), run one cell at a time between tasks so the page stays responsive.
  * Reads and formats only; every number comes from calc/.
  */
-import { useMemo } from "preact/hooks";
+import { useEffect, useMemo } from "preact/hooks";
 import { STATUS_WORDS } from "../../calc/core/check.ts";
 import { formatNumber, formatQuantity, type QuantityKind, type UnitSystem } from "../../calc/core/units.ts";
 import { DEMO_STEERING_SPINNER, type SteeringInput, steeringInputs } from "../../calc/steering/inputs.ts";
@@ -58,6 +58,8 @@ export function SteeringSimulation({ values, system, distanceText, idPrefix }: S
     });
     return model;
   }, []);
+  // The distance field follows the calculator's unit system.
+  useEffect(() => distance.setSystem(system), [system]);
   const sweepState = useSignal<SweepState | null>(null);
   const reading = distance.readings.commandedDistance.value;
   const input = useMemo(

@@ -71,6 +71,10 @@ describe("the steering simulation in the browser", () => {
     await page.fill(`${ID}-commandedDistance`, "5 m");
     await expect.poll(() => out(page, "sim-time")).toMatch(/^not within /);
     await expect.poll(() => new URL(page.url()).searchParams.get("dist")).toBe("5 m");
+    // The distance field follows the unit system with the rest of the form.
+    await page.locator(`${ID}`).getByRole("radio", { name: "US" }).check();
+    await expect.poll(() => page.inputValue(`${ID}-commandedDistance`)).not.toBe("5 m");
+    expect(await page.inputValue(`${ID}-commandedDistance`)).toMatch(/ (in|ft)$/);
     expect(problems).toEqual([]);
     await context.close();
   });
