@@ -68,7 +68,9 @@ const OVER_BUDGET: Record<string, { js: number; total: number }> = {
   // which took fasteners (3 B under) just over its budget and mass-layout over its ceiling.
   fasteners: { js: 25_850, total: 60 * KB },
   "mass-layout": { js: 37_250, total: 63_700 },
-  "spin-up": { js: 38_700, total: 66_850 },
+  // +0.3 KB JS: a one-wheel spinner's wheel load follows the wheels' gyroscopic moment (and a run past
+  // the skid lift speed says so); +0.4 KB HTML from the text on it. Measured 38 935 B JS, 67 155 B in all.
+  "spin-up": { js: 39_300, total: 67_850 },
 };
 
 /**
