@@ -15,6 +15,8 @@ export const form = /* @__PURE__ */ defineForm({
   anchor: "steering-calculator",
   order: 85,
   inputs: steeringEstimateInputs,
+  /** The page's simulation view: shown (`sim=1`) and its distance field (`dist`). */
+  pageKeys: ["sim", "dist"],
 });
 
 /** What the calculator computes: its page runs this; the cards below speak for the build sheet and the command line. */

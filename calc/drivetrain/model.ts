@@ -27,6 +27,17 @@ export interface Model {
   jw: number;
   fs: number;
   fk: number;
+  /** Static and kinetic friction per newton of wheel load [-] (the coefficients; 0 for a weapon). */
+  mus: number;
+  muk: number;
+  /** Wheel load at rest, s·M·g [N], and the most it can carry, M·g [N]. */
+  normal0: number;
+  normalMax: number;
+  /**
+   * One wheel and a skid: the wheel load the wheels' gyroscopic moment adds per unit of motor speed
+   * times spin, (J_w + G·n·J_m)/(2·R·G) [N·s²] (0 with two wheels or more, where the moments cancel).
+   */
+  gyroLoad: number;
   target: number;
   maxTime: number;
 }
@@ -56,6 +67,16 @@ export function buildModel(input: DrivetrainInput, spinner: boolean): Model {
     jw: spinner ? input.drivenWheels * input.wheelInertia : 0,
     fs: spinner ? input.staticFriction * normal : Infinity, // serway-beichner-5e: f_s ≤ μ_s n
     fk: spinner ? input.kineticFriction * normal : Infinity, // serway-beichner-5e: f_k = μ_k n
+    mus: spinner ? input.staticFriction : 0,
+    muk: spinner ? input.kineticFriction : 0,
+    normal0: normal,
+    normalMax: input.robotMass * STANDARD_GRAVITY,
+    // meriam-kraige-dynamics, steady precession: M = (J_w·ω_w + n·J_m·G·ω_w)·Ω with ω_w = ω_m/G; the skid
+    // sits as far out opposite the wheel, so the wheel gains M/(2R) (calc/steering/gyro.ts wheelNormalLoads).
+    gyroLoad:
+      spinner && input.drivenWheels === 1
+        ? (input.wheelInertia + input.gearRatio * input.motorCount * input.motorRotorInertia) / (2 * input.wheelOffset * input.gearRatio)
+        : 0,
     target: input.targetSpeed,
     maxTime: input.maxTime,
   };
@@ -132,6 +153,11 @@ export class SpinUpSystem {
   readonly jw: number;
   readonly fs: number;
   readonly fk: number;
+  readonly mus: number;
+  readonly muk: number;
+  readonly normal0: number;
+  readonly normalMax: number;
+  readonly gyroLoad: number;
   /** Wheel turns per robot turn while gripping (1 for a weapon). */
   readonly rho: number;
   /** Motor turns per output turn while locked. */
@@ -180,6 +206,11 @@ export class SpinUpSystem {
     this.jw = m.jw;
     this.fs = m.fs;
     this.fk = m.fk;
+    this.mus = m.mus;
+    this.muk = m.muk;
+    this.normal0 = m.normal0;
+    this.normalMax = m.normalMax;
+    this.gyroLoad = m.gyroLoad;
     this.battVoltage = m.voc;
     const rho = m.spinner ? m.roff / m.rw : 1;
     const k = m.g * rho;
@@ -194,6 +225,24 @@ export class SpinUpSystem {
     this.rTot = m.rm + m.N * m.duty * m.duty * m.rp;
     this.tauLocked = (this.jLockF * this.rTot) / (m.eta * k * k * m.N * m.kt * m.kt);
     this.tauWheel = m.spinner ? (this.jWheelF * this.rTot) / (m.eta * m.g * m.g * m.N * m.kt * m.kt) : this.tauLocked;
+  }
+
+  /**
+   * Load on the driven wheels at spin om and motor speed wm [N]: s·M·g, plus, for one wheel and a
+   * skid, the share of the wheels' gyroscopic moment, up to the whole weight (the skid lifts).
+   */
+  normalAt(om: number, wm: number): number {
+    return Math.min(this.normalMax, Math.max(0, this.normal0 + this.gyroLoad * wm * om));
+  }
+
+  /** Most grip the wheels give at this state, μ_s·N [N] (serway-beichner-5e: f_s ≤ μ_s n). */
+  staticLimitAt(om: number, wm: number): number {
+    return this.mus * this.normalAt(om, wm);
+  }
+
+  /** Sliding friction at this state, μ_k·N [N] (serway-beichner-5e: f_k = μ_k n). */
+  kineticForceAt(om: number, wm: number): number {
+    return this.muk * this.normalAt(om, wm);
   }
 
   /** Controller, battery and motor at motor speed wm (erickson-power-electronics, battery-thevenin-model). */
@@ -249,7 +298,7 @@ export class SpinUpSystem {
     } else {
       this.electrical(wm);
       const tm = this.N * this.kt * (this.current - this.i0);
-      const f = this.dir * this.fk; // serway-beichner-5e: f_k = μ_k n
+      const f = this.dir * this.kineticForceAt(om, wm); // serway-beichner-5e: f_k = μ_k n
       let dww = (this.g * this.eta * tm - f * this.rw) / this.jWheelF;
       tg = this.jw * dww + f * this.rw;
       if (tg < 0) {
@@ -308,7 +357,7 @@ export class SpinUpSystem {
     this.mode = LOCKED;
     if (!this.spinner) return;
     this.lockedAcceleration(y[S_SPEED]!, y[S_MOTOR]!);
-    if (Math.abs(this.force) > this.fs) {
+    if (Math.abs(this.force) > this.staticLimitAt(y[S_SPEED]!, y[S_MOTOR]!)) {
       this.mode = SLIPPING;
       this.dir = this.force >= 0 ? 1 : -1;
     }

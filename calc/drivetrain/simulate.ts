@@ -154,12 +154,14 @@ function findEvent(sys: SpinUpSystem, st: Dopri5, gCur: number, tolForce: number
     event = EVENT_CURRENT;
   }
   if (sys.spinner && sys.mode === LOCKED) {
-    const g1 = sys.fs - Math.abs(sys.force); // the traction force is from the evaluation at y1 (k7)
+    const g1 = sys.staticLimitAt(y1[S_SPEED]!, y1[S_MOTOR]!) - Math.abs(sys.force); // the traction force is from the evaluation at y1 (k7)
     if (g1 < -tolForce) {
       st.prepareDense();
       const gripMargin = (th: number): number => {
-        sys.lockedAcceleration(st.dense(S_SPEED, th), st.dense(S_MOTOR, th));
-        return sys.fs - Math.abs(sys.force);
+        const om = st.dense(S_SPEED, th);
+        const wm = st.dense(S_MOTOR, th);
+        sys.lockedAcceleration(om, wm);
+        return sys.staticLimitAt(om, wm) - Math.abs(sys.force);
       };
       const th = locate(gripMargin, gripMargin(0), g1, 1, (v) => v < -tolForce);
       if (event === EVENT_NONE || th < found.theta) {
@@ -511,6 +513,15 @@ export function simulateSpinUp(input: DrivetrainInput, options: SpinUpOptions = 
           ? `; the wheels and motor rotors settle in ${run.tauWheel.toPrecision(2)} s, too fast to simulate beside the rest. Check the wheel and motor rotor inertias.`
           : ", before the speed settled."),
     );
+  }
+  if (m.gyroLoad > 0) {
+    // Rolling, ω_m = k·Ω: the skid lifts where s·M·g + gyroLoad·k·Ω² reaches M·g (meriam-kraige-dynamics, steady precession).
+    const lift = Math.sqrt((m.normalMax - m.normal0) / (m.gyroLoad * k));
+    if (run.topSpeed > lift) {
+      warnings.push(
+        `The wheel's gyroscopic moment lifts the skid at ${Math.round((lift * 30) / Math.PI)} rpm; above it the robot tilts onto its wheel, which this model does not follow.`,
+      );
+    }
   }
   const result: SpinUpResult = {
     driveType,

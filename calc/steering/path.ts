@@ -28,9 +28,36 @@ export interface SteeringPath {
   legs: { start: number; direction: number }[];
   /** Where the centre of mass was at the end of each leg [m]. */
   legEnds: { x: number; y: number }[];
+  /**
+   * The body's wobble: the largest distance of a sample from the centre of mass's mean over the
+   * revolution around it (one turn at the starting spin) [m]; 0 with fewer than 4 samples a turn.
+   */
+  wobble: number;
   /** How the run ended. */
   status: string;
   endTime: number;
+}
+
+/**
+ * Largest distance of a sample from the mean over the turn centred on it: a symmetric window of one
+ * turn (trapezoid weights, so a steady translation averages to the centre sample exactly).
+ */
+function pathWobble(points: readonly SteeringPathPoint[], perTurn: number): number {
+  if (perTurn < 4) return 0;
+  const half = Math.floor(perTurn / 2);
+  const even = perTurn % 2 === 0;
+  let wobble = 0;
+  for (let k = half; k + half < points.length; k++) {
+    let sx = 0;
+    let sy = 0;
+    for (let j = -half; j <= half; j++) {
+      const weight = even && Math.abs(j) === half ? 0.5 : 1;
+      sx += weight * points[k + j]!.x;
+      sy += weight * points[k + j]!.y;
+    }
+    wobble = Math.max(wobble, Math.hypot(points[k]!.x - sx / perTurn, points[k]!.y - sy / perTurn));
+  }
+  return wobble;
 }
 
 /**
@@ -45,7 +72,8 @@ export interface SteeringPath {
  * @param pointsPerRevolution samples per turn at the starting spin, 4 to 64 (default 12), at most `maxPoints` in all
  * @param maxPoints 10 to 20 000 (default 6000)
  * @param options tolerance and step budget (as `simulateSteering`)
- * @returns the sampled path [m, rad, rad/s], the legs and where each ended
+ * @returns the sampled path [m, rad, rad/s], the legs, where each ended [m], and the wobble about the
+ *   per-revolution mean path [m]
  *
  * @example
  * steeringPath({ input: { ...DEMO_STEERING_SPINNER, phaseLead: 1.319 } }).legEnds[1] // → { x: 0.55, y: 0.28 } [m], after (0.29, −0.02) m: it coasts on along x while it turns
@@ -116,7 +144,8 @@ export function steeringPath(args: {
     return { x: best.x, y: best.y };
   });
   legEnds.push({ x: run.y[0]!, y: run.y[1]! });
-  return requireFiniteFields({ points, legs: runLegs, legEnds, status: run.status, endTime: run.endTime }, "steering path", () =>
+  const wobble = pathWobble(points, Math.round((2 * Math.PI) / (input.spinSpeed * step)));
+  return requireFiniteFields({ points, legs: runLegs, legEnds, wobble, status: run.status, endTime: run.endTime }, "steering path", () =>
     declaredInputs(steeringInputs, input),
   );
 }

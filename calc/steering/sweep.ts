@@ -42,26 +42,44 @@ function evenly(from: number, to: number, count: number): number[] {
   return Array.from({ length: count }, (_, i) => (count === 1 ? from : from + ((to - from) * i) / (count - 1)));
 }
 
+/** A sweep that runs one cell at a time (see `startSteeringSweep`). */
+export interface SteeringSweepRun {
+  /** Cells in the grid, feasible or not. */
+  total: number;
+  /** Cells done so far. */
+  done(): number;
+  /**
+   * Runs the next cell (a feasible cell is one short simulation, about a millisecond for the demo
+   * robot); returns the finished sweep after the last cell, null before.
+   */
+  step(): SteeringSweep | null;
+}
+
 /**
- * Mean translation speed against window width and depth, each cell a short simulation
- * (as `simulateSteering`: dormand-prince-1980, pacejka-tyre-dynamics, battery-thevenin-model), with
- * the fastest cell marked.
+ * The window-and-depth sweep of `sweepSteering`, checked at once but run one cell per `step()`, so
+ * a page can spread it over several tasks and stay responsive (each cell as `simulateSteering`:
+ * dormand-prince-1980, pacejka-tyre-dynamics, battery-thevenin-model).
  *
- * Formula: $\bar v(w, \delta)$ = |mean velocity over the final revolutions| of a run of the given duration
+ * Formula: $\bar v(w, \delta)$ = |mean velocity over the final revolutions| of a run of the given duration, one cell per step
  *
  * @param input every field of `steeringInputs` [SI]; its window width and depth are replaced
  * @param windowWidths widths to try [rad], 1 to 24 values (default 7, from 30° to the largest allowed)
  * @param depths depths to try [-], 1 to 24 values (default 6, from 0.05 to 0.3)
  * @param duration simulated time per cell [s], 0.05 to 10 (default the smaller of the input's and 0.4 s)
- * @returns the grid (speeds [m/s], direction errors [rad], spin lost [rad/s]) and the best cell
+ * @returns a run: its cell count, the cells done, and `step()`, which gives the finished grid
+ *   (speeds [m/s], direction errors [rad], spin lost [rad/s], the best cell) after the last cell
  *
- * Assumptions: as `simulateSteering`. A short run may not have reached its final speed; the map
- * compares cells at the same time. @example
- * sweepSteering({ input: DEMO_STEERING_SPINNER }).best // → { row: 6, column: 4 }: 180° and depth 0.25, 0.77 m/s after 0.4 s
+ * Assumptions: as `sweepSteering`; every input is checked before the first cell. @example
+ * const run = startSteeringSweep({ input: DEMO_STEERING_SPINNER }); let sweep = null; while (!sweep) sweep = run.step(); sweep.best // → { row: 6, column: 4 }
  *
  * Sources: dormand-prince-1980, pacejka-tyre-dynamics, battery-thevenin-model.
  */
-export function sweepSteering(args: { input: SteeringInput; windowWidths?: readonly number[]; depths?: readonly number[]; duration?: number }): SteeringSweep {
+export function startSteeringSweep(args: {
+  input: SteeringInput;
+  windowWidths?: readonly number[];
+  depths?: readonly number[];
+  duration?: number;
+}): SteeringSweepRun {
   const { input, windowWidths, depths, duration } = requireInputObject(args, "args");
   validateSteeringInput(input);
   const maxWidth = input.oppositeWindow === 1 ? Math.PI : 2 * Math.PI;
@@ -84,34 +102,82 @@ export function sweepSteering(args: { input: SteeringInput; windowWidths?: reado
   const probe = new SteeringModel({ ...input, depth: 0 });
   const headroom = input.oppositeWindow === 1 ? Math.min(1 - probe.baseDuty, probe.baseDuty) : 1 - probe.baseDuty;
   const integrator = new DormandPrince45(probe.dimension);
+  const total = widths.length * ds.length;
+  const cells: SteeringSweepCell[][] = widths.map(() => []);
   let best: { row: number; column: number } | null = null;
   let bestSpeed = -1;
-  const cells = widths.map((w, row) =>
-    ds.map((d, column): SteeringSweepCell => {
-      if (d > headroom) return { windowWidth: w, depth: d, feasible: false, speed: null, directionError: null, spinLost: null, isBest: false };
-      const cellInput = { ...input, windowWidth: w, depth: d, duration: time };
-      const model = new SteeringModel(cellInput);
-      const run = runSteering(model, cellInput, { legs: [{ start: 0, direction: 0 }], duration: time, relativeTolerance: 1e-4, maxSteps: 200_000, integrator });
-      const rev = revolutionFigures(run);
-      const speed = Math.hypot(rev.velocity.x, rev.velocity.y);
-      if (speed > bestSpeed * (1 + 1e-9)) {
-        bestSpeed = speed;
-        best = { row, column };
-      }
-      return {
-        windowWidth: w,
-        depth: d,
-        feasible: true,
-        speed,
-        directionError: speed > 0 ? Math.atan2(rev.velocity.y, rev.velocity.x) : 0,
-        spinLost: Math.max(0, input.spinSpeed - rev.lowestSpin),
-        isBest: false,
-      };
-    }),
-  );
-  if (best !== null) {
-    const b: { row: number; column: number } = best;
-    cells[b.row]![b.column]!.isBest = true;
+  let done = 0;
+  let finished: SteeringSweep | null = null;
+
+  function runCell(row: number, column: number): SteeringSweepCell {
+    const w = widths[row]!;
+    const d = ds[column]!;
+    if (d > headroom) return { windowWidth: w, depth: d, feasible: false, speed: null, directionError: null, spinLost: null, isBest: false };
+    const cellInput = { ...input, windowWidth: w, depth: d, duration: time };
+    const model = new SteeringModel(cellInput);
+    const run = runSteering(model, cellInput, { legs: [{ start: 0, direction: 0 }], duration: time, relativeTolerance: 1e-4, maxSteps: 200_000, integrator });
+    const rev = revolutionFigures(run);
+    const speed = Math.hypot(rev.velocity.x, rev.velocity.y);
+    if (speed > bestSpeed * (1 + 1e-9)) {
+      bestSpeed = speed;
+      best = { row, column };
+    }
+    return {
+      windowWidth: w,
+      depth: d,
+      feasible: true,
+      speed,
+      directionError: speed > 0 ? Math.atan2(rev.velocity.y, rev.velocity.x) : 0,
+      spinLost: Math.max(0, input.spinSpeed - rev.lowestSpin),
+      isBest: false,
+    };
   }
-  return requireFiniteFields({ windowWidths: widths, depths: ds, cells, best, duration: time }, "steering sweep", () => declaredInputs(steeringInputs, input));
+
+  return {
+    total,
+    done: () => done,
+    step() {
+      if (finished) return finished;
+      const row = Math.floor(done / ds.length);
+      const column = done % ds.length;
+      cells[row]!.push(runCell(row, column));
+      done++;
+      if (done < total) return null;
+      if (best !== null) {
+        const b: { row: number; column: number } = best;
+        cells[b.row]![b.column]!.isBest = true;
+      }
+      finished = requireFiniteFields({ windowWidths: widths, depths: ds, cells, best, duration: time }, "steering sweep", () =>
+        declaredInputs(steeringInputs, input),
+      );
+      return finished;
+    },
+  };
+}
+
+/**
+ * Mean translation speed against window width and depth, each cell a short simulation
+ * (as `simulateSteering`: dormand-prince-1980, pacejka-tyre-dynamics, battery-thevenin-model), with
+ * the fastest cell marked.
+ *
+ * Formula: $\bar v(w, \delta)$ = |mean velocity over the final revolutions| of a run of the given duration
+ *
+ * @param input every field of `steeringInputs` [SI]; its window width and depth are replaced
+ * @param windowWidths widths to try [rad], 1 to 24 values (default 7, from 30° to the largest allowed)
+ * @param depths depths to try [-], 1 to 24 values (default 6, from 0.05 to 0.3)
+ * @param duration simulated time per cell [s], 0.05 to 10 (default the smaller of the input's and 0.4 s)
+ * @returns the grid (speeds [m/s], direction errors [rad], spin lost [rad/s]) and the best cell
+ *
+ * Assumptions: as `simulateSteering`. A short run may not have reached its final speed; the map
+ * compares cells at the same time. All cells run at once (`startSteeringSweep` runs them one at a time). @example
+ * sweepSteering({ input: DEMO_STEERING_SPINNER }).best // → { row: 6, column: 4 }: 180° and depth 0.25, 0.77 m/s after 0.4 s
+ *
+ * Sources: dormand-prince-1980, pacejka-tyre-dynamics, battery-thevenin-model.
+ */
+export function sweepSteering(args: { input: SteeringInput; windowWidths?: readonly number[]; depths?: readonly number[]; duration?: number }): SteeringSweep {
+  const run = startSteeringSweep(args);
+  for (;;) {
+    const sweep = run.step();
+    if (sweep) return sweep;
+  }
 }

@@ -2,21 +2,23 @@
  * The steering estimate: a whole-body spinner's spin, wheels, drive and steering settings give the
  * kinematic translation speed, the direction error latency causes and the lead that cancels it,
  * the wheels' gyroscopic moment and, with one wheel, the skid lift speed
- * (calc/steering/estimate.ts). A button runs the full simulation once for the same values.
+ * (calc/steering/estimate.ts). A button loads the simulation view (components/steering/simulation.tsx,
+ * its own chunk) for the same values; the link then carries `sim=1` (and the distance, `dist`), so
+ * it opens with the simulation shown.
  */
+import type { ComponentType } from "preact";
 import { useEffect, useMemo } from "preact/hooks";
 import { form as steeringCalculator, run as steeringRun } from "../../calc/calculators/steering.ts";
 import { formatQuantity, type QuantityKind, type UnitSystem } from "../../calc/core/units.ts";
 import { STATUS_WORDS } from "../../calc/core/check.ts";
-import { DEMO_STEERING_SPINNER } from "../../calc/steering/inputs.ts";
-import { type SteeringResult, simulateSteering } from "../../calc/steering/simulate.ts";
+import type { SteeringSimulationProps } from "../steering/simulation.tsx";
 import { formParts } from "../calc-ui/form-parts.tsx";
 import { Toolbar } from "../calc-ui/Toolbar.tsx";
 import { Notices } from "../calc-ui/Notices.tsx";
 import { ResultBar, type Tone } from "../calc-ui/ResultBar.tsx";
 import { linkFor, syncWithUrl } from "../calc-ui/url-sync.ts";
-import { createCalculatorModel } from "../calc-ui/model.ts";
-import { useSignal } from "../calc-ui/reactive.ts";
+import { createCalculatorModel, type PageState } from "../calc-ui/model.ts";
+import { type Signal, signal } from "../calc-ui/reactive.ts";
 
 /** The island name: this file's name. */
 export const island = "steering";
@@ -28,12 +30,47 @@ export interface SteeringCalculatorProps {
 
 const TONE = { holds: "ok", marginal: "warn", fails: "bad" } as const satisfies Record<string, Tone>;
 
-type Simulated = { values: unknown; result: SteeringResult | null; message: string | null };
+/** The simulation's state in the page link: shown or not, and the distance field's text. */
+interface SimulationState extends PageState {
+  shown: Signal<boolean>;
+  distance: Signal<string>;
+  view: Signal<ComponentType<SteeringSimulationProps> | null | "loading" | "failed">;
+}
+
+function simulationState(): SimulationState {
+  const shown = signal(false);
+  const distance = signal("");
+  return {
+    shown,
+    distance,
+    view: signal(null),
+    apply(params) {
+      shown.value = params.get("sim") === "1";
+      distance.value = params.get("dist") ?? "";
+      return [];
+    },
+    write: () => (shown.value ? { sim: "1", ...(distance.value ? { dist: distance.value } : {}) } : {}),
+  };
+}
+
+/** Loads the simulation view once (its own chunk: the integrator and the views). */
+function loadView(state: SimulationState): void {
+  if (state.view.value !== null && state.view.value !== "failed") return;
+  state.view.value = "loading";
+  import("../steering/simulation.tsx").then(
+    (m) => (state.view.value = m.SteeringSimulation),
+    () => (state.view.value = "failed"),
+  );
+}
 
 export default function SteeringCalculator({ id = steeringCalculator.anchor }: SteeringCalculatorProps) {
-  const model = useMemo(() => createCalculatorModel(steeringCalculator, steeringRun), []);
-  useEffect(() => syncWithUrl(model), [model]);
-  const simulated = useSignal<Simulated | null>(null);
+  const sim = useMemo(simulationState, []);
+  const model = useMemo(() => createCalculatorModel(steeringCalculator, steeringRun, "metric", sim), []);
+  useEffect(() => {
+    const stop = syncWithUrl(model);
+    if (sim.shown.value) loadView(sim);
+    return stop;
+  }, [model]);
   const { fields } = model;
   const system: UnitSystem = fields.system.value;
   const { result, error } = model.outcome.value;
@@ -42,15 +79,10 @@ export default function SteeringCalculator({ id = steeringCalculator.anchor }: S
   const q = (v: number, kind: QuantityKind, significant = 3) => formatQuantity(v, kind, { system, significant }).text;
   const resultsId = `${id}-results`;
   const tone = result ? TONE[result.status] : null;
-  const last = simulated.value;
-  const sim = last && last.values === values ? last : null;
-  const simulate = () => {
-    if (!values) return;
-    try {
-      simulated.value = { values, result: simulateSteering({ ...DEMO_STEERING_SPINNER, ...values }), message: null };
-    } catch (e) {
-      simulated.value = { values, result: null, message: e instanceof Error ? e.message : String(e) };
-    }
+  const view = sim.view.value;
+  const show = () => {
+    sim.shown.value = true;
+    loadView(sim);
   };
   return (
     <section class="calc" id={id} aria-label="Steering while spinning">
@@ -133,40 +165,19 @@ export default function SteeringCalculator({ id = steeringCalculator.anchor }: S
               ))}
             </dl>
             <p class="field-help">
-              These are limits: a real drive sags, slips and lags, and reaches less. The simulation below integrates the motion for the same values (the motor,
-              battery and tyre figures it also needs are the chapter's demo robot's).
+              These are limits: a real drive sags, slips and lags, and reaches less. The simulation integrates the motion for the same values (the motor,
+              battery and tyre figures it also needs are the chapter's demo robot's); once shown, the page's link opens with it.
             </p>
-            <p>
-              <button type="button" class="button" data-action="simulate" onClick={simulate}>
-                Simulate the move once
-              </button>
-            </p>
-            {sim ? (
-              sim.result ? (
-                <dl class="results-grid" data-out="simulation">
-                  <div>
-                    <dt>Translation speed reached</dt>
-                    <dd data-out="sim-speed">{q(sim.result.translationSpeed, "speed")}</dd>
-                  </div>
-                  <div>
-                    <dt>Spin speed lost</dt>
-                    <dd data-out="sim-spin-lost">{q(sim.result.spinLost, "angularSpeed")}</dd>
-                  </div>
-                  <div>
-                    <dt>Direction error, simulated</dt>
-                    <dd data-out="sim-direction-error">{q(sim.result.directionError, "angle")}</dd>
-                  </div>
-                  <div>
-                    <dt>Simulation verdict</dt>
-                    <dd data-out="sim-verdict">
-                      {STATUS_WORDS[sim.result.verdict]}: {sim.result.reason}
-                    </dd>
-                  </div>
-                </dl>
-              ) : (
-                <p data-out="sim-error">{sim.message}</p>
-              )
-            ) : null}
+            {sim.shown.value && typeof view === "function" && values ? (
+              <SimulationView view={view} values={values as unknown as Record<string, number>} system={system} distanceText={sim.distance} idPrefix={id} />
+            ) : (
+              <p>
+                <button type="button" class="button" data-action="simulate" onClick={show} disabled={view === "loading"}>
+                  {view === "loading" ? "Loading the simulation…" : "Simulate the move"}
+                </button>
+                {view === "failed" ? <span role="status"> The simulation could not be loaded; check the connection and try again.</span> : null}
+              </p>
+            )}
           </>
         ) : (
           <p>{error && error.field === null ? error.message : "The answer appears when every field above holds a valid value."}</p>
@@ -174,4 +185,8 @@ export default function SteeringCalculator({ id = steeringCalculator.anchor }: S
       </div>
     </section>
   );
+}
+
+function SimulationView({ view: View, ...props }: SteeringSimulationProps & { view: ComponentType<SteeringSimulationProps> }) {
+  return <View {...props} />;
 }

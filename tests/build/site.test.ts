@@ -45,7 +45,9 @@ const BUDGET = {
  * Editor and simulation pages (the mass layout, spin-up) have their own JS budget: they carry an
  * editor or an integrator besides the shared calculator parts.
  */
-const EDITOR_PAGES = new Set(["mass-layout", "spin-up", "steering"]);
+// Steering loads its simulation (integrator, views, map) only on the reader's action, as a chunk of
+// its own: its first script (22.6 KB gzip measured) fits the calculator budget, which now holds it.
+const EDITOR_PAGES = new Set(["mass-layout", "spin-up"]);
 const EDITOR_JS = 36 * KB;
 
 /**
@@ -67,9 +69,10 @@ const OVER_BUDGET: Record<string, { js: number; total: number }> = {
   // which took fasteners (3 B under) just over its budget and mass-layout over its ceiling.
   fasteners: { js: 25_850, total: 60 * KB },
   "mass-layout": { js: 37_250, total: 63_700 },
-  // +171 B JS and +0.6 KB in all: the unit menu beside every quantity field (numeric keypad on
-  // phones, #11). Measured 38 789 B JS, 67 230 B in all.
-  "spin-up": { js: 39_200, total: 67_900 },
+  // +0.3 KB JS: a one-wheel spinner's wheel load follows the wheels' gyroscopic moment (and a run past
+  // the skid lift speed says so); +0.4 KB HTML from the text on it. +171 B JS and +0.6 KB in all: the
+  // unit menu beside every quantity field (numeric keypad on phones). Measured 39 067 B JS, 67 803 B in all.
+  "spin-up": { js: 39_450, total: 68_450 },
 };
 
 /**

@@ -544,6 +544,7 @@ const CALLS: Record<PublicFunction, Entry> = {
   simulateSteering: { calls: () => [[quickSteering(), { maxSteps: 20_000 }]], runs: 30 },
   sweepSteering: { calls: () => [[{ input: quickSteering(), windowWidths: [1, 2], depths: [0.1], duration: 0.05 }]], runs: 20 },
   steeringPath: { calls: () => [[{ input: quickSteering() }]], runs: 20 },
+  startSteeringSweep: { calls: () => [[{ input: quickSteering(), windowWidths: [1, 2], depths: [0.1], duration: 0.05 }]], runs: 20 },
   steeringEstimate: { calls: () => [[{ ...api.DEMO_STEERING_SPINNER }], [{ ...api.DEMO_STEERING_SPINNER, wheelCount: 1, oppositeWindow: 0, windowWidth: 4 }]] },
 };
 
@@ -585,6 +586,7 @@ const DECLARED: Partial<Record<PublicFunction, InputSpecs>> = {
   fitCalibration: api.calibrationFitInputs,
   steeringPath: api.steeringInputs,
   sweepSteering: api.steeringInputs,
+  startSteeringSweep: api.steeringInputs,
   steeringEstimate: api.steeringEstimateInputs,
 };
 /** Entries that take their declared values in another argument than the first. */
@@ -592,6 +594,7 @@ const DECLARED_AT: Partial<Record<PublicFunction, readonly (string | number)[]>>
   fitCalibration: [1],
   steeringPath: [0, "input"],
   sweepSteering: [0, "input"],
+  startSteeringSweep: [0, "input"],
 };
 
 /** The object of declared values inside a call (a copy the caller may change). */
