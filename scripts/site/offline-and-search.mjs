@@ -7,6 +7,7 @@ import { join } from "node:path";
 import { fileURLToPath } from "node:url";
 import * as pagefind from "pagefind";
 import { precacheSelection, transferSize } from "./precache.mjs";
+import { settleSearchFields } from "./search-fields.mjs";
 
 /** How long a page request may take before the saved copy is shown instead [ms]. */
 export const NETWORK_TIMEOUT_MS = 3000;
@@ -112,6 +113,8 @@ export function offlineAndSearch() {
       },
       "astro:build:done": async ({ dir, logger }) => {
         const root = fileURLToPath(dir);
+        const fallbacks = settleSearchFields(root);
+        logger.info(`search fields: ${fallbacks} entries open their calculator (their field is shown only for some choices)`);
         const { index, errors } = await pagefind.createIndex({
           rootSelector: "main",
           excludeSelectors: [".calc", ".site-nav", ".chapter-nav", ".chart", ".katex", ".no-search"],
