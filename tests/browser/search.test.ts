@@ -37,6 +37,14 @@ describe("search page", () => {
     await context.close();
   });
 
+  it("keeps the formulas in a page's excerpt", async () => {
+    const { page, context } = await site.open("/search/?q=headroom");
+    const excerpt = page.locator('#search-results li:has(a[href="/chapters/acceleration/#how-far-out-the-sensor-may-go"]) p').nth(1);
+    await expect.poll(() => excerpt.textContent(), { timeout: 10_000 }).toContain("F_s = 200 g_n");
+    expect(await excerpt.textContent()).toContain("top speed ω_top");
+    await context.close();
+  });
+
   it("finds nothing for a nonsense word, and says so", async () => {
     const { page, context } = await site.open("/search/?q=xqzvwk");
     await expect

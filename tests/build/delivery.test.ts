@@ -35,10 +35,12 @@ const KIB = 1024;
  * and search entries, and that code on the build sheet, about 25 KiB, so the ceiling rose from 565
  * to 590 KiB); with 16 (the steering chapter: its page, its script with the simulation behind its
  * button, its search entries and the steering check on the build sheet, about 42 KiB) the ceiling
- * is 640 KiB. The 500 KiB target is not met: what remains is used (pages, scripts, 6 fonts, the
- * search index and its code).
+ * is 640 KiB. Then 646.7 KiB (662 229 B): the print view's QR encoder with the link codec (about
+ * 6.5 KiB, loaded only on print), the calculators' fields for search (search-fields.json, 8.4 KiB)
+ * and the formulas as text in the search index (about 10 KiB); the ceiling is 654 KiB. The 500 KiB
+ * target is not met: what remains is used (pages, scripts, 6 fonts, the search index and its code).
  */
-const PRECACHE_GZIP_CEILING = 640 * KIB;
+const PRECACHE_GZIP_CEILING = 654 * KIB;
 
 describe("compressed copies", () => {
   const text = () => files().filter((f) => /\.(html|css|js|svg|json)$/.test(f));
