@@ -10,10 +10,30 @@ import { linkFor } from "../../calc/core/calculator.ts";
 import { CALCULATORS, calculatorFor } from "../../calc/design/registry.ts";
 import type { AnyValues } from "../../calc/core/calculator.ts";
 import { createBuildSheetModel, type BuildSheetModel } from "./model.ts";
+import { type PrintedInput, printedInputs } from "./print.ts";
 
 const base = () => import.meta.env.BASE_URL.replace(/\/?$/, "/");
 
-function CheckCard({ result, model }: { result: CheckResult; model: BuildSheetModel }) {
+/** The print view's QR code module, loaded on the first print (see `preparePrint`). */
+let printModule: typeof import("./print-qr.ts") | null = null;
+
+/**
+ * Fills the print view's QR code and date for the design on screen. Synchronous once the QR
+ * module has loaded, so a print started with the browser's own command (beforeprint) gets it; the
+ * first time, the module loads first and fills them when it arrives.
+ */
+function fillPrintBlock(block: HTMLElement | null, model: BuildSheetModel): boolean {
+  if (!block || !printModule) return false;
+  printModule.fillPrintBlock(block, model.current.value.design);
+  return true;
+}
+
+async function preparePrint(block: HTMLElement | null, model: BuildSheetModel): Promise<void> {
+  printModule ??= await import("./print-qr.ts");
+  fillPrintBlock(block, model);
+}
+
+function CheckCard({ result, model, inputs }: { result: CheckResult; model: BuildSheetModel; inputs: PrintedInput[] | null }) {
   const design = model.current.value.design;
   const calc = calculatorFor(result.section);
   const stored = design[result.section];
@@ -46,6 +66,17 @@ function CheckCard({ result, model }: { result: CheckResult; model: BuildSheetMo
             </li>
           ))}
         </ul>
+      ) : null}
+      {inputs?.length ? (
+        <p class="check-inputs print-only">
+          <span class="check-label">Inputs:</span>{" "}
+          {inputs.map((input, i) => (
+            <span key={input.label}>
+              {i > 0 ? " · " : ""}
+              {input.label} <b>{input.text}</b>
+            </span>
+          ))}
+        </p>
       ) : null}
       {link ? (
         <p class="check-link no-print">
@@ -109,10 +140,29 @@ function DesignList({ model }: { model: BuildSheetModel }) {
   );
 }
 
+/** The inputs of the values a check was computed from, as the print view lists them. */
+function inputsOf(result: CheckResult, design: BuildSheetModel["current"]["value"]["design"]): PrintedInput[] {
+  const calc = calculatorFor(result.section);
+  const stored = design[result.section];
+  const values = (result.index === null ? stored : (stored as AnyValues[] | undefined)?.[result.index]) as AnyValues | undefined;
+  return calc && values ? printedInputs(calc, values, design.units) : [];
+}
+
 export default function BuildSheet() {
   const model = useMemo(() => createBuildSheetModel(typeof localStorage === "undefined" ? null : localStorage), []);
   const fileInput = useRef<HTMLInputElement>(null);
   const link = useSignal<string | null>(null);
+  const printBlock = useRef<HTMLDivElement>(null);
+  // The inputs under each check are drawn only for printing: the page's markup stays as light as before.
+  const printing = useSignal(false);
+  useEffect(() => {
+    const beforePrint = () => {
+      printing.value = true;
+      if (!fillPrintBlock(printBlock.current, model)) void preparePrint(printBlock.current, model);
+    };
+    window.addEventListener("beforeprint", beforePrint);
+    return () => window.removeEventListener("beforeprint", beforePrint);
+  }, [model]);
   useEffect(() => {
     model.loadSaved();
     void model.openFromLocation(window.location.hash);
@@ -211,11 +261,15 @@ export default function BuildSheet() {
             onInput={(e) => model.edit({ name: (e.currentTarget as HTMLInputElement).value })}
           />
         </div>
-        <p class="print-only">
-          <strong>{design.name}</strong>
-        </p>
+        <p class="print-only print-title">{design.name}</p>
         <p class="sheet-meta">
-          {originText[origin]} Last changed {design.modified.slice(0, 10)}.<span class="print-only"> Printed {new Date().toISOString().slice(0, 10)}.</span>
+          <span class="no-print">{originText[origin]} </span>
+          <span class="print-only">Build sheet. Units: {design.units === "us" ? "US customary" : "metric"}. </span>
+          Last changed {design.modified.slice(0, 10)}.
+          <span class="print-only">
+            {" "}
+            Printed <span data-print="date" />.
+          </span>
         </p>
         <fieldset class="segmented no-print">
           <legend>Units</legend>
@@ -250,7 +304,15 @@ export default function BuildSheet() {
             aria-label="Design file to import"
             onChange={importFile}
           />
-          <button type="button" class="button button--quiet" onClick={() => window.print()}>
+          <button
+            type="button"
+            class="button button--quiet"
+            onClick={async () => {
+              printing.value = true;
+              await preparePrint(printBlock.current, model);
+              window.print();
+            }}
+          >
             Print
           </button>
           <button type="button" class="button button--quiet" onClick={() => model.startNew("empty")}>
@@ -279,11 +341,17 @@ export default function BuildSheet() {
         </div>
       ) : null}
 
+      <div class="print-link print-only" ref={printBlock} hidden>
+        <div data-print="code" />
+        <p data-print="note" />
+      </div>
       <Summary model={model} />
       <ol class="checks">
-        {model.results.value.map((r) => (
-          <CheckCard key={r.id} result={r} model={model} />
-        ))}
+        {model.results.value.map((r, i, all) => {
+          // A check's inputs are printed once, under the first card of its values.
+          const first = i === 0 || all[i - 1]!.section !== r.section || all[i - 1]!.index !== r.index;
+          return <CheckCard key={r.id} result={r} model={model} inputs={printing.value && first ? inputsOf(r, design) : null} />;
+        })}
       </ol>
       {missing.length ? (
         <p class="sheet-missing">
@@ -294,7 +362,7 @@ export default function BuildSheet() {
               <a href={`${base()}chapters/${c.chapter}/`}>{c.title}</a>
             </span>
           ))}
-          . Open a calculator and use “Save to design” to add it.
+          .<span class="no-print"> Open a calculator and use “Save to design” to add it.</span>
         </p>
       ) : null}
       <div class="field no-print">

@@ -3,10 +3,19 @@
 // after the first visit.
 import { createHash } from "node:crypto";
 import { readdirSync, readFileSync, rmSync, writeFileSync } from "node:fs";
-import { join } from "node:path";
+import { join, relative, sep } from "node:path";
 import { fileURLToPath } from "node:url";
 import * as pagefind from "pagefind";
 import { precacheSelection, transferSize } from "./precache.mjs";
+import { settleSearchFields } from "./search-fields.mjs";
+import { withFormulasAsText } from "./katex-text.mjs";
+
+/** @param {string} dir @returns {string[]} every .html file under `dir` */
+function htmlFiles(dir) {
+  return readdirSync(dir, { withFileTypes: true }).flatMap((entry) =>
+    entry.isDirectory() ? htmlFiles(join(dir, entry.name)) : entry.name.endsWith(".html") ? [join(dir, entry.name)] : [],
+  );
+}
 
 /** How long a page request may take before the saved copy is shown instead [ms]. */
 export const NETWORK_TIMEOUT_MS = 3000;
@@ -112,12 +121,22 @@ export function offlineAndSearch() {
       },
       "astro:build:done": async ({ dir, logger }) => {
         const root = fileURLToPath(dir);
+        const fallbacks = settleSearchFields(root);
+        logger.info(`search fields: ${fallbacks} entries open their calculator (their field is shown only for some choices)`);
         const { index, errors } = await pagefind.createIndex({
           rootSelector: "main",
           excludeSelectors: [".calc", ".site-nav", ".chapter-nav", ".chart", ".katex", ".no-search"],
         });
         if (!index) throw new Error(`search index failed: ${errors.join("; ")}`);
-        await index.addDirectory({ path: root });
+        // Each page is indexed with its formulas as text (katex-text.mjs): the served page is unchanged.
+        for (const file of htmlFiles(root)) {
+          const path = relative(root, file).split(sep).join("/");
+          const added = await index.addHTMLFile({
+            url: `/${path.replace(/(^|\/)index\.html$/, "$1")}`,
+            content: withFormulasAsText(readFileSync(file, "utf8")),
+          });
+          if (added.errors.length) throw new Error(`search index failed on ${path}: ${added.errors.join("; ")}`);
+        }
         const written = await index.writeFiles({ outputPath: join(root, "pagefind") });
         if (written.errors.length) throw new Error(`search index failed: ${written.errors.join("; ")}`);
         await pagefind.close();

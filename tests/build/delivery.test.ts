@@ -36,10 +36,13 @@ const KIB = 1024;
  * to 590 KiB); with 16 (the steering chapter: its page, its script with the simulation behind its
  * button, its search entries and the steering check on the build sheet, about 42 KiB) the ceiling
  * is 640 KiB; with 18 (the shaft and hit chapters: their pages, scripts and search entries, and both
- * checks on the build sheet; measured 682 KiB) 690 KiB. The 500 KiB target is not met: what remains is used (pages, scripts, 6 fonts, the
- * search index and its code).
+ * checks on the build sheet) 682 KiB; then the print view's QR encoder with the link codec (about
+ * 6.5 KiB, loaded only on print), the calculators' fields for search (search-fields.json, 8.4 KiB),
+ * the formulas as text in the search index (about 10 KiB) and the steering simulation's view (loaded
+ * on its button): measured 729 KiB, ceiling 737 KiB. The 500 KiB target is not met: what remains
+ * is used (pages, scripts, 3 fonts, the search index and its code).
  */
-const PRECACHE_GZIP_CEILING = 690 * KIB;
+const PRECACHE_GZIP_CEILING = 737 * KIB;
 
 describe("compressed copies", () => {
   const text = () => files().filter((f) => /\.(html|css|js|svg|json)$/.test(f));

@@ -1,0 +1,10 @@
+/**
+ * The search entries of every calculator's fields (components/search/entries.ts), written at
+ * build time as /search-fields.json; the search page loads it on the first search.
+ */
+import { CALCULATORS } from "../calc/design/registry.ts";
+import { searchEntries } from "../components/search/entries.ts";
+
+export function GET(): Response {
+  return new Response(JSON.stringify(searchEntries(CALCULATORS)), { headers: { "Content-Type": "application/json" } });
+}
