@@ -4,14 +4,20 @@
  */
 import type { AnyForm, AnyValues } from "../../calc/core/calculator.ts";
 
+const writer = () => import("../design/save.ts");
+
 export async function saveToDesign(calc: AnyForm, values: AnyValues | null): Promise<string> {
   if (!values) return "Not saved: correct the fields marked above first.";
   try {
-    const { saveIntoActiveDesign } = await import("../design/save.ts");
-    return saveIntoActiveDesign(localStorage, calc, values);
+    return await (await writer()).saveFromPage(calc, values);
   } catch {
-    return "Not saved: this browser does not allow saving (storage disabled).";
+    return "Not saved: the save failed; nothing was changed.";
   }
+}
+
+/** Where saves from this page go ("Saving into: …"), once the page knows; null otherwise. */
+export async function saveTarget(): Promise<string | null> {
+  return /[?&]save\.to=/.test(window.location.search) ? (await writer()).describeTarget() : null;
 }
 
 /** Saves several calculators of one page (each into its own section); the last message tells. */

@@ -10,6 +10,7 @@ import { linkFor } from "../../calc/core/calculator.ts";
 import { CALCULATORS, calculatorFor } from "../../calc/design/registry.ts";
 import type { AnyValues } from "../../calc/core/calculator.ts";
 import { createBuildSheetModel, type BuildSheetModel } from "./model.ts";
+import { browserStorage } from "./saved.ts";
 
 const base = () => import.meta.env.BASE_URL.replace(/\/?$/, "/");
 
@@ -18,7 +19,11 @@ function CheckCard({ result, model }: { result: CheckResult; model: BuildSheetMo
   const calc = calculatorFor(result.section);
   const stored = design[result.section];
   const values = (result.index === null ? stored : (stored as AnyValues[] | undefined)?.[result.index]) as AnyValues | undefined;
-  const link = calc && values ? linkFor(calc, values, { system: design.units }) : null;
+  // The calculator opened from here saves back into this design and entry (the demo: into a copy).
+  const { origin, id } = model.current.value;
+  const target = origin === "saved" && id ? id : origin === "demo" ? "demo" : null;
+  const into = target ? new URLSearchParams({ "save.to": target, ...(result.index === null ? {} : { "save.entry": String(result.index) }) }) : "";
+  const link = calc && values ? linkFor(calc, values, { system: design.units, existing: String(into) }) : null;
   return (
     <li class={`check check--${result.status}`} data-check={result.id}>
       <p class="check-head">
@@ -49,7 +54,9 @@ function CheckCard({ result, model }: { result: CheckResult; model: BuildSheetMo
       ) : null}
       {link ? (
         <p class="check-link no-print">
-          <a href={`${base()}${link}`}>Open in the calculator</a>
+          <a href={`${base()}${link}`} onClick={model.handOverDemo}>
+            Open in the calculator
+          </a>
         </p>
       ) : null}
     </li>
@@ -73,7 +80,7 @@ function Summary({ model }: { model: BuildSheetModel }) {
 }
 
 function DesignList({ model }: { model: BuildSheetModel }) {
-  const designs = model.store.value.designs;
+  const designs = model.designs.value;
   return (
     <section class="designs no-print" aria-labelledby="designs-heading">
       <h2 id="designs-heading">Designs saved in this browser</h2>
@@ -110,15 +117,21 @@ function DesignList({ model }: { model: BuildSheetModel }) {
 }
 
 export default function BuildSheet() {
-  const model = useMemo(() => createBuildSheetModel(typeof localStorage === "undefined" ? null : localStorage), []);
+  const model = useMemo(() => createBuildSheetModel(typeof window === "undefined" ? null : browserStorage()), []);
   const fileInput = useRef<HTMLInputElement>(null);
   const link = useSignal<string | null>(null);
   useEffect(() => {
     model.loadSaved();
     void model.openFromLocation(window.location.hash);
     const onHash = () => void model.openFromLocation(window.location.hash);
+    // Another tab saved, deleted or undid: read that design again.
+    const onStorage = (event: StorageEvent) => model.onStorage(event.key);
     window.addEventListener("hashchange", onHash);
-    return () => window.removeEventListener("hashchange", onHash);
+    window.addEventListener("storage", onStorage);
+    return () => {
+      window.removeEventListener("hashchange", onHash);
+      window.removeEventListener("storage", onStorage);
+    };
   }, [model]);
   // Once a design is saved here, the address no longer points at the demo or a shared link:
   // reloading shows the saved design.
@@ -133,7 +146,7 @@ export default function BuildSheet() {
     saved: "Saved in this browser; changes are saved as you make them.",
     link: "Opened from a link; not saved in this browser yet.",
     file: "Opened from a file; not saved in this browser yet.",
-    demo: "The demo design: an invented robot, for trying the build sheet.",
+    demo: "The demo design: an invented robot, for trying the build sheet. It never changes: saving, here or from a calculator, makes a copy.",
     new: "Not saved in this browser yet.",
   };
 
@@ -200,6 +213,23 @@ export default function BuildSheet() {
         </div>
       ) : null}
 
+      {model.stale.value ? (
+        <div class="calc-notices no-print" role="alertdialog" aria-labelledby="stale-text">
+          <p id="stale-text">
+            Not saved: “{model.stale.value.mine.name}” was changed in another tab after this sheet read it, and this sheet does not save over that change. This
+            sheet now shows the other tab's version; your version is kept until you choose.
+          </p>
+          <p class="design-actions">
+            <button type="button" class="button" onClick={model.keepMineAsCopy}>
+              Save my version as a copy
+            </button>
+            <button type="button" class="button button--quiet" onClick={model.takeTheirs}>
+              Drop my version
+            </button>
+          </p>
+        </div>
+      ) : null}
+
       <section class="sheet-head" aria-label="Design">
         <div class="field">
           <label for="design-name">Design name</label>
@@ -232,6 +262,11 @@ export default function BuildSheet() {
               Save in this browser
             </button>
           ) : null}
+          {origin === "saved" && model.lastSave.value ? (
+            <button type="button" class="button button--quiet" onClick={model.undoSave} aria-describedby="last-save">
+              Undo last save
+            </button>
+          ) : null}
           <button type="button" class="button button--quiet" onClick={copyLink}>
             Copy link to this design
           </button>
@@ -260,6 +295,11 @@ export default function BuildSheet() {
         <p class="calc-status no-print" role="status" aria-live="polite">
           {model.status.value}
         </p>
+        {origin === "saved" && model.lastSave.value ? (
+          <p class="sheet-meta no-print" id="last-save">
+            Last save: {model.lastSave.value}.
+          </p>
+        ) : null}
         {link.value ? (
           <div class="field no-print">
             <label for="design-link">Link to this design</label>

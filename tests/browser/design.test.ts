@@ -10,7 +10,7 @@ import { join } from "node:path";
 import { startStaticServer } from "../../scripts/static-server.mjs";
 import { DIST_DIR, axeViolations, useSite, waitForIslands } from "../support/browser.ts";
 import { demoDesign, designToText } from "../../calc/index.ts";
-import { STORE_KEY } from "../../components/design/saved.ts";
+import { LEGACY_KEY as STORE_KEY } from "../../components/design/saved.ts";
 
 const site = useSite();
 const { origin } = site;
