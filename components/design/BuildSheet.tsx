@@ -22,7 +22,13 @@ function CheckCard({ result, model }: { result: CheckResult; model: BuildSheetMo
   // The calculator opened from here saves back into this design and entry (the demo: into a copy).
   const { origin, id } = model.current.value;
   const target = origin === "saved" && id ? id : origin === "demo" ? "demo" : null;
-  const into = target ? new URLSearchParams({ "save.to": target, ...(result.index === null ? {} : { "save.entry": String(result.index) }) }) : "";
+  const into = target
+    ? new URLSearchParams({
+        "save.to": target,
+        "save.in": result.section,
+        ...(result.index === null ? { "save.title": calc?.title ?? result.title } : { "save.entry": String(result.index) }),
+      })
+    : "";
   const link = calc && values ? linkFor(calc, values, { system: design.units, existing: String(into) }) : null;
   return (
     <li class={`check check--${result.status}`} data-check={result.id}>
@@ -54,7 +60,7 @@ function CheckCard({ result, model }: { result: CheckResult; model: BuildSheetMo
       ) : null}
       {link ? (
         <p class="check-link no-print">
-          <a href={`${base()}${link}`} onClick={model.handOverDemo}>
+          <a href={`${base()}${link}`} onClick={model.handOverDemo} onAuxClick={model.handOverDemo}>
             Open in the calculator
           </a>
         </p>

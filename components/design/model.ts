@@ -193,9 +193,10 @@ export function createBuildSheetModel(storage: Storage | Fault | null) {
     const { design, origin, id } = current.value;
     if (origin === "saved" && id) return;
     if (origin === "demo") {
+      // A name typed over the demo's is the builder's; otherwise the copy is called "Demo copy".
       const name = uniqueName(
         designs.value.map((d) => d.design.name),
-        DEMO_COPY_NAME,
+        design.name === demoDesign().name ? DEMO_COPY_NAME : design.name,
       );
       if (addToStore({ ...design, name }))
         status.value = `The demo itself never changes: saved a copy of it as “${name}”. Changes from here on go into the copy.`;
