@@ -4,7 +4,7 @@
  */
 import { useEffect } from "preact/hooks";
 import { useSignal } from "./reactive.ts";
-import { saveTarget } from "./save.ts";
+import { showTarget } from "./save.ts";
 import type { Signal } from "./reactive.ts";
 import type { UnitSystem } from "../../calc/core/units.ts";
 
@@ -21,13 +21,8 @@ export interface ToolbarProps {
 export function Toolbar({ idPrefix, system, onSystem, link, save }: ToolbarProps) {
   const status = useSignal("");
   const fallback = useSignal<string | null>(null);
-  // A page opened from the build sheet says where "Save to design" writes ("Saving into: …").
-  useEffect(() => {
-    if (save)
-      void saveTarget().then((text) => {
-        if (text && !status.value) status.value = text;
-      });
-  }, []);
+  // Opened from the build sheet: say where "Save to design" writes.
+  useEffect(() => showTarget(status), []);
   async function copy() {
     const url = link();
     try {

@@ -3,6 +3,7 @@
  * (components/design/save.ts), and only it.
  */
 import type { AnyForm, AnyValues } from "../../calc/core/calculator.ts";
+import type { Signal } from "./reactive.ts";
 
 const writer = () => import("../design/save.ts");
 
@@ -11,13 +12,18 @@ export async function saveToDesign(calc: AnyForm, values: AnyValues | null): Pro
   try {
     return await (await writer()).saveFromPage(calc, values);
   } catch {
-    return "Not saved: the save failed; nothing was changed.";
+    return "Not saved: the save failed.";
   }
 }
 
-/** Where saves from this page go ("Saving into: …"), once the page knows; null otherwise. */
-export async function saveTarget(): Promise<string | null> {
-  return /[?&]save\.to=/.test(window.location.search) ? (await writer()).describeTarget() : null;
+/** On a page that knows where "Save to design" writes (opened from the build sheet), says so: "Saving into: …". */
+export function showTarget(status: Signal<string>): void {
+  if (/save\.to=/.test(location.search))
+    writer()
+      .then((w) => w.describeTarget())
+      .then((text) => {
+        if (text) status.value = text;
+      });
 }
 
 /** Saves several calculators of one page (each into its own section); the last message tells. */
