@@ -144,8 +144,14 @@ function ask(title: string, body: Child[], buttons: [value: string, label: strin
   });
 }
 
-function radio(name: string, value: string, label: string, checked: boolean, extra?: Child): HTMLElement {
-  return el("div", { class: "save-dialog-choice" }, el("label", {}, el("input", { type: "radio", name, value, checked }), ` ${label}`), extra ?? null);
+function radio(name: string, value: string, label: string, checked: boolean, extra?: HTMLElement): HTMLElement {
+  const input = el("input", { type: "radio", name, value, checked });
+  // Typing a name chooses what it names.
+  extra?.addEventListener("focus", () => {
+    input.checked = true;
+    input.dispatchEvent(new Event("change", { bubbles: true }));
+  });
+  return el("div", { class: "save-dialog-choice" }, el("label", {}, input, ` ${label}`), extra ?? null);
 }
 
 /** Asks which design (and which entry) to save into; null when cancelled. */

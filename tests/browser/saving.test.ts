@@ -7,7 +7,7 @@
  */
 import { describe, expect, it } from "vitest";
 import type { BrowserContext, Page } from "playwright-core";
-import { useSite, waitForIslands } from "../support/browser.ts";
+import { axeViolations, useSite, waitForIslands } from "../support/browser.ts";
 import { demoDesign, designToText } from "../../calc/index.ts";
 import { DESIGN_PREFIX, LEGACY_KEY } from "../../components/design/saved.ts";
 
@@ -140,6 +140,7 @@ describe("a calculator on a plain chapter visit", () => {
     expect(box.x + box.width).toBeLessThanOrEqual(390);
     for (const button of await dialog.getByRole("button").all()) expect((await button.boundingBox())!.height).toBeGreaterThanOrEqual(44);
     expect(await dialog.getByRole("radio", { name: "A new design, named:" }).isChecked()).toBe(true);
+    expect(await axeViolations(page)).toEqual([]);
     await dialog.getByRole("textbox", { name: "Name of the new design" }).fill("Pit robot");
     await page.keyboard.press("Enter");
     await expect
@@ -174,6 +175,11 @@ describe("a calculator on a plain chapter visit", () => {
     expect(await dialog.getByRole("radio", { name: "Demo copy" }).isChecked()).toBe(true);
     const entries = (await storedDesigns(page))["Demo copy"]!.design.fasteners as { name: string }[];
     expect(await dialog.locator('input[name="entry"]').count()).toBe(entries.length + 1);
+    // Typing a new design's name chooses a new design; choosing the saved one again brings back its entries.
+    await dialog.getByRole("textbox", { name: "Name of the new design" }).focus();
+    expect(await dialog.getByRole("radio", { name: "A new design, named:" }).isChecked()).toBe(true);
+    expect(await dialog.locator('input[name="entry"]').count()).toBe(1);
+    await dialog.getByRole("radio", { name: "Demo copy" }).check();
     await dialog.getByRole("radio", { name: `Replace “${entries[1]!.name}”` }).check();
     await dialog.getByRole("button", { name: "Save" }).click();
     await expect.poll(() => status(page).textContent()).toContain(`Saved into “Demo copy” › “${entries[1]!.name}” (revision 2)`);
