@@ -182,7 +182,7 @@ export function createBuildSheetModel(storage: Storage | Fault | null) {
       say(`This link's design cannot be read: ${describeProblems(shared.reading.problems).join(" ")}`);
     }
     if (hash === "#demo") return show(demoDesign(), "demo");
-    const wanted = /^#saved=/.test(hash) ? decodeURIComponent(hash.slice(7)) : store?.getItem(ACTIVE_KEY);
+    const wanted = store?.getItem(ACTIVE_KEY);
     const active = designs.value.find((d) => d.id === wanted) ?? designs.value.at(-1);
     if (active) show(active.design, "saved", active.id, active.rev);
     else show(demoDesign(), "demo");

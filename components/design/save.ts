@@ -12,7 +12,21 @@
  */
 import type { AnyForm, AnyValues } from "../../calc/core/calculator.ts";
 import { newDesign } from "../../calc/design/format.ts";
-import { browserStorage, DEMO_KEY, faultMessage, newId, readRecord, storedIds, uniqueName, writeDesign, type RawRecord, type StoredDesign } from "./saved.ts";
+import {
+  ACTIVE_KEY,
+  browserStorage,
+  DEMO_KEY,
+  faultMessage,
+  migrateLegacy,
+  put,
+  newId,
+  readRecord,
+  storedIds,
+  uniqueName,
+  writeDesign,
+  type RawRecord,
+  type StoredDesign,
+} from "./saved.ts";
 
 /** Where saves from this page go, as its link says. */
 interface Target {
@@ -273,6 +287,8 @@ const pick = (design: StoredDesign | undefined, calc: AnyForm, entry: number | n
 export async function saveFromPage(calc: AnyForm, values: AnyValues): Promise<string> {
   const storage = browserStorage();
   if (typeof storage === "string") return faultMessage(storage);
+  // Designs saved by the first version move to their own keys before anything is listed or written.
+  migrateLegacy(storage);
   const target = targetInLink();
   const entryHere = target.section === calc.id ? target.entry : null;
   let record: RawRecord | null = null;
@@ -344,6 +360,8 @@ export async function saveFromPage(calc: AnyForm, values: AnyValues): Promise<st
   }
   seen.set(record.id, updated.design);
   setTargetInLink(record.id, calc, updated.entry);
+  // The build sheet opens on the design saved into last.
+  put(storage, ACTIVE_KEY, record.id);
   const undo = outcome.undoKept ? " You can undo it from the build sheet." : " (The storage is too full to keep it for undo.)";
   return `${created}Saved into “${nameOf(updated.design.name, "")}” › ${what} (revision ${outcome.record.rev}).${undo}`;
 }

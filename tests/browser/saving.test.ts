@@ -353,7 +353,18 @@ describe("designs saved by an earlier version (one key for all)", () => {
         }),
       ],
     );
-    const page = await open(context, "/build-sheet/");
+    // A calculator visited first already offers them.
+    const page = await open(context, "/chapters/acceleration/");
+    await page.getByRole("button", { name: "Save to design" }).click();
+    await expect.poll(() => page.getByRole("dialog").getByRole("radio").allInnerTexts()).toEqual(["", "", ""]);
+    expect(await page.getByRole("dialog").locator(".save-dialog-choice label").allTextContents()).toEqual([
+      " Old robot",
+      " Older robot",
+      " A new design, named:",
+    ]);
+    await page.keyboard.press("Escape");
+    await page.goto(`${origin()}/build-sheet/`);
+    await waitForIslands(page);
     await expect.poll(() => page.inputValue("#design-name")).toBe("Older robot");
     const stored = await storedDesigns(page);
     expect(stored["Old robot"]).toEqual({ id: "o1", rev: 1, design: kept });
