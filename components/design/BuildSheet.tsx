@@ -85,6 +85,17 @@ function Summary({ model }: { model: BuildSheetModel }) {
   );
 }
 
+/** Offers text as a file to save. */
+function download(text: string, name: string): void {
+  const a = document.createElement("a");
+  a.href = URL.createObjectURL(new Blob([text], { type: "application/json" }));
+  a.download = name;
+  document.body.appendChild(a);
+  a.click();
+  a.remove();
+  setTimeout(() => URL.revokeObjectURL(a.href), 1000);
+}
+
 function DesignList({ model }: { model: BuildSheetModel }) {
   const designs = model.designs.value;
   return (
@@ -110,6 +121,17 @@ function DesignList({ model }: { model: BuildSheetModel }) {
           </li>
         ))}
       </ul>
+      {model.aside.value.count ? (
+        <p>
+          {model.aside.value.count} unreadable item(s) kept aside in this browser ({Math.ceil(model.aside.value.size / 1024)} KB).{" "}
+          <button type="button" class="button button--quiet" onClick={() => download(model.asideText(), "whirlbook-unreadable.json")}>
+            Download them
+          </button>{" "}
+          <button type="button" class="button button--quiet" onClick={model.dropAside}>
+            Delete them
+          </button>
+        </p>
+      ) : null}
       {model.undo.value ? (
         <p class="undo" role="status">
           Deleted “{model.undo.value.entry.design.name}”.{" "}
@@ -168,15 +190,9 @@ export default function BuildSheet() {
   }
 
   function exportFile() {
-    const blob = new Blob([model.fileText()], { type: "application/json" });
-    const a = document.createElement("a");
-    a.href = URL.createObjectURL(blob);
-    a.download = `${design.name.replace(/[^\w.-]+/g, "-").replace(/^-+|-+$/g, "") || "design"}.whirlbook.json`;
-    document.body.appendChild(a);
-    a.click();
-    a.remove();
-    setTimeout(() => URL.revokeObjectURL(a.href), 1000);
-    model.status.value = `Exported ${a.download}.`;
+    const name = `${design.name.replace(/[^\w.-]+/g, "-").replace(/^-+|-+$/g, "") || "design"}.whirlbook.json`;
+    download(model.fileText(), name);
+    model.status.value = `Exported ${name}.`;
   }
 
   function importFile(event: Event) {

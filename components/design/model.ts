@@ -16,6 +16,7 @@ import {
   DEMO_KEY,
   DESIGN_PREFIX,
   faultMessage,
+  keptAside,
   newId,
   put,
   removeDesign,
@@ -71,6 +72,8 @@ export function createBuildSheetModel(storage: Storage | Fault | null) {
   /** The last save of the design on screen that can be undone, by its label. */
   const lastSave = signal<string | null>(null);
   const status = signal("");
+  /** Unreadable data kept aside in this browser: how many items, how many characters. */
+  const aside = signal({ count: 0, size: 0 });
   const store = typeof storage === "object" && storage !== null ? storage : null;
 
   const results = computed(() => runChecks(current.value.design, current.value.design.units));
@@ -130,7 +133,24 @@ export function createBuildSheetModel(storage: Storage | Fault | null) {
     batch(() => {
       designs.value = loaded.designs;
       if (loaded.messages.length) say(...loaded.messages);
+      countAside();
     });
+  }
+
+  function countAside(): void {
+    const texts = store ? Object.values(keptAside(store)) : [];
+    aside.value = { count: texts.length, size: texts.reduce((n, t) => n + t.length, 0) };
+  }
+
+  /** The data kept aside, as one JSON text for a file. */
+  const asideText = () => `${JSON.stringify(store ? keptAside(store) : {}, null, 2)}\n`;
+
+  /** Deletes the data kept aside (after it has been downloaded, or when it is not wanted), to make room. */
+  function dropAside(): void {
+    if (!store) return;
+    for (const key of Object.keys(keptAside(store))) store.removeItem(key);
+    countAside();
+    status.value = "Deleted the unreadable data kept aside.";
   }
 
   /** Reads one design again (another tab wrote it); the design on screen follows, and says so. */
@@ -402,6 +422,9 @@ export function createBuildSheetModel(storage: Storage | Fault | null) {
     handOverDemo,
     fileText,
     fragment,
+    aside,
+    asideText,
+    dropAside,
   };
 }
 

@@ -110,6 +110,16 @@ export function keepAside(storage: Storage, text: string): boolean {
   return put(storage, key, text) === null;
 }
 
+/** What is kept aside, by key: the unreadable texts, as stored. */
+export function keptAside(storage: Storage): Record<string, string> {
+  const out: Record<string, string> = {};
+  for (let i = 0; i < storage.length; i += 1) {
+    const key = storage.key(i);
+    if (key?.startsWith(ASIDE_PREFIX)) out[key] = storage.getItem(key) ?? "";
+  }
+  return out;
+}
+
 export const designKey = (id: string) => `${DESIGN_PREFIX}${id}`;
 
 /** The ids of the designs stored, in no particular order. */

@@ -9,7 +9,8 @@ import { describe, expect, it } from "vitest";
 import type { BrowserContext, Page } from "playwright-core";
 import { axeViolations, useSite, waitForIslands } from "../support/browser.ts";
 import { demoDesign, designToText } from "../../calc/index.ts";
-import { DESIGN_PREFIX, LEGACY_KEY } from "../../components/design/saved.ts";
+import { ASIDE_PREFIX, DESIGN_PREFIX, LEGACY_KEY } from "../../components/design/saved.ts";
+import { readFileSync } from "node:fs";
 
 const site = useSite();
 const { origin } = site;
@@ -241,7 +242,7 @@ describe("two tabs", () => {
 
 describe("storage faults", () => {
   it("keeps an unreadable entry aside once: loaded 100 times, the storage does not grow", async () => {
-    const context = await site.browser().newContext();
+    const context = await site.browser().newContext({ acceptDownloads: true });
     // The same unreadable entry is there at every load.
     await context.addInitScript((key) => localStorage.setItem(key, "{unreadable"), `${DESIGN_PREFIX}broken`);
     const page = await open(context, "/build-sheet/");
@@ -256,6 +257,14 @@ describe("storage faults", () => {
     const last = await storageOf(page);
     expect(Object.keys(last).sort()).toEqual(Object.keys(first).sort());
     expect(size(last)).toBe(size(first));
+    // The way to see it and make room: download what was kept aside, then delete it.
+    const kept = page.locator(".designs p", { hasText: "unreadable item(s) kept aside" });
+    expect(await kept.textContent()).toContain("1 unreadable item(s) kept aside in this browser (1 KB).");
+    const [download] = await Promise.all([page.waitForEvent("download"), kept.getByRole("button", { name: "Download them" }).click()]);
+    expect(Object.values(JSON.parse(readFileSync((await download.path())!, "utf8")))).toEqual(["{unreadable"]);
+    await kept.getByRole("button", { name: "Delete them" }).click();
+    await expect.poll(() => kept.count()).toBe(0);
+    expect(Object.keys(await storageOf(page)).filter((k) => k.startsWith(ASIDE_PREFIX))).toEqual([]);
     await context.close();
   }, 150_000);
 

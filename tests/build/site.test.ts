@@ -75,12 +75,13 @@ const OVER_BUDGET: Record<string, { js: number; total: number }> = {
  * contract's checks in each, then the weapon-turn check +3.8 KB and the steering check +3.7 KB).
  * Measured 81 844 B JS and 91 093 B in all. Saved designs kept one key per design with a revision
  * number (moving the first version's store, reading a design another tab changed, refusing to save
- * over it, undo of each save, a full storage told apart from a disabled one) added 3.0 KB:
- * measured 84 877 B JS and 94 437 B in all; ceilings are that plus about 1 %. The way back under
- * budget is structural: load a check's code only for the sections a design holds.
+ * over it, undo of each save, a full storage told apart from a disabled one, unreadable data kept
+ * aside with a way to download and delete it) added 3.3 KB: measured 85 155 B JS and 94 716 B in
+ * all; ceilings are that plus about 1 %. The way back under budget is structural: load a check's
+ * code only for the sections a design holds.
  */
-const BUILD_SHEET_JS_CEILING = 85_700;
-const BUILD_SHEET_TOTAL_CEILING = 95_400;
+const BUILD_SHEET_JS_CEILING = 86_000;
+const BUILD_SHEET_TOTAL_CEILING = 95_700;
 /** "Save to design" on a calculator page: what its first press loads (the design writer and its dialog), gzip. */
 const SAVE_JS = 6 * KB;
 
