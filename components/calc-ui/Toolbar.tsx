@@ -2,7 +2,9 @@
  * Unit-system switch and "copy link" for a calculator. The link is the page URL with the current
  * state; copying falls back to selecting the link text where the clipboard is unavailable.
  */
+import { useEffect } from "preact/hooks";
 import { useSignal } from "./reactive.ts";
+import { showTarget } from "./save.ts";
 import type { Signal } from "./reactive.ts";
 import type { UnitSystem } from "../../calc/core/units.ts";
 
@@ -19,6 +21,8 @@ export interface ToolbarProps {
 export function Toolbar({ idPrefix, system, onSystem, link, save }: ToolbarProps) {
   const status = useSignal("");
   const fallback = useSignal<string | null>(null);
+  // Opened from the build sheet: say where "Save to design" writes.
+  useEffect(() => showTarget(status), []);
   async function copy() {
     const url = link();
     try {

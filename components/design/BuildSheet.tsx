@@ -11,6 +11,7 @@ import { CALCULATORS, calculatorFor } from "../../calc/design/registry.ts";
 import type { AnyValues } from "../../calc/core/calculator.ts";
 import { createBuildSheetModel, type BuildSheetModel } from "./model.ts";
 import { type PrintedInput, printedInputs } from "./print.ts";
+import { browserStorage } from "./saved.ts";
 
 const base = () => import.meta.env.BASE_URL.replace(/\/?$/, "/");
 
@@ -38,7 +39,17 @@ function CheckCard({ result, model, inputs }: { result: CheckResult; model: Buil
   const calc = calculatorFor(result.section);
   const stored = design[result.section];
   const values = (result.index === null ? stored : (stored as AnyValues[] | undefined)?.[result.index]) as AnyValues | undefined;
-  const link = calc && values ? linkFor(calc, values, { system: design.units }) : null;
+  // The calculator opened from here saves back into this design and entry (the demo: into a copy).
+  const { origin, id } = model.current.value;
+  const target = origin === "saved" && id ? id : origin === "demo" ? "demo" : null;
+  const into = target
+    ? new URLSearchParams({
+        "save.to": target,
+        "save.in": result.section,
+        ...(result.index === null ? { "save.title": calc?.title ?? result.title } : { "save.entry": String(result.index) }),
+      })
+    : "";
+  const link = calc && values ? linkFor(calc, values, { system: design.units, existing: String(into) }) : null;
   return (
     <li class={`check check--${result.status}`} data-check={result.id}>
       <p class="check-head">
@@ -80,7 +91,9 @@ function CheckCard({ result, model, inputs }: { result: CheckResult; model: Buil
       ) : null}
       {link ? (
         <p class="check-link no-print">
-          <a href={`${base()}${link}`}>Open in the calculator</a>
+          <a href={`${base()}${link}`} onClick={model.handOverDemo} onAuxClick={model.handOverDemo}>
+            Open in the calculator
+          </a>
         </p>
       ) : null}
     </li>
@@ -103,8 +116,19 @@ function Summary({ model }: { model: BuildSheetModel }) {
   );
 }
 
+/** Offers text as a file to save. */
+function download(text: string, name: string): void {
+  const a = document.createElement("a");
+  a.href = URL.createObjectURL(new Blob([text], { type: "application/json" }));
+  a.download = name;
+  document.body.appendChild(a);
+  a.click();
+  a.remove();
+  setTimeout(() => URL.revokeObjectURL(a.href), 1000);
+}
+
 function DesignList({ model }: { model: BuildSheetModel }) {
-  const designs = model.store.value.designs;
+  const designs = model.designs.value;
   return (
     <section class="designs no-print" aria-labelledby="designs-heading">
       <h2 id="designs-heading">Designs saved in this browser</h2>
@@ -128,6 +152,17 @@ function DesignList({ model }: { model: BuildSheetModel }) {
           </li>
         ))}
       </ul>
+      {model.aside.value.count ? (
+        <p>
+          {model.aside.value.count} unreadable item(s) kept aside in this browser ({Math.ceil(model.aside.value.size / 1024)} KB).{" "}
+          <button type="button" class="button button--quiet" onClick={() => download(model.asideText(), "whirlbook-unreadable.json")}>
+            Download them
+          </button>{" "}
+          <button type="button" class="button button--quiet" onClick={model.dropAside}>
+            Delete them
+          </button>
+        </p>
+      ) : null}
       {model.undo.value ? (
         <p class="undo" role="status">
           Deleted “{model.undo.value.entry.design.name}”.{" "}
@@ -149,7 +184,7 @@ function inputsOf(result: CheckResult, design: BuildSheetModel["current"]["value
 }
 
 export default function BuildSheet() {
-  const model = useMemo(() => createBuildSheetModel(typeof localStorage === "undefined" ? null : localStorage), []);
+  const model = useMemo(() => createBuildSheetModel(typeof window === "undefined" ? null : browserStorage()), []);
   const fileInput = useRef<HTMLInputElement>(null);
   const link = useSignal<string | null>(null);
   const printBlock = useRef<HTMLDivElement>(null);
@@ -167,8 +202,14 @@ export default function BuildSheet() {
     model.loadSaved();
     void model.openFromLocation(window.location.hash);
     const onHash = () => void model.openFromLocation(window.location.hash);
+    // Another tab saved, deleted or undid: read that design again.
+    const onStorage = (event: StorageEvent) => model.onStorage(event.key);
     window.addEventListener("hashchange", onHash);
-    return () => window.removeEventListener("hashchange", onHash);
+    window.addEventListener("storage", onStorage);
+    return () => {
+      window.removeEventListener("hashchange", onHash);
+      window.removeEventListener("storage", onStorage);
+    };
   }, [model]);
   // Once a design is saved here, the address no longer points at the demo or a shared link:
   // reloading shows the saved design.
@@ -183,7 +224,7 @@ export default function BuildSheet() {
     saved: "Saved in this browser; changes are saved as you make them.",
     link: "Opened from a link; not saved in this browser yet.",
     file: "Opened from a file; not saved in this browser yet.",
-    demo: "The demo design: an invented robot, for trying the build sheet.",
+    demo: "The demo design: an invented robot, for trying the build sheet. It never changes: saving, here or from a calculator, makes a copy.",
     new: "Not saved in this browser yet.",
   };
 
@@ -199,15 +240,9 @@ export default function BuildSheet() {
   }
 
   function exportFile() {
-    const blob = new Blob([model.fileText()], { type: "application/json" });
-    const a = document.createElement("a");
-    a.href = URL.createObjectURL(blob);
-    a.download = `${design.name.replace(/[^\w.-]+/g, "-").replace(/^-+|-+$/g, "") || "design"}.whirlbook.json`;
-    document.body.appendChild(a);
-    a.click();
-    a.remove();
-    setTimeout(() => URL.revokeObjectURL(a.href), 1000);
-    model.status.value = `Exported ${a.download}.`;
+    const name = `${design.name.replace(/[^\w.-]+/g, "-").replace(/^-+|-+$/g, "") || "design"}.whirlbook.json`;
+    download(model.fileText(), name);
+    model.status.value = `Exported ${name}.`;
   }
 
   function importFile(event: Event) {
@@ -250,6 +285,23 @@ export default function BuildSheet() {
         </div>
       ) : null}
 
+      {model.stale.value ? (
+        <div class="calc-notices no-print" role="alertdialog" aria-labelledby="stale-text">
+          <p id="stale-text">
+            Not saved: “{model.stale.value.mine.name}” was changed in another tab after this sheet read it, and this sheet does not save over that change. This
+            sheet now shows the other tab's version; your version is kept until you choose.
+          </p>
+          <p class="design-actions">
+            <button type="button" class="button" onClick={model.keepMineAsCopy}>
+              Save my version as a copy
+            </button>
+            <button type="button" class="button button--quiet" onClick={model.takeTheirs}>
+              Drop my version
+            </button>
+          </p>
+        </div>
+      ) : null}
+
       <section class="sheet-head" aria-label="Design">
         <div class="field">
           <label for="design-name">Design name</label>
@@ -284,6 +336,11 @@ export default function BuildSheet() {
           {origin !== "saved" ? (
             <button type="button" class="button" onClick={model.saveCurrent}>
               Save in this browser
+            </button>
+          ) : null}
+          {origin === "saved" && model.lastSave.value ? (
+            <button type="button" class="button button--quiet" onClick={model.undoSave} aria-describedby="last-save">
+              Undo last save
             </button>
           ) : null}
           <button type="button" class="button button--quiet" onClick={copyLink}>
@@ -322,6 +379,11 @@ export default function BuildSheet() {
         <p class="calc-status no-print" role="status" aria-live="polite">
           {model.status.value}
         </p>
+        {origin === "saved" && model.lastSave.value ? (
+          <p class="sheet-meta no-print" id="last-save">
+            Last save: {model.lastSave.value}.
+          </p>
+        ) : null}
         {link.value ? (
           <div class="field no-print">
             <label for="design-link">Link to this design</label>

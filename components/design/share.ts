@@ -5,19 +5,12 @@
  * hex digits, which link detectors keep.
  */
 import { deflateSync, Inflate, strFromU8, strToU8 } from "fflate";
+import { checksum } from "./saved.ts";
 import { DESIGN_TEXT_LIMIT, designToText, readDesignText, type Design, type DesignReading } from "../../calc/design/design.ts";
 
 const PREFIX = "d1.";
 
-/** FNV-1a, 32 bits, as 8 hex digits: enough to tell a damaged link from a good one. */
-export function checksum(text: string): string {
-  let hash = 0x811c9dc5;
-  for (let i = 0; i < text.length; i += 1) {
-    hash ^= text.charCodeAt(i);
-    hash = Math.imul(hash, 0x01000193) >>> 0;
-  }
-  return hash.toString(16).padStart(8, "0");
-}
+export { checksum };
 
 function toBase64Url(bytes: Uint8Array): string {
   let binary = "";

@@ -10,7 +10,7 @@ import { join } from "node:path";
 import { startStaticServer } from "../../scripts/static-server.mjs";
 import { DIST_DIR, axeViolations, useSite, waitForIslands } from "../support/browser.ts";
 import { demoDesign, designToText } from "../../calc/index.ts";
-import { STORE_KEY } from "../../components/design/saved.ts";
+import { LEGACY_KEY as STORE_KEY } from "../../components/design/saved.ts";
 
 const site = useSite();
 const { origin } = site;
@@ -51,7 +51,7 @@ describe("build sheet", () => {
     await expect.poll(() => page.locator(".design-name").allTextContents()).toEqual(["Test robot", "Test robot (copy)"]);
     await page.getByRole("button", { name: "Delete Test robot (copy)" }).click();
     await expect.poll(() => page.locator(".design-list li").count()).toBe(1);
-    await page.getByRole("button", { name: "Undo" }).click();
+    await page.getByRole("button", { name: "Undo", exact: true }).click();
     await expect.poll(() => page.locator(".design-name").allTextContents()).toEqual(["Test robot", "Test robot (copy)"]);
     await context.close();
   });
@@ -62,7 +62,8 @@ describe("build sheet", () => {
     await page.getByRole("button", { name: "Save in this browser" }).click();
     const [download] = await Promise.all([page.waitForEvent("download"), page.getByRole("button", { name: "Export file" }).click()]);
     const exported = JSON.parse(readFileSync((await download.path())!, "utf8"));
-    expect(exported.name).toBe("Demo: invented 1.4 kg whole-body spinner");
+    // The demo itself never changes: what is saved is a named copy.
+    expect(exported.name).toBe("Demo copy");
     const fastenersBefore = await checkFigure(page, "fasteners[0]");
     expect(fastenersBefore).toBeTruthy();
     exported.placement.radius = -1;
@@ -81,9 +82,7 @@ describe("build sheet", () => {
     await page.getByRole("button", { name: "Save in this browser" }).click();
     await expect.poll(() => page.locator('[role="alertdialog"]').textContent()).toContain("already called");
     await page.getByRole("button", { name: "Keep both" }).click();
-    await expect
-      .poll(() => page.locator(".design-name").allTextContents())
-      .toEqual(["Demo: invented 1.4 kg whole-body spinner", "Demo: invented 1.4 kg whole-body spinner (2)"]);
+    await expect.poll(() => page.locator(".design-name").allTextContents()).toEqual(["Demo copy", "Demo copy (2)"]);
     await page.setInputFiles('input[type="file"]', { name: "junk.json", mimeType: "application/json", buffer: Buffer.from("{ not json") });
     await expect.poll(() => page.locator('[role="alert"]').first().textContent()).toContain("junk.json could not be opened: The file is not valid JSON");
     expect(await page.locator(".design-list li").count()).toBe(2);
@@ -115,13 +114,14 @@ describe("build sheet", () => {
     await fresh.close();
   });
 
-  it("takes a calculator's state into the active design with “Save to design”", async () => {
+  it("takes a calculator's state into a new design with “Save to design”", async () => {
     const context = await site.browser().newContext();
     const page = await context.newPage();
     await page.goto(`${origin()}/chapters/acceleration/?v=1&rpm=3000rpm&r=12mm&low=500rpm&res=2pct`);
     await waitForIslands(page);
     await page.getByRole("button", { name: "Save to design" }).click();
-    await expect.poll(() => page.locator(".calc-status").textContent()).toContain("Saved to the design “My robot”");
+    await page.getByRole("dialog").getByRole("button", { name: "Save" }).click();
+    await expect.poll(() => page.locator(".calc-status").textContent()).toContain("Saved into “My robot” › Accelerometer placement");
     const sheet = await openSheet(context, "");
     await expect.poll(() => sheet.inputValue("#design-name")).toBe("My robot");
     // 3000 rpm at 12 mm: 314.16² × 0.012 = 1184 m/s² = 121 g (as on the chapter page).
@@ -160,7 +160,7 @@ describe("build sheet", () => {
       }),
     );
     const alert = page.getByRole("alert");
-    await expect.poll(() => alert.textContent()).toContain("1 saved design(s) could not be read; a copy of the stored data was kept aside in this browser.");
+    await expect.poll(() => alert.textContent()).toContain("A saved design could not be read; a copy of the stored data was kept aside in this browser.");
     expect(await alert.getAttribute("class")).toBe("calc-notices");
     await expect.poll(() => page.inputValue("#design-name")).toBe("Kept robot");
     expect(await page.locator(".design-list li .design-name").allTextContents()).toEqual(["Kept robot"]);

@@ -8,7 +8,7 @@
 import { afterEach, describe, expect, it } from "vitest";
 import { renderToString } from "preact-render-to-string";
 import BuildSheet from "../../components/design/BuildSheet.tsx";
-import { STORE_KEY } from "../../components/design/saved.ts";
+import { LEGACY_KEY as STORE_KEY } from "../../components/design/saved.ts";
 import { demoDesign, designToText } from "../../calc/index.ts";
 
 afterEach(() => localStorage.clear());

@@ -21,29 +21,6 @@ import {
   type InputSpecs,
 } from "../../calc/index.ts";
 import { checksum, designFromFragment, designToFragment } from "../../components/design/share.ts";
-import { loadStore, saveStore, STORE_KEY, uniqueName } from "../../components/design/store.ts";
-
-class MemoryStorage implements Storage {
-  private data = new Map<string, string>();
-  get length() {
-    return this.data.size;
-  }
-  clear() {
-    this.data.clear();
-  }
-  getItem(key: string) {
-    return this.data.get(key) ?? null;
-  }
-  key(index: number) {
-    return [...this.data.keys()][index] ?? null;
-  }
-  removeItem(key: string) {
-    this.data.delete(key);
-  }
-  setItem(key: string, value: string) {
-    this.data.set(key, value);
-  }
-}
 
 /** Any values a calculator accepts: each number inside its declared range (whole where declared). */
 function numbers<S extends InputSpecs>(specs: S): fc.Arbitrary<{ [K in keyof S]: number }> {
@@ -193,25 +170,5 @@ describe("a design in a link", () => {
   it("uses FNV-1a for the check digits (published test vector: 'a' → e40c292c)", () => {
     expect(checksum("a")).toBe("e40c292c");
     expect(checksum("")).toBe("811c9dc5");
-  });
-});
-
-describe("designs saved in the browser", () => {
-  it("keeps a damaged store aside instead of throwing it away", () => {
-    const storage = new MemoryStorage();
-    storage.setItem(STORE_KEY, "{oops");
-    const { store, warning } = loadStore(storage);
-    expect(store.designs).toEqual([]);
-    expect(warning).toContain("kept aside");
-    expect([...Array(storage.length).keys()].map((i) => storage.key(i)).some((k) => k?.startsWith(`${STORE_KEY}.unreadable.`))).toBe(true);
-  });
-
-  it("saves and loads designs and picks unique names", () => {
-    const storage = new MemoryStorage();
-    const store = { designs: [{ id: "a", design: demoDesign() }], activeId: "a" };
-    saveStore(storage, store);
-    expect(loadStore(storage)).toEqual({ store, warning: null });
-    expect(uniqueName(store, demoDesign().name)).toBe(`${demoDesign().name} (2)`);
-    expect(uniqueName(store, "Other")).toBe("Other");
   });
 });
