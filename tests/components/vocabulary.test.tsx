@@ -179,7 +179,7 @@ describe("one term per idea", () => {
     expect(texts["spin-up"]).toContain("Speed (× 1000 rpm)");
     expect(texts.placement).toContain("Resolution (1 LSB)");
     expect(texts.fasteners).toContain("Marginal below");
-    expect(texts.fasteners).toContain("Spin speed (× 1000 rpm)");
+    expect(texts.fasteners).toContain("Friction coefficient");
     expect(texts["heading-timing"]).toContain("Heading LED arc");
     expect(texts.calibration).toContain("Offset b̂");
   });
@@ -231,7 +231,7 @@ describe("real subscripts", () => {
     const html = renderToString(<FastenerCalculator id="f" />);
     expect(html).toContain("R<sub>p0.2,min</sub>");
     expect(html).toContain("R<sub>m,min</sub>");
-    expect(html).toContain("stress area Aₛ");
+    expect(html).toContain("Stress area Aₛ");
     noRawSubscript(html);
   });
 
