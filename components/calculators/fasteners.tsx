@@ -10,10 +10,10 @@ import {
   fastenerChoices as FASTENER_CHOICES,
   JOINT_MODE_WORDS,
   RETIRED_LINK_KEYS,
-  run as fastenerRun,
   strengthBasisWords,
-} from "../../calc/calculators/fasteners.ts";
-import type { BoltedJointCheck, boltedJointInputs, JointModeName } from "../../calc/loads/joint-inputs.ts";
+} from "../../calc/loads/joint-form.ts";
+import type { BoltedJointCheck, BoltedJointInput, boltedJointInputs, JointModeName } from "../../calc/loads/joint-inputs.ts";
+import { type AnyValues, initialValues } from "../../calc/core/calculator.ts";
 import type { ComponentChildren } from "preact";
 import type { ChoiceSpec } from "../../calc/core/choices.ts";
 import { formatNumber } from "../../calc/core/units.ts";
@@ -23,6 +23,7 @@ import { ResultBar } from "../calc-ui/ResultBar.tsx";
 import { Notices } from "../calc-ui/Notices.tsx";
 import { linkFor, syncWithUrl } from "../calc-ui/url-sync.ts";
 import { createCalculatorModel, type PageState } from "../calc-ui/model.ts";
+import { computed, signal } from "../calc-ui/reactive.ts";
 import { ChoiceField } from "../loads/ChoiceField.tsx";
 import { area, Outputs, q, VERDICT_TONE, verdictRule } from "../loads/format.tsx";
 import { Verdict } from "../calc-ui/Verdict.tsx";
@@ -57,15 +58,60 @@ const retiredKeys: PageState = {
   write: () => ({}),
 };
 
-export function createFastenerModel() {
-  const model = createCalculatorModel(fastenerCalculator, fastenerRun, "metric", retiredKeys);
+// The joint check's code (calc/loads/joint.ts, with the thread, grade and material tables) loads on
+// the first input that leaves the defaults; the defaults' result comes with the page, computed at
+// build time. Once loaded it stays for every calculator on the page.
+type JointCheck = (input: BoltedJointInput) => BoltedJointCheck;
+const loadedCheck = signal<JointCheck | null>(null);
+const loadFailed = signal(false);
+let loading: Promise<void> | null = null;
+
+/** Loads the joint check (once); resolves when it can run. */
+export function loadJointCheck(): Promise<void> {
+  loading ??= import("../../calc/loads/joint.ts").then(
+    (module) => {
+      loadedCheck.value = module.boltedJointCheck;
+      loadFailed.value = false;
+    },
+    () => {
+      loading = null;
+      loadFailed.value = true;
+    },
+  );
+  return loading;
+}
+
+/** Whether two sets of values are the same (numbers and choices). */
+function sameValues(a: AnyValues, b: AnyValues): boolean {
+  return Object.keys(b).every((key) => Object.is(a[key], b[key]));
+}
+
+/** Thrown while the check's code is on its way: the widget shows that it is coming, not an error. */
+class CheckLoading extends Error {}
+
+/**
+ * The calculator's model. `initial` is the check's result for the calculator's defaults (computed at
+ * build time): it answers until an input changes, and then the check's code is loaded.
+ */
+export function createFastenerModel(initial?: BoltedJointCheck | null) {
+  const defaults = initialValues(fastenerCalculator) as AnyValues;
+  const run = (values: BoltedJointInput): BoltedJointCheck => {
+    const check = loadedCheck.value;
+    if (check) return check(values);
+    if (initial && sameValues(values, defaults)) return initial;
+    if (typeof window !== "undefined") void loadJointCheck();
+    throw new CheckLoading();
+  };
+  const model = createCalculatorModel(fastenerCalculator, run, "metric", retiredKeys);
+  /** True while the values wait for the check's code (the outcome's error is then not the user's). */
+  const waiting = computed(() => model.values.value !== null && loadedCheck.value === null && !(initial && sameValues(model.values.value, defaults)));
   /** Picks a size; a grade of the other system becomes the nearest grade of the size's system. */
   function pickSize(size: string): void {
     model.choices.size.value = size;
     const grade = model.choices.grade.value;
     if (isMetricSize(size) !== isMetricGrade(grade)) model.choices.grade.value = MATCHING_GRADE[grade] ?? grade;
   }
-  return { ...model, input: model.values, pickSize };
+  return { ...model, input: model.values, pickSize, waiting, loadFailed };
 }
 
 type FastenerModel = ReturnType<typeof createFastenerModel>;
@@ -73,6 +119,14 @@ type FastenerModel = ReturnType<typeof createFastenerModel>;
 export interface FastenerCalculatorProps {
   /** Element id of the calculator (the link's anchor). */
   id?: string;
+  /** The check's result for the defaults, computed at build time (the chapter passes it). */
+  initial?: BoltedJointCheck | null;
+}
+
+/** What stands in for the results while the check's code loads, or when it could not. */
+function waitingText(model: FastenerModel): string | null {
+  if (!model.waiting.value) return null;
+  return model.loadFailed.value ? "The joint check could not be loaded: reload the page to try again." : "Working out the joint…";
 }
 
 type FieldName = keyof typeof boltedJointInputs;
@@ -136,9 +190,15 @@ function Field({ model, id, name, error }: { model: FastenerModel; id: string; n
 function FastenerBar({ model, id }: { model: FastenerModel; id: string }) {
   const { result, error } = model.outcome.value;
   const resultsId = `${id}-results`;
+  const waiting = waitingText(model);
   if (!result)
     return (
-      <ResultBar tone={null} figures={[]} resultsId={resultsId} missing={error?.field === null ? error.message : "No result yet: correct the marked field."} />
+      <ResultBar
+        tone={null}
+        figures={[]}
+        resultsId={resultsId}
+        missing={waiting ?? (error?.field === null ? error.message : "No result yet: correct the marked field.")}
+      />
     );
   return (
     <ResultBar
@@ -189,9 +249,10 @@ function Results({ model, id }: { model: FastenerModel; id: string }) {
   const { result: r, error } = model.outcome.value;
   const values = model.fields.values.value;
   if (!r || !values) {
+    const waiting = waitingText(model);
     return (
       <div class="calc-results calc-results--empty" id={`${id}-results`} aria-live="polite">
-        <p>{error && error.field === null ? error.message : "Results appear when every field above holds a valid value."}</p>
+        <p>{waiting ?? (error && error.field === null ? error.message : "Results appear when every field above holds a valid value.")}</p>
       </div>
     );
   }
@@ -281,8 +342,8 @@ function Results({ model, id }: { model: FastenerModel; id: string }) {
   );
 }
 
-export default function FastenerCalculator({ id = fastenerCalculator.anchor }: FastenerCalculatorProps) {
-  const model = useMemo(() => createFastenerModel(), []);
+export default function FastenerCalculator({ id = fastenerCalculator.anchor, initial = null }: FastenerCalculatorProps) {
+  const model = useMemo(() => createFastenerModel(initial), []);
   useEffect(() => syncWithUrl(model), [model]);
   const { fields } = model;
   const error = model.outcome.value.error;

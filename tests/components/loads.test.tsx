@@ -2,7 +2,7 @@
  * The bolt and rim calculators' models (choices in the URL, materials filling fields, errors on
  * the right field) and their server render (the path Astro islands take).
  */
-import { describe, expect, it } from "vitest";
+import { beforeAll, describe, expect, it } from "vitest";
 import { renderToString } from "preact-render-to-string";
 import { demoRobotLoads, rimMaterialChoices } from "../../calc/loads/index.ts";
 import fasteners from "../../calc/calculators/fasteners.ts";
@@ -10,7 +10,7 @@ import rims from "../../calc/calculators/rims.ts";
 import { initialValues, linkQuery, readLink } from "../../calc/core/calculator.ts";
 import { boltedJointCheck } from "../../calc/loads/joint.ts";
 import type { BoltedJointCheck, BoltedJointInput } from "../../calc/loads/joint-inputs.ts";
-import FastenerCalculator, { createFastenerModel } from "../../components/calculators/fasteners.tsx";
+import FastenerCalculator, { createFastenerModel, loadJointCheck } from "../../components/calculators/fasteners.tsx";
 import RimCalculator, { createRimModel } from "../../components/calculators/rims.tsx";
 
 const CUSTOM_MATERIAL = "custom";
@@ -27,7 +27,31 @@ function jointFor(values: Partial<BoltedJointInput>): BoltedJointCheck {
   return boltedJointCheck({ ...(initialValues(fasteners) as unknown as BoltedJointInput), ...values });
 }
 
+describe("the bolt calculator before its check's code has loaded", () => {
+  // Runs first: the check's code is loaded once per page and then stays.
+  it("answers the defaults from the result computed at build time, without loading the check", () => {
+    const model = createFastenerModel(jointFor({}));
+    expect(model.outcome.value.result).toEqual(jointFor({}));
+    expect(model.waiting.value).toBe(false);
+  });
+
+  it("waits for the check's code once an input changes, says so, and then answers", async () => {
+    const model = createFastenerModel(jointFor({}));
+    model.fields.texts.stackHeight.value = "8.4 mm";
+    expect(model.outcome.value.result).toBeNull();
+    expect(model.waiting.value).toBe(true);
+    const html = renderToString(<FastenerCalculator id="w" />);
+    expect(html).toContain("Working out the joint…");
+    await loadJointCheck();
+    expect(model.waiting.value).toBe(false);
+    expect(model.outcome.value.result).toEqual(jointFor({ stackHeight: model.values.value!.stackHeight }));
+    close(model.values.value!.stackHeight, 0.0084, 1e-12);
+  });
+});
+
 describe("the bolt calculator's model", () => {
+  beforeAll(() => loadJointCheck());
+
   it("starts on the joint check's defaults: an M4 8.8 tapped into 6061-T6, clamped at 75 % of proof, and friction governs", () => {
     const model = createFastenerModel();
     const result = model.outcome.value.result!;
@@ -163,7 +187,7 @@ describe("the bolt calculator's model", () => {
 
 describe("the bolt calculator's server render", () => {
   it("shows each mode's factor, the governing one marked, and the basis of the strengths", () => {
-    const html = renderToString(<FastenerCalculator id="f" />);
+    const html = renderToString(<FastenerCalculator id="f" initial={jointFor({})} />);
     expect(html).toContain('data-out="sf-friction"');
     expect(html).toContain('data-out="sf-bending"');
     expect(html).toContain('data-out="sf-stripping"');
@@ -275,7 +299,7 @@ describe("server render (the path Astro islands take)", () => {
   const cases = [
     {
       name: "bolt calculator",
-      html: renderToString(<FastenerCalculator id="fc" />),
+      html: renderToString(<FastenerCalculator id="fc" initial={jointFor({})} />),
       inputs: 14,
       selects: 5,
       radios: 8,
