@@ -234,7 +234,7 @@ function ModeTable({ r }: { r: BoltedJointCheck }) {
           <tr key={m} class={m === r.governs ? "joint-governs" : undefined}>
             <th scope="row">
               {JOINT_MODE_WORDS[m]}
-              {m === r.governs ? <strong> (governs)</strong> : null}
+              {m === r.governs ? <strong class="joint-governs-mark"> governs</strong> : null}
             </th>
             <td data-out={`sf-${m}`}>{formatNumber(r.safetyFactors[m]!)}</td>
           </tr>
@@ -269,7 +269,7 @@ function Results({ model, id }: { model: FastenerModel; id: string }) {
   rows.push([
     r.preloadFrom === "torque" ? "From the tightening torque" : "Tightening torque for it",
     "torque",
-    `${q(r.preload.torque, "torque", system)} at K = ${formatNumber(values.nutFactor)}`,
+    `${q(r.preload.torque, "torque", system)} at K = ${Number(values.nutFactor.toPrecision(3))}`,
   ]);
   if (r.slip) {
     rows.push(["Shear the clamp carries, μ·Fᵢ·n·faces", "clamp", q(r.slip.clampCapacity, "force", system)]);
@@ -328,9 +328,9 @@ function Results({ model, id }: { model: FastenerModel; id: string }) {
         </p>
       ) : null}
       <Outputs rows={rows} />
-      <h4 class="joint-basis" data-out="basis">
+      <p class="joint-basis" data-out="basis">
         Bolt strengths: {basis} values
-      </h4>
+      </p>
       <Outputs rows={strengthRows} />
       {r.tappedThread ? (
         <p class="joint-note" data-out="part-basis">

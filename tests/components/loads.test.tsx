@@ -191,7 +191,7 @@ describe("the bolt calculator's server render", () => {
     expect(html).toContain('data-out="sf-friction"');
     expect(html).toContain('data-out="sf-bending"');
     expect(html).toContain('data-out="sf-stripping"');
-    expect(html).toContain("(governs)");
+    expect(html).toContain("joint-governs-mark");
     expect(html).toContain("Bolt strengths: ISO 898-1 specified minimum values");
     expect(html).toContain("from typical values of the materials table");
     // The inch grades are not offered beside a metric size.
