@@ -73,17 +73,17 @@ export const fastenerChoices = defineChoices({
     urlKey: "into",
     options: THREAD_IN_OPTIONS,
     default: BOLTED_JOINT_CHOICE_DEFAULTS.threadIn,
-    help: "A nut of the matching grade, or a thread tapped into the part (checked for stripping).",
+    help: "A nut of the matching grade, or a thread tapped into a part of this material (checked for stripping).",
   },
   endCondition: {
     label: "Bolt over the stack",
     urlKey: "end",
     options: [
-      { value: "cantilever", label: "Head free to tilt (M = F·h)" },
-      { value: "guided", label: "Both ends held square (M = F·h/2)" },
+      { value: "cantilever", label: "Head free to tilt" },
+      { value: "guided", label: "Both ends held square" },
     ],
     default: BOLTED_JOINT_CHOICE_DEFAULTS.endCondition,
-    help: "How the slipped bolt bends over the stack (Roark). Free to tilt is the safe choice.",
+    help: "How the slipped bolt bends over the stack (Roark): free to tilt, M = F·h, the safe choice; held square at both ends, M = F·h/2.",
   },
   memberMaterial: {
     label: "Clamped parts",

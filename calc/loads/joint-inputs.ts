@@ -35,10 +35,10 @@ export const LOAD_SOURCE_OPTIONS = [
 
 export type LoadSource = (typeof LOAD_SOURCE_OPTIONS)[number]["value"];
 
-/** What the bolt threads into: a nut, or a thread tapped into a part of one of the table's materials. */
+/** What the bolt threads into: a nut, or a thread tapped into a part of one of the table's materials (labelled by its menu name). */
 export const THREAD_IN_OPTIONS: readonly ChoiceOption<"nut" | MaterialId>[] = [
   { value: "nut", label: "A nut" },
-  ...MATERIAL_IDS.map((id) => ({ value: id, label: `Tapped ${MATERIAL_DENSITIES[id].menuName}` })),
+  ...MATERIAL_IDS.map((id) => ({ value: id, label: MATERIAL_DENSITIES[id].menuName })),
 ];
 
 /** Materials of the clamped parts, for their stiffness: the rows of the materials table. */

@@ -213,7 +213,7 @@ function FastenerBar({ model, id }: { model: FastenerModel; id: string }) {
 }
 
 /** The menu name of the tapped part's material. */
-const partName = (threadIn: string) => FASTENER_CHOICES.threadIn.options.find((o) => o.value === threadIn)?.label.replace(/^Tapped /, "") ?? threadIn;
+const partName = (threadIn: string) => FASTENER_CHOICES.threadIn.options.find((o) => o.value === threadIn)?.label ?? threadIn;
 
 const SHORT_MODE: Record<JointModeName, string> = { friction: "friction", shear: "shear", bending: "bending", tension: "tension", stripping: "stripping" };
 
