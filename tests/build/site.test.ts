@@ -76,11 +76,14 @@ const OVER_BUDGET: Record<string, { js: number; total: number }> = {
 /**
  * The build sheet's script over its 70 KB budget: it loads every calculator's check at once (the
  * contract's checks in each, then the weapon-turn check +3.8 KB and the steering check +3.7 KB).
- * Measured 81 844 B JS and 91 093 B in all; ceilings are that plus about 1 %. The way back under
- * budget is structural: load a check's code only for the sections a design holds.
+ * Measured 81 844 B JS and 91 093 B in all. The bolted-joint check then replaced the fasteners'
+ * average-shear check (+8.2 KB: preload, slip, bending, stiffness, the tapped thread, the inch sizes
+ * and grades and the materials table it reads): measured 90 012 B JS and 99 523 B in all; ceilings
+ * are that plus about 1 %. The way back under budget is structural: load a check's code only for
+ * the sections a design holds.
  */
-const BUILD_SHEET_JS_CEILING = 82_700;
-const BUILD_SHEET_TOTAL_CEILING = 92_000;
+const BUILD_SHEET_JS_CEILING = 90_900;
+const BUILD_SHEET_TOTAL_CEILING = 100_500;
 
 describe("the built site", () => {
   it("was built (run `npm run build` first)", () => {
