@@ -35,10 +35,12 @@ const KIB = 1024;
  * and search entries, and that code on the build sheet, about 25 KiB, so the ceiling rose from 565
  * to 590 KiB); with 16 (the steering chapter: its page, its script with the simulation behind its
  * button, its search entries and the steering check on the build sheet, about 42 KiB) the ceiling
- * is 640 KiB. The 500 KiB target is not met: what remains is used (pages, scripts, 6 fonts, the
- * search index and its code).
+ * is 640 KiB. The bolted-joint check then added about 10 KiB (its code on the build sheet and as
+ * the fasteners page's on-use chunk, the chapter's longer text, formulas and inch tables, and their
+ * search entries): measured 650 KiB (665 504 B), ceiling 660 KiB. The 500 KiB target is not met:
+ * what remains is used (pages, scripts, 6 fonts, the search index and its code).
  */
-const PRECACHE_GZIP_CEILING = 640 * KIB;
+const PRECACHE_GZIP_CEILING = 660 * KIB;
 
 describe("compressed copies", () => {
   const text = () => files().filter((f) => /\.(html|css|js|svg|json)$/.test(f));
