@@ -1,75 +1,47 @@
 /**
- * The fastener calculator (chapter "fasteners"): whether the bolts holding a spinning part survive
- * its centrifugal pull, by ISO 898-1 class strengths. A design lists several joints.
+ * The fastener calculator (chapter "fasteners"): whether a bolted joint holding a spinning part (or
+ * carrying a known load) survives, by the joint check of calc/loads/joint.ts: the clamp from the
+ * preload, friction, the slipped bolt's shear and bending over a stack, the bolt in tension, the
+ * thread tapped into the part. A design lists several joints. The form (inputs, menus, link keys)
+ * is declared in calc/loads/joint-form.ts.
+ *
+ * Link keys: the earlier average-shear check's keys still open (m, r, rpm, n, size, cls, mode, fail,
+ * thin keep their meaning); its shear ratio (sr) and shear plane (plane) are read as page keys and no
+ * longer change the result.
  */
-import { ratioFigure, figureOf } from "../core/check.ts";
-import { defineChoices } from "../core/choices.ts";
-import { defineCalculator, defineForm } from "../core/calculator.ts";
+import { ratioFigure, figureOf, type CheckFigure } from "../core/check.ts";
+import { defineCalculator } from "../core/calculator.ts";
 import { formatNumber, formatQuantity } from "../core/units.ts";
-import { FASTENER_CHOICE_DEFAULTS, fastenerCheck, fastenerCheckInputs, LOADING_MODE_OPTIONS, SHEAR_PLANE_OPTIONS } from "../loads/bolts.ts";
-import { PROPERTY_CLASS_OPTIONS, THREAD_SIZE_OPTIONS } from "../loads/fasteners.ts";
+import type { JointModeName } from "../loads/joint-inputs.ts";
+import { boltedJointCheck } from "../loads/joint.ts";
+import { form, gradeWords, JOINT_MODE_WORDS, strengthBasisWords } from "../loads/joint-form.ts";
 
-/** The category inputs of the fastener check, with their link keys. */
-export const fastenerChoices = defineChoices({
-  size: {
-    label: "Thread size",
-    urlKey: "size",
-    options: THREAD_SIZE_OPTIONS,
-    default: FASTENER_CHOICE_DEFAULTS.size,
-    help: "ISO metric coarse thread: nominal diameter × pitch, in mm.",
-  },
-  propertyClass: {
-    label: "Property class",
-    urlKey: "cls",
-    options: PROPERTY_CLASS_OPTIONS,
-    default: FASTENER_CHOICE_DEFAULTS.propertyClass,
-    help: "The number stamped on the head; the strengths are the ISO 898-1 minimums. Q&T: quenched and tempered.",
-  },
-  mode: {
-    label: "Loading",
-    urlKey: "mode",
-    options: LOADING_MODE_OPTIONS,
-    default: FASTENER_CHOICE_DEFAULTS.mode,
-    help: "A bolt parallel to the spin axis is loaded in shear; one pointing at the axis, in tension.",
-  },
-  shearPlane: {
-    label: "Shear plane",
-    urlKey: "plane",
-    options: SHEAR_PLANE_OPTIONS,
-    default: FASTENER_CHOICE_DEFAULTS.shearPlane,
-    help: "Read in shear only. Through the thread is the safe choice unless the plain shank surely spans the joint face.",
-  },
-});
+export { fastenerChoices, fastenerInputApplies, form, gradeWords, JOINT_MODE_WORDS, RETIRED_LINK_KEYS, strengthBasisWords } from "../loads/joint-form.ts";
 
-export const form = /* @__PURE__ */ defineForm({
-  id: "fasteners",
-  title: "Fasteners",
-  chapter: "fasteners",
-  anchor: "fastener-calculator",
-  order: 60,
-  list: { max: 24, entryName: "Fasteners" },
-  inputs: fastenerCheckInputs,
-  choices: fastenerChoices,
-});
-
-/** What the calculator computes: its page runs this; the cards below speak for the build sheet and the command line. */
-export const run = fastenerCheck;
+/**
+ * What the calculator computes; the cards below speak for the build sheet and the command line. Its
+ * page loads this code only once the inputs leave the defaults (the defaults' result is computed at
+ * build time), so the page itself carries the form and not the check.
+ */
+export const run = boltedJointCheck;
 
 export default /* @__PURE__ */ defineCalculator(form, {
   run,
   cards(values, r, system) {
     const q = (v: number, kind: "force" | "angularSpeed" | "stress") => formatQuantity(v, kind, { system }).text;
+    const factors: CheckFigure[] = (Object.keys(JOINT_MODE_WORDS) as JointModeName[])
+      .filter((mode) => r.safetyFactors[mode] !== null)
+      .map((mode) => ratioFigure(`Safety factor, ${JOINT_MODE_WORDS[mode]}`, r.safetyFactors[mode]!));
+    const load = r.part ? `${q(r.totalLoad, "force")} pull at ${q(values.angularSpeed, "angularSpeed")}` : `${q(r.totalLoad, "force")} load`;
+    const part = r.tappedThread ? `; part thread ${r.tappedThread.materialBasis} values` : "";
     return [
       {
         title: "Fasteners",
         status: r.verdict,
-        rule: `Safety factor at least ${formatNumber(values.marginalBelow)} holds, below ${formatNumber(values.failBelow)} fails (${values.count} × ${r.size} class ${r.propertyClass} in ${r.mode}, ISO 898-1 minimum strengths)`,
-        margin: `${q(r.part.force, "force")} pull at ${q(values.angularSpeed, "angularSpeed")}: ${q(r.stress, "stress")} per bolt, safety factor ${formatNumber(r.safetyFactor)} (${r.governs})`,
+        rule: `Safety factor at least ${formatNumber(values.marginalBelow)} holds, below ${formatNumber(values.failBelow)} fails (${values.count} × ${r.thread.label} ${gradeWords(r.grade)} in ${r.jointMode}, ${strengthBasisWords(r)} strengths${part})`,
+        margin: `${load}, preload ${q(r.preload.force, "force")} per bolt: ${JOINT_MODE_WORDS[r.governs]} governs, safety factor ${formatNumber(r.safetyFactor)}. ${r.reason}`,
         figure: ratioFigure("Safety factor", r.safetyFactor),
-        details: [
-          figureOf("Speed at which the bolts yield", r.speedAtYield, "angularSpeed", system),
-          figureOf("Load on each bolt", r.forcePerBolt, "force", system),
-        ],
+        details: [...factors, figureOf("Preload per bolt", r.preload.force, "force", system), figureOf("Load on each bolt", r.loadPerBolt, "force", system)],
       },
     ];
   },

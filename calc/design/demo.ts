@@ -14,7 +14,7 @@ import { DEMO_SPINNER } from "../drivetrain/demo.ts";
 import { drivetrainInputs } from "../drivetrain/inputs.ts";
 import { accelerometerPlacementInputs } from "../rotation/rotation.ts";
 import { headingDriftInputs } from "../heading/drift-inputs.ts";
-import { rimMaterial, DEFAULT_SAFETY_THRESHOLDS, DEFAULT_SHEAR_RATIO } from "../loads/index.ts";
+import { rimMaterial, DEFAULT_SAFETY_THRESHOLDS, demoRobotLoads } from "../loads/index.ts";
 import { rpmToRadPerSecond } from "../core/units.ts";
 import { STANDARD_GRAVITY } from "../core/constants.ts";
 
@@ -35,6 +35,7 @@ export function demoDesign(): Design {
   const assumedRadius = Math.hypot(sensor.x, sensor.y);
   const trueRadius = Math.hypot(sensor.x - layout.centreX, sensor.y - layout.centreY);
   const stamp = "2026-11-30T12:00:00.000Z";
+  const joint = demoRobotLoads({ washerMass: 0.042, washerRadius: 0.055, topSpeed: speed });
   const thresholds = { failBelow: DEFAULT_SAFETY_THRESHOLDS.failBelow, marginalBelow: DEFAULT_SAFETY_THRESHOLDS.marginalBelow };
   return {
     format: DESIGN_FORMAT,
@@ -76,31 +77,26 @@ export function demoDesign(): Design {
     fasteners: [
       {
         ...initialValues(fastenerCalculator),
-        name: "Counterweight washers (one M4 bolt)",
-        partMass: 0.042,
-        radius: 0.055,
-        angularSpeed: speed,
-        count: 1,
-        shearRatio: DEFAULT_SHEAR_RATIO,
+        ...joint.jointInput,
         ...thresholds,
-        size: "M4",
-        propertyClass: "8.8",
-        mode: "shear",
-        shearPlane: "thread",
+        name: "Counterweight washers (one M4 bolt)",
       },
       {
         ...initialValues(fastenerCalculator),
+        ...thresholds,
         name: "Battery bracket (two M3 bolts)",
         partMass: 0.3,
         radius: 0.016,
         angularSpeed: speed,
         count: 2,
-        shearRatio: DEFAULT_SHEAR_RATIO,
-        ...thresholds,
         size: "M3",
-        propertyClass: "8.8",
-        mode: "shear",
-        shearPlane: "thread",
+        grade: "8.8",
+        jointMode: "shear",
+        // The bracket's 2 mm foot stands between the plate and the battery; the screws are tapped into the 5 mm base plate.
+        stackHeight: 0.002,
+        gripLength: 0.002,
+        threadIn: "al-6061-t6",
+        engagedLength: 0.005,
       },
     ],
     rims: [

@@ -13,6 +13,7 @@ import { requireInputObject } from "../core/spec-check.ts";
 import { CALCULATORS } from "./registry.ts";
 import { DESIGN_FORMAT, DESIGN_VERSION, type Design, HEADER_FIELDS } from "./format.ts";
 import { readSection, type DesignProblem, SectionDropped } from "./sections.ts";
+import { BOLTED_JOINT_CHOICE_DEFAULTS, boltedJointInputs } from "../loads/joint-inputs.ts";
 
 export type { DesignProblem } from "./sections.ts";
 export * from "./format.ts";
@@ -39,6 +40,51 @@ export const MIGRATIONS: Readonly<Record<number, Migration>> = {
     const { scalars, ...rest } = mass as Record<string, unknown>;
     return { ...design, mass: { ...(typeof scalars === "object" && scalars !== null ? scalars : {}), ...rest } };
   },
+  // 2 → 3: the fastener check became the bolted-joint check. "propertyClass" is now "grade" and
+  // "mode" is "jointMode" (same values); the shear ratio and shear plane are no longer read (one
+  // shear rule, shear through the thread). The joint's new values are written out explicitly, so
+  // that the entry reads without a missing-value report.
+  2: (design) => ({ ...design, fasteners: Array.isArray(design.fasteners) ? design.fasteners.map(migrateFastenerEntry) : design.fasteners }),
+};
+
+/**
+ * What an entry of the earlier average-shear fastener check becomes: the same part, speed, bolts,
+ * size, class and thresholds, with the joint check's defaults for the clamp, the stack and the
+ * thread (`FASTENER_JOINT_DEFAULTS`). An entry that is not an object is passed on for the reader to
+ * report.
+ */
+function migrateFastenerEntry(entry: unknown): unknown {
+  if (typeof entry !== "object" || entry === null || Array.isArray(entry)) return entry;
+  const { propertyClass, mode, shearPlane: _plane, shearRatio: _ratio, ...rest } = entry as Record<string, unknown>;
+  return {
+    ...FASTENER_JOINT_DEFAULTS,
+    ...rest,
+    ...(propertyClass !== undefined && rest.grade === undefined ? { grade: propertyClass } : {}),
+    ...(mode !== undefined && rest.jointMode === undefined ? { jointMode: mode } : {}),
+  };
+}
+
+/**
+ * The joint check's values an entry of design version 2 did not have, at the calculator's
+ * defaults (calc/loads/joint-inputs.ts): a bolt tightened to 75 % of proof, μ = 0.2, a 5 mm stack,
+ * tapped 8 mm deep into 6061-T6.
+ */
+const FASTENER_JOINT_DEFAULTS: Readonly<Record<string, number | string>> = {
+  load: boltedJointInputs.load.default,
+  stackHeight: boltedJointInputs.stackHeight.default,
+  gripLength: boltedJointInputs.gripLength.default,
+  shankLength: boltedJointInputs.shankLength.default,
+  preloadShare: boltedJointInputs.preloadShare.default,
+  tighteningTorque: boltedJointInputs.tighteningTorque.default,
+  nutFactor: boltedJointInputs.nutFactor.default,
+  frictionCoefficient: boltedJointInputs.frictionCoefficient.default,
+  interfaces: boltedJointInputs.interfaces.default,
+  engagedLength: boltedJointInputs.engagedLength.default,
+  loadFrom: BOLTED_JOINT_CHOICE_DEFAULTS.loadFrom,
+  preloadFrom: BOLTED_JOINT_CHOICE_DEFAULTS.preloadFrom,
+  threadIn: BOLTED_JOINT_CHOICE_DEFAULTS.threadIn,
+  endCondition: BOLTED_JOINT_CHOICE_DEFAULTS.endCondition,
+  memberMaterial: BOLTED_JOINT_CHOICE_DEFAULTS.memberMaterial,
 };
 
 /** Brings a raw design of an older version forward to `DESIGN_VERSION`, step by step. */

@@ -8,8 +8,11 @@ import { requireInputObject } from "../core/spec-check.ts";
 
 /** The format tag every design file carries. */
 export const DESIGN_FORMAT = "whirlbook-design";
-/** The version this code writes. Version 2 stores the mass section's numbers beside its parts list. */
-export const DESIGN_VERSION = 2;
+/**
+ * The version this code writes. Version 2 stores the mass section's numbers beside its parts list;
+ * version 3 stores each fastener entry as a bolted joint (grade, joint mode, clamp, stack, thread).
+ */
+export const DESIGN_VERSION = 3;
 
 /** One entry of a list section: the calculator's values and a name for people ("weapon pulley bolts"). */
 export type NamedValues = AnyValues & { name: string };

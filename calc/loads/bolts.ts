@@ -6,9 +6,9 @@
 import { CalcInputError, requireInRange, requireNonNegative, requirePositive } from "../core/errors.ts";
 import { requireDeclared, requireFiniteFields, requireInputObject, requireFiniteResult, declaredInputs } from "../core/spec-check.ts";
 import { defineInputs } from "../core/inputs.ts";
+import { SPINNING_PART_INPUTS } from "./spinning-part.ts";
 import type { PartLoad } from "../rotation/rotation.ts";
 import { STANDARD_GRAVITY } from "../core/constants.ts";
-import { rpmToRadPerSecond } from "../core/units.ts";
 import {
   metricThread,
   PROPERTY_CLASS_OPTIONS,
@@ -76,24 +76,8 @@ export const fastenerCheckInputs = defineInputs({
     urlKey: "m",
     help: "Everything the bolts hold up against the spin: the part, its washers, and the bolts' own heads if you want them counted.",
   },
-  radius: {
-    label: "Radius of the part",
-    kind: "length",
-    min: 0.001,
-    max: 2,
-    default: 0.07,
-    urlKey: "r",
-    help: "From the spin axis to the part's own centre of mass.",
-  },
-  angularSpeed: {
-    label: "Speed",
-    kind: "angularSpeed",
-    min: rpmToRadPerSecond(1),
-    max: rpmToRadPerSecond(100000),
-    default: rpmToRadPerSecond(2400),
-    urlKey: "rpm",
-    help: "The top speed the part will see.",
-  },
+  radius: SPINNING_PART_INPUTS.radius,
+  angularSpeed: SPINNING_PART_INPUTS.angularSpeed,
   count: {
     label: "Number of bolts",
     kind: "count",

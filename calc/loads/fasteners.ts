@@ -17,20 +17,9 @@ export { requireChoice, type ChoiceOption };
 // ---------------------------------------------------------------------------------------------
 // Thread geometry.
 
-/** Sizes of ISO metric coarse thread this module knows, smallest first. */
-export const THREAD_SIZE_OPTIONS = [
-  { value: "M2", label: "M2 × 0.4" },
-  { value: "M2.5", label: "M2.5 × 0.45" },
-  { value: "M3", label: "M3 × 0.5" },
-  { value: "M4", label: "M4 × 0.7" },
-  { value: "M5", label: "M5 × 0.8" },
-  { value: "M6", label: "M6 × 1" },
-  { value: "M8", label: "M8 × 1.25" },
-  { value: "M10", label: "M10 × 1.5" },
-  { value: "M12", label: "M12 × 1.75" },
-] as const satisfies readonly ChoiceOption[];
-
-export type ThreadSize = (typeof THREAD_SIZE_OPTIONS)[number]["value"];
+// The size and class menus live in fastener-options.ts (a page can draw them without these tables).
+export { PROPERTY_CLASS_OPTIONS, THREAD_SIZE_OPTIONS, type PropertyClassId, type ThreadSize } from "./fastener-options.ts";
+import { PROPERTY_CLASS_OPTIONS, THREAD_SIZE_OPTIONS, type PropertyClassId, type ThreadSize } from "./fastener-options.ts";
 
 export interface MetricThread {
   /** Designation, e.g. "M4". */
@@ -133,16 +122,6 @@ export function tensileStressArea(input: { nominalDiameter: number; pitch: numbe
 
 // ---------------------------------------------------------------------------------------------
 // Property classes.
-
-/** Steel property classes of ISO 898-1 this module knows. */
-export const PROPERTY_CLASS_OPTIONS = [
-  { value: "4.6", label: "4.6 (low-carbon)" },
-  { value: "8.8", label: "8.8 (Q&T)" },
-  { value: "10.9", label: "10.9 (Q&T)" },
-  { value: "12.9", label: "12.9 (Q&T alloy)" },
-] as const satisfies readonly ChoiceOption[];
-
-export type PropertyClassId = (typeof PROPERTY_CLASS_OPTIONS)[number]["value"];
 
 export interface PropertyClass {
   id: PropertyClassId;

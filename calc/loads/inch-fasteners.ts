@@ -13,12 +13,11 @@ import {
   METRIC_COARSE_THREADS,
   PROPERTY_CLASS_OPTIONS,
   PROPERTY_CLASSES,
-  THREAD_SIZE_OPTIONS,
   threadDiameters,
   type PropertyClassId,
   type ThreadSize,
 } from "./fasteners.ts";
-import { requireChoice, type ChoiceOption } from "./common.ts";
+import { requireChoice } from "./common.ts";
 import type { SourceKey } from "../sources/index.ts";
 import { UNITS } from "../core/units.ts";
 import { requireFiniteResult, requireInputObject } from "../core/spec-check.ts";
@@ -36,20 +35,27 @@ const ROOT_DIAMETER_COEFF = (3 * Math.sqrt(3)) / 4;
 // ---------------------------------------------------------------------------------------------
 // Inch thread sizes.
 
-/** Unified inch sizes this module knows, smallest first: the numbered machine-screw sizes and 1/4 to 3/8 in. */
-export const INCH_THREAD_SIZE_OPTIONS = [
-  { value: "#2-56", label: "#2-56 UNC" },
-  { value: "#4-40", label: "#4-40 UNC" },
-  { value: "#6-32", label: "#6-32 UNC" },
-  { value: "#8-32", label: "#8-32 UNC" },
-  { value: "#10-24", label: "#10-24 UNC" },
-  { value: "#10-32", label: "#10-32 UNF" },
-  { value: "1/4-20", label: "1/4-20 UNC" },
-  { value: "5/16-18", label: "5/16-18 UNC" },
-  { value: "3/8-16", label: "3/8-16 UNC" },
-] as const satisfies readonly ChoiceOption[];
-
-export type InchThreadSize = (typeof INCH_THREAD_SIZE_OPTIONS)[number]["value"];
+// The size and grade menus live in fastener-options.ts (a page can draw them without these tables).
+export {
+  FASTENER_GRADE_OPTIONS,
+  FASTENER_SIZE_OPTIONS,
+  INCH_GRADE_OPTIONS,
+  INCH_THREAD_SIZE_OPTIONS,
+  type FastenerGradeId,
+  type FastenerSizeId,
+  type InchGradeId,
+  type InchThreadSize,
+} from "./fastener-options.ts";
+import {
+  FASTENER_GRADE_OPTIONS,
+  FASTENER_SIZE_OPTIONS,
+  INCH_GRADE_OPTIONS,
+  INCH_THREAD_SIZE_OPTIONS,
+  type FastenerGradeId,
+  type FastenerSizeId,
+  type InchGradeId,
+  type InchThreadSize,
+} from "./fastener-options.ts";
 
 export interface InchThread {
   /** Designation, e.g. "#10-32". */
@@ -254,16 +260,6 @@ const METRIC_6G_6H_LIMITS: Readonly<Record<ThreadSize, { externalMajorMin: numbe
 // ---------------------------------------------------------------------------------------------
 // Inch grades.
 
-/** Inch bolt grades this module knows. */
-export const INCH_GRADE_OPTIONS = [
-  { value: "sae-2", label: "SAE J429 grade 2 (low or medium carbon steel)" },
-  { value: "sae-5", label: "SAE J429 grade 5 (medium carbon steel, quenched and tempered)" },
-  { value: "sae-8", label: "SAE J429 grade 8 (alloy steel, quenched and tempered)" },
-  { value: "a574", label: "ASTM A574 alloy steel socket-head cap screw" },
-] as const satisfies readonly ChoiceOption[];
-
-export type InchGradeId = (typeof INCH_GRADE_OPTIONS)[number]["value"];
-
 /** What the strengths of a row are: every bolt of the grade is guaranteed to reach them. */
 export type StrengthBasis = "specified minimum";
 
@@ -337,16 +333,6 @@ export function inchGrade(id: string, param = "grade"): InchGrade {
 
 // ---------------------------------------------------------------------------------------------
 // One lookup for both systems.
-
-/** Every size a calculator can offer: the ISO metric coarse sizes, then the Unified inch sizes. */
-export const FASTENER_SIZE_OPTIONS: readonly ChoiceOption<ThreadSize | InchThreadSize>[] = [...THREAD_SIZE_OPTIONS, ...INCH_THREAD_SIZE_OPTIONS];
-
-export type FastenerSizeId = ThreadSize | InchThreadSize;
-
-/** Every grade a calculator can offer: the ISO 898-1 property classes, then the inch grades. */
-export const FASTENER_GRADE_OPTIONS: readonly ChoiceOption<PropertyClassId | InchGradeId>[] = [...PROPERTY_CLASS_OPTIONS, ...INCH_GRADE_OPTIONS];
-
-export type FastenerGradeId = PropertyClassId | InchGradeId;
 
 /** A thread of either system, with everything a joint check needs. */
 export interface FastenerThread {

@@ -17,6 +17,8 @@ import { MATERIALS } from "../materials/materials.ts";
 import { MATERIAL_IDS, type MaterialId } from "../materials/densities.ts";
 import type { SourceKey } from "../sources/index.ts";
 import { requireInputObject } from "../core/spec-check.ts";
+import { boltedJointCheck } from "./joint.ts";
+import { BOLTED_JOINT_CHOICE_DEFAULTS, boltedJointInputs, type BoltedJointCheck, type BoltedJointInput } from "./joint-inputs.ts";
 
 export * from "./common.ts";
 export * from "./bolts.ts";
@@ -68,7 +70,11 @@ export interface DemoRobotLoads {
   /** What the scenario is. */
   description: string;
   boltInput: FastenerCheckInput;
+  /** The earlier average-shear check of the same bolt (kept for comparison: it ignores the clamp and the stack). */
   bolt: FastenerCheck;
+  /** The same bolt as a joint: tightened to 75 % of proof, with a nut, the washers a stack under its head. */
+  jointInput: BoltedJointInput;
+  joint: BoltedJointCheck;
   rimInput: RimCheckInput;
   rim: RimCheck;
 }
@@ -81,23 +87,32 @@ export interface DemoRobotLoads {
 export const DEMO_WASHER_STACK = { mass: 0.042, radius: 0.055, rpm: 2400 } as const;
 
 /**
+ * How the demo's washer stack is bolted (invented): the seven washers are 1.2 mm thick, an 8.4 mm
+ * stack under the head of the M4, which passes through the 5 mm base plate into a nut; tightened to
+ * 75 % of its proof load with the default nut factor and friction coefficient.
+ */
+export const DEMO_WASHER_JOINT = { stackHeight: 0.0084, plateThickness: 0.005 } as const;
+
+/**
  * Worked example on a demo robot of our own invention (not a real machine): a whole-body spinner
  * with a 6061-T6 ring rim of 125 mm outer radius, topping out at 2400 rpm, balanced by a stack of
  * steel washers under one M4 class 8.8 bolt, the bolt loaded in shear (newton-second-law,
  * iso-898-1, carvill-data-handbook).
  *
- * Formula: as `fastenerCheck` and `rimCheck`
+ * Formula: as `fastenerCheck`, `boltedJointCheck` and `rimCheck`
  *
  * @param washerMass mass of the washer stack [kg] (default `DEMO_WASHER_STACK.mass`, 42 g)
  * @param washerRadius spin axis to the stack's centre of mass [m] (default 55 mm)
  * @param topSpeed the robot's top speed [rad/s] (default 2400 rpm)
- * @returns the inputs and results of both checks
+ * @returns the inputs and results of the checks: the bolt's average shear, the bolt as a joint, the rim
  *
- * Example: with the defaults the bolt sees 146 N, τ = 16.6 MPa, n = 22.2 → holds; the rim sees
- * 2.665 MPa at 31.4 m/s tip speed, n = 104, burst estimate 25 900 rpm.
+ * Example: with the defaults the bolt sees 146 N, τ = 16.6 MPa, average-shear n = 22.2; as a joint
+ * the clamp carries the stack 5.24 times over (friction governs, holds), and once slipped the bolt
+ * bends over the 8.4 mm stack, n = 1.58. The rim sees 2.665 MPa at 31.4 m/s tip speed, n = 104,
+ * burst estimate 25 900 rpm.
  *
- * Sources: newton-second-law, iso-898-1, shear-ultimate-ratio, carvill-data-handbook,
- * safety-factor-practice.
+ * Sources: newton-second-law, iso-898-1, shear-ultimate-ratio, shigley-mechanical-design, roark-beams,
+ * carvill-data-handbook, safety-factor-practice.
  */
 export function demoRobotLoads(input: { washerMass?: number; washerRadius?: number; topSpeed?: number } = {}): DemoRobotLoads {
   const {
@@ -118,6 +133,18 @@ export function demoRobotLoads(input: { washerMass?: number; washerRadius?: numb
     mode: "shear",
     shearPlane: "thread",
   };
+  const jointInput: BoltedJointInput = {
+    ...(Object.fromEntries(Object.entries(boltedJointInputs).map(([name, spec]) => [name, spec.default])) as {
+      [K in keyof typeof boltedJointInputs]: number;
+    }),
+    ...BOLTED_JOINT_CHOICE_DEFAULTS,
+    partMass: washerMass,
+    radius: washerRadius,
+    angularSpeed: topSpeed,
+    stackHeight: DEMO_WASHER_JOINT.stackHeight,
+    gripLength: DEMO_WASHER_JOINT.stackHeight + DEMO_WASHER_JOINT.plateThickness,
+    threadIn: "nut",
+  };
   const rimInput: RimCheckInput = {
     shape: "thin-ring",
     outerRadius: 0.125,
@@ -133,6 +160,8 @@ export function demoRobotLoads(input: { washerMass?: number; washerRadius?: numb
     description: `An invented whole-body spinner (not a real robot): 6061-T6 ring rim, 125 mm outer radius; ${grams} g of steel counterweight washers under one M4 class 8.8 bolt at ${mm} mm radius, in shear.`,
     boltInput,
     bolt: fastenerCheck(boltInput),
+    jointInput,
+    joint: boltedJointCheck(jointInput),
     rimInput,
     rim: rimCheck(rimInput),
   };
@@ -145,6 +174,8 @@ export const LOADS_SOURCES: readonly SourceKey[] = [
   "iso-898-1",
   "shigley-distortion-energy",
   "shear-ultimate-ratio",
+  "shigley-mechanical-design",
+  "roark-beams",
   "en-1993-1-8",
   "carvill-data-handbook",
   "timoshenko-goodier",

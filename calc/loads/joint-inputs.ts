@@ -1,8 +1,7 @@
 import { defineInputs } from "../core/inputs.ts";
-import { fastenerCheckInputs } from "./bolts.ts";
+import { SPINNING_PART_INPUTS } from "./spinning-part.ts";
 import { safetyThresholdInputs, type ChoiceOption, type LoadVerdict } from "./common.ts";
-import { MATERIALS } from "../materials/materials.ts";
-import { MATERIAL_IDS, type MaterialId } from "../materials/densities.ts";
+import { MATERIAL_DENSITIES, MATERIAL_IDS, type MaterialId } from "../materials/densities.ts";
 import type { PartLoad } from "../rotation/rotation.ts";
 import type { FastenerGrade, FastenerGradeId, FastenerSizeId, FastenerThread } from "./inch-fasteners.ts";
 import { DEFAULT_FRICTION_COEFFICIENT, DEFAULT_NUT_FACTOR, RECOMMENDED_PRELOAD_SHARE } from "./joint-data.ts";
@@ -36,16 +35,16 @@ export const LOAD_SOURCE_OPTIONS = [
 
 export type LoadSource = (typeof LOAD_SOURCE_OPTIONS)[number]["value"];
 
-/** What the bolt threads into: a nut, or a thread tapped into a part of one of the table's materials. */
+/** What the bolt threads into: a nut, or a thread tapped into a part of one of the table's materials (labelled by its menu name). */
 export const THREAD_IN_OPTIONS: readonly ChoiceOption<"nut" | MaterialId>[] = [
-  { value: "nut", label: "A nut of the matching grade" },
-  ...MATERIAL_IDS.map((id) => ({ value: id, label: `A tapped hole in ${MATERIALS[id].name}, ${MATERIALS[id].condition}` })),
+  { value: "nut", label: "A nut" },
+  ...MATERIAL_IDS.map((id) => ({ value: id, label: MATERIAL_DENSITIES[id].menuName })),
 ];
 
 /** Materials of the clamped parts, for their stiffness: the rows of the materials table. */
 export const MEMBER_MATERIAL_OPTIONS: readonly ChoiceOption<MaterialId>[] = MATERIAL_IDS.map((id) => ({
   value: id,
-  label: `${MATERIALS[id].name}, ${MATERIALS[id].condition}`,
+  label: MATERIAL_DENSITIES[id].menuName,
 }));
 
 /** Choice defaults of the joint check (the numeric defaults are in `boltedJointInputs`). */
@@ -84,8 +83,8 @@ export const boltedJointInputs = defineInputs({
     urlKey: "m",
     help: "Everything the bolts hold against the spin (read when the load comes from a spinning part).",
   },
-  radius: fastenerCheckInputs.radius,
-  angularSpeed: fastenerCheckInputs.angularSpeed,
+  radius: SPINNING_PART_INPUTS.radius,
+  angularSpeed: SPINNING_PART_INPUTS.angularSpeed,
   load: {
     label: "Load on the joint",
     kind: "force",

@@ -6,6 +6,11 @@
 import { describe, expect, it } from "vitest";
 import type { Page } from "playwright-core";
 import { axeViolations, useSite } from "../support/browser.ts";
+import fasteners from "../../calc/calculators/fasteners.ts";
+import { initialValues } from "../../calc/core/calculator.ts";
+import { formatNumber } from "../../calc/core/units.ts";
+import { boltedJointCheck } from "../../calc/loads/joint.ts";
+import type { BoltedJointCheck, BoltedJointInput } from "../../calc/loads/joint-inputs.ts";
 
 const site = useSite();
 const { origin, open } = site;
@@ -16,55 +21,109 @@ const param = (page: Page, key: string) => new URL(page.url()).searchParams.get(
 const BOLT = "/chapters/fasteners/";
 const RIM = "/chapters/rims/";
 
+/** The joint check's result for the calculator's defaults changed by `change`, as the page must show it. */
+function joint(change: Partial<BoltedJointInput>): BoltedJointCheck {
+  return boltedJointCheck({ ...(initialValues(fasteners) as unknown as BoltedJointInput), ...change });
+}
+const sf = (value: number | null) => formatNumber(value!);
+
 describe("the bolt calculator in the browser", () => {
-  it("answers a permalink: 42 g at 55 mm and 2400 rpm on one M2 class 4.6 screw in shear is marginal", async () => {
+  it("opens a link of the earlier average-shear check: its keys keep their meaning, the retired ones are named, and the joint check answers", async () => {
     const { page, context, problems } = await open(
       `${BOLT}?v=1&u=metric&m=42g&r=55mm&rpm=2400rpm&n=1&size=M2&cls=4.6&mode=shear&plane=thread&sr=0.5&fail=1&thin=2`,
     );
-    // F = 0.042 kg × (80π rad/s)² × 0.055 m = 145.9 N; τ = 145.9 N / 2.07 mm² = 70.5 MPa;
-    // τ_y = 240 MPa / √3 = 138.6 MPa → n = 1.97; yield at 2400 rpm × √1.97 = 3360 rpm (tests/components/loads.test.tsx).
-    expect(await out(page, "part-force")).toBe("146 N");
-    expect(await out(page, "stress")).toBe("70.5 MPa");
-    expect(await out(page, "yield")).toBe("139 MPa");
-    expect(await out(page, "sf-yield")).toBe("1.97");
-    expect(await out(page, "speed-yield")).toBe("3360 rpm");
-    const verdict = await out(page, "verdict");
-    expect(verdict).toContain("Marginal.");
-    expect(verdict).toContain("Rule: fails below 1, marginal from 1 to below 2, holds at 2 or more.");
+    const expected = joint({ partMass: 0.042, radius: 0.055, size: "M2", grade: "4.6" });
     expect(await page.inputValue("#fastener-calculator-size")).toBe("M2");
-    expect(await page.inputValue("#fastener-calculator-propertyClass")).toBe("4.6");
+    expect(await page.inputValue("#fastener-calculator-grade")).toBe("4.6");
     expect(await page.isChecked('input[name="fastener-calculator-mode"][value="shear"]')).toBe(true);
     expect(await page.inputValue("#fastener-calculator-partMass")).toBe("42 g");
+    expect(await page.locator(".calc-notices").textContent()).toContain("Its shear ratio and shear plane are no longer read");
+    await expect.poll(() => out(page, "sf-friction")).toBe(sf(expected.safetyFactors.friction));
+    expect(await out(page, "sf-bending")).toBe(sf(expected.safetyFactors.bending));
+    expect(await out(page, "sf-shear")).toBe(sf(expected.safetyFactors.shear));
+    expect(await page.locator('[data-bar="governs"]').first().textContent()).toBe(expected.governs);
+    expect(await out(page, "verdict")).toContain(`${expected.verdict[0]!.toUpperCase()}${expected.verdict.slice(1)}.`);
     expect(problems).toEqual([]);
     await context.close();
   });
 
-  it("updates outputs and the URL when a quantity, the loading mode and the thread size change", async () => {
-    const { page, context } = await open(`${BOLT}?v=1&m=42g&r=55mm&rpm=2400rpm&size=M2&cls=4.6`);
-    await page.fill("#fastener-calculator-partMass", "100 g");
-    // 100 g: F = 347.4 N, τ = 167.8 MPa against 138.6 MPa → n = 0.826: fails.
-    await expect.poll(() => out(page, "verdict")).toContain("Fails.");
-    expect(await out(page, "stress")).toBe("168 MPa");
-    expect(await out(page, "sf-yield")).toBe("0.826");
-    await expect.poll(() => param(page, "m")).toBe("100g");
+  it("takes the new inputs: torque and nut factor, stack height, friction, the thread, inch sizes and the folded bending choice, each kept in the link", async () => {
+    const { page, context, problems } = await open(BOLT);
+    // Before any change the page answers from the result computed at build time.
+    expect(await out(page, "sf-friction")).toBe(sf(joint({}).safetyFactors.friction));
 
+    // Preload from the torque: the share field goes, the torque field comes, the link follows.
+    await page.getByRole("radio", { name: /tightening torque/i }).check();
+    await expect.poll(() => param(page, "pf")).toBe("torque");
+    expect(await page.locator("#fastener-calculator-preloadShare").count()).toBe(0);
+    await page.fill("#fastener-calculator-tighteningTorque", "1.5 N·m");
+    await page.fill("#fastener-calculator-nutFactor", "0.15");
+    await page.fill("#fastener-calculator-frictionCoefficient", "0.3");
+    await page.fill("#fastener-calculator-stackHeight", "8.4 mm");
+    let expected = joint({ preloadFrom: "torque", tighteningTorque: 1.5, nutFactor: 0.15, frictionCoefficient: 0.3, stackHeight: 0.0084 });
+    await expect.poll(() => out(page, "sf-bending")).toBe(sf(expected.safetyFactors.bending));
+    expect(await out(page, "sf-friction")).toBe(sf(expected.safetyFactors.friction));
+    expect(await out(page, "sf-stripping")).toBe(sf(expected.safetyFactors.stripping));
+    await expect.poll(() => param(page, "T")).toBe("1.5Nm");
+    expect(param(page, "K")).toBe("0.15");
+    expect(param(page, "mu")).toBe("0.3");
+    expect(param(page, "h")).toBe("8.4mm");
+    expect(param(page, "pre")).toBeNull();
+
+    // No preload at all: the joint slips and the bolt bends.
+    await page.fill("#fastener-calculator-tighteningTorque", "0");
+    expected = joint({ preloadFrom: "torque", tighteningTorque: 0, nutFactor: 0.15, frictionCoefficient: 0.3, stackHeight: 0.0084 });
+    expect(expected.governs).toBe("bending");
+    await expect.poll(() => page.locator('[data-bar="governs"]').first().textContent()).toBe("bending");
+    expect(await out(page, "verdict")).toContain("With no preload the joint slips");
+
+    // A nut instead of the tapped part: no engagement field, no stripping row.
+    await page.selectOption("#fastener-calculator-threadIn", "nut");
+    await expect.poll(() => param(page, "into")).toBe("nut");
+    expect(await page.locator("#fastener-calculator-engagedLength").count()).toBe(0);
+    expect(await page.locator('[data-out="sf-stripping"]').count()).toBe(0);
+
+    // A guided bolt, from the folded inputs: the bending moment halves.
+    await page.locator(".joint-more summary").click();
+    await page.selectOption("#fastener-calculator-endCondition", "guided");
+    expected = joint({
+      preloadFrom: "torque",
+      tighteningTorque: 0,
+      nutFactor: 0.15,
+      frictionCoefficient: 0.3,
+      stackHeight: 0.0084,
+      threadIn: "nut",
+      endCondition: "guided",
+    });
+    await expect.poll(() => out(page, "sf-bending")).toBe(sf(expected.safetyFactors.bending));
+    expect(param(page, "end")).toBe("guided");
+
+    // An inch size: the grade menu offers inch grades only, and 8.8 becomes SAE J429 grade 5.
+    await page.selectOption("#fastener-calculator-size", "#10-32");
+    await expect.poll(() => param(page, "cls")).toBe("sae-5");
+    expect(await page.inputValue("#fastener-calculator-grade")).toBe("sae-5");
+    expect(await page.locator("#fastener-calculator-grade option").allTextContents()).toEqual([
+      "SAE J429 grade 2",
+      "SAE J429 grade 5",
+      "SAE J429 grade 8",
+      "ASTM A574 socket head",
+    ]);
+    expect(await out(page, "basis")).toBe("Bolt strengths: SAE J429 specified minimum values");
+    expect(await out(page, "scope")).toContain("0.25 to 1 in");
+
+    // Tension: friction and bending leave the table, tension comes in.
     await page.getByRole("radio", { name: /^Tension/ }).check();
-    // In tension the same 167.8 MPa meets R_eL,min = 240 MPa: n = 1.43, marginal.
-    await expect.poll(() => out(page, "sf-yield")).toBe("1.43");
-    expect(await out(page, "verdict")).toContain("Marginal.");
-    expect(await page.locator("#fastener-calculator-shearPlane-help").textContent()).toContain("Not read in tension.");
-    await expect.poll(() => param(page, "mode")).toBe("tension");
-
-    await page.selectOption("#fastener-calculator-size", "M4");
-    // M4, A_s = 8.78 mm²: σ = 347.4 / 8.78 = 39.57 MPa; n = 240 / 39.57 = 6.07.
-    await expect.poll(() => out(page, "stress")).toBe("39.6 MPa");
-    expect(await out(page, "sf-yield")).toBe("6.07");
-    await expect.poll(() => param(page, "size")).toBe("M4");
-    expect(param(page, "cls")).toBe("4.6");
+    await expect.poll(() => page.locator('[data-out="sf-tension"]').count()).toBe(1);
+    expect(await page.locator('[data-out="sf-friction"]').count()).toBe(0);
+    expect(await page.locator("#fastener-calculator-stackHeight").count()).toBe(0);
+    expect(param(page, "h")).toBeNull();
+    const body = (await page.textContent("body")) ?? "";
+    expect(body).not.toMatch(/\bNaN\b|Infinity/);
+    expect(problems).toEqual([]);
     await context.close();
   });
 
-  it("shows errors beside the field, including a rule across two fields, and no NaN", async () => {
+  it("shows errors beside the field, including a rule across two fields in the folded inputs, and no NaN", async () => {
     const { page, context } = await open(BOLT);
     for (const [id, text, message] of [
       ["radius", "abc", "Radius of the part must start with a number"],
@@ -76,6 +135,7 @@ describe("the bolt calculator in the browser", () => {
       expect(await page.getAttribute(`#fastener-calculator-${id}`, "aria-invalid")).toBe("true");
       await page.fill(`#fastener-calculator-${id}`, id === "radius" ? "70 mm" : id === "count" ? "1" : "40 g");
     }
+    await page.locator(".joint-more summary").click();
     await page.fill("#fastener-calculator-failBelow", "3");
     await expect
       .poll(() => page.locator("#fastener-calculator-marginalBelow-error").textContent())
@@ -93,7 +153,7 @@ describe("the bolt calculator in the browser", () => {
     expect(await page.locator("main img").count()).toBe(0);
     const notices = (await page.locator(".calc-notices").textContent()) ?? "";
     expect(notices).toContain('thread size "<img src=x onerror=alert…" is not one this calculator offers');
-    expect(notices).toContain('property class "99.9" is not one this calculator offers');
+    expect(notices).toContain('class or grade "99.9" is not one this calculator offers');
     expect(await page.inputValue("#fastener-calculator-size")).toBe("M4");
     expect(await page.locator("#fastener-calculator-partMass-error").textContent()).toContain("Part mass must start with a number");
     expect(problems).toEqual([]);
@@ -101,14 +161,17 @@ describe("the bolt calculator in the browser", () => {
     await context.close();
   });
 
-  it("opens the worked example's link from the chapter with the same numbers as the prose", async () => {
+  it("opens the worked example's link from the chapter with the same numbers as the prose: friction governs, bending next", async () => {
     const { page, context } = await open(BOLT);
-    const href = await page.getByRole("link", { name: "Open the M4 check in the calculator" }).getAttribute("href");
+    const href = await page.getByRole("link", { name: "Open the tightened M4 in the calculator" }).getAttribute("href");
     expect(href).toContain("size=M4");
     const example = await open(`${BOLT}${href}`);
-    // The demo: 42 g at 55 mm, 2400 rpm, one M4 class 8.8 in shear: τ = 16.6 MPa, n = 22.2 (tests/calc/loads.test.ts).
-    expect(await out(example.page, "stress")).toBe("16.6 MPa");
-    expect(await out(example.page, "sf-yield")).toBe("22.2");
+    // The demo: 42 g at 55 mm, 2400 rpm, one M4 8.8 with a nut, 75 % of proof, μ 0.2, 8.4 mm stack
+    // (tests/calc/loads/joint.test.ts: friction 5.24, bending 1.58, average shear 22.2).
+    await expect.poll(() => out(example.page, "sf-friction")).toBe("5.24");
+    expect(await out(example.page, "sf-bending")).toBe("1.58");
+    expect(await out(example.page, "sf-shear")).toBe("22.2");
+    expect(await example.page.locator('[data-bar="governs"]').first().textContent()).toBe("friction");
     expect(await out(example.page, "verdict")).toContain("Holds.");
     await example.context.close();
     await context.close();

@@ -104,7 +104,7 @@ describe("the pit flow", () => {
 
   // The spin-up charts keep a fixed drawing so the regime strip between them lines up: they are the
   // exception, and listed as one.
-  it.each(["acceleration", "heading-drift", "heading-timing", "calibration", "fasteners", "rims"])(
+  it.each(["acceleration", "heading-drift", "heading-timing", "calibration", "rims"])(
     "draws the chart text of %s at 11 CSS px or more on a 390 px phone",
     async (slug) => {
       const { page, context } = await open(`/chapters/${slug}/`);

@@ -38,11 +38,13 @@ const KIB = 1024;
  * is 640 KiB; with 18 (the shaft and hit chapters: their pages, scripts and search entries, and both
  * checks on the build sheet) 682 KiB; then the print view's QR encoder with the link codec (about
  * 6.5 KiB, loaded only on print), the calculators' fields for search (search-fields.json, 8.4 KiB),
- * the formulas as text in the search index (about 10 KiB) and the steering simulation's view (loaded
- * on its button): measured 729 KiB, ceiling 737 KiB. The 500 KiB target is not met: what remains
- * is used (pages, scripts, 3 fonts, the search index and its code).
+ * the formulas as text in the search index (about 10 KiB), the steering simulation's view (loaded
+ * on its button) and the bolted-joint check (about 10 KiB: its code on the build sheet and as the
+ * fasteners page's on-use chunk, the chapter's longer text, formulas and inch tables): measured
+ * PRECACHE KiB, ceiling CEIL KiB. The 500 KiB target is not met: what remains is used (pages,
+ * scripts, 3 fonts, the search index and its code).
  */
-const PRECACHE_GZIP_CEILING = 737 * KIB;
+const PRECACHE_GZIP_CEILING = 1 * KIB;
 
 describe("compressed copies", () => {
   const text = () => files().filter((f) => /\.(html|css|js|svg|json)$/.test(f));

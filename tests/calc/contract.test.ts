@@ -74,7 +74,7 @@ const massInput = (): api.MassBalanceInput => {
   const { mode: _mode, ...values } = api.initialValues(calc("mass"));
   return { ...(values as unknown as api.MassBalanceInput), parts: api.demoRobotParts(), candidates: [{ x: -0.05, y: 0 }] };
 };
-const fastenerValues = () => api.initialValues(calc("fasteners"));
+const fastenerValues = () => ({ ...defaults(api.fastenerCheckInputs), ...api.FASTENER_CHOICE_DEFAULTS });
 const rimValues = () => api.initialValues(calc("rims"));
 const jointValues = () => ({ ...defaults(api.boltedJointInputs), ...api.BOLTED_JOINT_CHOICE_DEFAULTS });
 const rhs = (_t: number, y: ArrayLike<number>, dy: Float64Array | number[]) => {

@@ -112,7 +112,9 @@ describe("design file", () => {
     ]);
     expect(reading.problems[2]!.message).toBe("Sensor radius must be greater than 0 mm and at most 2000 mm (got -3000 mm); the default, 20 mm, was used");
     expect(reading.problems[3]!.message).toBe("x is missing, in entry 3 “lid” of the parts list; it was left out");
-    expect(reading.problems[4]!.message).toBe('Thread size must be one of M2, M2.5, M3, M4, M5, M6, M8, M10, M12 (got the text "M99"); M4 × 0.7 was used');
+    expect(reading.problems[4]!.message).toBe(
+      'Thread size must be one of M2, M2.5, M3, M4, M5, M6, M8, M10, M12, #2-56, #4-40, #6-32, #8-32, #10-24, #10-32, 1/4-20, 5/16-18, 3/8-16 (got the text "M99"); M4 × 0.7 was used',
+    );
   });
 
   it("migrates an older version forward step by step", () => {
@@ -131,6 +133,96 @@ describe("design file", () => {
     expect(reading.ok && reading.migratedFrom).toBe(1);
     expect(reading.ok && (reading.design.mass as Record<string, unknown>).spinSpeed).toBe(scalars.spinSpeed);
     expect(reading.ok && (reading.design.mass as Record<string, unknown>).parts).toEqual(parts);
+  });
+});
+
+describe("a version 2 design: fasteners as the earlier average-shear check stored them", () => {
+  /** The demo's two fastener entries as version 2 wrote them (class, mode, shear ratio, shear plane). */
+  const version2 = () => {
+    const { fasteners: _f, ...rest } = JSON.parse(designToText(demo));
+    const old = (name: string, values: Record<string, unknown>) => ({
+      name,
+      partMass: 0.042,
+      radius: 0.055,
+      angularSpeed: (2400 * Math.PI) / 30,
+      count: 1,
+      shearRatio: 0.5,
+      failBelow: 1,
+      marginalBelow: 2,
+      size: "M4",
+      propertyClass: "8.8",
+      mode: "shear",
+      shearPlane: "thread",
+      ...values,
+    });
+    return {
+      ...rest,
+      version: 2,
+      fasteners: [
+        old("Counterweight washers (one M4 bolt)", {}),
+        old("Motor pod", { size: "M3", propertyClass: "12.9", mode: "tension", shearPlane: "shank", shearRatio: 0.6 }),
+      ],
+    };
+  };
+
+  it("reads without a single problem: the class becomes the grade, the mode the joint mode, the retired values are dropped", () => {
+    const reading = readDesign(version2());
+    expect(reading.ok).toBe(true);
+    if (!reading.ok) return;
+    expect(reading.migratedFrom).toBe(2);
+    expect(reading.problems).toEqual([]);
+    // biome-ignore lint/suspicious/noExplicitAny: test access to any section
+    const [washers, pod] = (reading.design as Record<string, any>).fasteners;
+    expect(washers).toMatchObject({ size: "M4", grade: "8.8", jointMode: "shear", partMass: 0.042, count: 1 });
+    expect(pod).toMatchObject({ size: "M3", grade: "12.9", jointMode: "tension" });
+    for (const entry of [washers, pod]) {
+      expect(entry).not.toHaveProperty("propertyClass");
+      expect(entry).not.toHaveProperty("mode");
+      expect(entry).not.toHaveProperty("shearRatio");
+      expect(entry).not.toHaveProperty("shearPlane");
+    }
+  });
+
+  it("gives the new joint values the calculator's defaults: 75 % of proof, μ = 0.2, a 5 mm stack, tapped 8 mm into 6061-T6", () => {
+    const reading = readDesign(version2());
+    // biome-ignore lint/suspicious/noExplicitAny: test access to any section
+    const washers = reading.ok && (reading.design as Record<string, any>).fasteners[0];
+    expect(washers).toMatchObject({
+      preloadFrom: "share",
+      preloadShare: 0.75,
+      nutFactor: 0.2,
+      frictionCoefficient: 0.2,
+      stackHeight: 0.005,
+      threadIn: "al-6061-t6",
+      engagedLength: 0.008,
+      loadFrom: "spin",
+      endCondition: "cantilever",
+    });
+  });
+
+  it("runs the joint check on the migrated entries: the washer stack holds by friction and names the mode on the build sheet", () => {
+    const reading = readDesign(version2());
+    if (!reading.ok) throw new Error("not read");
+    const cards = runChecks(reading.design, "metric").filter((c) => c.section === "fasteners");
+    expect(cards).toHaveLength(2);
+    expect(cards[0]!.status).toBe("holds");
+    expect(cards[0]!.margin).toContain("friction (the clamp) governs");
+    expect(cards[0]!.rule).toContain("ISO 898-1 specified minimum strengths");
+  });
+
+  it("keeps a migrated design's values when it is saved again (version 3, read back unchanged)", () => {
+    const reading = readDesign(version2());
+    if (!reading.ok) throw new Error("not read");
+    expect(reading.design.version).toBe(3);
+    const again = readDesignText(designToText(reading.design));
+    expect(again.ok && again.design).toEqual(reading.design);
+    expect(again.ok && again.problems).toEqual([]);
+  });
+
+  it("passes a fastener entry that is not an object on to the reader, which reports it", () => {
+    const file = { ...version2(), fasteners: ["not an entry"] };
+    const reading = readDesign(file);
+    expect(reading.ok && reading.problems.map((p) => `${p.path}: ${p.action}`)).toEqual(["fasteners[0]: item-dropped"]);
   });
 });
 
@@ -174,7 +266,7 @@ describe("what a design file's problems say", () => {
       "Fasteners: Counterweight washers (one M4 bolt) (fasteners[0].count): Number of bolts must be a whole number between 1 and 64 (got 2.5); the default, 1, was used.",
     ]);
     expect(said((d) => (d.fasteners[0].size = "M99"))).toEqual([
-      'Fasteners: Counterweight washers (one M4 bolt) (fasteners[0].size): Thread size must be one of M2, M2.5, M3, M4, M5, M6, M8, M10, M12 (got the text "M99"); M4 × 0.7 was used.',
+      'Fasteners: Counterweight washers (one M4 bolt) (fasteners[0].size): Thread size must be one of M2, M2.5, M3, M4, M5, M6, M8, M10, M12, #2-56, #4-40, #6-32, #8-32, #10-24, #10-32, 1/4-20, 5/16-18, 3/8-16 (got the text "M99"); M4 × 0.7 was used.',
     ]);
   });
 

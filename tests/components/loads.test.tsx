@@ -2,13 +2,15 @@
  * The bolt and rim calculators' models (choices in the URL, materials filling fields, errors on
  * the right field) and their server render (the path Astro islands take).
  */
-import { describe, expect, it } from "vitest";
+import { beforeAll, describe, expect, it } from "vitest";
 import { renderToString } from "preact-render-to-string";
 import { demoRobotLoads, rimMaterialChoices } from "../../calc/loads/index.ts";
 import fasteners from "../../calc/calculators/fasteners.ts";
 import rims from "../../calc/calculators/rims.ts";
-import { linkQuery, readLink } from "../../calc/core/calculator.ts";
-import FastenerCalculator, { createFastenerModel } from "../../components/calculators/fasteners.tsx";
+import { initialValues, linkQuery, readLink } from "../../calc/core/calculator.ts";
+import { boltedJointCheck } from "../../calc/loads/joint.ts";
+import type { BoltedJointCheck, BoltedJointInput } from "../../calc/loads/joint-inputs.ts";
+import FastenerCalculator, { createFastenerModel, loadJointCheck } from "../../components/calculators/fasteners.tsx";
 import RimCalculator, { createRimModel } from "../../components/calculators/rims.tsx";
 
 const CUSTOM_MATERIAL = "custom";
@@ -20,66 +22,133 @@ function close(actual: number | undefined, expected: number, rtol: number): void
   expect(Math.abs(actual! - expected)).toBeLessThanOrEqual(rtol * Math.abs(expected));
 }
 
-describe("the bolt calculator's model", () => {
-  it("computes a verdict from the defaults (40 g, 70 mm, 2400 rpm, one M4 8.8 in shear)", () => {
-    const model = createFastenerModel();
-    const result = model.outcome.value.result;
-    // τ = 0.04 × (80π)² × 0.07 / 8.78 mm² = 20.1 MPa; τ_y = 640/√3 = 370 MPa → n = 18.3 (tests/calc/loads.test.ts).
-    expect(result?.verdict).toBe("holds");
-    close(result?.stress, 20.1e6, 5e-3);
-    close(result?.safetyFactor, 18.3, 5e-3);
-    expect(model.curve.value?.points).toHaveLength(60);
+/** The check the calculator runs, called directly: the model must give exactly its result. */
+function jointFor(values: Partial<BoltedJointInput>): BoltedJointCheck {
+  return boltedJointCheck({ ...(initialValues(fasteners) as unknown as BoltedJointInput), ...values });
+}
+
+describe("the bolt calculator before its check's code has loaded", () => {
+  // Runs first: the check's code is loaded once per page and then stays.
+  it("answers the defaults from the result computed at build time, without loading the check", () => {
+    const model = createFastenerModel(jointFor({}));
+    expect(model.outcome.value.result).toEqual(jointFor({}));
+    expect(model.waiting.value).toBe(false);
   });
 
-  it("applies a permalink with its choices: 42 g at 55 mm on one M2 class 4.6 screw is marginal", () => {
+  it("waits for the check's code once an input changes, says so, and then answers", async () => {
+    const model = createFastenerModel(jointFor({}));
+    model.fields.texts.stackHeight.value = "8.4 mm";
+    expect(model.outcome.value.result).toBeNull();
+    expect(model.waiting.value).toBe(true);
+    const html = renderToString(<FastenerCalculator id="w" />);
+    expect(html).toContain("Working out the joint…");
+    await loadJointCheck();
+    expect(model.waiting.value).toBe(false);
+    expect(model.outcome.value.result).toEqual(jointFor({ stackHeight: model.values.value!.stackHeight }));
+    close(model.values.value!.stackHeight, 0.0084, 1e-12);
+  });
+});
+
+describe("the bolt calculator's model", () => {
+  beforeAll(() => loadJointCheck());
+
+  it("starts on the joint check's defaults: an M4 8.8 tapped into 6061-T6, clamped at 75 % of proof, and friction governs", () => {
     const model = createFastenerModel();
-    model.applyQuery("?v=1&u=metric&m=42g&r=55mm&rpm=2400rpm&n=1&size=M2&cls=4.6&mode=shear&plane=thread");
+    const result = model.outcome.value.result!;
+    expect(result).toEqual(jointFor({}));
+    expect(result.governs).toBe("friction");
+    expect(result.verdict).toBe("holds");
+    // F_i = 0.75 × 8.78 mm² × 580 MPa = 3819.3 N (tests/calc/loads/joint.test.ts).
+    close(result.preload.force, 3819.3, 1e-9);
+  });
+
+  it("opens a link of the earlier average-shear check: its keys keep their meaning, and the retired ones are named in a notice", () => {
+    const model = createFastenerModel();
+    model.applyQuery("?v=1&u=metric&m=42g&r=55mm&rpm=2400rpm&n=1&size=M2&cls=4.6&mode=shear&plane=thread&sr=0.5");
     expect(model.fields.texts.partMass.value).toBe("42 g");
     expect(model.choices.size.value).toBe("M2");
-    expect(model.choices.propertyClass.value).toBe("4.6");
-    const result = model.outcome.value.result;
-    // F = 0.042 × (80π)² × 0.055 = 145.9 N; τ = 145.9 / 2.07 mm² = 70.5 MPa; τ_y = 240/√3 = 138.6 MPa → n = 1.97.
-    close(result?.stress, 70.5e6, 5e-3);
-    close(result?.safetyFactor, 1.97, 5e-3);
-    expect(result?.verdict).toBe("marginal");
+    expect(model.choices.grade.value).toBe("4.6");
+    expect(model.choices.jointMode.value).toBe("shear");
+    expect(model.fields.notices.value).toHaveLength(1);
+    expect(model.fields.notices.value[0]).toContain("Its shear ratio and shear plane are no longer read");
+    const result = model.outcome.value.result!;
+    expect(result).toEqual(jointFor({ partMass: 0.042, radius: 0.055, size: "M2", grade: "4.6" }));
+  });
+
+  it("says nothing about retired keys when a link has none", () => {
+    const model = createFastenerModel();
+    model.applyQuery("?m=42g&size=M3");
     expect(model.fields.notices.value).toEqual([]);
   });
 
-  it("changes the result when the loading mode changes", () => {
+  it("changes the governing mode when the loading mode changes", () => {
     const model = createFastenerModel();
-    model.applyQuery("?m=42g&r=55mm&size=M2&cls=4.6");
-    model.choices.mode.value = "tension";
-    // In tension the same 70.5 MPa meets R_eL,min = 240 MPa: n = 3.40 → holds.
-    close(model.outcome.value.result?.safetyFactor, 3.4, 5e-3);
-    expect(model.outcome.value.result?.verdict).toBe("holds");
+    model.choices.jointMode.value = "tension";
+    const result = model.outcome.value.result!;
+    expect(result).toEqual(jointFor({ jointMode: "tension" }));
+    expect(["tension", "stripping"]).toContain(result.governs);
+    expect(result.safetyFactors.friction).toBeNull();
   });
 
-  it("writes every choice into the link next to the quantities", () => {
+  it("moves the grade to the nearest of the other system when the size does (8.8 ↔ SAE J429 grade 5, 12.9 ↔ ASTM A574)", () => {
+    const model = createFastenerModel();
+    model.pickSize("#10-32");
+    expect(model.choices.grade.value).toBe("sae-5");
+    expect(model.outcome.value.result?.thread.system).toBe("inch");
+    model.choices.grade.value = "a574";
+    model.pickSize("1/4-20");
+    expect(model.choices.grade.value).toBe("a574");
+    model.pickSize("M5");
+    expect(model.choices.grade.value).toBe("12.9");
+  });
+
+  it("writes every choice into the link and leaves out the numbers the choices do not read", () => {
     const model = createFastenerModel();
     model.choices.size.value = "M6";
-    model.choices.mode.value = "tension";
+    model.choices.threadIn.value = "nut";
     const query = new URLSearchParams(model.queryFor(""));
     expect(query.get("v")).toBe("1");
     expect(query.get("size")).toBe("M6");
     expect(query.get("cls")).toBe("8.8");
-    expect(query.get("mode")).toBe("tension");
-    expect(query.get("plane")).toBe("thread");
+    expect(query.get("mode")).toBe("shear");
+    expect(query.get("into")).toBe("nut");
+    expect(query.get("pre")).toBe("75%");
+    expect(query.get("mu")).toBe("0.2");
+    expect(query.get("h")).toBe("5mm");
     expect(query.get("m")).toBe("40g");
     expect(query.get("rpm")).toBe("2400rpm");
+    // Not read: the torque (the preload is a share), the force (the load is a spinning part), the engagement (a nut).
+    expect(query.has("T")).toBe(false);
+    expect(query.has("F")).toBe(false);
+    expect(query.has("le")).toBe(false);
+    model.choices.preloadFrom.value = "torque";
+    model.choices.jointMode.value = "tension";
+    const torque = new URLSearchParams(model.queryFor(""));
+    expect(torque.has("T")).toBe(true);
+    expect(torque.has("pre")).toBe(false);
+    expect(torque.has("h")).toBe(false);
+    expect(torque.has("mu")).toBe(false);
   });
 
   it("reports a choice that is not on the list, and a repeated one, and keeps the default", () => {
     const model = createFastenerModel();
     model.applyQuery(`?size=M7&cls=8.8&cls=12.9&mode=${encodeURIComponent("<b>x</b>")}&colour=red`);
     expect(model.choices.size.value).toBe("M4");
-    expect(model.choices.propertyClass.value).toBe("8.8");
-    expect(model.choices.mode.value).toBe("shear");
+    expect(model.choices.grade.value).toBe("8.8");
+    expect(model.choices.jointMode.value).toBe("shear");
     expect(model.fields.notices.value).toEqual([
       'The link sets "cls" more than once; the first value was used.',
       'The link has a parameter "colour" that this calculator does not use; it was ignored.',
       `The link's thread size "M7" is not one this calculator offers; it was ignored.`,
       `The link's loading "<b>x</b>" is not one this calculator offers; it was ignored.`,
     ]);
+  });
+
+  it("names the grade when a link pairs an inch grade with a metric size", () => {
+    const model = createFastenerModel();
+    model.applyQuery("?size=M4&cls=a574");
+    expect(model.outcome.value.result).toBeNull();
+    expect(model.outcome.value.error?.field).toBe("grade");
   });
 
   it("maps a rule across fields to the field it names", () => {
@@ -97,15 +166,37 @@ describe("the bolt calculator's model", () => {
     expect(!reading.ok && reading.error.message).toContain("Number of bolts must be a whole number between 1 and 64");
   });
 
-  it("builds a worked-example link that reopens exactly the demo check", () => {
+  it("ignores a field the choices do not read, even when it does not read (the force, while the load is a spinning part)", () => {
+    const model = createFastenerModel();
+    model.fields.texts.load.value = "lots";
+    expect(model.outcome.value.result).not.toBeNull();
+  });
+
+  it("builds a worked-example link that reopens exactly the demo joint", () => {
     const demo = demoRobotLoads();
     const model = createFastenerModel();
-    model.applyQuery(`?${linkQuery(fasteners, demo.boltInput)}`);
+    model.applyQuery(`?${linkQuery(fasteners, demo.jointInput)}`);
     const result = model.outcome.value.result!;
-    close(result.stress, demo.bolt.stress, 1e-5);
-    close(result.speedAtYield, demo.bolt.speedAtYield, 1e-5);
-    expect(result.verdict).toBe(demo.bolt.verdict);
+    close(result.safetyFactor, demo.joint.safetyFactor, 1e-9);
+    close(result.slip!.bendingStress, demo.joint.slip!.bendingStress, 1e-9);
+    expect(result.governs).toBe(demo.joint.governs);
+    expect(result.verdict).toBe(demo.joint.verdict);
     expect(model.fields.notices.value).toEqual([]);
+  });
+});
+
+describe("the bolt calculator's server render", () => {
+  it("shows each mode's factor, the governing one marked, and the basis of the strengths", () => {
+    const html = renderToString(<FastenerCalculator id="f" initial={jointFor({})} />);
+    expect(html).toContain('data-out="sf-friction"');
+    expect(html).toContain('data-out="sf-bending"');
+    expect(html).toContain('data-out="sf-stripping"');
+    expect(html).toContain("joint-governs-mark");
+    expect(html).toContain("Bolt strengths: ISO 898-1 specified minimum values");
+    expect(html).toContain("from typical values of the materials table");
+    // The inch grades are not offered beside a metric size.
+    expect(html).not.toContain("SAE J429 grade 5");
+    expect(html).toContain("<details");
   });
 });
 
@@ -202,10 +293,30 @@ describe("the rim calculator's model", () => {
 });
 
 describe("server render (the path Astro islands take)", () => {
-  // Radios: the loading mode and shear plane (2 + 2) or the shape (3), plus the toolbar's two unit radios.
+  // Radios: the load source, loading mode and preload source (2 + 2 + 2) or the shape (3), plus the
+  // toolbar's two unit radios. The bolt calculator's default shows 14 number fields (the force and the
+  // torque are not read) and 5 menus (size, grade, thread, and the folded bending and clamped-part menus).
   const cases = [
-    { name: "bolt calculator", html: renderToString(<FastenerCalculator id="fc" />), inputs: 7, selects: 2, radios: 6, verdict: "Holds." },
-    { name: "rim calculator", html: renderToString(<RimCalculator id="rc" materials={MATERIALS} />), inputs: 9, selects: 1, radios: 5, verdict: "Holds." },
+    {
+      name: "bolt calculator",
+      html: renderToString(<FastenerCalculator id="fc" initial={jointFor({})} />),
+      inputs: 14,
+      selects: 5,
+      radios: 8,
+      verdict: "Holds.",
+      out: "sf-friction",
+      chart: false,
+    },
+    {
+      name: "rim calculator",
+      html: renderToString(<RimCalculator id="rc" materials={MATERIALS} />),
+      inputs: 9,
+      selects: 1,
+      radios: 5,
+      verdict: "Holds.",
+      out: "speed-ult",
+      chart: true,
+    },
   ];
 
   it.each(cases)("labels every text field and select of the $name", ({ html, inputs, selects }) => {
@@ -219,10 +330,10 @@ describe("server render (the path Astro islands take)", () => {
     expect(html.match(/<fieldset class="loads-radios"[^>]*><legend>/g)?.length).toBeGreaterThan(0);
   });
 
-  it.each(cases)("renders the $name's verdict, outputs and chart without NaN", ({ html, verdict }) => {
+  it.each(cases)("renders the $name's verdict, outputs and any chart without NaN", ({ html, verdict, out, chart }) => {
     expect(html).toContain(verdict);
-    expect(html).toContain('data-out="speed-ult"');
-    expect(html).toContain("<svg");
+    expect(html).toContain(`data-out="${out}"`);
+    expect(html.includes("<svg")).toBe(chart);
     expect(html).not.toMatch(/NaN|Infinity|undefined/);
   });
 

@@ -3,23 +3,20 @@ import fc from "fast-check";
 import { constants, deflateRawSync } from "node:zlib";
 import {
   accelerometerPlacementInputs,
+  boltedJointInputs,
   demoDesign,
   designToText,
   drivetrainInputs,
   DRIVE_TYPE_OPTIONS,
-  fastenerCheckInputs,
   headingDriftInputs,
-  LOADING_MODE_OPTIONS,
   newDesign,
-  PROPERTY_CLASS_OPTIONS,
   readDesignText,
   rimCheckInputs,
   RIM_SHAPE_OPTIONS,
-  SHEAR_PLANE_OPTIONS,
-  THREAD_SIZE_OPTIONS,
   type Design,
   type InputSpecs,
 } from "../../calc/index.ts";
+import { fastenerChoices } from "../../calc/calculators/fasteners.ts";
 import { checksum, designFromFragment, designToFragment } from "../../components/design/share.ts";
 
 /** Any values a calculator accepts: each number inside its declared range (whole where declared). */
@@ -49,11 +46,8 @@ const anyDesign: fc.Arbitrary<Design> = fc
       fc.array(
         fc.record({
           name: fc.string({ maxLength: 80 }),
-          numbers: numbers(fastenerCheckInputs),
-          size: pick(THREAD_SIZE_OPTIONS),
-          propertyClass: pick(PROPERTY_CLASS_OPTIONS),
-          mode: pick(LOADING_MODE_OPTIONS),
-          shearPlane: pick(SHEAR_PLANE_OPTIONS),
+          numbers: numbers(boltedJointInputs),
+          choices: fc.record(Object.fromEntries(Object.entries(fastenerChoices).map(([name, spec]) => [name, pick(spec.options)]))),
         }),
         { maxLength: 4 },
       ),
@@ -69,7 +63,7 @@ const anyDesign: fc.Arbitrary<Design> = fc
     const design: Design = { ...newDesign(r.name, new Date("2026-01-01T00:00:00Z")), notes: r.notes, units: r.units };
     if (r.placement) design.placement = r.placement;
     if (r.headingDrift) design.headingDrift = r.headingDrift;
-    if (r.fasteners) design.fasteners = r.fasteners.map(({ numbers: n, ...rest }) => ({ ...n, ...rest }));
+    if (r.fasteners) design.fasteners = r.fasteners.map(({ numbers: n, choices, ...rest }) => ({ ...n, ...choices, ...rest }));
     if (r.rims) design.rims = r.rims.map(({ numbers: n, ...rest }) => ({ ...n, ...rest }));
     if (r.drivetrain) design.drivetrain = { ...r.drivetrain.numbers, driveType: r.drivetrain.driveType };
     return design;
