@@ -44,6 +44,7 @@ const SHAPE_NAMES = {
   plate: "Plate",
   rod: "Rod",
   cylinder: "Cylinder (upright)",
+  lyingCylinder: "Cylinder (lying)",
   custom: "Custom (own inertia)",
 };
 const MODE_NAMES: Record<ModeKey, string> = { r: "Mass at a radius", m: "Radius for a mass", p: "Best mounting point" };
