@@ -7,6 +7,8 @@ import {
   designToText,
   drivetrainInputs,
   DRIVE_TYPE_OPTIONS,
+  CURRENT_LIMIT_AT_OPTIONS,
+  NO_LOAD_LOSS_OPTIONS,
   fastenerCheckInputs,
   headingDriftInputs,
   LOADING_MODE_OPTIONS,
@@ -86,7 +88,15 @@ const anyDesign: fc.Arbitrary<Design> = fc
       fc.array(fc.record({ name: fc.string({ maxLength: 80 }), numbers: numbers(rimCheckInputs), shape: pick(RIM_SHAPE_OPTIONS) }), { maxLength: 3 }),
       { nil: undefined },
     ),
-    drivetrain: fc.option(fc.record({ numbers: numbers(drivetrainInputs), driveType: pick(DRIVE_TYPE_OPTIONS) }), { nil: undefined }),
+    drivetrain: fc.option(
+      fc.record({
+        numbers: numbers(drivetrainInputs),
+        driveType: pick(DRIVE_TYPE_OPTIONS),
+        currentLimitAt: pick(CURRENT_LIMIT_AT_OPTIONS),
+        noLoadLoss: pick(NO_LOAD_LOSS_OPTIONS),
+      }),
+      { nil: undefined },
+    ),
   })
   .map((r) => {
     const design: Design = { ...newDesign(r.name, new Date("2026-01-01T00:00:00Z")), notes: r.notes, units: r.units };
@@ -94,7 +104,13 @@ const anyDesign: fc.Arbitrary<Design> = fc
     if (r.headingDrift) design.headingDrift = r.headingDrift;
     if (r.fasteners) design.fasteners = r.fasteners.map(({ numbers: n, ...rest }) => ({ ...n, ...rest }));
     if (r.rims) design.rims = r.rims.map(({ numbers: n, ...rest }) => ({ ...n, ...rest }));
-    if (r.drivetrain) design.drivetrain = { ...r.drivetrain.numbers, driveType: r.drivetrain.driveType };
+    if (r.drivetrain)
+      design.drivetrain = {
+        ...r.drivetrain.numbers,
+        driveType: r.drivetrain.driveType,
+        currentLimitAt: r.drivetrain.currentLimitAt,
+        noLoadLoss: r.drivetrain.noLoadLoss,
+      };
     return design;
   });
 
