@@ -182,7 +182,7 @@ describe("the rim calculator's model", () => {
     expect(model.outcome.value.error?.message).toMatch(/^Bore radius must be /);
     model.fields.texts.innerRadius.value = "20 mm";
     model.fields.texts.yieldStrength.value = "400 MPa";
-    expect(model.outcome.value.error).toEqual({ field: "yieldStrength", message: "Yield strength must be at most the ultimate strength (310 MPa)." });
+    expect(model.outcome.value.error).toEqual({ field: "yieldStrength", message: "Yield strength must be at most the ultimate strength (262.001 MPa)." });
   });
 
   it("builds a worked-example link that reopens exactly the demo rim", () => {

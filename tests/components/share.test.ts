@@ -17,6 +17,7 @@ import {
   readDesignText,
   rimCheckInputs,
   RIM_SHAPE_OPTIONS,
+  STRENGTH_BASIS_OPTIONS,
   SHEAR_PLANE_OPTIONS,
   THREAD_SIZE_OPTIONS,
   type Design,
@@ -85,7 +86,15 @@ const anyDesign: fc.Arbitrary<Design> = fc
       { nil: undefined },
     ),
     rims: fc.option(
-      fc.array(fc.record({ name: fc.string({ maxLength: 80 }), numbers: numbers(rimCheckInputs), shape: pick(RIM_SHAPE_OPTIONS) }), { maxLength: 3 }),
+      fc.array(
+        fc.record({
+          name: fc.string({ maxLength: 80 }),
+          numbers: numbers(rimCheckInputs),
+          shape: pick(RIM_SHAPE_OPTIONS),
+          strengthBasis: pick(STRENGTH_BASIS_OPTIONS),
+        }),
+        { maxLength: 3 },
+      ),
       { nil: undefined },
     ),
     drivetrain: fc.option(
