@@ -22,7 +22,7 @@ export const rimChoices = defineChoices({
     urlKey: "basis",
     options: STRENGTH_BASIS_OPTIONS,
     default: RIM_CHOICE_DEFAULTS.strengthBasis,
-    help: "Specified minimums (a material standard's, what to design on) or typical values, which most parts exceed but not all.",
+    help: "A standard's minimums (design on these) or typical values (not for design).",
   },
 });
 

@@ -294,7 +294,7 @@ export type RimShape = (typeof RIM_SHAPE_OPTIONS)[number]["value"];
 /** The basis of the strengths entered: specified minimums (a standard's, for design) or typical values. */
 export const STRENGTH_BASIS_OPTIONS = [
   { value: "minimum", label: "Specified minimum" },
-  { value: "typical", label: "Typical (not for design)" },
+  { value: "typical", label: "Typical" },
 ] as const satisfies readonly ChoiceOption[];
 
 export type MaterialStrengthBasis = (typeof STRENGTH_BASIS_OPTIONS)[number]["value"];
@@ -494,7 +494,7 @@ function peakStresses(
 export function rimCheck(input: RimCheckInput): RimCheck {
   requireInputObject(input);
   const shape = requireChoice("shape", input.shape, RIM_SHAPE_OPTIONS);
-  const strengthBasis = input.strengthBasis === undefined ? "minimum" : requireChoice("strengthBasis", input.strengthBasis, STRENGTH_BASIS_OPTIONS);
+  const strengthBasis = requireChoice("strengthBasis", input.strengthBasis ?? "minimum", STRENGTH_BASIS_OPTIONS);
   const outerRadius = requireDeclared(rimCheckInputs.outerRadius, "outerRadius", input.outerRadius);
   requireDeclared(rimCheckInputs.innerRadius, "innerRadius", input.innerRadius);
   const density = requireDeclared(rimCheckInputs.density, "density", input.density);

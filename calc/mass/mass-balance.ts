@@ -146,7 +146,7 @@ export const massBalanceInputs = defineInputs({
     default: 0.8,
     unit: { metric: "frac", us: "frac" },
     urlKey: "mu",
-    help: "Friction coefficient of the drive wheels sideways on the floor (0.8 for rubber sliding on concrete); 0 turns the robot about its centre of mass.",
+    help: "Sideways friction coefficient of the drive wheels (0.8: rubber sliding on concrete); 0: no grip.",
   },
   gripShare: {
     label: "Weight on the drive wheels",
@@ -156,7 +156,7 @@ export const massBalanceInputs = defineInputs({
     default: 0.9,
     unit: { metric: "frac", us: "frac" },
     urlKey: "ws",
-    help: "Share of the robot's weight the drive wheels carry; their centre is taken as the geometric centre.",
+    help: "Share of the weight on the drive wheels, whose centre is taken as the geometric centre.",
   },
   supportRadius: {
     label: "Support radius",
@@ -166,7 +166,7 @@ export const massBalanceInputs = defineInputs({
     max: 2,
     default: 0.07,
     urlKey: "sr",
-    help: "Shortest distance from the centre to the edge the robot would tip over (its wheels' or skids' contact).",
+    help: "From the centre to the nearest edge the robot could tip over (wheel or skid contact).",
   },
 });
 

@@ -91,7 +91,7 @@ export function createRimModel(materials: readonly MaterialChoice[]) {
       const row = rowOf(id);
       if (!row) return;
       for (const name of MATERIAL_FIELDS) fields.texts[name].value = defaultText({ ...rimCalculator.inputs[name], default: row[name] }, fields.system.value);
-      if (row.strengthBasis) model.choices.strengthBasis.value = row.strengthBasis;
+      model.choices.strengthBasis.value = row.strengthBasis ?? "typical";
     });
   }
   /** Radial and hoop stress across the radius [Pa] at radii [m]; one point for a thin ring. */
@@ -250,10 +250,16 @@ export default function RimCalculator({ id = rimCalculator.anchor, materials = [
           <fieldset key={group.legend}>
             <legend>{group.legend}</legend>
             {group.items.map((name) =>
-              name === "shape" ? (
-                <ChoiceField key={name} idPrefix={id} name={name} spec={model.specs.shape} value={choices.shape} as="radio" error={errorFor(name)} />
-              ) : name === "strengthBasis" ? (
-                <ChoiceField key={name} idPrefix={id} name={name} spec={model.specs.strengthBasis} value={choices.strengthBasis} error={errorFor(name)} />
+              name === "shape" || name === "strengthBasis" ? (
+                <ChoiceField
+                  key={name}
+                  idPrefix={id}
+                  name={name}
+                  spec={model.specs[name]}
+                  value={choices[name]}
+                  as={name === "shape" ? "radio" : undefined}
+                  error={errorFor(name)}
+                />
               ) : name === "material" ? (
                 <ChoiceField
                   key={name}

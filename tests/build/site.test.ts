@@ -65,8 +65,16 @@ const OVER_BUDGET: Record<string, { js: number; total: number }> = {
   // The weapon-turn chapter's island made the code every calculator page shares 16 B gzip larger,
   // which took fasteners (3 B under) just over its budget and mass-layout over its ceiling.
   fasteners: { js: 25_850, total: 60 * KB },
-  "mass-layout": { js: 37_250, total: 63_700 },
-  "spin-up": { js: 38_700, total: 66_850 },
+  // The review's corrections, measured 36 871 → 37 938 B JS and 63 141 → 67 161 B in all: the spin
+  // centre (wheels' side grip) and the couple lift, three inputs and their results; the rest of the
+  // total is the chapter's new text and math. Measured plus about 1 %.
+  "mass-layout": { js: 38_300, total: 67_850 },
+  // Measured 38 630 → 39 494 B JS and 66 619 → 69 336 B in all: where the current limit acts and the
+  // no-load loss growing with speed (two menus, one input, the stall current), and the chapter's text.
+  "spin-up": { js: 39_900, total: 70_050 },
+  // Measured 25 424 → 25 627 B JS: the strengths' basis (specified minimum or typical), a menu beside
+  // the strengths that the material menu sets, and its value in the check.
+  rims: { js: 25_650, total: 60 * KB },
 };
 
 /**
@@ -75,8 +83,11 @@ const OVER_BUDGET: Record<string, { js: number; total: number }> = {
  * Measured 81 844 B JS and 91 093 B in all; ceilings are that plus about 1 %. The way back under
  * budget is structural: load a check's code only for the sections a design holds.
  */
-const BUILD_SHEET_JS_CEILING = 82_700;
-const BUILD_SHEET_TOTAL_CEILING = 92_000;
+// The review's corrections (spin centre and couple lift in the mass check, where the current limit
+// acts and the speed-dependent no-load loss in the spin-up check, the rims' strength basis) took it
+// from 81 844 to 84 237 B JS and from 91 093 to 93 840 B in all; measured plus about 1 %.
+const BUILD_SHEET_JS_CEILING = 85_100;
+const BUILD_SHEET_TOTAL_CEILING = 94_800;
 
 describe("the built site", () => {
   it("was built (run `npm run build` first)", () => {
