@@ -40,7 +40,7 @@ export type CurrentLimitAt = (typeof CURRENT_LIMIT_AT_OPTIONS)[number]["value"];
  */
 export const NO_LOAD_LOSS_OPTIONS = [
   { value: "constant", label: "Constant torque" },
-  { value: "speed", label: "Grows with speed (I₀ measured at V₀)" },
+  { value: "speed", label: "Grows with speed" },
 ] as const satisfies readonly { value: string; label: string }[];
 
 export type NoLoadLoss = (typeof NO_LOAD_LOSS_OPTIONS)[number]["value"];
