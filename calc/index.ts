@@ -28,6 +28,7 @@ export * from "./mass/drawing.ts";
 export * from "./mass/balance.ts";
 export * from "./mass/counterweight.ts";
 export * from "./mass/sensor.ts";
+export * from "./mass/spin-centre.ts";
 export * from "./mass/mass-balance.ts";
 export * from "./mass/demo.ts";
 export * from "./mass/quick-balance.ts";

@@ -94,6 +94,7 @@ export default /* @__PURE__ */ defineCalculator(form, {
     const q = (v: number, kind: QuantityKind) => formatQuantity(v, kind, { system }).text;
     const chosen = values.balanceGrade;
     const s = r.sensor.before;
+    const turns = r.spinCentre.before;
     return [
       {
         title: "Balance",
@@ -109,13 +110,28 @@ export default /* @__PURE__ */ defineCalculator(form, {
         ],
       },
       {
+        key: "lift",
+        title: "Couple lift",
+        status: r.lift.ratio <= 0.5 ? "holds" : r.lift.ratio < 1 ? "marginal" : "fails",
+        rule: `The couple's rocking moment Ω²·C against the weight's M·g·a on a ${q(values.supportRadius, "length")} support radius: one side lifts at 100 %; marginal above 50 %`,
+        margin: `${formatNumber(r.lift.ratio * 100)} % of the weight's moment at ${q(values.spinSpeed, "angularSpeed")}; ${r.lift.liftSpeed === null ? "no couple, so no side lifts" : `one side lifts at ${q(r.lift.liftSpeed, "angularSpeed")}`}`,
+        figure: figureOf("Rocking moment as a share of the weight's", r.lift.ratio, "fraction", system, "pct"),
+        details: [
+          figureOf("Rocking moment at speed", r.lift.rockingMoment, "torque", system),
+          figureOf("Weight's restoring moment", r.lift.restoringMoment, "torque", system),
+        ],
+      },
+      {
         key: "sensor",
         title: "True sensor radius",
         status: "info",
-        rule: "The firmware's radius should be the radius about the centre of mass, not the geometric centre",
-        margin: `Sensor is ${q(s.radiusTrue, "length")} from the centre of mass and ${q(s.radiusAssumed, "length")} from the geometric centre: ${q(s.driftPerRevolution, "angle")} of drift per revolution if the firmware uses the latter`,
+        rule: "The firmware's radius should be the radius about the spin centre (the wheels' centre while their side grip holds, else short of the centre of mass); confirm it by calibrating on the robot",
+        margin: `${turns.state === "wheels-hold" ? "The wheels' grip holds: the robot turns about their centre" : `The wheels slide: the robot turns ${q(turns.distanceFromWheels, "length")} from their centre`}. Sensor is ${q(s.radiusTrue, "length")} from the spin centre and ${q(s.radiusAssumed, "length")} from the geometric centre: ${q(s.driftPerRevolution, "angle")} of drift per revolution if the firmware uses the latter`,
         figure: figureOf("Drift per revolution", s.driftPerRevolution, "angle", system),
-        details: [figureOf("Radius about the centre of mass", s.radiusTrue, "length", system)],
+        details: [
+          figureOf("Radius about the spin centre", s.radiusTrue, "length", system),
+          figureOf("Spin centre from the geometric centre", turns.distanceFromWheels, "length", system),
+        ],
       },
     ];
   },

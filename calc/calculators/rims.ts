@@ -6,7 +6,7 @@ import { figureOf, ratioFigure } from "../core/check.ts";
 import { defineChoices } from "../core/choices.ts";
 import { defineCalculator, defineForm } from "../core/calculator.ts";
 import { formatNumber, formatQuantity } from "../core/units.ts";
-import { RIM_CHOICE_DEFAULTS, RIM_SHAPE_OPTIONS, rimCheck, rimCheckInputs } from "../loads/rims.ts";
+import { RIM_CHOICE_DEFAULTS, RIM_SHAPE_OPTIONS, rimCheck, rimCheckInputs, STRENGTH_BASIS_OPTIONS } from "../loads/rims.ts";
 
 /** The rim's category input, with its link key. */
 export const rimChoices = defineChoices({
@@ -16,6 +16,13 @@ export const rimChoices = defineChoices({
     options: RIM_SHAPE_OPTIONS,
     default: RIM_CHOICE_DEFAULTS.shape,
     help: "A ring is checked at its outer radius; a disk with a bore peaks at the bore.",
+  },
+  strengthBasis: {
+    label: "Strengths are",
+    urlKey: "basis",
+    options: STRENGTH_BASIS_OPTIONS,
+    default: RIM_CHOICE_DEFAULTS.strengthBasis,
+    help: "A standard's minimums (design on these) or typical values (not for design).",
   },
 });
 
@@ -43,7 +50,7 @@ export default /* @__PURE__ */ defineCalculator(form, {
       {
         title: "Rim",
         status: r.verdict,
-        rule: `Safety factor against yield at least ${formatNumber(values.marginalBelow)} holds, below ${formatNumber(values.failBelow)} fails`,
+        rule: `Safety factor against yield at least ${formatNumber(values.marginalBelow)} holds, below ${formatNumber(values.failBelow)} fails; on ${r.strengthBasis === "minimum" ? "specified minimum strengths" : "typical strengths, which a part may fall short of"}`,
         margin: `Peak stress ${q(r.peakStress, "stress")} at ${q(values.angularSpeed, "angularSpeed")} (tip speed ${q(r.tipSpeed, "speed")}); yields at ${q(r.speedAtYield, "angularSpeed")}, bursts near ${q(r.speedAtUltimate, "angularSpeed")}`,
         figure: ratioFigure("Safety factor against yield", r.safetyFactorYield),
         details: [figureOf("Estimated burst speed", r.speedAtUltimate, "angularSpeed", system), figureOf("Tip speed", r.tipSpeed, "speed", system)],

@@ -10,7 +10,14 @@ import { defineCalculator, defineForm, type ValuesOf } from "../core/calculator.
 import { fieldUnit } from "../core/inputs.ts";
 import { MAX_VALUE_LENGTH, quoteForNotice } from "../core/permalink.ts";
 import { formatNumber, formatQuantity, quantityToText, type QuantityKind, type UnitSystem } from "../core/units.ts";
-import { DRIVE_TYPE_OPTIONS, DRIVE_TYPE_URL_KEY, type DrivetrainParameter, drivetrainInputs } from "../drivetrain/inputs.ts";
+import {
+  CURRENT_LIMIT_AT_OPTIONS,
+  DRIVE_TYPE_OPTIONS,
+  DRIVE_TYPE_URL_KEY,
+  type DrivetrainParameter,
+  drivetrainInputs,
+  NO_LOAD_LOSS_OPTIONS,
+} from "../drivetrain/inputs.ts";
 import { simulateSpinUp } from "../drivetrain/simulate.ts";
 
 /** The drive type, with its link key. */
@@ -21,6 +28,20 @@ export const driveTypeChoice = defineChoices({
     options: DRIVE_TYPE_OPTIONS,
     default: "weapon",
     help: "A weapon's motors turn a rotor; a whole-body spinner's motors turn wheels that spin the whole robot.",
+  },
+  currentLimitAt: {
+    label: "Current limit acts on",
+    urlKey: "limat",
+    options: CURRENT_LIMIT_AT_OPTIONS,
+    default: "motor",
+    help: "Where the controller holds the current: each motor's (phase) current, the current it draws from the battery, or nowhere.",
+  },
+  noLoadLoss: {
+    label: "No-load loss",
+    urlKey: "loss",
+    options: NO_LOAD_LOSS_OPTIONS,
+    default: "constant",
+    help: "A constant torque K_t·I₀, or a torque that grows with speed and equals K_t·I₀ at the speed I₀ was measured at.",
   },
 });
 
@@ -33,7 +54,7 @@ export const form = /* @__PURE__ */ defineForm({
   inputs: drivetrainInputs,
   choices: driveTypeChoice,
   pageKeys: ["variants"],
-  applies: (input, values) => applies(input, values.driveType ?? "weapon"),
+  applies: (input, values) => applies(input, values.driveType ?? "weapon") && (input !== "noLoadVoltage" || values.noLoadLoss === "speed"),
 });
 
 /** What the calculator computes: its page runs this; the cards below speak for the build sheet and the command line. */
@@ -63,6 +84,12 @@ export default /* @__PURE__ */ defineCalculator(form, {
         details: [
           figureOf("Peak battery current", r.peakBatteryCurrent, "current", system),
           figureOf("Lowest battery voltage", r.minBatteryVoltage, "voltage", system),
+          figureOf(
+            r.drive.currentLimitAt === "none" ? "Stall current per motor (no limit)" : "Motor current at standstill",
+            r.drive.stallCurrent,
+            "current",
+            system,
+          ),
         ],
       },
       {

@@ -13,6 +13,8 @@ import { simulateSpinUp } from "./simulate.ts";
  */
 export const DEMO_WEAPON: Readonly<DrivetrainInput> = Object.freeze({
   driveType: "weapon",
+  currentLimitAt: "motor",
+  noLoadLoss: "constant",
   ...Object.fromEntries(Object.entries(drivetrainInputs).map(([key, spec]) => [key, spec.default])),
 } as DrivetrainInput);
 

@@ -22,6 +22,36 @@ export type DriveType = (typeof DRIVE_TYPE_OPTIONS)[number]["value"];
 /** URL key of the drive-type choice (the numeric inputs' keys are in `drivetrainInputs`). */
 export const DRIVE_TYPE_URL_KEY = "type";
 
+/**
+ * Where the controller's current limit acts: on each motor's (phase) current, on the current each
+ * motor's controller draws from the battery, or nowhere (then a stalled motor draws (D·V)/R).
+ */
+export const CURRENT_LIMIT_AT_OPTIONS = [
+  { value: "motor", label: "Motor (phase) current" },
+  { value: "battery", label: "Battery current" },
+  { value: "none", label: "No limit" },
+] as const satisfies readonly { value: string; label: string }[];
+
+export type CurrentLimitAt = (typeof CURRENT_LIMIT_AT_OPTIONS)[number]["value"];
+
+/**
+ * How the no-load loss is modelled: a constant torque K_t·I₀ at every speed, or a torque that grows
+ * in proportion to speed and equals K_t·I₀ at the speed I₀ was measured at (the voltage V₀).
+ */
+export const NO_LOAD_LOSS_OPTIONS = [
+  { value: "constant", label: "Constant torque" },
+  { value: "speed", label: "Grows with speed" },
+] as const satisfies readonly { value: string; label: string }[];
+
+export type NoLoadLoss = (typeof NO_LOAD_LOSS_OPTIONS)[number]["value"];
+
+/** Throws a `CalcInputError` naming `param` unless `value` is one of `options`; undefined gives the first option (the earlier behaviour). */
+function requireOption<T extends string>(param: string, value: unknown, options: readonly { value: T }[]): T {
+  if (value === undefined) return options[0]!.value;
+  for (const option of options) if (value === option.value) return option.value;
+  throw new CalcInputError({ param, value, expected: `one of ${options.map((o) => `"${o.value}"`).join(", ")}`, unit: "" });
+}
+
 /** Throws a `CalcInputError` unless `value` is one of `DRIVE_TYPE_OPTIONS`. */
 export function requireDriveType(value: unknown): DriveType {
   for (const option of DRIVE_TYPE_OPTIONS) if (value === option.value) return option.value;
@@ -72,7 +102,16 @@ export const drivetrainInputs = defineInputs({
     max: 100,
     default: 1.2,
     urlKey: "i0",
-    help: "Current one motor draws spinning with nothing attached; modelled as a constant loss torque.",
+    help: "Current one motor draws spinning with nothing attached, from the data sheet.",
+  },
+  noLoadVoltage: {
+    label: "No-load current measured at",
+    kind: "voltage",
+    min: 0.5,
+    max: 200,
+    default: 10,
+    urlKey: "v0",
+    help: "The voltage the data sheet quotes the no-load current at; read when the loss grows with speed.",
   },
   motorRotorInertia: {
     label: "Motor rotor inertia",
@@ -92,7 +131,7 @@ export const drivetrainInputs = defineInputs({
     max: 1000,
     default: 60,
     urlKey: "ilim",
-    help: "The most current the controller lets each motor draw.",
+    help: "The most current the controller lets each motor draw, at the point chosen below.",
   },
   throttle: {
     label: "Throttle",
@@ -325,6 +364,10 @@ export type DrivetrainNumericInput = { [K in keyof typeof drivetrainInputs]: num
 export type DrivetrainInput = DrivetrainNumericInput & {
   /** A value of `DRIVE_TYPE_OPTIONS`. */
   driveType: DriveType | string;
+  /** A value of `CURRENT_LIMIT_AT_OPTIONS`; "motor" when left out (the earlier model). */
+  currentLimitAt?: CurrentLimitAt | string;
+  /** A value of `NO_LOAD_LOSS_OPTIONS`; "constant" when left out (the earlier model). */
+  noLoadLoss?: NoLoadLoss | string;
 };
 
 /** A numeric input the sweep can vary. */
@@ -335,13 +378,21 @@ export type DrivetrainParameter = keyof typeof drivetrainInputs;
  * options, and the sliding coefficient at most the grip coefficient. Throws `CalcInputError`
  * naming the first bad field.
  */
-export function validateDrivetrainInput(input: DrivetrainInput): { driveType: DriveType } {
+export function validateDrivetrainInput(input: DrivetrainInput): { driveType: DriveType; currentLimitAt: CurrentLimitAt; noLoadLoss: NoLoadLoss } {
   if (input === null || typeof input !== "object") {
     throw new CalcInputError({ param: "input", value: input, expected: "an object of spin-up inputs", unit: "" });
   }
   const driveType = requireDriveType(input.driveType);
+  const currentLimitAt = requireOption("currentLimitAt", input.currentLimitAt, CURRENT_LIMIT_AT_OPTIONS);
+  const noLoadLoss = requireOption("noLoadLoss", input.noLoadLoss, NO_LOAD_LOSS_OPTIONS);
   requireWithinSpecs(drivetrainInputs, input);
+  // The no-load speed at V₀ must be positive: V₀ − I₀·R > 0 (ctms-dc-motor-speed, steady state).
+  if (noLoadLoss === "speed")
+    requireRelation("noLoadVoltage", input.noLoadVoltage, "greater", input.noLoadCurrent * input.motorResistance, {
+      kind: "voltage",
+      unit: "V",
+    });
   if (driveType === "spinner")
     requireRelation("kineticFriction", input.kineticFriction, "at-most", input.staticFriction, { kind: "fraction", unit: "", other: "staticFriction" });
-  return { driveType };
+  return { driveType, currentLimitAt, noLoadLoss };
 }

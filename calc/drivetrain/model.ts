@@ -1,6 +1,6 @@
 import { STANDARD_GRAVITY } from "../core/constants.ts";
 import { torqueConstantFromKv } from "./motor.ts";
-import type { DrivetrainInput } from "./inputs.ts";
+import type { CurrentLimitAt, DrivetrainInput, NoLoadLoss } from "./inputs.ts";
 import { R_CURRENT, R_STALLED, R_TRACTION, R_VOLTAGE, type RegimeSegment, type SpinUpEndReason, type SpinUpPoint } from "./results.ts";
 
 // ---------------------------------------------------------------------------------------------
@@ -12,8 +12,12 @@ export interface Model {
   kt: number;
   rm: number;
   i0: number;
+  /** Motor no-load speed at V₀ when the loss grows with speed [rad/s]; 0 for a constant loss torque. */
+  w0: number;
   jm: number;
   ilim: number;
+  /** Where the current limit acts: LIMIT_MOTOR, LIMIT_BATTERY or LIMIT_NONE. */
+  limitAt: number;
   duty: number;
   voc: number;
   rp: number;
@@ -43,7 +47,7 @@ export interface Model {
 }
 
 /** The input reduced to the model's numbers (SI; see the module comment). @internal */
-export function buildModel(input: DrivetrainInput, spinner: boolean): Model {
+export function buildModel(input: DrivetrainInput, spinner: boolean, limitAt: CurrentLimitAt = "motor", noLoadLoss: NoLoadLoss = "constant"): Model {
   const kt = torqueConstantFromKv({ kv: input.motorKv });
   const normal = input.weightShare * input.robotMass * STANDARD_GRAVITY;
   return {
@@ -52,8 +56,11 @@ export function buildModel(input: DrivetrainInput, spinner: boolean): Model {
     kt,
     rm: input.motorResistance,
     i0: input.noLoadCurrent,
+    // ctms-dc-motor-speed, steady state at no load: ω₀ = (V₀ − I₀·R)/K_e, the speed I₀ was measured at.
+    w0: noLoadLoss === "speed" ? (input.noLoadVoltage - input.noLoadCurrent * input.motorResistance) / kt : 0,
     jm: input.motorRotorInertia,
     ilim: input.currentLimit,
+    limitAt: limitAt === "battery" ? LIMIT_BATTERY : limitAt === "none" ? LIMIT_NONE : LIMIT_MOTOR,
     duty: input.throttle,
     voc: input.cellCount * input.cellVoltage, // battery-thevenin-model: pack of n cells in series
     rp: input.cellCount * input.cellResistance,
@@ -81,6 +88,11 @@ export function buildModel(input: DrivetrainInput, spinner: boolean): Model {
     maxTime: input.maxTime,
   };
 }
+
+/** Where the current limit acts (Model.limitAt). */
+export const LIMIT_MOTOR = 0;
+export const LIMIT_BATTERY = 1;
+export const LIMIT_NONE = 2;
 
 // State vector: speeds, then the running integrals of every power flow.
 export const S_SPEED = 0; // Ω, rotor or robot [rad/s]
@@ -138,8 +150,10 @@ export class SpinUpSystem {
   readonly kt: number;
   readonly rm: number;
   readonly i0: number;
+  readonly w0: number;
   readonly jm: number;
   readonly ilim: number;
+  readonly limitAt: number;
   readonly duty: number;
   readonly voc: number;
   readonly rp: number;
@@ -191,8 +205,10 @@ export class SpinUpSystem {
     this.kt = m.kt;
     this.rm = m.rm;
     this.i0 = m.i0;
+    this.w0 = m.w0;
     this.jm = m.jm;
     this.ilim = m.ilim;
+    this.limitAt = m.limitAt;
     this.duty = m.duty;
     this.voc = m.voc;
     this.rp = m.rp;
@@ -245,13 +261,29 @@ export class SpinUpSystem {
     return this.muk * this.normalAt(om, wm);
   }
 
+  /**
+   * The no-load loss at motor speed wm as a current [A]: I₀ at every speed (constant loss torque),
+   * or I₀·ω/ω₀, a loss torque in proportion to speed that equals K_t·I₀ at the speed ω₀ where I₀
+   * was measured (the viscous friction term b·ω of ctms-dc-motor-speed, with b = K_t·I₀/ω₀).
+   */
+  lossCurrent(wm: number): number {
+    return this.w0 > 0 ? (this.i0 * wm) / this.w0 : this.i0;
+  }
+
   /** Controller, battery and motor at motor speed wm (erickson-power-electronics, battery-thevenin-model). */
   electrical(wm: number): void {
     const emf = this.kt * wm; // ctms-dc-motor-speed: e = K_e ω
     let current = (this.duty * this.voc - emf) / this.rTot; // D·V_b − e = I·R with V_b = V_oc − R_p·N·D·I
     let d = this.duty;
     this.limited = false;
-    if (current > this.ilim) {
+    if (this.limitAt === LIMIT_BATTERY && d * current > this.ilim) {
+      // Battery side held at I_lim per motor: V_b = V_oc − R_p·N·I_lim, and D·I = I_lim with
+      // D·V_b − e = I·R gives V_b·D² − e·D − I_lim·R = 0, the positive root (erickson-power-electronics).
+      const vb = this.voc - this.rp * this.N * this.ilim;
+      d = (emf + Math.sqrt(emf * emf + 4 * vb * this.ilim * this.rm)) / (2 * vb);
+      current = this.ilim / d;
+      this.limited = true;
+    } else if (this.limitAt === LIMIT_MOTOR && current > this.ilim) {
       // The controller lowers its duty so that D·(V_oc − R_p·N·D·I_lim) = e + I_lim·R: the smaller root.
       current = this.ilim;
       const need = emf + this.ilim * this.rm;
@@ -267,7 +299,7 @@ export class SpinUpSystem {
   /** Locked (weapon, or spinner gripping): one degree of freedom. Returns Ω̇ and sets the traction force. */
   lockedAcceleration(om: number, wm: number): number {
     this.electrical(wm);
-    const tm = this.N * this.kt * (this.current - this.i0); // motor torque net of the constant loss torque
+    const tm = this.N * this.kt * (this.current - this.lossCurrent(wm)); // motor torque net of the no-load loss
     const load = this.tf + this.c * om * om;
     let acc = (this.k * this.eta * tm - load) / this.jLockF; // gear-efficiency-model, motors driving
     if ((this.jLoad * acc + load) / this.rho < 0) acc = (this.k * (tm / this.eta) - load) / this.jLockR; // load driving the motors
@@ -297,7 +329,7 @@ export class SpinUpSystem {
       tg = this.stuck ? 0 : (this.jLoad * accBody + load) / this.rho;
     } else {
       this.electrical(wm);
-      const tm = this.N * this.kt * (this.current - this.i0);
+      const tm = this.N * this.kt * (this.current - this.lossCurrent(wm));
       const f = this.dir * this.kineticForceAt(om, wm); // serway-beichner-5e: f_k = μ_k n
       let dww = (this.g * this.eta * tm - f * this.rw) / this.jWheelF;
       tg = this.jw * dww + f * this.rw;
@@ -316,7 +348,7 @@ export class SpinUpSystem {
       this.stuck = false;
       pSlip = f * (ww * this.rw - om * this.roff);
     }
-    const tin = this.N * this.kt * (this.current - this.i0) - this.N * this.jm * dwm; // torque into the reduction
+    const tin = this.N * this.kt * (this.current - this.lossCurrent(wm)) - this.N * this.jm * dwm; // torque into the reduction
     // gear-efficiency-model: driving, T_out = η·G·T_in, so the loss is (1 − η)·T_in·ω_m; driven, (1 − η)·(−T_out)·ω_w.
     const pGear = wm > 0 ? (tg >= 0 ? (1 - this.eta) * tin * wm : -(1 - this.eta) * tg * ww) : 0;
     const ib = this.battCurrent;
@@ -325,7 +357,7 @@ export class SpinUpSystem {
     dy[S_DRAWN] = this.voc * ib;
     dy[S_BATT] = this.rp * ib * ib;
     dy[S_COPPER] = this.N * this.rm * this.current * this.current;
-    dy[S_MLOSS] = wm > 0 ? this.N * this.kt * this.i0 * wm : 0;
+    dy[S_MLOSS] = wm > 0 ? this.N * this.kt * this.lossCurrent(wm) * wm : 0;
     dy[S_GEAR] = pGear;
     dy[S_FRIC] = om > 0 ? this.tf * om : 0;
     dy[S_DRAG] = om > 0 ? this.c * om * om * om : 0;
@@ -342,9 +374,10 @@ export class SpinUpSystem {
     return 0.5 * (this.j * om * om + this.jw * ww * ww + this.N * this.jm * wm * wm);
   }
 
-  /** Positive while the controller limits the current. */
+  /** Positive while the controller limits the current (motor or battery side); −I_lim, never positive, with no limit. */
   currentMargin(wm: number): number {
-    return (this.duty * this.voc - this.kt * wm) / this.rTot - this.ilim;
+    const current = (this.duty * this.voc - this.kt * wm) / this.rTot;
+    return this.limitAt === LIMIT_NONE ? -this.ilim : (this.limitAt === LIMIT_BATTERY ? this.duty * current : current) - this.ilim;
   }
 
   /** Wheel rim speed minus ground speed at the contact [m/s]. */

@@ -1,4 +1,4 @@
-import type { DriveType } from "./inputs.ts";
+import type { CurrentLimitAt, DriveType, NoLoadLoss } from "./inputs.ts";
 
 // ---------------------------------------------------------------------------------------------
 // Results.
@@ -90,8 +90,19 @@ export interface DriveSummary {
   timeConstant: number;
   /** Output speed at which the motors' back-EMF equals the throttle's share of the open-circuit voltage [rad/s]. */
   idealNoLoadSpeed: number;
-  /** Output acceleration from rest with every motor at its current limit (grip assumed) [rad/s²]. */
+  /**
+   * Output acceleration from rest (grip assumed) [rad/s²]: every motor at its current limit when the
+   * limit acts on the motor current; at its stall current when it acts on the battery or nowhere.
+   */
   currentLimitedAcceleration: number;
+  /** Where the current limit acts ("motor", "battery" or "none"). */
+  currentLimitAt: CurrentLimitAt;
+  /** How the no-load loss is modelled ("constant" or "speed"). */
+  noLoadLoss: NoLoadLoss;
+  /** Each motor's current at standstill [A]: the limit (motor), above it (battery: I_lim/D), or (D·V_oc)/(R + N·D²·R_p) with no limit. */
+  stallCurrent: number;
+  /** The pack's current at standstill [A]. */
+  stallBatteryCurrent: number;
   /** Spinner: total grip force of the driven wheels, μ_s·s·M·g [N]; null for a weapon. */
   tractionLimit: number | null;
   /** Spinner: the robot's acceleration while the wheels slip, (μ_k·s·M·g·R − T_f)/J [rad/s²]; null for a weapon. */

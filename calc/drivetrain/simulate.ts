@@ -192,7 +192,8 @@ function integrate(m: Model, opts: Required<SpinUpOptions>): RawRun {
   const motorRef = (m.duty * m.voc) / m.kt; // motor no-load speed [rad/s]
   const speedRef = motorRef / sys.k;
   const energyRef = 0.5 * sys.jLockF * speedRef * speedRef;
-  const chargeRef = m.N * Math.min(m.ilim, (m.duty * m.voc) / sys.rTot) * tauLocked;
+  sys.electrical(0);
+  const chargeRef = m.N * sys.current * tauLocked;
   const rtol = opts.relativeTolerance;
   st.rtol = rtol;
   st.atol[S_SPEED] = rtol * speedRef;
@@ -414,8 +415,16 @@ function finiteOrNull(value: number): number | null {
  * $J_{eff} = J + (R/r_w)^2 n_w J_w + \eta k^2 N J_m$.
  * Slipping: $J\,\dot\Omega = \mu_k N_n R - T_f - c\Omega^2$ and
  * $(n_w J_w + \eta G^2 N J_m)\,\dot\omega_w = \eta G N K_t (I - I_0) - \mu_k N_n r_w$.
+ * Where the limit acts (`currentLimitAt`): "motor" caps I as above; "battery" caps D·I, so that
+ * $V_b D^2 - K_e k\Omega\,D - I_{lim} R = 0$ with $V_b = V_{oc} - N R_p I_{lim}$ and $I = I_{lim}/D$
+ * (erickson-power-electronics); "none" never caps it (stall: $I = D V_{oc}/(R + N D^2 R_p)$).
+ * No-load loss (`noLoadLoss`): "constant" charges $I_0$ at every speed; "speed" charges
+ * $I_0\,\omega_m/\omega_0$ with $\omega_0 = (V_0 - I_0 R)/K_e$, the viscous term $b\,\omega$ of
+ * ctms-dc-motor-speed with $b = K_t I_0/\omega_0$.
  *
- * @param input every field of `drivetrainInputs` [SI] and `driveType` ("weapon" | "spinner")
+ * @param input every field of `drivetrainInputs` [SI], `driveType` ("weapon" | "spinner"), and
+ *   optionally `currentLimitAt` ("motor", the default and the earlier model, | "battery" | "none")
+ *   and `noLoadLoss` ("constant", the default and the earlier model, | "speed")
  * @param options what to record and when to stop (see `SpinUpOptions`)
  * @returns times [s], speeds [rad/s], currents [A], voltages [V], energies [J], figures at top and
  *   target speed, the top speed's margin over the target [-], the regime segments, a verdict, and a
@@ -434,10 +443,10 @@ function finiteOrNull(value: number): number | null {
  * weapon-bite.
  */
 export function simulateSpinUp(input: DrivetrainInput, options: SpinUpOptions = {}): SpinUpResult {
-  const { driveType } = validateDrivetrainInput(input);
+  const { driveType, currentLimitAt, noLoadLoss } = validateDrivetrainInput(input);
   const opts = readOptions(options);
   const spinner = driveType === "spinner";
-  const m = buildModel(input, spinner);
+  const m = buildModel(input, spinner, currentLimitAt, noLoadLoss);
   const named = () => declaredInputs(drivetrainInputs, input) as { [K in keyof typeof drivetrainInputs]: NamedValue };
   // Time constants beyond the doubles (a gear efficiency near the smallest double) are out of the
   // model's reach: refused by name before any step is taken.
@@ -447,6 +456,9 @@ export function simulateSpinUp(input: DrivetrainInput, options: SpinUpOptions = 
     requireFiniteResult(Number.NaN, "drive's time constant", { gearEfficiency, gearRatio, motorKv, inertia, motorResistance, motorRotorInertia });
   }
   const run = integrate(m, opts);
+  // Standstill: each motor's current and the pack's with the limit where it acts (stall draws D·V/R with none).
+  const stall = new SpinUpSystem(m);
+  stall.electrical(0);
   const y = run.y;
 
   const kinetic = 0.5 * (m.j * y[S_SPEED]! ** 2 + m.jw * (y[S_MOTOR]! / m.g) ** 2 + m.N * m.jm * y[S_MOTOR]! ** 2);
@@ -478,7 +490,13 @@ export function simulateSpinUp(input: DrivetrainInput, options: SpinUpOptions = 
     addedInertiaShare: run.jLocked / input.inertia - 1,
     timeConstant: run.tauLocked,
     idealNoLoadSpeed: (m.duty * m.voc) / (m.kt * k),
-    currentLimitedAcceleration: Math.max(0, m.eta * k * m.N * m.kt * (m.ilim - m.i0) - m.tf) / run.jLocked,
+    // Motor limit: every motor at I_lim (as before); battery limit or none: at its stall current.
+    currentLimitedAcceleration:
+      Math.max(0, m.eta * k * m.N * m.kt * ((currentLimitAt === "motor" ? m.ilim : stall.current) - stall.lossCurrent(0)) - m.tf) / run.jLocked,
+    currentLimitAt,
+    noLoadLoss,
+    stallCurrent: stall.current,
+    stallBatteryCurrent: stall.battCurrent,
     tractionLimit: spinner ? m.fs : null,
     tractionLimitedAcceleration: spinner
       ? tractionLimitedAcceleration({

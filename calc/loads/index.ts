@@ -11,9 +11,9 @@
 import { rpmToRadPerSecond } from "../core/units.ts";
 import { DEFAULT_SAFETY_THRESHOLDS } from "./common.ts";
 import { DEFAULT_SHEAR_RATIO, fastenerCheck, type FastenerCheck, type FastenerCheckInput } from "./bolts.ts";
-import { rimCheck, type RimCheck, type RimCheckInput, type RimMaterialValues } from "./rims.ts";
+import { rimCheck, type RimCheck, type RimCheckInput, type RimMaterialValues, type MaterialStrengthBasis } from "./rims.ts";
 import { requireChoice, type ChoiceOption } from "./common.ts";
-import { MATERIALS } from "../materials/materials.ts";
+import { type Material, MATERIALS } from "../materials/materials.ts";
 import { MATERIAL_IDS, type MaterialId } from "../materials/densities.ts";
 import type { SourceKey } from "../sources/index.ts";
 import { requireInputObject } from "../core/spec-check.ts";
@@ -33,18 +33,32 @@ export const RIM_MATERIAL_OPTIONS: readonly ChoiceOption<MaterialId>[] = MATERIA
   label: MATERIALS[id].menuName,
 }));
 
-/** The rim check's material fields filled from a row of the materials table (param "material"). */
-export function rimMaterial(id: string): RimMaterialValues {
-  const row = MATERIALS[requireChoice("material", id, RIM_MATERIAL_OPTIONS)];
-  return { density: row.density, yieldStrength: row.yieldStrength, ultimateStrength: row.ultimateStrength, poisson: row.poissonRatio };
+/**
+ * The rim check's material fields filled from a row of the materials table (param "material"),
+ * with the basis of the strengths: the specified minimums where a standard gives them (the default,
+ * and what a design check should use), else the table's typical values. `basis: "typical"` asks for
+ * the typical values of every row.
+ */
+export function rimMaterial(id: string, basis: "minimum" | "typical" = "minimum"): RimMaterialValues & { strengthBasis: MaterialStrengthBasis } {
+  const row: Material = MATERIALS[requireChoice("material", id, RIM_MATERIAL_OPTIONS)];
+  const strengths = basis === "minimum" && row.minimum ? row.minimum : row;
+  return {
+    density: row.density,
+    yieldStrength: strengths.yieldStrength,
+    ultimateStrength: strengths.ultimateStrength,
+    poisson: row.poissonRatio,
+    strengthBasis: basis === "minimum" && row.minimum ? "minimum" : "typical",
+  };
 }
 
 /** One material choice with the values it fills in. */
 export interface RimMaterialChoice extends RimMaterialValues {
   value: MaterialId;
   label: string;
-  /** The row's full name and condition ("AISI 4340 steel, oil quenched from 800 °C, …"), shown under the menu. */
+  /** The row's full name and condition ("AISI 4340 steel, oil quenched from 800 °C, …") and the strengths' basis, shown under the menu. */
   detail: string;
+  /** Whether the strengths filled in are specified minimums or typical values. */
+  strengthBasis: MaterialStrengthBasis;
 }
 
 /**
@@ -57,7 +71,7 @@ export interface RimMaterialChoice extends RimMaterialValues {
 export function rimMaterialChoices(): RimMaterialChoice[] {
   return RIM_MATERIAL_OPTIONS.map((option) => ({
     ...option,
-    detail: `${MATERIALS[option.value].name}, ${MATERIALS[option.value].condition}`,
+    detail: `${MATERIALS[option.value].name}, ${MATERIALS[option.value].condition}; ${(MATERIALS[option.value] as Material).minimum ? "specified minimum strengths" : "typical strengths (no standard minimum in the table)"}`,
     ...rimMaterial(option.value),
   }));
 }

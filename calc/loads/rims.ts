@@ -291,6 +291,14 @@ export const RIM_SHAPE_OPTIONS = [
 
 export type RimShape = (typeof RIM_SHAPE_OPTIONS)[number]["value"];
 
+/** The basis of the strengths entered: specified minimums (a standard's, for design) or typical values. */
+export const STRENGTH_BASIS_OPTIONS = [
+  { value: "minimum", label: "Specified minimum" },
+  { value: "typical", label: "Typical" },
+] as const satisfies readonly ChoiceOption[];
+
+export type MaterialStrengthBasis = (typeof STRENGTH_BASIS_OPTIONS)[number]["value"];
+
 /** The material fields of the rim check: density [kg/m³], yield and ultimate strength [Pa], Poisson's ratio [-]. */
 export interface RimMaterialValues {
   density: number;
@@ -304,11 +312,17 @@ export const DEFAULT_RIM_MATERIAL: MaterialId = "al-6061-t6";
 
 /**
  * The default material's values, as the rim check's field defaults: the 6061-T6 row of the
- * materials table (substech-materials; ν from asm-matweb-datasheets). Written out here so that the
- * rim calculator's page does not load the whole table; a test keeps them equal to
- * `rimMaterial(DEFAULT_RIM_MATERIAL)`, and the table itself is offered through calc/loads/index.ts.
+ * materials table at its specified minimum strengths, 35/38 ksi (astm-b221; density
+ * substech-materials, ν asm-matweb-datasheets). Written out here so that the rim calculator's page
+ * does not load the whole table; a test keeps them equal to `rimMaterial(DEFAULT_RIM_MATERIAL)`,
+ * and the table itself is offered through calc/loads/index.ts.
  */
-export const DEFAULT_RIM_MATERIAL_VALUES: Readonly<RimMaterialValues> = { density: 2700, yieldStrength: 276e6, ultimateStrength: 310e6, poisson: 0.33 };
+export const DEFAULT_RIM_MATERIAL_VALUES: Readonly<RimMaterialValues> = {
+  density: 2700,
+  yieldStrength: 241316505.26089266,
+  ultimateStrength: 262000777.14039773,
+  poisson: 0.33,
+};
 const DEFAULT_MATERIAL = DEFAULT_RIM_MATERIAL_VALUES;
 
 /** Numeric inputs of the rim check, in SI. Choices: `RIM_SHAPE_OPTIONS` (and, in calc/loads/index.ts, `RIM_MATERIAL_OPTIONS` to fill the material fields via `rimMaterial`). */
@@ -383,13 +397,20 @@ export const rimCheckInputs = defineInputs({
 export type RimCheckInput = { [K in keyof typeof rimCheckInputs]: number } & {
   /** A value of `RIM_SHAPE_OPTIONS`. */
   shape: string;
+  /** A value of `STRENGTH_BASIS_OPTIONS`: what the strengths entered are; "minimum" when left out. */
+  strengthBasis?: string;
 };
 
-/** Choice default of the rim check. */
-export const RIM_CHOICE_DEFAULTS = { shape: "thin-ring" } as const satisfies { shape: RimShape };
+/** Choice defaults of the rim check. */
+export const RIM_CHOICE_DEFAULTS = { shape: "thin-ring", strengthBasis: "minimum" } as const satisfies {
+  shape: RimShape;
+  strengthBasis: MaterialStrengthBasis;
+};
 
 export interface RimCheck {
   shape: RimShape;
+  /** The basis of the strengths the check used, as entered: "minimum" or "typical". */
+  strengthBasis: MaterialStrengthBasis;
   /** Speed of the outer edge, ω·b [m/s]. */
   tipSpeed: number;
   /** The largest hoop stress, which is also the largest principal stress [Pa]. */
@@ -473,6 +494,7 @@ function peakStresses(
 export function rimCheck(input: RimCheckInput): RimCheck {
   requireInputObject(input);
   const shape = requireChoice("shape", input.shape, RIM_SHAPE_OPTIONS);
+  const strengthBasis = requireChoice("strengthBasis", input.strengthBasis ?? "minimum", STRENGTH_BASIS_OPTIONS);
   const outerRadius = requireDeclared(rimCheckInputs.outerRadius, "outerRadius", input.outerRadius);
   requireDeclared(rimCheckInputs.innerRadius, "innerRadius", input.innerRadius);
   const density = requireDeclared(rimCheckInputs.density, "density", input.density);
@@ -495,6 +517,7 @@ export function rimCheck(input: RimCheckInput): RimCheck {
   return requireFiniteFields(
     {
       shape,
+      strengthBasis,
       tipSpeed: v,
       peakStress: peak.hoop,
       peakStressRadius: peak.hoopRadius,

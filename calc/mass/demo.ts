@@ -4,6 +4,7 @@ import { type AppliedCounterweight, type MountingPoint, applyCounterweight } fro
 import { type MassBalance, type MassBalanceScalars, massBalance, massBalanceInputs } from "./mass-balance.ts";
 import type { LayoutPart } from "./parts.ts";
 import { type TrueSensorRadius, trueSensorRadius } from "./sensor.ts";
+import { type SpinCentre, spinCentre } from "./spin-centre.ts";
 
 // ---------------------------------------------------------------------------------------------
 // Worked example: an invented demo robot.
@@ -77,7 +78,9 @@ export interface DemoRobotBalance {
   washerRadius: number;
   /** The layout with the washer stack added, and its properties. */
   withWashers: AppliedCounterweight;
-  /** Sensor figures with the washers in place. */
+  /** Where the robot turns with the washers in place. */
+  spinCentreWithWashers: SpinCentre;
+  /** Sensor figures with the washers in place, about that spin centre. */
   sensorWithWashers: TrueSensorRadius;
 }
 
@@ -109,6 +112,13 @@ export function demoRobotBalance(): DemoRobotBalance {
     washers > 0
       ? applyCounterweight({ parts, mass: washerMass, x: at.x, y: at.y, z: balance.layout.centreZ, name: `${washers} washers` })
       : { parts: [...parts], before: balance.layout, after: balance.layout };
+  const turnsWithWashers = spinCentre({
+    centreX: withWashers.after.centreX,
+    centreY: withWashers.after.centreY,
+    angularSpeed: defaults.spinSpeed,
+    sideGrip: defaults.sideGrip,
+    gripShare: defaults.gripShare,
+  });
   return {
     parts,
     mountingPoints: candidates,
@@ -120,9 +130,10 @@ export function demoRobotBalance(): DemoRobotBalance {
     // Plan distance from the axis, √(x² + y²) (oxford-concise-mathematics, distance formula).
     washerRadius: Math.hypot(at.x, at.y),
     withWashers,
+    spinCentreWithWashers: turnsWithWashers,
     sensorWithWashers: trueSensorRadius({
-      centreX: withWashers.after.centreX,
-      centreY: withWashers.after.centreY,
+      centreX: turnsWithWashers.centreX,
+      centreY: turnsWithWashers.centreY,
       sensorX: defaults.sensorX,
       sensorY: defaults.sensorY,
     }),
@@ -144,4 +155,6 @@ export const MASS_BALANCE_SOURCE_KEYS: readonly SourceKey[] = [
   "newton-second-law",
   "openstax-college-physics",
   "asm-matweb-datasheets",
+  "serway-beichner-5e",
+  "openstax-university-physics-1",
 ];

@@ -18,7 +18,8 @@ export type PartOutline =
 /**
  * The outline of one part seen from above: a circle for a disk or cylinder, a hoop for a thin
  * ring, inner and outer circles for an annulus, the four rotated corners of a plate
- * (counter-clockwise), the end points of a rod, and a marker for point and custom parts.
+ * (counter-clockwise; a lying cylinder's too, length along its axis and width its diameter), the
+ * end points of a rod, and a marker for point and custom parts.
  *
  * @param part the part (checked)
  * @returns the outline [m]
@@ -44,11 +45,12 @@ export function partOutline(part: LayoutPart): PartOutline {
       return { kind: "hoop", centre, radius: s.radius };
     case "annulus":
       return { kind: "annulus", centre, innerRadius: s.innerRadius, outerRadius: s.outerRadius };
-    case "plate": {
+    case "plate":
+    case "lyingCylinder": {
       const c = Math.cos(s.angle);
       const n = Math.sin(s.angle);
       const hl = s.length / 2;
-      const hw = s.width / 2;
+      const hw = s.kind === "plate" ? s.width / 2 : s.radius;
       const corner = (u: number, v: number): Point2 => [part.x + u * c - v * n, part.y + u * n + v * c];
       return { kind: "polygon", centre, corners: [corner(-hl, -hw), corner(hl, -hw), corner(hl, hw), corner(-hl, hw)] };
     }

@@ -15,10 +15,11 @@ import { type LayoutPart, MAX_PARTS, type PartMassSpec, type PartShape, type Par
 // by "_", all URL-safe. Lengths in mm, masses in g, angles in degrees, inertia in g·mm²; a number
 // followed by "si" is in SI units instead (written when no number in the unit reads back exactly).
 // Field order: shape, name, x, y, z, then the shape's dimensions, then the mass: a number (grams)
-// or a material id followed, except for cylinders, by the thickness in mm.
+// or a material id followed, except for cylinders (upright or lying), by the thickness in mm.
 //   pt     (no dimensions)          disk  radius            ring radius
 //   ann    inner, outer radius      plate length, width, angle
 //   rod    length, angle            cyl   radius, height
+//   lcyl   radius, length, angle    (a cylinder lying in the spin plane)
 //   cust   Izz, Ixz, Iyz [g·mm²]   (mass must be given)
 
 /** Version of the text form written by `encodeLayout`. */
@@ -32,11 +33,12 @@ const SHAPE_TOKENS: Record<PartShapeKind, string> = {
   plate: "plate",
   rod: "rod",
   cylinder: "cyl",
+  lyingCylinder: "lcyl",
   custom: "cust",
 };
 // A Map, not an object: a token such as "toString" or "constructor" must not find what every object inherits.
 const TOKEN_SHAPES = new Map(Object.entries(SHAPE_TOKENS).map(([k, v]) => [v, k as PartShapeKind]));
-const DIM_COUNT: Record<PartShapeKind, number> = { point: 0, disk: 1, ring: 1, annulus: 2, plate: 3, rod: 2, cylinder: 2, custom: 3 };
+const DIM_COUNT: Record<PartShapeKind, number> = { point: 0, disk: 1, ring: 1, annulus: 2, plate: 3, rod: 2, cylinder: 2, lyingCylinder: 3, custom: 3 };
 const MM = 1e-3;
 const GRAM = 1e-3;
 const DEG = Math.PI / 180;
@@ -50,6 +52,7 @@ const DIM_FACTORS: Record<PartShapeKind, readonly number[]> = {
   plate: [MM, MM, DEG],
   rod: [MM, DEG],
   cylinder: [MM, MM],
+  lyingCylinder: [MM, MM, DEG],
   custom: [G_MM2, G_MM2, G_MM2],
 };
 /** Longest layout text the parser reads [characters]. */
@@ -76,6 +79,8 @@ function shapeDims(shape: PartShape): string[] {
       return [mm(shape.length), exactNumberText(shape.angle, DEG)];
     case "cylinder":
       return [mm(shape.radius), mm(shape.height)];
+    case "lyingCylinder":
+      return [mm(shape.radius), mm(shape.length), exactNumberText(shape.angle, DEG)];
     case "custom":
       return [shape.inertiaZ, shape.productXZ, shape.productYZ].map((v) => exactNumberText(v, G_MM2));
   }
@@ -111,7 +116,7 @@ export function encodeLayout(parts: readonly LayoutPart[]): string {
     if (part.mass.kind === "given") fields.push(exactNumberText(part.mass.mass, GRAM));
     else {
       fields.push(part.mass.material);
-      if (part.shape.kind !== "cylinder") fields.push(exactNumberText(part.mass.thickness ?? 0, MM));
+      if (part.shape.kind !== "cylinder" && part.shape.kind !== "lyingCylinder") fields.push(exactNumberText(part.mass.thickness ?? 0, MM));
     }
     return fields.join("_");
   });
@@ -180,7 +185,9 @@ function parsePartToken(token: string): LayoutPart | string | { error: unknown; 
               ? { kind, length: d(0), angle: d(1) }
               : kind === "cylinder"
                 ? { kind, radius: d(0), height: d(1) }
-                : { kind, inertiaZ: d(0), productXZ: d(1), productYZ: d(2) };
+                : kind === "lyingCylinder"
+                  ? { kind, radius: d(0), length: d(1), angle: d(2) }
+                  : { kind, inertiaZ: d(0), productXZ: d(1), productYZ: d(2) };
   const massField = fields[5 + nDims]!;
   let mass: PartMassSpec;
   let used = 6 + nDims;
@@ -188,7 +195,7 @@ function parsePartToken(token: string): LayoutPart | string | { error: unknown; 
   if (given !== null) {
     mass = { kind: "given", mass: given };
   } else if (isMaterialId(massField)) {
-    if (kind === "cylinder") {
+    if (kind === "cylinder" || kind === "lyingCylinder") {
       mass = { kind: "material", material: massField };
     } else {
       const t = fields[used] === undefined ? null : readExactNumber(fields[used]!, MM);

@@ -34,6 +34,7 @@ import {
 import { type LayoutPart, MAX_PARTS, MAX_PART_MASS } from "./parts.ts";
 import { type MassProperties, massProperties } from "./properties.ts";
 import { type TrueSensorRadius, trueSensorRadius } from "./sensor.ts";
+import { type CoupleLift, type SpinCentre, coupleLift, spinCentre } from "./spin-centre.ts";
 import { requireInputObject, requireList, requireWithinSpecs, declaredInputs, requireFiniteFields } from "../core/spec-check.ts";
 
 // ---------------------------------------------------------------------------------------------
@@ -137,6 +138,36 @@ export const massBalanceInputs = defineInputs({
     urlKey: "sy",
     help: "Sensor position from the geometric centre, y.",
   },
+  sideGrip: {
+    label: "Wheel side grip",
+    kind: "fraction",
+    min: 0,
+    max: 3,
+    default: 0.8,
+    unit: { metric: "frac", us: "frac" },
+    urlKey: "mu",
+    help: "Sideways friction coefficient of the drive wheels (0.8: rubber sliding on concrete); 0: no grip.",
+  },
+  gripShare: {
+    label: "Weight on the drive wheels",
+    kind: "fraction",
+    min: 0,
+    max: 1,
+    default: 0.9,
+    unit: { metric: "frac", us: "frac" },
+    urlKey: "ws",
+    help: "Share of the weight on the drive wheels, whose centre is taken as the geometric centre.",
+  },
+  supportRadius: {
+    label: "Support radius",
+    kind: "length",
+    min: 0,
+    minOpen: true,
+    max: 2,
+    default: 0.07,
+    urlKey: "sr",
+    help: "From the centre to the nearest edge the robot could tip over (wheel or skid contact).",
+  },
 });
 
 export type MassBalanceScalars = { [K in keyof typeof massBalanceInputs]: number };
@@ -172,6 +203,8 @@ export interface MassBalance {
    * couple alone is within the grade and one counterweight at the height of the centre of mass does.
    */
   coupleShareOfPermissible: number;
+  /** The couple's rocking moment against the weight's restoring moment, and the speed one side lifts at. */
+  lift: CoupleLift;
   twoPlane: TwoPlaneCorrection;
   counterweight: {
     atRadius: CounterweightAtRadius;
@@ -184,6 +217,9 @@ export interface MassBalance {
    * 10 000 kg part limit.
    */
   fix: AppliedCounterweight & { method: "none" | "correction-radius" | "candidate" | "too-heavy" };
+  /** Where the robot turns: the wheels' centre while their side grip holds, else short of the centre of mass; before and after the fix. */
+  spinCentre: { before: SpinCentre; after: SpinCentre };
+  /** The sensor's radius about the spin centre, before and after the fix. */
   sensor: { before: TrueSensorRadius; after: TrueSensorRadius };
 }
 
@@ -194,22 +230,38 @@ export interface MassBalance {
  *
  * Formula: $e = |\bar{\mathbf c}|$, $U = M e$, $G = e\,\Omega$, $U_{per} = M G_{chosen} / \Omega$,
  * $M_{rock} = \Omega^2\sqrt{I_{xz}^2 + I_{yz}^2}$, $m_{min} = M(e - e_t)/(r + e_t)$,
- * couple share $\dfrac{C/|z_2 - z_1|}{U_{per}/2}$ with $C = \sqrt{I_{xz}^2 + I_{yz}^2}$
+ * couple share $\dfrac{C/|z_2 - z_1|}{U_{per}/2}$ with $C = \sqrt{I_{xz}^2 + I_{yz}^2}$, couple lift
+ * $\Omega^2 C/(M g a)$, grip radius $d_g = \mu s g/\Omega^2$ (spin centre at the wheels' centre for
+ * $e \le d_g$, else $d_g$ short of the centre of mass), sensor radius about the spin centre
  *
  * @param input the parts, optional candidates, and every field of `massBalanceInputs` (SI)
  * @returns MassBalance, with U/U_per, e/e_target and the couple per plane against U_per/2 as shares [-]
  *
- * Assumptions: rigid body spinning steadily about the vertical axis through its centre of mass; the
- * counterweight goes at the height of the centre of mass so that it adds no couple.
+ * Assumptions: rigid body spinning steadily about a vertical axis; the drive wheels' centre is the
+ * geometric centre, and the robot turns about it while the wheels' side grip holds the centre of
+ * mass on its orbit (see spinCentre); the counterweight goes at the height of the centre of mass so
+ * that it adds no couple.
  * Sources: centre-of-mass, parallel-axis-theorem, iso-21940-11, rigid-rotor-unbalance,
- * bloch-geitner-machinery-maintenance, openstax-college-physics.
+ * bloch-geitner-machinery-maintenance, openstax-college-physics, newton-second-law, serway-beichner-5e,
+ * openstax-university-physics-1.
  */
 export function massBalance(input: MassBalanceInput): MassBalance {
   const { parts, candidates } = requireInputObject(input);
-  const { spinSpeed, targetOffset, balanceGrade, correctionRadius, maxRadius, counterweightMass, planeZ1, planeZ2, sensorX, sensorY } = requireWithinSpecs(
-    massBalanceInputs,
-    input,
-  );
+  const {
+    spinSpeed,
+    targetOffset,
+    balanceGrade,
+    correctionRadius,
+    maxRadius,
+    counterweightMass,
+    planeZ1,
+    planeZ2,
+    sensorX,
+    sensorY,
+    sideGrip,
+    gripShare,
+    supportRadius,
+  } = requireWithinSpecs(massBalanceInputs, input);
   const layout = massProperties(parts);
   const stat = staticUnbalance({ totalMass: layout.totalMass, offset: layout.offset, angularSpeed: spinSpeed });
   const equivalentGrade = equivalentBalanceGrade({ offset: layout.offset, angularSpeed: spinSpeed });
@@ -264,6 +316,9 @@ export function massBalance(input: MassBalanceInput): MassBalance {
   } else {
     fix = { method: "correction-radius", ...applyCounterweight({ parts, mass: fixMass, x: atRadius.x, y: atRadius.y, z: layout.centreZ }) };
   }
+  const grip = { angularSpeed: spinSpeed, sideGrip, gripShare };
+  const turnsBefore = spinCentre({ centreX: layout.centreX, centreY: layout.centreY, ...grip });
+  const turnsAfter = spinCentre({ centreX: fix.after.centreX, centreY: fix.after.centreY, ...grip });
   return requireFiniteFields(
     {
       layout,
@@ -278,12 +333,14 @@ export function massBalance(input: MassBalanceInput): MassBalance {
       offsetShareOfTarget,
       couple,
       coupleShareOfPermissible,
+      lift: coupleLift({ couple: couple.couple, totalMass: layout.totalMass, supportRadius, angularSpeed: spinSpeed }),
       twoPlane,
       counterweight: { atRadius, forMass, candidates: choice },
       fix,
+      spinCentre: { before: turnsBefore, after: turnsAfter },
       sensor: {
-        before: trueSensorRadius({ centreX: layout.centreX, centreY: layout.centreY, sensorX, sensorY }),
-        after: trueSensorRadius({ centreX: fix.after.centreX, centreY: fix.after.centreY, sensorX, sensorY }),
+        before: trueSensorRadius({ centreX: turnsBefore.centreX, centreY: turnsBefore.centreY, sensorX, sensorY }),
+        after: trueSensorRadius({ centreX: turnsAfter.centreX, centreY: turnsAfter.centreY, sensorX, sensorY }),
       },
     },
     "balance figures",
@@ -308,7 +365,7 @@ export interface BalanceSnapshot {
   equivalentGrade: number;
   /** Finest standard grade met, or null when coarser than G 4000. */
   gradeMet: BalanceGrade | null;
-  /** The sensor about the new centre of mass. */
+  /** The sensor about the new spin centre. */
   sensor: TrueSensorRadius;
 }
 
@@ -385,6 +442,13 @@ export function counterweightPlan(request: { input: MassBalanceInput; balance: M
   }
   const { after } = placed;
   const equivalentGrade = equivalentBalanceGrade({ offset: after.offset, angularSpeed: input.spinSpeed });
+  const turns = spinCentre({
+    centreX: after.centreX,
+    centreY: after.centreY,
+    angularSpeed: input.spinSpeed,
+    sideGrip: input.sideGrip,
+    gripShare: input.gripShare,
+  });
   return {
     status: "apply",
     // Polar form of the mounting point: r = √(x² + y²), θ = atan2(y, x) (oxford-concise-mathematics).
@@ -394,7 +458,7 @@ export function counterweightPlan(request: { input: MassBalanceInput; balance: M
       offset: after.offset,
       equivalentGrade,
       gradeMet: finestGradeMet(equivalentGrade),
-      sensor: trueSensorRadius({ centreX: after.centreX, centreY: after.centreY, sensorX: input.sensorX, sensorY: input.sensorY }),
+      sensor: trueSensorRadius({ centreX: turns.centreX, centreY: turns.centreY, sensorX: input.sensorX, sensorY: input.sensorY }),
     },
   };
 }

@@ -25,6 +25,8 @@ import { requireFiniteFields } from "../core/spec-check.ts";
  * - `plate`: rectangular plate in the xy plane, its length along the direction `angle`;
  * - `rod`: slender rod in the xy plane along the direction `angle`;
  * - `cylinder`: solid cylinder whose axis is parallel to z (the spin axis);
+ * - `lyingCylinder`: solid cylinder lying in the xy plane, its axis along the direction `angle` (a
+ *   drive motor lying radially);
  * - `custom`: any part whose own moment of inertia about the axis through its own centre, parallel
  *   to z, is known, with its own products of inertia (positive-product convention).
  */
@@ -36,6 +38,7 @@ export type PartShape =
   | { kind: "plate"; length: number; width: number; angle: number }
   | { kind: "rod"; length: number; angle: number }
   | { kind: "cylinder"; radius: number; height: number }
+  | { kind: "lyingCylinder"; radius: number; length: number; angle: number }
   | { kind: "custom"; inertiaZ: number; productXZ: number; productYZ: number };
 
 export type PartShapeKind = PartShape["kind"];
@@ -43,8 +46,8 @@ export type PartShapeKind = PartShape["kind"];
 /**
  * How a part's mass is known: weighed (`given`), or from a material of the materials table and the
  * shape's volume. `thickness` [m] is the axial thickness of a disk, annulus or plate, and the
- * diameter of the round section of a ring or rod; a cylinder's volume comes from its own height
- * (any thickness is ignored). Point and custom parts need a given mass.
+ * diameter of the round section of a ring or rod; a cylinder's volume comes from its own height or
+ * length (any thickness is ignored). Point and custom parts need a given mass.
  */
 export type PartMassSpec = { kind: "given"; mass: number } | { kind: "material"; material: MaterialId; thickness?: number };
 
@@ -63,7 +66,7 @@ export interface LayoutPart {
 }
 
 /** The shape kinds, in the order a part picker lists them. */
-export const PART_SHAPE_KINDS: readonly PartShapeKind[] = ["point", "disk", "ring", "annulus", "plate", "rod", "cylinder", "custom"];
+export const PART_SHAPE_KINDS: readonly PartShapeKind[] = ["point", "disk", "ring", "annulus", "plate", "rod", "cylinder", "lyingCylinder", "custom"];
 
 /** Largest coordinate or dimension accepted [m]: keeps every sum finite. */
 const MAX_LENGTH = 100;
@@ -137,6 +140,11 @@ export function checkPart(part: LayoutPart, prefix = "part"): void {
       requireLength(`${p}.radius`, s.radius);
       requireLength(`${p}.height`, s.height);
       break;
+    case "lyingCylinder":
+      requireLength(`${p}.radius`, s.radius);
+      requireLength(`${p}.length`, s.length);
+      requireInRange(`${p}.angle`, s.angle, "rad", ANGLE);
+      break;
     case "custom":
       requireInRange(`${p}.inertiaZ`, s.inertiaZ, "kg·m²", { min: 0, max: MAX_OWN_INERTIA });
       requireInRange(`${p}.productXZ`, s.productXZ, "kg·m²", PRODUCT);
@@ -160,7 +168,7 @@ export function checkPart(part: LayoutPart, prefix = "part"): void {
     if (s.kind === "point" || s.kind === "custom") {
       throw new CalcInputError({ param: `${prefix}.mass.kind`, value: "material", expected: `"given" for a ${s.kind} part (it has no volume)`, unit: "" });
     }
-    if (s.kind !== "cylinder") {
+    if (s.kind !== "cylinder" && s.kind !== "lyingCylinder") {
       if (m.thickness === undefined) {
         throw new CalcInputError({
           param: `${prefix}.mass.thickness`,
@@ -197,7 +205,7 @@ export function checkPart(part: LayoutPart, prefix = "part"): void {
  * Volume of a part made of a material (oxford-concise-mathematics, plane areas × thickness).
  *
  * Formula: disk $\pi R^2 t$; ring $2\pi R\cdot\pi d^2/4$; annulus $\pi(R_o^2 - R_i^2)\,t$;
- * plate $L W t$; rod $L\,\pi d^2/4$; cylinder $\pi R^2 h$
+ * plate $L W t$; rod $L\,\pi d^2/4$; cylinder $\pi R^2 h$; lying cylinder $\pi R^2 L$
  *
  * @param part a part whose mass kind is "material" (checked)
  * @returns V [m³]
@@ -229,6 +237,8 @@ function volumeOf(shape: PartShape, thickness: number): number {
       return shape.length * roundSection;
     case "cylinder":
       return Math.PI * shape.radius * shape.radius * shape.height;
+    case "lyingCylinder":
+      return Math.PI * shape.radius * shape.radius * shape.length;
     default:
       return 0;
   }
@@ -274,19 +284,22 @@ export interface OwnInertia {
  * for the rod).
  *
  * Formula: point $0$; disk and cylinder $\tfrac12 mR^2$; ring $mR^2$; annulus
- * $\tfrac12 m(R_i^2 + R_o^2)$; plate $\tfrac1{12} m(L^2 + W^2)$; rod $\tfrac1{12} mL^2$
+ * $\tfrac12 m(R_i^2 + R_o^2)$; plate $\tfrac1{12} m(L^2 + W^2)$; rod $\tfrac1{12} mL^2$; lying
+ * cylinder (about a diameter through its centre) $\tfrac1{12} m(3R^2 + L^2)$
  *
  * @param part the part (checked)
  * @returns inertiaZ [kg·m²], productXZ and productYZ [kg·m²]
  *
  * Assumptions: every built-in shape is symmetric about its own mid-plane parallel to xy, so its own
- * products I'_xz and I'_yz are exactly 0 (only a custom part can carry its own). The plate formula
+ * products I'_xz and I'_yz are exactly 0 (only a custom part can carry its own); a lying cylinder's
+ * axis is horizontal, so z is one of its principal axes and its products are 0 too. The plate formula
  * holds for any thickness; the ring and rod are idealised: a round section of diameter d adds
  * 3md²/16 (ring) and md²/16 (rod), a relative error of 0.19 (d/R)² and 0.75 (d/L)².
  * @example
  * partOwnInertia({ name: "disk", shape: { kind: "disk", radius: 0.1 }, mass: { kind: "given", mass: 2 }, x: 0, y: 0, z: 0 }) // → { inertiaZ: 0.01, productXZ: 0, productYZ: 0 }
  * Sources: oxford-concise-mathematics, mathmos-moments-of-inertia (annulus),
- * web-formulas-moment-of-inertia (plate, rod), young-freedman-university-physics (rod).
+ * web-formulas-moment-of-inertia (plate, rod), young-freedman-university-physics (rod),
+ * web-formulas-moment-of-inertia (lying cylinder).
  */
 export function partOwnInertia(part: LayoutPart): OwnInertia {
   checkPart(part);
@@ -317,6 +330,9 @@ function inertiaOf(shape: PartShape, m: number): OwnInertia {
       return { inertiaZ: (m * (shape.length * shape.length + shape.width * shape.width)) / 12, ...zero };
     case "rod":
       return { inertiaZ: (m * shape.length * shape.length) / 12, ...zero };
+    case "lyingCylinder":
+      // Solid cylinder about a diameter through its centre, mR²/4 + mL²/12 = m(3R² + L²)/12 (web-formulas-moment-of-inertia).
+      return { inertiaZ: (m * (3 * shape.radius * shape.radius + shape.length * shape.length)) / 12, ...zero };
     case "custom":
       return { inertiaZ: shape.inertiaZ, productXZ: shape.productXZ, productYZ: shape.productYZ };
   }

@@ -56,7 +56,24 @@ export interface Material {
   fromMemory: readonly MaterialProperty[];
   /** One sentence on use or caveats. */
   note: string;
+  /**
+   * The specified minimum strengths a material standard gives for this condition, where one does:
+   * what checks use by default. Absent when the table has only typical values for the row.
+   */
+  minimum?: {
+    /** Minimum yield or 0.2 % proof strength [Pa]. */
+    yieldStrength: number;
+    /** Minimum ultimate tensile strength [Pa]. */
+    ultimateStrength: number;
+    /** The standard. */
+    source: SourceKey;
+    /** Where in it (table, product form, thickness range). */
+    locator: string;
+  };
 }
+
+/** One ksi (1000 lbf/in²) in pascals: 1000 × 4.4482216152605 N / 0.0254² m² (nist-sp811, exact from the definitions). */
+const KSI = (1000 * 4.4482216152605) / (0.0254 * 0.0254);
 
 /**
  * The material table; each row names the data sheet or table its values were read from.
@@ -72,7 +89,14 @@ export const MATERIALS = {
     otherSources: ["asm-matweb-datasheets"],
     status: "confirmed",
     fromMemory: [],
-    note: "Typical values; the specified minimums (about 240/290 MPa) are lower, so design on those when it matters.",
+    note: "Typical values are not for design: the specified minimums (35/38 ksi, 241/262 MPa, for extrusions) are lower, and checks use those.",
+    minimum: {
+      yieldStrength: 35 * KSI,
+      ultimateStrength: 38 * KSI,
+      source: "astm-b221",
+      locator:
+        "6061-T6, T6510, T6511 extrusions up to 0.249 in: tensile ≥ 38 ksi, yield ≥ 35 ksi (the same 38/35 ksi as the seamless-cylinder table of 49 CFR 178.46)",
+    },
   },
   "steel-4130-normalized": {
     ...MATERIAL_DENSITIES["steel-4130-normalized"],

@@ -36,7 +36,8 @@ export const MASS_SOURCES = {
     author: "Web-Formulas",
     title: "Moment of Inertia",
     publication: "Web-Formulas online formula collection",
-    locator: "table of bodies: particle Md², ring MR², rectangular plate M(L² + W²)/12, bar ML²/12 and ML²/3",
+    locator:
+      "table of bodies: particle Md², ring MR², rectangular plate M(L² + W²)/12, bar ML²/12 and ML²/3, cylinder about a diameter through its centre MR²/4 + ML²/12",
   },
   "young-freedman-university-physics": {
     author: "H. D. Young, R. A. Freedman",

@@ -44,6 +44,7 @@ const SHAPE_NAMES = {
   plate: "Plate",
   rod: "Rod",
   cylinder: "Cylinder (upright)",
+  lyingCylinder: "Cylinder (lying)",
   custom: "Custom (own inertia)",
 };
 const MODE_NAMES: Record<ModeKey, string> = { r: "Mass at a radius", m: "Radius for a mass", p: "Best mounting point" };
@@ -311,6 +312,10 @@ export default function MassLayoutCalculator({ id = massCalculator.anchor, layou
           Parts above and below the centre of mass rock it: {formatNumber(b.coupleShareOfPermissible * 100)} % of the {chosen} allowance per plane.{" "}
           {rocks ? "A mass in each plane cancels rocking and offset:" : "One counterweight at the height of the centre of mass will do."}
         </p>
+        <p data-out="couple-lift" class={b.lift.ratio >= 1 ? "field-error" : undefined}>
+          Rocking moment {formatNumber(b.lift.ratio * 100)} % of the weight's on the support radius
+          {b.lift.liftSpeed === null ? ": no side lifts." : `; one side lifts at ${q(b.lift.liftSpeed, "angularSpeed")}.`}
+        </p>
         {rocks && (
           <Outs
             rows={[
@@ -411,7 +416,14 @@ export default function MassLayoutCalculator({ id = massCalculator.anchor, layou
       <>
         <Outs
           rows={[
-            ["True radius (about the centre of mass)", "sensor-true", q(s.radiusTrue, "length")],
+            [
+              "Robot turns about",
+              "spin-centre",
+              b.spinCentre.before.state === "wheels-hold"
+                ? "the wheels' centre (their grip holds)"
+                : `${q(b.spinCentre.before.distanceFromWheels, "length")} out (wheels slide)`,
+            ],
+            ["True radius (about the spin centre)", "sensor-true", q(s.radiusTrue, "length")],
             ["Assumed radius (about the geometric centre)", "sensor-assumed", q(s.radiusAssumed, "length")],
             ["Difference", "sensor-diff", q(s.difference, "length")],
             ["Speed read high by √(r/r̂)", "sensor-ratio", `× ${formatNumber(s.rateRatio, 5)}`],
@@ -565,6 +577,7 @@ export default function MassLayoutCalculator({ id = massCalculator.anchor, layou
           {field("planeZ1")}
           {field("planeZ2")}
           {mode === "r" ? null : field("correctionRadius")}
+          {field("supportRadius")}
         </div>
         {couple}
 
@@ -572,6 +585,8 @@ export default function MassLayoutCalculator({ id = massCalculator.anchor, layou
         <div class="mass-grid">
           {field("sensorX")}
           {field("sensorY")}
+          {field("sideGrip")}
+          {field("gripShare")}
         </div>
         {sensor}
         {ok ? (

@@ -34,6 +34,8 @@ export interface MaterialChoice extends RimMaterialValues {
   label: string;
   /** The full name and condition, shown under the menu once picked. */
   detail?: string;
+  /** Whether the strengths it fills in are specified minimums or typical values. */
+  strengthBasis?: string;
 }
 
 /** The four fields a material fills. */
@@ -89,6 +91,7 @@ export function createRimModel(materials: readonly MaterialChoice[]) {
       const row = rowOf(id);
       if (!row) return;
       for (const name of MATERIAL_FIELDS) fields.texts[name].value = defaultText({ ...rimCalculator.inputs[name], default: row[name] }, fields.system.value);
+      model.choices.strengthBasis.value = row.strengthBasis ?? "typical";
     });
   }
   /** Radial and hoop stress across the radius [Pa] at radii [m]; one point for a thin ring. */
@@ -109,11 +112,11 @@ export interface RimCalculatorProps {
 }
 
 type FieldName = keyof typeof rimCheckInputs;
-type ChoiceName = "shape" | "material";
+type ChoiceName = "shape" | "material" | "strengthBasis";
 
 const GROUPS: { legend: string; items: (FieldName | ChoiceName)[] }[] = [
   { legend: "Shape and speed", items: ["shape", "outerRadius", "innerRadius", "angularSpeed"] },
-  { legend: "Material", items: ["material", "density", "yieldStrength", "ultimateStrength", "poisson"] },
+  { legend: "Material", items: ["material", "density", "yieldStrength", "ultimateStrength", "strengthBasis", "poisson"] },
   { legend: "Verdict", items: ["failBelow", "marginalBelow"] },
 ];
 
@@ -247,8 +250,16 @@ export default function RimCalculator({ id = rimCalculator.anchor, materials = [
           <fieldset key={group.legend}>
             <legend>{group.legend}</legend>
             {group.items.map((name) =>
-              name === "shape" ? (
-                <ChoiceField key={name} idPrefix={id} name={name} spec={model.specs.shape} value={choices.shape} as="radio" error={errorFor(name)} />
+              name === "shape" || name === "strengthBasis" ? (
+                <ChoiceField
+                  key={name}
+                  idPrefix={id}
+                  name={name}
+                  spec={model.specs[name]}
+                  value={choices[name]}
+                  as={name === "shape" ? "radio" : undefined}
+                  error={errorFor(name)}
+                />
               ) : name === "material" ? (
                 <ChoiceField
                   key={name}

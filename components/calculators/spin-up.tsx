@@ -5,7 +5,8 @@
  * one input with the best value marked. The simulation is calc/drivetrain/.
  */
 import { useEffect, useMemo } from "preact/hooks";
-import { DRIVE_TYPE_OPTIONS, type DriveType } from "../../calc/drivetrain/inputs.ts";
+import { CURRENT_LIMIT_AT_OPTIONS, DRIVE_TYPE_OPTIONS, type DriveType, NO_LOAD_LOSS_OPTIONS } from "../../calc/drivetrain/inputs.ts";
+import type { Signal } from "../calc-ui/reactive.ts";
 import { QuantityField } from "../calc-ui/QuantityField.tsx";
 import { Toolbar } from "../calc-ui/Toolbar.tsx";
 import { Notices } from "../calc-ui/Notices.tsx";
@@ -31,7 +32,7 @@ interface Group {
 }
 
 const GROUPS: Group[] = [
-  { legend: "Motors", names: ["motorCount", "motorKv", "motorResistance", "noLoadCurrent", "motorRotorInertia"] },
+  { legend: "Motors", names: ["motorCount", "motorKv", "motorResistance", "noLoadCurrent", "noLoadVoltage", "motorRotorInertia"] },
   { legend: "Battery", names: ["cellCount", "cellVoltage", "cellResistance"] },
   { legend: "Controller", names: ["currentLimit", "throttle"] },
   { legend: "Gearing", names: ["gearRatio", "gearEfficiency"] },
@@ -40,6 +41,22 @@ const GROUPS: Group[] = [
   { legend: "Resistive torques", names: ["frictionTorque", "dragTorque", "dragReferenceSpeed"] },
   { legend: "Target", names: ["targetSpeed", "closingSpeed", "maxTime"] },
 ];
+
+/** A menu for one of the drive's model choices (where the current limit acts, the no-load loss). */
+function Menu({ id, label, value, options }: { id: string; label: string; value: Signal<string>; options: readonly { value: string; label: string }[] }) {
+  return (
+    <div class="field">
+      <label for={id}>{label}</label>
+      <select id={id} value={value.value} onChange={(e) => (value.value = e.currentTarget.value)}>
+        {options.map((o) => (
+          <option key={o.value} value={o.value}>
+            {o.label}
+          </option>
+        ))}
+      </select>
+    </div>
+  );
+}
 
 function Form({ model, id }: { model: SpinUpModel; id: string }) {
   const { fields } = model;
@@ -52,6 +69,10 @@ function Form({ model, id }: { model: SpinUpModel; id: string }) {
         return (
           <fieldset key={legend}>
             <legend>{legend}</legend>
+            {legend === "Motors" ? <Menu id={`${id}-loss`} label="No-load loss" value={model.noLoadLoss} options={NO_LOAD_LOSS_OPTIONS} /> : null}
+            {legend === "Controller" ? (
+              <Menu id={`${id}-limat`} label="Current limit acts on" value={model.currentLimitAt} options={CURRENT_LIMIT_AT_OPTIONS} />
+            ) : null}
             {group.spinnerOnly && type !== "spinner" ? (
               <p class="field-help" data-out="wheels-note">
                 Only a whole-body spinner has these inputs; choose that drive type above to edit them.

@@ -91,6 +91,11 @@ export function Results({ r, input, system, id }: { r: SpinUpResult; input: Driv
       amps(r.averageBatteryCurrentToTarget ?? r.averageBatteryCurrent),
     ],
     ["Peak current in each motor", "motor-current", amps(r.peakMotorCurrent)],
+    [
+      r.drive.currentLimitAt === "none" ? "Stall current in each motor (no limit)" : "Current in each motor at standstill",
+      "stall-current",
+      amps(r.drive.stallCurrent),
+    ],
     ["Lowest battery voltage (sag)", "min-voltage", `${q(r.minBatteryVoltage, "voltage")} of ${q(r.openCircuitVoltage, "voltage")}`],
     ["Charge drawn over the run", "charge", mAh(r.chargeDrawn)],
     [`Stored energy ½JΩ² at ${rpm(top.angularSpeed)}`, "stored-energy", q(top.storedEnergy, "energy")],
@@ -98,7 +103,11 @@ export function Results({ r, input, system, id }: { r: SpinUpResult; input: Driv
     ["Tip speed at top speed", "tip-speed", q(top.tipSpeed, "speed")],
     ["Stored energy per kg of robot", "energy-per-kg", `${formatNumber(top.energyPerMass)} J/kg`],
     [`Bite per impactor at ${q(input.closingSpeed, "speed")} closing`, "bite", top.bite === null ? "none at rest" : q(top.bite, "length")],
-    ["Acceleration at the current limit", "accel-limit", `${formatNumber(radPerSecondToRpm(r.drive.currentLimitedAcceleration))} rpm/s`],
+    [
+      r.drive.currentLimitAt === "motor" ? "Acceleration at the current limit" : "Acceleration from standstill",
+      "accel-limit",
+      `${formatNumber(radPerSecondToRpm(r.drive.currentLimitedAcceleration))} rpm/s`,
+    ],
     ["Mechanical time constant", "tau", q(r.drive.timeConstant, "time")],
   ];
   if (spinner && r.drive.tractionLimitedAcceleration !== null) {
@@ -239,7 +248,7 @@ export function SpinUpCharts({ r, input }: { r: SpinUpResult; input: DrivetrainI
       <Chart
         fixed
         title="Current against time"
-        summary={`Battery current peaks at ${formatNumber(r.peakBatteryCurrent)} A; each motor peaks at ${formatNumber(r.peakMotorCurrent)} A against a limit of ${formatNumber(input.currentLimit)} A.`}
+        summary={`Battery current peaks at ${formatNumber(r.peakBatteryCurrent)} A; each motor peaks at ${formatNumber(r.peakMotorCurrent)} A${r.drive.currentLimitAt === "none" ? " with no limit" : ` against a ${r.drive.currentLimitAt} limit of ${formatNumber(input.currentLimit)} A`}.`}
         xLabel="Time (s)"
         yLabel="Current (A)"
         xDomain={x}

@@ -123,6 +123,9 @@ export function createSpinUpModel(system: UnitSystem = "metric") {
   return {
     fields,
     driveType,
+    /** Where the current limit acts, and how the no-load loss is modelled. */
+    currentLimitAt: design.choices.currentLimitAt,
+    noLoadLoss: design.choices.noLoadLoss,
     values,
     outcome,
     variants: variants.variants,

@@ -24,6 +24,7 @@ const SHAPE_FIELDS: Record<PartShapeKind, PartField[]> = {
   plate: ["length", "width", "angle"],
   rod: ["length", "angle"],
   cylinder: ["radius", "height"],
+  lyingCylinder: ["radius", "length", "angle"],
   custom: ["inertiaZ", "productXZ", "productYZ"],
 };
 
@@ -47,7 +48,13 @@ export const needsGivenMass = (shape: PartShapeKind) => shape === "point" || sha
 /** The fields a part shows, in order, for its shape and mass source. */
 export function partFields(shape: PartShapeKind, source: MassSource): PartField[] {
   const massField: PartField[] =
-    source === "given" || needsGivenMass(shape) ? ["mass"] : shape === "cylinder" ? [] : shape === "ring" || shape === "rod" ? ["section"] : ["thickness"];
+    source === "given" || needsGivenMass(shape)
+      ? ["mass"]
+      : shape === "cylinder" || shape === "lyingCylinder"
+        ? []
+        : shape === "ring" || shape === "rod"
+          ? ["section"]
+          : ["thickness"];
   return [...massField, ...SHAPE_FIELDS[shape], "x", "y", "z"];
 }
 
@@ -133,6 +140,7 @@ export function readPart(model: PartModel): LayoutPart | null {
     plate: { kind: "plate", length: d.length, width: d.width, angle: d.angle },
     rod: { kind: "rod", length: d.length, angle: d.angle },
     cylinder: { kind: "cylinder", radius: d.radius, height: d.height },
+    lyingCylinder: { kind: "lyingCylinder", radius: d.radius, length: d.length, angle: d.angle },
     custom: { kind: "custom", inertiaZ: d.inertiaZ, productXZ: d.productXZ, productYZ: d.productYZ },
   };
   return {

@@ -70,6 +70,26 @@ describe("spin-up calculator in the browser", () => {
     await context.close();
   });
 
+  it("moves the current limit to the battery or nowhere, shows the stall current, and lets the no-load loss grow with speed", async () => {
+    const { page, context, problems } = await open(PAGE);
+    await expect.poll(() => out(page, "time-100")).toBe("1.01 s");
+    // tests/calc/drivetrain/limits.test.ts: battery limit 0.769 s with 139 A in the motor; no limit 0.619 s at a 213 A stall (16.4 V / 77 mΩ).
+    await page.selectOption(`${ID}-limat`, "battery");
+    await expect.poll(() => out(page, "time-100")).toBe("769 ms");
+    expect(await out(page, "motor-current")).toBe("139 A");
+    await expect.poll(() => param(page, "limat")).toBe("battery");
+    await page.selectOption(`${ID}-limat`, "none");
+    await expect.poll(() => out(page, "stall-current")).toBe("213 A");
+    expect(await out(page, "time-100")).toBe("619 ms");
+    await page.selectOption(`${ID}-limat`, "motor");
+    // I₀ = 1.2 A measured at 10 V, growing with speed: top speed 11 230 rpm instead of 11 270 rpm.
+    await page.selectOption(`${ID}-loss`, "speed");
+    await expect.poll(() => param(page, "loss")).toBe("speed");
+    await expect.poll(() => out(page, "top-speed")).toBe("11230 rpm");
+    expect(problems).toEqual([]);
+    await context.close();
+  });
+
   it("adds a variant, compares two designs on one chart and in a table, and keeps them in the URL", async () => {
     const { page, context } = await open(PAGE, { width: 1100 });
     await page.getByRole("button", { name: "Add variant 1" }).click();

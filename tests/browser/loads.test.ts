@@ -224,6 +224,17 @@ describe("the rim calculator in the browser", () => {
     await context.close();
   });
 
+  it("marks the strengths' basis: specified minimums for 6061-T6, typical for a steel, and keeps it in the link", async () => {
+    const { page, context } = await open(RIM);
+    // 6061-T6 at the ASTM B221 minimums, 35/38 ksi.
+    expect(await page.inputValue("#rim-calculator-yieldStrength")).toBe("241.317 MPa");
+    expect(await page.inputValue("#rim-calculator-strengthBasis")).toBe("minimum");
+    await page.selectOption("#rim-calculator-material", "steel-4130-normalized");
+    await expect.poll(() => page.inputValue("#rim-calculator-strengthBasis")).toBe("typical");
+    await expect.poll(() => param(page, "basis")).toBe("typical");
+    await context.close();
+  });
+
   it("shows the thin ring's single stress as one point and says so", async () => {
     const { page, context } = await open(RIM);
     // The default 6061-T6 ring of 125 mm at 2400 rpm: 2.66 MPa, n_y = 104 (tests/calc/loads.test.ts).

@@ -53,11 +53,13 @@ describe("mass layout in the browser", () => {
     await input(c, "z").fill("8");
 
     // Hand sums: base 2700 kg/m³ × π × (70 mm)² × 5 mm = 207.8 g; M = 207.8 + 280 + 4 = 491.8 g;
-    // x̄ = (280 × 12 − 4 × 32) g·mm / 491.8 g = 6.57 mm; U = 3232 g·mm; sensor at 32 + 6.57 = 38.6 mm.
+    // x̄ = (280 × 12 − 4 × 32) g·mm / 491.8 g = 6.57 mm; U = 3232 g·mm. The wheels slide (grip radius
+    // 0.8 × 0.9 × g/Ω² = 0.112 mm at 2400 rpm): the robot turns 0.112 mm short of the centre of mass,
+    // so the sensor sits 32 + 6.57 − 0.11 = 38.5 mm from the spin centre.
     await expect.poll(() => out(page, "total-mass")).toBe("492 g");
     expect(await out(page, "com-x")).toBe("6.57 mm");
     expect(await out(page, "unbalance")).toBe("3230 g·mm");
-    expect(await out(page, "sensor-true")).toBe("38.6 mm");
+    expect(await out(page, "sensor-true")).toBe("38.5 mm");
     expect(await page.locator('[data-out="offset-verdict"]').textContent()).toContain("Fails: offset outside the target.");
     expect(new URL(page.url()).searchParams.get("l")).toBe("v1~disk_base_0_0_2.5_70_al-6061-t6_5~plate_battery_12_0_13.5_70_35_90_280~pt_sensor_-32_0_8_4");
 
@@ -82,6 +84,35 @@ describe("mass layout in the browser", () => {
     await page.getByRole("button", { name: "Undo" }).click();
     await expect.poll(() => out(page, "offset")).toBe("6.57 mm");
     expect(await page.locator(".mass-parts details").count()).toBe(3);
+    expect(problems).toEqual([]);
+    await context.close();
+  });
+
+  it("turns about the wheels' centre or short of the centre of mass as the grip says, shows the couple lift, and takes a lying cylinder", async () => {
+    // One 1 kg point 0.1 mm off centre and the sensor at 12 mm (the review's case): the grip holds a
+    // 0.112 mm orbit at 2400 rpm, so the robot turns about the wheels' centre and the sensor reads true.
+    const { page, context, problems } = await open(`${PAGE}?v=1&l=v1~pt_p_0.1_0_0_1000&sx=-12mm`);
+    await expect.poll(() => out(page, "spin-centre")).toBe("the wheels' centre (their grip holds)");
+    expect(await out(page, "sensor-drift")).toBe("0°");
+    // No grip: the robot turns about its centre of mass, 12.1 mm from the sensor (+1.50° per revolution).
+    await page.fill('[id$="-sideGrip"]', "0");
+    await expect.poll(() => out(page, "sensor-true")).toBe("12.1 mm");
+    expect(await out(page, "sensor-drift")).toBe("1.50°");
+    await expect.poll(() => new URL(page.url()).searchParams.get("mu")).toBe("0");
+
+    // Two 10 g masses at (±50, 0, ±10) mm, 1.40 kg in all: C = 1.0e-5 kg·m²; on a 70 mm support radius at
+    // 2400 rpm, Ω²C/(M g a) = 0.632/0.961 = 65.7 %, lifting at 2400 × √(1/0.657) = 2960 rpm (the review's case).
+    await page.goto(`${origin()}${PAGE}?v=1&l=v1~pt_a_50_0_10_10~pt_b_-50_0_-10_10~pt_c_0_0_0_1380`);
+    await expect.poll(() => out(page, "couple-lift")).toContain("65.7 %");
+    expect(await out(page, "couple-lift")).toContain("lifts at 2960 rpm");
+    await page.fill('[id$="-supportRadius"]', "140 mm");
+    await expect.poll(() => out(page, "couple-lift")).toContain("32.9 %");
+
+    // A drive motor lying radially: 75 g, R = 14 mm, L = 30 mm: m(3R² + L²)/12 = 75 × (588 + 900)/12 g·mm² = 9300 g·mm².
+    await page.goto(`${origin()}${PAGE}?v=1&l=v1~lcyl_motor_0_0_0_14_30_90_75`);
+    await expect.poll(() => out(page, "inertia-com")).toBe("9.300 × 10⁻⁶ kg·m²");
+    await card(page, 0).locator("summary").click();
+    expect(await page.inputValue('[id$="-shape"]')).toBe("lyingCylinder");
     expect(problems).toEqual([]);
     await context.close();
   });

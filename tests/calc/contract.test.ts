@@ -288,6 +288,13 @@ const CALLS: Record<PublicFunction, Entry> = {
   },
   applyCounterweight: { calls: c([{ parts: [{ ...weight, x: 0.01 }], mass: 0.1, x: -0.1, y: 0, z: 0 }]) },
   trueSensorRadius: { calls: c([{ centreX: 0.002, centreY: 0, sensorX: -0.032, sensorY: 0 }]) },
+  spinCentre: {
+    calls: c(
+      [{ centreX: 0.0001, centreY: 0, angularSpeed: 251.32741228718345, sideGrip: 0.8, gripShare: 0.9 }],
+      [{ centreX: 0.002, centreY: 0.001, angularSpeed: 251.32741228718345, sideGrip: 0.8, gripShare: 0.9 }],
+    ),
+  },
+  coupleLift: { calls: c([{ couple: 0.00001, totalMass: 1.4, supportRadius: 0.07, angularSpeed: 251.32741228718345 }]) },
   massBalance: { calls: () => [[massInput()]] },
   counterweightPlan: {
     calls: () => {

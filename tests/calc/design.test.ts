@@ -332,6 +332,7 @@ describe("build-sheet checks", () => {
       "placement",
       "headingDrift",
       "mass",
+      "mass.lift",
       "mass.sensor",
       "fasteners[0]",
       "fasteners[1]",

@@ -517,12 +517,38 @@ describe("verdicts", () => {
 // ---------------------------------------------------------------------------------------------
 
 describe("the rim check", () => {
-  it("starts from the 6061-T6 row of the materials table (SubsTech: 2.70 g/cm³, 276 MPa, 310 MPa; ν 0.33 ASM/MatWeb)", () => {
-    expect(rimMaterial("al-6061-t6")).toEqual({ density: 2700, yieldStrength: 276e6, ultimateStrength: 310e6, poisson: 0.33 });
+  it("starts from the 6061-T6 row of the materials table at its specified minimums (ASTM B221: 35 ksi yield, 38 ksi ultimate; SubsTech 2.70 g/cm³; ν 0.33 ASM/MatWeb)", () => {
+    // 1 ksi = 6.894 757 MPa (NIST SP 811, Appendix B): 35 ksi = 241.3 MPa, 38 ksi = 262.0 MPa, as the standard's table prints them.
+    const six = rimMaterial("al-6061-t6");
+    expect(six).toMatchObject({ density: 2700, poisson: 0.33, strengthBasis: "minimum" });
+    expect(Math.abs(six.yieldStrength / 241.3e6 - 1)).toBeLessThan(5e-4);
+    expect(Math.abs(six.ultimateStrength / 262.0e6 - 1)).toBeLessThan(5e-4);
     expect(rimCheckInputs.density.default).toBe(2700);
-    expect(rimCheckInputs.yieldStrength.default).toBe(276e6);
-    expect(rimCheckInputs.ultimateStrength.default).toBe(310e6);
+    expect(rimCheckInputs.yieldStrength.default).toBe(six.yieldStrength);
+    expect(rimCheckInputs.ultimateStrength.default).toBe(six.ultimateStrength);
     expect(rimCheckInputs.poisson.default).toBe(0.33);
+  });
+
+  it("still offers the typical 6061-T6 values (SubsTech: 276 MPa, 310 MPa), marked as typical", () => {
+    expect(rimMaterial("al-6061-t6", "typical")).toEqual({
+      density: 2700,
+      yieldStrength: 276e6,
+      ultimateStrength: 310e6,
+      poisson: 0.33,
+      strengthBasis: "typical",
+    });
+  });
+
+  it("marks a row without a standard minimum as typical, whichever basis is asked for", () => {
+    expect(rimMaterial("steel-4130-normalized").strengthBasis).toBe("typical");
+    expect(rimMaterial("steel-4130-normalized").yieldStrength).toBe(435e6);
+  });
+
+  it("carries the basis of the strengths into the check's result, and refuses an unknown basis by name", () => {
+    expect(rimCheck({ ...RIM_DEFAULTS, ...rimMaterial("al-6061-t6", "typical") }).strengthBasis).toBe("typical");
+    const { strengthBasis: _b, ...old } = { ...RIM_DEFAULTS, ...rimMaterial("al-6061-t6") };
+    expect(rimCheck(old).strengthBasis).toBe("minimum");
+    expect(() => rimCheck({ ...RIM_DEFAULTS, strengthBasis: "guessed" })).toThrow(/strengthBasis/);
   });
 
   it("offers every row of the materials table, and each fills a valid rim check", () => {
@@ -755,7 +781,9 @@ describe("helpers added for the chapters and calculators", () => {
 
   it("keeps the rim check's default material values equal to the 6061-T6 row of the materials table", () => {
     expect(DEFAULT_RIM_MATERIAL).toBe("al-6061-t6");
-    expect(DEFAULT_RIM_MATERIAL_VALUES).toEqual(rimMaterial(DEFAULT_RIM_MATERIAL));
+    const { strengthBasis, ...values } = rimMaterial(DEFAULT_RIM_MATERIAL);
+    expect(DEFAULT_RIM_MATERIAL_VALUES).toEqual(values);
+    expect(strengthBasis).toBe("minimum");
     expect(rimCheckInputs.density.default).toBe(MATERIALS["al-6061-t6"].density);
     expect(rimCheckInputs.poisson.default).toBe(MATERIALS["al-6061-t6"].poissonRatio);
   });
@@ -767,7 +795,7 @@ describe("helpers added for the chapters and calculators", () => {
       const row = MATERIALS[choice.value];
       expect(choice).toEqual({
         ...RIM_MATERIAL_OPTIONS.find((o) => o.value === choice.value),
-        detail: `${row.name}, ${row.condition}`,
+        detail: `${row.name}, ${row.condition}; ${"minimum" in row ? "specified minimum strengths" : "typical strengths (no standard minimum in the table)"}`,
         ...rimMaterial(choice.value),
       });
     }
@@ -818,13 +846,14 @@ describe("worked example: the invented demo robot", () => {
     expect(other.description).toContain("70 mm");
   });
 
-  it("keeps its 6061-T6 ring rim far from yield, with a burst estimate near 25 900 rpm", () => {
+  it("keeps its 6061-T6 ring rim far from yield on the specified minimums, with a burst estimate near 23 800 rpm", () => {
     expect(demo.rim.verdict).toBe("holds");
-    // v = 10π m/s = 31.4 m/s; σ = 2700 × 31.4² = 2.66 MPa; n_y = 276/2.66 = 104; ω_u = 2400 rpm × √(310/2.66).
+    expect(demo.rim.strengthBasis).toBe("minimum");
+    // v = 10π m/s = 31.4 m/s; σ = 2700 × 31.4² = 2.66 MPa; n_y = 241.3/2.66 = 90.6; ω_u = 2400 rpm × √(262.0/2.66).
     expectClose(demo.rim.tipSpeed, 31.4, 5e-3);
     expectClose(demo.rim.peakStress, 2.66e6, 5e-3);
-    expectClose(demo.rim.safetyFactorYield, 104, 5e-3);
-    expectClose(radPerSecondToRpm(demo.rim.speedAtUltimate), 25900, 5e-3);
+    expectClose(demo.rim.safetyFactorYield, 90.6, 5e-3);
+    expectClose(radPerSecondToRpm(demo.rim.speedAtUltimate), 23800, 5e-3);
   });
 });
 
@@ -904,6 +933,7 @@ describe("regression pins (our own digits, not outside authorities)", () => {
     expectClose(demo.bolt.safetyFactor, 22.23423355287981, 1e-12);
     expectClose(demo.bolt.speedAtYield, 1185.0889298704328, 1e-12);
     expectClose(demo.rim.peakStress, 2664793.1882941267, 1e-12);
-    expectClose(demo.rim.speedAtUltimate, 2710.7467879070055, 1e-12);
+    // On the specified minimum ultimate, 38 ksi (2710.7467879070055 rad/s on the typical 310 MPa).
+    expectClose(demo.rim.speedAtUltimate, 2492.0651659770247, 1e-12);
   });
 });

@@ -993,6 +993,9 @@ describe("the mass-and-balance calculator", () => {
           planeZ2: fc.double({ min: 0.001, max: 0.1, noNaN: true }),
           sensorX: fc.double({ min: 0.001, max: 0.2, noNaN: true }),
           sensorY: coord,
+          sideGrip: fc.double({ min: 0, max: 3, noNaN: true }),
+          gripShare: fc.double({ min: 0, max: 1, noNaN: true }),
+          supportRadius: len(0.001, 2),
         }),
         fc.array(fc.record({ x: coord, y: coord }), { maxLength: 4 }),
         (parts, scalars, candidates) => {
@@ -1160,9 +1163,13 @@ describe("regression pins (our own digits from this module, not outside referenc
     { what: "demo radius for a 45 g weight [m]", value: b.counterweight.forMass.radius!, pin: 0.05404444444444445 },
     { what: "demo two-plane lower mass [kg]", value: b.twoPlane.lower.mass, pin: 0.021483636363636368 },
     { what: "demo two-plane upper mass [kg]", value: b.twoPlane.upper.mass, pin: 0.022734545454545455 },
-    { what: "demo sensor drift before [rad/rev]", value: b.sensor.before.driftPerRevolution, pin: 0.16836247134415255 },
+    // About the spin centre, 0.112 mm of grip short of the centre of mass (0.16836 rad/rev when it was taken about the centre of mass).
+    { what: "demo sensor drift before [rad/rev]", value: b.sensor.before.driftPerRevolution, pin: 0.15766577966829862 },
+    { what: "demo spin centre before, from the wheels' centre [m]", value: b.spinCentre.before.distanceFromWheels, pin: 0.0016261199837924376 },
+    { what: "demo couple against the weight's moment on 70 mm [-]", value: b.lift.ratio, pin: 0.06114599671393513 },
     { what: "demo offset with 7 washers [m]", value: d.withWashers.after.offset, pin: 8.464062957991494e-5 },
-    { what: "demo sensor drift with washers [rad/rev]", value: d.sensorWithWashers.driftPerRevolution, pin: 0.008304086885545583 },
+    // The wheels hold a 0.085 mm orbit at 2400 rpm: the robot turns about their centre (0.0083 rad/rev about the centre of mass).
+    { what: "demo sensor drift with washers [rad/rev]", value: d.sensorWithWashers.driftPerRevolution, pin: 0 },
     {
       what: "G 6.3 at 3000 rpm, e_per [m] (computed in double precision from ISO 21940-11 G = e_per·Ω)",
       value: permissibleResidualUnbalance({ totalMass: 1, grade: 0.0063, angularSpeed: rpmToRadPerSecond(3000) }).specificUnbalance,

@@ -256,8 +256,8 @@ describe("server render of the spin-up calculator (the path Astro islands take)"
 
   it("renders every input with a label tied to it", () => {
     const ids = [...html.matchAll(/<(?:input|select)[^>]*id="([^"]+)"/g)].map((m) => m[1]);
-    // 22 design fields for a weapon, the sweep's input menu and its three fields.
-    expect(ids.length).toBe(NAMES.length - SPINNER_ONLY.length + 4);
+    // 23 design fields for a weapon, the two model menus (no-load loss, where the limit acts), the sweep's input menu and its three fields.
+    expect(ids.length).toBe(NAMES.length - SPINNER_ONLY.length + 2 + 4);
     for (const id of ids) expect(html).toContain(`for="${id}"`);
   });
 

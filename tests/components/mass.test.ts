@@ -82,7 +82,7 @@ describe("mass-layout model", () => {
     // The wording of a part that breaks a rule loads on demand.
     await vi.waitFor(() => expect(model.notices.value[1]).toMatch(/^Part 3 of the link's parts list was left out: Radius/));
     expect(model.notices.value).toEqual([
-      'Part 2 of the link\'s parts list was left out: unknown shape "blob"; use one of pt, disk, ring, ann, plate, rod, cyl, cust.',
+      'Part 2 of the link\'s parts list was left out: unknown shape "blob"; use one of pt, disk, ring, ann, plate, rod, cyl, lcyl, cust.',
       "Part 3 of the link's parts list was left out: Radius must be greater than 0 mm and at most 100000 mm (got -5 mm).",
     ]);
   });

@@ -8,11 +8,14 @@ import {
   designToText,
   drivetrainInputs,
   DRIVE_TYPE_OPTIONS,
+  CURRENT_LIMIT_AT_OPTIONS,
+  NO_LOAD_LOSS_OPTIONS,
   headingDriftInputs,
   newDesign,
   readDesignText,
   rimCheckInputs,
   RIM_SHAPE_OPTIONS,
+  STRENGTH_BASIS_OPTIONS,
   type Design,
   type InputSpecs,
 } from "../../calc/index.ts";
@@ -54,10 +57,26 @@ const anyDesign: fc.Arbitrary<Design> = fc
       { nil: undefined },
     ),
     rims: fc.option(
-      fc.array(fc.record({ name: fc.string({ maxLength: 80 }), numbers: numbers(rimCheckInputs), shape: pick(RIM_SHAPE_OPTIONS) }), { maxLength: 3 }),
+      fc.array(
+        fc.record({
+          name: fc.string({ maxLength: 80 }),
+          numbers: numbers(rimCheckInputs),
+          shape: pick(RIM_SHAPE_OPTIONS),
+          strengthBasis: pick(STRENGTH_BASIS_OPTIONS),
+        }),
+        { maxLength: 3 },
+      ),
       { nil: undefined },
     ),
-    drivetrain: fc.option(fc.record({ numbers: numbers(drivetrainInputs), driveType: pick(DRIVE_TYPE_OPTIONS) }), { nil: undefined }),
+    drivetrain: fc.option(
+      fc.record({
+        numbers: numbers(drivetrainInputs),
+        driveType: pick(DRIVE_TYPE_OPTIONS),
+        currentLimitAt: pick(CURRENT_LIMIT_AT_OPTIONS),
+        noLoadLoss: pick(NO_LOAD_LOSS_OPTIONS),
+      }),
+      { nil: undefined },
+    ),
   })
   .map((r) => {
     const design: Design = { ...newDesign(r.name, new Date("2026-01-01T00:00:00Z")), notes: r.notes, units: r.units };
@@ -65,7 +84,13 @@ const anyDesign: fc.Arbitrary<Design> = fc
     if (r.headingDrift) design.headingDrift = r.headingDrift;
     if (r.fasteners) design.fasteners = r.fasteners.map(({ numbers: n, choices, ...rest }) => ({ ...n, ...choices, ...rest }));
     if (r.rims) design.rims = r.rims.map(({ numbers: n, ...rest }) => ({ ...n, ...rest }));
-    if (r.drivetrain) design.drivetrain = { ...r.drivetrain.numbers, driveType: r.drivetrain.driveType };
+    if (r.drivetrain)
+      design.drivetrain = {
+        ...r.drivetrain.numbers,
+        driveType: r.drivetrain.driveType,
+        currentLimitAt: r.drivetrain.currentLimitAt,
+        noLoadLoss: r.drivetrain.noLoadLoss,
+      };
     return design;
   });
 
