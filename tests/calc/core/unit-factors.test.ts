@@ -167,3 +167,90 @@ describe("unit factors against their definitions", () => {
     expect(findUnit("g", "mass")).toBe("g");
   });
 });
+
+/**
+ * What each unit is shown as (first) and every other spelling it is read from: a regression pin of
+ * the handbook's own spellings, so that a spelling that stops being read, or a symbol that changes
+ * on screen, fails here.
+ */
+const SPELLINGS: Record<UnitId, readonly string[]> = {
+  m: ["m", "metre", "meter", "meters", "metres"],
+  cm: ["cm"],
+  mm: ["mm", "millimetre", "millimeter", "millimeters", "millimetres"],
+  in: ["in", "inch", "inches", '"', "″"],
+  ft: ["ft", "foot", "feet", "'", "′"],
+  m2: ["m²", "m²", "m^2", "sq m"],
+  mm2: ["mm²", "mm²", "mm^2", "sq mm"],
+  in2: ["in²", "in²", "in^2", "sq in"],
+  kg: ["kg"],
+  g: ["g", "gram", "grams", "gr"],
+  lb: ["lb", "lbs", "pound", "pounds", "lbm"],
+  oz: ["oz", "ounce", "ounces"],
+  "m/s2": ["m/s²", "m/s²", "m/s^2", "ms-2", "m s-2"],
+  gn: ["gₙ", "g", "G", "g0"],
+  "ft/s2": ["ft/s²", "ft/s²", "ft/s^2"],
+  "rad/s": ["rad/s", "rad s-1", "1/s"],
+  rpm: ["rpm", "rev/min", "r/min", "RPM"],
+  rps: ["rev/s", "rev/s", "r/s"],
+  "deg/s": ["°/s", "°/s", "dps"],
+  "rad/s2": ["rad/s²", "rad/s²", "rad/s^2"],
+  "rpm/s": ["rpm/s"],
+  rad: ["rad", "radian", "radians"],
+  deg: ["°", "°", "degree", "degrees"],
+  rev: ["rev", "turn", "turns"],
+  s: ["s", "sec", "second", "seconds"],
+  ms: ["ms"],
+  us: ["µs", "µs", "μs"],
+  Hz: ["Hz", "hz"],
+  kHz: ["kHz", "khz"],
+  N: ["N", "newton", "newtons"],
+  kN: ["kN"],
+  lbf: ["lbf"],
+  ozf: ["ozf"],
+  "m/s": ["m/s"],
+  "mm/s": ["mm/s"],
+  "km/h": ["km/h", "kph"],
+  "ft/s": ["ft/s", "fps"],
+  mph: ["mph"],
+  J: ["J", "joule", "joules"],
+  kJ: ["kJ"],
+  Wh: ["Wh"],
+  ft·lbf: ["ft·lbf", "ft*lbf", "ft-lbf", "ftlbf", "ft.lbf", "ft lbf"],
+  W: ["W"],
+  kW: ["kW"],
+  N·m: ["N·m", "Nm", "N*m", "N.m", "N m"],
+  lbf·in: ["lbf·in", "lbf*in", "lbf-in", "in-lbf", "in·lbf", "lbfin"],
+  ozf·in: ["ozf·in", "ozf*in", "oz-in", "oz·in", "ozin", "ozf-in"],
+  kg·m2: ["kg·m²", "kg·m²", "kgm2", "kg*m^2", "kg m2", "kg.m2", "kgm^2", "kg·m^2"],
+  g·cm2: ["g·cm²", "g·cm²", "gcm2", "g*cm^2", "g cm2"],
+  lb·in2: ["lb·in²", "lb·in²", "lbin2", "lb*in^2", "lb in2", "lb-in2", "lb-in^2"],
+  oz·in2: ["oz·in²", "oz·in²", "ozin2", "oz*in^2", "oz in2", "oz-in2", "oz-in^2"],
+  Pa: ["Pa"],
+  MPa: ["MPa", "N/mm2", "N/mm²"],
+  GPa: ["GPa"],
+  psi: ["psi", "lbf/in2", "lbf/in²"],
+  ksi: ["ksi"],
+  "kg/m3": ["kg/m³", "kg/m³", "kg/m^3"],
+  "g/cm3": ["g/cm³", "g/cm³", "g/cc", "g/cm^3", "g/ml"],
+  "lb/in3": ["lb/in³", "lb/in³", "lb/in^3"],
+  kg·m: ["kg·m", "kgm", "kg*m", "kg m"],
+  g·mm: ["g·mm", "gmm", "g*mm", "g mm", "g-mm"],
+  oz·in: ["oz·in", "ozin", "oz*in", "oz in", "oz-in"],
+  V: ["V", "volt", "volts"],
+  A: ["A", "amp", "amps"],
+  ohm: ["Ω", "Ω", "ohms", "Ohm"],
+  mohm: ["mΩ", "mΩ", "milliohm", "milliohms", "mOhm"],
+  "rad/(s·V)": ["rad/(s·V)", "rad/s/V", "rad/(s V)"],
+  "rpm/V": ["rpm/V", "kv", "Kv", "KV", "rpm/v"],
+  frac: ["", "x"],
+  pct: ["%", "%", "percent"],
+  ppm: ["ppm"],
+  count: [""],
+};
+
+describe("unit symbols and spellings (regression pin of the handbook's own table)", () => {
+  it.each(Object.entries(SPELLINGS) as [UnitId, string[]][])("%s shows as %j and reads every spelling listed", (id, [symbol, ...others]) => {
+    expect(UNITS[id].symbol).toBe(symbol);
+    for (const spelling of [id, symbol, ...others].filter((s) => s !== "")) expect(findUnit(spelling, UNITS[id].kind), `${id}: ${spelling}`).toBe(id);
+  });
+});

@@ -17,10 +17,11 @@
  *   tolerance holds, within twice it is marginal.
  */
 import { describe, expect, it } from "vitest";
-import { type AnyValues, initialValues } from "../../../calc/core/calculator.ts";
+import { type AnyCalculator, type AnyValues, initialValues } from "../../../calc/core/calculator.ts";
 import { STATUS_MARKS, STATUS_WORDS, type CheckStatus } from "../../../calc/core/check.ts";
 import { STANDARD_GRAVITY } from "../../../calc/core/constants.ts";
-import { buildSheetText, type CheckResult, overallStatus, runChecks } from "../../../calc/design/checks.ts";
+import { CalcInputError } from "../../../calc/core/errors.ts";
+import { buildSheetText, type CheckResult, cardsFor, overallStatus, runChecks, terminalSafe } from "../../../calc/design/checks.ts";
 import { type Design, newDesign } from "../../../calc/design/format.ts";
 import { calculatorFor } from "../../../calc/design/registry.ts";
 import type { LayoutPart } from "../../../calc/mass/parts.ts";
@@ -609,10 +610,6 @@ describe("the overall status of a build sheet", () => {
     expect(text).toMatch(/\nOverall: Marginal\n\nSafety: /);
     expect(buildSheetText(newDesign("Empty"), [])).toContain("\nOverall: nothing to check\n");
   });
-
-  it("refuses a list of results that is not a list, naming it", () => {
-    expect(() => overallStatus("fails" as unknown as CheckResult[])).toThrow(/^results must be a list of check results/);
-  });
 });
 
 describe("the build sheet as text", () => {
@@ -659,5 +656,98 @@ describe("the build sheet as text", () => {
       ["fasteners[1]", 1, "Fasteners: hub bolt", "fails"],
     ]);
     expect(overallStatus(results)).toBe("fails");
+  });
+});
+
+describe("a design that did not come through readDesign", () => {
+  // runChecks is also called on designs built in code or read without checking: a section of the
+  // wrong shape gives a failing card with the reason, and never throws.
+  const failing = (design: Design) => runChecks(design).map((r) => [r.id, r.status, r.margin]);
+
+  it("fails a list section that is not a list, saying it must be one", () => {
+    const design: Design = { ...newDesign("Odd"), fasteners: { ...bolt, partMass: 0.01 } };
+    expect(failing(design)).toEqual([["fasteners[0]", "fails", "Could not compute: fasteners must be a list"]]);
+  });
+
+  it("fails a section that is not an object of named values: null, a number, a list entry that is null", () => {
+    expect(failing({ ...newDesign("Odd"), placement: null })).toEqual([
+      ["placement", "fails", "Could not compute: placement must be an object of named values"],
+    ]);
+    expect(failing({ ...newDesign("Odd"), placement: 5 })).toEqual([["placement", "fails", "Could not compute: placement must be an object of named values"]]);
+    expect(failing({ ...newDesign("Odd"), fasteners: [null] })).toEqual([
+      ["fasteners[0]", "fails", "Could not compute: fasteners must be an object of named values"],
+    ]);
+  });
+
+  it("gives the failing card its own rule, no figure and no details", () => {
+    const card = runChecks({ ...newDesign("Odd"), placement: null })[0]!;
+    expect(card).toMatchObject({
+      title: "Accelerometer placement",
+      rule: "The inputs must be valid before anything can be checked",
+      figure: null,
+      details: [],
+    });
+  });
+
+  it("leaves out a mass layout with no parts (nothing to check), and fails one whose parts are not a list", () => {
+    const mass = { ...initialValues(calculatorFor("mass")!), parts: [] };
+    expect(runChecks({ ...newDesign("Empty layout"), mass })).toEqual([]);
+    // "a disk" has a length, so the layout counts as present; null has none, so asking throws: both fail.
+    for (const parts of ["a disk", null]) {
+      const broken = runChecks({ ...newDesign("Broken layout"), mass: { ...mass, parts } });
+      expect(broken.map((r) => [r.id, r.status])).toEqual([["mass", "fails"]]);
+      expect(broken[0]!.margin).toMatch(/^Could not compute: parts must be a list of 1 to 200 parts/);
+    }
+  });
+
+  it("fails a set of values its calculator cannot compute, with the calculator's message", () => {
+    const card = runChecks(designWith("placement", { ...placement, radius: 0.05, lowSpeed: 200 }))[0]!;
+    expect(card.status).toBe("fails");
+    expect(card.margin).toBe("Could not compute: lowSpeed must be at most topSpeed (100 rad/s) (got 200 rad/s)");
+  });
+});
+
+describe("the build sheet's entry points refuse what is not theirs, naming it", () => {
+  it.each([
+    { call: () => runChecks(undefined as unknown as Design), message: /^design must be an object of named inputs/ },
+    { call: () => buildSheetText(null as unknown as Design, []), message: /^design must be an object of named inputs/ },
+    { call: () => buildSheetText(newDesign("x"), "none" as unknown as CheckResult[]), message: /^results must be a list/ },
+    { call: () => overallStatus({} as unknown as CheckResult[]), message: /^results must be a list of check results \(got / },
+    { call: () => terminalSafe(5 as unknown as string), message: /^text must be text/ },
+    { call: () => cardsFor(null as unknown as AnyCalculator, {}, "metric"), message: /^calc must be an object of named inputs/ },
+  ])("$message", ({ call, message }) => {
+    expect(call).toThrow(CalcInputError);
+    expect(call).toThrow(message);
+  });
+
+  it("gives no unit with a number that is not a list of results, nor with one that is not text", () => {
+    expect(() => overallStatus("fails" as unknown as CheckResult[])).toThrow('results must be a list of check results (got "fails")');
+    expect(() => overallStatus(5 as unknown as CheckResult[])).toThrow(/^results must be a list of check results \(got 5\)$/);
+    expect(() => terminalSafe(5 as unknown as string)).toThrow(/^text must be text \(got 5\)$/);
+  });
+});
+
+describe("cards of one set of values (cardsFor)", () => {
+  const calc = calculatorFor("placement")!;
+  const throwing = (thrown: unknown): AnyCalculator => ({
+    ...calc,
+    run: () => {
+      throw thrown;
+    },
+  });
+
+  it("turns any Error of a calculator into the failing card, a CalcInputError or another", () => {
+    expect(cardsFor(throwing(new RangeError("out of its model")), {}, "metric")[0]!.margin).toBe("Could not compute: out of its model");
+    const named = new CalcInputError({ param: "radius", value: -1, expected: "greater than 0", unit: "m" });
+    expect(cardsFor(throwing(named), {}, "metric")[0]!.margin).toBe(`Could not compute: ${named.message}`);
+  });
+
+  it("lets a thrown value that is not an Error through: that is a bug, not a design's problem", () => {
+    expect(() => cardsFor(throwing("a bare string"), {}, "metric")).toThrow("a bare string");
+  });
+
+  it("gives a ratio figure no unit, and a quantity figure its SI unit", () => {
+    expect(sheet("fasteners", { ...bolt, partMass: 0.01 }).results[0]!.figure).toMatchObject({ label: "Safety factor", unit: "", text: "5.62" });
+    expect(sheet("placement", { ...placement, radius: 0.05 }).results[0]!.figure).toMatchObject({ unit: "m/s²", text: "51.0 gₙ" });
   });
 });
