@@ -14,7 +14,8 @@
  * rows are quoted from memory of the table; the exact values above do not depend on them.
  */
 import { describe, expect, it } from "vitest";
-import { convert, findUnit, fromSI, toSI, UNITS, type UnitId } from "../../../calc/core/units.ts";
+import { CalcInputError } from "../../../calc/core/errors.ts";
+import { convert, displayUnit, findUnit, formatNumber, formatQuantity, fromSI, type QuantityKind, toSI, UNITS, type UnitId } from "../../../calc/core/units.ts";
 
 interface FactorCase {
   /** The unit's id in UNITS. */
@@ -252,5 +253,48 @@ describe("unit symbols and spellings (regression pin of the handbook's own table
   it.each(Object.entries(SPELLINGS) as [UnitId, string[]][])("%s shows as %j and reads every spelling listed", (id, [symbol, ...others]) => {
     expect(UNITS[id].symbol).toBe(symbol);
     for (const spelling of [id, symbol, ...others].filter((s) => s !== "")) expect(findUnit(spelling, UNITS[id].kind), `${id}: ${spelling}`).toBe(id);
+  });
+});
+
+describe("conversions refuse what they cannot convert, by name", () => {
+  it.each([
+    { call: () => toSI(1, "furlong" as UnitId), message: 'from must be one of m, cm, mm, … (got "furlong")' },
+    { call: () => toSI(1, "toString" as UnitId), message: 'from must be one of m, cm, mm, … (got "toString")' },
+    { call: () => fromSI(1, "furlong" as UnitId), message: 'to must be one of m, cm, mm, … (got "furlong")' },
+    { call: () => convert(1, "furlong" as UnitId, "mm"), message: 'from must be one of m, cm, mm, … (got "furlong")' },
+    { call: () => convert(1, "mm", "furlong" as UnitId), message: 'to must be one of m, cm, mm, … (got "furlong")' },
+    { call: () => formatQuantity(1, "length", { unit: "furlong" as UnitId }), message: 'unit must be one of m, cm, mm, … (got "furlong")' },
+    { call: () => displayUnit("colour" as QuantityKind, "metric"), message: 'kind must be one of length, area, mass, … (got "colour")' },
+    { call: () => toSI(1e308, "kN"), message: "value must be a number that stays finite in the new unit (got 1e+308)" },
+    { call: () => fromSI(1e308, "ppm"), message: "value must be a number that stays finite in the new unit (got 1e+308)" },
+    { call: () => toSI("1" as unknown as number, "mm"), message: 'value must be a number that stays finite in the new unit (got "1")' },
+    { call: () => formatNumber(1, 0), message: "significant must be a whole number from 1 to 100 (got 0)" },
+    { call: () => formatNumber(1, 101), message: "significant must be a whole number from 1 to 100 (got 101)" },
+    { call: () => formatNumber(1, 2.5), message: "significant must be a whole number from 1 to 100 (got 2.5)" },
+  ])("$message", ({ call, message }) => {
+    expect(call).toThrow(CalcInputError);
+    expect(call).toThrow(message);
+  });
+
+  it("formats to 1 and to 100 significant figures, the ends of the range", () => {
+    expect(formatNumber(2.5, 1)).toBe("3");
+    expect(formatNumber(0.125, 100)).toMatch(/^0\.1250{97}$/);
+  });
+});
+
+describe("the number and the symbol of a formatted quantity", () => {
+  it.each([
+    { value: 0.1, kind: "angle", text: "5.73°", why: "a degree sign sits on the number" },
+    { value: 0.5, kind: "fraction", text: "50.0 %", why: "a per cent sign is spaced" },
+    { value: 3, kind: "count", text: "3.00", why: "a count has no symbol" },
+    { value: 0.032, kind: "length", text: "32.0 mm", why: "a symbol is spaced" },
+  ] as const)("$value SI of $kind shows as $text: $why", ({ value, kind, text }) => {
+    expect(formatQuantity(value, kind).text).toBe(text);
+  });
+
+  it("takes the metric system when the options are missing or say nothing", () => {
+    expect(formatQuantity(0.032, "length", null as unknown as undefined).text).toBe("32.0 mm");
+    expect(formatQuantity(0.032, "length", {}).text).toBe("32.0 mm");
+    expect(formatQuantity(0.0254, "length", { system: "us" })).toEqual({ text: "1.00 in", number: "1.00", symbol: "in", unit: "in" });
   });
 });
