@@ -69,7 +69,10 @@ const detected = killed + timedOut;
 const valid = detected + survived + noCoverage;
 const score = valid === 0 ? 0 : (100 * detected) / valid;
 const minutes = `${Math.floor(seconds / 60)} min ${Math.round(seconds % 60)} s`;
-console.log(
-  `\nMutation score ${score.toFixed(2)} % (${detected} of ${valid} detected: ${killed} killed, ${timedOut} timed out; ${survived} survived, ${noCoverage} not covered; ${count("CompileError") + count("RuntimeError")} invalid, ${count("Ignored")} ignored) in ${minutes}` +
-    ` — scope: ${(options.mutate ?? ["calc/"]).filter((p) => !p.startsWith("!")).join(", ")}${tests.length ? `; tests: ${tests.join(", ")}` : ""}${ignoreStatic ? "; static mutants ignored" : ""}`,
-);
+const scope = `scope: ${(options.mutate ?? ["calc/"]).filter((p) => !p.startsWith("!")).join(", ")}`;
+if (results.length === 0) console.log(`\nNo mutants in ${scope} — ${minutes}`);
+else
+  console.log(
+    `\nMutation score ${score.toFixed(2)} % (${detected} of ${valid} detected: ${killed} killed, ${timedOut} timed out; ${survived} survived, ${noCoverage} not covered; ${count("CompileError") + count("RuntimeError")} invalid, ${count("Ignored")} ignored) in ${minutes}` +
+      ` — ${scope}${tests.length ? `; tests: ${tests.join(", ")}` : ""}${ignoreStatic ? "; static mutants ignored" : ""}`,
+  );
