@@ -252,7 +252,7 @@ const SPELLINGS: Record<UnitId, readonly string[]> = {
 describe("unit symbols and spellings (regression pin of the handbook's own table)", () => {
   it.each(Object.entries(SPELLINGS) as [UnitId, string[]][])("%s shows as %j and reads every spelling listed", (id, [symbol, ...others]) => {
     expect(UNITS[id].symbol).toBe(symbol);
-    for (const spelling of [id, symbol, ...others].filter((s) => s !== "")) expect(findUnit(spelling, UNITS[id].kind), `${id}: ${spelling}`).toBe(id);
+    for (const spelling of [id, symbol ?? "", ...others].filter((s) => s !== "")) expect(findUnit(spelling, UNITS[id].kind), `${id}: ${spelling}`).toBe(id);
   });
 });
 
