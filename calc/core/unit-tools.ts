@@ -11,7 +11,8 @@ export function convert(value: number, from: UnitId, to: UnitId): number {
   const si = toSI(value, from); // a CalcInputError naming "from" for an unknown unit
   const kind = UNITS[from].kind;
   const target: UnitDef | undefined = typeof to === "string" && Object.hasOwn(UNITS, to) ? UNITS[to] : undefined;
-  if (target?.kind !== kind) throw new CalcInputError({ param: "to", value: to, expected: `a unit of ${kindName(kind)}, as ${from} is`, unit: "" });
+  // An unknown unit gets fromSI's own refusal ("to must be one of …"); a known one of another kind this.
+  if (target && target.kind !== kind) throw new CalcInputError({ param: "to", value: to, expected: `a unit of ${kindName(kind)}, as ${from} is`, unit: "" });
   return fromSI(si, to);
 }
 

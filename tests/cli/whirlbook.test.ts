@@ -7,7 +7,7 @@ import { mkdtempSync, writeFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { fileURLToPath } from "node:url";
-import { demoDesign, designToText, type Design } from "../../calc/index.ts";
+import { accelerometerPlacementInputs, demoDesign, designToText, newDesign, type Design } from "../../calc/index.ts";
 
 const bin = fileURLToPath(new URL("../../bin/whirlbook.mjs", import.meta.url));
 const dir = mkdtempSync(join(tmpdir(), "whirlbook-cli-"));
@@ -45,12 +45,78 @@ describe("whirlbook check", { timeout: 30_000 }, () => {
     expect(stdout).toMatch(/Overall: Fails\n/);
   });
 
-  it("exits 0 when nothing fails", () => {
+  it("exits 0 when nothing fails: the demo without its heading drift is marginal (its balance is)", () => {
     const holding: Design = { ...demoDesign() };
     delete holding.headingDrift;
     const { code, stdout } = run("check", write("holding.json", designToText(holding)));
-    expect(stdout).toMatch(/Overall: (Holds|Marginal)\n/);
+    expect(stdout).toContain("▲ Marginal         Balance");
+    expect(stdout).not.toContain("✖ Fails");
+    expect(stdout).toMatch(/\nOverall: Marginal\n/);
     expect(code).toBe(0);
+  });
+
+  describe("with a small one-check design (invented)", () => {
+    // One accelerometer placement: 100 rad/s top speed, 1000 m/s² full scale with 20 % headroom, one
+    // count of 1.25 m/s² resolving 50 % at 10 rad/s; the window is 10 to 80 mm (see
+    // tests/calc/design/checks.test.ts for the working), the part pulls 0.1 kg × 100² × 0.05 m = 50 N.
+    const defaults = Object.fromEntries(Object.entries(accelerometerPlacementInputs).map(([k, s]) => [k, s.default]));
+    const placement = {
+      ...defaults,
+      topSpeed: 100,
+      lowSpeed: 10,
+      fullScale: 1000,
+      margin: 0.2,
+      step: 1.25,
+      noise: 0,
+      resolution: 0.5,
+      partMass: 0.1,
+      partRadius: 0.05,
+    };
+    const small = (radius: number): string =>
+      write(`small-${radius}.json`, designToText({ ...newDesign("Small test robot", new Date("2026-12-01T00:00:00Z")), placement: { ...placement, radius } }));
+
+    it("prints its whole build sheet, word for word, and exits 0 when it holds", () => {
+      const { code, stdout, stderr } = run("check", small(0.05));
+      expect(stderr).toBe("");
+      expect(stdout).toBe(
+        [
+          "Build sheet: Small test robot",
+          "Design saved 2026-12-01; units metric",
+          "",
+          "✔ Holds            Accelerometer placement: Sensor reading at top speed 51.0 gₙ",
+          "                   rule:   Reading at top speed at most 80.0 % of full scale, and one count resolves speed to 50.0 % at the lowest tracked speed",
+          "                   result: The sensor at 50.0 mm lies inside the usable window, 10.0 mm to 80.0 mm; it reads 50.0 % of full scale at top speed.",
+          "                   Smallest usable radius: 10.0 mm",
+          "                   Largest usable radius: 80.0 mm",
+          "                   Pull on the other part's mounts: 50.0 N",
+          "",
+          "Overall: Holds",
+          "",
+          "Safety: figures come from simplified models and typical strengths; they certify nothing. Spin up only in a rated enclosure; your event's rules and local codes come first.",
+          "",
+        ].join("\n"),
+      );
+      expect(code).toBe(0);
+    });
+
+    it("exits 0 for a marginal sheet (a sensor too close in), and 1 for a failing one (too far out)", () => {
+      const marginal = run("check", small(0.005));
+      expect(marginal.stdout).toContain("▲ Marginal         Accelerometer placement: Sensor reading at top speed 5.10 gₙ\n");
+      expect(marginal.stdout).toMatch(/\nOverall: Marginal\n/);
+      expect(marginal.code).toBe(0);
+      const failing = run("check", small(0.1));
+      expect(failing.stdout).toContain("✖ Fails            Accelerometer placement: Sensor reading at top speed 102 gₙ\n");
+      expect(failing.stdout).toMatch(/\nOverall: Fails\n/);
+      expect(failing.code).toBe(1);
+    });
+
+    it("gives the status key, the verdict word and the figure in SI with --json", () => {
+      const report = JSON.parse(run("check", small(0.005), "--json").stdout);
+      expect(report).toMatchObject({ overall: "marginal", overallVerdict: "Marginal", units: "metric" });
+      expect(report.checks).toHaveLength(1);
+      expect(report.checks[0]).toMatchObject({ id: "placement", status: "marginal", verdict: "Marginal" });
+      expect(report.checks[0].figure).toEqual({ label: "Sensor reading at top speed", value: 50, unit: "m/s²", text: "5.10 gₙ" });
+    });
   });
 
   it("prints machine-readable JSON with --json", () => {

@@ -1,0 +1,21 @@
+import { defineConfig } from "vitest/config";
+
+/**
+ * The unit tests of calc/ alone, for mutation testing (`npm run mutate`): no build, no browser, no
+ * components, and no command-line tests (they start a separate Node process, where a planted
+ * mistake is never switched on). A generous timeout: a mutant that makes a test slow on a busy
+ * machine is not a failure, and the mutation tool sets its own timeouts for endless loops.
+ *
+ * WHIRLBOOK_MUTATION_TESTS (a JSON list of globs, set by `npm run mutate -- --tests …`) narrows the
+ * test files. It narrows them here rather than through Stryker's own `testFiles` option, which runs
+ * the mutants of module-level tables (STATUS_WORDS, UNITS) with the mutant switched on only after the
+ * module has loaded, so that those mutants survive whatever the tests check.
+ */
+export default defineConfig({
+  oxc: { jsx: { runtime: "automatic", importSource: "preact" } },
+  test: {
+    root: new URL("../..", import.meta.url).pathname,
+    include: process.env.WHIRLBOOK_MUTATION_TESTS ? JSON.parse(process.env.WHIRLBOOK_MUTATION_TESTS) : ["tests/calc/**/*.test.ts"],
+    testTimeout: 120_000,
+  },
+});
