@@ -83,7 +83,8 @@ describe("printed build sheet", () => {
   });
 
   it("prints a QR code that a reader decodes to a link reopening the same design, with the same values", async () => {
-    const context = await site.browser().newContext({ deviceScaleFactor: 4 });
+    // Six device pixels per CSS pixel: about 7 pixels per module of the demo's version-36 code.
+    const context = await site.browser().newContext({ deviceScaleFactor: 6 });
     const page = await openSheet(context, "/build-sheet/#demo");
     await page.getByRole("button", { name: "Print" }).click();
     await page.locator(".print-link svg").waitFor({ state: "attached" });
