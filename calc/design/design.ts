@@ -6,7 +6,7 @@
  * and explains the rest, field by field.
  */
 import * as v from "valibot";
-import type { AnyCalculator } from "../core/calculator.ts";
+import { type AnyCalculator, initialValues } from "../core/calculator.ts";
 import { CalcInputError } from "../core/errors.ts";
 import { describeReceived } from "../core/received.ts";
 import { requireInputObject } from "../core/spec-check.ts";
@@ -44,8 +44,40 @@ export const MIGRATIONS: Readonly<Record<number, Migration>> = {
   // "mode" is "jointMode" (same values); the shear ratio and shear plane are no longer read (one
   // shear rule, shear through the thread). The joint's new values are written out explicitly, so
   // that the entry reads without a missing-value report.
-  2: (design) => ({ ...design, fasteners: Array.isArray(design.fasteners) ? design.fasteners.map(migrateFastenerEntry) : design.fasteners }),
+  // The same step also writes out the values the review's corrections added (the wheels' side grip
+  // and the support radius of the mass layout, where the current limit acts and how the no-load loss
+  // grows in the drive train, the strengths' basis of a rim) at their calculators' defaults, so an
+  // older file reads without a missing-value report.
+  2: (design) => {
+    const next: Record<string, unknown> = {
+      ...design,
+      fasteners: Array.isArray(design.fasteners) ? design.fasteners.map(migrateFastenerEntry) : design.fasteners,
+    };
+    for (const [section, names] of Object.entries(ADDED_IN_3)) {
+      const stored = next[section];
+      if (stored === undefined) continue;
+      next[section] = Array.isArray(stored) ? stored.map((entry) => withDefaults(section, names, entry)) : withDefaults(section, names, stored);
+    }
+    return next;
+  },
 };
+
+/** Values design version 3 added beside the joint check, by section. */
+const ADDED_IN_3: Readonly<Record<string, readonly string[]>> = {
+  mass: ["sideGrip", "gripShare", "supportRadius"],
+  drivetrain: ["currentLimitAt", "noLoadLoss", "noLoadVoltage"],
+  rims: ["strengthBasis"],
+};
+
+/** `entry` with each of `names` it lacks at its calculator's default; anything not an object is passed on for the reader to report. */
+function withDefaults(section: string, names: readonly string[], entry: unknown): unknown {
+  const calc = CALCULATORS.find((c) => c.id === section);
+  if (!calc || typeof entry !== "object" || entry === null || Array.isArray(entry)) return entry;
+  const defaults = initialValues(calc);
+  const out: Record<string, unknown> = { ...(entry as Record<string, unknown>) };
+  for (const name of names) if (!(name in out) && name in defaults) out[name] = defaults[name];
+  return out;
+}
 
 /**
  * What an entry of the earlier average-shear fastener check becomes: the same part, speed, bolts,

@@ -183,6 +183,23 @@ describe("a version 2 design: fasteners as the earlier average-shear check store
     }
   });
 
+  it("reads a version 2 mass layout, drive train and rims without the values version 3 added, at their defaults and with no problem", () => {
+    const raw = version2() as Record<string, Record<string, unknown> | Record<string, unknown>[]>;
+    const strip = (entry: Record<string, unknown>, names: string[]) => Object.fromEntries(Object.entries(entry).filter(([k]) => !names.includes(k)));
+    raw.mass = strip(raw.mass as Record<string, unknown>, ["sideGrip", "gripShare", "supportRadius"]);
+    raw.drivetrain = strip(raw.drivetrain as Record<string, unknown>, ["currentLimitAt", "noLoadLoss", "noLoadVoltage"]);
+    raw.rims = (raw.rims as Record<string, unknown>[]).map((r) => strip(r, ["strengthBasis"]));
+    const reading = readDesign(raw);
+    expect(reading.ok).toBe(true);
+    if (!reading.ok) return;
+    expect(reading.problems).toEqual([]);
+    // biome-ignore lint/suspicious/noExplicitAny: test access to any section
+    const design = reading.design as Record<string, any>;
+    expect(design.mass).toMatchObject({ sideGrip: 0.8, gripShare: 0.9, supportRadius: 0.07 });
+    expect(design.drivetrain).toMatchObject({ currentLimitAt: "motor", noLoadLoss: "constant" });
+    expect(design.rims[0]).toMatchObject({ strengthBasis: "minimum" });
+  });
+
   it("gives the new joint values the calculator's defaults: 75 % of proof, μ = 0.2, a 5 mm stack, tapped 8 mm into 6061-T6", () => {
     const reading = readDesign(version2());
     // biome-ignore lint/suspicious/noExplicitAny: test access to any section
