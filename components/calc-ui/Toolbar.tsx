@@ -18,13 +18,28 @@ export interface ToolbarProps {
   save?: () => Promise<string>;
 }
 
+/**
+ * The link as a teammate can use it: without the keys that tie this page to a design saved in this
+ * browser (`save.*`, components/design/save.ts), which another browser has not got.
+ */
+const shareable = (link: string) =>
+  link.replace(
+    /\?[^#]*/,
+    (query) =>
+      `?${query
+        .slice(1)
+        .split("&")
+        .filter((pair) => !pair.startsWith("save."))
+        .join("&")}`,
+  );
+
 export function Toolbar({ idPrefix, system, onSystem, link, save }: ToolbarProps) {
   const status = useSignal("");
   const fallback = useSignal<string | null>(null);
   // Opened from the build sheet: say where "Save to design" writes.
   useEffect(() => showTarget(status), []);
   async function copy() {
-    const url = link();
+    const url = shareable(link());
     try {
       await navigator.clipboard.writeText(url);
       status.value = "Link copied.";

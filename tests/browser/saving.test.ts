@@ -96,6 +96,22 @@ describe("a calculator opened from the build sheet", () => {
     await context.close();
   });
 
+  it("copies a link a teammate can open: the calculator's values without the keys of this browser's design", async () => {
+    const context = await site.browser().newContext();
+    await context.grantPermissions(["clipboard-read", "clipboard-write"], { origin: origin() });
+    const sheet = await open(context, "/build-sheet/#demo");
+    await sheet.locator('[data-check="placement"] .check-link a').click();
+    await waitForIslands(sheet);
+    expect(new URL(sheet.url()).searchParams.get("save.to")).toBe("demo"); // this page saves into the demo's copy
+    await sheet.getByRole("button", { name: "Copy link to this check" }).click();
+    await expect.poll(() => status(sheet).textContent()).toMatch(/Link copied|Copy the selected link/);
+    const copied = await sheet.evaluate(() => navigator.clipboard.readText()).catch(() => sheet.inputValue(".calc-actions input[readonly]"));
+    const params = new URL(copied).searchParams;
+    expect([...params.keys()].filter((k) => k.startsWith("save."))).toEqual([]);
+    expect(params.get("r")).toBe(new URL(sheet.url()).searchParams.get("r")); // the values travel
+    await context.close();
+  });
+
   it("never changes the demo: the first save makes a named copy and says so", async () => {
     const context = await site.browser().newContext();
     const sheet = await open(context, "/build-sheet/#demo");
