@@ -31,12 +31,13 @@ interface Group {
   spinnerOnly?: boolean;
 }
 
+// What is spun comes first: builders start from the weapon or the robot ("a 3 lb spinner").
 const GROUPS: Group[] = [
+  { legend: { weapon: "Rotor", spinner: "Robot" }, names: ["inertia", "robotMass", "tipRadius", "impactors"] },
   { legend: "Motors", names: ["motorCount", "motorKv", "motorResistance", "noLoadCurrent", "noLoadVoltage", "motorRotorInertia"] },
   { legend: "Battery", names: ["cellCount", "cellVoltage", "cellResistance"] },
   { legend: "Controller", names: ["currentLimit", "throttle"] },
   { legend: "Gearing", names: ["gearRatio", "gearEfficiency"] },
-  { legend: { weapon: "Rotor", spinner: "Robot" }, names: ["inertia", "robotMass", "tipRadius", "impactors"] },
   { legend: "Wheels and traction", names: SPINNER_ONLY, spinnerOnly: true },
   { legend: "Resistive torques", names: ["frictionTorque", "dragTorque", "dragReferenceSpeed"] },
   { legend: "Target", names: ["targetSpeed", "closingSpeed", "maxTime"] },
