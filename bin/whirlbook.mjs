@@ -21,7 +21,8 @@ const { register } = await import("node:module");
 register("../scripts/node-glob.mjs", import.meta.url);
 
 const { readDesignText, describeProblems } = await import("../calc/design/design.ts");
-const { runChecks, buildSheetText, overallStatus, terminalSafe } = await import("../calc/design/checks.ts");
+const { buildSheetText, overallStatus, terminalSafe } = await import("../calc/design/checks.ts");
+const { runChecks } = await import("../calc/design/run-checks.ts");
 
 // Everything this command prints may carry text from a shared design file or from the command line
 // (a name, an unknown key, a file name): each such piece is escaped by itself with `shown` (line

@@ -59,6 +59,7 @@ export * from "./loads/joint.ts";
 export * from "./drivetrain/motor.ts";
 export * from "./design/design.ts";
 export * from "./design/checks.ts";
+export * from "./design/run-checks.ts";
 export * from "./design/demo.ts";
 export * from "./core/unit-definitions.ts";
 export * from "./core/calculator.ts";

@@ -2,7 +2,7 @@
  * The search entries of every calculator's fields (components/search/entries.ts), written at
  * build time as /search-fields.json; the search page loads it on the first search.
  */
-import { CALCULATORS } from "../calc/design/registry.ts";
+import { CALCULATORS } from "../calc/design/calculators.ts";
 import { searchEntries } from "../components/search/entries.ts";
 
 export function GET(): Response {

@@ -103,7 +103,7 @@ export async function renderApiDocs() {
     parts.push(`## ${FOLDERS[folder] ?? folder} (\`calc/${folder}/\`)`, "");
     for (const [file, rows] of sections) parts.push(`### \`calc/${file}\``, "", "| Function | What it does | Returns |", "|---|---|---|", ...rows, "");
   }
-  const { CALCULATORS } = await import("../calc/design/registry.ts");
+  const { CALCULATORS } = await import("../calc/design/calculators.ts");
   parts.push(
     "## Calculators and their link keys",
     "",

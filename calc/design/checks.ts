@@ -8,7 +8,6 @@ import type { AnyCalculator, AnyValues } from "../core/calculator.ts";
 import { CalcInputError } from "../core/errors.ts";
 import type { UnitSystem } from "../core/units.ts";
 import type { Design } from "./design.ts";
-import { CALCULATORS } from "./registry.ts";
 import { requireInputObject, requireList } from "../core/spec-check.ts";
 
 export type { CheckFigure, CheckStatus } from "../core/check.ts";
@@ -46,20 +45,19 @@ function notComputed(calc: AnyCalculator, message: string): CheckCard {
 }
 
 /**
- * Runs every check the design has values for, in build-sheet order.
+ * `runChecks` over the given calculators only (a page that loaded the checks a design holds passes
+ * those), in the order given.
  *
- * @param design a design read by `readDesign` (every value already within its declared range)
+ * @param calculators whole calculators (calc entry and cards), in build-sheet order
+ * @param design a design read by `readDesign`
  * @param system units for the texts ("metric" or "us")
- * @returns the cards of every calculator with a section; a check whose inputs cannot be computed
- * fails with the reason
- *
- * Sources: those of each calculator's entry function (openstax-college-physics, iso-21940-11,
- * iso-898-1, timoshenko-goodier, …).
+ * @returns the cards of each given calculator the design has a section for
  */
-export function runChecks(design: Design, system: UnitSystem = design?.units): CheckResult[] {
+export function runChecksWith(calculators: readonly AnyCalculator[], design: Design, system: UnitSystem = design?.units): CheckResult[] {
+  requireList(calculators, "calculators");
   requireInputObject(design, "design");
   const results: CheckResult[] = [];
-  for (const calc of CALCULATORS) {
+  for (const calc of calculators) {
     const stored = design[calc.id];
     if (stored === undefined) continue;
     const list = calc.section.kind === "list";

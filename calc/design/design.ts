@@ -6,11 +6,11 @@
  * and explains the rest, field by field.
  */
 import * as v from "valibot";
-import { type AnyCalculator, initialValues } from "../core/calculator.ts";
+import { type AnyForm, initialValues } from "../core/calculator.ts";
 import { CalcInputError } from "../core/errors.ts";
 import { describeReceived } from "../core/received.ts";
 import { requireInputObject } from "../core/spec-check.ts";
-import { CALCULATORS } from "./registry.ts";
+import { FORMS } from "./registry.ts";
 import { DESIGN_FORMAT, DESIGN_VERSION, type Design, HEADER_FIELDS } from "./format.ts";
 import { readSection, type DesignProblem, SectionDropped } from "./sections.ts";
 import { BOLTED_JOINT_CHOICE_DEFAULTS, boltedJointInputs } from "../loads/joint-inputs.ts";
@@ -20,10 +20,10 @@ export * from "./format.ts";
 
 export type DesignReading = { ok: true; design: Design; problems: DesignProblem[]; migratedFrom: number | null } | { ok: false; problems: DesignProblem[] };
 
-/** The ids of the sections a design holds, in build-sheet order. */
-export function sectionsIn(design: Design): AnyCalculator[] {
+/** The forms of the sections a design holds, in build-sheet order. */
+export function sectionsIn(design: Design): AnyForm[] {
   requireInputObject(design, "design");
-  return CALCULATORS.filter((c) => design[c.id] !== undefined);
+  return FORMS.filter((c) => design[c.id] !== undefined);
 }
 
 // ---------------------------------------------------------------------------------------------
@@ -71,7 +71,7 @@ const ADDED_IN_3: Readonly<Record<string, readonly string[]>> = {
 
 /** `entry` with each of `names` it lacks at its calculator's default; anything not an object is passed on for the reader to report. */
 function withDefaults(section: string, names: readonly string[], entry: unknown): unknown {
-  const calc = CALCULATORS.find((c) => c.id === section);
+  const calc = FORMS.find((c) => c.id === section);
   if (!calc || typeof entry !== "object" || entry === null || Array.isArray(entry)) return entry;
   const defaults = initialValues(calc);
   const out: Record<string, unknown> = { ...(entry as Record<string, unknown>) };
@@ -204,11 +204,11 @@ export function readDesign(raw: unknown): DesignReading {
     problems.push({ path: "units", message: `must be "metric" or "us" (got ${describeReceived(record.units)}); metric was used`, action: "default-used" });
   }
 
-  const known = new Set<string>([...HEADER_FIELDS, ...CALCULATORS.map((c) => c.id)]);
+  const known = new Set<string>([...HEADER_FIELDS, ...FORMS.map((c) => c.id)]);
   for (const key of Object.keys(record)) {
     if (!known.has(key)) problems.push({ path: key, message: "is not part of a design; it was ignored", action: "section-dropped" });
   }
-  for (const calc of CALCULATORS) {
+  for (const calc of FORMS) {
     if (record[calc.id] === undefined) continue;
     try {
       design[calc.id] = readSection(calc, record[calc.id], calc.id, problems, design.units);

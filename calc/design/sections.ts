@@ -4,7 +4,7 @@
  * readers), and written back. A bad value takes its default and is reported; a bad list entry is
  * left out and reported; nothing is dropped silently.
  */
-import { type AnyCalculator, type AnyValues, type ExtraSpec, initialValues, type ValueProblem } from "../core/calculator.ts";
+import { type AnyForm, type AnyValues, type ExtraSpec, initialValues, type ValueProblem } from "../core/calculator.ts";
 import { choiceLabel } from "../core/choices.ts";
 import { defaultText, describeRange, fieldUnit, type InputSpec } from "../core/inputs.ts";
 import { describeReceived } from "../core/received.ts";
@@ -95,7 +95,7 @@ export interface ReadOptions {
  * default and is reported in the field's words and the design's units; fields that are not the
  * calculator's are reported and ignored.
  */
-export function readValues(calc: AnyCalculator, raw: unknown, path: string, problems: DesignProblem[], options: ReadOptions = {}): AnyValues {
+export function readValues(calc: AnyForm, raw: unknown, path: string, problems: DesignProblem[], options: ReadOptions = {}): AnyValues {
   const { system = "metric", section = calc.title, allowed = [] } = options;
   if (!isRecord(raw)) {
     problems.push({ path, section, message: "must be an object of named values", action: "section-dropped" });
@@ -149,13 +149,7 @@ export function readValues(calc: AnyCalculator, raw: unknown, path: string, prob
  * Reads a calculator's whole section: its values, or for a list calculator its named entries (at
  * most the declared number; each entry that is not an object is left out and reported).
  */
-export function readSection(
-  calc: AnyCalculator,
-  raw: unknown,
-  path: string,
-  problems: DesignProblem[],
-  system: UnitSystem = "metric",
-): AnyValues | AnyValues[] {
+export function readSection(calc: AnyForm, raw: unknown, path: string, problems: DesignProblem[], system: UnitSystem = "metric"): AnyValues | AnyValues[] {
   if (calc.section.kind === "single") return readValues(calc, raw, path, problems, { system });
   const { max, entryName } = calc.section;
   if (!Array.isArray(raw)) {

@@ -7,9 +7,9 @@ import { useSignal } from "../calc-ui/reactive.ts";
 import type { CheckResult } from "../../calc/design/checks.ts";
 import { STATUS_MARKS, STATUS_WORDS } from "../../calc/core/check.ts";
 import { linkFor } from "../../calc/core/calculator.ts";
-import { CALCULATORS, calculatorFor } from "../../calc/design/registry.ts";
+import { FORMS, formFor } from "../../calc/design/registry.ts";
 import type { AnyValues } from "../../calc/core/calculator.ts";
-import { createBuildSheetModel, type BuildSheetModel } from "./model.ts";
+import { createBuildSheetModel, type BuildSheetModel, type PreparedDemo } from "./model.ts";
 import { type PrintedInput, printedInputs } from "./print.ts";
 import { browserStorage } from "./saved.ts";
 
@@ -36,7 +36,7 @@ async function preparePrint(block: HTMLElement | null, model: BuildSheetModel): 
 
 function CheckCard({ result, model, inputs }: { result: CheckResult; model: BuildSheetModel; inputs: PrintedInput[] | null }) {
   const design = model.current.value.design;
-  const calc = calculatorFor(result.section);
+  const calc = formFor(result.section);
   const stored = design[result.section];
   const values = (result.index === null ? stored : (stored as AnyValues[] | undefined)?.[result.index]) as AnyValues | undefined;
   // The calculator opened from here saves back into this design and entry (the demo: into a copy).
@@ -177,14 +177,19 @@ function DesignList({ model }: { model: BuildSheetModel }) {
 
 /** The inputs of the values a check was computed from, as the print view lists them. */
 function inputsOf(result: CheckResult, design: BuildSheetModel["current"]["value"]["design"]): PrintedInput[] {
-  const calc = calculatorFor(result.section);
+  const calc = formFor(result.section);
   const stored = design[result.section];
   const values = (result.index === null ? stored : (stored as AnyValues[] | undefined)?.[result.index]) as AnyValues | undefined;
   return calc && values ? printedInputs(calc, values, design.units) : [];
 }
 
-export default function BuildSheet() {
-  const model = useMemo(() => createBuildSheetModel(typeof window === "undefined" ? null : browserStorage()), []);
+export interface BuildSheetProps {
+  /** The demo's cards, computed when the site is built. */
+  demo?: PreparedDemo;
+}
+
+export default function BuildSheet({ demo }: BuildSheetProps = {}) {
+  const model = useMemo(() => createBuildSheetModel(typeof window === "undefined" ? null : browserStorage(), demo ?? null), []);
   const fileInput = useRef<HTMLInputElement>(null);
   const link = useSignal<string | null>(null);
   const printBlock = useRef<HTMLDivElement>(null);
@@ -219,7 +224,7 @@ export default function BuildSheet() {
 
   const { design, origin } = model.current.value;
   const presentSections = new Set(model.results.value.map((r) => r.section));
-  const missing = CALCULATORS.filter((c) => !presentSections.has(c.id) && !CALCULATORS.some((o) => o.chapter === c.chapter && o.order < c.order));
+  const missing = FORMS.filter((c) => !presentSections.has(c.id) && !FORMS.some((o) => o.chapter === c.chapter && o.order < c.order));
   const originText: Record<typeof origin, string> = {
     saved: "Saved in this browser; changes are saved as you make them.",
     link: "Opened from a link; not saved in this browser yet.",
@@ -408,6 +413,11 @@ export default function BuildSheet() {
         <p data-print="note" />
       </div>
       <Summary model={model} />
+      {model.pending.value.length ? (
+        <p class="sheet-status" role="status">
+          Loading the checks…
+        </p>
+      ) : null}
       <ol class="checks">
         {model.results.value.map((r, i, all) => {
           // A check's inputs are printed once, under the first card of its values.

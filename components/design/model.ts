@@ -6,9 +6,12 @@
  * said in words, with both versions kept. Nothing is shown as saved that was not; the demo never
  * changes (saving it makes a named copy); a save or a deletion can be undone.
  */
-import { batch, computed, signal } from "../calc-ui/reactive.ts";
+import { batch, computed, effect, signal } from "../calc-ui/reactive.ts";
 import { describeProblems, newDesign, readDesignText, designToText, type Design } from "../../calc/design/design.ts";
-import { runChecks, overallStatus } from "../../calc/design/checks.ts";
+import { type CheckResult, overallStatus, runChecksWith } from "../../calc/design/checks.ts";
+import { FORMS, loadCalculators } from "../../calc/design/registry.ts";
+import type { AnyCalculator } from "../../calc/core/calculator.ts";
+import type { UnitSystem } from "../../calc/core/units.ts";
 import { demoDesign } from "../../calc/design/demo.ts";
 import type { FragmentReading } from "./share.ts";
 import {
@@ -61,7 +64,10 @@ export const DEMO_COPY_NAME = "Demo copy";
  * `loadSaved` then reads this browser's storage, once the page is live: the first render in the
  * browser must match the build's markup, which the browser adopts instead of drawing it again.
  */
-export function createBuildSheetModel(storage: Storage | Fault | null) {
+/** The demo's cards in each unit system, computed when the site is built (the page needs no check code to show them). */
+export type PreparedDemo = Readonly<Record<UnitSystem, readonly CheckResult[]>>;
+
+export function createBuildSheetModel(storage: Storage | Fault | null, prepared: PreparedDemo | null = null) {
   const designs = signal<SavedDesign[]>([]);
   const current = signal<OnScreen>({ design: demoDesign(), origin: "demo", id: null, rev: 0 });
   const messages = signal<string[]>([]);
@@ -76,7 +82,30 @@ export function createBuildSheetModel(storage: Storage | Fault | null) {
   const aside = signal({ count: 0, size: 0 });
   const store = typeof storage === "object" && storage !== null ? storage : null;
 
-  const results = computed(() => runChecks(current.value.design, current.value.design.units));
+  /** The checks' code loaded so far, by section: only the sections a design on screen holds. */
+  const loaded = signal<ReadonlyMap<string, AnyCalculator>>(new Map());
+  /** The sections of the design on screen whose check code is still loading. */
+  const pending = computed(() => {
+    const { design, origin } = current.value;
+    if (origin === "demo" && prepared) return [];
+    return FORMS.filter((f) => design[f.id] !== undefined && !loaded.value.has(f.id)).map((f) => f.id);
+  });
+  const results = computed((): readonly CheckResult[] => {
+    const { design, origin } = current.value;
+    // The demo's sections never change on this page (saving makes a copy): its cards come with the page.
+    if (origin === "demo" && prepared) return prepared[design.units];
+    const calculators = FORMS.map((f) => (design[f.id] === undefined ? undefined : loaded.value.get(f.id))).filter((c) => c !== undefined);
+    return runChecksWith(calculators, design, design.units);
+  });
+  if (typeof window !== "undefined") {
+    effect(() => {
+      const wanted = pending.value;
+      if (wanted.length === 0) return;
+      void loadCalculators(wanted).then((list) => {
+        loaded.value = new Map([...loaded.peek(), ...list.map((c) => [c.id, c] as const)]);
+      });
+    });
+  }
   const overall = computed(() => overallStatus(results.value));
   const say = (...lines: string[]) => {
     messages.value = [...messages.value, ...lines];
@@ -396,6 +425,7 @@ export function createBuildSheetModel(storage: Storage | Fault | null) {
     designs,
     current,
     results,
+    pending,
     overall,
     messages,
     problems,

@@ -3,7 +3,7 @@
  * design's units, and the QR code's drawing. Pure functions; the QR encoder itself loads only when
  * someone prints (print-qr.ts).
  */
-import type { AnyCalculator, AnyValues } from "../../calc/core/calculator.ts";
+import type { AnyForm, AnyValues } from "../../calc/core/calculator.ts";
 import { fieldUnit } from "../../calc/core/inputs.ts";
 import { formatQuantity, type UnitSystem } from "../../calc/core/units.ts";
 
@@ -18,7 +18,7 @@ export interface PrintedInput {
  * (three significant figures, counts as whole numbers, in the field's unit for `system`), every choice by its option's
  * words, and each list (parts, entries) by its count. Inputs the values do not hold are left out.
  */
-export function printedInputs(calc: AnyCalculator, values: AnyValues, system: UnitSystem): PrintedInput[] {
+export function printedInputs(calc: AnyForm, values: AnyValues, system: UnitSystem): PrintedInput[] {
   const out: PrintedInput[] = [];
   for (const [name, spec] of Object.entries(calc.inputs)) {
     const value = values[name];

@@ -41,10 +41,12 @@ const KIB = 1024;
  * the formulas as text in the search index (about 10 KiB), the steering simulation's view (loaded
  * on its button) and the bolted-joint check (about 10 KiB: its code on the build sheet and as the
  * fasteners page's on-use chunk, the chapter's longer text, formulas and inch tables): measured
- * 780 KiB (799 054 B), with the review's corrections and the saved-designs work beside them; ceiling 788 KiB. The 500 KiB target is not met: what remains is used (pages,
+ * 780 KiB (799 054 B), with the review's corrections and the saved-designs work beside them; then the
+ * build sheet's checks as chunks of their own, loaded for the sections a design holds (their forms
+ * apart from them): 792 KiB (810 537 B), ceiling 800 KiB. The 500 KiB target is not met: what remains is used (pages,
  * scripts, 3 fonts, the search index and its code).
  */
-const PRECACHE_GZIP_CEILING = 788 * KIB;
+const PRECACHE_GZIP_CEILING = 800 * KIB;
 
 describe("compressed copies", () => {
   const text = () => files().filter((f) => /\.(html|css|js|svg|json)$/.test(f));

@@ -7,7 +7,7 @@ import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { type AnyCalculator, type AnyValues, linkFor, linkQuery, readLink, valuesOf } from "../../calc/core/calculator.ts";
 import { readSection, type DesignProblem } from "../../calc/design/sections.ts";
-import { CALCULATORS } from "../../calc/design/registry.ts";
+import { CALCULATORS } from "../../calc/design/calculators.ts";
 import { valuesArb } from "../support/arbitraries.ts";
 
 const systems = fc.constantFrom("metric", "us") as fc.Arbitrary<"metric" | "us">;

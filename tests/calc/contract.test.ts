@@ -30,7 +30,7 @@ import * as api from "../../calc/index.ts";
 import { CalcInputError } from "../../calc/core/errors.ts";
 import type { AnyCalculator } from "../../calc/core/calculator.ts";
 import type { InputSpec, InputSpecs } from "../../calc/core/inputs.ts";
-import { CALCULATORS } from "../../calc/design/registry.ts";
+import { CALCULATORS } from "../../calc/design/calculators.ts";
 import { requireDeclared } from "../../calc/core/spec-check.ts";
 import { inputArb, invalidInputArb, mutateCall, mutationsArb, nonFinitePlace } from "../support/arbitraries.ts";
 
@@ -456,6 +456,7 @@ const CALLS: Record<PublicFunction, Entry> = {
   newDesign: { calls: c(["Invented test robot"]) },
   cardsFor: { calls: () => [[calc("placement"), api.initialValues(calc("placement")), "metric"]], code: ["0"] },
   runChecks: { calls: () => [[api.demoDesign()]], runs: 100 },
+  runChecksWith: { calls: () => [[[], api.demoDesign()]] },
   overallStatus: { calls: () => [[api.runChecks(api.demoDesign())]], code: ["0"] },
   terminalSafe: { calls: c(["a\u0007b\nc"]) },
   linkSpelling: { calls: c(["200 gₙ"], ["8 mΩ"], ["12.7 mm"], ["abc"]) },

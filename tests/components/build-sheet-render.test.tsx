@@ -5,6 +5,7 @@
  * attributes). So the first render must not depend on what this browser has saved: a message or a
  * list that only the browser knows comes after, from an effect, and is drawn in full.
  */
+import { preparedDemo } from "../support/prepared-demo.ts";
 import { afterEach, describe, expect, it } from "vitest";
 import { renderToString } from "preact-render-to-string";
 import BuildSheet from "../../components/design/BuildSheet.tsx";
@@ -14,7 +15,7 @@ import { demoDesign, designToText } from "../../calc/index.ts";
 afterEach(() => localStorage.clear());
 
 describe("the build sheet's first render", () => {
-  const atBuild = renderToString(<BuildSheet />);
+  const atBuild = renderToString(<BuildSheet demo={preparedDemo()} />);
 
   it.each([
     ["an unreadable store", "{not json"],
@@ -29,7 +30,7 @@ describe("the build sheet's first render", () => {
     ],
   ])("is the build's markup whatever this browser has saved (%s)", (_, stored) => {
     localStorage.setItem(STORE_KEY, stored);
-    expect(renderToString(<BuildSheet />)).toBe(atBuild);
+    expect(renderToString(<BuildSheet demo={preparedDemo()} />)).toBe(atBuild);
     // Reading the store (and keeping an unreadable one aside) waits for the page to be live.
     expect(localStorage.length).toBe(1);
   });

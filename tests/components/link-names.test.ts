@@ -7,7 +7,7 @@
 import { describe, expect, it } from "vitest";
 import { readLink, valuesOf } from "../../calc/core/calculator.ts";
 import { readSpinUpView } from "../../calc/calculators/spin-up.ts";
-import { CALCULATORS } from "../../calc/design/registry.ts";
+import { CALCULATORS } from "../../calc/design/calculators.ts";
 import { rimMaterialChoices } from "../../calc/loads/index.ts";
 import { parseLayout } from "../../calc/mass/layout-text.ts";
 import { readMountingPoints } from "../../calc/mass/points-text.ts";

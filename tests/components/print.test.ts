@@ -4,7 +4,7 @@
  */
 import { describe, expect, it } from "vitest";
 import type { AnyValues } from "../../calc/core/calculator.ts";
-import { calculatorFor } from "../../calc/design/registry.ts";
+import { calculatorFor } from "../../calc/design/calculators.ts";
 import { demoDesign } from "../../calc/index.ts";
 import { designAddress, printedInputs, qrPath } from "../../components/design/print.ts";
 import { printedCode } from "../../components/design/print-qr.ts";

@@ -3,7 +3,7 @@
  * find first; whole words only, so a nonsense word finds nothing.
  */
 import { describe, expect, it } from "vitest";
-import { CALCULATORS } from "../../calc/design/registry.ts";
+import { CALCULATORS } from "../../calc/design/calculators.ts";
 import { searchEntries } from "../../components/search/entries.ts";
 import { fieldScore, rankFields, STRONG_MATCH, textMatches, words } from "../../components/search/rank.ts";
 

@@ -9,6 +9,7 @@
  * Widgets are rendered on the server (the path Astro islands take) and, for states a link sets, into
  * a DOM.
  */
+import { preparedDemo } from "../support/prepared-demo.ts";
 import { afterEach, describe, expect, it } from "vitest";
 import type { ComponentChild, VNode } from "preact";
 import { render } from "preact";
@@ -139,7 +140,7 @@ describe("verdict words: Holds, Marginal, Fails or For information, then the rea
   });
 
   it("shows the build sheet's badges with the same words, For information included, and leads the summary with the word", () => {
-    const html = renderToString(<BuildSheet />);
+    const html = renderToString(<BuildSheet demo={preparedDemo()} />);
     const badges = [...html.matchAll(/<span class="badge badge--(\w+)"><span aria-hidden="true">(.)<\/span> ([^<]+)<\/span>/g)].map((m) => [m[1], m[2], m[3]]);
     expect(badges).toContainEqual(["info", "i", "For information"]);
     expect(badges).toContainEqual(["holds", "✔", "Holds"]);

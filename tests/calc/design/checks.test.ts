@@ -21,9 +21,10 @@ import { type AnyCalculator, type AnyValues, initialValues } from "../../../calc
 import { STATUS_MARKS, STATUS_WORDS, type CheckStatus } from "../../../calc/core/check.ts";
 import { STANDARD_GRAVITY } from "../../../calc/core/constants.ts";
 import { CalcInputError } from "../../../calc/core/errors.ts";
-import { buildSheetText, type CheckResult, cardsFor, overallStatus, runChecks, terminalSafe } from "../../../calc/design/checks.ts";
+import { buildSheetText, type CheckResult, cardsFor, overallStatus, terminalSafe } from "../../../calc/design/checks.ts";
+import { runChecks } from "../../../calc/design/run-checks.ts";
 import { type Design, newDesign } from "../../../calc/design/format.ts";
-import { calculatorFor } from "../../../calc/design/registry.ts";
+import { calculatorFor } from "../../../calc/design/calculators.ts";
 import type { LayoutPart } from "../../../calc/mass/parts.ts";
 
 const DEG = Math.PI / 180;

@@ -8,7 +8,7 @@ import weaponHitCalculator from "../../../calc/calculators/weapon-hit.ts";
 import weaponShaftCalculator, { shaftInputApplies } from "../../../calc/calculators/weapon-shaft.ts";
 import { linkQuery } from "../../../calc/core/calculator.ts";
 import { parseQuantity } from "../../../calc/core/units.ts";
-import { runChecks } from "../../../calc/design/checks.ts";
+import { runChecks } from "../../../calc/design/run-checks.ts";
 import { DESIGN_FORMAT, DESIGN_VERSION, type Design } from "../../../calc/design/format.ts";
 import { MATERIAL_DENSITIES, MATERIAL_IDS } from "../../../calc/materials/densities.ts";
 import { MATERIALS } from "../../../calc/materials/materials.ts";
