@@ -184,12 +184,12 @@ function inputsOf(result: CheckResult, design: BuildSheetModel["current"]["value
 }
 
 export interface BuildSheetProps {
-  /** The demo's cards, computed when the site is built. */
-  demo?: PreparedDemo;
+  /** The demo design and its cards, computed when the site is built. */
+  demo: PreparedDemo;
 }
 
-export default function BuildSheet({ demo }: BuildSheetProps = {}) {
-  const model = useMemo(() => createBuildSheetModel(typeof window === "undefined" ? null : browserStorage(), demo ?? null), []);
+export default function BuildSheet({ demo }: BuildSheetProps) {
+  const model = useMemo(() => createBuildSheetModel(typeof window === "undefined" ? null : browserStorage(), demo), []);
   const fileInput = useRef<HTMLInputElement>(null);
   const link = useSignal<string | null>(null);
   const printBlock = useRef<HTMLDivElement>(null);

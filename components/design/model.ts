@@ -12,7 +12,6 @@ import { type CheckResult, overallStatus, runChecksWith } from "../../calc/desig
 import { FORMS, loadCalculators } from "../../calc/design/registry.ts";
 import type { AnyCalculator } from "../../calc/core/calculator.ts";
 import type { UnitSystem } from "../../calc/core/units.ts";
-import { demoDesign } from "../../calc/design/demo.ts";
 import type { FragmentReading } from "./share.ts";
 import {
   ACTIVE_KEY,
@@ -64,10 +63,16 @@ export const DEMO_COPY_NAME = "Demo copy";
  * `loadSaved` then reads this browser's storage, once the page is live: the first render in the
  * browser must match the build's markup, which the browser adopts instead of drawing it again.
  */
-/** The demo's cards in each unit system, computed when the site is built (the page needs no check code to show them). */
-export type PreparedDemo = Readonly<Record<UnitSystem, readonly CheckResult[]>>;
+/**
+ * The demo design and its cards in each unit system, computed when the site is built: the page
+ * carries them as data, and needs neither the code that builds the demo nor any check's code to
+ * show it.
+ */
+export type PreparedDemo = Readonly<Record<UnitSystem, readonly CheckResult[]> & { design: Design }>;
 
-export function createBuildSheetModel(storage: Storage | Fault | null, prepared: PreparedDemo | null = null) {
+export function createBuildSheetModel(storage: Storage | Fault | null, prepared: PreparedDemo) {
+  /** A fresh copy of the demo design (it is plain data). */
+  const demoDesign = (): Design => structuredClone(prepared.design);
   const designs = signal<SavedDesign[]>([]);
   const current = signal<OnScreen>({ design: demoDesign(), origin: "demo", id: null, rev: 0 });
   const messages = signal<string[]>([]);
@@ -87,13 +92,13 @@ export function createBuildSheetModel(storage: Storage | Fault | null, prepared:
   /** The sections of the design on screen whose check code is still loading. */
   const pending = computed(() => {
     const { design, origin } = current.value;
-    if (origin === "demo" && prepared) return [];
+    if (origin === "demo") return [];
     return FORMS.filter((f) => design[f.id] !== undefined && !loaded.value.has(f.id)).map((f) => f.id);
   });
   const results = computed((): readonly CheckResult[] => {
     const { design, origin } = current.value;
     // The demo's sections never change on this page (saving makes a copy): its cards come with the page.
-    if (origin === "demo" && prepared) return prepared[design.units];
+    if (origin === "demo") return prepared[design.units];
     const calculators = FORMS.map((f) => (design[f.id] === undefined ? undefined : loaded.value.get(f.id))).filter((c) => c !== undefined);
     return runChecksWith(calculators, design, design.units);
   });

@@ -45,6 +45,8 @@ async function demoCopy(context: BrowserContext): Promise<Page> {
   const sheet = await open(context, "/build-sheet/#demo");
   await sheet.getByRole("button", { name: "Save in this browser" }).click();
   await expect.poll(() => sheet.locator(".design-name").allTextContents()).toEqual(["Demo copy"]);
+  // The copy is a design of this browser's own: its checks' code loads, then its cards show.
+  await expect.poll(() => sheet.locator(".sheet-status").count()).toBe(0);
   return sheet;
 }
 
@@ -86,7 +88,8 @@ describe("a calculator opened from the build sheet", () => {
     await calc.goto(`${origin()}/build-sheet/`);
     await waitForIslands(calc);
     await expect.poll(() => calc.inputValue("#design-name")).toBe("Demo copy");
-    expect(await calc.locator('[data-check^="fasteners["]').count()).toBe(entries);
+    // A saved design loads the code of its checks, then shows them.
+    await expect.poll(() => calc.locator('[data-check^="fasteners["]').count()).toBe(entries);
     const figureTwoBolts = await figure(calc, "fasteners[0]");
     expect(figureTwoBolts).not.toBe(figureBefore);
     expect(await calc.locator("#last-save").textContent()).toContain("Fasteners › Counterweight washers (one M4 bolt) saved from its calculator");

@@ -3,6 +3,7 @@
  * moved without loss, unreadable data kept aside once, undo of each save, and a full or disabled
  * storage told apart and never shown as saved.
  */
+import { preparedDemo } from "../support/prepared-demo.ts";
 import { describe, expect, it } from "vitest";
 import { demoDesign, designToText } from "../../calc/index.ts";
 import { createBuildSheetModel } from "../../components/design/model.ts";
@@ -195,7 +196,7 @@ describe("undoing a save", () => {
 describe("the build sheet's model", () => {
   it("saves the demo as a named copy and never changes the demo", () => {
     const storage = new MemoryStorage();
-    const model = createBuildSheetModel(storage);
+    const model = createBuildSheetModel(storage, preparedDemo());
     model.loadSaved();
     model.saveCurrent();
     expect(model.designs.value.map((d) => d.design.name)).toEqual(["Demo copy"]);
@@ -207,7 +208,7 @@ describe("the build sheet's model", () => {
 
   it("shows nothing as saved when the storage is full, and says so with the way out", () => {
     const storage = new MemoryStorage(100);
-    const model = createBuildSheetModel(storage);
+    const model = createBuildSheetModel(storage, preparedDemo());
     model.loadSaved();
     model.saveCurrent();
     expect(model.designs.value).toEqual([]);
@@ -217,14 +218,14 @@ describe("the build sheet's model", () => {
   });
 
   it("says storage is turned off when there is none, apart from a full one", () => {
-    const model = createBuildSheetModel("disabled");
+    const model = createBuildSheetModel("disabled", preparedDemo());
     model.saveCurrent();
     expect(model.messages.value).toEqual([faultMessage("disabled")]);
   });
 
   it("does not save over a change another tab made first: it shows theirs and keeps this tab's as a copy on request", () => {
     const storage = new MemoryStorage();
-    const model = createBuildSheetModel(storage);
+    const model = createBuildSheetModel(storage, preparedDemo());
     model.loadSaved();
     model.saveCurrent();
     const id = model.current.value.id!;
@@ -240,7 +241,7 @@ describe("the build sheet's model", () => {
 
   it("follows a design another tab changed (storage event) and says so", () => {
     const storage = new MemoryStorage();
-    const model = createBuildSheetModel(storage);
+    const model = createBuildSheetModel(storage, preparedDemo());
     model.loadSaved();
     model.saveCurrent();
     const id = model.current.value.id!;
