@@ -90,9 +90,11 @@ export function createBuildSheetModel(storage: Storage | Fault | null, prepared:
   /** The checks' code loaded so far, by section: only the sections a design on screen holds. */
   const loaded = signal<ReadonlyMap<string, AnyCalculator>>(new Map());
   /** The sections of the design on screen whose check code is still loading. */
+  /** Set when a check's code could not be fetched (offline before the site was cached, a broken deploy). */
+  const loadFailed = signal(false);
   const pending = computed(() => {
     const { design, origin } = current.value;
-    if (origin === "demo") return [];
+    if (origin === "demo" || loadFailed.value) return [];
     return FORMS.filter((f) => design[f.id] !== undefined && !loaded.value.has(f.id)).map((f) => f.id);
   });
   const results = computed((): readonly CheckResult[] => {
@@ -106,9 +108,17 @@ export function createBuildSheetModel(storage: Storage | Fault | null, prepared:
     effect(() => {
       const wanted = pending.value;
       if (wanted.length === 0) return;
-      void loadCalculators(wanted).then((list) => {
-        loaded.value = new Map([...loaded.peek(), ...list.map((c) => [c.id, c] as const)]);
-      });
+      loadCalculators(wanted).then(
+        (list) => {
+          loaded.value = new Map([...loaded.peek(), ...list.map((c) => [c.id, c] as const)]);
+        },
+        () => {
+          batch(() => {
+            loadFailed.value = true;
+            say("Some checks could not be loaded (the page's code did not arrive): reload the page when this device is online.");
+          });
+        },
+      );
     });
   }
   const overall = computed(() => overallStatus(results.value));
