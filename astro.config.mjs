@@ -65,8 +65,10 @@ export default defineConfig({
       sourcemap: process.env.SOURCEMAP === "1",
       rolldownOptions: {
         // calc/ is pure by rule (no DOM, no I/O, nothing runs on import): a calc module a chunk
-        // imports but does not use is left out instead of being kept for its "side effects".
-        treeshake: { moduleSideEffects: [{ test: /[\\/]calc[\\/][^?]*\.ts(\?.*)?$/, sideEffects: false }] },
+        // imports but does not use is left out instead of being kept for its "side effects". The one
+        // exception, calc/core/all-units.ts, registers every unit table when imported (the build, the
+        // build sheet, the development server); calculator pages register their own kinds.
+        treeshake: { moduleSideEffects: [{ test: /[\\/]calc[\\/](?!core[\\/]all-units\.ts)[^?]*\.ts(\?.*)?$/, sideEffects: false }] },
         output: {
           // Every calculator page needs the same runtime (Preact, reactive state, units, the shared
           // calculator parts): one chunk for it compresses better than nine small ones. Parts only

@@ -11,7 +11,11 @@ export default defineConfig({
     projects: [
       {
         extends: true,
-        test: { name: "unit", include: ["tests/calc/**/*.test.ts", "tests/components/**/*.test.{ts,tsx}", "tests/cli/**/*.test.ts"] },
+        test: {
+          name: "unit",
+          include: ["tests/calc/**/*.test.ts", "tests/components/**/*.test.{ts,tsx}", "tests/cli/**/*.test.ts"],
+          setupFiles: ["tests/support/all-units.ts"],
+        },
       },
       { extends: true, test: { name: "build", include: ["tests/build/**/*.test.ts"] } },
       {

@@ -20,6 +20,8 @@ if (major < 22 || (major === 22 && minor < 18)) {
 const { register } = await import("node:module");
 register("../scripts/node-glob.mjs", import.meta.url);
 
+// Every unit table: a design file may hold any quantity.
+await import("../calc/core/all-units.ts");
 const { readDesignText, describeProblems } = await import("../calc/design/design.ts");
 const { buildSheetText, overallStatus, terminalSafe } = await import("../calc/design/checks.ts");
 const { runChecks } = await import("../calc/design/run-checks.ts");

@@ -6,6 +6,8 @@ export * from "./core/errors.ts";
 export * from "./core/constants.ts";
 export * from "./sources/index.ts";
 export * from "./core/units.ts";
+export * from "./core/unit-table.ts";
+import "./core/all-units.ts";
 export * from "./core/unit-tools.ts";
 export * from "./core/inputs.ts";
 export * from "./core/received.ts";

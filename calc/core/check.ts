@@ -4,7 +4,7 @@
  * and the figures worth a glance. The calculator's own banner, the build sheet and the command line
  * all show the same card.
  */
-import { formatNumber, formatQuantity, siUnit, UNITS, type QuantityKind, type UnitId, type UnitSystem } from "./units.ts";
+import { formatNumber, formatQuantity, siUnit, type QuantityKind, type UnitId, type UnitSystem, unitDef } from "./units.ts";
 
 /** How a check stands. "info" carries a figure without judging it. */
 export type CheckStatus = "holds" | "marginal" | "fails" | "info";
@@ -43,7 +43,7 @@ export interface CheckCard {
 
 /** A figure of a quantity, formatted in the system's display unit (or in `unit`). */
 export function figureOf(label: string, value: number, kind: QuantityKind, system: UnitSystem, unit?: UnitId, significant = 3): CheckFigure {
-  return { label, value, unit: UNITS[siUnit(kind)].symbol, text: formatQuantity(value, kind, { system, unit, significant }).text };
+  return { label, value, unit: unitDef(siUnit(kind)).symbol, text: formatQuantity(value, kind, { system, unit, significant }).text };
 }
 
 /** A figure that is a plain ratio (a safety factor). */

@@ -12,9 +12,9 @@ import {
   quantityToText,
   type QuantityKind,
   type UnitDef,
-  UNITS,
   type UnitId,
   type UnitSystem,
+  unitDef,
 } from "./units.ts";
 
 export interface InputSpec {
@@ -74,7 +74,7 @@ export function fieldUnit(spec: InputSpec, system: UnitSystem): UnitId {
 /** Formats a range bound in the field's unit, without trailing zeros ("50 %", "2000 mm"). */
 function show(spec: InputSpec, valueSI: number, system: UnitSystem): string {
   const unit = fieldUnit(spec, system);
-  const symbol = UNITS[unit].symbol;
+  const symbol = unitDef(unit).symbol;
   return `${Number(fromSI(valueSI, unit).toPrecision(4))}${symbol ? ` ${symbol}` : ""}`;
 }
 
@@ -92,7 +92,7 @@ export function describeRange(spec: InputSpec, system: UnitSystem): string {
 export function checkValue(spec: InputSpec, valueSI: number, system: UnitSystem): CalcInputError | null {
   const unit = fieldUnit(spec, system);
   // The value in the field's unit, to 6 significant figures: computed, never read back from display text.
-  const shownValue = Number((valueSI / UNITS[unit].factor).toPrecision(6));
+  const shownValue = Number((valueSI / unitDef(unit).factor).toPrecision(6));
   const tooLow = spec.minOpen ? !(valueSI > spec.min) : !(valueSI >= spec.min);
   const tooHigh = !(valueSI <= spec.max);
   const notWhole = spec.integer === true && !Number.isInteger(valueSI);
@@ -101,7 +101,7 @@ export function checkValue(spec: InputSpec, valueSI: number, system: UnitSystem)
       param: spec.label,
       value: Number.isFinite(shownValue) ? shownValue : valueSI,
       expected: describeRange(spec, system),
-      unit: UNITS[unit].symbol,
+      unit: unitDef(unit).symbol,
     });
   }
   return null;
@@ -126,7 +126,7 @@ export function readField(spec: InputSpec, text: string, system: UnitSystem): Fi
 /** The text a field starts with: the default in the system's unit. */
 export function defaultText(spec: InputSpec, system: UnitSystem): string {
   const unit = fieldUnit(spec, system);
-  const symbol = UNITS[unit].symbol;
+  const symbol = unitDef(unit).symbol;
   return `${Number(fromSI(spec.default, unit).toPrecision(6))}${symbol ? ` ${symbol}` : ""}`;
 }
 
@@ -137,7 +137,7 @@ export function defaultText(spec: InputSpec, system: UnitSystem): string {
  */
 export function exactFieldText(spec: InputSpec, valueSI: number, system: UnitSystem): string {
   const exact = exactQuantity(valueSI, fieldUnit(spec, system));
-  const def: UnitDef = UNITS[exact.unit];
+  const def: UnitDef = unitDef(exact.unit);
   const symbol = def.symbol || def.aliases?.[0] || "";
   return symbol === "" || symbol === "°" ? `${exact.number}${symbol}` : `${exact.number} ${symbol}`;
 }

@@ -6,11 +6,11 @@
  */
 import { CalcInputError } from "./errors.ts";
 import type { InputSpec, InputSpecs } from "./inputs.ts";
-import { siUnit, UNITS } from "./units.ts";
+import { siUnit, unitDef } from "./units.ts";
 
 /** The SI symbol a value of the spec's kind is given in ("m", "rad/s"; "" for a plain ratio). */
 export function siSymbol(spec: Pick<InputSpec, "kind">): string {
-  return UNITS[siUnit(spec.kind)].symbol;
+  return unitDef(siUnit(spec.kind)).symbol;
 }
 
 function shown(bound: number, unit: string): string {

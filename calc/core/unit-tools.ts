@@ -4,13 +4,13 @@
  * kind (the calibration file's columns).
  */
 import { CalcInputError } from "./errors.ts";
-import { fromSI, kindName, type QuantityKind, toSI, type UnitDef, type UnitId, UNITS, unitsOfKind } from "./units.ts";
+import { fromSI, kindName, type QuantityKind, toSI, type UnitId, unitsOfKind, unitDef, lookupUnit } from "./units.ts";
 
 /** Converts between two units of the same kind. */
 export function convert(value: number, from: UnitId, to: UnitId): number {
   const si = toSI(value, from); // a CalcInputError naming "from" for an unknown unit
-  const kind = UNITS[from].kind;
-  const target: UnitDef | undefined = typeof to === "string" && Object.hasOwn(UNITS, to) ? UNITS[to] : undefined;
+  const kind = unitDef(from).kind;
+  const target = lookupUnit(to);
   // An unknown unit gets fromSI's own refusal ("to must be one of …"); a known one of another kind this.
   if (target && target.kind !== kind) throw new CalcInputError({ param: "to", value: to, expected: `a unit of ${kindName(kind)}, as ${from} is`, unit: "" });
   return fromSI(si, to);
@@ -25,7 +25,7 @@ export function convert(value: number, from: UnitId, to: UnitId): number {
  * @returns the unit id, typed
  */
 export function requireUnitOfKind(param: string, unit: unknown, kind: QuantityKind): UnitId {
-  const def = typeof unit === "string" && Object.hasOwn(UNITS, unit) ? UNITS[unit as UnitId] : undefined;
+  const def = lookupUnit(unit);
   if (!def || def.kind !== kind) {
     throw new CalcInputError({ param, value: String(unit), expected: `a unit of ${kindName(kind)} (${unitsOfKind(kind).join(", ")})`, unit: "" });
   }

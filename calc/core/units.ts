@@ -1,160 +1,62 @@
 /**
- * Units as data. Every unit is an exact (or derived-exact) ratio to its SI unit, pinned here with
- * its definition and source. calc/ works in SI only; this module converts at the edge: it parses
- * what a user types ("45 mm", "1.8 in", "350 g") for a field of a known quantity kind and formats
- * SI results in metric or US customary units to a sensible number of significant figures.
+ * Units at the edge. calc/ works in SI only; this module converts: it parses what a user types
+ * ("45 mm", "1.8 in", "350 g") for a field of a known quantity kind and formats SI results in metric
+ * or US customary units to a sensible number of significant figures. It reads the units of the kinds
+ * registered with `useUnits` (the tables are in unit-table.ts), so that a page carries only the kinds
+ * it uses.
  */
-import { STANDARD_GRAVITY } from "./constants.ts";
+import { RAD_PER_S_PER_RPM } from "./constants.ts";
 import { CalcInputError } from "./errors.ts";
+import type { KindUnits, QuantityKind, UnitDef, UnitId } from "./unit-table.ts";
 
-/** The quantity a field holds; it decides which units a typed value may carry. */
-export type QuantityKind =
-  | "length"
-  | "area"
-  | "mass"
-  | "acceleration"
-  | "angularSpeed"
-  | "angularAcceleration"
-  | "angle"
-  | "time"
-  | "frequency"
-  | "force"
-  | "speed"
-  | "energy"
-  | "power"
-  | "torque"
-  | "inertia"
-  | "stress"
-  | "density"
-  | "unbalance"
-  | "voltage"
-  | "current"
-  | "resistance"
-  | "motorVelocityConstant"
-  | "fraction"
-  | "count";
+export type { DisplaySteps, KindUnits, QuantityKind, UnitDef, UnitId } from "./unit-table.ts";
 
-export interface UnitDef {
-  /** Symbol shown to users. */
-  symbol: string;
-  kind: QuantityKind;
-  /** Size of one unit in the kind's SI unit (value_SI = value × factor). */
-  factor: number;
-  /** Other spellings accepted when parsing (compared case-sensitively, then case-insensitively). */
-  aliases?: readonly string[];
+/** The registered units by id, and each registered kind's ids (in table order) and display steps. */
+const UNIT: Record<string, UnitDef> = {};
+const KIND: Partial<Record<QuantityKind, { ids: UnitId[]; display: KindUnits["display"] }>> = {};
+
+/**
+ * Makes the units of the given kinds known to parsing and formatting (tables from unit-table.ts,
+ * `unitTables`); registering a kind again does nothing.
+ *
+ * @param tables the kinds' tables
+ */
+export function useUnits(tables: readonly KindUnits[]): void {
+  for (const table of tables ?? []) {
+    const { kind, units, display } = table ?? {};
+    if (typeof kind !== "string" || typeof units !== "object" || !Array.isArray(display)) {
+      throw new CalcInputError({ param: "tables", value: String(kind), expected: "unit tables from unitTables()", unit: "" });
+    }
+    if (KIND[kind]) continue;
+    KIND[kind] = { ids: Object.keys(units) as UnitId[], display };
+    for (const [id, entry] of Object.entries(units)) UNIT[id] = { ...entry, kind };
+  }
 }
 
-const INCH = 0.0254; // nist-sp811, exact (1 yd = 0.9144 m, intl-yard-pound-1959)
-const FOOT = 0.3048; // nist-sp811, exact
-const POUND = 0.45359237; // nist-sp811, exact
-const OUNCE = POUND / 16; // avoirdupois ounce, exact
-const POUND_FORCE = POUND * STANDARD_GRAVITY; // nist-sp811, exact by definition: 4.448 221 615 260 5 N
-const RPM = (2 * Math.PI) / 60; // 1 rev = 2π rad, exact
+/** Whether the units of `kind` are registered (see `useUnits`). */
+export function unitsLoaded(kind: QuantityKind): boolean {
+  return typeof kind === "string" && Object.hasOwn(KIND, kind);
+}
 
-/** Every unit Whirlbook knows, keyed by id. */
-export const UNITS = {
-  // length [m]
-  m: { symbol: "m", kind: "length", factor: 1, aliases: ["metre", "meter", "meters", "metres"] },
-  cm: { symbol: "cm", kind: "length", factor: 0.01 },
-  mm: { symbol: "mm", kind: "length", factor: 0.001, aliases: ["millimetre", "millimeter", "millimeters", "millimetres"] },
-  in: { symbol: "in", kind: "length", factor: INCH, aliases: ["inch", "inches", '"', "″"] },
-  ft: { symbol: "ft", kind: "length", factor: FOOT, aliases: ["foot", "feet", "'", "′"] },
-  // area [m²]
-  m2: { symbol: "m²", kind: "area", factor: 1, aliases: ["m²", "m^2", "sq m"] },
-  mm2: { symbol: "mm²", kind: "area", factor: 1e-6, aliases: ["mm²", "mm^2", "sq mm"] },
-  in2: { symbol: "in²", kind: "area", factor: INCH * INCH, aliases: ["in²", "in^2", "sq in"] },
-  // mass [kg]
-  kg: { symbol: "kg", kind: "mass", factor: 1 },
-  g: { symbol: "g", kind: "mass", factor: 0.001, aliases: ["gram", "grams", "gr"] },
-  lb: { symbol: "lb", kind: "mass", factor: POUND, aliases: ["lbs", "pound", "pounds", "lbm"] },
-  oz: { symbol: "oz", kind: "mass", factor: OUNCE, aliases: ["ounce", "ounces"] },
-  // acceleration [m/s²]
-  "m/s2": { symbol: "m/s²", kind: "acceleration", factor: 1, aliases: ["m/s²", "m/s^2", "ms-2", "m s-2"] },
-  // Shown as gₙ so that an acceleration never reads like grams; "g" is still read in an acceleration field.
-  gn: { symbol: "gₙ", kind: "acceleration", factor: STANDARD_GRAVITY, aliases: ["g", "G", "g0"] },
-  "ft/s2": { symbol: "ft/s²", kind: "acceleration", factor: FOOT, aliases: ["ft/s²", "ft/s^2"] },
-  // angular speed [rad/s]
-  "rad/s": { symbol: "rad/s", kind: "angularSpeed", factor: 1, aliases: ["rad s-1", "1/s"] },
-  rpm: { symbol: "rpm", kind: "angularSpeed", factor: RPM, aliases: ["rev/min", "r/min", "RPM"] },
-  rps: { symbol: "rev/s", kind: "angularSpeed", factor: 2 * Math.PI, aliases: ["rev/s", "r/s"] },
-  "deg/s": { symbol: "°/s", kind: "angularSpeed", factor: Math.PI / 180, aliases: ["°/s", "dps"] },
-  // angular acceleration [rad/s²]
-  "rad/s2": { symbol: "rad/s²", kind: "angularAcceleration", factor: 1, aliases: ["rad/s²", "rad/s^2"] },
-  "rpm/s": { symbol: "rpm/s", kind: "angularAcceleration", factor: RPM },
-  // angle [rad]
-  rad: { symbol: "rad", kind: "angle", factor: 1, aliases: ["radian", "radians"] },
-  deg: { symbol: "°", kind: "angle", factor: Math.PI / 180, aliases: ["°", "degree", "degrees"] },
-  rev: { symbol: "rev", kind: "angle", factor: 2 * Math.PI, aliases: ["turn", "turns"] },
-  // time [s]
-  s: { symbol: "s", kind: "time", factor: 1, aliases: ["sec", "second", "seconds"] },
-  h: { symbol: "h", kind: "time", factor: 3600, aliases: ["hr", "hour", "hours"] },
-  ms: { symbol: "ms", kind: "time", factor: 1e-3 },
-  us: { symbol: "µs", kind: "time", factor: 1e-6, aliases: ["µs", "μs"] },
-  // frequency [Hz]
-  Hz: { symbol: "Hz", kind: "frequency", factor: 1, aliases: ["hz"] },
-  kHz: { symbol: "kHz", kind: "frequency", factor: 1e3, aliases: ["khz"] },
-  // force [N]
-  N: { symbol: "N", kind: "force", factor: 1, aliases: ["newton", "newtons"] },
-  kN: { symbol: "kN", kind: "force", factor: 1e3 },
-  lbf: { symbol: "lbf", kind: "force", factor: POUND_FORCE },
-  ozf: { symbol: "ozf", kind: "force", factor: POUND_FORCE / 16 },
-  // speed [m/s]
-  "m/s": { symbol: "m/s", kind: "speed", factor: 1 },
-  "mm/s": { symbol: "mm/s", kind: "speed", factor: 1e-3 },
-  "km/h": { symbol: "km/h", kind: "speed", factor: 1000 / 3600, aliases: ["kph"] },
-  "ft/s": { symbol: "ft/s", kind: "speed", factor: FOOT, aliases: ["fps"] },
-  mph: { symbol: "mph", kind: "speed", factor: (5280 * FOOT) / 3600 },
-  // energy [J]
-  J: { symbol: "J", kind: "energy", factor: 1, aliases: ["joule", "joules"] },
-  kJ: { symbol: "kJ", kind: "energy", factor: 1e3 },
-  Wh: { symbol: "Wh", kind: "energy", factor: 3600 },
-  ft·lbf: { symbol: "ft·lbf", kind: "energy", factor: FOOT * POUND_FORCE, aliases: ["ft*lbf", "ft-lbf", "ftlbf", "ft.lbf", "ft lbf"] },
-  // power [W]
-  W: { symbol: "W", kind: "power", factor: 1 },
-  kW: { symbol: "kW", kind: "power", factor: 1e3 },
-  // torque [N·m]
-  N·m: { symbol: "N·m", kind: "torque", factor: 1, aliases: ["Nm", "N*m", "N.m", "N m"] },
-  lbf·in: { symbol: "lbf·in", kind: "torque", factor: POUND_FORCE * INCH, aliases: ["lbf*in", "lbf-in", "in-lbf", "in·lbf", "lbfin"] },
-  ozf·in: { symbol: "ozf·in", kind: "torque", factor: (POUND_FORCE / 16) * INCH, aliases: ["ozf*in", "oz-in", "oz·in", "ozin", "ozf-in"] },
-  // moment of inertia [kg·m²]
-  kg·m2: { symbol: "kg·m²", kind: "inertia", factor: 1, aliases: ["kg·m²", "kgm2", "kg*m^2", "kg m2", "kg.m2", "kgm^2", "kg·m^2"] },
-  g·cm2: { symbol: "g·cm²", kind: "inertia", factor: 1e-7, aliases: ["g·cm²", "gcm2", "g*cm^2", "g cm2"] },
-  lb·in2: { symbol: "lb·in²", kind: "inertia", factor: POUND * INCH * INCH, aliases: ["lb·in²", "lbin2", "lb*in^2", "lb in2", "lb-in2", "lb-in^2"] },
-  oz·in2: { symbol: "oz·in²", kind: "inertia", factor: OUNCE * INCH * INCH, aliases: ["oz·in²", "ozin2", "oz*in^2", "oz in2", "oz-in2", "oz-in^2"] },
-  // stress [Pa]
-  Pa: { symbol: "Pa", kind: "stress", factor: 1 },
-  MPa: { symbol: "MPa", kind: "stress", factor: 1e6, aliases: ["N/mm2", "N/mm²"] },
-  GPa: { symbol: "GPa", kind: "stress", factor: 1e9 },
-  psi: { symbol: "psi", kind: "stress", factor: POUND_FORCE / (INCH * INCH), aliases: ["lbf/in2", "lbf/in²"] },
-  ksi: { symbol: "ksi", kind: "stress", factor: (1000 * POUND_FORCE) / (INCH * INCH) },
-  // density [kg/m³]
-  "kg/m3": { symbol: "kg/m³", kind: "density", factor: 1, aliases: ["kg/m³", "kg/m^3"] },
-  "g/cm3": { symbol: "g/cm³", kind: "density", factor: 1000, aliases: ["g/cm³", "g/cc", "g/cm^3", "g/ml"] },
-  "lb/in3": { symbol: "lb/in³", kind: "density", factor: POUND / INCH ** 3, aliases: ["lb/in³", "lb/in^3"] },
-  // static unbalance (mass × eccentricity) [kg·m]
-  kg·m: { symbol: "kg·m", kind: "unbalance", factor: 1, aliases: ["kgm", "kg*m", "kg m"] },
-  g·mm: { symbol: "g·mm", kind: "unbalance", factor: 1e-6, aliases: ["gmm", "g*mm", "g mm", "g-mm"] },
-  oz·in: { symbol: "oz·in", kind: "unbalance", factor: OUNCE * INCH, aliases: ["ozin", "oz*in", "oz in", "oz-in"] },
-  // electrical
-  V: { symbol: "V", kind: "voltage", factor: 1, aliases: ["volt", "volts"] },
-  A: { symbol: "A", kind: "current", factor: 1, aliases: ["amp", "amps"] },
-  ohm: { symbol: "Ω", kind: "resistance", factor: 1, aliases: ["Ω", "ohms", "Ohm"] },
-  mohm: { symbol: "mΩ", kind: "resistance", factor: 1e-3, aliases: ["mΩ", "milliohm", "milliohms", "mOhm"] },
-  // motor velocity constant Kv [rad/(s·V)]
-  "rad/(s·V)": { symbol: "rad/(s·V)", kind: "motorVelocityConstant", factor: 1, aliases: ["rad/s/V", "rad/(s V)"] },
-  "rpm/V": { symbol: "rpm/V", kind: "motorVelocityConstant", factor: RPM, aliases: ["kv", "Kv", "KV", "rpm/v"] },
-  // dimensionless
-  frac: { symbol: "", kind: "fraction", factor: 1, aliases: ["x"] },
-  pct: { symbol: "%", kind: "fraction", factor: 0.01, aliases: ["%", "percent"] },
-  ppm: { symbol: "ppm", kind: "fraction", factor: 1e-6 },
-  count: { symbol: "", kind: "count", factor: 1 },
-} as const satisfies Record<string, UnitDef>;
+/** The unit `id`: symbol, kind, factor; a CalcInputError naming `param` when no registered unit has that id. */
+export function unitDef(id: UnitId, param = "unit"): UnitDef {
+  return known(UNIT, id, param);
+}
 
-export type UnitId = keyof typeof UNITS;
+/** The registered unit with id `id` (untrusted), or undefined. */
+export function lookupUnit(id: unknown): UnitDef | undefined {
+  return typeof id === "string" && Object.hasOwn(UNIT, id) ? UNIT[id] : undefined;
+}
+
+/** The registered ids and display steps of `kind`; a CalcInputError naming "kind" when it has none. */
+function kindUnits(kind: QuantityKind): NonNullable<(typeof KIND)[QuantityKind]> {
+  if (typeof kind === "string" && Object.hasOwn(KIND, kind)) return KIND[kind]!;
+  throw new CalcInputError({ param: "kind", value: String(kind), expected: "a quantity kind whose units are registered (useUnits)", unit: "" });
+}
 
 /** Unit ids of one kind, in table order. */
 export function unitsOfKind(kind: QuantityKind): UnitId[] {
-  return (Object.keys(UNITS) as UnitId[]).filter((id) => UNITS[id].kind === kind);
+  return [...kindUnits(kind).ids];
 }
 
 /** `table[id]` when the table holds `id` (a unit, a kind); a CalcInputError naming `param` otherwise. */
@@ -172,22 +74,22 @@ function scaled(value: number, factor: number, divide: boolean): number {
 
 /** Converts `value` in unit `from` to SI. */
 export function toSI(value: number, from: UnitId): number {
-  return scaled(value, known(UNITS, from, "from").factor, false);
+  return scaled(value, known(UNIT, from, "from").factor, false);
 }
 
 /** Converts an SI `value` into unit `to`. */
 export function fromSI(value: number, to: UnitId): number {
-  return scaled(value, known(UNITS, to, "to").factor, true);
+  return scaled(value, known(UNIT, to, "to").factor, true);
 }
 
 /** rpm → rad/s (exact: 1 rpm = 2π/60 rad/s). */
 export function rpmToRadPerSecond(rpm: number): number {
-  return scaled(rpm, RPM, false);
+  return scaled(rpm, RAD_PER_S_PER_RPM, false);
 }
 
 /** rad/s → rpm (exact: 1 rad/s = 60/2π rpm). */
 export function radPerSecondToRpm(angularSpeed: number): number {
-  return scaled(angularSpeed, RPM, true);
+  return scaled(angularSpeed, RAD_PER_S_PER_RPM, true);
 }
 
 // ---------------------------------------------------------------------------------------------
@@ -195,48 +97,9 @@ export function radPerSecondToRpm(angularSpeed: number): number {
 
 export type UnitSystem = "metric" | "us";
 
-/**
- * Display units per kind: metric steps, then US steps when they differ. Each step is a unit, or
- * [unit, from] with `from` in SI; `formatQuantity` takes the last step whose `from` the value
- * reaches (the first starts at 0), so 0.45 kg shows as 450 g and 2.3 kg as 2.3 kg.
- */
-type DisplaySteps = readonly (UnitId | readonly [UnitId, number])[];
-const DISPLAY: Record<QuantityKind, readonly [DisplaySteps, DisplaySteps?]> = {
-  length: [
-    ["mm", ["m", 10]],
-    ["in", ["ft", 10 * FOOT]],
-  ],
-  area: [["mm2"], ["in2"]],
-  mass: [
-    ["g", ["kg", 1]],
-    ["oz", ["lb", POUND]],
-  ],
-  acceleration: [["gn"]],
-  angularSpeed: [["rpm"]],
-  angularAcceleration: [["rpm/s"]],
-  angle: [["deg"]],
-  time: [["us", ["ms", 1e-3], ["s", 1]]],
-  frequency: [["Hz", ["kHz", 1e4]]],
-  force: [["N", ["kN", 1e4]], ["lbf"]],
-  speed: [["m/s"], ["ft/s"]],
-  energy: [["J", ["kJ", 1e4]], ["ft·lbf"]],
-  power: [["W", ["kW", 1e4]]],
-  torque: [["N·m"], ["ozf·in", ["lbf·in", POUND_FORCE * INCH]]],
-  inertia: [["kg·m2"], ["lb·in2"]],
-  stress: [["MPa"], ["ksi"]],
-  density: [["g/cm3"], ["lb/in3"]],
-  unbalance: [["g·mm"], ["oz·in"]],
-  voltage: [["V"]],
-  current: [["A"]],
-  resistance: [["mohm", ["ohm", 10]]],
-  motorVelocityConstant: [["rpm/V"]],
-  fraction: [["pct"]],
-  count: [["count"]],
-};
-
 /** The unit a value of `kind` is shown in for `system`, chosen by magnitude. */
 export function displayUnit(kind: QuantityKind, system: UnitSystem, valueSI = 0): UnitId {
-  const [metric, us] = known(DISPLAY, kind, "kind");
+  const [metric, us] = kindUnits(kind).display;
   let chosen = metric[0] as UnitId;
   for (const step of (system === "us" && us) || metric) {
     if (typeof step === "string") chosen = step;
@@ -289,8 +152,9 @@ export function formatQuantity(
 ): FormattedQuantity {
   const { unit = displayUnit(kind, options?.system ?? "metric", valueSI), significant = 3 } = options ?? {};
   // A value beyond the largest double in a small unit shows as "—", as formatNumber shows any non-finite value.
-  const number = formatNumber(valueSI / known<UnitDef>(UNITS, unit, "unit").factor, significant);
-  const symbol = UNITS[unit].symbol;
+  const def = known(UNIT, unit, "unit");
+  const number = formatNumber(valueSI / def.factor, significant);
+  const symbol = def.symbol;
   const joiner = symbol === "" || symbol === "°" ? "" : " ";
   return { text: `${number}${joiner}${symbol}`, number, symbol, unit };
 }
@@ -337,13 +201,13 @@ function exactMultiple(valueSI: number, factor: number): number | null {
 
 /** The kind's SI unit: the one unit of the kind whose factor is 1 (e.g. "m", "rad/s", "frac"). */
 export function siUnit(kind: QuantityKind): UnitId {
-  return unitsOfKind(kind).find((u) => UNITS[u].factor === 1)!;
+  return unitsOfKind(kind).find((u) => UNIT[u]!.factor === 1)!;
 }
 
 /** How a link spells the kind's SI unit. */
 function siUnitText(kind: QuantityKind): string {
   const id = siUnit(kind);
-  const def: UnitDef = UNITS[id];
+  const def = UNIT[id]!;
   return def.symbol === "" ? (def.aliases?.[0] ?? "") : urlSpelling(id);
 }
 
@@ -353,8 +217,9 @@ function siUnitText(kind: QuantityKind): string {
  */
 export function exactQuantity(valueSI: number, unit: UnitId): { number: string; unit: UnitId } {
   if (!Number.isFinite(valueSI)) throw new CalcInputError({ param: "value", value: valueSI, expected: "a finite number", unit: "" });
-  const n = exactMultiple(valueSI, known<UnitDef>(UNITS, unit, "unit").factor);
-  if (n === null) return { number: plainNumber(valueSI), unit: siUnit(UNITS[unit].kind) };
+  const def = known(UNIT, unit, "unit");
+  const n = exactMultiple(valueSI, def.factor);
+  if (n === null) return { number: plainNumber(valueSI), unit: siUnit(def.kind) };
   return { number: plainNumber(Object.is(n, -0) ? 0 : n), unit };
 }
 
@@ -365,8 +230,8 @@ export function exactQuantity(valueSI: number, unit: UnitId): { number: string; 
  */
 export function quantityToText(valueSI: number, unit: UnitId): string {
   const exact = exactQuantity(valueSI, unit);
-  if (exact.unit !== unit) return `${exact.number}${siUnitText(UNITS[unit].kind)}`;
-  return `${exact.number}${UNITS[unit].symbol === "" ? "" : urlSpelling(unit)}`;
+  if (exact.unit !== unit) return `${exact.number}${siUnitText(UNIT[unit]!.kind)}`;
+  return `${exact.number}${UNIT[unit]!.symbol === "" ? "" : urlSpelling(unit)}`;
 }
 
 /**
@@ -390,27 +255,10 @@ export function readExactNumber(text: string, factor: number): number | null {
   return Number.isFinite(n) ? n : null;
 }
 
-/** ASCII spellings for units whose symbol and id both have characters a URL would percent-encode. */
-const URL_SPELLING: Partial<Record<UnitId, string>> = {
-  gn: "g",
-  ft·lbf: "ft-lbf",
-  N·m: "Nm",
-  lbf·in: "lbf-in",
-  ozf·in: "ozf-in",
-  kg·m2: "kgm2",
-  g·cm2: "gcm2",
-  lb·in2: "lb-in2",
-  oz·in2: "oz-in2",
-  kg·m: "kgm",
-  g·mm: "gmm",
-  oz·in: "oz-in",
-  "rad/(s·V)": "rad/s/V",
-};
-
 /** How a unit is written in a URL: its symbol when that is plain ASCII, else an ASCII spelling. */
 function urlSpelling(id: UnitId): string {
-  const symbol = UNITS[id].symbol;
-  return URL_SPELLING[id] ?? (/^[\w/.]*$/.test(symbol) ? symbol : id);
+  const { symbol, url } = UNIT[id]!;
+  return url ?? (/^[\w/.]*$/.test(symbol) ? symbol : id);
 }
 
 /**
@@ -423,7 +271,7 @@ export function linkSpelling(text: string): string {
   const compact = text.replace(/\s+/g, "");
   const match = /^([+\-−]?[\d.,]+(?:[eE][+\-−]?\d+)?)(.+)$/.exec(compact);
   if (!match || /^[\w/.%]*$/.test(match[2]!)) return compact;
-  const id = (Object.keys(UNITS) as UnitId[]).find((u) => UNITS[u].symbol === match[2]);
+  const id = (Object.keys(UNIT) as UnitId[]).find((u) => UNIT[u]!.symbol === match[2]);
   return id ? `${match[1]}${urlSpelling(id)}` : compact;
 }
 
@@ -452,7 +300,7 @@ export function findUnit(text: string, kind: QuantityKind): UnitId | undefined {
   const wanted = normaliseUnitText(String(text));
   const candidates = unitsOfKind(kind);
   const spellings = (id: UnitId): string[] => {
-    const def: UnitDef = UNITS[id];
+    const def = UNIT[id]!;
     return [id, def.symbol, urlSpelling(id), ...(def.aliases ?? [])].filter((s) => s !== "").map(normaliseUnitText);
   };
   for (const id of candidates) if (spellings(id).includes(wanted)) return id;
@@ -481,7 +329,7 @@ export function kindName(kind: QuantityKind): string {
  * an acceleration field: the field's kind decides.
  */
 export function parseQuantity(text: string, kind: QuantityKind, defaultUnit: UnitId): ParseResult {
-  known(UNITS, defaultUnit, "defaultUnit");
+  known(UNIT, defaultUnit, "defaultUnit");
   const trimmed = String(text).trim();
   if (trimmed === "") return { ok: false, reason: "empty", message: "is required" };
   const match = NUMBER_AND_UNIT.exec(trimmed);
@@ -507,7 +355,7 @@ export function parseQuantity(text: string, kind: QuantityKind, defaultUnit: Uni
     unit = findUnit(unitText, kind);
     if (!unit) {
       const known = unitsOfKind(kind)
-        .map((id) => UNITS[id].symbol)
+        .map((id) => UNIT[id]!.symbol)
         .filter((s) => s !== "");
       const shown = unitText.length > 20 ? `${unitText.slice(0, 20)}…` : unitText;
       return {
@@ -519,13 +367,13 @@ export function parseQuantity(text: string, kind: QuantityKind, defaultUnit: Uni
       };
     }
   }
-  const valueSI = number * UNITS[unit].factor;
+  const valueSI = number * UNIT[unit]!.factor;
   if (!Number.isFinite(valueSI)) return { ok: false, reason: "not-a-number", message: "is too large a number" };
   return { ok: true, valueSI, unit, number };
 }
 
 function example(kind: QuantityKind, unit: UnitId): string {
-  const symbol = UNITS[unit].symbol;
+  const symbol = UNIT[unit]!.symbol;
   const sample = kind === "angularSpeed" ? 2400 : kind === "fraction" ? 10 : 32;
   return symbol ? `${sample} ${symbol}` : String(sample);
 }

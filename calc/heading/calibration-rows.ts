@@ -2,8 +2,9 @@
  * Calibration rows as compact, versioned text for a URL: "v1:1200:31.5,1800:70.9" (rpm:g), and
  * reading it back with a problem per row that cannot be read.
  */
+import { RAD_PER_S_PER_RPM, STANDARD_GRAVITY } from "../core/constants.ts";
 import { CalcInputError, requireFinite, requireNonNegative } from "../core/errors.ts";
-import { exactNumberText, readExactNumber, UNITS } from "../core/units.ts";
+import { exactNumberText, readExactNumber } from "../core/units.ts";
 import type { CalibrationRow } from "./calibration.ts";
 import { requireInputObject, requireList } from "../core/spec-check.ts";
 
@@ -36,7 +37,7 @@ export function encodeCalibrationRows(rows: readonly CalibrationRow[]): string {
     requireInputObject(row, `rows[${i}]`);
     requireNonNegative(`rows[${i}].angularSpeed`, row.angularSpeed, "rad/s");
     requireFinite(`rows[${i}].acceleration`, row.acceleration, "m/s²");
-    return `${exactNumberText(row.angularSpeed, UNITS.rpm.factor)}:${exactNumberText(row.acceleration, UNITS.gn.factor)}`;
+    return `${exactNumberText(row.angularSpeed, RAD_PER_S_PER_RPM)}:${exactNumberText(row.acceleration, STANDARD_GRAVITY)}`;
   });
   return `v${CALIBRATION_ROWS_VERSION}:${pieces.join(",")}`;
 }
@@ -115,8 +116,8 @@ export function decodeCalibrationRows(text: string): DecodedCalibrationRows {
       return;
     }
     const [speedText, accText] = parts as [string, string];
-    const angularSpeed = readExactNumber(speedText, UNITS.rpm.factor);
-    const acceleration = readExactNumber(accText, UNITS.gn.factor);
+    const angularSpeed = readExactNumber(speedText, RAD_PER_S_PER_RPM);
+    const acceleration = readExactNumber(accText, STANDARD_GRAVITY);
     if (angularSpeed === null) {
       problems.push({ piece: at, text: clip(piece), reason: `speed "${clip(speedText)}" is not a number` });
       return;

@@ -7,7 +7,7 @@
 import { CalcInputError } from "../core/errors.ts";
 import type { CalibrationRow } from "./calibration.ts";
 import type { CalibrationCsv, CalibrationCsvOptions } from "./csv.ts";
-import { UNITS, type UnitId } from "../core/units.ts";
+import { type UnitId, unitDef } from "../core/units.ts";
 import { requireUnitOfKind } from "../core/unit-tools.ts";
 
 /** The rows as written: text lines and the numbers a reader gets back from them (six significant figures). */
@@ -17,14 +17,14 @@ function written(rows: readonly CalibrationRow[], options: CalibrationCsvOptions
   requireUnitOfKind("speedUnit", speedUnit, "angularSpeed");
   requireUnitOfKind("accelerationUnit", accelerationUnit, "acceleration");
   const round = (value: number, unit: UnitId, param: string): number => {
-    const n = Number((value / UNITS[unit].factor).toPrecision(6));
+    const n = Number((value / unitDef(unit).factor).toPrecision(6));
     if (!Number.isFinite(n)) throw new CalcInputError({ param, value, expected: "a finite number", unit: "" });
     return n;
   };
   const values = rows.map(
     (row, i) => [round(row.angularSpeed, speedUnit, `rows[${i}].angularSpeed`), round(row.acceleration, accelerationUnit, `rows[${i}].acceleration`)] as const,
   );
-  const header = [`speed (${UNITS[speedUnit].symbol})`, `reading (${UNITS[accelerationUnit].symbol})`];
+  const header = [`speed (${unitDef(speedUnit).symbol})`, `reading (${unitDef(accelerationUnit).symbol})`];
   return { speedUnit, accelerationUnit, values, header };
 }
 
@@ -68,8 +68,8 @@ export function readingOfWrittenRows(rows: readonly CalibrationRow[], options: C
   return {
     rows: values.map(([w, a], i) => ({
       line: headerLine + 1 + i,
-      angularSpeed: w * UNITS[speedUnit].factor,
-      acceleration: a * UNITS[accelerationUnit].factor,
+      angularSpeed: w * unitDef(speedUnit).factor,
+      acceleration: a * unitDef(accelerationUnit).factor,
     })),
     problems: [],
     separator: ",",
@@ -81,7 +81,7 @@ export function readingOfWrittenRows(rows: readonly CalibrationRow[], options: C
     accelerationUnit,
     notes: [
       "columns separated by commas",
-      `line ${headerLine} read as a header: speed in column 1 (${UNITS[speedUnit].symbol}), acceleration in column 2 (${UNITS[accelerationUnit].symbol})`,
+      `line ${headerLine} read as a header: speed in column 1 (${unitDef(speedUnit).symbol}), acceleration in column 2 (${unitDef(accelerationUnit).symbol})`,
     ],
   };
 }

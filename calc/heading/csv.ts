@@ -6,7 +6,7 @@
  * never throws on any text.
  */
 import type { CalibrationRow } from "./calibration.ts";
-import { findUnit, parseQuantity, UNITS, type UnitId } from "../core/units.ts";
+import { findUnit, parseQuantity, type UnitId, unitDef } from "../core/units.ts";
 import { requireUnitOfKind } from "../core/unit-tools.ts";
 
 export type CsvSeparator = "," | ";" | "\t" | "whitespace";
@@ -225,11 +225,11 @@ export function parseCalibrationCsv(text: string, options: CalibrationCsvOptions
     if (su) result.speedUnit = su;
     if (au) result.accelerationUnit = au;
     notes.push(
-      `line ${content[0]!.line} read as a header: speed in column ${sc + 1} (${UNITS[result.speedUnit].symbol}${su ? "" : ", no unit named, default"}), ` +
-        `acceleration in column ${ac + 1} (${UNITS[result.accelerationUnit].symbol}${au ? "" : ", no unit named, default"})`,
+      `line ${content[0]!.line} read as a header: speed in column ${sc + 1} (${unitDef(result.speedUnit).symbol}${su ? "" : ", no unit named, default"}), ` +
+        `acceleration in column ${ac + 1} (${unitDef(result.accelerationUnit).symbol}${au ? "" : ", no unit named, default"})`,
     );
   } else {
-    notes.push(`no header: column 1 is speed (${UNITS[defaultSpeedUnit].symbol}), column 2 is acceleration (${UNITS[defaultAccelerationUnit].symbol})`);
+    notes.push(`no header: column 1 is speed (${unitDef(defaultSpeedUnit).symbol}), column 2 is acceleration (${unitDef(defaultAccelerationUnit).symbol})`);
   }
 
   const used = Math.max(result.speedColumn, result.accelerationColumn) + 1;

@@ -7,6 +7,7 @@
  * Same shapes as `METRIC_COARSE_THREADS` and `PROPERTY_CLASSES`, so a calculator can offer both
  * systems from one list (`FASTENER_SIZE_OPTIONS`, `FASTENER_GRADE_OPTIONS`).
  */
+import { INCH, POUND_FORCE } from "../core/constants.ts";
 import { CalcInputError, requirePositive } from "../core/errors.ts";
 import {
   boltShearStrengths,
@@ -19,13 +20,10 @@ import {
 } from "./fasteners.ts";
 import { requireChoice } from "./common.ts";
 import type { SourceKey } from "../sources/index.ts";
-import { UNITS } from "../core/units.ts";
 import { requireFiniteResult, requireInputObject } from "../core/spec-check.ts";
 
-/** 1 in = 0.0254 m exactly (intl-yard-pound-1959, nist-sp811). */
-const INCH = UNITS.in.factor;
 /** 1 ksi = 1000 lbf/in² = 6.894 757 MPa (nist-sp811). */
-const KSI = UNITS.ksi.factor;
+const KSI = (1000 * POUND_FORCE) / (INCH * INCH);
 
 /** Coefficient of the pitch diameter, 3√3/8 = 0.649 519 (asme-b1-1 basic profile; shigley-mechanical-design Table 8-2). */
 const PITCH_DIAMETER_COEFF = (3 * Math.sqrt(3)) / 8;

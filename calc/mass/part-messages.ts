@@ -6,14 +6,14 @@
  */
 import { CalcInputError } from "../core/errors.ts";
 import { describeRange, fieldUnit, type InputSpec } from "../core/inputs.ts";
-import { fromSI, UNITS, type UnitId, type UnitSystem } from "../core/units.ts";
+import { fromSI, type UnitId, type UnitSystem, unitDef } from "../core/units.ts";
 import { PART_INPUTS } from "./part-inputs.ts";
 
 const FIELDS: Record<string, InputSpec> = PART_INPUTS;
 /** Words for the fields that hold no number. */
 const OTHER: Record<string, string> = { name: "Name", "shape.kind": "Shape", "mass.kind": "Mass source", "mass.material": "Material" };
 /** A number in a unit, to 6 significant figures: "-5 mm". */
-const inUnit = (value: unknown, unit: UnitId) => `${Number(fromSI(Number(value), unit).toPrecision(6))} ${UNITS[unit].symbol}`;
+const inUnit = (value: unknown, unit: UnitId) => `${Number(fromSI(Number(value), unit).toPrecision(6))} ${unitDef(unit).symbol}`;
 const RELATION = { greater: "greater than", "at-least": "at least", less: "less than", "at-most": "at most" };
 
 /**

@@ -8,7 +8,7 @@
 import type { Signal, ReadonlySignal } from "./reactive.ts";
 import type { FieldReading, InputSpec } from "../../calc/core/inputs.ts";
 import { fieldUnit } from "../../calc/core/inputs.ts";
-import { findUnit, UNITS, unitsOfKind, type UnitSystem } from "../../calc/core/units.ts";
+import { findUnit, unitsOfKind, type UnitSystem, unitDef } from "../../calc/core/units.ts";
 
 export interface QuantityFieldProps {
   /** Unique id prefix for this calculator instance. */
@@ -25,11 +25,11 @@ export interface QuantityFieldProps {
 export function QuantityField({ idPrefix, name, spec, text, reading, system, extraError }: QuantityFieldProps) {
   const id = `${idPrefix}-${name}`;
   const bare = fieldUnit(spec, system);
-  const units = unitsOfKind(spec.kind).filter((u) => UNITS[u].symbol);
+  const units = unitsOfKind(spec.kind).filter((u) => unitDef(u).symbol);
   // The number and the unit as typed: "45 mm" → "45", "mm" (a bare number is in the field's unit).
   const [, number = "", typed = ""] = /^([\s+\-−\d.,]*(?:[eE][+\-−]?\d+)?)\s*(.*)$/.exec(text.value) ?? [];
   const shown = (typed ? findUnit(typed, spec.kind) : bare) ?? "";
-  const unit = units.length > 1 ? "" : UNITS[bare].symbol;
+  const unit = units.length > 1 ? "" : unitDef(bare).symbol;
   const current = reading.value;
   const error = !current.ok ? current.error.message : (extraError ?? null);
   const describedBy = [spec.help ? `${id}-help` : "", error ? `${id}-error` : ""].filter(Boolean).join(" ") || undefined;
@@ -60,13 +60,13 @@ export function QuantityField({ idPrefix, name, spec, text, reading, system, ext
             aria-label={`${spec.label}: unit`}
             value={shown}
             onChange={(event) => {
-              text.value = `${number.trim()} ${UNITS[(event.currentTarget as HTMLSelectElement).value as typeof bare].symbol}`.trim();
+              text.value = `${number.trim()} ${unitDef((event.currentTarget as HTMLSelectElement).value as typeof bare).symbol}`.trim();
             }}
           >
             {shown === "" ? <option value="">?</option> : null}
             {units.map((u) => (
               <option key={u} value={u}>
-                {UNITS[u].symbol}
+                {unitDef(u).symbol}
               </option>
             ))}
           </select>

@@ -6,7 +6,7 @@
 import { batch, computed, signal, type ReadonlySignal, type Signal } from "./reactive.ts";
 import { CalcInputError } from "../../calc/core/errors.ts";
 import { defaultText, fieldUnit, readField, type FieldReading, type InputSpec, type InputSpecs } from "../../calc/core/inputs.ts";
-import { displayUnit, fromSI, parseQuantity, type QuantityKind, UNITS, type UnitSystem } from "../../calc/core/units.ts";
+import { displayUnit, fromSI, parseQuantity, type QuantityKind, type UnitSystem, unitDef } from "../../calc/core/units.ts";
 
 export interface FieldsModel<S extends InputSpecs> {
   specs: S;
@@ -69,7 +69,7 @@ export function createFieldsModel<S extends InputSpecs>(specs: S, initialSystem:
         }
         const unit = fieldUnit(spec, next);
         if (reading.unit === unit) continue;
-        texts[name].value = textIn(reading.value, UNITS[unit].symbol, UNITS[unit].factor);
+        texts[name].value = textIn(reading.value, unitDef(unit).symbol, unitDef(unit).factor);
       }
       system.value = next;
     });
@@ -81,7 +81,7 @@ export function createFieldsModel<S extends InputSpecs>(specs: S, initialSystem:
       for (const [name, text] of Object.entries(linked) as [keyof S & string, string][]) {
         // Show "3000rpm" from a link as "3000 rpm"; leave text that does not read as it came.
         const parsed = parseQuantity(text, specs[name]!.kind, fieldUnit(specs[name]!, system.value));
-        const symbol = parsed.ok ? UNITS[parsed.unit].symbol : "";
+        const symbol = parsed.ok ? unitDef(parsed.unit).symbol : "";
         texts[name].value = parsed.ok && /\d\s*\D/.test(text) ? `${parsed.number}${symbol ? ` ${symbol}` : ""}` : text;
       }
     });
@@ -114,7 +114,7 @@ export function fieldMessage(
       const owner = fields[bound.other ?? error.param];
       const spec = typeof owner === "object" && owner.kind ? (owner as InputSpec) : null;
       const unit = spec ? fieldUnit(spec, system) : displayUnit(bound.kind as QuantityKind, system, bound.limit);
-      const limit = `${Number(fromSI(bound.limit, unit).toPrecision(6))}${UNITS[unit].symbol ? ` ${UNITS[unit].symbol}` : ""}`;
+      const limit = `${Number(fromSI(bound.limit, unit).toPrecision(6))}${unitDef(unit).symbol ? ` ${unitDef(unit).symbol}` : ""}`;
       const other = bound.other ? (typeof owner === "string" ? owner : owner?.label) : undefined;
       // "Top speed" reads "the top speed" inside a sentence; "Kv" stays as it is.
       const inSentence = other && /^[A-Z][a-z]/.test(other) ? `the ${other[0]!.toLowerCase()}${other.slice(1)}` : other;

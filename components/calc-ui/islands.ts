@@ -6,6 +6,8 @@
  * (scripts/site/island-entries.mjs).
  */
 import type { ComponentType } from "preact";
+// The development server registers every unit table; a built page, the kinds its code names.
+import "../../calc/core/all-units.ts";
 import { hydrateIslands } from "./hydrate.ts";
 
 const widgets = import.meta.glob<{ default: ComponentType<object> }>("../calculators/*.tsx");

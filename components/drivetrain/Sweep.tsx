@@ -5,7 +5,7 @@
 import { QuantityField } from "../calc-ui/QuantityField.tsx";
 import { Chart } from "../calc-ui/Chart.tsx";
 import { fieldUnit, type InputSpec } from "../../calc/core/inputs.ts";
-import { formatNumber, fromSI, radPerSecondToRpm, UNITS, type UnitSystem } from "../../calc/core/units.ts";
+import { formatNumber, fromSI, radPerSecondToRpm, type UnitSystem, unitDef } from "../../calc/core/units.ts";
 import { summariseSweep } from "../../calc/drivetrain/compare.ts";
 import { fmt, inSentence, rpm } from "./format.ts";
 import { applies, POINTS_SPEC, SPECS, SWEEPABLE, sweepSpec, type Name, type SpinUpModel, type SweepState } from "./model.ts";
@@ -30,7 +30,7 @@ function status(state: SweepState): string {
 function SweepResults({ state, target, system }: { state: Done; target: number; system: UnitSystem }) {
   const spec: InputSpec = SPECS[state.parameter];
   const unit = fieldUnit(spec, system);
-  const symbol = UNITS[unit].symbol;
+  const symbol = unitDef(unit).symbol;
   const x = (v: number) => fromSI(v, unit);
   const show = (v: number) => `${spec.integer ? String(v) : formatNumber(x(v), 4)}${symbol ? ` ${symbol}` : ""}`;
   const best = state.points[state.optimumIndex]!;

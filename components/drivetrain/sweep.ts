@@ -8,7 +8,7 @@ import { form as spinUp } from "../../calc/calculators/spin-up.ts";
 import { type DrivetrainSweep, markSweepOptimum, type SweepPoint, sweepPoint, sweepValues } from "../../calc/drivetrain/compare.ts";
 import type { DriveType, DrivetrainInput, DrivetrainParameter } from "../../calc/drivetrain/inputs.ts";
 import { fieldUnit, type InputSpec, readField } from "../../calc/core/inputs.ts";
-import { fromSI, parseQuantity, UNITS, type UnitSystem } from "../../calc/core/units.ts";
+import { fromSI, parseQuantity, type UnitSystem, unitDef } from "../../calc/core/units.ts";
 import { type FieldsModel, fieldMessage } from "../calc-ui/fields.ts";
 import { batch, computed, effect, type ReadonlySignal, type Signal, signal } from "../calc-ui/reactive.ts";
 
@@ -42,7 +42,7 @@ export function sweepSpec(name: Name, end: "from" | "to"): InputSpec {
 export function textFor(spec: InputSpec, valueSI: number, system: UnitSystem, digits = 6): string {
   const unit = fieldUnit(spec, system);
   const n = Number(fromSI(valueSI, unit).toPrecision(digits));
-  const symbol = UNITS[unit].symbol;
+  const symbol = unitDef(unit).symbol;
   return symbol ? `${n} ${symbol}` : String(n);
 }
 
@@ -179,7 +179,7 @@ export function createSweep(design: { fields: FieldsModel<typeof SPECS>; values:
   /** Shows "3000rpm" from a link as "3000 rpm"; text that does not read is left as it came. */
   function tidy(spec: InputSpec, text: string): string {
     const parsed = parseQuantity(text, spec.kind, fieldUnit(spec, fields.system.value));
-    const symbol = parsed.ok ? UNITS[parsed.unit].symbol : "";
+    const symbol = parsed.ok ? unitDef(parsed.unit).symbol : "";
     return parsed.ok && /\d\s*\D/.test(text) ? `${parsed.number}${symbol ? ` ${symbol}` : ""}` : text;
   }
 

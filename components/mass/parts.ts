@@ -8,7 +8,7 @@ import { exactFieldText, fieldUnit, type InputSpec } from "../../calc/core/input
 import { PART_INPUTS } from "../../calc/mass/part-inputs.ts";
 import type { MaterialId } from "../../calc/materials/densities.ts";
 import type { LayoutPart, PartShape, PartShapeKind } from "../../calc/mass/parts.ts";
-import { fromSI, UNITS, type UnitSystem } from "../../calc/core/units.ts";
+import { fromSI, type UnitSystem, unitDef } from "../../calc/core/units.ts";
 import { createFieldsModel, type FieldsModel } from "../calc-ui/fields.ts";
 
 export { PART_INPUTS };
@@ -64,7 +64,7 @@ let nextKey = 1;
 function roundedText(spec: InputSpec, valueSI: number, system: UnitSystem): string {
   const unit = fieldUnit(spec, system);
   const n = Number(fromSI(valueSI, unit).toPrecision(6));
-  const symbol = UNITS[unit].symbol;
+  const symbol = unitDef(unit).symbol;
   return `${Math.abs(n) < 1e-9 ? 0 : n}${symbol === "°" ? "" : " "}${symbol}`;
 }
 

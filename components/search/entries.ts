@@ -7,7 +7,7 @@
 import type { AnyCalculator } from "../../calc/core/calculator.ts";
 import { initialValues } from "../../calc/core/calculator.ts";
 import { fieldUnit } from "../../calc/core/inputs.ts";
-import { UNITS } from "../../calc/core/units.ts";
+import { unitDef } from "../../calc/core/units.ts";
 
 export interface SearchEntry {
   /** "input" (a number field), "choice" (a menu) or "output" (a result the calculator shows). */
@@ -35,7 +35,7 @@ export interface SearchEntry {
 /** The units a number field shows, metric and US, without repeats. */
 function unitsOf(calc: AnyCalculator, name: string): string {
   const spec = calc.inputs[name]!;
-  const symbols = [fieldUnit(spec, "metric"), fieldUnit(spec, "us")].map((u) => UNITS[u].symbol).filter(Boolean);
+  const symbols = [fieldUnit(spec, "metric"), fieldUnit(spec, "us")].map((u) => unitDef(u).symbol).filter(Boolean);
   return [...new Set(symbols)].join(", ");
 }
 

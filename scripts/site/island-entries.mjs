@@ -7,12 +7,16 @@
 // by file name at run time.
 import { readdirSync, readFileSync, writeFileSync } from "node:fs";
 import { join } from "node:path";
-import { fileURLToPath } from "node:url";
+import { fileURLToPath, pathToFileURL } from "node:url";
+import { kindsNamed, sourceGraph } from "./unit-kinds.mjs";
 
 const PREFIX = "whirlbook-island:";
+const UNITS_PREFIX = "whirlbook-units:";
 const widgetsDir = fileURLToPath(new URL("../../components/calculators/", import.meta.url));
 const hydrateModule = fileURLToPath(new URL("../../components/calc-ui/hydrate.ts", import.meta.url));
 const devLoader = fileURLToPath(new URL("../../components/calc-ui/islands.ts", import.meta.url));
+const unitsModule = fileURLToPath(new URL("../../calc/core/units.ts", import.meta.url));
+const unitTableModule = new URL("../../calc/core/unit-table.ts", import.meta.url);
 
 /** The widget names: the file names in components/calculators/. */
 export const widgetNames = () =>
@@ -40,11 +44,20 @@ export function islandEntries() {
     buildStart() {
       for (const name of widgetNames()) this.emitFile({ type: "chunk", id: PREFIX + name, name: `island-${name}` });
     },
-    resolveId: (id) => (id.startsWith(PREFIX) ? `\0${id}` : null),
-    load(id) {
+    resolveId: (id) => (id.startsWith(PREFIX) || id.startsWith(UNITS_PREFIX) ? `\0${id}` : null),
+    async load(id) {
+      if (id.startsWith(`\0${UNITS_PREFIX}`)) {
+        // The unit tables of the kinds the widget's code names, registered before the widget's
+        // modules run (this module is the entry's first import).
+        const { UNITS, unitTables } = await import(pathToFileURL(fileURLToPath(unitTableModule)).href);
+        const widget = join(widgetsDir, `${id.slice(UNITS_PREFIX.length + 1)}.tsx`);
+        const tables = unitTables(kindsNamed(sourceGraph(widget), UNITS));
+        return `import { useUnits } from ${JSON.stringify(unitsModule)};\nuseUnits(${JSON.stringify(tables)});`;
+      }
       if (!id.startsWith(`\0${PREFIX}`)) return null;
       const name = id.slice(PREFIX.length + 1);
       return [
+        `import ${JSON.stringify(UNITS_PREFIX + name)};`,
         `import widget from ${JSON.stringify(join(widgetsDir, `${name}.tsx`))};`,
         `import { hydrateIslands } from ${JSON.stringify(hydrateModule)};`,
         `hydrateIslands(${JSON.stringify(name)}, widget);`,

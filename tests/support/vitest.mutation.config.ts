@@ -14,6 +14,7 @@ import { defineConfig } from "vitest/config";
 export default defineConfig({
   oxc: { jsx: { runtime: "automatic", importSource: "preact" } },
   test: {
+    setupFiles: ["tests/support/all-units.ts"],
     root: new URL("../..", import.meta.url).pathname,
     include: process.env.WHIRLBOOK_MUTATION_TESTS ? JSON.parse(process.env.WHIRLBOOK_MUTATION_TESTS) : ["tests/calc/**/*.test.ts"],
     testTimeout: 120_000,

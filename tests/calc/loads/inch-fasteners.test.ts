@@ -1,3 +1,4 @@
+import { UNITS } from "../../../calc/core/unit-table.ts";
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
 import { CalcInputError } from "../../../calc/core/errors.ts";
@@ -22,7 +23,7 @@ import {
   type InchThreadSize,
 } from "../../../calc/loads/inch-fasteners.ts";
 import { isSourceKey } from "../../../calc/sources/index.ts";
-import { UNITS } from "../../../calc/core/units.ts";
+import {} from "../../../calc/core/units.ts";
 
 const INCH = 0.0254;
 const SQ_IN = INCH * INCH;

@@ -1,3 +1,4 @@
+import { UNITS } from "../../../calc/core/unit-table.ts";
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
 import { CalcInputError } from "../../../calc/core/errors.ts";
@@ -31,7 +32,7 @@ import { internalThreadShearArea, materialShearStrength, tappedThreadStrength } 
 import { preloadFromTorque, recommendedPreload, tighteningTorque } from "../../../calc/loads/preload.ts";
 import { partLoad } from "../../../calc/rotation/rotation.ts";
 import { isSourceKey } from "../../../calc/sources/index.ts";
-import { rpmToRadPerSecond, UNITS } from "../../../calc/core/units.ts";
+import { rpmToRadPerSecond } from "../../../calc/core/units.ts";
 import { expectParamError, invalidInputArb } from "../../support/arbitraries.ts";
 
 const MPa = 1e6;
