@@ -17,12 +17,14 @@ export default defineConfig({
           setupFiles: ["tests/support/all-units.ts"],
         },
       },
-      { extends: true, test: { name: "build", include: ["tests/build/**/*.test.ts"] } },
+      { extends: true, test: { name: "build", include: ["tests/build/**/*.test.ts"], setupFiles: ["tests/support/all-units.ts"] } },
       {
         extends: true,
         test: {
           name: "browser",
           include: ["tests/browser/**/*.test.ts"],
+          // Node's side of the browser tests (expected values from calc/) reads every kind.
+          setupFiles: ["tests/support/all-units.ts"],
           testTimeout: 60_000,
           hookTimeout: 60_000,
           fileParallelism: false,

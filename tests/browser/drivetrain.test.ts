@@ -194,7 +194,7 @@ describe("spin-up timing in chromium (printed for the record; never asserted)", 
     const bundle = await build({
       stdin: {
         contents:
-          'export { simulateSpinUp } from "./calc/drivetrain/simulate.ts"; export { sweepDrivetrain } from "./calc/drivetrain/compare.ts"; export { DEMO_WEAPON, DEMO_SPINNER } from "./calc/drivetrain/demo.ts";',
+          'import "./calc/core/all-units.ts"; export { simulateSpinUp } from "./calc/drivetrain/simulate.ts"; export { sweepDrivetrain } from "./calc/drivetrain/compare.ts"; export { DEMO_WEAPON, DEMO_SPINNER } from "./calc/drivetrain/demo.ts";',
         resolveDir: fileURLToPath(new URL("../../", import.meta.url)),
         loader: "ts",
       },
