@@ -1,6 +1,7 @@
 /**
  * The HTML the search index reads (scripts/site/offline-and-search.mjs): ids only on headings, so
- * pagefind stores headings alone as anchors, and formulas as text; everything else as served.
+ * pagefind stores headings alone as anchors, table headers kept apart, and formulas as text;
+ * everything else as served.
  */
 import { describe, expect, it } from "vitest";
 import { htmlForSearch } from "../../scripts/site/offline-and-search.mjs";
@@ -16,6 +17,12 @@ describe("a page as the search index reads it", () => {
       '<main><ol><li class="entry">ISO 281.</li></ol></main>',
     );
     expect(htmlForSearch('<section class="calc" id="rim-calculator" aria-label="Rim">x</section>')).toBe('<section class="calc" aria-label="Rim">x</section>');
+  });
+
+  it("ends a table's caption and each header cell with a space, so their words stay apart", () => {
+    expect(htmlForSearch("<table><caption>Classes</caption><tr><th>Class</th><th>R<sub>m</sub></th></tr></table>")).toBe(
+      "<table><caption>Classes </caption><tr><th>Class </th><th>R<sub>m</sub> </th></tr></table>",
+    );
   });
 
   it("tells a heading from a header, and an id from a data-id", () => {
