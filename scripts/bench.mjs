@@ -45,6 +45,23 @@ console.log(
   `\noffline cache (first visit): ${precache.files} files, ${kb(precache.raw)} raw, ${kb(precache.gzip)} gzip, ${kb(precache.brotli)} brotli` +
     ` (${left.size} built files left out: nothing uses them)`,
 );
+const parts = Map.groupBy(precachedFiles(dist, "/"), (file) =>
+  file.startsWith("pagefind/") || file === "search-fields.json"
+    ? "search (pagefind, fields)"
+    : /\.html$/.test(file)
+      ? "pages (html)"
+      : /\.m?js$/.test(file)
+        ? "scripts (js)"
+        : /\.css$/.test(file)
+          ? "stylesheets (css)"
+          : /\.woff2$/.test(file)
+            ? "fonts (KaTeX)"
+            : "other",
+);
+for (const [part, files] of parts) {
+  const size = transferSize(dist, files);
+  console.log(`  ${part.padEnd(28)}${String(size.files).padStart(4)} files${kb(size.gzip).padStart(10)} gzip${kb(size.brotli).padStart(10)} brotli`);
+}
 
 /** Median time of `fn` over `runs` runs, in microseconds. */
 function median(fn, runs) {

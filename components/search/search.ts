@@ -16,6 +16,7 @@ interface PagefindResult {
   sub_results?: { url: string; title: string; excerpt: string }[];
 }
 interface Pagefind {
+  options(options: { noWorker?: boolean }): Promise<void>;
   search(term: string): Promise<{ results: { data(): Promise<PagefindResult> }[] }>;
 }
 
@@ -30,7 +31,11 @@ function loadIndex(): Promise<[SearchEntry[], Pagefind]> {
       if (!r.ok) throw new Error(`search-fields.json: HTTP ${r.status}`);
       return r.json() as Promise<SearchEntry[]>;
     }),
-    import(/* @vite-ignore */ `${base}pagefind/pagefind.js`) as Promise<Pagefind>,
+    (import(/* @vite-ignore */ `${base}pagefind/pagefind.js`) as Promise<Pagefind>).then(async (pagefind) => {
+      // On the page, not in a web worker: the build ships no worker script (offline-and-search.mjs).
+      await pagefind.options({ noWorker: true });
+      return pagefind;
+    }),
   ]);
   loading.catch(() => (loading = null));
   return loading;

@@ -36,11 +36,13 @@ export function asSentence(text: string): string {
   return /[.?!]$/.test(text.trimEnd()) ? text.trimEnd() : `${text.trimEnd()}.`;
 }
 
-/** An entry's three parts as the list shows them: "Author.", "Title." and "Publication, locator.". */
-export function sourceSentences(source: Source): { author: string; title: string; rest: string } {
-  return {
-    author: asSentence(source.author),
-    title: asSentence(source.title),
-    rest: asSentence(source.locator ? `${source.publication}, ${source.locator}` : source.publication),
-  };
+/**
+ * An entry's three parts as the list shows them: "Author.", "Title." and "Publication, locator.";
+ * the last also split where the locator starts (`rest` is `publication` + `locator`), so the page can
+ * keep the locator out of the search index.
+ */
+export function sourceSentences(source: Source): { author: string; title: string; rest: string; publication: string; locator: string } {
+  const publication = source.locator ? `${source.publication}, ` : asSentence(source.publication);
+  const locator = source.locator ? asSentence(source.locator) : "";
+  return { author: asSentence(source.author), title: asSentence(source.title), rest: publication + locator, publication, locator };
 }

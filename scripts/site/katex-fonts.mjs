@@ -2,11 +2,14 @@
 // stylesheets: every piece of text inside rendered math gets the font family, weight and style the
 // stylesheet's rules give it (as a browser would cascade them), and that is matched to the
 // @font-face the browser would download. KaTeX's @font-face rules have no unicode-range, so a face
-// is downloaded as soon as any text is set in it. Used to precache only the fonts in use and to
-// preload the faces every page with math needs (see `katexFontPreload`).
-import { readdirSync, readFileSync, writeFileSync } from "node:fs";
+// is downloaded as soon as any text is set in it. Used to cut each face in use down to the characters
+// the math sets in it, to precache only the fonts in use and to preload the faces every page with
+// math needs (see `katexFontPreload`).
+import { createHash } from "node:crypto";
+import { readdirSync, readFileSync, rmSync, writeFileSync } from "node:fs";
 import { join, relative, sep } from "node:path";
 import { fileURLToPath } from "node:url";
+import subsetFont from "subset-font";
 
 /** Elements that never have a closing tag. */
 const VOID = new Set(["area", "base", "br", "col", "embed", "hr", "img", "input", "link", "meta", "source", "track", "wbr"]);
@@ -198,14 +201,24 @@ function pickFace(faces, family, weight, style) {
   return pool.reduce((best, f) => (Math.abs(f.weight - weight) < Math.abs(best.weight - weight) ? f : best)).url;
 }
 
+const ENTITIES = /** @type {Record<string, string>} */ ({ amp: "&", lt: "<", gt: ">", quot: '"', apos: "'", nbsp: "\u00a0" });
+/** Text of an HTML text node, its character references decoded. @param {string} text */
+const decodeText = (text) =>
+  text.replace(/&(#x[0-9a-f]+|#\d+|[a-z]+);/gi, (all, ref) =>
+    ref[0] === "#"
+      ? String.fromCodePoint(Number.parseInt(ref.slice(ref[1] === "x" || ref[1] === "X" ? 2 : 1), ref[1] === "x" || ref[1] === "X" ? 16 : 10))
+      : (ENTITIES[ref] ?? all),
+  );
+
 /**
  * Font files used by the text inside rendered math (`.katex`) of one HTML page, with how many text
  * runs use each.
  * @param {string} html
  * @param {ReturnType<typeof fontRules>} fonts
+ * @param {Map<string, Set<string>>} [chars] if given, receives every character set in each font file
  * @returns {Map<string, number>}
  */
-export function katexFacesUsed(html, fonts) {
+export function katexFacesUsed(html, fonts, chars) {
   /** @type {Map<string, number>} */
   const used = new Map();
   /** @type {{ tag: string, classes: Set<string>, font: { family: string, weight: number, style: string } | null, math: boolean }[]} */
@@ -219,6 +232,11 @@ export function katexFacesUsed(html, fonts) {
       if (top.math && top.font && /[^ \t\r\n\f]/.test(text)) {
         const url = pickFace(fonts.faces, top.font.family, top.font.weight, top.font.style);
         if (url) used.set(url, (used.get(url) ?? 0) + 1);
+        if (url && chars) {
+          const set = chars.get(url) ?? new Set();
+          for (const c of decodeText(text)) set.add(c);
+          chars.set(url, set);
+        }
       }
     } else if (rawTag) {
       const tag = rawTag.toLowerCase();
@@ -259,8 +277,8 @@ function walk(dir) {
 
 /**
  * For every HTML page of a build: the KaTeX font files its math uses (URLs as the stylesheets write
- * them) and how many text runs use each; `used` is their union over the site and `declared` every
- * font the stylesheets declare.
+ * them) and how many text runs use each; `used` is their union over the site, `chars` the characters
+ * set in each of them over the site, and `declared` every font the stylesheets declare.
  * @param {string} root the built site's folder
  * @param {string} base the base path the site was built with ("/" or "/sub/")
  */
@@ -271,6 +289,8 @@ export function katexFontUsage(root, base = "/") {
   /** @type {Map<string, Map<string, number>>} */
   const pages = new Map();
   const declared = new Set();
+  /** @type {Map<string, Set<string>>} */
+  const chars = new Map();
   for (const file of walk(root).filter((f) => f.endsWith(".html"))) {
     const html = readFileSync(file, "utf8");
     const sheets = [...html.matchAll(/<link\b[^>]*\brel="stylesheet"[^>]*\bhref="([^"]+)"/g)].map((m) => m[1]);
@@ -278,10 +298,71 @@ export function katexFontUsage(root, base = "/") {
     if (!byStylesheets.has(key)) byStylesheets.set(key, fontRules(sheets.map((href) => readFileSync(fileFor(href), "utf8")).join("\n")));
     const fonts = byStylesheets.get(key);
     for (const face of fonts.faces) if (face.url && /KaTeX_/.test(face.url)) declared.add(face.url);
-    pages.set(relative(root, file).split(sep).join("/"), html.includes('class="katex"') ? katexFacesUsed(html, fonts) : new Map());
+    pages.set(relative(root, file).split(sep).join("/"), html.includes('class="katex"') ? katexFacesUsed(html, fonts, chars) : new Map());
   }
   const used = new Set([...pages.values()].flatMap((faces) => [...faces.keys()]));
-  return { pages, used, declared };
+  return { pages, used, chars, declared };
+}
+
+/**
+ * Kept in every cut face beside the characters the math sets: spaces, the digits and parentheses
+ * (KaTeX's stylesheet writes equation numbers as generated text, which no page's markup shows).
+ */
+export const ALWAYS_KEPT = " \u00a00123456789()";
+
+/** A content hash for a file name, as the bundler writes them (8 characters, URL-safe). @param {string | Uint8Array} bytes */
+const contentHash = (bytes) => createHash("sha256").update(bytes).digest("base64url").slice(0, 8);
+
+/**
+ * Cuts every KaTeX face the math uses down to the characters it sets in that face (and
+ * ALWAYS_KEPT), in place of the full face: a face holds a few hundred glyphs and the handbook's math
+ * uses a few dozen of them. Each cut face gets a file name after its new content, and so does each
+ * stylesheet that names it (the pages are rewritten to the stylesheet's new name), so a browser that
+ * keeps hashed files for a year never pairs a stylesheet with a face of another build. Faces no
+ * formula uses are left as they are (and out of the offline cache, see precache.mjs).
+ * @param {string} root the built site's folder
+ * @param {string} base the base path the site was built with
+ * @returns {Promise<{ url: string, before: number, after: number }[]>} the faces cut, with their sizes [B]
+ */
+export async function subsetKatexFonts(root, base = "/") {
+  const fileFor = (/** @type {string} */ url) => join(root, url.startsWith(base) ? url.slice(base.length) : url.replace(/^\//, ""));
+  const { chars } = katexFontUsage(root, base);
+  /** @type {Map<string, string>} */
+  const renamed = new Map();
+  const report = [];
+  for (const [url, set] of [...chars].sort(([a], [b]) => a.localeCompare(b))) {
+    const full = readFileSync(fileFor(url));
+    const cut = await subsetFont(full, [...set, ...ALWAYS_KEPT].join(""), { targetFormat: "woff2" });
+    const to = url.replace(/(\.[\w-]+)?\.woff2$/, `.${contentHash(cut)}.woff2`);
+    writeFileSync(fileFor(to), cut);
+    if (to !== url) rmSync(fileFor(url));
+    renamed.set(url, to);
+    report.push({ url: to, before: full.length, after: cut.length });
+  }
+  const replaceAll = (/** @type {string} */ text, /** @type {Map<string, string>} */ names) => {
+    let out = text;
+    for (const [from, to] of names) out = out.split(from).join(to);
+    return out;
+  };
+  /** @type {Map<string, string>} */
+  const sheets = new Map();
+  const files = walk(root);
+  for (const file of files.filter((f) => f.endsWith(".css"))) {
+    const css = readFileSync(file, "utf8");
+    const next = replaceAll(css, renamed);
+    if (next === css) continue;
+    const to = file.replace(/(\.[\w-]+)?\.css$/, `.${contentHash(next)}.css`);
+    writeFileSync(to, next);
+    if (to !== file) rmSync(file);
+    const url = (/** @type {string} */ f) => base + relative(root, f).split(sep).join("/");
+    sheets.set(url(file), url(to));
+  }
+  for (const file of files.filter((f) => /\.(html|m?js|json)$/.test(f))) {
+    const text = readFileSync(file, "utf8");
+    const next = replaceAll(text, sheets);
+    if (next !== text) writeFileSync(file, next);
+  }
+  return report;
 }
 
 /**
@@ -300,7 +381,8 @@ export function commonFaces(pages, limit = 2) {
 }
 
 /**
- * Astro integration: on every page with math, preloads the KaTeX faces that every such page uses
+ * Astro integration: cuts the KaTeX faces in use to the characters the math sets in them
+ * (`subsetKatexFonts`), then on every page with math preloads the faces that every such page uses
  * (found by `katexFontUsage`), so the formulas' fonts download with the stylesheet instead of after it.
  */
 export function katexFontPreload() {
@@ -311,8 +393,12 @@ export function katexFontPreload() {
       "astro:config:done": ({ config }) => {
         base = config.base.endsWith("/") ? config.base : `${config.base}/`;
       },
-      "astro:build:done": ({ dir, logger }) => {
+      "astro:build:done": async ({ dir, logger }) => {
         const root = fileURLToPath(dir);
+        const cut = await subsetKatexFonts(root, base);
+        const kb = (/** @type {number} */ bytes) => (bytes / 1024).toFixed(1);
+        const sum = (/** @type {"before" | "after"} */ key) => cut.reduce((total, face) => total + face[key], 0);
+        logger.info(`KaTeX faces in use cut to the characters the math sets: ${kb(sum("before"))} → ${kb(sum("after"))} KB`);
         const { pages, used, declared } = katexFontUsage(root, base);
         const preload = commonFaces(pages);
         for (const [page, faces] of pages) {

@@ -3,19 +3,41 @@
 // after the first visit.
 import { createHash } from "node:crypto";
 import { readdirSync, readFileSync, rmSync, writeFileSync } from "node:fs";
+import { gunzipSync } from "node:zlib";
 import { join, relative, sep } from "node:path";
 import { fileURLToPath } from "node:url";
+import zopfli from "@gfx/zopfli";
+import { transformSync } from "esbuild";
 import * as pagefind from "pagefind";
 import { precacheSelection, transferSize } from "./precache.mjs";
 import { settleSearchFields } from "./search-fields.mjs";
 import { withFormulasAsText } from "./katex-text.mjs";
 
-/** @param {string} dir @returns {string[]} every .html file under `dir` */
-function htmlFiles(dir) {
+/** @param {string} dir @param {RegExp} [name] @returns {string[]} every file under `dir` whose name matches (.html files by default) */
+function filesUnder(dir, name = /\.html$/) {
   return readdirSync(dir, { withFileTypes: true }).flatMap((entry) =>
-    entry.isDirectory() ? htmlFiles(join(dir, entry.name)) : entry.name.endsWith(".html") ? [join(dir, entry.name)] : [],
+    entry.isDirectory() ? filesUnder(join(dir, entry.name), name) : name.test(entry.name) ? [join(dir, entry.name)] : [],
   );
 }
+
+/**
+ * A page's HTML as the search index reads it: formulas as text (katex-text.mjs), an `id` kept on
+ * headings only, and a space after a table's caption and each header cell. Pagefind stores every
+ * element with an id as an anchor, with its whole text, in the page's fragment, but builds its
+ * section results (sub_results, which the search page shows) from headings alone: the ids of the
+ * bibliography's entries, the calculator's section and the like only repeated their text in the
+ * download. It also runs a caption and header cells together ("calculatorClassRm nominal"), which
+ * makes words no one searches for. The served page is unchanged.
+ * @param {string} html
+ */
+export function htmlForSearch(html) {
+  return withFormulasAsText(html)
+    .replace(/<(?!h[1-6]\b)([a-zA-Z][\w-]*)(\s[^>]*?)?\sid="[^"]*"/g, "<$1$2")
+    .replace(/<\/(th|caption)>/g, " </$1>");
+}
+
+/** Built pages left out of the search index. */
+export const NOT_INDEXED = new Set(["404.html", "search/index.html"]);
 
 /** How long a page request may take before the saved copy is shown instead [ms]. */
 export const NETWORK_TIMEOUT_MS = 3000;
@@ -129,21 +151,34 @@ export function offlineAndSearch() {
         });
         if (!index) throw new Error(`search index failed: ${errors.join("; ")}`);
         // Each page is indexed with its formulas as text (katex-text.mjs): the served page is unchanged.
-        for (const file of htmlFiles(root)) {
+        for (const file of filesUnder(root)) {
           const path = relative(root, file).split(sep).join("/");
+          // "Page not found" and the search page itself are never a useful result.
+          if (NOT_INDEXED.has(path)) continue;
           const added = await index.addHTMLFile({
             url: `/${path.replace(/(^|\/)index\.html$/, "$1")}`,
-            content: withFormulasAsText(readFileSync(file, "utf8")),
+            content: htmlForSearch(readFileSync(file, "utf8")),
           });
           if (added.errors.length) throw new Error(`search index failed on ${path}: ${added.errors.join("; ")}`);
         }
         const written = await index.writeFiles({ outputPath: join(root, "pagefind") });
         if (written.errors.length) throw new Error(`search index failed: ${written.errors.join("; ")}`);
         await pagefind.close();
-        // The handbook renders its own results; pagefind's ready-made interfaces are not shipped.
+        // The handbook renders its own results; pagefind's ready-made interfaces are not shipped. Its
+        // web worker is not either: the search page runs the search on the page (components/search/
+        // search.ts sets noWorker; a few hundred words of index take milliseconds), so the offline
+        // copy does not carry the same search code twice.
         for (const file of readdirSync(join(root, "pagefind"))) {
-          if (/^pagefind-(ui|modular-ui|component-ui|highlight)\./.test(file)) rmSync(join(root, "pagefind", file));
+          if (/^pagefind-(ui|modular-ui|component-ui|highlight|worker)\./.test(file)) rmSync(join(root, "pagefind", file));
         }
+        // The index, its fragments and its WebAssembly are gzip files that pagefind's script unpacks
+        // itself, served as they are: packed again by zopfli (same format, about 4 % smaller).
+        for (const file of filesUnder(join(root, "pagefind"), /\.(pagefind|pf_index|pf_fragment|pf_meta)$/)) {
+          writeFileSync(file, await zopfli.gzipAsync(gunzipSync(readFileSync(file)), { numiterations: 15 }));
+        }
+        // pagefind.js comes with its whitespace removed but its names whole: shorten them too.
+        const script = join(root, "pagefind", "pagefind.js");
+        writeFileSync(script, transformSync(readFileSync(script, "utf8"), { minify: true, format: "esm", target: "es2022" }).code);
 
         const { files, excluded } = precacheSelection(root, base);
         // The version names the cache: it changes with any precached file and with the worker's own

@@ -26,6 +26,16 @@ describe("bibliography entries as sentences", () => {
       author: "A. Author.",
       title: "A title.",
       rest: "Press, 2001, p. 4.",
+      publication: "Press, 2001, ",
+      locator: "p. 4.",
+    });
+  });
+
+  it("leaves the locator empty when an entry has none", () => {
+    expect(sourceSentences({ author: "A. Author", title: "A title", publication: "Press, 2001", locator: "" })).toMatchObject({
+      rest: "Press, 2001.",
+      publication: "Press, 2001.",
+      locator: "",
     });
   });
 });
