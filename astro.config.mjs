@@ -13,6 +13,7 @@ import { contentSecurityPolicyPlugin } from "./scripts/site/content-security-pol
 import { offlineAndSearch } from "./scripts/site/offline-and-search.mjs";
 import { precompressPlugin } from "./scripts/site/precompress.mjs";
 import { islandEntries } from "./scripts/site/island-entries.mjs";
+import { sheetCopies } from "./scripts/site/sheet-copies.mjs";
 
 /**
  * BASE: the sub-path the site is served under ("/" by default; e.g. BASE=/handbook/ for
@@ -44,6 +45,7 @@ export default defineConfig({
   vite: {
     plugins: [
       katexWoff2Only(),
+      sheetCopies(),
       {
         // With module preloading off, the bundler's helper around each dynamic import() has nothing
         // left to do (it would preload the chunk's dependencies and report failures as an event) but
@@ -81,6 +83,9 @@ export default defineConfig({
               },
               // The heading chapters' shared view parts in one chunk rather than two small ones.
               { name: "heading-ui", test: /components[\\/]heading[\\/](ui\.tsx|format\.ts)/ },
+              // The heading-timing chapter's two calculators (timing, smoothing) in one chunk: the build sheet
+              // loads each one's check on its own, which would otherwise split them in two.
+              { name: "timing", test: /calc[\\/]heading[\\/](timing|smoothing)(-inputs)?\.ts$/ },
             ],
           },
         },

@@ -5,7 +5,8 @@
 import { figureOf } from "../core/check.ts";
 import { defineCalculator, defineForm } from "../core/calculator.ts";
 import { formatQuantity } from "../core/units.ts";
-import { headingSmoothing, headingSmoothingInputs } from "../heading/smoothing.ts";
+import { headingSmoothing } from "../heading/smoothing.ts";
+import { headingSmoothingInputs } from "../heading/smoothing-inputs.ts";
 
 export const form = /* @__PURE__ */ defineForm({
   id: "headingSmoothing",

@@ -5,7 +5,8 @@
 import { figureOf } from "../core/check.ts";
 import { defineCalculator, defineForm } from "../core/calculator.ts";
 import { formatQuantity } from "../core/units.ts";
-import { headingTiming, headingTimingInputs } from "../heading/timing.ts";
+import { headingTiming } from "../heading/timing.ts";
+import { headingTimingInputs } from "../heading/timing-inputs.ts";
 
 export const form = /* @__PURE__ */ defineForm({
   id: "headingTiming",

@@ -9,7 +9,8 @@ import { defineCalculator, defineForm, type ExtraSpec, type ValuesOf } from "../
 import { formatNumber, formatQuantity, type QuantityKind } from "../core/units.ts";
 import type { MountingPoint } from "../mass/counterweight.ts";
 import { encodeLayout, parseLayout } from "../mass/layout-text.ts";
-import { massBalance, massBalanceInputs } from "../mass/mass-balance.ts";
+import { massBalance } from "../mass/mass-balance.ts";
+import { massBalanceInputs } from "../mass/mass-balance-inputs.ts";
 import type { LayoutPart } from "../mass/parts.ts";
 import { readMountingPoints, writeMountingPoints } from "../mass/points-text.ts";
 

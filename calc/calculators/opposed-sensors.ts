@@ -5,7 +5,8 @@
 import { figureOf } from "../core/check.ts";
 import { defineCalculator, defineForm } from "../core/calculator.ts";
 import { formatQuantity } from "../core/units.ts";
-import { opposedSensorsCheck, opposedSensorsInputs } from "../heading/opposed.ts";
+import { opposedSensorsCheck } from "../heading/opposed.ts";
+import { opposedSensorsInputs } from "../heading/opposed-inputs.ts";
 
 export const form = /* @__PURE__ */ defineForm({
   id: "opposedSensors",

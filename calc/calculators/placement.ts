@@ -5,7 +5,8 @@
 import { figureOf, type CheckCard } from "../core/check.ts";
 import { defineCalculator, defineForm } from "../core/calculator.ts";
 import { formatNumber, formatQuantity, type UnitSystem } from "../core/units.ts";
-import { accelerometerPlacement, accelerometerPlacementInputs, type AccelerometerPlacement, type AccelerometerPlacementInput } from "../rotation/rotation.ts";
+import { accelerometerPlacement, type AccelerometerPlacement, type AccelerometerPlacementInput } from "../rotation/rotation.ts";
+import { accelerometerPlacementInputs } from "../rotation/placement-inputs.ts";
 
 function card(values: AccelerometerPlacementInput, r: AccelerometerPlacement, system: UnitSystem): CheckCard {
   const len = (v: number) => formatQuantity(v, "length", { system }).text;

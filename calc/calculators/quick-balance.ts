@@ -7,8 +7,9 @@ import { figureOf, ratioFigure } from "../core/check.ts";
 import { defineCalculator, defineForm } from "../core/calculator.ts";
 import { defineChoices } from "../core/choices.ts";
 import { formatQuantity } from "../core/units.ts";
-import { BALANCE_GRADES } from "../mass/balance.ts";
-import { QUICK_BALANCE_MARGIN, quickBalance, quickBalanceInputs } from "../mass/quick-balance.ts";
+import { BALANCE_GRADES } from "../mass/balance-grades.ts";
+import { quickBalance } from "../mass/quick-balance.ts";
+import { QUICK_BALANCE_MARGIN, quickBalanceInputs } from "../mass/quick-balance-inputs.ts";
 
 /** How the limit is set, which grade, and whether the part is added or moved. */
 export const quickBalanceChoices = /* @__PURE__ */ defineChoices({

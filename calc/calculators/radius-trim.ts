@@ -6,7 +6,8 @@ import { figureOf } from "../core/check.ts";
 import { defineCalculator, defineForm } from "../core/calculator.ts";
 import { defineChoices } from "../core/choices.ts";
 import { formatQuantity } from "../core/units.ts";
-import { radiusTrim, radiusTrimInputs } from "../heading/drift-trim.ts";
+import { radiusTrim } from "../heading/drift-trim.ts";
+import { radiusTrimInputs } from "../heading/drift-trim-inputs.ts";
 
 /** Which way the heading drifted, and how the drift was measured. */
 export const radiusTrimChoices = defineChoices({

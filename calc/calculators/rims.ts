@@ -6,7 +6,8 @@ import { figureOf, ratioFigure } from "../core/check.ts";
 import { defineChoices } from "../core/choices.ts";
 import { defineCalculator, defineForm } from "../core/calculator.ts";
 import { formatNumber, formatQuantity } from "../core/units.ts";
-import { RIM_CHOICE_DEFAULTS, RIM_SHAPE_OPTIONS, rimCheck, rimCheckInputs, STRENGTH_BASIS_OPTIONS } from "../loads/rims.ts";
+import { rimCheck } from "../loads/rims.ts";
+import { RIM_CHOICE_DEFAULTS, RIM_SHAPE_OPTIONS, rimCheckInputs, STRENGTH_BASIS_OPTIONS } from "../loads/rim-inputs.ts";
 
 /** The rim's category input, with its link key. */
 export const rimChoices = defineChoices({

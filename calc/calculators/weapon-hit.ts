@@ -7,7 +7,8 @@
 import { figureOf } from "../core/check.ts";
 import { defineCalculator, defineForm } from "../core/calculator.ts";
 import { formatNumber, formatQuantity } from "../core/units.ts";
-import { weaponHit, weaponHitInputs } from "../weapon/impact.ts";
+import { weaponHit } from "../weapon/impact.ts";
+import { weaponHitInputs } from "../weapon/hit-inputs.ts";
 
 export const form = /* @__PURE__ */ defineForm({
   id: "weaponHit",

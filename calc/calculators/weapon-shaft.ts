@@ -10,16 +10,15 @@ import { type ValuesOf, defineCalculator, defineForm } from "../core/calculator.
 import { defineChoices } from "../core/choices.ts";
 import { type QuantityKind, type UnitId, formatNumber, formatQuantity } from "../core/units.ts";
 import { MATERIAL_DENSITIES, MATERIAL_IDS } from "../materials/densities.ts";
-import { BEARING_TYPE_OPTIONS } from "../weapon/bearings.ts";
+import { type ShaftCriterion, weaponShaftCheck } from "../weapon/shaft-check.ts";
 import {
+  BEARING_TYPE_OPTIONS,
   SHAFT_AXLE_OPTIONS,
   SHAFT_KIND_OPTIONS,
   SHAFT_LAYOUT_OPTIONS,
-  type ShaftCriterion,
   WEAPON_SHAFT_CHOICE_DEFAULTS,
-  weaponShaftCheck,
   weaponShaftInputs,
-} from "../weapon/shaft-check.ts";
+} from "../weapon/shaft-inputs.ts";
 
 /** Axle, layout, shaft kind, bearing family (the calc's own options) and shaft material (by its menu name). */
 export const weaponShaftChoices = /* @__PURE__ */ defineChoices({

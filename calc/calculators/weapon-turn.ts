@@ -8,7 +8,8 @@ import { type ValuesOf, defineCalculator, defineForm } from "../core/calculator.
 import { defineChoices } from "../core/choices.ts";
 import { type QuantityKind, type UnitId, formatNumber, formatQuantity } from "../core/units.ts";
 import type { HORIZONTAL_SPIN_OPTIONS } from "../weapon/gyroscopic.ts";
-import { WEAPON_TURN_CHOICE_DEFAULTS, weaponTurnCheck, weaponTurnInputs } from "../weapon/turn-check.ts";
+import { weaponTurnCheck } from "../weapon/turn-check.ts";
+import { WEAPON_TURN_CHOICE_DEFAULTS, weaponTurnInputs } from "../weapon/turn-inputs.ts";
 
 /** Which way the weapon spins. */
 export const weaponTurnChoices = /* @__PURE__ */ defineChoices({

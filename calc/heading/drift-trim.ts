@@ -1,77 +1,9 @@
-/**
- * The pit's question about heading: "it drifts X° a turn (ahead or behind) with the firmware radius
- * at R: what radius do I set?" The firmware's spin-rate estimate ω̂ = √((a − b̂)/r̂) is off by the
- * ratio q = ω̂/ω that the drift shows: after one true turn the heading has moved 360°·q, so q = 1 +
- * X/360° (X positive when the heading runs ahead). The reading a − b̂ is what it is at that speed,
- * so the radius that makes the estimate exact there is r̂′ = r̂·q². Whatever caused the drift (a
- * wrong radius, an offset left in, a scale error), this radius cancels it at the speed it was seen;
- * an offset's share changes with speed, so a trim made at one speed is exact only there.
- * SI in and out: m, rad, rad/s.
- */
-import { defineInputs } from "../core/inputs.ts";
-import { rpmToRadPerSecond } from "../core/units.ts";
 import { CalcInputError } from "../core/errors.ts";
 import { requireWithinSpecs } from "../core/spec-check.ts";
 import { TURN } from "../core/constants.ts";
 
-/** Inputs of the radius trim, in SI. */
-export const radiusTrimInputs = /* @__PURE__ */ defineInputs({
-  assumedRadius: {
-    label: "Radius in firmware now",
-    kind: "length",
-    min: 0.0001,
-    max: 1,
-    default: 0.008,
-    urlKey: "ra",
-    help: "The radius the firmware divided by while you watched the drift.",
-  },
-  driftPerTurn: {
-    label: "Drift per turn",
-    kind: "angle",
-    min: 0,
-    max: Math.PI,
-    default: (20 * Math.PI) / 180,
-    urlKey: "x",
-    help: "How far the heading moves in one turn of the robot, from a video or by counting turns against the heading LED.",
-  },
-  driftRate: {
-    label: "Drift per second",
-    kind: "angularSpeed",
-    min: 0,
-    max: (3600 * Math.PI) / 180,
-    default: (10 * Math.PI) / 180,
-    unit: { metric: "deg/s", us: "deg/s" },
-    urlKey: "dr",
-    help: "How fast the heading turns on its own while the robot spins at the speed below.",
-  },
-  angularSpeed: {
-    label: "Spin speed when you saw it",
-    kind: "angularSpeed",
-    min: 0.1,
-    max: 10000,
-    default: /* @__PURE__ */ rpmToRadPerSecond(2000),
-    urlKey: "rpm",
-    help: "The true spin rate during the drift you timed.",
-  },
-});
-
-export type RadiusTrimSense = "ahead" | "behind";
-export type RadiusTrimMeasure = "turn" | "second";
-
-export interface RadiusTrimInput {
-  /** r̂, the radius the firmware used [m]. */
-  assumedRadius: number;
-  /** Whether the heading ran ahead of the robot (estimate too fast) or fell behind. */
-  sense: RadiusTrimSense;
-  /** Whether the drift was seen per turn or timed per second. */
-  measure: RadiusTrimMeasure;
-  /** |X|, the drift in one turn [rad] (read when `measure` is "turn"). */
-  driftPerTurn: number;
-  /** |D|, the drift rate [rad/s] (read when `measure` is "second"). */
-  driftRate: number;
-  /** ω, the true spin rate while the drift rate was timed [rad/s] (read when `measure` is "second"). */
-  angularSpeed: number;
-}
+export { radiusTrimInputs, type RadiusTrimInput, type RadiusTrimMeasure, type RadiusTrimSense } from "./drift-trim-inputs.ts";
+import { radiusTrimInputs, type RadiusTrimInput } from "./drift-trim-inputs.ts";
 
 export interface RadiusTrim {
   /** X, the signed drift per turn [rad]: positive when the heading ran ahead. */

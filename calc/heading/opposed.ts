@@ -3,9 +3,7 @@
  * calculator that compares one sensor with a pair.
  */
 import { requireFinite, requirePositive } from "../core/errors.ts";
-import { defineInputs } from "../core/inputs.ts";
 import { TURN } from "../core/constants.ts";
-import { rpmToRadPerSecond } from "../core/units.ts";
 import { requireWithinSpecs, requireInputObject, requireFiniteFields, declaredInputs } from "../core/spec-check.ts";
 
 // 2. Two opposed sensors.
@@ -109,47 +107,8 @@ export function opposedSensorsDrift(input: {
   );
 }
 
-/** Inputs of the opposed-sensors comparison, in SI. */
-export const opposedSensorsInputs = /* @__PURE__ */ defineInputs({
-  angularSpeed: {
-    label: "Spin speed",
-    kind: "angularSpeed",
-    min: 0.1,
-    max: 10000,
-    default: /* @__PURE__ */ rpmToRadPerSecond(2000),
-    urlKey: "rpm",
-    help: "The true spin rate at which to compare one sensor with the pair.",
-  },
-  radius1: {
-    label: "Sensor 1 radius",
-    kind: "length",
-    min: 0.0001,
-    max: 1,
-    default: 0.012,
-    urlKey: "r1",
-    help: "Distance from the nominal spin centre to sensor 1's sensing element.",
-  },
-  radius2: {
-    label: "Sensor 2 radius",
-    kind: "length",
-    min: 0.0001,
-    max: 1,
-    default: 0.012,
-    urlKey: "r2",
-    help: "The same for sensor 2, on the opposite side of the centre.",
-  },
-  offset: {
-    label: "Centre-of-mass uncertainty",
-    kind: "length",
-    min: 0,
-    max: 0.1,
-    default: 0.0005,
-    urlKey: "e",
-    help: "How far the real spin centre may lie from the nominal one, along the line through both sensors.",
-  },
-});
-
-export type OpposedSensorsInput = { [K in keyof typeof opposedSensorsInputs]: number };
+export { opposedSensorsInputs, type OpposedSensorsInput } from "./opposed-inputs.ts";
+import { opposedSensorsInputs, type OpposedSensorsInput } from "./opposed-inputs.ts";
 
 export interface OpposedSensorsCheck {
   /** The spin centre moved e toward sensor 1 (offset +e). */

@@ -8,13 +8,10 @@ import { CalcInputError, requireNonNegative, requirePositive } from "../core/err
 import { requireFiniteResult, requireInputObject } from "../core/spec-check.ts";
 import { type ChoiceOption, requireChoice as requireOption } from "../core/choices.ts";
 
-/** The two rolling-bearing families ISO 281 gives a life exponent for. */
-export const BEARING_TYPE_OPTIONS = [
-  { value: "ball", label: "Ball (deep-groove)" },
-  { value: "roller", label: "Roller (cylindrical)" },
-] as const satisfies readonly ChoiceOption[];
+import { BEARING_TYPE_OPTIONS, type BearingType } from "./shaft-inputs.ts";
 
-export type BearingType = (typeof BEARING_TYPE_OPTIONS)[number]["value"];
+/** The two rolling-bearing families ISO 281 gives a life exponent for (declared with the shaft check's inputs). */
+export { BEARING_TYPE_OPTIONS, type BearingType };
 
 /** Performance requirements of the guideline table for s0 (smooth, quiet running matters more to the right). */
 export const BEARING_REQUIREMENT_OPTIONS = [
