@@ -11,12 +11,11 @@
 // This plugin gives those declaration modules, when the sheet's forms or the design reader
 // (calc/design/) import them, the module id "?sheet": the sheet holds its own copy, and a chapter's
 // widget keeps its declarations in one chunk with its physics, as before they were split. The cost
-// is the copies themselves in the offline cache (about 9 KB gzip). Listed: the declaration modules
-// split from their physics, and the mass layout's modules (its parts list's codec and checks, which
+// is the copies themselves in the offline cache (about 9 KB gzip). Copied: every declaration module
+// (a file named *-inputs.ts, so a new calculator needs no entry here), and the mass layout's modules (its parts list's codec and checks, which
 // the sheet needs as a whole). calc/ modules keep no state, so a copy behaves like the original.
 const SHEET = /\?(?:form|sheet)$|[\\/]calc[\\/]design[\\/][^?]*\.ts$/;
-const COPIED =
-  /[\\/]calc[\\/](?:weapon[\\/](?:shaft|turn|hit)-inputs|heading[\\/](?:timing|smoothing|opposed|drift-trim)-inputs|rotation[\\/]placement-inputs|loads[\\/]rim-inputs|mass[\\/][^\\/?]*)\.ts$/;
+const COPIED = /[\\/]calc[\\/](?:[^?]*-inputs|mass[\\/][^\\/?]*)\.ts$/;
 
 /** @returns {import("vite").Plugin} */
 export function sheetCopies() {
