@@ -5,7 +5,7 @@
  * shaded bands, and an optional logarithmic x axis.
  * Renders on the server too, 640 units wide; in the browser it redraws at the width it is shown
  * at when that is narrower (a phone), so its text keeps its CSS size (12–13 px) instead of shrinking
- * with the drawing. It carries a text summary for screen readers; the numbers themselves are in
+ * with the drawing (`useDrawWidth`, which a strip drawn beside a chart uses to line up with it). It carries a text summary for screen readers; the numbers themselves are in
  * the results beside it.
  */
 import { ticks } from "d3-array";
@@ -53,8 +53,32 @@ export interface ChartProps {
   hBands?: readonly ChartBand[];
   width?: number;
   height?: number;
-  /** Keep the drawing `width` units wide at any size (a strip drawn beside it must line up). */
-  fixed?: boolean;
+}
+
+/**
+ * The width to draw a figure at: the width it is shown at when that is narrower than `drawn` (one
+ * unit = one CSS pixel, so text keeps its size on a phone), else `drawn`; `drawn` on the server and
+ * until the figure is measured. Figures drawn side by side with the same `drawn` and margins line up.
+ * Returns the width and the ref to put on the figure's element.
+ */
+export function useDrawWidth(drawn: number): [number, (el: HTMLElement | null) => void] {
+  const view = useMemo(() => ({ shown: signal(0), el: null as HTMLElement | null }), []);
+  useEffect(() => {
+    const el = view.el;
+    if (!el || typeof ResizeObserver === "undefined") return;
+    const observer = new ResizeObserver(() => {
+      view.shown.value = Math.round(el.clientWidth);
+    });
+    observer.observe(el);
+    return () => observer.disconnect();
+  }, [view]);
+  const shown = view.shown.value;
+  return [
+    shown > 0 && shown < drawn ? shown : drawn,
+    (el) => {
+      view.el = el;
+    },
+  ];
 }
 
 /** A map from a domain to a pixel range, linear or in log10, to 0.1 px (finer is invisible and only bloats the markup). */
@@ -89,23 +113,9 @@ export function Chart(props: ChartProps) {
     hBands = [],
     width: drawn = 640,
     height: tall = 320,
-    fixed = false,
   } = props;
-  // The width the figure is shown at, once known (a signal: the chart redraws when it changes).
-  const view = useMemo(() => ({ shown: signal(0), el: null as HTMLElement | null }), []);
-  useEffect(() => {
-    const el = view.el;
-    if (fixed || !el || typeof ResizeObserver === "undefined") return;
-    const observer = new ResizeObserver(() => {
-      view.shown.value = Math.round(el.clientWidth);
-    });
-    observer.observe(el);
-    return () => observer.disconnect();
-  }, [fixed, view]);
-  const shown = view.shown.value;
-  // Narrower than drawn: draw at the shown width (one unit = one CSS pixel), a little taller than
-  // the drawing's proportion so the plot keeps some height.
-  const width = shown > 0 && shown < drawn ? shown : drawn;
+  // Narrower than drawn: a little taller than the drawing's proportion so the plot keeps some height.
+  const [width, ref] = useDrawWidth(drawn);
   const height = width === drawn ? tall : Math.round(Math.max(220, tall * (width / drawn) * 1.3));
   const m = { top: 12, right: 16, bottom: 44, left: 56 };
   const x = scale(xDomain, [m.left, width - m.right], xLog);
@@ -116,12 +126,7 @@ export function Chart(props: ChartProps) {
   const bottom = height - m.bottom;
   const legend = [...hBands, ...series, ...dots.map((d) => ({ ...d, className: `${d.className} swatch-dot` })), ...hLines, ...vLines];
   return (
-    <figure
-      class="chart"
-      ref={(el) => {
-        view.el = el;
-      }}
-    >
+    <figure class="chart" ref={ref}>
       <svg viewBox={`0 0 ${width} ${height}`} role="img" aria-label={`${title}. ${summary}`} preserveAspectRatio="xMidYMid meet">
         <defs>
           <clipPath id={clipId}>

@@ -7,7 +7,7 @@ import type { DrivetrainInput } from "../../calc/drivetrain/inputs.ts";
 import type { SpinUpRegime, SpinUpResult } from "../../calc/drivetrain/results.ts";
 import type { UnitSystem } from "../../calc/core/units.ts";
 import { formatNumber, radPerSecondToRpm } from "../../calc/core/units.ts";
-import { Chart } from "../calc-ui/Chart.tsx";
+import { Chart, useDrawWidth } from "../calc-ui/Chart.tsx";
 import { ResultBar } from "../calc-ui/ResultBar.tsx";
 import { Verdict } from "../calc-ui/Verdict.tsx";
 import { amps, fmt, mAh, percent, REGIME_NAME, REGIME_TEXT, rpm, seconds } from "./format.ts";
@@ -182,15 +182,16 @@ export function Results({ r, input, system, id }: { r: SpinUpResult; input: Driv
 
 const REGIME_CLASS = (regime: SpinUpRegime) => `dt-reg-${regime}`;
 
-/** The regimes as a coloured strip on the same time axis as the charts. */
+/** The regimes as a coloured strip on the same time axis as the charts (drawn at their width and margins). */
 function RegimeStrip({ r }: { r: SpinUpResult }) {
+  const [width, ref] = useDrawWidth(WIDTH);
   const span = r.endTime;
-  const x = (t: number) => LEFT + (t / span) * (WIDTH - LEFT - RIGHT);
+  const x = (t: number) => LEFT + (t / span) * (width - LEFT - RIGHT);
   const present = [...new Set(r.regimes.map((s) => s.regime))];
   return (
-    <figure class="chart dt-strip">
+    <figure class="chart dt-strip" ref={ref}>
       <svg
-        viewBox={`0 0 ${WIDTH} 28`}
+        viewBox={`0 0 ${width} 28`}
         role="img"
         aria-label={`Limiting regime over time: ${r.regimes.map((s) => `${REGIME_NAME[s.regime]} from ${formatNumber(s.start)} s to ${formatNumber(s.end)} s`).join("; ")}.`}
       >
@@ -231,9 +232,7 @@ export function SpinUpCharts({ r, input }: { r: SpinUpResult; input: DrivetrainI
   const peak = Math.max(r.peakBatteryCurrent, r.peakMotorCurrent, Math.min(input.currentLimit, 2 * r.peakMotorCurrent));
   return (
     <div class="dt-charts">
-      {/* Drawn at a fixed 640 units: the regime strip between the two charts lines up with their time axis. */}
       <Chart
-        fixed
         title="Speed against time"
         summary={`From rest to ${formatNumber(topRpm, 4)} rpm in ${formatNumber(r.endTime)} s; target ${formatNumber(targetRpm, 4)} rpm${r.timeToTarget === null ? ", not reached" : `, reached at ${formatNumber(r.timeToTarget)} s`}.`}
         xLabel="Time (s)"
@@ -246,7 +245,6 @@ export function SpinUpCharts({ r, input }: { r: SpinUpResult; input: DrivetrainI
       />
       <RegimeStrip r={r} />
       <Chart
-        fixed
         title="Current against time"
         summary={`Battery current peaks at ${formatNumber(r.peakBatteryCurrent)} A; each motor peaks at ${formatNumber(r.peakMotorCurrent)} A${r.drive.currentLimitAt === "none" ? " with no limit" : ` against a ${r.drive.currentLimitAt} limit of ${formatNumber(input.currentLimit)} A`}.`}
         xLabel="Time (s)"

@@ -102,9 +102,7 @@ describe("the pit flow", () => {
     await context.close();
   });
 
-  // The spin-up charts keep a fixed drawing so the regime strip between them lines up: they are the
-  // exception, and listed as one.
-  it.each(["acceleration", "heading-drift", "heading-timing", "calibration", "rims"])(
+  it.each(["acceleration", "heading-drift", "heading-timing", "calibration", "rims", "spin-up"])(
     "draws the chart text of %s at 11 CSS px or more on a 390 px phone",
     async (slug) => {
       const { page, context } = await open(`/chapters/${slug}/`);
@@ -121,6 +119,24 @@ describe("the pit flow", () => {
       await context.close();
     },
   );
+
+  it.each([390, 1280])("lines the spin-up regime strip up with the charts' time axis at %i px", async (width) => {
+    const { page, context } = await open("/chapters/spin-up/", { width });
+    // The plot area of the speed chart (its first horizontal grid line spans it) and the strip's first and last bands, in CSS px.
+    const edges = () =>
+      page.evaluate(() => {
+        const plot = document.querySelector(".dt-charts .chart .chart-grid line")!.getBoundingClientRect();
+        const bands = [...document.querySelectorAll(".dt-strip rect")].map((r) => r.getBoundingClientRect());
+        return { plot: [plot.left, plot.right], strip: [bands[0]!.left, bands.at(-1)!.right] };
+      });
+    await expect
+      .poll(async () => {
+        const { plot, strip } = await edges();
+        return Math.max(Math.abs(plot[0]! - strip[0]!), Math.abs(plot[1]! - strip[1]!));
+      })
+      .toBeLessThanOrEqual(1);
+    await context.close();
+  });
 
   it("answers the pit's balance question the way it is asked: 12 g added at 45 mm, then a 180 g battery moved 4 mm against a 30 N wobble force", async () => {
     const { page, context, problems } = await open("/chapters/quick-balance/");
