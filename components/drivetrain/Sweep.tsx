@@ -8,7 +8,10 @@ import { fieldUnit, type InputSpec } from "../../calc/core/inputs.ts";
 import { formatNumber, fromSI, radPerSecondToRpm, UNITS, type UnitSystem } from "../../calc/core/units.ts";
 import { summariseSweep } from "../../calc/drivetrain/compare.ts";
 import { fmt, inSentence, rpm } from "./format.ts";
-import { applies, POINTS_SPEC, SPECS, SWEEPABLE, sweepSpec, type Name, type SpinUpModel, type SweepState } from "./model.ts";
+import { applies, SPECS, SWEEPABLE, type Name, type SpinUpModel, type SweepPart } from "./model.ts";
+import { POINTS_SPEC, type SweepState, sweepSpec } from "./sweep.ts";
+
+export { createSweep } from "./sweep.ts";
 
 type Done = Extract<SweepState, { status: "done" }>;
 
@@ -115,11 +118,13 @@ function SweepResults({ state, target, system }: { state: Done; target: number; 
   );
 }
 
-export function Sweep({ model, idPrefix }: { model: SpinUpModel; idPrefix: string }) {
-  const s = model.sweep;
+/** The sweep's form, status and results (its code loads on first use: see `SweepSection` in the widget). */
+export function Sweep({ model, part: s, idPrefix }: { model: SpinUpModel; part: SweepPart; idPrefix: string }) {
   const system = model.fields.system.value;
   const type = model.driveType.value;
   const state = s.state.value;
+  // While a change reruns the sweep, the previous results stay in view until the new ones are in.
+  const shown = state.status === "done" ? state : state.status === "running" ? s.last.value : null;
   const parameter = s.parameter.value;
   const target = model.values.value?.targetSpeed;
   return (
@@ -162,7 +167,7 @@ export function Sweep({ model, idPrefix }: { model: SpinUpModel; idPrefix: strin
       <p class="calc-status" role="status" data-out="sweep-status" data-ms={state.status === "done" ? state.elapsed.toFixed(2) : undefined}>
         {status(state)}
       </p>
-      {state.status === "done" && target !== undefined ? <SweepResults state={state} target={target} system={system} /> : null}
+      {shown && target !== undefined ? <SweepResults state={shown} target={target} system={system} /> : null}
     </section>
   );
 }

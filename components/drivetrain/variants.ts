@@ -3,8 +3,8 @@
  * changed (B, C, D), each simulated beside the design. A variant holds only what differs, so
  * editing the design moves every variant with it. No DOM.
  */
-import { applies, VARIANT_SCOPES } from "../../calc/calculators/spin-up.ts";
-import { form as spinUp } from "../../calc/calculators/spin-up.ts";
+import { applies, VARIANT_SCOPES } from "../../calc/drivetrain/spin-up-form.ts";
+import { form as spinUp } from "../../calc/drivetrain/spin-up-form.ts";
 import { compareDrivetrains } from "../../calc/drivetrain/compare.ts";
 import { type DrivetrainInput, type DrivetrainParameter, validateDrivetrainInput } from "../../calc/drivetrain/inputs.ts";
 import type { SpinUpResult } from "../../calc/drivetrain/results.ts";
@@ -29,7 +29,13 @@ export interface VariantOutcome {
   error: FieldError;
 }
 
-const _LABELS = Object.fromEntries(Object.entries(spinUp.inputs).map(([k, s]) => [k, s.label]));
+/** The design and its variants simulated: each column's result, and which column is fastest and tops out highest (0 = the design). */
+export interface Comparison {
+  base: SpinUpResult;
+  variants: VariantOutcome[];
+  fastest: number | null;
+  highest: number | null;
+}
 
 /**
  * @param design the design's field texts and its values (null while a field does not read)
@@ -63,17 +69,24 @@ export function createVariants(
   });
 
   /** Every variant's result, and which design (0 = the design, 1… = B…) is fastest to its target. */
-  const comparison = computed(() => {
+  let previous: Comparison | null = null;
+  const comparison = computed((): Comparison | null => {
     const own = base.value;
     const list = variantInputs.value;
-    if (!own.input || !own.result || list.length === 0) return null;
+    if (!own.input || !own.result || list.length === 0) {
+      previous = null;
+      return null;
+    }
+    // The design changed and its own run is on its way: the table stays as it was until then.
+    if (own.input !== design.values.value) return previous;
     const valid = list.filter((v) => v.input !== null);
     const run = compareDrivetrains([own.input, ...valid.map((v) => v.input!)]);
     let k = 1;
     const outcomes = list.map((v) => (v.input ? { ...v, result: run.results[k++]! } : v));
     // Index into [design, ...variants], counting the invalid variants too.
     const designIndex = (i: number | null) => (i === null ? null : i === 0 ? 0 : list.indexOf(valid[i - 1]!) + 1);
-    return { base: run.results[0]!, variants: outcomes, fastest: designIndex(run.fastestIndex), highest: designIndex(run.topSpeedIndex) };
+    previous = { base: run.results[0]!, variants: outcomes, fastest: designIndex(run.fastestIndex), highest: designIndex(run.topSpeedIndex) };
+    return previous;
   });
 
   const blank = (): Variant => ({ fields: createFieldsModel(spinUp.inputs, design.fields.system.value), changed: signal<Name[]>([]) });
