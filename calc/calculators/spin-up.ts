@@ -2,8 +2,8 @@
  * The spin-up calculator (chapter "spin-up"): how long a weapon rotor or a whole-body spinner takes
  * to reach its speed with given motors, reduction and battery, and the energy it then stores.
  * Its page also compares up to three variants and sweeps one input (link keys "variants", "b.",
- * "c.", "d.", "s."), which the page reads itself. The form (inputs, choices, the page's link keys)
- * is declared in calc/drivetrain/spin-up-form.ts, apart from the simulation.
+ * "c.", "d.", "s."), which the page reads itself. The form (inputs, choices) is declared in
+ * calc/drivetrain/spin-up-form.ts and the page's link keys in spin-up-view.ts, apart from the simulation.
  */
 import { figureOf } from "../core/check.ts";
 import { defineCalculator, type ValuesOf } from "../core/calculator.ts";
@@ -11,12 +11,9 @@ import { formatNumber, formatQuantity, type QuantityKind } from "../core/units.t
 import { simulateSpinUp } from "../drivetrain/simulate.ts";
 import { form } from "../drivetrain/spin-up-form.ts";
 
+export { applies, driveTypeChoice, form, SPINNER_ONLY } from "../drivetrain/spin-up-form.ts";
 export {
-  applies,
-  driveTypeChoice,
-  form,
   readSpinUpView,
-  SPINNER_ONLY,
   type SpinUpView,
   type SpinUpViewText,
   spinUpViewKeys,
@@ -25,7 +22,7 @@ export {
   SWEEPABLE,
   VARIANT_SCOPES,
   VARIANTS_KEY,
-} from "../drivetrain/spin-up-form.ts";
+} from "../drivetrain/spin-up-view.ts";
 
 /** What the calculator computes, for the build sheet and the command line (its page simulates with the time series, from the form alone); the cards below speak for them. */
 export function run(values: ValuesOf<typeof form>) {

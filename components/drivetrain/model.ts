@@ -11,16 +11,8 @@
  * after the edit, the newest edit winning. The comparison and the sweep load on first use (or at
  * once when the link holds them).
  */
-import {
-  applies,
-  form as spinUp,
-  readSpinUpView,
-  SPINNER_ONLY,
-  spinUpViewKeys,
-  SWEEP_SCOPE,
-  SWEEPABLE,
-  VARIANT_SCOPES,
-} from "../../calc/drivetrain/spin-up-form.ts";
+import { applies, form as spinUp, SPINNER_ONLY } from "../../calc/drivetrain/spin-up-form.ts";
+import { readSpinUpView, spinUpViewKeys, SWEEP_SCOPE, SWEEPABLE, VARIANT_SCOPES } from "../../calc/drivetrain/spin-up-view.ts";
 import { DEMO_SPINNER, DEMO_WEAPON } from "../../calc/drivetrain/demo-robots.ts";
 import type { DriveType, DrivetrainInput, DrivetrainParameter } from "../../calc/drivetrain/inputs.ts";
 import type { SpinUpResult } from "../../calc/drivetrain/results.ts";
@@ -28,7 +20,7 @@ import type { UnitSystem } from "../../calc/core/units.ts";
 import { fieldMessage } from "../calc-ui/fields.ts";
 import { createCalculatorModel, type FieldError } from "../calc-ui/model.ts";
 import { batch, computed, effect, type Signal, signal } from "../calc-ui/reactive.ts";
-import type { SpinUpViewText } from "../../calc/drivetrain/spin-up-form.ts";
+import type { SpinUpViewText } from "../../calc/drivetrain/spin-up-view.ts";
 import { textFor } from "./format.ts";
 import type { createSweep, SweepState } from "./sweep.ts";
 import type { createVariants, Variant, VariantOutcome } from "./variants.ts";
@@ -151,6 +143,7 @@ export function createSpinUpModel(options: SpinUpModelOptions = {}) {
       });
   }
   let generation = 0;
+  let changed = false;
   function simulate(sim: SpinUpModules["simulation"], input: DrivetrainInput): Outcome {
     try {
       return { input, result: sim.simulateSpinUp(input), error: null };
@@ -161,8 +154,13 @@ export function createSpinUpModel(options: SpinUpModelOptions = {}) {
   effect(() => {
     const input = values.value;
     const mine = ++generation;
-    if (!input) return show({ input: null, result: null, error: null }, mine, false);
-    if (prepared && sameDesign(input, prepared.input)) return show({ input, result: prepared.result, error: null }, mine, false);
+    if (!input) {
+      changed = true;
+      return show({ input: null, result: null, error: null }, mine, false);
+    }
+    // The prepared result stands for the page as it opened; from the first change on, every design is simulated (the defaults too).
+    if (prepared && !changed && sameDesign(input, prepared.input)) return show({ input, result: prepared.result, error: null }, mine, false);
+    changed = true;
     pending.value = true;
     // One run takes well under a frame; it runs in a task of its own after the edit, and only if no newer edit came meanwhile.
     withModule("simulation", (sim) =>

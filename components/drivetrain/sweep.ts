@@ -3,7 +3,8 @@
  * that leave the page responsive, the best point marked. No DOM (the runner uses timers only when
  * started).
  */
-import { applies, SWEEPABLE } from "../../calc/drivetrain/spin-up-form.ts";
+import { applies } from "../../calc/drivetrain/spin-up-form.ts";
+import { SWEEPABLE } from "../../calc/drivetrain/spin-up-view.ts";
 import { form as spinUp } from "../../calc/drivetrain/spin-up-form.ts";
 import { type DrivetrainSweep, markSweepOptimum, type SweepPoint, sweepPoint, sweepValues } from "../../calc/drivetrain/compare.ts";
 import type { DriveType, DrivetrainInput, DrivetrainParameter } from "../../calc/drivetrain/inputs.ts";

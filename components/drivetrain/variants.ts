@@ -3,7 +3,8 @@
  * changed (B, C, D), each simulated beside the design. A variant holds only what differs, so
  * editing the design moves every variant with it. No DOM.
  */
-import { applies, VARIANT_SCOPES } from "../../calc/drivetrain/spin-up-form.ts";
+import { applies } from "../../calc/drivetrain/spin-up-form.ts";
+import { VARIANT_SCOPES } from "../../calc/drivetrain/spin-up-view.ts";
 import { form as spinUp } from "../../calc/drivetrain/spin-up-form.ts";
 import { compareDrivetrains } from "../../calc/drivetrain/compare.ts";
 import { type DrivetrainInput, type DrivetrainParameter, validateDrivetrainInput } from "../../calc/drivetrain/inputs.ts";

@@ -273,7 +273,7 @@ describe("what the spin-up model computes when, and what it loads", () => {
     expect(model.modules.value).toEqual({});
   });
 
-  it("simulates a change in a task of its own, the newest change winning, and goes back to the prepared result when the change is undone", () => {
+  it("simulates a change in a task of its own, the newest change winning, and simulates the defaults too once changed back", () => {
     const queue: (() => void)[] = [];
     const model = createSpinUpModel({ prepared, modules: { simulation }, schedule: (next) => queue.push(next) });
     model.fields.texts.gearRatio.value = "3";
@@ -293,8 +293,11 @@ describe("what the spin-up model computes when, and what it loads", () => {
     queue.shift()!();
     expect(model.charted.value.result).toBe(model.outcome.value.result);
     model.fields.texts.gearRatio.value = "2";
-    expect(model.outcome.value.result).toBe(prepared.result);
-    expect(model.pending.value).toBe(false);
+    expect(model.pending.value).toBe(true);
+    queue.shift()!();
+    const again = model.outcome.value.result!;
+    expect(again).not.toBe(prepared.result);
+    expect(again.timeToTarget!).toBeCloseTo(prepared.result.timeToTarget!, 12);
   });
 
   it("gives the same figures computed live as the prepared ones", () => {
