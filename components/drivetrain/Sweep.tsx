@@ -118,15 +118,28 @@ function SweepResults({ state, target, system }: { state: Done; target: number; 
   );
 }
 
+/** The status line and the results: re-drawn as the sweep runs, apart from its form. */
+function SweepOutput({ model, part: s }: { model: SpinUpModel; part: SweepPart }) {
+  const system = model.fields.system.value;
+  const state = s.state.value;
+  // While a change reruns the sweep, the previous results stay in view until the new ones are in.
+  const shown = state.status === "done" ? state : state.status === "running" ? s.last.value : null;
+  const target = model.values.value?.targetSpeed;
+  return (
+    <>
+      <p class="calc-status" role="status" data-out="sweep-status" data-ms={state.status === "done" ? state.elapsed.toFixed(2) : undefined}>
+        {status(state)}
+      </p>
+      {shown && target !== undefined ? <SweepResults state={shown} target={target} system={system} /> : null}
+    </>
+  );
+}
+
 /** The sweep's form, status and results (its code loads on first use: see `SweepSection` in the widget). */
 export function Sweep({ model, part: s, idPrefix }: { model: SpinUpModel; part: SweepPart; idPrefix: string }) {
   const system = model.fields.system.value;
   const type = model.driveType.value;
-  const state = s.state.value;
-  // While a change reruns the sweep, the previous results stay in view until the new ones are in.
-  const shown = state.status === "done" ? state : state.status === "running" ? s.last.value : null;
   const parameter = s.parameter.value;
-  const target = model.values.value?.targetSpeed;
   return (
     <section class="dt-section" aria-labelledby={`${idPrefix}-sweep-title`}>
       <h3 id={`${idPrefix}-sweep-title`}>Sweep one input</h3>
@@ -164,10 +177,7 @@ export function Sweep({ model, part: s, idPrefix }: { model: SpinUpModel; part: 
           </button>
         )}
       </div>
-      <p class="calc-status" role="status" data-out="sweep-status" data-ms={state.status === "done" ? state.elapsed.toFixed(2) : undefined}>
-        {status(state)}
-      </p>
-      {shown && target !== undefined ? <SweepResults state={shown} target={target} system={system} /> : null}
+      <SweepOutput model={model} part={s} />
     </section>
   );
 }

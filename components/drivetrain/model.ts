@@ -128,11 +128,14 @@ export function createSpinUpModel(options: SpinUpModelOptions = {}) {
   const fieldError = signal<FieldError>(null);
   /** True while a change waits for its simulation (the results shown are the previous design's). */
   const pending = signal(false);
+  /** Whether the design has a result; changes only when that does (the sweep restarts on it). */
+  const hasResult = signal(false);
   /** Shows an outcome: the figures now, the charts `later` (or now). */
   function show(next: Outcome, mine: number, chartsLater: boolean): void {
     batch(() => {
       outcome.value = next;
       pending.value = false;
+      hasResult.value = next.result !== null;
       const e = fieldError.peek();
       if (next.error?.field !== e?.field || next.error?.message !== e?.message) fieldError.value = next.error;
       if (!chartsLater) charted.value = next;
@@ -196,7 +199,7 @@ export function createSpinUpModel(options: SpinUpModelOptions = {}) {
     withModule("sweep", (module) => {
       let part = sweepPart.peek();
       if (!part) {
-        part = module.createSweep({ fields, values, hasResult: computed(() => outcome.value.result !== null) });
+        part = module.createSweep({ fields, values, hasResult });
         part.applyText(waitingView.sweep);
         waitingView = { ...waitingView, sweep: null };
         sweepPart.value = part;
