@@ -150,7 +150,7 @@ function SweepSection({ model, id }: { model: SpinUpModel; id: string }) {
           Run the sweep
         </button>
         <button type="button" class="button button--quiet" onClick={() => model.openSweep()}>
-          Choose the input and range first
+          Choose what to sweep
         </button>
       </div>
     </section>

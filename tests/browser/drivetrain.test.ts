@@ -229,7 +229,7 @@ describe("the spin-up page's figures computed at build time, and what it loads w
     expect(await fresh.page.getByRole("button", { name: "Run the sweep" }).count()).toBe(1);
     expect(await fresh.page.locator(`${ID}-sweepFrom`).count()).toBe(0);
     // Set up first: the sweep's fields come without a run.
-    await fresh.page.getByRole("button", { name: "Choose the input and range first" }).click();
+    await fresh.page.getByRole("button", { name: "Choose what to sweep" }).click();
     await expect.poll(() => fresh.page.inputValue(`${ID}-sweepFrom`)).toBe("1");
     expect(await out(fresh.page, "sweep-status")).toBe("");
     await fresh.context.close();
