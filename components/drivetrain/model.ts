@@ -186,6 +186,7 @@ export function createSpinUpModel(options: SpinUpModelOptions = {}) {
       let part = variantsPart.peek();
       if (!part) {
         part = module.createVariants({ fields, values, driveType }, outcome);
+        part.run(schedule);
         part.applyTexts(waitingView.variants);
         part.setSystem(fields.system.peek());
         waitingView = { ...waitingView, variants: [] };

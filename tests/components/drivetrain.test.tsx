@@ -7,7 +7,7 @@ import { describe, expect, it, vi } from "vitest";
 import { renderToString } from "preact-render-to-string";
 import { DEMO_SPINNER, DEMO_WEAPON } from "../../calc/drivetrain/demo.ts";
 import { simulateSpinUp } from "../../calc/drivetrain/simulate.ts";
-import { sweepDrivetrain } from "../../calc/drivetrain/compare.ts";
+import { compareDrivetrains, sweepDrivetrain } from "../../calc/drivetrain/compare.ts";
 import { rpmToRadPerSecond } from "../../calc/core/units.ts";
 import { applies, createSpinUpModel, NAMES, SPECS, SPINNER_ONLY, type SpinUpModel } from "../../components/drivetrain/model.ts";
 import { defaultSweepRange } from "../../components/drivetrain/sweep.ts";
@@ -309,6 +309,23 @@ describe("what the spin-up model computes when, and what it loads", () => {
     expect(a.timeToTarget!).toBeCloseTo(b.timeToTarget!, 12);
     expect(a.topSpeed).toBeCloseTo(b.topSpeed, 9);
     expect(a.series.length).toBe(b.series.length);
+  });
+
+  it("simulates the variants one per task, reusing the design's own result, and drops a run that a change overtook", () => {
+    const queue: (() => void)[] = [];
+    const model = createSpinUpModel({ prepared, modules: MODULES, schedule: (next) => queue.push(next) });
+    model.link.applyQuery("?v=1&variants=2&b.cells=6&c.ratio=1.5");
+    expect(model.comparison.value).toBeNull();
+    queue.shift()!(); // variant 1
+    expect(model.comparison.value).toBeNull();
+    model.variants.value[1]!.fields.texts.gearRatio.value = "3"; // overtakes the run in flight
+    while (queue.length) queue.shift()!();
+    const cmp = model.comparison.value!;
+    expect(cmp.base).toBe(prepared.result);
+    // compareDrivetrains on the same three designs ranks them the same way.
+    const whole = compareDrivetrains([DEMO_WEAPON, { ...DEMO_WEAPON, cellCount: 6 }, { ...DEMO_WEAPON, gearRatio: 3 }]);
+    expect(cmp.variants.map((v) => v.result!.timeToTarget)).toEqual(whole.results.slice(1).map((r) => r.timeToTarget));
+    expect([cmp.fastest, cmp.highest]).toEqual([whole.fastestIndex, whole.topSpeedIndex]);
   });
 
   it("loads the simulation on the first change, and the comparison and the sweep on first use or with a link that holds them", async () => {
