@@ -1,8 +1,10 @@
 /**
  * The spin-up calculator in a real browser (Debian chromium via playwright-core): open a permalink
  * and read the times to speed against the closed form, switch the drive type, compare two
- * variants, run a sweep, see errors beside fields, survive a hostile link, pass axe-core in light
- * and dark, and print how long the simulation and a sweep take in chromium (printed, not asserted).
+ * variants, run a sweep, see errors beside fields, survive a hostile link, open on the figures
+ * computed at build time (the same as the live simulation's) and load the comparison and the sweep
+ * only when used or linked, pass axe-core in light and dark, and print how long the simulation and
+ * a sweep take in chromium (printed, not asserted).
  */
 import { describe, expect, it } from "vitest";
 import type { Page } from "playwright-core";
