@@ -3,6 +3,10 @@
  * 50, 90 and 100 % of the target, top speed, what limits it over time, battery current and sag,
  * stored energy and where the rest of the energy went; variants of the design in one table; and a sweep of
  * one input with the best value marked. The simulation is calc/drivetrain/.
+ *
+ * The page opens on the default design's results, computed when the site was built (`prepared`,
+ * from the chapter); the simulation's code loads on the first change. The comparison and the sweep
+ * load when first used, or at once when the link holds them (see the model).
  */
 import { useEffect, useMemo } from "preact/hooks";
 import { CURRENT_LIMIT_AT_OPTIONS, DRIVE_TYPE_OPTIONS, type DriveType, NO_LOAD_LOSS_OPTIONS } from "../../calc/drivetrain/inputs.ts";
@@ -11,11 +15,9 @@ import { QuantityField } from "../calc-ui/QuantityField.tsx";
 import { Toolbar } from "../calc-ui/Toolbar.tsx";
 import { Notices } from "../calc-ui/Notices.tsx";
 import { linkFor, syncWithUrl } from "../calc-ui/url-sync.ts";
-import { createSpinUpModel, SPINNER_ONLY, type Name, type SpinUpModel } from "../drivetrain/model.ts";
+import { createSpinUpModel, SPINNER_ONLY, type Name, type SpinUpModel, type SpinUpPrepared } from "../drivetrain/model.ts";
 import { Empty, Results, SpinUpBar, SpinUpCharts } from "../drivetrain/Results.tsx";
-import { Compare } from "../drivetrain/Compare.tsx";
-import { Sweep } from "../drivetrain/Sweep.tsx";
-import { form as spinUp } from "../../calc/calculators/spin-up.ts";
+import { form as spinUp } from "../../calc/drivetrain/spin-up-form.ts";
 
 /** The island name: this file's name. */
 export const island = "spin-up";
@@ -23,6 +25,8 @@ export const island = "spin-up";
 export interface SpinUpCalculatorProps {
   /** Element id of the calculator (the link's anchor). */
   id?: string;
+  /** The default design and its result, computed at build time (the chapter passes the worked example's weapon). */
+  prepared?: SpinUpPrepared | null;
 }
 
 interface Group {
@@ -62,7 +66,7 @@ function Menu({ id, label, value, options }: { id: string; label: string; value:
 function Form({ model, id }: { model: SpinUpModel; id: string }) {
   const { fields } = model;
   const type = model.driveType.value;
-  const error = model.outcome.value.error;
+  const error = model.fieldError.value;
   return (
     <form class="calc-form" onSubmit={(event) => event.preventDefault()} noValidate>
       {GROUPS.map((group) => {
@@ -99,18 +103,71 @@ function Form({ model, id }: { model: SpinUpModel; id: string }) {
   );
 }
 
-export default function SpinUpCalculator({ id = spinUp.anchor }: SpinUpCalculatorProps) {
-  const model = useMemo(() => createSpinUpModel(), []);
+/** The result bar, the verdict and the figures: re-drawn when a run ends, apart from the form. */
+function Outcome({ model, id }: { model: SpinUpModel; id: string }) {
+  const { input, result, error } = model.outcome.value;
+  const system = model.fields.system.value;
+  return (
+    <>
+      <SpinUpBar r={result && input ? result : null} system={system} error={error} resultsId={`${id}-results`} />
+      {result && input ? <Results r={result} input={input} system={system} id={`${id}-results`} /> : <Empty error={error} id={`${id}-results`} />}
+    </>
+  );
+}
+
+/** The speed and current charts: drawn a task after the figures (see `charted` in the model). */
+function Charts({ model }: { model: SpinUpModel }) {
+  const { input, result } = model.charted.value;
+  return result && input ? <SpinUpCharts r={result} input={input} /> : null;
+}
+
+/** The variants: their code loads on the first "Add variant" (or with a link that holds some). */
+function CompareSection({ model, id }: { model: SpinUpModel; id: string }) {
+  const module = model.modules.value.compare;
+  if (module && model.variantsPart.value) return <module.Compare model={model} idPrefix={id} />;
+  return (
+    <section class="dt-section" aria-labelledby={`${id}-cmp-title`}>
+      <h3 id={`${id}-cmp-title`}>Variants of this design</h3>
+      <p class="field-help">Each variant is this design with a few inputs changed; it follows every other edit of the design.</p>
+      <button type="button" class="button" onClick={model.addVariant}>
+        Add variant 1
+      </button>
+    </section>
+  );
+}
+
+/** The sweep: its code loads when it is first run or set up (or with a link that holds one). */
+function SweepSection({ model, id }: { model: SpinUpModel; id: string }) {
+  const module = model.modules.value.sweep;
+  const part = model.sweepPart.value;
+  if (module && part) return <module.Sweep model={model} part={part} idPrefix={id} />;
+  return (
+    <section class="dt-section" aria-labelledby={`${id}-sweep-title`}>
+      <h3 id={`${id}-sweep-title`}>Sweep one input</h3>
+      <p class="field-help">Simulates the design over a range of one input (the gear ratio unless you choose another) and marks the best value.</p>
+      <div class="dt-row">
+        <button type="button" class="button" onClick={model.startSweep}>
+          Run the sweep
+        </button>
+        <button type="button" class="button button--quiet" onClick={() => model.openSweep()}>
+          Choose what to sweep
+        </button>
+      </div>
+    </section>
+  );
+}
+
+export default function SpinUpCalculator({ id = spinUp.anchor, prepared = null }: SpinUpCalculatorProps) {
+  const model = useMemo(() => createSpinUpModel({ prepared }), []);
   useEffect(() => {
     const stopUrl = syncWithUrl(model.link);
-    const stopSweeps = model.runSweeps();
+    const stopRunning = model.start();
     return () => {
       stopUrl();
-      stopSweeps();
+      stopRunning();
     };
   }, [model]);
   const type = model.driveType.value;
-  const { input, result, error } = model.outcome.value;
   return (
     <section class="calc" id={id} aria-label="Spin-up calculator">
       <Notices notices={model.notices} />
@@ -125,17 +182,10 @@ export default function SpinUpCalculator({ id = spinUp.anchor }: SpinUpCalculato
         ))}
       </fieldset>
       <Form model={model} id={id} />
-      <SpinUpBar r={result && input ? result : null} system={model.fields.system.value} error={error} resultsId={`${id}-results`} />
-      {result && input ? (
-        <>
-          <Results r={result} input={input} system={model.fields.system.value} id={`${id}-results`} />
-          <SpinUpCharts r={result} input={input} />
-        </>
-      ) : (
-        <Empty error={error} id={`${id}-results`} />
-      )}
-      <Compare model={model} idPrefix={id} />
-      <Sweep model={model} idPrefix={id} />
+      <Outcome model={model} id={id} />
+      <Charts model={model} />
+      <CompareSection model={model} id={id} />
+      <SweepSection model={model} id={id} />
     </section>
   );
 }

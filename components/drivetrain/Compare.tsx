@@ -12,6 +12,8 @@ import type { ComponentChildren } from "preact";
 import { amps, fmt, inSentence, rpm } from "./format.ts";
 import { applies, NAMES, SPECS, VARIANT_KEYS, type Name, type SpinUpModel, type Variant } from "./model.ts";
 
+export { createVariants } from "./variants.ts";
+
 const CURVES = ["plot-curve", "plot-curve-2 plot-dashed", "plot-curve-3 dt-dash-long", "dt-curve-4"];
 /** What each column is called: the design on the page, then its variants by number. */
 const nameOf = (i: number) => (i === 0 ? "This design" : `Variant ${i}`);

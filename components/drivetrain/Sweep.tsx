@@ -8,7 +8,10 @@ import { fieldUnit, type InputSpec } from "../../calc/core/inputs.ts";
 import { formatNumber, fromSI, radPerSecondToRpm, type UnitSystem, unitDef } from "../../calc/core/units.ts";
 import { summariseSweep } from "../../calc/drivetrain/compare.ts";
 import { fmt, inSentence, rpm } from "./format.ts";
-import { applies, POINTS_SPEC, SPECS, SWEEPABLE, sweepSpec, type Name, type SpinUpModel, type SweepState } from "./model.ts";
+import { applies, SPECS, SWEEPABLE, type Name, type SpinUpModel, type SweepPart } from "./model.ts";
+import { POINTS_SPEC, type SweepState, sweepSpec } from "./sweep.ts";
+
+export { createSweep } from "./sweep.ts";
 
 type Done = Extract<SweepState, { status: "done" }>;
 
@@ -115,13 +118,28 @@ function SweepResults({ state, target, system }: { state: Done; target: number; 
   );
 }
 
-export function Sweep({ model, idPrefix }: { model: SpinUpModel; idPrefix: string }) {
-  const s = model.sweep;
+/** The status line and the results: re-drawn as the sweep runs, apart from its form. */
+function SweepOutput({ model, part: s }: { model: SpinUpModel; part: SweepPart }) {
+  const system = model.fields.system.value;
+  const state = s.state.value;
+  // While a change reruns the sweep, the previous results stay in view until the new ones are in.
+  const shown = state.status === "done" ? state : state.status === "running" ? s.last.value : null;
+  const target = model.values.value?.targetSpeed;
+  return (
+    <>
+      <p class="calc-status" role="status" data-out="sweep-status" data-ms={state.status === "done" ? state.elapsed.toFixed(2) : undefined}>
+        {status(state)}
+      </p>
+      {shown && target !== undefined ? <SweepResults state={shown} target={target} system={system} /> : null}
+    </>
+  );
+}
+
+/** The sweep's form, status and results (its code loads on first use: see `SweepSection` in the widget). */
+export function Sweep({ model, part: s, idPrefix }: { model: SpinUpModel; part: SweepPart; idPrefix: string }) {
   const system = model.fields.system.value;
   const type = model.driveType.value;
-  const state = s.state.value;
   const parameter = s.parameter.value;
-  const target = model.values.value?.targetSpeed;
   return (
     <section class="dt-section" aria-labelledby={`${idPrefix}-sweep-title`}>
       <h3 id={`${idPrefix}-sweep-title`}>Sweep one input</h3>
@@ -159,10 +177,7 @@ export function Sweep({ model, idPrefix }: { model: SpinUpModel; idPrefix: strin
           </button>
         )}
       </div>
-      <p class="calc-status" role="status" data-out="sweep-status" data-ms={state.status === "done" ? state.elapsed.toFixed(2) : undefined}>
-        {status(state)}
-      </p>
-      {state.status === "done" && target !== undefined ? <SweepResults state={state} target={target} system={system} /> : null}
+      <SweepOutput model={model} part={s} />
     </section>
   );
 }

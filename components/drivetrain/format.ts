@@ -3,7 +3,8 @@
  * four figures, the regimes in words. No DOM.
  */
 import type { SpinUpRegime } from "../../calc/drivetrain/results.ts";
-import { formatNumber, formatQuantity, type QuantityKind, type UnitSystem } from "../../calc/core/units.ts";
+import { fieldUnit, type InputSpec } from "../../calc/core/inputs.ts";
+import { formatNumber, formatQuantity, fromSI, type QuantityKind, type UnitSystem, unitDef } from "../../calc/core/units.ts";
 
 /** A quantity in the user's system: "1.01 s", "345 J", "62.8 m/s". */
 export const fmt = (valueSI: number, kind: QuantityKind, system: UnitSystem, significant = 3): string =>
@@ -42,3 +43,11 @@ export const REGIME_NAME: Record<SpinUpRegime, string> = {
   traction: "Traction (wheels slip)",
   stalled: "Stalled",
 };
+
+/** An SI value as field text in the field's unit for `system`: "2", "45 mm". */
+export function textFor(spec: InputSpec, valueSI: number, system: UnitSystem, digits = 6): string {
+  const unit = fieldUnit(spec, system);
+  const n = Number(fromSI(valueSI, unit).toPrecision(digits));
+  const symbol = unitDef(unit).symbol;
+  return symbol ? `${n} ${symbol}` : String(n);
+}

@@ -3,18 +3,19 @@
  * that leave the page responsive, the best point marked. No DOM (the runner uses timers only when
  * started).
  */
-import { applies, SWEEPABLE } from "../../calc/calculators/spin-up.ts";
-import { form as spinUp } from "../../calc/calculators/spin-up.ts";
+import { applies } from "../../calc/drivetrain/spin-up-form.ts";
+import { SWEEPABLE } from "../../calc/drivetrain/spin-up-view.ts";
+import { form as spinUp } from "../../calc/drivetrain/spin-up-form.ts";
 import { type DrivetrainSweep, markSweepOptimum, type SweepPoint, sweepPoint, sweepValues } from "../../calc/drivetrain/compare.ts";
 import type { DriveType, DrivetrainInput, DrivetrainParameter } from "../../calc/drivetrain/inputs.ts";
 import { fieldUnit, type InputSpec, readField } from "../../calc/core/inputs.ts";
-import { fromSI, parseQuantity, type UnitSystem, unitDef } from "../../calc/core/units.ts";
+import { parseQuantity, type UnitSystem, unitDef } from "../../calc/core/units.ts";
+import { textFor } from "./format.ts";
 import { type FieldsModel, fieldMessage } from "../calc-ui/fields.ts";
 import { batch, computed, effect, type ReadonlySignal, type Signal, signal } from "../calc-ui/reactive.ts";
 
 type Name = DrivetrainParameter;
 const SPECS = spinUp.inputs;
-const _LABELS = Object.fromEntries(Object.entries(SPECS).map(([k, s]) => [k, s.label]));
 
 /** The sweep's point count, declared like any other input. */
 export const POINTS_SPEC: InputSpec = {
@@ -36,14 +37,6 @@ export function sweepSpec(name: Name, end: "from" | "to"): InputSpec {
     urlKey: end,
     help: end === "from" ? "First value of the sweep." : "Last value of the sweep.",
   };
-}
-
-/** An SI value as field text in the field's unit for `system`. */
-export function textFor(spec: InputSpec, valueSI: number, system: UnitSystem, digits = 6): string {
-  const unit = fieldUnit(spec, system);
-  const n = Number(fromSI(valueSI, unit).toPrecision(digits));
-  const symbol = unitDef(unit).symbol;
-  return symbol ? `${n} ${symbol}` : String(n);
 }
 
 /** A sweep range around `value` that stays inside the input's declared range. */
@@ -92,6 +85,8 @@ export function createSweep(design: { fields: FieldsModel<typeof SPECS>; values:
     return a.ok && b.ok && a.value === b.value ? "To must differ from From." : null;
   });
   const state = signal<SweepState>({ status: "off" });
+  /** The last finished sweep while it is on (shown while a change reruns it). */
+  const last = signal<Extract<SweepState, { status: "done" }> | null>(null);
 
   /** Picks the input to sweep and fills its range around the design's current value. */
   function setParameter(name: Name): void {
@@ -117,7 +112,10 @@ export function createSweep(design: { fields: FieldsModel<typeof SPECS>; values:
       cancel();
       cancel = () => {};
       if (!on.value) {
-        state.value = { status: "off" };
+        batch(() => {
+          state.value = { status: "off" };
+          last.value = null;
+        });
         return;
       }
       const base = design.values.value;
@@ -164,7 +162,15 @@ export function createSweep(design: { fields: FieldsModel<typeof SPECS>; values:
           state.value = { status: "error", message: skippedReason ?? "No value of the sweep could be computed." };
         } else {
           const best = markSweepOptimum(done);
-          state.value = { status: "done", parameter: name, points: done, ...best, skipped, skippedReason, elapsed: now() - started };
+          const finished = { status: "done", parameter: name, points: done, ...best, skipped, skippedReason, elapsed: now() - started } as const;
+          // Drawn in a task of its own: the last batch and the results' charts and table never add up in one.
+          schedule(() => {
+            if (stopped) return;
+            batch(() => {
+              state.value = finished;
+              last.value = finished;
+            });
+          });
         }
       };
       state.value = { status: "running", done: 0, total: list.length };
@@ -224,6 +230,7 @@ export function createSweep(design: { fields: FieldsModel<typeof SPECS>; values:
     pointsReading,
     rangeError,
     state,
+    last,
     setParameter,
     start: () => {
       on.value = true;

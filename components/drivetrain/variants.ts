@@ -1,17 +1,19 @@
 /**
  * The spin-up calculator's comparison variants: up to three copies of the design with a few inputs
- * changed (B, C, D), each simulated beside the design. A variant holds only what differs, so
- * editing the design moves every variant with it. No DOM.
+ * changed (B, C, D), each simulated beside the design, one per task. A variant holds only what
+ * differs, so editing the design moves every variant with it. No DOM (the runner uses timers only
+ * through the `schedule` it is given).
  */
-import { applies, VARIANT_SCOPES } from "../../calc/calculators/spin-up.ts";
-import { form as spinUp } from "../../calc/calculators/spin-up.ts";
-import { compareDrivetrains } from "../../calc/drivetrain/compare.ts";
+import { applies } from "../../calc/drivetrain/spin-up-form.ts";
+import { VARIANT_SCOPES } from "../../calc/drivetrain/spin-up-view.ts";
+import { form as spinUp } from "../../calc/drivetrain/spin-up-form.ts";
+import { simulateSpinUp } from "../../calc/drivetrain/simulate.ts";
 import { type DrivetrainInput, type DrivetrainParameter, validateDrivetrainInput } from "../../calc/drivetrain/inputs.ts";
 import type { SpinUpResult } from "../../calc/drivetrain/results.ts";
 import type { UnitSystem } from "../../calc/core/units.ts";
 import { createFieldsModel, type FieldsModel, fieldMessage } from "../calc-ui/fields.ts";
 import type { FieldError } from "../calc-ui/model.ts";
-import { batch, computed, type ReadonlySignal, type Signal, signal } from "../calc-ui/reactive.ts";
+import { batch, computed, effect, type ReadonlySignal, type Signal, signal } from "../calc-ui/reactive.ts";
 
 export type Name = DrivetrainParameter;
 type Specs = typeof spinUp.inputs;
@@ -29,7 +31,13 @@ export interface VariantOutcome {
   error: FieldError;
 }
 
-const _LABELS = Object.fromEntries(Object.entries(spinUp.inputs).map(([k, s]) => [k, s.label]));
+/** The design and its variants simulated: each column's result, and which column is fastest and tops out highest (0 = the design). */
+export interface Comparison {
+  base: SpinUpResult;
+  variants: VariantOutcome[];
+  fastest: number | null;
+  highest: number | null;
+}
 
 /**
  * @param design the design's field texts and its values (null while a field does not read)
@@ -63,18 +71,61 @@ export function createVariants(
   });
 
   /** Every variant's result, and which design (0 = the design, 1… = B…) is fastest to its target. */
-  const comparison = computed(() => {
-    const own = base.value;
-    const list = variantInputs.value;
-    if (!own.input || !own.result || list.length === 0) return null;
-    const valid = list.filter((v) => v.input !== null);
-    const run = compareDrivetrains([own.input, ...valid.map((v) => v.input!)]);
-    let k = 1;
-    const outcomes = list.map((v) => (v.input ? { ...v, result: run.results[k++]! } : v));
-    // Index into [design, ...variants], counting the invalid variants too.
-    const designIndex = (i: number | null) => (i === null ? null : i === 0 ? 0 : list.indexOf(valid[i - 1]!) + 1);
-    return { base: run.results[0]!, variants: outcomes, fastest: designIndex(run.fastestIndex), highest: designIndex(run.topSpeedIndex) };
-  });
+  const comparison = signal<Comparison | null>(null);
+
+  /**
+   * Simulates the variants whenever the design or a variant changes: one variant per task
+   * (`schedule`), the design's own result reused, the newest change winning (a run overtaken by a
+   * change stops). Until a run ends, the table shows the previous one. Returns the stop.
+   */
+  function run(schedule: (next: () => void) => void): () => void {
+    let generation = 0;
+    const stop = effect(() => {
+      const own = base.value;
+      const list = variantInputs.value;
+      const mine = ++generation;
+      if (!own.input || !own.result || list.length === 0) {
+        comparison.value = null;
+        return;
+      }
+      // The design changed and its own run is on its way: the table stays as it was until then.
+      if (own.input !== design.values.peek()) return;
+      const ownResult = own.result;
+      const outcomes: VariantOutcome[] = list.map((v) => ({ ...v }));
+      let k = 0;
+      const next = () => {
+        if (mine !== generation) return;
+        while (k < list.length && !list[k]!.input) k++;
+        if (k < list.length) {
+          const outcome = outcomes[k]!;
+          try {
+            outcome.result = simulateSpinUp(outcome.input!);
+          } catch (error) {
+            outcome.input = null;
+            outcome.error = fieldMessage(error, spinUp.inputs, design.fields.system.peek());
+          }
+          k++;
+          schedule(next);
+          return;
+        }
+        // As compareDrivetrains ranks them: the first shortest time to target, the first highest top speed.
+        const results = [ownResult, ...outcomes.map((v) => v.result)];
+        let fastest: number | null = null;
+        let highest = 0;
+        results.forEach((r, i) => {
+          if (!r) return;
+          if (r.timeToTarget !== null && (fastest === null || r.timeToTarget < results[fastest]!.timeToTarget!)) fastest = i;
+          if (r.topSpeed > results[highest]!.topSpeed) highest = i;
+        });
+        comparison.value = { base: ownResult, variants: outcomes, fastest, highest };
+      };
+      schedule(next);
+    });
+    return () => {
+      generation++;
+      stop();
+    };
+  }
 
   const blank = (): Variant => ({ fields: createFieldsModel(spinUp.inputs, design.fields.system.value), changed: signal<Name[]>([]) });
 
@@ -119,5 +170,5 @@ export function createVariants(
     for (const variant of variants.value) variant.fields.setSystem(next);
   }
 
-  return { variants, variantInputs, comparison, add, remove, change, unchange, applyTexts, texts, setSystem };
+  return { variants, variantInputs, comparison, run, add, remove, change, unchange, applyTexts, texts, setSystem };
 }

@@ -1,8 +1,10 @@
 /**
  * The spin-up calculator in a real browser (Debian chromium via playwright-core): open a permalink
  * and read the times to speed against the closed form, switch the drive type, compare two
- * variants, run a sweep, see errors beside fields, survive a hostile link, pass axe-core in light
- * and dark, and print how long the simulation and a sweep take in chromium (printed, not asserted).
+ * variants, run a sweep, see errors beside fields, survive a hostile link, open on the figures
+ * computed at build time (the same as the live simulation's) and load the comparison and the sweep
+ * only when used or linked, pass axe-core in light and dark, and print how long the simulation and
+ * a sweep take in chromium (printed, not asserted).
  */
 import { describe, expect, it } from "vitest";
 import type { Page } from "playwright-core";
@@ -33,7 +35,8 @@ const DRAG_FREE = `${PAGE}?v=1&u=metric&type=weapon&motors=1&kv=1400rpm/V&rm=45m
 describe("spin-up calculator in the browser", () => {
   it("answers a permalink with the closed-form times to speed", async () => {
     const { page, context, problems } = await open(DRAG_FREE);
-    expect(await out(page, "time-50")).toBe("460 ms");
+    // The page opened on the demo's figures (computed at build time); the link's values are simulated once the simulation's code has loaded.
+    await expect.poll(() => out(page, "time-50")).toBe("460 ms");
     expect(await out(page, "time-90")).toBe("838 ms");
     expect(await out(page, "time-100")).toBe("995 ms");
     // The run stops once settled, 1e-5 short of Ω_∞ = 11 374 rpm.
@@ -185,6 +188,65 @@ describe("spin-up calculator in the browser", () => {
     expect(notices).toContain('parameters for "z."');
     expect(problems).toEqual([]);
     expect(requests.filter((url) => !url.startsWith(origin()))).toEqual([]);
+    await context.close();
+  });
+});
+
+describe("the spin-up page's figures computed at build time, and what it loads when", () => {
+  /** Everything the calculator shows of its result: the bar, the results, the charts' text, and what the charts say to a screen reader. */
+  const shown = (page: Page) =>
+    page.evaluate((id) => {
+      const calc = document.querySelector(id)!;
+      const text = (selector: string) => [...calc.querySelectorAll(selector)].map((e) => e.textContent?.replace(/\s+/g, " ").trim());
+      return {
+        bar: text("[data-result-bar]"),
+        results: text(`${id}-results`),
+        charts: text(".dt-charts"),
+        labels: [...calc.querySelectorAll(".dt-charts [aria-label]")].map((e) => e.getAttribute("aria-label")),
+      };
+    }, ID);
+
+  it("opens on the default design's figures, the same as the live simulation shows after an edit and its undo, and loads no simulation until then", async () => {
+    const { page, context, problems, requests } = await open(PAGE);
+    const opened = await shown(page);
+    expect(opened.results.join(" ")).toContain("1.01 s");
+    expect(opened.labels.length).toBeGreaterThan(0);
+    // Nothing computed the defaults in the browser: neither the simulation nor the comparison or sweep code came.
+    const chunks = () => requests.filter((url) => /\/(simulate|Compare|Sweep)\.[^/]*\.js$/.test(url));
+    expect(chunks()).toEqual([]);
+    await page.fill(`${ID}-gearRatio`, "3");
+    await expect.poll(() => out(page, "time-100")).not.toBe("1.01 s");
+    expect(chunks().length).toBeGreaterThan(0);
+    await page.fill(`${ID}-gearRatio`, "2");
+    await expect.poll(() => out(page, "time-100")).toBe("1.01 s");
+    // The charts follow the figures a task later.
+    await expect.poll(() => shown(page)).toEqual(opened);
+    expect(problems).toEqual([]);
+    await context.close();
+  });
+
+  it("keeps the comparison and the sweep closed on a fresh page, and opens them at once from a link that holds them", async () => {
+    const fresh = await open(PAGE);
+    expect(await fresh.page.getByRole("button", { name: "Add variant 1" }).count()).toBe(1);
+    expect(await fresh.page.getByRole("button", { name: "Run the sweep" }).count()).toBe(1);
+    expect(await fresh.page.locator(`${ID}-sweepFrom`).count()).toBe(0);
+    // Set up first: the sweep's fields come without a run.
+    await fresh.page.getByRole("button", { name: "Choose what to sweep" }).click();
+    await expect.poll(() => fresh.page.inputValue(`${ID}-sweepFrom`)).toBe("1");
+    expect(await out(fresh.page, "sweep-status")).toBe("");
+    await fresh.context.close();
+    const { page, context, problems } = await open(`${PAGE}?v=1&variants=2&b.cells=6&c.ratio=1.5&s.p=ratio&s.from=1&s.to=4&s.n=7`);
+    // No click: the variants' editors and the sweep's fields are there, and both run.
+    expect(await page.inputValue(`${ID}-b-cellCount`)).toBe("6");
+    expect(await page.inputValue(`${ID}-c-gearRatio`)).toBe("1.5");
+    expect(await page.inputValue(`${ID}-sweepPoints`)).toBe("7");
+    // compareDrivetrains' doc comment: six cells 0.93 s (fastest), 1.5:1 1.22 s.
+    await expect.poll(() => out(page, "cmp-b-time")).toBe("928 ms — fastest");
+    expect(await out(page, "cmp-c-time")).toBe("1.22 s");
+    await expect.poll(() => out(page, "sweep-status")).toBe("7 values simulated.");
+    // The link stays as it was given.
+    expect([param(page, "variants"), param(page, "b.cells"), param(page, "c.ratio"), param(page, "s.n")]).toEqual(["2", "6", "1.5", "7"]);
+    expect(problems).toEqual([]);
     await context.close();
   });
 });

@@ -29,14 +29,14 @@ import CalibrationCalculator from "../../components/calculators/calibration.tsx"
 import MassLayoutCalculator from "../../components/calculators/mass.tsx";
 import SpinUpCalculator from "../../components/calculators/spin-up.tsx";
 import BuildSheet from "../../components/design/BuildSheet.tsx";
-import { Compare } from "../../components/drivetrain/Compare.tsx";
+import * as CompareModule from "../../components/drivetrain/Compare.tsx";
 import { createSpinUpModel } from "../../components/drivetrain/model.ts";
 import { Results } from "../../components/drivetrain/Results.tsx";
 import { demoRobotParts } from "../../calc/mass/demo.ts";
 import { encodeLayout } from "../../calc/mass/layout-text.ts";
 import { rimMaterialChoices } from "../../calc/loads/index.ts";
-import { DEMO_WEAPON } from "../../calc/drivetrain/demo.ts";
-import { simulateSpinUp } from "../../calc/drivetrain/simulate.ts";
+import { DEMO_WEAPON, drivetrainWorkedExample } from "../../calc/drivetrain/demo.ts";
+import * as simulation from "../../calc/drivetrain/simulate.ts";
 import { readField } from "../../calc/core/inputs.ts";
 import { accelerometerPlacementInputs } from "../../calc/rotation/rotation.ts";
 import { STANDARD_GRAVITY } from "../../calc/core/constants.ts";
@@ -50,7 +50,8 @@ const WIDGETS: [string, () => ComponentChild][] = [
   ["heading-timing", () => <HeadingTimingCalculator id="w" />],
   ["calibration", () => <CalibrationCalculator id="w" />],
   ["mass", () => <MassLayoutCalculator id="w" layout={encodeLayout(demoRobotParts())} />],
-  ["spin-up", () => <SpinUpCalculator id="w" />],
+  // The chapter passes the worked example's weapon, computed at build time, as the default design's result.
+  ["spin-up", () => <SpinUpCalculator id="w" prepared={drivetrainWorkedExample().weapon} />],
 ];
 
 /** The text a reader sees: tags dropped, attributes gone, entities of the few kinds Preact writes decoded. */
@@ -134,7 +135,7 @@ describe("verdict words: Holds, Marginal, Fails or For information, then the rea
   });
 
   it("says how the spin-up ends in the same words", () => {
-    expect(verdictLeads(renderToString(<Results r={simulateSpinUp(DEMO_WEAPON)} input={DEMO_WEAPON} system="metric" />))).toEqual([
+    expect(verdictLeads(renderToString(<Results r={simulation.simulateSpinUp(DEMO_WEAPON)} input={DEMO_WEAPON} system="metric" />))).toEqual([
       "Holds: reaches the target.",
     ]);
   });
@@ -204,7 +205,7 @@ describe("one term per idea", () => {
 
 describe("the spin-up panel", () => {
   it("leads with what limits the acceleration and where the energy went, then the figures, and keeps its self-check off the screen", () => {
-    const html = renderToString(<Results r={simulateSpinUp(DEMO_WEAPON)} input={DEMO_WEAPON} system="metric" />);
+    const html = renderToString(<Results r={simulation.simulateSpinUp(DEMO_WEAPON)} input={DEMO_WEAPON} system="metric" />);
     const limits = html.indexOf("What limits the acceleration, over time");
     const energy = html.indexOf("Where the energy went");
     const grid = html.indexOf('class="results-grid"');
@@ -216,14 +217,15 @@ describe("the spin-up panel", () => {
   });
 
   it("compares named variants in one table: a column per design, the changed inputs as rows, then the results", () => {
-    const model = createSpinUpModel();
+    // Everything at hand and run at once (the page loads the simulation and the comparison on demand).
+    const model = createSpinUpModel({ modules: { simulation, compare: CompareModule }, schedule: (next) => next() });
     model.addVariant();
     model.changeInVariant(0, "cellCount");
     model.variants.value[0]!.fields.texts.cellCount.value = "6";
     model.addVariant();
     model.changeInVariant(1, "gearRatio");
     model.variants.value[1]!.fields.texts.gearRatio.value = "1.5";
-    const html = renderToString(<Compare model={model} idPrefix="su" />);
+    const html = renderToString(<CompareModule.Compare model={model} idPrefix="su" />);
     const head = [...html.matchAll(/<th scope="col">([^<]+)<\/th>/g)].map((m) => m[1]);
     expect(head).toEqual(["This design", "Variant 1", "Variant 2"]);
     const rows = [...html.matchAll(/<tr[^>]*><th scope="row">([^<]+)<\/th>((?:<td[^>]*>.*?<\/td>)+)<\/tr>/g)].map((m) => [
