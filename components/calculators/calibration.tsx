@@ -163,7 +163,7 @@ function Settings({ model, id }: { model: CalibrationModel; id: string }) {
 
 /** The fitted radius and offset, in view while the readings are edited. */
 function CalibrationBar({ model, id }: { model: CalibrationModel; id: string }) {
-  const { fit } = model.outcome.value;
+  const { fit } = model.shown.value.outcome;
   const system: UnitSystem = model.fields.system.value;
   const resultsId = `${id}-results`;
   if (!fit) return <ResultBar tone={null} figures={[]} resultsId={resultsId} missing="No fit yet: see the readings above." />;
@@ -187,6 +187,7 @@ function CalibrationBar({ model, id }: { model: CalibrationModel; id: string }) 
  */
 function ResultsSlot({ model, id, given }: { model: CalibrationModel; id: string; given: ResultsView | undefined }) {
   const view = resultsView.value ?? given;
+  const shown = model.shown.value;
   if (view) {
     return (
       <div class="calibration-results">
@@ -195,16 +196,17 @@ function ResultsSlot({ model, id, given }: { model: CalibrationModel; id: string
     );
   }
   const changed =
-    model.pending.value || model.outcome.value !== model.start.outcome || model.parsed.value !== model.start.reading || model.fields.system.value !== "metric";
+    model.pending.value || shown.outcome !== model.start.outcome || shown.parsed !== model.start.reading || model.fields.system.value !== "metric";
   if (changed) void loadResults();
   // While hydrating, Preact leaves an element with inner HTML as it finds it: the server's results.
   return <div class="calibration-results" aria-busy={changed ? "true" : undefined} dangerouslySetInnerHTML={{ __html: "" }} />;
 }
 
 function Charts({ model }: { model: CalibrationModel }) {
-  const { fit } = model.outcome.value;
+  const { outcome, data } = model.shown.value;
+  const { fit } = outcome;
   if (!fit) return null;
-  const { rows } = model.data.value;
+  const { rows } = data;
   const curve = calibrationCurve({ fit, lowSpeed: 0, highSpeed: Math.max(...rows.map((r) => r.angularSpeed)) * 1.05 });
   const flagged = new Set(fit.spikes.flagged);
   const g = (v: number) => fromSI(v, "gn");

@@ -13,7 +13,8 @@ import { decodeCalibrationRows, encodeCalibrationRows } from "../../calc/heading
 import { calibrationRowsToCsv, readingOfWrittenRows } from "../../calc/heading/calibration-text.ts";
 import type { CalibrationCsv } from "../../calc/heading/csv.ts";
 import { headingDriftForm as headingDrift } from "../../calc/heading/drift-inputs.ts";
-import { fieldMessage } from "../calc-ui/fields.ts";
+import { form as calibration } from "../../calc/calculators/calibration.ts";
+import { createFieldsModel, fieldMessage } from "../calc-ui/fields.ts";
 import { siteUrl } from "../calc-ui/site.ts";
 
 /** The fit settings the page reads from its fields. */
@@ -80,12 +81,15 @@ export function writtenRows(rows: readonly CalibrationRow[], comment?: string): 
 }
 
 /**
- * The page's state before any edit: the chapter's invented demo readings, fitted with the fields'
- * default settings as the page fits them (the rows as its link carries them, read back).
+ * The page's state before any edit: the chapter's invented demo readings, fitted as the page fits
+ * them: with the settings its fields start with (read from their text, as the page reads them) and
+ * the rows as its link carries them, read back.
  */
 export function calibrationStart(): CalibrationStart {
   const { text, reading } = writtenRows(demoCalibrationRows(), "Invented demo readings, not measured: reference speed and radial reading");
-  const settings = { spikeThreshold: calibrationFitInputs.spikeThreshold.default, confidence: calibrationFitInputs.confidence.default };
+  const values = createFieldsModel(calibration.inputs, "metric").values.value;
+  if (!values) throw new Error("The calibration fields' defaults do not read back as valid values.");
+  const settings = { spikeThreshold: values.spikeThreshold, confidence: values.confidence };
   const rows = decodeCalibrationRows(encodeCalibrationRows(reading.rows)).rows;
   return { text, reading, settings, outcome: evaluateCalibration(rows, settings, "metric") };
 }

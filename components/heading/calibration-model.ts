@@ -135,16 +135,19 @@ export function createCalibrationModel(start: CalibrationStart, options: Calibra
   });
 
   let lastOutcome: CalibrationOutcome = start.outcome;
-  /** The fit and its links, or why there is none; the start's outcome while nothing differs from it. */
+  /**
+   * The fit and its links, or why there is none: computed once the fitting code is here; before
+   * that, the start's outcome while nothing differs from the start (it is what the code computes).
+   */
   const outcome = computed((): CalibrationOutcome => {
     const values = fields.values.value;
     const live = engine.value;
-    if (values && !atStart.value && !live) {
+    if (values && !live && !atStart.value) {
       // The fitting code arrives in a moment and this recomputes; until then the last outcome stands.
       void loadEngine();
       return lastOutcome;
     }
-    lastOutcome = !values ? NO_OUTCOME : atStart.value || !live ? start.outcome : live.evaluateCalibration(data.value.rows, values, fields.system.value);
+    lastOutcome = !values ? NO_OUTCOME : live ? live.evaluateCalibration(data.value.rows, values, fields.system.value) : start.outcome;
     return lastOutcome;
   });
 
@@ -153,8 +156,20 @@ export function createCalibrationModel(start: CalibrationStart, options: Calibra
     () => linkRows.value !== null || (engine.value === null && fields.values.value !== null && !atStart.value) || (readText.value === null && !ownText.value),
   );
 
+  let lastShown = { outcome: start.outcome, data: data.value, parsed: start.reading };
+  /**
+   * What the results and charts show: the outcome with the rows and reading it was computed from.
+   * While code is loading, the last of these together (the outcome alone would be stale against
+   * newer rows).
+   */
+  const shown = computed(() => {
+    const now = outcome.value;
+    if (!pending.value) lastShown = { outcome: now, data: data.value, parsed: parsed.value };
+    return lastShown;
+  });
+
   /** The drift-budget page with the fitted radius and offset as its firmware values, or null without a usable fit. */
-  const handoff = computed(() => outcome.value.handoff?.[fields.system.value] ?? null);
+  const handoff = computed(() => shown.value.outcome.handoff?.[fields.system.value] ?? null);
 
   /** Shows rows in the text box as the model writes them (their reading comes with them). */
   function showRows(module: CalibrationEngine, rows: readonly CalibrationRow[]): void {
@@ -224,6 +239,7 @@ export function createCalibrationModel(start: CalibrationStart, options: Calibra
     data,
     outcome,
     pending,
+    shown,
     handoff,
     applyQuery,
     queryFor,

@@ -18,9 +18,9 @@ const METHOD_NAMES = {
 };
 
 export function Results({ model, id }: { model: CalibrationModel; id: string }) {
-  const { fit, error } = model.outcome.value;
-  const { lines, rows, dropped } = model.data.value;
-  const parsed = model.parsed.value;
+  const { outcome, data, parsed } = model.shown.value;
+  const { fit, error } = outcome;
+  const { lines, rows, dropped } = data;
   const system: UnitSystem = model.fields.system.value;
   const len = (v: number) => inSystem(v, "length", system, 5);
   const acc = (v: number) => inSystem(v, "acceleration", system, 3);

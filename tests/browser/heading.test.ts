@@ -192,6 +192,39 @@ describe("calibration from logged readings", () => {
     await again.context.close();
   });
 
+  it("opens with the figures the fitting code computes (the page's build-time data equals the live fit), and loads that code only once a field is used", async () => {
+    const { page, context, problems, requests } = await open("/chapters/calibration/");
+    const loaded = (chunk: string) => requests.some((url) => new RegExp(`/_astro/${chunk}\\.[\\w-]+\\.js$`).test(url));
+    // Everything the calculator shows: the results, the bar, the hand-over link, and each chart's drawing.
+    const shown = () =>
+      page.evaluate(() => {
+        const calc = document.getElementById("calibration-calculator")!;
+        return {
+          results: calc.querySelector(".calibration-results")!.textContent,
+          bar: calc.querySelector("[data-result-bar]")!.textContent,
+          handoff: calc.querySelector('[data-out="handoff"]')!.getAttribute("href"),
+          charts: [...calc.querySelectorAll(".chart")].map((chart) => chart.outerHTML),
+          text: (calc.querySelector("textarea") as HTMLTextAreaElement).value,
+        };
+      });
+    const opened = await shown();
+    expect(opened.results).toContain("12.703 mm");
+    expect(opened.charts).toHaveLength(2);
+    expect(loaded("calibration-engine")).toBe(false);
+    expect(loaded("calibration-results")).toBe(false);
+    // Edit the confidence level, then put it back: the figures are now the live computation's.
+    const field = "#calibration-calculator-confidence";
+    const level = await page.inputValue(field);
+    await page.fill(field, "90 %");
+    await expect.poll(() => out(page, "radius-ci")).not.toBe(await out(page, "radius-ci"));
+    expect(loaded("calibration-engine")).toBe(true);
+    expect(loaded("calibration-results")).toBe(true);
+    await page.fill(field, level);
+    await expect.poll(shown).toEqual(opened);
+    expect(problems).toEqual([]);
+    await context.close();
+  });
+
   it("reads a file locally with FileReader and sends it nowhere", async () => {
     const { page, context, requests } = await open("/chapters/calibration/");
     const sent: string[] = [];

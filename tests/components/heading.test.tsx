@@ -129,6 +129,39 @@ describe("calibration model", () => {
     expect(fit.radius * 1000).toBeCloseTo(12.703056937531846, 9); // pinned in tests/calc/calibration.test.ts
   });
 
+  it("comes with the demo's outcome exactly as the fitting code computes it, in a form that survives JSON (the page's props)", () => {
+    expect(JSON.parse(JSON.stringify(start))).toEqual(start);
+    const model = calibrationModel();
+    expect(model.outcome.value).toEqual(start.outcome);
+    expect(model.parsed.value).toEqual(parseCalibrationCsv(start.text));
+    expect(model.handoff.value).toBe(start.outcome.handoff!.metric);
+  });
+
+  it("shows the start's outcome without the fitting code, and loads that code on the first change of a setting", async () => {
+    const model = createCalibrationModel(start);
+    expect(model.outcome.value).toBe(start.outcome);
+    expect(model.pending.value).toBe(false);
+    model.fields.texts.spikeThreshold.value = "5";
+    expect(model.pending.value).toBe(true);
+    expect(model.outcome.value).toBe(start.outcome); // the last outcome stands for a moment
+    await model.loadEngine();
+    expect(model.pending.value).toBe(false);
+    expect(model.outcome.value.fit!.spikes.threshold).toBe(5);
+    model.fields.texts.spikeThreshold.value = "3.5";
+    expect(model.outcome.value).toEqual(start.outcome);
+  });
+
+  it("shows a link's readings once the fitting code that writes them into the text box is here, and links them meanwhile", async () => {
+    const model = createCalibrationModel(start);
+    model.applyQuery("?v=1&d=v1:600:5.4,1200:20.6,1800:46.3");
+    expect(model.pending.value).toBe(true);
+    expect(model.queryFor("")).toContain("d=v1:600:5.4,1200:20.6,1800:46.3");
+    await model.loadEngine();
+    expect(model.pending.value).toBe(false);
+    expect(model.text.value).toBe("speed (rpm),reading (gₙ)\n600,5.4\n1200,20.6\n1800,46.3\n");
+    expect(model.outcome.value.fit!.count).toBe(3);
+  });
+
   it("shows text it wrote itself without its reader, and loads the reader on the first edit", async () => {
     const model = createCalibrationModel(start);
     // the demo and a link's rows come with their reading: the same the reader gives
