@@ -11,15 +11,14 @@
  */
 import { useEffect, useMemo } from "preact/hooks";
 import { calibrationCurve, type CalibrationCurvePoint } from "../../calc/heading/calibration-inputs.ts";
-import { formatNumber, formatQuantity, fromSI, radPerSecondToRpm, type UnitSystem } from "../../calc/core/units.ts";
+import { formatNumber, fromSI, radPerSecondToRpm } from "../../calc/core/units.ts";
 import { Toolbar } from "../calc-ui/Toolbar.tsx";
-import { ResultBar } from "../calc-ui/ResultBar.tsx";
 import { Notices } from "../calc-ui/Notices.tsx";
 import { linkFor, syncWithUrl } from "../calc-ui/url-sync.ts";
 import { QuantityField } from "../calc-ui/QuantityField.tsx";
 import { signal } from "../calc-ui/reactive.ts";
 import { Chart } from "../calc-ui/Chart.tsx";
-import { ACCELERATION_UNITS, createCalibrationModel, SPEED_UNITS, type CalibrationModel } from "../heading/calibration-model.ts";
+import { ACCELERATION_UNITS, createCalibrationModel, nextTask, SPEED_UNITS, type CalibrationModel } from "../heading/calibration-model.ts";
 import type { CalibrationStart } from "../heading/calibration-engine.ts";
 
 /** The island name: this file's name. */
@@ -31,7 +30,8 @@ export type ResultsView = typeof import("../heading/calibration-results.tsx");
 const resultsView = signal<ResultsView | null>(null);
 let resultsLoading: Promise<void> | null = null;
 function loadResults(): Promise<void> {
-  resultsLoading ??= import("../heading/calibration-results.tsx").then((view) => {
+  resultsLoading ??= import("../heading/calibration-results.tsx").then(async (view) => {
+    await nextTask(); // drawn in a task apart from the one that evaluated the code
     resultsView.value = view;
   });
   return resultsLoading;
@@ -49,29 +49,15 @@ export interface CalibrationCalculatorProps {
   results?: ResultsView;
 }
 
-/** Largest file read, in bytes (a log of 500 readings is a few kilobytes). */
-const MAX_FILE_BYTES = 1_000_000;
-
 function DataField({ model, id }: { model: CalibrationModel; id: string }) {
   const error = model.outcome.value.error;
   const message = error && error.field === "rows" ? error.message : null;
   const fileError = model.fileError.value;
   const readFile = (event: Event) => {
-    const input = event.currentTarget as HTMLInputElement;
-    const file = input.files?.[0];
+    const file = (event.currentTarget as HTMLInputElement).files?.[0];
     if (!file) return;
     void model.loadTextReader();
-    if (file.size > MAX_FILE_BYTES) {
-      model.fileError.value = `That file is ${formatNumber(file.size / 1e6)} MB; this page reads files up to 1 MB.`;
-      return;
-    }
-    const reader = new FileReader();
-    reader.onload = () => {
-      model.fileError.value = null;
-      model.text.value = String(reader.result ?? "");
-    };
-    reader.onerror = () => (model.fileError.value = "The file could not be read.");
-    reader.readAsText(file);
+    void import("../heading/calibration-file.ts").then((m) => m.readReadingsFile(model, file));
   };
   return (
     <fieldset>
@@ -161,45 +147,28 @@ function Settings({ model, id }: { model: CalibrationModel; id: string }) {
   );
 }
 
-/** The fitted radius and offset, in view while the readings are edited. */
-function CalibrationBar({ model, id }: { model: CalibrationModel; id: string }) {
-  const { fit } = model.shown.value.outcome;
-  const system: UnitSystem = model.fields.system.value;
-  const resultsId = `${id}-results`;
-  if (!fit) return <ResultBar tone={null} figures={[]} resultsId={resultsId} missing="No fit yet: see the readings above." />;
-  if (!model.handoff.value) return <ResultBar tone="bad" reason="no usable radius" figures={[]} resultsId={resultsId} />;
-  return (
-    <ResultBar
-      tone={null}
-      resultsId={resultsId}
-      figures={[
-        // As the results show them (heading/format.ts inSystem; that module stays out of the page's first load).
-        { name: "radius", label: "Radius r̂", value: formatQuantity(fit.radius, "length", { system, significant: 5 }).text },
-        { name: "bias", label: "Offset b̂", value: formatQuantity(fit.bias, "acceleration", { system, significant: 3 }).text },
-      ]}
-    />
-  );
-}
-
 /**
- * The results: the HTML the page came with while nothing they show has changed, then the results
- * view, which loads on that first change (or as soon as the form is used).
+ * A part of the results view (the bar, the results): the HTML the page came with while nothing it
+ * shows has changed, then the view's own rendering, once the view has loaded on that first change
+ * (or as soon as the form is used).
  */
-function ResultsSlot({ model, id, given }: { model: CalibrationModel; id: string; given: ResultsView | undefined }) {
+function Later({ model, id, given, part }: { model: CalibrationModel; id: string; given: ResultsView | undefined; part: "Bar" | "Results" }) {
   const view = resultsView.value ?? given;
   const shown = model.shown.value;
+  const className = part === "Bar" ? "calibration-bar" : "calibration-results";
   if (view) {
+    const Part = view[part];
     return (
-      <div class="calibration-results">
-        <view.Results model={model} id={id} />
+      <div class={className}>
+        <Part model={model} id={id} />
       </div>
     );
   }
   const changed =
     model.pending.value || shown.outcome !== model.start.outcome || shown.parsed !== model.start.reading || model.fields.system.value !== "metric";
   if (changed) void loadResults();
-  // While hydrating, Preact leaves an element with inner HTML as it finds it: the server's results.
-  return <div class="calibration-results" aria-busy={changed ? "true" : undefined} dangerouslySetInnerHTML={{ __html: "" }} />;
+  // While hydrating, Preact leaves an element with inner HTML as it finds it: the server's HTML.
+  return <div class={className} aria-busy={changed && part === "Results" ? "true" : undefined} dangerouslySetInnerHTML={{ __html: "" }} />;
 }
 
 function Charts({ model }: { model: CalibrationModel }) {
@@ -287,8 +256,8 @@ export default function CalibrationCalculator({ start, id = "calibration-calcula
         <DataField model={model} id={id} />
         <Settings model={model} id={id} />
       </form>
-      <CalibrationBar model={model} id={id} />
-      <ResultsSlot model={model} id={id} given={results} />
+      <Later model={model} id={id} given={results} part="Bar" />
+      <Later model={model} id={id} given={results} part="Results" />
       <Charts model={model} />
     </section>
   );

@@ -41,6 +41,9 @@ const loadReader = (): Promise<TextReader> => import("../../calc/heading/csv.ts"
 /** Loads the fitting code on first use. */
 const loadEngineModule = (): Promise<CalibrationEngine> => import("./calibration-engine.ts");
 
+/** Resolves in a later task (lets the browser paint and handle input in between). */
+export const nextTask = (): Promise<void> => new Promise((resolve) => setTimeout(resolve, 0));
+
 /** No fit while a field holds no valid value (the field shows why). */
 const NO_OUTCOME: CalibrationOutcome = { fit: null, error: null, handoff: null };
 
@@ -73,7 +76,10 @@ export function createCalibrationModel(start: CalibrationStart, options: Calibra
   let engineLoading: Promise<void> | null = null;
   /** Loads the fitting code (once); resolves when `outcome` can compute. */
   function loadEngine(): Promise<void> {
-    engineLoading ??= loadEngineModule().then((module) => {
+    engineLoading ??= loadEngineModule().then(async (module) => {
+      // The code has just been evaluated: compute and redraw in a task of their own, so that
+      // neither makes that task longer.
+      await nextTask();
       batch(() => {
         engine.value = module;
         const rows = linkRows.value;

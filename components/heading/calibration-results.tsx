@@ -1,5 +1,5 @@
 /**
- * The calibration calculator's results: the verdict, the fitted radius and offset with their
+ * The calibration calculator's results: the bar with the fitted radius and offset, the verdict, the fitted radius and offset with their
  * uncertainties, the hand-over to the drift budget, every fit in a table, the readings flagged as
  * spikes and the lines skipped. The page comes with these rendered for its demo readings
  * (components/calculators/calibration.tsx keeps that HTML), so this view loads only when something
@@ -10,12 +10,32 @@ import { formatNumber, type UnitSystem } from "../../calc/core/units.ts";
 import type { CalibrationModel } from "./calibration-model.ts";
 import { inSystem, plain } from "./format.ts";
 import { DataTable, Empty, Outputs, Verdict } from "./ui.tsx";
+import { ResultBar } from "../calc-ui/ResultBar.tsx";
 
 const METHOD_NAMES = {
   "least-squares": "least squares, all readings",
   "least-squares-without-spikes": "least squares without the flagged readings",
   "theil-sen": "Theil–Sen (too few readings left for least squares)",
 };
+
+/** The fitted radius and offset, in view while the readings are edited. */
+export function Bar({ model, id }: { model: CalibrationModel; id: string }) {
+  const { fit } = model.shown.value.outcome;
+  const system: UnitSystem = model.fields.system.value;
+  const resultsId = `${id}-results`;
+  if (!fit) return <ResultBar tone={null} figures={[]} resultsId={resultsId} missing="No fit yet: see the readings above." />;
+  if (!model.handoff.value) return <ResultBar tone="bad" reason="no usable radius" figures={[]} resultsId={resultsId} />;
+  return (
+    <ResultBar
+      tone={null}
+      resultsId={resultsId}
+      figures={[
+        { name: "radius", label: "Radius r̂", value: inSystem(fit.radius, "length", system, 5) },
+        { name: "bias", label: "Offset b̂", value: inSystem(fit.bias, "acceleration", system, 3) },
+      ]}
+    />
+  );
+}
 
 export function Results({ model, id }: { model: CalibrationModel; id: string }) {
   const { outcome, data, parsed } = model.shown.value;
