@@ -6,7 +6,8 @@ import { figureOf } from "../core/check.ts";
 import { defineCalculator, defineForm, type ExtraSpec, type ValueProblem, type ValuesOf } from "../core/calculator.ts";
 import { formatNumber, formatQuantity } from "../core/units.ts";
 import { CALIBRATION_ROWS_MAX, decodeCalibrationRows, encodeCalibrationRows } from "../heading/calibration-rows.ts";
-import { type CalibrationRow, calibrationFitInputs, demoCalibrationRows, fitCalibration } from "../heading/calibration.ts";
+import { fitCalibration } from "../heading/calibration.ts";
+import { type CalibrationRow, calibrationFitInputs, demoCalibrationRows } from "../heading/calibration-inputs.ts";
 
 /** The readings: reference speed and radial reading per row, in a link as "v1:1200:31.5,…" (rpm:g). */
 const rows: ExtraSpec<CalibrationRow[]> = {

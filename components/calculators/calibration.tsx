@@ -3,58 +3,61 @@
  * from a local file, fitted to a = r·ω² + b by least squares, Theil–Sen and a Huber M-fit, with
  * uncertainties, spike flags, skipped lines, plots of the data, the fits and the residuals, and a
  * link that carries the fitted radius and offset into the drift budget.
+ *
+ * The page brings the outcome for its demo readings as data (the `start` prop, computed when the
+ * site is built), and its results already rendered: the fitting code and the results view load
+ * when something they show first changes (components/heading/calibration-model.ts,
+ * calibration-results.tsx); until then the results keep the HTML the page came with.
  */
 import { useEffect, useMemo } from "preact/hooks";
-import type { CalibrationCurvePoint } from "../../calc/heading/calibration.ts";
-import type { ConfidenceInterval } from "../../calc/numerics/line-fit.ts";
-import { formatNumber, fromSI, radPerSecondToRpm, type UnitSystem } from "../../calc/core/units.ts";
+import { calibrationCurve, type CalibrationCurvePoint } from "../../calc/heading/calibration-inputs.ts";
+import { formatNumber, fromSI, radPerSecondToRpm } from "../../calc/core/units.ts";
 import { Toolbar } from "../calc-ui/Toolbar.tsx";
-import { ResultBar } from "../calc-ui/ResultBar.tsx";
 import { Notices } from "../calc-ui/Notices.tsx";
 import { linkFor, syncWithUrl } from "../calc-ui/url-sync.ts";
 import { QuantityField } from "../calc-ui/QuantityField.tsx";
-import { ACCELERATION_UNITS, createCalibrationModel, SPEED_UNITS, type CalibrationModel } from "../heading/calibration-model.ts";
-import { inSystem, plain } from "../heading/format.ts";
-import { DataTable, Empty, Outputs, Verdict } from "../heading/ui.tsx";
+import { signal } from "../calc-ui/reactive.ts";
+import { Chart } from "../calc-ui/Chart.tsx";
+import { ACCELERATION_UNITS, createCalibrationModel, nextTask, SPEED_UNITS, type CalibrationModel } from "../heading/calibration-model.ts";
+import type { CalibrationStart } from "../heading/calibration-engine.ts";
 
 /** The island name: this file's name. */
 export const island = "calibration";
-import { Chart } from "../calc-ui/Chart.tsx";
 
-export interface CalibrationCalculatorProps {
-  /** Element id of the calculator (the link's anchor). */
-  id?: string;
+/** The results view (components/heading/calibration-results.tsx). */
+export type ResultsView = typeof import("../heading/calibration-results.tsx");
+/** The results view once loaded in the browser. */
+const resultsView = signal<ResultsView | null>(null);
+let resultsLoading: Promise<void> | null = null;
+function loadResults(): Promise<void> {
+  resultsLoading ??= import("../heading/calibration-results.tsx").then(async (view) => {
+    await nextTask(); // drawn in a task apart from the one that evaluated the code
+    resultsView.value = view;
+  });
+  return resultsLoading;
 }
 
-/** Largest file read, in bytes (a log of 500 readings is a few kilobytes). */
-const MAX_FILE_BYTES = 1_000_000;
-
-const METHOD_NAMES = {
-  "least-squares": "least squares, all readings",
-  "least-squares-without-spikes": "least squares without the flagged readings",
-  "theil-sen": "Theil–Sen (too few readings left for least squares)",
-};
+export interface CalibrationCalculatorProps {
+  /** The page's state before any edit, computed when the site is built (`calibrationStart`). */
+  start: CalibrationStart;
+  /** Element id of the calculator (the link's anchor). */
+  id?: string;
+  /**
+   * The results view, when the caller has it already: the build renders the page with it
+   * (components/heading/calibration-server.tsx); in the browser it loads on demand.
+   */
+  results?: ResultsView;
+}
 
 function DataField({ model, id }: { model: CalibrationModel; id: string }) {
   const error = model.outcome.value.error;
   const message = error && error.field === "rows" ? error.message : null;
   const fileError = model.fileError.value;
   const readFile = (event: Event) => {
-    const input = event.currentTarget as HTMLInputElement;
-    const file = input.files?.[0];
+    const file = (event.currentTarget as HTMLInputElement).files?.[0];
     if (!file) return;
     void model.loadTextReader();
-    if (file.size > MAX_FILE_BYTES) {
-      model.fileError.value = `That file is ${formatNumber(file.size / 1e6)} MB; this page reads files up to 1 MB.`;
-      return;
-    }
-    const reader = new FileReader();
-    reader.onload = () => {
-      model.fileError.value = null;
-      model.text.value = String(reader.result ?? "");
-    };
-    reader.onerror = () => (model.fileError.value = "The file could not be read.");
-    reader.readAsText(file);
+    void import("../heading/calibration-file.ts").then((m) => m.readReadingsFile(model, file));
   };
   return (
     <fieldset>
@@ -144,130 +147,36 @@ function Settings({ model, id }: { model: CalibrationModel; id: string }) {
   );
 }
 
-/** The fitted radius and offset, in view while the readings are edited. */
-function CalibrationBar({ model, id }: { model: CalibrationModel; id: string }) {
-  const { fit } = model.outcome.value;
-  const system: UnitSystem = model.fields.system.value;
-  const resultsId = `${id}-results`;
-  if (!fit) return <ResultBar tone={null} figures={[]} resultsId={resultsId} missing="No fit yet: see the readings above." />;
-  if (!model.handoff.value) return <ResultBar tone="bad" reason="no usable radius" figures={[]} resultsId={resultsId} />;
-  return (
-    <ResultBar
-      tone={null}
-      resultsId={resultsId}
-      figures={[
-        { name: "radius", label: "Radius r̂", value: inSystem(fit.radius, "length", system, 5) },
-        { name: "bias", label: "Offset b̂", value: inSystem(fit.bias, "acceleration", system, 3) },
-      ]}
-    />
-  );
-}
-
-function Results({ model, id }: { model: CalibrationModel; id: string }) {
-  const { fit, error } = model.outcome.value;
-  const { lines, rows, dropped } = model.data.value;
-  const parsed = model.parsed.value;
-  const system: UnitSystem = model.fields.system.value;
-  const len = (v: number) => inSystem(v, "length", system, 5);
-  const acc = (v: number) => inSystem(v, "acceleration", system, 3);
-  const interval = (i: ConfidenceInterval | null | undefined, f: (v: number) => string) => (i ? `${f(i.low)} to ${f(i.high)}` : "—");
-  const skipped = [
-    ...parsed.problems.map((p) => `Line ${p.line}${p.text ? ` (${p.text})` : ""}: ${p.reason}.`),
-    ...(dropped > 0 ? [`${dropped} readings after the first 500 are not used.`] : []),
-  ];
-  const skippedList = skipped.length ? (
-    <>
-      <h3>Lines skipped</h3>
-      <ul class="calc-list" data-out="skipped">
-        {skipped.map((s, i) => (
-          <li key={i}>{s}</li>
-        ))}
-      </ul>
-    </>
-  ) : null;
-  if (!fit) {
+/**
+ * A part of the results view (the bar, the results): the HTML the page came with while nothing it
+ * shows has changed, then the view's own rendering, once the view has loaded on that first change
+ * (or as soon as the form is used).
+ */
+function Later({ model, id, given, part }: { model: CalibrationModel; id: string; given: ResultsView | undefined; part: "Bar" | "Results" }) {
+  const view = resultsView.value ?? given;
+  const shown = model.shown.value;
+  const className = part === "Bar" ? "calibration-bar" : "calibration-results";
+  if (view) {
+    const Part = view[part];
     return (
-      <>
-        <Empty error={error && error.field === "rows" ? null : error} id={`${id}-results`} />
-        {skippedList}
-      </>
+      <div class={className}>
+        <Part model={model} id={id} />
+      </div>
     );
   }
-  const used = fit.method === "least-squares" ? fit.leastSquares : fit.method === "least-squares-without-spikes" ? fit.leastSquaresWithoutSpikes! : null;
-  const pct = `${plain(fit.confidence * 100)} %`;
-  const handoff = model.handoff.value;
-  const fits = [
-    ["ls", "Least squares, all readings", fit.leastSquares],
-    ["ls-clean", "Least squares without flagged", fit.leastSquaresWithoutSpikes],
-    ["ts", "Theil–Sen", fit.theilSen],
-    ["huber", `Huber M-fit (c = ${fit.huber.tuning})`, fit.huber],
-  ] as const;
-  return (
-    <div class="calc-results" id={`${id}-results`} aria-live="polite">
-      <Verdict tone={handoff ? "info" : "bad"} reason={handoff ? `radius ${len(fit.radius)}, offset ${acc(fit.bias)}` : "no usable radius"}>
-        {handoff
-          ? `From ${METHOD_NAMES[fit.method]}, ${rows.length - fit.spikes.flagged.length} of ${rows.length} readings; ${fit.spikes.flagged.length} flagged as spikes (residual beyond k = ${plain(fit.spikes.threshold)} robust σ, σ = 1.4826 × MAD).`
-          : "The fitted radius is 0 or less: check which column is speed and which is reading, and their units."}
-      </Verdict>
-      <Outputs
-        items={[
-          ["Radius r̂ for the firmware", "radius", len(fit.radius)],
-          ["Radius: standard error", "radius-se", used ? `± ${inSystem(used.slopeStdError, "length", system)}` : "—"],
-          [`Radius: ${pct} interval`, "radius-ci", interval(used ? used.slopeInterval : fit.theilSen.slopeInterval, len)],
-          ["Offset b̂ for the firmware", "bias", acc(fit.bias)],
-          ["Offset: standard error", "bias-se", used ? `± ${acc(used.interceptStdError)}` : "—"],
-          [`Offset: ${pct} interval`, "bias-ci", interval(used?.interceptInterval, acc)],
-          ["R² of the fit used", "r2", used?.rSquared == null ? "—" : formatNumber(used.rSquared, 5)],
-          ["Readings flagged as spikes", "flagged-count", String(fit.spikes.flagged.length)],
-        ]}
-      />
-      {handoff ? (
-        <a class="button handoff" href={handoff} data-out="handoff">
-          Use this calibration in the drift budget
-        </a>
-      ) : null}
-      <DataTable
-        id={`${id}-fits`}
-        caption={`Every fit, with ${pct} intervals where the method gives one`}
-        head={["Fit", "Radius", "Interval", "Offset", "Interval"]}
-      >
-        {fits.map(([key, name, line]) =>
-          line ? (
-            <tr key={key} data-out={`fit-${key}`}>
-              <th scope="row">{name}</th>
-              <td>{len(line.slope)}</td>
-              <td>{interval("slopeInterval" in line ? line.slopeInterval : null, len)}</td>
-              <td>{acc(line.intercept)}</td>
-              <td>{interval("interceptInterval" in line ? line.interceptInterval : null, acc)}</td>
-            </tr>
-          ) : null,
-        )}
-      </DataTable>
-      {fit.spikes.flagged.length ? (
-        <>
-          <h3>Readings flagged as spikes</h3>
-          <ul class="calc-list" data-out="flagged">
-            {fit.spikes.flagged.map((i) => (
-              <li key={i}>
-                Line {lines[i]}: {inSystem(rows[i]!.angularSpeed, "angularSpeed", system, 4)}, {acc(rows[i]!.acceleration)}; residual{" "}
-                {acc(fit.theilSen.residuals[i]!)}, {formatNumber(fit.spikes.robustDistance[i]!)} robust σ from the median.
-              </li>
-            ))}
-          </ul>
-        </>
-      ) : null}
-      {skippedList}
-      <p class="calc-note" data-out="read-notes">
-        Read as: {parsed.notes.join("; ")}.
-      </p>
-    </div>
-  );
+  const changed =
+    model.pending.value || shown.outcome !== model.start.outcome || shown.parsed !== model.start.reading || model.fields.system.value !== "metric";
+  if (changed) void loadResults();
+  // While hydrating, Preact leaves an element with inner HTML as it finds it: the server's HTML.
+  return <div class={className} aria-busy={changed && part === "Results" ? "true" : undefined} dangerouslySetInnerHTML={{ __html: "" }} />;
 }
 
 function Charts({ model }: { model: CalibrationModel }) {
-  const { fit, curve } = model.outcome.value;
-  if (!fit || !curve) return null;
-  const { rows } = model.data.value;
+  const { outcome, data } = model.shown.value;
+  const { fit } = outcome;
+  if (!fit) return null;
+  const { rows } = data;
+  const curve = calibrationCurve({ fit, lowSpeed: 0, highSpeed: Math.max(...rows.map((r) => r.angularSpeed)) * 1.05 });
   const flagged = new Set(fit.spikes.flagged);
   const g = (v: number) => fromSI(v, "gn");
   const point = (i: number, y: number) => [radPerSecondToRpm(rows[i]!.angularSpeed), g(y)] as const;
@@ -313,7 +222,7 @@ function Charts({ model }: { model: CalibrationModel }) {
           {
             from: g(fit.spikes.bounds.low),
             to: g(fit.spikes.bounds.high),
-            label: `Within k = ${plain(fit.spikes.threshold)} robust σ of the median`,
+            label: `Within k = ${Number(fit.spikes.threshold.toPrecision(4))} robust σ of the median`,
             className: "plot-safe",
           },
         ]}
@@ -327,19 +236,28 @@ function Charts({ model }: { model: CalibrationModel }) {
   );
 }
 
-export default function CalibrationCalculator({ id = "calibration-calculator" }: CalibrationCalculatorProps) {
-  const model = useMemo(() => createCalibrationModel(), []);
+export default function CalibrationCalculator({ start, id = "calibration-calculator", results }: CalibrationCalculatorProps) {
+  const model = useMemo(() => createCalibrationModel(start), [start]);
   useEffect(() => syncWithUrl(model), [model]);
   return (
     <section class="calc" id={id} aria-label="Calibration fit calculator">
       <Notices notices={model.fields.notices} />
       <Toolbar idPrefix={id} system={model.fields.system} onSystem={model.fields.setSystem} link={() => linkFor(model, id)} save={model.save} />
-      <form class="calc-form" onSubmit={(event) => event.preventDefault()} noValidate>
+      <form
+        class="calc-form"
+        onSubmit={(event) => event.preventDefault()}
+        onFocusIn={() => {
+          // About to edit: fetch the code an edit needs.
+          void model.loadEngine();
+          void loadResults();
+        }}
+        noValidate
+      >
         <DataField model={model} id={id} />
         <Settings model={model} id={id} />
       </form>
-      <CalibrationBar model={model} id={id} />
-      <Results model={model} id={id} />
+      <Later model={model} id={id} given={results} part="Bar" />
+      <Later model={model} id={id} given={results} part="Results" />
       <Charts model={model} />
     </section>
   );

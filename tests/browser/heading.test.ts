@@ -178,7 +178,8 @@ describe("calibration from logged readings", () => {
     await context.close();
     // the calibration permalink, opened fresh, gives the same numbers
     const again = await open(permalink);
-    expect(await out(again.page, "radius")).toBe(radius);
+    // readings other than the demo's: the fitting code loads with the page, then the figures follow
+    await expect.poll(() => out(again.page, "radius")).toBe(radius);
     expect(await out(again.page, "bias")).toBe(bias);
     expect(await out(again.page, "radius-se")).toBe(`± ${formatQuantity(fit.leastSquaresWithoutSpikes!.slopeStdError, "length").text}`);
     expect(await out(again.page, "flagged")).toContain("1500 rpm");
@@ -189,6 +190,39 @@ describe("calibration from logged readings", () => {
     await expect.poll(readerLoaded).toBe(true);
     expect(again.problems).toEqual([]);
     await again.context.close();
+  });
+
+  it("opens with the figures the fitting code computes (the page's build-time data equals the live fit), and loads that code only once a field is used", async () => {
+    const { page, context, problems, requests } = await open("/chapters/calibration/");
+    const loaded = (chunk: string) => requests.some((url) => new RegExp(`/_astro/${chunk}\\.[\\w-]+\\.js$`).test(url));
+    // Everything the calculator shows: the results, the bar, the hand-over link, and each chart's drawing.
+    const shown = () =>
+      page.evaluate(() => {
+        const calc = document.getElementById("calibration-calculator")!;
+        return {
+          results: calc.querySelector(".calibration-results")!.textContent,
+          bar: calc.querySelector("[data-result-bar]")!.textContent,
+          handoff: calc.querySelector('[data-out="handoff"]')!.getAttribute("href"),
+          charts: [...calc.querySelectorAll(".chart")].map((chart) => chart.outerHTML),
+          text: (calc.querySelector("textarea") as HTMLTextAreaElement).value,
+        };
+      });
+    const opened = await shown();
+    expect(opened.results).toContain("12.703 mm");
+    expect(opened.charts).toHaveLength(2);
+    expect(loaded("calibration-engine")).toBe(false);
+    expect(loaded("calibration-results")).toBe(false);
+    // Edit the confidence level, then put it back: the figures are now the live computation's.
+    const field = "#calibration-calculator-confidence";
+    const level = await page.inputValue(field);
+    await page.fill(field, "90 %");
+    await expect.poll(() => out(page, "radius-ci")).not.toBe(await out(page, "radius-ci"));
+    expect(loaded("calibration-engine")).toBe(true);
+    expect(loaded("calibration-results")).toBe(true);
+    await page.fill(field, level);
+    await expect.poll(shown).toEqual(opened);
+    expect(problems).toEqual([]);
+    await context.close();
   });
 
   it("reads a file locally with FileReader and sends it nowhere", async () => {
@@ -217,10 +251,11 @@ describe("calibration from logged readings", () => {
     expect(notices).toContain('reading 2 ("zz")');
     expect(notices).toContain("bare speeds");
     expect(await page.locator("main i").count()).toBe(0);
-    expect(await out(page, "flagged-count")).toBe("0");
+    await expect.poll(() => page.locator("#calibration-calculator-data").inputValue()).toContain("1800,46.3");
+    await expect.poll(() => out(page, "flagged-count")).toBe("0");
     const unknown = await open("/chapters/calibration/?v=1&d=v7:1:2");
     expect(await unknown.page.locator(".calc-notices").textContent()).toContain("unknown version 7");
-    expect(await unknown.page.locator("#calibration-calculator-data-error").textContent()).toContain("at least 3 readings at different speeds");
+    await expect.poll(() => unknown.page.locator("#calibration-calculator-data-error").textContent()).toContain("at least 3 readings at different speeds");
     expect([...problems, ...unknown.problems]).toEqual([]);
     await unknown.context.close();
     await context.close();

@@ -608,8 +608,10 @@ describe("rows as text for a URL", () => {
 });
 
 describe("source keys", () => {
-  it("names only keys that exist in the bibliography, in every doc comment of calc/heading/calibration.ts", () => {
-    const text = readFileSync(new URL("../../calc/heading/calibration.ts", import.meta.url), "utf8");
+  it("names only keys that exist in the bibliography, in every doc comment of calc/heading/calibration.ts and calibration-inputs.ts", () => {
+    const text = ["calibration.ts", "calibration-inputs.ts"]
+      .map((file) => readFileSync(new URL(`../../calc/heading/${file}`, import.meta.url), "utf8"))
+      .join("\n");
     const keys = [...text.matchAll(/Sources: ([^\n]+(?:\n \* [a-z0-9-]+(?:, [a-z0-9-]+)*\.?)?)/g)].flatMap((m) =>
       m[1]!
         .replace(/\n \* /g, " ")

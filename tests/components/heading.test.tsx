@@ -9,9 +9,16 @@ import { headingDriftInputs } from "../../calc/heading/drift-inputs.ts";
 import { STANDARD_GRAVITY } from "../../calc/core/constants.ts";
 import HeadingDriftCalculator, { createDriftModel } from "../../components/calculators/heading-drift.tsx";
 import HeadingTimingCalculator, { createTimingModel } from "../../components/calculators/heading-timing.tsx";
-import CalibrationCalculator from "../../components/calculators/calibration.tsx";
-import { createCalibrationModel, DEMO_TEXT } from "../../components/heading/calibration-model.ts";
+import CalibrationCalculator from "../../components/heading/calibration-server.tsx";
+import { createCalibrationModel } from "../../components/heading/calibration-model.ts";
+import * as engine from "../../components/heading/calibration-engine.ts";
 import { parseCalibrationCsv } from "../../calc/heading/csv.ts";
+
+/** The calibration page's start, as the chapter computes it when the site is built. */
+const start = engine.calibrationStart();
+const DEMO_TEXT = start.text;
+/** A calibration model with its reader and fitting code at hand (the server, a test). */
+const calibrationModel = () => createCalibrationModel(start, { reader: parseCalibrationCsv, engine });
 
 const DEG = Math.PI / 180;
 
@@ -113,7 +120,7 @@ describe("timing and smoothing model", () => {
 
 describe("calibration model", () => {
   it("fits the invented demo readings and flags the knock at 2000 rpm on line 10", () => {
-    const model = createCalibrationModel("metric", parseCalibrationCsv);
+    const model = calibrationModel();
     expect(model.text.value).toBe(DEMO_TEXT);
     const fit = model.outcome.value.fit!;
     expect(fit.spikes.flagged).toEqual([7]);
@@ -122,8 +129,41 @@ describe("calibration model", () => {
     expect(fit.radius * 1000).toBeCloseTo(12.703056937531846, 9); // pinned in tests/calc/calibration.test.ts
   });
 
+  it("comes with the demo's outcome exactly as the fitting code computes it, in a form that survives JSON (the page's props)", () => {
+    expect(JSON.parse(JSON.stringify(start))).toEqual(start);
+    const model = calibrationModel();
+    expect(model.outcome.value).toEqual(start.outcome);
+    expect(model.parsed.value).toEqual(parseCalibrationCsv(start.text));
+    expect(model.handoff.value).toBe(start.outcome.handoff!.metric);
+  });
+
+  it("shows the start's outcome without the fitting code, and loads that code on the first change of a setting", async () => {
+    const model = createCalibrationModel(start);
+    expect(model.outcome.value).toBe(start.outcome);
+    expect(model.pending.value).toBe(false);
+    model.fields.texts.spikeThreshold.value = "5";
+    expect(model.pending.value).toBe(true);
+    expect(model.outcome.value).toBe(start.outcome); // the last outcome stands for a moment
+    await model.loadEngine();
+    expect(model.pending.value).toBe(false);
+    expect(model.outcome.value.fit!.spikes.threshold).toBe(5);
+    model.fields.texts.spikeThreshold.value = "3.5";
+    expect(model.outcome.value).toEqual(start.outcome);
+  });
+
+  it("shows a link's readings once the fitting code that writes them into the text box is here, and links them meanwhile", async () => {
+    const model = createCalibrationModel(start);
+    model.applyQuery("?v=1&d=v1:600:5.4,1200:20.6,1800:46.3");
+    expect(model.pending.value).toBe(true);
+    expect(model.queryFor("")).toContain("d=v1:600:5.4,1200:20.6,1800:46.3");
+    await model.loadEngine();
+    expect(model.pending.value).toBe(false);
+    expect(model.text.value).toBe("speed (rpm),reading (gₙ)\n600,5.4\n1200,20.6\n1800,46.3\n");
+    expect(model.outcome.value.fit!.count).toBe(3);
+  });
+
   it("shows text it wrote itself without its reader, and loads the reader on the first edit", async () => {
-    const model = createCalibrationModel();
+    const model = createCalibrationModel(start);
     // the demo and a link's rows come with their reading: the same the reader gives
     expect(model.parsed.value).toEqual(parseCalibrationCsv(DEMO_TEXT));
     const before = model.outcome.value.fit!.radius;
@@ -135,7 +175,7 @@ describe("calibration model", () => {
   });
 
   it("lists a malformed line by number and reason, and fits the rest", () => {
-    const model = createCalibrationModel("metric", parseCalibrationCsv);
+    const model = calibrationModel();
     model.text.value = "rpm,g\n600,5.4\nsix hundred,7\n1200,20.6\n1800,46.1\n";
     expect(model.parsed.value.problems.map((p) => p.line)).toEqual([3]);
     expect(model.parsed.value.problems[0]!.reason).toContain("speed");
@@ -143,17 +183,17 @@ describe("calibration model", () => {
   });
 
   it("says how many readings the fit needs when there are too few", () => {
-    const model = createCalibrationModel("metric", parseCalibrationCsv);
+    const model = calibrationModel();
     model.text.value = "1200,20\n1800,46\n";
     expect(model.outcome.value.error).toEqual({ field: "rows", message: "The fit needs at least 3 readings at different speeds; the text gives 2 usable." });
   });
 
   it("writes the rows into a readable, versioned link and reads back exactly the same fit", () => {
-    const model = createCalibrationModel("metric", parseCalibrationCsv);
+    const model = calibrationModel();
     const query = model.queryFor("");
     expect(query).toContain("d=v1:600:5.37,800:9.18,");
     expect(query).toMatch(/^v=1&/);
-    const again = createCalibrationModel("metric", parseCalibrationCsv);
+    const again = calibrationModel();
     again.text.value = "";
     again.applyQuery(`?${query}`);
     expect(again.fields.notices.value).toEqual([]);
@@ -162,19 +202,19 @@ describe("calibration model", () => {
   });
 
   it("explains a malformed or foreign link and never throws", () => {
-    const model = createCalibrationModel("metric", parseCalibrationCsv);
+    const model = calibrationModel();
     model.applyQuery(`?v=1&d=v9:1:2&su=furlongs`);
     expect(model.fields.notices.value.join(" ")).toContain("unknown version 9");
     expect(model.fields.notices.value.join(" ")).toContain("bare speeds");
     expect(model.outcome.value.fit).toBeNull();
-    const other = createCalibrationModel("metric", parseCalibrationCsv);
+    const other = calibrationModel();
     other.applyQuery(`?d=${encodeURIComponent("v1:600:5.37,abc,1200:20.6,1800:46.3,<b>")}`);
     expect(other.fields.notices.value.some((n) => n.includes('reading 2 ("abc")'))).toBe(true);
     expect(other.outcome.value.fit!.count).toBe(3);
   });
 
   it("hands the fitted radius and offset to the drift page under the keys that page reads", () => {
-    const model = createCalibrationModel("metric", parseCalibrationCsv);
+    const model = calibrationModel();
     const link = new URL(model.handoff.value!, "https://example.org/");
     expect(link.pathname).toBe("/chapters/heading-drift/");
     // the drift page's own keys, each value written so that it reads back exactly
@@ -185,7 +225,7 @@ describe("calibration model", () => {
   });
 
   it("hands over in inches when the page is in US units", () => {
-    const model = createCalibrationModel("metric", parseCalibrationCsv);
+    const model = calibrationModel();
     model.fields.setSystem("us");
     const link = new URL(model.handoff.value!, "https://example.org/");
     expect(link.searchParams.get("u")).toBe("us");
@@ -193,7 +233,7 @@ describe("calibration model", () => {
   });
 
   it("reads bare numbers in the units chosen, and keeps those in the link", () => {
-    const model = createCalibrationModel("metric", parseCalibrationCsv);
+    const model = calibrationModel();
     model.speedUnit.value = "rad/s";
     model.accelerationUnit.value = "m/s2";
     model.text.value = "100,127\n200,508\n300,1143\n";
@@ -209,7 +249,7 @@ describe("server render (the path Astro islands take)", () => {
   const pages = {
     drift: renderToString(<HeadingDriftCalculator id="hd" />),
     timing: renderToString(<HeadingTimingCalculator id="ht" />),
-    calibration: renderToString(<CalibrationCalculator id="hc" />),
+    calibration: renderToString(<CalibrationCalculator id="hc" start={start} />),
   };
 
   it.each(Object.entries(pages))("%s: labels every input, select and text box", (_, html) => {

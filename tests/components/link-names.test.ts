@@ -13,6 +13,7 @@ import { parseLayout } from "../../calc/mass/layout-text.ts";
 import { readMountingPoints } from "../../calc/mass/points-text.ts";
 import { createRimModel } from "../../components/calculators/rims.tsx";
 import { createCalibrationModel } from "../../components/heading/calibration-model.ts";
+import { calibrationStart } from "../../components/heading/calibration-engine.ts";
 import { createMassModel } from "../../components/mass/model.ts";
 
 const NAMES = ["toString", "__proto__", "constructor", "hasOwnProperty", "valueOf"];
@@ -88,7 +89,7 @@ describe.each(NAMES)("a link that says %s", (name) => {
   });
 
   it("as the calibration page's units for bare numbers is refused with a notice", () => {
-    const model = createCalibrationModel();
+    const model = createCalibrationModel(calibrationStart());
     const before = [model.speedUnit.value, model.accelerationUnit.value];
     model.applyQuery(link({ su: name, au: name }));
     expect([model.speedUnit.value, model.accelerationUnit.value]).toEqual(before);

@@ -25,7 +25,8 @@ const fastenerDefaults = fastenerDescriptor.run(fastenerInitial(fastenerDescript
 import RimCalculator from "../../components/calculators/rims.tsx";
 import HeadingDriftCalculator, { createDriftModel } from "../../components/calculators/heading-drift.tsx";
 import HeadingTimingCalculator from "../../components/calculators/heading-timing.tsx";
-import CalibrationCalculator from "../../components/calculators/calibration.tsx";
+import CalibrationCalculator from "../../components/heading/calibration-server.tsx";
+import { calibrationStart } from "../../components/heading/calibration-engine.ts";
 import MassLayoutCalculator from "../../components/calculators/mass.tsx";
 import SpinUpCalculator from "../../components/calculators/spin-up.tsx";
 import BuildSheet from "../../components/design/BuildSheet.tsx";
@@ -48,7 +49,7 @@ const WIDGETS: [string, () => ComponentChild][] = [
   ["rims", () => <RimCalculator id="w" materials={rimMaterialChoices()} />],
   ["heading-drift", () => <HeadingDriftCalculator id="w" />],
   ["heading-timing", () => <HeadingTimingCalculator id="w" />],
-  ["calibration", () => <CalibrationCalculator id="w" />],
+  ["calibration", () => <CalibrationCalculator id="w" start={calibrationStart()} />],
   ["mass", () => <MassLayoutCalculator id="w" layout={encodeLayout(demoRobotParts())} />],
   // The chapter passes the worked example's weapon, computed at build time, as the default design's result.
   ["spin-up", () => <SpinUpCalculator id="w" prepared={drivetrainWorkedExample().weapon} />],
@@ -121,7 +122,7 @@ describe("verdict words: Holds, Marginal, Fails or For information, then the rea
     const { PairSection } = await import("../../components/heading/opposed-pair.tsx");
     expect(verdictLeads(renderToString(<PairSection model={pair} id="d" budget={undefined} />))).toEqual(["For information: the pair cancels the offset."]);
     expect(verdictLeads(renderToString(<HeadingTimingCalculator id="t" />))[1]).toMatch(/^For information: \d.* of delay\.$/);
-    expect(verdictLeads(renderToString(<CalibrationCalculator id="c" />))[0]).toMatch(/^For information: radius .*, offset .*\.$/);
+    expect(verdictLeads(renderToString(<CalibrationCalculator id="c" start={calibrationStart()} />))[0]).toMatch(/^For information: radius .*, offset .*\.$/);
   });
 
   it("judges the balance grade the way the build sheet does, with the grade as the reason", () => {
