@@ -103,6 +103,8 @@ export async function renderApiDocs() {
     parts.push(`## ${FOLDERS[folder] ?? folder} (\`calc/${folder}/\`)`, "");
     for (const [file, rows] of sections) parts.push(`### \`calc/${file}\``, "", "| Function | What it does | Returns |", "|---|---|---|", ...rows, "");
   }
+  // Node reads and shows every quantity kind (a page registers only its own).
+  await import("../calc/core/all-units.ts");
   const { CALCULATORS } = await import("../calc/design/calculators.ts");
   parts.push(
     "## Calculators and their link keys",

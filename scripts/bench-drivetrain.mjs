@@ -12,6 +12,8 @@
  * worst case found: the slowest single run over inputs anywhere in their declared ranges.
  */
 import { ms, printTimings } from "./bench-timing.mjs";
+// Node reads and shows every quantity kind (a page registers only its own).
+import "../calc/core/all-units.ts";
 import { CalcInputError } from "../calc/core/errors.ts";
 import { drivetrainInputs } from "../calc/drivetrain/inputs.ts";
 import { MAX_TRIALS } from "../calc/drivetrain/model.ts";

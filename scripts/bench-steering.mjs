@@ -11,6 +11,8 @@
  * shared machine vary; the median and the 90th percentile are printed, with the load average.
  */
 import { printTimings } from "./bench-timing.mjs";
+// Node reads and shows every quantity kind (a page registers only its own).
+import "../calc/core/all-units.ts";
 import { DEMO_STEERING_SPINNER, simulateSteering, steeringPath, sweepSteering } from "../calc/steering/index.ts";
 
 const steps = (r) => `${r.solver.steps} steps, ${r.solver.evaluations} evaluations, ${r.pulseEdges} pulse edges, ${r.revolutions.length} revolutions`;

@@ -79,6 +79,8 @@ console.log("\ncalculator recompute (one input changed, result and plot data rea
 // The page's model as the widget builds it (components/calc-ui/model.ts over the placement
 // descriptor), without the component: the plot's points are the calc curve the widget draws.
 const { createCalculatorModel } = await import("../components/calc-ui/model.ts");
+// Node reads and shows every quantity kind (a page registers only its own).
+await import("../calc/core/all-units.ts");
 const { default: placement } = await import("../calc/calculators/placement.ts");
 const { centripetalAccelerationCurve } = await import("../calc/rotation/rotation.ts");
 const model = createCalculatorModel(placement);
