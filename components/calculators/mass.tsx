@@ -7,7 +7,7 @@
 import type { ComponentChildren } from "preact";
 import { signal, useSignal } from "../calc-ui/reactive.ts";
 import { useEffect, useMemo } from "preact/hooks";
-import { BALANCE_GRADES, standardBalanceGrade } from "../../calc/mass/balance.ts";
+import { BALANCE_GRADES, standardBalanceGrade } from "../../calc/mass/balance-grades.ts";
 import type { MirrorAxis } from "../../calc/mass/editing.ts";
 import { formatNumber, formatQuantity, fromSI, type QuantityKind, type UnitId, type UnitSystem } from "../../calc/core/units.ts";
 import { QuantityField } from "../calc-ui/QuantityField.tsx";
@@ -16,6 +16,7 @@ import { ResultBar } from "../calc-ui/ResultBar.tsx";
 import { Verdict } from "../calc-ui/Verdict.tsx";
 import { Notices } from "../calc-ui/Notices.tsx";
 import { syncWithUrl } from "../calc-ui/url-sync.ts";
+import type { Worked } from "../mass/compute.ts";
 import { createMassModel, type MassError, type MassModel, type ModeKey, type Snapshot } from "../mass/model.ts";
 import { partFields, SHAPE_NAMES, type PartModel } from "../mass/parts.ts";
 import { focusLater } from "../mass/focus.ts";
@@ -33,6 +34,8 @@ export interface MassLayoutCalculatorProps {
   id?: string;
   /** The starting parts list, in calc/'s layout text ("v1~…"). */
   layout?: string;
+  /** The starting layout's result, worked out at build time (the chapter passes it: model.ts `startingResult`). */
+  initial?: Worked | null;
 }
 
 const MODE_NAMES: Record<ModeKey, string> = { r: "Mass at a radius", m: "Radius for a mass", p: "Best mounting point" };
@@ -114,8 +117,8 @@ function PartCard({ model, part, index, id, error, q }: { model: MassModel; part
   );
 }
 
-export default function MassLayoutCalculator({ id = massCalculator.anchor, layout = "" }: MassLayoutCalculatorProps) {
-  const model = useMemo(() => createMassModel("metric", layout), []);
+export default function MassLayoutCalculator({ id = massCalculator.anchor, layout = "", initial = null }: MassLayoutCalculatorProps) {
+  const model = useMemo(() => createMassModel("metric", layout, initial), []);
   useEffect(() => syncWithUrl(model), [model]);
   const { fields } = model;
   const system: UnitSystem = fields.system.value;
@@ -144,13 +147,20 @@ export default function MassLayoutCalculator({ id = massCalculator.anchor, layou
   const pointsError = model.mounting.value.error;
   const parts = model.parts.value;
   const applied = model.applied.value && parts.some((p) => p.key === model.applied.value!.key) ? model.applied.value : null;
+  const waiting = model.waiting.value
+    ? model.computeFailed.value
+      ? "The layout's arithmetic could not be loaded: reload the page to try again."
+      : "Working out the layout…"
+    : null;
   const empty = (
     <p class="calc-results--empty">
-      {error && error.part === null && error.field === null
-        ? error.message
-        : parts.length
-          ? "Results appear when every field holds a valid value."
-          : "Add a part to see results."}
+      {waiting
+        ? waiting
+        : error && error.part === null && error.field === null
+          ? error.message
+          : parts.length
+            ? "Results appear when every field holds a valid value."
+            : "Add a part to see results."}
     </p>
   );
   const snap = (s: Snapshot) => [q(s.offset, "length"), `${mm(s.grade)} (${s.met || "over G 4000"})`, `${q(s.drift, "angle")} per rev`];
@@ -537,7 +547,7 @@ export default function MassLayoutCalculator({ id = massCalculator.anchor, layou
             tone={null}
             figures={[]}
             resultsId={`${id}-results`}
-            missing={parts.length ? "No result yet: correct the marked field." : "Add a part to see results."}
+            missing={waiting ?? (parts.length ? "No result yet: correct the marked field." : "Add a part to see results.")}
           />
         )}
       </form>
