@@ -8,10 +8,15 @@ import { layoutDrawing } from "../../calc/mass/drawing.ts";
 
 type MassBalanceInput = Parameters<typeof massBalance>[0];
 
-/** The balance, the counterweight plan for the chosen question, and the top view of a layout. */
+/**
+ * The balance, the counterweight plan for the chosen question, and the top view of a layout. The
+ * balance leaves out its suggested fix (the build sheet's card uses it; the widget has its own
+ * counterweight questions), which would only make the page's starting result longer.
+ */
 export function workOut(input: MassBalanceInput, mode: CounterweightMode) {
-  const balance = massBalance(input);
-  return { balance, plan: counterweightPlan({ input, balance, mode }), drawing: layoutDrawing(input.parts) };
+  const full = massBalance(input);
+  const { fix: _fix, ...balance } = full;
+  return { balance, plan: counterweightPlan({ input, balance: full, mode }), drawing: layoutDrawing(input.parts) };
 }
 
 /** What `workOut` gives: the widget's result. */
