@@ -7,44 +7,14 @@
 import { CalcInputError, requireInRange, requirePositive, requireRelation } from "../core/errors.ts";
 import { requireFiniteResult, requireInputObject } from "../core/spec-check.ts";
 export { requireChoice, type ChoiceOption } from "../core/choices.ts";
+import { DEFAULT_SAFETY_THRESHOLDS } from "./threshold-inputs.ts";
+export { DEFAULT_SAFETY_THRESHOLDS, safetyThresholdInputs } from "./threshold-inputs.ts";
 
 // ---------------------------------------------------------------------------------------------
 // Safety factor, verdict and limit speed (shared by the bolt and the rim checks).
 
 /** How a checked part stands: below `failBelow` it fails, below `marginalBelow` the margin is thin. */
 export type LoadVerdict = "holds" | "marginal" | "fails";
-
-/** Default verdict thresholds on the safety factor [-] (safety-factor-practice). */
-export const DEFAULT_SAFETY_THRESHOLDS = { failBelow: 1, marginalBelow: 2 } as const;
-
-/**
- * The two verdict thresholds every load check declares, worded for what it checks ("bolt",
- * "part"): fails below `failBelow`, marginal below `marginalBelow` (safety-factor-practice).
- */
-export function safetyThresholdInputs(subject: string) {
-  return {
-    failBelow: {
-      label: "Fails below",
-      kind: "fraction",
-      min: 1,
-      max: 10,
-      default: DEFAULT_SAFETY_THRESHOLDS.failBelow,
-      unit: { metric: "frac", us: "frac" },
-      urlKey: "fail",
-      help: `Safety factor under which the ${subject} is called a failure.`,
-    },
-    marginalBelow: {
-      label: "Marginal below",
-      kind: "fraction",
-      min: 1,
-      max: 20,
-      default: DEFAULT_SAFETY_THRESHOLDS.marginalBelow,
-      unit: { metric: "frac", us: "frac" },
-      urlKey: "thin",
-      help: `Safety factor under which the ${subject} is called marginal.`,
-    },
-  } as const;
-}
 
 /**
  * Safety factor of a stressed part: how many times the working stress fits into the strength

@@ -1,6 +1,7 @@
 import { defineInputs } from "../core/inputs.ts";
 import { SPINNING_PART_INPUTS } from "./spinning-part.ts";
-import { safetyThresholdInputs, type ChoiceOption, type LoadVerdict } from "./common.ts";
+import type { ChoiceOption, LoadVerdict } from "./common.ts";
+import { safetyThresholdInputs } from "./threshold-inputs.ts";
 import { MATERIAL_DENSITIES, MATERIAL_IDS, type MaterialId } from "../materials/densities.ts";
 import type { PartLoad } from "../rotation/rotation.ts";
 import type { FastenerGrade, FastenerGradeId, FastenerSizeId, FastenerThread } from "./inch-fasteners.ts";

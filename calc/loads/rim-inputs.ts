@@ -6,7 +6,8 @@
 import { defineInputs } from "../core/inputs.ts";
 import { rpmToRadPerSecond } from "../core/units.ts";
 import type { MaterialId } from "../materials/densities.ts";
-import { type ChoiceOption, safetyThresholdInputs } from "./common.ts";
+import type { ChoiceOption } from "./common.ts";
+import { safetyThresholdInputs } from "./threshold-inputs.ts";
 
 /** Shapes the rim check knows. */
 export const RIM_SHAPE_OPTIONS = [

@@ -2,6 +2,7 @@
  * The standard balance quality grades of ISO 21940-11 as data, apart from the balance arithmetic
  * (calc/mass/balance.ts) so that a form listing the grades does not carry it.
  */
+import { requireNonNegative } from "../core/errors.ts";
 
 /** One standard balance quality grade. */
 export interface BalanceGrade {
@@ -19,3 +20,23 @@ export const BALANCE_GRADES: readonly BalanceGrade[] = [0.4, 1, 2.5, 6.3, 16, 40
   label: `G ${mmPerS}`,
   value: mmPerS / 1000,
 }));
+
+/**
+ * The standard balance quality grade a value names, if any: the entry of `BALANCE_GRADES` equal to
+ * it to within a relative 1e-9, so that 6.3 mm/s typed or read back from a link finds G 6.3
+ * (iso-21940-11 Table 1).
+ *
+ * Formula: $|G_k - G| \le 10^{-9}\,G_k$
+ *
+ * @param grade G [m/s], 0 or more
+ * @returns the standard grade, or null when the value is none of them
+ *
+ * @example
+ * standardBalanceGrade(0.0063) // → { label: "G 6.3", value: 0.0063 }; standardBalanceGrade(0.005) // → null
+ * Sources: iso-21940-11.
+ */
+export function standardBalanceGrade(grade: number): BalanceGrade | null {
+  requireNonNegative("grade", grade, "m/s");
+  // Equality up to the rounding of a unit conversion, against iso-21940-11's list.
+  return BALANCE_GRADES.find((g) => Math.abs(g.value - grade) <= 1e-9 * g.value) ?? null;
+}

@@ -50,7 +50,7 @@ export function staticUnbalance(input: { totalMass: number; offset: number; angu
   });
 }
 
-export { BALANCE_GRADES, type BalanceGrade } from "./balance-grades.ts";
+export { BALANCE_GRADES, type BalanceGrade, standardBalanceGrade } from "./balance-grades.ts";
 import { BALANCE_GRADES, type BalanceGrade } from "./balance-grades.ts";
 
 /**
@@ -72,26 +72,6 @@ export function equivalentBalanceGrade(input: { offset: number; angularSpeed: nu
   requireNonNegative("offset", offset, "m");
   requireNonNegative("angularSpeed", angularSpeed, "rad/s");
   return requireFiniteResult(offset * angularSpeed, "balance grade", { offset: [offset, "m"], angularSpeed: [angularSpeed, "rad/s"] });
-}
-
-/**
- * The standard balance quality grade a value names, if any: the entry of `BALANCE_GRADES` equal to
- * it to within a relative 1e-9, so that 6.3 mm/s typed or read back from a link finds G 6.3
- * (iso-21940-11 Table 1).
- *
- * Formula: $|G_k - G| \le 10^{-9}\,G_k$
- *
- * @param grade G [m/s], 0 or more
- * @returns the standard grade, or null when the value is none of them
- *
- * @example
- * standardBalanceGrade(0.0063) // → { label: "G 6.3", value: 0.0063 }; standardBalanceGrade(0.005) // → null
- * Sources: iso-21940-11.
- */
-export function standardBalanceGrade(grade: number): BalanceGrade | null {
-  requireNonNegative("grade", grade, "m/s");
-  // Equality up to the rounding of a unit conversion, against iso-21940-11's list.
-  return BALANCE_GRADES.find((g) => Math.abs(g.value - grade) <= 1e-9 * g.value) ?? null;
 }
 
 /**

@@ -206,7 +206,7 @@ function FastenerBar({ model, id }: { model: FastenerModel; id: string }) {
       resultsId={resultsId}
       figures={[
         { name: "sf", label: "Safety factor", value: formatNumber(result.safetyFactor) },
-        { name: "governs", label: "Governs", value: SHORT_MODE[result.governs] },
+        { name: "governs", label: "Governs", value: result.governs },
       ]}
     />
   );
@@ -214,8 +214,6 @@ function FastenerBar({ model, id }: { model: FastenerModel; id: string }) {
 
 /** The menu name of the tapped part's material. */
 const partName = (threadIn: string) => FASTENER_CHOICES.threadIn.options.find((o) => o.value === threadIn)?.label ?? threadIn;
-
-const SHORT_MODE: Record<JointModeName, string> = { friction: "friction", shear: "shear", bending: "bending", tension: "tension", stripping: "stripping" };
 
 /** Each mode's safety factor, the governing one marked. */
 function ModeTable({ r }: { r: BoltedJointCheck }) {

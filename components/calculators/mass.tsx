@@ -5,12 +5,10 @@
  * true radius. Explanations live in the chapter; this shows numbers.
  */
 import type { ComponentChildren } from "preact";
-import { useSignal } from "../calc-ui/reactive.ts";
+import { signal, useSignal } from "../calc-ui/reactive.ts";
 import { useEffect, useMemo } from "preact/hooks";
-import { BALANCE_GRADES, standardBalanceGrade } from "../../calc/mass/balance.ts";
-import { PART_SHAPE_KINDS } from "../../calc/mass/parts.ts";
+import { BALANCE_GRADES, standardBalanceGrade } from "../../calc/mass/balance-grades.ts";
 import type { MirrorAxis } from "../../calc/mass/editing.ts";
-import { MATERIAL_DENSITIES } from "../../calc/materials/densities.ts";
 import { formatNumber, formatQuantity, fromSI, type QuantityKind, type UnitId, type UnitSystem } from "../../calc/core/units.ts";
 import { QuantityField } from "../calc-ui/QuantityField.tsx";
 import { Toolbar } from "../calc-ui/Toolbar.tsx";
@@ -18,8 +16,10 @@ import { ResultBar } from "../calc-ui/ResultBar.tsx";
 import { Verdict } from "../calc-ui/Verdict.tsx";
 import { Notices } from "../calc-ui/Notices.tsx";
 import { syncWithUrl } from "../calc-ui/url-sync.ts";
+import type { Worked } from "../mass/compute.ts";
 import { createMassModel, type MassError, type MassModel, type ModeKey, type Snapshot } from "../mass/model.ts";
-import { needsGivenMass, partFields, PART_INPUTS, type PartModel } from "../mass/parts.ts";
+import { partFields, SHAPE_NAMES, type PartModel } from "../mass/parts.ts";
+import { focusLater } from "../mass/focus.ts";
 import { TopView } from "../mass/TopView.tsx";
 import { linkFor } from "../../calc/core/calculator.ts";
 import { form as massCalculator } from "../../calc/calculators/mass.ts";
@@ -34,27 +34,31 @@ export interface MassLayoutCalculatorProps {
   id?: string;
   /** The starting parts list, in calc/'s layout text ("v1~…"). */
   layout?: string;
+  /** The starting layout's result, worked out at build time (the chapter passes it: model.ts `startingResult`). */
+  initial?: Worked | null;
 }
 
-const SHAPE_NAMES = {
-  point: "Small part (point)",
-  disk: "Disk",
-  ring: "Thin ring",
-  annulus: "Thick ring (annulus)",
-  plate: "Plate",
-  rod: "Rod",
-  cylinder: "Cylinder (upright)",
-  lyingCylinder: "Cylinder (lying)",
-  custom: "Custom (own inertia)",
-};
 const MODE_NAMES: Record<ModeKey, string> = { r: "Mass at a radius", m: "Radius for a mass", p: "Best mounting point" };
-const AXES: [MirrorAxis, string][] = [
-  ["y", "the y axis (x → −x)"],
-  ["x", "the x axis (y → −y)"],
-  ["origin", "the centre (half turn)"],
-];
+// An open card's fields and actions (components/mass/PartEditor.tsx) load when the builder first opens
+// a card, or a card opens on an error; closed cards show only their summary line.
+const editor = signal<typeof import("../mass/PartEditor.tsx") | null>(null);
+const editorFailed = signal(false);
+let loadingEditor: Promise<void> | null = null;
 
-const focusLater = (id: string) => requestAnimationFrame(() => document.getElementById(id)?.focus());
+/** Loads the part editor (once); resolves when it can render. */
+export function loadPartEditor(): Promise<void> {
+  loadingEditor ??= import("../mass/PartEditor.tsx").then(
+    (module) => {
+      editor.value = module;
+      editorFailed.value = false;
+    },
+    () => {
+      loadingEditor = null;
+      editorFailed.value = true;
+    },
+  );
+  return loadingEditor;
+}
 
 type Fmt = (value: number, kind: QuantityKind, unit?: UnitId, significant?: number) => string;
 
@@ -72,15 +76,6 @@ function Outs({ rows }: { rows: [ComponentChildren, string, string][] }) {
   );
 }
 
-/** A part's action button; its accessible name says which part it acts on ("Remove: Left wheel"). */
-function Act({ label, part, ...rest }: { label: string; part: string; id?: string; disabled?: boolean; onClick: () => void }) {
-  return (
-    <button type="button" class="button button--quiet" aria-label={`${label}: ${part}`} {...rest}>
-      {label}
-    </button>
-  );
-}
-
 function PartCard({ model, part, index, id, error, q }: { model: MassModel; part: PartModel; index: number; id: string; error: MassError | null; q: Fmt }) {
   const axis = useSignal<MirrorAxis>("y");
   const pid = `${id}-p${part.key}`;
@@ -90,14 +85,11 @@ function PartCard({ model, part, index, id, error, q }: { model: MassModel; part
   const mine = error && error.part === index ? error : null;
   const bad = mine || names.some((n) => !fields.readings[n].value.ok);
   const open = part.open.value || !!bad;
-  const count = model.parts.value.length;
   const name = part.name.value;
   const row = model.outcome.value?.balance?.layout.parts[index];
-  const move = (by: number) => {
-    model.move(index, by);
-    const edge = index + by === 0 || index + by === count - 1;
-    focusLater(`${pid}-${edge ? (by < 0 ? "down" : "up") : by < 0 ? "up" : "down"}`);
-  };
+  useEffect(() => {
+    if (open) void loadPartEditor();
+  }, [open]);
   return (
     <li>
       <details open={open} onToggle={(e) => (part.open.value = (e.currentTarget as HTMLDetailsElement).open)}>
@@ -112,85 +104,21 @@ function PartCard({ model, part, index, id, error, q }: { model: MassModel; part
         </summary>
         {/* A closed card renders no fields: the page stays light with many parts. */}
         {open ? (
-          <div class="mass-card">
-            <div class="mass-grid">
-              <div class="field mass-wide">
-                <label for={`${pid}-name`}>Name</label>
-                <input id={`${pid}-name`} type="text" maxLength={60} value={name} onInput={(e) => (part.name.value = e.currentTarget.value)} />
-              </div>
-              <div class="field mass-wide">
-                <label for={`${pid}-shape`}>Shape</label>
-                <select id={`${pid}-shape`} value={shape} onChange={(e) => (part.shape.value = e.currentTarget.value as typeof shape)}>
-                  {PART_SHAPE_KINDS.map((k) => (
-                    <option key={k} value={k}>
-                      {SHAPE_NAMES[k]}
-                    </option>
-                  ))}
-                </select>
-              </div>
-              {needsGivenMass(shape) ? null : (
-                <div class="field mass-wide">
-                  <label for={`${pid}-src`}>Mass from</label>
-                  <select id={`${pid}-src`} value={part.source.value} onChange={(e) => (part.source.value = e.currentTarget.value as typeof part.source.value)}>
-                    <option value="given">Weighed mass</option>
-                    {Object.values(MATERIAL_DENSITIES).map((m) => (
-                      <option key={m.id} value={m.id}>
-                        {m.menuName}
-                      </option>
-                    ))}
-                  </select>
-                </div>
-              )}
-              {names.map((n) => (
-                <QuantityField
-                  key={n}
-                  idPrefix={pid}
-                  name={n}
-                  spec={PART_INPUTS[n]}
-                  text={fields.texts[n]}
-                  reading={fields.readings[n]}
-                  system={fields.system.value}
-                  extraError={mine && mine.field === n ? mine.message : null}
-                />
-              ))}
-            </div>
-            {mine && !mine.field ? <p class="field-error">{mine.message}</p> : null}
-            <div class="mass-actions">
-              <Act part={name} label="Move up" id={`${pid}-up`} disabled={index === 0} onClick={() => move(-1)} />
-              <Act part={name} label="Move down" id={`${pid}-down`} disabled={index === count - 1} onClick={() => move(1)} />
-              <Act part={name} label="Duplicate" onClick={() => model.duplicate(index)} />
-              <Act
-                part={name}
-                label="Remove"
-                onClick={() => {
-                  model.remove(index);
-                  focusLater(`${id}-add`);
-                }}
-              />
-            </div>
-            <div class="mass-actions">
-              <div class="field">
-                <label for={`${pid}-axis`}>Mirror across</label>
-                <select id={`${pid}-axis`} value={axis.value} onChange={(e) => (axis.value = e.currentTarget.value as MirrorAxis)}>
-                  {AXES.map(([value, label]) => (
-                    <option key={value} value={value}>
-                      {label}
-                    </option>
-                  ))}
-                </select>
-              </div>
-              <Act part={name} label="Mirror" disabled={!!bad} onClick={() => model.mirror(index, axis.value, false)} />
-              <Act part={name} label="Add mirrored copy" disabled={!!bad} onClick={() => model.mirror(index, axis.value, true)} />
-            </div>
-          </div>
+          editor.value ? (
+            <editor.value.PartEditor model={model} part={part} index={index} id={id} pid={pid} names={names} mine={mine} bad={!!bad} axis={axis} />
+          ) : (
+            <p class="mass-card">
+              {editorFailed.value ? "The part's fields could not be loaded: reload the page to try again." : "Loading the part's fields…"}
+            </p>
+          )
         ) : null}
       </details>
     </li>
   );
 }
 
-export default function MassLayoutCalculator({ id = massCalculator.anchor, layout = "" }: MassLayoutCalculatorProps) {
-  const model = useMemo(() => createMassModel("metric", layout), []);
+export default function MassLayoutCalculator({ id = massCalculator.anchor, layout = "", initial = null }: MassLayoutCalculatorProps) {
+  const model = useMemo(() => createMassModel("metric", layout, initial), []);
   useEffect(() => syncWithUrl(model), [model]);
   const { fields } = model;
   const system: UnitSystem = fields.system.value;
@@ -219,13 +147,20 @@ export default function MassLayoutCalculator({ id = massCalculator.anchor, layou
   const pointsError = model.mounting.value.error;
   const parts = model.parts.value;
   const applied = model.applied.value && parts.some((p) => p.key === model.applied.value!.key) ? model.applied.value : null;
+  const waiting = model.waiting.value
+    ? model.computeFailed.value
+      ? "The layout's arithmetic could not be loaded: reload the page to try again."
+      : "Working out the layout…"
+    : null;
   const empty = (
     <p class="calc-results--empty">
-      {error && error.part === null && error.field === null
-        ? error.message
-        : parts.length
-          ? "Results appear when every field holds a valid value."
-          : "Add a part to see results."}
+      {waiting
+        ? waiting
+        : error && error.part === null && error.field === null
+          ? error.message
+          : parts.length
+            ? "Results appear when every field holds a valid value."
+            : "Add a part to see results."}
     </p>
   );
   const snap = (s: Snapshot) => [q(s.offset, "length"), `${mm(s.grade)} (${s.met || "over G 4000"})`, `${q(s.drift, "angle")} per rev`];
@@ -461,7 +396,15 @@ export default function MassLayoutCalculator({ id = massCalculator.anchor, layou
               <PartCard key={part.key} model={model} part={part} index={index} id={id} error={error} q={q} />
             ))}
           </ol>
-          <button type="button" class="button" id={`${id}-add`} onClick={() => focusLater(`${id}-p${model.add().key}-name`)}>
+          <button
+            type="button"
+            class="button"
+            id={`${id}-add`}
+            onClick={() => {
+              const key = model.add().key;
+              void loadPartEditor().then(() => focusLater(`${id}-p${key}-name`));
+            }}
+          >
             Add a part
           </button>{" "}
           {parts.length ? (
@@ -604,7 +547,7 @@ export default function MassLayoutCalculator({ id = massCalculator.anchor, layou
             tone={null}
             figures={[]}
             resultsId={`${id}-results`}
-            missing={parts.length ? "No result yet: correct the marked field." : "Add a part to see results."}
+            missing={waiting ?? (parts.length ? "No result yet: correct the marked field." : "Add a part to see results.")}
           />
         )}
       </form>

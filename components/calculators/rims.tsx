@@ -19,7 +19,8 @@ import { batch, computed, signal } from "../calc-ui/reactive.ts";
 import { createCalculatorModel } from "../calc-ui/model.ts";
 import { quoteForNotice } from "../../calc/core/permalink.ts";
 import { ChoiceField } from "../loads/ChoiceField.tsx";
-import { axis, Outputs, q, rpm, VERDICT_TONE, verdictRule } from "../loads/format.tsx";
+import { Outputs, q, VERDICT_TONE, verdictRule } from "../loads/format.tsx";
+import { axis, rpm } from "../loads/chart-format.ts";
 import { Verdict } from "../calc-ui/Verdict.tsx";
 
 /** The island name: this file's name. */

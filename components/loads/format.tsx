@@ -1,27 +1,19 @@
 /**
- * Formatting shared by the two loads calculators: quantities in the user's system, speeds in rpm,
- * stresses for the chart axis, the verdict's tone and the grid of results. Formatting and conversion
- * only; no physics.
+ * Formatting shared by the two loads calculators: quantities in the user's system, areas, the
+ * verdict's tone and the grid of results (the rim calculator's speeds and chart axes are in
+ * ./chart-format.ts). Formatting only; no physics.
  */
 import { INCH } from "../../calc/core/constants.ts";
 import type { ComponentChildren } from "preact";
 import type { LoadVerdict } from "../../calc/loads/common.ts";
-import { displayUnit, formatNumber, formatQuantity, fromSI, radPerSecondToRpm, type QuantityKind, type UnitSystem, unitDef } from "../../calc/core/units.ts";
+import { formatNumber, formatQuantity, type QuantityKind, type UnitSystem } from "../../calc/core/units.ts";
 
 export const q = (value: number, kind: QuantityKind, system: UnitSystem) => formatQuantity(value, kind, { system }).text;
-
-export const rpm = (angularSpeed: number) => `${formatNumber(radPerSecondToRpm(angularSpeed))} rpm`;
 
 /** An area in mm² (metric) or in² (US). */
 export function area(valueSI: number, system: UnitSystem): string {
   const inch = INCH;
   return system === "us" ? `${formatNumber(valueSI / (inch * inch))} in²` : `${formatNumber(valueSI * 1e6)} mm²`;
-}
-
-/** The unit symbol and converter for an axis of `kind` in `system`. */
-export function axis(kind: QuantityKind, system: UnitSystem): { symbol: string; of: (valueSI: number) => number } {
-  const unit = displayUnit(kind, system);
-  return { symbol: unitDef(unit).symbol, of: (valueSI: number) => fromSI(valueSI, unit) };
 }
 
 export const VERDICT_TONE: Record<LoadVerdict, "ok" | "warn" | "bad"> = { holds: "ok", marginal: "warn", fails: "bad" };

@@ -5,15 +5,14 @@
  * List edits, mirroring, applying and undoing a counterweight, and the permalink. No DOM.
  */
 import { batch, computed, signal } from "../calc-ui/reactive.ts";
+import type { Worked } from "./compute.ts";
 import { CalcInputError } from "../../calc/core/errors.ts";
 import type { InputSpec } from "../../calc/core/inputs.ts";
-import { counterweightPlan, massBalance } from "../../calc/mass/mass-balance.ts";
 import { encodeLayout, parseLayout } from "../../calc/mass/layout-text.ts";
 import { readMountingPoints } from "../../calc/mass/points-text.ts";
 import { form as massCalculator } from "../../calc/calculators/mass.ts";
 import { readLink, writeLink } from "../../calc/core/calculator.ts";
 import { saveToDesign } from "../calc-ui/save.ts";
-import { layoutDrawing } from "../../calc/mass/drawing.ts";
 import { mirrorPart, type MirrorAxis } from "../../calc/mass/editing.ts";
 import type { LayoutPart } from "../../calc/mass/parts.ts";
 import type { MountingPoint } from "../../calc/mass/counterweight.ts";
@@ -48,6 +47,39 @@ function mapError(error: unknown, system: { value: UnitSystem }): MassError {
   return { part: null, ...fieldMessage(error, massCalculator.inputs, system.value) };
 }
 
+type Compute = typeof import("./compute.ts");
+
+// The arithmetic (calc/mass/mass-balance.ts and the top view's geometry, ./compute.ts) loads on the
+// first change that needs a new result: the starting layout's result comes with the page, worked out
+// at build time. Once loaded it serves every mass calculator on the page.
+const loadedCompute = signal<Compute | null>(null);
+const computeFailed = signal(false);
+let loadingCompute: Promise<void> | null = null;
+
+/** Loads the arithmetic (once); resolves when results can be worked out. */
+export function loadMassCompute(): Promise<void> {
+  loadingCompute ??= import("./compute.ts").then(
+    (module) => {
+      loadedCompute.value = module;
+      computeFailed.value = false;
+    },
+    () => {
+      loadingCompute = null;
+      computeFailed.value = true;
+    },
+  );
+  return loadingCompute;
+}
+
+/**
+ * The starting layout's result as the widget shows it before any change, worked out with the
+ * arithmetic handed in (the chapter does this at build time and passes it to the widget).
+ */
+export function startingResult(layoutText: string, module: Compute): Worked | null {
+  const o = createMassModel("metric", layoutText, null, module).outcome.value;
+  return o && !o.error ? { balance: o.balance, plan: o.plan, drawing: o.drawing } : null;
+}
+
 /** Balance figures shown before and after a counterweight. */
 export interface Snapshot {
   offset: number;
@@ -56,7 +88,11 @@ export interface Snapshot {
   drift: number;
 }
 
-export function createMassModel(system: UnitSystem = "metric", layoutText = "") {
+/**
+ * The model. `initial` is the starting state's result (computed at build time): it answers until
+ * something changes, and then the arithmetic is loaded. `module` hands the arithmetic in directly.
+ */
+export function createMassModel(system: UnitSystem = "metric", layoutText = "", initial: Worked | null = null, module?: Compute) {
   const fields = createFieldsModel(massCalculator.inputs, system);
   const parts = signal(parseLayout(layoutText).parts.map((p) => createPart(system, p, false, true)));
   const mode = signal<ModeKey>("r");
@@ -73,16 +109,35 @@ export function createMassModel(system: UnitSystem = "metric", layoutText = "") 
     return list.every(Boolean) ? (list as LayoutPart[]) : null;
   });
   const mounting = computed(() => readPoints(points.value, fields.system.value));
-  const outcome = computed(() => {
+  /** The input for calc/ and a key that tells whether it is still the starting one. */
+  const request = computed(() => {
     const values = fields.values.value;
     const list = layout.value;
     if (!values || !list || list.length === 0) return null;
     const input = { ...values, parts: list, candidates: mounting.value.points ?? undefined };
+    return { input, key: JSON.stringify([input, mode.value]) };
+  });
+  const startKey = request.value?.key;
+  const fresh = (r: { key: string }) => initial !== null && r.key === startKey;
+  /** True while a result waits for the arithmetic to load (or it could not). */
+  const waiting = computed(() => {
+    const r = request.value;
+    return r !== null && !module && loadedCompute.value === null && !fresh(r);
+  });
+  const outcome = computed(() => {
+    const r = request.value;
+    if (!r) return null;
+    const { input } = r;
+    const c = module ?? loadedCompute.value;
+    if (!c) {
+      if (fresh(r)) return { input, ...initial!, error: null };
+      if (typeof window !== "undefined") void loadMassCompute();
+      return null;
+    }
     try {
-      const balance = massBalance(input);
-      return { input, balance, plan: counterweightPlan({ input, balance, mode: MODES[mode.value] }), drawing: layoutDrawing(list), error: null };
+      return { input, ...c.workOut(input, MODES[mode.value]), error: null };
     } catch (error) {
-      return { error: mapError(error, fields.system) };
+      return { error: mapError(error, fields.system), input: undefined, balance: undefined, plan: undefined, drawing: undefined };
     }
   });
 
@@ -249,6 +304,8 @@ export function createMassModel(system: UnitSystem = "metric", layoutText = "") 
     layout,
     mounting,
     outcome,
+    waiting,
+    computeFailed,
     add,
     duplicate,
     remove,

@@ -15,6 +15,19 @@ export { PART_INPUTS };
 
 export type PartField = keyof typeof PART_INPUTS;
 
+/** Each shape's name in the editor. */
+export const SHAPE_NAMES: Record<PartShapeKind, string> = {
+  point: "Small part (point)",
+  disk: "Disk",
+  ring: "Thin ring",
+  annulus: "Thick ring (annulus)",
+  plate: "Plate",
+  rod: "Rod",
+  cylinder: "Cylinder (upright)",
+  lyingCylinder: "Cylinder (lying)",
+  custom: "Custom (own inertia)",
+};
+
 /** The dimensions each shape needs. */
 const SHAPE_FIELDS: Record<PartShapeKind, PartField[]> = {
   point: [],

@@ -225,6 +225,39 @@ describe("mass layout in the browser", () => {
     await context.close();
   });
 
+  it("comes with the starting result, and loads the part editor when a card opens and the arithmetic on the first change", async () => {
+    const { page, context, problems, requests } = await open(PAGE);
+    const loaded = (name: string) => requests.some((url) => new RegExp(`/_astro/${name}\\.[\\w-]+\\.js$`).test(url));
+    // The demo's figures are on the page without the arithmetic or the editor.
+    expect(await out(page, "total-mass")).toBe("1.40 kg");
+    const force = await out(page, "unbalance-force");
+    expect(loaded("compute")).toBe(false);
+    expect(loaded("mass-balance")).toBe(false);
+    expect(loaded("PartEditor")).toBe(false);
+    await card(page, 0).locator("summary").click();
+    await expect.poll(() => input(card(page, 0), "name").count()).toBe(1);
+    expect(loaded("PartEditor")).toBe(true);
+    expect(loaded("compute")).toBe(false);
+    // Twice the speed: four times the rotating force, worked out by the arithmetic loaded now.
+    await page.fill("#mass-calculator-spinSpeed", "4800 rpm");
+    await expect.poll(() => out(page, "unbalance-force")).not.toBe(force);
+    expect(loaded("compute")).toBe(true);
+    expect(await out(page, "total-mass")).toBe("1.40 kg");
+    expect(problems).toEqual([]);
+    await context.close();
+  });
+
+  it("works out a permalink's own layout straight away, and opens its cards", async () => {
+    const { page, context, problems } = await open(`${PAGE}?v=1&l=v1~pt_a_10_0_0_100~pt_b_0_20_0_50&rpm=3000rpm`);
+    await expect.poll(() => out(page, "total-mass")).toBe("150 g");
+    await card(page, 1).locator("summary").click();
+    await expect.poll(() => input(card(page, 1), "name").inputValue()).toBe("b");
+    await input(card(page, 1), "mass").fill("100 g");
+    await expect.poll(() => out(page, "total-mass")).toBe("200 g");
+    expect(problems).toEqual([]);
+    await context.close();
+  });
+
   it("starts empty from the demo layout, the link following, and puts the parts back with undo; a negligible couple is one line", async () => {
     const { page, context, problems } = await open(PAGE);
     const count = () => page.locator(".mass-parts details").count();

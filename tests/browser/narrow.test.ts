@@ -19,6 +19,8 @@ describe("calculators on a 390 px screen", () => {
       for (const details of document.querySelectorAll<HTMLDetailsElement>(".calc details")) details.open = true;
     });
     await page.waitForTimeout(100);
+    // An opened part card loads its fields (components/mass/PartEditor.tsx) on first opening.
+    await page.waitForFunction(() => !document.querySelector(".calc")?.textContent?.includes("Loading the part's fields"));
     const cut = await page.evaluate(() => {
       const canvas = document.createElement("canvas").getContext("2d")!;
       const problems: string[] = [];

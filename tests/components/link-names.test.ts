@@ -4,7 +4,7 @@
  * `valueOf`): a lookup in a plain object (`value in OPTIONS`, `TABLE[value]`) finds those on the
  * object's prototype and would take them for a known value.
  */
-import { describe, expect, it } from "vitest";
+import { beforeAll, describe, expect, it } from "vitest";
 import { readLink, valuesOf } from "../../calc/core/calculator.ts";
 import { readSpinUpView } from "../../calc/calculators/spin-up.ts";
 import { CALCULATORS } from "../../calc/design/calculators.ts";
@@ -14,7 +14,10 @@ import { readMountingPoints } from "../../calc/mass/points-text.ts";
 import { createRimModel } from "../../components/calculators/rims.tsx";
 import { createCalibrationModel } from "../../components/heading/calibration-model.ts";
 import { calibrationStart } from "../../components/heading/calibration-engine.ts";
-import { createMassModel } from "../../components/mass/model.ts";
+import { createMassModel, loadMassCompute } from "../../components/mass/model.ts";
+
+// The mass layout works out a link's layout once its arithmetic has loaded (the page loads it for a link).
+beforeAll(() => loadMassCompute());
 
 const NAMES = ["toString", "__proto__", "constructor", "hasOwnProperty", "valueOf"];
 const link = (params: Record<string, string>) => `?${new URLSearchParams({ v: "1", ...params })}`;

@@ -1,7 +1,8 @@
-import { describe, expect, it, vi } from "vitest";
+import { beforeAll, describe, expect, it, vi } from "vitest";
 import { demoRobotBalance, demoRobotParts } from "../../calc/mass/demo.ts";
 import { encodeLayout, parseLayout } from "../../calc/mass/layout-text.ts";
-import { createMassModel, readPoints } from "../../components/mass/model.ts";
+import * as arithmetic from "../../components/mass/compute.ts";
+import { createMassModel, loadMassCompute, readPoints, startingResult } from "../../components/mass/model.ts";
 import { createPart, partFields, readPart } from "../../components/mass/parts.ts";
 
 const DEMO = encodeLayout(demoRobotParts());
@@ -18,7 +19,37 @@ function rel(actual: number, expected: number) {
   return Math.abs(actual - expected) / Math.abs(expected);
 }
 
+// Runs first: the arithmetic is not loaded yet (it loads once per page and then serves every model).
+describe("mass-layout model before its arithmetic loads", () => {
+  it("shows the starting result handed in and waits, without a result, once something changes", () => {
+    const initial = startingResult(DEMO, arithmetic)!;
+    expect(initial.balance.gradeMet?.label).toBe("G 630");
+    const model = createMassModel("metric", DEMO, initial);
+    expect(model.waiting.value).toBe(false);
+    expect(resultOf(model).balance).toEqual(initial.balance);
+    const start = model.fields.texts.spinSpeed.value;
+    model.fields.texts.spinSpeed.value = "3000 rpm";
+    expect(model.waiting.value).toBe(true);
+    expect(model.outcome.value).toBeNull();
+    // Back to the starting input: the starting result answers again.
+    model.fields.texts.spinSpeed.value = start;
+    expect(model.waiting.value).toBe(false);
+    expect(resultOf(model).balance).toEqual(initial.balance);
+    // Without a starting result, a layout waits from the start; an empty list needs nothing.
+    expect(createMassModel("metric", DEMO).waiting.value).toBe(true);
+    expect(createMassModel("metric", "").waiting.value).toBe(false);
+  });
+
+  it("works out the same starting result at build time as after loading", async () => {
+    const initial = startingResult(DEMO, arithmetic);
+    await loadMassCompute();
+    expect(resultOf(createMassModel("metric", DEMO))).toMatchObject(JSON.parse(JSON.stringify(initial)));
+  });
+});
+
 describe("mass-layout model", () => {
+  beforeAll(() => loadMassCompute());
+
   it("computes the invented demo robot from its layout text with the default inputs", () => {
     const model = createMassModel("metric", DEMO);
     expect(model.parts.value).toHaveLength(9);

@@ -10,7 +10,7 @@
  * a DOM.
  */
 import { preparedDemo } from "../support/prepared-demo.ts";
-import { afterEach, describe, expect, it } from "vitest";
+import { afterEach, beforeAll, describe, expect, it } from "vitest";
 import type { ComponentChild, VNode } from "preact";
 import { render } from "preact";
 import { act } from "preact/test-utils";
@@ -35,12 +35,17 @@ import { createSpinUpModel } from "../../components/drivetrain/model.ts";
 import { Results } from "../../components/drivetrain/Results.tsx";
 import { demoRobotParts } from "../../calc/mass/demo.ts";
 import { encodeLayout } from "../../calc/mass/layout-text.ts";
+import * as massArithmetic from "../../components/mass/compute.ts";
+import { loadMassCompute, startingResult } from "../../components/mass/model.ts";
 import { rimMaterialChoices } from "../../calc/loads/index.ts";
 import { DEMO_WEAPON, drivetrainWorkedExample } from "../../calc/drivetrain/demo.ts";
 import * as simulation from "../../calc/drivetrain/simulate.ts";
 import { readField } from "../../calc/core/inputs.ts";
 import { accelerometerPlacementInputs } from "../../calc/rotation/rotation.ts";
 import { STANDARD_GRAVITY } from "../../calc/core/constants.ts";
+
+// The mass layout's arithmetic loads on a page's first change; here it is loaded for the changes below.
+beforeAll(() => loadMassCompute());
 
 /** Every calculator of the handbook, as its chapter places it. */
 const WIDGETS: [string, () => ComponentChild][] = [
@@ -50,7 +55,10 @@ const WIDGETS: [string, () => ComponentChild][] = [
   ["heading-drift", () => <HeadingDriftCalculator id="w" />],
   ["heading-timing", () => <HeadingTimingCalculator id="w" />],
   ["calibration", () => <CalibrationCalculator id="w" start={calibrationStart()} />],
-  ["mass", () => <MassLayoutCalculator id="w" layout={encodeLayout(demoRobotParts())} />],
+  [
+    "mass",
+    () => <MassLayoutCalculator id="w" layout={encodeLayout(demoRobotParts())} initial={startingResult(encodeLayout(demoRobotParts()), massArithmetic)} />,
+  ],
   // The chapter passes the worked example's weapon, computed at build time, as the default design's result.
   ["spin-up", () => <SpinUpCalculator id="w" prepared={drivetrainWorkedExample().weapon} />],
 ];
