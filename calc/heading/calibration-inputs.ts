@@ -8,7 +8,6 @@ import { CalcInputError, requireFinite, requireInRange, requireNonNegative, requ
 import { defineInputs } from "../core/inputs.ts";
 import { toSI } from "../core/units.ts";
 import { requireFiniteFields, requireInputObject } from "../core/spec-check.ts";
-import type { CalibrationFit } from "./calibration.ts";
 
 /** One calibration reading: a reference spin rate and the radial acceleration read at it. */
 export interface CalibrationRow {
@@ -91,6 +90,15 @@ export interface CalibrationCurvePoint {
   recommended: number;
 }
 
+/** The lines a calibration fit gives (a `CalibrationFit` of calibration.ts is one): what `calibrationCurve` plots. */
+export interface CurveLines {
+  leastSquares: { slope: number; intercept: number };
+  theilSen: { slope: number; intercept: number };
+  /** The recommended line's slope [m] and intercept [m/s²]. */
+  radius: number;
+  bias: number;
+}
+
 /**
  * The fitted calibration curves over a speed range, for a plot over the readings
  * (openstax-college-physics, a = r ω² + b).
@@ -109,7 +117,7 @@ export interface CalibrationCurvePoint {
  *
  * Sources: openstax-college-physics.
  */
-export function calibrationCurve(input: { fit: CalibrationFit; lowSpeed: number; highSpeed: number; points?: number }): CalibrationCurvePoint[] {
+export function calibrationCurve(input: { fit: CurveLines; lowSpeed: number; highSpeed: number; points?: number }): CalibrationCurvePoint[] {
   const { fit, lowSpeed, highSpeed, points = 61 } = requireInputObject(input);
   requireInputObject(fit, "fit");
   requireNonNegative("lowSpeed", lowSpeed, "rad/s");
