@@ -67,12 +67,14 @@ const KIB = 1024;
  * WebAssembly and code, and the calculators' fields for search, 232 KiB). Then the build sheet's own
  * copies of the forms' declarations (scripts/site/sheet-copies.mjs: its checks' physics apart,
  * chapter pages unchanged; +8.7 KB) and each calculator page's unit tables in its own entry (only the
- * kinds it names; the tables repeat across entries, +13 KB): measured 720.8 KiB
- * (648.2 KiB as brotli); ceilings 735 and 661 KiB.
+ * kinds it names; the tables repeat across entries, +13 KB): measured 720.8 KiB (648.2 KiB as
+ * brotli). Then the spin-up, calibration and mass-layout pages' code split into what runs at load and
+ * what loads on use (more, smaller files: 69 → 82 scripts): 737.4 KiB (661.6 KiB as brotli); ceilings
+ * 752 and 675 KiB.
  */
-const PRECACHE_GZIP_CEILING = 735 * KIB;
+const PRECACHE_GZIP_CEILING = 752 * KIB;
 /** The same download as brotli: what a browser gets when the server sends the .br copies. */
-const PRECACHE_BROTLI_CEILING = 661 * KIB;
+const PRECACHE_BROTLI_CEILING = 675 * KIB;
 
 describe("compressed copies", () => {
   const text = () => files().filter((f) => /\.(html|css|js|svg|json)$/.test(f));
