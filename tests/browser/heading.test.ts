@@ -215,8 +215,9 @@ describe("calibration from logged readings", () => {
     // Edit the confidence level, then put it back: the figures are now the live computation's.
     const field = "#calibration-calculator-confidence";
     const level = await page.inputValue(field);
+    const before = await out(page, "radius-ci");
     await page.fill(field, "90 %");
-    await expect.poll(() => out(page, "radius-ci")).not.toBe(await out(page, "radius-ci"));
+    await expect.poll(() => out(page, "radius-ci")).not.toBe(before);
     expect(loaded("calibration-engine")).toBe(true);
     expect(loaded("calibration-results")).toBe(true);
     await page.fill(field, level);
