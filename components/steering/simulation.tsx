@@ -41,6 +41,24 @@ function attempt<T>(fn: () => T): Outcome<T> {
   }
 }
 
+/**
+ * `compute(input)` run `tasks` tasks after `input` changes (0 ms timers), and its outcome once it
+ * has run for this input; null before then and without an input.
+ */
+function useLater<T>(input: SteeringInput | null, tasks: number, compute: (input: SteeringInput) => T): Outcome<T> | null {
+  const done = useSignal<{ input: SteeringInput; outcome: Outcome<T> } | null>(null);
+  useEffect(() => {
+    if (!input) return;
+    let timer: ReturnType<typeof setTimeout>;
+    const wait = (left: number) => {
+      timer = setTimeout(() => (left > 1 ? wait(left - 1) : (done.value = { input, outcome: attempt(() => compute(input)) })), 0);
+    };
+    wait(tasks);
+    return () => clearTimeout(timer);
+  }, [input]);
+  return input && done.value?.input === input ? done.value.outcome : null;
+}
+
 interface SweepState {
   input: SteeringInput;
   done: number;
@@ -66,8 +84,10 @@ export function SteeringSimulation({ values, system, distanceText, idPrefix }: S
     (): SteeringInput | null => (reading.ok ? { ...DEMO_STEERING_SPINNER, ...values, commandedDistance: reading.value } : null),
     [values, reading.ok ? reading.value : Number.NaN],
   );
-  const sim = useMemo(() => (input ? attempt(() => simulateSteering(input, { maxSteps: PAGE_STEPS, revolutions: false })) : null), [input]);
-  const path = useMemo(() => (input ? attempt(() => steeringPath({ input, options: { maxSteps: PAGE_STEPS } })) : null), [input]);
+  // The read-outs' simulation, then the top view's (the move again, sampled for drawing), each in a
+  // task of its own after the view appears: one long task on a slow phone would be three.
+  const sim = useLater(input, 1, (i) => simulateSteering(i, { maxSteps: PAGE_STEPS, revolutions: false }));
+  const path = useLater(input, 2, (i) => steeringPath({ input: i, options: { maxSteps: PAGE_STEPS } }));
   const q = (v: number, kind: QuantityKind, significant = 3) => formatQuantity(v, kind, { system, significant }).text;
   const pct = (share: number) => `${formatNumber(share * 100, 2)} %`;
   const degPerSecond = (rate: number) => formatQuantity(rate, "angularSpeed", { unit: "deg/s", significant: 2 }).text;
@@ -119,6 +139,7 @@ export function SteeringSimulation({ values, system, distanceText, idPrefix }: S
           system={system}
         />
       </div>
+      {input && !sim ? <p data-out="sim-pending">Simulating the move…</p> : null}
       {sim && !sim.ok ? <p data-out="sim-error">{sim.message}</p> : null}
       {r ? (
         <>

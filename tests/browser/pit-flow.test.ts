@@ -55,8 +55,9 @@ describe("the pit flow", () => {
         await expect.poll(() => page.evaluate((id) => Math.round(document.getElementById(id)!.getBoundingClientRect().top), anchor)).toBeLessThanOrEqual(1);
         // The first field of the form (the units switch above it is no field of the design).
         await page.locator(`#${anchor} form input`).first().focus();
-        expect(await inView(page, `#${anchor} [data-result-bar]`)).toBe(true);
-        expect(await page.locator(`#${anchor} [data-result-bar] [data-bar="${bar}"]`).first().textContent()).toMatch(/\d/);
+        // Focusing may scroll the page a frame later: the bar is judged once the page has settled.
+        await expect.poll(() => inView(page, `#${anchor} [data-result-bar]`)).toBe(true);
+        await expect.poll(() => page.locator(`#${anchor} [data-result-bar] [data-bar="${bar}"]`).first().textContent()).toMatch(/\d/);
         expect(problems).toEqual([]);
         await context.close();
       },
