@@ -29,7 +29,10 @@ export function QuantityField({ idPrefix, name, spec, text, reading, system, ext
   // The number and the unit as typed: "45 mm" → "45", "mm" (a bare number is in the field's unit).
   const [, number = "", typed = ""] = /^([\s+\-−\d.,]*(?:[eE][+\-−]?\d+)?)\s*(.*)$/.exec(text.value) ?? [];
   const shown = (typed ? findUnit(typed, spec.kind) : bare) ?? "";
-  const unit = units.length > 1 ? "" : unitDef(bare).symbol;
+  // A menu when the kind has several units and the field reads a unit at all: a plain ratio (a nut
+  // factor of 0.2) offers none, though "%" may still be typed.
+  const menu = units.length > 1 && unitDef(bare).symbol !== "";
+  const unit = menu ? "" : unitDef(bare).symbol;
   const current = reading.value;
   const error = !current.ok ? current.error.message : (extraError ?? null);
   const describedBy = [spec.help ? `${id}-help` : "", error ? `${id}-error` : ""].filter(Boolean).join(" ") || undefined;
@@ -55,7 +58,7 @@ export function QuantityField({ idPrefix, name, spec, text, reading, system, ext
             text.value = (event.currentTarget as HTMLInputElement).value;
           }}
         />
-        {unit === "" && units.length > 1 ? (
+        {menu ? (
           <select
             aria-label={`${spec.label}: unit`}
             value={shown}

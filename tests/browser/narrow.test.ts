@@ -56,3 +56,22 @@ describe("calculators on a 390 px screen", () => {
     await context.close();
   });
 });
+
+describe("unit menus beside the fields", () => {
+  // A menu whose first choice shows while the field reads another unit told a builder that a nut
+  // factor of 0.2 was 0.2 %: a field that reads plain numbers has no menu, and every menu shows the
+  // unit its field's text is in.
+  it.each(CHAPTERS)("shows, on %s, the unit each field reads and no menu beside a plain ratio", async (slug) => {
+    const { page, context } = await open(`/chapters/${slug}/`, { width: 390 });
+    const wrong = await page.evaluate(() =>
+      [...document.querySelectorAll<HTMLSelectElement>(".calc .field-entry select")].flatMap((select) => {
+        const input = select.parentElement!.querySelector("input")!;
+        const typed = input.value.replace(/^[\s+\-−\d.,eE]*/, "").trim();
+        const chosen = select.selectedOptions[0]?.text ?? "";
+        return typed === chosen ? [] : [`${input.id}: "${input.value}" beside "${chosen}"`];
+      }),
+    );
+    expect(wrong).toEqual([]);
+    await context.close();
+  });
+});
