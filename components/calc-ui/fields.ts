@@ -50,6 +50,8 @@ export function createFieldsModel<S extends InputSpecs>(specs: S, initialSystem:
   const notices = signal<string[]>([]);
   /** Text each field last showed in each system, to switch back without rounding drift. */
   const remembered = new Map<string, string>();
+  /** The text a switch of units last wrote into each field: while the field still holds it, switching back restores the text it had. */
+  const written = new Map<string, string>();
 
   function setSystem(next: UnitSystem): void {
     if (next === system.value) return;
@@ -62,14 +64,17 @@ export function createFieldsModel<S extends InputSpecs>(specs: S, initialSystem:
         const back = remembered.get(`${next}:${name}`);
         if (back !== undefined) {
           const old = readField(spec, back, next);
-          if (old.ok && Math.abs(old.value - reading.value) <= 1e-9 * Math.max(1, Math.abs(reading.value))) {
+          const untouched = written.get(name) === texts[name].value;
+          if (old.ok && (untouched || Math.abs(old.value - reading.value) <= 1e-9 * Math.max(1, Math.abs(reading.value)))) {
             texts[name].value = back;
+            written.delete(name);
             continue;
           }
         }
         const unit = fieldUnit(spec, next);
         if (reading.unit === unit) continue;
         texts[name].value = textIn(reading.value, unitDef(unit).symbol, unitDef(unit).factor);
+        written.set(name, texts[name].value);
       }
       system.value = next;
     });

@@ -43,6 +43,21 @@ describe("a calculator model (the placement calculator for all)", () => {
     expect(model.fields.texts.radius.value).toBe("20 mm");
   });
 
+  it("gives back the text a field had when the units are switched there and back untouched, though the round trip at 6 figures does not close (70 mm → 2.75591 in → 70.0001 mm)", () => {
+    const model = createPlacementModel();
+    model.fields.texts.radius.value = "70 mm";
+    model.fields.setSystem("us");
+    expect(model.fields.texts.radius.value).toBe("2.75591 in");
+    model.fields.setSystem("metric");
+    expect(model.fields.texts.radius.value).toBe("70 mm");
+    expect(model.queryFor("")).toContain("r=70mm");
+    // Edited while in inches: the edit is kept and converted.
+    model.fields.setSystem("us");
+    model.fields.texts.radius.value = "2.5 in";
+    model.fields.setSystem("metric");
+    expect(model.fields.texts.radius.value).toBe("63.5 mm");
+  });
+
   it("writes the state into the query string", () => {
     const model = createPlacementModel();
     model.fields.texts.radius.value = "1.5 in";
