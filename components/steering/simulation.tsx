@@ -51,7 +51,10 @@ function useLater<T>(input: SteeringInput | null, tasks: number, compute: (input
     if (!input) return;
     let timer: ReturnType<typeof setTimeout>;
     const wait = (left: number) => {
-      timer = setTimeout(() => (left > 1 ? wait(left - 1) : (done.value = { input, outcome: attempt(() => compute(input)) })), 0);
+      timer = setTimeout(() => {
+        if (left > 1) wait(left - 1);
+        else done.value = { input, outcome: attempt(() => compute(input)) };
+      }, 0);
     };
     wait(tasks);
     return () => clearTimeout(timer);

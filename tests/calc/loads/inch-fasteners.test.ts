@@ -23,7 +23,6 @@ import {
   type InchThreadSize,
 } from "../../../calc/loads/inch-fasteners.ts";
 import { isSourceKey } from "../../../calc/sources/index.ts";
-import {} from "../../../calc/core/units.ts";
 
 const INCH = 0.0254;
 const SQ_IN = INCH * INCH;
