@@ -97,3 +97,27 @@ describe("unitTables", () => {
     expect(() => unitTables("length" as never)).toThrow("kinds must be a list of quantity kinds");
   });
 });
+
+describe("plainNumber (numbers in links and files written as people write them)", () => {
+  // JavaScript writes numbers below 1e-6 and from 1e21 up with an exponent (ECMA-262, Number::toString).
+  it.each([
+    [1.5e-7, "0.00000015"],
+    [-1e-7, "-0.0000001"],
+    [2.5e-10, "0.00000000025"],
+    [1e21, "1000000000000000000000"],
+    [-1.2345e22, "-12345000000000000000000"],
+    [1.5e23, "150000000000000000000000"],
+    // Longer than 24 characters plain: the exponent stays.
+    [1.5e-30, "1.5e-30"],
+    [1e24, "1e+24"],
+    [5e-324, "5e-324"],
+    [-Number.MAX_VALUE, "-1.7976931348623157e+308"],
+    // Already plain: as JavaScript writes it.
+    [0.000025, "0.000025"],
+    [123, "123"],
+    [-0.5, "-0.5"],
+  ])("writes %s as %s", (value, text) => {
+    expect(units.plainNumber(value)).toBe(text);
+    expect(Number(units.plainNumber(value))).toBe(value);
+  });
+});
