@@ -121,3 +121,37 @@ describe("plainNumber (numbers in links and files written as people write them)"
     expect(Number(units.plainNumber(value))).toBe(value);
   });
 });
+
+describe("reading what a builder types, at its edges (all kinds registered)", () => {
+  beforeEach(() => units.useUnits(unitTables()));
+
+  it("keeps a link value that does not start with a number as it came", () => {
+    expect(units.linkSpelling("x200 gₙ")).toBe("x200gₙ");
+    expect(units.linkSpelling("200 gₙ")).toBe("200g");
+  });
+
+  it("reads a unit typed with doubled spaces, and no unit from empty text", () => {
+    expect(units.findUnit("kg  m2", "inertia")).toBe("kg·m2");
+    expect(units.findUnit("", "fraction")).toBeUndefined();
+    expect(units.findUnit("  ", "count")).toBeUndefined();
+  });
+
+  it("takes a comma after four digits as a decimal mark, and asks about one after three", () => {
+    expect(units.parseQuantity("1234,567 mm", "length", "mm")).toMatchObject({ ok: true, number: 1234.567 });
+    expect(units.parseQuantity("1,234 mm", "length", "mm")).toMatchObject({ ok: false, reason: "not-a-number" });
+  });
+
+  it("lists a kind's units without the empty symbol of a plain ratio", () => {
+    expect(units.parseQuantity("5 furlongs", "fraction", "frac")).toEqual({
+      ok: false,
+      reason: "unknown-unit",
+      message: 'has a unit "furlongs" that is not a ratio unit; use %, ppm',
+    });
+  });
+
+  it("refuses to write a value that is not finite, by name", () => {
+    expect(() => units.exactQuantity(Number.POSITIVE_INFINITY, "mm")).toThrow("value must be a finite number");
+    expect(() => units.exactNumberText(Number.NaN, 0.001)).toThrow("value must be a finite number");
+    expect(() => units.quantityToText(Number.NEGATIVE_INFINITY, "mm")).toThrow(CalcInputError);
+  });
+});
