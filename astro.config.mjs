@@ -6,9 +6,8 @@ import { unified } from "@astrojs/markdown-remark";
 import remarkMath from "remark-math";
 import rehypeKatex from "rehype-katex";
 import { rehypeBaseLinks } from "./scripts/site/rehype-base-links.mjs";
-import { rehypeScrollableMath } from "./scripts/site/rehype-scrollable-math.mjs";
-import { katexWoff2Only } from "./scripts/site/katex-woff2-only.mjs";
-import { katexFontPreload } from "./scripts/site/katex-fonts.mjs";
+import { rehypeMath } from "./scripts/site/rehype-math.mjs";
+import { mathFont } from "./scripts/site/math-font.mjs";
 import { contentSecurityPolicyPlugin } from "./scripts/site/content-security-policy.mjs";
 import { offlineAndSearch } from "./scripts/site/offline-and-search.mjs";
 import { precompressPlugin } from "./scripts/site/precompress.mjs";
@@ -34,17 +33,16 @@ export default defineConfig({
   // The build:done steps run in this order: each page's calculator scripts and their preloads
   // (HTML), font preloads (HTML), the security policy (hashes the final HTML's inline scripts), search index and offline cache (versioned by the final files),
   // then the compressed copies of everything.
-  integrations: [preact(), mdx(), islandEntries(), katexFontPreload(), contentSecurityPolicyPlugin(), offlineAndSearch(), precompressPlugin()],
+  integrations: [preact(), mdx(), islandEntries(), mathFont(), contentSecurityPolicyPlugin(), offlineAndSearch(), precompressPlugin()],
   markdown: {
     processor: unified({
       remarkPlugins: [remarkMath],
-      rehypePlugins: [[rehypeKatex, { strict: "error", throwOnError: true, output: "html" }], rehypeScrollableMath, [rehypeBaseLinks, { base }]],
+      rehypePlugins: [[rehypeKatex, { strict: "error", throwOnError: true, output: "mathml" }], rehypeMath, [rehypeBaseLinks, { base }]],
     }),
   },
   devToolbar: { enabled: false },
   vite: {
     plugins: [
-      katexWoff2Only(),
       sheetCopies(),
       {
         // With module preloading off, the bundler's helper around each dynamic import() has nothing

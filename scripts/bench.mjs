@@ -40,7 +40,7 @@ for (const page of pages.filter((p) => existsSync(join(dist, p)))) {
 // What a first visit downloads for offline use (fonts and the search index count at their own,
 // already compressed, size), and what the build leaves out of it.
 const precache = transferSize(dist, precachedFiles(dist, "/"));
-const left = precacheSelection(dist, "/").excluded;
+const left = precacheSelection(dist).excluded;
 console.log(
   `\noffline cache (first visit): ${precache.files} files, ${kb(precache.raw)} raw, ${kb(precache.gzip)} gzip, ${kb(precache.brotli)} brotli` +
     ` (${left.size} built files left out: nothing uses them)`,
@@ -55,7 +55,7 @@ const parts = Map.groupBy(precachedFiles(dist, "/"), (file) =>
         : /\.css$/.test(file)
           ? "stylesheets (css)"
           : /\.woff2$/.test(file)
-            ? "fonts (KaTeX)"
+            ? "fonts (math)"
             : "other",
 );
 for (const [part, files] of parts) {

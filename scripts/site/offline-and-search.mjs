@@ -11,7 +11,7 @@ import { transformSync } from "esbuild";
 import * as pagefind from "pagefind";
 import { precacheSelection, transferSize } from "./precache.mjs";
 import { settleSearchFields } from "./search-fields.mjs";
-import { withFormulasAsText } from "./katex-text.mjs";
+import { withFormulasAsText } from "./math-text.mjs";
 
 /** @param {string} dir @param {RegExp} [name] @returns {string[]} every file under `dir` whose name matches (.html files by default) */
 function filesUnder(dir, name = /\.html$/) {
@@ -21,7 +21,7 @@ function filesUnder(dir, name = /\.html$/) {
 }
 
 /**
- * A page's HTML as the search index reads it: formulas as text (katex-text.mjs), an `id` kept on
+ * A page's HTML as the search index reads it: formulas as text (math-text.mjs), an `id` kept on
  * headings only, and a space after a table's caption and each header cell. Pagefind stores every
  * element with an id as an anchor, with its whole text, in the page's fragment, but builds its
  * section results (sub_results, which the search page shows) from headings alone: the ids of the
@@ -150,7 +150,7 @@ export function offlineAndSearch() {
           excludeSelectors: [".calc", ".site-nav", ".chapter-nav", ".chart", ".katex", ".no-search"],
         });
         if (!index) throw new Error(`search index failed: ${errors.join("; ")}`);
-        // Each page is indexed with its formulas as text (katex-text.mjs): the served page is unchanged.
+        // Each page is indexed with its formulas as text (math-text.mjs): the served page is unchanged.
         for (const file of filesUnder(root)) {
           const path = relative(root, file).split(sep).join("/");
           // "Page not found" and the search page itself are never a useful result.
@@ -180,7 +180,7 @@ export function offlineAndSearch() {
         const script = join(root, "pagefind", "pagefind.js");
         writeFileSync(script, transformSync(readFileSync(script, "utf8"), { minify: true, format: "esm", target: "es2022" }).code);
 
-        const { files, excluded } = precacheSelection(root, base);
+        const { files, excluded } = precacheSelection(root);
         // The version names the cache: it changes with any precached file and with the worker's own
         // code, so an install never writes into the cache the running worker serves from.
         const hash = createHash("sha256").update(serviceWorkerSource({ version: "", base, files: [] }));

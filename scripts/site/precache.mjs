@@ -1,10 +1,9 @@
 // What the offline cache downloads on a first visit: every file of the build that a page can use,
 // and nothing it cannot. Left out, each for a stated reason:
-// - KaTeX fonts no formula is set in (katex-fonts.mjs reads which faces the rendered math uses);
 // - pagefind's WebAssembly for languages the index has no pages in (the handbook is English: the
 //   language-neutral `wasm.unknown.pagefind` is loaded only for a page language without an index);
-// - scripts and stylesheets under _astro/ that no page, stylesheet or script names (bundler output
-//   nothing loads, such as the unused framework island loader);
+// - scripts, stylesheets and fonts under _astro/ that no page, stylesheet or script names (bundler
+//   output nothing loads, such as the unused framework island loader);
 // - the precompressed .br/.gz copies (the server picks one per request), source maps, the headers
 //   file and the service worker itself.
 // Anything else is kept, so a file of a kind this list does not know stays available offline.
@@ -12,7 +11,6 @@ import { existsSync, readdirSync, readFileSync, statSync } from "node:fs";
 import { join, relative, sep } from "node:path";
 import { brotliCompressSync, constants, gzipSync } from "node:zlib";
 import { HEADERS_FILE } from "./content-security-policy.mjs";
-import { katexFontUsage } from "./katex-fonts.mjs";
 
 function walk(dir) {
   return readdirSync(dir, { withFileTypes: true }).flatMap((entry) => (entry.isDirectory() ? walk(join(dir, entry.name)) : [join(dir, entry.name)]));
@@ -25,22 +23,14 @@ const NEVER = (/** @type {string} */ file) => file === "sw.js" || file === HEADE
  * The files to precache (paths relative to the build folder, "/"-separated, sorted) and those left
  * out with the reason for each.
  * @param {string} root the built site's folder
- * @param {string} base the base path the site was built with
  */
-export function precacheSelection(root, base = "/") {
+export function precacheSelection(root) {
   const files = walk(root)
     .map((file) => relative(root, file).split(sep).join("/"))
     .filter((file) => !NEVER(file))
     .sort();
   /** @type {Map<string, string>} */
   const excluded = new Map();
-
-  // Fonts: only the faces some formula is set in.
-  const fonts = katexFontUsage(root, base);
-  const usedFonts = new Set([...fonts.used].map((url) => (url.startsWith(base) ? url.slice(base.length) : url.replace(/^\//, ""))));
-  for (const file of files) {
-    if (/(^|\/)KaTeX_[^/]+\.woff2$/.test(file) && !usedFonts.has(file)) excluded.set(file, "font no formula uses");
-  }
 
   // Search: WebAssembly only for the languages the index holds.
   const entryFile = files.find((file) => file.endsWith("pagefind/pagefind-entry.json"));
@@ -58,7 +48,7 @@ export function precacheSelection(root, base = "/") {
   }
 
   // Bundler output that nothing refers to: reachable = named by a page or by a reachable file.
-  const bundled = files.filter((file) => /(^|\/)_astro\/[^/]+\.(m?js|css)$/.test(file));
+  const bundled = files.filter((file) => /(^|\/)_astro\/[^/]+\.(m?js|css|woff2?)$/.test(file));
   const name = (file) => file.slice(file.lastIndexOf("/") + 1);
   const reachable = new Set();
   const queue = files.filter((file) => /\.(html|js|mjs|css|json)$/.test(file) && !bundled.includes(file));

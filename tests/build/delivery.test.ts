@@ -1,7 +1,7 @@
 /**
  * How the built site is delivered (reads dist/; `npm test` builds first): compressed copies of every
- * text file, KaTeX fonts cut to the characters the math sets that swap in and are preloaded only
- * where math is, a search index of what a search is for, an offline cache that downloads only what a
+ * text file, one math font cut to the characters the formulas draw that never holds up text and is preloaded
+ * only where math is, a search index of what a search is for, an offline cache that downloads only what a
  * page can use, and one strict Content Security Policy in every page and in the headers file.
  */
 import { describe, expect, it } from "vitest";
@@ -13,7 +13,7 @@ import { createRequire } from "node:module";
 import { brotliDecompressSync, gunzipSync } from "node:zlib";
 import { Blob as FontBlob, Face } from "harfbuzzjs";
 import { contentSecurityPolicy, HEADER_ONLY, inlineScriptHashes, parseHeadersFile } from "../../scripts/site/content-security-policy.mjs";
-import { ALWAYS_KEPT, commonFaces, katexFontUsage } from "../../scripts/site/katex-fonts.mjs";
+import { ALWAYS_KEPT, mathFontUsage } from "../../scripts/site/math-font.mjs";
 import { NOT_INDEXED } from "../../scripts/site/offline-and-search.mjs";
 import { precachedFiles, precacheSelection, transferSize } from "../../scripts/site/precache.mjs";
 import { createWeigher } from "../../scripts/site/page-weight.mjs";
@@ -26,7 +26,6 @@ function walk(dir: string): string[] {
 const files = () => walk(dist).map((f) => f.slice(dist.length).replace(/\\/g, "/").replace(/^\//, ""));
 const pages = () => files().filter((f) => f.endsWith(".html"));
 const read = (file: string) => readFileSync(join(dist, file), "utf8");
-const fontName = (url: string) => url.replace(/^.*\/(KaTeX_[^.]+)\..*$/, "$1");
 /** fontverter (CommonJS, untyped): woff2 to a plain OpenType font harfbuzz reads. */
 const fontverter = createRequire(import.meta.url)("fontverter") as { convert(font: Buffer, format: "sfnt"): Promise<Buffer> };
 /** The characters a built font file maps (its cmap), read by harfbuzz. */
@@ -108,21 +107,23 @@ describe("compressed copies", () => {
   });
 });
 
-describe("KaTeX fonts", () => {
-  const usage = katexFontUsage(dist, "/");
-  const mathPages = [...usage.pages].filter(([, faces]) => faces.size > 0).map(([page]) => page);
+describe("the math font", () => {
+  const usage = mathFontUsage(dist, "/");
+  const mathPages = [...usage.pages].filter(([, uses]) => uses).map(([page]) => page);
+  const fontFile = () => join(dist, usage.fonts[0]!.slice(1));
 
-  it("swap in (font-display: swap), never hide text while they load", () => {
+  it("is one face, which never hides text while it loads nor re-flows the page when late (font-display: optional)", () => {
     const css = files()
       .filter((f) => f.endsWith(".css"))
       .map(read)
       .join("\n");
     const faces = css.match(/@font-face\{[^}]*\}/g) ?? [];
-    expect(faces.length).toBe(20);
-    for (const face of faces) expect(face).toContain("font-display:swap");
+    expect(faces).toHaveLength(1);
+    expect(faces[0]).toContain("font-display:optional");
+    expect(usage.fonts).toHaveLength(1);
   });
 
-  it("are found in every chapter's math, and only there", () => {
+  it("is used by every chapter's math, and only there", () => {
     expect(mathPages.sort()).toEqual(
       pages()
         .filter((p) => p.startsWith("chapters/"))
@@ -130,48 +131,41 @@ describe("KaTeX fonts", () => {
     );
   });
 
-  it("are cut to the characters the math sets in them: each face keeps every one of those KaTeX's face has, and beside them hardly any", async () => {
-    expect(usage.chars.size).toBe(6);
-    for (const [url, chars] of usage.chars) {
-      const inFont = await fontCharacters(join(dist, url));
-      const inKatex = await fontCharacters(fileURLToPath(new URL(`../../node_modules/katex/dist/fonts/${fontName(url)}.woff2`, import.meta.url)));
-      const missing = [...chars].filter((c) => inKatex.has(c) && !inFont.has(c));
-      expect(missing, fontName(url)).toEqual([]);
-      const extra = [...inFont].filter((c) => !chars.has(c) && !ALWAYS_KEPT.includes(c));
-      // A glyph that a kept glyph's layout rules reach may come along (harfbuzz keeps "<" in Main-Regular).
-      expect(extra.length, `${fontName(url)}: ${extra.join(" ")}`).toBeLessThanOrEqual(2);
-      expect(inFont.size, fontName(url)).toBeLessThan(inKatex.size);
-    }
+  it("is cut to the characters the formulas draw: it keeps each one the full face has, and the MATH table that sizes brackets and radicals", async () => {
+    const inFont = await fontCharacters(fontFile());
+    const full = fileURLToPath(new URL("../../node_modules/@fontsource/noto-sans-math/files/noto-sans-math-latin-400-normal.woff2", import.meta.url));
+    const inFull = await fontCharacters(full);
+    const missing = [...usage.chars].filter((c) => inFull.has(c) && !inFont.has(c));
+    expect(missing).toEqual([]);
+    for (const c of ALWAYS_KEPT) expect(inFont.has(c), c).toBe(true);
+    // Glyphs a kept glyph's layout rules reach may come along; the full face maps some 3 000 characters.
+    expect(inFont.size).toBeLessThan(usage.chars.size + ALWAYS_KEPT.length + 40);
+    expect(inFull.size).toBeGreaterThan(2500);
+    const sfnt = await fontverter.convert(readFileSync(fontFile()), "sfnt");
+    const tables = Array.from({ length: sfnt.readUInt16BE(4) }, (_, i) => sfnt.toString("latin1", 12 + 16 * i, 16 + 16 * i));
+    expect(tables).toContain("MATH");
   });
 
-  it("in use are named after their cut content, and so is the stylesheet that names them", () => {
-    for (const url of usage.used) expect(url).toMatch(/^\/_astro\/KaTeX_[\w-]+\.[\w-]{8}\.woff2$/);
-    const sheets = files().filter((f) => f.endsWith(".css") && read(f).includes("KaTeX_Main-Regular"));
+  it("is named after its cut content, and so is the stylesheet that names it", () => {
+    expect(usage.fonts[0]).toMatch(/^\/_astro\/noto-sans-math-latin-400-normal\.[\w-]{8}\.woff2$/);
+    const hash = (bytes: Buffer | string) => createHash("sha256").update(bytes).digest("base64url").slice(0, 8);
+    expect(usage.fonts[0]!.endsWith(`.${hash(readFileSync(fontFile()))}.woff2`)).toBe(true);
+    const sheets = files().filter((f) => f.endsWith(".css") && read(f).includes(usage.fonts[0]!));
     expect(sheets).toHaveLength(1);
-    const hash = createHash("sha256").update(read(sheets[0]!)).digest("base64url").slice(0, 8);
-    expect(sheets[0]!.endsWith(`.${hash}.css`), sheets[0]).toBe(true);
+    expect(sheets[0]!.endsWith(`.${hash(read(sheets[0]!))}.css`), sheets[0]).toBe(true);
   });
 
-  it("every chapter's math uses Main-Regular and Math-Italic: those two are preloaded", () => {
-    expect(commonFaces(usage.pages).map(fontName).sort()).toEqual(["KaTeX_Main-Regular", "KaTeX_Math-Italic"]);
-  });
-
-  it("are preloaded (as fonts, with crossorigin) on pages with math only, each a face the page uses", () => {
+  it("is preloaded (as a font, with crossorigin) on pages with math only", () => {
     for (const page of pages()) {
       const preloads = [...read(page).matchAll(/<link rel="preload" href="([^"]+)" as="font" type="font\/woff2" crossorigin>/g)].map((m) => m[1]!);
-      const used = usage.pages.get(page)!;
-      if (used.size === 0) expect(preloads, page).toEqual([]);
-      else {
-        expect(preloads.map(fontName).sort(), page).toEqual(["KaTeX_Main-Regular", "KaTeX_Math-Italic"]);
-        for (const url of preloads) expect(used.has(url), `${page} preloads ${url}`).toBe(true);
-      }
+      expect(preloads, page).toEqual(usage.pages.get(page) ? usage.fonts : []);
     }
   });
 });
 
 describe("offline cache", () => {
   const precached = () => precachedFiles(dist, "/");
-  const selection = () => precacheSelection(dist, "/");
+  const selection = () => precacheSelection(dist);
 
   it("precaches every built file but those a page cannot use, each left out for a known reason", () => {
     const { excluded } = selection();
@@ -180,14 +174,13 @@ describe("offline cache", () => {
     expect(new Set(precached())).toEqual(new Set(built));
     for (const [file, reason] of excluded) {
       expect(`${file}: ${reason}`).toMatch(
-        /^(_astro\/KaTeX_[\w-]+\.[\w-]+\.woff2: font no formula uses|pagefind\/wasm\.[\w-]+\.pagefind: search WebAssembly for a language with no pages \([\w-]+\)|_astro\/[\w.-]+\.(js|css): bundled file no page loads)$/,
+        /^(pagefind\/wasm\.[\w-]+\.pagefind: search WebAssembly for a language with no pages \([\w-]+\)|_astro\/[\w.-]+\.(js|css|woff2?): bundled file no page loads)$/,
       );
     }
   });
 
-  it("leaves out the KaTeX fonts no formula uses and the search's language-neutral WebAssembly", () => {
+  it("leaves out the search's language-neutral WebAssembly", () => {
     const left = [...selection().excluded.keys()];
-    expect(left.filter((f) => f.includes("KaTeX_")).length).toBe(14);
     expect(left).toContain("pagefind/wasm.unknown.pagefind");
     expect(precached()).toContain("pagefind/wasm.en.pagefind");
   });
@@ -195,12 +188,12 @@ describe("offline cache", () => {
   it("holds every page, and every stylesheet, script (also those loaded on use) and font a page can request", () => {
     const weigh = createWeigher(dist, "/");
     const cached = new Set(precached());
-    const usage = katexFontUsage(dist, "/");
+    const usage = mathFontUsage(dist, "/");
     const missing: string[] = [];
     for (const page of pages()) {
       if (!cached.has(page)) missing.push(page);
       const w = weigh(page);
-      for (const url of [...w.stylesheets, ...w.scripts, ...w.lazyScripts, ...usage.pages.get(page)!.keys()]) {
+      for (const url of [...w.stylesheets, ...w.scripts, ...w.lazyScripts, ...(usage.pages.get(page) ? usage.fonts : [])]) {
         if (!cached.has(url.replace(/^\//, ""))) missing.push(`${page}: ${url}`);
       }
     }

@@ -12,7 +12,7 @@ const dist = process.env.OUT_DIR ? resolve(process.env.OUT_DIR) : fileURLToPath(
 const chapterPages = readdirSync(join(dist, "chapters")).map((slug) => `chapters/${slug}/index.html`);
 const pages = ["index.html", "404.html", "build-sheet/index.html", "search/index.html", ...chapterPages];
 
-/** The text of a page as read: scripts, styles and KaTeX's markup (its own subscripts) left out, tags dropped. */
+/** The text of a page as read: scripts, styles and formulas (their own subscripts) left out, tags dropped. */
 function textOf(page: string): string {
   return readFileSync(join(dist, page), "utf8")
     .replace(/<(script|style)\b[\s\S]*?<\/\1>/g, " ")
