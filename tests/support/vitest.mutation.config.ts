@@ -3,8 +3,8 @@ import { defineConfig } from "vitest/config";
 /**
  * The unit tests of calc/ alone, for mutation testing (`npm run mutate`): no build, no browser, no
  * components, no command-line tests (they start a separate Node process, where a planted mistake
- * is never switched on), and not the structure test (it reads the files' text, which the tool
- * rewrites). A generous timeout: a mutant that makes a test slow on a busy
+ * is never switched on), and not the structure and documentation tests (they read the files' text,
+ * which the tool rewrites). A generous timeout: a mutant that makes a test slow on a busy
  * machine is not a failure, and the mutation tool sets its own timeouts for endless loops.
  *
  * WHIRLBOOK_MUTATION_TESTS (a JSON list of globs, set by `npm run mutate -- --tests …`) narrows the
@@ -18,8 +18,8 @@ export default defineConfig({
     setupFiles: ["tests/support/all-units.ts"],
     root: new URL("../..", import.meta.url).pathname,
     include: process.env.WHIRLBOOK_MUTATION_TESTS ? JSON.parse(process.env.WHIRLBOOK_MUTATION_TESTS) : ["tests/calc/**/*.test.ts"],
-    // The structure test reads the files' text (lines, imports), which the mutation tool rewrites.
-    exclude: ["tests/calc/structure.test.ts"],
+    // These read the files' text (lines, imports, doc comments), which the mutation tool rewrites.
+    exclude: ["tests/calc/structure.test.ts", "tests/calc/meta.test.ts"],
     testTimeout: 120_000,
   },
 });
