@@ -29,12 +29,17 @@ export default defineConfig({
   cacheDir: process.env.OUT_DIR ? `${outDir}-cache` : "./node_modules/.astro",
   base,
   trailingSlash: "ignore",
-  build: { format: "directory", inlineStylesheets: "never" },
+  // A page's own stylesheet under 4 KB (vite.build.assetsInlineLimit) goes into its <head>, so the
+  // first paint waits for one stylesheet, the site's, which every page shares from the cache.
+  build: { format: "directory", inlineStylesheets: "auto" },
   // The build:done steps run in this order: each page's calculator scripts and their preloads
   // (HTML), font preloads (HTML), the security policy (hashes the final HTML's inline scripts), search index and offline cache (versioned by the final files),
   // then the compressed copies of everything.
   integrations: [preact(), mdx(), islandEntries(), mathFont(), contentSecurityPolicyPlugin(), offlineAndSearch(), precompressPlugin()],
   markdown: {
+    // Code blocks stay plain (styled by the site's stylesheet): the highlighter colours them with
+    // style attributes, which the security policy does not allow.
+    syntaxHighlight: false,
     processor: unified({
       remarkPlugins: [remarkMath],
       rehypePlugins: [[rehypeKatex, { strict: "error", throwOnError: true, output: "mathml" }], rehypeMath, [rehypeBaseLinks, { base }]],
@@ -61,7 +66,9 @@ export default defineConfig({
       },
     ],
     build: {
-      assetsInlineLimit: 0,
+      // Astro inlines stylesheets under this size; assets (the math font) are far larger, so none
+      // becomes a data: URL, which the security policy would block.
+      assetsInlineLimit: 4096,
       sourcemap: process.env.SOURCEMAP === "1",
       rolldownOptions: {
         // calc/ is pure by rule (no DOM, no I/O, nothing runs on import): a calc module a chunk

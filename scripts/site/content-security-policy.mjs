@@ -1,6 +1,7 @@
 // The handbook's Content Security Policy, computed after the build when every page's HTML is
 // final: scripts only from this site plus the SHA-256 hashes of the few inline scripts (the offline
-// registration and the search page's script), no other origin for anything. The policy goes into a
+// registration and the search page's script), stylesheets only from this site plus the hashes of the
+// pages' small inline stylesheets, no style attributes, no other origin for anything. The policy goes into a
 // <meta http-equiv> at the top of every page's <head> and into `_headers` (the format Netlify and
 // Cloudflare Pages read; scripts/static-server.mjs reads it too), which adds what a <meta> policy
 // cannot carry (frame-ancestors).
@@ -8,14 +9,12 @@
 // Why each source is there:
 // - script-src 'wasm-unsafe-eval': the search index runs as WebAssembly, which a policy without it
 //   forbids compiling. It allows WebAssembly only, not eval() or new Function().
-// - style-src-attr 'unsafe-inline': KaTeX sets every formula's heights, depths and offsets in
-//   `style` attributes (hundreds per chapter, most of them distinct), and hashing them would need
-//   'unsafe-hashes' and a hash per value. A style attribute cannot run script or load anything
-//   (img-src/font-src still apply to its url()s), so this is the narrow opening; <style> elements and
-//   stylesheets stay limited to this site by style-src-elem 'self'.
-// - style-src 'self' 'unsafe-inline': the fallback for browsers that do not know the -elem/-attr
-//   directives (before 2022), where KaTeX's attributes would otherwise be blocked; browsers that know
-//   them ignore style-src.
+// - style-src-elem 'sha256-…': a page's own stylesheet, when small, is inlined in its <head> (one
+//   request fewer before the first paint; astro.config.mjs, inlineStylesheets), each by its hash.
+// - style-src-attr 'none': no page carries a style attribute (the build refuses one; formulas are
+//   MathML, laid out by the browser); scripts set styles through the CSSOM, which the policy allows.
+// - style-src 'self' + the same hashes: the fallback for browsers that do not know the -elem/-attr
+//   directives (before 2022).
 import { createHash } from "node:crypto";
 import { readdirSync, readFileSync, writeFileSync } from "node:fs";
 import { join, relative, sep } from "node:path";
@@ -44,8 +43,16 @@ export function inlineScriptHashes(html) {
 }
 
 /**
+ * The SHA-256 sources for the inline stylesheets (<style> elements) of one page, in order of appearance.
+ * @param {string} html
+ */
+export function inlineStyleHashes(html) {
+  return [...html.matchAll(/<style\b[^>]*>([\s\S]*?)<\/style\s*>/gi)].map((m) => `'sha256-${createHash("sha256").update(m[1], "utf8").digest("base64")}'`);
+}
+
+/**
  * Markup a strict policy would block, which the build refuses to ship: event-handler attributes,
- * javascript: URLs and <style> elements.
+ * javascript: URLs and style attributes.
  * @param {string} html
  * @returns {string[]}
  */
@@ -56,22 +63,25 @@ export function policyBreakers(html) {
     const handler = /\s(on[a-z]+)\s*=/i.exec(m[1]);
     if (handler) found.push(`event-handler attribute ${handler[1]}`);
     if (/\s(?:href|src|action|formaction)\s*=\s*["']?\s*javascript:/i.test(m[1])) found.push("javascript: URL");
+    if (/\sstyle\s*=/i.test(m[1])) found.push("style attribute");
   }
-  if (/<style\b/i.test(withoutScripts)) found.push("<style> element");
   return found;
 }
 
 /**
- * The policy for the whole site, given the hash sources of every inline script on any page.
+ * The policy for the whole site, given the hash sources of every inline script and inline
+ * stylesheet on any page.
  * @param {string[]} scriptHashes
+ * @param {string[]} [styleHashes]
  */
-export function contentSecurityPolicy(scriptHashes) {
+export function contentSecurityPolicy(scriptHashes, styleHashes = []) {
+  const styles = ["'self'", ...[...new Set(styleHashes)].sort()].join(" ");
   return [
     "default-src 'self'",
     `script-src ${["'self'", "'wasm-unsafe-eval'", ...[...new Set(scriptHashes)].sort()].join(" ")}`,
-    "style-src 'self' 'unsafe-inline'",
-    "style-src-elem 'self'",
-    "style-src-attr 'unsafe-inline'",
+    `style-src ${styles}`,
+    `style-src-elem ${styles}`,
+    "style-src-attr 'none'",
     "object-src 'none'",
     "base-uri 'self'",
     "form-action 'self'",
@@ -121,15 +131,17 @@ export function contentSecurityPolicyPlugin() {
         const root = fileURLToPath(dir);
         const pages = walk(root).filter((f) => f.endsWith(".html"));
         const hashes = [];
+        const styleHashes = [];
         const problems = [];
         for (const file of pages) {
           const html = readFileSync(file, "utf8");
           hashes.push(...inlineScriptHashes(html));
+          styleHashes.push(...inlineStyleHashes(html));
           for (const problem of policyBreakers(html)) problems.push(`${relative(root, file)}: ${problem}`);
           if (/http-equiv="content-security-policy"/i.test(html)) problems.push(`${relative(root, file)}: already has a policy`);
         }
         if (problems.length) throw new Error(`content security policy: the built pages would break it:\n${problems.join("\n")}`);
-        const policy = contentSecurityPolicy(hashes);
+        const policy = contentSecurityPolicy(hashes, styleHashes);
         const meta = `<meta http-equiv="Content-Security-Policy" content="${policy}">`;
         for (const file of pages) {
           const html = readFileSync(file, "utf8");
@@ -142,8 +154,8 @@ export function contentSecurityPolicyPlugin() {
           join(root, HEADERS_FILE),
           [
             "# Response headers for every file of the handbook, written by the build (Netlify and Cloudflare",
-            "# Pages read this file as is; for other hosts see README.md, Hosting). The script hashes change",
-            "# when an inline script changes: copy the policy again after such a change.",
+            "# Pages read this file as is; for other hosts see README.md, Hosting). The hashes change when an",
+            "# inline script or a page's inline stylesheet changes: copy the policy again after such a change.",
             "/*",
             `  Content-Security-Policy: ${policy}; ${HEADER_ONLY}`,
             "/_astro/*",
@@ -151,7 +163,9 @@ export function contentSecurityPolicyPlugin() {
             "",
           ].join("\n"),
         );
-        logger.info(`content security policy: ${new Set(hashes).size} inline script hash(es), on ${pages.length} pages and in ${HEADERS_FILE}`);
+        logger.info(
+          `content security policy: ${new Set(hashes).size} inline script and ${new Set(styleHashes).size} inline stylesheet hash(es), on ${pages.length} pages and in ${HEADERS_FILE}`,
+        );
       },
     },
   };

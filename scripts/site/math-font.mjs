@@ -53,8 +53,8 @@ export function mathCharacters(html) {
 }
 
 /**
- * Which built pages set formulas, the math face's URL (from the stylesheets they link) and the
- * characters all formulas use.
+ * Which built pages set formulas, the math face's URL (from the stylesheets they link or carry
+ * inline) and the characters all formulas use.
  * @param {string} root the built site's folder
  * @param {string} base the base path the site was built with ("/" or "/sub/")
  */
@@ -74,11 +74,13 @@ export function mathFontUsage(root, base = "/") {
     const used = mathCharacters(html);
     pages.set(page, used.size > 0);
     for (const c of used) chars.add(c);
+    const css = [...html.matchAll(/<style\b[^>]*>([\s\S]*?)<\/style>/g)].map((m) => m[1]);
     for (const [, href] of html.matchAll(/<link\b[^>]*\brel="stylesheet"[^>]*\bhref="([^"]+)"/g)) {
       if (sheetsRead.has(href)) continue;
       sheetsRead.add(href);
-      for (const [, url] of readFileSync(fileFor(href), "utf8").matchAll(/url\(["']?([^)"']+)["']?\)/g)) if (MATH_FONT.test(url)) fonts.add(url);
+      css.push(readFileSync(fileFor(href), "utf8"));
     }
+    for (const text of css) for (const [, url] of text.matchAll(/url\(["']?([^)"']+)["']?\)/g)) if (MATH_FONT.test(url)) fonts.add(url);
   }
   return { pages, fonts: [...fonts].sort(), chars };
 }
@@ -90,8 +92,9 @@ const contentHash = (bytes) => createHash("sha256").update(bytes).digest("base64
  * Cuts the math face down to the characters the formulas use (and ALWAYS_KEPT): the face holds some
  * 3 000 characters and the handbook's formulas use about a hundred; the glyphs its MATH table builds
  * on them (larger and stretched brackets, radicals, accents) come along. The cut face is named after
- * its content, and so is every stylesheet that names it (pages are rewritten to the new names), so a
- * browser that keeps hashed files for a year never pairs a stylesheet with a face of another build.
+ * its content, and so is every stylesheet file that names it (pages are rewritten to the new names,
+ * and their inline stylesheets to the face's), so a browser that keeps hashed files for a year never
+ * pairs a stylesheet with a face of another build.
  * @param {string} root the built site's folder
  * @param {string} base the base path the site was built with
  * @returns {Promise<{ url: string, before: number, after: number, characters: number }[]>}
@@ -130,9 +133,10 @@ export async function subsetMathFont(root, base = "/") {
     if (to !== file) rmSync(file);
     sheets.set(urlOf(file), urlOf(to));
   }
+  // Pages name the renamed stylesheets, and carry the face's URL in their inline stylesheets.
   for (const file of files.filter((f) => /\.(html|m?js|json)$/.test(f))) {
     const content = readFileSync(file, "utf8");
-    const next = replaceAll(content, sheets);
+    const next = replaceAll(replaceAll(content, sheets), file.endsWith(".html") ? renamed : new Map());
     if (next !== content) writeFileSync(file, next);
   }
   return report;

@@ -1,4 +1,4 @@
-// Page weight of a built page: the gzip bytes of its HTML, of every stylesheet it links and of
+// Page weight of a built page: the gzip bytes of its HTML (inline stylesheets included), of every stylesheet it links and of
 // every script it can run (inline scripts, module scripts, island components and renderers, and
 // everything they import), plus the font files its CSS can request and how many requests hold its
 // first paint. Deterministic: same build, same bytes. Used by the budget tests and by `npm run bench`.
@@ -64,8 +64,8 @@ export function createWeigher(distDir, base = "/") {
     const cssBytes = css.reduce((sum, href) => sum + gz(readFileSync(fileFor(href))), 0);
     const jsBytes = [...scripts].reduce((sum, src) => sum + gz(readFileSync(fileFor(src))), 0) + inlineScripts.reduce((sum, m) => sum + gz(m[1]), 0);
     const fonts = new Set();
-    for (const href of css) {
-      const text = readFileSync(fileFor(href), "utf8");
+    const inlineStyles = [...html.matchAll(/<style\b[^>]*>([\s\S]*?)<\/style>/g)].map((m) => m[1]);
+    for (const text of [...css.map((href) => readFileSync(fileFor(href), "utf8")), ...inlineStyles]) {
       for (const m of text.matchAll(/url\(([^)]+)\)/g)) fonts.add(m[1].replace(/["']/g, ""));
     }
     // Requests that hold the first paint: stylesheets (unless for print only) and classic scripts
@@ -86,6 +86,8 @@ export function createWeigher(distDir, base = "/") {
       lazyJs: [...lazy].reduce((sum, src) => sum + gz(readFileSync(fileFor(src))), 0),
       lazyScripts: [...lazy],
       inlineScripts: inlineScripts.length,
+      /** Stylesheets carried in the page's <head> (their bytes are part of `html`). */
+      inlineStyles: inlineStyles.length,
       stylesheets: css,
       fontsReferenced: [...fonts],
     };

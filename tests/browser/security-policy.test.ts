@@ -1,6 +1,6 @@
 /**
  * The Content Security Policy in a real browser: every page loads, hydrates, computes and searches
- * without one violation (nor a console error), and script injected into a page does not run.
+ * without one violation (nor a console error), and script or style injected into a page does not apply.
  */
 import { describe, expect, it } from "vitest";
 import type { BrowserContext, Page } from "playwright-core";
@@ -74,7 +74,7 @@ describe("the content security policy", () => {
     await context.close();
   });
 
-  it("blocks script injected into a page: an inline script, an event-handler attribute, a script from another origin", async () => {
+  it("blocks script and style injected into a page: an inline script, an event-handler attribute, a script from another origin, a <style> element, a style attribute", async () => {
     const { page, context, violations } = await watched();
     await page.goto(`${origin()}/chapters/acceleration/`);
     await waitForIslands(page);
@@ -90,11 +90,35 @@ describe("the content security policy", () => {
       const foreign = document.createElement("script");
       foreign.src = "http://127.0.0.2:9/x.js";
       document.body.append(foreign);
+      // Styles injected as markup: a <style> element and a style attribute (a page's own scripts set
+      // styles through the CSSOM, which stays allowed).
+      const sheet = document.createElement("style");
+      sheet.textContent = "body { visibility: hidden }";
+      document.head.append(sheet);
+      const p = document.createElement("p");
+      p.setAttribute("style", "display: none");
+      p.id = "styled";
+      document.body.append(p);
+      (document.querySelector("main") as HTMLElement).style.outline = "1px solid red";
     });
     // Each is reported once per policy that blocks it: the page's <meta> and the server's header.
     const kinds = async () => [...new Set((await violations()).map((v) => v.replace(/ \(.*$/, "")))].sort();
-    await expect.poll(kinds).toEqual(["script-src-attr: inline", "script-src-elem: http://127.0.0.2:9/x.js", "script-src-elem: inline"]);
+    await expect
+      .poll(kinds)
+      .toEqual([
+        "script-src-attr: inline",
+        "script-src-elem: http://127.0.0.2:9/x.js",
+        "script-src-elem: inline",
+        "style-src-attr: inline",
+        "style-src-elem: inline",
+      ]);
     expect(await page.evaluate(() => (window as unknown as { __ran?: string }).__ran)).toBeUndefined();
+    const styles = await page.evaluate(() => ({
+      body: getComputedStyle(document.body).visibility,
+      p: getComputedStyle(document.getElementById("styled") as HTMLElement).display,
+      main: getComputedStyle(document.querySelector("main") as HTMLElement).outlineStyle,
+    }));
+    expect(styles).toEqual({ body: "visible", p: "block", main: "solid" });
     await context.close();
   });
 });

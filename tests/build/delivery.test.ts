@@ -12,7 +12,14 @@ import { fileURLToPath } from "node:url";
 import { createRequire } from "node:module";
 import { brotliDecompressSync, gunzipSync } from "node:zlib";
 import { Blob as FontBlob, Face } from "harfbuzzjs";
-import { contentSecurityPolicy, HEADER_ONLY, inlineScriptHashes, parseHeadersFile } from "../../scripts/site/content-security-policy.mjs";
+import {
+  contentSecurityPolicy,
+  HEADER_ONLY,
+  inlineScriptHashes,
+  inlineStyleHashes,
+  parseHeadersFile,
+  policyBreakers,
+} from "../../scripts/site/content-security-policy.mjs";
 import { ALWAYS_KEPT, mathFontUsage } from "../../scripts/site/math-font.mjs";
 import { NOT_INDEXED } from "../../scripts/site/offline-and-search.mjs";
 import { precachedFiles, precacheSelection, transferSize } from "../../scripts/site/precache.mjs";
@@ -113,13 +120,16 @@ describe("the math font", () => {
   const fontFile = () => join(dist, usage.fonts[0]!.slice(1));
 
   it("is one face, which never hides text while it loads nor re-flows the page when late (font-display: optional)", () => {
-    const css = files()
-      .filter((f) => f.endsWith(".css"))
-      .map(read)
-      .join("\n");
-    const faces = css.match(/@font-face\{[^}]*\}/g) ?? [];
-    expect(faces).toHaveLength(1);
-    expect(faces[0]).toContain("font-display:optional");
+    // In the site's stylesheet files and in the pages' inline ones.
+    const css = [
+      ...files()
+        .filter((f) => f.endsWith(".css"))
+        .map(read),
+      ...pages().flatMap((page) => [...read(page).matchAll(/<style>([\s\S]*?)<\/style>/g)].map((m) => m[1]!)),
+    ].join("\n");
+    const faces = new Set(css.match(/@font-face\{[^}]*\}/g) ?? []);
+    expect(faces.size).toBe(1);
+    expect([...faces][0]).toContain("font-display:optional");
     expect(usage.fonts).toHaveLength(1);
   });
 
@@ -146,13 +156,15 @@ describe("the math font", () => {
     expect(tables).toContain("MATH");
   });
 
-  it("is named after its cut content, and so is the stylesheet that names it", () => {
+  it("is named after its cut content, and every page and stylesheet that names a face names that one", () => {
     expect(usage.fonts[0]).toMatch(/^\/_astro\/noto-sans-math-latin-400-normal\.[\w-]{8}\.woff2$/);
     const hash = (bytes: Buffer | string) => createHash("sha256").update(bytes).digest("base64url").slice(0, 8);
     expect(usage.fonts[0]!.endsWith(`.${hash(readFileSync(fontFile()))}.woff2`)).toBe(true);
-    const sheets = files().filter((f) => f.endsWith(".css") && read(f).includes(usage.fonts[0]!));
-    expect(sheets).toHaveLength(1);
-    expect(sheets[0]!.endsWith(`.${hash(read(sheets[0]!))}.css`), sheets[0]).toBe(true);
+    const naming = [...files().filter((f) => f.endsWith(".css")), ...pages()].filter((f) => /noto-sans-math/.test(read(f)));
+    expect(naming.length).toBeGreaterThan(0);
+    for (const f of naming) expect([...new Set(read(f).match(/\/_astro\/noto-sans-math[^)"'\s]*\.woff2/g))], f).toEqual(usage.fonts);
+    // A stylesheet file that names it is named after its own content (so it changes with the face).
+    for (const f of naming.filter((f) => f.endsWith(".css"))) expect(f.endsWith(`.${hash(read(f))}.css`), f).toBe(true);
   });
 
   it("is preloaded (as a font, with crossorigin) on pages with math only", () => {
@@ -265,14 +277,27 @@ describe("content security policy", () => {
     }
   });
 
-  it("is one policy for the whole site, allowing exactly the hashes of the inline scripts", () => {
+  it("is one policy for the whole site, allowing exactly the hashes of the inline scripts and stylesheets", () => {
     const hashes = pages().flatMap((page) => inlineScriptHashes(read(page)));
     expect(new Set(hashes).size).toBe(2); // the offline registration and the search page's script
-    const policy = contentSecurityPolicy(hashes);
+    const styleHashes = pages().flatMap((page) => inlineStyleHashes(read(page)));
+    // The pages' own small stylesheets: the chapters' math, each calculator family's, the build sheet's.
+    expect(new Set(styleHashes).size).toBeGreaterThanOrEqual(5);
+    const policy = contentSecurityPolicy(hashes, styleHashes);
     for (const page of pages()) expect(metaOf(read(page)), page).toBe(policy);
     // The hash is of the script's text exactly as served.
     const registration = /<script>([\s\S]*?)<\/script>/.exec(read("index.html"))![1]!;
     expect(policy).toContain(`'sha256-${createHash("sha256").update(registration).digest("base64")}'`);
+    const style = /<style>([\s\S]*?)<\/style>/.exec(read("chapters/spin-up/index.html"))![1]!;
+    expect(policy).toMatch(new RegExp(`style-src-elem [^;]*'sha256-${createHash("sha256").update(style).digest("base64").replace(/[+/]/g, "\\$&")}'`));
+  });
+
+  it("is refused at build time by markup that would break it: style attributes, event handlers, javascript: URLs", () => {
+    expect(policyBreakers('<p style="color:red">x</p>')).toEqual(["style attribute"]);
+    expect(policyBreakers('<img src="x" onerror="y">')).toEqual(["event-handler attribute onerror"]);
+    expect(policyBreakers('<a href="javascript:alert(1)">x</a>')).toEqual(["javascript: URL"]);
+    expect(policyBreakers("<style>p{color:red}</style><p>x</p>")).toEqual([]);
+    for (const page of pages()) expect(policyBreakers(read(page)), page).toEqual([]);
   });
 
   it("is strict: self only, no eval, no inline script, no plugins, no base or form elsewhere", () => {
@@ -280,12 +305,14 @@ describe("content security policy", () => {
     const directives: Record<string, string[]> = Object.fromEntries(policy.split(/;\s*/).map((d) => [d.split(" ")[0]!, d.split(" ").slice(1)]));
     expect(directives["default-src"]).toEqual(["'self'"]);
     expect(directives["script-src"]!.filter((s) => !s.startsWith("'sha256-"))).toEqual(["'self'", "'wasm-unsafe-eval'"]);
-    expect(directives["style-src-elem"]).toEqual(["'self'"]);
-    expect(directives["style-src-attr"]).toEqual(["'unsafe-inline'"]);
+    expect(directives["style-src-elem"]!.filter((s) => !s.startsWith("'sha256-"))).toEqual(["'self'"]);
+    expect(directives["style-src"]).toEqual(directives["style-src-elem"]);
+    expect(directives["style-src-attr"]).toEqual(["'none'"]);
     expect(directives["object-src"]).toEqual(["'none'"]);
     expect(directives["base-uri"]).toEqual(["'self'"]);
     expect(directives["form-action"]).toEqual(["'self'"]);
     expect(policy).not.toContain("'unsafe-eval'");
+    expect(policy).not.toContain("'unsafe-inline'");
     expect(policy).not.toMatch(/https?:|\*|data:|blob:/);
   });
 

@@ -138,6 +138,17 @@ describe("the built site", () => {
       },
     );
 
+    it("holds every page's first paint on one request, the site's shared stylesheet (a page's own small one is inline)", () => {
+      const all = ["index.html", "404.html", "build-sheet/index.html", "search/index.html", ...chapters.map((c) => `chapters/${c.slug}/index.html`)];
+      const shared = new Set<string>();
+      for (const path of all) {
+        const page = weigh(path);
+        expect(page.renderBlocking, path).toBe(1);
+        for (const sheet of page.stylesheets) shared.add(sheet);
+      }
+      expect([...shared]).toHaveLength(1);
+    });
+
     it("ships no JavaScript but the registration on chapters without a calculator", () => {
       for (const c of chapters.filter((c) => !c.calculator)) expect(weigh(`chapters/${c.slug}/index.html`).js, c.slug).toBeLessThanOrEqual(BUDGET.registration);
     });
@@ -163,7 +174,8 @@ describe("the built site", () => {
         .map((f) => readFileSync(f, "utf8"))
         .join("\n");
       expect(css).not.toContain(".katex");
-      expect(css).toMatch(/math\{font-family:"?Handbook Math"?,math\}/);
+      // The chapters' math stylesheet is small enough to travel inside the page.
+      expect(page).toMatch(/<style>[^<]*math\{font-family:"?Handbook Math"?,math\}/);
     });
 
     it("set an exponent as a MathML superscript (a = ω²r)", () => {
