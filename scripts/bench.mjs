@@ -46,8 +46,8 @@ console.log(
     ` (${left.size} built files left out: nothing uses them)`,
 );
 const parts = Map.groupBy(precachedFiles(dist, "/"), (file) =>
-  file.startsWith("pagefind/") || file === "search-fields.json"
-    ? "search (pagefind, fields)"
+  /^search-(fields|pages)\.json$|^search-engine\.js$/.test(file)
+    ? "search (engine, pages, fields)"
     : /\.html$/.test(file)
       ? "pages (html)"
       : /\.m?js$/.test(file)

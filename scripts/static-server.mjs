@@ -27,7 +27,6 @@ const TYPES = {
   ".pf_meta": "application/octet-stream",
   ".pf_index": "application/octet-stream",
   ".pf_fragment": "application/octet-stream",
-  ".pagefind": "application/octet-stream",
   ".wasm": "application/wasm",
 };
 

@@ -57,6 +57,60 @@ export function rankFields(entries: readonly SearchEntry[], query: string): { en
 
 /** Whether a page's text holds every word of the query (as a word, or the start of one from three letters on). */
 export function textMatches(text: string, query: string): boolean {
+  return holdsAll(new Set(words(text)), query);
+}
+
+/** The same test on a page's words read once (`new Set(words(text))`), for searching many times. */
+export function holdsAll(pageWords: ReadonlySet<string>, query: string): boolean {
   const q = words(query);
-  return q.length > 0 && allFound(q, words(text), true);
+  return q.length > 0 && q.every((t) => pageWords.has(t) || (t.length >= 3 && [...pageWords].some((w) => w.startsWith(t))));
+}
+
+/** A piece of an excerpt: text, and whether it is a word of the query. */
+export interface ExcerptPart {
+  text: string;
+  marked: boolean;
+}
+
+/**
+ * A short excerpt of `text` around the first word of the query it holds, with the query's words
+ * marked (as words, or the start of one from three letters on); the whole start of the text when it
+ * holds none. About `length` words long, with "…" where it cuts the text.
+ */
+export function excerptParts(text: string, query: string, length = 36): ExcerptPart[] {
+  const q = words(query);
+  const isMatch = (word: string) => {
+    const w = words(word).join("");
+    return w !== "" && q.some((t) => w === t || (t.length >= 3 && w.startsWith(t)));
+  };
+  const tokens = text.split(/(\s+)/).filter(Boolean);
+  const wordAt: number[] = [];
+  tokens.forEach((t, i) => {
+    if (!/^\s+$/.test(t)) wordAt.push(i);
+  });
+  const first = wordAt.findIndex((i) => isMatch(tokens[i]!));
+  // From the start when the first match fits in the excerpt with a few words after it; else from a
+  // third of the excerpt before it.
+  const from = first < 0 || first < length - 6 ? 0 : first - Math.floor(length / 3);
+  const to = Math.min(wordAt.length, from + length);
+  const parts: ExcerptPart[] = [];
+  const push = (t: string, marked: boolean) => {
+    const last = parts[parts.length - 1];
+    if (last && last.marked === marked) last.text += t;
+    else parts.push({ text: t, marked });
+  };
+  if (from > 0) push("… ", false);
+  for (let w = from; w < to; w += 1) {
+    const token = tokens[wordAt[w]!]!;
+    // A word's punctuation stays unmarked: "(Kv)" marks "Kv" only.
+    const m = /^([^\p{L}\p{N}]*)(.*?)([^\p{L}\p{N}]*)$/u.exec(token)!;
+    if (m[2] && isMatch(m[2])) {
+      if (m[1]) push(m[1], false);
+      push(m[2], true);
+      if (m[3]) push(m[3], false);
+    } else push(token, false);
+    if (w < to - 1) push(" ", false);
+  }
+  if (to < wordAt.length) push(" …", false);
+  return parts;
 }

@@ -1,62 +1,86 @@
 /**
  * The search page's behaviour. On the first search it loads, from this site only, the calculators'
- * fields (search-fields.json) and the pages' index (pagefind). Fields whose label or symbol match
- * come first and open the calculator at that field; then the pages that hold every word of the
- * query; then fields whose help mentions it. Results are plain DOM: excerpts' <mark> tags become
- * elements, no other markup from the index is trusted. The query lives in the URL (?q=…).
+ * fields (search-fields.json), the pages' text in sections (search-pages.json, written at build
+ * time by scripts/site/search-index.mjs) and the search engine (search-engine.js: MiniSearch),
+ * and indexes the sections, a slice at a time. Fields whose label or symbol match come first and
+ * open the calculator at that field; then the pages that hold every word of the query, each at its
+ * best-matching section; then fields whose help mentions it. Results are plain DOM built from
+ * plain text. The query lives in the URL (?q=…).
  */
+import type MiniSearch from "minisearch";
 import type { SearchEntry } from "./entries.ts";
-import { rankFields, STRONG_MATCH, textMatches } from "./rank.ts";
+import { type ExcerptPart, excerptParts, holdsAll, rankFields, STRONG_MATCH, words } from "./rank.ts";
 
-interface PagefindResult {
+/** A page of the index: its address (relative to the base), title and sections. */
+interface IndexedPage {
   url: string;
-  content: string;
-  excerpt: string;
-  meta?: { title?: string };
-  sub_results?: { url: string; title: string; excerpt: string }[];
+  title: string;
+  sections: { anchor: string; heading: string; text: string }[];
 }
-interface Pagefind {
-  options(options: { noWorker?: boolean }): Promise<void>;
-  search(term: string): Promise<{ results: { data(): Promise<PagefindResult> }[] }>;
+/** A section as the engine indexes it. */
+interface Section {
+  id: number;
+  page: number;
+  anchor: string;
+  title: string;
+  heading: string;
+  text: string;
+}
+interface Index {
+  entries: SearchEntry[];
+  pages: IndexedPage[];
+  /** Each page's words, read once. */
+  pageWords: Set<string>[];
+  sections: Section[];
+  engine: MiniSearch<Section>;
 }
 
 const base = import.meta.env.BASE_URL.replace(/\/?$/, "/");
-/** Pages whose text is read to check the query's words (pagefind's best first). */
-const PAGES_READ = 20;
+/** Pages listed at most. */
+const PAGES_SHOWN = 20;
 
-let loading: Promise<[SearchEntry[], Pagefind]> | null = null;
-function loadIndex(): Promise<[SearchEntry[], Pagefind]> {
+const json = <T>(name: string): Promise<T> =>
+  fetch(`${base}${name}`).then((r) => {
+    if (!r.ok) throw new Error(`${name}: HTTP ${r.status}`);
+    return r.json() as Promise<T>;
+  });
+
+let loading: Promise<Index> | null = null;
+function loadIndex(): Promise<Index> {
   loading ??= Promise.all([
-    fetch(`${base}search-fields.json`).then((r) => {
-      if (!r.ok) throw new Error(`search-fields.json: HTTP ${r.status}`);
-      return r.json() as Promise<SearchEntry[]>;
-    }),
-    (import(/* @vite-ignore */ `${base}pagefind/pagefind.js`) as Promise<Pagefind>).then(async (pagefind) => {
-      // On the page, not in a web worker: the build ships no worker script (offline-and-search.mjs).
-      await pagefind.options({ noWorker: true });
-      return pagefind;
-    }),
-  ]);
+    json<SearchEntry[]>("search-fields.json"),
+    json<IndexedPage[]>("search-pages.json"),
+    import(/* @vite-ignore */ `${base}search-engine.js`) as Promise<{ default: typeof MiniSearch }>,
+  ]).then(async ([entries, pages, { default: Engine }]) => {
+    const sections = pages.flatMap((page, p) => page.sections.map((s) => ({ ...s, page: p, title: page.title })));
+    sections.forEach((s, id) => {
+      (s as Section).id = id;
+    });
+    // The same words as the fields' ranking (rank.ts): lower case, accents off, camelCase split.
+    const engine = new Engine<Section>({
+      fields: ["title", "heading", "text"],
+      tokenize: words,
+      processTerm: (term) => term,
+      searchOptions: { boost: { title: 3, heading: 2 }, prefix: (term) => term.length >= 3 },
+    });
+    // A few dozen sections per slice, and a page's words at a time, so indexing never holds the page
+    // for long on a slow phone.
+    await engine.addAllAsync(sections as Section[], { chunkSize: 20 });
+    const pageWords: Set<string>[] = [];
+    for (const page of pages) {
+      pageWords.push(new Set(words([page.title, ...page.sections.flatMap((s) => [s.heading, s.text])].join(" "))));
+      await new Promise((resolve) => setTimeout(resolve, 0));
+    }
+    return { entries, pages, pageWords, sections: sections as Section[], engine };
+  });
   loading.catch(() => (loading = null));
   return loading;
 }
 
-function decode(text: string): string {
-  const area = document.createElement("textarea");
-  area.innerHTML = text;
-  return area.value;
-}
-
-function appendExcerpt(target: HTMLElement, excerpt: string): void {
-  let marked = false;
-  for (const part of excerpt.split(/(<mark>|<\/mark>)/)) {
-    if (part === "<mark>") marked = true;
-    else if (part === "</mark>") marked = false;
-    else if (part) {
-      const text = document.createTextNode(decode(part.replace(/<[^>]*>/g, "")));
-      if (marked) target.appendChild(document.createElement("mark")).appendChild(text);
-      else target.appendChild(text);
-    }
+function appendExcerpt(target: HTMLElement, parts: ExcerptPart[]): void {
+  for (const part of parts) {
+    if (part.marked) target.appendChild(document.createElement("mark")).textContent = part.text;
+    else target.append(part.text);
   }
 }
 
@@ -97,10 +121,15 @@ function start(): void {
     }
     status.textContent = "Searching…";
     try {
-      const [entries, pagefind] = await loadIndex();
-      const fields = rankFields(entries, term);
-      const found = await pagefind.search(term);
-      const pages = (await Promise.all(found.results.slice(0, PAGES_READ).map((r) => r.data()))).filter((page) => textMatches(page.content, term));
+      const index = await loadIndex();
+      const fields = rankFields(index.entries, term);
+      // Each page once, at its best section; a page counts when it holds every word of the query.
+      const best = new Map<number, Section>();
+      for (const hit of index.engine.search(term)) {
+        const section = index.sections[hit.id as number]!;
+        if (!best.has(section.page) && holdsAll(index.pageWords[section.page]!, term)) best.set(section.page, section);
+      }
+      const pages = [...best.values()].slice(0, PAGES_SHOWN);
       if (ticket !== latest) return;
       const strong = fields.filter((f) => f.score >= STRONG_MATCH).slice(0, 8);
       const weak = fields.filter((f) => f.score < STRONG_MATCH).slice(0, 5);
@@ -114,14 +143,11 @@ function start(): void {
           ? `${parts.filter(Boolean).join(" and ")} found.`
           : `Nothing found for “${term.trim()}”: no page or calculator field has that word.`;
       for (const hit of strong) list.appendChild(fieldItem(hit.entry));
-      for (const page of pages) {
-        const best = page.sub_results?.[0];
-        const title = page.meta?.title || page.url;
-        list.appendChild(
-          item(best ? best.url : page.url, best && best.title !== title ? `${title} — ${best.title}` : title, "", (p) =>
-            appendExcerpt(p, best ? best.excerpt : page.excerpt),
-          ),
-        );
+      for (const section of pages) {
+        const page = index.pages[section.page]!;
+        const href = `${base}${page.url}${section.anchor ? `#${section.anchor}` : ""}`;
+        const title = section.heading && section.heading !== page.title ? `${page.title} — ${section.heading}` : page.title;
+        list.appendChild(item(href, title, "", (p) => appendExcerpt(p, excerptParts(section.text || section.heading, term))));
       }
       for (const hit of weak) list.appendChild(fieldItem(hit.entry));
     } catch {

@@ -7,8 +7,6 @@
 // cannot carry (frame-ancestors).
 //
 // Why each source is there:
-// - script-src 'wasm-unsafe-eval': the search index runs as WebAssembly, which a policy without it
-//   forbids compiling. It allows WebAssembly only, not eval() or new Function().
 // - style-src-elem 'sha256-…': a page's own stylesheet, when small, is inlined in its <head> (one
 //   request fewer before the first paint; astro.config.mjs, inlineStylesheets), each by its hash.
 // - style-src-attr 'none': no page carries a style attribute (the build refuses one; formulas are
@@ -78,7 +76,7 @@ export function contentSecurityPolicy(scriptHashes, styleHashes = []) {
   const styles = ["'self'", ...[...new Set(styleHashes)].sort()].join(" ");
   return [
     "default-src 'self'",
-    `script-src ${["'self'", "'wasm-unsafe-eval'", ...[...new Set(scriptHashes)].sort()].join(" ")}`,
+    `script-src ${["'self'", ...[...new Set(scriptHashes)].sort()].join(" ")}`,
     `style-src ${styles}`,
     `style-src-elem ${styles}`,
     "style-src-attr 'none'",

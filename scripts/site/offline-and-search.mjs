@@ -1,17 +1,13 @@
-// After the build: index the pages for search (pagefind), then write a versioned service worker
-// that precaches every file a page can use (precache.mjs), so the whole handbook works offline
-// after the first visit.
+// After the build: write the pages' search index (search-index.mjs), then a versioned service
+// worker that precaches every file a page can use (precache.mjs), so the whole handbook works
+// offline after the first visit.
 import { createHash } from "node:crypto";
-import { readdirSync, readFileSync, rmSync, writeFileSync } from "node:fs";
-import { gunzipSync } from "node:zlib";
+import { readdirSync, readFileSync, writeFileSync } from "node:fs";
 import { join, relative, sep } from "node:path";
 import { fileURLToPath } from "node:url";
-import zopfli from "@gfx/zopfli";
-import { transformSync } from "esbuild";
-import * as pagefind from "pagefind";
 import { precacheSelection, transferSize } from "./precache.mjs";
 import { settleSearchFields } from "./search-fields.mjs";
-import { withFormulasAsText } from "./math-text.mjs";
+import { pageSections } from "./search-index.mjs";
 
 /** @param {string} dir @param {RegExp} [name] @returns {string[]} every file under `dir` whose name matches (.html files by default) */
 function filesUnder(dir, name = /\.html$/) {
@@ -20,24 +16,11 @@ function filesUnder(dir, name = /\.html$/) {
   );
 }
 
-/**
- * A page's HTML as the search index reads it: formulas as text (math-text.mjs), an `id` kept on
- * headings only, and a space after a table's caption and each header cell. Pagefind stores every
- * element with an id as an anchor, with its whole text, in the page's fragment, but builds its
- * section results (sub_results, which the search page shows) from headings alone: the ids of the
- * bibliography's entries, the calculator's section and the like only repeated their text in the
- * download. It also runs a caption and header cells together ("calculatorClassRm nominal"), which
- * makes words no one searches for. The served page is unchanged.
- * @param {string} html
- */
-export function htmlForSearch(html) {
-  return withFormulasAsText(html)
-    .replace(/<(?!h[1-6]\b)([a-zA-Z][\w-]*)(\s[^>]*?)?\sid="[^"]*"/g, "<$1$2")
-    .replace(/<\/(th|caption)>/g, " </$1>");
-}
-
-/** Built pages left out of the search index. */
+/** Built pages left out of the search index: "page not found" and the search page are never a useful result. */
 export const NOT_INDEXED = new Set(["404.html", "search/index.html"]);
+
+/** The pages' search index, as the search page reads it (relative to the site's base). */
+export const SEARCH_INDEX = "search-pages.json";
 
 /** How long a page request may take before the saved copy is shown instead [ms]. */
 export const NETWORK_TIMEOUT_MS = 3000;
@@ -132,7 +115,7 @@ self.addEventListener("fetch", (event) => {
 `;
 }
 
-/** Astro integration: search index and service worker, after every build. */
+/** Astro integration: the pages' search index and the service worker, after every build. */
 export function offlineAndSearch() {
   let base = "/";
   return {
@@ -145,40 +128,14 @@ export function offlineAndSearch() {
         const root = fileURLToPath(dir);
         const fallbacks = settleSearchFields(root);
         logger.info(`search fields: ${fallbacks} entries open their calculator (their field is shown only for some choices)`);
-        const { index, errors } = await pagefind.createIndex({
-          rootSelector: "main",
-          excludeSelectors: [".calc", ".site-nav", ".chapter-nav", ".chart", ".katex", ".no-search"],
-        });
-        if (!index) throw new Error(`search index failed: ${errors.join("; ")}`);
-        // Each page is indexed with its formulas as text (math-text.mjs): the served page is unchanged.
-        for (const file of filesUnder(root)) {
-          const path = relative(root, file).split(sep).join("/");
-          // "Page not found" and the search page itself are never a useful result.
-          if (NOT_INDEXED.has(path)) continue;
-          const added = await index.addHTMLFile({
-            url: `/${path.replace(/(^|\/)index\.html$/, "$1")}`,
-            content: htmlForSearch(readFileSync(file, "utf8")),
-          });
-          if (added.errors.length) throw new Error(`search index failed on ${path}: ${added.errors.join("; ")}`);
-        }
-        const written = await index.writeFiles({ outputPath: join(root, "pagefind") });
-        if (written.errors.length) throw new Error(`search index failed: ${written.errors.join("; ")}`);
-        await pagefind.close();
-        // The handbook renders its own results; pagefind's ready-made interfaces are not shipped. Its
-        // web worker is not either: the search page runs the search on the page (components/search/
-        // search.ts sets noWorker; a few hundred words of index take milliseconds), so the offline
-        // copy does not carry the same search code twice.
-        for (const file of readdirSync(join(root, "pagefind"))) {
-          if (/^pagefind-(ui|modular-ui|component-ui|highlight|worker)\./.test(file)) rmSync(join(root, "pagefind", file));
-        }
-        // The index, its fragments and its WebAssembly are gzip files that pagefind's script unpacks
-        // itself, served as they are: packed again by zopfli (same format, about 4 % smaller).
-        for (const file of filesUnder(join(root, "pagefind"), /\.(pagefind|pf_index|pf_fragment|pf_meta)$/)) {
-          writeFileSync(file, await zopfli.gzipAsync(gunzipSync(readFileSync(file)), { numiterations: 15 }));
-        }
-        // pagefind.js comes with its whitespace removed but its names whole: shorten them too.
-        const script = join(root, "pagefind", "pagefind.js");
-        writeFileSync(script, transformSync(readFileSync(script, "utf8"), { minify: true, format: "esm", target: "es2022" }).code);
+        // Each page's text in sections, formulas as text (search-index.mjs): the served page is unchanged.
+        const pages = filesUnder(root)
+          .map((file) => relative(root, file).split(sep).join("/"))
+          .filter((path) => !NOT_INDEXED.has(path))
+          .sort()
+          .map((path) => ({ url: path.replace(/(^|\/)index\.html$/, "$1"), ...pageSections(readFileSync(join(root, path), "utf8")) }));
+        writeFileSync(join(root, SEARCH_INDEX), JSON.stringify(pages));
+        logger.info(`search index: ${pages.length} pages, ${pages.reduce((n, p) => n + p.sections.length, 0)} sections`);
 
         const { files, excluded } = precacheSelection(root);
         // The version names the cache: it changes with any precached file and with the worker's own
@@ -192,7 +149,7 @@ export function offlineAndSearch() {
         logger.info(
           `offline cache: ${files.length} files, ${(size.raw / 1024).toFixed(0)} KB raw, ${(size.gzip / 1024).toFixed(0)} KB gzip (${excluded.size} files left out: nothing uses them)`,
         );
-        logger.info(`search index written; offline cache version ${version}`);
+        logger.info(`offline cache version ${version}`);
       },
     },
   };

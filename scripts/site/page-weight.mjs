@@ -36,7 +36,7 @@ export function createWeigher(distDir, base = "/") {
       if (!/^[a-z]+:/i.test(m[1])) scriptClosure(resolve(m[1]), seen, lazy);
     }
     for (const m of code.matchAll(/import\(\s*["'`]([^"'`]+\.js)["'`]\s*\)/g)) {
-      // A specifier built at run time (`${base}pagefind/…`) is not one of this build's chunks.
+      // A specifier built at run time (`${base}search-engine.js`) is not one of this build's chunks.
       if (!/^[a-z]+:/i.test(m[1]) && !m[1].includes("${")) lazy.add(resolve(m[1]));
     }
     return seen;

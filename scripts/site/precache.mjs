@@ -1,7 +1,5 @@
 // What the offline cache downloads on a first visit: every file of the build that a page can use,
 // and nothing it cannot. Left out, each for a stated reason:
-// - pagefind's WebAssembly for languages the index has no pages in (the handbook is English: the
-//   language-neutral `wasm.unknown.pagefind` is loaded only for a page language without an index);
 // - scripts, stylesheets and fonts under _astro/ that no page, stylesheet or script names (bundler
 //   output nothing loads, such as the unused framework island loader);
 // - the precompressed .br/.gz copies (the server picks one per request), source maps, the headers
@@ -32,21 +30,6 @@ export function precacheSelection(root) {
   /** @type {Map<string, string>} */
   const excluded = new Map();
 
-  // Search: WebAssembly only for the languages the index holds.
-  const entryFile = files.find((file) => file.endsWith("pagefind/pagefind-entry.json"));
-  if (entryFile) {
-    const entry = JSON.parse(readFileSync(join(root, entryFile), "utf8"));
-    const languages = Object.values(entry.languages ?? {});
-    const wasm = new Set(languages.map((language) => language.wasm).filter(Boolean));
-    const folder = entryFile.replace(/pagefind-entry\.json$/, "");
-    // A language without its own WebAssembly falls back to the neutral one: keep it then.
-    if (languages.some((language) => !language.wasm)) wasm.add("unknown");
-    for (const file of files) {
-      const m = new RegExp(`^${folder.replace(/[.*+?^${}()|[\]\\]/g, "\\$&")}wasm\\.([\\w-]+)\\.pagefind$`).exec(file);
-      if (m && !wasm.has(m[1])) excluded.set(file, `search WebAssembly for a language with no pages (${m[1]})`);
-    }
-  }
-
   // Bundler output that nothing refers to: reachable = named by a page or by a reachable file.
   const bundled = files.filter((file) => /(^|\/)_astro\/[^/]+\.(m?js|css|woff2?)$/.test(file));
   const name = (file) => file.slice(file.lastIndexOf("/") + 1);
@@ -67,7 +50,7 @@ export function precacheSelection(root) {
 }
 
 /** File types the build stores compressed already: compressing them again gains nothing. */
-const PACKED = /\.(woff2|png|jpe?g|webp|avif|gif|pf_fragment|pf_index|pf_meta|pagefind|wasm)$/;
+const PACKED = /\.(woff2|png|jpe?g|webp|avif|gif|wasm)$/;
 
 /**
  * Bytes of a list of built files: raw, as gzip (level 9) and as brotli (quality 11), for files that

@@ -8,7 +8,7 @@ import { fileURLToPath } from "node:url";
 import { promisify } from "node:util";
 import { brotliCompress, constants, gzip } from "node:zlib";
 
-/** Text files worth compressing. (Fonts, images and pagefind's index files are compressed already.) */
+/** Text files worth compressing. (Fonts and images are compressed already.) */
 export const COMPRESSIBLE = /\.(html|css|js|mjs|json|svg|txt|xml|webmanifest|map)$/;
 
 const brotli = promisify(brotliCompress);

@@ -29,8 +29,7 @@ async function watched(): Promise<Watched> {
   const problems: string[] = [];
   page.on("pageerror", (error) => problems.push(`pageerror: ${error.message}`));
   page.on("console", (message) => {
-    // The search index runs in a web worker; pagefind says so when it has to fall back to the page.
-    if (message.type() === "error" || /Pagefind/i.test(message.text())) problems.push(`console ${message.type()}: ${message.text()}`);
+    if (message.type() === "error") problems.push(`console ${message.type()}: ${message.text()}`);
   });
   const violations = () => page.evaluate(() => (window as unknown as { __violations: string[] }).__violations);
   return { page, context, violations, problems };
@@ -52,7 +51,7 @@ describe("the content security policy", () => {
     await page.fill("#placement-calculator-radius", "30 mm");
     await expect.poll(() => page.locator('[data-out="accel-top"]').textContent()).toBe("302 gₙ");
     seen.push(...(await violations()));
-    // A search: pagefind's worker and WebAssembly load and run.
+    // A search: the engine and the index load and run.
     await page.goto(`${origin()}/search/?q=headroom`);
     await expect.poll(() => page.locator("#search-results li").count(), { timeout: 10_000 }).toBeGreaterThan(0);
     await page.fill("#search-input", "balance grade");
@@ -68,7 +67,7 @@ describe("the content security policy", () => {
     for (const path of ["/", "/chapters/spin-up/", "/no-such-page/"]) {
       const response = await page.goto(`${origin()}${path}`);
       const meta = await page.locator('meta[http-equiv="Content-Security-Policy"]').getAttribute("content");
-      expect(meta, path).toMatch(/^default-src 'self'; script-src 'self' 'wasm-unsafe-eval' 'sha256-/);
+      expect(meta, path).toMatch(/^default-src 'self'; script-src 'self' 'sha256-/);
       expect(response?.headers()["content-security-policy"], path).toBe(`${meta}; frame-ancestors 'none'`);
     }
     await context.close();

@@ -21,7 +21,7 @@ import {
   policyBreakers,
 } from "../../scripts/site/content-security-policy.mjs";
 import { ALWAYS_KEPT, mathFontUsage } from "../../scripts/site/math-font.mjs";
-import { NOT_INDEXED } from "../../scripts/site/offline-and-search.mjs";
+import { NOT_INDEXED, SEARCH_INDEX } from "../../scripts/site/offline-and-search.mjs";
 import { precachedFiles, precacheSelection, transferSize } from "../../scripts/site/precache.mjs";
 import { createWeigher } from "../../scripts/site/page-weight.mjs";
 
@@ -40,47 +40,21 @@ async function fontCharacters(path: string): Promise<Set<string>> {
   const face = new Face(new FontBlob(await fontverter.convert(readFileSync(path), "sfnt")), 0);
   return new Set([...face.collectUnicodes()].map((code) => String.fromCodePoint(code)));
 }
-/** A pagefind data file: gzip, then a signature, then the payload. */
-const pagefindData = (file: string) => gunzipSync(readFileSync(join(dist, file))).subarray("pagefind_dcd".length);
 
 const KIB = 1024;
 /**
- * Ceiling for the first visit's offline download, gzip bytes (fonts and the search index count at
- * their own, already compressed, size). Measured 515 KiB with 12 pages (1.60 MB raw; 471 KiB as
- * brotli), from 739 KiB before; 534 KiB with 13 (the radius-trim chapter: its page, script and
- * search entries); 554 KiB with 14 (the quick-balance chapter: its page, script and search entries,
- * about 20 KiB); 584 KiB with 15 (the weapon-turn chapter: its page, script, the turn check's code
- * and search entries, and that code on the build sheet, about 25 KiB, so the ceiling rose from 565
- * to 590 KiB); with 16 (the steering chapter: its page, its script with the simulation behind its
- * button, its search entries and the steering check on the build sheet, about 42 KiB) the ceiling
- * is 640 KiB; with 18 (the shaft and hit chapters: their pages, scripts and search entries, and both
- * checks on the build sheet) 682 KiB; then the print view's QR encoder with the link codec (about
- * 6.5 KiB, loaded only on print), the calculators' fields for search (search-fields.json, 8.4 KiB),
- * the formulas as text in the search index (about 10 KiB), the steering simulation's view (loaded
- * on its button) and the bolted-joint check (about 10 KiB: its code on the build sheet and as the
- * fasteners page's on-use chunk, the chapter's longer text, formulas and inch tables): measured
- * 780 KiB (799 054 B), with the review's corrections and the saved-designs work beside them; then the
- * build sheet's checks as chunks of their own, loaded for the sections a design holds (their forms
- * apart from them): 792 KiB (810 537 B), ceiling 800 KiB. Then a lighter first visit, from 790 KiB
- * (809 342 B; 719 KiB as brotli): the KaTeX faces in use cut to the characters the math sets (80.4 ->
- * 32.1 KiB); the search run on the page, so pagefind's web worker (the search code a second time) is
- * not shipped; pagefind.js minified; the index without the bibliography's locators, the home page's
- * chapter list, anchors that are not headings, and the 404 and search pages; pagefind's files packed
- * by zopfli (search data 265 -> 221 KiB): measured 698.5 KiB (715 271 B), 628.3 KiB (643 398 B) as
- * brotli, which is what a browser given the .br copies downloads; ceilings 713 and 641 KiB. The
- * 500 KiB target is not met: what remains is used (18 pages, 226 KiB, of which KaTeX's markup is
- * about 51 KiB; the calculators' scripts, 197 KiB; 6 cut fonts, 32 KiB; the search index, its
- * WebAssembly and code, and the calculators' fields for search, 232 KiB). Then the build sheet's own
- * copies of the forms' declarations (scripts/site/sheet-copies.mjs: its checks' physics apart,
- * chapter pages unchanged; +8.7 KB) and each calculator page's unit tables in its own entry (only the
- * kinds it names; the tables repeat across entries, +13 KB): measured 720.8 KiB (648.2 KiB as
- * brotli). Then the spin-up, calibration and mass-layout pages' code split into what runs at load and
- * what loads on use (more, smaller files: 69 → 82 scripts): 737.4 KiB (661.6 KiB as brotli); ceilings
- * 752 and 675 KiB.
+ * Ceiling for the first visit's offline download, gzip bytes (fonts count at their own, already
+ * compressed, size). It grew with the chapters to 792 KiB (18 pages); then, for a lighter first
+ * visit: the fonts cut to the characters the formulas use; the formulas as MathML in one math font
+ * instead of KaTeX's markup and six fonts (737.4 -> 687.2 KiB); the pages' small stylesheets inside
+ * them; and the search as the pages' text with a small engine (MiniSearch) in place of a prebuilt
+ * index with its WebAssembly and code (search 232.7 -> about 75 KiB): measured 536.3 KiB
+ * (549 140 B), 463.8 KiB as brotli, which is what a browser given the .br copies downloads; ceilings
+ * 545 and 472 KiB. The 500 KiB gzip target is not met yet: pages 212 KiB, scripts 228 KiB.
  */
-const PRECACHE_GZIP_CEILING = 752 * KIB;
+const PRECACHE_GZIP_CEILING = 545 * KIB;
 /** The same download as brotli: what a browser gets when the server sends the .br copies. */
-const PRECACHE_BROTLI_CEILING = 675 * KIB;
+const PRECACHE_BROTLI_CEILING = 472 * KIB;
 
 describe("compressed copies", () => {
   const text = () => files().filter((f) => /\.(html|css|js|svg|json)$/.test(f));
@@ -110,7 +84,7 @@ describe("compressed copies", () => {
   });
 
   it("are not made for files stored compressed already (fonts, search index)", () => {
-    expect(files().filter((f) => /\.(woff2|pf_fragment|pf_index|pf_meta|pagefind)\.(br|gz)$/.test(f))).toEqual([]);
+    expect(files().filter((f) => /\.woff2\.(br|gz)$/.test(f))).toEqual([]);
   });
 });
 
@@ -185,16 +159,8 @@ describe("offline cache", () => {
     const built = files().filter((f) => !derived(f) && !excluded.has(f));
     expect(new Set(precached())).toEqual(new Set(built));
     for (const [file, reason] of excluded) {
-      expect(`${file}: ${reason}`).toMatch(
-        /^(pagefind\/wasm\.[\w-]+\.pagefind: search WebAssembly for a language with no pages \([\w-]+\)|_astro\/[\w.-]+\.(js|css|woff2?): bundled file no page loads)$/,
-      );
+      expect(`${file}: ${reason}`).toMatch(/^_astro\/[\w.-]+\.(js|css|woff2?): bundled file no page loads$/);
     }
-  });
-
-  it("leaves out the search's language-neutral WebAssembly", () => {
-    const left = [...selection().excluded.keys()];
-    expect(left).toContain("pagefind/wasm.unknown.pagefind");
-    expect(precached()).toContain("pagefind/wasm.en.pagefind");
   });
 
   it("holds every page, and every stylesheet, script (also those loaded on use) and font a page can request", () => {
@@ -209,9 +175,8 @@ describe("offline cache", () => {
         if (!cached.has(url.replace(/^\//, ""))) missing.push(`${page}: ${url}`);
       }
     }
-    for (const f of files().filter((f) => f.startsWith("pagefind/") && !/\.(br|gz)$/.test(f) && f !== "pagefind/wasm.unknown.pagefind")) {
-      if (!cached.has(f)) missing.push(f);
-    }
+    // What the search page loads on its first search.
+    for (const f of ["search-fields.json", SEARCH_INDEX, "search-engine.js"]) if (!cached.has(f)) missing.push(f);
     expect(missing).toEqual([]);
   });
 
@@ -231,38 +196,52 @@ describe("offline cache", () => {
 });
 
 describe("search index", () => {
-  const fragments = () =>
-    files()
-      .filter((f) => f.endsWith(".pf_fragment"))
-      .map((f) => JSON.parse(pagefindData(f).toString("utf8")) as { url: string; content: string; anchors: { element: string }[] });
+  type Indexed = { url: string; title: string; sections: { anchor: string; heading: string; text: string }[] };
+  const index = () => JSON.parse(read(SEARCH_INDEX)) as Indexed[];
 
   it("holds every page but the page-not-found and the search page", () => {
-    const urls = fragments()
-      .map((f) => f.url)
+    const urls = index()
+      .map((p) => p.url)
       .sort();
     const indexed = pages()
       .filter((p) => !NOT_INDEXED.has(p))
-      .map((p) => `/${p.replace(/(^|\/)index\.html$/, "$1")}`)
+      .map((p) => p.replace(/(^|\/)index\.html$/, "$1"))
       .sort();
     expect(urls).toEqual(indexed);
     expect(NOT_INDEXED).toEqual(new Set(["404.html", "search/index.html"]));
   });
 
-  it("stores headings only as anchors (the search page's section results come from headings)", () => {
-    const elements = new Set(fragments().flatMap((f) => f.anchors.map((a) => a.element)));
-    expect([...elements].filter((e) => !/^h[1-6]$/.test(e))).toEqual([]);
+  it("splits each page at its headings with an id, each section linking to its heading", () => {
+    for (const page of index()) {
+      const html = read(page.url ? `${page.url}index.html` : "index.html");
+      expect(page.title.length, page.url).toBeGreaterThan(0);
+      for (const section of page.sections.filter((s) => s.anchor))
+        expect(html, `${page.url}#${section.anchor}`).toMatch(new RegExp(`<h[2-6] id="${section.anchor}"`));
+    }
+    const acceleration = index().find((p) => p.url === "chapters/acceleration/")!;
+    expect(acceleration.sections.map((s) => s.heading)).toContain("How far out the sensor may go");
+  });
+
+  it("holds the pages' text with formulas as text, and not the calculators, navigation or charts", () => {
+    const acceleration = index().find((p) => p.url === "chapters/acceleration/")!;
+    const text = acceleration.sections.map((s) => s.text).join(" ");
+    expect(text).toContain("F_s = 200 g_n");
+    expect(text).not.toMatch(/<[a-z]/);
+    // The calculator's own labels and buttons are found through search-fields.json instead.
+    expect(text).not.toContain("Copy link to this check");
   });
 
   it("takes a source's author, title and publication, but not its locator", () => {
-    const fasteners = fragments().find((f) => f.url === "/chapters/fasteners/")!;
-    expect(fasteners.content).toContain("Shigley's Mechanical Engineering Design. McGraw-Hill, 9th ed., 2011,");
-    expect(fasteners.content).not.toContain("Design of Nonpermanent Joints");
+    const fasteners = index().find((p) => p.url === "chapters/fasteners/")!;
+    const text = fasteners.sections.map((s) => s.text).join(" ");
+    expect(text).toContain("Shigley's Mechanical Engineering Design. McGraw-Hill, 9th ed., 2011,");
+    expect(text).not.toContain("Design of Nonpermanent Joints");
     expect(read("chapters/fasteners/index.html")).toContain("Design of Nonpermanent Joints");
   });
 
-  it("is searched on the page: pagefind's web worker is not shipped and the search page turns it off", () => {
-    expect(files().filter((f) => f.startsWith("pagefind/") && f.includes("worker"))).toEqual([]);
-    expect(read("search/index.html")).toContain("noWorker:!0");
+  it("is searched with the engine the build wrote, loaded only when a search runs", () => {
+    expect(read("search-engine.js")).toMatch(/export\s*\{/);
+    expect(read("search/index.html")).toContain("search-engine.js");
   });
 });
 
@@ -304,7 +283,7 @@ describe("content security policy", () => {
     const policy = metaOf(read("index.html"))!;
     const directives: Record<string, string[]> = Object.fromEntries(policy.split(/;\s*/).map((d) => [d.split(" ")[0]!, d.split(" ").slice(1)]));
     expect(directives["default-src"]).toEqual(["'self'"]);
-    expect(directives["script-src"]!.filter((s) => !s.startsWith("'sha256-"))).toEqual(["'self'", "'wasm-unsafe-eval'"]);
+    expect(directives["script-src"]!.filter((s) => !s.startsWith("'sha256-"))).toEqual(["'self'"]);
     expect(directives["style-src-elem"]!.filter((s) => !s.startsWith("'sha256-"))).toEqual(["'self'"]);
     expect(directives["style-src"]).toEqual(directives["style-src-elem"]);
     expect(directives["style-src-attr"]).toEqual(["'none'"]);

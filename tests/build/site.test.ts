@@ -65,7 +65,8 @@ describe("the built site", () => {
     "build-sheet/index.html",
     "search/index.html",
     "sw.js",
-    "pagefind/pagefind.js",
+    "search-pages.json",
+    "search-engine.js",
     ...chapters.map((c) => `chapters/${c.slug}/index.html`),
   ])("has %s", (page) => {
     expect(existsSync(join(dist, page))).toBe(true);
@@ -125,7 +126,7 @@ describe("the built site", () => {
     it("loads the search index only when a search runs", () => {
       const search = weigh("search/index.html");
       expect(search.js).toBeLessThanOrEqual(BUDGET.searchJs);
-      expect(search.scripts.some((s: string) => s.includes("pagefind"))).toBe(false);
+      expect(search.scripts.some((s: string) => s.includes("search-engine"))).toBe(false);
     });
 
     it.each(chapters.filter((c) => c.calculator && c.islands === 1).map((c) => c.slug))(
@@ -144,7 +145,7 @@ describe("the built site", () => {
       for (const path of all) {
         const page = weigh(path);
         expect(page.renderBlocking, path).toBe(1);
-        for (const sheet of page.stylesheets) shared.add(sheet);
+        for (const sheet of page.stylesheets) shared.add(String(sheet));
       }
       expect([...shared]).toHaveLength(1);
     });

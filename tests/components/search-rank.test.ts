@@ -5,7 +5,7 @@
 import { describe, expect, it } from "vitest";
 import { CALCULATORS } from "../../calc/design/calculators.ts";
 import { searchEntries } from "../../components/search/entries.ts";
-import { fieldScore, rankFields, STRONG_MATCH, textMatches, words } from "../../components/search/rank.ts";
+import { excerptParts, fieldScore, rankFields, STRONG_MATCH, textMatches, words } from "../../components/search/rank.ts";
 
 const entries = searchEntries(CALCULATORS);
 const first = (query: string) => rankFields(entries, query)[0];
@@ -83,5 +83,25 @@ describe("the field entries", () => {
 
   it("lists units metric first, then US when different", () => {
     expect(entries.find((e) => e.url.endsWith("#rim-calculator-outerRadius"))?.unit).toBe("mm, in");
+  });
+});
+
+describe("a page's excerpt", () => {
+  const shown = (parts: { text: string; marked: boolean }[]) => parts.map((p) => (p.marked ? `[${p.text}]` : p.text)).join("");
+
+  it("marks the query's words, and the words they start (from three letters on), not the punctuation around them", () => {
+    expect(shown(excerptParts("The motor's Kv (rpm/V) sets the counterweights.", "kv counterw"))).toBe("The motor's [Kv] (rpm/V) sets the [counterweights].");
+    expect(shown(excerptParts("a kvetch", "kv"))).toBe("a kvetch");
+  });
+
+  it("starts at the text's start when the first match fits, else a third of the excerpt before it, with … where it cuts", () => {
+    const text = Array.from({ length: 100 }, (_, i) => `w${i}`).join(" ");
+    expect(shown(excerptParts(text, "w20", 36))).toBe(`${Array.from({ length: 36 }, (_, i) => (i === 20 ? "[w20]" : `w${i}`)).join(" ")} …`);
+    expect(shown(excerptParts(text, "w50", 36))).toBe(`… ${Array.from({ length: 36 }, (_, i) => (i + 38 === 50 ? "[w50]" : `w${i + 38}`)).join(" ")} …`);
+    expect(shown(excerptParts(text, "w99", 36))).toBe(`… ${Array.from({ length: 13 }, (_, i) => (i + 87 === 99 ? "[w99]" : `w${i + 87}`)).join(" ")}`);
+  });
+
+  it("shows the start of a text that holds none of the words", () => {
+    expect(shown(excerptParts("one two three", "zzz"))).toBe("one two three");
   });
 });
