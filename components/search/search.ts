@@ -1,21 +1,21 @@
 /**
  * The search page's behaviour. On the first search it loads, from this site only, the calculators'
- * fields (search-fields.json), the pages' text in sections (search-pages.json, written at build
- * time by scripts/site/search-index.mjs) and the search engine (search-engine.js: MiniSearch),
- * and indexes the sections, a slice at a time. Fields whose label or symbol match come first and
+ * fields (search-fields.json), the list of pages (search-pages.json) and the search engine
+ * (search-engine.js: MiniSearch and the page reader, components/search/page-text.ts); it fetches
+ * the pages (from the offline copy once saved), reads their text in sections and indexes them, a
+ * page at a time. Fields whose label or symbol match come first and
  * open the calculator at that field; then the pages that hold every word of the query, each at its
  * best-matching section; then fields whose help mentions it. Results are plain DOM built from
  * plain text. The query lives in the URL (?q=…).
  */
 import type MiniSearch from "minisearch";
 import type { SearchEntry } from "./entries.ts";
+import type { PageText } from "./page-text.ts";
 import { type ExcerptPart, excerptParts, holdsAll, rankFields, STRONG_MATCH, words } from "./rank.ts";
 
-/** A page of the index: its address (relative to the base), title and sections. */
-interface IndexedPage {
+/** A page read: its address (relative to the base), title and sections. */
+interface IndexedPage extends PageText {
   url: string;
-  title: string;
-  sections: { anchor: string; heading: string; text: string }[];
 }
 /** A section as the engine indexes it. */
 interface Section {
@@ -45,17 +45,15 @@ const json = <T>(name: string): Promise<T> =>
     return r.json() as Promise<T>;
   });
 
+const tick = () => new Promise((resolve) => setTimeout(resolve, 0));
+
 let loading: Promise<Index> | null = null;
 function loadIndex(): Promise<Index> {
   loading ??= Promise.all([
     json<SearchEntry[]>("search-fields.json"),
-    json<IndexedPage[]>("search-pages.json"),
-    import(/* @vite-ignore */ `${base}search-engine.js`) as Promise<{ default: typeof MiniSearch }>,
-  ]).then(async ([entries, pages, { default: Engine }]) => {
-    const sections = pages.flatMap((page, p) => page.sections.map((s) => ({ ...s, page: p, title: page.title })));
-    sections.forEach((s, id) => {
-      (s as Section).id = id;
-    });
+    json<string[]>("search-pages.json"),
+    import(/* @vite-ignore */ `${base}search-engine.js`) as Promise<{ default: typeof MiniSearch; pageSections: (doc: Document) => PageText }>,
+  ]).then(async ([entries, urls, { default: Engine, pageSections }]) => {
     // The same words as the fields' ranking (rank.ts): lower case, accents off, camelCase split.
     const engine = new Engine<Section>({
       fields: ["title", "heading", "text"],
@@ -63,15 +61,30 @@ function loadIndex(): Promise<Index> {
       processTerm: (term) => term,
       searchOptions: { boost: { title: 3, heading: 2 }, prefix: (term) => term.length >= 3 },
     });
-    // A few dozen sections per slice, and a page's words at a time, so indexing never holds the page
-    // for long on a slow phone.
-    await engine.addAllAsync(sections as Section[], { chunkSize: 20 });
+    const texts = urls.map((url) =>
+      fetch(`${base}${url}`).then((r) => {
+        if (!r.ok) throw new Error(`${url}: HTTP ${r.status}`);
+        return r.text();
+      }),
+    );
+    const pages: IndexedPage[] = [];
+    const sections: Section[] = [];
     const pageWords: Set<string>[] = [];
-    for (const page of pages) {
+    const parser = new DOMParser();
+    // A page at a time, parsed in one task and read in the next, so reading never holds the page
+    // for long on a slow phone.
+    for (const [p, url] of urls.entries()) {
+      const doc = parser.parseFromString(await texts[p]!, "text/html");
+      await tick();
+      const page = { url, ...pageSections(doc) };
+      pages.push(page);
+      const own = page.sections.map((s, i) => ({ ...s, id: sections.length + i, page: p, title: page.title }));
+      for (const s of own) sections.push(s);
+      engine.addAll(own);
       pageWords.push(new Set(words([page.title, ...page.sections.flatMap((s) => [s.heading, s.text])].join(" "))));
-      await new Promise((resolve) => setTimeout(resolve, 0));
+      await tick();
     }
-    return { entries, pages, pageWords, sections: sections as Section[], engine };
+    return { entries, pages, pageWords, sections, engine };
   });
   loading.catch(() => (loading = null));
   return loading;
@@ -150,7 +163,9 @@ function start(): void {
         list.appendChild(item(href, title, "", (p) => appendExcerpt(p, excerptParts(section.text || section.heading, term))));
       }
       for (const hit of weak) list.appendChild(fieldItem(hit.entry));
-    } catch {
+    } catch (error) {
+      // For whoever looks into it; the reader gets the words below.
+      console.warn("search:", error);
       if (ticket === latest)
         status.textContent = "The search index could not be loaded. If you are offline, open the handbook once while online so it can be saved.";
     }

@@ -1,13 +1,12 @@
-// After the build: write the pages' search index (search-index.mjs), then a versioned service
-// worker that precaches every file a page can use (precache.mjs), so the whole handbook works
-// offline after the first visit.
+// After the build: list the pages a search reads, then write a versioned service worker that
+// precaches every file a page can use (precache.mjs), so the whole handbook works offline after the
+// first visit.
 import { createHash } from "node:crypto";
 import { readdirSync, readFileSync, writeFileSync } from "node:fs";
 import { join, relative, sep } from "node:path";
 import { fileURLToPath } from "node:url";
 import { precacheSelection, transferSize } from "./precache.mjs";
 import { settleSearchFields } from "./search-fields.mjs";
-import { pageSections } from "./search-index.mjs";
 
 /** @param {string} dir @param {RegExp} [name] @returns {string[]} every file under `dir` whose name matches (.html files by default) */
 function filesUnder(dir, name = /\.html$/) {
@@ -19,7 +18,11 @@ function filesUnder(dir, name = /\.html$/) {
 /** Built pages left out of the search index: "page not found" and the search page are never a useful result. */
 export const NOT_INDEXED = new Set(["404.html", "search/index.html"]);
 
-/** The pages' search index, as the search page reads it (relative to the site's base). */
+/**
+ * The pages a search reads, as addresses relative to the site's base. The search page fetches them
+ * on the first search (from the offline copy once it is saved) and reads their text itself
+ * (components/search/page-text.ts), so their text is downloaded once, as pages, not again as an index.
+ */
 export const SEARCH_INDEX = "search-pages.json";
 
 /** How long a page request may take before the saved copy is shown instead [ms]. */
@@ -115,7 +118,7 @@ self.addEventListener("fetch", (event) => {
 `;
 }
 
-/** Astro integration: the pages' search index and the service worker, after every build. */
+/** Astro integration: the list of pages a search reads and the service worker, after every build. */
 export function offlineAndSearch() {
   let base = "/";
   return {
@@ -128,14 +131,13 @@ export function offlineAndSearch() {
         const root = fileURLToPath(dir);
         const fallbacks = settleSearchFields(root);
         logger.info(`search fields: ${fallbacks} entries open their calculator (their field is shown only for some choices)`);
-        // Each page's text in sections, formulas as text (search-index.mjs): the served page is unchanged.
         const pages = filesUnder(root)
           .map((file) => relative(root, file).split(sep).join("/"))
           .filter((path) => !NOT_INDEXED.has(path))
           .sort()
-          .map((path) => ({ url: path.replace(/(^|\/)index\.html$/, "$1"), ...pageSections(readFileSync(join(root, path), "utf8")) }));
+          .map((path) => path.replace(/(^|\/)index\.html$/, "$1"));
         writeFileSync(join(root, SEARCH_INDEX), JSON.stringify(pages));
-        logger.info(`search index: ${pages.length} pages, ${pages.reduce((n, p) => n + p.sections.length, 0)} sections`);
+        logger.info(`search: ${pages.length} pages to read`);
 
         const { files, excluded } = precacheSelection(root);
         // The version names the cache: it changes with any precached file and with the worker's own

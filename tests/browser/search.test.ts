@@ -54,3 +54,20 @@ describe("search page", () => {
     await context.close();
   });
 });
+
+describe("search offline", () => {
+  it("finds pages and fields with no network once the offline copy is saved, reading the saved pages", async () => {
+    const context = await site.browser().newContext({ viewport: { width: 390, height: 844 } });
+    const page = await context.newPage();
+    await page.goto(`${site.origin()}/`);
+    // Installed and active: every file of the offline copy is saved.
+    await page.evaluate(() => navigator.serviceWorker.ready.then(() => undefined));
+    await context.setOffline(true);
+    await page.goto(`${site.origin()}/search/?q=hoop%20stress`);
+    const first = page.locator("#search-results li a").first();
+    await expect.poll(() => first.textContent(), { timeout: 15_000 }).toMatch(/^Rims and disks/);
+    await page.fill("#search-input", "kv");
+    await expect.poll(() => first.textContent(), { timeout: 10_000 }).toBe("Motor Kv (rpm/V)");
+    await context.close();
+  });
+});

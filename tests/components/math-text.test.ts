@@ -6,7 +6,7 @@ import { describe, expect, it } from "vitest";
 import katex from "katex";
 import { fromHtml } from "hast-util-from-html";
 import { toHtml } from "hast-util-to-html";
-import { mathToText, withFormulasAsText } from "../../scripts/site/math-text.mjs";
+import { mathToText, withFormulasAsText } from "../../components/search/math-text.mjs";
 import { rehypeMath } from "../../scripts/site/rehype-math.mjs";
 
 const render = (tex: string, displayMode = false) => {

@@ -1,16 +1,20 @@
+// @vitest-environment happy-dom
 /**
- * A built page as the search index reads it (scripts/site/search-index.mjs): sections at headings
- * with an id, plain text with formulas as text, and nothing from the calculators, navigation,
- * charts or what is marked .no-search.
+ * A page as the search reads it (components/search/page-text.ts): sections at headings with an id,
+ * plain text with formulas as text, and nothing from the calculators, navigation, charts or what is
+ * marked .no-search.
  */
 import { describe, expect, it } from "vitest";
 import katex from "katex";
-import { pageSections } from "../../scripts/site/search-index.mjs";
+import { pageSections } from "../../components/search/page-text.ts";
 
 const page = (main: string) =>
-  `<!doctype html><html><head><title>T — Handbook</title></head><body><nav class="site-nav">Home Search</nav><main>${main}</main></body></html>`;
+  new DOMParser().parseFromString(
+    `<!doctype html><html><head><title>T — Handbook</title></head><body><nav class="site-nav">Home Search</nav><main>${main}</main></body></html>`,
+    "text/html",
+  );
 
-describe("a page as the search index reads it", () => {
+describe("a page as the search reads it", () => {
   it("takes the title from the page's h1 and starts a section at each heading with an id", () => {
     const read = pageSections(
       page('<h1>Tip speed</h1><p>Lead.</p><h2 id="physics">The physics</h2><p>One.</p><h3>No id</h3><p>Two.</p><h3 id="more">More</h3><p>Three.</p>'),
