@@ -27,6 +27,7 @@ import { computed, signal } from "../calc-ui/reactive.ts";
 import { ChoiceField } from "../loads/ChoiceField.tsx";
 import { area, Outputs, q, VERDICT_TONE, verdictRule } from "../loads/format.tsx";
 import { Verdict } from "../calc-ui/Verdict.tsx";
+import { whenIdle } from "../calc-ui/idle.ts";
 
 /** The island name: this file's name. */
 export const island = "fasteners";
@@ -105,10 +106,7 @@ export function createFastenerModel(initial?: BoltedJointCheck | null) {
   const model = createCalculatorModel(fastenerCalculator, run, "metric", retiredKeys);
   // Fetched once the page is idle, so the first edit computes at once instead of loading the code
   // and drawing twice in the same moment (a 55-90 ms task at 4x CPU slowdown, measured).
-  if (typeof window !== "undefined") {
-    const later = window.requestIdleCallback ?? ((task: () => void) => setTimeout(task, 1000));
-    later(() => void loadJointCheck());
-  }
+  whenIdle(() => void loadJointCheck());
   /** True while the values wait for the check's code (the outcome's error is then not the user's). */
   const waiting = computed(() => model.values.value !== null && loadedCheck.value === null && !(initial && sameValues(model.values.value, defaults)));
   /** Picks a size; a grade of the other system becomes the nearest grade of the size's system. */

@@ -19,6 +19,7 @@ import { ResultBar, type Tone } from "../calc-ui/ResultBar.tsx";
 import { linkFor, syncWithUrl } from "../calc-ui/url-sync.ts";
 import { createCalculatorModel, type PageState } from "../calc-ui/model.ts";
 import { type Signal, signal } from "../calc-ui/reactive.ts";
+import { whenIdle } from "../calc-ui/idle.ts";
 
 /** The island name: this file's name. */
 export const island = "steering";
@@ -69,6 +70,8 @@ export default function SteeringCalculator({ id = steeringCalculator.anchor }: S
   useEffect(() => {
     const stop = syncWithUrl(model);
     if (sim.shown.value) loadView(sim);
+    // The simulation's code, fetched and evaluated once the page is idle: a press then only draws.
+    else whenIdle(() => void import("../steering/simulation.tsx"));
     return stop;
   }, [model]);
   const { fields } = model;

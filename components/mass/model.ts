@@ -19,6 +19,7 @@ import type { MountingPoint } from "../../calc/mass/counterweight.ts";
 import { fromSI, type UnitSystem } from "../../calc/core/units.ts";
 import { createFieldsModel, fieldMessage } from "../calc-ui/fields.ts";
 import { copyPart, createPart, PART_INPUTS, readPart, setValues, type PartModel } from "./parts.ts";
+import { whenIdle } from "../calc-ui/idle.ts";
 
 /** Counterweight modes by URL value: at a chosen radius, for a mass in hand, at the best mounting point. */
 export const MODES = { r: "radius", m: "mass", p: "points" } as const;
@@ -124,6 +125,8 @@ export function createMassModel(system: UnitSystem = "metric", layoutText = "", 
     const r = request.value;
     return r !== null && !module && loadedCompute.value === null && !fresh(r);
   });
+  // Fetched once the page is idle, so the first edit works out the balance at once.
+  if (!module) whenIdle(() => void loadMassCompute());
   const outcome = computed(() => {
     const r = request.value;
     if (!r) return null;

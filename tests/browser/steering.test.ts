@@ -34,13 +34,18 @@ const path = steeringPath({ input, options: { maxSteps: 100_000 } });
 const q = (v: number, kind: Parameters<typeof formatQuantity>[1]) => formatQuantity(v, kind, { system: "metric" }).text;
 
 describe("the steering simulation in the browser", () => {
-  it("loads the simulation's code only when the reader asks for it", async () => {
+  it("fetches the simulation's code once the page is idle (not with the page), and shows it only when asked", async () => {
     const { page, context, problems, requests } = await open("/chapters/steering/");
     const simulationChunk = () => requests.filter((url) => /\/_astro\/simulation\.[^/]*\.js$/.test(url));
-    expect(simulationChunk()).toEqual([]);
+    const scripts = await page.evaluate(() =>
+      [...document.querySelectorAll("script[src], link[rel=modulepreload]")].map((e) => e.getAttribute("src") ?? e.getAttribute("href")),
+    );
+    expect(scripts.filter((url) => /simulation\./.test(url ?? ""))).toEqual([]);
+    await expect.poll(() => simulationChunk().length).toBe(1);
     expect(await page.locator(`${ID} [data-out="simulation"]`).count()).toBe(0);
     await page.locator(`${ID} [data-action="simulate"]`).click();
     await expect.poll(() => page.locator(`${ID} [data-out="sim-speed"]`).count()).toBe(1);
+    // Fetched once: the press uses the code fetched at idle.
     expect(simulationChunk()).toHaveLength(1);
     // Shown, the link carries it: the page's URL now says sim=1.
     expect(new URL(page.url()).searchParams.get("sim")).toBe("1");
