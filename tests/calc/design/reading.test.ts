@@ -211,8 +211,14 @@ describe("older designs come forward, value by value", () => {
   it("steps one version at a time to the current one; an unknown step or a bad argument is refused by name", () => {
     const seen: number[] = [];
     const steps = {
-      1: (d: Record<string, unknown>) => (seen.push(Number(d.version)), { ...d, a: 1 }),
-      2: (d: Record<string, unknown>) => (seen.push(Number(d.version)), { ...d, b: 2 }),
+      1: (d: Record<string, unknown>) => {
+        seen.push(Number(d.version));
+        return { ...d, a: 1 };
+      },
+      2: (d: Record<string, unknown>) => {
+        seen.push(Number(d.version));
+        return { ...d, b: 2 };
+      },
     };
     expect(migrateDesign({ version: 1 }, steps, 3)).toEqual({ version: 3, a: 1, b: 2 });
     expect(seen).toEqual([1, 2]);
