@@ -107,6 +107,8 @@ export function tappedThreadStrength(input: {
   const { thread, boltTensileStrength, partUltimateStrength, engagedLength } = requireInputObject(input);
   requireInputObject(thread, "thread");
   requirePositive("boltTensileStrength", boltTensileStrength, "Pa");
+  // Checked here under its own name, so that a refusal names the field the caller wrote.
+  requirePositive("partUltimateStrength", partUltimateStrength, "Pa");
   const shearStrength = materialShearStrength({ ultimateStrength: partUltimateStrength });
   const geometry = { pitch: thread.pitch, externalMajorMin: thread.externalMajorMin, internalPitchMax: thread.internalPitchMax };
   const shearArea = internalThreadShearArea({ engagedLength, ...geometry });

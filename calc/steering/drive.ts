@@ -181,6 +181,12 @@ export function steadyDuty(parameters: PackDriveParameters, groups: number, moto
     torqueConstant: kt,
     motorsPerGroup: m,
   } = requireInputObject(parameters, "parameters");
+  // Checked, not trusted: a missing or non-numeric value would otherwise read as "cannot reach".
+  requireFinite("openCircuitVoltage", voc, "V");
+  requireFinite("packResistance", rp, "Ω");
+  requireFinite("motorResistance", rm, "Ω");
+  requireFinite("torqueConstant", kt, "N·m/A");
+  requireFinite("motorsPerGroup", m, "");
   const c = kt * motorSpeed + current * rm; // ctms-dc-motor-speed: D·V_b = e + I·R
   const a = groups * m * current * rp; // battery-thevenin-model: V_b = V_oc − R_p·(n m D I)
   const disc = voc * voc - 4 * a * c;

@@ -938,3 +938,71 @@ describe("regressions: one case for each class of fault the contract found", () 
     expect(error).toBeInstanceOf(api.OdeNonFiniteError);
   });
 });
+
+describe("every public function names the field of a number it refuses", () => {
+  // Functions that take declarations, forms or documents rather than physical inputs (their numbers
+  // are a declaration's limits or a document's version), and the sweep point, which names the input
+  // it sweeps.
+  const NOT_INPUTS = new Set([
+    "fieldUnit",
+    "describeRange",
+    "checkValue",
+    "readField",
+    "defaultText",
+    "exactFieldText",
+    "urlText",
+    "sectionsIn",
+    "migrateDesign",
+    "readDesign",
+    "designToText",
+    "sectionValues",
+    "sectionEntries",
+    "cardsFor",
+    "runChecks",
+    "buildSheetText",
+    "defineForm",
+    "defineCalculator",
+    "sweepPoint",
+    // Calculator descriptors: their numbers are an order, not an input.
+    "initialValues",
+    "linkKeys",
+    "readLink",
+    "writeLink",
+    "textsOf",
+    "valuesOf",
+    "linkQuery",
+    "pageLink",
+    "linkFor",
+  ]);
+  /** Fields a valid call carries that the function does not read (a shared parameters object). */
+  const UNREAD: Partial<Record<PublicFunction, readonly string[]>> = { steadyDuty: ["currentLimit"] };
+
+  it("each top-level number of a valid call, made NaN, is refused by a CalcInputError naming it (or its path ending in it)", () => {
+    const wrong: string[] = [];
+    let checked = 0;
+    for (const [name, entry] of Object.entries(CALLS) as [PublicFunction, Entry][]) {
+      if (NOT_INPUTS.has(name)) continue;
+      const [base] = entry.calls();
+      if (!base || typeof base[0] !== "object" || base[0] === null || Array.isArray(base[0])) continue;
+      // A function with an input declaration reads the declared fields; the valid call may carry more.
+      const declared = DECLARED[name];
+      for (const [key, value] of Object.entries(base[0] as Record<string, unknown>)) {
+        if (typeof value !== "number" || (declared && !(key in declared)) || UNREAD[name]?.includes(key)) continue;
+        const args = mutateCall(base, []);
+        (args[0] as Record<string, unknown>)[key] = Number.NaN;
+        checked++;
+        try {
+          fnOf(name)(...args);
+          wrong.push(`${name}.${key}: accepted NaN`);
+        } catch (error) {
+          if (!(error instanceof CalcInputError)) wrong.push(`${name}.${key}: ${String(error)}`);
+          else if (error.param !== key && !error.param.endsWith(`.${key}`)) wrong.push(`${name}.${key}: named ${error.param}`);
+          else if (!Number.isNaN(error.value)) wrong.push(`${name}.${key}: reported the value ${String(error.value)}`);
+        }
+      }
+    }
+    expect(wrong).toEqual([]);
+    // Every public function with an object of numbers is in it: some 800 fields.
+    expect(checked).toBeGreaterThan(750);
+  });
+});
