@@ -977,7 +977,7 @@ describe("every public function names the field of a number it refuses", () => {
   /** Fields a valid call carries that the function does not read (a shared parameters object). */
   const UNREAD: Partial<Record<PublicFunction, readonly string[]>> = { steadyDuty: ["currentLimit"] };
 
-  it("each top-level number of a valid call, made NaN, is refused by a CalcInputError naming it (or its path ending in it)", () => {
+  it("each top-level number of a valid call, made NaN, is refused by a CalcInputError naming it (or its path ending in it), a declared input in its kind's SI unit", () => {
     const wrong: string[] = [];
     let checked = 0;
     for (const [name, entry] of Object.entries(CALLS) as [PublicFunction, Entry][]) {
@@ -998,6 +998,12 @@ describe("every public function names the field of a number it refuses", () => {
           if (!(error instanceof CalcInputError)) wrong.push(`${name}.${key}: ${String(error)}`);
           else if (error.param !== key && !error.param.endsWith(`.${key}`)) wrong.push(`${name}.${key}: named ${error.param}`);
           else if (!Number.isNaN(error.value)) wrong.push(`${name}.${key}: reported the value ${String(error.value)}`);
+          else if (declared?.[key]) {
+            // A declared input is refused in its kind's SI unit, as the message shows it ("m/s²").
+            const si = api.unitsOfKind(declared[key]!.kind).find((u) => api.unitDef(u).factor === 1 && !api.unitDef(u).offset);
+            const symbol = si === undefined ? "" : api.unitDef(si).symbol;
+            if (error.unit !== symbol) wrong.push(`${name}.${key}: unit ${JSON.stringify(error.unit)}, the kind's SI unit is ${JSON.stringify(symbol)}`);
+          }
         }
       }
     }
