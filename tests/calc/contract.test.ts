@@ -1000,7 +1000,7 @@ describe("every public function names the field of a number it refuses", () => {
           else if (!Number.isNaN(error.value)) wrong.push(`${name}.${key}: reported the value ${String(error.value)}`);
           else if (declared?.[key]) {
             // A declared input is refused in its kind's SI unit, as the message shows it ("m/s²").
-            const si = api.unitsOfKind(declared[key]!.kind).find((u) => api.unitDef(u).factor === 1 && !api.unitDef(u).offset);
+            const si = api.unitsOfKind(declared[key]!.kind).find((u) => api.unitDef(u).factor === 1);
             const symbol = si === undefined ? "" : api.unitDef(si).symbol;
             if (error.unit !== symbol) wrong.push(`${name}.${key}: unit ${JSON.stringify(error.unit)}, the kind's SI unit is ${JSON.stringify(symbol)}`);
           }
