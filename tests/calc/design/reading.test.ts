@@ -239,3 +239,57 @@ describe("older designs come forward, value by value", () => {
     expect(current.ok && current.migratedFrom).toBe(null);
   });
 });
+
+describe("a design's sections", () => {
+  const rims = FORMS.find((f) => f.id === "rims")!;
+  const mass = FORMS.find((f) => f.id === "mass")!;
+  const rim = () => ({ ...defaultsOf("rims") });
+  const read = (sections: Record<string, unknown>) => {
+    const reading = readDesign({ ...header, ...sections });
+    if (!reading.ok) throw new Error("not read");
+    return reading;
+  };
+
+  it("drops a list section that is not a list, and a single section that is not an object, saying so", () => {
+    const listed = read({ rims: { radius: 1 } });
+    expect(listed.design.rims).toBeUndefined();
+    expect(listed.problems).toEqual([{ path: "rims", message: "must be a list", action: "section-dropped" }]);
+    const single = read({ mass: [1] });
+    expect(single.design.mass).toBeUndefined();
+    expect(single.problems).toEqual([{ path: "mass", section: mass.title, message: "must be an object of named values", action: "section-dropped" }]);
+  });
+
+  it("reads at most the declared number of entries, leaves out an entry that is not an object, and names entries", () => {
+    expect(rims.section).toMatchObject({ kind: "list", max: 24, entryName: "Rim" });
+    const many = read({ rims: Array.from({ length: 25 }, rim) });
+    expect((many.design.rims as unknown[]).length).toBe(24);
+    expect(many.problems).toEqual([{ path: "rims", message: "lists 25 entries; only the first 24 were read", action: "item-dropped" }]);
+    expect(read({ rims: Array.from({ length: 24 }, rim) }).problems).toEqual([]);
+    const mixed = read({ rims: [rim(), 7, { ...rim(), name: "Outer ring" }, { ...rim(), name: "n".repeat(80) }, { ...rim(), name: "n".repeat(81) }] });
+    expect((mixed.design.rims as { name: string }[]).map((r) => r.name)).toEqual(["Rim 1", "Outer ring", "n".repeat(80), "Rim 5"]);
+    expect(mixed.problems).toEqual([
+      { path: "rims[1]", message: "must be an object; the entry was left out", action: "item-dropped" },
+      { path: "rims[4].name", message: "must be text of at most 80 characters; a default name was used", action: "default-used" },
+    ]);
+  });
+
+  it("reports a missing value and a value that is not the calculator's, keeping the rest", () => {
+    const { spinSpeed: _s, ...withoutSpeed } = defaultsOf("mass");
+    const reading = read({ mass: { ...withoutSpeed, colour: "red" } });
+    const values = reading.design.mass as Record<string, unknown>;
+    expect(values.spinSpeed).toBe(defaultsOf("mass").spinSpeed);
+    expect(reading.problems).toHaveLength(2);
+    expect(reading.problems[0]).toMatchObject({ path: "mass.spinSpeed", section: mass.title, action: "default-used" });
+    expect(reading.problems[0]!.message).toMatch(/ is missing; the default, .+, was used$/);
+    expect(reading.problems[1]).toEqual({ path: "mass.colour", message: "is not a value of this calculator; it was ignored", action: "default-used" });
+  });
+
+  it("names a list entry's section by its calculator and entry name", () => {
+    const first = Object.keys(rims.inputs)[0]!;
+    const entry: Record<string, unknown> = { ...rim(), name: "Hub" };
+    delete entry[first];
+    const reading = read({ rims: [entry] });
+    expect(reading.problems).toHaveLength(1);
+    expect(reading.problems[0]).toMatchObject({ path: `rims[0].${first}`, section: `${rims.title}: Hub`, action: "default-used" });
+  });
+});
