@@ -39,8 +39,11 @@ const ACCENT = /** @type {Record<string, string>} */ ({
 /** Operators read with a space on each side when they stand between two operands. */
 const SPACED = new Set([..."=+−-×·≈≤≥<>≠∝±⇒⟹→"]);
 
-/** @param {string} text */
-const decode = (text) =>
+/**
+ * Text of markup with its character references read (named: the five XML ones and &nbsp;; numeric).
+ * @param {string} text
+ */
+export const decode = (text) =>
   text
     .replace(/&#x([0-9a-f]+);/gi, (_, hex) => String.fromCodePoint(Number.parseInt(hex, 16)))
     .replace(/&#(\d+);/g, (_, dec) => String.fromCodePoint(Number(dec)))

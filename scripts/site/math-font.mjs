@@ -6,6 +6,7 @@ import { readdirSync, readFileSync, rmSync, writeFileSync } from "node:fs";
 import { join, relative, sep } from "node:path";
 import { fileURLToPath } from "node:url";
 import subsetFont from "subset-font";
+import { decode } from "../../components/search/math-text.mjs";
 import { mathItalic } from "./rehype-math.mjs";
 
 /** The face's file as the bundler names it (the package's file name, then a content hash). */
@@ -21,17 +22,6 @@ export const ALWAYS_KEPT = " \u00a00123456789()+−=";
 function walk(dir) {
   return readdirSync(dir, { withFileTypes: true }).flatMap((entry) => (entry.isDirectory() ? walk(join(dir, entry.name)) : [join(dir, entry.name)]));
 }
-
-/** @param {string} text */
-const decode = (text) =>
-  text
-    .replace(/&#x([0-9a-f]+);/gi, (_, hex) => String.fromCodePoint(Number.parseInt(hex, 16)))
-    .replace(/&#(\d+);/g, (_, dec) => String.fromCodePoint(Number(dec)))
-    .replace(/&lt;/g, "<")
-    .replace(/&gt;/g, ">")
-    .replace(/&quot;/g, '"')
-    .replace(/&nbsp;/g, "\u00a0")
-    .replace(/&amp;/g, "&");
 
 /**
  * The characters a browser draws for a page's formulas: the text of every <math> element, and for
