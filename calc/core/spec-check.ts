@@ -138,3 +138,24 @@ export function declaredInputs(specs: InputSpecs, input: unknown): Record<string
   const fields = requireInputObject(input);
   return Object.fromEntries(Object.entries(specs).map(([name, spec]) => [name, [Number(fields[name]), siSymbol(spec)]]));
 }
+
+/**
+ * Runs `run`, and when it refuses an input under a name of its own (a helper's parameter), refuses
+ * it again under the caller's name for it, so the message names the field the caller wrote
+ * (`names`: the helper's name → the caller's).
+ */
+export function asCallerNames<T>(names: Readonly<Record<string, string>>, run: () => T): T {
+  try {
+    return run();
+  } catch (error) {
+    if (!(error instanceof CalcInputError) || !(error.param in names)) throw error;
+    throw new CalcInputError({
+      param: names[error.param]!,
+      value: error.value,
+      expected: error.expected,
+      unit: error.unit,
+      bound: error.bound,
+      range: error.range,
+    });
+  }
+}

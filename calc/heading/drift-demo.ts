@@ -3,9 +3,9 @@
  * drift a radius mismatch causes.
  */
 import { CalcInputError, requirePositive } from "../core/errors.ts";
-import { fromSI, rpmToRadPerSecond } from "../core/units.ts";
+import { rpmToRadPerSecond, unitDef } from "../core/units.ts";
 import { type RadiusBand, type SpinRateErrorModel, assumedRadiusBand, headingDriftAt } from "./drift.ts";
-import { requireInputObject, requireList } from "../core/spec-check.ts";
+import { type NamedValues, requireFiniteResult, requireInputObject, requireList } from "../core/spec-check.ts";
 
 // 3. Worked example for the chapter.
 
@@ -70,13 +70,15 @@ export function radiusMismatchExample(input: {
     const point = headingDriftAt({ ...model, angularSpeed: rpmToRadPerSecond(rpm) });
     const driftRate = point.driftRate!;
     const driftPerRevolution = point.driftPerRevolution!;
+    // A drift too large to show in degrees is refused in the caller's words: by the radius that took it there.
+    const radii = { assumedRadius: [assumedRadius, "m"], trueRadius: [trueRadius, "m"] } satisfies NamedValues;
     return {
       rpm,
       angularSpeed: point.angularSpeed,
       driftRate,
-      driftRateDegreesPerSecond: fromSI(driftRate, "deg/s"),
+      driftRateDegreesPerSecond: requireFiniteResult(driftRate / unitDef("deg/s").factor, "drift rate in degrees per second", radii),
       driftPerRevolution,
-      driftPerRevolutionDegrees: fromSI(driftPerRevolution, "deg"),
+      driftPerRevolutionDegrees: requireFiniteResult(driftPerRevolution / unitDef("deg").factor, "drift per turn in degrees", radii),
     };
   });
   const top = Math.max(...speedsRpm);

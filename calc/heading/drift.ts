@@ -10,7 +10,7 @@
  */
 import { CalcInputError, requireFinite, requireInRange, requirePositive, requireRelation } from "../core/errors.ts";
 import { TURN } from "../core/constants.ts";
-import { type NamedValue, requireFiniteFields, requireFiniteResult, requireInputObject } from "../core/spec-check.ts";
+import { asCallerNames, type NamedValue, requireFiniteFields, requireFiniteResult, requireInputObject } from "../core/spec-check.ts";
 
 // ---------------------------------------------------------------------------------------------
 // Helpers.
@@ -401,7 +401,8 @@ export function headingDriftSeries(input: { lowSpeed: number; highSpeed: number;
   const out: DriftPoint[] = [];
   for (let i = 0; i < points; i++) {
     const w = i === points - 1 ? highSpeed : lowSpeed + ((highSpeed - lowSpeed) * i) / (points - 1);
-    out.push(headingDriftAt({ ...input, angularSpeed: w }));
+    // A refusal at a sampled speed names the end of the range it lies nearer to.
+    out.push(asCallerNames({ angularSpeed: w >= (lowSpeed + highSpeed) / 2 ? "highSpeed" : "lowSpeed" }, () => headingDriftAt({ ...input, angularSpeed: w })));
   }
   return out;
 }

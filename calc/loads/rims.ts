@@ -4,7 +4,15 @@
  * it yields and is estimated to burst, and a verdict. Re-exported by calc/loads/index.ts. SI in and out.
  */
 import { requireInRange, requireNonNegative, requirePositive, requireRelation } from "../core/errors.ts";
-import { type NamedValue, requireDeclared, requireFiniteFields, requireFiniteResult, requireInputObject, declaredInputs } from "../core/spec-check.ts";
+import {
+  asCallerNames,
+  type NamedValue,
+  requireDeclared,
+  requireFiniteFields,
+  requireFiniteResult,
+  requireInputObject,
+  declaredInputs,
+} from "../core/spec-check.ts";
 import { requireChoice, requireMarginalAtLeastFail, requirePointCount, safetyFactor, safetyVerdict, speedAtStress, type LoadVerdict } from "./common.ts";
 
 /** A spinning body's inputs by name, for the finiteness guard. */
@@ -442,10 +450,12 @@ export function rimStressProfile(input: RimCheckInput, options: { points?: numbe
   const start = shape === "solid-disk" ? 0 : innerRadius;
   return Array.from({ length: points }, (_, i) => {
     const radius = i === points - 1 ? outerRadius : start + ((outerRadius - start) * i) / (points - 1);
-    const stress =
+    // A sampled radius is not the caller's input: a refusal there names the bore or the rim it came from.
+    const stress = asCallerNames({ radius: i === points - 1 ? "outerRadius" : "innerRadius" }, () =>
       shape === "solid-disk"
         ? solidDiskStress({ density, poisson, angularSpeed, outerRadius, radius })
-        : annularDiskStress({ density, poisson, angularSpeed, innerRadius, outerRadius, radius });
+        : annularDiskStress({ density, poisson, angularSpeed, innerRadius, outerRadius, radius }),
+    );
     return { radius, ...stress };
   });
 }

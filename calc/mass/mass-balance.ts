@@ -32,7 +32,7 @@ import { type LayoutPart, MAX_PARTS, MAX_PART_MASS } from "./parts.ts";
 import { type MassProperties, massProperties } from "./properties.ts";
 import { type TrueSensorRadius, trueSensorRadius } from "./sensor.ts";
 import { type CoupleLift, type SpinCentre, coupleLift, spinCentre } from "./spin-centre.ts";
-import { requireInputObject, requireList, requireWithinSpecs, declaredInputs, requireFiniteFields } from "../core/spec-check.ts";
+import { asCallerNames, requireInputObject, requireList, requireWithinSpecs, declaredInputs, requireFiniteFields } from "../core/spec-check.ts";
 
 // ---------------------------------------------------------------------------------------------
 // The mass-and-balance calculator: its one entry point (its scalar inputs are declared in mass-balance-inputs.ts).
@@ -178,8 +178,9 @@ export function massBalance(input: MassBalanceInput): MassBalance {
     fix = { method: "correction-radius", ...applyCounterweight({ parts, mass: fixMass, x: atRadius.x, y: atRadius.y, z: layout.centreZ }) };
   }
   const grip = { angularSpeed: spinSpeed, sideGrip, gripShare };
-  const turnsBefore = spinCentre({ centreX: layout.centreX, centreY: layout.centreY, ...grip });
-  const turnsAfter = spinCentre({ centreX: fix.after.centreX, centreY: fix.after.centreY, ...grip });
+  // A refusal names the caller's field: the spin speed, not the helper's angular speed.
+  const turnsBefore = asCallerNames({ angularSpeed: "spinSpeed" }, () => spinCentre({ centreX: layout.centreX, centreY: layout.centreY, ...grip }));
+  const turnsAfter = asCallerNames({ angularSpeed: "spinSpeed" }, () => spinCentre({ centreX: fix.after.centreX, centreY: fix.after.centreY, ...grip }));
   return requireFiniteFields(
     {
       layout,
@@ -303,13 +304,15 @@ export function counterweightPlan(request: { input: MassBalanceInput; balance: M
   }
   const { after } = placed;
   const equivalentGrade = equivalentBalanceGrade({ offset: after.offset, angularSpeed: input.spinSpeed });
-  const turns = spinCentre({
-    centreX: after.centreX,
-    centreY: after.centreY,
-    angularSpeed: input.spinSpeed,
-    sideGrip: input.sideGrip,
-    gripShare: input.gripShare,
-  });
+  const turns = asCallerNames({ angularSpeed: "spinSpeed" }, () =>
+    spinCentre({
+      centreX: after.centreX,
+      centreY: after.centreY,
+      angularSpeed: input.spinSpeed,
+      sideGrip: input.sideGrip,
+      gripShare: input.gripShare,
+    }),
+  );
   return {
     status: "apply",
     // Polar form of the mounting point: r = √(x² + y²), θ = atan2(y, x) (oxford-concise-mathematics).

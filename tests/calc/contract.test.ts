@@ -1012,3 +1012,38 @@ describe("every public function names the field of a number it refuses", () => {
     expect(checked).toBeGreaterThan(750);
   });
 });
+
+describe("every public function names the field that took a result out of range", () => {
+  it("each top-level number of a valid call, set to ±1e300 or 1e-300, is either used or refused naming a field of the call, with the quantity it would overflow", () => {
+    const wrong: string[] = [];
+    let refused = 0;
+    for (const [name, entry] of Object.entries(CALLS) as [PublicFunction, Entry][]) {
+      // The sweep point names the input it sweeps (its `value` is that input's value).
+      if (name === "sweepPoint") continue;
+      const [base] = entry.calls();
+      if (!base || typeof base[0] !== "object" || base[0] === null || Array.isArray(base[0])) continue;
+      const fields = Object.keys(base[0] as object);
+      for (const [key, value] of Object.entries(base[0] as Record<string, unknown>)) {
+        if (typeof value !== "number") continue;
+        for (const extreme of [1e300, -1e300, 1e-300]) {
+          const args = mutateCall(base, []);
+          (args[0] as Record<string, unknown>)[key] = extreme;
+          try {
+            fnOf(name)(...args);
+          } catch (error) {
+            if (!(error instanceof CalcInputError)) {
+              wrong.push(`${name}.${key} = ${extreme}: ${String(error)}`);
+              continue;
+            }
+            refused++;
+            const top = error.param.split(/[.[]/)[0]!;
+            if (!fields.includes(top) && !fields.some((f) => error.param.endsWith(`.${f}`))) wrong.push(`${name}.${key} = ${extreme}: named ${error.param}`);
+            else if (/for the {2}to stay finite|^\S+ must be {2}/.test(error.message)) wrong.push(`${name}.${key} = ${extreme}: ${error.message}`);
+          }
+        }
+      }
+    }
+    expect(wrong).toEqual([]);
+    expect(refused).toBeGreaterThan(1000);
+  });
+});
