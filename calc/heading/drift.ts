@@ -402,7 +402,8 @@ export function headingDriftSeries(input: { lowSpeed: number; highSpeed: number;
   for (let i = 0; i < points; i++) {
     const w = i === points - 1 ? highSpeed : lowSpeed + ((highSpeed - lowSpeed) * i) / (points - 1);
     // A refusal at a sampled speed names the end of the range it lies nearer to.
-    out.push(asCallerNames({ angularSpeed: w >= (lowSpeed + highSpeed) / 2 ? "highSpeed" : "lowSpeed" }, () => headingDriftAt({ ...input, angularSpeed: w })));
+    const end: readonly [string, number] = w >= (lowSpeed + highSpeed) / 2 ? ["highSpeed", highSpeed] : ["lowSpeed", lowSpeed];
+    out.push(asCallerNames({ angularSpeed: end }, () => headingDriftAt({ ...input, angularSpeed: w })));
   }
   return out;
 }

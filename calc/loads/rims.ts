@@ -451,7 +451,8 @@ export function rimStressProfile(input: RimCheckInput, options: { points?: numbe
   return Array.from({ length: points }, (_, i) => {
     const radius = i === points - 1 ? outerRadius : start + ((outerRadius - start) * i) / (points - 1);
     // A sampled radius is not the caller's input: a refusal there names the bore or the rim it came from.
-    const stress = asCallerNames({ radius: i === points - 1 ? "outerRadius" : "innerRadius" }, () =>
+    const end: readonly [string, number] = i === points - 1 ? ["outerRadius", outerRadius] : ["innerRadius", innerRadius];
+    const stress = asCallerNames({ radius: end }, () =>
       shape === "solid-disk"
         ? solidDiskStress({ density, poisson, angularSpeed, outerRadius, radius })
         : annularDiskStress({ density, poisson, angularSpeed, innerRadius, outerRadius, radius }),

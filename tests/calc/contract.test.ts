@@ -1039,6 +1039,7 @@ describe("every public function names the field that took a result out of range"
             const top = error.param.split(/[.[]/)[0]!;
             if (!fields.includes(top) && !fields.some((f) => error.param.endsWith(`.${f}`))) wrong.push(`${name}.${key} = ${extreme}: named ${error.param}`);
             else if (/for the {2}to stay finite|^\S+ must be {2}/.test(error.message)) wrong.push(`${name}.${key} = ${extreme}: ${error.message}`);
+            else if (error.param === key && !Object.is(error.value, extreme)) wrong.push(`${name}.${key} = ${extreme}: reported ${String(error.value)}`);
           }
         }
       }
