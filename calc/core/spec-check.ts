@@ -138,20 +138,3 @@ export function declaredInputs(specs: InputSpecs, input: unknown): Record<string
   const fields = requireInputObject(input);
   return Object.fromEntries(Object.entries(specs).map(([name, spec]) => [name, [Number(fields[name]), siSymbol(spec)]]));
 }
-
-/**
- * Runs `run`, and when it refuses an input under a name of its own (a helper's parameter), refuses
- * it again under the caller's name for it, so the message names the field the caller wrote
- * (`names`: the helper's name → the caller's, or the caller's name and its value, when the helper
- * was given a value derived from it, such as a point sampled within the caller's range).
- */
-export function asCallerNames<T>(names: Readonly<Record<string, string | readonly [string, number]>>, run: () => T): T {
-  try {
-    return run();
-  } catch (error) {
-    if (!(error instanceof CalcInputError) || !(error.param in names)) throw error;
-    const to = names[error.param]!;
-    const [param, value] = typeof to === "string" ? [to, error.value] : to;
-    throw new CalcInputError({ param, value, expected: error.expected, unit: error.unit, bound: error.bound, range: error.range });
-  }
-}

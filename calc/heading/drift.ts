@@ -10,7 +10,8 @@
  */
 import { CalcInputError, requireFinite, requireInRange, requirePositive, requireRelation } from "../core/errors.ts";
 import { TURN } from "../core/constants.ts";
-import { asCallerNames, type NamedValue, requireFiniteFields, requireFiniteResult, requireInputObject } from "../core/spec-check.ts";
+import { type NamedValue, requireFiniteFields, requireFiniteResult, requireInputObject } from "../core/spec-check.ts";
+import { asCallerNames } from "../core/caller-names.ts";
 
 // ---------------------------------------------------------------------------------------------
 // Helpers.

@@ -3,16 +3,9 @@
  * disk or bored disk, where they peak, the safety factors against the material, the speeds at which
  * it yields and is estimated to burst, and a verdict. Re-exported by calc/loads/index.ts. SI in and out.
  */
+import { asCallerNames } from "../core/caller-names.ts";
 import { requireInRange, requireNonNegative, requirePositive, requireRelation } from "../core/errors.ts";
-import {
-  asCallerNames,
-  type NamedValue,
-  requireDeclared,
-  requireFiniteFields,
-  requireFiniteResult,
-  requireInputObject,
-  declaredInputs,
-} from "../core/spec-check.ts";
+import { type NamedValue, requireDeclared, requireFiniteFields, requireFiniteResult, requireInputObject, declaredInputs } from "../core/spec-check.ts";
 import { requireChoice, requireMarginalAtLeastFail, requirePointCount, safetyFactor, safetyVerdict, speedAtStress, type LoadVerdict } from "./common.ts";
 
 /** A spinning body's inputs by name, for the finiteness guard. */

@@ -32,13 +32,14 @@ import { type LayoutPart, MAX_PARTS, MAX_PART_MASS } from "./parts.ts";
 import { type MassProperties, massProperties } from "./properties.ts";
 import { type TrueSensorRadius, trueSensorRadius } from "./sensor.ts";
 import { type CoupleLift, type SpinCentre, coupleLift, spinCentre } from "./spin-centre.ts";
-import { asCallerNames, requireInputObject, requireList, requireWithinSpecs, declaredInputs, requireFiniteFields } from "../core/spec-check.ts";
+import { requireInputObject, requireList, requireWithinSpecs, declaredInputs, requireFiniteFields } from "../core/spec-check.ts";
 
 // ---------------------------------------------------------------------------------------------
 // The mass-and-balance calculator: its one entry point (its scalar inputs are declared in mass-balance-inputs.ts).
 
 export { type MassBalanceInput, type MassBalanceScalars, massBalanceInputs } from "./mass-balance-inputs.ts";
 import { type MassBalanceInput, massBalanceInputs } from "./mass-balance-inputs.ts";
+import { asCallerNames } from "../core/caller-names.ts";
 
 export interface MassBalance {
   layout: MassProperties;
