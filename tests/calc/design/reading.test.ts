@@ -15,9 +15,13 @@ import {
   MIGRATIONS,
   migrateDesign,
   readDesign,
+  newDesign,
   readDesignText,
+  sectionEntries,
   sectionsIn,
+  sectionValues,
 } from "../../../calc/design/design.ts";
+import { CALCULATORS } from "../../../calc/design/calculators.ts";
 import { FORMS } from "../../../calc/design/registry.ts";
 import { boltedJointInputs } from "../../../calc/loads/joint-inputs.ts";
 
@@ -291,5 +295,45 @@ describe("a design's sections", () => {
     const reading = read({ rims: [entry] });
     expect(reading.problems).toHaveLength(1);
     expect(reading.problems[0]).toMatchObject({ path: `rims[0].${first}`, section: `${rims.title}: Hub`, action: "default-used" });
+  });
+});
+
+describe("a design's sections by calculator", () => {
+  const single = CALCULATORS.find((c) => c.section.kind === "single")!;
+  const list = CALCULATORS.find((c) => c.section.kind === "list")!;
+
+  it("a new design is empty, metric, stamped with the time given", () => {
+    expect(newDesign("Test bot", new Date("2026-01-02T03:04:05.000Z"))).toEqual({
+      format: "whirlbook-design",
+      version: DESIGN_VERSION,
+      name: "Test bot",
+      notes: "",
+      created: "2026-01-02T03:04:05.000Z",
+      modified: "2026-01-02T03:04:05.000Z",
+      units: "metric",
+    });
+  });
+
+  it("gives a single calculator's values, and none for a list calculator", () => {
+    const values = { a: 1 };
+    const design = { ...newDesign("x"), [single.id]: values, [list.id]: [{ name: "one" }] };
+    expect(sectionValues(design, single)).toBe(values);
+    expect(sectionValues(design, list)).toBeUndefined();
+    expect(sectionValues(newDesign("x"), single)).toBeUndefined();
+  });
+
+  it("gives a list calculator's entries (none when absent), and none for a single calculator", () => {
+    const entries = [{ name: "one" }];
+    const design = { ...newDesign("x"), [single.id]: { a: 1 }, [list.id]: entries };
+    expect(sectionEntries(design, list)).toBe(entries);
+    expect(sectionEntries(newDesign("x"), list)).toEqual([]);
+    expect(sectionEntries(design, single)).toEqual([]);
+  });
+
+  it("refuses what is not a design or a calculator, by name", () => {
+    expect(() => sectionValues(null as never, single)).toThrow(/^design /);
+    expect(() => sectionValues(newDesign("x"), null as never)).toThrow(/^calc /);
+    expect(() => sectionEntries(null as never, list)).toThrow(/^design /);
+    expect(() => sectionEntries(newDesign("x"), null as never)).toThrow(/^calc /);
   });
 });
