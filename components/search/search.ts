@@ -136,13 +136,14 @@ function start(): void {
     try {
       const index = await loadIndex();
       const fields = rankFields(index.entries, term);
-      // Each page once, at its best section; a page counts when it holds every word of the query.
-      const best = new Map<number, Section>();
+      // Each page once, at its best section; a page counts when it holds every word of the query
+      // (tested once per page, not once per matching section).
+      const best = new Map<number, Section | null>();
       for (const hit of index.engine.search(term)) {
         const section = index.sections[hit.id as number]!;
-        if (!best.has(section.page) && holdsAll(index.pageWords[section.page]!, term)) best.set(section.page, section);
+        if (!best.has(section.page)) best.set(section.page, holdsAll(index.pageWords[section.page]!, term) ? section : null);
       }
-      const pages = [...best.values()].slice(0, PAGES_SHOWN);
+      const pages = [...best.values()].filter((section) => section !== null).slice(0, PAGES_SHOWN);
       if (ticket !== latest) return;
       const strong = fields.filter((f) => f.score >= STRONG_MATCH).slice(0, 8);
       const weak = fields.filter((f) => f.score < STRONG_MATCH).slice(0, 5);
