@@ -939,6 +939,56 @@ describe("regressions: one case for each class of fault the contract found", () 
   });
 });
 
+/** A field name with each of its units. */
+const fields = (unit: string, ...names: string[]) => names.map((name) => [name, unit] as const);
+/**
+ * The SI unit of every field the public functions take outside an input declaration, by name, as
+ * each function's documentation states it (its @param lines; "[-]" is a pure number, written ""):
+ * a refusal of the field reports its value in this unit. Declared inputs take their kind's unit.
+ * A name that means two things is told apart by function in FIELD_UNIT_IN.
+ */
+const FIELD_UNIT: ReadonlyMap<string, string> = new Map([
+  ...fields("", "atol", "axialFactor", "bits", "boltCount", "count", "degreesOfFreedom", "dutyStep", "efficiency", "failBelow", "fraction", "frictionCoefficient", "from", "gearRatio", "gripShare", "impactors", "interfaces", "intervals", "margin", "marginalBelow", "maxSteps", "motorCount", "motorsPerGroup", "nutFactor", "points", "poisson", "probability", "radialFactor", "ratingLife", "ratio", "relativeTolerance", "resolution", "restitution", "rotorSense", "rtol", "safetyFactor", "scaleError", "shearFactor", "shearRatio", "sideGrip", "smoothingFactor", "stiffnessFactor", "t", "t0", "tEnd", "to", "value", "wheelCount", "windowLength"),
+  ...fields("A", "currentLimit", "noLoadCurrent"),
+  ...fields("Hz", "loopRate"),
+  ...fields("J", "energy"),
+  ...fields("kg", "mass", "partMass", "robotMass", "targetMass", "totalMass"),
+  ...fields("kg·m", "firstMomentX", "firstMomentY"),
+  ...fields("kg·m²", "couple", "inertia", "motorRotorInertia", "productXZ", "productYZ", "rotorInertia", "wheelInertia"),
+  ...fields("kg/m³", "density"),
+  ...fields("m", "assumedRadius", "bearingSpacing", "bearingSpan", "centreX", "centreY", "comHeight", "contactRadius", "diameter", "engagedLength", "externalMajorMin", "gripLength", "height", "innerRadius", "internalPitchMax", "length", "maxRadius", "nominalDiameter", "offset", "outerRadius", "overhang", "packingThickness", "pitch", "planeZ1", "planeZ2", "position", "radius", "radius1", "radius2", "rootDiameter", "sensorRadius", "sensorX", "sensorY", "shankLength", "span", "stoppingDistance", "supportRadius", "targetOffset", "threadLength", "tipRadius", "track", "trackWidth", "trueRadius", "wheelRadius", "x", "y", "z"),
+  ...fields("m/s", "closingSpeed", "depth", "forwardSpeed", "grade", "leftSpeed", "leftWheelSpeed", "rightSpeed", "rightWheelSpeed", "rollingSpeed", "slipVelocityX", "slipVelocityY", "speed", "wheelTopSpeed"),
+  ...fields("m/s²", "acceleration", "bias", "biasCorrection", "fullScale", "spike", "step"),
+  ...fields("m²", "area", "shankArea", "stressArea"),
+  ...fields("m⁴", "secondMoment"),
+  ...fields("N", "axialLoad", "dynamicLoadRating", "equivalentLoad", "externalLoad", "force", "normalForce", "normalLoad", "preload", "proofLoad", "pulseForce", "radialLoad", "shockRadialLoad", "slipStiffness", "staticEquivalentLoad", "staticLoadRating"),
+  ...fields("N·m", "frictionTorque", "moment", "torque"),
+  ...fields("N·m·s/rad", "viscousFriction"),
+  ...fields("N·m/A", "torqueConstant"),
+  ...fields("N·s", "impulse"),
+  ...fields("N/m", "boltStiffness", "memberStiffness"),
+  ...fields("Pa", "boltTensileStrength", "normalStress", "partUltimateStrength", "shearStress", "strength", "stress", "tensileStrength", "ultimateStrength", "yieldStrength", "youngsModulus"),
+  ...fields("rad", "angle", "phaseLead", "sensorAngle", "targetArc", "targetStep", "tilt", "windowWidth"),
+  ...fields("rad/(s·V)", "kv"),
+  ...fields("rad/s", "angularSpeed", "budget", "finalSpeed", "highSpeed", "lowSpeed", "maxSpeed", "rate", "spinSpeed", "topSpeed", "turnRate", "wheelSpeed"),
+  ...fields("s", "duration", "latency", "onTime", "samplePeriod", "time", "timeConstant"),
+  ...fields("V", "openCircuitVoltage", "voltage"),
+  ...fields("Ω", "motorResistance", "packResistance", "resistance"),
+]);
+const FIELD_UNIT_IN: Partial<Record<PublicFunction, Record<string, string>>> = {
+  // The spread of the readings a sensor must count (an acceleration), not a beam's span.
+  sensorCountSize: { span: "m/s²" },
+  // The standard normal variable.
+  normalCdf: { z: "" },
+};
+/** The SI unit a field is refused in: a declared input's kind's, or the documented one. */
+function fieldUnit(name: PublicFunction, key: string): string | undefined {
+  const spec = DECLARED[name]?.[key];
+  if (!spec) return FIELD_UNIT_IN[name]?.[key] ?? FIELD_UNIT.get(key);
+  const si = api.unitsOfKind(spec.kind).find((u) => api.unitDef(u).factor === 1);
+  return si === undefined ? "" : api.unitDef(si).symbol;
+}
+
 describe("every public function names the field of a number it refuses", () => {
   // Functions that take declarations, forms or documents rather than physical inputs (their numbers
   // are a declaration's limits or a document's version), and the sweep point, which names the input
@@ -977,7 +1027,7 @@ describe("every public function names the field of a number it refuses", () => {
   /** Fields a valid call carries that the function does not read (a shared parameters object). */
   const UNREAD: Partial<Record<PublicFunction, readonly string[]>> = { steadyDuty: ["currentLimit"] };
 
-  it("each top-level number of a valid call, made NaN, is refused by a CalcInputError naming it (or its path ending in it), a declared input in its kind's SI unit", () => {
+  it("each top-level number of a valid call, made NaN, is refused by a CalcInputError naming it (or its path ending in it), in its SI unit", () => {
     const wrong: string[] = [];
     let checked = 0;
     for (const [name, entry] of Object.entries(CALLS) as [PublicFunction, Entry][]) {
@@ -998,11 +1048,12 @@ describe("every public function names the field of a number it refuses", () => {
           if (!(error instanceof CalcInputError)) wrong.push(`${name}.${key}: ${String(error)}`);
           else if (error.param !== key && !error.param.endsWith(`.${key}`)) wrong.push(`${name}.${key}: named ${error.param}`);
           else if (!Number.isNaN(error.value)) wrong.push(`${name}.${key}: reported the value ${String(error.value)}`);
-          else if (declared?.[key]) {
-            // A declared input is refused in its kind's SI unit, as the message shows it ("m/s²").
-            const si = api.unitsOfKind(declared[key]!.kind).find((u) => api.unitDef(u).factor === 1);
-            const symbol = si === undefined ? "" : api.unitDef(si).symbol;
-            if (error.unit !== symbol) wrong.push(`${name}.${key}: unit ${JSON.stringify(error.unit)}, the kind's SI unit is ${JSON.stringify(symbol)}`);
+          else {
+            // In the field's SI unit, as the message shows it ("m/s²"): a declared input's kind's, any
+            // other field's as its documentation gives it.
+            const unit = fieldUnit(name, key);
+            if (unit === undefined) wrong.push(`${name}.${key}: no unit listed for this field in FIELD_UNIT`);
+            else if (error.unit !== unit) wrong.push(`${name}.${key}: unit ${JSON.stringify(error.unit)}, expected ${JSON.stringify(unit)}`);
           }
         }
       }
@@ -1040,6 +1091,11 @@ describe("every public function names the field that took a result out of range"
             if (!fields.includes(top) && !fields.some((f) => error.param.endsWith(`.${f}`))) wrong.push(`${name}.${key} = ${extreme}: named ${error.param}`);
             else if (/for the {2}to stay finite|^\S+ must be {2}/.test(error.message)) wrong.push(`${name}.${key} = ${extreme}: ${error.message}`);
             else if (error.param === key && !Object.is(error.value, extreme)) wrong.push(`${name}.${key} = ${extreme}: reported ${String(error.value)}`);
+            else if (fields.includes(error.param)) {
+              // The field it names, in that field's SI unit.
+              const unit = fieldUnit(name, error.param);
+              if (unit !== undefined && error.unit !== unit) wrong.push(`${name}.${key} = ${extreme}: ${error.param} in ${JSON.stringify(error.unit)}, expected ${JSON.stringify(unit)}`);
+            }
           }
         }
       }
