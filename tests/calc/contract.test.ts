@@ -939,8 +939,8 @@ describe("regressions: one case for each class of fault the contract found", () 
   });
 });
 
-/** A field name with each of its units. */
-const fields = (unit: string, ...names: string[]) => names.map((name) => [name, unit] as const);
+/** Field names (separated by spaces), each with the unit. */
+const fields = (unit: string, names: string) => names.split(" ").map((name) => [name, unit] as const);
 /**
  * The SI unit of every field the public functions take outside an input declaration, by name, as
  * each function's documentation states it (its @param lines; "[-]" is a pure number, written ""):
@@ -948,32 +948,44 @@ const fields = (unit: string, ...names: string[]) => names.map((name) => [name, 
  * A name that means two things is told apart by function in FIELD_UNIT_IN.
  */
 const FIELD_UNIT: ReadonlyMap<string, string> = new Map([
-  ...fields("", "atol", "axialFactor", "bits", "boltCount", "count", "degreesOfFreedom", "dutyStep", "efficiency", "failBelow", "fraction", "frictionCoefficient", "from", "gearRatio", "gripShare", "impactors", "interfaces", "intervals", "margin", "marginalBelow", "maxSteps", "motorCount", "motorsPerGroup", "nutFactor", "points", "poisson", "probability", "radialFactor", "ratingLife", "ratio", "relativeTolerance", "resolution", "restitution", "rotorSense", "rtol", "safetyFactor", "scaleError", "shearFactor", "shearRatio", "sideGrip", "smoothingFactor", "stiffnessFactor", "t", "t0", "tEnd", "to", "value", "wheelCount", "windowLength"),
-  ...fields("A", "currentLimit", "noLoadCurrent"),
+  ...fields("", "atol axialFactor bits boltCount count degreesOfFreedom dutyStep efficiency failBelow fraction"),
+  ...fields("", "frictionCoefficient from gearRatio gripShare impactors interfaces intervals margin marginalBelow"),
+  ...fields("", "maxSteps motorCount motorsPerGroup nutFactor points poisson probability radialFactor ratingLife"),
+  ...fields("", "ratio relativeTolerance resolution restitution rotorSense rtol safetyFactor scaleError shearFactor"),
+  ...fields("", "shearRatio sideGrip smoothingFactor stiffnessFactor t t0 tEnd to value wheelCount windowLength"),
+  ...fields("A", "currentLimit noLoadCurrent"),
   ...fields("Hz", "loopRate"),
   ...fields("J", "energy"),
-  ...fields("kg", "mass", "partMass", "robotMass", "targetMass", "totalMass"),
-  ...fields("kg·m", "firstMomentX", "firstMomentY"),
-  ...fields("kg·m²", "couple", "inertia", "motorRotorInertia", "productXZ", "productYZ", "rotorInertia", "wheelInertia"),
+  ...fields("kg", "mass partMass robotMass targetMass totalMass"),
+  ...fields("kg·m", "firstMomentX firstMomentY"),
+  ...fields("kg·m²", "couple inertia motorRotorInertia productXZ productYZ rotorInertia wheelInertia"),
   ...fields("kg/m³", "density"),
-  ...fields("m", "assumedRadius", "bearingSpacing", "bearingSpan", "centreX", "centreY", "comHeight", "contactRadius", "diameter", "engagedLength", "externalMajorMin", "gripLength", "height", "innerRadius", "internalPitchMax", "length", "maxRadius", "nominalDiameter", "offset", "outerRadius", "overhang", "packingThickness", "pitch", "planeZ1", "planeZ2", "position", "radius", "radius1", "radius2", "rootDiameter", "sensorRadius", "sensorX", "sensorY", "shankLength", "span", "stoppingDistance", "supportRadius", "targetOffset", "threadLength", "tipRadius", "track", "trackWidth", "trueRadius", "wheelRadius", "x", "y", "z"),
-  ...fields("m/s", "closingSpeed", "depth", "forwardSpeed", "grade", "leftSpeed", "leftWheelSpeed", "rightSpeed", "rightWheelSpeed", "rollingSpeed", "slipVelocityX", "slipVelocityY", "speed", "wheelTopSpeed"),
-  ...fields("m/s²", "acceleration", "bias", "biasCorrection", "fullScale", "spike", "step"),
-  ...fields("m²", "area", "shankArea", "stressArea"),
+  ...fields("m", "assumedRadius bearingSpacing bearingSpan centreX centreY comHeight contactRadius diameter"),
+  ...fields("m", "engagedLength externalMajorMin gripLength height innerRadius internalPitchMax length maxRadius"),
+  ...fields("m", "nominalDiameter offset outerRadius overhang packingThickness pitch planeZ1 planeZ2 position radius"),
+  ...fields("m", "radius1 radius2 rootDiameter sensorRadius sensorX sensorY shankLength span stoppingDistance"),
+  ...fields("m", "supportRadius targetOffset threadLength tipRadius track trackWidth trueRadius wheelRadius x y z"),
+  ...fields("m/s", "closingSpeed depth forwardSpeed grade leftSpeed leftWheelSpeed rightSpeed rightWheelSpeed"),
+  ...fields("m/s", "rollingSpeed slipVelocityX slipVelocityY speed wheelTopSpeed"),
+  ...fields("m/s²", "acceleration bias biasCorrection fullScale spike step"),
+  ...fields("m²", "area shankArea stressArea"),
   ...fields("m⁴", "secondMoment"),
-  ...fields("N", "axialLoad", "dynamicLoadRating", "equivalentLoad", "externalLoad", "force", "normalForce", "normalLoad", "preload", "proofLoad", "pulseForce", "radialLoad", "shockRadialLoad", "slipStiffness", "staticEquivalentLoad", "staticLoadRating"),
-  ...fields("N·m", "frictionTorque", "moment", "torque"),
+  ...fields("N", "axialLoad dynamicLoadRating equivalentLoad externalLoad force normalForce normalLoad preload"),
+  ...fields("N", "proofLoad pulseForce radialLoad shockRadialLoad slipStiffness staticEquivalentLoad staticLoadRating"),
+  ...fields("N·m", "frictionTorque moment torque"),
   ...fields("N·m·s/rad", "viscousFriction"),
   ...fields("N·m/A", "torqueConstant"),
   ...fields("N·s", "impulse"),
-  ...fields("N/m", "boltStiffness", "memberStiffness"),
-  ...fields("Pa", "boltTensileStrength", "normalStress", "partUltimateStrength", "shearStress", "strength", "stress", "tensileStrength", "ultimateStrength", "yieldStrength", "youngsModulus"),
-  ...fields("rad", "angle", "phaseLead", "sensorAngle", "targetArc", "targetStep", "tilt", "windowWidth"),
+  ...fields("N/m", "boltStiffness memberStiffness"),
+  ...fields("Pa", "boltTensileStrength normalStress partUltimateStrength shearStress strength stress tensileStrength"),
+  ...fields("Pa", "ultimateStrength yieldStrength youngsModulus"),
+  ...fields("rad", "angle phaseLead sensorAngle targetArc targetStep tilt windowWidth"),
   ...fields("rad/(s·V)", "kv"),
-  ...fields("rad/s", "angularSpeed", "budget", "finalSpeed", "highSpeed", "lowSpeed", "maxSpeed", "rate", "spinSpeed", "topSpeed", "turnRate", "wheelSpeed"),
-  ...fields("s", "duration", "latency", "onTime", "samplePeriod", "time", "timeConstant"),
-  ...fields("V", "openCircuitVoltage", "voltage"),
-  ...fields("Ω", "motorResistance", "packResistance", "resistance"),
+  ...fields("rad/s", "angularSpeed budget finalSpeed highSpeed lowSpeed maxSpeed rate spinSpeed topSpeed turnRate"),
+  ...fields("rad/s", "wheelSpeed"),
+  ...fields("s", "duration latency onTime samplePeriod time timeConstant"),
+  ...fields("V", "openCircuitVoltage voltage"),
+  ...fields("Ω", "motorResistance packResistance resistance"),
 ]);
 const FIELD_UNIT_IN: Partial<Record<PublicFunction, Record<string, string>>> = {
   // The spread of the readings a sensor must count (an acceleration), not a beam's span.
@@ -1094,7 +1106,8 @@ describe("every public function names the field that took a result out of range"
             else if (fields.includes(error.param)) {
               // The field it names, in that field's SI unit.
               const unit = fieldUnit(name, error.param);
-              if (unit !== undefined && error.unit !== unit) wrong.push(`${name}.${key} = ${extreme}: ${error.param} in ${JSON.stringify(error.unit)}, expected ${JSON.stringify(unit)}`);
+              if (unit !== undefined && error.unit !== unit)
+                wrong.push(`${name}.${key} = ${extreme}: ${error.param} in ${JSON.stringify(error.unit)}, expected ${JSON.stringify(unit)}`);
             }
           }
         }
