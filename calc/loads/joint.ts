@@ -211,7 +211,13 @@ export function boltedJointCheck(input: BoltedJointInput): BoltedJointCheck {
         reason = `Holds only while the clamp lasts (friction n = ${n3(slipFactor)}): if it slips, the bolt is ${slipped} and fails (n = ${n3(boltFactor)}).`;
       }
     } else {
-      const clamp = preloadForce > 0 ? `The clamp carries only ${n3(slipFactor)} × the load, so the joint slips` : "With no preload the joint slips";
+      // The bolt is the stronger path: the clamp gives first, under the load itself or beyond it.
+      const clamp =
+        preloadForce <= 0
+          ? "With no preload the joint slips"
+          : slipFactor < 1
+            ? `The clamp carries only ${n3(slipFactor)} × the load, so the joint slips`
+            : `The clamp holds up to ${n3(slipFactor)} × the load; past that the joint slips`;
       reason = `${clamp} and the bolt is ${slipped}: n = ${n3(boltFactor)}.`;
     }
     // In shear the tapped thread carries the preload only: a tightening check, not a factor on the load.

@@ -838,3 +838,71 @@ describe("regression pins (our own digits, computed with python3 from the formul
     expectClose(check.tappedThread!.engagementForFullStrength, 4.860750258e-3, 1e-8);
   });
 });
+
+describe("the joint check's rules at their edges", () => {
+  /** The defaults in tension: M4 8.8 at 75 % of proof, tapped 8 mm into 6061-T6, 176.9 N per bolt. */
+  const TENSION: BoltedJointInput = { ...DEFAULTS, jointMode: "tension" };
+
+  it("puts a factor exactly at a threshold in the better band: fails below failBelow, marginal from it, holds from marginalBelow (safety-factor-practice)", () => {
+    // A 100 g part: the load factor n_L governs at about 6.5, inside the thresholds' ranges.
+    const heavier = { ...TENSION, partMass: 0.1 };
+    const first = boltedJointCheck(heavier);
+    const n = first.safetyFactor;
+    expect([first.governs, n > 1 && n < 10]).toEqual(["tension", true]);
+    expect(boltedJointCheck({ ...heavier, failBelow: n, marginalBelow: 2 * n }).verdict).toBe("marginal");
+    expect(boltedJointCheck({ ...heavier, failBelow: n * (1 + 1e-12), marginalBelow: 2 * n }).verdict).toBe("fails");
+    expect(boltedJointCheck({ ...heavier, failBelow: 1, marginalBelow: n }).verdict).toBe("holds");
+    expect(boltedJointCheck({ ...heavier, failBelow: 1, marginalBelow: n * (1 + 1e-12) }).verdict).toBe("marginal");
+  });
+
+  // In tension the tapped thread strips when the bolt's load reaches its stripping load F_s: while
+  // clamped the bolt carries F_i + C·P (Shigley 9th ed., Eq. 8-24), so the external load at stripping
+  // is (F_s − F_i)/C; past separation the bolt carries P alone; below the preload, tightening strips it.
+  it("takes the stripping load straight when the thread outlasts the joint's separation (F_s above it)", () => {
+    const r = boltedJointCheck(TENSION);
+    const strip = r.tappedThread!.strippingLoad;
+    expect(strip).toBeGreaterThan(r.tension!.separationLoad);
+    expect(r.safetyFactors.stripping).toBeCloseTo(strip / r.loadPerBolt, 9);
+    expect(r.governs).toBe("tension");
+  });
+
+  it("takes (F_s − F_i)/C per bolt when the thread strips while the joint is still clamped, and lets stripping govern when it is the weaker", () => {
+    const r = boltedJointCheck({ ...TENSION, engagedLength: 0.0035 });
+    const strip = r.tappedThread!.strippingLoad;
+    const preload = r.preload.force;
+    expect(strip).toBeGreaterThan(preload);
+    expect(strip).toBeLessThan(r.tension!.separationLoad);
+    const expected = (strip - preload) / r.stiffness.factor / r.loadPerBolt;
+    expect(r.safetyFactors.stripping).toBeCloseTo(expected, 9);
+    expect(expected).toBeLessThan(r.safetyFactors.tension!);
+    expect(r.governs).toBe("stripping");
+    expect(r.safetyFactor).toBe(r.safetyFactors.stripping);
+    expect(r.reason).toBe(`The thread tapped into the part strips at 15.8 × the load (it carries the bolt's whole tension, 3900 N).`);
+  });
+
+  it("fails a tapped thread weaker than the preload in tension: the thread strips while the bolt is tightened (factor 0)", () => {
+    const r = boltedJointCheck({ ...TENSION, engagedLength: 0.002 });
+    expect(r.tappedThread!.strippingLoad).toBeLessThan(r.preload.force);
+    expect(r.safetyFactors.stripping).toBe(0);
+    expect([r.governs, r.safetyFactor, r.verdict]).toEqual(["stripping", 0, "fails"]);
+  });
+
+  it("says the clamp holds up to its factor when the sheared bolt is the stronger path, and that it slips only when that factor is below 1", () => {
+    // No stack: the bolt shears at the face (18.3) and outlasts the clamp (4.32), so the bolt governs.
+    const strong = boltedJointCheck({ ...DEFAULTS, stackHeight: 0 });
+    expect([strong.governs, strong.safetyFactors.bending]).toEqual(["shear", null]);
+    expect(strong.safetyFactor).toBe(strong.safetyFactors.shear);
+    expect(strong.reason).toBe("The clamp holds up to 4.32 × the load; past that the joint slips and the bolt is sheared: n = 18.3.");
+    // 1 % of proof: the clamp gives under the load itself, and the bolt bends over the 5 mm stack.
+    const loose = boltedJointCheck({ ...DEFAULTS, preloadShare: 0.01 });
+    expect(loose.safetyFactors.friction!).toBeLessThan(1);
+    expect(loose.governs).toBe("bending");
+    expect(loose.reason).toBe("The clamp carries only 0.0576 × the load, so the joint slips and the bolt is bent over the 5.00 mm stack: n = 2.19.");
+  });
+
+  it("names bending when the bent bolt is the weaker of its two ways to give, shear when bending is not weaker", () => {
+    const bent = boltedJointCheck({ ...DEFAULTS, preloadShare: 0.01 });
+    expect(bent.safetyFactors.bending!).toBeLessThan(bent.safetyFactors.shear!);
+    expect(bent.safetyFactor).toBe(bent.safetyFactors.bending);
+  });
+});
