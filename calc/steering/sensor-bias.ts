@@ -26,6 +26,7 @@ import { CalcInputError, requireFinite, requireInRange, requireNonNegative, requ
 import { headingDriftAt } from "../heading/drift.ts";
 import { opposedSensorsDrift } from "../heading/opposed.ts";
 import { requireFiniteResult, requireInputObject } from "../core/spec-check.ts";
+import { asCallerNames } from "../core/caller-names.ts";
 
 /**
  * Bias on a radial accelerometer from the drive pulses: the body-frame average of the pulse
@@ -108,9 +109,13 @@ export function drivePulseHeadingDrift(input: { bias: number; angularSpeed: numb
   requirePositive("angularSpeed", angularSpeed, "rad/s");
   requirePositive("sensorRadius", sensorRadius, "m");
   // spinner-heading-practice: ω̂ = √((ω²r + b)/r), via calc/heading/drift.ts
-  const single = headingDriftAt({ angularSpeed, assumedRadius: sensorRadius, trueRadius: sensorRadius, scaleError: 0, bias, biasCorrection: 0, tilt: 0 });
+  const single = asCallerNames({ assumedRadius: "sensorRadius", trueRadius: "sensorRadius" }, () =>
+    headingDriftAt({ angularSpeed, assumedRadius: sensorRadius, trueRadius: sensorRadius, scaleError: 0, bias, biasCorrection: 0, tilt: 0 }),
+  );
   // hibbeler-dynamics-2016: a translation acceleration a_L adds to one sensor and takes from the other
-  const pair = opposedSensorsDrift({ angularSpeed, radius1: sensorRadius, radius2: sensorRadius, offset: 0, linearAcceleration: -bias });
+  const pair = asCallerNames({ radius1: "sensorRadius", radius2: "sensorRadius", linearAcceleration: ["bias", bias] }, () =>
+    opposedSensorsDrift({ angularSpeed, radius1: sensorRadius, radius2: sensorRadius, offset: 0, linearAcceleration: -bias }),
+  );
   for (const v of [single.driftRate, single.driftPerRevolution, pair.pair.driftRate]) {
     if (v !== null && !Number.isFinite(v)) {
       throw new CalcInputError({ param: "sensorRadius", value: sensorRadius, expected: "small enough that the readings are finite numbers", unit: "m" });

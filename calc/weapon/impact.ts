@@ -132,6 +132,11 @@ export function rotorImpact(input: {
   if (selfMass !== undefined) named.selfMass = [selfMass, "kg"];
   const tipSpeed = requireFiniteResult(spinSpeed * tipRadius, "tip speed", named);
   const approachSpeed = requireFiniteResult(tipSpeed - targetVelocity, "approach speed", named);
+  if (!(approachSpeed > 0) && targetVelocity === 0) {
+    // A target at rest and a tip that does not move (no spin, or Ω·r below the smallest double).
+    const [param, value, unit] = spinSpeed > 0 ? ["tipRadius", tipRadius, "m"] : ["spinSpeed", spinSpeed, "rad/s"];
+    throw new CalcInputError({ param, value, expected: "large enough that the tip moves (Ω·r greater than 0 m/s)", unit });
+  }
   if (!(approachSpeed > 0)) {
     throw new CalcInputError({
       param: "targetVelocity",

@@ -1077,7 +1077,7 @@ describe("every public function names the field of a number it refuses", () => {
 });
 
 describe("every public function names the field that took a result out of range", () => {
-  it("each top-level number of a valid call, set to ±1e300 or 1e-300, is either used or refused naming a field of the call, with the quantity it would overflow", () => {
+  it("each top-level number of a valid call set to ±1e300 or 1e-300, then all of them at once, is either used or refused naming a field of the call, its value and unit, and the quantity it would overflow", () => {
     const wrong: string[] = [];
     let refused = 0;
     for (const [name, entry] of Object.entries(CALLS) as [PublicFunction, Entry][]) {
@@ -1085,30 +1085,37 @@ describe("every public function names the field that took a result out of range"
       if (name === "sweepPoint") continue;
       const [base] = entry.calls();
       if (!base || typeof base[0] !== "object" || base[0] === null || Array.isArray(base[0])) continue;
-      const fields = Object.keys(base[0] as object);
-      for (const [key, value] of Object.entries(base[0] as Record<string, unknown>)) {
-        if (typeof value !== "number") continue;
-        for (const extreme of [1e300, -1e300, 1e-300]) {
-          const args = mutateCall(base, []);
-          (args[0] as Record<string, unknown>)[key] = extreme;
-          try {
-            fnOf(name)(...args);
-          } catch (error) {
-            if (!(error instanceof CalcInputError)) {
-              wrong.push(`${name}.${key} = ${extreme}: ${String(error)}`);
-              continue;
-            }
-            refused++;
-            const top = error.param.split(/[.[]/)[0]!;
-            if (!fields.includes(top) && !fields.some((f) => error.param.endsWith(`.${f}`))) wrong.push(`${name}.${key} = ${extreme}: named ${error.param}`);
-            else if (/for the {2}to stay finite|^\S+ must be {2}/.test(error.message)) wrong.push(`${name}.${key} = ${extreme}: ${error.message}`);
-            else if (error.param === key && !Object.is(error.value, extreme)) wrong.push(`${name}.${key} = ${extreme}: reported ${String(error.value)}`);
-            else if (fields.includes(error.param)) {
-              // The field it names, in that field's SI unit.
-              const unit = fieldUnit(name, error.param);
-              if (unit !== undefined && error.unit !== unit)
-                wrong.push(`${name}.${key} = ${extreme}: ${error.param} in ${JSON.stringify(error.unit)}, expected ${JSON.stringify(unit)}`);
-            }
+      const given = base[0] as Record<string, unknown>;
+      const fields = Object.keys(given);
+      const numbers = fields.filter((key) => typeof given[key] === "number");
+      // One number at a time; then every number at once, so that a product or quotient of two
+      // inputs (ω·r, S/ρ) also leaves the doubles.
+      const variants: [string, Record<string, number>][] = [
+        ...numbers.flatMap((key) => [1e300, -1e300, 1e-300].map((x): [string, Record<string, number>] => [`${key} = ${x}`, { [key]: x }])),
+        ...[1e300, 1e-300].map((x): [string, Record<string, number>] => [`every number = ${x}`, Object.fromEntries(numbers.map((key) => [key, x]))]),
+      ];
+      for (const [label, changes] of variants) {
+        const args = mutateCall(base, []);
+        Object.assign(args[0] as object, changes);
+        try {
+          fnOf(name)(...args);
+        } catch (error) {
+          if (!(error instanceof CalcInputError)) {
+            wrong.push(`${name}.${label}: ${String(error)}`);
+            continue;
+          }
+          refused++;
+          const top = error.param.split(/[.[]/)[0]!;
+          const sent = (args[0] as Record<string, unknown>)[error.param];
+          if (!fields.includes(top) && !fields.some((f) => error.param.endsWith(`.${f}`))) wrong.push(`${name}.${label}: named ${error.param}`);
+          else if (/for the {2}to stay finite|^\S+ must be {2}/.test(error.message)) wrong.push(`${name}.${label}: ${error.message}`);
+          else if (typeof sent === "number" && !Object.is(error.value, sent))
+            wrong.push(`${name}.${label}: ${error.param} reported as ${String(error.value)}, sent ${sent}`);
+          else if (fields.includes(error.param)) {
+            // The field it names, in that field's SI unit.
+            const unit = fieldUnit(name, error.param);
+            if (unit !== undefined && error.unit !== unit)
+              wrong.push(`${name}.${label}: ${error.param} in ${JSON.stringify(error.unit)}, expected ${JSON.stringify(unit)}`);
           }
         }
       }
