@@ -577,6 +577,13 @@ describe("the rim check", () => {
     for (const p of profile) expect(p.hoop).toBeGreaterThanOrEqual(p.radial);
   });
 
+  it("spaces a profile's points evenly from the inside to the rim", () => {
+    const profile = rimStressProfile({ ...RIM_DEFAULTS, shape: "annular-disk", innerRadius: 0.03 }, { points: 5 });
+    const step = (RIM_DEFAULTS.outerRadius - 0.03) / 4;
+    profile.forEach((p, i) => expect(p.radius).toBeCloseTo(0.03 + i * step, 15));
+    expect(rimStressProfile({ ...RIM_DEFAULTS, shape: "solid-disk" }, { points: 3 })[1]!.radius).toBeCloseTo(RIM_DEFAULTS.outerRadius / 2, 15);
+  });
+
   it("draws a thin ring as a single point at its radius", () => {
     const profile = rimStressProfile(RIM_DEFAULTS);
     expect(profile).toHaveLength(1);
