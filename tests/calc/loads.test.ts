@@ -944,3 +944,20 @@ describe("regression pins (our own digits, not outside authorities)", () => {
     expectClose(demo.rim.speedAtUltimate, 2492.0651659770247, 1e-12);
   });
 });
+
+describe("the verdict thresholds", () => {
+  it.each([
+    ["safetyVerdict", () => safetyVerdict({ safetyFactor: 2.5, failBelow: 3, marginalBelow: 2 })],
+    ["fastenerCheck", () => fastenerCheck({ ...FASTENER_DEFAULTS, failBelow: 3, marginalBelow: 2 })],
+    ["rimCheck", () => rimCheck({ ...RIM_DEFAULTS, failBelow: 3, marginalBelow: 2 })],
+  ])("%s refuses a marginal threshold below the fail threshold, naming both", (_, run) => {
+    expect(run).toThrow(CalcInputError);
+    expect(run).toThrow(/^marginalBelow must be at least failBelow \(3\) \(got 2\)$/);
+  });
+
+  it("puts a factor exactly at a threshold in the better band (safety-factor-practice)", () => {
+    expect(safetyVerdict({ safetyFactor: 1 })).toBe("marginal");
+    expect(safetyVerdict({ safetyFactor: 2 })).toBe("holds");
+    expect(safetyVerdict({ safetyFactor: 1.5, failBelow: 1.5, marginalBelow: 1.5 })).toBe("holds");
+  });
+});
