@@ -580,7 +580,7 @@ describe("the rim check", () => {
   it("spaces a profile's points evenly from the inside to the rim", () => {
     const profile = rimStressProfile({ ...RIM_DEFAULTS, shape: "annular-disk", innerRadius: 0.03 }, { points: 5 });
     const step = (RIM_DEFAULTS.outerRadius - 0.03) / 4;
-    profile.forEach((p, i) => expect(p.radius).toBeCloseTo(0.03 + i * step, 15));
+    for (const [i, p] of profile.entries()) expect(p.radius).toBeCloseTo(0.03 + i * step, 15);
     expect(rimStressProfile({ ...RIM_DEFAULTS, shape: "solid-disk" }, { points: 3 })[1]!.radius).toBeCloseTo(RIM_DEFAULTS.outerRadius / 2, 15);
   });
 
