@@ -169,7 +169,9 @@ export function tensionJointFactors(input: { preload: number; stiffnessFactor: n
   const { boltLoad, separationLoad } = tensionJointLoads({ preload, stiffnessFactor, externalLoad });
   const yieldFactor = proofLoad / boltLoad; // shigley-mechanical-design Eq. 8-28
   let loadAtProof: number;
+  // Stryker disable next-line EqualityOperator: equivalent, at F_i = F_p the next branch also gives (F_p − F_i)/C = 0
   if (preload >= proofLoad) loadAtProof = 0;
+  // Stryker disable next-line EqualityOperator: equivalent, at F_p = F_i/(1 − C) both branches give F_p
   else if (proofLoad <= separationLoad)
     loadAtProof = (proofLoad - preload) / stiffnessFactor; // shigley-mechanical-design Eq. 8-29
   else loadAtProof = proofLoad; // separated: the bolt alone carries P

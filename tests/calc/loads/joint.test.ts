@@ -15,7 +15,7 @@ import {
   SLIP_FACTORS,
 } from "../../../calc/loads/joint-data.ts";
 import { boltBendingMoment, END_CONDITION_OPTIONS, eurocodePackingFactor, rootBendingStress, slipResistance } from "../../../calc/loads/slip.ts";
-import { vonMisesStress } from "../../../calc/loads/common.ts";
+import { safetyFactor, safetyVerdict, speedAtStress, vonMisesStress } from "../../../calc/loads/common.ts";
 import {
   BOLTED_JOINT_CHOICE_DEFAULTS,
   boltedJointInputs,
@@ -904,5 +904,91 @@ describe("the joint check's rules at their edges", () => {
     const bent = boltedJointCheck({ ...DEFAULTS, preloadShare: 0.01 });
     expect(bent.safetyFactors.bending!).toBeLessThan(bent.safetyFactors.shear!);
     expect(bent.safetyFactor).toBe(bent.safetyFactors.bending);
+  });
+});
+
+describe("refusals at the edges of the joint's formulas, in the caller's words", () => {
+  const refuses = (run: () => unknown, message: string | RegExp) => {
+    expect(run).toThrow(CalcInputError);
+    expect(run).toThrow(message);
+  };
+
+  it("refuses a bolt with neither shank nor thread in the grip", () => {
+    refuses(
+      () => boltStiffness({ shankArea: 1e-5, stressArea: 1e-5, shankLength: 0, threadLength: 0, youngsModulus: 2e11 }),
+      "threadLength must be greater than 0 m when the shank length is 0 (got 0 m)",
+    );
+  });
+
+  it("names the input that takes each figure past the largest double", () => {
+    refuses(
+      () => boltStiffness({ shankArea: 1, stressArea: 1, shankLength: 0, threadLength: 1e-300, youngsModulus: 1e300 }),
+      "youngsModulus must be small enough for the bolt stiffness to stay finite (got 1e+300 Pa)",
+    );
+    refuses(
+      () => preloadFromTorque({ torque: 1e300, nutFactor: 0.01, nominalDiameter: 1e-10 }),
+      "torque must be small enough for the preload to stay finite (got 1e+300 N·m)",
+    );
+    refuses(
+      () => tighteningTorque({ preload: 1e300, nutFactor: 1, nominalDiameter: 1e10 }),
+      "preload must be small enough for the tightening torque to stay finite (got 1e+300 N)",
+    );
+    refuses(
+      () => slipResistance({ frictionCoefficient: 1.5, preload: 1e308, boltCount: 2, interfaces: 1 }),
+      "preload must be small enough for the slip resistance to stay finite (got 1e+308 N)",
+    );
+    refuses(() => safetyFactor({ strength: 1e300, stress: 1e-300 }), "strength must be small enough for the safety factor to stay finite (got 1e+300 Pa)");
+    refuses(
+      () => speedAtStress({ angularSpeed: 1e300, strength: 1e20, stress: 1 }),
+      "angularSpeed must be small enough for the speed at stress to stay finite (got 1e+300 rad/s)",
+    );
+    refuses(
+      () => vonMisesStress({ normalStress: 1e308, shearStress: 1e308 }),
+      "normalStress must be small enough for the equivalent stress to stay finite (got 1e+308 Pa)",
+    );
+  });
+
+  it("names the external load when a tension joint's factor leaves the doubles: yield, load, then separation factor", () => {
+    // n_p = F_p/(F_i + C·P), n_L = (F_p − F_i)/(C·P), n_0 = F_i/((1 − C)·P) (Shigley 9th ed., Eqs. 8-28 to 8-30)
+    refuses(
+      () => tensionJointFactors({ preload: 0, stiffnessFactor: 0.5, externalLoad: 1e-10, proofLoad: 1e300 }),
+      "externalLoad must be large enough for the yield factor to stay finite (got 1e-10 N)",
+    );
+    refuses(
+      () => tensionJointFactors({ preload: 5e299, stiffnessFactor: 0.5, externalLoad: 1e-10, proofLoad: 1e300 }),
+      "externalLoad must be large enough for the load factor to stay finite (got 1e-10 N)",
+    );
+    refuses(
+      () => tensionJointFactors({ preload: 1e300, stiffnessFactor: 0.5, externalLoad: 1e-10, proofLoad: 1e300 }),
+      "externalLoad must be large enough for the separation factor to stay finite (got 1e-10 N)",
+    );
+  });
+
+  it("opens the joint exactly at the separation load F_i/(1 − C), and not below it", () => {
+    // F_i = 500 N, C = 0.5: separation at 1000 N.
+    expect(tensionJointLoads({ preload: 500, stiffnessFactor: 0.5, externalLoad: 1000 })).toEqual({
+      boltLoad: 1000,
+      memberLoad: 0,
+      separationLoad: 1000,
+      separated: true,
+    });
+    const below = tensionJointLoads({ preload: 500, stiffnessFactor: 0.5, externalLoad: 999.999 });
+    expect(below.separated).toBe(false);
+    expect(below.boltLoad).toBeCloseTo(500 + 0.5 * 999.999, 9);
+  });
+
+  it("says which rule a friction coefficient, a bolt count or a stress breaks", () => {
+    refuses(
+      () => slipResistance({ frictionCoefficient: 0, preload: 1000, boltCount: 2, interfaces: 1 }),
+      "frictionCoefficient must be greater than 0 and at most 1.5 (got 0)",
+    );
+    refuses(() => slipResistance({ frictionCoefficient: 0.2, preload: 1000, boltCount: 1.5, interfaces: 1 }), "boltCount must be a whole number (got 1.5)");
+    refuses(() => vonMisesStress({ normalStress: Number.NaN, shearStress: 1 }), "normalStress must be a finite number (got not a number)");
+    refuses(() => vonMisesStress({ normalStress: 1, shearStress: Number.NaN }), "shearStress must be a finite number (got not a number)");
+  });
+
+  it("states a threshold's refusal as a pure number, without a unit", () => {
+    refuses(() => safetyVerdict({ safetyFactor: 1, failBelow: 0 }), /^failBelow must be greater than 0 \(got 0\)$/);
+    refuses(() => safetyVerdict({ safetyFactor: 1, failBelow: 1, marginalBelow: 0 }), /^marginalBelow must be greater than 0 \(got 0\)$/);
   });
 });
