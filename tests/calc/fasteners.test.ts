@@ -467,3 +467,21 @@ describe("regression pins (our own digits, not outside authorities)", () => {
     expect(t.stressDiameterD3 * 1000).toBeCloseTo(3.1411915, 6);
   });
 });
+
+describe("the fastener rules at their equality edges", () => {
+  it("refuses a pitch of exactly the nominal diameter ÷ 1.3 (the minor diameter would vanish), and takes one just below", () => {
+    expect(() => threadDiameters({ nominalDiameter: 0.0013, pitch: 0.001 })).toThrow(
+      "pitch must be less than the nominal diameter ÷ 1.3, 0.001 m (got 0.001 m)",
+    );
+    expect(threadDiameters({ nominalDiameter: 0.0013, pitch: 0.000999 }).minorDiameter).toBeGreaterThan(0);
+  });
+
+  it("takes a yield strength equal to the tensile strength (a material with no hardening), and refuses one above it", () => {
+    // τ_y = S_y/√3 (distortion energy theory, Shigley 9th ed., §5-5)
+    const equal = boltShearStrengths({ yieldStrength: 500e6, tensileStrength: 500e6 });
+    expect(equal.shearYield).toBeCloseTo(500e6 / Math.sqrt(3), 0);
+    expect(() => boltShearStrengths({ yieldStrength: 500.1e6, tensileStrength: 500e6 })).toThrow(
+      "yieldStrength must be at most the tensile strength, 500000000 Pa (got 500100000 Pa)",
+    );
+  });
+});

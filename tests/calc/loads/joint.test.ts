@@ -992,3 +992,11 @@ describe("refusals at the edges of the joint's formulas, in the caller's words",
     refuses(() => safetyVerdict({ safetyFactor: 1, failBelow: 1, marginalBelow: 0 }), /^marginalBelow must be greater than 0 \(got 0\)$/);
   });
 });
+
+describe("the thread rules at their equality edges", () => {
+  it("refuses a tapped hole whose largest pitch diameter equals the screw's smallest major diameter (the threads would not overlap)", () => {
+    expect(() => internalThreadShearArea({ engagedLength: 0.008, pitch: 0.0007, externalMajorMin: 0.0038, internalPitchMax: 0.0038 })).toThrow(
+      "internalPitchMax must be less than the screw's minimum major diameter, 0.0038 m (got 0.0038 m)",
+    );
+  });
+});
