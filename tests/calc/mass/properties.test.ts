@@ -1,0 +1,89 @@
+/**
+ * The mass properties of a layout worked by hand for point masses, where every term is plain
+ * arithmetic: the centre of mass x̄ = Σmᵢxᵢ/M (centre-of-mass), the moment of inertia about the spin
+ * axis Σmᵢ(xᵢ² + yᵢ²) about the origin and about the centre (the parallel-axis theorem
+ * I_O = I_G + M·e²: W. Moebs, S. J. Ling, J. Sanny, University Physics vol. 1, OpenStax 2016,
+ * §10.5), and the products of inertia Σmᵢ·dxᵢ·dzᵢ, Σmᵢ·dyᵢ·dzᵢ about the centre (the sign
+ * convention of calc/mass/properties.ts: positive sums, as for a couple that tilts the rotor).
+ */
+import { describe, expect, it } from "vitest";
+import { CalcInputError, type LayoutPart, MAX_PARTS, massProperties } from "#calc";
+
+const point = (name: string, mass: number, x: number, y: number, z: number): LayoutPart => ({
+  name,
+  shape: { kind: "point" },
+  mass: { kind: "given", mass },
+  x,
+  y,
+  z,
+});
+
+// 1 kg at (100, 200, 50) mm and 2 kg at (−50, 100, −20) mm.
+const TWO = [point("a", 1, 0.1, 0.2, 0.05), point("b", 2, -0.05, 0.1, -0.02)];
+
+describe("mass properties of two point masses, by hand", () => {
+  const p = massProperties(TWO);
+
+  it("puts the centre at Σmx/M, Σmy/M, Σmz/M: (0, 133.3, 3.33) mm", () => {
+    expect(p.totalMass).toBe(3);
+    expect(p.centreX).toBeCloseTo(0, 15);
+    expect(p.centreY).toBeCloseTo(0.4 / 3, 15);
+    expect(p.centreZ).toBeCloseTo(0.01 / 3, 15);
+    expect(p.firstMomentX).toBeCloseTo(0, 15);
+    expect(p.firstMomentY).toBeCloseTo(0.4, 15);
+    // The centre lies on +y: 133.3 mm off the origin, at +90°.
+    expect(p.offset).toBeCloseTo(0.4 / 3, 15);
+    expect(p.offsetAngle).toBeCloseTo(Math.PI / 2, 12);
+  });
+
+  it("gives Σm(x² + y²) about the origin (0.075 kg·m²) and I_O − M·e² about the centre (0.021 667 kg·m²)", () => {
+    expect(p.inertiaAboutOrigin).toBeCloseTo(1 * (0.01 + 0.04) + 2 * (0.0025 + 0.01), 15);
+    expect(p.inertiaAboutCentre).toBeCloseTo(0.075 - 3 * (0.4 / 3) ** 2, 15);
+  });
+
+  it("gives the products of inertia about the centre (0.007 and 0.004 667 kg·m²) and about the origin", () => {
+    const [cy, cz] = [0.4 / 3, 0.01 / 3];
+    expect(p.productXZ).toBeCloseTo(1 * 0.1 * (0.05 - cz) + 2 * -0.05 * (-0.02 - cz), 15);
+    expect(p.productYZ).toBeCloseTo(1 * (0.2 - cy) * (0.05 - cz) + 2 * (0.1 - cy) * (-0.02 - cz), 15);
+    expect(p.productXZ).toBeCloseTo(0.007, 15);
+    expect(p.productYZ).toBeCloseTo(0.014 / 3, 15);
+    expect(p.productXZAboutOrigin).toBeCloseTo(1 * 0.1 * 0.05 + 2 * -0.05 * -0.02, 15);
+    expect(p.productYZAboutOrigin).toBeCloseTo(1 * 0.2 * 0.05 + 2 * 0.1 * -0.02, 15);
+  });
+
+  it("lists each part's mass, radius from the origin and share of the mass", () => {
+    expect(p.parts.map((q) => [q.name, q.mass, q.ownInertia])).toEqual([
+      ["a", 1, 0],
+      ["b", 2, 0],
+    ]);
+    expect(p.parts[0]!.radius).toBeCloseTo(Math.hypot(0.1, 0.2), 15);
+    expect(p.parts[1]!.massFraction).toBeCloseTo(2 / 3, 15);
+  });
+});
+
+describe("mass properties at the edges", () => {
+  it("gives a layout centred on the origin no offset angle (0, not the angle of a rounding error)", () => {
+    const centred = massProperties([point("a", 1, 0.1, 0, 0), point("b", 1, -0.1, 0, 0)]);
+    expect([centred.offset, centred.offsetAngle]).toEqual([0, 0]);
+  });
+
+  it("keeps the centre and the shares of masses near the smallest doubles (they are scaled up exactly, then back)", () => {
+    const tiny = 1e-160;
+    const q = massProperties(TWO.map((part) => ({ ...part, mass: { kind: "given" as const, mass: (part.mass as { mass: number }).mass * tiny } })));
+    const p = massProperties(TWO);
+    expect(q.totalMass).toBeCloseTo(3 * tiny, 175);
+    expect(q.totalMass / tiny).toBeCloseTo(3, 12);
+    expect(q.centreY).toBeCloseTo(p.centreY, 15);
+    expect(q.centreZ).toBeCloseTo(p.centreZ, 15);
+    expect(q.firstMomentY / tiny).toBeCloseTo(p.firstMomentY, 12);
+    expect(q.parts[1]!.massFraction).toBeCloseTo(2 / 3, 15);
+  });
+
+  it(`takes up to ${MAX_PARTS} parts and refuses an empty list or one more`, () => {
+    const many = Array.from({ length: MAX_PARTS }, (_, i) => point(`p${i}`, 0.01, 0.001 * i, 0, 0));
+    expect(massProperties(many).parts).toHaveLength(MAX_PARTS);
+    expect(() => massProperties([...many, point("extra", 0.01, 0, 0, 0)])).toThrow(CalcInputError);
+    expect(() => massProperties([...many, point("extra", 0.01, 0, 0, 0)])).toThrow(`parts must be a list of 1 to ${MAX_PARTS} parts (got ${MAX_PARTS + 1})`);
+    expect(() => massProperties([])).toThrow(`parts must be a list of 1 to ${MAX_PARTS} parts (got 0)`);
+  });
+});
