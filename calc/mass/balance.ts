@@ -89,6 +89,7 @@ export function equivalentBalanceGrade(input: { offset: number; angularSpeed: nu
 export function finestGradeMet(grade: number): BalanceGrade | null {
   requireNonNegative("grade", grade, "m/s");
   // A value equal to a grade up to rounding (e.g. 0.0063000000000001) meets that grade.
+  // Stryker disable next-line EqualityOperator: equivalent, < and ≤ differ only at exactly the grade × (1 + 10⁻¹²)
   return BALANCE_GRADES.find((g) => grade <= g.value * (1 + 1e-12)) ?? null;
 }
 

@@ -7,7 +7,7 @@
  * convention of calc/mass/properties.ts: positive sums, as for a couple that tilts the rotor).
  */
 import { describe, expect, it } from "vitest";
-import { CalcInputError, type LayoutPart, MAX_PARTS, massProperties } from "#calc";
+import { CalcInputError, coupleUnbalance, type LayoutPart, MAX_PARTS, massProperties, twoPlaneCorrection } from "#calc";
 
 const point = (name: string, mass: number, x: number, y: number, z: number): LayoutPart => ({
   name,
@@ -85,5 +85,29 @@ describe("mass properties at the edges", () => {
     expect(() => massProperties([...many, point("extra", 0.01, 0, 0, 0)])).toThrow(CalcInputError);
     expect(() => massProperties([...many, point("extra", 0.01, 0, 0, 0)])).toThrow(`parts must be a list of 1 to ${MAX_PARTS} parts (got ${MAX_PARTS + 1})`);
     expect(() => massProperties([])).toThrow(`parts must be a list of 1 to ${MAX_PARTS} parts (got 0)`);
+  });
+});
+
+describe("unbalance corrections worked by hand (rigid-rotor-unbalance)", () => {
+  it("points the couple along its products of inertia: I_yz alone lies at +90°", () => {
+    const c = coupleUnbalance({ productXZ: 0, productYZ: 1e-5, angularSpeed: 100 });
+    expect(c.couple).toBe(1e-5);
+    expect(c.moment).toBeCloseTo(100 ** 2 * 1e-5, 15);
+    expect(c.angle).toBeCloseTo(Math.PI / 2, 12);
+    expect(coupleUnbalance({ productXZ: 0, productYZ: 0, angularSpeed: 100 }).angle).toBe(0);
+  });
+
+  it("balances 10 g at (0, 50 mm, 10 mm) with 7.5 g and 2.5 g at −90° in planes at 5 and 25 mm, r = 50 mm", () => {
+    // First moment m·y = 5e-4 kg·m, product m·y·z = 5e-6 kg·m²; the two corrections must cancel both:
+    // U₁ + U₂ = −5e-4 and U₁·z₁ + U₂·z₂ = −5e-6 give U₁ = −3.75e-4, U₂ = −1.25e-4 kg·m.
+    const fix = twoPlaneCorrection({ firstMomentX: 0, firstMomentY: 5e-4, productXZ: 0, productYZ: 5e-6, planeZ1: 0.005, planeZ2: 0.025, radius: 0.05 });
+    expect(fix.lower.mass).toBeCloseTo(0.0075, 15);
+    expect(fix.upper.mass).toBeCloseTo(0.0025, 15);
+    expect(fix.lower.angle).toBeCloseTo(-Math.PI / 2, 12);
+    expect(fix.upper.angle).toBeCloseTo(-Math.PI / 2, 12);
+    expect([fix.lower.z, fix.upper.z]).toEqual([0.005, 0.025]);
+    // After the corrections: no first moment and no product left.
+    expect(5e-4 + fix.lower.mass * fix.lower.y + fix.upper.mass * fix.upper.y).toBeCloseTo(0, 15);
+    expect(5e-6 + fix.lower.mass * fix.lower.y * 0.005 + fix.upper.mass * fix.upper.y * 0.025).toBeCloseTo(0, 15);
   });
 });
