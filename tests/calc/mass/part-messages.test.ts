@@ -52,11 +52,11 @@ describe("a part's problem in the editor's words", () => {
   });
 
   it("states a relation to another field by that field's label and value, or to a fixed limit by the limit", () => {
-    const inner = refusal("part.shape.innerRadius", 0.05, { bound: { relation: "less", limit: 0.04, other: "outerRadius" } });
+    const inner = refusal("part.shape.innerRadius", 0.05, { bound: { kind: "length", relation: "less", limit: 0.04, other: "outerRadius" } });
     expect(describePartProblem(inner).rule).toBe("must be less than the outer radius (40 mm) (got 50 mm)");
-    const fixed = refusal("part.shape.radius", 0, { bound: { relation: "greater", limit: 0 } });
+    const fixed = refusal("part.shape.radius", 0, { bound: { kind: "length", relation: "greater", limit: 0 } });
     expect(describePartProblem(fixed).rule).toBe("must be greater than 0 mm (got 0 mm)");
-    const unknownOther = refusal("part.shape.radius", 0, { bound: { relation: "at-least", limit: 0.001, other: "colour" } });
+    const unknownOther = refusal("part.shape.radius", 0, { bound: { kind: "length", relation: "at-least", limit: 0.001, other: "colour" } });
     expect(describePartProblem(unknownOther).rule).toBe("must be at least 1 mm (got 0 mm)");
   });
 
