@@ -564,6 +564,33 @@ describe("counterweights", () => {
     expectRel(c.candidates[2]!.mass!, counterweightAtRadius({ ...base, radius: 0.055 }).mass, 1e-12);
   });
 
+  it("recommends the mounting point that needs the least mass, the first of equals", () => {
+    // On the far side the mass falls as the radius grows (m ≈ M(e − e_t)/(r + e_t)): 80 mm beats 55 and 30 mm.
+    const far = counterweightAtCandidates({
+      ...base,
+      candidates: [
+        { x: -0.03, y: 0 },
+        { x: -0.08, y: 0 },
+        { x: -0.055, y: 0 },
+      ],
+    });
+    expect(far.best).toBe(1);
+    expect(far.candidates[1]!.mass!).toBeLessThan(far.candidates[2]!.mass!);
+    expect(far.candidates[2]!.mass!).toBeLessThan(far.candidates[0]!.mass!);
+    // Two points mirrored about the line of the offset need the same mass: the first is named.
+    const mirrored = counterweightAtCandidates({
+      ...base,
+      candidates: [
+        { x: 0.05, y: 0 },
+        { x: -0.055, y: 0.003 },
+        { x: -0.055, y: -0.003 },
+      ],
+    });
+    expect(mirrored.candidates[1]!.mass).toBe(mirrored.candidates[2]!.mass);
+    expect(mirrored.best).toBe(1);
+    expect(counterweightAtCandidates({ ...base, candidates: [{ x: 0.05, y: 0 }] }).best).toBeNull();
+  });
+
   it("needs nothing when the offset is already within the target", () => {
     const ok = { ...base, centreX: 0.0001 };
     expect(counterweightAtRadius({ ...ok, radius: 0.05 })).toMatchObject({ status: "not-needed", mass: 0 });
