@@ -591,6 +591,16 @@ describe("counterweights", () => {
     expect(counterweightAtCandidates({ ...base, candidates: [{ x: 0.05, y: 0 }] }).best).toBeNull();
   });
 
+  it("counts an offset exactly at the target as within it", () => {
+    const at = { ...base, centreX: base.targetOffset };
+    expect(counterweightRadiusForMass({ ...at, mass: 0.01, maxRadius: 0.05 }).status).toBe("not-needed");
+    expect(counterweightAtCandidates({ ...at, candidates: [{ x: -0.05, y: 0 }] }).candidates[0]).toMatchObject({
+      feasible: true,
+      mass: 0,
+      reason: "already within target",
+    });
+  });
+
   it("needs nothing when the offset is already within the target", () => {
     const ok = { ...base, centreX: 0.0001 };
     expect(counterweightAtRadius({ ...ok, radius: 0.05 })).toMatchObject({ status: "not-needed", mass: 0 });
