@@ -18,6 +18,9 @@ function requireIndex(param: string, index: number, length: number, allowEnd = f
   return index;
 }
 
+/** A name with a suffix, the name shortened so that the suffix always fits (a copy never has its original's name). */
+const withSuffix = (name: string, suffix: string): string => `${name.slice(0, MAX_NAME_LENGTH - suffix.length)}${suffix}`;
+
 /**
  * Adds a part at `index` (default: the end). Pure: returns a new list.
  *
@@ -49,7 +52,7 @@ export function duplicatePart(parts: readonly LayoutPart[], index: number): Layo
   requireIndex("index", index, requireList(parts, "parts").length);
   const original = parts[index]!;
   checkPart(original, `parts[${index}]`);
-  const name = `${original.name} (copy)`.slice(0, MAX_NAME_LENGTH);
+  const name = withSuffix(original.name, " (copy)");
   return [...parts.slice(0, index + 1), { ...original, name }, ...parts.slice(index + 1)];
 }
 
@@ -156,6 +159,6 @@ export function mirrorPartInList(parts: readonly LayoutPart[], index: number, ax
 export function addMirrorCopy(parts: readonly LayoutPart[], index: number, axis: MirrorAxis): LayoutPart[] {
   requireIndex("index", index, requireList(parts, "parts").length);
   const image = mirrorPart(parts[index]!, axis);
-  const name = `${image.name} (mirror)`.slice(0, MAX_NAME_LENGTH);
+  const name = withSuffix(image.name, " (mirror)");
   return [...parts.slice(0, index + 1), { ...image, name }, ...parts.slice(index + 1)];
 }

@@ -12,7 +12,7 @@ import {
   staticUnbalance,
   twoPlaneCorrection,
 } from "../../calc/mass/balance.ts";
-import { checkPart, partMass, partOwnInertia, partVolume, type LayoutPart, type PartShape } from "../../calc/mass/parts.ts";
+import { checkPart, MAX_NAME_LENGTH, partMass, partOwnInertia, partVolume, type LayoutPart, type PartShape } from "../../calc/mass/parts.ts";
 import { counterweightPlan, massBalance, massBalanceInputs, type MassBalanceScalars } from "../../calc/mass/mass-balance.ts";
 import { demoRobotBalance, demoRobotParts, MASS_BALANCE_SOURCE_KEYS } from "../../calc/mass/demo.ts";
 import { encodeLayout, parseLayout } from "../../calc/mass/layout-text.ts";
@@ -786,6 +786,23 @@ describe("editing the parts list", () => {
     );
     expect(mirrorPartInList(list, 2, "x")[2]).toEqual(mx);
     expect(addMirrorCopy(list, 0, "y").map((p) => p.name)).toEqual(["a", "a (mirror)", "b", "c"]);
+  });
+
+  it("turns a plate half a turn through the origin, mirrors only the part asked for, and refuses another axis", () => {
+    // Through the origin a direction θ becomes θ + π, kept in (−π, π]: 0.5 → 0.5 − π.
+    expectRel((mirrorPart(c, "origin").shape as { angle: number }).angle, 0.5 - Math.PI, 1e-15);
+    const mirrored = mirrorPartInList(list, 2, "x");
+    expect(mirrored.slice(0, 2)).toEqual([a, b]);
+    expect(() => mirrorPart(c, "z" as never)).toThrow('axis must be "x", "y" or "origin" (got "z")');
+    const cu = given({ kind: "custom", inertiaZ: 1e-4, productXZ: 2e-6, productYZ: -3e-6 }, 0.1, 0.01, 0.02, 0.03);
+    expect(mirrorPart(cu, "origin").shape).toEqual({ kind: "custom", inertiaZ: 1e-4, productXZ: -2e-6, productYZ: 3e-6 });
+  });
+
+  it(`keeps a copy's or a mirror's name within ${MAX_NAME_LENGTH} characters`, () => {
+    const long = { ...a, name: "n".repeat(MAX_NAME_LENGTH) };
+    expect(duplicatePart([long], 0)[1]!.name).toBe(`${"n".repeat(MAX_NAME_LENGTH - 7)} (copy)`);
+    expect(duplicatePart([long], 0)[1]!.name).toHaveLength(MAX_NAME_LENGTH);
+    expect(addMirrorCopy([long], 0, "x")[1]!.name).toBe(`${"n".repeat(MAX_NAME_LENGTH - 9)} (mirror)`);
   });
 
   it("flips a custom part's own products with the coordinate that flips", () => {
