@@ -18,8 +18,25 @@ function requireIndex(param: string, index: number, length: number, allowEnd = f
   return index;
 }
 
-/** A name with a suffix, the name shortened so that the suffix always fits (a copy never has its original's name). */
-const withSuffix = (name: string, suffix: string): string => `${name.slice(0, MAX_NAME_LENGTH - suffix.length)}${suffix}`;
+/**
+ * A part's name with a suffix such as " (copy)", the name shortened so that the whole stays within
+ * `MAX_NAME_LENGTH` characters and the suffix always shows: a copy never takes its original's name.
+ *
+ * @param name the original name
+ * @param suffix what to add, at most `MAX_NAME_LENGTH` characters
+ * @returns the new name, at most `MAX_NAME_LENGTH` characters
+ *
+ * @example
+ * suffixedName("washer", " (copy)") // → "washer (copy)"
+ * Sources: none (list bookkeeping, no formula).
+ */
+export function suffixedName(name: string, suffix: string): string {
+  if (typeof name !== "string") throw new CalcInputError({ param: "name", value: String(name), expected: "text", unit: "" });
+  if (typeof suffix !== "string" || suffix.length > MAX_NAME_LENGTH) {
+    throw new CalcInputError({ param: "suffix", value: String(suffix), expected: `text of at most ${MAX_NAME_LENGTH} characters`, unit: "" });
+  }
+  return `${name.slice(0, MAX_NAME_LENGTH - suffix.length)}${suffix}`;
+}
 
 /**
  * Adds a part at `index` (default: the end). Pure: returns a new list.
@@ -52,7 +69,7 @@ export function duplicatePart(parts: readonly LayoutPart[], index: number): Layo
   requireIndex("index", index, requireList(parts, "parts").length);
   const original = parts[index]!;
   checkPart(original, `parts[${index}]`);
-  const name = withSuffix(original.name, " (copy)");
+  const name = suffixedName(original.name, " (copy)");
   return [...parts.slice(0, index + 1), { ...original, name }, ...parts.slice(index + 1)];
 }
 
@@ -159,6 +176,6 @@ export function mirrorPartInList(parts: readonly LayoutPart[], index: number, ax
 export function addMirrorCopy(parts: readonly LayoutPart[], index: number, axis: MirrorAxis): LayoutPart[] {
   requireIndex("index", index, requireList(parts, "parts").length);
   const image = mirrorPart(parts[index]!, axis);
-  const name = withSuffix(image.name, " (mirror)");
+  const name = suffixedName(image.name, " (mirror)");
   return [...parts.slice(0, index + 1), { ...image, name }, ...parts.slice(index + 1)];
 }

@@ -13,7 +13,7 @@ import { readMountingPoints } from "../../calc/mass/points-text.ts";
 import { form as massCalculator } from "../../calc/calculators/mass.ts";
 import { readLink, writeLink } from "../../calc/core/calculator.ts";
 import { saveToDesign } from "../calc-ui/save.ts";
-import { mirrorPart, type MirrorAxis } from "../../calc/mass/editing.ts";
+import { mirrorPart, type MirrorAxis, suffixedName } from "../../calc/mass/editing.ts";
 import type { LayoutPart } from "../../calc/mass/parts.ts";
 import type { MountingPoint } from "../../calc/mass/counterweight.ts";
 import { fromSI, type UnitSystem } from "../../calc/core/units.ts";
@@ -153,7 +153,7 @@ export function createMassModel(system: UnitSystem = "metric", layoutText = "", 
   }
   function duplicate(index: number): void {
     const p = parts.value[index]!;
-    parts.value = at(parts.value, index + 1, copyPart(p, `${p.name.value} (copy)`.slice(0, 60)));
+    parts.value = at(parts.value, index + 1, copyPart(p, suffixedName(p.name.value, " (copy)")));
   }
   function remove(index: number): void {
     parts.value = parts.value.filter((_, i) => i !== index);
@@ -170,7 +170,7 @@ export function createMassModel(system: UnitSystem = "metric", layoutText = "", 
     try {
       const image = mirrorPart(part, axis);
       if (asCopy) {
-        parts.value = at(parts.value, index + 1, createPart(fields.system.value, { ...image, name: `${part.name} (mirror)`.slice(0, 60) }, true));
+        parts.value = at(parts.value, index + 1, createPart(fields.system.value, { ...image, name: suffixedName(part.name, " (mirror)") }, true));
       } else {
         setValues(p, image);
       }

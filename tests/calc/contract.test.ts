@@ -257,6 +257,7 @@ const CALLS: Record<PublicFunction, Entry> = {
   removePart: { calls: c([parts(), 0]) },
   movePart: { calls: c([parts(), 0, 2]) },
   mirrorPart: { calls: c([plate, "x"], [plate, "y"]) },
+  suffixedName: { calls: c(["washer", " (copy)"], ["n".repeat(60), " (mirror)"]) },
   mirrorPartInList: { calls: c([parts(), 1, "x"]) },
   addMirrorCopy: { calls: c([parts(), 1, "y"]) },
   encodeLayout: { calls: c([parts()]) },
