@@ -165,3 +165,25 @@ describe("regression pins from the engineering review (our own digits)", () => {
     expect((r.liftSpeed! * 60) / (2 * Math.PI)).toBeCloseTo(2960.4, 1);
   });
 });
+
+describe("the spin centre at its edges", () => {
+  const spin = { angularSpeed: 250, sideGrip: 0.8, gripShare: 0.9 };
+
+  it("lets the wheels hold an orbit exactly as large as the grip allows", () => {
+    const { gripRadius } = spinCentre({ ...spin, centreX: 0, centreY: 0 });
+    const edge = spinCentre({ ...spin, centreX: gripRadius, centreY: 0 });
+    expect([edge.state, edge.gripShareNeeded]).toEqual(["wheels-hold", 1]);
+    expect(spinCentre({ ...spin, centreX: gripRadius * (1 + 1e-12), centreY: 0 }).state).toBe("wheels-slide");
+  });
+
+  it("puts a holding spin centre at +0, never −0 (a link or a label would show “−0 mm”)", () => {
+    const held = spinCentre({ ...spin, centreX: -1e-5, centreY: -1e-5 });
+    expect(held.state).toBe("wheels-hold");
+    expect(Object.is(held.centreX, 0) && Object.is(held.centreY, 0)).toBe(true);
+  });
+
+  it("needs no share of the grip for a centred robot, even with no grip at all", () => {
+    expect(spinCentre({ ...spin, sideGrip: 0, centreX: 0, centreY: 0 })).toMatchObject({ state: "wheels-hold", gripRadius: 0, gripShareNeeded: 0 });
+    expect(spinCentre({ ...spin, sideGrip: 0, centreX: 1e-4, centreY: 0 }).gripShareNeeded).toBeNull();
+  });
+});
