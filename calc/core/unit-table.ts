@@ -73,7 +73,7 @@ export const UNITS = {
   "ft/s2": { symbol: "ft/s²", kind: "acceleration", factor: FOOT, aliases: ["ft/s²", "ft/s^2"] },
   // angular speed [rad/s]
   "rad/s": { symbol: "rad/s", kind: "angularSpeed", factor: 1, aliases: ["rad s-1", "1/s"] },
-  rpm: { symbol: "rpm", kind: "angularSpeed", factor: RAD_PER_S_PER_RPM, aliases: ["rev/min", "r/min", "RAD_PER_S_PER_RPM"] },
+  rpm: { symbol: "rpm", kind: "angularSpeed", factor: RAD_PER_S_PER_RPM, aliases: ["rev/min", "r/min", "RPM"] },
   rps: { symbol: "rev/s", kind: "angularSpeed", factor: 2 * Math.PI, aliases: ["rev/s", "r/s"] },
   "deg/s": { symbol: "°/s", kind: "angularSpeed", factor: Math.PI / 180, aliases: ["°/s", "dps"] },
   // angular acceleration [rad/s²]

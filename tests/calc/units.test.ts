@@ -166,6 +166,14 @@ describe("units: reading what a user typed", () => {
     if (!result.ok) expect(result.message).toBe('has a unit "kg" that is not a length unit; use m, cm, mm, in, ft');
   });
 
+  it("takes only real spellings of a unit, never a name from the code (a constant's name once stood among rpm's aliases)", () => {
+    for (const spelling of ["RAD_PER_S_PER_RPM", "RPM_TO_RAD", "STANDARD_GRAVITY"]) {
+      expect(parseQuantity(`3000 ${spelling}`, "angularSpeed", "rpm")).toMatchObject({ ok: false, reason: "unknown-unit" });
+    }
+    for (const [id, def] of Object.entries(UNITS))
+      for (const alias of ("aliases" in def ? def.aliases : []) as readonly string[]) expect(alias, `${id}: ${alias}`).not.toMatch(/^[A-Z0-9]+_[A-Z0-9_]+$/);
+  });
+
   it("refuses a comma that could be a thousands separator", () => {
     const result = parseQuantity("2,400 rpm", "angularSpeed", "rpm");
     expect(result.ok).toBe(false);
