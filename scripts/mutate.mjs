@@ -13,6 +13,7 @@
  *   npm run mutate calc/core -- --ignore-static
  *                                           skips mutants of module-level tables and constants, each of
  *                                           which reloads and reruns every test that imports the file
+ *   npm run mutate calc -- --concurrency 2  test runners at once (default 1: the machine may be shared)
  *
  * The options after `--` go to this script, not to npm.
  *
@@ -27,13 +28,20 @@ const paths = [];
 const tests = [];
 let incremental = false;
 let ignoreStatic = false;
+let concurrency;
 for (let i = 0; i < args.length; i++) {
   const arg = args[i];
   if (arg === "--incremental") incremental = true;
   else if (arg === "--ignore-static") ignoreStatic = true;
   else if (arg === "--tests") tests.push(args[++i] ?? "");
-  else if (arg.startsWith("--")) {
-    console.error(`Unknown option ${JSON.stringify(arg)}: use paths, --tests <glob>, --incremental and --ignore-static.`);
+  else if (arg === "--concurrency") {
+    concurrency = Number(args[++i]);
+    if (!Number.isInteger(concurrency) || concurrency < 1) {
+      console.error(`--concurrency takes a whole number of test runners, 1 or more (got ${JSON.stringify(args[i])}).`);
+      process.exit(2);
+    }
+  } else if (arg.startsWith("--")) {
+    console.error(`Unknown option ${JSON.stringify(arg)}: use paths, --tests <glob>, --incremental, --ignore-static and --concurrency <n>.`);
     process.exit(2);
   } else paths.push(arg);
 }
@@ -51,7 +59,7 @@ function toPattern(path) {
 }
 
 /** @type {import('@stryker-mutator/api/core').PartialStrykerOptions} */
-const options = { incremental, ignoreStatic };
+const options = { incremental, ignoreStatic, ...(concurrency ? { concurrency } : {}) };
 if (paths.length > 0) options.mutate = [...paths.map(toPattern), "!calc/index.ts", "!calc/sources/**"];
 // Narrowed in the Vitest config (see tests/support/vitest.mutation.config.ts), not with Stryker's testFiles.
 if (tests.length > 0) process.env.WHIRLBOOK_MUTATION_TESTS = JSON.stringify(tests);
