@@ -12,7 +12,7 @@ import {
   staticUnbalance,
   twoPlaneCorrection,
 } from "../../calc/mass/balance.ts";
-import { checkPart, MAX_NAME_LENGTH, partMass, partOwnInertia, partVolume, type LayoutPart, type PartShape } from "../../calc/mass/parts.ts";
+import { checkPart, MAX_NAME_LENGTH, MAX_PART_MASS, partMass, partOwnInertia, partVolume, type LayoutPart, type PartShape } from "../../calc/mass/parts.ts";
 import { counterweightPlan, massBalance, massBalanceInputs, type MassBalanceScalars } from "../../calc/mass/mass-balance.ts";
 import { demoRobotBalance, demoRobotParts, MASS_BALANCE_SOURCE_KEYS } from "../../calc/mass/demo.ts";
 import { encodeLayout, parseLayout } from "../../calc/mass/layout-text.ts";
@@ -1079,6 +1079,27 @@ describe("the mass-and-balance calculator", () => {
     expect(d.sensorWithWashers.driftPerRevolution).toBeLessThan(b.sensor.before.driftPerRevolution / 10);
     // The layout is symmetric in y, so the centre of mass lies on the x axis.
     expect(b.layout.centreY).toBe(0);
+  });
+
+  it("says how the offset is fixed: at the counterweight radius without mounting points, not at all within the target, and not with a mass beyond any part's", () => {
+    const parts = demoRobotParts();
+    const atRadius = massBalance({ ...DEFAULTS, parts, candidates: [] });
+    expect(atRadius.fix.method).toBe("correction-radius");
+    expect(atRadius.fix.parts).toHaveLength(parts.length + 1);
+    expect(atRadius.fix.after.offset).toBeLessThanOrEqual(DEFAULTS.targetOffset * (1 + 1e-9));
+    const within = massBalance({ ...DEFAULTS, parts, candidates: [], targetOffset: 0.01 });
+    expect(within.fix.method).toBe("none");
+    expect(within.fix.parts).toEqual(parts);
+    expect(within.fix.after).toBe(within.fix.before);
+    // 100 kg half a metre off the axis, brought within 1 µm by a weight 1 µm from it: about 50 t, beyond MAX_PART_MASS.
+    const lopsided = [
+      { name: "heavy", shape: { kind: "point" as const }, mass: { kind: "given" as const, mass: 100 }, x: 0.5, y: 0, z: 0 },
+      { name: "light", shape: { kind: "point" as const }, mass: { kind: "given" as const, mass: 1 }, x: -0.5, y: 0, z: 0 },
+    ];
+    const heavy = massBalance({ ...DEFAULTS, parts: lopsided, candidates: [], correctionRadius: 1e-6, targetOffset: 1e-6 });
+    expect(heavy.counterweight.atRadius.mass).toBeGreaterThan(MAX_PART_MASS);
+    expect(heavy.fix.method).toBe("too-heavy");
+    expect(heavy.fix.parts).toEqual(lopsided);
   });
 
   it("iso-21940-11: gives U/U_per, which equals eΩ/G for the chosen grade, and e/e_target, each on the side of 1 its verdict says", () => {
