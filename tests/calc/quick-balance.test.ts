@@ -267,3 +267,28 @@ describe("regression pins (our own digits, not a source)", () => {
     expect(r.status).toBe("holds");
   });
 });
+
+describe("the quick balance's verdict at its edges (iso-21940-11: holds when U ≤ U_per)", () => {
+  // Numbers exact in binary, so that U/U_per lands exactly on the edges: Ω = 64 rad/s (Ω² = 4096),
+  // a force limit of 128 N is U_per = 128/4096 = 1/32 kg·m.
+  const exact = { ...base, limit: "force" as const, spinSpeed: 64, robotMass: 2, wobbleForce: 128, partRadius: 0.0625 };
+
+  it("holds at exactly the limit, U = U_per", () => {
+    const r = quickBalance({ ...exact, partMass: 0.5 });
+    expect([r.shareOfLimit, r.status, r.reason]).toEqual([1, "holds", "within the limit"]);
+  });
+
+  it("is marginal up to exactly 2.5 × the limit, and fails past it", () => {
+    const edge = quickBalance({ ...exact, partMass: 1.25 });
+    expect([edge.shareOfLimit, edge.status, edge.reason]).toEqual([2.5, "marginal", "over the limit, by up to 2.5 times (one grade step)"]);
+    const past = quickBalance({ ...exact, partMass: 1.25 * (1 + 1e-12) });
+    expect([past.status, past.reason]).toEqual(["fails", "more than 2.5 times the limit"]);
+  });
+
+  it("takes a moved part as heavy as the robot, and refuses a heavier one", () => {
+    expect(quickBalance({ ...base, change: "moved", partMass: base.robotMass }).totalMass).toBe(base.robotMass);
+    expect(() => quickBalance({ ...base, change: "moved", partMass: base.robotMass + 0.001 })).toThrow(
+      "partMass must be at most the robot's mass (1.5 kg): a moved part is part of the robot (got 1.501 kg)",
+    );
+  });
+});
