@@ -52,8 +52,13 @@ function useLater<T>(input: SteeringInput | null, tasks: number, compute: (input
     let timer: ReturnType<typeof setTimeout>;
     const wait = (left: number) => {
       timer = setTimeout(() => {
-        if (left > 1) wait(left - 1);
-        else done.value = { input, outcome: attempt(() => compute(input)) };
+        if (left > 1) return wait(left - 1);
+        const outcome = attempt(() => compute(input));
+        // Its figures drawn in the task after: on a slow phone the move's computation and the
+        // drawing of what it found passed 50 ms together.
+        timer = setTimeout(() => {
+          done.value = { input, outcome };
+        }, 0);
       }, 0);
     };
     wait(tasks);
