@@ -10,6 +10,7 @@ import { unitDef, unitsOfKind } from "../../calc/core/units.ts";
 import "../../calc/core/all-units.ts";
 import { radiusMismatchExample } from "../../calc/heading/drift-demo.ts";
 import { DEMO_STEERING_SPINNER, type SteeringParameter, steeringInputs, steeringUnit, validateSteeringInput } from "../../calc/steering/inputs.ts";
+import { readSteeringOptions } from "../../calc/steering/simulate.ts";
 import { spinAxis } from "../../calc/weapon/gyroscopic.ts";
 import { requireComInsideTrack } from "../../calc/weapon/tipping.ts";
 
@@ -93,5 +94,20 @@ describe("the rotor's spin axis (right-hand rule) and the track rule", () => {
       "comOffset must be less than half the track (0.1 m) either way: the centre of mass must lie between the wheels (got 0.1 m)",
     );
     expect(() => requireComInsideTrack(-0.1, 0.2)).toThrow(CalcInputError);
+  });
+});
+
+describe("the steering run's options", () => {
+  it("defaults to a relative tolerance of 1e-6, 500 000 steps and the per-revolution list", () => {
+    expect(readSteeringOptions(undefined)).toEqual({ relativeTolerance: 1e-6, maxSteps: 500_000, revolutions: true });
+    expect(readSteeringOptions({ revolutions: false, maxSteps: 100 })).toEqual({ relativeTolerance: 1e-6, maxSteps: 100, revolutions: false });
+  });
+
+  it("takes the ends of its ranges and refuses past them, and a step budget that is not whole", () => {
+    expect(readSteeringOptions({ relativeTolerance: 1e-9, maxSteps: 1e7 })).toMatchObject({ relativeTolerance: 1e-9, maxSteps: 1e7 });
+    expect(readSteeringOptions({ relativeTolerance: 1e-3 }).relativeTolerance).toBe(1e-3);
+    expect(() => readSteeringOptions({ relativeTolerance: 2e-3 })).toThrow(/^relativeTolerance must be at least 1e-9 and at most 0\.001 \(got 0\.002\)$/);
+    expect(() => readSteeringOptions({ maxSteps: 99 })).toThrow(/^maxSteps must be at least 100 and at most 10000000 \(got 99\)$/);
+    expect(() => readSteeringOptions({ maxSteps: 1000.5 })).toThrow("maxSteps must be a whole number (got 1000.5)");
   });
 });
