@@ -994,6 +994,10 @@ const FIELD_UNIT_IN: Partial<Record<PublicFunction, Record<string, string>>> = {
   // The standard normal variable.
   normalCdf: { z: "" },
 };
+/** A refusal a person can read: it says what was expected, in words, without a program's leftovers. */
+const readable = (error: CalcInputError): boolean =>
+  error.expected.trim().length > 2 && !/undefined|\[object |NaN(?! )|\bnull\b|^\s|\s$/.test(error.expected) && error.unit.trim() === error.unit;
+
 /** The SI unit a field is refused in: a declared input's kind's, or the documented one. */
 function fieldUnit(name: PublicFunction, key: string): string | undefined {
   const spec = DECLARED[name]?.[key];
@@ -1061,6 +1065,7 @@ describe("every public function names the field of a number it refuses", () => {
           if (!(error instanceof CalcInputError)) wrong.push(`${name}.${key}: ${String(error)}`);
           else if (error.param !== key && !error.param.endsWith(`.${key}`)) wrong.push(`${name}.${key}: named ${error.param}`);
           else if (!Number.isNaN(error.value)) wrong.push(`${name}.${key}: reported the value ${String(error.value)}`);
+          else if (!readable(error)) wrong.push(`${name}.${key}: ${error.message}`);
           else {
             // In the field's SI unit, as the message shows it ("m/s²"): a declared input's kind's, any
             // other field's as its documentation gives it.
@@ -1109,6 +1114,7 @@ describe("every public function names the field that took a result out of range"
           const top = error.param.split(/[.[]/)[0]!;
           const sent = (args[0] as Record<string, unknown>)[error.param];
           if (!fields.includes(top) && !fields.some((f) => error.param.endsWith(`.${f}`))) wrong.push(`${name}.${label}: named ${error.param}`);
+          else if (!readable(error)) wrong.push(`${name}.${label}: ${error.message}`);
           else if (/for the {2}to stay finite|^\S+ must be {2}/.test(error.message)) wrong.push(`${name}.${label}: ${error.message}`);
           else if (typeof sent === "number" && !Object.is(error.value, sent))
             wrong.push(`${name}.${label}: ${error.param} reported as ${String(error.value)}, sent ${sent}`);
