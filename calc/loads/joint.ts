@@ -34,6 +34,7 @@ const requireJointInput = (name: keyof typeof boltedJointInputs, value: number):
 /** a/b, or null when b is 0 or so small that the ratio is not a finite number (no preload to speak of). */
 function ratioOrNull(a: number, b: number): number | null {
   const ratio = a / b;
+  // Stryker disable next-line EqualityOperator: equivalent, for b = 0 the ratio is ±∞ or NaN, which the finiteness test refuses
   return b > 0 && Number.isFinite(ratio) ? ratio : null;
 }
 
