@@ -104,7 +104,8 @@ describe("printed build sheet", () => {
     await reopened.getByRole("button", { name: "Print" }).click();
     await reopened.locator(".print-link svg").waitFor({ state: "attached" });
     await reopened.emulateMedia({ media: "print", colorScheme: "light" });
-    expect(await printedChecks(reopened)).toEqual(original);
+    // The checks' code loads on demand after the design is read: wait for the cards, not only the name.
+    await expect.poll(() => printedChecks(reopened)).toEqual(original);
     await elsewhere.close();
     await context.close();
   });
