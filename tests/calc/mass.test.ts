@@ -1092,10 +1092,7 @@ describe("the mass-and-balance calculator", () => {
     expect(within.fix.parts).toEqual(parts);
     expect(within.fix.after).toBe(within.fix.before);
     // 100 kg half a metre off the axis, brought within 1 µm by a weight 1 µm from it: about 50 t, beyond MAX_PART_MASS.
-    const lopsided = [
-      { name: "heavy", shape: { kind: "point" as const }, mass: { kind: "given" as const, mass: 100 }, x: 0.5, y: 0, z: 0 },
-      { name: "light", shape: { kind: "point" as const }, mass: { kind: "given" as const, mass: 1 }, x: -0.5, y: 0, z: 0 },
-    ];
+    const lopsided = [point(100, 0.5, 0, 0, "heavy"), point(1, -0.5, 0, 0, "light")];
     const heavy = massBalance({ ...DEFAULTS, parts: lopsided, candidates: [], correctionRadius: 1e-6, targetOffset: 1e-6 });
     expect(heavy.counterweight.atRadius.mass).toBeGreaterThan(MAX_PART_MASS);
     expect(heavy.fix.method).toBe("too-heavy");
