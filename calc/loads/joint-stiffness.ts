@@ -64,7 +64,11 @@ export function memberStiffness(input: { youngsModulus: number; nominalDiameter:
   // ln(5(a + 0.5d)/(a + 2.5d)) = ln(1 + 4a/(a + 2.5d)), written with log1p for a short grip.
   const logTerm = Math.log1p((4 * a) / (a + 2.5 * nominalDiameter)); // shigley-mechanical-design Eq. 8-22
   const stiffness = (0.5774 * Math.PI * youngsModulus * nominalDiameter) / (2 * logTerm); // shigley-mechanical-design Eq. 8-22
-  return requireFiniteResult(stiffness, "member stiffness", { gripLength: [gripLength, "m"] });
+  return requireFiniteResult(stiffness, "member stiffness", {
+    youngsModulus: [youngsModulus, "Pa"],
+    nominalDiameter: [nominalDiameter, "m"],
+    gripLength: [gripLength, "m"],
+  });
 }
 
 /**

@@ -139,7 +139,7 @@ export function solidDiskStress(input: SpinningBody & { poisson: number; outerRa
       hoop: (q / 8) * ((3 + poisson) * outerRadius * outerRadius - (1 + 3 * poisson) * radius * radius), // timoshenko-goodier
     },
     "solid disk stress",
-    { outerRadius: [outerRadius, "m"], radius: [radius, "m"] },
+    { density: [density, "kg/m³"], angularSpeed: [angularSpeed, "rad/s"], outerRadius: [outerRadius, "m"], radius: [radius, "m"] },
   );
 }
 
@@ -205,7 +205,13 @@ export function annularDiskStress(input: SpinningBody & { poisson: number; inner
       hoop: ((3 + poisson) / 8) * q * (b2 + a2 + (a2 * b2) / r2) - ((1 + 3 * poisson) / 8) * q * r2, // timoshenko-goodier
     },
     "annular disk stress",
-    { radius: [radius, "m"] },
+    {
+      density: [density, "kg/m³"],
+      angularSpeed: [angularSpeed, "rad/s"],
+      innerRadius: [innerRadius, "m"],
+      outerRadius: [outerRadius, "m"],
+      radius: [radius, "m"],
+    },
   );
 }
 

@@ -95,7 +95,7 @@ export function rootBendingStress(input: { moment: number; rootDiameter: number 
   requireNonNegative("moment", moment, "N·m");
   requirePositive("rootDiameter", rootDiameter, "m");
   const stress = (32 * moment) / (Math.PI * rootDiameter ** 3); // roark-beams, σ = M/Z with Z = πd³/32
-  return requireFiniteResult(stress, "bending stress", { moment: [moment, "N·m"] });
+  return requireFiniteResult(stress, "bending stress", { moment: [moment, "N·m"], rootDiameter: [rootDiameter, "m"] });
 }
 
 /**

@@ -41,7 +41,12 @@ export function internalThreadShearArea(input: { engagedLength: number; pitch: n
   }
   const n = 1 / pitch;
   const area = Math.PI * n * engagedLength * externalMajorMin * (1 / (2 * n) + 0.57735 * (externalMajorMin - internalPitchMax)); // fed-std-h28-2
-  return requireFiniteResult(area, "shear area", { engagedLength: [engagedLength, "m"] });
+  return requireFiniteResult(area, "shear area", {
+    engagedLength: [engagedLength, "m"],
+    pitch: [pitch, "m"],
+    externalMajorMin: [externalMajorMin, "m"],
+    internalPitchMax: [internalPitchMax, "m"],
+  });
 }
 
 /**

@@ -681,11 +681,14 @@ describe("inputs", () => {
     const calls: [() => number, string][] = [
       [() => boltStiffness({ shankArea: 1, stressArea: 1, shankLength: tiny, threadLength: tiny, youngsModulus: huge }), "youngsModulus"],
       [() => memberStiffness({ youngsModulus: huge, nominalDiameter: huge, gripLength: tiny }), "gripLength"],
-      [() => rootBendingStress({ moment: huge, rootDiameter: tiny }), "moment"],
+      // The cube of a 5e-324 m root diameter is 0: the diameter, the more extreme, is named.
+      [() => rootBendingStress({ moment: huge, rootDiameter: tiny }), "rootDiameter"],
+      [() => rootBendingStress({ moment: huge, rootDiameter: 1 }), "moment"],
       [() => vonMisesStress({ normalStress: huge, shearStress: huge }), "normalStress"],
       [() => slipResistance({ preload: huge, frictionCoefficient: 1.5, boltCount: 10, interfaces: 10 }), "preload"],
       [() => boltBendingMoment({ force: huge, height: huge, endCondition: "cantilever" }), "force"],
-      [() => internalThreadShearArea({ engagedLength: huge, pitch: tiny, externalMajorMin: 1, internalPitchMax: 0.5 }), "engagedLength"],
+      [() => internalThreadShearArea({ engagedLength: huge, pitch: tiny, externalMajorMin: 1, internalPitchMax: 0.5 }), "pitch"],
+      [() => internalThreadShearArea({ engagedLength: huge, pitch: 1, externalMajorMin: 1, internalPitchMax: 0.5 }), "engagedLength"],
     ];
     for (const [call, param] of calls) expectParamError(call, param);
   });
