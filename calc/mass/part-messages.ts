@@ -35,6 +35,7 @@ export function describePartProblem(
 ): { label: string; rule: string } {
   if (!(error instanceof CalcInputError)) return { label: "The part", rule: "is not a valid part" };
   const { system = "metric", received = inUnit } = options;
+  // Stryker disable next-line Regex: equivalent, [^.]*\.? matches (if only the empty text) at the start, so the first match begins there without ^ too
   const path = error.param.replace(/^[^.]*\.?/, "");
   const field = path.split(".").at(-1)!;
   const name = field === "thickness" && (options.shape === "ring" || options.shape === "rod") ? "section" : field;

@@ -29,6 +29,8 @@ describe("a part's problem in the editor's words", () => {
     expect(describePartProblem(thin, { shape: "rod" }).label).toBe("Section diameter");
     expect(describePartProblem(thin, { shape: "disk" }).label).toBe("Thickness");
     expect(describePartProblem(thin).label).toBe("Thickness");
+    // Only the thickness: a ring's radius is still its radius.
+    expect(describePartProblem(refusal("part.shape.radius", -0.005, { range: { min: 0, max: 2 } }), { shape: "ring" }).label).toBe("Radius");
   });
 
   it("names the fields that hold no number by their words, and anything else as the part", () => {
@@ -49,6 +51,9 @@ describe("a part's problem in the editor's words", () => {
 
   it("says a value that is not a number must be a number, worded by the caller", () => {
     expect(describePartProblem(refusal("part.x", "abc"), { received: (v) => JSON.stringify(v) })).toEqual({ label: "x", rule: 'must be a number (got "abc")' });
+    // Even when the rule it broke compares with a limit: the limit means nothing for text.
+    const text = refusal("part.shape.radius", "abc", { bound: { kind: "length", relation: "greater", limit: 0 } });
+    expect(describePartProblem(text, { received: (v) => JSON.stringify(v) })).toEqual({ label: "Radius", rule: 'must be a number (got "abc")' });
   });
 
   it("states a relation to another field by that field's label and value, or to a fixed limit by the limit", () => {
@@ -58,6 +63,12 @@ describe("a part's problem in the editor's words", () => {
     expect(describePartProblem(fixed).rule).toBe("must be greater than 0 mm (got 0 mm)");
     const unknownOther = refusal("part.shape.radius", 0, { bound: { kind: "length", relation: "at-least", limit: 0.001, other: "colour" } });
     expect(describePartProblem(unknownOther).rule).toBe("must be at least 1 mm (got 0 mm)");
+  });
+
+  it("shows a custom part's own inertia in g·cm² unless told otherwise, the editor's unit, not kg·m²", () => {
+    // 1 kg·m² = 1000 g × 10⁴ cm² = 10⁷ g·cm², so −10⁻⁴ kg·m² = −1000 g·cm².
+    const own = refusal("part.shape.inertiaZ", -1e-4, { unit: "kg·m²", bound: { kind: "inertia", relation: "at-least", limit: 0 } });
+    expect(describePartProblem(own)).toEqual({ label: "Own inertia about z", rule: "must be at least 0 g·cm² (got -1000 g·cm²)" });
   });
 
   it("shows a mass in grams, or ounces in US units", () => {
