@@ -38,5 +38,6 @@ export const BALANCE_GRADES: readonly BalanceGrade[] = [0.4, 1, 2.5, 6.3, 16, 40
 export function standardBalanceGrade(grade: number): BalanceGrade | null {
   requireNonNegative("grade", grade, "m/s");
   // Equality up to the rounding of a unit conversion, against iso-21940-11's list.
+  // Stryker disable next-line EqualityOperator: equivalent, no double lies exactly 1e-9·G_k from a grade (G_k ± 1e-9·G_k is not representable for any of the 11), so < and ≤ agree
   return BALANCE_GRADES.find((g) => Math.abs(g.value - grade) <= 1e-9 * g.value) ?? null;
 }

@@ -105,13 +105,17 @@ export function demoRobotBalance(): DemoRobotBalance {
   ];
   const balance = massBalance({ ...defaults, parts, candidates, correctionRadius: bolt });
   const needed = balance.counterweight.atRadius.mass;
-  const washers = Math.ceil(needed / DEMO_WASHER_MASS - 1e-9);
+  const washerCount = needed / DEMO_WASHER_MASS;
+  // Stryker disable next-line ArithmeticOperator: equivalent, the demo needs 6.50 washers, far from a whole number, so rounding up gives 7 with the allowance added or taken off
+  const washers = Math.ceil(washerCount - 1e-9);
   const washerMass = washers * DEMO_WASHER_MASS;
   const at = balance.counterweight.atRadius;
   const withWashers =
+    // Stryker disable next-line ConditionalExpression,EqualityOperator: equivalent, the demo robot needs 7 washers, never none
     washers > 0
       ? applyCounterweight({ parts, mass: washerMass, x: at.x, y: at.y, z: balance.layout.centreZ, name: `${washers} washers` })
-      : { parts: [...parts], before: balance.layout, after: balance.layout };
+      : // Stryker disable next-line ObjectLiteral,ArrayDeclaration: equivalent, never reached (the demo robot needs 7 washers)
+        { parts: [...parts], before: balance.layout, after: balance.layout };
   const turnsWithWashers = spinCentre({
     centreX: withWashers.after.centreX,
     centreY: withWashers.after.centreY,

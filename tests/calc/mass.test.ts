@@ -386,7 +386,7 @@ describe("ISO 21940-11 balance quality grades", () => {
     expect(standardBalanceGrade(0.005)).toBeNull();
     expect(standardBalanceGrade(0.0063 * (1 + 1e-6))).toBeNull();
     for (const g of BALANCE_GRADES) expect(standardBalanceGrade(g.value)).toBe(g);
-    expectInputError(() => standardBalanceGrade(-1), "grade");
+    expectInputError(() => standardBalanceGrade(-1), "grade", /^grade must be 0 m\/s or more \(got -1 m\/s\)$/);
   });
 
   it("picks the finest grade met, and none beyond G 4000", () => {
@@ -1079,6 +1079,21 @@ describe("the mass-and-balance calculator", () => {
     expect(d.sensorWithWashers.driftPerRevolution).toBeLessThan(b.sensor.before.driftPerRevolution / 10);
     // The layout is symmetric in y, so the centre of mass lies on the x axis.
     expect(b.layout.centreY).toBe(0);
+  });
+
+  it("offers the demo's counterweight four bolts 55 mm out on ±x and ±y, and stacks the washers on one as a part named by their count", () => {
+    const d = demoRobotBalance();
+    expect(d.mountingPoints).toEqual([
+      { x: 0.055, y: 0 },
+      { x: 0, y: 0.055 },
+      { x: -0.055, y: 0 },
+      { x: 0, y: -0.055 },
+    ]);
+    const parts = demoRobotParts();
+    expect(d.withWashers.parts.slice(0, parts.length)).toEqual(parts);
+    // 7 washers of 6 g (DEMO_WASHER_MASS) = 42 g, at the candidate the balance picked.
+    expect(d.withWashers.parts[parts.length]).toMatchObject({ name: "7 washers", shape: { kind: "point" }, mass: { kind: "given", mass: d.washerMass } });
+    expect(d.washerMass).toBeCloseTo(0.042, 15);
   });
 
   it("says how the offset is fixed: at the counterweight radius without mounting points, not at all within the target, and not with a mass beyond any part's", () => {
