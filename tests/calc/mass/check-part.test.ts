@@ -4,7 +4,7 @@
  */
 import { describe, expect, it } from "vitest";
 import { CalcInputError } from "../../../calc/core/errors.ts";
-import { checkPart, type LayoutPart, MAX_NAME_LENGTH, partVolume } from "../../../calc/mass/parts.ts";
+import { checkPart, directionOf, type LayoutPart, MAX_NAME_LENGTH, ownInertiaOf, partVolume } from "../../../calc/mass/parts.ts";
 
 const given = { kind: "given", mass: 0.1 } as const;
 const part = (shape: object, mass: object = given, extra: object = {}) => ({ name: "p", shape, mass, x: 0, y: 0, z: 0, ...extra }) as unknown as LayoutPart;
@@ -16,6 +16,17 @@ function refusal(p: unknown): [string, string, string] {
   } catch (error) {
     if (error instanceof CalcInputError) return [error.param, error.unit, error.expected];
     throw error;
+  }
+  throw new Error("accepted");
+}
+
+/** The refusal a call throws. */
+function thrown(run: () => unknown): CalcInputError {
+  try {
+    run();
+  } catch (error) {
+    expect(error).toBeInstanceOf(CalcInputError);
+    return error as CalcInputError;
   }
   throw new Error("accepted");
 }
@@ -74,6 +85,10 @@ describe("checkPart names the field it refuses", () => {
       "",
       "a thickness (disk, annulus, plate) or section diameter (ring, rod) greater than 0 m",
     ]);
+    // A missing thickness is reported as missing (the parts editor then says "is missing"), not as a number.
+    expect(() => checkPart(part({ kind: "disk", radius: 0.05 }, al()))).toThrow(
+      'part.mass.thickness must be a thickness (disk, annulus, plate) or section diameter (ring, rod) greater than 0 m (got "missing")',
+    );
     expect(refusal(part({ kind: "disk", radius: 0.05 }, al({ thickness: -0.001 })))[0]).toBe("part.mass.thickness");
     // A cylinder's material needs no thickness: its height is in its shape.
     expect(() => checkPart(part({ kind: "cylinder", radius: 0.01, height: 0.02 }, al()))).not.toThrow();
@@ -82,7 +97,9 @@ describe("checkPart names the field it refuses", () => {
 
   it("names the smallest dimension when a material part's volume underflows to nothing", () => {
     const al = { kind: "material", material: "al-6061-t6", thickness: 1e-200 };
-    expect(refusal(part({ kind: "disk", radius: 1e-200 }, al))[0]).toMatch(/^part\.(shape\.radius|mass\.thickness)$/);
+    // Equally small: the first in the part's order, its shape before its thickness.
+    expect(refusal(part({ kind: "disk", radius: 1e-200 }, al))[0]).toBe("part.shape.radius");
+    expect(refusal(part({ kind: "plate", length: 0.05, width: 1e-200, angle: 0 }, al))[0]).toBe("part.shape.width");
     expect(refusal(part({ kind: "plate", length: 0.05, width: 0.05, angle: 0 }, { ...al, thickness: 1e-322 }))).toEqual([
       "part.mass.thickness",
       "m",
@@ -96,5 +113,30 @@ describe("checkPart names the field it refuses", () => {
       partVolume(part({ kind: "plate", length: 0.04, width: 0.02, angle: 0 }, { kind: "material", material: "al-6061-t6", thickness: 0.005 })),
     ).toBeCloseTo(0.04 * 0.02 * 0.005, 15);
     expect(() => partVolume(part({ kind: "point" }))).toThrow('part.mass.kind must be "material" (a given mass has no volume here) (got "given")');
+    expect(thrown(() => partVolume(part({ kind: "disk", radius: 0.05 }))).unit).toBe("");
+  });
+});
+
+describe("the helpers behind the layout's mass properties name what they refuse", () => {
+  it("a part's own inertia: a negative mass in kg, a bad shape as the part's, an overflow by the mass", () => {
+    expect(thrown(() => ownInertiaOf({ kind: "disk", radius: 0.05 }, -1)).message).toBe("m must be 0 kg or more (got -1 kg)");
+    expect(thrown(() => ownInertiaOf({ kind: "disk", radius: -0.05 }, 1)).param).toBe("part.shape.radius");
+    // ½·m·R² = ½ × 10³⁰⁸ kg × (2 m)² = 2 × 10³⁰⁸ kg·m², past the largest double (1.8 × 10³⁰⁸).
+    expect(thrown(() => ownInertiaOf({ kind: "disk", radius: 2 }, 1e308)).message).toBe(
+      "m must be small enough for the own inertia to stay finite (got 1e+308 kg)",
+    );
+  });
+
+  it("a direction: each component of the vector by its name, with no unit (any plan vector)", () => {
+    const vx = thrown(() => directionOf(Number.NaN, 1));
+    expect([vx.param, vx.unit]).toEqual(["vx", ""]);
+    const vy = thrown(() => directionOf(1, Number.POSITIVE_INFINITY));
+    expect([vy.param, vy.unit]).toEqual(["vy", ""]);
+  });
+
+  it("a direction along +x is 0, never −0, and along −x π, never −π", () => {
+    // atan2(−0, 1) = −0 and atan2(−0, −1) = −π (IEEE 754 atan2 of a signed zero).
+    expect(Object.is(directionOf(1, -0), 0)).toBe(true);
+    expect(directionOf(-1, -0)).toBe(Math.PI);
   });
 });
