@@ -117,7 +117,7 @@ describe("checkPart names the field it refuses", () => {
   });
 });
 
-describe("the helpers behind the layout's mass properties name what they refuse", () => {
+describe("the functions behind the layout's mass properties name what they refuse", () => {
   it("a part's own inertia: a negative mass in kg, a bad shape as the part's, an overflow by the mass", () => {
     expect(thrown(() => ownInertiaOf({ kind: "disk", radius: 0.05 }, -1)).message).toBe("m must be 0 kg or more (got -1 kg)");
     expect(thrown(() => ownInertiaOf({ kind: "disk", radius: -0.05 }, 1)).param).toBe("part.shape.radius");

@@ -23,8 +23,8 @@ function refusal(run: () => unknown): CalcInputError {
   throw new Error("expected a refusal");
 }
 
-describe("refusals of the list helpers", () => {
-  it("names the index it refuses and the range it takes, whatever the helper", () => {
+describe("refusals of the list editing functions", () => {
+  it("names the index it refuses and the range it takes, whatever the edit", () => {
     expect(refusal(() => removePart(list, 3)).message).toBe("index must be a whole number from 0 to 2 (got 3)");
     expect(refusal(() => duplicatePart(list, -1)).message).toBe("index must be a whole number from 0 to 2 (got -1)");
     expect(refusal(() => mirrorPartInList(list, 1.5, "x")).message).toBe("index must be a whole number from 0 to 2 (got 1.5)");
