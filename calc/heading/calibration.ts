@@ -69,6 +69,7 @@ export function fitCalibration(
   if (!Array.isArray(rows)) throw new CalcInputError({ param: "rows", value: String(rows), expected: "a list of readings", unit: "" });
   rows.forEach((row, i) => {
     requireNonNegative(`rows[${i}].angularSpeed`, row?.angularSpeed, "rad/s");
+    // Stryker disable next-line OptionalChaining: equivalent, a missing row is refused on the line above, by its angularSpeed
     requireFinite(`rows[${i}].acceleration`, row?.acceleration, "m/s²");
   });
   requireDeclared(calibrationFitInputs.confidence, "confidence", confidence);
