@@ -231,6 +231,15 @@ describe("speedRangeWithinBudget", () => {
     expect(range.high!).toBeCloseTo(2 + Math.sqrt(7.5), 12);
   });
 
+  it("keeps standstill in the range when the offset's drift there is exactly the budget: b = 5.445 m/s², D = 3.3 rad/s", () => {
+    // β = 5.445/0.5 = 10.89 = 3.3², so at ω → 0 the drift √β = D exactly (the budget is a closed bound);
+    // top: √(1.25ω² + 10.89) = ω + 3.3 ⇒ 0.25ω² − 6.6ω = 0 ⇒ ω = 26.4 rad/s.
+    const range = speedRangeWithinBudget({ ...GAIN, bias: 5.445, budget: 3.3 });
+    expect(range.low).toBe(0);
+    expect(range.lowLimit).toBe("standstill");
+    expect(range.high!).toBeCloseTo(26.4, 12);
+  });
+
   it("is 1 to 3 rad/s with an offset left in: b = 0.5 m/s², D = 0.5 rad/s", () => {
     // β = 0.5/0.5 = 1: √(1.25ω² + 1) = ω + 0.5 ⇒ 0.25ω² − ω + 0.75 = 0 ⇒ ω² − 4ω + 3 = 0 ⇒ ω = 1 or 3.
     const range = speedRangeWithinBudget({ ...GAIN, bias: 0.5, budget: 0.5 });
