@@ -100,8 +100,9 @@ export function radiusMismatchExample(input: {
     speedRatio: Math.sqrt(trueRadius / assumedRadius),
     rows,
     bandAtTopSpeed: band,
-    // Half-width of the band relative to r: (r̂_high − r̂_low) / 2 / r (spinner-heading-practice).
-    bandHalfWidthFraction: band.low === null || band.high === null ? null : (band.high - band.low) / 2 / trueRadius,
+    // Half-width of the band relative to r: (r̂_high − r̂_low) / 2 / r (spinner-heading-practice). A band with a
+    // high end has a low end too (only "no-estimate" leaves the low end out, and it leaves out both).
+    bandHalfWidthFraction: band.high === null ? null : (band.high - band.low!) / 2 / trueRadius,
     budget,
   };
 }
