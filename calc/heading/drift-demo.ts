@@ -68,6 +68,9 @@ export function radiusMismatchExample(input: {
   const rows = speedsRpm.map((rpm, i) => {
     requirePositive(`speedsRpm[${i}]`, rpm, "rpm");
     const point = headingDriftAt({ ...model, angularSpeed: rpmToRadPerSecond(rpm) });
+    // With no offset the reading is ω²r, 0 only where ω² underflows (below about 1e−161 rpm): no estimate, no drift.
+    if (!point.defined)
+      throw new CalcInputError({ param: `speedsRpm[${i}]`, value: rpm, expected: "large enough for the centripetal reading to be above 0", unit: "rpm" });
     const driftRate = point.driftRate!;
     const driftPerRevolution = point.driftPerRevolution!;
     // A drift too large to show in degrees is refused in the caller's words: by the radius that took it there.

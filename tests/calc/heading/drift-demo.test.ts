@@ -41,6 +41,14 @@ describe("radiusMismatchExample", () => {
     expect(error.expected).toBe("a list");
   });
 
+  it("refuses a speed so small that its square underflows (1e−162 rpm: ω² ≈ 1e−326 rad²/s², below the smallest double), rather than show a drift of 0°", () => {
+    const error = refusal(() => radiusMismatchExample({ assumedRadius: 0.012, trueRadius: 0.0127, speedsRpm: [1200, 1e-162] }));
+    expect(error.param).toBe("speedsRpm[1]");
+    expect(error.value).toBe(1e-162);
+    expect(error.unit).toBe("rpm");
+    expect(error.message).toBe("speedsRpm[1] must be large enough for the centripetal reading to be above 0 (got 1e-162 rpm)");
+  });
+
   it("refuses a speed that is not positive in rpm, naming its place in the list", () => {
     const error = refusal(() => radiusMismatchExample({ assumedRadius: 0.012, trueRadius: 0.0127, speedsRpm: [1200, -5] }));
     expect(error.param).toBe("speedsRpm[1]");
