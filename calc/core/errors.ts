@@ -15,6 +15,11 @@ function describeValue(value: unknown): string {
     const shown = value.length > 40 ? `${value.slice(0, 40)}…` : value;
     return `"${shown}"`;
   }
+  // What a person can read, not a program's leftovers ("[object Object]", an array's items run together).
+  if (value === undefined) return "nothing";
+  if (Array.isArray(value)) return `a list of ${value.length}`;
+  if (typeof value === "function") return "a function";
+  if (typeof value === "object" && value !== null) return "an object";
   return String(value);
 }
 

@@ -323,6 +323,11 @@ export function kindName(kind: QuantityKind): string {
   return KIND_WORDS[kind] ?? kind;
 }
 
+/** "a length", "an acceleration": every kind's name starts with a consonant sound or a vowel letter. */
+function withArticle(words: string): string {
+  return `${/^[aeiou]/i.test(words) ? "an" : "a"} ${words}`;
+}
+
 /**
  * Reads what a user typed for a field of `kind`. A bare number takes `defaultUnit`; a decimal
  * comma is accepted ("1,8 in"). "350 g" is a mass in a mass field and 350 standard gravities in
@@ -362,7 +367,7 @@ export function parseQuantity(text: string, kind: QuantityKind, defaultUnit: Uni
         ok: false,
         reason: "unknown-unit",
         message: known.length
-          ? `has a unit "${shown}" that is not a ${kindName(kind)} unit; use ${known.join(", ")}`
+          ? `has a unit "${shown}" that is not ${withArticle(kindName(kind))} unit; use ${known.join(", ")}`
           : `takes a plain number, without a unit (got "${shown}")`,
       };
     }

@@ -66,7 +66,7 @@ export function fitCalibration(
   options: { confidence?: number; spikeThreshold?: number; huberTuning?: number } = {},
 ): CalibrationFit {
   const { confidence = 0.95, spikeThreshold = 3.5, huberTuning = 1.345 } = requireInputObject(options, "options");
-  if (!Array.isArray(rows)) throw new CalcInputError({ param: "rows", value: String(rows), expected: "a list of readings", unit: "" });
+  if (!Array.isArray(rows)) throw new CalcInputError({ param: "rows", value: rows, expected: "a list of readings", unit: "" });
   rows.forEach((row, i) => {
     requireNonNegative(`rows[${i}].angularSpeed`, row?.angularSpeed, "rad/s");
     // Stryker disable next-line OptionalChaining: equivalent, a missing row is refused on the line above, by its angularSpeed

@@ -48,16 +48,7 @@ export function radiusTrim(input: RadiusTrimInput): RadiusTrim {
   const driftPerRevolution = sense === "ahead" ? size : -size;
   // q = ω̂/ω = 1 + X/2π: the heading moves 2π·q in one true turn (spinner-heading-practice).
   const speedRatio = 1 + driftPerRevolution / TURN;
-  // Stryker disable BlockStatement,ConditionalExpression,EqualityOperator,ObjectLiteral,StringLiteral: equivalent, the guard cannot fire (the drift per turn is at most half a turn, refused above, so q = 1 + X/2π is at least 1/2)
-  if (!(speedRatio > 0)) {
-    throw new CalcInputError({
-      param: measure === "turn" ? "driftPerTurn" : "driftRate",
-      value: measure === "turn" ? driftPerTurn : driftRate,
-      expected: "less than a full turn behind per turn (no radius cancels a heading that stands still or runs backwards)",
-      unit: measure === "turn" ? "rad" : "rad/s",
-    });
-  }
-  // Stryker restore BlockStatement,ConditionalExpression,EqualityOperator,ObjectLiteral,StringLiteral
+  // Half a turn per turn at most (refused above), so q is at least 1/2 and the radius below is positive.
   // r̂′ = r̂·q²: at a fixed reading ω̂ ∝ r̂^(−1/2) (spinner-heading-practice).
   const radius = assumedRadius * speedRatio * speedRatio;
   return { driftPerRevolution, speedRatio, radius, change: radius - assumedRadius };

@@ -164,6 +164,13 @@ describe("units: reading what a user typed", () => {
     const result = parseQuantity("3 kg", "length", "mm");
     expect(result).toMatchObject({ ok: false, reason: "unknown-unit" });
     if (!result.ok) expect(result.message).toBe('has a unit "kg" that is not a length unit; use m, cm, mm, in, ft');
+    // An article that fits the kind's name: "an acceleration", "an angular acceleration".
+    expect(parseQuantity("3 kg", "acceleration", "g")).toMatchObject({
+      message: expect.stringMatching(/^has a unit "kg" that is not an acceleration unit; use /),
+    });
+    expect(parseQuantity("3 kg", "angularAcceleration", "rad/s2")).toMatchObject({
+      message: expect.stringMatching(/^has a unit "kg" that is not an angular acceleration unit; use /),
+    });
   });
 
   it("takes only real spellings of a unit, never a name from the code (a constant's name once stood among rpm's aliases)", () => {
