@@ -243,7 +243,8 @@ export function twoPlaneCorrection(input: {
   const span = z1 - z2;
   const place = (vx: number, vy: number, z: number): CorrectionMass => {
     const unbalance = Math.hypot(vx, vy);
-    const angle = unbalance > 0 ? directionOf(vx, vy) : 0;
+    // A vector past the doubles has no direction: the finiteness guard below names the input instead.
+    const angle = unbalance > 0 && Number.isFinite(unbalance) ? directionOf(vx, vy) : 0;
     return { mass: unbalance / radius, angle, x: radius * Math.cos(angle), y: radius * Math.sin(angle), z, unbalance };
   };
   return requireFiniteFields(
@@ -255,7 +256,8 @@ export function twoPlaneCorrection(input: {
       firstMomentY: [uy, "kg·m"],
       productXZ: [cx, "kg·m²"],
       productYZ: [cy, "kg·m²"],
-      planeZ2: [z2 - z1, "m"],
+      planeZ1: [z1, "m"],
+      planeZ2: [z2, "m"],
     },
   );
 }
