@@ -12,7 +12,17 @@ import {
   staticUnbalance,
   twoPlaneCorrection,
 } from "../../calc/mass/balance.ts";
-import { checkPart, MAX_NAME_LENGTH, MAX_PART_MASS, partMass, partOwnInertia, partVolume, type LayoutPart, type PartShape } from "../../calc/mass/parts.ts";
+import {
+  checkPart,
+  MAX_NAME_LENGTH,
+  MAX_PART_MASS,
+  MAX_PARTS,
+  partMass,
+  partOwnInertia,
+  partVolume,
+  type LayoutPart,
+  type PartShape,
+} from "../../calc/mass/parts.ts";
 import { counterweightPlan, massBalance, massBalanceInputs, type MassBalanceScalars } from "../../calc/mass/mass-balance.ts";
 import { demoRobotBalance, demoRobotParts, MASS_BALANCE_SOURCE_KEYS } from "../../calc/mass/demo.ts";
 import { encodeLayout, parseLayout } from "../../calc/mass/layout-text.ts";
@@ -1228,6 +1238,154 @@ describe("the counterweight the calculator applies (counterweightPlan)", () => {
         },
       ),
       { numRuns: 150 },
+    );
+  });
+});
+
+describe("the mass-and-balance calculator and its counterweight at their edges", () => {
+  /** The CalcInputError `run` throws (fails the test when it returns or throws anything else). */
+  function refusal(run: () => unknown): CalcInputError {
+    try {
+      run();
+    } catch (error) {
+      if (error instanceof CalcInputError) return error;
+      throw error;
+    }
+    throw new Error("expected a refusal, got a result");
+  }
+  function expectRefusal(run: () => unknown, param: string, value: unknown, unit: string, message: string): void {
+    const error = refusal(run);
+    expect({ param: error.param, value: error.value, unit: error.unit }).toEqual({ param, value, unit });
+    expect(error.message).toBe(message);
+  }
+  // A pure couple: 10 g at (50 mm, 0, 10 mm) and 10 g at (−50 mm, 0, −10 mm) on a 1.5 kg disk, I_xz = 1e-5 kg·m².
+  const couplePair = [given({ kind: "disk", radius: 0.06 }, 1.5), point(0.01, 0.05, 0, 0.01), point(0.01, -0.05, 0, -0.01)];
+  const planFor = (input: Parameters<typeof massBalance>[0], mode: "radius" | "mass" | "points") =>
+    counterweightPlan({ input, balance: massBalance(input), mode });
+
+  it("counts an offset exactly on the target as within it (centre-of-mass: e ≤ e_target)", () => {
+    const r = massBalance({ ...DEFAULTS, parts: [point(1, 0.0002, 0)], targetOffset: 0.0002 });
+    expect([r.layout.offset, r.offsetShareOfTarget, r.offsetVerdict, r.fix.method]).toEqual([0.0002, 1, "within-target", "none"]);
+  });
+
+  it("refuses two planes at one height in the two-plane correction's words, not as an overflow of the couple per plane", () => {
+    expectRefusal(
+      () => massBalance({ ...DEFAULTS, parts: couplePair, planeZ1: 0.01, planeZ2: 0.01 }),
+      "planeZ2",
+      0.01,
+      "m",
+      "planeZ2 must be a height different from the other plane (0.01 m) (got 0.01 m)",
+    );
+  });
+
+  it("names the upper plane, in m, when the planes are so close that the couple per plane passes the largest double", () => {
+    // C/b = 1e-5 kg·m² / 1e-315 m = 1e310 kg·m, past the largest double (about 1.8e308).
+    expectRefusal(
+      () => massBalance({ ...DEFAULTS, parts: couplePair, planeZ1: 0, planeZ2: 1e-315 }),
+      "planeZ2",
+      1e-315,
+      "m",
+      "planeZ2 must be far enough from the lower plane that the couple per plane stays finite (got 1e-315 m)",
+    );
+  });
+
+  it("names the target offset, in m, when e/e_target passes the largest double", () => {
+    // e/e_t = 1.738 mm / 1e-315 m = 1.7e312.
+    expectRefusal(
+      () => massBalance({ ...DEFAULTS, parts: demoRobotParts(), targetOffset: 1e-315 }),
+      "targetOffset",
+      1e-315,
+      "m",
+      "targetOffset must be large enough that the offset as a share of it stays finite (got 1e-315 m)",
+    );
+  });
+
+  it("adds a counterweight of exactly the 10 000 kg part limit, and none heavier", () => {
+    // M = 10 000 kg at e = 66.40625 mm, e_t = 1.953125 mm, r = 62.5 mm (binary fractions, so exact):
+    // m = M(e − e_t)/(r + e_t) = 10 000 × 64.453125 / 64.453125 = 10 000 kg, which is MAX_PART_MASS.
+    const input = { ...DEFAULTS, parts: [point(MAX_PART_MASS, 0.06640625, 0)], targetOffset: 0.001953125, correctionRadius: 0.0625 };
+    const r = massBalance(input);
+    expect(r.counterweight.atRadius.mass).toBe(MAX_PART_MASS);
+    expect(r.fix.method).toBe("correction-radius");
+    // (10 000 × 66.40625 − 10 000 × 62.5)/20 000 = 1.953125 mm: on the target.
+    expect(r.fix.after.offset).toBeCloseTo(0.001953125, 15);
+    const plan = planFor(input, "radius");
+    expect(plan.status).toBe("apply");
+    expect(plan.counterweight!.mass).toBe(MAX_PART_MASS);
+    // 100 kg half a metre off the axis, brought within 1 µm by a weight 1 µm from it: about 50 t.
+    const lopsided = { ...DEFAULTS, parts: [point(100, 0.5, 0, 0, "heavy"), point(1, -0.5, 0, 0, "light")], correctionRadius: 1e-6, targetOffset: 1e-6 };
+    expect(planFor(lopsided, "radius")).toEqual({ status: "none", counterweight: null, after: null });
+  });
+
+  it(`leaves a list of ${MAX_PARTS} parts as it is: there is no room for a counterweight row`, () => {
+    // 200 parts of 10 g, one of them 50 mm out: e = 0.5 g·m / 2 kg = 0.25 mm, outside the 0.2 mm target.
+    const parts = Array.from({ length: MAX_PARTS }, (_, i) => point(0.01, i === 0 ? 0.05 : 0, 0, 0, `p${i}`));
+    const input = { ...DEFAULTS, parts };
+    const r = massBalance(input);
+    expect(r.layout.offset).toBeCloseTo(0.00025, 15);
+    expect(r.offsetVerdict).toBe("outside-target");
+    expect(r.fix.method).toBe("none");
+    expect(r.fix.parts).toHaveLength(MAX_PARTS);
+    expect(planFor(input, "radius").status).toBe("none");
+  });
+
+  it("rounds a least mass of 485.15 g up to 486 g, not to the nearest 485 g, which would leave the offset outside the target", () => {
+    // m = M(e − e_t)/(r + e_t) = 1 kg × 9.8 mm / 20.2 mm = 0.485149 kg.
+    const input = { ...DEFAULTS, parts: [point(1, 0.01, 0)], targetOffset: 0.0002, correctionRadius: 0.02 };
+    const plan = planFor(input, "radius");
+    expect(plan.counterweight!.mass).toBe(0.486);
+    // e' = (M e − m r)/(M + m) = (0.01 − 0.486 × 0.02)/1.486 = 0.18843 mm.
+    expect(plan.after!.offset).toBeCloseTo(0.00028 / 1.486, 15);
+  });
+
+  it("keeps a least mass that already has three figures, 0.5 kg, instead of rounding it up to 0.501 kg", () => {
+    // m = M(e − e_t)/(r + e_t) = (0.015625 − 0.001953125)/(0.025390625 + 0.001953125) = 0.013671875/0.02734375 = 0.5 kg.
+    const input = { ...DEFAULTS, parts: [point(1, 0.015625, 0)], targetOffset: 0.001953125, correctionRadius: 0.025390625 };
+    const plan = planFor(input, "radius");
+    expect(plan.counterweight!.mass).toBe(0.5);
+    // e' = (0.015625 − 0.5 × 0.025390625)/1.5 = 0.001953125 m: exactly on the target.
+    expect(plan.after!.offset).toBeCloseTo(0.001953125, 15);
+  });
+
+  it("takes a rounded-up mass that lands exactly on the far edge of the workable band", () => {
+    // u = 2⁻²⁰ m (about 0.95 µm) as the target, e = 31.25 mm − 1.5u, r = 62.5 mm: the band runs from
+    // m_min = (e − u)/(r + u) = 0.49996 kg to m_max = (e + u)/(r − u) = (31.25 mm − 0.5u)/(62.5 mm − u) = 0.5 kg,
+    // so rounding up to 3 figures gives 0.5 kg, whose offset |e − 0.5 r|/1.5 = 1.5u/1.5 = u is the target itself.
+    const u = 2 ** -20;
+    const input = { ...DEFAULTS, parts: [point(1, 0.03125 - 1.5 * u, 0)], targetOffset: u, correctionRadius: 0.0625 };
+    const plan = planFor(input, "radius");
+    expect(plan.counterweight!.mass).toBe(0.5);
+    expect(plan.after!.offset).toBe(u);
+  });
+
+  it("puts a weight in hand of 45.67 g at its radius as given, not rounded to three figures", () => {
+    // r₀ = M e / m = 1.4 kg × 2 mm / 45.67 g = 61.31 mm, inside the 65 mm maximum.
+    const plan = planFor({ ...DEFAULTS, parts: [point(1.4, 0.002, 0)], counterweightMass: 0.04567 }, "mass");
+    expect(plan.status).toBe("apply");
+    expect(plan.counterweight!.mass).toBe(0.04567);
+    expect(plan.counterweight!.radius).toBeCloseTo(0.0028 / 0.04567, 15);
+  });
+
+  it("names the request, its input or its balance that is not an object, and parts that are not a list", () => {
+    const input = { ...DEFAULTS, parts: demoRobotParts() };
+    const balance = massBalance(input);
+    const plan = counterweightPlan as (request: unknown) => unknown;
+    expectRefusal(() => plan(null), "request", null, "", "request must be an object of named inputs (got null)");
+    expectRefusal(() => plan({ input: null, balance, mode: "radius" }), "input", null, "", "input must be an object of named inputs (got null)");
+    expectRefusal(() => plan({ input, balance: null, mode: "radius" }), "balance", null, "", "balance must be an object of named inputs (got null)");
+    expectRefusal(() => plan({ input: { ...input, parts: "hub" }, balance, mode: "radius" }), "parts", "hub", "", 'parts must be a list (got "hub")');
+  });
+
+  it("names the spin speed of the input it is given, in the calculator's words, when the grip radius would pass the largest double", () => {
+    // d_g = μ s g/Ω² = 0.8 × 0.9 × 9.80665 / (1e-160)² = 7.1e320 m.
+    const input = { ...DEFAULTS, parts: demoRobotParts() };
+    const balance = massBalance(input);
+    expectRefusal(
+      () => counterweightPlan({ input: { ...input, spinSpeed: 1e-160 }, balance, mode: "radius" }),
+      "spinSpeed",
+      1e-160,
+      "rad/s",
+      "spinSpeed must be large enough that the grip radius μ·s·g/Ω² stays finite (got 1e-160 rad/s)",
     );
   });
 });
