@@ -147,6 +147,7 @@ export function counterweightRadiusForMass(input: CentreInput & { mass: number; 
   const e = checkCentre(requireInputObject(input));
   const { totalMass, centreX, centreY, targetOffset, mass, maxRadius } = requireInputObject(input);
   requirePositive("mass", mass, "kg");
+  // Stryker disable next-line BooleanLiteral: equivalent, requirePositive just above already refuses 0
   requireInRange("mass", mass, "kg", { min: 0, max: MAX_PART_MASS, minOpen: true });
   requireLength("maxRadius", maxRadius);
   const angle = e > 0 ? directionOf(-centreX, -centreY) : 0;
