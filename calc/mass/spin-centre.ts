@@ -101,7 +101,9 @@ export function spinCentre(input: { centreX: number; centreY: number; angularSpe
       centreY: cy,
       distanceFromWheels: Math.hypot(cx, cy),
     },
+    // Stryker disable next-line StringLiteral: equivalent, never reached: the grip radius is guarded above, and the offset, the scale (0 to 1) and the centre it gives stay finite
     "spin centre",
+    // Stryker disable next-line ObjectLiteral,ArrayDeclaration,StringLiteral: equivalent, never reached (see the line above)
     { angularSpeed: [angularSpeed, "rad/s"], sideGrip: [sideGrip, ""], gripShare: [gripShare, ""] },
   );
 }

@@ -292,3 +292,43 @@ describe("the quick balance's verdict at its edges (iso-21940-11: holds when U �
     );
   });
 });
+
+describe("the quick balance's refusals as the page words them", () => {
+  function refusal(run: () => unknown): CalcInputError {
+    try {
+      run();
+    } catch (error) {
+      if (error instanceof CalcInputError) return error;
+      throw error;
+    }
+    throw new Error("expected a refusal, got a result");
+  }
+
+  it("lists the grade numbers of iso-21940-11 Table 1, in mm/s, for a grade that is not one of them", () => {
+    const e = refusal(() => quickBalance({ ...base, grade: "5" }));
+    expect([e.param, e.value, e.unit]).toEqual(["grade", "5", "mm/s"]);
+    expect(e.message).toBe('grade must be one of 0.4, 1, 2.5, 6.3, 16, 40, 100, 250, 630, 1600, 4000 (got "5")');
+  });
+
+  it("lists the choices of limit and change, with no unit", () => {
+    const limit = refusal(() => quickBalance({ ...base, limit: "torque" as never }));
+    expect([limit.param, limit.value, limit.unit, limit.message]).toEqual(["limit", "torque", "", 'limit must be one of grade, force (got "torque")']);
+    const change = refusal(() => quickBalance({ ...base, change: "removed" as never }));
+    expect([change.param, change.value, change.unit, change.message]).toEqual(["change", "removed", "", 'change must be one of added, moved (got "removed")']);
+  });
+
+  it("names a wobble force that allows no offset at all at the top speed, in N", () => {
+    // U_per = F/Ω² = 5e-324 N / 6000² underflows to 0 kg·m: no part would be allowed.
+    const e = refusal(() => quickBalance({ ...base, limit: "force", wobbleForce: 5e-324, spinSpeed: 6000 }));
+    expect([e.param, e.value, e.unit]).toEqual(["wobbleForce", 5e-324, "N"]);
+    expect(e.message).toBe("wobbleForce must be large enough to allow some offset at this spin speed (got 5e-324 N)");
+  });
+
+  it("names a wobble force so small that U/U_per passes the largest double, in N", () => {
+    // At the slowest speed, Ω = 0.1 rad/s: U_per = 5e-324 N / 0.01 = 4.9e-322 kg·m, still above 0, but
+    // U/U_per = (0.012 kg × 0.045 m) / 4.9e-322 kg·m = 1.1e318, past the largest double (about 1.8e308).
+    const e = refusal(() => quickBalance({ ...base, limit: "force", wobbleForce: 5e-324, spinSpeed: 0.1 }));
+    expect([e.param, e.value, e.unit]).toEqual(["wobbleForce", 5e-324, "N"]);
+    expect(e.message).toBe("wobbleForce must be a limit large enough that U/U_per stays finite (got 5e-324 N)");
+  });
+});

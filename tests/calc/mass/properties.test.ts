@@ -79,6 +79,21 @@ describe("mass properties at the edges", () => {
     expect(q.parts[1]!.massFraction).toBeCloseTo(2 / 3, 15);
   });
 
+  it("gives both first moments of masses near the smallest doubles back in kg·m, scaled down again", () => {
+    // One part of 1e-160 kg at (100, 200) mm: Σ m x = 1e-161 kg·m and Σ m y = 2e-161 kg·m.
+    const q = massProperties([point("a", 1e-160, 0.1, 0.2, 0)]);
+    expect(q.firstMomentX / 1e-161).toBeCloseTo(1, 12);
+    expect(q.firstMomentY / 2e-161).toBeCloseTo(1, 12);
+  });
+
+  it("gives products of exactly 0 for point masses all at one height, wherever they sit in plan", () => {
+    // All at z = 0.5 m: z̄ = Σ m z / M = 0.5 m exactly, so every z − z̄ is 0 and no couple is left, not
+    // even a rounding residue (x̄ = 0.1/3 m is not exact, so Σ m (x − x̄) is not exactly 0).
+    const p = massProperties([point("a", 1, 0, 0, 0.5), point("b", 1, 0, 0.03, 0.5), point("c", 1, 0.1, 0, 0.5)]);
+    expect(p.centreZ).toBe(0.5);
+    expect([p.productXZ, p.productYZ]).toEqual([0, 0]);
+  });
+
   it(`takes up to ${MAX_PARTS} parts and refuses an empty list or one more`, () => {
     const many = Array.from({ length: MAX_PARTS }, (_, i) => point(`p${i}`, 0.01, 0.001 * i, 0, 0));
     expect(massProperties(many).parts).toHaveLength(MAX_PARTS);

@@ -144,6 +144,21 @@ describe("coupleLift: reference checks", () => {
     expect(thrown(() => coupleLift({ couple: 1, totalMass: 0, supportRadius: 0.05, angularSpeed: 1 })).param).toBe("totalMass");
     expect(thrown(() => coupleLift({ couple: 1, totalMass: 1, supportRadius: -1, angularSpeed: 1 })).param).toBe("supportRadius");
   });
+
+  it("names the couple, the mass or the support radius that takes a moment past the largest double, with its value and unit", () => {
+    // Ω²·C = 1000² × 1e305 = 1e311 N·m; M·g·a = 1e308 × 9.80665 × 2 = 2.0e309 N·m and
+    // 1.4 × 9.80665 × 1e308 = 1.4e309 N·m: each past the largest double (about 1.8e308).
+    const cases = [
+      [{ couple: 1e305, totalMass: 1.4, supportRadius: 0.07, angularSpeed: 1000 }, "couple", 1e305, "kg·m²", "1e+305"],
+      [{ couple: 1e-5, totalMass: 1e308, supportRadius: 2, angularSpeed: RPM_2400 }, "totalMass", 1e308, "kg", "1e+308"],
+      [{ couple: 1e-5, totalMass: 1.4, supportRadius: 1e308, angularSpeed: RPM_2400 }, "supportRadius", 1e308, "m", "1e+308"],
+    ] as const;
+    for (const [input, param, value, unit, shown] of cases) {
+      const e = thrown(() => coupleLift(input));
+      expect([e.param, e.value, e.unit]).toEqual([param, value, unit]);
+      expect(e.message).toBe(`${param} must be small enough for the couple lift to stay finite (got ${shown} ${unit})`);
+    }
+  });
 });
 
 describe("regression pins from the engineering review (our own digits)", () => {
