@@ -63,6 +63,16 @@ function clip(text: string): string {
 }
 
 /**
+ * A number of the text form in SI; +∞ for one written as a number that passes the largest double
+ * (it still reads once its exponent is cut off), null for anything else.
+ */
+function readNumber(text: string, factor: number): number | null {
+  const value = readExactNumber(text, factor);
+  if (value !== null || readExactNumber(text.replace(/e\+?\d+/i, ""), 1) === null) return value;
+  return Number.POSITIVE_INFINITY;
+}
+
+/**
  * Reads the text form written by `encodeCalibrationRows`. Never throws: pieces that cannot be read
  * are skipped and each is reported with its position and the reason.
  *
@@ -116,8 +126,8 @@ export function decodeCalibrationRows(text: string): DecodedCalibrationRows {
       return;
     }
     const [speedText, accText] = parts as [string, string];
-    const angularSpeed = readExactNumber(speedText, RAD_PER_S_PER_RPM);
-    const acceleration = readExactNumber(accText, STANDARD_GRAVITY);
+    const angularSpeed = readNumber(speedText, RAD_PER_S_PER_RPM);
+    const acceleration = readNumber(accText, STANDARD_GRAVITY);
     if (angularSpeed === null) {
       problems.push({ piece: at, text: clip(piece), reason: `speed "${clip(speedText)}" is not a number` });
       return;
