@@ -3,7 +3,7 @@
  * grade, couple, counterweight and sensor radius at once) and the counterweight it offers to add,
  * with the figures after it.
  */
-import { CalcInputError, requireInRange } from "../core/errors.ts";
+import { CalcInputError } from "../core/errors.ts";
 
 import {
   type BalanceGrade,
@@ -128,8 +128,6 @@ export function massBalance(input: MassBalanceInput): MassBalance {
   const layout = massProperties(parts);
   const stat = staticUnbalance({ totalMass: layout.totalMass, offset: layout.offset, angularSpeed: spinSpeed });
   const equivalentGrade = equivalentBalanceGrade({ offset: layout.offset, angularSpeed: spinSpeed });
-  // Stryker disable next-line StringLiteral: equivalent, requireWithinSpecs above already holds balanceGrade to this declared range, so this refusal is never reached
-  requireInRange("balanceGrade", balanceGrade, "m/s", { min: 0.0004, max: 4 });
   const permissible = permissibleResidualUnbalance({ totalMass: layout.totalMass, grade: balanceGrade, angularSpeed: spinSpeed });
   const centre = { totalMass: layout.totalMass, centreX: layout.centreX, centreY: layout.centreY, targetOffset };
   const atRadius = counterweightAtRadius({ ...centre, radius: correctionRadius });
