@@ -57,6 +57,7 @@ const MOTION_AXIS: Record<RobotMotion, Vector> = {
 };
 
 function cross(a: Vector, b: Vector): Vector {
+  // Stryker disable next-line ArithmeticOperator: equivalent, a is always a spin axis (along y or z), so a[0] = 0 and the term a[0]·b[2] is 0
   return [a[1] * b[2] - a[2] * b[1], a[2] * b[0] - a[0] * b[2], a[0] * b[1] - a[1] * b[0]];
 }
 
@@ -73,6 +74,7 @@ export function spinAxis(axle: AxleOrientation, spin: string): Vector {
 function motionOf(v: Vector): RobotMotion | null {
   for (const option of ROBOT_MOTION_OPTIONS) {
     const axis = MOTION_AXIS[option.value];
+    // Stryker disable next-line EqualityOperator: equivalent, v is a unit axis or zero, so the dot product is exactly -1, 0 or 1, never 0.5
     if (axis[0] * v[0] + axis[1] * v[1] + axis[2] * v[2] > 0.5) return option.value;
   }
   return null;

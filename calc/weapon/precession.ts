@@ -55,8 +55,8 @@ export function precessionTime(input: { angle: number; moment: number; inertia: 
   requirePositive("moment", moment, "N·m");
   const rate = precessionRate({ moment, inertia, spinSpeed });
   const named = { angle: [angle, "rad"], moment: [moment, "N·m"], inertia: [inertia, "kg·m²"], spinSpeed: [spinSpeed, "rad/s"] } as const;
-  // An underflowed rate (0) is a precession too slow to represent: name the input that caused it.
-  return requireFiniteResult(rate === 0 ? Number.POSITIVE_INFINITY : angle / rate, "precession time", named);
+  // An underflowed rate (0) gives θ/0 = +∞ (θ > 0): a precession too slow to represent, refused naming the input that caused it.
+  return requireFiniteResult(angle / rate, "precession time", named);
 }
 
 // ---------------------------------------------------------------------------------------------
