@@ -206,6 +206,7 @@ export function liftTurnRate(input: {
   const comOffset = fields.comOffset ?? 0;
   requireComInsideTrack(comOffset, fields.trackWidth);
   if (perRate === 0) return { turn, liftTurnRate: null, side: null, wheel: null, rollMomentPerTurnRate: 0, restoringMoment: null };
+  // Stryker disable next-line EqualityOperator: equivalent, perRate is not 0 here (the line above returns for it)
   const side: Side = perRate > 0 ? "left" : "right";
   const restoringMoment = weightRestoringMoment({ robotMass: fields.robotMass, trackWidth: fields.trackWidth, comOffset, side });
   const rate = restoringMoment / Math.abs(perRate); // gillespie-vehicle-dynamics: lift when the roll moment reaches m·g·t/2
@@ -244,7 +245,8 @@ export function differentialDriveTurnRate(input: { leftWheelSpeed: number; right
   requirePositive("trackWidth", trackWidth, "m");
   const named = { leftWheelSpeed: [leftWheelSpeed, "m/s"], rightWheelSpeed: [rightWheelSpeed, "m/s"], trackWidth: [trackWidth, "m"] } as const;
   return {
-    forwardSpeed: requireFiniteResult(leftWheelSpeed / 2 + rightWheelSpeed / 2, "forward speed", named), // dudek-jenkin-mobile-robotics: v = (V_r + V_l)/2
+    // Halved before the sum, so it stays within the largest double for any finite wheel speeds.
+    forwardSpeed: leftWheelSpeed / 2 + rightWheelSpeed / 2, // dudek-jenkin-mobile-robotics: v = (V_r + V_l)/2
     turnRate: requireFiniteResult((rightWheelSpeed - leftWheelSpeed) / trackWidth, "turn rate", named), // dudek-jenkin-mobile-robotics: ω = (V_r − V_l)/l
   };
 }
