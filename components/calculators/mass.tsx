@@ -9,6 +9,7 @@ import { signal, useSignal } from "../calc-ui/reactive.ts";
 import { useEffect, useMemo } from "preact/hooks";
 import { BALANCE_GRADES, standardBalanceGrade } from "../../calc/mass/balance-grades.ts";
 import type { MirrorAxis } from "../../calc/mass/editing.ts";
+import { MAX_PARTS } from "../../calc/mass/parts.ts";
 import { formatNumber, formatQuantity, fromSI, type QuantityKind, type UnitId, type UnitSystem } from "../../calc/core/units.ts";
 import { QuantityField } from "../calc-ui/QuantityField.tsx";
 import { Toolbar } from "../calc-ui/Toolbar.tsx";
@@ -341,7 +342,9 @@ export default function MassLayoutCalculator({ id = massCalculator.anchor, layou
               Apply: add it to the parts list
             </button>
           </>
-        ) : within ? null : (
+        ) : within ? null : input.parts.length >= MAX_PARTS ? (
+          <p class="field-error">The parts list is full ({MAX_PARTS} parts): remove a part to make room for a counterweight.</p>
+        ) : (
           <p class="field-error">No counterweight of this kind reaches the target; try another radius, mass or point.</p>
         )}
       </>

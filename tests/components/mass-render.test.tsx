@@ -3,6 +3,7 @@ import { renderToString } from "preact-render-to-string";
 import MassLayoutCalculator from "../../components/calculators/mass.tsx";
 import { demoRobotParts } from "../../calc/mass/demo.ts";
 import { encodeLayout } from "../../calc/mass/layout-text.ts";
+import { MAX_PARTS } from "../../calc/mass/parts.ts";
 import * as arithmetic from "../../components/mass/compute.ts";
 import { startingResult } from "../../components/mass/model.ts";
 
@@ -40,5 +41,15 @@ describe("mass-layout calculator, server render (the path Astro islands take)", 
     const empty = renderToString(<MassLayoutCalculator id="mc" layout="v1" />);
     expect(empty).toContain("Add a part to see results.");
     expect(empty).not.toMatch(/NaN|Infinity/);
+  });
+
+  it("says the list is full, not that no counterweight reaches the target, when an off-centre layout already has the most parts", () => {
+    const demo = demoRobotParts();
+    // The demo's parts, then copies of its off-centre battery up to the limit: no room left for a counterweight.
+    const full = encodeLayout([...demo, ...Array.from({ length: MAX_PARTS - demo.length }, (_, i) => ({ ...demo[3]!, name: `copy ${i + 1}` }))]);
+    const page = renderToString(<MassLayoutCalculator id="mc" layout={full} initial={startingResult(full, arithmetic)} />);
+    expect(page).toContain(`The parts list is full (${MAX_PARTS} parts): remove a part to make room for a counterweight.`);
+    expect(page).not.toContain("No counterweight of this kind reaches the target");
+    expect(page).not.toContain("Apply: add it to the parts list");
   });
 });
