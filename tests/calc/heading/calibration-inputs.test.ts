@@ -4,19 +4,8 @@
  * fractional point count.
  */
 import { describe, expect, it } from "vitest";
-import { CalcInputError } from "../../../calc/core/errors.ts";
 import { calibrationCurve, type CurveLines } from "../../../calc/heading/calibration-inputs.ts";
-
-/** The refusal `run` throws: a CalcInputError (fails the test otherwise). */
-function refusal(run: () => unknown): CalcInputError {
-  try {
-    run();
-  } catch (error) {
-    expect(error).toBeInstanceOf(CalcInputError);
-    return error as CalcInputError;
-  }
-  throw new Error("expected a refusal");
-}
+import { refusal } from "../../support/refusal.ts";
 
 // Three different lines, each with an intercept, so that every one is read from its own fields.
 const FIT: CurveLines = {

@@ -4,20 +4,9 @@
  * read (a speed that is no number, a number past the largest double, a long piece clipped).
  */
 import { describe, expect, it } from "vitest";
-import { CalcInputError } from "../../../calc/core/errors.ts";
 import { CALIBRATION_ROWS_MAX, decodeCalibrationRows, encodeCalibrationRows } from "../../../calc/heading/calibration-rows.ts";
 import type { CalibrationRow } from "../../../calc/heading/calibration.ts";
-
-/** The refusal `run` throws: a CalcInputError (fails the test otherwise). */
-function refusal(run: () => unknown): CalcInputError {
-  try {
-    run();
-  } catch (error) {
-    expect(error).toBeInstanceOf(CalcInputError);
-    return error as CalcInputError;
-  }
-  throw new Error("expected a refusal");
-}
+import { refusal } from "../../support/refusal.ts";
 
 const ROW: CalibrationRow = { angularSpeed: 0, acceleration: 0 };
 

@@ -4,18 +4,8 @@
  * N = ω²r (the band's formula in calc/heading/drift.ts; centripetal a = ω²r, OpenStax College Physics ch. 6).
  */
 import { describe, expect, it } from "vitest";
-import { CalcInputError } from "../../../calc/core/errors.ts";
 import { radiusMismatchExample } from "../../../calc/heading/drift-demo.ts";
-
-function refusal(run: () => unknown): CalcInputError {
-  try {
-    run();
-  } catch (error) {
-    if (error instanceof CalcInputError) return error;
-    throw error;
-  }
-  throw new Error("expected a CalcInputError");
-}
+import { refusal } from "../../support/refusal.ts";
 
 describe("radiusMismatchExample", () => {
   it("has no band half-width when the budget is at least the top speed (60 rpm = 2π rad/s, budget 10 rad/s)", () => {

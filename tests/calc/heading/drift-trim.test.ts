@@ -3,21 +3,11 @@
  * wording, for a sense or a measure it does not know and for a timed drift past half a turn per turn.
  */
 import { describe, expect, it } from "vitest";
-import { CalcInputError } from "../../../calc/core/errors.ts";
 import { toSI } from "../../../calc/core/units.ts";
 import { radiusTrim, type RadiusTrimInput } from "../../../calc/heading/drift-trim.ts";
+import { refusal } from "../../support/refusal.ts";
 
 const BASE: RadiusTrimInput = { assumedRadius: 0.008, sense: "ahead", measure: "turn", driftPerTurn: toSI(20, "deg"), driftRate: 0, angularSpeed: 200 };
-
-function refusal(run: () => unknown): CalcInputError {
-  try {
-    run();
-  } catch (error) {
-    if (error instanceof CalcInputError) return error;
-    throw error;
-  }
-  throw new Error("expected a CalcInputError");
-}
 
 describe("radiusTrim refusals", () => {
   it("names a sense it does not know and lists the two it takes, with no unit", () => {

@@ -9,7 +9,6 @@
  * arithmetic beside it; the inputs are picked so that the arithmetic stays exact.
  */
 import { describe, expect, it } from "vitest";
-import { CalcInputError } from "../../../calc/core/errors.ts";
 import {
   type SpinRateErrorModel,
   assumedRadiusBand,
@@ -18,20 +17,10 @@ import {
   lowestEstimableSpeed,
   speedRangeWithinBudget,
 } from "../../../calc/heading/drift.ts";
+import { refusal } from "../../support/refusal.ts";
 
 /** An exact calibration on a 0.5 m radius (binary-exact figures). */
 const EXACT: SpinRateErrorModel = { assumedRadius: 0.5, trueRadius: 0.5, scaleError: 0, bias: 0, biasCorrection: 0, tilt: 0 };
-
-/** The refusal `run` throws (fails the test when it does not throw a CalcInputError). */
-function refusal(run: () => unknown): CalcInputError {
-  try {
-    run();
-  } catch (error) {
-    if (error instanceof CalcInputError) return error;
-    throw error;
-  }
-  throw new Error("expected a CalcInputError");
-}
 
 describe("headingDriftAt with every error term present", () => {
   // ω = 10 rad/s, r̂ = 16 mm, r = 20 mm, k = 0.25, θ = 60° (cos θ = 0.5), b = 0.5 m/s², b̂ = 0.25 m/s².

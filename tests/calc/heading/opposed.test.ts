@@ -4,19 +4,8 @@
  * cases, and the input a result past the largest double is blamed on.
  */
 import { describe, expect, it } from "vitest";
-import { CalcInputError } from "../../../calc/core/errors.ts";
 import { opposedSensorsCheck, opposedSensorsDrift } from "../../../calc/heading/opposed.ts";
-
-/** The refusal `run` throws: a CalcInputError (fails the test otherwise). */
-function refusal(run: () => unknown): CalcInputError {
-  try {
-    run();
-  } catch (error) {
-    expect(error).toBeInstanceOf(CalcInputError);
-    return error as CalcInputError;
-  }
-  throw new Error("expected a refusal");
-}
+import { refusal } from "../../support/refusal.ts";
 
 const NONE = { defined: false, estimate: null, driftRate: null, driftPerRevolution: null };
 

@@ -4,7 +4,6 @@
  * spacing and its option refusals, and the input a non-finite result is blamed on.
  */
 import { describe, expect, it } from "vitest";
-import { CalcInputError } from "../../../calc/core/errors.ts";
 import {
   emaRampLag,
   emaTimeConstant,
@@ -15,19 +14,9 @@ import {
   spikeRateError,
   type HeadingSmoothingInput,
 } from "../../../calc/heading/smoothing.ts";
+import { refusal } from "../../support/refusal.ts";
 
 const DEFAULTS = Object.fromEntries(Object.entries(headingSmoothingInputs).map(([k, v]) => [k, v.default])) as HeadingSmoothingInput;
-
-/** The refusal `run` throws: a CalcInputError (fails the test otherwise). */
-function refusal(run: () => unknown): CalcInputError {
-  try {
-    run();
-  } catch (error) {
-    expect(error).toBeInstanceOf(CalcInputError);
-    return error as CalcInputError;
-  }
-  throw new Error("expected a refusal");
-}
 
 describe("a spike on an estimate at rest", () => {
   it("gives no rate error when there is neither speed nor spike (√(0 + 0) − 0 = 0, not 0/0)", () => {

@@ -3,7 +3,6 @@
  * loop period, and the input a result past the largest double is blamed on, for each θ = ωt helper.
  */
 import { describe, expect, it } from "vitest";
-import { CalcInputError } from "../../../calc/core/errors.ts";
 import {
   beaconArc,
   headingStepPerLoop,
@@ -14,19 +13,9 @@ import {
   onTimeForArc,
   type HeadingTimingInput,
 } from "../../../calc/heading/timing.ts";
+import { refusal } from "../../support/refusal.ts";
 
 const DEFAULTS = Object.fromEntries(Object.entries(headingTimingInputs).map(([k, v]) => [k, v.default])) as HeadingTimingInput;
-
-/** The refusal `run` throws: a CalcInputError (fails the test otherwise). */
-function refusal(run: () => unknown): CalcInputError {
-  try {
-    run();
-  } catch (error) {
-    expect(error).toBeInstanceOf(CalcInputError);
-    return error as CalcInputError;
-  }
-  throw new Error("expected a refusal");
-}
 
 // Powers of two keep every product and quotient below exact: 64 rad/s at 1024 Hz turns 1/16 rad per
 // update, and a 1/1024 s on-time lights 1/16 rad.

@@ -5,26 +5,8 @@
  * The largest double is about 1.8e308, so a product past it is refused, not shown as infinity.
  */
 import { describe, expect, it } from "vitest";
-import {
-  CalcInputError,
-  coupleUnbalance,
-  equivalentBalanceGrade,
-  finestGradeMet,
-  permissibleResidualUnbalance,
-  staticUnbalance,
-  twoPlaneCorrection,
-} from "#calc";
-
-/** The CalcInputError `run` throws (fails the test when it returns or throws anything else). */
-function refusal(run: () => unknown): CalcInputError {
-  try {
-    run();
-  } catch (error) {
-    if (error instanceof CalcInputError) return error;
-    throw error;
-  }
-  throw new Error("expected a refusal, got a result");
-}
+import { coupleUnbalance, equivalentBalanceGrade, finestGradeMet, permissibleResidualUnbalance, staticUnbalance, twoPlaneCorrection } from "#calc";
+import { refusal } from "../../support/refusal.ts";
 
 function expectRefusal(run: () => unknown, param: string, value: number, unit: string, message: string): void {
   const error = refusal(run);

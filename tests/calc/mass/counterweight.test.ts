@@ -6,18 +6,8 @@
  * formulas is exact in doubles and the boundary is met exactly, not up to rounding.
  */
 import { describe, expect, it } from "vitest";
-import { applyCounterweight, CalcInputError, counterweightAtCandidates, counterweightAtRadius, counterweightRadiusForMass, type LayoutPart } from "#calc";
-
-/** The CalcInputError `run` throws (fails the test when it returns or throws anything else). */
-function refusal(run: () => unknown): CalcInputError {
-  try {
-    run();
-  } catch (error) {
-    if (error instanceof CalcInputError) return error;
-    throw error;
-  }
-  throw new Error("expected a refusal, got a result");
-}
+import { applyCounterweight, counterweightAtCandidates, counterweightAtRadius, counterweightRadiusForMass, type LayoutPart } from "#calc";
+import { refusal } from "../../support/refusal.ts";
 
 function expectRefusal(run: () => unknown, param: string, value: unknown, unit: string, message: string): void {
   const error = refusal(run);

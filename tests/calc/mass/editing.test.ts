@@ -4,24 +4,14 @@
  * becomes −θ, across the y axis π − θ, through the origin θ + π, each kept in (−π, π].
  */
 import { describe, expect, it } from "vitest";
-import { CalcInputError } from "../../../calc/core/errors.ts";
 import { addMirrorCopy, addPart, duplicatePart, mirrorPart, mirrorPartInList, movePart, removePart, suffixedName } from "../../../calc/mass/editing.ts";
 import { MAX_NAME_LENGTH, type LayoutPart, type PartShape } from "../../../calc/mass/parts.ts";
+import { refusal } from "../../support/refusal.ts";
 
 const part = (shape: PartShape, name = "p", x = 0.03, y = 0.04): LayoutPart => ({ name, shape, mass: { kind: "given", mass: 0.1 }, x, y, z: 0.01 });
 const dot = (name: string) => part({ kind: "point" }, name);
 const list = Object.freeze([dot("a"), dot("b"), dot("c")]);
 const bad = part({ kind: "annulus", innerRadius: 0.06, outerRadius: 0.05 }, "bad");
-
-function refusal(run: () => unknown): CalcInputError {
-  try {
-    run();
-  } catch (error) {
-    expect(error).toBeInstanceOf(CalcInputError);
-    return error as CalcInputError;
-  }
-  throw new Error("expected a refusal");
-}
 
 describe("refusals of the list editing functions", () => {
   it("names the index it refuses and the range it takes, whatever the edit", () => {

@@ -5,21 +5,11 @@
  * format description at the top of the module (lengths in mm, masses in g).
  */
 import { describe, expect, it } from "vitest";
-import { CalcInputError } from "../../../calc/core/errors.ts";
 import { encodeLayout, parseLayout } from "../../../calc/mass/layout-text.ts";
 import { MAX_PARTS, type LayoutPart } from "../../../calc/mass/parts.ts";
+import { refusal } from "../../support/refusal.ts";
 
 const point = (mass: number, x = 0, name = "p"): LayoutPart => ({ name, shape: { kind: "point" }, mass: { kind: "given", mass }, x, y: 0, z: 0 });
-
-function refusal(run: () => unknown): CalcInputError {
-  try {
-    run();
-  } catch (error) {
-    expect(error).toBeInstanceOf(CalcInputError);
-    return error as CalcInputError;
-  }
-  throw new Error("expected a refusal");
-}
 
 /** The one problem the reader reports for a single-part text. */
 const partProblem = (token: string): string => {

@@ -5,18 +5,8 @@
  * documentation (openstax-college-physics, a = ω²r): ω̂/ω = √(r/r̂), drift 2π(√(r/r̂) − 1) per turn.
  */
 import { describe, expect, it } from "vitest";
-import { CalcInputError, trueSensorRadius } from "#calc";
-
-/** The CalcInputError `run` throws (fails the test when it returns or throws anything else). */
-function refusal(run: () => unknown): CalcInputError {
-  try {
-    run();
-  } catch (error) {
-    if (error instanceof CalcInputError) return error;
-    throw error;
-  }
-  throw new Error("expected a refusal, got a result");
-}
+import { trueSensorRadius } from "#calc";
+import { refusal } from "../../support/refusal.ts";
 
 describe("figures derived from the rate ratio", () => {
   it("gives the rate error and the single axis's drift of a sensor 32 mm out with the centre of mass 2 mm beyond it", () => {

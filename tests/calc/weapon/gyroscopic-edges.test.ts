@@ -4,19 +4,8 @@
  * says which quantity would not stay finite.
  */
 import { describe, expect, it } from "vitest";
-import { CalcInputError } from "../../../calc/core/errors.ts";
 import { angularMomentum, bearingForcePair, gyroscopicMoment, gyroscopicReaction } from "../../../calc/weapon/gyroscopic.ts";
-
-/** The CalcInputError `run` throws (fails the test when it returns or throws something else). */
-function refusal(run: () => unknown): CalcInputError {
-  try {
-    run();
-  } catch (error) {
-    expect(error).toBeInstanceOf(CalcInputError);
-    return error as CalcInputError;
-  }
-  throw new Error("expected a refusal");
-}
+import { refusal } from "../../support/refusal.ts";
 
 describe("angularMomentum past the largest double", () => {
   it("blames the rotor inertia when it is the extreme input: 1e300 kg·m² × 1e10 rad/s = 1e310 N·m·s", () => {
