@@ -72,7 +72,7 @@ describe("registering", () => {
 
   it("adds the kind to each unit it registers", () => {
     units.useUnits(unitTables(["torque"]));
-    expect(units.unitDef("N·m")).toEqual({ ...UNITS.N·m });
+    expect(units.unitDef("N·m")).toEqual({ ...UNITS["N·m"] });
     expect(units.unitDef("lbf·in").kind).toBe("torque");
   });
 });
