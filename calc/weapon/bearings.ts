@@ -339,6 +339,7 @@ export function bearingCheck(input: {
   const life = ratio ** LIFE_EXPONENT[bearingType]; // iso-281: L10 = (C/P)^p
   const ratingLife = Number.isFinite(life) ? life : null;
   const hours = ratingLife === null ? null : (ratingLife * 1e6) / ((fields.angularSpeed / (2 * Math.PI)) * 3600); // iso-281: L10h = 10⁶·L10/(60·n)
+  // Stryker disable next-line ConditionalExpression: equivalent, a roller bearing's axial load is 0 (refused above), and max(F_r, 0.6·F_r) = F_r as with X0 = 1
   const staticFactors = bearingType === "ball" ? BALL_STATIC_FACTORS : { radialFactor: 1, axialFactor: 0 };
   const shock = fields.shockRadialLoad;
   const staticEquivalentLoad = requireFiniteResult(
@@ -353,7 +354,7 @@ export function bearingCheck(input: {
   return {
     equivalentLoad,
     ratingLife,
-    ratingLifeHours: hours !== null && Number.isFinite(hours) ? hours : null,
+    ratingLifeHours: Number.isFinite(hours) ? hours : null, // Number.isFinite(null) is false
     staticEquivalentLoad,
     staticSafetyFactor: Number.isFinite(s0) ? s0 : null,
   };
