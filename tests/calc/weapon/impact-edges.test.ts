@@ -5,20 +5,9 @@
  * past the largest double is blamed on, and the demo's speed ratio worked by hand.
  */
 import { describe, expect, it } from "vitest";
-import { CalcInputError } from "../../../calc/core/errors.ts";
 import { DEMO_HIT, effectiveTipMass, halfSinePeakForce, impactForceEstimate, rotorImpact, weaponHit } from "../../../calc/weapon/impact.ts";
 import { expectClose } from "./support.ts";
-
-/** The refusal `run` throws: a CalcInputError (fails the test otherwise). */
-function refusal(run: () => unknown): CalcInputError {
-  try {
-    run();
-  } catch (error) {
-    expect(error).toBeInstanceOf(CalcInputError);
-    return error as CalcInputError;
-  }
-  throw new Error("expected a refusal");
-}
+import { refusal } from "../../support/refusal.ts";
 
 /** The field, value, unit and rule of the refusal `run` throws. */
 function refused(run: () => unknown): { param: string; value: unknown; unit: string; expected: string } {
