@@ -4,6 +4,7 @@ import {
   CalcInputError,
   convert,
   findUnit,
+  type QuantityKind,
   formatNumber,
   formatQuantity,
   fromSI,
@@ -206,6 +207,32 @@ describe("units: reading what a user typed", () => {
     for (const kind of ["length", "mass", "acceleration", "angularSpeed", "force", "stress", "inertia"] as const) {
       for (const id of unitsOfKind(kind)) expect(findUnit(UNITS[id].symbol, kind), `${kind} ${id}`).toBe(id);
     }
+  });
+
+  it("reads a superscript, a caret power, a Greek mu and the URL spelling without listing each as an alias", () => {
+    const spellings: [string, QuantityKind, string][] = [
+      ["kg·m²", "inertia", "kg·m2"],
+      ["kg·m^2", "inertia", "kg·m2"],
+      ["kgm^2", "inertia", "kg·m2"],
+      ["kgm2", "inertia", "kg·m2"],
+      ["lb-in^2", "inertia", "lb·in2"],
+      ["g·cm²", "inertia", "g·cm2"],
+      ["m/s^2", "acceleration", "m/s2"],
+      ["g", "acceleration", "gn"],
+      ["N/mm²", "stress", "MPa"],
+      ["lbf/in²", "stress", "psi"],
+      ["kg/m^3", "density", "kg/m3"],
+      ["μs", "time", "us"],
+      ["µs", "time", "us"],
+      ["Nm", "torque", "N·m"],
+      ["ft-lbf", "energy", "ft·lbf"],
+      ["%", "fraction", "pct"],
+      ["Ω", "resistance", "ohm"],
+      ["rad/s/V", "motorVelocityConstant", "rad/(s·V)"],
+      ["°/s", "angularSpeed", "deg/s"],
+      ["m^2", "area", "m2"],
+    ];
+    for (const [text, kind, id] of spellings) expect(findUnit(text, kind), text).toBe(id);
   });
 
   it("writes URL text that reads back to the same value (6 significant figures)", () => {
