@@ -63,10 +63,11 @@ export function simplySupportedPointLoad(input: { force: number; span: number; p
   const a = position;
   const b = span - position;
   const named = { force: [force, "N"], span: [span, "m"], position: [position, "m"], youngsModulus: [E, "Pa"], secondMoment: [I, "m⁴"] } as const;
-  // Each quotient is formed so that no intermediate overflows before the last step.
+  // Each quotient is formed so that no intermediate overflows before the last step. With 0 ≤ a ≤ l,
+  // a/l and b/l are at most 1, so a reaction is never more than F and needs no finiteness check.
   return {
-    leftReaction: requireFiniteResult(force * (b / span), "reaction", named), // shigley-beam-deflection-table 6: R1 = F·b/l
-    rightReaction: requireFiniteResult(force * (a / span), "reaction", named), // R2 = F·a/l
+    leftReaction: force * (b / span), // shigley-beam-deflection-table 6: R1 = F·b/l
+    rightReaction: force * (a / span), // R2 = F·a/l
     momentAtLoad: requireFiniteResult(force * a * (b / span), "bending moment", named), // M = F·a·b/l
     deflectionAtLoad: requireFiniteResult((((force / (3 * E * I)) * a * a) / span) * b * b, "deflection", named), // y = F·a²·b²/(3EIl)
   };
@@ -116,8 +117,9 @@ export function simplySupportedCouple(input: { moment: number; span: number; pos
   const named = { moment: [moment, "N·m"], span: [span, "m"], position: [position, "m"], youngsModulus: [E, "Pa"], secondMoment: [I, "m⁴"] } as const;
   return {
     reaction: requireFiniteResult(moment / span, "reaction", named), // shigley-beam-deflection-table 8: R1 = −R2 = M_B/l
-    momentBeforeCouple: requireFiniteResult(moment * (a / span), "bending moment", named), // M_AB = M_B·x/l at x = a
-    momentAfterCouple: requireFiniteResult(moment * (b / span), "bending moment", named), // M_BC = M_B·(x − l)/l at x = a
+    // a/l and b/l are at most 1 (0 ≤ a ≤ l), so neither moment is more than M and needs no finiteness check.
+    momentBeforeCouple: moment * (a / span), // M_AB = M_B·x/l at x = a
+    momentAfterCouple: moment * (b / span), // M_BC = M_B·(x − l)/l at x = a
     deflectionAtCouple: requireFiniteResult((((moment / (3 * E * I)) * a) / span) * b * Math.abs(b - a), "deflection", named), // y_AB at x = a
   };
 }

@@ -57,7 +57,8 @@ export function roundSection(input: { diameter: number; bore?: number }): RoundS
   return {
     area: (Math.PI * (d2 - b2)) / 4,
     secondMoment,
-    sectionModulus: requireFiniteResult(secondMoment / (diameter / 2), "section modulus", named), // shigley-bending-torsion: Z = I/c
+    // I ≤ πd⁴/64 is a double, so d is below 1.2e77 m and Z = I/(d/2) ≤ πd³/32 is one too.
+    sectionModulus: secondMoment / (diameter / 2), // shigley-bending-torsion: Z = I/c
     polarMoment: 2 * secondMoment, // shigley-bending-torsion: J = 2I for a round section
   };
 }
