@@ -83,7 +83,7 @@ export function kinematicTranslationSpeed(input: { depth: number; windowWidth: n
   requireNonNegative("depth", depth, "m/s");
   requireWidth(windowWidth, oppositeWindow === true);
   const factor = oppositeWindow === true ? 2 : 1;
-  return requireFiniteResult(depth * ((factor * Math.sin(windowWidth / 2)) / Math.PI), "translation speed", { depth: [depth, "m/s"] }); // oppenheim-willsky-signals: c₁ = sin(w/2)/π (a factor below 1 first: no overflow)
+  return depth * ((factor * Math.sin(windowWidth / 2)) / Math.PI); // oppenheim-willsky-signals: c₁ = sin(w/2)/π (a factor of at most 2/π < 1 first: never past depth, so no overflow)
 }
 
 /**
@@ -150,7 +150,7 @@ export function differentialDriveKinematics(input: { leftSpeed: number; rightSpe
   const speed = rightSpeed / 2 + leftSpeed / 2; // siegwart-autonomous-robots: v = (v_R + v_L)/2, halved first so it cannot overflow
   const turnRate = rightSpeed / track - leftSpeed / track; // siegwart-autonomous-robots: ω = (v_R − v_L)/b
   requireFiniteResult(turnRate, "turn rate", { track: [track, "m"] });
-  const radius = turnRate === 0 ? Number.POSITIVE_INFINITY : speed / turnRate;
+  const radius = speed / turnRate; // ±∞ or NaN when straight (ω = 0), both reported as null
   return { speed, turnRate, turnRadius: Number.isFinite(radius) ? radius : null };
 }
 
