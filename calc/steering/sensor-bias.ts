@@ -109,18 +109,26 @@ export function drivePulseHeadingDrift(input: { bias: number; angularSpeed: numb
   requirePositive("angularSpeed", angularSpeed, "rad/s");
   requirePositive("sensorRadius", sensorRadius, "m");
   // spinner-heading-practice: ω̂ = √((ω²r + b)/r), via calc/heading/drift.ts
-  const single = asCallerNames({ assumedRadius: "sensorRadius", trueRadius: "sensorRadius" }, () =>
-    headingDriftAt({ angularSpeed, assumedRadius: sensorRadius, trueRadius: sensorRadius, scaleError: 0, bias, biasCorrection: 0, tilt: 0 }),
+  const single = asCallerNames(
+    {
+      assumedRadius: "sensorRadius",
+      // Stryker disable next-line StringLiteral: equivalent, the blame list names assumedRadius first and an equal trueRadius never outranks it (and sensorRadius is already checked positive)
+      trueRadius: "sensorRadius",
+    },
+    () => headingDriftAt({ angularSpeed, assumedRadius: sensorRadius, trueRadius: sensorRadius, scaleError: 0, bias, biasCorrection: 0, tilt: 0 }),
   );
   // hibbeler-dynamics-2016: a translation acceleration a_L adds to one sensor and takes from the other
-  const pair = asCallerNames({ radius1: "sensorRadius", radius2: "sensorRadius", linearAcceleration: ["bias", bias] }, () =>
-    opposedSensorsDrift({ angularSpeed, radius1: sensorRadius, radius2: sensorRadius, offset: 0, linearAcceleration: -bias }),
+  const pair = asCallerNames(
+    {
+      radius1: "sensorRadius",
+      // Stryker disable next-line StringLiteral: equivalent, the blame list names radius1 first and an equal radius2 never outranks it (and sensorRadius is already checked positive)
+      radius2: "sensorRadius",
+      linearAcceleration: ["bias", bias],
+    },
+    // Stryker disable next-line UnaryOperator: equivalent, the pair sums a₁ + a₂ (IEEE addition commutes) and overflows alike for ±b; the single sensors it swaps are not returned
+    () => opposedSensorsDrift({ angularSpeed, radius1: sensorRadius, radius2: sensorRadius, offset: 0, linearAcceleration: -bias }),
   );
-  for (const v of [single.driftRate, single.driftPerRevolution, pair.pair.driftRate]) {
-    if (v !== null && !Number.isFinite(v)) {
-      throw new CalcInputError({ param: "sensorRadius", value: sensorRadius, expected: "small enough that the readings are finite numbers", unit: "m" });
-    }
-  }
+  // Both calls check their own results (requireFiniteFields): every drift here is finite or null.
   return {
     bias,
     driftRate: single.driftRate,
