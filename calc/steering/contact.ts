@@ -45,7 +45,8 @@ export function brushForceInto(slipX: number, slipY: number, rollingSpeed: numbe
   }
   const sigma = vs / Math.sqrt(rollingSpeed * rollingSpeed + LOW_SPEED * LOW_SPEED); // pacejka-tyre-dynamics: σ = |V_s|/V_r
   const u = (stiffness * sigma) / (3 * limit); // pacejka-tyre-dynamics: θσ with θ = C/(3μF_z)
-  const share = u >= 1 ? 1 : u * (3 - 3 * u + u * u); // pacejka-tyre-dynamics: 3θσ − 3(θσ)² + (θσ)³
+  const v = Math.min(u, 1); // full sliding from θσ = 1, where the cubic reaches 1·(3 − 3 + 1) = 1
+  const share = v * (3 - 3 * v + v * v); // pacejka-tyre-dynamics: 3θσ − 3(θσ)² + (θσ)³
   const scale = (-limit * share) / vs;
   out[0] = scale * slipX;
   out[1] = scale * slipY;
@@ -94,7 +95,8 @@ export function brushTyreForce(input: {
   const sigma = vs / Math.hypot(rollingSpeed, LOW_SPEED); // pacejka-tyre-dynamics: σ = |V_s|/V_r (may be Infinity: full sliding)
   const product = (slipStiffness / (3 * limit)) * sigma; // θσ, θ = C/(3μF_z)
   const u = Number.isNaN(product) ? 0 : product; // 0·∞ only when C/(3μF_z) underflows: no grip built up
-  const gripShare = u >= 1 ? 1 : u * (3 - 3 * u + u * u); // pacejka-tyre-dynamics: 3θσ − 3(θσ)² + (θσ)³
+  const v = Math.min(u, 1); // full sliding from θσ = 1, where the cubic reaches 1·(3 − 3 + 1) = 1
+  const gripShare = v * (3 - 3 * v + v * v); // pacejka-tyre-dynamics: 3θσ − 3(θσ)² + (θσ)³
   const force = limit * gripShare;
   return { forceX: -force * (slipVelocityX / vs), forceY: -force * (slipVelocityY / vs), force, gripShare };
 }
