@@ -88,21 +88,23 @@ export function steeringEstimate(input: SteeringEstimateInput): SteeringEstimate
   const rimSpeed = v.spinSpeed * v.wheelOffset; // openstax-up1-rotational-kinematics: v = ωr
   const deg = (a: number) => `${(Math.abs(a) * 180) / Math.PI < 10 ? ((a * 180) / Math.PI).toFixed(1) : Math.round((a * 180) / Math.PI)}°`;
   const errorShare = Math.abs(directionError) / v.directionTolerance;
-  const liftShare = lift === null ? 0 : v.spinSpeed / lift;
   let status: SteeringEstimate["status"] = errorShare <= 1 ? "holds" : errorShare <= 2 ? "marginal" : "fails";
   let summary = errorShare <= 1 ? "push on course" : "push off course";
   let reason =
     errorShare <= 1
       ? `The push points ${deg(directionError)} off the commanded direction, within the ${deg(v.directionTolerance)} tolerance.`
       : `The push points ${deg(directionError)} off the commanded direction, beyond the ${deg(v.directionTolerance)} tolerance: a phase lead of ${deg(leadToCancel)} cancels it.`;
-  if (lift !== null && liftShare >= 1) {
-    status = "fails";
-    summary = "skid lifts";
-    reason = `The skid lifts: the wheel's gyroscopic moment carries the whole weight from ${Math.round((lift * 30) / Math.PI)} rpm, below the spin speed.`;
-  } else if (lift !== null && liftShare >= SKID_LIFT_MARGIN && status === "holds") {
-    status = "marginal";
-    summary = "skid close to lifting";
-    reason = `The skid is close to lifting: the spin speed is ${Math.round(liftShare * 100)} % of the ${Math.round((lift * 30) / Math.PI)} rpm at which it does.`;
+  if (lift !== null) {
+    const liftShare = v.spinSpeed / lift;
+    if (liftShare >= 1) {
+      status = "fails";
+      summary = "skid lifts";
+      reason = `The skid lifts: the wheel's gyroscopic moment carries the whole weight from ${Math.round((lift * 30) / Math.PI)} rpm, below the spin speed.`;
+    } else if (liftShare >= SKID_LIFT_MARGIN && status === "holds") {
+      status = "marginal";
+      summary = "skid close to lifting";
+      reason = `The skid is close to lifting: the spin speed is ${Math.round(liftShare * 100)} % of the ${Math.round((lift * 30) / Math.PI)} rpm at which it does.`;
+    }
   }
   return {
     status,
