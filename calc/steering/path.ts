@@ -52,7 +52,9 @@ function pathWobble(points: readonly SteeringPathPoint[], perTurn: number): numb
     let sy = 0;
     for (let j = -half; j <= half; j++) {
       const weight = even && Math.abs(j) === half ? 0.5 : 1;
+      // Stryker disable next-line ArithmeticOperator: equivalent, j runs over −half…half and the weight depends on |j| only, so k − j sums the same samples
       sx += weight * points[k + j]!.x;
+      // Stryker disable next-line ArithmeticOperator: equivalent, j runs over −half…half and the weight depends on |j| only, so k − j sums the same samples
       sy += weight * points[k + j]!.y;
     }
     wobble = Math.max(wobble, Math.hypot(points[k]!.x - sx / perTurn, points[k]!.y - sy / perTurn));
@@ -120,8 +122,7 @@ export function steeringPath(args: {
   const model = new SteeringModel(runInput);
   const step = Math.max((2 * Math.PI) / (input.spinSpeed * pointsPerRevolution), total / (maxPoints - 1));
   const count = Math.min(maxPoints, Math.floor(total / step) + 1);
-  const times = new Float64Array(count);
-  for (let k = 0; k < count; k++) times[k] = Math.min(total, k * step);
+  const times = Float64Array.from({ length: count }, (_, k) => Math.min(total, k * step));
   const ends = runLegs.slice(1).map((l) => l.start);
   const run = runSteering(model, runInput, {
     legs: runLegs,
