@@ -38,8 +38,9 @@ export interface SteeringSweep {
   duration: number;
 }
 
+/** `count` (at least 2: the default grids have 7 widths and 6 depths) values from `from` to `to`, evenly spaced. */
 function evenly(from: number, to: number, count: number): number[] {
-  return Array.from({ length: count }, (_, i) => (count === 1 ? from : from + ((to - from) * i) / (count - 1)));
+  return Array.from({ length: count }, (_, i) => from + ((to - from) * i) / (count - 1));
 }
 
 /** A sweep that runs one cell at a time (see `startSteeringSweep`). */
@@ -89,8 +90,9 @@ export function startSteeringSweep(args: {
     ["windowWidths", widths],
     ["depths", ds],
   ] as const) {
-    if (!Array.isArray(list) || list.length < 1 || list.length > 24) {
-      throw new CalcInputError({ param: name, value: Array.isArray(list) ? list.length : list, expected: "a list of 1 to 24 values", unit: "" });
+    // Both are copied into arrays above, so only the count can be wrong.
+    if (list.length < 1 || list.length > 24) {
+      throw new CalcInputError({ param: name, value: list.length, expected: "a list of 1 to 24 values", unit: "" });
     }
   }
   for (const [i, w] of widths.entries()) requireInRange(`windowWidths[${i}]`, w, "rad", { min: 0, max: maxWidth, minOpen: true });
