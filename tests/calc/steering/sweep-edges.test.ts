@@ -89,6 +89,14 @@ describe("the sweep's feasible cells and its best", () => {
     expect(sweep.cells[0]!.map((c) => c.feasible)).toEqual([true, false]);
   });
 
+  it("with the opposite window on, stops at the base duty itself when it is under a half (spinning at 150 rad/s): the opposite window takes the duty down by the depth", () => {
+    const slow = { ...D, spinSpeed: 150 };
+    const baseSlow = new SteeringModel(slow).baseDuty;
+    expect(baseSlow).toBeLessThan(0.5);
+    const sweep = sweepSteering({ input: slow, windowWidths: [2], depths: [baseSlow, baseSlow * 1.001], duration: 0.05 });
+    expect(sweep.cells[0]!.map((c) => c.feasible)).toEqual([true, false]);
+  });
+
   it("has no best cell when no cell is feasible", () => {
     const sweep = sweepSteering({ input: D, windowWidths: [2], depths: [1], duration: 0.05 });
     expect(sweep.best).toBeNull();
