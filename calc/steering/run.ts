@@ -17,8 +17,8 @@ export interface SteeringRunOptions {
   relativeTolerance: number;
   /** Step budget. */
   maxSteps: number;
-  /** Distance along a direction whose first crossing is timed [m, rad]. */
-  target?: { direction: number; distance: number };
+  /** Distance along x (the commanded direction) whose first crossing is timed [m]. */
+  target?: { distance: number };
   /** Times at which to sample the state (for a path plot). */
   outputTimes?: Float64Array;
   /** An integrator of the model's dimension to reuse (a sweep runs many). */
@@ -35,7 +35,7 @@ export interface SteeringRun {
   switches: number;
   /** Times [s], centre-of-mass positions [m] and the body-frame acceleration integrals [m/s] each time the heading passes a whole turn (from 0). */
   revolutions: { time: number[]; x: number[]; y: number[]; abx: number[]; aby: number[] };
-  /** First time the displacement along the target direction reaches the target distance [s], or null. */
+  /** First time the displacement along x (the commanded direction) reaches the target distance [s], or null. */
   crossTime: number | null;
   peakGrip: number;
   slidingTime: number;
@@ -93,10 +93,8 @@ export function runSteering(model: SteeringModel, input: SteeringInput, options:
   const events = [
     ...mod.events,
     { g: (_t: number, y: Float64Array) => y[S_TH]! - nextTurn, direction: 1 as const },
-    {
-      g: (_t: number, y: Float64Array) => (target ? y[S_X]! * Math.cos(target.direction) + y[S_Y]! * Math.sin(target.direction) - target.distance : -1),
-      direction: 1 as const,
-    },
+    // The target line, when there is one, is square to the x axis (the commanded direction) at its distance.
+    ...(target ? [{ g: (_t: number, y: Float64Array) => y[S_X]! - target.distance, direction: 1 as const }] : []),
   ];
   let peakGrip = 0;
   let slidingTime = 0;
@@ -131,16 +129,12 @@ export function runSteering(model: SteeringModel, input: SteeringInput, options:
     onStep: (s) => {
       // The model's last evaluation is at the current state (first-same-as-last, or a restart).
       const dt = s.t - s.tPrev;
-      if (model.lastGrip > peakGrip) peakGrip = model.lastGrip;
+      peakGrip = Math.max(peakGrip, model.lastGrip);
       if (model.lastGrip >= 1) slidingTime += dt;
       if (model.lastSkidLifted) skidLiftedTime += dt;
-      const ib = model.pack.batteryCurrent;
-      if (ib > peakIb) peakIb = ib;
-      if (model.pack.batteryVoltage < minVb) minVb = model.pack.batteryVoltage;
-      for (let i = 0; i < model.n; i++) {
-        const a = Math.abs(model.current[i]!);
-        if (a > peakI) peakI = a;
-      }
+      peakIb = Math.max(peakIb, model.pack.batteryCurrent);
+      minVb = Math.min(minVb, model.pack.batteryVoltage);
+      for (let i = 0; i < model.n; i++) peakI = Math.max(peakI, Math.abs(model.current[i]!));
       return undefined;
     },
     outputTimes: options.outputTimes,

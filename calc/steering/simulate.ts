@@ -247,7 +247,7 @@ export function simulateSteering(input: SteeringInput, options?: SteeringOptions
     duration: input.duration,
     relativeTolerance: opts.relativeTolerance,
     maxSteps: opts.maxSteps,
-    target: { direction: 0, distance: input.commandedDistance },
+    target: { distance: input.commandedDistance },
   });
   const y = run.y;
   const e0 = model.e0;
@@ -262,6 +262,7 @@ export function simulateSteering(input: SteeringInput, options?: SteeringOptions
     dragLoss: y[e0 + E_DRAG]!,
   };
   const totalLoss = losses.packLoss + losses.copperLoss + losses.noLoadLoss + losses.slipLoss + losses.skidLoss + losses.dragLoss;
+  // Stryker disable next-line ArithmeticOperator: equivalent, E_DRAWN is 0 so e0 − E_DRAWN is e0 + E_DRAWN
   const drawn = y[e0 + E_DRAWN]!;
   const energy: SteeringEnergy = {
     drawn,
@@ -279,8 +280,8 @@ export function simulateSteering(input: SteeringInput, options?: SteeringOptions
   // Sensor: body-frame mean acceleration over the final revolutions; the bias along the sensor's inward axis, −ā·e_r(β).
   // A one-wheel robot's wheel and skid forces sum to a force fixed in the body even with no drive
   // pulses: a constant offset that a calibration at steady spin removes. The pulse bias is the change.
+  // The body's acceleration depends on the state only (tyre and skid forces), not on the drive commands.
   const dy0 = new Float64Array(model.dimension);
-  model.mode.fill(0);
   model.rhs(run.y0, dy0);
   const steady = { x: dy0[e0 + E_ABX]!, y: dy0[e0 + E_ABY]! };
   const abx = rev.bodyAcceleration.x;
@@ -300,7 +301,7 @@ export function simulateSteering(input: SteeringInput, options?: SteeringOptions
   const budgetHit = run.status === "step-limit" || run.status === "step-too-small";
   let verdict: SteeringVerdict;
   let reason: string;
-  const deg = (a: number) => `${(a * 180) / Math.PI >= 0 ? "" : "−"}${Math.abs((a * 180) / Math.PI).toFixed(1)}°`;
+  const deg = (a: number) => `${a >= 0 ? "" : "−"}${Math.abs((a * 180) / Math.PI).toFixed(1)}°`;
   if (budgetHit) {
     warnings.push(`stopped: too stiff to resolve in ${run.solver.steps} steps, at ${endTime.toPrecision(3)} s of ${input.duration} s.`);
   }
