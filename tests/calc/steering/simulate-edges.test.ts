@@ -6,6 +6,7 @@
 import { describe, expect, it } from "vitest";
 import { skidLiftSpeed } from "../../../calc/steering/gyro.ts";
 import { DEMO_STEERING_SPINNER, simulateSteering } from "../../../calc/steering/index.ts";
+import { refusal } from "../../support/refusal.ts";
 
 const D = DEMO_STEERING_SPINNER;
 const DEG = Math.PI / 180;
@@ -109,6 +110,13 @@ describe("runs shorter than two turns", () => {
     expect(r.revolutions.length).toBe(1);
     expect(r.translationSpeed).toBeCloseTo(Math.hypot(r.displacement.x, r.displacement.y) / 0.15, 9);
     expect(r.finalSpin).toBe(r.revolutions[0]!.spinSpeed);
+  });
+
+  it("takes the travel speed over the last turn after two turns (the last ten, or the later half when fewer)", () => {
+    const r = simulateSteering({ ...slow, duration: 0.25 });
+    expect(r.revolutions.length).toBe(2);
+    expect(r.translationSpeed).toBeCloseTo(r.revolutions[1]!.speed, 9);
+    expect(r.revolutions[1]!.speed).toBeGreaterThan(1.5 * r.revolutions[0]!.speed);
   });
 
   it("counts the spin lost down to the slowest turn and the peak acceleration from the first turn's velocity on, over three turns of a spin that sags", () => {
@@ -224,5 +232,30 @@ describe("figures drawn from the run's ledgers and inputs", () => {
     const { meanBodyAcceleration: a, steadyBodyAcceleration: a0, bias } = long.sensor;
     expect(Math.hypot(a.x - a0.x, a.y - a0.y)).toBeGreaterThan(0);
     expect(bias).toBeCloseTo(-((a.x - a0.x) * Math.cos(Math.PI / 3) + (a.y - a0.y) * Math.sin(Math.PI / 3)), 12);
+  });
+});
+
+describe("narrow gaps between the drive windows", () => {
+  // Add windows only, a fast loop without latency: each wheel enters and leaves its window once a turn.
+  const wide = { ...D, duration: 0.5, oppositeWindow: 0, loopRate: 100000, latency: 0 };
+
+  it("switches each of the two wheels out and back in every turn when the gap is only 0.05 rad (under 3°): at least 4 edges a turn", () => {
+    const r = simulateSteering({ ...wide, windowWidth: 2 * Math.PI - 0.05 });
+    expect(r.status).toBe("done");
+    expect(r.pulseEdges).toBeGreaterThanOrEqual(4 * r.revolutions.length);
+  });
+
+  it("does not chase a gap under 1 mrad step by step: the run still ends in time within its step budget", () => {
+    const r = simulateSteering({ ...wide, duration: 0.2, windowWidth: 2 * Math.PI - 5e-4 });
+    expect(r.status).toBe("done");
+    expect(r.endTime).toBe(0.2);
+  });
+});
+
+describe("refusals", () => {
+  it("names a bad input before a bad option when both are wrong: the robot is checked first", () => {
+    const error = refusal(() => simulateSteering({ ...D, spinSpeed: -1 }, { maxSteps: 1 }));
+    expect(error.param).toBe("spinSpeed");
+    expect(error.unit).toBe("rad/s");
   });
 });
