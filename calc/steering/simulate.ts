@@ -158,10 +158,7 @@ export function readSteeringOptions(options: SteeringOptions | undefined): Requi
 
 /** Wraps an angle to (−π, π]. */
 function wrap(angle: number): number {
-  let a = angle % (2 * Math.PI);
-  if (a > Math.PI) a -= 2 * Math.PI;
-  if (a <= -Math.PI) a += 2 * Math.PI;
-  return a;
+  return angle - 2 * Math.PI * Math.ceil((angle - Math.PI) / (2 * Math.PI));
 }
 
 /** Mean velocity over the final revolutions of a run, and the per-revolution figures. @internal */
