@@ -92,7 +92,8 @@ export class SteeringModel {
   private readonly f2 = new Float64Array(2);
   /** From the last evaluation: the most grip any wheel used [-] (1 = sliding), and whether the skid was off the floor. */
   lastGrip = 0;
-  lastSkidLifted = false;
+  /** Set by `setLoads`, which the constructor calls before anything reads it. */
+  lastSkidLifted!: boolean;
   /** Normal loads from the last `setLoads` [N]. */
   loadWheel = 0;
   loadSkid = 0;
@@ -105,6 +106,7 @@ export class SteeringModel {
     this.dimension = S_W0 + n + EXTRA;
     this.cosA = new Float64Array(n);
     this.sinA = new Float64Array(n);
+    // Stryker disable next-line EqualityOperator: equivalent, a write past a typed array's end is dropped
     for (let i = 0; i < n; i++) {
       this.cosA[i] = Math.cos((2 * Math.PI * i) / n);
       this.sinA[i] = Math.sin((2 * Math.PI * i) / n);
@@ -281,6 +283,7 @@ export class SteeringModel {
     }
     this.lastGrip = grip;
     let pSkid = 0;
+    // Stryker disable next-line ConditionalExpression,LogicalOperator,EqualityOperator: equivalent, with no skid load or no skid friction the skid's force, torque and power are all zero, so this only skips the work
     if (this.loadSkid > 0 && this.muSkid > 0) {
       // A one-wheel robot's skid at −R·e_r of wheel 0; otherwise a centre skid.
       const kx = n === 1 ? vx + om * R * s : vx;
