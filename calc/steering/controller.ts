@@ -80,6 +80,7 @@ export class Modulator {
     const indexOf = (beta: number): number => {
       const b = ((beta % (2 * Math.PI)) + 2 * Math.PI) % (2 * Math.PI);
       // For the wheel counts allowed (up to 4, and still up to 16) no edge lands within 1e-9 below 2π, so no pair needs matching across the wrap.
+      // Stryker disable next-line EqualityOperator: equivalent, two edges here are either the same angle to rounding (~1e-15) or at least 2π/8 apart, never exactly 1e-9
       const k = seen.findIndex((x) => Math.abs(x - b) < 1e-9);
       if (k >= 0) return k;
       seen.push(b);
