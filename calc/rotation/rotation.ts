@@ -4,7 +4,7 @@
  */
 import { CalcInputError, requireInRange, requireNonNegative, requirePositive, requireRelation } from "../core/errors.ts";
 import { STANDARD_GRAVITY } from "../core/constants.ts";
-import { requireFiniteResult, requireInputObject, requireWhole, requireWithinSpecs, declaredInputs, requireFiniteFields } from "../core/spec-check.ts";
+import { requireFiniteResult, requireInputObject, requireWhole, requireWithinSpecs } from "../core/spec-check.ts";
 import type { SourceKey } from "../sources/index.ts";
 
 /**
@@ -199,7 +199,8 @@ export function sensorCountSize(input: { span: number; bits: number }): number {
   requirePositive("span", span, "m/s²");
   requireWhole("bits", bits, 1, 32);
   // Uniform quantiser step, full span over 2^bits codes (sensor-quantisation).
-  return requireFiniteResult(span / 2 ** bits, "count size", { span: [span, "m/s²"] });
+  // Finite without a check: span is finite and 2^bits ≥ 2, so the count is at most half the span.
+  return span / 2 ** bits;
 }
 
 /**
@@ -338,30 +339,27 @@ export function accelerometerPlacement(input: AccelerometerPlacementInput): Acce
   const windowExists = minRadius <= maxRadius;
   const part = partLoad({ mass: partMass, radius: partRadius, angularSpeed: topSpeed });
   const verdict: PlacementVerdict = !windowExists ? "no-window" : radius > maxRadius ? "too-far-out" : radius < minRadius ? "too-close-in" : "fits";
-  return requireFiniteFields(
-    {
-      minRadius,
-      maxRadius,
-      // The same bound with no headroom, r = F/ω² (openstax-college-physics, a = ω²r).
-      maxRadiusNoHeadroom: maxSensorRadius({ fullScale, margin: 0, topSpeed }),
-      windowExists,
-      effectiveStep,
-      accelerationAtTop,
-      fullScaleUsed: requireFiniteResult(accelerationAtTop / fullScale, "share of full scale", { fullScale: [fullScale, "m/s²"] }),
-      readingLimit: (1 - margin) * fullScale, // headroom kept below full scale
-      accelerationAtLow,
-      resolutionAtLow,
-      saturationSpeed: angularSpeedForAcceleration({ radius, acceleration: fullScale }),
-      verdict,
-      part,
-      // Weight W = m g solved for m (newton-second-law).
-      partHangingMass: part.force / STANDARD_GRAVITY,
-      // Tangential speed of a point on a circle, v = ω r (openstax-college-physics).
-      partReleaseSpeed: topSpeed * partRadius,
-    },
-    "placement figures",
-    () => declaredInputs(accelerometerPlacementInputs, input),
-  );
+  // Every field is finite: each comes from a guarded call above or is a product of bounded, finite inputs.
+  return {
+    minRadius,
+    maxRadius,
+    // The same bound with no headroom, r = F/ω² (openstax-college-physics, a = ω²r).
+    maxRadiusNoHeadroom: maxSensorRadius({ fullScale, margin: 0, topSpeed }),
+    windowExists,
+    effectiveStep,
+    accelerationAtTop,
+    fullScaleUsed: requireFiniteResult(accelerationAtTop / fullScale, "share of full scale", { fullScale: [fullScale, "m/s²"] }),
+    readingLimit: (1 - margin) * fullScale, // headroom kept below full scale
+    accelerationAtLow,
+    resolutionAtLow,
+    saturationSpeed: angularSpeedForAcceleration({ radius, acceleration: fullScale }),
+    verdict,
+    part,
+    // Weight W = m g solved for m (newton-second-law).
+    partHangingMass: part.force / STANDARD_GRAVITY,
+    // Tangential speed of a point on a circle, v = ω r (openstax-college-physics).
+    partReleaseSpeed: topSpeed * partRadius,
+  };
 }
 
 /** Source keys this module relies on (checked by the meta test). */
