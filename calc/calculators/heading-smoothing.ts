@@ -29,6 +29,7 @@ export default /* @__PURE__ */ defineCalculator(form, {
         title: "Smoothing",
         status: "info",
         rule: "What the smoothing costs: the delay of the estimate, and the heading it loses over a spin-up",
+        // Stryker disable next-line ObjectLiteral: equivalent, times and angles show in the same units in both unit systems
         margin: `Delay ${formatQuantity(r.totalDelay, "time", { system }).text}; the heading falls ${formatQuantity(Math.abs(r.headingErrorAfterSpinUp), "angle", { system }).text} behind over the spin-up`,
         figure: figureOf("Delay of the estimate", r.totalDelay, "time", system),
         details: [figureOf("Drift rate during the spin-up", r.driftRateDuringSpinUp, "angularSpeed", system, "deg/s")],

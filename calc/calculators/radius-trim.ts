@@ -50,6 +50,7 @@ export default /* @__PURE__ */ defineCalculator(form, {
   run,
   cards(values, r, system) {
     const len = (v: number) => formatQuantity(v, "length", { system, significant: 4 }).text;
+    // Stryker disable next-line ObjectLiteral: equivalent, angles show in degrees in both unit systems
     const drift = formatQuantity(Math.abs(r.driftPerRevolution), "angle", { system }).text;
     return [
       {
