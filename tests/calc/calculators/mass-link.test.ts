@@ -87,15 +87,15 @@ describe("the mounting points in a link and in a stored design", () => {
 
   it("reads a design's stored points, and names the problem of a value that is not a list of points", () => {
     const fromDesign = candidates.fromDesign!;
-    expect(fromDesign([], "metric")).toEqual({ value: [], problems: [] });
-    expect(fromDesign([{ x: 0.055, y: 0 }], "metric")).toEqual({ value: [{ x: 0.055, y: 0 }], problems: [] });
+    expect(fromDesign([])).toEqual({ value: [], problems: [] });
+    expect(fromDesign([{ x: 0.055, y: 0 }])).toEqual({ value: [{ x: 0.055, y: 0 }], problems: [] });
     // 5 m is outside the ±2000 mm a point may lie at: the stored points are left out, and the reason is named.
-    const far = fromDesign([{ x: 5, y: 0 }], "metric");
+    const far = fromDesign([{ x: 5, y: 0 }]);
     expect(far.value).toEqual([]);
     expect(far.problems).toHaveLength(1);
     expect(far.problems[0]!.path).toBe("");
     expect(far.problems[0]!.message).toMatch(/ The points were left out$/);
-    expect(fromDesign(null, "metric")).toEqual({ value: null, problems: [{ path: "", message: "must be a list of points" }] });
-    expect(fromDesign([1], "metric")).toEqual({ value: [], problems: [{ path: "", message: "must be points { x, y } in metres; they were left out" }] });
+    expect(fromDesign(null)).toEqual({ value: null, problems: [{ path: "", message: "must be a list of points" }] });
+    expect(fromDesign([1])).toEqual({ value: [], problems: [{ path: "", message: "must be points { x, y } in metres; they were left out" }] });
   });
 });
