@@ -20,7 +20,7 @@ describe("what-a-hit-does card", () => {
     expect(c.margin).toBe(
       "The rotor gives up 3550 J of 3550 J and drops to 109 rpm backwards; 336 J goes to the opponent; the contact force is 150 kN to 300 kN",
     );
-    expect([c.figure.label, c.figure.text]).toEqual(["Energy to the opponent", "336 J"]);
+    expect([c.figure?.label, c.figure?.text]).toEqual(["Energy to the opponent", "336 J"]);
     // Bite: 2 m/s / (2 impactors × 8000/60 rev/s) = 7.50 mm.
     expect(c.details.map((d) => [d.label, d.text])).toEqual([
       ["Impulse on your robot", "95.5 N·s"],

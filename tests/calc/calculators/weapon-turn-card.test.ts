@@ -13,9 +13,9 @@ function card(values: typeof defaults, system: "metric" | "us") {
 
 describe("turning-with-a-spinning-weapon card", () => {
   it("asks only for the horizontal axle's inputs, not the tilt and precession figures", () => {
-    expect(weaponTurn.applies?.("tiltRate")).toBe(false);
-    expect(weaponTurn.applies?.("precessionAngle")).toBe(false);
-    expect(weaponTurn.applies?.("weaponSpeed")).toBe(true);
+    expect(weaponTurn.applies?.("tiltRate", defaults)).toBe(false);
+    expect(weaponTurn.applies?.("precessionAngle", defaults)).toBe(false);
+    expect(weaponTurn.applies?.("weaponSpeed", defaults)).toBe(true);
   });
 
   it("turning in place: the lift rate, the drive's limits, the moment and the bearing pair (hand-derived)", () => {
