@@ -10,6 +10,7 @@ import { accelerometerPlacementInputs } from "../rotation/placement-inputs.ts";
 
 function card(values: AccelerometerPlacementInput, r: AccelerometerPlacement, system: UnitSystem): CheckCard {
   const len = (v: number) => formatQuantity(v, "length", { system }).text;
+  // Stryker disable next-line ObjectLiteral: equivalent, acceleration shows in gₙ in both unit systems
   const g = (v: number) => formatQuantity(v, "acceleration", { system }).text;
   const window = `${len(r.minRadius)} to ${len(r.maxRadius)}`;
   const [status, margin] = (
