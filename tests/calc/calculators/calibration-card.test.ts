@@ -40,6 +40,18 @@ describe("the calibration card", () => {
     expect(card.margin).toBe("Radius 0.4724 in, offset 0.2039 gₙ from 5 readings (least squares)");
     expect(card.figure!.text).toBe("0.4724 in");
   });
+  it("shows no R² when the readings do not vary (R² = 1 − SSE/Syy needs Syy > 0): a constant 5 m/s² gives radius 0, offset 5/9.80665 = 0.5099 gₙ", () => {
+    const values = { ...defaults, rows: [100, 150, 200].map((w) => ({ angularSpeed: w, acceleration: 5 })) } as never;
+    const card = calibration.cards(values, calibration.run(values) as never, "metric")[0]!;
+    expect(card.margin).toBe("Radius 0 mm, offset 0.5099 gₙ from 3 readings (least squares)");
+    expect(card.details!.map((d) => d.label)).toEqual(["Offset for the firmware"]);
+  });
+  it("names the spikes it left out: one reading 100 m/s² off the line among nine is flagged, and the rest give 12.00 mm and 0.2039 gₙ again", () => {
+    const rows = [100, 125, 150, 175, 200, 225, 250, 275, 300].map((w) => ({ angularSpeed: w, acceleration: 0.012 * w * w + 2 + (w === 200 ? 100 : 0) }));
+    const values = { ...defaults, rows } as never;
+    const card = calibration.cards(values, calibration.run(values) as never, "metric")[0]!;
+    expect(card.margin).toBe("Radius 12.00 mm, offset 0.2039 gₙ from 9 readings (least squares without spikes; 1 flagged as spikes)");
+  });
 });
 
 describe("the readings from a design file", () => {
@@ -56,10 +68,11 @@ describe("the readings from a design file", () => {
       { angularSpeed: 1, acceleration: Number.POSITIVE_INFINITY },
       { angularSpeed: Number.NaN, acceleration: 1 },
       { acceleration: 1 },
+      { angularSpeed: Number.POSITIVE_INFINITY, acceleration: 1 },
     ]);
     expect(read.value).toEqual([{ angularSpeed: 0, acceleration: 1 }]);
     const why = (n: number) => `Reading ${n} must be a speed of 0 rpm or more and an acceleration, both numbers; it was left out`;
-    expect(read.problems).toEqual([0, 1, 3, 4, 5, 6].map((i) => ({ path: `[${i}]`, message: why(i + 1) })));
+    expect(read.problems).toEqual([0, 1, 3, 4, 5, 6, 7].map((i) => ({ path: `[${i}]`, message: why(i + 1) })));
   });
 
   it("reads at most 500 readings and says how many the file listed; exactly 500 read without a word", () => {
