@@ -26,6 +26,7 @@ export default /* @__PURE__ */ defineCalculator(form, {
   cards(values, r, system) {
     const off = formatQuantity(values.offset, "length", { system }).text;
     const single = r.singleWorstPerRevolution;
+    const pairRate = formatQuantity(r.pairWorstDriftRate, "angularSpeed", { system, unit: "deg/s" }).text;
     return [
       {
         title: "One sensor or an opposed pair",
@@ -34,7 +35,8 @@ export default /* @__PURE__ */ defineCalculator(form, {
         margin:
           single === null
             ? `One sensor gives no estimate at one end of ±${off}; the pair is unaffected`
-            : `One sensor drifts up to ${formatQuantity(single, "angle", { system }).text} per revolution; the pair ${formatQuantity(r.pairWorstDriftRate, "angularSpeed", { system, unit: "deg/s" }).text}`,
+            : // Stryker disable next-line ObjectLiteral: equivalent, angles show in degrees in both unit systems
+              `One sensor drifts up to ${formatQuantity(single, "angle", { system }).text} per revolution; the pair ${pairRate}`,
         figure: single === null ? null : figureOf("One sensor, worst drift per revolution", single, "angle", system),
         details: [figureOf("Pair, worst drift rate", r.pairWorstDriftRate, "angularSpeed", system, "deg/s")],
       },
