@@ -79,6 +79,7 @@ function expectInputError(run: () => unknown, param: string, text?: RegExp): voi
 const DEFAULTS = Object.fromEntries(Object.entries(massBalanceInputs).map(([k, spec]) => [k, spec.default])) as MassBalanceScalars;
 
 import { coord, len, massArb, partArb } from "../support/arbitraries.ts";
+import { expectRefusal } from "../support/refusal.ts";
 const layoutArb = fc.array(partArb, { minLength: 1, maxLength: 8 });
 
 // ---------------------------------------------------------------------------------------------
@@ -1243,21 +1244,6 @@ describe("the counterweight the calculator applies (counterweightPlan)", () => {
 });
 
 describe("the mass-and-balance calculator and its counterweight at their edges", () => {
-  /** The CalcInputError `run` throws (fails the test when it returns or throws anything else). */
-  function refusal(run: () => unknown): CalcInputError {
-    try {
-      run();
-    } catch (error) {
-      if (error instanceof CalcInputError) return error;
-      throw error;
-    }
-    throw new Error("expected a refusal, got a result");
-  }
-  function expectRefusal(run: () => unknown, param: string, value: unknown, unit: string, message: string): void {
-    const error = refusal(run);
-    expect({ param: error.param, value: error.value, unit: error.unit }).toEqual({ param, value, unit });
-    expect(error.message).toBe(message);
-  }
   // A pure couple: 10 g at (50 mm, 0, 10 mm) and 10 g at (−50 mm, 0, −10 mm) on a 1.5 kg disk, I_xz = 1e-5 kg·m².
   const couplePair = [given({ kind: "disk", radius: 0.06 }, 1.5), point(0.01, 0.05, 0, 0.01), point(0.01, -0.05, 0, -0.01)];
   const planFor = (input: Parameters<typeof massBalance>[0], mode: "radius" | "mass" | "points") =>

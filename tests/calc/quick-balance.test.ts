@@ -14,6 +14,7 @@ import type { LayoutPart } from "../../calc/mass/parts.ts";
 import { massProperties } from "../../calc/mass/properties.ts";
 import { type QuickBalanceInput, quickBalance, quickBalanceInputs } from "../../calc/mass/quick-balance.ts";
 import { expectParamError, expectWellDeclared, inputArb, invalidInputArb } from "../support/arbitraries.ts";
+import { refusal } from "../support/refusal.ts";
 
 const base: QuickBalanceInput = {
   robotMass: 1.5,
@@ -294,16 +295,6 @@ describe("the quick balance's verdict at its edges (iso-21940-11: holds when U â
 });
 
 describe("the quick balance's refusals as the page words them", () => {
-  function refusal(run: () => unknown): CalcInputError {
-    try {
-      run();
-    } catch (error) {
-      if (error instanceof CalcInputError) return error;
-      throw error;
-    }
-    throw new Error("expected a refusal, got a result");
-  }
-
   it("lists the grade numbers of iso-21940-11 Table 1, in mm/s, for a grade that is not one of them", () => {
     const e = refusal(() => quickBalance({ ...base, grade: "5" }));
     expect([e.param, e.value, e.unit]).toEqual(["grade", "5", "mm/s"]);

@@ -5,7 +5,7 @@
  * page would see.
  */
 import { beforeEach, describe, expect, it, vi } from "vitest";
-import { DISPLAY, UNITS, unitTables } from "../../../calc/core/unit-table.ts";
+import { DISPLAY, UNITS, type UnitId, unitTables } from "../../../calc/core/unit-table.ts";
 
 type Units = typeof import("../../../calc/core/units.ts");
 let units: Units;
@@ -72,7 +72,8 @@ describe("registering", () => {
 
   it("adds the kind to each unit it registers", () => {
     units.useUnits(unitTables(["torque"]));
-    expect(units.unitDef("N·m")).toEqual({ ...UNITS["N·m"] });
+    const newtonMetre: UnitId = "N·m";
+    expect(units.unitDef(newtonMetre)).toEqual({ ...UNITS[newtonMetre] });
     expect(units.unitDef("lbf·in").kind).toBe("torque");
   });
 });

@@ -6,13 +6,7 @@
  */
 import { describe, expect, it } from "vitest";
 import { coupleUnbalance, equivalentBalanceGrade, finestGradeMet, permissibleResidualUnbalance, staticUnbalance, twoPlaneCorrection } from "#calc";
-import { refusal } from "../../support/refusal.ts";
-
-function expectRefusal(run: () => unknown, param: string, value: number, unit: string, message: string): void {
-  const error = refusal(run);
-  expect({ param: error.param, value: error.value, unit: error.unit }).toEqual({ param, value, unit });
-  expect(error.message).toBe(message);
-}
+import { expectRefusal } from "../../support/refusal.ts";
 
 describe("static unbalance and equivalent grade: the input that overflows them is named", () => {
   it("names a total mass whose rotating force passes the largest double", () => {

@@ -5,6 +5,7 @@
 import { describe, expect, it } from "vitest";
 import { CalcInputError } from "../../../calc/core/errors.ts";
 import { checkPart, directionOf, type LayoutPart, MAX_NAME_LENGTH, ownInertiaOf, partVolume } from "../../../calc/mass/parts.ts";
+import { refusal as thrown } from "../../support/refusal.ts";
 
 const given = { kind: "given", mass: 0.1 } as const;
 const part = (shape: object, mass: object = given, extra: object = {}) => ({ name: "p", shape, mass, x: 0, y: 0, z: 0, ...extra }) as unknown as LayoutPart;
@@ -16,17 +17,6 @@ function refusal(p: unknown): [string, string, string] {
   } catch (error) {
     if (error instanceof CalcInputError) return [error.param, error.unit, error.expected];
     throw error;
-  }
-  throw new Error("accepted");
-}
-
-/** The refusal a call throws. */
-function thrown(run: () => unknown): CalcInputError {
-  try {
-    run();
-  } catch (error) {
-    expect(error).toBeInstanceOf(CalcInputError);
-    return error as CalcInputError;
   }
   throw new Error("accepted");
 }

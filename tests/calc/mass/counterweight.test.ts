@@ -7,13 +7,7 @@
  */
 import { describe, expect, it } from "vitest";
 import { applyCounterweight, counterweightAtCandidates, counterweightAtRadius, counterweightRadiusForMass, type LayoutPart } from "#calc";
-import { refusal } from "../../support/refusal.ts";
-
-function expectRefusal(run: () => unknown, param: string, value: unknown, unit: string, message: string): void {
-  const error = refusal(run);
-  expect({ param: error.param, value: error.value, unit: error.unit }).toEqual({ param, value, unit });
-  expect(error.message).toBe(message);
-}
+import { expectRefusal } from "../../support/refusal.ts";
 
 // The worked robot of the functions' documentation: 1.4 kg, target 0.2 mm.
 const robot = { totalMass: 1.4, centreX: 0.002, centreY: 0, targetOffset: 0.0002 };

@@ -8,6 +8,7 @@ import { CalcInputError } from "../../../calc/core/errors.ts";
 import { STANDARD_GRAVITY } from "../../../calc/core/constants.ts";
 import { rpmToRadPerSecond } from "../../../calc/core/units.ts";
 import type { LayoutPart } from "../../../calc/mass/parts.ts";
+import { refusal as thrown } from "../../support/refusal.ts";
 
 const DEFAULTS = Object.fromEntries(Object.entries(massBalanceInputs).map(([k, spec]) => [k, spec.default])) as MassBalanceScalars;
 const RPM_2400 = rpmToRadPerSecond(2400);
@@ -15,16 +16,6 @@ const point = (mass: number, x: number, y: number, z = 0): LayoutPart => ({ name
 
 function rel(actual: number, expected: number): number {
   return Math.abs(actual - expected) / Math.abs(expected);
-}
-
-function thrown(run: () => unknown): CalcInputError {
-  try {
-    run();
-  } catch (error) {
-    expect(error).toBeInstanceOf(CalcInputError);
-    return error as CalcInputError;
-  }
-  throw new Error("expected a CalcInputError");
 }
 
 describe("spinCentre: reference checks", () => {
