@@ -4,7 +4,7 @@
  */
 import { requireRelation } from "../core/errors.ts";
 import { type HeadingDriftInput, headingDriftInputs } from "./drift-inputs.ts";
-import { requireWithinSpecs, declaredInputs, requireFiniteFields } from "../core/spec-check.ts";
+import { requireWithinSpecs } from "../core/spec-check.ts";
 import {
   type DriftPoint,
   type RadiusBand,
@@ -73,22 +73,17 @@ export function headingDrift(input: HeadingDriftInput): HeadingDriftResult {
   const verdict: DriftVerdict = atSpeed.driftRate === null ? "no-estimate" : Math.abs(atSpeed.driftRate) <= input.budget ? "within-budget" : "over-budget";
   // nist-ehandbook-propagation: σ_ω̂ = |∂ω̂/∂a| σ_a, ∂ω̂/∂a = 1/(2 r̂ ω̂)
   const rateNoise = atSpeed.estimate === null ? null : input.accelerationNoise / (2 * input.assumedRadius * atSpeed.estimate);
-  return requireFiniteFields(
-    {
-      atSpeed,
-      verdict,
-      budgetMargin: atSpeed.driftRate === null ? null : input.budget - Math.abs(atSpeed.driftRate),
-      radiusBand: assumedRadiusBand({ ...model, angularSpeed: input.angularSpeed, budget: input.budget }),
-      speedRange: speedRangeWithinBudget({ ...model, budget: input.budget }),
-      lowestEstimableSpeed: lowestEstimableSpeed(model),
-      rateNoise,
-      series: headingDriftSeries({ ...model, lowSpeed: input.lowSpeed, highSpeed: input.highSpeed, points: 61 }),
-    },
-    // Stryker disable next-line StringLiteral: equivalent, the guard cannot fire (each part is checked by its own function, and within the declared ranges the rate noise is at most 490/(2 × 1e−4 × 2.2e−162), the margin at most the budget)
-    "heading drift",
-    // Stryker disable next-line ArrowFunction: equivalent, the guard cannot fire (as above), so the inputs it would name are never asked for
-    () => declaredInputs(headingDriftInputs, input),
-  );
+  // No finiteness guard: each part is checked by its own function, and within the declared ranges the rate noise is at most 490/(2 × 1e−4 × 2.2e−162) and the margin at most the budget.
+  return {
+    atSpeed,
+    verdict,
+    budgetMargin: atSpeed.driftRate === null ? null : input.budget - Math.abs(atSpeed.driftRate),
+    radiusBand: assumedRadiusBand({ ...model, angularSpeed: input.angularSpeed, budget: input.budget }),
+    speedRange: speedRangeWithinBudget({ ...model, budget: input.budget }),
+    lowestEstimableSpeed: lowestEstimableSpeed(model),
+    rateNoise,
+    series: headingDriftSeries({ ...model, lowSpeed: input.lowSpeed, highSpeed: input.highSpeed, points: 61 }),
+  };
 }
 
 // ---------------------------------------------------------------------------------------------

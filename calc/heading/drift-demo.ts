@@ -5,7 +5,7 @@
 import { CalcInputError, requirePositive } from "../core/errors.ts";
 import { rpmToRadPerSecond, unitDef } from "../core/units.ts";
 import { type RadiusBand, type SpinRateErrorModel, assumedRadiusBand, headingDriftAt } from "./drift.ts";
-import { type NamedValues, requireFiniteResult, requireInputObject, requireList } from "../core/spec-check.ts";
+import { requireInputObject, requireList } from "../core/spec-check.ts";
 
 // 3. Worked example for the chapter.
 
@@ -73,26 +73,15 @@ export function radiusMismatchExample(input: {
       throw new CalcInputError({ param: `speedsRpm[${i}]`, value: rpm, expected: "large enough for the centripetal reading to be above 0", unit: "rpm" });
     const driftRate = point.driftRate!;
     const driftPerRevolution = point.driftPerRevolution!;
-    // A drift too large to show in degrees is refused in the caller's words: by the radius that took it there.
-    // Stryker disable next-line ObjectLiteral,ArrayDeclaration,StringLiteral: equivalent, the guards below cannot fire (with no offset headingDriftAt returns only a finite ω², r/r̂ and ω̂², so both drifts stay below about 1e155 and their degrees are finite)
-    const radii = { assumedRadius: [assumedRadius, "m"], trueRadius: [trueRadius, "m"] } satisfies NamedValues;
+    // Both drifts in degrees are finite without a guard: with no offset headingDriftAt returns only a finite ω², r/r̂ and
+    // ω̂², so both drifts stay below about 1e155.
     return {
       rpm,
       angularSpeed: point.angularSpeed,
       driftRate,
-      driftRateDegreesPerSecond: requireFiniteResult(
-        driftRate / unitDef("deg/s").factor,
-        // Stryker disable next-line StringLiteral: equivalent, the guard cannot fire (see radii above)
-        "drift rate in degrees per second",
-        radii,
-      ),
+      driftRateDegreesPerSecond: driftRate / unitDef("deg/s").factor,
       driftPerRevolution,
-      driftPerRevolutionDegrees: requireFiniteResult(
-        driftPerRevolution / unitDef("deg").factor,
-        // Stryker disable next-line StringLiteral: equivalent, the guard cannot fire (see radii above)
-        "drift per turn in degrees",
-        radii,
-      ),
+      driftPerRevolutionDegrees: driftPerRevolution / unitDef("deg").factor,
     };
   });
   const top = Math.max(...speedsRpm);

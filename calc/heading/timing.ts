@@ -5,7 +5,7 @@
  */
 import { requireNonNegative, requirePositive } from "../core/errors.ts";
 import { TURN } from "../core/constants.ts";
-import { requireWithinSpecs, requireInputObject, requireFiniteResult, declaredInputs, requireFiniteFields } from "../core/spec-check.ts";
+import { requireWithinSpecs, requireInputObject, requireFiniteResult } from "../core/spec-check.ts";
 
 // ---------------------------------------------------------------------------------------------
 // 1. Timing.
@@ -168,25 +168,20 @@ export function headingTiming(input: HeadingTimingInput): HeadingTimingResult {
   const arcWidth = beaconArc({ angularSpeed: topSpeed, onTime });
   const stepOk = headingStep <= targetStep;
   const arcOk = arcWidth <= targetArc;
-  return requireFiniteFields(
-    {
-      loopPeriod: 1 / loopRate,
-      headingStep,
-      updatesPerRevolution: (TURN * loopRate) / topSpeed,
-      latencyLag: latencyHeadingLag({ angularSpeed: topSpeed, latency }),
-      arcWidth,
-      loopRateNeeded: loopRateForStep({ angularSpeed: topSpeed, targetStep }),
-      onTimeNeeded: onTimeForArc({ angularSpeed: topSpeed, targetArc }),
-      onTimeBelowLoopPeriod: onTime < 1 / loopRate,
-      stepOk,
-      arcOk,
-      verdict: stepOk && arcOk ? "ok" : !stepOk && !arcOk ? "both" : !stepOk ? "step-too-large" : "arc-too-wide",
-    },
-    // Stryker disable next-line StringLiteral: equivalent, the guard cannot fire (the declared ranges keep every figure at or below 1e8)
-    "timing figures",
-    // Stryker disable next-line ArrowFunction: equivalent, the guard cannot fire (the declared ranges keep every figure at or below 1e8)
-    () => declaredInputs(headingTimingInputs, input),
-  );
+  // No finiteness guard: the declared ranges keep every figure at or below 1e8.
+  return {
+    loopPeriod: 1 / loopRate,
+    headingStep,
+    updatesPerRevolution: (TURN * loopRate) / topSpeed,
+    latencyLag: latencyHeadingLag({ angularSpeed: topSpeed, latency }),
+    arcWidth,
+    loopRateNeeded: loopRateForStep({ angularSpeed: topSpeed, targetStep }),
+    onTimeNeeded: onTimeForArc({ angularSpeed: topSpeed, targetArc }),
+    onTimeBelowLoopPeriod: onTime < 1 / loopRate,
+    stepOk,
+    arcOk,
+    verdict: stepOk && arcOk ? "ok" : !stepOk && !arcOk ? "both" : !stepOk ? "step-too-large" : "arc-too-wide",
+  };
 }
 
 // ---------------------------------------------------------------------------------------------

@@ -1,5 +1,5 @@
 import { rpmToRadPerSecond } from "../core/units.ts";
-import { ratioOrNull, requireWithinSpecs as requireDeclaredInputs, requireInputObject, declaredInputs, requireFiniteFields } from "../core/spec-check.ts";
+import { ratioOrNull, requireWithinSpecs as requireDeclaredInputs, requireInputObject } from "../core/spec-check.ts";
 import { requireChoice as requireOption } from "../core/choices.ts";
 import type { LoadVerdict as Verdict } from "../loads/common.ts";
 import {
@@ -237,23 +237,18 @@ export function weaponTurnCheck(input: WeaponTurnInput): WeaponTurnCheck {
   else if (tiltMargin !== null) governs = "tilt";
   const margin = governs === "turn" ? turnMargin! : governs === "tilt" ? tiltMargin! : null;
   const verdict: Verdict = margin === null ? "holds" : margin <= 1 ? "fails" : margin < v.liftMargin ? "marginal" : "holds";
-  return requireFiniteFields(
-    {
-      axle,
-      spin,
-      angularMomentum: angularMomentumValue,
-      turn,
-      tilt,
-      precession,
-      verdict,
-      governs,
-      reason: turnReason(verdict, governs, margin, turn, v.turnRate, v.liftMargin, axle),
-    },
-    // Stryker disable next-line StringLiteral: equivalent, the declared ranges keep every figure finite, so this guard never fires
-    "turn figures",
-    // Stryker disable next-line ArrowFunction: equivalent, called only when the guard fires, which the declared ranges prevent
-    () => declaredInputs(weaponTurnInputs, input),
-  );
+  // No finiteness guard: the declared ranges keep every figure finite.
+  return {
+    axle,
+    spin,
+    angularMomentum: angularMomentumValue,
+    turn,
+    tilt,
+    precession,
+    verdict,
+    governs,
+    reason: turnReason(verdict, governs, margin, turn, v.turnRate, v.liftMargin, axle),
+  };
 }
 
 function turnReason(
