@@ -57,7 +57,10 @@ export default /* @__PURE__ */ defineCalculator(form, {
         title: "Radius from a drift you see",
         status: "info",
         rule: "The firmware radius that cancels the drift at the speed it was seen: r̂′ = r̂·(1 + X/360°)²",
-        margin: `The heading ${r.driftPerRevolution >= 0 ? "ran ahead" : "fell behind"} ${drift} per turn with ${len(values.assumedRadius)}: set ${len(r.radius)}`,
+        margin:
+          r.driftPerRevolution === 0
+            ? `No drift with ${len(values.assumedRadius)}: keep it`
+            : `The heading ${r.driftPerRevolution > 0 ? "ran ahead" : "fell behind"} ${drift} per turn with ${len(values.assumedRadius)}: set ${len(r.radius)}`,
         figure: figureOf("Radius to set", r.radius, "length", system, undefined, 4),
         details: [figureOf("Change", r.change, "length", system, undefined, 3)],
       },

@@ -64,15 +64,24 @@ export default function RadiusTrimCalculator({ id = trimCalculator.anchor }: Rad
       <div class={`calc-results${result ? "" : " calc-results--empty"}`} id={resultsId} aria-live="polite">
         {result ? (
           <>
-            <p class="verdict verdict--ok">
-              <strong>
-                Set the firmware radius to <span data-out="radius">{len(result.radius)}</span>.
-              </strong>{" "}
-              The heading {result.driftPerRevolution >= 0 ? "ran ahead" : "fell behind"}{" "}
-              <span data-out="drift-turn">{inSystem(Math.abs(result.driftPerRevolution), "angle", system, 3)}</span> per turn: the spin-rate estimate ran{" "}
-              <span data-out="ratio">{formatNumber(Math.abs(result.speedRatio - 1) * 100)} %</span> {result.speedRatio >= 1 ? "fast" : "slow"}, so the radius
-              goes {result.change >= 0 ? "up" : "down"} by <span data-out="change">{inSystem(Math.abs(result.change), "length", system, 3)}</span>.
-            </p>
+            {result.driftPerRevolution === 0 ? (
+              <p class="verdict verdict--ok">
+                <strong>
+                  Keep the firmware radius at <span data-out="radius">{len(result.radius)}</span>.
+                </strong>{" "}
+                No drift: the spin-rate estimate is right at this speed.
+              </p>
+            ) : (
+              <p class="verdict verdict--ok">
+                <strong>
+                  Set the firmware radius to <span data-out="radius">{len(result.radius)}</span>.
+                </strong>{" "}
+                The heading {result.driftPerRevolution > 0 ? "ran ahead" : "fell behind"}{" "}
+                <span data-out="drift-turn">{inSystem(Math.abs(result.driftPerRevolution), "angle", system, 3)}</span> per turn: the spin-rate estimate ran{" "}
+                <span data-out="ratio">{formatNumber(Math.abs(result.speedRatio - 1) * 100)} %</span> {result.speedRatio >= 1 ? "fast" : "slow"}, so the radius
+                goes {result.change >= 0 ? "up" : "down"} by <span data-out="change">{inSystem(Math.abs(result.change), "length", system, 3)}</span>.
+              </p>
+            )}
             <p class="field-help">
               Exact at the speed where the drift was seen. If part of the drift came from an offset left in the sensor, that part fades as the speed rises: trim
               at the speed you drive at, or check the whole budget in the drift chapter.

@@ -99,6 +99,11 @@ describe("the pit flow", () => {
     // 10 °/s at 33.3 turns/s is 0.3° a turn behind: 12 mm × (1 − 0.3/360)² = 11.98 mm.
     await expect.poll(() => page.locator('[data-out="radius"]').textContent()).toBe("11.98 mm");
     await expect.poll(() => new URL(page.url()).searchParams.get("per")).toBe("second");
+    // No drift at all: keep the radius, in those words (it read "fell behind 0° … goes up by 0 mm").
+    await page.fill("#trim-calculator-driftRate", "0 °/s");
+    await expect
+      .poll(() => page.locator("#trim-calculator .verdict").textContent())
+      .toBe("Keep the firmware radius at 12.00 mm. No drift: the spin-rate estimate is right at this speed.");
     expect(problems).toEqual([]);
     await context.close();
   });

@@ -48,9 +48,11 @@ describe("radius-trim card", () => {
     expect(card.margin).toBe("The heading ran ahead 0.300° per turn with 8.000 mm: set 8.013 mm");
   });
 
-  it("reads a zero drift as running ahead 0° and keeps the radius", () => {
+  it('says a zero drift needs no change, whichever way it was marked (not "ran ahead 0°")', () => {
     for (const sense of ["ahead", "behind"]) {
-      expect(cardOf({ sense, driftPerTurn: 0 }, "metric").margin).toBe("The heading ran ahead 0° per turn with 8.000 mm: set 8.000 mm");
+      const card = cardOf({ sense, driftPerTurn: 0 }, "metric");
+      expect(card.margin).toBe("No drift with 8.000 mm: keep it");
+      expect(card.figure).toMatchObject({ label: "Radius to set", text: "8.000 mm" });
     }
   });
 });
