@@ -63,12 +63,14 @@ export default /* @__PURE__ */ defineCalculator(form, {
   cards(_values, fit, system) {
     const len = (v: number) => formatQuantity(v, "length", { system, significant: 4 }).text;
     const flagged = fit.spikes.flagged.length;
+    // A reading that does not rise with speed gives no radius to use (the page says the same).
+    const usable = fit.radius > 0;
     return [
       {
         title: "Calibration fit",
-        status: "info",
+        status: usable ? "info" : "fails",
         rule: "The firmware's radius and offset from logged readings, a = r·ω² + b",
-        margin: `Radius ${len(fit.radius)}, offset ${formatQuantity(fit.bias, "acceleration", { system, significant: 4 }).text} from ${fit.count} readings (${fit.method.replaceAll("-", " ")}${flagged ? `; ${flagged} flagged as spikes` : ""})`,
+        margin: `${usable ? "" : "No usable radius: the readings do not rise with speed (check which column is speed, which is reading, and their units). "}Radius ${len(fit.radius)}, offset ${formatQuantity(fit.bias, "acceleration", { system, significant: 4 }).text} from ${fit.count} readings (${fit.method.replaceAll("-", " ")}${flagged ? `; ${flagged} flagged as spikes` : ""})`,
         figure: figureOf("Radius for the firmware", fit.radius, "length", system, undefined, 4),
         details: [
           figureOf("Offset for the firmware", fit.bias, "acceleration", system, undefined, 4),

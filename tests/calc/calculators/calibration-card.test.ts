@@ -43,8 +43,18 @@ describe("the calibration card", () => {
   it("shows no R² when the readings do not vary (R² = 1 − SSE/Syy needs Syy > 0): a constant 5 m/s² gives radius 0, offset 5/9.80665 = 0.5099 gₙ", () => {
     const values = { ...defaults, rows: [100, 150, 200].map((w) => ({ angularSpeed: w, acceleration: 5 })) } as never;
     const card = calibration.cards(values, calibration.run(values) as never, "metric")[0]!;
-    expect(card.margin).toBe("Radius 0 mm, offset 0.5099 gₙ from 3 readings (least squares)");
+    expect(card.margin).toBe(
+      "No usable radius: the readings do not rise with speed (check which column is speed, which is reading, and their units). Radius 0 mm, offset 0.5099 gₙ from 3 readings (least squares)",
+    );
+    expect(card.status).toBe("fails");
     expect(card.details!.map((d) => d.label)).toEqual(["Offset for the firmware"]);
+  });
+  it("fails a fit whose radius comes out below 0 (readings falling with speed, e.g. the columns swapped): a = 5 − 0.0001·ω² gives −0.1 mm", () => {
+    const rows = [100, 150, 200].map((w) => ({ angularSpeed: w, acceleration: 5 - 0.0001 * w * w }));
+    const values = { ...defaults, rows } as never;
+    const card = calibration.cards(values, calibration.run(values) as never, "metric")[0]!;
+    expect(card.status).toBe("fails");
+    expect(card.margin).toMatch(/^No usable radius: the readings do not rise with speed .*Radius −0\.1000 mm, /);
   });
   it("names the spikes it left out: one reading 100 m/s² off the line among nine is flagged, and the rest give 12.00 mm and 0.2039 gₙ again", () => {
     const rows = [100, 125, 150, 175, 200, 225, 250, 275, 300].map((w) => ({ angularSpeed: w, acceleration: 0.012 * w * w + 2 + (w === 200 ? 100 : 0) }));
