@@ -350,8 +350,7 @@ export function eurocodeBoltShearResistance(input: { area: number; ultimateStren
   return requireFiniteResult((shearFactor * ultimateStrength * area) / partialFactor, "shear resistance", {
     area: [area, "m²"],
     ultimateStrength: [ultimateStrength, "Pa"],
-    shearFactor: [shearFactor, ""],
-    partialFactor: [partialFactor, ""],
+    // Not α_v (at most 1) or γ_M2 (1 to 10): when the product overflows, f_ub and A each exceed 1/α_v, so are further from 1.
   }); // en-1993-1-8 Table 3.4
 }
 
@@ -379,8 +378,7 @@ export function eurocodeBoltTensionResistance(input: { stressArea: number; ultim
   return requireFiniteResult((k2 * ultimateStrength * stressArea) / partialFactor, "tension resistance", {
     stressArea: [stressArea, "m²"],
     ultimateStrength: [ultimateStrength, "Pa"],
-    k2: [k2, ""],
-    partialFactor: [partialFactor, ""],
+    // Not k₂ (at most 1) or γ_M2 (1 to 10): when the product overflows, f_ub and A each exceed 1/k₂, so are further from 1.
   }); // en-1993-1-8 Table 3.4
 }
 
