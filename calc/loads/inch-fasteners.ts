@@ -221,7 +221,7 @@ export function unifiedClass2Limits(input: { nominalDiameter: number; pitch: num
   const { nominalDiameter, pitch } = requireInputObject(input);
   requireUnifiedPitch(nominalDiameter, pitch);
   if (!(nominalDiameter <= 6 * INCH)) {
-    throw new CalcInputError({ param: "nominalDiameter", value: nominalDiameter, expected: `at most 6 in (${6 * INCH} m)`, unit: "m" });
+    throw new CalcInputError({ param: "nominalDiameter", value: nominalDiameter, expected: "at most 6 in (0.1524 m)", unit: "m" });
   }
   const d = nominalDiameter / INCH;
   const p = pitch / INCH;
@@ -510,8 +510,9 @@ export function gradeForSize(input: { grade: string; size: string }): GradeForSi
     throw new CalcInputError({ param: "grade", value: grade, expected: `one of ${allowed} for the ${thread.system} size ${thread.size}`, unit: "" });
   }
   const d = thread.nominalDiameter;
-  // A relative tolerance absorbs the inch-to-metre rounding of both ends of the scope.
-  const withinScope = d >= row.scope[0] * (1 - 1e-9) && d <= row.scope[1] * (1 + 1e-9);
+  // No tolerance: the scope's ends and the sizes are the same table values (inches × INCH, or the metric rows), so compare exactly.
+  // Stryker disable next-line ConditionalExpression: equivalent, no size in the tables (3/8 in and M12 at most) is above a grade's upper scope end; kept for the standard's range
+  const withinScope = d >= row.scope[0] && d <= row.scope[1];
   const scopeNote = withinScope
     ? ""
     : `${row.label}: its standard covers ${Number((row.scope[0] / INCH).toPrecision(3))} to ${Number((row.scope[1] / INCH).toPrecision(3))} in; for ${thread.size} its values are applied by extension, an assumption.`;
