@@ -444,9 +444,8 @@ export function rimStressProfile(input: RimCheckInput, options: { points?: numbe
   }
   const start = shape === "solid-disk" ? 0 : innerRadius;
   return Array.from({ length: points }, (_, i) => {
-    // Stryker disable next-line EqualityOperator,ArithmeticOperator: equivalent, the last point is the rim itself or its formula's value, the same to within one ulp
+    // The last point is the rim itself: b·i/(n − 1) at i = n − 1 can miss it by an ulp, even past it.
     const last = i === points - 1;
-    // Stryker disable next-line ConditionalExpression: equivalent, as above
     const radius = last ? outerRadius : start + ((outerRadius - start) * i) / (points - 1);
     // These refuse nothing: rimCheck above has checked every field, and a sampled radius lies within the body.
     const stress =

@@ -8,6 +8,7 @@ import { describe, expect, it } from "vitest";
 import {
   annularDiskStress,
   RIM_CHOICE_DEFAULTS,
+  rimStressProfile,
   rimCheck,
   rimCheckInputs,
   solidDiskStress,
@@ -109,5 +110,15 @@ describe("the rim check's strengths", () => {
     const error = refusal(() => rimCheck({ ...RIM, shape: "annular-disk", innerRadius: 0.125, outerRadius: 0.125 }));
     expect([error.param, error.value, error.unit]).toEqual(["innerRadius", 0.125, "m"]);
     expect(error.range).toEqual({ min: 0, max: 0.125, minOpen: true, maxOpen: true });
+  });
+});
+
+describe("the rim's stress profile", () => {
+  it("ends exactly at the rim, where b·3/3 would miss it by an ulp (a 100 mm solid disk, 4 points)", () => {
+    // 0.1 × 3 / 3 = 0.10000000000000002 in doubles: past the rim, where the disk formula would refuse the radius.
+    const profile = rimStressProfile({ ...RIM, shape: "solid-disk", outerRadius: 0.1 }, { points: 4 });
+    expect(profile.map((p) => p.radius)).toEqual([0, 0.1 / 3, 0.2 / 3, 0.1]);
+    // At the free rim the radial stress is 0 (timoshenko-goodier: σ_r ∝ b² − r²).
+    expect(profile[3]!.radial).toBe(0);
   });
 });
