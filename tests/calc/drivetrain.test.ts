@@ -558,10 +558,15 @@ describe("design comparison", () => {
     expect(sweep.points.map((p) => p.value)).toEqual([2, 3, 4, 5, 6, 7, 8]);
   });
 
-  it("runs 50 points well within a second", () => {
-    const start = performance.now();
-    sweepDrivetrain({ base: DEMO_SPINNER, parameter: "wheelRadius", from: 0.01, to: 0.04, points: 50 });
-    expect(performance.now() - start).toBeLessThan(1000);
+  it("keeps a 50-point sweep cheap: each point's spin-up takes a few hundred solver steps, far inside the 50 000-step budget", () => {
+    // Counted, not timed (a wall-clock bound in a test fails on a busy machine): the work of a sweep
+    // is its points' solver steps; `npm run bench` reports the time.
+    const sweep = sweepDrivetrain({ base: DEMO_SPINNER, parameter: "wheelRadius", from: 0.01, to: 0.04, points: 50 });
+    expect(sweep.points).toHaveLength(50);
+    for (const { value } of sweep.points) {
+      const { solver } = simulateSpinUp({ ...DEMO_SPINNER, wheelRadius: value }, { series: false });
+      expect(solver.acceptedSteps + solver.rejectedSteps).toBeLessThan(500); // 97 to 202 here
+    }
   });
 
   it("splits into values, points and an optimum that a page can run in batches, with the same answer", () => {
