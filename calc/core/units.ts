@@ -125,7 +125,8 @@ export function formatNumber(value: number, significant = 3): string {
   const rounded = Number(value.toPrecision(significant));
   const abs = Math.abs(rounded);
   if (abs >= 1e6 || abs < 1e-3) {
-    const [mantissa, exponent] = rounded.toExponential(significant - 1).split("e");
+    // From the value itself: the largest doubles round past the largest double (1.80 × 10³⁰⁸ to three figures).
+    const [mantissa, exponent] = value.toExponential(significant - 1).split("e");
     const power = String(Number(exponent)).replace(/./g, (c) => SUPERSCRIPT[c] ?? c);
     return `${mantissa!.replace("-", "−")} × 10${power}`;
   }
