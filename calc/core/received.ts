@@ -2,7 +2,7 @@
  * A received value in words, for the "(got …)" of a message. Apart from inputs.ts so that only the
  * pages that report stored or linked values (the build sheet, the parts list) carry it.
  */
-import { fromSI, type UnitId, unitDef } from "./units.ts";
+import { lookupUnit, type UnitId } from "./units.ts";
 
 /**
  * What a stored or typed value was, for a message, in the field's unit: "-3000 mm" for -3 m in a
@@ -24,9 +24,10 @@ export function describeReceived(value: unknown, unit?: UnitId): string {
     if (Number.isNaN(value)) return "not a number";
     if (!Number.isFinite(value)) return value > 0 ? "a number too large to store" : "a negative number too large to store";
     // An unknown unit (not one of calc/core's ids) is left out rather than guessed.
-    const def: { symbol: string } | undefined = unit === undefined ? undefined : unitDef(unit);
+    const def = lookupUnit(unit);
     if (!def) return String(Number(value.toPrecision(6)));
-    const shown = Number(fromSI(value, unit!).toPrecision(6));
+    // Divided here, not by fromSI, which refuses a value that leaves the doubles in the new unit.
+    const shown = Number((value / def.factor).toPrecision(6));
     return Number.isFinite(shown) ? `${shown}${def.symbol ? ` ${def.symbol}` : ""}` : "a number too large to show in that unit";
   }
   if (typeof value === "string") return `the text ${JSON.stringify(value.length > 40 ? `${value.slice(0, 40)}…` : value)}`;
