@@ -47,7 +47,7 @@ describe("requireRelation exactly on its limit", () => {
     { relation: "less", value: 0.49999999999999994, ok: true },
     { relation: "at-most", value: 0.5, ok: true },
     { relation: "at-most", value: 0.5000000000000001, ok: false },
-  ] as const)("$relation 0.5 m: $value is ${ok}", ({ relation, value, ok }) => {
+  ] as const)("$relation 0.5 m: $value passes: $ok", ({ relation, value, ok }) => {
     if (ok) expect(requireRelation("gap", value, relation, 0.5, length)).toBe(value);
     else expect(refusal(() => requireRelation("gap", value, relation, 0.5, length)).bound).toEqual({ relation, limit: 0.5, kind: "length" });
   });
