@@ -14,6 +14,7 @@ import {
   type UnitDef,
   type UnitId,
   type UnitSystem,
+  siUnit,
   unitDef,
 } from "./units.ts";
 
@@ -97,11 +98,13 @@ export function checkValue(spec: InputSpec, valueSI: number, system: UnitSystem)
   const tooHigh = !(valueSI <= spec.max);
   const notWhole = spec.integer === true && !Number.isInteger(valueSI);
   if (!Number.isFinite(valueSI) || tooLow || tooHigh || notWhole) {
+    // A value that leaves the doubles in the field's unit (1e308 m in millimetres) is stated in SI, with the SI symbol.
+    const inFieldUnit = Number.isFinite(shownValue);
     return new CalcInputError({
       param: spec.label,
-      value: Number.isFinite(shownValue) ? shownValue : valueSI,
+      value: inFieldUnit ? shownValue : valueSI,
       expected: describeRange(spec, system),
-      unit: unitDef(unit).symbol,
+      unit: unitDef(inFieldUnit ? unit : siUnit(spec.kind)).symbol,
     });
   }
   return null;
