@@ -172,6 +172,7 @@ export function plainNumber(value: number): string {
   const [, sign, lead, rest = "", exp] = match;
   const digits = lead! + rest;
   const power = Number(exp);
+  // Stryker disable next-line EqualityOperator: equivalent, String writes an exponent only from e+21 up and e-7 down, so power is never 0
   const plain = power < 0 ? `${sign}0.${"0".repeat(-power - 1)}${digits}` : `${sign}${digits}${"0".repeat(Math.max(0, power - rest.length))}`;
   return plain.length <= 24 ? plain : text;
 }
@@ -182,6 +183,7 @@ export function plainNumber(value: number): string {
  * such number exists.
  */
 function exactMultiple(valueSI: number, factor: number): number | null {
+  // Stryker disable next-line ConditionalExpression: equivalent, for a factor of 1 the loop below finds the same double (n × 1 = n), a shortcut only
   if (factor === 1) return valueSI;
   const n = valueSI / factor;
   for (let figures = 1; figures <= 17; figures += 1) {
@@ -195,7 +197,8 @@ function exactMultiple(valueSI: number, factor: number): number | null {
     bits[0] = n;
     word[0]! += step;
     const candidate = bits[0]!;
-    if (Number.isFinite(candidate) && candidate * factor === valueSI) return candidate;
+    // A step past the largest double gives ±Infinity (or NaN from NaN), whose product is never the finite valueSI.
+    if (candidate * factor === valueSI) return candidate;
   }
   return null;
 }
@@ -221,7 +224,7 @@ export function exactQuantity(valueSI: number, unit: UnitId): { number: string; 
   const def = known(UNIT, unit, "unit");
   const n = exactMultiple(valueSI, def.factor);
   if (n === null) return { number: plainNumber(valueSI), unit: siUnit(def.kind) };
-  return { number: plainNumber(Object.is(n, -0) ? 0 : n), unit };
+  return { number: plainNumber(n), unit }; // plainNumber writes −0 as "0" (String(-0))
 }
 
 /**
@@ -232,7 +235,7 @@ export function exactQuantity(valueSI: number, unit: UnitId): { number: string; 
 export function quantityToText(valueSI: number, unit: UnitId): string {
   const exact = exactQuantity(valueSI, unit);
   if (exact.unit !== unit) return `${exact.number}${siUnitText(UNIT[unit]!.kind)}`;
-  return `${exact.number}${UNIT[unit]!.symbol === "" ? "" : urlSpelling(unit)}`;
+  return `${exact.number}${urlSpelling(unit)}`; // a unit without a symbol (a ratio, a count) is spelled ""
 }
 
 /**
@@ -243,7 +246,7 @@ export function quantityToText(valueSI: number, unit: UnitId): string {
 export function exactNumberText(valueSI: number, factor: number): string {
   if (!Number.isFinite(valueSI)) throw new CalcInputError({ param: "value", value: valueSI, expected: "a finite number", unit: "" });
   const n = exactMultiple(valueSI, factor);
-  return n === null ? `${plainNumber(valueSI)}si` : plainNumber(Object.is(n, -0) ? 0 : n);
+  return n === null ? `${plainNumber(valueSI)}si` : plainNumber(n); // plainNumber writes −0 as "0"
 }
 
 const EXACT_NUMBER = /^([+-]?(?:\d+(?:\.\d*)?|\.\d+)(?:[eE][+-]?\d+)?)(si)?$/;

@@ -4,7 +4,7 @@
  * step, every message a field shows for text it cannot read, the spellings read and refused, and
  * numbers written for links and files that must read back exactly.
  */
-import { describe, expect, it } from "vitest";
+import { describe, expect, it, vi } from "vitest";
 import {
   displayUnit,
   exactNumberText,
@@ -287,6 +287,14 @@ describe("exact numbers for links and files", () => {
     expect(quantityToText(-0, "mm")).toBe("0mm");
   });
 
+  it("uses all seventeen figures when no shorter number reads back", () => {
+    // 102 × 0.001 is 0.10200000000000001 in doubles, not 0.102; 101.99999999999999 × 0.001 is 0.102.
+    expect(102 * 0.001).not.toBe(0.102);
+    expect(quantityToText(0.102, "mm")).toBe("101.99999999999999mm");
+    expect(parseQuantity("101.99999999999999mm", "length", "mm")).toMatchObject({ ok: true, valueSI: 0.102 });
+    expect(exactNumberText(0.102, 0.001)).toBe("101.99999999999999");
+  });
+
   it("finds the number one step in the last place above the quotient when no rounding of it reads back", () => {
     // 1/49 is 0.020408163265306121 as a double, and that times 49 is 0.9999999999999999; the next
     // double up, 0.020408163265306124, times 49 is 1 exactly.
@@ -405,5 +413,28 @@ describe("conversions and registration refuse what they cannot do, by name", () 
       count: "count",
     };
     for (const [kind, id] of Object.entries(si)) expect(siUnit(kind as QuantityKind), kind).toBe(id);
+  });
+});
+
+describe("a spelling that differs from another unit's only in case", () => {
+  // The megametre (Mm) and the millimetre (mm): SI prefixes mega (10⁶) and milli (10⁻³), NIST SP 811 Table 5.
+  // The handbook's own table has no such pair, so a fresh copy of the module registers one.
+  it("reads the exact spelling first, and no unit when ignoring case leaves two", async () => {
+    vi.resetModules();
+    const fresh = await import("../../../calc/core/units.ts");
+    fresh.useUnits([
+      {
+        kind: "length",
+        units: { m: { symbol: "m", factor: 1 }, mm: { symbol: "mm", factor: 1e-3 }, Mm: { symbol: "Mm", factor: 1e6 } } as never,
+        display: [["mm"]],
+      },
+    ]);
+    expect(fresh.findUnit("mm", "length")).toBe("mm");
+    expect(fresh.findUnit("Mm", "length")).toBe("Mm");
+    expect(fresh.findUnit("MM", "length")).toBeUndefined();
+    expect(fresh.findUnit("mM", "length")).toBeUndefined();
+    expect(fresh.findUnit("M", "length")).toBe("m");
+    expect(fresh.parseQuantity("2 Mm", "length", "mm")).toMatchObject({ ok: true, valueSI: 2e6 });
+    expect(fresh.parseQuantity("2 MM", "length", "mm")).toMatchObject({ ok: false, reason: "unknown-unit" });
   });
 });
