@@ -8,6 +8,7 @@
 function describeValue(value: unknown): string {
   if (typeof value === "number") {
     if (Number.isNaN(value)) return "not a number";
+    // Stryker disable next-line EqualityOperator: equivalent, an infinite value is never 0
     if (!Number.isFinite(value)) return value > 0 ? "infinity" : "minus infinity";
     return String(Number(value.toPrecision(6)));
   }
@@ -72,7 +73,8 @@ export class CalcInputError extends RangeError implements CalcInputErrorFields {
 
   constructor(fields: CalcInputErrorFields) {
     const got = describeValue(fields.value);
-    const unit = fields.unit && typeof fields.value === "number" && Number.isFinite(fields.value) ? ` ${fields.unit}` : "";
+    // Number.isFinite is false for anything that is not a number (it does not convert).
+    const unit = fields.unit && Number.isFinite(fields.value) ? ` ${fields.unit}` : "";
     super(`${fields.param} must be ${fields.expected} (got ${got}${unit})`);
     this.name = "CalcInputError";
     this.param = fields.param;
@@ -116,7 +118,8 @@ export function requireRelation(
 
 /** Throws unless `value` is a finite number. */
 export function requireFinite(param: string, value: number, unit: string): number {
-  if (typeof value !== "number" || !Number.isFinite(value)) {
+  // Number.isFinite is false for anything that is not a number (it does not convert "1").
+  if (!Number.isFinite(value)) {
     throw new CalcInputError({ param, value, expected: "a finite number", unit });
   }
   return value;
@@ -146,7 +149,8 @@ export function requireNonNegative(param: string, value: number, unit: string): 
 export function requireInRange(param: string, value: number, unit: string, range: InputRange): number {
   // A missing range (a call with null) fails every comparison: the value is refused, by name.
   const { min, max, minOpen, maxOpen } = range ?? ({} as InputRange);
-  if (typeof value !== "number" || !Number.isFinite(value)) {
+  // Number.isFinite is false for anything that is not a number (it does not convert "1").
+  if (!Number.isFinite(value)) {
     throw new CalcInputError({ param, value, expected: "a finite number", unit, range });
   }
   const lowOk = minOpen ? value > min : value >= min;

@@ -72,6 +72,16 @@ describe("requireRelation exactly on its limit", () => {
     expect(error.bound).toEqual({ relation: "greater", limit: 52.35987755982988, kind: "angularSpeed", other: "lowSpeed" });
   });
 
+  it("keeps no name of another input in the rule when the limit is a plain number", () => {
+    const error = refusal(() => requireRelation("gap", 2, "at-most", 1, length));
+    expect(error.bound).toStrictEqual({ relation: "at-most", limit: 1, kind: "length" });
+  });
+
+  it("words a relation it does not know by its own name, and checks it as at most", () => {
+    expectRefusal(() => requireRelation("gap", 3, "below" as never, 2, length), "gap", 3, "m", "gap must be below 2 m (got 3 m)");
+    expect(requireRelation("gap", 2, "below" as never, 2, length)).toBe(2);
+  });
+
   it("writes a limit without a unit when the quantity has none", () => {
     expectRefusal(() => requireRelation("ratio", 2, "at-most", 1, { kind: "fraction", unit: "" }), "ratio", 2, "", "ratio must be at most 1 (got 2)");
   });
