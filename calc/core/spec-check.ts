@@ -37,6 +37,7 @@ export function requireDeclared(spec: InputSpec, name: string, value: unknown): 
   if (spec === null || typeof spec !== "object")
     throw new CalcInputError({ param: String(name), value, expected: "an input this calculator declares", unit: "" });
   const unit = siSymbol(spec);
+  // Stryker disable next-line ConditionalExpression: equivalent, Number.isFinite is false for anything not a number (the typeof narrows the type)
   if (typeof value !== "number" || !Number.isFinite(value)) {
     throw new CalcInputError({ param: name, value, expected: "a finite number", unit });
   }
@@ -107,6 +108,7 @@ export function ratioOrNull(a: number, b: number): number | null {
 /** True when every number in `value` (its fields and list items, deeply) is finite. */
 function everyNumberFinite(value: unknown): boolean {
   if (typeof value === "number") return Number.isFinite(value);
+  // Stryker disable next-line ConditionalExpression: equivalent, a for…in over null runs no iteration, so null reads as finite either way
   if (value === null || typeof value !== "object") return true;
   // A loop without copies: a simulation's result holds a few thousand numbers.
   for (const key in value) if (!everyNumberFinite((value as Record<string, unknown>)[key])) return false;

@@ -99,6 +99,9 @@ describe("requireDeclared exactly on its limits", () => {
       "",
       "speed must be an input this calculator declares (got 3)",
     );
+    expectRefusal(() => requireDeclared(null as unknown as InputSpec, "speed", 3), "speed", 3, "", "speed must be an input this calculator declares (got 3)");
+    // A name that is not text is named as text.
+    expectRefusal(() => requireDeclared(null as unknown as InputSpec, 7 as never, 3), "7", 3, "", "7 must be an input this calculator declares (got 3)");
   });
 });
 
