@@ -97,7 +97,8 @@ export function checkValue(spec: InputSpec, valueSI: number, system: UnitSystem)
   const tooLow = spec.minOpen ? !(valueSI > spec.min) : !(valueSI >= spec.min);
   const tooHigh = !(valueSI <= spec.max);
   const notWhole = spec.integer === true && !Number.isInteger(valueSI);
-  if (!Number.isFinite(valueSI) || tooLow || tooHigh || notWhole) {
+  // No separate finiteness test: NaN fails both comparisons, +Infinity the high one, -Infinity the low one.
+  if (tooLow || tooHigh || notWhole) {
     // A value that leaves the doubles in the field's unit (1e308 m in millimetres) is stated in SI, with the SI symbol.
     const inFieldUnit = Number.isFinite(shownValue);
     return new CalcInputError({

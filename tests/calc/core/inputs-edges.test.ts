@@ -63,6 +63,7 @@ describe("the unit a field shows", () => {
     expect(fieldUnit(specs.margin, "metric")).toBe("pct");
     expect(fieldUnit(specs.radius, "us")).toBe("in");
     expect(fieldUnit({ ...specs.radius, unit: { us: "ft" } }, "metric")).toBe("mm");
+    expect(fieldUnit({ ...specs.radius, unit: { metric: "m", us: "ft" } }, "us")).toBe("ft");
     expectRefusal(() => fieldUnit(null as never, "metric"), "spec", null, "", "spec must be an input declaration (got null)");
   });
 });
@@ -109,6 +110,10 @@ describe("checkValue exactly on the limits", () => {
   });
 
   it("refuses a value that is not finite, and says what it was", () => {
+    expect(checkValue(specs.radius, Number.NEGATIVE_INFINITY, "metric")?.message).toBe(
+      "Hub radius must be greater than 0 mm and at most 1235 mm (got minus infinity)",
+    );
+    expect(checkValue(specs.margin, Number.NaN, "metric")?.message).toBe("Headroom must be between 0 % and 95 % (got not a number)");
     expect(checkValue(specs.radius, Number.NaN, "metric")?.message).toBe("Hub radius must be greater than 0 mm and at most 1235 mm (got not a number)");
     expect(checkValue(specs.radius, Number.POSITIVE_INFINITY, "metric")?.message).toBe(
       "Hub radius must be greater than 0 mm and at most 1235 mm (got infinity)",
