@@ -63,6 +63,7 @@ export function readLinkKeys(search: string, scope: string, keys: readonly LinkK
   for (const [fullKey, value] of params) {
     if (fullKey === "v") continue;
     const dot = fullKey.indexOf(".");
+    // Stryker disable next-line EqualityOperator: equivalent, a dot at 0 leaves the empty scope either way
     const keyScope = dot >= 0 ? fullKey.slice(0, dot) : "";
     if (keyScope !== scope) continue;
     const key = dot >= 0 ? fullKey.slice(dot + 1) : fullKey;
@@ -100,7 +101,9 @@ export function writeLinkKeys(existing: string, scope: string, system: UnitSyste
   const params = new URLSearchParams(existing);
   for (const key of [...params.keys()]) {
     const dot = key.indexOf(".");
-    if ((dot >= 0 ? key.slice(0, dot) : "") === scope && key !== "v") params.delete(key);
+    // "v" is in no scope but the main one's; it is deleted below whatever the scope.
+    // Stryker disable next-line EqualityOperator: equivalent, a dot at 0 leaves the empty scope either way
+    if ((dot >= 0 ? key.slice(0, dot) : "") === scope) params.delete(key);
   }
   params.delete("v");
   params.set(scoped(scope, "u"), system);

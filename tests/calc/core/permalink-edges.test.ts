@@ -74,6 +74,11 @@ describe("readLinkKeys", () => {
     expect(readLinkKeys("t.colour=red", "t", keys).notices).toEqual(['The link has a parameter "t.colour" that this calculator does not use; it was ignored.']);
   });
 
+  it("reads a key with nothing before its dot as the main scope's", () => {
+    expect(readLinkKeys(".r=5", "", keys)).toEqual({ values: { r: "5" }, system: undefined, notices: [] });
+    expect(writeLinkKeys(".r=5&t.r=1", "", "us", {})).toBe("v=1&t.r=1&u=us");
+  });
+
   it("reads a key whose value holds a dot, and a scope only before the first dot", () => {
     expect(readLinkKeys("r=1.5", "", keys).values).toEqual({ r: "1.5" });
     expect(readLinkKeys("a.b.r=1", "a", keys).notices).toEqual(['The link has a parameter "a.b.r" that this calculator does not use; it was ignored.']);
