@@ -128,6 +128,11 @@ describe("readLink", () => {
     });
   });
 
+  it("holds no entry at all for a key the link does not set", () => {
+    expect(readLink(form, "r=1mm")).toStrictEqual({ texts: { radius: "1mm" }, choices: {}, extras: {}, system: undefined, notices: [] });
+    expect(readLink(form, "")).toStrictEqual({ texts: {}, choices: {}, extras: {}, system: undefined, notices: [] });
+  });
+
   it("ignores a choice not on the list, naming it in lower case", () => {
     expect(readLink(form, "drive=chain").notices).toEqual(['The link\'s drive type "chain" is not one this calculator offers; it was ignored.']);
     expect(readLink(form, "drive=chain").choices).toEqual({});
@@ -166,6 +171,10 @@ describe("textsOf and links from values", () => {
       choices: { drive: "direct" },
       extras: {},
     });
+  });
+
+  it("holds no entry at all for a value left out", () => {
+    expect(textsOf(form, { radius: 0.03 }, "metric")).toStrictEqual({ texts: { radius: "30mm" }, choices: {}, extras: {} });
   });
 
   it("refuses missing values by name", () => {
