@@ -22,6 +22,7 @@ import { lookupUnit, type UnitId } from "./units.ts";
 export function describeReceived(value: unknown, unit?: UnitId): string {
   if (typeof value === "number") {
     if (Number.isNaN(value)) return "not a number";
+    // Stryker disable next-line EqualityOperator: equivalent, an infinite value is never 0
     if (!Number.isFinite(value)) return value > 0 ? "a number too large to store" : "a negative number too large to store";
     // An unknown unit (not one of calc/core's ids) is left out rather than guessed.
     const def = lookupUnit(unit);

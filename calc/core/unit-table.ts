@@ -210,10 +210,10 @@ export interface KindUnits {
 
 /** The tables of the given kinds (every kind when none are given), as `useUnits` takes them. */
 export function unitTables(kinds: readonly QuantityKind[] = Object.keys(DISPLAY) as QuantityKind[]): KindUnits[] {
-  if (!Array.isArray(kinds as unknown)) throw new CalcInputError({ param: "kinds", value: String(kinds), expected: "a list of quantity kinds", unit: "" });
+  if (!Array.isArray(kinds as unknown)) throw new CalcInputError({ param: "kinds", value: kinds, expected: "a list of quantity kinds", unit: "" });
   return kinds.map((kind) => {
     const display = typeof kind === "string" && Object.hasOwn(DISPLAY, kind) ? DISPLAY[kind] : undefined;
-    if (!display) throw new CalcInputError({ param: "kinds", value: String(kind), expected: "quantity kinds (length, mass, …)", unit: "" });
+    if (!display) throw new CalcInputError({ param: "kinds", value: kind, expected: "quantity kinds (length, mass, …)", unit: "" });
     const units = Object.fromEntries(
       Object.entries(UNITS as Record<string, UnitDef>)
         .filter(([, def]) => def.kind === kind)

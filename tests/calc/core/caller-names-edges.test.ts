@@ -42,6 +42,15 @@ describe("asCallerNames", () => {
     expect(thrown).toBe(original);
   });
 
+  it("renames only refusals: another error that happens to carry a name it knows passes through as it is", () => {
+    const original = Object.assign(new Error("radius broke"), { param: "radius", value: 1 });
+    expect(() =>
+      asCallerNames({ radius: "r1" }, () => {
+        throw original;
+      }),
+    ).toThrow(original);
+  });
+
   it("passes any other error through as it is", () => {
     const original = new TypeError("not a function");
     expect(() =>

@@ -25,6 +25,7 @@ describe("requireChoice", () => {
   it("refuses every value when the list is missing or holds gaps", () => {
     expectRefusal(() => requireChoice("mode", "shear", null as never), "mode", "shear", "", 'mode must be one of  (got "shear")');
     expect(requireChoice("mode", "shear", [null, ...modes] as never)).toBe("shear");
+    expectRefusal(() => requireChoice("mode", "x", [null, ...modes] as never), "mode", "x", "", 'mode must be one of , shear, tension (got "x")');
   });
 });
 
