@@ -272,7 +272,7 @@ function urlSpelling(id: UnitId): string {
  */
 export function linkSpelling(text: string): string {
   if (typeof text !== "string") throw new CalcInputError({ param: "text", value: text, expected: "text", unit: "" });
-  const compact = text.replace(/\s+/g, "");
+  const compact = text.replace(/\s/g, "");
   const match = /^([+\-−]?[\d.,]+(?:[eE][+\-−]?\d+)?)(.+)$/.exec(compact);
   if (!match || /^[\w/.%]*$/.test(match[2]!)) return compact;
   const id = (Object.keys(UNIT) as UnitId[]).find((u) => UNIT[u]!.symbol === match[2]);
@@ -289,14 +289,17 @@ export type ParseResult =
 const NUMBER_AND_UNIT = /^([+\-−]?(?:\d+(?:[.,]\d*)?|[.,]\d+)(?:[eE][+\-−]?\d+)?)\s*(.*)$/;
 
 function normaliseUnitText(text: string): string {
-  return text
-    .trim()
-    .replace(/\s+/g, " ")
-    .replace(/[μu](?=s$)/, "µ")
-    .replace(/\^?²/g, "2")
-    .replace(/\^?³/g, "3")
-    .replace(/\^2/g, "2")
-    .replace(/\^3/g, "3");
+  return (
+    text
+      .trim()
+      .replace(/\s+/g, " ")
+      .replace(/[μu](?=s$)/, "µ")
+      // A caret before a superscript ("m^²") goes with the caret rules below.
+      .replace(/²/g, "2")
+      .replace(/³/g, "3")
+      .replace(/\^2/g, "2")
+      .replace(/\^3/g, "3")
+  );
 }
 
 /** Looks up a unit of `kind` by symbol, id or alias: exact spelling first, then ignoring case. */

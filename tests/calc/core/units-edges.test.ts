@@ -213,6 +213,12 @@ describe("parseQuantity: every message a field shows", () => {
     expect(parseQuantity("1e299 GPa", "stress", "MPa")).toMatchObject({ ok: true, valueSI: 1e308 });
   });
 
+  it("reads the number only at the start of the text, and the unit to its end", () => {
+    expect(parseQuantity("about 5 mm", "length", "mm")).toEqual({ ok: false, reason: "not-a-number", message: "must start with a number, e.g. 32 mm" });
+    expect(parseQuantity("5 mm\nx", "length", "mm")).toEqual({ ok: false, reason: "not-a-number", message: "must start with a number, e.g. 32 mm" });
+    expect(parseQuantity("5 mm x", "length", "mm")).toMatchObject({ ok: false, reason: "unknown-unit" });
+  });
+
   it("says an empty or blank field is required", () => {
     expect(parseQuantity("", "length", "mm")).toEqual({ ok: false, reason: "empty", message: "is required" });
     expect(parseQuantity("\t \n", "length", "mm")).toEqual({ ok: false, reason: "empty", message: "is required" });
@@ -293,6 +299,21 @@ describe("exact numbers for links and files", () => {
     expect(quantityToText(0.102, "mm")).toBe("101.99999999999999mm");
     expect(parseQuantity("101.99999999999999mm", "length", "mm")).toMatchObject({ ok: true, valueSI: 0.102 });
     expect(exactNumberText(0.102, 0.001)).toBe("101.99999999999999");
+  });
+
+  it.each([
+    { value: 2e-6, unit: "mm2", text: "2mm2" },
+    { value: Math.PI / 12, unit: "deg", text: "15deg" },
+    { value: 2.5e-4, unit: "us", text: "250us" },
+    { value: 3, unit: "m/s2", text: "3m/s2" },
+    { value: 2000, unit: "kg/m3", text: "2000kg/m3" },
+    { value: 8, unit: "ohm", text: "8ohm" },
+    { value: 0.008, unit: "mohm", text: "8mohm" },
+    { value: 1, unit: "kg·m2", text: "1kgm2" },
+    { value: 5, unit: "rad/s", text: "5rad/s" },
+    { value: 2 * Math.PI, unit: "rps", text: "1rev/s", why: "a plain symbol with a slash is written as shown, not by its id" },
+  ] as const)("writes $value SI in $unit as $text, with the unit in letters a URL keeps as they are", ({ value, unit, text }) => {
+    expect(quantityToText(value, unit)).toBe(text);
   });
 
   it("finds the number one step in the last place above the quotient when no rounding of it reads back", () => {
