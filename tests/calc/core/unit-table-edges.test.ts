@@ -3,7 +3,8 @@
  * quantity kinds.
  */
 import { describe, expect, it } from "vitest";
-import { DISPLAY, unitTables } from "../../../calc/core/unit-table.ts";
+import { DISPLAY, type QuantityKind, type UnitId, unitTables } from "../../../calc/core/unit-table.ts";
+import { displayUnit } from "../../../calc/core/units.ts";
 import { expectRefusal } from "../../support/refusal.ts";
 
 describe("unitTables refuses what is not a quantity kind", () => {
@@ -26,5 +27,52 @@ describe("unitTables refuses what is not a quantity kind", () => {
     expect(unitTables([])).toEqual([]);
     expect(unitTables(["time"])[0]!.display).toBe(DISPLAY.time);
     expect(Object.keys(unitTables(["time"])[0]!.units)).toEqual(["s", "h", "ms", "us"]);
+  });
+});
+
+/**
+ * The unit each kind is shown in, for a small value (0) and a large one (10⁶ SI), metric then US:
+ * a regression pin of the handbook's display choices, so that a changed step shows here.
+ */
+const SHOWN: Record<QuantityKind, readonly [UnitId, UnitId, UnitId, UnitId]> = {
+  length: ["mm", "m", "in", "ft"],
+  area: ["mm2", "mm2", "in2", "in2"],
+  mass: ["g", "kg", "oz", "lb"],
+  acceleration: ["gn", "gn", "gn", "gn"],
+  angularSpeed: ["rpm", "rpm", "rpm", "rpm"],
+  angularAcceleration: ["rpm/s", "rpm/s", "rpm/s", "rpm/s"],
+  angle: ["deg", "deg", "deg", "deg"],
+  time: ["us", "s", "us", "s"],
+  frequency: ["Hz", "kHz", "Hz", "kHz"],
+  force: ["N", "kN", "lbf", "lbf"],
+  speed: ["m/s", "m/s", "ft/s", "ft/s"],
+  energy: ["J", "kJ", "ft·lbf", "ft·lbf"],
+  power: ["W", "kW", "W", "kW"],
+  torque: ["N·m", "N·m", "ozf·in", "lbf·in"],
+  inertia: ["kg·m2", "kg·m2", "lb·in2", "lb·in2"],
+  stress: ["MPa", "MPa", "ksi", "ksi"],
+  density: ["g/cm3", "g/cm3", "lb/in3", "lb/in3"],
+  unbalance: ["g·mm", "g·mm", "oz·in", "oz·in"],
+  voltage: ["V", "V", "V", "V"],
+  current: ["A", "A", "A", "A"],
+  resistance: ["mohm", "ohm", "mohm", "ohm"],
+  motorVelocityConstant: ["rpm/V", "rpm/V", "rpm/V", "rpm/V"],
+  fraction: ["pct", "pct", "pct", "pct"],
+  count: ["count", "count", "count", "count"],
+};
+
+describe("the unit each kind is shown in", () => {
+  it("has a row for every kind", () => {
+    expect(Object.keys(SHOWN).sort()).toEqual(Object.keys(DISPLAY).sort());
+  });
+
+  it.each(Object.entries(SHOWN))("%s: small and large values, metric and US, show in %j", (kind, [metricSmall, metricLarge, usSmall, usLarge]) => {
+    const k = kind as QuantityKind;
+    expect([displayUnit(k, "metric", 0), displayUnit(k, "metric", 1e6), displayUnit(k, "us", 0), displayUnit(k, "us", 1e6)]).toEqual([
+      metricSmall,
+      metricLarge,
+      usSmall,
+      usLarge,
+    ]);
   });
 });
