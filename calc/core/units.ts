@@ -195,6 +195,7 @@ function exactMultiple(valueSI: number, factor: number): number | null {
   const word = new BigInt64Array(bits.buffer);
   for (const step of [1n, -1n, 2n, -2n, 3n, -3n, 4n, -4n]) {
     bits[0] = n;
+    // Stryker disable next-line AssignmentOperator: equivalent, n × factor rounds monotonically in n, so the doubles that multiply back to valueSI lie on one side of n and either order of steps finds the same nearest one
     word[0]! += step;
     const candidate = bits[0]!;
     // A step past the largest double gives ±Infinity (or NaN from NaN), whose product is never the finite valueSI.
