@@ -2,6 +2,7 @@
  * The link codec's keys: scopes, the format version, repeated and over-long values, the unit
  * system, keys a page reads itself, and the text a notice quotes from an untrusted link.
  */
+import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { type LinkKey, PERMALINK_VERSION, quoteForNotice, readLinkKeys, writeLinkKeys } from "../../../calc/core/permalink.ts";
 
@@ -97,5 +98,30 @@ describe("writeLinkKeys", () => {
 
   it("writes the version it reads, whatever the old link said", () => {
     expect(writeLinkKeys("v=7", "t", "us", {})).toBe("v=1&t.u=us");
+  });
+});
+
+describe("a link written for one scope reads back, and keeps the other scope's values (property)", () => {
+  it("round-trips any text within the longest length, in either scope", () => {
+    // Up to 5 characters for the radius; up to 24 graphemes (at most 48 UTF-16 units) for the speeds.
+    const short = fc.string({ maxLength: 5 });
+    const text = fc.string({ maxLength: 24, unit: "grapheme" }).filter((t) => t.length <= 48);
+    fc.assert(
+      fc.property(
+        short,
+        text,
+        text,
+        fc.constantFrom("", "t"),
+        fc.constantFrom("metric", "us") as fc.Arbitrary<"metric" | "us">,
+        (r, rpm, other, scope, system) => {
+          const otherScope = scope === "" ? "t" : "";
+          const existing = writeLinkKeys("", otherScope, "metric", { rpm: other });
+          const query = writeLinkKeys(existing, scope, system, { r, rpm });
+          expect(readLinkKeys(query, scope, keys)).toEqual({ values: { r, rpm }, system, notices: [] });
+          expect(readLinkKeys(query, otherScope, keys)).toEqual({ values: { rpm: other }, system: "metric", notices: [] });
+        },
+      ),
+      { numRuns: 500 },
+    );
   });
 });

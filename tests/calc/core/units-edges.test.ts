@@ -4,7 +4,9 @@
  * step, every message a field shows for text it cannot read, the spellings read and refused, and
  * numbers written for links and files that must read back exactly.
  */
+import fc from "fast-check";
 import { describe, expect, it, vi } from "vitest";
+import { UNITS } from "../../../calc/core/unit-table.ts";
 import {
   displayUnit,
   exactNumberText,
@@ -314,6 +316,20 @@ describe("exact numbers for links and files", () => {
     { value: 2 * Math.PI, unit: "rps", text: "1rev/s", why: "a plain symbol with a slash is written as shown, not by its id" },
   ] as const)("writes $value SI in $unit as $text, with the unit in letters a URL keeps as they are", ({ value, unit, text }) => {
     expect(quantityToText(value, unit)).toBe(text);
+  });
+
+  it("writes every finite value in every unit so that it reads back as exactly the same value (property)", () => {
+    const ids = Object.keys(UNITS) as UnitId[];
+    fc.assert(
+      fc.property(fc.constantFrom(...ids), fc.double({ noNaN: true, noDefaultInfinity: true }), (unit, value) => {
+        const text = quantityToText(value, unit);
+        const back = parseQuantity(text, UNITS[unit].kind, unit);
+        // −0 is written "0" and reads back as 0.
+        expect(back.ok && back.valueSI).toBe(value === 0 ? 0 : value);
+        expect(readExactNumber(exactNumberText(value, UNITS[unit].factor), UNITS[unit].factor)).toBe(value === 0 ? 0 : value);
+      }),
+      { numRuns: 3000 },
+    );
   });
 
   it("finds the number one step in the last place above the quotient when no rounding of it reads back", () => {
