@@ -24,7 +24,7 @@ const KIND: Partial<Record<QuantityKind, { ids: UnitId[]; display: KindUnits["di
 export function useUnits(tables: readonly KindUnits[]): void {
   for (const table of tables ?? []) {
     const { kind, units, display } = table ?? {};
-    if (typeof kind !== "string" || typeof units !== "object" || !Array.isArray(display)) {
+    if (typeof kind !== "string" || typeof units !== "object" || units === null || !Array.isArray(display)) {
       throw new CalcInputError({ param: "tables", value: String(kind), expected: "unit tables from unitTables()", unit: "" });
     }
     if (KIND[kind]) continue;

@@ -475,3 +475,21 @@ describe("a spelling that differs from another unit's only in case", () => {
     expect(fresh.parseQuantity("2 MM", "length", "mm")).toMatchObject({ ok: false, reason: "unknown-unit" });
   });
 });
+
+describe("registering a table without units", () => {
+  it("refuses it by name instead of failing on the missing list", async () => {
+    vi.resetModules();
+    const fresh = await import("../../../calc/core/units.ts");
+    const error = (() => {
+      try {
+        fresh.useUnits([{ kind: "length", units: null, display: [["mm"]] } as never]);
+      } catch (thrown) {
+        return thrown as Error;
+      }
+      return null;
+    })();
+    expect(error?.name).toBe("CalcInputError");
+    expect(error?.message).toBe('tables must be unit tables from unitTables() (got "length")');
+    expect(fresh.unitsLoaded("length")).toBe(false);
+  });
+});
