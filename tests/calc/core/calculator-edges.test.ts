@@ -78,9 +78,10 @@ describe("defineForm", () => {
     { pageKeys: ["u"], got: "u", why: "the unit system's key" },
     { pageKeys: ["v"], got: "v", why: "the version's key" },
     { pageKeys: ["drive", "x", "x"], got: "drive, x", why: "a choice's key, and one key twice" },
+    { pageKeys: ["t"], got: "t", why: "an extra's key" },
   ])("refuses $why", ({ pageKeys, got }) => {
     expectRefusal(
-      () => defineForm({ id: "demo", title: "Demo", chapter: "c", anchor: "a", order: 1, inputs, choices, pageKeys }),
+      () => defineForm({ id: "demo", title: "Demo", chapter: "c", anchor: "a", order: 1, inputs, choices, extras: { teeth }, pageKeys }),
       "urlKey",
       got,
       "",
@@ -151,6 +152,12 @@ describe("writeLink", () => {
     expect(writeLink(form, state, "us", "", { cmp: "a", drive: "belt" })).toBe("v=1&cmp=a&drive=belt&r=30mm&t=1~2&u=us");
     expect(writeLink(form, { texts: {}, choices: {}, extras: {} } as never, "metric")).toBe("v=1&u=metric");
     expect(writeLink(form, {} as never, "metric")).toBe("v=1&u=metric");
+  });
+
+  it("writes a scoped calculator's keys alone when there is no query to keep", () => {
+    const scoped = { ...form, scope: "p" };
+    expect(writeLink(scoped, state, "us")).toBe("v=1&p.drive=direct&p.r=30mm&p.t=1~2&p.u=us");
+    expect(linkQuery(scoped, { radius: 0.03 })).toBe("v=1&p.r=30mm&p.u=metric");
   });
 
   it("refuses a missing state or an existing query that is not text", () => {
