@@ -52,6 +52,14 @@ describe("formatNumber on each side of its switches", () => {
     { value: 99.95, sig: 3, text: "100", why: "rounds up to three digits before the point" },
     { value: 1e300, sig: 3, text: "1.00 × 10³⁰⁰", why: "a three-digit exponent in superscripts" },
     { value: 1.5e-12, sig: 3, text: "1.50 × 10⁻¹²", why: "a negative two-digit exponent" },
+    { value: 3e7, sig: 1, text: "3 × 10⁷", why: "each superscript digit: 7" },
+    { value: 4e8, sig: 1, text: "4 × 10⁸", why: "8" },
+    { value: 5e9, sig: 1, text: "5 × 10⁹", why: "9" },
+    { value: 6e-5, sig: 1, text: "6 × 10⁻⁵", why: "5" },
+    { value: 2e-4, sig: 1, text: "2 × 10⁻⁴", why: "4" },
+    { value: 8e-6, sig: 1, text: "8 × 10⁻⁶", why: "6" },
+    { value: 9e13, sig: 1, text: "9 × 10¹³", why: "1 and 3" },
+    { value: 1e20, sig: 1, text: "1 × 10²⁰", why: "2 and 0" },
     { value: 5e-324, sig: 3, text: "4.94 × 10⁻³²⁴", why: "the smallest double (2⁻¹⁰⁷⁴ = 4.94 × 10⁻³²⁴)" },
     // The largest double, 1.797 693 × 10³⁰⁸ (IEEE 754 binary64), rounds to 1.80 × 10³⁰⁸ in three figures,
     // which is past the largest double: it must still print as a number, never "Infinity × 10NaN".
@@ -252,6 +260,8 @@ describe("findUnit: spellings read and refused", () => {
     { text: "rpm", kind: "angle", why: "a speed in an angle field" },
     { text: "ms", kind: "length", why: "" },
     { text: "mm ", kind: "area", why: "" },
+    { text: "sqmm", kind: "area", why: "a spelling with a space is not read without it" },
+    { text: "rads-1", kind: "angularSpeed", why: "" },
   ] as const)('refuses "$text" in a $kind field $why', ({ text, kind }) => {
     expect(findUnit(text, kind)).toBeUndefined();
   });
@@ -462,10 +472,12 @@ describe("a spelling that differs from another unit's only in case", () => {
     fresh.useUnits([
       {
         kind: "length",
-        units: { m: { symbol: "m", factor: 1 }, mm: { symbol: "mm", factor: 1e-3 }, Mm: { symbol: "Mm", factor: 1e6 } } as never,
+        units: { mm: { symbol: "mm", factor: 1e-3 }, Mm: { symbol: "Mm", factor: 1e6 }, m: { symbol: "m", factor: 1 } } as never,
         display: [["mm"]],
       },
     ]);
+    // The SI unit is the one of factor 1, wherever it stands in the table.
+    expect(fresh.siUnit("length")).toBe("m");
     expect(fresh.findUnit("mm", "length")).toBe("mm");
     expect(fresh.findUnit("Mm", "length")).toBe("Mm");
     expect(fresh.findUnit("MM", "length")).toBeUndefined();
