@@ -100,6 +100,7 @@ describe("requireRelation exactly on its limit", () => {
   it("still refuses in its own family when called without options or limit", () => {
     expectRefusal(() => requireRelation("gap", 1, "less", Number.NaN, null as never), "gap", 1, "", "gap must be less than NaN (got 1)");
     expect(requireRelation("gap", 1, "at-least", 0, null as never)).toBe(1);
+    expect(refusal(() => requireRelation("gap", 2, "at-most", 1, null as never)).bound).toStrictEqual({ relation: "at-most", limit: 1, kind: "" });
   });
 });
 
