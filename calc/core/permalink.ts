@@ -46,7 +46,7 @@ export function quoteForNotice(text: string): string {
  * over-long values and a format version other than this one are reported and ignored; keys in
  * `passthrough` belong to the caller and are neither read nor reported.
  */
-export function readLinkKeys(search: string, scope: string, keys: readonly LinkKey[], passthrough: readonly string[] = []): LinkReading {
+export function readLinkKeys(search: string, scope: string, keys: readonly LinkKey[], passthrough: readonly string[]): LinkReading {
   const params = new URLSearchParams(search);
   const known = new Map(keys.map((k) => [k.key, k]));
   const values: Record<string, string> = {};
@@ -66,7 +66,7 @@ export function readLinkKeys(search: string, scope: string, keys: readonly LinkK
     // Stryker disable next-line EqualityOperator: equivalent, a dot at 0 leaves the empty scope either way
     const keyScope = dot >= 0 ? fullKey.slice(0, dot) : "";
     if (keyScope !== scope) continue;
-    const key = dot >= 0 ? fullKey.slice(dot + 1) : fullKey;
+    const key = fullKey.slice(dot + 1); // the whole key when it has no dot (dot is -1)
     if (seen.has(key)) {
       notices.push(`The link sets ${quoteForNotice(fullKey)} more than once; the first value was used.`);
       continue;
