@@ -26,25 +26,25 @@ describe("quoteForNotice", () => {
 
 describe("readLinkKeys", () => {
   it("reads the known keys of the main scope and leaves other scopes alone", () => {
-    expect(readLinkKeys("?v=1&r=20mm&t.r=5mm&t.u=us&u=us", "", keys)).toEqual({ values: { r: "20mm" }, system: "us", notices: [] });
-    expect(readLinkKeys("v=1&r=20mm&t.r=5mm&t.u=us", "t", keys)).toEqual({ values: { r: "5mm" }, system: "us", notices: [] });
+    expect(readLinkKeys("?v=1&r=20mm&t.r=5mm&t.u=us&u=us", "", keys, [])).toEqual({ values: { r: "20mm" }, system: "us", notices: [] });
+    expect(readLinkKeys("v=1&r=20mm&t.r=5mm&t.u=us", "t", keys, [])).toEqual({ values: { r: "5mm" }, system: "us", notices: [] });
   });
 
   it("speaks of the format version once, from the main scope, and only when it differs", () => {
     const newer = 'This link says format version "2"; this page reads version 1. Values were read where they made sense; check them.';
     expect(PERMALINK_VERSION).toBe(1);
-    expect(readLinkKeys("v=2&r=1", "", keys).notices).toEqual([newer]);
-    expect(readLinkKeys("v=2&t.r=1", "t", keys).notices).toEqual([]);
-    expect(readLinkKeys("v=1&r=1", "", keys).notices).toEqual([]);
-    expect(readLinkKeys("r=1", "", keys).notices).toEqual([]);
-    expect(readLinkKeys("v=", "", keys).notices).toEqual([
+    expect(readLinkKeys("v=2&r=1", "", keys, []).notices).toEqual([newer]);
+    expect(readLinkKeys("v=2&t.r=1", "t", keys, []).notices).toEqual([]);
+    expect(readLinkKeys("v=1&r=1", "", keys, []).notices).toEqual([]);
+    expect(readLinkKeys("r=1", "", keys, []).notices).toEqual([]);
+    expect(readLinkKeys("v=", "", keys, []).notices).toEqual([
       'This link says format version ""; this page reads version 1. Values were read where they made sense; check them.',
     ]);
   });
 
   it("takes a value of exactly the longest length and refuses a longer one", () => {
-    expect(readLinkKeys("r=12345", "", keys)).toEqual({ values: { r: "12345" }, system: undefined, notices: [] });
-    expect(readLinkKeys("r=123456", "", keys)).toEqual({
+    expect(readLinkKeys("r=12345", "", keys, [])).toEqual({ values: { r: "12345" }, system: undefined, notices: [] });
+    expect(readLinkKeys("r=123456", "", keys, [])).toEqual({
       values: {},
       system: undefined,
       notices: ["The link's value for Radius is longer than 5 characters; it was ignored."],
@@ -52,7 +52,7 @@ describe("readLinkKeys", () => {
   });
 
   it("uses the first of a repeated key, the unit system too, and says so with the key as written", () => {
-    expect(readLinkKeys("t.u=us&t.u=metric&t.r=1&t.r=2", "t", keys)).toEqual({
+    expect(readLinkKeys("t.u=us&t.u=metric&t.r=1&t.r=2", "t", keys, [])).toEqual({
       values: { r: "1" },
       system: "us",
       notices: ['The link sets "t.u" more than once; the first value was used.', 'The link sets "t.r" more than once; the first value was used.'],
@@ -60,29 +60,31 @@ describe("readLinkKeys", () => {
   });
 
   it("refuses an unknown unit system and keeps none", () => {
-    expect(readLinkKeys("u=imperial", "", keys)).toEqual({
+    expect(readLinkKeys("u=imperial", "", keys, [])).toEqual({
       values: {},
       system: undefined,
       notices: ['Unknown unit system "imperial" in the link (use "metric" or "us"); kept the current one.'],
     });
-    expect(readLinkKeys("u=metric", "", keys).system).toBe("metric");
+    expect(readLinkKeys("u=metric", "", keys, []).system).toBe("metric");
   });
 
   it("neither reads nor reports the keys a page reads itself, but reports them repeated", () => {
     expect(readLinkKeys("cmp=a&rpm=1", "", keys, ["cmp"])).toEqual({ values: { rpm: "1" }, system: undefined, notices: [] });
     expect(readLinkKeys("cmp=a&cmp=b", "", keys, ["cmp"]).notices).toEqual(['The link sets "cmp" more than once; the first value was used.']);
-    expect(readLinkKeys("colour=red", "", keys).notices).toEqual(['The link has a parameter "colour" that this calculator does not use; it was ignored.']);
-    expect(readLinkKeys("t.colour=red", "t", keys).notices).toEqual(['The link has a parameter "t.colour" that this calculator does not use; it was ignored.']);
+    expect(readLinkKeys("colour=red", "", keys, []).notices).toEqual(['The link has a parameter "colour" that this calculator does not use; it was ignored.']);
+    expect(readLinkKeys("t.colour=red", "t", keys, []).notices).toEqual([
+      'The link has a parameter "t.colour" that this calculator does not use; it was ignored.',
+    ]);
   });
 
   it("reads a key with nothing before its dot as the main scope's", () => {
-    expect(readLinkKeys(".r=5", "", keys)).toEqual({ values: { r: "5" }, system: undefined, notices: [] });
+    expect(readLinkKeys(".r=5", "", keys, [])).toEqual({ values: { r: "5" }, system: undefined, notices: [] });
     expect(writeLinkKeys(".r=5&t.r=1", "", "us", {})).toBe("v=1&t.r=1&u=us");
   });
 
   it("reads a key whose value holds a dot, and a scope only before the first dot", () => {
-    expect(readLinkKeys("r=1.5", "", keys).values).toEqual({ r: "1.5" });
-    expect(readLinkKeys("a.b.r=1", "a", keys).notices).toEqual(['The link has a parameter "a.b.r" that this calculator does not use; it was ignored.']);
+    expect(readLinkKeys("r=1.5", "", keys, []).values).toEqual({ r: "1.5" });
+    expect(readLinkKeys("a.b.r=1", "a", keys, []).notices).toEqual(['The link has a parameter "a.b.r" that this calculator does not use; it was ignored.']);
   });
 });
 
@@ -117,8 +119,8 @@ describe("a link written for one scope reads back, and keeps the other scope's v
           const otherScope = scope === "" ? "t" : "";
           const existing = writeLinkKeys("", otherScope, "metric", { rpm: other });
           const query = writeLinkKeys(existing, scope, system, { r, rpm });
-          expect(readLinkKeys(query, scope, keys)).toEqual({ values: { r, rpm }, system, notices: [] });
-          expect(readLinkKeys(query, otherScope, keys)).toEqual({ values: { rpm: other }, system: "metric", notices: [] });
+          expect(readLinkKeys(query, scope, keys, [])).toEqual({ values: { r, rpm }, system, notices: [] });
+          expect(readLinkKeys(query, otherScope, keys, [])).toEqual({ values: { rpm: other }, system: "metric", notices: [] });
         },
       ),
       { numRuns: 500 },

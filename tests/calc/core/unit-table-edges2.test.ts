@@ -14,6 +14,6 @@ describe("unitTables: only the names of quantity kinds are kinds", () => {
   });
 
   it("refuses an entry that is not text even when it prints as a kind's name", () => {
-    expectRefusal(() => unitTables([["length"] as never]), "kinds", "length", "", 'kinds must be quantity kinds (length, mass, …) (got "length")');
+    expectRefusal(() => unitTables([["length"] as never]), "kinds", ["length"], "", "kinds must be quantity kinds (length, mass, …) (got a list of 1)");
   });
 });
