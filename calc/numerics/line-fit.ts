@@ -233,7 +233,9 @@ function theilSenLine(x: readonly number[], y: readonly number[], confidence: nu
   const nPairs = slopes.length;
   const m1 = (nPairs - c) / 2;
   const m2 = (nPairs + c) / 2;
-  const slopeInterval = m1 >= 1 && m2 + 1 <= nPairs ? { low: atRank(slopes, m1), high: atRank(slopes, m2 + 1) } : null;
+  // m1 ≥ 1 means C ≤ nPairs − 2, so the high rank (nPairs + C)/2 + 1 ≤ nPairs also holds (both sides are
+  // exact or rounded the same way): the interval never reads past the last slope.
+  const slopeInterval = m1 >= 1 ? { low: atRank(slopes, m1), high: atRank(slopes, m2 + 1) } : null;
   return { slope, intercept, slopeInterval, ranks: { low: m1, high: m2 + 1 }, pairCount: nPairs, residuals };
 }
 
@@ -293,6 +295,7 @@ function huberLine(
     // huber-1964 ψ(u) = max(−c, min(c, u)); holland-welsch-1977 IRLS weights w = ψ(u)/u = min(1, c/|u|)
     weights = x.map((xi, i) => {
       const u = Math.abs((y[i]! - (slope * xi + intercept)) / scale);
+      // Stryker disable next-line EqualityOperator: equivalent, at u = c both branches give the weight 1 (c/u = 1)
       return u <= tuning ? 1 : tuning / u;
     });
     const next = weightedLine(x, y, weights);
@@ -364,7 +367,8 @@ export function fitStraightLine(input: {
   for (const [i, v] of y.entries()) requireFinite(`y[${i}]`, v, "");
   requireFitOptions(confidence, spikeThreshold, huberTuning);
   const distinctX = countDistinct(x);
-  if (x.length < 3 || distinctX < 3) {
+  // Fewer than 3 points always means fewer than 3 different x, so one check covers both.
+  if (distinctX < 3) {
     throw new CalcInputError({ param: "x", value: distinctX, expected: "at least 3 different values", unit: "" });
   }
   return fitChecked(x, y, confidence, spikeThreshold, huberTuning, "x");
