@@ -171,7 +171,9 @@ export class DormandPrince45 implements OdeStepView {
     const { y, k1, k2, yt, dimension: n } = this;
     const d0 = this.norm(y, y);
     const d1 = this.norm(k1, y);
-    let h0 = d0 < 1e-5 || d1 < 1e-5 ? 1e-6 : 0.01 * (d0 / d1);
+    // An infinite ‖f‖ (a non-zero derivative where atol = 0 and y = 0, or a norm that overflows) says as little
+    // about the step as a tiny one: 0.01·d0/∞ would start with a step of 0.
+    let h0 = d0 < 1e-5 || d1 < 1e-5 || d1 === Number.POSITIVE_INFINITY ? 1e-6 : 0.01 * (d0 / d1);
     h0 = Math.min(h0, hMax);
     for (let i = 0; i < n; i++) yt[i] = y[i]! + h0 * k1[i]!;
     this.f(t + h0, yt, k2);
