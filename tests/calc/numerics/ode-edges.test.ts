@@ -76,6 +76,49 @@ describe("step control worked by hand on problems the method integrates exactly 
     expect(result.status).toBe("done");
   });
 
+  it("takes ‖y0‖ = 1e-5 exactly as large enough to use: h0 = 0.01·d0/d1 = 1e-7 and a first step of 100·h0 = 1e-5", () => {
+    // atol = 1, rtol = 1e-14 and |y| ≤ 1e-3 make sc = 1 exactly, so d0 = |y0| and d1 = |f|.
+    // y0 = 1e-5, f = 1: d0 = 1e-5 (not below 1e-5), d1 = 1, h0 = 1e-7; d2 = 0, h1 = (0.01/1)^(1/5) = 0.398; h = min(1e-5, 0.398, 1).
+    const { sizes } = run({ y0: [1e-5], atol: 1, rtol: 1e-14 });
+    expect(sizes[0]).toBeCloseTo(1e-5, 18);
+  });
+
+  it("takes ‖f‖ = 1e-5 exactly as large enough to use: h0 = 0.01·1e-3/1e-5 = 1, one step over [0, 1]", () => {
+    // y0 = 1e-3, f = 1e-5: d0 = 1e-3, d1 = 1e-5 ⇒ h0 = 1; h1 = (0.01/1e-5)^(1/5) = 3.98; h = min(100, 3.98, 1) = 1.
+    const { result, sizes } = run({
+      y0: [1e-3],
+      atol: 1,
+      rtol: 1e-14,
+      rhs: (_t, _y, f) => {
+        f[0] = 1e-5;
+      },
+    });
+    expect(sizes).toEqual([1]);
+    expect(result.accepted).toBe(1);
+  });
+
+  it("treats max(d1, d2) = 1e-15 exactly as too small to tell: the start is max(1e-6, 1e-3·h0) = 1e-6", () => {
+    // f = 1e-15, sc = 1: d1 = 1e-15 < 1e-5 ⇒ h0 = 1e-6; d2 = 0; max(d1, d2) = 1e-15 ⇒ h1 = 1e-6 (not (0.01/1e-15)^(1/5) = 398).
+    const { sizes } = run({
+      y0: [1e-3],
+      atol: 1,
+      rtol: 1e-14,
+      rhs: (_t, _y, f) => {
+        f[0] = 1e-15;
+      },
+    });
+    expect(sizes[0]).toBe(1e-6);
+  });
+
+  it("stretches a step to the end when the end lies within 1.01 steps, the bound included", () => {
+    // initialStep 0.5 and tEnd = 1.01·0.5: one step of 0.505 (not 0.5 and then 0.005).
+    const { result, sizes } = run({ initialStep: 0.5, tEnd: 1.01 * 0.5 });
+    expect(sizes).toEqual([1.01 * 0.5]);
+    expect(result.accepted).toBe(1);
+    const { sizes: beyond } = run({ initialStep: 0.5, tEnd: 0.51 });
+    expect(beyond).toEqual([0.5, expect.closeTo(0.01, 15)]);
+  });
+
   it("keeps each step within maxStep: 1e-4 … 0.1, then 0.3, 0.3 and a last step of 0.2889", () => {
     const { result, sizes } = run({ maxStep: 0.3 });
     expect(sizes.map((h) => Number(h.toPrecision(10)))).toEqual([1e-4, 1e-3, 1e-2, 0.1, 0.3, 0.3, 0.2889]);
@@ -189,6 +232,38 @@ describe("tolerances", () => {
     expect(both([1e-10, 1e-10])).toBeGreaterThan(both([1e-10, 1e-4]));
   });
 
+  it("lets a component held at exactly 0 with atol = 0 count as no error (0/0 is taken as 0)", () => {
+    // y₀' = 0 from 0 and y₁' = 1 from 1: with atol = 0 the first component's scale is 0, and so is its error.
+    // Starting step: d0 = d1 = √((0 + (1/1e-6)²)/2) = 707 107 ⇒ h0 = 0.01, h1 = (0.01/707 107)^(1/5) = 0.0270.
+    const { result: r, sizes } = run({
+      rhs: (_t, _y, f) => {
+        f[0] = 0;
+        f[1] = 1;
+      },
+      y0: [0, 1],
+      atol: 0,
+    });
+    expect(sizes[0]).toBeCloseTo((0.01 / (1e6 / Math.SQRT2)) ** 0.2, 15);
+    expect(r.status).toBe("done");
+    expect(Array.from(r.y)).toEqual([0, expect.closeTo(2, 14)]);
+  });
+
+  it("still refuses a non-finite state in a component left out of the error norm", () => {
+    // y₁' = √(1 − t) turns NaN after t = 1: atol = ∞ leaves y₁ out of the norm, but not out of the finiteness check.
+    const call = () =>
+      solveOde({
+        rhs: (t, _y, f) => {
+          f[0] = 1;
+          f[1] = Math.sqrt(1 - t);
+        },
+        t0: 0,
+        y0: [0, 0],
+        tEnd: 2,
+        atol: [1e-9, Number.POSITIVE_INFINITY],
+      });
+    expect(call).toThrowError(OdeNonFiniteError);
+  });
+
   it("refuses tolerances out of range, lists of the wrong length and an atol that leaves every component out", () => {
     const ode = new DormandPrince45(2);
     const go = (opts: OdeOptions) => () => ode.solve(oscillator, 0, [0, 1], 1, opts);
@@ -197,6 +272,7 @@ describe("tolerances", () => {
     expectRefusal(go({ rtol: Number.POSITIVE_INFINITY }), "rtol", Number.POSITIVE_INFINITY, "", "rtol must be a finite number (got infinity)");
     expectRefusal(go({ rtol: [1e-6, 1e-15] }), "rtol[1]", 1e-15, "", "rtol[1] must be at least 1e-14 and at most 1 (got 1e-15)");
     expectRefusal(go({ rtol: [1e-6] }), "rtol", 1, "", "rtol must be a number or a list of 2 (got 1)");
+    expectRefusal(go({ rtol: [1e-6, Number.POSITIVE_INFINITY] }), "rtol[1]", Number.POSITIVE_INFINITY, "", "rtol[1] must be a finite number (got infinity)");
     expectRefusal(go({ atol: "1" as never }), "atol", "1", "", 'atol must be a number or a list of 2 (got "1")');
     expectRefusal(go({ atol: [1e-9, -1] }), "atol[1]", -1, "", "atol[1] must be at least 0 and at most 1.7976931348623157e+308 (got -1)");
     expectRefusal(
@@ -431,14 +507,35 @@ describe("events: sides, directions, tolerance and actions", () => {
       y0: [0],
       tEnd: 1,
       maxStep: 0.05,
-      events: [{ g: (_t, y) => y[0]! - target, direction: 1 }],
+      events: [{ g: (_t, y) => y[0]! - target }],
       onEvent: (hit) => {
+        expect(hit.direction).toBe(1); // never a false falling crossing from a stale g
         seen.push(Number(hit.t.toFixed(9)));
         target += 0.1;
         return "continue";
       },
     });
     expect(seen).toEqual([0.1, 0.2, 0.3, 0.4, 0.5, 0.6, 0.7, 0.8, 0.9]); // the target 1 is reached only at the end, g = 0: no crossing
+  });
+
+  it("names an event whose g turns non-finite when read again after its callback, at the step's end", () => {
+    let broken = false;
+    const error = refusal(() =>
+      solveOde({
+        rhs: one,
+        t0: 0,
+        y0: [0],
+        tEnd: 1,
+        initialStep: 1,
+        events: [{ g: (t) => (broken ? Number.NaN : t - 0.5) }],
+        onEvent: () => {
+          broken = true;
+          return "continue";
+        },
+      }),
+    ) as OdeNonFiniteError;
+    expect(error.param).toBe("events[0]");
+    expect(error.t).toBe(1);
   });
 
   it("names an event function that gives a non-finite value", () => {
@@ -493,11 +590,62 @@ describe("time events", () => {
     expect(times).toEqual([0]);
     expect(r.timeEvents).toBe(1);
     expect(r.steps).toBe(r.accepted + 1);
+    expect(r.evaluations).toBe(2 + 6 * r.accepted); // "continue": no fresh f(t, y)
+  });
+
+  it("restarts with a fresh f(t, y) after a due-now time event by default, and stops there when told", () => {
+    let fired = false;
+    const onceNow = (t: number) => {
+      if (fired) return Number.POSITIVE_INFINITY;
+      fired = true;
+      return t;
+    };
+    const restarted = solveOde({ rhs: one, t0: 0, y0: [0], tEnd: 1, nextTimeEvent: onceNow });
+    expect(restarted.timeEvents).toBe(1);
+    expect(restarted.evaluations).toBe(2 + 6 * restarted.accepted + 1);
+    const stopped = solveOde({ rhs: one, t0: 0, y0: [0], tEnd: 1, nextTimeEvent: (t) => t, onTimeEvent: () => "stop" });
+    expect(stopped).toMatchObject({ status: "stopped", t: 0, steps: 1, accepted: 0, timeEvents: 1 });
+  });
+
+  it("fires a time event 16 ulp after t at t itself (within round-off), rather than trying a step too small to take", () => {
+    // t0 = −1, tEnd = 0: 16·ε·max(|t|, |tEnd|) = 2^−48; a time event at −1 + 2^−48 is due now.
+    const seen: number[] = [];
+    let fired = false;
+    const r = solveOde({
+      rhs: one,
+      t0: -1,
+      y0: [0],
+      tEnd: 0,
+      nextTimeEvent: () => (fired ? Number.POSITIVE_INFINITY : -1 + 16 * Number.EPSILON),
+      onTimeEvent: (t) => {
+        seen.push(t);
+        fired = true;
+        return "continue";
+      },
+    });
+    expect(seen).toEqual([-1]);
+    expect(r.status).toBe("done");
   });
 
   it("stops at a time event when its callback says so, with the state there", () => {
-    const r = solveOde({ rhs: one, t0: 0, y0: [0], tEnd: 1, nextTimeEvent: () => 0.4, onTimeEvent: () => "stop" });
+    let after = 0;
+    const r = solveOde({
+      rhs: one,
+      t0: 0,
+      y0: [0],
+      tEnd: 1,
+      nextTimeEvent: () => 0.4,
+      onTimeEvent: () => "stop",
+      onStep: (s) => {
+        if (s.t >= 0.4) after++;
+        return undefined;
+      },
+    });
     expect(r).toMatchObject({ status: "stopped", t: 0.4, timeEvents: 1 });
+    // No restart after a stop (no extra step, no fresh f), and no onStep for the step that stopped.
+    expect(r.steps).toBe(r.accepted + r.rejected);
+    expect(r.evaluations).toBe(2 + 6 * r.steps);
+    expect(after).toBe(0);
     expect(r.y[0]).toBeCloseTo(0.4, 15);
   });
 
@@ -517,6 +665,169 @@ describe("time events", () => {
     expect(seen).toEqual([1]);
     expect(r.status).toBe("done");
     expect(r.t).toBe(1);
+  });
+
+  it("lands exactly on a time event whose time t + (tEvent − t) would miss by an ulp (0.3 then 6/7)", () => {
+    // In doubles 0.3 + (6/7 − 0.3) ≠ 6/7: the landing step must end at the event's own time.
+    const seen: number[] = [];
+    solveOde({
+      rhs: one,
+      t0: 0,
+      y0: [0],
+      tEnd: 1,
+      initialStep: 0.3,
+      nextTimeEvent: (t) => (t < 6 / 7 ? 6 / 7 : Number.POSITIVE_INFINITY),
+      onTimeEvent: (t) => {
+        seen.push(t);
+        return "continue";
+      },
+    });
+    expect(0.3 + (6 / 7 - 0.3)).not.toBe(6 / 7);
+    expect(seen).toEqual([6 / 7]);
+  });
+
+  it("reports a crossing exactly at the end of a landing step at the end's own time", () => {
+    const seen: number[] = [];
+    solveOde({
+      rhs: one,
+      t0: 0,
+      y0: [0],
+      tEnd: 6 / 7,
+      initialStep: 0.3,
+      events: [{ g: (t) => 6 / 7 - t }],
+      onEvent: (hit) => {
+        seen.push(hit.t);
+        return "continue";
+      },
+    });
+    expect(seen).toEqual([6 / 7]);
+  });
+
+  it("handles a time event that an event callback schedules before a later crossing in the same step first", () => {
+    const log: string[] = [];
+    let pending = Number.POSITIVE_INFINITY;
+    solveOde({
+      rhs: one,
+      t0: 0,
+      y0: [0],
+      tEnd: 1,
+      initialStep: 1,
+      events: [{ g: (t) => t - 0.2 }, { g: (t) => t - 0.7 }],
+      onEvent: (hit) => {
+        log.push(`event ${hit.index} at ${hit.t.toFixed(6)}`);
+        if (hit.index === 0) pending = 0.4;
+        return "continue";
+      },
+      nextTimeEvent: (t) => (t < pending ? pending : Number.POSITIVE_INFINITY),
+      onTimeEvent: (t) => {
+        log.push(`time event at ${t.toFixed(6)}`);
+        pending = Number.POSITIVE_INFINITY;
+        return "restart";
+      },
+    });
+    expect(log).toEqual(["event 0 at 0.200000", "time event at 0.400000", "event 1 at 0.700000"]);
+  });
+
+  it("does not fire a time event at its old time when an event callback postpones it during the step that lands on it", () => {
+    // Steps 0.3 then a landing on the time event at 0.8; the crossing at 0.5 inside that step moves the time event to 0.9.
+    // Before, it fired at 0.8 as well as at 0.9.
+    let pending = 0.8;
+    const seen: number[] = [];
+    solveOde({
+      rhs: one,
+      t0: 0,
+      y0: [0],
+      tEnd: 1,
+      initialStep: 0.3,
+      events: [{ g: (t) => t - 0.5 }],
+      onEvent: () => {
+        pending = 0.9;
+        return "continue";
+      },
+      nextTimeEvent: (t) => (t < pending ? pending : Number.POSITIVE_INFINITY),
+      onTimeEvent: (t) => {
+        seen.push(t);
+        pending = Number.POSITIVE_INFINITY;
+        return "continue";
+      },
+    });
+    expect(seen).toEqual([0.9]);
+  });
+
+  it("never fires a time event back in time when a callback schedules one before the step's start: it fires at once, later", () => {
+    let pending = Number.POSITIVE_INFINITY;
+    const seen: number[] = [];
+    solveOde({
+      rhs: one,
+      t0: 0,
+      y0: [0],
+      tEnd: 2,
+      initialStep: 0.3,
+      maxStep: 0.3,
+      events: [{ g: (t) => t - 0.5 }],
+      onEvent: () => {
+        pending = 0.3; // the start of the step that holds the crossing (steps of 0.3 from 0): already past
+        return "continue";
+      },
+      nextTimeEvent: () => pending,
+      onTimeEvent: (t) => {
+        seen.push(t);
+        pending = Number.POSITIVE_INFINITY;
+        return "continue";
+      },
+    });
+    expect(seen).toHaveLength(1);
+    expect(seen[0]!).toBeGreaterThanOrEqual(0.5);
+  });
+
+  it("lets a state event's restart stand when a time event lies later in the same step", () => {
+    // One step over [0, 1]; the crossing at 0.5 moves y to 10 and restarts; the time event at 0.8 then sees y = 10.3.
+    let atTick = Number.NaN;
+    solveOde({
+      rhs: one,
+      t0: 0,
+      y0: [0],
+      tEnd: 1,
+      initialStep: 1,
+      events: [{ g: (t) => t - 0.5 }],
+      onEvent: (_hit, y) => {
+        y[0] = 10;
+        return "restart";
+      },
+      nextTimeEvent: (t) => (t < 0.8 ? 0.8 : Number.POSITIVE_INFINITY),
+      onTimeEvent: (_t, y) => {
+        atTick = y[0]!;
+        return "continue";
+      },
+    });
+    expect(atTick).toBeCloseTo(10.3, 9);
+  });
+
+  it("takes the state at a time event the step landed on from the step's end, the same as a run ending there", () => {
+    const ending = solveOde({ rhs: decay, t0: 0, y0: [1], tEnd: 6 / 7, initialStep: 0.3, rtol: 1e-3, atol: 1e-6 });
+    const ticked = solveOde({
+      rhs: decay,
+      t0: 0,
+      y0: [1],
+      tEnd: 1,
+      initialStep: 0.3,
+      rtol: 1e-3,
+      atol: 1e-6,
+      nextTimeEvent: () => 6 / 7,
+      onTimeEvent: () => "stop",
+    });
+    expect(ticked.t).toBe(6 / 7);
+    expect(ticked.y[0]).toBe(ending.y[0]);
+    expect(ticked.accepted).toBe(ending.accepted);
+  });
+
+  it("keeps the planned step after a short landing step (0.5, then a landing of 0.01 on a time event, then 0.49 to the end)", () => {
+    const { sizes } = run({ initialStep: 0.5, nextTimeEvent: (t) => (t < 0.51 ? 0.51 : Number.POSITIVE_INFINITY), onTimeEvent: () => "continue" });
+    expect(sizes.map((h) => Number(h.toPrecision(12)))).toEqual([0.5, 0.01, 0.49]);
+  });
+
+  it("applies restartStep only after a restart, not to ordinary steps", () => {
+    expect(run({ restartStep: () => 1e-3 }).sizes).toEqual(run().sizes);
   });
 
   it("caps the first step after a time event by restartStep, and only when the cap is positive and smaller", () => {
@@ -569,6 +880,16 @@ describe("the step view", () => {
         return undefined;
       },
     });
+  });
+
+  it("gives the initial state as the dense output after a run that took no step", () => {
+    const ode = new DormandPrince45(1);
+    const r = ode.solve(one, -1, [0.25], -1 + 16 * Number.EPSILON);
+    expect(r.status).toBe("step-too-small");
+    expect(ode.interpolateComponent(0, -1)).toBe(0.25);
+    const out = new Float64Array(1);
+    ode.interpolate(-1, out);
+    expect(out[0]).toBe(0.25);
   });
 
   it("stops after the step onStep answers stop", () => {
