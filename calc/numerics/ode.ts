@@ -423,7 +423,7 @@ export class DormandPrince45 implements OdeStepView {
           if (before === after || gOld[e] === 0) continue;
           const dir = events[e]!.direction ?? 0;
           if ((dir === 1 && after === false) || (dir === -1 && after === true)) continue;
-          hitTheta[e] = this.locate(events[e]!, t, gOld[e]!, gNew[e]!, Math.max(eventTol, 8 * Number.EPSILON * Math.abs(t1)), yEvent);
+          hitTheta[e] = this.locate(events[e]!, e, t, gOld[e]!, gNew[e]!, Math.max(eventTol, 8 * Number.EPSILON * Math.abs(t1)), yEvent);
           let k = hits++;
           // Stryker disable next-line EqualityOperator: equivalent, at k = 0 hitOrder[−1] is undefined and the comparison is false, ending the loop as k > 0 does
           while (k > 0 && hitTheta[hitOrder[k - 1]!]! > hitTheta[e]!) {
@@ -526,7 +526,7 @@ export class DormandPrince45 implements OdeStepView {
    * Locates a sign change of `ev.g` in the accepted step by the Illinois method (dowell-jarratt-1971)
    * with bisection safeguard; returns θ in (0, 1] on the new side of the crossing.
    */
-  private locate(ev: OdeEvent, t: number, gA: number, gB: number, tolTime: number, scratch: Float64Array): number {
+  private locate(ev: OdeEvent, index: number, t: number, gA: number, gB: number, tolTime: number, scratch: Float64Array): number {
     this.prepareDense();
     const h = this.hStep;
     const newSide = gB > 0;
@@ -542,7 +542,7 @@ export class DormandPrince45 implements OdeStepView {
       if (!(x > a && x < b)) x = 0.5 * (a + b);
       this.denseAt(x, scratch);
       const fx = ev.g(t + x * h, scratch);
-      if (!Number.isFinite(fx)) throw new OdeNonFiniteError({ t: t + x * h, quantity: "event", index: -1, value: fx });
+      if (!Number.isFinite(fx)) throw new OdeNonFiniteError({ t: t + x * h, quantity: "event", index, value: fx });
       if (fx > 0 === newSide) {
         b = x;
         fb = fx;

@@ -538,6 +538,98 @@ describe("events: sides, directions, tolerance and actions", () => {
     expect(error.t).toBe(1);
   });
 
+  it("finds a crossing that the first secant hits exactly (g = ±(t − 0.5) on one step over [0, 1]), bisecting from there", () => {
+    const locate = (sign: number) => {
+      let at = Number.NaN;
+      let calls = 0;
+      solveOde({
+        rhs: one,
+        t0: 0,
+        y0: [0],
+        tEnd: 1,
+        initialStep: 1,
+        events: [
+          {
+            g: (t) => {
+              calls++;
+              return sign * (t - 0.5);
+            },
+          },
+        ],
+        onEvent: (hit) => {
+          at = hit.t;
+          return "continue";
+        },
+      });
+      return { at, calls };
+    };
+    // Rising: the new side is g > 0, so the point returned lies just after 0.5; falling: g ≤ 0 is the new side, 0.5 itself.
+    const rising = locate(1);
+    expect(rising.at).toBeGreaterThan(0.5);
+    expect(rising.at - 0.5).toBeLessThanOrEqual(1e-13);
+    const falling = locate(-1);
+    expect(falling.at).toBe(0.5);
+    // Halving [0, 0.5] down to 1e-13 takes about 42 bisections (2^−42 = 2.3e-13), far below the 200-iteration cap.
+    expect(rising.calls).toBeLessThanOrEqual(60);
+    expect(falling.calls).toBeLessThanOrEqual(60);
+  });
+
+  it("names the event whose g is not finite inside the step, where the crossing is being located", () => {
+    // g is finite at both ends of the one step [0, 1] but NaN in (0.3, 0.6), where the search for its zero looks.
+    // Before, the error named "events[-1]".
+    const error = refusal(() =>
+      solveOde({
+        rhs: one,
+        t0: 0,
+        y0: [0],
+        tEnd: 1,
+        initialStep: 1,
+        events: [{ g: () => 1 }, { g: (t) => (t > 0.3 && t < 0.6 ? Number.NaN : t - 0.45) }],
+      }),
+    ) as OdeNonFiniteError;
+    expect(error.param).toBe("events[1]");
+    expect(error.index).toBe(1);
+    expect(error.t).toBeGreaterThan(0.3);
+    expect(error.t).toBeLessThan(0.6);
+  });
+
+  it("locates a crossing of a strongly curved g in few evaluations (Illinois false position, dowell-jarratt-1971)", () => {
+    // One step over [0, 1]; g = ±(e^(5t) − e^2.5) (convex rising, concave falling) and ±(1 − e^(2.5 − 5t)) (concave rising,
+    // convex falling), all crossing at 0.5: plain false position
+    // would keep one end for ever and creep; the Illinois halving and the bisection safeguard keep it fast.
+    const curves = [
+      (t: number) => Math.exp(5 * t) - Math.exp(2.5),
+      (t: number) => Math.exp(2.5) - Math.exp(5 * t),
+      (t: number) => 1 - Math.exp(2.5 - 5 * t),
+      (t: number) => Math.exp(2.5 - 5 * t) - 1,
+    ];
+    for (const curve of curves) {
+      let calls = 0;
+      let at = Number.NaN;
+      solveOde({
+        rhs: one,
+        t0: 0,
+        y0: [0],
+        tEnd: 1,
+        initialStep: 1,
+        events: [
+          {
+            g: (t) => {
+              calls++;
+              return curve(t);
+            },
+          },
+        ],
+        onEvent: (hit) => {
+          at = hit.t;
+          return "continue";
+        },
+      });
+      expect(Math.abs(at - 0.5)).toBeLessThanOrEqual(1e-13);
+      expect(calls - 2).toBeLessThanOrEqual(15); // evaluations inside the step, besides its two ends
+    }
+  });
+
   it("names an event function that gives a non-finite value", () => {
     const error = refusal(() => solveOde({ rhs: one, t0: 0, y0: [0], tEnd: 1, events: [{ g: () => 1 }, { g: () => Number.NaN }] }));
     expect(error).toBeInstanceOf(OdeNonFiniteError);
@@ -591,6 +683,22 @@ describe("time events", () => {
     expect(r.timeEvents).toBe(1);
     expect(r.steps).toBe(r.accepted + 1);
     expect(r.evaluations).toBe(2 + 6 * r.accepted); // "continue": no fresh f(t, y)
+  });
+
+  it("restarts when onTimeEvent answers nothing", () => {
+    let fired = false;
+    const r = solveOde({
+      rhs: one,
+      t0: 0,
+      y0: [0],
+      tEnd: 1,
+      nextTimeEvent: (t) => (fired ? Number.POSITIVE_INFINITY : t),
+      onTimeEvent: () => {
+        fired = true;
+        return undefined;
+      },
+    });
+    expect(r.evaluations).toBe(2 + 6 * r.accepted + 1);
   });
 
   it("restarts with a fresh f(t, y) after a due-now time event by default, and stops there when told", () => {
@@ -890,6 +998,28 @@ describe("the step view", () => {
     const out = new Float64Array(1);
     ode.interpolate(-1, out);
     expect(out[0]).toBe(0.25);
+  });
+
+  it("samples t0 from the state itself on a reused integrator whose last run ended on a non-finite trial", () => {
+    const ode = new DormandPrince45(1);
+    expect(() =>
+      ode.solve(
+        (t, _y, f) => {
+          f[0] = Math.sqrt(1 - t);
+        },
+        0,
+        [0],
+        2,
+      ),
+    ).toThrowError(OdeNonFiniteError);
+    const r = ode.solve(decay, 0, [1], 1, { outputTimes: [0, 1], rtol: 1e-10, atol: 1e-12 });
+    expect(r.output![0]).toBe(1);
+    expect(r.output![1]).toBeCloseTo(Math.exp(-1), 9);
+  });
+
+  it("takes options of null as the defaults", () => {
+    const ode = new DormandPrince45(1);
+    expect(ode.solve(decay, 0, [1], 1, null as never)).toEqual(ode.solve(decay, 0, [1], 1));
   });
 
   it("stops after the step onStep answers stop", () => {
