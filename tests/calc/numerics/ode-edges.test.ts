@@ -376,6 +376,27 @@ describe("output times", () => {
   });
 });
 
+describe("output times in a step an event cuts", () => {
+  it("samples times before a restarting event from the step it cut, with the state before the change", () => {
+    // One step over [0, 1] of y' = 1; the crossing at 0.5 moves y to 10: y(0.25) = 0.25 and y(0.75) = 10.25.
+    const r = solveOde({
+      rhs: one,
+      t0: 0,
+      y0: [0],
+      tEnd: 1,
+      initialStep: 1,
+      outputTimes: [0.25, 0.75],
+      events: [{ g: (t) => t - 0.5 }],
+      onEvent: (_hit, y) => {
+        y[0] = 10;
+        return "restart";
+      },
+    });
+    expect(r.output![0]).toBeCloseTo(0.25, 12);
+    expect(r.output![1]).toBeCloseTo(10.25, 9);
+  });
+});
+
 describe("events: sides, directions, tolerance and actions", () => {
   it("sees no event where g starts at exactly 0 and moves away (it takes the side it moves to)", () => {
     const r = solveOde({ rhs: one, t0: 0, y0: [0], tEnd: 1, events: [{ g: (_t, y) => y[0]! }] });
@@ -980,10 +1001,12 @@ describe("the step view", () => {
         s.interpolate(s.t, out);
         expect(out[0]).toBeCloseTo(s.y[0]!, 14);
         expect(out[1]).toBeCloseTo(s.y[1]!, 14);
-        const mid = 0.5 * (s.tPrev + s.t);
-        s.interpolate(mid, out);
-        expect(s.interpolateComponent(1, mid)).toBe(out[1]);
-        expect(out[0]).toBeCloseTo(Math.sin(mid), 8);
+        const inside = s.tPrev + 0.3 * (s.t - s.tPrev);
+        s.interpolate(inside, out);
+        expect(s.interpolateComponent(0, inside)).toBe(out[0]);
+        expect(s.interpolateComponent(1, inside)).toBe(out[1]);
+        expect(out[0]).toBeCloseTo(Math.sin(inside), 8);
+        expect(out[1]).toBeCloseTo(Math.cos(inside), 8);
         previous = Float64Array.from(s.y);
         return undefined;
       },
