@@ -129,7 +129,8 @@ function middleOf(values: readonly number[]): number {
 const SAME_X = 1e-12;
 
 function sameXTolerance(x: readonly number[]): number {
-  return SAME_X * x.reduce((m, v) => Math.max(m, Math.abs(v)), 0);
+  // From the finite values only: an infinite one would make every value "the same".
+  return SAME_X * x.reduce((m, v) => (Number.isFinite(v) ? Math.max(m, Math.abs(v)) : m), 0);
 }
 
 /** Sizes of the groups of equal x (within the tolerance), after sorting. */
@@ -139,7 +140,8 @@ function xGroups(x: readonly number[]): number[] {
   const groups: number[] = [];
   let last = Number.NEGATIVE_INFINITY;
   for (const v of sorted) {
-    if (groups.length > 0 && v - last <= tol) groups[groups.length - 1]! += 1;
+    // The first value always starts a group: v − (−∞) is ∞ (or NaN for v = −∞), never within the finite tolerance.
+    if (v - last <= tol) groups[groups.length - 1]! += 1;
     else groups.push(1);
     last = v;
   }
@@ -376,8 +378,8 @@ export function fitStraightLine(input: {
 
 /** Every number in a fit, for the final finiteness check. */
 function numbersOf(value: unknown, out: number[] = []): number[] {
+  // A list is an object too: Object.values gives its items in order.
   if (typeof value === "number") out.push(value);
-  else if (Array.isArray(value)) for (const v of value) numbersOf(v, out);
   else if (value !== null && typeof value === "object") for (const v of Object.values(value)) numbersOf(v, out);
   return out;
 }

@@ -58,6 +58,12 @@ describe("countDistinct", () => {
     expect(countDistinct([-1000, 0, 3e-9])).toBe(3);
   });
 
+  it("counts an infinite value as a value of its own (before, it made the tolerance infinite and 1, 2, ∞ counted as one)", () => {
+    expect(countDistinct([1, Number.POSITIVE_INFINITY, 2])).toBe(3);
+    expect(countDistinct([Number.NEGATIVE_INFINITY, 0, 1e-13, 1])).toBe(3); // 0 and 1e-13 within 1e-12 of |1|
+    expect(countDistinct([Number.NEGATIVE_INFINITY])).toBe(1);
+  });
+
   it("refuses something that is not a list", () => {
     expectRefusal(() => countDistinct(5 as never), "values", 5, "", "values must be a list (got 5)");
   });
