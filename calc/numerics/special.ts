@@ -199,6 +199,7 @@ function erfcPositive(x: number): number {
       ap += 1;
       del *= z / ap;
       sum += del;
+      // Stryker disable next-line ConditionalExpression,EqualityOperator: equivalent, a term below 1e-17 of the sum is under half its ulp: adding it and the smaller ones after it leaves the sum unchanged
       if (Math.abs(del) < Math.abs(sum) * 1e-17) break;
     }
     return 1 - sum * Math.exp(logFront);
