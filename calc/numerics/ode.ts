@@ -69,10 +69,11 @@ function tolerances(name: string, value: number | ArrayLike<number>, n: number, 
     out.fill(value);
     return;
   }
-  if (value === null || typeof value !== "object" || value.length !== n) {
+  // No null here: the caller's `?? default` has already turned a null tolerance into the default.
+  if (typeof value !== "object" || value.length !== n) {
     throw new CalcInputError({
       param: name,
-      value: value === null || typeof value !== "object" ? value : value.length,
+      value: typeof value !== "object" ? value : value.length,
       expected: `a number or a list of ${n}`,
       unit: "",
     });

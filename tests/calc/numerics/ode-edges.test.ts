@@ -349,6 +349,11 @@ describe("refusals of the problem and options", () => {
     expectRefusal(() => solveOde(null as never), "problem", null, "", "problem must be an object { rhs, t0, y0, tEnd, … } (got null)");
     expectRefusal(() => solveOde({ rhs: decay, t0: 0, y0: [], tEnd: 1 }), "y0", 0, "", "y0 must be a list of at least 1 number (got 0)");
     expectRefusal(() => solveOde({ rhs: decay, t0: 0, y0: 3 as never, tEnd: 1 }), "y0", 3, "", "y0 must be a list of at least 1 number (got 3)");
+    expectRefusal(() => solveOde({ rhs: decay, t0: 0, y0: null as never, tEnd: 1 }), "y0", null, "", "y0 must be a list of at least 1 number (got null)");
+    // A null tolerance means the default, as an omitted one does.
+    expect(solveOde({ rhs: decay, t0: 0, y0: [1], tEnd: 1, rtol: null as never, atol: null as never })).toEqual(
+      solveOde({ rhs: decay, t0: 0, y0: [1], tEnd: 1 }),
+    );
   });
 });
 
