@@ -424,7 +424,7 @@ export class DormandPrince45 implements OdeStepView {
           if (before === after || gOld[e] === 0) continue;
           const dir = events[e]!.direction ?? 0;
           if ((dir === 1 && after === false) || (dir === -1 && after === true)) continue;
-          hitTheta[e] = this.locate(events[e]!, e, t, gOld[e]!, gNew[e]!, Math.max(eventTol, 8 * Number.EPSILON * Math.abs(t1)), yEvent);
+          hitTheta[e] = this.locate(events[e]!, e, t, gOld[e]!, gNew[e]!, Math.max(eventTol, 8 * Number.EPSILON * Math.max(Math.abs(t), Math.abs(t1))), yEvent);
           let k = hits++;
           // Stryker disable next-line EqualityOperator: equivalent, at k = 0 hitOrder[−1] is undefined and the comparison is false, ending the loop as k > 0 does
           while (k > 0 && hitTheta[hitOrder[k - 1]!]! > hitTheta[e]!) {

@@ -467,6 +467,99 @@ describe("events: sides, directions, tolerance and actions", () => {
     expect(at * at).toBeGreaterThan(0.3);
   });
 
+  it("scales the default event tolerance with the span: the same crossing scaled in time takes the same evaluations", () => {
+    // g = t − span/2 on one step over [0, span]: the default tolerance 1e-13·span makes the search scale-free.
+    const locate = (span: number) => {
+      let calls = 0;
+      let at = Number.NaN;
+      solveOde({
+        rhs: one,
+        t0: 0,
+        y0: [0],
+        tEnd: span,
+        initialStep: span,
+        events: [
+          {
+            g: (t) => {
+              calls++;
+              return t - span / 2;
+            },
+          },
+        ],
+        onEvent: (hit) => {
+          at = hit.t;
+          return "stop";
+        },
+      });
+      return { calls, error: at - span / 2 };
+    };
+    const unit = locate(1);
+    const large = locate(1e6);
+    expect(large.calls).toBe(unit.calls);
+    expect(large.error).toBeGreaterThan(0);
+    expect(large.error).toBeLessThanOrEqual(1e-13 * 1e6);
+  });
+
+  it("never refines below 8 ulp of t, however small the event tolerance asked for", () => {
+    // A crossing near t = 1000 with eventTolerance 1e-300: doubles there are 1.1e-13 apart, so the search stops at
+    // about 9e-13 instead of running to its 200-iteration cap.
+    let calls = 0;
+    let at = Number.NaN;
+    solveOde({
+      rhs: one,
+      t0: 1000,
+      y0: [0],
+      tEnd: 1001,
+      initialStep: 1,
+      eventTolerance: 1e-300,
+      events: [
+        {
+          g: (t) => {
+            calls++;
+            return t - 1000.5;
+          },
+        },
+      ],
+      onEvent: (hit) => {
+        at = hit.t;
+        return "stop";
+      },
+    });
+    expect(at - 1000.5).toBeGreaterThan(0);
+    expect(at - 1000.5).toBeLessThanOrEqual(8 * Number.EPSILON * 1001);
+    expect(calls).toBeLessThan(60);
+  });
+
+  it("takes the 8-ulp floor from the larger end of the step, so a step ending at t = 0 does not search to the iteration cap", () => {
+    // One step over [−1, 0]; the crossing at −0.5 with eventTolerance 1e-300. Before, the floor came from |t1| = 0 alone,
+    // and the search ran its 200 iterations against doubles 1.1e-16 apart.
+    let calls = 0;
+    let at = Number.NaN;
+    solveOde({
+      rhs: one,
+      t0: -1,
+      y0: [0],
+      tEnd: 0,
+      initialStep: 1,
+      eventTolerance: 1e-300,
+      events: [
+        {
+          g: (t) => {
+            calls++;
+            return t + 0.5;
+          },
+        },
+      ],
+      onEvent: (hit) => {
+        at = hit.t;
+        return "stop";
+      },
+    });
+    expect(at + 0.5).toBeGreaterThan(0);
+    expect(at + 0.5).toBeLessThanOrEqual(8 * Number.EPSILON);
+    expect(calls).toBeLessThan(60);
+  });
+
   it("reports crossings inside one step in time order", () => {
     const order: number[] = [];
     solveOde({
