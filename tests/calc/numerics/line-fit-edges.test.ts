@@ -223,6 +223,13 @@ describe("Theil–Sen, worked by hand", () => {
     expect(ts.slopeInterval).toEqual({ low: 0, high: 3 });
   });
 
+  it("leaves out a pair exactly 1e-12 of the largest |x| apart (the bound counts as the same x)", () => {
+    // x = −1, 0, 1e-12, 1: largest |x| 1, and 0 and 1e-12 are exactly 1e-12 apart: 6 − 1 = 5 pairs.
+    const f = fitStraightLine({ x: [-1, 0, 1e-12, 1], y: [0, 1, 2, 3] });
+    expect(f.theilSen.pairCount).toBe(5);
+    expect(f.distinctX).toBe(3);
+  });
+
   it("counts x values within 1e-12 of the largest |x| as the same x: their pair gives no slope", () => {
     const xs = [0, 1e-13, 1, 2, 3];
     const ts = fitStraightLine({ x: xs, y: [0, 5, 1, 2, 3] }).theilSen;
