@@ -226,6 +226,26 @@ describe("tolerances", () => {
     expect(pair.y[0]).toBe(alone.y[0]);
   });
 
+  it("measures the error in the RMS norm: two copies of a problem take exactly the steps of one", () => {
+    // err = √(1/n Σ (e_i/sc_i)²): n equal terms give the single term back (hairer-norsett-wanner-1 §II.4 (4.11)).
+    const single = solveOde({ rhs: decay, t0: 0, y0: [1], tEnd: 5, rtol: 1e-8, atol: 1e-10, initialStep: 2 });
+    const twice = solveOde({
+      rhs: (_t, y, f) => {
+        f[0] = -y[0]!;
+        f[1] = -y[1]!;
+      },
+      t0: 0,
+      y0: [1, 1],
+      tEnd: 5,
+      rtol: 1e-8,
+      atol: 1e-10,
+      initialStep: 2,
+    });
+    expect(single.rejected).toBeGreaterThan(0);
+    expect({ accepted: twice.accepted, rejected: twice.rejected }).toEqual({ accepted: single.accepted, rejected: single.rejected });
+    expect(twice.y[0]).toBe(single.y[0]);
+  });
+
   it("takes per-component tolerances: a looser one on a component takes fewer steps", () => {
     const both = (rtol: number[]) => solveOde({ rhs: oscillator, t0: 0, y0: [0, 1], tEnd: 10, rtol, atol: 1e-12 }).accepted;
     expect(both([1e-4, 1e-4])).toBeLessThan(both([1e-10, 1e-4]));
