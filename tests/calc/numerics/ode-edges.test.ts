@@ -778,6 +778,8 @@ describe("events: sides, directions, tolerance and actions", () => {
       expected: "a finite event function at every step",
     });
     expect(error.message).toBe("the event 1 is not a finite number (NaN) at t = 0");
+    expect(error.name).toBe("OdeNonFiniteError");
+    expect(error).toBeInstanceOf(RangeError);
   });
 
   it("names a state an event callback made non-finite", () => {
