@@ -215,7 +215,9 @@ function theilSenLine(x: readonly number[], y: readonly number[], confidence: nu
   const n = x.length;
   const tol = sameXTolerance(x);
   const slopes: number[] = [];
+  // Stryker disable next-line EqualityOperator: equivalent, at i = n the inner loop starts at n + 1 and runs no pass
   for (let i = 0; i < n; i++) {
+    // Stryker disable next-line EqualityOperator: equivalent, at j = n x[j] is undefined, |NaN| > tol is false and no slope is added
     for (let j = i + 1; j < n; j++) {
       // theil-1950: slope of every pair with different x
       if (Math.abs(x[j]! - x[i]!) > tol) slopes.push((y[j]! - y[i]!) / (x[j]! - x[i]!));
@@ -290,6 +292,7 @@ function huberLine(
   tolerance: number,
 ): HuberLine {
   let { slope, intercept } = start;
+  // Stryker disable next-line ArrowFunction: equivalent, the loop below always runs and sets every weight before one is read
   let weights = x.map(() => 1);
   let converged = false;
   let iterations = 0;
@@ -416,7 +419,8 @@ export function fitChecked(
   if (flagged.length > 0) {
     const keep = x.flatMap((_, i) => (flagged.includes(i) ? [] : [i]));
     const kx = keep.map((i) => x[i]!);
-    if (keep.length >= 3 && countDistinct(kx) >= 3) {
+    // Fewer than 3 kept points always means fewer than 3 different x, so one check covers both.
+    if (countDistinct(kx) >= 3) {
       leastSquaresWithoutSpikes = leastSquaresLine(
         kx,
         keep.map((i) => y[i]!),

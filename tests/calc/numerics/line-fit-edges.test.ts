@@ -428,6 +428,7 @@ describe("refusals", () => {
     expectRefusal(() => fitChecked([1, 2, 3], [1, 2], 0.95, 3.5, 1.345, "speed"), "speed", 3, "", msg("3"));
     expectRefusal(() => fitChecked([1, 2, 3], "y" as never, 0.95, 3.5, 1.345, "speed"), "speed", 3, "", msg("3"));
     expectRefusal(() => fitChecked("x" as never, [1, 2, 3], 0.95, 3.5, 1.345, "speed"), "speed", "x", "", msg('"x"'));
+    expectRefusal(() => fitChecked("abc" as never, [1, 2, 3], 0.95, 3.5, 1.345, "speed"), "speed", "abc", "", msg('"abc"'));
     expectRefusal(() => fitChecked([1, Number.NaN, 3], [1, 2, 3], 0.95, 3.5, 1.345, "speed"), "speed", 3, "", msg("3"));
     expectRefusal(() => fitChecked([1, 2, 3], [1, 2, Number.POSITIVE_INFINITY], 0.95, 3.5, 1.345, "speed"), "speed", 3, "", msg("3"));
     expectRefusal(

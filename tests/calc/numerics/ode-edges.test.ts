@@ -149,6 +149,73 @@ describe("step control worked by hand on problems the method integrates exactly 
   });
 });
 
+describe("problems whose right-hand side depends on t", () => {
+  it("follows y' = cos t to sin t over [0, 10] (every stage at its own time t + c_i·h)", () => {
+    const times = [1, 2.5, 5, 7.5, 10];
+    const r = solveOde({
+      rhs: (t, _y, f) => {
+        f[0] = Math.cos(t);
+      },
+      t0: 0,
+      y0: [0],
+      tEnd: 10,
+      rtol: 1e-10,
+      atol: 1e-12,
+      outputTimes: times,
+    });
+    for (const [k, t] of times.entries()) expect(Math.abs(r.output![k]! - Math.sin(t))).toBeLessThan(1e-8);
+  });
+
+  it("follows y' = t − y from y(0) = 1 to y = t − 1 + 2e^(−t) (a right-hand side of both t and y)", () => {
+    const times = [0.5, 1, 3, 6];
+    const r = solveOde({
+      rhs: (t, y, f) => {
+        f[0] = t - y[0]!;
+      },
+      t0: 0,
+      y0: [1],
+      tEnd: 6,
+      rtol: 1e-10,
+      atol: 1e-12,
+      outputTimes: times,
+    });
+    for (const [k, t] of times.entries()) expect(Math.abs(r.output![k]! - (t - 1 + 2 * Math.exp(-t)))).toBeLessThan(1e-9);
+  });
+
+  it("integrates y' = 5t⁴ from t = 1 exactly to t⁵ (a 5th-order quadrature is exact for degree 4)", () => {
+    const r = solveOde({
+      rhs: (t, _y, f) => {
+        f[0] = 5 * t ** 4;
+      },
+      t0: 1,
+      y0: [1],
+      tEnd: 2,
+      rtol: 1e-6,
+      atol: 1e-9,
+    });
+    expect(r.y[0]).toBeCloseTo(32, 12);
+  });
+
+  it("evaluates the starting step's trial point at t0 + h0 (y' = t² from t0 = 1: d2 = ‖f(1.01) − f(1)‖/h0 = 2.01/sc)", () => {
+    // sc = 1e-9 + 1e-6·|1| for y0 = 1: d0 = d1 = 1/sc, h0 = 0.01; f(1.01) − f(1) = 0.0201 ⇒ d2 = 2.01/sc > d1;
+    // h1 = (0.01·sc/2.01)^(1/5) (at t0 − h0 it would be 1.99 instead of 2.01).
+    const sizes: number[] = [];
+    solveOde({
+      rhs: (t, _y, f) => {
+        f[0] = t * t;
+      },
+      t0: 1,
+      y0: [1],
+      tEnd: 2,
+      onStep: (s) => {
+        sizes.push(s.t - s.tPrev);
+        return undefined;
+      },
+    });
+    expect(sizes[0]).toBeCloseTo(((0.01 * (1e-9 + 1e-6)) / 2.01) ** 0.2, 15);
+  });
+});
+
 describe("step control on a problem with rejections", () => {
   // The Arenstorf-like close approach is not needed: y' = −y from a far too large first step is rejected.
   const tight = { rhs: decay, y0: [1], tEnd: 10, rtol: 1e-10, atol: 1e-12, initialStep: 5 };
@@ -338,6 +405,7 @@ describe("refusals of the problem and options", () => {
     expectRefusal(go({}, 0, 1, [1], 5 as never), "rhs", 5, "", "rhs must be a function (t, y, dydt) => void (got 5)");
     expectRefusal(go({}, 0, 1, [1, 2]), "y0", 2, "", "y0 must be a list of 1 numbers (got 2)");
     expectRefusal(go({}, 0, 1, null as never), "y0", null, "", "y0 must be a list of 1 numbers (got null)");
+    expectRefusal(go({}, 0, 1, 5 as never), "y0", 5, "", "y0 must be a list of 1 numbers (got 5)");
     expectRefusal(go({}, 0, 1, [Number.NaN]), "y0[0]", Number.NaN, "", "y0[0] must be a finite number (got not a number)");
   });
 
@@ -596,6 +664,21 @@ describe("events: sides, directions, tolerance and actions", () => {
       },
     });
     expect(order).toEqual([1, 2, 0]);
+    const second: number[] = [];
+    solveOde({
+      rhs: one,
+      t0: 0,
+      y0: [0],
+      tEnd: 1,
+      initialStep: 1,
+      maxStep: 1,
+      events: [{ g: (t) => t - 0.2 }, { g: (t) => t - 0.7 }, { g: (t) => t - 0.5 }],
+      onEvent: (hit) => {
+        second.push(hit.index);
+        return "continue";
+      },
+    });
+    expect(second).toEqual([0, 2, 1]);
   });
 
   it("counts each restart as a step and evaluates f once more there", () => {
