@@ -86,18 +86,18 @@ describe("OdeNonFiniteError names the function that gave a non-finite number", (
   });
 
   it("an event function that is NaN only inside a step names that event and the time tried", () => {
-    // g = t − 0.5 at both ends of the single step [0, 1] (−0.5 and 0.5); false position tries
-    // the straight line's zero first, t = 0.5, where this g is NaN.
+    // g = t − 1 at both ends of the single step [0, 2] (−1 and 1); false position tries the
+    // straight line's zero first, t = 1, where this g is NaN.
     const error = nonFinite(() =>
-      solveOde({ rhs: ramp, t0: 0, y0: [0], tEnd: 1, initialStep: 1, events: [{ g: () => 1 }, { g: (t) => (t > 0.25 && t < 0.75 ? Number.NaN : t - 0.5) }] }),
+      solveOde({ rhs: ramp, t0: 0, y0: [0], tEnd: 2, initialStep: 2, events: [{ g: () => 1 }, { g: (t) => (t > 0.5 && t < 1.5 ? Number.NaN : t - 1) }] }),
     );
     expect({ param: error.param, quantity: error.quantity, index: error.index, t: error.t }).toEqual({
       param: "events[1]",
       quantity: "event",
       index: 1,
-      t: 0.5,
+      t: 1,
     });
-    expect(error.message).toBe("the event 1 is not a finite number (NaN) at t = 0.5");
+    expect(error.message).toBe("the event 1 is not a finite number (NaN) at t = 1");
   });
 
   it("an event function a 'continue' callback leaves NaN is read again at the step's end and refused there", () => {
