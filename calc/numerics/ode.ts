@@ -43,6 +43,7 @@
  */
 import { CalcInputError, requireFinite, requireInRange, requirePositive } from "../core/errors.ts";
 import * as T from "./dopri5-tableau.ts";
+import { tolerances } from "./ode-tolerances.ts";
 
 export * from "./ode-types.ts";
 import {
@@ -61,28 +62,6 @@ const SAFETY = 0.9;
 const FAC_MIN = 0.2;
 const FAC_MAX = 10;
 const EXPONENT = 1 / 5;
-
-function tolerances(name: string, value: number | ArrayLike<number>, n: number, out: Float64Array, min: number, max: number, allowInfinity: boolean): void {
-  if (typeof value === "number") {
-    if (!(allowInfinity && value === Number.POSITIVE_INFINITY)) requireInRange(name, value, "", { min, max });
-    out.fill(value);
-    return;
-  }
-  // No null here: the caller's `?? default` has already turned a null tolerance into the default.
-  if (typeof value !== "object" || value.length !== n) {
-    throw new CalcInputError({
-      param: name,
-      value: typeof value !== "object" ? value : value.length,
-      expected: `a number or a list of ${n}`,
-      unit: "",
-    });
-  }
-  for (let i = 0; i < n; i++) {
-    const v = value[i]!;
-    if (!(allowInfinity && v === Number.POSITIVE_INFINITY)) requireInRange(`${name}[${i}]`, v, "", { min, max });
-    out[i] = v;
-  }
-}
 
 /**
  * Dormand–Prince 5(4) integrator for systems of a fixed size (dormand-prince-1980,
