@@ -8,6 +8,8 @@
  *   npm run mutate calc/core/check.ts:13-16  the lines 13 to 16 of a file
  *   npm run mutate calc/core/units.ts -- --tests "tests/calc/units*.test.ts"
  *                                           only those test files run (faster; the score is a lower bound)
+ *   npm run mutate calc/drivetrain -- --skip "properties \\(fast-check\\)"
+ *                                           leaves out the tests whose full names match (a pattern; the score is a lower bound)
  *   npm run mutate calc/core -- --incremental
  *                                           reuses the last run's results for unchanged code and tests
  *   npm run mutate calc/core -- --ignore-static
@@ -26,6 +28,7 @@ import { Stryker } from "@stryker-mutator/core";
 const args = process.argv.slice(2);
 const paths = [];
 const tests = [];
+const skip = [];
 let incremental = false;
 let ignoreStatic = false;
 let concurrency;
@@ -34,6 +37,7 @@ for (let i = 0; i < args.length; i++) {
   if (arg === "--incremental") incremental = true;
   else if (arg === "--ignore-static") ignoreStatic = true;
   else if (arg === "--tests") tests.push(args[++i] ?? "");
+  else if (arg === "--skip") skip.push(args[++i] ?? "");
   else if (arg === "--concurrency") {
     concurrency = Number(args[++i]);
     if (!Number.isInteger(concurrency) || concurrency < 1) {
@@ -41,7 +45,7 @@ for (let i = 0; i < args.length; i++) {
       process.exit(2);
     }
   } else if (arg.startsWith("--")) {
-    console.error(`Unknown option ${JSON.stringify(arg)}: use paths, --tests <glob>, --incremental, --ignore-static and --concurrency <n>.`);
+    console.error(`Unknown option ${JSON.stringify(arg)}: use paths, --tests <glob>, --skip <pattern>, --incremental, --ignore-static and --concurrency <n>.`);
     process.exit(2);
   } else paths.push(arg);
 }
@@ -63,6 +67,8 @@ const options = { incremental, ignoreStatic, ...(concurrency ? { concurrency } :
 if (paths.length > 0) options.mutate = [...paths.map(toPattern), "!calc/index.ts", "!calc/sources/**"];
 // Narrowed in the Vitest config (see tests/support/vitest.mutation.config.ts), not with Stryker's testFiles.
 if (tests.length > 0) process.env.WHIRLBOOK_MUTATION_TESTS = JSON.stringify(tests);
+// Tests left out by name (a pattern each), in the Vitest config too.
+if (skip.length > 0) process.env.WHIRLBOOK_MUTATION_SKIP = skip.join("|");
 
 const started = Date.now();
 const results = await new Stryker(options).runMutationTest();
@@ -82,5 +88,5 @@ if (results.length === 0) console.log(`\nNo mutants in ${scope} — ${minutes}`)
 else
   console.log(
     `\nMutation score ${score.toFixed(2)} % (${detected} of ${valid} detected: ${killed} killed, ${timedOut} timed out; ${survived} survived, ${noCoverage} not covered; ${count("CompileError") + count("RuntimeError")} invalid, ${count("Ignored")} ignored) in ${minutes}` +
-      ` — ${scope}${tests.length ? `; tests: ${tests.join(", ")}` : ""}${ignoreStatic ? "; static mutants ignored" : ""}`,
+      ` — ${scope}${tests.length ? `; tests: ${tests.join(", ")}` : ""}${skip.length ? `; tests left out: ${skip.join(", ")}` : ""}${ignoreStatic ? "; static mutants ignored" : ""}`,
   );
