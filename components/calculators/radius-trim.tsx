@@ -50,7 +50,11 @@ export default function RadiusTrimCalculator({ id = trimCalculator.anchor }: Rad
           resultsId={resultsId}
           figures={[
             { name: "radius", label: "Set the radius to", value: len(result.radius) },
-            { name: "change", label: result.change >= 0 ? "Larger by" : "Smaller by", value: inSystem(Math.abs(result.change), "length", system, 3) },
+            {
+              name: "change",
+              label: result.change === 0 ? "Change" : result.change > 0 ? "Larger by" : "Smaller by",
+              value: inSystem(Math.abs(result.change), "length", system, 3),
+            },
           ]}
         />
       ) : (

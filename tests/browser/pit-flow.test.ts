@@ -104,6 +104,9 @@ describe("the pit flow", () => {
     await expect
       .poll(() => page.locator("#trim-calculator .verdict").textContent())
       .toBe("Keep the firmware radius at 12.00 mm. No drift: the spin-rate estimate is right at this speed.");
+    expect(await page.locator('#trim-calculator [data-result-bar] [data-bar="change"]').textContent()).toBe("0 mm");
+    expect(await page.locator("#trim-calculator [data-result-bar]").textContent()).toContain("Change");
+    expect(await page.locator("#trim-calculator [data-result-bar]").textContent()).not.toContain("Larger by");
     expect(problems).toEqual([]);
     await context.close();
   });
