@@ -8,10 +8,7 @@
 import { describe, expect, it } from "vitest";
 import { CalcInputError } from "../../../calc/core/errors.ts";
 import { DormandPrince45, type OdeOptions, type OdeRhs, OdeNonFiniteError } from "../../../calc/numerics/ode.ts";
-
-const decay: OdeRhs = (_t, y, f) => {
-  f[0] = -y[0]!;
-};
+import { decay } from "../../support/ode-problems.ts";
 
 /** Runs `fn`, which must throw a CalcInputError, and returns its fields. */
 const refusal = (fn: () => unknown) => {

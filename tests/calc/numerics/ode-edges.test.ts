@@ -1,19 +1,10 @@
 import { describe, expect, it } from "vitest";
 import { DormandPrince45, type OdeOptions, type OdeRhs, OdeNonFiniteError, solveOde } from "../../../calc/numerics/ode.ts";
+import { decay, eventOrder, one, oscillator, sineCrossings } from "../../support/ode-problems.ts";
 import { expectRefusal, refusal } from "../../support/refusal.ts";
 
-const one: OdeRhs = (_t, _y, f) => {
-  f[0] = 1;
-};
 const zero: OdeRhs = (_t, _y, f) => {
   f[0] = 0;
-};
-const decay: OdeRhs = (_t, y, f) => {
-  f[0] = -y[0]!;
-};
-const oscillator: OdeRhs = (_t, y, f) => {
-  f[0] = y[1]!;
-  f[1] = -y[0]!;
 };
 
 /** A run on [0, 1] by default that also records each accepted step's length and trial count. */
@@ -649,71 +640,25 @@ describe("events: sides, directions, tolerance and actions", () => {
   });
 
   it("reports crossings inside one step in time order", () => {
-    const order: number[] = [];
-    solveOde({
-      rhs: one,
-      t0: 0,
-      y0: [0],
-      tEnd: 1,
-      initialStep: 1,
-      maxStep: 1,
-      events: [{ g: (t) => t - 0.7 }, { g: (t) => t - 0.2 }, { g: (t) => t - 0.5 }],
-      onEvent: (hit) => {
-        order.push(hit.index);
-        return "continue";
-      },
-    });
-    expect(order).toEqual([1, 2, 0]);
-    const second: number[] = [];
-    solveOde({
-      rhs: one,
-      t0: 0,
-      y0: [0],
-      tEnd: 1,
-      initialStep: 1,
-      maxStep: 1,
-      events: [{ g: (t) => t - 0.2 }, { g: (t) => t - 0.7 }, { g: (t) => t - 0.5 }],
-      onEvent: (hit) => {
-        second.push(hit.index);
-        return "continue";
-      },
-    });
-    expect(second).toEqual([0, 2, 1]);
+    expect(eventOrder([(t) => t - 0.7, (t) => t - 0.2, (t) => t - 0.5])).toEqual([1, 2, 0]);
+    expect(eventOrder([(t) => t - 0.2, (t) => t - 0.7, (t) => t - 0.5])).toEqual([0, 2, 1]);
   });
 
   it("counts each restart as a step and evaluates f once more there", () => {
-    const restartRun = solveOde({
-      rhs: oscillator,
-      t0: 0,
-      y0: [0, 1],
-      tEnd: 10,
-      rtol: 1e-8,
-      atol: 1e-10,
-      events: [{ g: (_t, y) => y[0]! }],
-      onEvent: () => "restart",
-    });
+    const restartRun = sineCrossings({ rtol: 1e-8, atol: 1e-10, onEvent: () => "restart" });
     expect(restartRun.events).toBe(3); // sin t = 0 at π, 2π, 3π
     expect(restartRun.steps).toBe(restartRun.accepted + restartRun.rejected + restartRun.events);
     expect(restartRun.evaluations).toBe(2 + 6 * (restartRun.accepted + restartRun.rejected) + restartRun.events);
-    const continueRun = solveOde({
-      rhs: oscillator,
-      t0: 0,
-      y0: [0, 1],
-      tEnd: 10,
-      rtol: 1e-8,
-      atol: 1e-10,
-      events: [{ g: (_t, y) => y[0]! }],
-      onEvent: () => "continue",
-    });
+    const continueRun = sineCrossings({ rtol: 1e-8, atol: 1e-10, onEvent: () => "continue" });
     expect(continueRun.events).toBe(3);
     expect(continueRun.steps).toBe(continueRun.accepted + continueRun.rejected);
   });
 
   it("restarts by default when there is no onEvent, and stops at the state the callback sees", () => {
-    const r = solveOde({ rhs: oscillator, t0: 0, y0: [0, 1], tEnd: 10, events: [{ g: (_t, y) => y[0]! }] });
+    const r = sineCrossings();
     expect(r.events).toBe(3);
     expect(r.steps).toBe(r.accepted + r.rejected + 3);
-    const undecided = solveOde({ rhs: oscillator, t0: 0, y0: [0, 1], tEnd: 10, events: [{ g: (_t, y) => y[0]! }], onEvent: () => undefined });
+    const undecided = sineCrossings({ onEvent: () => undefined });
     expect(undecided.steps).toBe(undecided.accepted + undecided.rejected + 3);
   });
 

@@ -5,15 +5,12 @@
  */
 import { describe, expect, it } from "vitest";
 import { type OdeRhs, OdeNonFiniteError, solveOde } from "../../../calc/numerics/ode.ts";
+import { oscillator, sineCrossings } from "../../support/ode-problems.ts";
 import { refusal } from "../../support/refusal.ts";
 
 /** y' = 1 from y(t0) = y0: y = y0 + (t − t0) exactly, so one step can cover the whole span. */
 const ramp: OdeRhs = (_t, _y, f) => {
   f[0] = 1;
-};
-const oscillator: OdeRhs = (_t, y, f) => {
-  f[0] = y[1]!;
-  f[1] = -y[0]!;
 };
 
 /** The OdeNonFiniteError a call throws (fails the test otherwise). */
@@ -311,16 +308,7 @@ describe("where an event lands and in which order events are handled", () => {
       onEvent: () => "continue",
     });
     expect(r.events).toBe(2);
-    const both = solveOde({
-      rhs: oscillator,
-      t0: 0,
-      y0: [0, 1],
-      tEnd: 10,
-      rtol: 1e-10,
-      atol: 1e-12,
-      events: [{ g: (_t, y) => y[0]! }],
-      onEvent: () => "continue",
-    });
+    const both = sineCrossings({ rtol: 1e-10, atol: 1e-12, onEvent: () => "continue" });
     expect(both.events).toBe(3);
   });
 });

@@ -8,6 +8,7 @@ import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { CalcInputError } from "../../../calc/core/errors.ts";
 import { DormandPrince45, type OdeRhs, OdeNonFiniteError, solveOde } from "../../../calc/numerics/ode.ts";
+import { oscillator, sineCrossings } from "../../support/ode-problems.ts";
 
 // odex ships TypeScript source without declarations; loading it through require keeps tsc out of it.
 interface OdexSolver {
@@ -258,11 +259,6 @@ describe("step-size control (hairer-norsett-wanner-1 §II.4) on the Brusselator 
 });
 
 describe("events located on the dense output (Illinois method, dowell-jarratt-1971)", () => {
-  const oscillator: OdeRhs = (_t, y, f) => {
-    f[0] = y[1]!;
-    f[1] = -y[0]!;
-  };
-
   it("finds the zero of sin t at π (y = sin t from y'' = −y), to within 1e-9", () => {
     const hits: number[] = [];
     solveOde({
@@ -391,8 +387,7 @@ describe("events located on the dense output (Illinois method, dowell-jarratt-19
   });
 
   it("gives the same solution whether a record-only event continues or restarts", () => {
-    const run = (action: "continue" | "restart") =>
-      solveOde({ rhs: oscillator, t0: 0, y0: [0, 1], tEnd: 10, rtol: 1e-10, atol: 1e-12, events: [{ g: (_t, y) => y[0]! }], onEvent: () => action });
+    const run = (action: "continue" | "restart") => sineCrossings({ rtol: 1e-10, atol: 1e-12, onEvent: () => action });
     const a = run("continue");
     const b = run("restart");
     close(a.y[0]!, b.y[0]!, 0, 1e-9);
