@@ -76,6 +76,16 @@ export function fitCalibration(
   requireDeclared(calibrationFitInputs.spikeThreshold, "spikeThreshold", spikeThreshold);
   requireFitOptions(confidence, spikeThreshold, huberTuning);
   const speedSquared = rows.map((r) => r.angularSpeed * r.angularSpeed);
+  // A speed whose square leaves the doubles is refused by its row, not as a list the fit cannot use.
+  const tooFast = speedSquared.indexOf(Number.POSITIVE_INFINITY);
+  if (tooFast >= 0) {
+    throw new CalcInputError({
+      param: `rows[${tooFast}].angularSpeed`,
+      value: rows[tooFast]!.angularSpeed,
+      expected: "a speed whose square is a finite number (below about 1.3e154 rad/s)",
+      unit: "rad/s",
+    });
+  }
   const distinct = countDistinct(speedSquared);
   if (rows.length < 3 || distinct < 3) {
     throw new CalcInputError({ param: "rows", value: distinct, expected: "at least 3 readings at different speeds", unit: "" });

@@ -17,6 +17,7 @@ import { decodeCalibrationRows, encodeCalibrationRows } from "../../calc/heading
 import { fitStraightLine } from "../../calc/numerics/line-fit.ts";
 import { logGamma, normalCdf, normalQuantile, studentTCdf, studentTQuantile } from "../../calc/numerics/special.ts";
 import { readFileSync } from "node:fs";
+import { expectRefusal } from "../support/refusal.ts";
 
 /** mulberry32, then Box–Muller: a seeded source of normal deviates for the Monte Carlo checks. */
 function normalSource(seed: number): () => number {
@@ -477,6 +478,23 @@ describe("calibration fit", () => {
     ];
     expect(() => fitCalibration(rows)).toThrow("rows[1].acceleration must be a finite number (got not a number)");
     expect(() => fitCalibration([{ angularSpeed: -1, acceleration: 0 }])).toThrow("rows[0].angularSpeed must be 0 rad/s or more (got -1 rad/s)");
+  });
+
+  it("names the reading whose speed squared leaves the doubles (ω² = 1e400 rad²/s² for 1e200 rad/s), not the whole list", () => {
+    const rows = [
+      { angularSpeed: 100, acceleration: 120 },
+      { angularSpeed: 1e200, acceleration: 1 },
+      { angularSpeed: 200, acceleration: 480 },
+    ];
+    expectRefusal(
+      () => fitCalibration(rows),
+      "rows[1].angularSpeed",
+      1e200,
+      "rad/s",
+      "rows[1].angularSpeed must be a speed whose square is a finite number (below about 1.3e154 rad/s) (got 1e+200 rad/s)",
+    );
+    // √(MAX_VALUE) = 1.34e154 rad/s: just below it the square is finite and the fit goes on to its other checks.
+    expect(() => fitCalibration([...rows.slice(0, 1), { angularSpeed: 1.3e154, acceleration: 1 }, ...rows.slice(2)])).not.toThrow(/angularSpeed/);
   });
 
   it("never returns a non-finite number for valid readings; degenerate ones are refused by name (fast-check)", () => {
