@@ -105,7 +105,8 @@ export function torsionalStress(input: { torque: number; diameter: number; bore?
   const fields = requireInputObject(input);
   requireNonNegative("torque", fields.torque, "N·m");
   const section = roundSection({ diameter: fields.diameter, bore: fields.bore });
-  return requireFiniteResult((fields.torque * (fields.diameter / 2)) / section.polarMoment, "torsional stress", {
+  // T/(J/r), not T·r/J: the product T·r would overflow first for a torque near the largest double.
+  return requireFiniteResult(fields.torque / (section.polarMoment / (fields.diameter / 2)), "torsional stress", {
     torque: [fields.torque, "N·m"],
     diameter: [fields.diameter, "m"],
   }); // shigley-bending-torsion: τ = T·r/J

@@ -87,4 +87,9 @@ describe("the stresses at the edge of the doubles", () => {
       "diameter must be large enough for the torsional stress to stay finite (got 1e-78 m)",
     );
   });
+
+  it("gives a torsional stress that is a double even when T·r alone is not (T = 1.5e308 N·m on a 4 m shaft)", () => {
+    // τ = 16T/(πd³) = 16 × 1.5e308/(π × 64) = 1.1937e307 Pa, though T·r = 3e308 passes the largest double.
+    expect(torsionalStress({ torque: 1.5e308, diameter: 4 }) / ((0.25 * 1.5e308) / Math.PI)).toBeCloseTo(1, 12);
+  });
 });
