@@ -11,7 +11,7 @@ import type { MountingPoint } from "../mass/counterweight.ts";
 import { encodeLayout, parseLayout } from "../mass/layout-text.ts";
 import { massBalance } from "../mass/mass-balance.ts";
 import { massBalanceInputs } from "../mass/mass-balance-inputs.ts";
-import type { LayoutPart } from "../mass/parts.ts";
+import { type LayoutPart, MAX_PARTS } from "../mass/parts.ts";
 import { readMountingPoints, writeMountingPoints } from "../mass/points-text.ts";
 
 /** The parts list, in a link as the compact layout text ("v1~disk_base_…"). */
@@ -101,7 +101,7 @@ export default /* @__PURE__ */ defineCalculator(form, {
         title: "Balance",
         status: r.gradeVerdict === "meets-grade" ? "holds" : r.equivalentGrade <= chosen * 2.5 ? "marginal" : "fails",
         rule: `Balance grade G ${formatNumber(chosen * 1000)} or finer at ${q(values.spinSpeed, "angularSpeed")} (ISO 21940-11); marginal up to one grade step (× 2.5) coarser`,
-        margin: `Centre of mass ${q(r.layout.offset, "length")} off the geometric centre: equivalent grade G ${formatNumber(r.equivalentGrade * 1000)}; ${r.fix.method === "none" || r.fix.method === "too-heavy" ? "no counterweight suggested" : `a ${q(r.fix.after.totalMass - r.fix.before.totalMass, "mass")} counterweight brings it to ${q(r.fix.after.offset, "length")}`}`,
+        margin: `Centre of mass ${q(r.layout.offset, "length")} off the geometric centre: equivalent grade G ${formatNumber(r.equivalentGrade * 1000)}; ${r.fix.method === "list-full" ? `no room for a counterweight (the list holds ${MAX_PARTS} parts)` : r.fix.method === "none" || r.fix.method === "too-heavy" ? "no counterweight suggested" : `a ${q(r.fix.after.totalMass - r.fix.before.totalMass, "mass")} counterweight brings it to ${q(r.fix.after.offset, "length")}`}`,
         figure: figureOf("Equivalent balance grade", r.equivalentGrade, "speed", system, "mm/s"),
         details: [
           figureOf("Total mass", r.layout.totalMass, "mass", system),

@@ -75,11 +75,11 @@ export interface MassBalance {
   };
   /**
    * The layout with the least counterweight added: at the best candidate if one works, else at the
-   * correction radius; at height z̄. "none" (layout unchanged) when the offset is within the target
-   * or the list already holds MAX_PARTS rows; "too-heavy" (layout unchanged) when the mass would
-   * exceed the 10 000 kg part limit.
+   * correction radius; at height z̄. "none" (layout unchanged) when the offset is within the target;
+   * "list-full" (layout unchanged) when a counterweight is needed but the list already holds MAX_PARTS
+   * rows; "too-heavy" (layout unchanged) when the mass would exceed the 10 000 kg part limit.
    */
-  fix: AppliedCounterweight & { method: "none" | "correction-radius" | "candidate" | "too-heavy" };
+  fix: AppliedCounterweight & { method: "none" | "list-full" | "correction-radius" | "candidate" | "too-heavy" };
   /** Where the robot turns: the wheels' centre while their side grip holds, else short of the centre of mass; before and after the fix. */
   spinCentre: { before: SpinCentre; after: SpinCentre };
   /** The sensor's radius about the spin centre, before and after the fix. */
@@ -169,9 +169,11 @@ export function massBalance(input: MassBalanceInput): MassBalance {
   const useCandidate = bestCandidate !== null && bestCandidate.mass !== null && bestCandidate.mass > 0;
   const fixMass = useCandidate ? bestCandidate.mass! : atRadius.mass;
   let fix: MassBalance["fix"];
-  // A list that already holds the most parts allowed has no room for a counterweight row.
-  if (atRadius.status === "not-needed" || parts.length >= MAX_PARTS) {
+  if (atRadius.status === "not-needed") {
     fix = { method: "none", ...unchanged };
+  } else if (parts.length >= MAX_PARTS) {
+    // A list that already holds the most parts allowed has no room for a counterweight row.
+    fix = { method: "list-full", ...unchanged };
   } else if (!(fixMass <= MAX_PART_MASS)) {
     fix = { method: "too-heavy", ...unchanged };
   } else if (useCandidate) {

@@ -1310,8 +1310,9 @@ describe("the mass-and-balance calculator and its counterweight at their edges",
     const r = massBalance(input);
     expect(r.layout.offset).toBeCloseTo(0.00025, 15);
     expect(r.offsetVerdict).toBe("outside-target");
-    expect(r.fix.method).toBe("none");
+    expect(r.fix.method).toBe("list-full"); // not "none", which means within the target
     expect(r.fix.parts).toHaveLength(MAX_PARTS);
+    expect(r.fix.after).toBe(r.fix.before);
     expect(planFor(input, "radius").status).toBe("none");
   });
 

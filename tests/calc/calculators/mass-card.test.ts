@@ -7,7 +7,7 @@
 import { describe, expect, it } from "vitest";
 import mass, { run } from "../../../calc/calculators/mass.ts";
 import { initialValues } from "../../../calc/core/calculator.ts";
-import type { LayoutPart } from "../../../calc/mass/parts.ts";
+import { type LayoutPart, MAX_PARTS } from "../../../calc/mass/parts.ts";
 
 const lugAt = (x: number, z = 0): LayoutPart[] => [
   { name: "hub", shape: { kind: "point" }, mass: { kind: "given", mass: 0.99 }, x: 0, y: 0, z: 0 },
@@ -60,6 +60,24 @@ describe("the balance card", () => {
     const r = run(v);
     expect(r.fix.method).toBe("too-heavy");
     expect(mass.cards(v, r, "metric")[0]!.margin).toMatch(/; no counterweight suggested$/);
+  });
+
+  it(`says a full list (${MAX_PARTS} parts) has no room for the counterweight it needs, rather than suggesting none`, () => {
+    // 200 parts of 10 g, one of them 50 mm out: e = 0.5 g·m / 2 kg = 0.25 mm, G = e·Ω = 25 mm/s at 100 rad/s.
+    const parts: LayoutPart[] = Array.from({ length: MAX_PARTS }, (_, i) => ({
+      name: `p${i}`,
+      shape: { kind: "point" },
+      mass: { kind: "given", mass: 0.01 },
+      x: i === 0 ? 0.05 : 0,
+      y: 0,
+      z: 0,
+    }));
+    const v = { ...base, parts };
+    const r = run(v);
+    expect(r.fix.method).toBe("list-full");
+    expect(mass.cards(v, r, "metric")[0]!.margin).toBe(
+      `Centre of mass 0.250 mm off the geometric centre: equivalent grade G 25.0; no room for a counterweight (the list holds ${MAX_PARTS} parts)`,
+    );
   });
 
   it("writes the figures in US units when the sheet is in US units", () => {
