@@ -221,7 +221,12 @@ export function unifiedClass2Limits(input: { nominalDiameter: number; pitch: num
   const { nominalDiameter, pitch } = requireInputObject(input);
   requireUnifiedPitch(nominalDiameter, pitch);
   if (!(nominalDiameter <= 6 * INCH)) {
-    throw new CalcInputError({ param: "nominalDiameter", value: nominalDiameter, expected: `at most 6 in (${Number((6 * INCH).toPrecision(12))} m)`, unit: "m" });
+    throw new CalcInputError({
+      param: "nominalDiameter",
+      value: nominalDiameter,
+      expected: `at most 6 in (${Number((6 * INCH).toPrecision(12))} m)`,
+      unit: "m",
+    });
   }
   const d = nominalDiameter / INCH;
   const p = pitch / INCH;
