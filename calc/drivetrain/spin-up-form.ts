@@ -49,7 +49,11 @@ export const form = /* @__PURE__ */ defineForm({
   inputs: drivetrainInputs,
   choices: driveTypeChoice,
   pageKeys: ["variants"],
-  applies: (input, values) => applies(input, values.driveType ?? "weapon") && (input !== "noLoadVoltage" || values.noLoadLoss === "speed"),
+  applies: (input, values) => {
+    // Stryker disable next-line StringLiteral: equivalent, applies() tells only "spinner" apart, so a missing drive type read as "" is a weapon too
+    const type = values.driveType ?? "weapon";
+    return applies(input, type) && (input !== "noLoadVoltage" || values.noLoadLoss === "speed");
+  },
 });
 
 // ---------------------------------------------------------------------------------------------
