@@ -53,14 +53,14 @@ export function spinUpViewKeys(view: SpinUpViewText, driveType: string): Record<
   view.variants.forEach((changed, i) => {
     for (const [name, text] of Object.entries(changed)) {
       const spec = drivetrainInputs[name as DrivetrainParameter];
-      if (spec && applies(name, driveType)) out[`${VARIANT_SCOPES[i]}.${spec.urlKey}`] = text.replace(/\s+/g, "");
+      if (spec && applies(name, driveType)) out[`${VARIANT_SCOPES[i]}.${spec.urlKey}`] = text.replace(/\s/g, "");
     }
   });
   if (view.sweep) {
     out[`${SWEEP_SCOPE}.p`] = drivetrainInputs[view.sweep.parameter].urlKey;
-    out[`${SWEEP_SCOPE}.from`] = view.sweep.from.replace(/\s+/g, "");
-    out[`${SWEEP_SCOPE}.to`] = view.sweep.to.replace(/\s+/g, "");
-    out[`${SWEEP_SCOPE}.n`] = view.sweep.points.replace(/\s+/g, "");
+    out[`${SWEEP_SCOPE}.from`] = view.sweep.from.replace(/\s/g, "");
+    out[`${SWEEP_SCOPE}.to`] = view.sweep.to.replace(/\s/g, "");
+    out[`${SWEEP_SCOPE}.n`] = view.sweep.points.replace(/\s/g, "");
   }
   return out;
 }
@@ -127,10 +127,10 @@ export function readSpinUpView(search: string, driveType: string): { view: SpinU
     const changed: Record<string, string> = {};
     for (const [key, value] of scoped.get(VARIANT_SCOPES[i]!) ?? []) {
       const name = byKey.get(key);
-      if (name === undefined || key === "u") {
-        if (key !== "u")
-          notices.push(`The link has a parameter ${quoteForNotice(`${VARIANT_SCOPES[i]}.${key}`)} that this calculator does not use; it was ignored.`);
-      } else changed[name] = value;
+      if (name !== undefined) changed[name] = value;
+      // A variant's unit system ("u", which no input uses as its key) is passed over quietly.
+      else if (key !== "u")
+        notices.push(`The link has a parameter ${quoteForNotice(`${VARIANT_SCOPES[i]}.${key}`)} that this calculator does not use; it was ignored.`);
     }
     variants.push(changed);
   }
