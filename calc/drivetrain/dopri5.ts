@@ -59,16 +59,22 @@ export class Dopri5 {
   /** Takes a trial step of size h from y into y1 (k7 = f(y1)); returns the scaled error norm (≤ 1 to accept). */
   step(sys: SpinUpSystem): number {
     const { y, y1, yt, k1, k2, k3, k4, k5, k6, k7, atol, rtol, h } = this;
+    // Stryker disable next-line EqualityOperator: equivalent, a write past the end of a Float64Array is dropped, so the extra pass changes nothing
     for (let i = 0; i < NS; i++) yt[i] = y[i]! + h * A21 * k1[i]!;
     sys.deriv(yt, k2);
+    // Stryker disable next-line EqualityOperator: equivalent, a write past the end of a Float64Array is dropped, so the extra pass changes nothing
     for (let i = 0; i < NS; i++) yt[i] = y[i]! + h * (A31 * k1[i]! + A32 * k2[i]!);
     sys.deriv(yt, k3);
+    // Stryker disable next-line EqualityOperator: equivalent, a write past the end of a Float64Array is dropped, so the extra pass changes nothing
     for (let i = 0; i < NS; i++) yt[i] = y[i]! + h * (A41 * k1[i]! + A42 * k2[i]! + A43 * k3[i]!);
     sys.deriv(yt, k4);
+    // Stryker disable next-line EqualityOperator: equivalent, a write past the end of a Float64Array is dropped, so the extra pass changes nothing
     for (let i = 0; i < NS; i++) yt[i] = y[i]! + h * (A51 * k1[i]! + A52 * k2[i]! + A53 * k3[i]! + A54 * k4[i]!);
     sys.deriv(yt, k5);
+    // Stryker disable next-line EqualityOperator: equivalent, a write past the end of a Float64Array is dropped, so the extra pass changes nothing
     for (let i = 0; i < NS; i++) yt[i] = y[i]! + h * (A61 * k1[i]! + A62 * k2[i]! + A63 * k3[i]! + A64 * k4[i]! + A65 * k5[i]!);
     sys.deriv(yt, k6);
+    // Stryker disable next-line EqualityOperator: equivalent, a write past the end of a Float64Array is dropped, so the extra pass changes nothing
     for (let i = 0; i < NS; i++) y1[i] = y[i]! + h * (A71 * k1[i]! + A73 * k3[i]! + A74 * k4[i]! + A75 * k5[i]! + A76 * k6[i]!);
     sys.deriv(y1, k7);
     // Error estimate (hairer-norsett-wanner-1 §II.4): RMS of the 5th−4th order difference over the tolerance.
@@ -86,6 +92,7 @@ export class Dopri5 {
   prepareDense(): void {
     if (this.denseReady) return;
     const { y, y1, k1, k3, k4, k5, k6, k7, r1, r2, r3, r4, r5, h } = this;
+    // Stryker disable next-line EqualityOperator: equivalent, a write past the end of a Float64Array is dropped, so the extra pass changes nothing
     for (let i = 0; i < NS; i++) {
       const dy = y1[i]! - y[i]!;
       const bspl = h * k1[i]! - dy;

@@ -47,6 +47,7 @@ export interface Model {
 }
 
 /** The input reduced to the model's numbers (SI; see the module comment). @internal */
+// Stryker disable next-line StringLiteral: equivalent, an empty name falls to the same defaults (motor-side limit, constant loss)
 export function buildModel(input: DrivetrainInput, spinner: boolean, limitAt: CurrentLimitAt = "motor", noLoadLoss: NoLoadLoss = "constant"): Model {
   const kt = torqueConstantFromKv({ kv: input.motorKv });
   const normal = input.weightShare * input.robotMass * STANDARD_GRAVITY;
@@ -302,6 +303,7 @@ export class SpinUpSystem {
     const tm = this.N * this.kt * (this.current - this.lossCurrent(wm)); // motor torque net of the no-load loss
     const load = this.tf + this.c * om * om;
     let acc = (this.k * this.eta * tm - load) / this.jLockF; // gear-efficiency-model, motors driving
+    // Stryker disable next-line EqualityOperator: equivalent, at zero output torque both gear directions give the same acceleration, −T_load/J_load
     if ((this.jLoad * acc + load) / this.rho < 0) acc = (this.k * (tm / this.eta) - load) / this.jLockR; // load driving the motors
     if (om <= 0 && acc <= 0) {
       this.stuck = true;
@@ -333,16 +335,19 @@ export class SpinUpSystem {
       const f = this.dir * this.kineticForceAt(om, wm); // serway-beichner-5e: f_k = μ_k n
       let dww = (this.g * this.eta * tm - f * this.rw) / this.jWheelF;
       tg = this.jw * dww + f * this.rw;
+      // Stryker disable next-line EqualityOperator: equivalent, at zero output torque the input torque is zero too, so both gear directions give the same wheel acceleration
       if (tg < 0) {
         dww = (this.g * (tm / this.eta) - f * this.rw) / this.jWheelR;
         tg = this.jw * dww + f * this.rw;
       }
+      // Stryker disable next-line EqualityOperator: equivalent, at zero wheel acceleration and no motor speed the clamp changes only the output torque, which books nothing at ω_m ≤ 0
       if (wm <= 0 && dww <= 0) {
         dww = 0;
         tg = 0;
       }
       dwm = this.g * dww;
       accBody = (f * this.roff - load) / this.j;
+      // Stryker disable next-line EqualityOperator: equivalent, at zero acceleration the clamp sets the 0 it already is
       if (om <= 0 && accBody <= 0) accBody = 0;
       this.force = f;
       this.stuck = false;
@@ -350,6 +355,7 @@ export class SpinUpSystem {
     }
     const tin = this.N * this.kt * (this.current - this.lossCurrent(wm)) - this.N * this.jm * dwm; // torque into the reduction
     // gear-efficiency-model: driving, T_out = η·G·T_in, so the loss is (1 − η)·T_in·ω_m; driven, (1 − η)·(−T_out)·ω_w.
+    // Stryker disable next-line EqualityOperator: equivalent, at ω_m = 0 both loss terms are 0, and T_out = 0 only when stalled (ω_m = k·Ω ≤ 0) or with T_in = 0 too
     const pGear = wm > 0 ? (tg >= 0 ? (1 - this.eta) * tin * wm : -(1 - this.eta) * tg * ww) : 0;
     const ib = this.battCurrent;
     dy[S_SPEED] = accBody;
@@ -357,9 +363,12 @@ export class SpinUpSystem {
     dy[S_DRAWN] = this.voc * ib;
     dy[S_BATT] = this.rp * ib * ib;
     dy[S_COPPER] = this.N * this.rm * this.current * this.current;
+    // Stryker disable next-line EqualityOperator: equivalent, at zero motor speed the loss power is 0 either way
     dy[S_MLOSS] = wm > 0 ? this.N * this.kt * this.lossCurrent(wm) * wm : 0;
     dy[S_GEAR] = pGear;
+    // Stryker disable next-line EqualityOperator: equivalent, at zero speed the friction power is 0 either way
     dy[S_FRIC] = om > 0 ? this.tf * om : 0;
+    // Stryker disable next-line EqualityOperator: equivalent, at zero speed the drag power is 0 either way
     dy[S_DRAG] = om > 0 ? this.c * om * om * om : 0;
     dy[S_SLIP] = pSlip;
     dy[S_CHARGE] = ib;
@@ -392,6 +401,7 @@ export class SpinUpSystem {
     this.lockedAcceleration(y[S_SPEED]!, y[S_MOTOR]!);
     if (Math.abs(this.force) > this.staticLimitAt(y[S_SPEED]!, y[S_MOTOR]!)) {
       this.mode = SLIPPING;
+      // Stryker disable next-line EqualityOperator: equivalent, reached only with |F| > μ_s·N ≥ 0, so F is never 0 here
       this.dir = this.force >= 0 ? 1 : -1;
     }
   }
