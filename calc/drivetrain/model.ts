@@ -47,7 +47,6 @@ export interface Model {
 }
 
 /** The input reduced to the model's numbers (SI; see the module comment). @internal */
-// Stryker disable next-line StringLiteral: equivalent, an empty name falls to the same defaults (motor-side limit, constant loss)
 export function buildModel(input: DrivetrainInput, spinner: boolean, limitAt: CurrentLimitAt = "motor", noLoadLoss: NoLoadLoss = "constant"): Model {
   const kt = torqueConstantFromKv({ kv: input.motorKv });
   const normal = input.weightShare * input.robotMass * STANDARD_GRAVITY;
