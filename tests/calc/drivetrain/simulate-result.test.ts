@@ -297,4 +297,22 @@ describe("a run stopped by its step budget says why", () => {
       `Stopped at ${r.endTime.toPrecision(3)} s: too stiff to resolve in 50000 steps; the wheels and motor rotors settle in ${r.drive.wheelTimeConstant!.toPrecision(2)} s, too fast to simulate beside the rest. Check the wheel and motor rotor inertias.`,
     ]);
   });
+  it("a drag of 0.02 N·m already at 1e-100 rad/s: the step shrinks below 1e-14 of the time, and the note counts the steps", () => {
+    // T = c·Ω² with c = 0.02/(1e-100)² = 2e198 N·m·s² (quadratic-air-drag): the drive settles within no time a double can step.
+    const r = simulateSpinUp({ ...DEMO_WEAPON, dragReferenceSpeed: 1e-100 }, { series: false });
+    expect(r.endReason).toBe("step-limit");
+    const steps = r.solver.acceptedSteps + r.solver.rejectedSteps;
+    expect(steps).toBeLessThan(50000);
+    expect(r.warnings).toEqual([
+      `Stopped at ${r.endTime.toPrecision(3)} s: too stiff to resolve: after ${steps} steps the step size fell below 10⁻¹⁴ of the time, before the speed settled.`,
+    ]);
+  });
+  it("a spinner whose wheels settle slower than 1e-4 s, stopped by the same drag: the note leaves the wheels out", () => {
+    const r = simulateSpinUp({ ...DEMO_SPINNER, dragReferenceSpeed: 1e-100 }, { series: false });
+    expect(r.endReason).toBe("step-limit");
+    expect(r.drive.wheelTimeConstant!).toBeGreaterThan(1e-4);
+    expect(r.warnings[0]).toMatch(
+      /^Stopped at .* s: too stiff to resolve: after \d+ steps the step size fell below 10⁻¹⁴ of the time, before the speed settled\.$/,
+    );
+  });
 });
