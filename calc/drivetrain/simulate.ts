@@ -23,7 +23,7 @@
 import { requireInRange } from "../core/errors.ts";
 import { STANDARD_GRAVITY } from "../core/constants.ts";
 import { Dopri5 } from "./dopri5.ts";
-import { biteDepth, rotorKineticEnergy, rotorTipSpeed, tractionLimitedAcceleration } from "./figures.ts";
+import { rotorKineticEnergy, rotorTipSpeed, tractionLimitedAcceleration } from "./figures.ts";
 import { type DrivetrainInput, drivetrainInputs, validateDrivetrainInput } from "./inputs.ts";
 import { declaredInputs, type NamedValue, requireFiniteFields, requireFiniteResult, requireInputObject, requireWhole } from "../core/spec-check.ts";
 import {
@@ -342,7 +342,8 @@ function locate(fn: (th: number) => number, f0: number, fHi: number, hi: number,
   let fb = fHi;
   let side = 0;
   for (let it = 0; it < 200 && b - a > 1e-13; it++) {
-    let x = fb !== fa ? (a * fb - b * fa) / (fb - fa) : 0.5 * (a + b);
+    // The secant's root; where it is not strictly inside (fb = fa gives ±∞ or NaN), the midpoint.
+    let x = (a * fb - b * fa) / (fb - fa);
     if (!(x > a && x < b)) x = 0.5 * (a + b);
     const fx = fn(x);
     if (after(fx)) {
@@ -386,7 +387,8 @@ function speedFigures(input: DrivetrainInput, angularSpeed: number): SpeedFigure
     energyPerMass: storedEnergy / input.robotMass,
     // Gravitational potential energy E = m g h solved for h with m = 1 kg (openstax-university-physics-1).
     dropHeightPerKilogram: storedEnergy / STANDARD_GRAVITY,
-    bite: angularSpeed > 0 ? biteDepth({ closingSpeed: input.closingSpeed, angularSpeed, impactors: input.impactors }) : null,
+    // weapon-bite: d = 2π·v/(n·Ω), as biteDepth; a speed so small that it overflows is refused with the whole result, by the input's name.
+    bite: angularSpeed > 0 ? (input.closingSpeed * (2 * Math.PI)) / (angularSpeed * input.impactors) : null,
   };
 }
 

@@ -276,6 +276,12 @@ describe("drives whose time constant leaves the doubles", () => {
     expect(e.param).toBe("gearEfficiency");
     expect(e.message).toBe("gearEfficiency must be large enough for the drive's time constant to stay finite (got 1e-305)");
   });
+  it("refuses a target speed so small that its bite overflows by its own name, not by the bite's internal argument", () => {
+    // 2π·3 m/s/(2·1e-315 rad/s) ≈ 9.4e315 m passes the largest double.
+    const e = refusal(() => simulateSpinUp({ ...DEMO_WEAPON, targetSpeed: 1e-315 }, { series: false }));
+    expect(e.param).toBe("targetSpeed");
+    expect(e.message).toBe("targetSpeed must be large enough for the spin-up figures to stay finite (got 1e-315 rad/s)");
+  });
 });
 
 describe("a run stopped by its step budget says why", () => {
