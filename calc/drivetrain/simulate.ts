@@ -561,7 +561,8 @@ export function simulateSpinUp(input: DrivetrainInput, options: SpinUpOptions = 
     regimes: run.segments,
     peakBatteryCurrent: run.peakBatteryCurrent,
     averageBatteryCurrent: run.endTime > 0 ? y[S_CHARGE]! / run.endTime : run.peakBatteryCurrent,
-    averageBatteryCurrentToTarget: tTarget !== null && tTarget > 0 && run.chargeAtTarget !== null ? run.chargeAtTarget / tTarget : null,
+    // Charge to the target ÷ time to it: null when the target is not reached (NaN) or the quotient is not finite.
+    averageBatteryCurrentToTarget: finiteOrNull((run.chargeAtTarget ?? Number.NaN) / (tTarget ?? Number.NaN)),
     chargeDrawn: y[S_CHARGE]!,
     peakMotorCurrent: run.peakMotorCurrent,
     minBatteryVoltage: run.minBatteryVoltage,
