@@ -321,4 +321,23 @@ describe("a run stopped by its step budget says why", () => {
       /^Stopped at .* s: too stiff to resolve: after \d+ steps the step size fell below 10⁻¹⁴ of the time, before the speed settled\.$/,
     );
   });
+  it("names the wheels only below a wheel time constant of 1e-4 s: at exactly 1e-4 s the note leaves them out", () => {
+    // τ_w = n·J_w·R/(η·G²·N·K_t²) = 4·4e-8·0.04/(1·1·1·0.008²) = 6.4e-9/6.4e-5 = 1e-4 s (worked by hand),
+    // with K_t = 1/(125 rad/s/V), no rotor inertia and a pack without internal resistance.
+    const edge = {
+      ...DEMO_SPINNER,
+      motorCount: 1,
+      motorKv: 125,
+      motorResistance: 0.04,
+      motorRotorInertia: 0,
+      cellResistance: 0,
+      drivenWheels: 4,
+      wheelInertia: 4e-8,
+      dragReferenceSpeed: 1e-100,
+    };
+    const r = simulateSpinUp(edge, { series: false });
+    expect(r.drive.wheelTimeConstant).toBe(1e-4);
+    expect(r.endReason).toBe("step-limit");
+    expect(r.warnings[0]).toMatch(/, before the speed settled\.$/);
+  });
 });
