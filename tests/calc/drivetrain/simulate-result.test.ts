@@ -341,3 +341,22 @@ describe("a run stopped by its step budget says why", () => {
     expect(r.warnings[0]).toMatch(/, before the speed settled\.$/);
   });
 });
+
+describe("the note on the skid lifting (one driven wheel)", () => {
+  it("stays silent when the robot never turns, even with the whole weight on the wheel (lift speed 0)", () => {
+    // Share 1: M·g already on the wheel, so the lift speed √((M·g − s·M·g)/(gyroLoad·k)) is 0; skids holding
+    // 100 N·m keep the body at 0 rad/s, which does not exceed it.
+    const held = { ...DEMO_SPINNER, drivenWheels: 1, weightShare: 1, frictionTorque: 100 };
+    const r = simulateSpinUp(held, { series: false });
+    expect(r.topSpeed).toBe(0);
+    expect(r.warnings.filter((w) => w.includes("gyroscopic"))).toEqual([]);
+  });
+
+  it("warns once the robot turns past the lift speed", () => {
+    const r = simulateSpinUp({ ...DEMO_SPINNER, drivenWheels: 1, weightShare: 1 }, { series: false });
+    expect(r.topSpeed).toBeGreaterThan(0);
+    expect(r.warnings).toContain(
+      "The wheel's gyroscopic moment lifts the skid at 0 rpm; above it the robot tilts onto its wheel, which this model does not follow.",
+    );
+  });
+});
