@@ -23,7 +23,8 @@
 import { requireInRange } from "../core/errors.ts";
 import { STANDARD_GRAVITY } from "../core/constants.ts";
 import { Dopri5 } from "./dopri5.ts";
-import { rotorKineticEnergy, rotorTipSpeed, tractionLimitedAcceleration } from "./figures.ts";
+import { biteDepth, rotorKineticEnergy, rotorTipSpeed, tractionLimitedAcceleration } from "./figures.ts";
+import { asCallerNames } from "../core/caller-names.ts";
 import { type DrivetrainInput, drivetrainInputs, validateDrivetrainInput } from "./inputs.ts";
 import { declaredInputs, type NamedValue, requireFiniteFields, requireFiniteResult, requireInputObject, requireWhole } from "../core/spec-check.ts";
 import {
@@ -378,7 +379,8 @@ function pickIndices(times: readonly number[], count: number): number[] {
   return out;
 }
 
-function speedFigures(input: DrivetrainInput, angularSpeed: number): SpeedFigures {
+/** The figures at one speed; `speedName` is the caller's name for it, which a refusal of the bite names. */
+function speedFigures(input: DrivetrainInput, angularSpeed: number, speedName: string): SpeedFigures {
   const storedEnergy = rotorKineticEnergy({ inertia: input.inertia, angularSpeed });
   return {
     angularSpeed,
@@ -387,8 +389,10 @@ function speedFigures(input: DrivetrainInput, angularSpeed: number): SpeedFigure
     energyPerMass: storedEnergy / input.robotMass,
     // Gravitational potential energy E = m g h solved for h with m = 1 kg (openstax-university-physics-1).
     dropHeightPerKilogram: storedEnergy / STANDARD_GRAVITY,
-    // weapon-bite: d = 2π·v/(n·Ω), as biteDepth; a speed so small that it overflows is refused with the whole result, by the input's name.
-    bite: angularSpeed > 0 ? (input.closingSpeed * (2 * Math.PI)) / (angularSpeed * input.impactors) : null,
+    bite:
+      angularSpeed > 0
+        ? asCallerNames({ angularSpeed: speedName }, () => biteDepth({ closingSpeed: input.closingSpeed, angularSpeed, impactors: input.impactors }))
+        : null,
   };
 }
 
@@ -569,8 +573,8 @@ export function simulateSpinUp(input: DrivetrainInput, options: SpinUpOptions = 
     openCircuitVoltage: m.voc,
     energy,
     energyToTarget: run.drawnAtTarget,
-    atTopSpeed: speedFigures(input, run.topSpeed),
-    atTargetSpeed: speedFigures(input, m.target),
+    atTopSpeed: speedFigures(input, run.topSpeed, "topSpeed"),
+    atTargetSpeed: speedFigures(input, m.target, "targetSpeed"),
     drive,
     series: run.series,
     solver: { acceptedSteps: run.accepted, rejectedSteps: run.rejected, evaluations: run.evaluations, modeSwitches: run.switches },

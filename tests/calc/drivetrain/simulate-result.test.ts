@@ -280,7 +280,7 @@ describe("drives whose time constant leaves the doubles", () => {
     // 2π·3 m/s/(2·1e-315 rad/s) ≈ 9.4e315 m passes the largest double.
     const e = refusal(() => simulateSpinUp({ ...DEMO_WEAPON, targetSpeed: 1e-315 }, { series: false }));
     expect(e.param).toBe("targetSpeed");
-    expect(e.message).toBe("targetSpeed must be large enough for the spin-up figures to stay finite (got 1e-315 rad/s)");
+    expect(e.message).toBe("targetSpeed must be large enough for the bite depth to stay finite (got 1e-315 rad/s)");
   });
 });
 
