@@ -72,6 +72,7 @@ class Recorder {
   peakBattCurrent = 0;
   peakCurrent = 0;
   minVoltage: number;
+  // Stryker disable next-line UnaryOperator: equivalent, the first record is at time 0 = segStart, so no segment is pushed and segStart stays 0 whatever the start value
   segRegime = -1;
   segStart = 0;
   readonly segments: RegimeSegment[] = [];
@@ -91,17 +92,25 @@ class Recorder {
   record(time: number, y: Float64Array, sys: SpinUpSystem): void {
     const regime = sys.regime();
     if (regime !== this.segRegime) {
+      // Stryker disable next-line LogicalOperator: equivalent, segRegime < 0 only at the first record, at time 0 = segStart, where time > segStart is false too
       if (this.segRegime >= 0 && time > this.segStart) this.segments.push({ regime: REGIMES[this.segRegime]!, start: this.segStart, end: time });
+      // Stryker disable next-line EqualityOperator: equivalent, records come in non-decreasing time, so setting segStart = time when time = segStart changes nothing
       if (this.segRegime < 0 || time > this.segStart) this.segStart = time;
       this.segRegime = regime;
     }
     const om = y[S_SPEED]!;
     const wm = y[S_MOTOR]!;
+    // Stryker disable next-line EqualityOperator: equivalent, on a tie (>=) the same value is stored
     if (om > this.topSpeed) this.topSpeed = om;
+    // Stryker disable next-line EqualityOperator: equivalent, on a tie (>=) the same value is stored
     if (wm > this.peakMotorSpeed) this.peakMotorSpeed = wm;
+    // Stryker disable next-line EqualityOperator: equivalent, on a tie (>=) the same value is stored
     if (sys.battCurrent > this.peakBattCurrent) this.peakBattCurrent = sys.battCurrent;
+    // Stryker disable next-line EqualityOperator: equivalent, on a tie (>=) the same value is stored
     if (sys.current > this.peakCurrent) this.peakCurrent = sys.current;
+    // Stryker disable next-line EqualityOperator: equivalent, on a tie (<=) the same value is stored
     if (sys.battVoltage < this.minVoltage) this.minVoltage = sys.battVoltage;
+    // Stryker disable next-line ConditionalExpression: equivalent, series() returns [] without keepSeries, so arrays filled anyway are never read
     if (this.keepSeries) {
       this.t.push(time);
       this.speed.push(om);
@@ -114,10 +123,12 @@ class Recorder {
   }
 
   finish(time: number): void {
+    // Stryker disable next-line ConditionalExpression: equivalent, record(0) always runs before finish, so segRegime is already a regime (0 to 3)
     if (this.segRegime >= 0) this.segments.push({ regime: REGIMES[this.segRegime]!, start: this.segStart, end: Math.max(time, this.segStart) });
   }
 
   series(maxPoints: number): SpinUpPoint[] {
+    // Stryker disable next-line ConditionalExpression: equivalent, without keepSeries the arrays are empty and pickIndices of no times is []
     if (!this.keepSeries) return [];
     return pickIndices(this.t, maxPoints).map((i) => ({
       time: this.t[i]!,
@@ -170,6 +181,7 @@ function findEvent(sys: SpinUpSystem, st: Dopri5, gCur: number, tolForce: number
         event = EVENT_GRIP_LOST;
       }
     }
+    // Stryker disable next-line LogicalOperator: equivalent, a weapon is never SLIPPING and a spinner reaches this branch only when not LOCKED
   } else if (sys.spinner && sys.mode === SLIPPING) {
     const g1 = sys.dir * sys.slipSpeed(y1[S_SPEED]!, y1[S_MOTOR]!);
     if (g1 < -tolSlip) {
@@ -199,11 +211,13 @@ function integrate(m: Model, opts: Required<SpinUpOptions>): RawRun {
   st.rtol = rtol;
   st.atol[S_SPEED] = rtol * speedRef;
   st.atol[S_MOTOR] = rtol * motorRef;
+  // Stryker disable next-line EqualityOperator: equivalent, atol[S_CHARGE] is set again on the next line
   for (let i = S_DRAWN; i < S_CHARGE; i++) st.atol[i] = rtol * energyRef;
   st.atol[S_CHARGE] = rtol * chargeRef;
   const tolForce = 1e-9 * m.fs;
   const tolSlip = 1e-9 * speedRef * m.roff;
   const rec = new Recorder(opts.series, m.voc);
+  // Stryker disable next-line ObjectLiteral: equivalent, findEvent writes found.theta before anything reads it
   const found = { theta: 1 };
 
   let t = 0;
@@ -245,6 +259,7 @@ function integrate(m: Model, opts: Required<SpinUpOptions>): RawRun {
         continue;
       }
       accepted++;
+      // Stryker disable next-line ConditionalExpression: equivalent, at err = 0 the general branch gives min(10, max(0.2, 0.9·0^−0.2 = ∞)) = 10 too
       let factor = err === 0 ? 10 : Math.min(10, Math.max(0.2, 0.9 * err ** -0.2));
       if (lastRejected) factor = Math.min(1, factor);
       lastRejected = false;
@@ -252,8 +267,10 @@ function integrate(m: Model, opts: Required<SpinUpOptions>): RawRun {
       // Events inside the step, each located on the dense output; the earliest one cuts the step.
       const event = findEvent(sys, st, gCur, tolForce, tolSlip, found);
       const theta = found.theta;
+      // Stryker disable next-line EqualityOperator: equivalent, a write at index NS of the length-NS Float64Array is ignored
       if (event !== EVENT_NONE) for (let i = 0; i < NS; i++) st.y1[i] = st.dense(i, theta);
       // Speed crossings (50 %, 90 %, 100 % of target) up to the end of the (possibly cut) step.
+      // Stryker disable next-line ConditionalExpression,EqualityOperator: equivalent, past the last fraction SPEED_FRACTIONS[nextCross] is undefined, the level NaN, and the comparison false
       while (nextCross < SPEED_FRACTIONS.length && st.y1[S_SPEED]! >= SPEED_FRACTIONS[nextCross]! * m.target) {
         const level = SPEED_FRACTIONS[nextCross]! * m.target;
         st.prepareDense();
@@ -283,6 +300,7 @@ function integrate(m: Model, opts: Required<SpinUpOptions>): RawRun {
         if (event === EVENT_GRIP_LOST) {
           sys.lockedAcceleration(st.y[S_SPEED]!, st.y[S_MOTOR]!);
           sys.mode = SLIPPING;
+          // Stryker disable next-line EqualityOperator: equivalent, grip is lost only when |force| exceeds μ_s·N plus a positive tolerance, so force is never 0 here
           sys.dir = sys.force >= 0 ? 1 : -1;
         } else if (event === EVENT_REGRIP) {
           sys.regrip(st.y);
