@@ -181,7 +181,7 @@ function findEvent(sys: SpinUpSystem, st: Dopri5, gCur: number, tolForce: number
         event = EVENT_GRIP_LOST;
       }
     }
-    // Stryker disable next-line LogicalOperator: equivalent, a weapon is never SLIPPING and a spinner reaches this branch only when not LOCKED
+    // Stryker disable next-line LogicalOperator,ConditionalExpression: equivalent, a spinner reaches this branch only when SLIPPING, a weapon is never SLIPPING, and a weapon's rim slip ω_m/G − Ω is 0 up to rounding (under 1e-11 of the speed), far inside tolSlip (1e-9)
   } else if (sys.spinner && sys.mode === SLIPPING) {
     const g1 = sys.dir * sys.slipSpeed(y1[S_SPEED]!, y1[S_MOTOR]!);
     if (g1 < -tolSlip) {
