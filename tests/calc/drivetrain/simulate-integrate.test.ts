@@ -161,7 +161,7 @@ describe("spin-up held at a current limit first: constant torque, then the expon
   });
 
   it("meeting the end of the limit in its last step, still runs on to the time limit", () => {
-    // The time limit 1e-6 of t₁ after it: the step that ends on the limit holds the switch.
+    // The time limit set 1e-6·t₁ after t₁: the step that ends on the time limit holds the switch.
     const end = t1 * (1 + 1e-6);
     const just = simulateSpinUp({ ...LIMITED, maxTime: end }, { series: false, stopAtSteadyState: false });
     expect(just.endTime).toBe(end);
