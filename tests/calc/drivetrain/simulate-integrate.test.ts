@@ -192,6 +192,35 @@ describe("spin-up held at a current limit first: constant torque, then the expon
   });
 });
 
+describe("a weapon held at its current limit by air drag: Ω = Ω_eq·tanh(a·t/Ω_eq)", () => {
+  // Limited, J·Ω̇ = K_t·I_lim − c·Ω² with a = K_t·I_lim/J: Ω(t) = Ω_eq·tanh(a·t/Ω_eq), Ω_eq = √(K_t·I_lim/c)
+  // (separable ODE, dΩ/(Ω_eq² − Ω²) = (c/J)·dt). Here a = 0.19099/1e-4 = 1909.9 rad/s², Ω_eq = 3820 rad/s,
+  // below the speed where a 48 V pack stops the 20 A limit, (48 − 20·0.001)/K_t = 5024 rad/s; the
+  // approach (Ω_eq/a = 2 s) is far slower than the motor's own τ = J·R/K_t² = 1.1 ms.
+  const wEq = 3820;
+  const a = (kt * 20) / J;
+  const DRAG: DrivetrainInput = {
+    ...PURE,
+    motorResistance: 0.001,
+    cellResistance: 0,
+    cellCount: 12,
+    currentLimitAt: "motor",
+    currentLimit: 20,
+    dragTorque: kt * 20,
+    dragReferenceSpeed: wEq,
+    targetSpeed: 0.99 * wEq,
+    maxTime: 20,
+  };
+
+  it("stays in the limit, is not called settled on the motor's short time constant, and ends at tanh(10)·Ω_eq", () => {
+    const r = simulateSpinUp(DRAG, { series: false });
+    expect(r.regimes.map((g) => g.regime)).toEqual(["current-limit"]);
+    expect(r.endReason).toBe("max-time");
+    expect(r.topSpeed / (wEq * Math.tanh((a * 20) / wEq))).toBeCloseTo(1, 7);
+    expect(r.timeTo90! / ((wEq / a) * Math.atanh(0.9 * 0.99))).toBeCloseTo(1, 7); // 2·atanh(0.891) = 2.853 s
+  });
+});
+
 describe("a spinner that grips at first and slips once air drag asks more of its wheels than μ_s·N", () => {
   // Two wheels of 18 mm at 70 mm, direct drive, k = R/r_w = 3.889; wheels heavy next to the body
   // (ρ²·n·J_w = 15.12·0.00298 = 0.045 kg·m² beside J = 0.005), so while gripping the wheels need
