@@ -4,23 +4,13 @@
  * the speed figures, the option refusals and the notes on a run that stopped early.
  */
 import { describe, expect, it } from "vitest";
-import { CalcInputError } from "../../../calc/core/errors.ts";
 import { STANDARD_GRAVITY } from "../../../calc/core/constants.ts";
 import { DEMO_SPINNER, DEMO_WEAPON } from "../../../calc/drivetrain/demo.ts";
 import type { DrivetrainInput } from "../../../calc/drivetrain/inputs.ts";
 import { simulateSpinUp } from "../../../calc/drivetrain/simulate.ts";
+import { refusal } from "../../support/refusal.ts";
 
 const rel = (a: number, b: number) => Math.abs(a - b) / Math.abs(b);
-
-function refusal(fn: () => unknown): CalcInputError {
-  try {
-    fn();
-  } catch (e) {
-    if (e instanceof CalcInputError) return e;
-    throw e;
-  }
-  throw new Error("no refusal");
-}
 
 /**
  * A DC motor on a pure inertia, nothing else: one motor, K_t = 1/K_v = 1/(100 rad/s/V) = 0.01 N·m/A,
