@@ -221,22 +221,27 @@ describe("a weapon held at its current limit by air drag: Ω = Ω_eq·tanh(a·t/
   });
 });
 
+/** The demo spinner with its losses reduced to air drag alone (4.6 N·m at 182 rad/s), no current limit, and heavy wheels of 0.00149 kg·m² under a 5 kg robot. */
+const DRAGGED_SPINNER: DrivetrainInput = {
+  ...DEMO_SPINNER,
+  noLoadCurrent: 0,
+  motorRotorInertia: 0,
+  currentLimitAt: "none",
+  cellResistance: 0,
+  frictionTorque: 0,
+  dragTorque: 4.6,
+  dragReferenceSpeed: 182,
+  wheelInertia: 0.00149,
+  robotMass: 5,
+  weightShare: 1,
+};
+
 describe("a spinner that grips at first and slips once air drag asks more of its wheels than μ_s·N", () => {
   // Two wheels of 18 mm at 70 mm, direct drive, k = R/r_w = 3.889; wheels heavy next to the body
   // (ρ²·n·J_w = 15.12·0.00298 = 0.045 kg·m² beside J = 0.005), so while gripping the wheels need
   // F = (J·Ω̇ + c·Ω²)/R with J_eff·Ω̇ = k·T_m − c·Ω²: a force that grows with the drag.
   const SP: DrivetrainInput = {
-    ...DEMO_SPINNER,
-    noLoadCurrent: 0,
-    motorRotorInertia: 0,
-    currentLimitAt: "none",
-    cellResistance: 0,
-    frictionTorque: 0,
-    dragTorque: 4.6,
-    dragReferenceSpeed: 182,
-    wheelInertia: 0.00149,
-    robotMass: 5,
-    weightShare: 1,
+    ...DRAGGED_SPINNER,
     staticFriction: 0.8,
     kineticFriction: 0.6,
     maxTime: 5,
@@ -337,17 +342,7 @@ describe("a spinner whose steady grip needs all but 3e-10 of μ_s·N", () => {
   // No limit, no friction: steady where k·T_m(kΩ) = c·Ω², 2·K_t·k·(V − K_t·k·Ω)/R_m = c·Ω², and the
   // wheels then push F = c·Ω²/R. With μ_s·N = F·(1 + 3e-10) the grip holds (the switch allows 1e-9·μ_s·N).
   const base: DrivetrainInput = {
-    ...DEMO_SPINNER,
-    noLoadCurrent: 0,
-    motorRotorInertia: 0,
-    currentLimitAt: "none",
-    cellResistance: 0,
-    frictionTorque: 0,
-    dragTorque: 4.6,
-    dragReferenceSpeed: 182,
-    wheelInertia: 0.00149,
-    robotMass: 5,
-    weightShare: 1,
+    ...DRAGGED_SPINNER,
     kineticFriction: 0.5,
     maxTime: 20,
   };
