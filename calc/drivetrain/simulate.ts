@@ -100,16 +100,11 @@ class Recorder {
     }
     const om = y[S_SPEED]!;
     const wm = y[S_MOTOR]!;
-    // Stryker disable next-line EqualityOperator: equivalent, on a tie (>=) the same value is stored
-    if (om > this.topSpeed) this.topSpeed = om;
-    // Stryker disable next-line EqualityOperator: equivalent, on a tie (>=) the same value is stored
-    if (wm > this.peakMotorSpeed) this.peakMotorSpeed = wm;
-    // Stryker disable next-line EqualityOperator: equivalent, on a tie (>=) the same value is stored
-    if (sys.battCurrent > this.peakBattCurrent) this.peakBattCurrent = sys.battCurrent;
-    // Stryker disable next-line EqualityOperator: equivalent, on a tie (>=) the same value is stored
-    if (sys.current > this.peakCurrent) this.peakCurrent = sys.current;
-    // Stryker disable next-line EqualityOperator: equivalent, on a tie (<=) the same value is stored
-    if (sys.battVoltage < this.minVoltage) this.minVoltage = sys.battVoltage;
+    this.topSpeed = Math.max(this.topSpeed, om);
+    this.peakMotorSpeed = Math.max(this.peakMotorSpeed, wm);
+    this.peakBattCurrent = Math.max(this.peakBattCurrent, sys.battCurrent);
+    this.peakCurrent = Math.max(this.peakCurrent, sys.current);
+    this.minVoltage = Math.min(this.minVoltage, sys.battVoltage);
     // Stryker disable next-line ConditionalExpression: equivalent, series() returns [] without keepSeries, so arrays filled anyway are never read
     if (this.keepSeries) {
       this.t.push(time);
@@ -259,8 +254,8 @@ function integrate(m: Model, opts: Required<SpinUpOptions>): RawRun {
         continue;
       }
       accepted++;
-      // Stryker disable next-line ConditionalExpression: equivalent, at err = 0 the general branch gives min(10, max(0.2, 0.9·0^−0.2 = ∞)) = 10 too
-      let factor = err === 0 ? 10 : Math.min(10, Math.max(0.2, 0.9 * err ** -0.2));
+      // At err = 0, 0^−0.2 = ∞ and the factor is its cap, 10.
+      let factor = Math.min(10, Math.max(0.2, 0.9 * err ** -0.2));
       if (lastRejected) factor = Math.min(1, factor);
       lastRejected = false;
 
