@@ -7,6 +7,7 @@ import remarkMath from "remark-math";
 import rehypeKatex from "rehype-katex";
 import { rehypeBaseLinks } from "./scripts/site/rehype-base-links.mjs";
 import { rehypeMath } from "./scripts/site/rehype-math.mjs";
+import { rehypeLazyBlocks } from "./scripts/site/rehype-lazy-blocks.mjs";
 import { mathFont } from "./scripts/site/math-font.mjs";
 import { contentSecurityPolicyPlugin } from "./scripts/site/content-security-policy.mjs";
 import { offlineAndSearch } from "./scripts/site/offline-and-search.mjs";
@@ -42,7 +43,7 @@ export default defineConfig({
     syntaxHighlight: false,
     processor: unified({
       remarkPlugins: [remarkMath],
-      rehypePlugins: [[rehypeKatex, { strict: "error", throwOnError: true, output: "mathml" }], rehypeMath, [rehypeBaseLinks, { base }]],
+      rehypePlugins: [[rehypeKatex, { strict: "error", throwOnError: true, output: "mathml" }], rehypeMath, rehypeLazyBlocks, [rehypeBaseLinks, { base }]],
     }),
   },
   devToolbar: { enabled: false },

@@ -10,7 +10,7 @@ import { describe, expect, it } from "vitest";
 import type { Page } from "playwright-core";
 import { fileURLToPath } from "node:url";
 import { build } from "esbuild";
-import { axeViolations, useSite } from "../support/browser.ts";
+import { axeViolations, showCalculator, useSite } from "../support/browser.ts";
 
 const site = useSite();
 const { origin, open } = site;
@@ -208,6 +208,7 @@ describe("the spin-up page's figures computed at build time, and what it loads w
 
   it("opens on the default design's figures, the same as the live simulation shows after an edit and its undo, and loads no simulation until then", async () => {
     const { page, context, problems, requests } = await open(PAGE);
+    await showCalculator(page, ID);
     const opened = await shown(page);
     expect(opened.results.join(" ")).toContain("1.01 s");
     expect(opened.labels.length).toBeGreaterThan(0);

@@ -7,7 +7,7 @@
  */
 import { describe, expect, it } from "vitest";
 import type { Page } from "playwright-core";
-import { axeViolations, useSite, waitForIslands } from "../support/browser.ts";
+import { axeViolations, showCalculator, useSite, waitForIslands } from "../support/browser.ts";
 import { decodeCalibrationRows, encodeCalibrationRows } from "../../calc/heading/calibration-rows.ts";
 import { fitCalibration } from "../../calc/heading/calibration.ts";
 import { parseCalibrationCsv } from "../../calc/heading/csv.ts";
@@ -207,6 +207,7 @@ describe("calibration from logged readings", () => {
           text: (calc.querySelector("textarea") as HTMLTextAreaElement).value,
         };
       });
+    await showCalculator(page, "#calibration-calculator");
     const opened = await shown();
     expect(opened.results).toContain("12.703 mm");
     expect(opened.charts).toHaveLength(2);

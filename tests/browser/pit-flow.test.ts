@@ -5,7 +5,7 @@
  */
 import { describe, expect, it } from "vitest";
 import type { Page } from "playwright-core";
-import { axeViolations, useSite } from "../support/browser.ts";
+import { axeViolations, showCalculator, useSite } from "../support/browser.ts";
 import { linkFor } from "../../calc/core/calculator.ts";
 import { form as weaponTurnForm } from "../../calc/calculators/weapon-turn.ts";
 import { DEMO_VERTICAL_SPINNER_TURN } from "../../calc/weapon/turn-check.ts";
@@ -115,6 +115,7 @@ describe("the pit flow", () => {
     "draws the chart text of %s at 11 CSS px or more on a 390 px phone",
     async (slug) => {
       const { page, context } = await open(`/chapters/${slug}/`);
+      await showCalculator(page);
       const smallest = () =>
         page.$$eval(".chart svg text", (texts) =>
           Math.min(

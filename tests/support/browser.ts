@@ -3,7 +3,7 @@
  * through playwright-core (no browser download).
  */
 import { chromium, type Browser, type Page } from "playwright-core";
-import { afterAll, beforeAll } from "vitest";
+import { afterAll, beforeAll, expect } from "vitest";
 import { existsSync, readFileSync } from "node:fs";
 import { createRequire } from "node:module";
 import { resolve } from "node:path";
@@ -47,10 +47,44 @@ export async function axeViolations(page: Page, selector = "html"): Promise<stri
   // Evaluated through the browser's debugging protocol: the pages' security policy blocks an inline <script>.
   if (!(await page.evaluate(() => "axe" in window))) await page.evaluate(axeSource);
   return page.evaluate(async (within) => {
-    // @ts-expect-error axe is injected above
-    const r = await window.axe.run(document.querySelector(within), { resultTypes: ["violations"] });
-    return r.violations.map((v: { id: string; nodes: { target: string[] }[] }) => `${v.id}: ${v.nodes.map((n) => n.target.join(" ")).join(", ")}`);
+    // A chapter's blocks past the first screen are drawn only when they come near it
+    // (`content-visibility: auto`); a reader sees them drawn, so axe checks them drawn (its colour
+    // and size checks read the drawn page), and they are put back as they were afterwards.
+    const lazy = [...document.querySelectorAll<HTMLElement>(".lazy-block")];
+    for (const block of lazy) block.style.contentVisibility = "visible";
+    try {
+      // @ts-expect-error axe is injected above
+      const r = await window.axe.run(document.querySelector(within), { resultTypes: ["violations"] });
+      return r.violations.map((v: { id: string; nodes: { target: string[] }[] }) => `${v.id}: ${v.nodes.map((n) => n.target.join(" ")).join(", ")}`);
+    } finally {
+      for (const block of lazy) block.style.removeProperty("content-visibility");
+    }
   }, selector);
+}
+
+/**
+ * Brings a calculator to the screen, as a reader does before using it, and waits until its charts
+ * are drawn at the width they are shown at: a calculator is laid out only when it comes near the
+ * screen (`content-visibility: auto`), and a chart measures its width then.
+ */
+export async function showCalculator(page: Page, selector = "section.calc"): Promise<void> {
+  // Scrolled to the top of the block that holds it (a reader scrolling down reaches that first): a
+  // scroll straight to an element inside a block not yet drawn is placed from the block's real
+  // height, past the height held for it, and would leave the block undrawn.
+  await page.$eval(selector, (element) => {
+    const block = element.closest(".lazy-block") ?? element;
+    window.scrollTo(0, block.getBoundingClientRect().top + window.scrollY);
+  });
+  await expect
+    .poll(() =>
+      page.$$eval(`${selector} .chart svg`, (svgs) =>
+        svgs.every((svg) => {
+          const shown = (svg.parentElement as HTMLElement).clientWidth;
+          return shown === 0 || (svg as SVGSVGElement).viewBox.baseVal.width <= Math.round(shown) + 1;
+        }),
+      ),
+    )
+    .toBe(true);
 }
 
 /**
