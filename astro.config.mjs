@@ -71,6 +71,8 @@ export default defineConfig({
       // becomes a data: URL, which the security policy would block.
       assetsInlineLimit: 4096,
       sourcemap: process.env.SOURCEMAP === "1",
+      // NOMINIFY=1: readable bundles, for reading a CPU profile.
+      minify: process.env.NOMINIFY === "1" ? false : undefined,
       rolldownOptions: {
         // calc/ is pure by rule (no DOM, no I/O, nothing runs on import): a calc module a chunk
         // imports but does not use is left out instead of being kept for its "side effects". The one
@@ -92,6 +94,12 @@ export default defineConfig({
               // The heading-timing chapter's two calculators (timing, smoothing) in one chunk: the build sheet
               // loads each one's check on its own, which would otherwise split them in two.
               { name: "timing", test: /calc[\\/]heading[\\/](timing|smoothing)(-inputs)?\.ts$/ },
+              // The density table stays a chunk of its own (several calculators read it), ahead of the
+              // group below, which would otherwise take it in as a dependency of the shaft check.
+              { name: "densities", test: /calc[\\/]materials[\\/]densities\.ts$/ },
+              // The shaft check and the strength table only it reads, in one chunk (one request and one
+              // compressed stream on the weapon-shaft page instead of two).
+              { name: "shaft-check", test: /calc[\\/](weapon[\\/]shaft-check|materials[\\/]strengths)\.ts$/ },
             ],
           },
         },

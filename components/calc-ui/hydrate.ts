@@ -9,6 +9,7 @@
  * load strategies) that cost about 2.5 KB gzip on every calculator page; ours needs none of that.
  */
 import { h, hydrate, type ComponentType } from "preact";
+import { hydrateInParts } from "./hydrate-later.ts";
 
 export function hydrateIslands<P extends object>(name: string, component: ComponentType<P>): void {
   for (const element of document.querySelectorAll<HTMLElement>(`[data-island="${name}"]`)) {
@@ -16,7 +17,7 @@ export function hydrateIslands<P extends object>(name: string, component: Compon
     // phone, evaluating the code and attaching the calculator in one go made one task over 50 ms.
     // (Island.astro always writes data-props, "{}" at least.)
     setTimeout(() => {
-      hydrate(h(component, JSON.parse(element.dataset.props!) as P), element);
+      hydrateInParts(() => hydrate(h(component, JSON.parse(element.dataset.props!) as P), element));
       element.dataset.hydrated = "";
     });
   }

@@ -20,6 +20,7 @@ import { signal } from "../calc-ui/reactive.ts";
 import { Chart } from "../calc-ui/Chart.tsx";
 import { ACCELERATION_UNITS, createCalibrationModel, nextTask, SPEED_UNITS, type CalibrationModel } from "../heading/calibration-model.ts";
 import type { CalibrationStart } from "../heading/calibration-engine.ts";
+import { HydrateLater } from "../calc-ui/hydrate-later.ts";
 
 /** The island name: this file's name. */
 export const island = "calibration";
@@ -258,7 +259,9 @@ export default function CalibrationCalculator({ start, id = "calibration-calcula
       </form>
       <Later model={model} id={id} given={results} part="Bar" />
       <Later model={model} id={id} given={results} part="Results" />
-      <Charts model={model} />
+      <HydrateLater>
+        <Charts model={model} />
+      </HydrateLater>
     </section>
   );
 }

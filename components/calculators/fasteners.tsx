@@ -28,6 +28,7 @@ import { ChoiceField } from "../loads/ChoiceField.tsx";
 import { area, Outputs, q, VERDICT_TONE, verdictRule } from "../loads/format.tsx";
 import { Verdict } from "../calc-ui/Verdict.tsx";
 import { whenIdle } from "../calc-ui/idle.ts";
+import { HydrateLater } from "../calc-ui/hydrate-later.ts";
 
 /** The island name: this file's name. */
 export const island = "fasteners";
@@ -375,8 +376,12 @@ export default function FastenerCalculator({ id = fastenerCalculator.anchor, ini
           </fieldset>
         </details>
       </form>
-      <FastenerBar model={model} id={id} />
-      <Results model={model} id={id} />
+      <HydrateLater>
+        <FastenerBar model={model} id={id} />
+      </HydrateLater>
+      <HydrateLater>
+        <Results model={model} id={id} />
+      </HydrateLater>
     </section>
   );
 }

@@ -21,6 +21,7 @@ import { saveAll } from "../calc-ui/save.ts";
 import { degPerSecond, degrees, inSystem } from "../heading/format.ts";
 import { DataTable, Empty, FieldsForm, Outputs, Verdict, type FieldGroup } from "../heading/ui.tsx";
 import type { PairModel } from "../heading/opposed-pair.tsx";
+import { HydrateLater } from "../calc-ui/hydrate-later.ts";
 
 /** The island name: this file's name. */
 export const island = "heading-drift";
@@ -257,9 +258,15 @@ export default function HeadingDriftCalculator({ id = driftCalculator.anchor }: 
       {pairNotices && <Notices notices={pairNotices} />}
       <Toolbar idPrefix={id} system={model.fields.system} onSystem={model.setSystem} link={link} save={save} />
       <FieldsForm fields={model.fields} groups={DRIFT_GROUPS} idPrefix={id} error={() => model.outcome.value.error} />
-      <DriftBar model={model} id={id} />
-      <DriftResults model={model} id={id} />
-      <DriftChart model={model} />
+      <HydrateLater>
+        <DriftBar model={model} id={id} />
+      </HydrateLater>
+      <HydrateLater>
+        <DriftResults model={model} id={id} />
+      </HydrateLater>
+      <HydrateLater>
+        <DriftChart model={model} />
+      </HydrateLater>
       <div class="calc-section" role="group" aria-labelledby={`${id}-pair-title`} id={`${id}-pair`}>
         <h3 id={`${id}-pair-title`}>Two opposed sensors</h3>
         <PairPart model={model} id={id} />

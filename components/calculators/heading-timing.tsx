@@ -67,6 +67,7 @@ export function createTimingModel() {
 type TimingModel = ReturnType<typeof createTimingModel>;
 import { Chart } from "../calc-ui/Chart.tsx";
 import { ResultBar } from "../calc-ui/ResultBar.tsx";
+import { HydrateLater } from "../calc-ui/hydrate-later.ts";
 
 export interface HeadingTimingCalculatorProps {
   /** Element id of the calculator (the link's anchor). */
@@ -299,14 +300,24 @@ export default function HeadingTimingCalculator({ id = "timing-calculator" }: He
       />
       <h3 id={`${id}-timing-title`}>Loop, latency and heading LED</h3>
       <FieldsForm fields={model.timing} groups={TIMING_GROUPS} idPrefix={id} error={() => model.timingOutcome.value.error} />
-      <TimingBar model={model} id={id} />
-      <TimingResults model={model} id={id} />
+      <HydrateLater>
+        <TimingBar model={model} id={id} />
+      </HydrateLater>
+      <HydrateLater>
+        <TimingResults model={model} id={id} />
+      </HydrateLater>
       <div class="calc-section" role="group" aria-labelledby={`${id}-smoothing-title`}>
         <h3 id={`${id}-smoothing-title`}>Smoothing the spin-rate estimate</h3>
         <FieldsForm fields={model.smoothing} groups={SMOOTHING_GROUPS} idPrefix={`${id}-s`} error={() => model.smoothingOutcome.value.error} />
-        <SmoothingBar model={model} id={id} />
-        <SmoothingResults model={model} id={id} />
-        <TradeoffChart model={model} />
+        <HydrateLater>
+          <SmoothingBar model={model} id={id} />
+        </HydrateLater>
+        <HydrateLater>
+          <SmoothingResults model={model} id={id} />
+        </HydrateLater>
+        <HydrateLater>
+          <TradeoffChart model={model} />
+        </HydrateLater>
       </div>
     </section>
   );

@@ -26,6 +26,7 @@ import { linkFor } from "../../calc/core/calculator.ts";
 import { form as massCalculator } from "../../calc/calculators/mass.ts";
 import { headingDriftForm as headingDrift } from "../../calc/heading/drift-inputs.ts";
 import { siteUrl } from "../calc-ui/site.ts";
+import { HydrateLater } from "../calc-ui/hydrate-later.ts";
 
 /** The island name: this file's name. */
 export const island = "mass";
@@ -440,7 +441,7 @@ export default function MassLayoutCalculator({ id = massCalculator.anchor, layou
         </fieldset>
 
         <h3 id={`${id}-results`}>Mass properties and top view</h3>
-        {mass ?? empty}
+        <HydrateLater>{mass ?? empty}</HydrateLater>
 
         <h3>Balance</h3>
         <div class="mass-grid">
@@ -465,7 +466,7 @@ export default function MassLayoutCalculator({ id = massCalculator.anchor, layou
           </div>
           {field("balanceGrade")}
         </div>
-        {balance}
+        <HydrateLater>{balance}</HydrateLater>
 
         <h3>Counterweight</h3>
         <fieldset class="segmented mass-modes">
@@ -507,7 +508,7 @@ export default function MassLayoutCalculator({ id = massCalculator.anchor, layou
             </div>
           )}
         </div>
-        {counter}
+        <HydrateLater>{counter}</HydrateLater>
         {applied ? (
           <p class="verdict verdict--ok" role="status" data-out="applied">
             Counterweight added: offset {snap(applied.before)[0]} → {snap(applied.after)[0]}; grade {snap(applied.before)[1]} → {snap(applied.after)[1]}; sensor
@@ -525,7 +526,7 @@ export default function MassLayoutCalculator({ id = massCalculator.anchor, layou
           {mode === "r" ? null : field("correctionRadius")}
           {field("supportRadius")}
         </div>
-        {couple}
+        <HydrateLater>{couple}</HydrateLater>
 
         <h3>Sensor radius</h3>
         <div class="mass-grid">
@@ -534,25 +535,27 @@ export default function MassLayoutCalculator({ id = massCalculator.anchor, layou
           {field("sideGrip")}
           {field("gripShare")}
         </div>
-        {sensor}
-        {ok ? (
-          <ResultBar
-            tone={ok.balance.offsetVerdict === "within-target" ? "ok" : "bad"}
-            reason={ok.balance.offsetVerdict === "within-target" ? undefined : "offset outside the target"}
-            resultsId={`${id}-results`}
-            figures={[
-              { name: "offset", label: "Offset e", value: q(ok.balance.layout.offset, "length") },
-              { name: "unbalance", label: "Unbalance U", value: q(ok.balance.static.unbalance, "unbalance") },
-            ]}
-          />
-        ) : (
-          <ResultBar
-            tone={null}
-            figures={[]}
-            resultsId={`${id}-results`}
-            missing={waiting ?? (parts.length ? "No result yet: correct the marked field." : "Add a part to see results.")}
-          />
-        )}
+        <HydrateLater>{sensor}</HydrateLater>
+        <HydrateLater>
+          {ok ? (
+            <ResultBar
+              tone={ok.balance.offsetVerdict === "within-target" ? "ok" : "bad"}
+              reason={ok.balance.offsetVerdict === "within-target" ? undefined : "offset outside the target"}
+              resultsId={`${id}-results`}
+              figures={[
+                { name: "offset", label: "Offset e", value: q(ok.balance.layout.offset, "length") },
+                { name: "unbalance", label: "Unbalance U", value: q(ok.balance.static.unbalance, "unbalance") },
+              ]}
+            />
+          ) : (
+            <ResultBar
+              tone={null}
+              figures={[]}
+              resultsId={`${id}-results`}
+              missing={waiting ?? (parts.length ? "No result yet: correct the marked field." : "Add a part to see results.")}
+            />
+          )}
+        </HydrateLater>
       </form>
     </section>
   );

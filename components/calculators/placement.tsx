@@ -15,6 +15,7 @@ import { Verdict } from "../calc-ui/Verdict.tsx";
 import { linkFor, syncWithUrl } from "../calc-ui/url-sync.ts";
 import { computed } from "../calc-ui/reactive.ts";
 import { createCalculatorModel } from "../calc-ui/model.ts";
+import { HydrateLater } from "../calc-ui/hydrate-later.ts";
 
 /** The island name: this file's name. */
 export const island = "placement";
@@ -225,9 +226,15 @@ export default function PlacementCalculator({ id = "placement-calculator" }: Pla
           </fieldset>
         ))}
       </form>
-      <PlacementBar model={model} id={id} />
-      <Results model={model} id={id} />
-      <PlacementChart model={model} />
+      <HydrateLater>
+        <PlacementBar model={model} id={id} />
+      </HydrateLater>
+      <HydrateLater>
+        <Results model={model} id={id} />
+      </HydrateLater>
+      <HydrateLater>
+        <PlacementChart model={model} />
+      </HydrateLater>
     </section>
   );
 }

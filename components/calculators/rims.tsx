@@ -22,6 +22,7 @@ import { ChoiceField } from "../loads/ChoiceField.tsx";
 import { Outputs, q, VERDICT_TONE, verdictRule } from "../loads/format.tsx";
 import { axis, rpm } from "../loads/chart-format.ts";
 import { Verdict } from "../calc-ui/Verdict.tsx";
+import { HydrateLater } from "../calc-ui/hydrate-later.ts";
 
 /** The island name: this file's name. */
 export const island = "rims";
@@ -288,9 +289,15 @@ export default function RimCalculator({ id = rimCalculator.anchor, materials = [
           </fieldset>
         ))}
       </form>
-      <RimBar model={model} id={id} />
-      <Results model={model} id={id} />
-      <ProfileChart model={model} />
+      <HydrateLater>
+        <RimBar model={model} id={id} />
+      </HydrateLater>
+      <HydrateLater>
+        <Results model={model} id={id} />
+      </HydrateLater>
+      <HydrateLater>
+        <ProfileChart model={model} />
+      </HydrateLater>
     </section>
   );
 }

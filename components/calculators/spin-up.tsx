@@ -13,6 +13,7 @@ import { CURRENT_LIMIT_AT_OPTIONS, DRIVE_TYPE_OPTIONS, type DriveType, NO_LOAD_L
 import type { Signal } from "../calc-ui/reactive.ts";
 import { QuantityField } from "../calc-ui/QuantityField.tsx";
 import { Toolbar } from "../calc-ui/Toolbar.tsx";
+import { HydrateLater } from "../calc-ui/hydrate-later.ts";
 import { Notices } from "../calc-ui/Notices.tsx";
 import { linkFor, syncWithUrl } from "../calc-ui/url-sync.ts";
 import { createSpinUpModel, SPINNER_ONLY, type Name, type SpinUpModel, type SpinUpPrepared } from "../drivetrain/model.ts";
@@ -182,10 +183,19 @@ export default function SpinUpCalculator({ id = spinUp.anchor, prepared = null }
         ))}
       </fieldset>
       <Form model={model} id={id} />
-      <Outcome model={model} id={id} />
-      <Charts model={model} />
-      <CompareSection model={model} id={id} />
-      <SweepSection model={model} id={id} />
+      {/* The outputs are attached to the page after the form, each in a task of its own. */}
+      <HydrateLater>
+        <Outcome model={model} id={id} />
+      </HydrateLater>
+      <HydrateLater>
+        <Charts model={model} />
+      </HydrateLater>
+      <HydrateLater>
+        <CompareSection model={model} id={id} />
+      </HydrateLater>
+      <HydrateLater>
+        <SweepSection model={model} id={id} />
+      </HydrateLater>
     </section>
   );
 }

@@ -20,6 +20,7 @@ import { linkFor, syncWithUrl } from "../calc-ui/url-sync.ts";
 import { createCalculatorModel, type PageState } from "../calc-ui/model.ts";
 import { type Signal, signal } from "../calc-ui/reactive.ts";
 import { whenIdle } from "../calc-ui/idle.ts";
+import { HydrateLater } from "../calc-ui/hydrate-later.ts";
 
 /** The island name: this file's name. */
 export const island = "steering";
@@ -121,71 +122,78 @@ export default function SteeringCalculator({ id = steeringCalculator.anchor }: S
           {field("directionTolerance")}
         </fieldset>
       </form>
-      {result && tone ? (
-        <ResultBar
-          tone={tone}
-          reason={result.summary}
-          resultsId={resultsId}
-          figures={[
-            { name: "speed", label: "Speed", value: q(result.translationSpeed, "speed") },
-            { name: "error", label: "Direction error", value: q(result.directionError, "angle") },
-          ]}
-        />
-      ) : (
-        <ResultBar
-          tone={null}
-          figures={[]}
-          resultsId={resultsId}
-          missing={error?.field === null ? error.message : "No result yet: correct the marked field."}
-        />
-      )}
-      <div class={`calc-results${result ? "" : " calc-results--empty"}`} id={resultsId} aria-live="polite">
-        {result ? (
-          <>
-            <p class={`verdict verdict--${tone}`}>
-              <strong>
-                {STATUS_WORDS[result.status]}: at most <span data-out="translation-speed">{q(result.translationSpeed, "speed")}</span> along the commanded
-                direction, with the wheels rolling and following the drive at once.
-              </strong>{" "}
-              {result.reason}
-            </p>
-            <dl class="results-grid">
-              {(
-                [
-                  ["Rim-speed depth δ", "rim-depth", q(result.rimSpeedDepth, "speed")],
-                  ["Rim speed ΩR", "rim-speed", q(result.rimSpeed, "speed")],
-                  ["Direction error Δψ", "direction-error", q(result.directionError, "angle")],
-                  ["Phase lead that cancels it", "lead", q(result.leadToCancel, "angle")],
-                  ["Gyroscopic moment per wheel", "gyro", q(result.gyroscopicMoment, "torque")],
-                  ["Skid lift speed", "skid-lift", result.skidLiftSpeed === null ? "no skid (two wheels or more)" : q(result.skidLiftSpeed, "angularSpeed", 4)],
-                  ["Pack voltage, no load", "voltage", q(result.openCircuitVoltage, "voltage")],
-                ] as const
-              ).map(([label, name, text]) => (
-                <div key={name}>
-                  <dt>{label}</dt>
-                  <dd data-out={name}>{text}</dd>
-                </div>
-              ))}
-            </dl>
-            <p class="field-help">
-              These are limits: a real drive sags, slips and lags, and reaches less. The simulation integrates the motion for the same values (the motor,
-              battery and tyre figures it also needs are the chapter's demo robot's); once shown, the page's link opens with it.
-            </p>
-            {sim.shown.value && typeof view === "function" && values ? (
-              <SimulationView view={view} values={values as unknown as Record<string, number>} system={system} distanceText={sim.distance} idPrefix={id} />
-            ) : (
-              <p>
-                <button type="button" class="button" data-action="simulate" onClick={show} disabled={view === "loading"}>
-                  {view === "loading" ? "Loading the simulation…" : "Simulate the move"}
-                </button>
-                {view === "failed" ? <span role="status"> The simulation could not be loaded; check the connection and try again.</span> : null}
-              </p>
-            )}
-          </>
+      {/* The outputs are attached to the page after the form, in a task of their own. */}
+      <HydrateLater>
+        {result && tone ? (
+          <ResultBar
+            tone={tone}
+            reason={result.summary}
+            resultsId={resultsId}
+            figures={[
+              { name: "speed", label: "Speed", value: q(result.translationSpeed, "speed") },
+              { name: "error", label: "Direction error", value: q(result.directionError, "angle") },
+            ]}
+          />
         ) : (
-          <p>{error && error.field === null ? error.message : "The answer appears when every field above holds a valid value."}</p>
+          <ResultBar
+            tone={null}
+            figures={[]}
+            resultsId={resultsId}
+            missing={error?.field === null ? error.message : "No result yet: correct the marked field."}
+          />
         )}
-      </div>
+        <div class={`calc-results${result ? "" : " calc-results--empty"}`} id={resultsId} aria-live="polite">
+          {result ? (
+            <>
+              <p class={`verdict verdict--${tone}`}>
+                <strong>
+                  {STATUS_WORDS[result.status]}: at most <span data-out="translation-speed">{q(result.translationSpeed, "speed")}</span> along the commanded
+                  direction, with the wheels rolling and following the drive at once.
+                </strong>{" "}
+                {result.reason}
+              </p>
+              <dl class="results-grid">
+                {(
+                  [
+                    ["Rim-speed depth δ", "rim-depth", q(result.rimSpeedDepth, "speed")],
+                    ["Rim speed ΩR", "rim-speed", q(result.rimSpeed, "speed")],
+                    ["Direction error Δψ", "direction-error", q(result.directionError, "angle")],
+                    ["Phase lead that cancels it", "lead", q(result.leadToCancel, "angle")],
+                    ["Gyroscopic moment per wheel", "gyro", q(result.gyroscopicMoment, "torque")],
+                    [
+                      "Skid lift speed",
+                      "skid-lift",
+                      result.skidLiftSpeed === null ? "no skid (two wheels or more)" : q(result.skidLiftSpeed, "angularSpeed", 4),
+                    ],
+                    ["Pack voltage, no load", "voltage", q(result.openCircuitVoltage, "voltage")],
+                  ] as const
+                ).map(([label, name, text]) => (
+                  <div key={name}>
+                    <dt>{label}</dt>
+                    <dd data-out={name}>{text}</dd>
+                  </div>
+                ))}
+              </dl>
+              <p class="field-help">
+                These are limits: a real drive sags, slips and lags, and reaches less. The simulation integrates the motion for the same values (the motor,
+                battery and tyre figures it also needs are the chapter's demo robot's); once shown, the page's link opens with it.
+              </p>
+              {sim.shown.value && typeof view === "function" && values ? (
+                <SimulationView view={view} values={values as unknown as Record<string, number>} system={system} distanceText={sim.distance} idPrefix={id} />
+              ) : (
+                <p>
+                  <button type="button" class="button" data-action="simulate" onClick={show} disabled={view === "loading"}>
+                    {view === "loading" ? "Loading the simulation…" : "Simulate the move"}
+                  </button>
+                  {view === "failed" ? <span role="status"> The simulation could not be loaded; check the connection and try again.</span> : null}
+                </p>
+              )}
+            </>
+          ) : (
+            <p>{error && error.field === null ? error.message : "The answer appears when every field above holds a valid value."}</p>
+          )}
+        </div>
+      </HydrateLater>
     </section>
   );
 }

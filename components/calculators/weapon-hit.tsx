@@ -13,6 +13,7 @@ import { ResultBar } from "../calc-ui/ResultBar.tsx";
 import { linkFor, syncWithUrl } from "../calc-ui/url-sync.ts";
 import { createCalculatorModel } from "../calc-ui/model.ts";
 import { Verdict } from "../calc-ui/Verdict.tsx";
+import { HydrateLater } from "../calc-ui/hydrate-later.ts";
 
 /** The island name: this file's name. */
 export const island = "weapon-hit";
@@ -57,67 +58,70 @@ export default function WeaponHitCalculator({ id = hitCalculator.anchor }: Weapo
           {field("stoppingDistance")}
         </fieldset>
       </form>
-      {result && hit ? (
-        <ResultBar
-          tone={null}
-          resultsId={resultsId}
-          figures={[
-            { name: "given", label: "Rotor gives up", value: q(hit.rotorEnergyDrop, "energy") },
-            { name: "force", label: "Force (estimate)", value: `${q(result.force.average, "force")} to ${q(result.force.peak, "force")}` },
-          ]}
-        />
-      ) : (
-        <ResultBar
-          tone={null}
-          figures={[]}
-          resultsId={resultsId}
-          missing={error?.field === null ? error.message : "No result yet: correct the marked field."}
-        />
-      )}
-      <div class={`calc-results${result ? "" : " calc-results--empty"}`} id={resultsId} aria-live="polite">
+      {/* The outputs are attached to the page after the form, in a task of their own. */}
+      <HydrateLater>
         {result && hit ? (
-          <>
-            <Verdict tone="info" out="verdict">
-              The rotor gives up {formatNumber(100 * result.energyFractionUsed, 4)} % of its energy and leaves the hit at {after(hit.spinSpeedAfter)}; the
-              opponent takes {q(hit.energyToTarget, "energy")}.
-            </Verdict>
-            <dl class="results-grid">
-              {(
-                [
-                  ["Tip speed Ω·r", "tip", q(result.tipSpeed, "speed")],
-                  ["Stored energy ½·J·Ω²", "stored", q(result.storedEnergy, "energy")],
-                  ["Bite per impactor", "bite", q(result.bite, "length")],
-                  ["Effective mass at the tip", "tip-mass", q(hit.effectiveTipMass, "mass")],
-                  ["Impulse P (your robot takes it too)", "impulse", `${formatNumber(hit.impulse, 3)} N·s`],
-                  ["Energy the rotor gives up", "given", q(hit.rotorEnergyDrop, "energy")],
-                  ["Weapon speed after the hit", "after", after(hit.spinSpeedAfter)],
-                  ["Speed drop", "drop", q(hit.speedDrop, "angularSpeed")],
-                  ["Energy to the opponent", "target", q(hit.energyToTarget, "energy")],
-                  ["Opponent's speed after the hit", "target-speed", q(hit.targetVelocityAfter, "speed")],
-                  ["Energy to your robot's recoil", "self", q(hit.energyToSelf, "energy")],
-                  ["Your robot's recoil speed", "self-speed", q(Math.abs(hit.selfVelocityAfter), "speed")],
-                  ["Energy lost in the contact", "lost", q(hit.energyLost, "energy")],
-                  ["Energy the crush absorbs ½·μ·v²", "crush", q(hit.compressionEnergy, "energy")],
-                  ["Contact force, average over the crush", "force-average", q(result.force.average, "force")],
-                  ["Contact force, peak of a linear contact", "force-peak", q(result.force.peak, "force")],
-                  ["Time to the deepest crush", "time", result.force.compressionTime === null ? "—" : q(result.force.compressionTime, "time")],
-                ] as const
-              ).map(([label, name, text]) => (
-                <div key={name}>
-                  <dt>{label}</dt>
-                  <dd data-out={name}>{text}</dd>
-                </div>
-              ))}
-            </dl>
-            <p class="field-help">
-              One clean, square hit with the full bite. The force is an estimate: it scales as one over the crush distance, which is rarely known to better than
-              a factor of two or three; take the range, not one figure.
-            </p>
-          </>
+          <ResultBar
+            tone={null}
+            resultsId={resultsId}
+            figures={[
+              { name: "given", label: "Rotor gives up", value: q(hit.rotorEnergyDrop, "energy") },
+              { name: "force", label: "Force (estimate)", value: `${q(result.force.average, "force")} to ${q(result.force.peak, "force")}` },
+            ]}
+          />
         ) : (
-          <p>{error && error.field === null ? error.message : "The answer appears when every field above holds a valid value."}</p>
+          <ResultBar
+            tone={null}
+            figures={[]}
+            resultsId={resultsId}
+            missing={error?.field === null ? error.message : "No result yet: correct the marked field."}
+          />
         )}
-      </div>
+        <div class={`calc-results${result ? "" : " calc-results--empty"}`} id={resultsId} aria-live="polite">
+          {result && hit ? (
+            <>
+              <Verdict tone="info" out="verdict">
+                The rotor gives up {formatNumber(100 * result.energyFractionUsed, 4)} % of its energy and leaves the hit at {after(hit.spinSpeedAfter)}; the
+                opponent takes {q(hit.energyToTarget, "energy")}.
+              </Verdict>
+              <dl class="results-grid">
+                {(
+                  [
+                    ["Tip speed Ω·r", "tip", q(result.tipSpeed, "speed")],
+                    ["Stored energy ½·J·Ω²", "stored", q(result.storedEnergy, "energy")],
+                    ["Bite per impactor", "bite", q(result.bite, "length")],
+                    ["Effective mass at the tip", "tip-mass", q(hit.effectiveTipMass, "mass")],
+                    ["Impulse P (your robot takes it too)", "impulse", `${formatNumber(hit.impulse, 3)} N·s`],
+                    ["Energy the rotor gives up", "given", q(hit.rotorEnergyDrop, "energy")],
+                    ["Weapon speed after the hit", "after", after(hit.spinSpeedAfter)],
+                    ["Speed drop", "drop", q(hit.speedDrop, "angularSpeed")],
+                    ["Energy to the opponent", "target", q(hit.energyToTarget, "energy")],
+                    ["Opponent's speed after the hit", "target-speed", q(hit.targetVelocityAfter, "speed")],
+                    ["Energy to your robot's recoil", "self", q(hit.energyToSelf, "energy")],
+                    ["Your robot's recoil speed", "self-speed", q(Math.abs(hit.selfVelocityAfter), "speed")],
+                    ["Energy lost in the contact", "lost", q(hit.energyLost, "energy")],
+                    ["Energy the crush absorbs ½·μ·v²", "crush", q(hit.compressionEnergy, "energy")],
+                    ["Contact force, average over the crush", "force-average", q(result.force.average, "force")],
+                    ["Contact force, peak of a linear contact", "force-peak", q(result.force.peak, "force")],
+                    ["Time to the deepest crush", "time", result.force.compressionTime === null ? "—" : q(result.force.compressionTime, "time")],
+                  ] as const
+                ).map(([label, name, text]) => (
+                  <div key={name}>
+                    <dt>{label}</dt>
+                    <dd data-out={name}>{text}</dd>
+                  </div>
+                ))}
+              </dl>
+              <p class="field-help">
+                One clean, square hit with the full bite. The force is an estimate: it scales as one over the crush distance, which is rarely known to better
+                than a factor of two or three; take the range, not one figure.
+              </p>
+            </>
+          ) : (
+            <p>{error && error.field === null ? error.message : "The answer appears when every field above holds a valid value."}</p>
+          )}
+        </div>
+      </HydrateLater>
     </section>
   );
 }

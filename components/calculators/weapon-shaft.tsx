@@ -14,6 +14,7 @@ import { ResultBar, type Tone } from "../calc-ui/ResultBar.tsx";
 import { linkFor, syncWithUrl } from "../calc-ui/url-sync.ts";
 import { createCalculatorModel } from "../calc-ui/model.ts";
 import { Verdict } from "../calc-ui/Verdict.tsx";
+import { HydrateLater } from "../calc-ui/hydrate-later.ts";
 
 /** The island name: this file's name. */
 export const island = "weapon-shaft";
@@ -96,67 +97,66 @@ export default function WeaponShaftCalculator({ id = shaftCalculator.anchor }: W
           {field("marginalBelow")}
         </fieldset>
       </form>
-      {result && tone ? (
+      {/* The outputs are attached to the page after the form, in a task of their own. */}
+      <HydrateLater>
         <ResultBar
           tone={tone}
           reason={short}
           resultsId={resultsId}
-          figures={[
-            { name: "sf", label: "Shaft on yield", value: ratio(result.safetyFactor) },
-            { name: "life", label: "Bearing L10", value: hours(result.bearing.ratingLifeHours) },
-            { name: "s0", label: "s0 in a hit", value: ratio(result.bearing.staticSafetyFactor) },
-          ]}
+          figures={
+            result
+              ? [
+                  { name: "sf", label: "Shaft on yield", value: ratio(result.safetyFactor) },
+                  { name: "life", label: "Bearing L10", value: hours(result.bearing.ratingLifeHours) },
+                  { name: "s0", label: "s0 in a hit", value: ratio(result.bearing.staticSafetyFactor) },
+                ]
+              : []
+          }
+          missing={result ? undefined : error?.field === null ? error.message : "No result yet: correct the marked field."}
         />
-      ) : (
-        <ResultBar
-          tone={null}
-          figures={[]}
-          resultsId={resultsId}
-          missing={error?.field === null ? error.message : "No result yet: correct the marked field."}
-        />
-      )}
-      <div class={`calc-results${result ? "" : " calc-results--empty"}`} id={resultsId} aria-live="polite">
-        {result ? (
-          <>
-            <Verdict tone={tone!} reason={short} out="verdict">
-              {result.reason}
-            </Verdict>
-            <dl class="results-grid">
-              {(
-                [
-                  ["Gyroscopic moment J·Ω·q", "gyro", q(result.loads.gyroscopicMoment, "torque")],
-                  ["Unbalance force U·Ω²", "unbalance", q(result.loads.unbalanceForce, "force")],
-                  ["Peak load with a hit", "peak", q(result.loads.peakForce, "force")],
-                  ["Bending moment, peak", "moment", q(result.bendingMoment.peak, "torque")],
-                  ["Von Mises stress, peak", "stress", q(result.vonMisesStress, "stress")],
-                  [`Yield strength (${result.material.basis})`, "yield", q(result.material.yieldStrength, "stress")],
-                  ["Safety factor on yield", "safety", ratio(result.safetyFactor)],
-                  ["Deflection at the rotor, running", "deflection-running", q(result.deflection.running, "length", undefined, 2)],
-                  ["Deflection at the rotor, peak", "deflection", q(result.deflection.peak, "length", undefined, 2)],
+        <div class={`calc-results${result ? "" : " calc-results--empty"}`} id={resultsId} aria-live="polite">
+          {result ? (
+            <>
+              <Verdict tone={tone!} reason={short} out="verdict">
+                {result.reason}
+              </Verdict>
+              <dl class="results-grid">
+                {(
                   [
-                    "Busier bearing's load, running / hit",
-                    "bearing-load",
-                    `${q(result.bearing.equivalentLoad, "force")} / ${q(result.bearing.staticEquivalentLoad, "force")}`,
-                  ],
-                  ["Bearing rating life L10", "life", hours(result.bearing.ratingLifeHours)],
-                  ["Static safety factor s0, hit", "s0", ratio(result.bearing.staticSafetyFactor)],
-                ] as const
-              ).map(([label, name, text]) => (
-                <div key={name}>
-                  <dt>{label}</dt>
-                  <dd data-out={name}>{text}</dd>
-                </div>
-              ))}
-            </dl>
-            <p class="field-help">
-              {result.stressCycle === "fully-reversed" ? "A live shaft's bending reverses every turn: check fatigue too. " : ""}
-              Loads add in the plane that hurts most.
-            </p>
-          </>
-        ) : (
-          <p>{error && error.field === null ? error.message : "The answer appears when every field above holds a valid value."}</p>
-        )}
-      </div>
+                    ["Gyroscopic moment J·Ω·q", "gyro", q(result.loads.gyroscopicMoment, "torque")],
+                    ["Unbalance force U·Ω²", "unbalance", q(result.loads.unbalanceForce, "force")],
+                    ["Peak load with a hit", "peak", q(result.loads.peakForce, "force")],
+                    ["Bending moment, peak", "moment", q(result.bendingMoment.peak, "torque")],
+                    ["Von Mises stress, peak", "stress", q(result.vonMisesStress, "stress")],
+                    [`Yield strength (${result.material.basis})`, "yield", q(result.material.yieldStrength, "stress")],
+                    ["Safety factor on yield", "safety", ratio(result.safetyFactor)],
+                    ["Deflection at the rotor, running", "deflection-running", q(result.deflection.running, "length", undefined, 2)],
+                    ["Deflection at the rotor, peak", "deflection", q(result.deflection.peak, "length", undefined, 2)],
+                    [
+                      "Busier bearing's load, running / hit",
+                      "bearing-load",
+                      `${q(result.bearing.equivalentLoad, "force")} / ${q(result.bearing.staticEquivalentLoad, "force")}`,
+                    ],
+                    ["Bearing rating life L10", "life", hours(result.bearing.ratingLifeHours)],
+                    ["Static safety factor s0, hit", "s0", ratio(result.bearing.staticSafetyFactor)],
+                  ] as const
+                ).map(([label, name, text]) => (
+                  <div key={name}>
+                    <dt>{label}</dt>
+                    <dd data-out={name}>{text}</dd>
+                  </div>
+                ))}
+              </dl>
+              <p class="field-help">
+                {result.stressCycle === "fully-reversed" ? "A live shaft's bending reverses every turn: check fatigue too. " : ""}
+                Loads add in the plane that hurts most.
+              </p>
+            </>
+          ) : (
+            <p>{error && error.field === null ? error.message : "The answer appears when every field above holds a valid value."}</p>
+          )}
+        </div>
+      </HydrateLater>
     </section>
   );
 }

@@ -12,6 +12,7 @@ import { Notices } from "../calc-ui/Notices.tsx";
 import { ResultBar, type Tone } from "../calc-ui/ResultBar.tsx";
 import { linkFor, syncWithUrl } from "../calc-ui/url-sync.ts";
 import { createCalculatorModel } from "../calc-ui/model.ts";
+import { HydrateLater } from "../calc-ui/hydrate-later.ts";
 
 /** The island name: this file's name. */
 export const island = "weapon-turn";
@@ -74,73 +75,76 @@ export default function WeaponTurnCalculator({ id = turnCalculator.anchor }: Wea
           {field("liftMargin")}
         </fieldset>
       </form>
-      {result && tone && turn ? (
-        <ResultBar
-          tone={tone}
-          reason={SHORT_REASON[result.verdict]}
-          resultsId={resultsId}
-          figures={[
-            { name: "lift", label: "Wheel lifts at", value: turn.liftTurnRate === null ? "no turn rate" : rate(turn.liftTurnRate) },
-            { name: "drive", label: "Drive reaches", value: rate(turn.driveTurnRate) },
-          ]}
-        />
-      ) : (
-        <ResultBar
-          tone={null}
-          figures={[]}
-          resultsId={resultsId}
-          missing={error?.field === null ? error.message : "No result yet: correct the marked field."}
-        />
-      )}
-      <div class={`calc-results${result ? "" : " calc-results--empty"}`} id={resultsId} aria-live="polite">
-        {result && turn ? (
-          <>
-            <p class={`verdict verdict--${tone}`}>
-              <strong>
-                {turn.liftTurnRate === null ? (
-                  <>No turn lifts a wheel.</>
-                ) : (
-                  <>
-                    Turning {turn.liftTurn}, the {turn.liftTurn === "left" ? turn.left.wheel : turn.right.wheel} wheels lift from{" "}
-                    <span data-out="lift">{rate(turn.liftTurnRate)}</span>.
-                  </>
-                )}
-              </strong>{" "}
-              {result.reason}
-            </p>
-            <dl class="results-grid">
-              {(
-                [
-                  ["Drive's fastest turn at the forward speed", "drive", rate(turn.driveTurnRate)],
-                  ["Drive's fastest turn in place", "drive-in-place", rate(turn.driveTurnRateInPlace)],
-                  ["Lift turn rate, turning left", "lift-left", turn.left.liftTurnRate === null ? "none" : rate(turn.left.liftTurnRate)],
-                  ["Lift turn rate, turning right", "lift-right", turn.right.liftTurnRate === null ? "none" : rate(turn.right.liftTurnRate)],
-                  ["Margin (lift ÷ fastest turn)", "margin", turn.margin === null ? "—" : formatNumber(turn.margin)],
-                  ["Angular momentum H = J·Ω", "momentum", `${formatNumber(result.angularMomentum)} N·m·s`],
-                  ["Gyroscopic moment J·Ω·ψ̇ at the turn rate entered", "moment", q(turn.gyroscopicMoment, "torque")],
-                  ["Centrifugal moment m·v·ψ̇·h at that rate", "centrifugal", q(turn.centrifugalMoment, "torque")],
-                  ["Force pair on the weapon's bearings at that rate", "bearing", q(turn.bearingForce, "force")],
-                  [
-                    "Turning left, the weapon",
-                    "effect",
-                    turn.gyroscopicEffectTurningLeft ? (EFFECT_WORDS[turn.gyroscopicEffectTurningLeft] ?? turn.gyroscopicEffectTurningLeft) : "—",
-                  ],
-                ] as const
-              ).map(([label, name, text]) => (
-                <div key={name}>
-                  <dt>{label}</dt>
-                  <dd data-out={name}>{text}</dd>
-                </div>
-              ))}
-            </dl>
-            <p class="field-help">
-              Steady turn on flat, level ground with the weapon at full speed. A bump, a hit or a change of spin speed is not in these numbers: keep a margin.
-            </p>
-          </>
+      {/* The outputs are attached to the page after the form, in a task of their own. */}
+      <HydrateLater>
+        {result && tone && turn ? (
+          <ResultBar
+            tone={tone}
+            reason={SHORT_REASON[result.verdict]}
+            resultsId={resultsId}
+            figures={[
+              { name: "lift", label: "Wheel lifts at", value: turn.liftTurnRate === null ? "no turn rate" : rate(turn.liftTurnRate) },
+              { name: "drive", label: "Drive reaches", value: rate(turn.driveTurnRate) },
+            ]}
+          />
         ) : (
-          <p>{error && error.field === null ? error.message : "The answer appears when every field above holds a valid value."}</p>
+          <ResultBar
+            tone={null}
+            figures={[]}
+            resultsId={resultsId}
+            missing={error?.field === null ? error.message : "No result yet: correct the marked field."}
+          />
         )}
-      </div>
+        <div class={`calc-results${result ? "" : " calc-results--empty"}`} id={resultsId} aria-live="polite">
+          {result && turn ? (
+            <>
+              <p class={`verdict verdict--${tone}`}>
+                <strong>
+                  {turn.liftTurnRate === null ? (
+                    <>No turn lifts a wheel.</>
+                  ) : (
+                    <>
+                      Turning {turn.liftTurn}, the {turn.liftTurn === "left" ? turn.left.wheel : turn.right.wheel} wheels lift from{" "}
+                      <span data-out="lift">{rate(turn.liftTurnRate)}</span>.
+                    </>
+                  )}
+                </strong>{" "}
+                {result.reason}
+              </p>
+              <dl class="results-grid">
+                {(
+                  [
+                    ["Drive's fastest turn at the forward speed", "drive", rate(turn.driveTurnRate)],
+                    ["Drive's fastest turn in place", "drive-in-place", rate(turn.driveTurnRateInPlace)],
+                    ["Lift turn rate, turning left", "lift-left", turn.left.liftTurnRate === null ? "none" : rate(turn.left.liftTurnRate)],
+                    ["Lift turn rate, turning right", "lift-right", turn.right.liftTurnRate === null ? "none" : rate(turn.right.liftTurnRate)],
+                    ["Margin (lift ÷ fastest turn)", "margin", turn.margin === null ? "—" : formatNumber(turn.margin)],
+                    ["Angular momentum H = J·Ω", "momentum", `${formatNumber(result.angularMomentum)} N·m·s`],
+                    ["Gyroscopic moment J·Ω·ψ̇ at the turn rate entered", "moment", q(turn.gyroscopicMoment, "torque")],
+                    ["Centrifugal moment m·v·ψ̇·h at that rate", "centrifugal", q(turn.centrifugalMoment, "torque")],
+                    ["Force pair on the weapon's bearings at that rate", "bearing", q(turn.bearingForce, "force")],
+                    [
+                      "Turning left, the weapon",
+                      "effect",
+                      turn.gyroscopicEffectTurningLeft ? (EFFECT_WORDS[turn.gyroscopicEffectTurningLeft] ?? turn.gyroscopicEffectTurningLeft) : "—",
+                    ],
+                  ] as const
+                ).map(([label, name, text]) => (
+                  <div key={name}>
+                    <dt>{label}</dt>
+                    <dd data-out={name}>{text}</dd>
+                  </div>
+                ))}
+              </dl>
+              <p class="field-help">
+                Steady turn on flat, level ground with the weapon at full speed. A bump, a hit or a change of spin speed is not in these numbers: keep a margin.
+              </p>
+            </>
+          ) : (
+            <p>{error && error.field === null ? error.message : "The answer appears when every field above holds a valid value."}</p>
+          )}
+        </div>
+      </HydrateLater>
     </section>
   );
 }
