@@ -43,16 +43,70 @@ export function markable(node) {
   return false;
 }
 
+/**
+ * The heights (in lines of the block's own text) a block may be held at before it is drawn; the
+ * stylesheet gives each its `contain-intrinsic-size` (`lazy-h-<lines>`).
+ */
+export const HEIGHT_STEPS = [4, 6, 8, 12, 16, 24, 32, 48, 64, 96, 128, 192, 256, 384];
+/** Characters of running text per line on a 320 px phone (the narrowest screen the site is laid out for), rounded down. */
+const CHARACTERS_PER_LINE = 30;
+/** What a quantity tag <Q> prints, at most: "1.26 kg·m² (4 310 lb·in²)". */
+const QUANTITY_CHARACTERS = 26;
+
+/** @param {any} node @param {(n: any) => boolean} test */
+const count = (node, test) => (test(node) ? 1 : 0) + (node.children ?? []).reduce((/** @type {number} */ sum, /** @type {any} */ c) => sum + count(c, test), 0);
+/** @param {any} node */
+const textLength = (node) =>
+  node.type === "text"
+    ? node.value.trim().length
+    : node.type === "mdxJsxTextElement" && node.name === "Q"
+      ? QUANTITY_CHARACTERS
+      : (node.children ?? []).reduce((/** @type {number} */ sum, /** @type {any} */ c) => sum + textLength(c), 0);
+/** @param {any} node @param {string} name */
+const isTag = (node, name) => (node.type === "element" && node.tagName === name) || (node.type === "mdxJsxFlowElement" && node.name === name);
+
+/**
+ * How many lines a block takes on a narrow phone, over-estimated on purpose: a block held shorter
+ * than it is drawn would, when measured while not drawn (as an accessibility checker measures
+ * every element), reach over the blocks after it.
+ * @param {any} node
+ */
+export function estimatedLines(node) {
+  if (isFormula(node)) return 3 + 2 * count(node, (n) => isTag(n, "mfrac") || isTag(n, "mtr"));
+  // A table written in MDX may build its rows in an expression ({rows.map(…)}): each such expression counts as 30 rows.
+  if (isTag(node, "table"))
+    return (
+      2 + 4 * (count(node, (n) => isTag(n, "tr")) + 30 * count(node, (n) => n.type === "mdxFlowExpression")) + textLength(node) / (2 * CHARACTERS_PER_LINE)
+    );
+  const blocks = count(node, (n) => ["p", "li", "dt", "dd", "h3", "h4", "tr", "div", "figure"].some((t) => isTag(n, t)));
+  return 1.4 * (textLength(node) / CHARACTERS_PER_LINE + 1.5 * blocks) + 1;
+}
+
+/** @param {any} node */
+const isFormula = (node) => node.tagName === "span" && classesOf(node).includes("formula");
+/** @param {any} node */
+const classesOf = (node) => (Array.isArray(node.properties?.className) ? node.properties.className : []);
+
+/**
+ * The classes of a block held until drawn at about `lines` lines (the next height step up); for
+ * the calculator and the sources, which their own components mark.
+ * @param {number} lines
+ */
+export function lazyClasses(lines) {
+  const step = HEIGHT_STEPS.find((h) => h >= lines) ?? HEIGHT_STEPS[HEIGHT_STEPS.length - 1];
+  return [LAZY_CLASS, `lazy-h-${step}`];
+}
+
 /** @param {any} node */
 function mark(node) {
+  const added = lazyClasses(estimatedLines(node));
   if (node.type === "element") {
-    const classes = Array.isArray(node.properties.className) ? node.properties.className : [];
-    node.properties.className = [...classes, LAZY_CLASS];
+    node.properties.className = [...classesOf(node), ...added];
     return;
   }
   const cls = jsxClass(node);
-  if (cls) cls.value = `${cls.value} ${LAZY_CLASS}`;
-  else node.attributes = [...(node.attributes ?? []), { type: "mdxJsxAttribute", name: "class", value: LAZY_CLASS }];
+  if (cls) cls.value = `${cls.value} ${added.join(" ")}`;
+  else node.attributes = [...(node.attributes ?? []), { type: "mdxJsxAttribute", name: "class", value: added.join(" ") }];
 }
 
 export function rehypeLazyBlocks() {
