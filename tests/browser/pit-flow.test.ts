@@ -148,6 +148,23 @@ describe("the pit flow", () => {
     await context.close();
   });
 
+  it.each(["spin-up", "fasteners", "heading-trim"])(
+    "draws the whole of the %s calculator at 1280 px, where it is wider than the text: its late-drawn box holds it",
+    async (slug) => {
+      const { page, context } = await open(`/chapters/${slug}/`, { width: 1280 });
+      await showCalculator(page);
+      // The box drawn late clips what it holds (content-visibility: auto); the calculator and its widest chart lie inside it.
+      const sticking = await page.evaluate(() => {
+        const island = document.querySelector(".island")!.getBoundingClientRect();
+        const parts = [document.querySelector("section.calc")!, ...document.querySelectorAll("section.calc .chart svg")].map((e) => e.getBoundingClientRect());
+        return Math.max(...parts.map((r) => Math.max(r.right - island.right, island.left - r.left)));
+      });
+      expect(sticking).toBeLessThanOrEqual(0.5);
+      expect(await page.evaluate(() => document.querySelector("section.calc")!.getBoundingClientRect().width)).toBeGreaterThan(800);
+      await context.close();
+    },
+  );
+
   it("answers the pit's balance question the way it is asked: 12 g added at 45 mm, then a 180 g battery moved 4 mm against a 30 N wobble force", async () => {
     const { page, context, problems } = await open("/chapters/quick-balance/");
     await page.locator(".to-calculator a").click();
