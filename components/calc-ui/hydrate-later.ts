@@ -17,8 +17,8 @@
  *
  * A part is drawn inside a `<div class="calc-part">` (`display: contents`, so it changes no layout):
  * Preact keeps exactly one DOM node for a suspended part, and the wrapper is that node whatever the
- * part draws (one element, several, or nothing). A part holds no form control whose value can change
- * before its turn (hydration attaches to a control without setting its value), so parts are outputs:
+ * part draws (one element, several, or nothing). A part holds no field: its turn sets each control to
+ * the state's value, so text typed into a field before its turn would be replaced. Parts are outputs:
  * result bars, tables, charts, the sections that load more code on use. Outside hydration (a part
  * drawn later, the build), `HydrateLater` renders at once.
  */
