@@ -9,10 +9,11 @@
 //
 // Marked: each top-level block after the chapter's first section heading and the two blocks after
 // it (the opening stays as it is). Not marked: headings (link targets keep their real positions),
-// a block with an id, code listings, and a block holding a picture or a chart (one laid out late
-// would measure a width of 0). The calculator itself (components/calc-ui/Calculator.astro) and the
-// sources (components/ui/SourceList.astro) carry the class from their own components; a component
-// in the MDX is left alone, except a plain <div>, <section>, <aside> or <table> written there.
+// a block with an id, code listings, and a block holding a picture or a drawing (prose has no code
+// to redraw one at the width it is shown at once drawn; a calculator's charts do). The calculator
+// itself (components/calc-ui/Calculator.astro) and the sources (components/ui/SourceList.astro)
+// carry the class from their own components; a component in the MDX is left alone, except a plain
+// <div>, <section>, <aside> or <table> written there.
 
 /** Elements a block may not hold to be marked: they measure their own size when drawn. */
 const MEASURED = new Set(["svg", "img", "picture", "video", "canvas", "iframe", "object", "embed"]);
@@ -20,7 +21,7 @@ const NEVER = new Set(["h1", "h2", "h3", "h4", "h5", "h6", "pre", "hr", "script"
 const JSX_BLOCKS = new Set(["div", "section", "aside", "table"]);
 /** How many blocks after the first section heading stay rendered (about the rest of a phone's first screen). */
 const KEEP_AFTER_FIRST_HEADING = 2;
-export const LAZY_CLASS = "lazy-block";
+const LAZY_CLASS = "lazy-block";
 
 /** @param {any} node */
 function measured(node) {
@@ -28,11 +29,15 @@ function measured(node) {
   return (node.children ?? []).some(measured);
 }
 
+/** @param {any} node */
+const classesOf = (node) => (Array.isArray(node.properties?.className) ? node.properties.className : []);
+/** @param {any} node a display formula (scripts/site/rehype-math.mjs gives its wrapper the class "formula") */
+const isFormula = (node) => node.tagName === "span" && classesOf(node).includes("formula");
 /** @param {any} node @returns {any} the node's `class` attribute, for an MDX JSX element */
 const jsxClass = (node) => node.attributes?.find((/** @type {any} */ a) => a.type === "mdxJsxAttribute" && (a.name === "class" || a.name === "className"));
 
 /** @param {any} node a top-level node of the chapter */
-export function markable(node) {
+function markable(node) {
   if (node.type === "element") return !NEVER.has(node.tagName) && node.properties?.id == null && !measured(node);
   if (node.type === "mdxJsxFlowElement") {
     if (!JSX_BLOCKS.has(node.name) || measured(node)) return false;
@@ -47,7 +52,7 @@ export function markable(node) {
  * The heights (in lines of the block's own text) a block may be held at before it is drawn; the
  * stylesheet gives each its `contain-intrinsic-size` (`lazy-h-<lines>`).
  */
-export const HEIGHT_STEPS = [4, 6, 8, 12, 16, 24, 32, 48, 64, 96, 128, 192, 256, 384];
+const HEIGHT_STEPS = [4, 6, 8, 12, 16, 24, 32, 48, 64, 96, 128, 192, 256, 384];
 /** Characters of running text per line on a 320 px phone (the narrowest screen the site is laid out for), rounded down. */
 const CHARACTERS_PER_LINE = 30;
 /** What a quantity tag <Q> prints, at most: "1.26 kg·m² (4 310 lb·in²)". */
@@ -66,6 +71,14 @@ const textLength = (node) =>
 const isTag = (node, name) => (node.type === "element" && node.tagName === name) || (node.type === "mdxJsxFlowElement" && node.name === name);
 
 /**
+ * Lines of running text on a narrow phone, over-estimated: `characters` of text in `blocks`
+ * paragraphs, list items or entries (each adds a line and a half of spacing).
+ * @param {number} characters
+ * @param {number} blocks
+ */
+export const textLines = (characters, blocks) => 1.4 * (characters / CHARACTERS_PER_LINE + 1.5 * blocks) + 1;
+
+/**
  * How many lines a block takes on a narrow phone, over-estimated on purpose: a block held shorter
  * than it is drawn would, when measured while not drawn (as an accessibility checker measures
  * every element), reach over the blocks after it.
@@ -79,13 +92,8 @@ export function estimatedLines(node) {
       2 + 4 * (count(node, (n) => isTag(n, "tr")) + 30 * count(node, (n) => n.type === "mdxFlowExpression")) + textLength(node) / (2 * CHARACTERS_PER_LINE)
     );
   const blocks = count(node, (n) => ["p", "li", "dt", "dd", "h3", "h4", "tr", "div", "figure"].some((t) => isTag(n, t)));
-  return 1.4 * (textLength(node) / CHARACTERS_PER_LINE + 1.5 * blocks) + 1;
+  return textLines(textLength(node), blocks);
 }
-
-/** @param {any} node */
-const isFormula = (node) => node.tagName === "span" && classesOf(node).includes("formula");
-/** @param {any} node */
-const classesOf = (node) => (Array.isArray(node.properties?.className) ? node.properties.className : []);
 
 /**
  * The classes of a block held until drawn at about `lines` lines (the next height step up); for
