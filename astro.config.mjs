@@ -100,6 +100,12 @@ export default defineConfig({
               // The shaft check and the strength table only it reads, in one chunk (one request and one
               // compressed stream on the weapon-shaft page instead of two).
               { name: "shaft-check", test: /calc[\\/](weapon[\\/]shaft-check|materials[\\/]strengths)\.ts$/ },
+              // The steering simulation's inputs, read by its view and by its worker: a chunk of their own,
+              // so the worker (components/steering/simulation-worker.ts) does not load the view. The
+              // estimate's inputs they build on stay apart (the steering page and the build sheet load
+              // only those), as the group before it keeps them.
+              { name: "estimate-inputs", test: /calc[\\/]steering[\\/]estimate-inputs\.ts$/ },
+              { name: "steering-inputs", test: /calc[\\/]steering[\\/]inputs\.ts$/ },
             ],
           },
         },

@@ -55,7 +55,7 @@ function simulationState(): SimulationState {
   };
 }
 
-/** Loads the simulation view once (its own chunk: the integrator and the views). */
+/** Loads the simulation view once (its own chunk; the integrator runs in the view's worker). */
 function loadView(state: SimulationState): void {
   if (state.view.value !== null && state.view.value !== "failed") return;
   state.view.value = "loading";
@@ -71,7 +71,8 @@ export default function SteeringCalculator({ id = steeringCalculator.anchor }: S
   useEffect(() => {
     const stop = syncWithUrl(model);
     if (sim.shown.value) loadView(sim);
-    // The simulation's code, fetched and evaluated once the page is idle: a press then only draws.
+    // The simulation's view, fetched and evaluated once the page is idle: a press then only draws
+    // (and starts the worker that computes).
     else whenIdle(() => void import("../steering/simulation.tsx"));
     return stop;
   }, [model]);

@@ -2,24 +2,21 @@
  * The steering calculator's simulation view, loaded only when the reader asks for it (the page's
  * first script stays small): one simulated move for the calculator's values (calc/steering/simulate.ts),
  * the top view of a two-leg move (calc/steering/path.ts) and, on demand, the window-and-depth map
- * (calc/steering/sweep.ts), run one cell at a time between tasks so the page stays responsive.
- * Reads and formats only; every number comes from calc/.
+ * (calc/steering/sweep.ts). They run in a worker (simulation-worker.ts), so the page stays
+ * responsive whatever the values; this view sends the values, then formats and draws what comes
+ * back. Every number comes from calc/.
  */
 import { useEffect, useMemo } from "preact/hooks";
 import { STATUS_WORDS } from "../../calc/core/check.ts";
 import { formatNumber, formatQuantity, type QuantityKind, type UnitSystem } from "../../calc/core/units.ts";
 import { DEMO_STEERING_SPINNER, type SteeringInput, steeringInputs } from "../../calc/steering/inputs.ts";
-import { type SteeringPath, steeringPath } from "../../calc/steering/path.ts";
-import { type SteeringResult, simulateSteering } from "../../calc/steering/simulate.ts";
-import { type SteeringSweep, startSteeringSweep } from "../../calc/steering/sweep.ts";
+import type { SteeringPath } from "../../calc/steering/path.ts";
+import type { SteeringResult } from "../../calc/steering/simulate.ts";
+import type { SteeringSweep } from "../../calc/steering/sweep.ts";
 import { createFieldsModel } from "../calc-ui/fields.ts";
 import { QuantityField } from "../calc-ui/QuantityField.tsx";
 import { effect, type Signal, useSignal } from "../calc-ui/reactive.ts";
-
-/** Step budget of a run on the page: a stiff set of values stops (and says so) instead of freezing the page. */
-const PAGE_STEPS = 100_000;
-/** Longest a sweep keeps the main thread before it yields [ms]. */
-const SLICE_MS = 20;
+import type { Outcome, SimulationReply, SimulationRequest } from "./simulation-worker.ts";
 
 const TONE = { holds: "ok", marginal: "warn", fails: "bad" } as const;
 
@@ -32,37 +29,67 @@ export interface SteeringSimulationProps {
   idPrefix: string;
 }
 
-type Outcome<T> = { ok: true; value: T } | { ok: false; message: string };
-function attempt<T>(fn: () => T): Outcome<T> {
-  try {
-    return { ok: true, value: fn() };
-  } catch (e) {
-    return { ok: false, message: e instanceof Error ? e.message : String(e) };
-  }
+type Request = { kind: "move" | "path" | "sweep"; input: SteeringInput } | { kind: "cancel" };
+
+/** The worker that runs the computations (simulation-worker.ts), started on first use. */
+let worker: Promise<Worker> | null = null;
+let lastId = 0;
+const listeners = new Map<number, { kind: "move" | "path" | "sweep"; hear: (reply: SimulationReply) => void }>();
+
+/** Answers every waiting request with `message` and lets the next request start a new worker. */
+function failAll(message: string): void {
+  worker = null;
+  const waiting = [...listeners];
+  listeners.clear();
+  for (const [id, { kind, hear }] of waiting) hear({ id, kind, outcome: { ok: false, message } });
+}
+
+function startWorker(): Promise<Worker> {
+  return import("./simulation-worker.ts").then(({ workerUrl }) => {
+    const started = new Worker(workerUrl, { type: "module", name: "steering-simulation" });
+    started.onmessage = ({ data }: MessageEvent<SimulationReply>) => {
+      const listener = listeners.get(data.id);
+      if (data.kind !== "progress") listeners.delete(data.id); // the answer: nothing more comes
+      listener?.hear(data);
+    };
+    started.onerror = (event) => {
+      event.preventDefault();
+      started.terminate();
+      failAll("The simulation could not start; check the connection and try again.");
+    };
+    return started;
+  });
 }
 
 /**
- * `compute(input)` run `tasks` tasks after `input` changes (0 ms timers), and its outcome once it
- * has run for this input; null before then and without an input.
+ * Sends a request to the worker; `hear` gets its replies until the answer (or the returned function
+ * is called). A worker that cannot start (its script never fetched, and the page offline) answers
+ * every waiting request with a message; the next request starts a new one.
  */
-function useLater<T>(input: SteeringInput | null, tasks: number, compute: (input: SteeringInput) => T): Outcome<T> | null {
+function ask(request: Request, hear: (reply: SimulationReply) => void = () => {}): () => void {
+  if (request.kind === "cancel") {
+    void worker?.then((w) => w.postMessage({ kind: "cancel", id: 0 } satisfies SimulationRequest));
+    return () => {};
+  }
+  worker ??= startWorker();
+  lastId += 1;
+  const id = lastId;
+  listeners.set(id, { kind: request.kind, hear });
+  worker.then(
+    (w) => w.postMessage({ ...request, id } satisfies SimulationRequest),
+    () => failAll("The simulation could not be loaded; check the connection and try again."),
+  );
+  return () => listeners.delete(id);
+}
+
+/** The worker's answer to `kind` for `input`: null before it comes and without an input. */
+function useComputed<T>(input: SteeringInput | null, kind: "move" | "path"): Outcome<T> | null {
   const done = useSignal<{ input: SteeringInput; outcome: Outcome<T> } | null>(null);
   useEffect(() => {
     if (!input) return;
-    let timer: ReturnType<typeof setTimeout>;
-    const wait = (left: number) => {
-      timer = setTimeout(() => {
-        if (left > 1) return wait(left - 1);
-        const outcome = attempt(() => compute(input));
-        // Its figures drawn in the task after: on a slow phone the move's computation and the
-        // drawing of what it found passed 50 ms together.
-        timer = setTimeout(() => {
-          done.value = { input, outcome };
-        }, 0);
-      }, 0);
-    };
-    wait(tasks);
-    return () => clearTimeout(timer);
+    return ask({ kind, input }, (reply) => {
+      if (reply.kind === kind) done.value = { input, outcome: reply.outcome as Outcome<T> };
+    });
   }, [input]);
   return input && done.value?.input === input ? done.value.outcome : null;
 }
@@ -92,10 +119,10 @@ export function SteeringSimulation({ values, system, distanceText, idPrefix }: S
     (): SteeringInput | null => (reading.ok ? { ...DEMO_STEERING_SPINNER, ...values, commandedDistance: reading.value } : null),
     [values, reading.ok ? reading.value : Number.NaN],
   );
-  // The read-outs' simulation, then the top view's (the move again, sampled for drawing), each in a
-  // task of its own after the view appears: one long task on a slow phone would be three.
-  const sim = useLater(input, 1, (i) => simulateSteering(i, { maxSteps: PAGE_STEPS, revolutions: false }));
-  const path = useLater(input, 2, (i) => steeringPath({ input: i, options: { maxSteps: PAGE_STEPS } }));
+  // The read-outs' simulation, then the top view's (the move again, sampled for drawing), both in
+  // the worker: the page only draws what comes back.
+  const sim = useComputed<SteeringResult>(input, "move");
+  const path = useComputed<SteeringPath>(input, "path");
   const q = (v: number, kind: QuantityKind, significant = 3) => formatQuantity(v, kind, { system, significant }).text;
   const pct = (share: number) => `${formatNumber(share * 100, 2)} %`;
   const degPerSecond = (rate: number) => formatQuantity(rate, "angularSpeed", { unit: "deg/s", significant: 2 }).text;
@@ -104,29 +131,24 @@ export function SteeringSimulation({ values, system, distanceText, idPrefix }: S
   const current = state && input && state.input === input ? state : null;
   const runSweep = () => {
     if (!input) return;
-    const started = attempt(() => startSteeringSweep({ input }));
-    if (!started.ok) {
-      sweepState.value = { input, done: 0, total: 0, sweep: null, message: started.message };
-      return;
-    }
-    const run = started.value;
-    sweepState.value = { input, done: 0, total: run.total, sweep: null, message: null };
-    const slice = () => {
+    sweepState.value = { input, done: 0, total: 0, sweep: null, message: null };
+    ask({ kind: "sweep", input }, (reply) => {
       if (sweepState.value?.input !== input) return; // the values changed: this map is no longer wanted
-      const start = performance.now();
-      const result = attempt(() => {
-        let sweep: SteeringSweep | null = null;
-        do sweep = run.step();
-        while (!sweep && performance.now() - start < SLICE_MS);
-        return sweep;
-      });
-      sweepState.value = result.ok
-        ? { input, done: run.done(), total: run.total, sweep: result.value, message: null }
-        : { input, done: run.done(), total: run.total, sweep: null, message: result.message };
-      if (result.ok && !result.value) setTimeout(slice, 0);
-    };
-    setTimeout(slice, 0);
+      if (reply.kind === "progress") sweepState.value = { input, done: reply.done, total: reply.total, sweep: null, message: null };
+      else if (reply.kind === "sweep")
+        sweepState.value = reply.outcome.ok
+          ? { input, done: sweepState.value.total, total: sweepState.value.total, sweep: reply.outcome.value, message: null }
+          : { input, done: sweepState.value.done, total: sweepState.value.total, sweep: null, message: reply.outcome.message };
+    });
   };
+  // A map still running for values that changed is stopped.
+  useEffect(
+    () => () => {
+      const running = sweepState.value;
+      if (running && running.input === input && !running.sweep && !running.message) ask({ kind: "cancel" });
+    },
+    [input],
+  );
 
   const r: SteeringResult | null = sim?.ok ? sim.value : null;
   const distanceLabel = reading.ok ? q(reading.value, "length") : "the distance";
@@ -207,7 +229,7 @@ export function SteeringSimulation({ values, system, distanceText, idPrefix }: S
         </button>{" "}
         {current && !current.sweep && !current.message ? (
           <span role="status" data-out="sweep-progress">
-            {current.done} of {current.total} cells…
+            {current.total === 0 ? "Starting…" : `${current.done} of ${current.total} cells…`}
           </span>
         ) : null}
       </p>

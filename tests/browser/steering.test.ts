@@ -2,8 +2,9 @@
  * The steering calculator's simulation in a real browser (Debian chromium via playwright-core):
  * the simulation's code loads only when asked for; a permalink with `sim=1` opens with the simulated
  * move shown, whose figures are read against calc/ run here in Node on the same values; the
- * window-and-depth map runs in slices and marks the best cell calc/ names; axe-core passes in light
- * and dark. How long the longest main-thread task took during the map is printed, not asserted.
+ * computations run in a worker, not on the page's main thread; the window-and-depth map marks the
+ * best cell calc/ names; axe-core passes in light and dark. How long the longest main-thread task
+ * took during the map is printed, not asserted.
  */
 import { describe, expect, it } from "vitest";
 import type { Page } from "playwright-core";
@@ -47,6 +48,8 @@ describe("the steering simulation in the browser", () => {
     await expect.poll(() => page.locator(`${ID} [data-out="sim-speed"]`).count()).toBe(1);
     // Fetched once: the press uses the code fetched at idle.
     expect(simulationChunk()).toHaveLength(1);
+    // Computed in a worker: the page's main thread only draws the figures.
+    expect(page.workers().map((worker) => new URL(worker.url()).pathname)).toEqual([expect.stringMatching(/^\/_astro\/simulation-worker\.[^/]+\.js$/)]);
     // Shown, the link carries it: the page's URL now says sim=1.
     expect(new URL(page.url()).searchParams.get("sim")).toBe("1");
     expect(problems).toEqual([]);
@@ -84,7 +87,7 @@ describe("the steering simulation in the browser", () => {
     await context.close();
   });
 
-  it("maps the speed over window and depth in slices and marks the cell calc/ finds fastest", async () => {
+  it("maps the speed over window and depth and marks the cell calc/ finds fastest", async () => {
     const { page, context, problems } = await open(LINK, { width: 1280 });
     await expect.poll(() => out(page, "sim-speed")).toMatch(/m\/s$/);
     await page.evaluate(() => {
