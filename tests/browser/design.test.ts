@@ -212,6 +212,9 @@ describe("offline", () => {
     expect(await page.locator('[data-out="accel-top"]').textContent()).toBe("121 gₙ");
     await page.goto(`${origin()}/search/?q=headroom`);
     await expect.poll(() => page.locator("#search-results li").count(), { timeout: 10_000 }).toBeGreaterThan(0);
+    // The steering simulation computes in a worker, whose code comes from the offline copy as well.
+    await page.goto(`${origin()}/chapters/steering/?sim=1`);
+    await expect.poll(() => page.locator('#steering-calculator [data-out="sim-speed"]').textContent(), { timeout: 10_000 }).toMatch(/ m\/s$/);
     await context.close();
   });
 });
