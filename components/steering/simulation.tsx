@@ -29,12 +29,11 @@ export interface SteeringSimulationProps {
   idPrefix: string;
 }
 
-type Request = { kind: "move" | "path" | "sweep"; input: SteeringInput } | { kind: "cancel" };
-
 /** The worker that runs the computations (simulation-worker.ts), started on first use. */
 let worker: Promise<Worker> | null = null;
 let lastId = 0;
-const listeners = new Map<number, { kind: "move" | "path" | "sweep"; hear: (reply: SimulationReply) => void }>();
+type Kind = "move" | "path" | "sweep";
+const listeners = new Map<number, { kind: Kind; hear: (reply: SimulationReply) => void }>();
 
 /** Answers every waiting request with `message` and lets the next request start a new worker. */
 function failAll(message: string): void {
@@ -66,11 +65,7 @@ function startWorker(): Promise<Worker> {
  * is called). A worker that cannot start (its script never fetched, and the page offline) answers
  * every waiting request with a message; the next request starts a new one.
  */
-function ask(request: Request, hear: (reply: SimulationReply) => void = () => {}): () => void {
-  if (request.kind === "cancel") {
-    void worker?.then((w) => w.postMessage({ kind: "cancel", id: 0 } satisfies SimulationRequest));
-    return () => {};
-  }
+function ask(request: { kind: Kind; input: SteeringInput }, hear: (reply: SimulationReply) => void): () => void {
   worker ??= startWorker();
   lastId += 1;
   const id = lastId;
@@ -80,6 +75,11 @@ function ask(request: Request, hear: (reply: SimulationReply) => void = () => {}
     () => failAll("The simulation could not be loaded; check the connection and try again."),
   );
   return () => listeners.delete(id);
+}
+
+/** Stops the map the worker is running, if any (its values changed). */
+function cancelMap(): void {
+  void worker?.then((w) => w.postMessage({ kind: "cancel", id: 0 } satisfies SimulationRequest));
 }
 
 /** The worker's answer to `kind` for `input`: null before it comes and without an input. */
@@ -145,7 +145,7 @@ export function SteeringSimulation({ values, system, distanceText, idPrefix }: S
   useEffect(
     () => () => {
       const running = sweepState.value;
-      if (running && running.input === input && !running.sweep && !running.message) ask({ kind: "cancel" });
+      if (running && running.input === input && !running.sweep && !running.message) cancelMap();
     },
     [input],
   );
